@@ -1,0 +1,45 @@
+package org.counterpoise.core.design;
+
+import java.util.Arrays;
+import java.util.Optional;
+
+/** The ways Counterpoise can choose the absorber's tuning and damping. */
+public enum DesignMethod {
+    /** Published fixed-point equal-peak closed form for the excitation/response pair. */
+    EQUAL_PEAK("equal-peak", "classical equal-peak (fixed-point) closed form"),
+    /** Published minimum mean-square (H2) closed form for white-noise excitation. */
+    MINIMUM_VARIANCE("minimum-variance", "classical minimum-variance (H2) closed form"),
+    /** Undamped absorber tuned exactly to one forcing frequency. */
+    UNDAMPED_SINGLE_SPEED("undamped-single-speed", "undamped absorber tuned to the forcing frequency");
+
+    private final String id;
+    private final String description;
+
+    DesignMethod(String id, String description) {
+        this.id = id;
+        this.description = description;
+    }
+
+    /** @return the identifier used in files and on the command line */
+    public String id() {
+        return id;
+    }
+
+    /** @return words for reports */
+    public String description() {
+        return description;
+    }
+
+    /**
+     * @param id an identifier
+     * @return the method with that id
+     */
+    public static Optional<DesignMethod> byId(String id) {
+        return Arrays.stream(values()).filter(m -> m.id.equals(id)).findFirst();
+    }
+
+    /** @return all ids, comma separated */
+    public static String ids() {
+        return String.join(", ", Arrays.stream(values()).map(DesignMethod::id).toList());
+    }
+}

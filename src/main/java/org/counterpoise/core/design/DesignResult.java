@@ -1,0 +1,72 @@
+package org.counterpoise.core.design;
+
+import java.util.List;
+import java.util.Map;
+import org.counterpoise.core.error.Warning;
+import org.counterpoise.core.model.Absorber;
+import org.counterpoise.core.model.Tuning;
+import org.counterpoise.core.remedy.DetuningAlternative;
+import org.counterpoise.core.response.ResponseKind;
+import org.counterpoise.core.response.ResponsePeak;
+
+/**
+ * Every number a report needs about one absorber design. SI units throughout; frequencies in
+ * rad/s. Peaks "in band" are the exact maxima over the forcing band (the value at the forcing
+ * frequency when the band is one frequency); "run-up" peaks are over [0, top of band], the
+ * speeds a machine passes through when it starts and stops.
+ *
+ * @param study the inputs
+ * @param methodSource author, year and work of the design method
+ * @param tuning mass ratio, tuning ratio, absorber damping ratio
+ * @param absorber absorber mass, spring rate, damping coefficient
+ * @param staticSag static deflection of the absorber spring under the absorber's weight, m (NaN
+ *     when the absorber does not hang on its spring)
+ * @param responseBefore the response that matters, bare structure, in band
+ * @param responseAfter the response that matters, with the absorber, in band
+ * @param motionBefore displacement, velocity and acceleration of the bare structure, in band
+ * @param motionAfter the same with the absorber
+ * @param strokeInBand absorber stroke in band
+ * @param strokeRunUp absorber stroke over run-up
+ * @param clearance stroke clearance to leave, m (margin times the larger bounded stroke)
+ * @param springForce spring force in band, N
+ * @param damperForce damper force in band, N
+ * @param absorberForce spring plus damper force in band, N
+ * @param coupledNaturalFrequencies the two natural frequencies of the undamped pair, rad/s
+ * @param detuning the stiffness change of the bare structure that would do as well
+ * @param warnings non-fatal findings
+ */
+public record DesignResult(DesignStudy study, String methodSource, Tuning tuning, Absorber absorber,
+        double staticSag, ResponsePeak responseBefore, ResponsePeak responseAfter,
+        Map<ResponseKind, ResponsePeak> motionBefore, Map<ResponseKind, ResponsePeak> motionAfter,
+        ResponsePeak strokeInBand, ResponsePeak strokeRunUp, double clearance, ResponsePeak springForce,
+        ResponsePeak damperForce, ResponsePeak absorberForce, double[] coupledNaturalFrequencies,
+        DetuningAlternative detuning, List<Warning> warnings) {
+
+    /** The three motions reported before and after, in this order. */
+    public static final List<ResponseKind> MOTIONS =
+            List.of(ResponseKind.DISPLACEMENT, ResponseKind.VELOCITY, ResponseKind.ACCELERATION);
+
+    /** Defensive copies. */
+    public DesignResult {
+        motionBefore = Map.copyOf(motionBefore);
+        motionAfter = Map.copyOf(motionAfter);
+        coupledNaturalFrequencies = coupledNaturalFrequencies.clone();
+        warnings = List.copyOf(warnings);
+    }
+
+    /** @return a copy of the coupled natural frequencies, rad/s */
+    @Override
+    public double[] coupledNaturalFrequencies() {
+        return coupledNaturalFrequencies.clone();
+    }
+
+    /** @return before over after for the response that matters; +infinity when before is unbounded */
+    public double reductionFactor() {
+        return responseBefore.value() / responseAfter.value();
+    }
+
+    /** @return the reduction in decibels, 20 log10(before/after); +infinity when before is unbounded */
+    public double reductionDecibels() {
+        return 20.0 * Math.log10(reductionFactor());
+    }
+}

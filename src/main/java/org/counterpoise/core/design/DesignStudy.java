@@ -1,0 +1,40 @@
+package org.counterpoise.core.design;
+
+import org.counterpoise.core.error.Checks;
+import org.counterpoise.core.model.Excitation;
+import org.counterpoise.core.model.Structure;
+import org.counterpoise.core.response.ResponseKind;
+
+/**
+ * Everything a design needs: the structure, the disturbance, the response that matters and the
+ * designer's choices. Immutable; validated on construction.
+ *
+ * @param name project name, for reports
+ * @param structure the structure
+ * @param excitation the disturbance
+ * @param response the response that matters (the one the design minimises)
+ * @param sizing mass ratio or mass budget
+ * @param method design method
+ * @param hangsVertically true when the absorber spring carries the absorber's weight (static sag)
+ * @param strokeMargin clearance over the computed peak stroke (&gt;= 1; 1.5 is common practice)
+ */
+public record DesignStudy(String name, Structure structure, Excitation excitation, ResponseKind response,
+        AbsorberSizing sizing, DesignMethod method, boolean hangsVertically, double strokeMargin) {
+
+    /** Validates the record. */
+    public DesignStudy {
+        Checks.present("structure", structure, "a structure");
+        Checks.present("disturbance", excitation, "a disturbance");
+        Checks.present("absorber.response", response, "a response kind");
+        Checks.present("absorber.mass_ratio", sizing, "a mass ratio or a mass");
+        Checks.present("absorber.method", method, "one of " + DesignMethod.ids());
+        Checks.inRange("absorber.stroke_margin", strokeMargin, 1.0, 10.0);
+        if (response.needsAbsorber()) {
+            throw new org.counterpoise.core.error.InvalidInputException("absorber.response", response.name(),
+                    "the response to reduce must be a response of the structure, not of the absorber");
+        }
+    }
+
+    /** Common-practice clearance margin over the computed stroke (no published source). */
+    public static final double DEFAULT_STROKE_MARGIN = 1.5;
+}

@@ -1,0 +1,156 @@
+package org.counterpoise.core.design;
+
+import java.util.ArrayList;
+import java.util.EnumMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import org.counterpoise.core.error.InvalidInputException;
+import org.counterpoise.core.error.Warning;
+import org.counterpoise.core.model.Absorber;
+import org.counterpoise.core.model.Excitation;
+import org.counterpoise.core.model.FrequencyBand;
+import org.counterpoise.core.model.Structure;
+import org.counterpoise.core.model.Tuning;
+import org.counterpoise.core.remedy.DetuningAlternative;
+import org.counterpoise.core.remedy.StructureDetuning;
+import org.counterpoise.core.response.ResponseKind;
+import org.counterpoise.core.response.ResponsePeak;
+import org.counterpoise.core.response.SystemResponse;
+import org.counterpoise.core.tuning.ClosedForm;
+import org.counterpoise.core.tuning.ClosedForms;
+import org.counterpoise.core.tuning.UndampedAbsorber;
+
+/**
+ * The one entry point every front end calls: {@link DesignStudy} in, {@link DesignResult} out.
+ * It picks the tuning by the chosen method and gathers the responses; the formulas live in
+ * {@code core.tuning}, {@code core.response} and {@code core.remedy}.
+ */
+public final class Designer {
+    private static final double HEAVY_MASS_RATIO = 0.25;
+    private static final double LIGHT_MASS_RATIO = 0.005;
+
+    private Designer() {
+    }
+
+    /**
+     * @param study the inputs
+     * @return the design and every figure a report shows
+     */
+    public static DesignResult design(DesignStudy study) {
+        Structure structure = study.structure();
+        Excitation excitation = study.excitation();
+        FrequencyBand band = excitation.band();
+        double mu = study.sizing().massRatioOn(structure);
+        List<Warning> warnings = new ArrayList<>();
+
+        ClosedForm chosen = choose(study, mu);
+        Tuning tuning = chosen.tuning();
+        Absorber absorber = Absorber.of(structure, tuning);
+        if (structure.dampingRatio() > 0 && chosen.note().contains("undamped structure")) {
+            warnings.add(new Warning("DAMPED_STRUCTURE", String.format(Locale.ROOT,
+                    "The %s closed form assumes an undamped structure; with the structure's damping ratio of"
+                            + " %.3g the tuning is close to, but not exactly, the optimum.",
+                    study.method().id(), structure.dampingRatio())));
+        }
+
+        SystemResponse bare = new SystemResponse(structure, null, excitation.kind(), excitation.amplitude());
+        SystemResponse fitted = new SystemResponse(structure, tuning, excitation.kind(), excitation.amplitude());
+        ResponseKind kind = study.response();
+        ResponsePeak before = bare.peakOver(kind, band);
+        ResponsePeak after = fitted.peakOver(kind, band);
+        Map<ResponseKind, ResponsePeak> motionBefore = new EnumMap<>(ResponseKind.class);
+        Map<ResponseKind, ResponsePeak> motionAfter = new EnumMap<>(ResponseKind.class);
+        for (ResponseKind motion : DesignResult.MOTIONS) {
+            motionBefore.put(motion, bare.peakOver(motion, band));
+            motionAfter.put(motion, fitted.peakOver(motion, band));
+        }
+        ResponsePeak strokeInBand = fitted.peakOver(ResponseKind.STROKE, band);
+        ResponsePeak strokeRunUp = fitted.peakBetween(ResponseKind.STROKE, 0.0, band.high());
+        double clearance = study.strokeMargin()
+                * (strokeRunUp.unbounded() ? strokeInBand.value() : Math.max(strokeRunUp.value(), strokeInBand.value()));
+
+        double omega1 = structure.naturalFrequency();
+        double[] split = UndampedAbsorber.naturalFrequencies(mu, tuning.tuningRatio());
+        double[] coupled = {split[0] * omega1, split[1] * omega1};
+
+        DetuningAlternative detuning = after.unbounded() ? new DetuningAlternative(after.value(), Double.NaN, Double.NaN)
+                : StructureDetuning.search(structure, excitation.kind(), excitation.amplitude(), band, kind,
+                        after.value());
+
+        addWarnings(warnings, study, mu, tuning, before, after, strokeRunUp, coupled);
+        double sag = study.hangsVertically()
+                ? org.counterpoise.core.units.Gravity.STANDARD / (absorber.naturalFrequency() * absorber.naturalFrequency())
+                : Double.NaN;
+        return new DesignResult(study, chosen.source(), tuning, absorber, sag, before, after, motionBefore,
+                motionAfter, strokeInBand, strokeRunUp, clearance,
+                fitted.peakOver(ResponseKind.SPRING_FORCE, band), fitted.peakOver(ResponseKind.DAMPER_FORCE, band),
+                fitted.peakOver(ResponseKind.ABSORBER_FORCE, band), coupled, detuning, warnings);
+    }
+
+    private static ClosedForm choose(DesignStudy study, double mu) {
+        var excitation = study.excitation();
+        return switch (study.method()) {
+            case EQUAL_PEAK -> ClosedForms.equalPeak(excitation.kind(), study.response(), mu)
+                    .orElseThrow(() -> noClosedForm(study));
+            case MINIMUM_VARIANCE -> ClosedForms.minimumVariance(excitation.kind(), study.response(), mu)
+                    .orElseThrow(() -> noClosedForm(study));
+            case UNDAMPED_SINGLE_SPEED -> new ClosedForm(
+                    UndampedAbsorber.tuning(mu, excitation.band().centre() / study.structure().naturalFrequency()),
+                    "Frahm (1909), US patent 989958; Den Hartog (1956), Mechanical Vibrations, section 3.2",
+                    "tuned to one forcing frequency");
+        };
+    }
+
+    private static InvalidInputException noClosedForm(DesignStudy study) {
+        return new InvalidInputException("absorber.method", study.method().id(),
+                "no published " + study.method().id() + " closed form exists for "
+                        + study.excitation().kind().label() + " with response '" + study.response().label()
+                        + "'; choose a response it covers (for equal-peak: displacement or transmitted force"
+                        + " under force, displacement under base displacement, acceleration or relative"
+                        + " displacement under base acceleration, acceleration under force, displacement under"
+                        + " unbalance) or another method");
+    }
+
+    private static void addWarnings(List<Warning> warnings, DesignStudy study, double mu, Tuning tuning,
+            ResponsePeak before, ResponsePeak after, ResponsePeak strokeRunUp, double[] coupled) {
+        FrequencyBand band = study.excitation().band();
+        if (before.unbounded()) {
+            warnings.add(new Warning("RESONANT_UNDAMPED", "The bare structure is undamped and resonant within the"
+                    + " forcing band, so its response there is unbounded; the reduction cannot be given as a"
+                    + " number."));
+        }
+        if (!before.unbounded() && !after.unbounded() && after.value() > before.value()) {
+            warnings.add(new Warning("WORSE_WITH_ABSORBER", "With this absorber the response that matters is"
+                    + " larger than without it: the disturbance lies away from the structure's resonance."));
+        }
+        if (mu > HEAVY_MASS_RATIO) {
+            warnings.add(new Warning("HEAVY_ABSORBER", String.format(Locale.ROOT, "A mass ratio of %.3g is unusually"
+                    + " large; check that the structure can carry the added mass.", mu)));
+        }
+        if (mu < LIGHT_MASS_RATIO) {
+            warnings.add(new Warning("LIGHT_ABSORBER", String.format(Locale.ROOT, "A mass ratio of %.3g is very small:"
+                    + " the design is sharply tuned and sensitive to mistuning, and the stroke is large.", mu)));
+        }
+        if (study.method() == DesignMethod.UNDAMPED_SINGLE_SPEED && !band.isSingle()) {
+            warnings.add(new Warning("UNDAMPED_IN_BAND", "An undamped absorber works at one frequency only; it was"
+                    + " tuned to the centre of the band and the response elsewhere in the band may be large."));
+        }
+        if (coupled[0] < band.low()) {
+            warnings.add(new Warning("START_UP_RESONANCE", String.format(Locale.ROOT,
+                    "Start-up hazard: the structure with the absorber has natural frequencies at %.4g Hz and"
+                            + " %.4g Hz (undamped values); the machine passes through the lower one each time it"
+                            + " starts and stops. Pass through it quickly.",
+                    coupled[0] / (2 * Math.PI), coupled[1] / (2 * Math.PI))));
+        }
+        if (strokeRunUp.unbounded()) {
+            warnings.add(new Warning("UNBOUNDED_TRANSIT_STROKE", "With no absorber damping the stroke grows without"
+                    + " bound at a resonance passed during run-up; stroke stops are essential and the clearance"
+                    + " given covers running in the band only."));
+        }
+        if (tuning.dampingRatio() == 0.0 && !band.isSingle()) {
+            warnings.add(new Warning("NO_DAMPING", "The absorber has no damping: any drift of the forcing frequency"
+                    + " away from the tuned value moves the structure towards a resonance."));
+        }
+    }
+}

@@ -1,0 +1,77 @@
+package org.counterpoise.core.remedy;
+
+import org.apache.commons.math3.analysis.solvers.BrentSolver;
+import org.counterpoise.core.model.ExcitationKind;
+import org.counterpoise.core.model.FrequencyBand;
+import org.counterpoise.core.model.Structure;
+import org.counterpoise.core.response.ResponseKind;
+import org.counterpoise.core.response.SystemResponse;
+
+/**
+ * The remedy an absorber replaces: change the structure's stiffness until, without any absorber,
+ * its worst response over the forcing band falls to a target. Searched both ways, stiffer (natural
+ * frequency pushed above the band) and softer (pushed below it); the viscous damper of the
+ * structure is kept, as it is when a real structure is stiffened or softened. The worst response
+ * is the exact band peak; the stiffness factor is found by Brent's method on a bracket, to a
+ * relative accuracy of 1e-10.
+ */
+public final class StructureDetuning {
+    private static final double MAX_STIFFER = 1e4;
+    private static final double MIN_SOFTER = 1e-6;
+
+    private StructureDetuning() {
+    }
+
+    /**
+     * @param structure the bare structure
+     * @param excitation excitation kind
+     * @param amplitude SI amplitude
+     * @param band forcing band
+     * @param response response kind that matters
+     * @param target SI level to reach (for example what the absorber achieves)
+     * @return the stiffness factors that reach it, each NaN where no change in range does
+     */
+    public static DetuningAlternative search(Structure structure, ExcitationKind excitation, double amplitude,
+            FrequencyBand band, ResponseKind response, double target) {
+        double omega1 = structure.naturalFrequency();
+        double stiffStart = Math.max(1.0, sq(band.high() / omega1));
+        double softStart = Math.min(1.0, sq(band.low() / omega1));
+        java.util.function.DoubleUnaryOperator excess = factor -> {
+            Structure changed = structure.withStiffnessKeepingDamper(structure.modalStiffness() * factor);
+            double peak = new SystemResponse(changed, null, excitation, amplitude).peakOver(response, band).value();
+            // Compare on a log scale: well conditioned over many decades, finite at a resonance.
+            return Double.isInfinite(peak) ? 50.0 : Math.log(peak / target);
+        };
+        double stiffer = solve(excess, stiffStart, MAX_STIFFER);
+        double softer = solve(excess, softStart, MIN_SOFTER);
+        return new DetuningAlternative(target, stiffer, softer);
+    }
+
+    /**
+     * Walks geometrically from the band edge towards the limit until the target is met, then
+     * refines the crossing with Brent's method.
+     */
+    private static double solve(java.util.function.DoubleUnaryOperator excess, double start, double limit) {
+        if (excess.applyAsDouble(1.0) <= 0.0) {
+            return 1.0;
+        }
+        if (excess.applyAsDouble(start) <= 0.0) {
+            return start;
+        }
+        double ratio = limit > start ? 1.5 : 1.0 / 1.5;
+        double previous = start;
+        while (limit > start ? previous < limit : previous > limit) {
+            double next = limit > start ? Math.min(previous * ratio, limit) : Math.max(previous * ratio, limit);
+            if (excess.applyAsDouble(next) <= 0.0) {
+                return new BrentSolver(1e-12, 1e-10).solve(200, excess::applyAsDouble,
+                        Math.min(previous, next), Math.max(previous, next));
+            }
+            previous = next;
+        }
+        return Double.NaN;
+    }
+
+    private static double sq(double v) {
+        return v * v;
+    }
+}

@@ -1,0 +1,111 @@
+package org.counterpoise.core.response;
+
+
+/**
+ * Exact global maximum of |H(i g)| over a closed band of g, or over all g &gt;= 0.
+ *
+ * <p>|H|^2 = P(x)/Q(x) with x = g^2 is rational, so its interior maxima are among the real roots
+ * of R(x) = P'(x) Q(x) - P(x) Q'(x) (degree at most about 11 here). The candidates are those roots
+ * in the band, the band ends, and the limit as g -&gt; infinity; the largest candidate value is the
+ * peak. The real roots are isolated exactly by {@link RealRoots} (derivative cascade and
+ * safeguarded Newton-bisection), and the roots of R' are tried too, so a maximum where R only
+ * touches zero through round-off is not lost: every candidate is a real frequency in the band,
+ * so extra candidates can never over-state the peak. The peak value is evaluated from P/Q by
+ * Horner's rule, so its relative accuracy is a few ulps times the condition of P/Q; a location
+ * error dx costs only O(dx^2) in the value.
+ */
+public final class PeakFinder {
+
+    private PeakFinder() {
+    }
+
+    /**
+     * @param h the transfer function
+     * @return the peak over all frequencies g in [0, infinity)
+     */
+    public static Peak overAllFrequencies(TransferFunction h) {
+        return over(h, 0.0, Double.POSITIVE_INFINITY);
+    }
+
+    /**
+     * @param h the transfer function
+     * @param gLow low end of the band (&gt;= 0)
+     * @param gHigh high end of the band (&gt;= gLow; may be +infinity)
+     * @return the peak over the closed band
+     */
+    public static Peak over(TransferFunction h, double gLow, double gHigh) {
+        if (!(gLow >= 0) || !(gHigh >= gLow)) {
+            throw new IllegalArgumentException("band must satisfy 0 <= low <= high, got " + gLow + ", " + gHigh);
+        }
+        if (gLow == 0.0 && h.unboundedAtZero()) {
+            return new Peak(0.0, Double.POSITIVE_INFINITY);
+        }
+        if (Double.isInfinite(gHigh) && h.unboundedAtInfinity()) {
+            return new Peak(Double.POSITIVE_INFINITY, Double.POSITIVE_INFINITY);
+        }
+        double xLow = gLow * gLow;
+        double xHigh = gHigh * gHigh;
+        double[] p = h.magnitudeNumeratorInX();
+        double[] q = h.magnitudeDenominatorInX();
+        if (h.undamped()) {
+            Peak resonance = undampedResonanceIn(q, xLow, xHigh);
+            if (resonance != null) {
+                return resonance;
+            }
+        }
+        Best best = new Best();
+        best.offer(h, xLow);
+        if (Double.isFinite(xHigh)) {
+            best.offer(h, xHigh);
+        } else {
+            double limit = h.limitAtInfinity();
+            if (limit * limit > best.value) {
+                best.value = limit * limit;
+                best.x = Double.POSITIVE_INFINITY;
+            }
+        }
+        if (xHigh > xLow) {
+            double[] r = RealPolynomials.quotientDerivativeNumerator(p, q);
+            for (double root : RealRoots.rootsAndCriticalPoints(r, xLow, xHigh)) {
+                if (root > xLow && root < xHigh) {
+                    best.offer(h, root);
+                }
+            }
+        }
+        return new Peak(Math.sqrt(best.x), Math.sqrt(best.value));
+    }
+
+    /** With no damping Q = E(x)^2; a root of E in the band is a resonance: unbounded. */
+    private static Peak undampedResonanceIn(double[] q, double xLow, double xHigh) {
+        double[] dq = RealPolynomials.quotientDerivativeNumerator(q, new double[] {1.0});
+        for (double root : RealRoots.rootsAndCriticalPoints(dq, xLow, xHigh)) {
+            if (root >= xLow && root <= xHigh && RealPolynomials.value(q, root) <= 1e-10 * absoluteSum(q, root)) {
+                return new Peak(Math.sqrt(root), Double.POSITIVE_INFINITY);
+            }
+        }
+        return null;
+    }
+
+    private static double absoluteSum(double[] q, double x) {
+        double sum = 0.0;
+        double power = 1.0;
+        for (double c : q) {
+            sum += Math.abs(c) * power;
+            power *= x;
+        }
+        return sum;
+    }
+
+    private static final class Best {
+        private double x;
+        private double value = -1.0;
+
+        void offer(TransferFunction h, double candidate) {
+            double v = h.magnitudeSquared(candidate);
+            if (v > value) {
+                value = v;
+                x = candidate;
+            }
+        }
+    }
+}

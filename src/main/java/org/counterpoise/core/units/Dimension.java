@@ -1,0 +1,36 @@
+package org.counterpoise.core.units;
+
+/** The physical kinds of quantity Counterpoise handles, each with its SI unit. */
+public enum Dimension {
+    /** kg. */
+    MASS("kg"),
+    /** N. */
+    FORCE("N"),
+    /** m. */
+    LENGTH("m"),
+    /** N/m. */
+    STIFFNESS("N/m"),
+    /** N*s/m. */
+    DAMPING_COEFFICIENT("N*s/m"),
+    /** rad/s: frequencies are angular inside the core. */
+    FREQUENCY("rad/s"),
+    /** m/s. */
+    VELOCITY("m/s"),
+    /** m/s^2. */
+    ACCELERATION("m/s^2"),
+    /** kg*m, the unbalance of a rotor (mass times eccentricity). */
+    UNBALANCE("kg*m"),
+    /** pure number. */
+    RATIO("");
+
+    private final String siSymbol;
+
+    Dimension(String siSymbol) {
+        this.siSymbol = siSymbol;
+    }
+
+    /** @return the symbol of the SI unit used inside the core */
+    public String siSymbol() {
+        return siSymbol;
+    }
+}
