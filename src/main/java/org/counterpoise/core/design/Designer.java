@@ -74,7 +74,7 @@ public final class Designer {
         double[] split = UndampedAbsorber.naturalFrequencies(mu, tuning.tuningRatio());
         double[] coupled = {split[0] * omega1, split[1] * omega1};
 
-        DetuningAlternative detuning = after.unbounded() ? new DetuningAlternative(after.value(), Double.NaN, Double.NaN)
+        DetuningAlternative detuning = after.unbounded() || after.value() == 0.0 ? new DetuningAlternative(after.value(), Double.NaN, Double.NaN)
                 : StructureDetuning.search(structure, excitation.kind(), excitation.amplitude(), band, kind,
                         after.value());
 
@@ -131,6 +131,11 @@ public final class Designer {
         if (mu < LIGHT_MASS_RATIO) {
             warnings.add(new Warning("LIGHT_ABSORBER", String.format(Locale.ROOT, "A mass ratio of %.3g is very small:"
                     + " the design is sharply tuned and sensitive to mistuning, and the stroke is large.", mu)));
+        }
+        if (study.method() != DesignMethod.UNDAMPED_SINGLE_SPEED && band.isSingle()) {
+            warnings.add(new Warning("SINGLE_FREQUENCY", "The disturbance has one frequency: an absorber tuned to"
+                    + " that frequency with little damping reduces the response there far more than a design for"
+                    + " all frequencies; consider undamped-single-speed, and weigh its start-up hazard."));
         }
         if (study.method() == DesignMethod.UNDAMPED_SINGLE_SPEED && !band.isSingle()) {
             warnings.add(new Warning("UNDAMPED_IN_BAND", "An undamped absorber works at one frequency only; it was"

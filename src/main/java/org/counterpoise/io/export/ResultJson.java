@@ -1,0 +1,112 @@
+package org.counterpoise.io.export;
+
+import com.google.gson.GsonBuilder;
+import com.google.gson.JsonArray;
+import com.google.gson.JsonObject;
+import org.counterpoise.core.design.Cautions;
+import org.counterpoise.core.design.DesignResult;
+import org.counterpoise.core.error.Warning;
+import org.counterpoise.core.response.ResponseKind;
+import org.counterpoise.core.response.ResponsePeak;
+import org.counterpoise.core.units.Unit;
+import org.counterpoise.io.project.Ids;
+
+/**
+ * The design result as one JSON object with SI units in the key names (documented in
+ * docs/cli.md). An unbounded value is written as null with a companion key
+ * {@code <key>_unbounded: true}; no key ever holds Infinity or NaN.
+ */
+public final class ResultJson {
+    private ResultJson() {
+    }
+
+    /**
+     * @param r the result
+     * @return the JSON object
+     */
+    public static JsonObject of(DesignResult r) {
+        JsonObject o = new JsonObject();
+        var study = r.study();
+        var s = study.structure();
+        o.addProperty("name", study.name());
+        o.addProperty("method", study.method().id());
+        o.addProperty("method_source", r.methodSource());
+        o.addProperty("excitation", Ids.of(study.excitation().kind()));
+        o.addProperty("forcing_frequency_low_Hz", hz(study.excitation().band().low()));
+        o.addProperty("forcing_frequency_high_Hz", hz(study.excitation().band().high()));
+        o.addProperty("mass_ratio", r.tuning().massRatio());
+        o.addProperty("tuning_ratio", r.tuning().tuningRatio());
+        o.addProperty("absorber_damping_ratio", r.tuning().dampingRatio());
+        o.addProperty("primary_mass_kg", s.effectiveMass());
+        o.addProperty("primary_stiffness_N_per_m", s.effectiveStiffness());
+        o.addProperty("primary_frequency_Hz", hz(s.naturalFrequency()));
+        o.addProperty("primary_damping_ratio", s.dampingRatio());
+        o.addProperty("absorber_mass_kg", r.absorber().mass());
+        o.addProperty("absorber_stiffness_N_per_m", r.absorber().stiffness());
+        o.addProperty("absorber_damping_Ns_per_m", r.absorber().damping());
+        o.addProperty("absorber_frequency_Hz", hz(r.absorber().naturalFrequency()));
+        number(o, "absorber_static_sag_m", r.staticSag());
+        o.addProperty("response_quantity", Ids.of(study.response()));
+        o.addProperty("response_unit", study.response().dimension().siSymbol());
+        peak(o, "peak_response_before", r.responseBefore());
+        peak(o, "peak_response_after", r.responseAfter());
+        number(o, "reduction_factor", r.reductionFactor());
+        for (ResponseKind k : DesignResult.MOTIONS) {
+            String unit = k.dimension().siSymbol().replace("/s^2", "_per_s2").replace("/s", "_per_s");
+            peak(o, "peak_" + Ids.of(k).replace('-', '_') + "_before_" + unit, r.motionBefore().get(k));
+            peak(o, "peak_" + Ids.of(k).replace('-', '_') + "_after_" + unit, r.motionAfter().get(k));
+        }
+        peak(o, "peak_stroke_m", r.strokeInBand());
+        peak(o, "peak_stroke_run_up_m", r.strokeRunUp());
+        number(o, "stroke_clearance_m", r.clearance());
+        peak(o, "peak_spring_force_N", r.springForce());
+        peak(o, "peak_damper_force_N", r.damperForce());
+        peak(o, "peak_absorber_force_N", r.absorberForce());
+        JsonArray coupled = new JsonArray();
+        for (double w : r.coupledNaturalFrequencies()) {
+            coupled.add(hz(w));
+        }
+        o.add("coupled_natural_frequencies_Hz", coupled);
+        number(o, "detuning_stiffer_factor", r.detuning().stifferFactor());
+        number(o, "detuning_softer_factor", r.detuning().softerFactor());
+        JsonArray warnings = new JsonArray();
+        for (Warning w : r.warnings()) {
+            JsonObject wo = new JsonObject();
+            wo.addProperty("code", w.code());
+            wo.addProperty("text", w.text());
+            warnings.add(wo);
+        }
+        o.add("warnings", warnings);
+        JsonArray cautions = new JsonArray();
+        Cautions.STANDARD.forEach(cautions::add);
+        o.add("cautions", cautions);
+        return o;
+    }
+
+    /**
+     * @param r the result
+     * @return pretty-printed JSON text
+     */
+    public static String toJson(DesignResult r) {
+        return new GsonBuilder().setPrettyPrinting().disableHtmlEscaping().create().toJson(of(r)) + "\n";
+    }
+
+    private static void peak(JsonObject o, String key, ResponsePeak p) {
+        number(o, key, p.value());
+    }
+
+    private static void number(JsonObject o, String key, double v) {
+        if (Double.isFinite(v)) {
+            o.addProperty(key, v);
+        } else {
+            o.add(key, com.google.gson.JsonNull.INSTANCE);
+            if (Double.isInfinite(v)) {
+                o.addProperty(key + "_unbounded", true);
+            }
+        }
+    }
+
+    private static double hz(double omega) {
+        return Unit.HERTZ.fromSi(omega);
+    }
+}

@@ -1,0 +1,132 @@
+package org.counterpoise.io.project;
+
+import java.util.List;
+import org.counterpoise.core.design.AbsorberSizing;
+import org.counterpoise.core.design.DesignStudy;
+import org.counterpoise.core.error.Checks;
+import org.counterpoise.core.error.InvalidInputException;
+import org.counterpoise.core.model.DampingConversions;
+import org.counterpoise.core.model.Excitation;
+import org.counterpoise.core.model.FrequencyBand;
+import org.counterpoise.core.model.Structure;
+import org.counterpoise.core.model.StructureConversions;
+import org.counterpoise.core.response.ResponseKind;
+
+/**
+ * A project as the user entered it (units and measures kept as typed), and its conversion to the
+ * core's SI {@link DesignStudy}. Problems are reported against the project-file field names.
+ *
+ * @param name project name
+ * @param notes free text
+ * @param structure the structure as known
+ * @param disturbance the disturbance
+ * @param absorber the designer's choices
+ */
+public record Project(String name, String notes, StructureInput structure, DisturbanceInput disturbance,
+        AbsorberInput absorber) {
+
+    /** The project-file format version this build writes. */
+    public static final int FORMAT_VERSION = 1;
+
+    /** Response kinds a design may reduce (those of the structure). */
+    public static final List<ResponseKind> DESIGN_RESPONSES = List.of(ResponseKind.DISPLACEMENT,
+            ResponseKind.VELOCITY, ResponseKind.ACCELERATION, ResponseKind.RELATIVE_DISPLACEMENT,
+            ResponseKind.TRANSMITTED_FORCE);
+
+    /** @return the structure in SI */
+    public Structure toStructure() {
+        StructureInput s = structure;
+        if (s.mass() != null && s.weight() != null) {
+            throw new InvalidInputException("structure.weight", "given with structure.mass",
+                    "give either structure.mass or structure.weight, not both");
+        }
+        Double mass = s.mass() != null ? Checks.positive("structure.mass.value", s.mass().si())
+                : s.weight() != null ? StructureConversions.massFromWeight(s.weight().si()) : null;
+        int stiffnessForms = count(s.stiffness(), s.naturalFrequency(), s.staticDeflection());
+        double stiffness;
+        if (mass == null) {
+            if (s.stiffness() == null || s.naturalFrequency() == null) {
+                throw InvalidInputException.missing("structure.mass",
+                        "give structure.mass or structure.weight, or both structure.stiffness and"
+                                + " structure.natural_frequency");
+            }
+            stiffness = Checks.positive("structure.stiffness.value", s.stiffness().si());
+            mass = StructureConversions.massFromFrequency(stiffness, s.naturalFrequency().si());
+        } else if (stiffnessForms != 1) {
+            throw new InvalidInputException("structure", stiffnessForms + " stiffness entries",
+                    "with a mass or weight give exactly one of structure.stiffness, structure.natural_frequency"
+                            + " and structure.static_deflection");
+        } else if (s.stiffness() != null) {
+            stiffness = Checks.positive("structure.stiffness.value", s.stiffness().si());
+        } else if (s.naturalFrequency() != null) {
+            stiffness = StructureConversions.stiffnessFromFrequency(mass,
+                    Checks.positive("structure.natural_frequency.value", s.naturalFrequency().si()));
+        } else {
+            stiffness = StructureConversions.stiffnessFromStaticDeflection(mass,
+                    Checks.positive("structure.static_deflection.value", s.staticDeflection().si()));
+        }
+        double zeta = dampingRatio(s.damping(), Math.sqrt(stiffness / mass));
+        return new Structure(mass, stiffness, zeta, s.modeShapeAtAbsorber());
+    }
+
+    private static double dampingRatio(DampingInput d, double omega) {
+        if (d == null) {
+            return 0.0;
+        }
+        return switch (d.measure()) {
+            case RATIO -> Checks.inRange("structure.damping.ratio", d.value(), 0.0, 0.99);
+            case LOSS_FACTOR -> DampingConversions.fromLossFactor(d.value());
+            case Q_FACTOR -> DampingConversions.fromQualityFactor(d.value());
+            case HALF_POWER_BANDWIDTH -> DampingConversions.fromHalfPowerBandwidth(d.bandwidth().si(), omega);
+        };
+    }
+
+    /** @return the excitation in SI */
+    public Excitation toExcitation() {
+        DisturbanceInput d = disturbance;
+        double order = Checks.positive("disturbance.harmonic_order", d.harmonicOrder());
+        FrequencyBand band;
+        if (d.isBand()) {
+            Checks.positive("disturbance.band.low", d.bandLow());
+            Checks.positive("disturbance.band.high", d.bandHigh());
+            if (d.bandHigh() < d.bandLow()) {
+                throw new InvalidInputException("disturbance.band.high", Checks.show(d.bandHigh()),
+                        "must not be below disturbance.band.low (" + Checks.show(d.bandLow()) + ")");
+            }
+            band = FrequencyBand.ofRotor(d.bandUnit().toSi(d.bandLow()), d.bandUnit().toSi(d.bandHigh()), order);
+        } else {
+            double w = Checks.positive("disturbance.frequency.value", d.frequency().si());
+            band = FrequencyBand.ofRotor(w, w, order);
+        }
+        return new Excitation(d.kind(), Checks.positive("disturbance.amplitude.value", d.amplitude().si()), band);
+    }
+
+    /** @return the study the core designs */
+    public DesignStudy toStudy() {
+        AbsorberInput a = absorber;
+        Structure s = toStructure();
+        AbsorberSizing sizing;
+        if (!Double.isNaN(a.massRatio()) && a.mass() != null) {
+            throw new InvalidInputException("absorber.mass", "given with absorber.mass_ratio",
+                    "give either absorber.mass_ratio or absorber.mass, not both");
+        } else if (!Double.isNaN(a.massRatio())) {
+            sizing = AbsorberSizing.ofMassRatio(a.massRatio());
+        } else if (a.mass() != null) {
+            sizing = AbsorberSizing.ofMass(Checks.positive("absorber.mass.value", a.mass().si()));
+        } else {
+            throw InvalidInputException.missing("absorber.mass_ratio", "give absorber.mass_ratio or absorber.mass");
+        }
+        return new DesignStudy(name, s, toExcitation(), a.response(), sizing, a.method(), a.hangsVertically(),
+                a.strokeMargin());
+    }
+
+    private static int count(Object... entries) {
+        int n = 0;
+        for (Object e : entries) {
+            if (e != null) {
+                n++;
+            }
+        }
+        return n;
+    }
+}

@@ -1,0 +1,127 @@
+package org.counterpoise.io.project;
+
+import com.google.gson.GsonBuilder;
+import com.google.gson.JsonObject;
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.AtomicMoveNotSupportedException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+
+/** Writes a project file in the current format, safely: a temporary file, then an atomic rename. */
+public final class ProjectWriter {
+    private ProjectWriter() {
+    }
+
+    /**
+     * @param project the project
+     * @return the JSON text
+     */
+    public static String toJson(Project project) {
+        JsonObject root = new JsonObject();
+        root.addProperty("format_version", Project.FORMAT_VERSION);
+        root.addProperty("name", project.name());
+        if (!project.notes().isEmpty()) {
+            root.addProperty("notes", project.notes());
+        }
+        root.add("structure", structure(project.structure()));
+        root.add("disturbance", disturbance(project.disturbance()));
+        root.add("absorber", absorber(project.absorber()));
+        return new GsonBuilder().setPrettyPrinting().disableHtmlEscaping().create().toJson(root) + "\n";
+    }
+
+    /**
+     * Saves through a temporary file in the same folder and an atomic move, so a crash never
+     * leaves a half-written project.
+     * @param project the project
+     * @param file where to save
+     * @throws IOException when the folder cannot be written
+     */
+    public static void save(Project project, Path file) throws IOException {
+        writeAtomically(file, toJson(project));
+    }
+
+    /**
+     * @param file destination
+     * @param text content
+     * @throws IOException when the folder cannot be written
+     */
+    public static void writeAtomically(Path file, String text) throws IOException {
+        Path target = file.toAbsolutePath();
+        Path temp = Files.createTempFile(target.getParent(), "." + target.getFileName(), ".tmp");
+        try {
+            Files.writeString(temp, text, StandardCharsets.UTF_8);
+            try {
+                Files.move(temp, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
+            } catch (AtomicMoveNotSupportedException e) {
+                Files.move(temp, target, StandardCopyOption.REPLACE_EXISTING);
+            }
+        } finally {
+            Files.deleteIfExists(temp);
+        }
+    }
+
+    private static JsonObject structure(StructureInput s) {
+        JsonObject o = new JsonObject();
+        put(o, "mass", s.mass());
+        put(o, "weight", s.weight());
+        put(o, "stiffness", s.stiffness());
+        put(o, "natural_frequency", s.naturalFrequency());
+        put(o, "static_deflection", s.staticDeflection());
+        if (s.damping() != null) {
+            JsonObject d = new JsonObject();
+            if (s.damping().measure() == DampingInput.Measure.HALF_POWER_BANDWIDTH) {
+                d.add(s.damping().measure().key(), quantity(s.damping().bandwidth()));
+            } else {
+                d.addProperty(s.damping().measure().key(), s.damping().value());
+            }
+            o.add("damping", d);
+        }
+        o.addProperty("mode_shape_at_absorber", s.modeShapeAtAbsorber());
+        return o;
+    }
+
+    private static JsonObject disturbance(DisturbanceInput d) {
+        JsonObject o = new JsonObject();
+        o.addProperty("kind", Ids.of(d.kind()));
+        o.add("amplitude", quantity(d.amplitude()));
+        if (d.isBand()) {
+            JsonObject band = new JsonObject();
+            band.addProperty("low", d.bandLow());
+            band.addProperty("high", d.bandHigh());
+            band.addProperty("unit", d.bandUnit().symbol());
+            o.add("band", band);
+        } else {
+            o.add("frequency", quantity(d.frequency()));
+        }
+        o.addProperty("harmonic_order", d.harmonicOrder());
+        return o;
+    }
+
+    private static JsonObject absorber(AbsorberInput a) {
+        JsonObject o = new JsonObject();
+        if (!Double.isNaN(a.massRatio())) {
+            o.addProperty("mass_ratio", a.massRatio());
+        }
+        put(o, "mass", a.mass());
+        o.addProperty("method", a.method().id());
+        o.addProperty("response", Ids.of(a.response()));
+        o.addProperty("hangs_vertically", a.hangsVertically());
+        o.addProperty("stroke_margin", a.strokeMargin());
+        return o;
+    }
+
+    private static void put(JsonObject o, String key, QuantityInput q) {
+        if (q != null) {
+            o.add(key, quantity(q));
+        }
+    }
+
+    private static JsonObject quantity(QuantityInput q) {
+        JsonObject o = new JsonObject();
+        o.addProperty("value", q.value());
+        o.addProperty("unit", q.unit().symbol());
+        return o;
+    }
+}

@@ -1,0 +1,19 @@
+package org.counterpoise.io.project;
+
+/**
+ * The structure as the user knows it. Exactly one of mass and weight; exactly one of stiffness,
+ * natural frequency and static deflection (or stiffness plus natural frequency without a mass).
+ * Absent entries are null.
+ *
+ * @param mass modal mass
+ * @param weight weight (mass = weight / standard gravity)
+ * @param stiffness modal stiffness
+ * @param naturalFrequency natural frequency
+ * @param staticDeflection static deflection under its own weight
+ * @param damping damping in one of its usual measures
+ * @param modeShapeAtAbsorber mode shape value at the absorber point (1 at the antinode)
+ */
+public record StructureInput(QuantityInput mass, QuantityInput weight, QuantityInput stiffness,
+        QuantityInput naturalFrequency, QuantityInput staticDeflection, DampingInput damping,
+        double modeShapeAtAbsorber) {
+}

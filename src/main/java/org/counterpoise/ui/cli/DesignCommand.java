@@ -1,0 +1,42 @@
+package org.counterpoise.ui.cli;
+
+import java.nio.file.Path;
+import java.util.concurrent.Callable;
+import org.counterpoise.core.design.DesignResult;
+import org.counterpoise.core.design.Designer;
+import org.counterpoise.io.export.ResultJson;
+import org.counterpoise.io.project.LoadedProject;
+import org.counterpoise.io.project.ProjectReader;
+import org.counterpoise.io.text.DesignReport;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+/** {@code design FILE}: designs the absorber described by a project file and prints the report. */
+@Command(name = "design", mixinStandardHelpOptions = true,
+        description = "Design the absorber for a project file and print the report (or JSON with --json).")
+public final class DesignCommand implements Callable<Integer> {
+    @Spec
+    private CommandSpec spec;
+
+    @Parameters(index = "0", paramLabel = "FILE", description = "project file (JSON, see docs/project-file.md)")
+    private Path file;
+
+    @Option(names = "--json", description = "print the result as one JSON object with SI units in the key names")
+    private boolean json;
+
+    @Override
+    public Integer call() {
+        LoadedProject loaded = ProjectReader.read(file);
+        for (String unknown : loaded.unknownFields()) {
+            spec.commandLine().getErr().println("note: " + file + ": field " + unknown
+                    + " is not part of the project format and was not used");
+        }
+        DesignResult result = Designer.design(loaded.project().toStudy());
+        spec.commandLine().getOut().print(json ? ResultJson.toJson(result) : DesignReport.render(result));
+        spec.commandLine().getOut().flush();
+        return 0;
+    }
+}
