@@ -88,7 +88,8 @@ public final class ResultJson {
      * @return pretty-printed JSON text
      */
     public static String toJson(DesignResult r) {
-        return new GsonBuilder().setPrettyPrinting().disableHtmlEscaping().create().toJson(of(r)) + "\n";
+        return new GsonBuilder().setPrettyPrinting().serializeNulls().disableHtmlEscaping().create().toJson(of(r))
+                + "\n";
     }
 
     private static void peak(JsonObject o, String key, ResponsePeak p) {

@@ -1,0 +1,111 @@
+package org.counterpoise.ui.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import com.google.gson.JsonObject;
+import com.google.gson.JsonParser;
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import org.counterpoise.core.design.DesignResult;
+import org.counterpoise.core.design.Designer;
+import org.counterpoise.io.project.ProjectReader;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/** The command line as a user meets it: exit codes, messages, and JSON equal to the core's result. */
+class CliTest {
+    record Run(int code, String out, String err) {
+    }
+
+    static Run run(String... args) {
+        StringWriter out = new StringWriter();
+        StringWriter err = new StringWriter();
+        int code = Cli.run(args, new PrintWriter(out), new PrintWriter(err));
+        return new Run(code, out.toString(), err.toString());
+    }
+
+    @Test
+    void noArgumentsPrintsTheHelp() {
+        Run r = run();
+        assertEquals(0, r.code());
+        assertTrue(r.out().contains("design"), r.out());
+    }
+
+    @Test
+    void designPrintsAReportWithUnitsAndCautions() {
+        Run r = run("design", "presets/rooftop-fan-platform.json");
+        assertEquals(0, r.code(), r.err());
+        assertTrue(r.out().contains("spring rate"));
+        assertTrue(r.out().contains("kN/m"));
+        assertTrue(r.out().contains("Retain the absorber mass fail-safe"));
+        assertFalse(r.out().contains("Infinity") || r.out().contains("NaN"));
+    }
+
+    @Test
+    void designJsonCarriesTheCoreNumbers() {
+        Run r = run("design", "--json", "presets/pump-skid-mezzanine.json");
+        assertEquals(0, r.code(), r.err());
+        JsonObject o = JsonParser.parseString(r.out()).getAsJsonObject();
+        DesignResult expected = Designer.design(ProjectReader.readStudy(Path.of("presets/pump-skid-mezzanine.json")));
+        assertEquals(expected.tuning().massRatio(), o.get("mass_ratio").getAsDouble(), 0);
+        assertEquals(expected.tuning().tuningRatio(), o.get("tuning_ratio").getAsDouble(), 0);
+        assertEquals(expected.absorber().stiffness(), o.get("absorber_stiffness_N_per_m").getAsDouble(), 0);
+        assertEquals(expected.responseAfter().value(), o.get("peak_response_after").getAsDouble(), 0);
+        assertEquals(expected.strokeInBand().value(), o.get("peak_stroke_m").getAsDouble(), 0);
+        for (String key : new String[] {"primary_mass_kg", "primary_frequency_Hz", "absorber_mass_kg",
+            "absorber_damping_Ns_per_m", "absorber_frequency_Hz", "response_quantity", "response_unit",
+            "peak_response_before", "method", "absorber_damping_ratio"}) {
+            assertTrue(o.has(key), key);
+        }
+    }
+
+    @Test
+    void unboundedValuesAreNullWithAFlagInJson(@TempDir Path dir) throws Exception {
+        String text = Files.readString(Path.of("presets/rooftop-fan-platform.json"))
+                .replace("\"ratio\": 0.02", "\"ratio\": 0");
+        Path file = dir.resolve("undamped.json");
+        Files.writeString(file, text);
+        Run r = run("design", "--json", file.toString());
+        assertEquals(0, r.code(), r.err());
+        JsonObject o = JsonParser.parseString(r.out()).getAsJsonObject();
+        assertTrue(o.get("peak_response_before").isJsonNull());
+        assertTrue(o.get("peak_response_before_unbounded").getAsBoolean());
+        assertFalse(r.out().contains("Infinity"));
+        Run text2 = run("design", file.toString());
+        assertTrue(text2.out().contains("unbounded"));
+    }
+
+    @Test
+    void badInputExitsTwoWithOneClearMessage(@TempDir Path dir) throws Exception {
+        Run missing = run("design", dir.resolve("nothere.json").toString());
+        assertEquals(2, missing.code());
+        assertTrue(missing.err().startsWith("error: (file): "), missing.err());
+        assertFalse(missing.err().contains("\tat "), "no stack trace");
+
+        Path bad = dir.resolve("bad.json");
+        Files.writeString(bad, Files.readString(Path.of("presets/pump-skid-mezzanine.json"))
+                .replace("\"value\": 600", "\"value\": -600"));
+        Run r = run("design", bad.toString());
+        assertEquals(2, r.code());
+        assertEquals("error: disturbance.amplitude.value: -600 is not allowed; must be a finite number greater than 0",
+                r.err().strip());
+
+        Run flag = run("design", "--jsn", "x.json");
+        assertEquals(2, flag.code());
+        assertTrue(flag.err().contains("Unknown option: '--jsn'"), flag.err());
+    }
+
+    @Test
+    void unknownFieldsAreReportedOnStandardError(@TempDir Path dir) throws Exception {
+        Path file = dir.resolve("extra.json");
+        Files.writeString(file, Files.readString(Path.of("presets/pump-skid-mezzanine.json"))
+                .replace("\"name\":", "\"colour\": \"blue\", \"name\":"));
+        Run r = run("design", file.toString());
+        assertEquals(0, r.code());
+        assertTrue(r.err().contains("field colour is not part of the project format"), r.err());
+    }
+}
