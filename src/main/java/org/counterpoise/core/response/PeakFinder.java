@@ -75,6 +75,29 @@ public final class PeakFinder {
         return new Peak(Math.sqrt(best.x), Math.sqrt(best.value));
     }
 
+    /**
+     * The interior local maxima of |H| strictly inside a band: roots of R = P'Q - PQ' where R
+     * falls through zero.
+     * @param h the transfer function
+     * @param gLow low end of the band
+     * @param gHigh high end (may be +infinity)
+     * @return the frequency ratios g of the local maxima, ascending
+     */
+    public static double[] interiorMaxima(TransferFunction h, double gLow, double gHigh) {
+        double xLow = gLow * gLow;
+        double xHigh = gHigh * gHigh;
+        double[] r = RealPolynomials.quotientDerivativeNumerator(h.magnitudeNumeratorInX(), h.magnitudeDenominatorInX());
+        double[] roots = RealRoots.roots(r, xLow, Math.min(xHigh, Double.MAX_VALUE));
+        double[] out = new double[roots.length];
+        int n = 0;
+        for (double x : roots) {
+            if (x > xLow && x < xHigh && RealPolynomials.derivativeValue(r, x) < 0) {
+                out[n++] = Math.sqrt(x);
+            }
+        }
+        return java.util.Arrays.copyOf(out, n);
+    }
+
     /** With no damping Q = E(x)^2; a root of E in the band is a resonance: unbounded. */
     private static Peak undampedResonanceIn(double[] q, double xLow, double xHigh) {
         double[] dq = RealPolynomials.quotientDerivativeNumerator(q, new double[] {1.0});

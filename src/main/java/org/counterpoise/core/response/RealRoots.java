@@ -49,7 +49,11 @@ final class RealRoots {
             double r = -poly[0] / poly[1];
             return r >= lo && r <= hi ? new double[] {r} : new double[0];
         }
-        return rootsBetween(poly, roots(derivative(poly), lo, hi), lo, hi);
+        double top = Math.min(hi, cauchyBound(poly));
+        if (!(top >= lo)) {
+            return new double[0];
+        }
+        return rootsBetween(poly, roots(derivative(poly), lo, top), lo, top);
     }
 
     private static double[] rootsBetween(double[] poly, double[] critical, double lo, double hi) {

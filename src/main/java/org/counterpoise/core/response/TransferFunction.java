@@ -48,6 +48,23 @@ public final class TransferFunction {
         return q > 0 ? p / q : Double.POSITIVE_INFINITY;
     }
 
+    /**
+     * @param x squared frequency ratio g^2 (&gt; 0)
+     * @return ln |H|^2 = ln P(x) - ln Q(x)
+     */
+    public double logMagnitudeSquared(double x) {
+        return Math.log(RealPolynomials.value(magnitudeNumerator, x)) - Math.log(RealPolynomials.value(magnitudeDenominator, x));
+    }
+
+    /**
+     * @param x squared frequency ratio g^2 (&gt; 0)
+     * @return d/dx ln |H|^2 = P'/P - Q'/Q, zero at every interior peak
+     */
+    public double logMagnitudeSquaredSlope(double x) {
+        return RealPolynomials.derivativeValue(magnitudeNumerator, x) / RealPolynomials.value(magnitudeNumerator, x)
+                - RealPolynomials.derivativeValue(magnitudeDenominator, x) / RealPolynomials.value(magnitudeDenominator, x);
+    }
+
     /** @return P(x), coefficients in ascending powers of x = g^2 (a copy) */
     public double[] magnitudeNumeratorInX() {
         return magnitudeNumerator.clone();
@@ -90,7 +107,7 @@ public final class TransferFunction {
     }
 
     /** @return true when every damping term is zero, so poles lie on the frequency axis */
-    boolean undamped() {
+    public boolean undamped() {
         for (int k = 1; k < denominator.length; k += 2) {
             if (denominator[k] != 0.0) {
                 return false;

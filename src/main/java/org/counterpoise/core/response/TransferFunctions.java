@@ -40,16 +40,51 @@ public final class TransferFunctions {
         if (tuning == null && response.needsAbsorber()) {
             throw new IllegalArgumentException(response + " has no meaning without an absorber");
         }
+        double[][] nd = tuning == null
+                ? build(excitation, response, structureDamping, 0.0, null)
+                : build(excitation, response, structureDamping, tuning.massRatio(), absorberPolynomial(tuning));
+        return new TransferFunction(nd[0], nd[1]);
+    }
+
+    /**
+     * The same response with its derivatives in the tuning ratio and the absorber damping ratio.
+     * @param excitation what drives the structure
+     * @param response the response wanted
+     * @param structureDamping zeta1
+     * @param tuning the absorber
+     * @return the sensitivity evaluator
+     */
+    public static TuningSensitivity sensitivity(ExcitationKind excitation, ResponseKind response,
+            double structureDamping, Tuning tuning) {
+        if (response == ResponseKind.SPRING_FORCE || response == ResponseKind.DAMPER_FORCE) {
+            throw new IllegalArgumentException(response + " depends on the spring and damper separately");
+        }
+        double[] k = absorberPolynomial(tuning);
+        double[][] nd = build(excitation, response, structureDamping, tuning.massRatio(), k);
+        // Every response is affine in K(s) (see the class comment), so raising K by the constant 1
+        // changes N and D by exactly their K-coefficient polynomials dN/dK and dD/dK.
+        double[] kPlusOne = {k[0] + 1.0, k[1]};
+        double[][] shifted = build(excitation, response, structureDamping, tuning.massRatio(), kPlusOne);
+        return new TuningSensitivity(nd[0], nd[1], RealPolynomials.add(shifted[0], RealPolynomials.scale(nd[0], -1.0)),
+                RealPolynomials.add(shifted[1], RealPolynomials.scale(nd[1], -1.0)), tuning);
+    }
+
+    /** K(s) = f^2 + 2 zeta_a f s, the absorber's normalised spring and damper. */
+    private static double[] absorberPolynomial(Tuning tuning) {
+        return new double[] {tuning.tuningRatio() * tuning.tuningRatio(), 2.0 * tuning.dampingRatio() * tuning.tuningRatio()};
+    }
+
+    /** @return {numerator, denominator} in ascending powers of s; k null for the bare structure */
+    private static double[][] build(ExcitationKind excitation, ResponseKind response, double structureDamping,
+            double mu, double[] absorber) {
         double[] c1 = {1.0, 2.0 * structureDamping};
         double[] d1 = {1.0, 2.0 * structureDamping, 1.0};
-        double mu = tuning == null ? 0.0 : tuning.massRatio();
-        double[] k = tuning == null ? new double[] {0.0}
-                : new double[] {tuning.tuningRatio() * tuning.tuningRatio(),
-                    2.0 * tuning.dampingRatio() * tuning.tuningRatio()};
+        boolean bare = absorber == null;
+        double[] k = bare ? new double[] {0.0, 0.0} : absorber;
         double[] a1;
         double[] a2;
         double[] den;
-        if (tuning == null) {
+        if (bare) {
             a1 = new double[] {1.0};
             a2 = new double[] {0.0};
             den = d1;
@@ -97,6 +132,6 @@ public final class TransferFunctions {
             case SPRING_FORCE -> RealPolynomials.scale(stroke, mu * k[0]);
             case DAMPER_FORCE -> RealPolynomials.shift(RealPolynomials.scale(stroke, mu * k[1]), 1);
         };
-        return new TransferFunction(numerator, RealPolynomials.multiply(den, driveDenominator));
+        return new double[][] {numerator, RealPolynomials.multiply(den, driveDenominator)};
     }
 }

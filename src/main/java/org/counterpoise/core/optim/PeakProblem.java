@@ -1,0 +1,127 @@
+package org.counterpoise.core.optim;
+
+import org.counterpoise.core.error.Checks;
+import org.counterpoise.core.error.InvalidInputException;
+import org.counterpoise.core.model.ExcitationKind;
+import org.counterpoise.core.model.Tuning;
+import org.counterpoise.core.response.ResponseKind;
+import org.counterpoise.core.response.TransferFunction;
+import org.counterpoise.core.response.TransferFunctions;
+import org.counterpoise.core.response.TuningSensitivity;
+
+/**
+ * One non-dimensional absorber optimisation problem: an excitation and response pair, a mass
+ * ratio, the structure's damping ratio and the band of frequency ratios g it applies to. The
+ * design variables are the tuning ratio f and the absorber damping ratio zeta_a; either may be
+ * held fixed (a given spring, a given damper).
+ *
+ * @param excitation excitation kind
+ * @param response response kind (a response of the structure, or the stroke)
+ * @param massRatio mu &gt; 0
+ * @param structureDamping zeta1 &gt;= 0
+ * @param bandLow lowest frequency ratio g (&gt;= 0)
+ * @param bandHigh highest frequency ratio g (&gt; bandLow; +infinity for all frequencies)
+ * @param fixedTuning a fixed tuning ratio f, or NaN when f is free
+ * @param fixedDamping a fixed absorber damping ratio, or NaN when zeta_a is free
+ */
+public record PeakProblem(ExcitationKind excitation, ResponseKind response, double massRatio,
+        double structureDamping, double bandLow, double bandHigh, double fixedTuning, double fixedDamping) {
+
+    /** Validates the problem; each message names the option a user sets. */
+    public PeakProblem {
+        Checks.present("excitation", excitation, "an excitation kind");
+        Checks.present("response", response, "a response kind");
+        Checks.inOpenRange("mass ratio", massRatio, 0.0, 10.0);
+        Checks.inRange("structure damping", structureDamping, 0.0, 0.99);
+        if (!(bandLow >= 0) || Double.isInfinite(bandLow)) {
+            throw new InvalidInputException("band", Checks.show(bandLow), "the low end must be a finite number of 0 or more");
+        }
+        if (!(bandHigh > bandLow)) {
+            throw new InvalidInputException("band", Checks.show(bandLow) + ":" + Checks.show(bandHigh),
+                    "the high end must be greater than the low end (an empty band has no peak)");
+        }
+        if (!Double.isNaN(fixedTuning)) {
+            Checks.inOpenRange("fixed tuning ratio", fixedTuning, 0.0, 100.0);
+        }
+        if (!Double.isNaN(fixedDamping)) {
+            Checks.inRange("fixed absorber damping ratio", fixedDamping, 0.0, 10.0);
+        }
+        if (response == ResponseKind.STROKE || response.needsAbsorber()) {
+            throw new InvalidInputException("response", response.name().toLowerCase(java.util.Locale.ROOT),
+                    "the absorber's own stroke or force has no minimum-peak design: it falls towards zero as the"
+                            + " absorber damping grows and the absorber locks; use a response of the structure"
+                            + " and limit the stroke instead");
+        }
+    }
+
+    /**
+     * All frequencies, both design variables free.
+     * @param excitation excitation kind
+     * @param response response kind
+     * @param massRatio mu
+     * @param structureDamping zeta1
+     * @return the problem
+     */
+    public static PeakProblem allFrequencies(ExcitationKind excitation, ResponseKind response, double massRatio,
+            double structureDamping) {
+        return new PeakProblem(excitation, response, massRatio, structureDamping, 0.0, Double.POSITIVE_INFINITY,
+                Double.NaN, Double.NaN);
+    }
+
+    /**
+     * @param f fixed tuning ratio
+     * @return this problem with the tuning held at f
+     */
+    public PeakProblem withFixedTuning(double f) {
+        return new PeakProblem(excitation, response, massRatio, structureDamping, bandLow, bandHigh, f, fixedDamping);
+    }
+
+    /**
+     * @param zeta fixed absorber damping ratio
+     * @return this problem with the damping held at zeta
+     */
+    public PeakProblem withFixedDamping(double zeta) {
+        return new PeakProblem(excitation, response, massRatio, structureDamping, bandLow, bandHigh, fixedTuning, zeta);
+    }
+
+    /**
+     * @param mu another mass ratio
+     * @return this problem with that mass ratio
+     */
+    public PeakProblem withMassRatio(double mu) {
+        return new PeakProblem(excitation, response, mu, structureDamping, bandLow, bandHigh, fixedTuning, fixedDamping);
+    }
+
+    /** @return true when the band covers all frequencies */
+    public boolean allFrequencies() {
+        return bandLow == 0.0 && Double.isInfinite(bandHigh);
+    }
+
+    /**
+     * @param f tuning ratio
+     * @param zeta absorber damping ratio
+     * @return the transfer function of the design (f, zeta) (fixed values override)
+     */
+    public TransferFunction transferFunction(double f, double zeta) {
+        return TransferFunctions.of(excitation, response, structureDamping, tuning(f, zeta));
+    }
+
+    /**
+     * @param f tuning ratio
+     * @param zeta absorber damping ratio
+     * @return exact derivatives of ln|H|^2 in f and zeta_a for the design (f, zeta)
+     */
+    public TuningSensitivity sensitivity(double f, double zeta) {
+        return TransferFunctions.sensitivity(excitation, response, structureDamping, tuning(f, zeta));
+    }
+
+    /**
+     * @param f tuning ratio
+     * @param zeta absorber damping ratio
+     * @return the tuning, with fixed values applied
+     */
+    public Tuning tuning(double f, double zeta) {
+        return new Tuning(massRatio, Double.isNaN(fixedTuning) ? f : fixedTuning,
+                Double.isNaN(fixedDamping) ? zeta : fixedDamping);
+    }
+}
