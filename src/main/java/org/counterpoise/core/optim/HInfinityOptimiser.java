@@ -49,6 +49,8 @@ public final class HInfinityOptimiser {
     private static final double ACCEPT = 1e-9;
     private static final double PROBE = 1e-5;
     private static final double SMALL_DAMPING = 0.02;
+    private static final int SCAN_TUNINGS = 16;
+    private static final int SCAN_DAMPINGS = 10;
 
     private HInfinityOptimiser() {
     }
@@ -64,6 +66,9 @@ public final class HInfinityOptimiser {
         Best best = new Best();
         for (double[] seed : seeds) {
             best.offer(seed[0], seed[1], peakOf(problem, seed[0], seed[1], counter), "seed", false);
+        }
+        if (!problem.allFrequencies()) {
+            seeds.addAll(scan(problem, counter));
         }
         if (Double.isInfinite(best.peak)) {
             throw new InvalidInputException("band", problem.bandLow() + ":" + problem.bandHigh(),
@@ -120,7 +125,34 @@ public final class HInfinityOptimiser {
         }
     }
 
-    /** @return true when an active set was verified (the first one verified ends the search) */
+    /**
+     * A coarse scan of the band peak over tuning inside and around the band and damping over three
+     * decades, whose three best points seed the active-set search: over a band the optimum can sit
+     * far from any closed form (tuned inside the band, lightly damped).
+     */
+    private static List<double[]> scan(PeakProblem p, Counter counter) {
+        double top = Double.isInfinite(p.bandHigh()) ? Math.max(2.0, 2 * p.bandLow()) : p.bandHigh();
+        double fLow = Math.max(0.05, 0.7 * Math.min(p.bandLow(), 1.0));
+        double fHigh = Math.max(1.2, 1.2 * top);
+        List<double[]> points = new ArrayList<>();
+        for (int i = 0; i < SCAN_TUNINGS; i++) {
+            double f = Double.isNaN(p.fixedTuning()) ? fLow * Math.pow(fHigh / fLow, i / (SCAN_TUNINGS - 1.0))
+                    : p.fixedTuning();
+            for (int j = 0; j < SCAN_DAMPINGS; j++) {
+                double zeta = Double.isNaN(p.fixedDamping()) ? 0.002 * Math.pow(500, j / (SCAN_DAMPINGS - 1.0))
+                        : p.fixedDamping();
+                points.add(new double[] {f, zeta, peakOf(p, f, zeta, counter)});
+            }
+        }
+        points.sort((a, b) -> Double.compare(a[2], b[2]));
+        return new ArrayList<>(points.subList(0, Math.min(3, points.size())));
+    }
+
+    /**
+     * @return true when an active set was verified. Over all frequencies the first verified set
+     *     ends the search (the closed-form seed lies next to the optimum); over a band every set is
+     *     tried, since several local minimax points can coexist there.
+     */
     private static boolean tryActiveSets(PeakProblem problem, double f, double zeta, Best best, Counter counter) {
         List<double[]> candidates = candidates(problem, f, zeta, counter);
         int n = Math.min(candidates.size(), 4);
@@ -140,6 +172,7 @@ public final class HInfinityOptimiser {
                 }
             }
         }
+        boolean found = false;
         for (int[] set : sets) {
             boolean[] interior = new boolean[set.length];
             double[] x = new double[set.length];
@@ -160,10 +193,13 @@ public final class HInfinityOptimiser {
             double peak = peakOf(problem, s[0], s[1], counter);
             if (peak <= active * (1 + ACCEPT) && isLocalMinimum(problem, s[0], s[1], peak, counter)) {
                 best.offer(s[0], s[1], peak, describe(interior, problem.fixedDamping() == 0.0), true);
-                return true;
+                found = true;
+                if (problem.allFrequencies()) {
+                    return true;
+                }
             }
         }
-        return false;
+        return found;
     }
 
     /** Candidate maxima at a design: {x, 1 for interior or 0 for a band end, value}, highest first. */
