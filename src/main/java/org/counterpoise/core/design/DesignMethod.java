@@ -10,7 +10,11 @@ public enum DesignMethod {
     /** Published minimum mean-square (H2) closed form for white-noise excitation. */
     MINIMUM_VARIANCE("minimum-variance", "classical minimum-variance (H2) closed form"),
     /** Undamped absorber tuned exactly to one forcing frequency. */
-    UNDAMPED_SINGLE_SPEED("undamped-single-speed", "undamped absorber tuned to the forcing frequency");
+    UNDAMPED_SINGLE_SPEED("undamped-single-speed", "undamped absorber tuned to the forcing frequency"),
+    /** Exact minimum of the peak response over the band (H-infinity), computed. */
+    EXACT_PEAK("exact-peak", "exact minimum of the peak response over the band (H-infinity)"),
+    /** Exact minimum of the mean-square response to white noise (H2), computed. */
+    EXACT_VARIANCE("exact-variance", "exact minimum of the mean-square response to white noise (H2)");
 
     private final String id;
     private final String description;

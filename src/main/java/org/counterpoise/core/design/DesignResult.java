@@ -17,6 +17,7 @@ import org.counterpoise.core.response.ResponsePeak;
  *
  * @param study the inputs
  * @param methodSource author, year and work of the design method
+ * @param methodNote what the method assumed or found (e.g. which peaks are equal at the optimum)
  * @param tuning mass ratio, tuning ratio, absorber damping ratio
  * @param absorber absorber mass, spring rate, damping coefficient
  * @param staticSag static deflection of the absorber spring under the absorber's weight, m (NaN
@@ -35,7 +36,7 @@ import org.counterpoise.core.response.ResponsePeak;
  * @param detuning the stiffness change of the bare structure that would do as well
  * @param warnings non-fatal findings
  */
-public record DesignResult(DesignStudy study, String methodSource, Tuning tuning, Absorber absorber,
+public record DesignResult(DesignStudy study, String methodSource, String methodNote, Tuning tuning, Absorber absorber,
         double staticSag, ResponsePeak responseBefore, ResponsePeak responseAfter,
         Map<ResponseKind, ResponsePeak> motionBefore, Map<ResponseKind, ResponsePeak> motionAfter,
         ResponsePeak strokeInBand, ResponsePeak strokeRunUp, double clearance, ResponsePeak springForce,

@@ -17,9 +17,28 @@ import org.counterpoise.core.response.ResponseKind;
  * @param method design method
  * @param hangsVertically true when the absorber spring carries the absorber's weight (static sag)
  * @param strokeMargin clearance over the computed peak stroke (&gt;= 1; 1.5 is common practice)
+ * @param constraints limits on the design (used by the exact-peak method)
  */
 public record DesignStudy(String name, Structure structure, Excitation excitation, ResponseKind response,
-        AbsorberSizing sizing, DesignMethod method, boolean hangsVertically, double strokeMargin) {
+        AbsorberSizing sizing, DesignMethod method, boolean hangsVertically, double strokeMargin,
+        DesignConstraints constraints) {
+
+    /**
+     * A study without constraints.
+     * @param name project name
+     * @param structure the structure
+     * @param excitation the disturbance
+     * @param response the response that matters
+     * @param sizing mass ratio, mass or target
+     * @param method design method
+     * @param hangsVertically true when the spring carries the absorber's weight
+     * @param strokeMargin clearance over the computed stroke
+     */
+    public DesignStudy(String name, Structure structure, Excitation excitation, ResponseKind response,
+            AbsorberSizing sizing, DesignMethod method, boolean hangsVertically, double strokeMargin) {
+        this(name, structure, excitation, response, sizing, method, hangsVertically, strokeMargin,
+                DesignConstraints.NONE);
+    }
 
     /** Validates the record. */
     public DesignStudy {
@@ -29,6 +48,15 @@ public record DesignStudy(String name, Structure structure, Excitation excitatio
         Checks.present("absorber.mass_ratio", sizing, "a mass ratio or a mass");
         Checks.present("absorber.method", method, "one of " + DesignMethod.ids());
         Checks.inRange("absorber.stroke_margin", strokeMargin, 1.0, 10.0);
+        Checks.present("absorber", constraints, "design constraints");
+        if (sizing.byTarget() && method != DesignMethod.EXACT_PEAK) {
+            throw new org.counterpoise.core.error.InvalidInputException("absorber.target", Checks.show(sizing.target()),
+                    "sizing for a target needs the exact-peak method");
+        }
+        if (constraints.any() && method != DesignMethod.EXACT_PEAK) {
+            throw new org.counterpoise.core.error.InvalidInputException("absorber.method", method.id(),
+                    "a stroke limit, fixed damping or fixed tuning needs the exact-peak method");
+        }
         if (response.needsAbsorber()) {
             throw new org.counterpoise.core.error.InvalidInputException("absorber.response", response.name(),
                     "the response to reduce must be a response of the structure, not of the absorber");

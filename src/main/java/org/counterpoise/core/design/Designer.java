@@ -17,6 +17,13 @@ import org.counterpoise.core.remedy.StructureDetuning;
 import org.counterpoise.core.response.ResponseKind;
 import org.counterpoise.core.response.ResponsePeak;
 import org.counterpoise.core.response.SystemResponse;
+import org.counterpoise.core.optim.HInfinityOptimiser;
+import org.counterpoise.core.optim.MinimumMass;
+import org.counterpoise.core.optim.PeakOptimum;
+import org.counterpoise.core.optim.PeakProblem;
+import org.counterpoise.core.optim.VarianceOptimiser;
+import org.counterpoise.core.optim.VarianceOptimum;
+import org.counterpoise.core.response.ResponseScale;
 import org.counterpoise.core.tuning.ClosedForm;
 import org.counterpoise.core.tuning.ClosedForms;
 import org.counterpoise.core.tuning.UndampedAbsorber;
@@ -41,13 +48,12 @@ public final class Designer {
         Structure structure = study.structure();
         Excitation excitation = study.excitation();
         FrequencyBand band = excitation.band();
-        double mu = study.sizing().massRatioOn(structure);
         List<Warning> warnings = new ArrayList<>();
-
-        ClosedForm chosen = choose(study, mu);
+        ClosedForm chosen = choose(study, warnings);
         Tuning tuning = chosen.tuning();
+        double mu = tuning.massRatio();
         Absorber absorber = Absorber.of(structure, tuning);
-        if (structure.dampingRatio() > 0 && chosen.note().contains("undamped structure")) {
+        if (structure.dampingRatio() > 0 && chosen.note().contains(ClosedForms.UNDAMPED_STRUCTURE)) {
             warnings.add(new Warning("DAMPED_STRUCTURE", String.format(Locale.ROOT,
                     "The %s closed form assumes an undamped structure; with the structure's damping ratio of"
                             + " %.3g the tuning is close to, but not exactly, the optimum.",
@@ -82,24 +88,116 @@ public final class Designer {
         double sag = study.hangsVertically()
                 ? org.counterpoise.core.units.Gravity.STANDARD / (absorber.naturalFrequency() * absorber.naturalFrequency())
                 : Double.NaN;
-        return new DesignResult(study, chosen.source(), tuning, absorber, sag, before, after, motionBefore,
+        return new DesignResult(study, chosen.source(), chosen.note(), tuning, absorber, sag, before, after, motionBefore,
                 motionAfter, strokeInBand, strokeRunUp, clearance,
                 fitted.peakOver(ResponseKind.SPRING_FORCE, band), fitted.peakOver(ResponseKind.DAMPER_FORCE, band),
                 fitted.peakOver(ResponseKind.ABSORBER_FORCE, band), coupled, detuning, warnings);
     }
 
-    private static ClosedForm choose(DesignStudy study, double mu) {
-        var excitation = study.excitation();
+    private static ClosedForm choose(DesignStudy study, List<Warning> warnings) {
+        try {
+            return chooseUnnamed(study, warnings);
+        } catch (InvalidInputException e) {
+            throw e.renamed(PROBLEM_FIELDS.getOrDefault(e.field(), e.field()));
+        }
+    }
+
+    /** The optimiser's field names, as the project file names them. */
+    private static final Map<String, String> PROBLEM_FIELDS = Map.of("response", "absorber.response",
+            "band", "disturbance.band", "stroke limit", "absorber.stroke_limit", "mass ratio", "absorber.mass_ratio",
+            "fixed tuning ratio", "absorber.fixed_tuning_ratio", "fixed absorber damping ratio",
+            "absorber.fixed_damping_ratio", "target", "absorber.target");
+
+    private static ClosedForm chooseUnnamed(DesignStudy study, List<Warning> warnings) {
+        Excitation excitation = study.excitation();
+        Structure structure = study.structure();
+        if (study.sizing().byTarget()) {
+            return lightestForTarget(study, warnings);
+        }
+        double mu = study.sizing().massRatioOn(structure);
         return switch (study.method()) {
             case EQUAL_PEAK -> ClosedForms.equalPeak(excitation.kind(), study.response(), mu)
                     .orElseThrow(() -> noClosedForm(study));
             case MINIMUM_VARIANCE -> ClosedForms.minimumVariance(excitation.kind(), study.response(), mu)
                     .orElseThrow(() -> noClosedForm(study));
             case UNDAMPED_SINGLE_SPEED -> new ClosedForm(
-                    UndampedAbsorber.tuning(mu, excitation.band().centre() / study.structure().naturalFrequency()),
+                    UndampedAbsorber.tuning(mu, excitation.band().centre() / structure.naturalFrequency()),
                     "Frahm (1909), US patent 989958; Den Hartog (1956), Mechanical Vibrations, section 3.2",
                     "tuned to one forcing frequency");
+            case EXACT_PEAK -> exactPeak(study, peakProblem(study, mu), warnings);
+            case EXACT_VARIANCE -> {
+                VarianceOptimum o = VarianceOptimiser.optimise(PeakProblem.allFrequencies(excitation.kind(),
+                        study.response(), mu, structure.dampingRatio()));
+                if (!o.converged()) {
+                    warnings.add(new Warning("OPTIMUM_NOT_VERIFIED", "The minimum-variance search stopped before"
+                            + " its convergence test was met; the design is the best found."));
+                }
+                yield new ClosedForm(o.tuning(), EXACT_SOURCE,
+                        "exact minimum of the mean square under white noise over all frequencies");
+            }
         };
+    }
+
+    private static final String EXACT_SOURCE = "exact optimum computed by Counterpoise (docs/optimiser.md),"
+            + " checked against Nishihara and Asami (2002), Crandall and Mark (1963) and Warburton (1982)";
+
+    /** The non-dimensional problem of a study; one forcing frequency is treated as all frequencies. */
+    private static PeakProblem peakProblem(DesignStudy study, double mu) {
+        Structure s = study.structure();
+        FrequencyBand band = study.excitation().band();
+        double omega1 = s.naturalFrequency();
+        DesignConstraints c = study.constraints();
+        PeakProblem p = band.isSingle()
+                ? PeakProblem.allFrequencies(study.excitation().kind(), study.response(), mu, s.dampingRatio())
+                : new PeakProblem(study.excitation().kind(), study.response(), mu, s.dampingRatio(),
+                        band.low() / omega1, band.high() / omega1, Double.NaN, Double.NaN);
+        if (!Double.isNaN(c.fixedDampingRatio())) {
+            p = p.withFixedDamping(c.fixedDampingRatio());
+        }
+        if (!Double.isNaN(c.fixedTuningRatio())) {
+            p = p.withFixedTuning(c.fixedTuningRatio());
+        }
+        if (!Double.isNaN(c.strokeLimit())) {
+            p = p.withStrokeLimit(c.strokeLimit() / ResponseScale.referenceLength(s, study.excitation().kind(),
+                    study.excitation().amplitude()));
+        }
+        return p;
+    }
+
+    private static ClosedForm exactPeak(DesignStudy study, PeakProblem problem, List<Warning> warnings) {
+        return exactPeakResult(study, HInfinityOptimiser.optimise(problem), warnings);
+    }
+
+    private static ClosedForm exactPeakResult(DesignStudy study, PeakOptimum o, List<Warning> warnings) {
+        if (!o.converged()) {
+            warnings.add(new Warning("OPTIMUM_NOT_VERIFIED", "The optimality conditions could not be verified for"
+                    + " this case; the design is the best found by a direct search of the exact peak."));
+        }
+        if (study.excitation().band().isSingle()) {
+            warnings.add(new Warning("SINGLE_FREQUENCY_EXACT", "The disturbance has one frequency: the exact-peak"
+                    + " design minimises the peak over all frequencies, which also covers start-up and mistuning;"
+                    + " for the least response at that one frequency choose undamped-single-speed."));
+        }
+        String note = "maxima equal at the optimum: " + o.activeSet()
+                + (o.activeConstraint().equals("none") ? "" : "; active constraint: " + o.activeConstraint());
+        return new ClosedForm(o.tuning(), EXACT_SOURCE, note);
+    }
+
+    private static ClosedForm lightestForTarget(DesignStudy study, List<Warning> warnings) {
+        Structure s = study.structure();
+        Excitation e = study.excitation();
+        double scale = ResponseScale.of(s, e.kind(), e.amplitude(), study.response());
+        AbsorberSizing sizing = study.sizing();
+        PeakProblem problem = peakProblem(study, sizing.maxMassRatio());
+        MinimumMass.Result r = MinimumMass.find(problem, sizing.target() / scale, sizing.maxMassRatio());
+        if (!r.reachable()) {
+            warnings.add(new Warning("TARGET_NOT_MET", String.format(Locale.ROOT, "No absorber up to a mass ratio of"
+                    + " %.3g meets the target; the design shown is the best at that mass ratio.",
+                    sizing.maxMassRatio())));
+        }
+        ClosedForm exact = exactPeakResult(study, r.optimum(), warnings);
+        return new ClosedForm(exact.tuning(), exact.source(), (r.reachable() ? "lightest absorber that meets the"
+                + " target; " : "target not met; ") + exact.note());
     }
 
     private static InvalidInputException noClosedForm(DesignStudy study) {

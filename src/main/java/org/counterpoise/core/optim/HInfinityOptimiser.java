@@ -50,6 +50,8 @@ public final class HInfinityOptimiser {
     private static final double PROBE = 1e-5;
     private static final double SMALL_DAMPING = 0.02;
     private static final int SCAN_TUNINGS = 16;
+    private static final double MIN_DAMPING = 1e-4;
+    private static final double MAX_DAMPING = 4.0;
     private static final int SCAN_DAMPINGS = 10;
 
     private HInfinityOptimiser() {
@@ -62,6 +64,18 @@ public final class HInfinityOptimiser {
      */
     public static PeakOptimum optimise(PeakProblem problem) {
         Counter counter = new Counter();
+        if (!Double.isNaN(problem.strokeLimit())) {
+            PeakOptimum free = unconstrained(problem.withStrokeLimit(Double.NaN), counter);
+            if (problem.strokePeak(free.tuning().tuningRatio(), free.tuning().dampingRatio())
+                    <= problem.strokeLimit()) {
+                return free;
+            }
+            return strokeLimited(problem, free, counter);
+        }
+        return unconstrained(problem, counter);
+    }
+
+    private static PeakOptimum unconstrained(PeakProblem problem, Counter counter) {
         List<double[]> seeds = seeds(problem);
         Best best = new Best();
         for (double[] seed : seeds) {
@@ -85,8 +99,71 @@ public final class HInfinityOptimiser {
             best.offer(near[0], near[1], peakOf(problem, near[0], near[1], counter), "search", false);
             solveFrom(problem, near[0], near[1], best, counter);
         }
+        String constraint = !Double.isNaN(problem.fixedDamping()) ? "fixed damping"
+                : !Double.isNaN(problem.fixedTuning()) ? "fixed tuning" : "none";
         return new PeakOptimum(problem.tuning(best.f, best.zeta), best.peak, best.activeSet, counter.count,
-                best.converged);
+                best.converged, constraint);
+    }
+
+    /**
+     * The optimum on the stroke limit, when the free optimum's stroke exceeds it. More absorber
+     * damping lowers the stroke, so the limit then holds with equality at the optimum: for each
+     * tuning the least damping that meets it, zeta_c(f), is found by Brent's root finder, and the
+     * band peak along that curve is minimised over f by Brent's minimiser (relative accuracy 1e-10
+     * in f). Needs the damping to be free.
+     */
+    private static PeakOptimum strokeLimited(PeakProblem problem, PeakOptimum free, Counter counter) {
+        if (!Double.isNaN(problem.fixedDamping())) {
+            throw new InvalidInputException("stroke limit", Double.toString(problem.strokeLimit()),
+                    "cannot be met with the absorber damping held fixed (the best design's stroke exceeds it);"
+                            + " free the damping or allow a larger stroke");
+        }
+        double limit = problem.strokeLimit();
+        java.util.function.DoubleUnaryOperator dampingOnLimit = f -> {
+            org.apache.commons.math3.analysis.UnivariateFunction excess = z -> {
+                counter.count++;
+                return Math.log(problem.strokePeak(f, z) / limit);
+            };
+            if (excess.value(MAX_DAMPING) > 0) {
+                return Double.NaN;
+            }
+            if (excess.value(MIN_DAMPING) <= 0) {
+                return MIN_DAMPING;
+            }
+            return new org.apache.commons.math3.analysis.solvers.BrentSolver(1e-14, 1e-12)
+                    .solve(200, excess, MIN_DAMPING, MAX_DAMPING);
+        };
+        double f0 = free.tuning().tuningRatio();
+        if (!Double.isNaN(problem.fixedTuning())) {
+            double z = dampingOnLimit.applyAsDouble(f0);
+            if (Double.isNaN(z)) {
+                throw unreachable(problem);
+            }
+            return new PeakOptimum(problem.tuning(f0, z), peakOf(problem, f0, z, counter), "stroke on its limit",
+                    counter.count, true, "stroke limit");
+        }
+        org.apache.commons.math3.analysis.UnivariateFunction alongLimit = f -> {
+            double z = dampingOnLimit.applyAsDouble(f);
+            return Double.isNaN(z) ? 1e300 : peakOf(problem, f, z, counter);
+        };
+        org.apache.commons.math3.optim.univariate.UnivariatePointValuePair best =
+                new org.apache.commons.math3.optim.univariate.BrentOptimizer(1e-10, 1e-14).optimize(
+                        new MaxEval(500), new org.apache.commons.math3.optim.univariate.UnivariateObjectiveFunction(
+                                alongLimit), GoalType.MINIMIZE,
+                        new org.apache.commons.math3.optim.univariate.SearchInterval(0.5 * f0, 1.5 * f0, f0));
+        if (best.getValue() >= 1e300) {
+            throw unreachable(problem);
+        }
+        double f = best.getPoint();
+        double z = dampingOnLimit.applyAsDouble(f);
+        return new PeakOptimum(problem.tuning(f, z), peakOf(problem, f, z, counter), "stroke on its limit",
+                counter.count, true, "stroke limit");
+    }
+
+    private static InvalidInputException unreachable(PeakProblem problem) {
+        return new InvalidInputException("stroke limit", Double.toString(problem.strokeLimit()),
+                "no absorber damping up to " + MAX_DAMPING + " keeps the stroke this small; allow a larger stroke or"
+                        + " a heavier absorber");
     }
 
     /** The closed-form seeds: published optimum for the pair, and for a band one tuned inside it. */

@@ -23,9 +23,29 @@ import org.counterpoise.core.response.TuningSensitivity;
  * @param bandHigh highest frequency ratio g (&gt; bandLow; +infinity for all frequencies)
  * @param fixedTuning a fixed tuning ratio f, or NaN when f is free
  * @param fixedDamping a fixed absorber damping ratio, or NaN when zeta_a is free
+ * @param strokeLimit the largest allowed peak absorber stroke over the band, non-dimensional
+ *     (divided by the reference length of ResponseScale), or NaN for no limit
  */
 public record PeakProblem(ExcitationKind excitation, ResponseKind response, double massRatio,
-        double structureDamping, double bandLow, double bandHigh, double fixedTuning, double fixedDamping) {
+        double structureDamping, double bandLow, double bandHigh, double fixedTuning, double fixedDamping,
+        double strokeLimit) {
+
+    /**
+     * A problem without a stroke limit.
+     * @param excitation excitation kind
+     * @param response response kind
+     * @param massRatio mu
+     * @param structureDamping zeta1
+     * @param bandLow lowest g
+     * @param bandHigh highest g
+     * @param fixedTuning fixed f or NaN
+     * @param fixedDamping fixed zeta_a or NaN
+     */
+    public PeakProblem(ExcitationKind excitation, ResponseKind response, double massRatio, double structureDamping,
+            double bandLow, double bandHigh, double fixedTuning, double fixedDamping) {
+        this(excitation, response, massRatio, structureDamping, bandLow, bandHigh, fixedTuning, fixedDamping,
+                Double.NaN);
+    }
 
     /** Validates the problem; each message names the option a user sets. */
     public PeakProblem {
@@ -45,6 +65,9 @@ public record PeakProblem(ExcitationKind excitation, ResponseKind response, doub
         }
         if (!Double.isNaN(fixedDamping)) {
             Checks.inRange("fixed absorber damping ratio", fixedDamping, 0.0, 10.0);
+        }
+        if (!Double.isNaN(strokeLimit)) {
+            Checks.positive("stroke limit", strokeLimit);
         }
         if (response == ResponseKind.STROKE || response.needsAbsorber()) {
             throw new InvalidInputException("response", response.name().toLowerCase(java.util.Locale.ROOT),
@@ -73,7 +96,8 @@ public record PeakProblem(ExcitationKind excitation, ResponseKind response, doub
      * @return this problem with the tuning held at f
      */
     public PeakProblem withFixedTuning(double f) {
-        return new PeakProblem(excitation, response, massRatio, structureDamping, bandLow, bandHigh, f, fixedDamping);
+        return new PeakProblem(excitation, response, massRatio, structureDamping, bandLow, bandHigh, f, fixedDamping,
+                strokeLimit);
     }
 
     /**
@@ -81,7 +105,8 @@ public record PeakProblem(ExcitationKind excitation, ResponseKind response, doub
      * @return this problem with the damping held at zeta
      */
     public PeakProblem withFixedDamping(double zeta) {
-        return new PeakProblem(excitation, response, massRatio, structureDamping, bandLow, bandHigh, fixedTuning, zeta);
+        return new PeakProblem(excitation, response, massRatio, structureDamping, bandLow, bandHigh, fixedTuning, zeta,
+                strokeLimit);
     }
 
     /**
@@ -89,7 +114,28 @@ public record PeakProblem(ExcitationKind excitation, ResponseKind response, doub
      * @return this problem with that mass ratio
      */
     public PeakProblem withMassRatio(double mu) {
-        return new PeakProblem(excitation, response, mu, structureDamping, bandLow, bandHigh, fixedTuning, fixedDamping);
+        return new PeakProblem(excitation, response, mu, structureDamping, bandLow, bandHigh, fixedTuning, fixedDamping,
+                strokeLimit);
+    }
+
+    /**
+     * @param limit largest allowed non-dimensional peak stroke over the band
+     * @return this problem with that stroke limit
+     */
+    public PeakProblem withStrokeLimit(double limit) {
+        return new PeakProblem(excitation, response, massRatio, structureDamping, bandLow, bandHigh, fixedTuning,
+                fixedDamping, limit);
+    }
+
+    /**
+     * @param f tuning ratio
+     * @param zeta absorber damping ratio
+     * @return the peak non-dimensional stroke over the band for the design (f, zeta)
+     */
+    public double strokePeak(double f, double zeta) {
+        return org.counterpoise.core.response.PeakFinder.over(
+                TransferFunctions.of(excitation, ResponseKind.STROKE, structureDamping, tuning(f, zeta)),
+                bandLow, bandHigh).magnitude();
     }
 
     /** @return true when the band covers all frequencies */

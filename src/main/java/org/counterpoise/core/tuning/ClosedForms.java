@@ -16,7 +16,8 @@ public final class ClosedForms {
     private static final String WARBURTON = "Warburton (1982), Earthquake Eng. Struct. Dyn. 10, Table I";
     private static final String CRANDALL_MARK = "Crandall and Mark (1963), Random Vibration in Mechanical Systems; "
             + WARBURTON;
-    private static final String UNDAMPED_STRUCTURE = "assumes an undamped structure";
+    /** The note of every closed form that assumes an undamped structure. */
+    public static final String UNDAMPED_STRUCTURE = "assumes an undamped structure";
 
     private ClosedForms() {
     }

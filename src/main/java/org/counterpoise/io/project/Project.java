@@ -2,6 +2,7 @@ package org.counterpoise.io.project;
 
 import java.util.List;
 import org.counterpoise.core.design.AbsorberSizing;
+import org.counterpoise.core.design.DesignConstraints;
 import org.counterpoise.core.design.DesignStudy;
 import org.counterpoise.core.error.Checks;
 import org.counterpoise.core.error.InvalidInputException;
@@ -106,18 +107,26 @@ public record Project(String name, String notes, StructureInput structure, Distu
         AbsorberInput a = absorber;
         Structure s = toStructure();
         AbsorberSizing sizing;
-        if (!Double.isNaN(a.massRatio()) && a.mass() != null) {
-            throw new InvalidInputException("absorber.mass", "given with absorber.mass_ratio",
-                    "give either absorber.mass_ratio or absorber.mass, not both");
+        int sizes = (Double.isNaN(a.massRatio()) ? 0 : 1) + (a.mass() == null ? 0 : 1) + (a.target() == null ? 0 : 1);
+        if (sizes > 1) {
+            throw new InvalidInputException("absorber", sizes + " sizes given",
+                    "give one of absorber.mass_ratio, absorber.mass and absorber.target");
+        } else if (a.target() != null) {
+            sizing = AbsorberSizing.ofTarget(Checks.positive("absorber.target.value", a.target().si()),
+                    Double.isNaN(a.maxMassRatio()) ? AbsorberSizing.DEFAULT_MAX_MASS_RATIO : a.maxMassRatio());
         } else if (!Double.isNaN(a.massRatio())) {
             sizing = AbsorberSizing.ofMassRatio(a.massRatio());
         } else if (a.mass() != null) {
             sizing = AbsorberSizing.ofMass(Checks.positive("absorber.mass.value", a.mass().si()));
         } else {
-            throw InvalidInputException.missing("absorber.mass_ratio", "give absorber.mass_ratio or absorber.mass");
+            throw InvalidInputException.missing("absorber.mass_ratio",
+                    "give absorber.mass_ratio, absorber.mass or absorber.target");
         }
+        DesignConstraints constraints = new DesignConstraints(
+                a.strokeLimit() == null ? Double.NaN : Checks.positive("absorber.stroke_limit.value", a.strokeLimit().si()),
+                a.fixedDampingRatio(), a.fixedTuningRatio());
         return new DesignStudy(name, s, toExcitation(), a.response(), sizing, a.method(), a.hangsVertically(),
-                a.strokeMargin());
+                a.strokeMargin(), constraints);
     }
 
     private static int count(Object... entries) {

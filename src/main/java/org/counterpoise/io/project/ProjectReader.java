@@ -150,7 +150,13 @@ public final class ProjectReader {
                         "one of " + Ids.list(Project.DESIGN_RESPONSES.toArray(new ResponseKind[0]))));
         boolean hangs = a.bool("hangs_vertically", false);
         double margin = a.number("stroke_margin", DesignStudy.DEFAULT_STROKE_MARGIN);
+        QuantityInput target = a.optionalQuantity("target", response.dimension());
+        double maxMassRatio = a.number("max_mass_ratio", Double.NaN);
+        QuantityInput strokeLimit = a.optionalQuantity("stroke_limit", Dimension.LENGTH);
+        double fixedDamping = a.number("fixed_damping_ratio", Double.NaN);
+        double fixedTuning = a.number("fixed_tuning_ratio", Double.NaN);
         a.finish();
-        return new AbsorberInput(ratio, mass, method, response, hangs, margin);
+        return new AbsorberInput(ratio, mass, method, response, hangs, margin, target, maxMassRatio, strokeLimit,
+                fixedDamping, fixedTuning);
     }
 }

@@ -109,7 +109,18 @@ public final class ProjectWriter {
         o.addProperty("response", Ids.of(a.response()));
         o.addProperty("hangs_vertically", a.hangsVertically());
         o.addProperty("stroke_margin", a.strokeMargin());
+        put(o, "target", a.target());
+        putNumber(o, "max_mass_ratio", a.maxMassRatio());
+        put(o, "stroke_limit", a.strokeLimit());
+        putNumber(o, "fixed_damping_ratio", a.fixedDampingRatio());
+        putNumber(o, "fixed_tuning_ratio", a.fixedTuningRatio());
         return o;
+    }
+
+    private static void putNumber(JsonObject o, String key, double v) {
+        if (!Double.isNaN(v)) {
+            o.addProperty(key, v);
+        }
     }
 
     private static void put(JsonObject o, String key, QuantityInput q) {

@@ -1,0 +1,279 @@
+package org.counterpoise.ui.cli;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+import java.util.Map;
+import java.util.concurrent.Callable;
+import org.counterpoise.core.error.InvalidInputException;
+import org.counterpoise.core.model.ExcitationKind;
+import org.counterpoise.core.optim.HInfinityOptimiser;
+import org.counterpoise.core.optim.PeakOptimum;
+import org.counterpoise.core.optim.PeakProblem;
+import org.counterpoise.core.optim.VarianceOptimiser;
+import org.counterpoise.core.optim.VarianceOptimum;
+import org.counterpoise.core.response.ResponseKind;
+import org.counterpoise.io.export.OptimumTable;
+import org.counterpoise.io.project.Ids;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Spec;
+
+/** {@code optimum}: exact optimum absorbers on the non-dimensional problem, like a design chart. */
+@Command(name = "optimum", mixinStandardHelpOptions = true, sortOptions = false,
+        description = {"Exact optimum absorber tuning and damping for the non-dimensional problem, one row per case.",
+            "Peaks and variances are normalised as docs/cli.md states."})
+public final class OptimumCommand implements Callable<Integer> {
+    private static final List<ResponseKind> RESPONSES = List.of(ResponseKind.DISPLACEMENT, ResponseKind.VELOCITY,
+            ResponseKind.ACCELERATION, ResponseKind.RELATIVE_DISPLACEMENT, ResponseKind.STROKE,
+            ResponseKind.TRANSMITTED_FORCE);
+
+    @Spec
+    private CommandSpec spec;
+
+    @Option(names = "--mass-ratio", paramLabel = "MU|LO:HI:N",
+            description = "mass ratio mu = m2/m1, or N values from LO to HI (required unless --cases)")
+    private String massRatio;
+
+    @Option(names = "--structure-damping", paramLabel = "Z|LO:HI:N", defaultValue = "0",
+            description = "structure damping ratio zeta1, or N values from LO to HI (default ${DEFAULT-VALUE})")
+    private String structureDamping;
+
+    @Option(names = "--excitation", paramLabel = "KIND", defaultValue = "force",
+            description = "force, unbalance, base-acceleration or base-displacement (default ${DEFAULT-VALUE})")
+    private String excitation;
+
+    @Option(names = "--response", paramLabel = "KIND", defaultValue = "displacement",
+            description = "displacement, velocity, acceleration, relative-displacement, stroke or transmitted-force"
+                    + " (default ${DEFAULT-VALUE})")
+    private String response;
+
+    @Option(names = "--objective", paramLabel = "peak|variance", defaultValue = "peak",
+            description = "minimise the peak over the band (H-infinity) or the mean square under white noise (H2)")
+    private String objective;
+
+    @Option(names = "--band", paramLabel = "LO:HI",
+            description = "forcing frequency ratios g = omega/omega1 (default: all frequencies)")
+    private String band;
+
+    @Option(names = "--fixed-damping", paramLabel = "ZETA_A", description = "hold the absorber damping ratio fixed")
+    private Double fixedDamping;
+
+    @Option(names = "--fixed-tuning", paramLabel = "F", description = "hold the tuning ratio fixed")
+    private Double fixedTuning;
+
+    @Option(names = "--stroke-limit", paramLabel = "S",
+            description = "largest allowed peak stroke over the band, in the stroke's normalisation")
+    private Double strokeLimit;
+
+    @Option(names = "--cases", paramLabel = "FILE",
+            description = "CSV of cases: columns mass_ratio and structure_damping_ratio (others optional)")
+    private Path cases;
+
+    @Option(names = "--json", description = "print a JSON array of objects")
+    private boolean json;
+
+    @Option(names = "--csv", description = "print CSV")
+    private boolean csv;
+
+    @Override
+    public Integer call() throws IOException {
+        try {
+            return run();
+        } catch (InvalidInputException e) {
+            throw e.renamed(OPTIONS.getOrDefault(e.field(), e.field()));
+        }
+    }
+
+    private int run() throws IOException {
+        if (json && csv) {
+            throw new InvalidInputException("--json", "given with --csv", "choose one output format");
+        }
+        boolean variance = switch (objective) {
+            case "peak" -> false;
+            case "variance" -> true;
+            default -> throw new InvalidInputException("--objective", objective, "peak or variance");
+        };
+        List<PeakProblem> problems = cases == null ? fromOptions() : fromCases(cases);
+        List<OptimumTable.Row> rows = new ArrayList<>();
+        for (PeakProblem p : problems) {
+            if (variance) {
+                VarianceOptimum o = VarianceOptimiser.optimise(p);
+                rows.add(new OptimumTable.Row(p.massRatio(), p.structureDamping(), o.tuning().tuningRatio(),
+                        o.tuning().dampingRatio(), o.variance(), "", o.converged()));
+            } else {
+                PeakOptimum o = HInfinityOptimiser.optimise(p);
+                rows.add(new OptimumTable.Row(p.massRatio(), p.structureDamping(), o.tuning().tuningRatio(),
+                        o.tuning().dampingRatio(), o.peak(), o.activeSet(), o.converged()));
+            }
+        }
+        PrintWriter out = spec.commandLine().getOut();
+        String valueKey = variance ? "variance" : "peak";
+        out.print(json ? OptimumTable.json(rows, valueKey) : csv ? OptimumTable.csv(rows, valueKey)
+                : OptimumTable.text(rows, valueKey));
+        out.flush();
+        return 0;
+    }
+
+    private static final Map<String, String> OPTIONS = Map.of("mass ratio", "--mass-ratio", "structure damping",
+            "--structure-damping", "band", "--band", "response", "--response", "stroke limit", "--stroke-limit",
+            "fixed tuning ratio", "--fixed-tuning", "fixed absorber damping ratio", "--fixed-damping");
+
+    private List<PeakProblem> fromOptions() {
+        if (massRatio == null) {
+            throw InvalidInputException.missing("--mass-ratio", "give a value such as 0.05 or a range LO:HI:N");
+        }
+        ExcitationKind e = parseExcitation(excitation, "--excitation");
+        ResponseKind r = parseResponse(response, "--response");
+        double[] g = parseBand(band);
+        List<PeakProblem> out = new ArrayList<>();
+        for (double mu : range("--mass-ratio", massRatio)) {
+            for (double z : range("--structure-damping", structureDamping)) {
+                out.add(problem(e, r, mu, z, g));
+            }
+        }
+        return out;
+    }
+
+    private PeakProblem problem(ExcitationKind e, ResponseKind r, double mu, double z, double[] g) {
+        PeakProblem p = new PeakProblem(e, r, mu, z, g[0], g[1], Double.NaN, Double.NaN);
+        if (fixedDamping != null) {
+            p = p.withFixedDamping(fixedDamping);
+        }
+        if (fixedTuning != null) {
+            p = p.withFixedTuning(fixedTuning);
+        }
+        if (strokeLimit != null) {
+            p = p.withStrokeLimit(strokeLimit);
+        }
+        return p;
+    }
+
+    private List<PeakProblem> fromCases(Path file) throws IOException {
+        List<String> lines;
+        try {
+            lines = Files.readAllLines(file, StandardCharsets.UTF_8);
+        } catch (IOException e) {
+            throw new InvalidInputException("--cases", file.toString(), "must be a readable CSV file");
+        }
+        lines.removeIf(String::isBlank);
+        if (lines.isEmpty()) {
+            throw new InvalidInputException("--cases", file.toString(), "must hold a header line and cases");
+        }
+        List<String> header = Arrays.stream(lines.get(0).split(",")).map(String::strip).toList();
+        int mu = header.indexOf("mass_ratio");
+        if (mu < 0) {
+            throw new InvalidInputException("--cases", "header " + lines.get(0),
+                    "needs a mass_ratio column (and optionally structure_damping_ratio, excitation, response,"
+                            + " band_low, band_high)");
+        }
+        List<PeakProblem> out = new ArrayList<>();
+        for (int i = 1; i < lines.size(); i++) {
+            String[] cells = lines.get(i).split(",", -1);
+            String where = file.getFileName() + " line " + (i + 1);
+            if (cells.length != header.size()) {
+                throw new InvalidInputException(where, lines.get(i), "needs " + header.size() + " comma-separated cells");
+            }
+            double m = number(where + " mass_ratio", cells[mu]);
+            double z = column(header, cells, "structure_damping_ratio", where, 0.0);
+            ExcitationKind e = header.contains("excitation")
+                    ? parseExcitation(cells[header.indexOf("excitation")].strip(), where + " excitation")
+                    : parseExcitation(excitation, "--excitation");
+            ResponseKind r = header.contains("response")
+                    ? parseResponse(cells[header.indexOf("response")].strip(), where + " response")
+                    : parseResponse(response, "--response");
+            double[] g = parseBand(band);
+            if (header.contains("band_low")) {
+                g = new double[] {column(header, cells, "band_low", where, 0.0),
+                    column(header, cells, "band_high", where, Double.POSITIVE_INFINITY)};
+            }
+            try {
+                out.add(problem(e, r, m, z, g));
+            } catch (InvalidInputException bad) {
+                throw bad.renamed(where + " " + bad.field());
+            }
+        }
+        return out;
+    }
+
+    private static double column(List<String> header, String[] cells, String name, String where, double fallback) {
+        int i = header.indexOf(name);
+        if (i < 0 || cells[i].isBlank()) {
+            return fallback;
+        }
+        return number(where + " " + name, cells[i]);
+    }
+
+    private static ExcitationKind parseExcitation(String text, String field) {
+        return Ids.parse(ExcitationKind.class, text).orElseThrow(() -> new InvalidInputException(field, text,
+                "one of " + Ids.list(ExcitationKind.values())));
+    }
+
+    private static ResponseKind parseResponse(String text, String field) {
+        return Ids.parse(ResponseKind.class, text).filter(RESPONSES::contains).orElseThrow(() ->
+                new InvalidInputException(field, text, "one of " + Ids.list(RESPONSES.toArray(new ResponseKind[0]))));
+    }
+
+    private static double[] parseBand(String text) {
+        if (text == null) {
+            return new double[] {0.0, Double.POSITIVE_INFINITY};
+        }
+        String[] parts = text.split(":", -1);
+        if (parts.length != 2) {
+            throw new InvalidInputException("--band", text, "LO:HI, two frequency ratios such as 0.9:1.1");
+        }
+        double lo = number("--band", parts[0]);
+        double hi = parts[1].strip().equalsIgnoreCase("inf") ? Double.POSITIVE_INFINITY : number("--band", parts[1]);
+        if (!(lo >= 0) || !(hi > lo)) {
+            throw new InvalidInputException("--band", text, "needs 0 <= LO < HI (an empty band has no peak)");
+        }
+        return new double[] {lo, hi};
+    }
+
+    static double[] range(String option, String text) {
+        String[] parts = text.split(":", -1);
+        if (parts.length == 1) {
+            return new double[] {number(option, parts[0])};
+        }
+        if (parts.length != 3) {
+            throw new InvalidInputException(option, text, "a number, or LO:HI:N for N values from LO to HI");
+        }
+        double lo = number(option, parts[0]);
+        double hi = number(option, parts[1]);
+        int n;
+        try {
+            n = Integer.parseInt(parts[2].strip());
+        } catch (NumberFormatException e) {
+            throw new InvalidInputException(option, text, "N in LO:HI:N must be a whole number from 1 to 10000");
+        }
+        if (n < 1 || n > 10000) {
+            throw new InvalidInputException(option, text, "N in LO:HI:N must be a whole number from 1 to 10000");
+        }
+        if (hi < lo) {
+            throw new InvalidInputException(option, text, "HI must not be below LO");
+        }
+        double[] out = new double[n];
+        for (int i = 0; i < n; i++) {
+            out[i] = n == 1 ? lo : lo + (hi - lo) * i / (n - 1);
+        }
+        return out;
+    }
+
+    private static double number(String field, String text) {
+        try {
+            double v = Double.parseDouble(text.strip());
+            if (!Double.isFinite(v)) {
+                throw new NumberFormatException();
+            }
+            return v;
+        } catch (NumberFormatException e) {
+            throw new InvalidInputException(field, "\"" + text + "\"", "must be a finite number");
+        }
+    }
+}
