@@ -114,7 +114,7 @@ public final class HInfinityOptimiser {
      */
     private static PeakOptimum strokeLimited(PeakProblem problem, PeakOptimum free, Counter counter) {
         if (!Double.isNaN(problem.fixedDamping())) {
-            throw new InvalidInputException("stroke limit", Double.toString(problem.strokeLimit()),
+            throw new InvalidInputException("stroke limit", org.counterpoise.core.error.Checks.show(problem.strokeLimit()),
                     "cannot be met with the absorber damping held fixed (the best design's stroke exceeds it);"
                             + " free the damping or allow a larger stroke");
         }
@@ -161,7 +161,7 @@ public final class HInfinityOptimiser {
     }
 
     private static InvalidInputException unreachable(PeakProblem problem) {
-        return new InvalidInputException("stroke limit", Double.toString(problem.strokeLimit()),
+        return new InvalidInputException("stroke limit", org.counterpoise.core.error.Checks.show(problem.strokeLimit()),
                 "no absorber damping up to " + MAX_DAMPING + " keeps the stroke this small; allow a larger stroke or"
                         + " a heavier absorber");
     }

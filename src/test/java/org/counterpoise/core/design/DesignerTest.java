@@ -96,6 +96,54 @@ class DesignerTest {
     }
 
     @Test
+    void exactPeakDesignIsNeverWorseThanTheClosedFormAndMeetsItsConstraints() {
+        Structure s = Structure.of(800, 800 * Math.pow(2 * Math.PI * 25, 2), 0.02);
+        FrequencyBand band = new FrequencyBand(2 * Math.PI * 22, 2 * Math.PI * 28);
+        Excitation e = new Excitation(ExcitationKind.FORCE, 400, band);
+        DesignResult classical = Designer.design(study(s, e, DesignMethod.EQUAL_PEAK, AbsorberSizing.ofMassRatio(0.05)));
+        DesignResult exact = Designer.design(study(s, e, DesignMethod.EXACT_PEAK, AbsorberSizing.ofMassRatio(0.05)));
+        assertTrue(exact.responseAfter().value() <= classical.responseAfter().value());
+        // With a stroke limit below the free optimum's stroke, the stroke sits on the limit.
+        double limit = 0.8 * exact.strokeInBand().value();
+        DesignStudy limited = new DesignStudy("t", s, e, ResponseKind.DISPLACEMENT, AbsorberSizing.ofMassRatio(0.05),
+                DesignMethod.EXACT_PEAK, false, 1.5, new DesignConstraints(limit, Double.NaN, Double.NaN));
+        DesignResult r = Designer.design(limited);
+        assertEquals(limit, r.strokeInBand().value(), 1e-9 * limit);
+        assertTrue(r.responseAfter().value() >= exact.responseAfter().value());
+        assertTrue(r.methodNote().contains("stroke limit"), r.methodNote());
+    }
+
+    @Test
+    void targetSizingFindsTheLightestSufficientAbsorber() {
+        Structure s = Structure.of(800, 800 * Math.pow(2 * Math.PI * 25, 2), 0.02);
+        Excitation e = new Excitation(ExcitationKind.FORCE, 400,
+                new FrequencyBand(2 * Math.PI * 23, 2 * Math.PI * 27));
+        double target = 2.0e-5; // m
+        DesignStudy st = new DesignStudy("t", s, e, ResponseKind.DISPLACEMENT, AbsorberSizing.ofTarget(target, 0.3),
+                DesignMethod.EXACT_PEAK, false, 1.5);
+        DesignResult r = Designer.design(st);
+        assertTrue(r.responseAfter().value() <= target);
+        // A slightly lighter absorber, optimally tuned, cannot meet the target.
+        double lighter = r.tuning().massRatio() * (1 - 1e-5);
+        DesignResult less = Designer.design(study(s, e, DesignMethod.EXACT_PEAK, AbsorberSizing.ofMassRatio(lighter)));
+        assertTrue(less.responseAfter().value() > target);
+        // Unreachable target: warned, best design at the largest mass ratio shown.
+        DesignResult none = Designer.design(new DesignStudy("t", s, e, ResponseKind.DISPLACEMENT,
+                AbsorberSizing.ofTarget(1e-9, 0.1), DesignMethod.EXACT_PEAK, false, 1.5));
+        assertTrue(none.warnings().stream().anyMatch(w -> w.code().equals("TARGET_NOT_MET")));
+        assertEquals(0.1, none.tuning().massRatio(), 1e-15);
+    }
+
+    @Test
+    void exactVarianceOnAnUndampedStructureIsCrandallAndMarks() {
+        Excitation e = new Excitation(ExcitationKind.FORCE, 10, FrequencyBand.single(50));
+        DesignResult r = Designer.design(study(FLOOR, e, DesignMethod.EXACT_VARIANCE, AbsorberSizing.ofMassRatio(0.05)));
+        // Crandall and Mark (1963); Warburton (1982), Table I.
+        assertEquals(org.counterpoise.core.tuning.MinimumVariance.forceDisplacement(0.05).tuningRatio(),
+                r.tuning().tuningRatio(), 1e-7);
+    }
+
+    @Test
     void massBudgetTooLargeForTheStructureIsRefused() {
         Excitation e = new Excitation(ExcitationKind.FORCE, 1, FrequencyBand.single(60));
         InvalidInputException ex = assertThrows(InvalidInputException.class,

@@ -100,6 +100,60 @@ class CliTest {
     }
 
     @Test
+    void optimumPrintsOneRowPerCaseInEveryFormat(@TempDir Path dir) throws Exception {
+        Run json = run("optimum", "--mass-ratio", "0.01:0.2:3", "--structure-damping", "0:0.02:2", "--json");
+        assertEquals(0, json.code(), json.err());
+        var array = JsonParser.parseString(json.out()).getAsJsonArray();
+        assertEquals(6, array.size());
+        JsonObject first = array.get(0).getAsJsonObject();
+        for (String key : new String[] {"mass_ratio", "structure_damping_ratio", "tuning_ratio",
+            "absorber_damping_ratio", "peak"}) {
+            assertTrue(first.has(key), key);
+        }
+        // Nishihara and Asami (2002): exact optimum peak for mu = 0.01, undamped structure.
+        assertEquals(org.counterpoise.core.tuning.NishiharaAsamiExact.optimumPeak(0.01),
+                first.get("peak").getAsDouble(), 1e-9 * first.get("peak").getAsDouble());
+
+        Run csv = run("optimum", "--mass-ratio", "0.05", "--objective", "variance", "--csv");
+        assertEquals(0, csv.code(), csv.err());
+        String[] lines = csv.out().strip().split("\n");
+        assertEquals("mass_ratio,structure_damping_ratio,tuning_ratio,absorber_damping_ratio,variance,converged",
+                lines[0]);
+        // Warburton (1982): J_opt = sqrt((1 + 3 mu/4) / (mu (1+mu))).
+        assertEquals(Math.sqrt((1 + 0.0375) / (0.05 * 1.05)), Double.parseDouble(lines[1].split(",")[4]), 1e-12);
+
+        Path cases = dir.resolve("cases.csv");
+        Files.writeString(cases, "mass_ratio,structure_damping_ratio,band_low,band_high\n0.05,0.02,0.9,1.1\n0.1,0,,\n");
+        Run fromFile = run("optimum", "--cases", cases.toString());
+        assertEquals(0, fromFile.code(), fromFile.err());
+        assertEquals(3, fromFile.out().strip().split("\n").length);
+    }
+
+    @Test
+    void optimumRefusesBadFlagsWithExitTwo() {
+        Run r = run("optimum", "--mass-ratio", "-0.1");
+        assertEquals(2, r.code());
+        assertTrue(r.err().startsWith("error: --mass-ratio: -0.1 is not allowed"), r.err());
+        r = run("optimum", "--mass-ratio", "0.05", "--band", "2:1");
+        assertEquals(2, r.code());
+        assertTrue(r.err().contains("--band"), r.err());
+        r = run("optimum", "--mass-ratio", "0.05", "--excitation", "wind");
+        assertEquals(2, r.code());
+        assertTrue(r.err().contains("--excitation: wind is not allowed; one of force, unbalance"), r.err());
+        r = run("optimum", "--mass-ratio", "0.05", "--response", "stroke");
+        assertEquals(2, r.code());
+        assertTrue(r.err().contains("limit the stroke instead"), r.err());
+        r = run("optimum", "--mass-ratio", "0.05", "--structure-damping", "nan");
+        assertEquals(2, r.code());
+        r = run("optimum", "--mass-ratio", "0.05", "--objective", "variance", "--response", "acceleration");
+        assertEquals(2, r.code());
+        assertTrue(r.err().contains("infinite"), r.err());
+        r = run("optimum");
+        assertEquals(2, r.code());
+        assertTrue(r.err().contains("--mass-ratio: missing"), r.err());
+    }
+
+    @Test
     void unknownFieldsAreReportedOnStandardError(@TempDir Path dir) throws Exception {
         Path file = dir.resolve("extra.json");
         Files.writeString(file, Files.readString(Path.of("presets/pump-skid-mezzanine.json"))
