@@ -226,9 +226,9 @@ public final class HInfinityOptimiser {
     }
 
     /**
-     * @return true when an active set was verified. Over all frequencies the first verified set
-     *     ends the search (the closed-form seed lies next to the optimum); over a band every set is
-     *     tried, since several local minimax points can coexist there.
+     * @return true when an active set was verified; the first verified set ends the search from
+     *     this seed (the seeds, closed forms and the best points of a coarse scan, cover the
+     *     places where distinct local optima can sit).
      */
     private static boolean tryActiveSets(PeakProblem problem, double f, double zeta, Best best, Counter counter) {
         List<double[]> candidates = candidates(problem, f, zeta, counter);
@@ -249,7 +249,6 @@ public final class HInfinityOptimiser {
                 }
             }
         }
-        boolean found = false;
         for (int[] set : sets) {
             boolean[] interior = new boolean[set.length];
             double[] x = new double[set.length];
@@ -270,13 +269,10 @@ public final class HInfinityOptimiser {
             double peak = peakOf(problem, s[0], s[1], counter);
             if (peak <= active * (1 + ACCEPT) && isLocalMinimum(problem, s[0], s[1], peak, counter)) {
                 best.offer(s[0], s[1], peak, describe(interior, problem.fixedDamping() == 0.0), true);
-                found = true;
-                if (problem.allFrequencies()) {
-                    return true;
-                }
+                return true;
             }
         }
-        return found;
+        return false;
     }
 
     /** Candidate maxima at a design: {x, 1 for interior or 0 for a band end, value}, highest first. */
