@@ -49,6 +49,7 @@ public final class HInfinityOptimiser {
     private static final double ACCEPT = 1e-9;
     private static final double PROBE = 1e-5;
     private static final double SMALL_DAMPING = 0.02;
+    private static final double SEED_CUTOFF = 1.2;
     private static final int SCAN_TUNINGS = 16;
     private static final double MIN_DAMPING = 1e-4;
     private static final double MAX_DAMPING = 4.0;
@@ -78,8 +79,11 @@ public final class HInfinityOptimiser {
     private static PeakOptimum unconstrained(PeakProblem problem, Counter counter) {
         List<double[]> seeds = seeds(problem);
         Best best = new Best();
-        for (double[] seed : seeds) {
-            best.offer(seed[0], seed[1], peakOf(problem, seed[0], seed[1], counter), "seed", false);
+        for (int i = 0; i < seeds.size(); i++) {
+            double[] seed = seeds.get(i);
+            double peak = peakOf(problem, seed[0], seed[1], counter);
+            seeds.set(i, new double[] {seed[0], seed[1], peak});
+            best.offer(seed[0], seed[1], peak, "seed", false);
         }
         if (!problem.allFrequencies()) {
             seeds.addAll(scan(problem, counter));
@@ -90,7 +94,12 @@ public final class HInfinityOptimiser {
                             + " has no finite peak in this band for any absorber; choose a band that excludes"
                             + (problem.bandLow() == 0 ? " zero frequency" : " infinite frequency"));
         }
+        // Best starting points first; a seed already well above a verified optimum is not pursued.
+        seeds.sort((a, b) -> Double.compare(a[2], b[2]));
         for (double[] seed : seeds) {
+            if (best.converged && seed[2] > SEED_CUTOFF * best.peak) {
+                break;
+            }
             solveFrom(problem, seed[0], seed[1], best, counter);
         }
         if (!best.converged) {
@@ -193,11 +202,10 @@ public final class HInfinityOptimiser {
 
     /** Tries every active set of up to three of the highest candidate maxima, and the bound zeta_a = 0. */
     private static void solveFrom(PeakProblem problem, double f, double zeta, Best best, Counter counter) {
-        boolean found = tryActiveSets(problem, f, zeta, best, counter);
+        tryActiveSets(problem, f, zeta, best, counter);
         // The bound zeta_a = 0 can be optimal only over a band that excludes both resonances;
-        // try it when nothing else was found or the best damping is already small.
-        if (Double.isNaN(problem.fixedDamping()) && !problem.allFrequencies()
-                && (!found || best.zeta < SMALL_DAMPING)) {
+        // try it when the best damping found is already small.
+        if (Double.isNaN(problem.fixedDamping()) && !problem.allFrequencies() && best.zeta < SMALL_DAMPING) {
             tryActiveSets(problem.withFixedDamping(0.0), f, 0.0, best, counter);
         }
     }
