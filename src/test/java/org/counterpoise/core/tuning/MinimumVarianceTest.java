@@ -3,35 +3,24 @@ package org.counterpoise.core.tuning;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import org.apache.commons.math3.analysis.integration.IterativeLegendreGaussIntegrator;
 import org.counterpoise.core.model.ExcitationKind;
 import org.counterpoise.core.model.Tuning;
 import org.counterpoise.core.response.ResponseKind;
 import org.counterpoise.core.response.TransferFunction;
 import org.counterpoise.core.response.TransferFunctions;
+import org.counterpoise.testing.Quadrature;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;
 
 /**
- * Minimum-variance absorbers, checked by an independent numerical integration of |H|^2 with a
- * Commons Math Gauss-Legendre integrator (g = t / (1 - t) maps [0, 1) onto [0, infinity)).
+ * Minimum-variance absorbers, checked by an independent numerical integration of |H|^2
+ * ({@link Quadrature}).
  */
 class MinimumVarianceTest {
 
-    /** J = (1/2 pi) integral over all real g of |H|^2 = (1/pi) integral over g &gt;= 0. */
     static double meanSquare(TransferFunction h) {
-        IterativeLegendreGaussIntegrator integrator = new IterativeLegendreGaussIntegrator(64, 1e-12, 1e-14);
-        double total = 0;
-        double[] cuts = {0, 0.3, 0.45, 0.5, 0.55, 0.7, 0.9, 1.0};
-        for (int i = 0; i + 1 < cuts.length; i++) {
-            total += integrator.integrate(Integer.MAX_VALUE, t -> {
-                double g = t / (1 - t);
-                double m = h.magnitude(g);
-                return m * m / ((1 - t) * (1 - t));
-            }, cuts[i], cuts[i + 1] - (i + 2 == cuts.length ? 1e-9 : 0));
-        }
-        return total / Math.PI;
+        return Quadrature.meanSquare(h);
     }
 
     @Test
