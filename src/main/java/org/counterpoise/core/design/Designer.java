@@ -14,6 +14,7 @@ import org.counterpoise.core.model.Structure;
 import org.counterpoise.core.model.Tuning;
 import org.counterpoise.core.remedy.DetuningAlternative;
 import org.counterpoise.core.remedy.StructureDetuning;
+import org.counterpoise.core.robust.ToleratedDetuning;
 import org.counterpoise.core.response.ResponseKind;
 import org.counterpoise.core.response.ResponsePeak;
 import org.counterpoise.core.response.SystemResponse;
@@ -91,7 +92,12 @@ public final class Designer {
         return new DesignResult(study, chosen.source(), chosen.note(), tuning, absorber, sag, before, after, motionBefore,
                 motionAfter, strokeInBand, strokeRunUp, clearance,
                 fitted.peakOver(ResponseKind.SPRING_FORCE, band), fitted.peakOver(ResponseKind.DAMPER_FORCE, band),
-                fitted.peakOver(ResponseKind.ABSORBER_FORCE, band), coupled, detuning, warnings);
+                fitted.peakOver(ResponseKind.ABSORBER_FORCE, band), coupled, detuning,
+                ToleratedDetuning.ofStructure(structure, absorber, excitation, kind, DesignResult.TOLERANCE_ALLOWANCE,
+                        DesignResult.TOLERANCE_SEARCH),
+                ToleratedDetuning.ofAbsorber(structure, absorber, excitation, kind, DesignResult.TOLERANCE_ALLOWANCE,
+                        DesignResult.TOLERANCE_SEARCH),
+                warnings);
     }
 
     private static ClosedForm choose(DesignStudy study, List<Warning> warnings) {

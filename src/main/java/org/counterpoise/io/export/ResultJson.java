@@ -69,6 +69,9 @@ public final class ResultJson {
         o.add("coupled_natural_frequencies_Hz", coupled);
         number(o, "detuning_stiffer_factor", r.detuning().stifferFactor());
         number(o, "detuning_softer_factor", r.detuning().softerFactor());
+        tolerance(o, "structure_frequency", r.structureTolerance());
+        tolerance(o, "absorber_frequency", r.absorberTolerance());
+        o.addProperty("tolerance_allowance", DesignResult.TOLERANCE_ALLOWANCE);
         JsonArray warnings = new JsonArray();
         for (Warning w : r.warnings()) {
             JsonObject wo = new JsonObject();
@@ -90,6 +93,11 @@ public final class ResultJson {
     public static String toJson(DesignResult r) {
         return new GsonBuilder().setPrettyPrinting().serializeNulls().disableHtmlEscaping().create().toJson(of(r))
                 + "\n";
+    }
+
+    private static void tolerance(JsonObject o, String key, org.counterpoise.core.robust.DetuningRange range) {
+        number(o, "tolerated_" + key + "_factor_low", range.low());
+        number(o, "tolerated_" + key + "_factor_high", range.high());
     }
 
     private static void peak(JsonObject o, String key, ResponsePeak p) {

@@ -9,6 +9,7 @@ import org.counterpoise.core.model.Excitation;
 import org.counterpoise.core.model.FrequencyBand;
 import org.counterpoise.core.model.Structure;
 import org.counterpoise.core.remedy.DetuningAlternative;
+import org.counterpoise.core.robust.DetuningRange;
 import org.counterpoise.core.response.ResponseKind;
 import org.counterpoise.core.response.ResponsePeak;
 import org.counterpoise.core.units.Dimension;
@@ -96,6 +97,11 @@ public final class DesignReport {
         row(out, "natural frequencies with absorber", QuantityFormat.number(hz(w[0]), 4) + " Hz and "
                 + QuantityFormat.number(hz(w[1]), 4) + " Hz (undamped)");
 
+        section(out, "Tolerance to mistuning (peak in band rising by at most "
+                + QuantityFormat.number(100 * DesignResult.TOLERANCE_ALLOWANCE, 2) + " %)");
+        row(out, "structure natural frequency", tolerance(r.structureTolerance(), 1));
+        row(out, "absorber spring rate", tolerance(r.absorberTolerance(), 2));
+
         section(out, "Alternative: change the structure's stiffness instead");
         DetuningAlternative d = r.detuning();
         row(out, "target (what the absorber achieves)", DisplayUnits.format(d.target(), study.response().dimension()));
@@ -117,6 +123,27 @@ public final class DesignReport {
             bullet(out, caution);
         }
         return out.toString();
+    }
+
+    /**
+     * @param range tolerated frequency factors
+     * @param power 1 for a frequency, 2 for a stiffness (proportional to frequency squared)
+     * @return e.g. "-3.1 % to +2.7 %"
+     */
+    public static String tolerance(DetuningRange range, int power) {
+        if (!range.defined()) {
+            return "not defined (the nominal response is zero or unbounded)";
+        }
+        return side(range.low(), power, range.searchLimit(), -1) + " to " + side(range.high(), power, range.searchLimit(), 1);
+    }
+
+    private static String side(double factor, int power, double limit, int sign) {
+        if (Double.isNaN(factor)) {
+            double bound = Math.pow(1 + sign * limit, power) - 1;
+            return "beyond " + (bound > 0 ? "+" : "") + QuantityFormat.number(100 * bound, 2) + " %";
+        }
+        double change = 100 * (Math.pow(factor, power) - 1);
+        return (change > 0 ? "+" : "") + QuantityFormat.number(change, 2) + " %";
     }
 
     private static String reduction(DesignResult r) {

@@ -1,0 +1,94 @@
+package org.counterpoise.core.robust;
+
+import java.util.function.DoubleUnaryOperator;
+import org.apache.commons.math3.analysis.solvers.BrentSolver;
+import org.counterpoise.core.model.Absorber;
+import org.counterpoise.core.model.Excitation;
+import org.counterpoise.core.model.Structure;
+import org.counterpoise.core.model.Tuning;
+import org.counterpoise.core.response.ResponseKind;
+import org.counterpoise.core.response.SystemResponse;
+
+/**
+ * How far a built design may be off-tune before its worst response over the forcing band rises by
+ * more than an allowance: the structure's natural frequency off (its stiffness, contents or
+ * supports not as assumed, damping ratio kept), or the absorber's spring rate off (its damper
+ * kept, so its damping ratio moves as 1/sqrt(k2)). Both are computed physically from the exact
+ * band peak. From the nominal design the factor is stepped outwards by 0.5 % to the search limit;
+ * the first step whose peak exceeds the allowance brackets the crossing, refined by Brent's method
+ * to 1e-9. A rise narrower than one step could be missed; the peak varies smoothly with detuning.
+ */
+public final class ToleratedDetuning {
+    private static final double STEP = 0.005;
+
+    private ToleratedDetuning() {
+    }
+
+    /**
+     * @param structure the structure as designed for
+     * @param absorber the absorber as designed
+     * @param excitation the disturbance
+     * @param response the response that matters
+     * @param allowance allowed rise of the peak (fraction, &gt; 0)
+     * @param searchLimit largest detuning searched each side (fraction, 0 to 0.9)
+     * @return tolerated factors of the structure's natural frequency
+     */
+    public static DetuningRange ofStructure(Structure structure, Absorber absorber, Excitation excitation,
+            ResponseKind response, double allowance, double searchLimit) {
+        DoubleUnaryOperator peak = factor -> {
+            Structure moved = structure.withFrequencyScaledBy(factor);
+            Tuning t = absorber.tuningOn(moved);
+            return new SystemResponse(moved, t, excitation.kind(), excitation.amplitude())
+                    .peakOver(response, excitation.band()).value();
+        };
+        return search(peak, allowance, searchLimit);
+    }
+
+    /**
+     * @param structure the structure
+     * @param absorber the absorber as designed
+     * @param excitation the disturbance
+     * @param response the response that matters
+     * @param allowance allowed rise of the peak (fraction, &gt; 0)
+     * @param searchLimit largest detuning searched each side (fraction, 0 to 0.9)
+     * @return tolerated factors of the absorber's natural frequency (the spring rate factor is the
+     *     square)
+     */
+    public static DetuningRange ofAbsorber(Structure structure, Absorber absorber, Excitation excitation,
+            ResponseKind response, double allowance, double searchLimit) {
+        DoubleUnaryOperator peak = factor -> {
+            Absorber moved = new Absorber(absorber.mass(), absorber.stiffness() * factor * factor, absorber.damping());
+            return new SystemResponse(structure, moved.tuningOn(structure), excitation.kind(), excitation.amplitude())
+                    .peakOver(response, excitation.band()).value();
+        };
+        return search(peak, allowance, searchLimit);
+    }
+
+    private static DetuningRange search(DoubleUnaryOperator peak, double allowance, double searchLimit) {
+        double nominal = peak.applyAsDouble(1.0);
+        if (!(nominal > 0) || Double.isInfinite(nominal)) {
+            return new DetuningRange(Double.NaN, Double.NaN, allowance, searchLimit, false);
+        }
+        double limit = nominal * (1 + allowance);
+        DoubleUnaryOperator excess = f -> {
+            double v = peak.applyAsDouble(f);
+            return Double.isInfinite(v) ? 1.0 : Math.log(v / limit);
+        };
+        return new DetuningRange(crossing(excess, -1, searchLimit), crossing(excess, +1, searchLimit), allowance,
+                searchLimit, true);
+    }
+
+    private static double crossing(DoubleUnaryOperator excess, int direction, double searchLimit) {
+        double previous = 1.0;
+        int steps = (int) Math.ceil(searchLimit / STEP);
+        for (int i = 1; i <= steps; i++) {
+            double factor = 1.0 + direction * Math.min(i * STEP, searchLimit);
+            if (excess.applyAsDouble(factor) > 0) {
+                return new BrentSolver(1e-12, 1e-9).solve(200, excess::applyAsDouble,
+                        Math.min(previous, factor), Math.max(previous, factor));
+            }
+            previous = factor;
+        }
+        return Double.NaN;
+    }
+}
