@@ -88,7 +88,7 @@ public final class ChartFactory {
 
     private static XYChart base(int width, int height, String title, Unit unit, boolean logarithmic) {
         XYChart chart = new XYChartBuilder().width(width).height(height).title(title)
-                .xAxisTitle("Forcing frequency (Hz)").yAxisTitle(title + " (" + unit.symbol() + ")").build();
+                .xAxisTitle("Forcing frequency (Hz)").yAxisTitle(title + " (" + pretty(unit.symbol()) + ")").build();
         var s = chart.getStyler();
         s.setYAxisLogarithmic(logarithmic);
         s.setChartBackgroundColor(Color.WHITE);
@@ -196,6 +196,11 @@ public final class ChartFactory {
             out[i] = unit.fromSi(si[i]);
         }
         return out;
+    }
+
+    /** Unit symbols as typeset: N*s/m as N·s/m, m/s^2 as m/s². */
+    public static String pretty(String symbol) {
+        return symbol.replace("*", "\u00b7").replace("^2", "\u00b2");
     }
 
     private static String capitalised(String s) {

@@ -1,46 +1,46 @@
 package org.counterpoise.io.chart;
 
+import java.awt.Graphics2D;
+import java.awt.RenderingHints;
+import java.awt.image.BufferedImage;
 import java.io.IOException;
-import java.nio.file.Files;
-import java.nio.file.Path;
-import org.knowm.xchart.BitmapEncoder;
+import java.io.OutputStream;
+import javax.imageio.ImageIO;
 import org.knowm.xchart.VectorGraphicsEncoder;
 import org.knowm.xchart.XYChart;
 
-/** Writes charts as PNG (at 2x for sharp prints) and SVG. Works headless. */
+/** Encodes charts as PNG (drawn at twice the size, for sharp prints) and SVG. Works headless. */
 public final class ChartFiles {
+    private static final int SCALE = 2;
+
     private ChartFiles() {
     }
 
     /**
      * @param chart the chart
-     * @param file the PNG file to write
+     * @param out where the PNG goes
      * @throws IOException when it cannot be written
      */
-    public static void png(XYChart chart, Path file) throws IOException {
-        Path temp = Files.createTempFile(file.toAbsolutePath().getParent(), ".chart", ".png");
+    public static void png(XYChart chart, OutputStream out) throws IOException {
+        BufferedImage image = new BufferedImage(chart.getWidth() * SCALE, chart.getHeight() * SCALE,
+                BufferedImage.TYPE_INT_RGB);
+        Graphics2D g = image.createGraphics();
         try {
-            BitmapEncoder.saveBitmapWithDPI(chart, temp.toString(), BitmapEncoder.BitmapFormat.PNG, 192);
-            Files.move(temp, file, java.nio.file.StandardCopyOption.REPLACE_EXISTING);
+            g.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
+            g.scale(SCALE, SCALE);
+            chart.paint(g, chart.getWidth(), chart.getHeight());
         } finally {
-            Files.deleteIfExists(temp);
+            g.dispose();
         }
+        ImageIO.write(image, "png", out);
     }
 
     /**
      * @param chart the chart
-     * @param file the SVG file to write
+     * @param out where the SVG goes
      * @throws IOException when it cannot be written
      */
-    public static void svg(XYChart chart, Path file) throws IOException {
-        Path temp = Files.createTempFile(file.toAbsolutePath().getParent(), ".chart", ".svg");
-        try (var out = Files.newOutputStream(temp)) {
-            VectorGraphicsEncoder.saveVectorGraphic(chart, out, VectorGraphicsEncoder.VectorGraphicsFormat.SVG);
-        }
-        try {
-            Files.move(temp, file, java.nio.file.StandardCopyOption.REPLACE_EXISTING);
-        } finally {
-            Files.deleteIfExists(temp);
-        }
+    public static void svg(XYChart chart, OutputStream out) throws IOException {
+        VectorGraphicsEncoder.saveVectorGraphic(chart, out, VectorGraphicsEncoder.VectorGraphicsFormat.SVG);
     }
 }

@@ -4,10 +4,8 @@ import com.google.gson.GsonBuilder;
 import com.google.gson.JsonObject;
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
-import java.nio.file.AtomicMoveNotSupportedException;
-import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
+import org.counterpoise.io.AtomicFiles;
 
 /** Writes a project file in the current format, safely: a temporary file, then an atomic rename. */
 public final class ProjectWriter {
@@ -48,18 +46,7 @@ public final class ProjectWriter {
      * @throws IOException when the folder cannot be written
      */
     public static void writeAtomically(Path file, String text) throws IOException {
-        Path target = file.toAbsolutePath();
-        Path temp = Files.createTempFile(target.getParent(), "." + target.getFileName(), ".tmp");
-        try {
-            Files.writeString(temp, text, StandardCharsets.UTF_8);
-            try {
-                Files.move(temp, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
-            } catch (AtomicMoveNotSupportedException e) {
-                Files.move(temp, target, StandardCopyOption.REPLACE_EXISTING);
-            }
-        } finally {
-            Files.deleteIfExists(temp);
-        }
+        AtomicFiles.write(file, out -> out.write(text.getBytes(StandardCharsets.UTF_8)));
     }
 
     private static JsonObject structure(StructureInput s) {

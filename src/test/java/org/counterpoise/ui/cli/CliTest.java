@@ -154,6 +154,34 @@ class CliTest {
     }
 
     @Test
+    void sheetWritesOnceRefusesToOverwriteAndNamesUnwritablePaths(@TempDir Path dir) throws Exception {
+        Path pdf = dir.resolve("a folder with spaces").resolve("pump sheet.pdf");
+        Files.createDirectories(pdf.getParent());
+        Run first = run("sheet", "presets/pump-skid-mezzanine.json", "-o", pdf.toString());
+        assertEquals(0, first.code(), first.err());
+        assertTrue(Files.size(pdf) > 10_000);
+        Run again = run("sheet", "presets/pump-skid-mezzanine.json", "-o", pdf.toString());
+        assertEquals(2, again.code());
+        assertEquals("error: --output: " + pdf + " is not allowed; already exists; add --force to replace it, or"
+                + " choose another name", again.err().strip());
+        assertEquals(0, run("sheet", "presets/pump-skid-mezzanine.json", "-o", pdf.toString(), "--force").code());
+        // A folder that cannot exist: its parent is a file.
+        Path blocker = dir.resolve("plain-file");
+        Files.writeString(blocker, "x");
+        Run bad = run("sheet", "presets/pump-skid-mezzanine.json", "-o", blocker.resolve("x.pdf").toString());
+        assertEquals(2, bad.code());
+        assertTrue(bad.err().startsWith("error: --output: ") && bad.err().contains("cannot be written here"),
+                bad.err());
+        assertFalse(bad.err().contains("\tat "));
+        try (var left = Files.list(pdf.getParent())) {
+            assertEquals(1, left.count(), "no temporary files left behind");
+        }
+        Run missing = run("sheet", "presets/pump-skid-mezzanine.json");
+        assertEquals(2, missing.code());
+        assertTrue(missing.err().contains("Missing required option"), missing.err());
+    }
+
+    @Test
     void unknownFieldsAreReportedOnStandardError(@TempDir Path dir) throws Exception {
         Path file = dir.resolve("extra.json");
         Files.writeString(file, Files.readString(Path.of("presets/pump-skid-mezzanine.json"))

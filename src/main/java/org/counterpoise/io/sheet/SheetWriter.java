@@ -1,0 +1,292 @@
+package org.counterpoise.io.sheet;
+
+import de.rototor.pdfbox.graphics2d.PdfBoxGraphics2D;
+import java.awt.Color;
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.OutputStream;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+import org.apache.pdfbox.pdmodel.PDDocument;
+import org.apache.pdfbox.pdmodel.PDPage;
+import org.apache.pdfbox.pdmodel.PDPageContentStream;
+import org.apache.pdfbox.pdmodel.common.PDRectangle;
+import org.apache.pdfbox.pdmodel.font.PDType0Font;
+import org.apache.pdfbox.pdmodel.graphics.form.PDFormXObject;
+import org.apache.pdfbox.pdmodel.graphics.state.RenderingMode;
+import org.apache.pdfbox.util.Matrix;
+import org.counterpoise.io.chart.ChartFactory;
+import org.knowm.xchart.XYChart;
+
+/**
+ * Lays out a {@link SheetContent} and the design's charts on A4 pages with PDFBox: tables with
+ * labels on the left, numbers right-aligned in one column and units in the next; the charts as
+ * vector graphics through the pdfbox-graphics2d bridge; a header and a footer with the cautions
+ * line and "page n of N" on every page. The text font is Liberation Sans, shipped inside PDFBox,
+ * embedded as a subset so that Greek letters print.
+ */
+public final class SheetWriter {
+    private static final float MARGIN = 48f;
+    private static final float WIDTH = PDRectangle.A4.getWidth();
+    private static final float HEIGHT = PDRectangle.A4.getHeight();
+    private static final float VALUE_RIGHT = 420f;
+    private static final float UNIT_LEFT = 426f;
+    private static final float TEXT_LEFT = 262f;
+    private static final float BODY = 9.5f;
+    private static final float LINE = 12.5f;
+    /** A value printed right-aligned as a number (digits, signs, separators), not as text. */
+    private static final java.util.regex.Pattern NUMERIC = java.util.regex.Pattern.compile("[-+0-9.,/ e]+");
+    private static final Color INK = new Color(0x1d, 0x23, 0x2b);
+    private static final Color MUTED = new Color(0x6b, 0x72, 0x7c);
+    private static final Color ACCENT = new Color(0x0b, 0x6e, 0x69);
+    private static final Color RULE = new Color(0xd5, 0xd9, 0xde);
+    private static final String FONT_RESOURCE = "/org/apache/pdfbox/resources/ttf/LiberationSans-Regular.ttf";
+
+    private final PDDocument document;
+    private final PDType0Font font;
+    private final SheetContent content;
+    private final Map<Integer, Boolean> printable = new HashMap<>();
+    private final List<PDPage> pages = new ArrayList<>();
+    private PDPageContentStream stream;
+    private float y;
+
+    private SheetWriter(PDDocument document, SheetContent content) throws IOException {
+        this.document = document;
+        this.content = content;
+        try (InputStream in = SheetWriter.class.getResourceAsStream(FONT_RESOURCE)) {
+            if (in == null) {
+                throw new IOException("the sheet font " + FONT_RESOURCE + " is missing from the PDFBox library");
+            }
+            this.font = PDType0Font.load(document, in);
+        }
+    }
+
+    /**
+     * Writes the sheet.
+     * @param content the sheet content
+     * @param charts the charts to print, in order (each takes half a page)
+     * @param out where the PDF goes
+     * @throws IOException when it cannot be written
+     */
+    public static void write(SheetContent content, List<XYChart> charts, OutputStream out) throws IOException {
+        try (PDDocument document = new PDDocument()) {
+            document.getDocumentInformation().setTitle("Absorber parameter sheet: " + content.projectName());
+            document.getDocumentInformation().setCreator("Counterpoise");
+            SheetWriter w = new SheetWriter(document, content);
+            w.layout(charts);
+            document.save(out);
+        }
+    }
+
+    private void layout(List<XYChart> charts) throws IOException {
+        newPage();
+        heading(clean(content.projectName()), 17f, INK);
+        y -= 8;
+        say("Absorber parameter sheet \u00b7 issued " + content.date() + " \u00b7 revision " + content.revision(), MARGIN,
+                9f, MUTED, false);
+        y -= LINE;
+        if (!content.notes().isBlank()) {
+            for (String line : wrap(clean(content.notes()), WIDTH - 2 * MARGIN, 8.5f)) {
+                say(line, MARGIN, 8.5f, MUTED, false);
+                y -= 11;
+            }
+        }
+        for (SheetContent.Section section : content.sections()) {
+            section(section);
+        }
+        float chartWidth = WIDTH - 2 * MARGIN;
+        float chartHeight = 300f;
+        ensure(chartHeight + 40);
+        y -= 6;
+        heading("Response with and without the absorber", 11.5f, ACCENT);
+        rule();
+        for (XYChart chart : charts) {
+            ensure(chartHeight + 10);
+            drawChart(chart, MARGIN, y - chartHeight, chartWidth, chartHeight);
+            y -= chartHeight + 14;
+        }
+        newPage();
+        paragraphs("Assumptions of the model", content.assumptions());
+        if (!content.warnings().isEmpty()) {
+            paragraphs("Warnings for this design", content.warnings());
+        }
+        paragraphs("Cautions", content.cautions());
+        stream.close();
+        footers();
+    }
+
+    private void section(SheetContent.Section section) throws IOException {
+        ensure(LINE * 3);
+        y -= 6;
+        heading(section.title(), 11.5f, ACCENT);
+        rule();
+        for (SheetContent.Row row : section.rows()) {
+            row(row);
+        }
+        y -= 4;
+    }
+
+    private void row(SheetContent.Row row) throws IOException {
+        boolean textual = row.unit().isEmpty() && !NUMERIC.matcher(row.value()).matches();
+        if (textual) {
+            List<String> lines = wrap(clean(row.value()), WIDTH - MARGIN - TEXT_LEFT, BODY);
+            ensure(LINE * lines.size());
+            say(row.label(), MARGIN, BODY, MUTED, false);
+            for (String line : lines) {
+                say(line, TEXT_LEFT, BODY, INK, false);
+                y -= LINE;
+            }
+            return;
+        }
+        ensure(LINE);
+        say(row.label(), MARGIN, BODY, MUTED, false);
+        String value = clean(row.value());
+        say(value, VALUE_RIGHT - width(value, BODY), BODY, INK, false);
+        say(ChartFactory.pretty(row.unit()), UNIT_LEFT, BODY, INK, false);
+        y -= LINE;
+    }
+
+    private void paragraphs(String title, List<String> texts) throws IOException {
+        ensure(LINE * 4);
+        y -= 6;
+        heading(title, 11.5f, ACCENT);
+        rule();
+        for (String text : texts) {
+            List<String> lines = wrap(clean(text), WIDTH - 2 * MARGIN - 12, BODY);
+            ensure(LINE * lines.size());
+            say("\u2022", MARGIN, BODY, ACCENT, false);
+            for (String line : lines) {
+                say(line, MARGIN + 12, BODY, INK, false);
+                y -= LINE;
+            }
+            y -= 3;
+        }
+    }
+
+    private void heading(String text, float size, Color color) throws IOException {
+        ensure(size + LINE);
+        y -= size;
+        say(text, MARGIN, size, color, true);
+        y -= 6;
+    }
+
+    private void rule() throws IOException {
+        stream.setStrokingColor(RULE);
+        stream.setLineWidth(0.6f);
+        stream.moveTo(MARGIN, y + 4);
+        stream.lineTo(WIDTH - MARGIN, y + 4);
+        stream.stroke();
+        y -= LINE - 4;
+    }
+
+    private void drawChart(XYChart chart, float x, float bottom, float w, float h) throws IOException {
+        PdfBoxGraphics2D g = new PdfBoxGraphics2D(document, w, h);
+        chart.paint(g, (int) w, (int) h);
+        g.dispose();
+        PDFormXObject form = g.getXFormObject();
+        stream.saveGraphicsState();
+        stream.transform(Matrix.getTranslateInstance(x, bottom));
+        stream.drawForm(form);
+        stream.restoreGraphicsState();
+    }
+
+    private void say(String text, float x, float size, Color color, boolean bold) throws IOException {
+        stream.beginText();
+        stream.setFont(font, size);
+        stream.setNonStrokingColor(color);
+        if (bold) {
+            // Liberation Sans ships in regular weight only: a thin outline makes it semi-bold.
+            stream.setRenderingMode(RenderingMode.FILL_STROKE);
+            stream.setStrokingColor(color);
+            stream.setLineWidth(size * 0.035f);
+        } else {
+            stream.setRenderingMode(RenderingMode.FILL);
+        }
+        stream.newLineAtOffset(x, y);
+        stream.showText(clean(text));
+        stream.endText();
+    }
+
+    private void ensure(float needed) throws IOException {
+        if (y - needed < MARGIN + 26) {
+            newPage();
+        }
+    }
+
+    private void newPage() throws IOException {
+        if (stream != null) {
+            stream.close();
+        }
+        PDPage page = new PDPage(PDRectangle.A4);
+        document.addPage(page);
+        pages.add(page);
+        stream = new PDPageContentStream(document, page);
+        y = HEIGHT - MARGIN;
+        say("Counterpoise \u00b7 absorber parameter sheet", MARGIN, 8f, MUTED, false);
+        String right = clean(content.projectName()) + " \u00b7 rev " + content.revision();
+        say(right, WIDTH - MARGIN - width(right, 8f), 8f, MUTED, false);
+        y -= 18;
+    }
+
+    private void footers() throws IOException {
+        int n = pages.size();
+        for (int i = 0; i < n; i++) {
+            try (PDPageContentStream s = new PDPageContentStream(document, pages.get(i),
+                    PDPageContentStream.AppendMode.APPEND, true, true)) {
+                stream = s;
+                y = MARGIN - 14;
+                stream.setStrokingColor(RULE);
+                stream.setLineWidth(0.6f);
+                stream.moveTo(MARGIN, MARGIN);
+                stream.lineTo(WIDTH - MARGIN, MARGIN);
+                stream.stroke();
+                say("Preliminary design aid. Verify by measurement; local codes and licensed engineering practice"
+                        + " govern.", MARGIN, 7.5f, MUTED, false);
+                String page = "page " + (i + 1) + " of " + n;
+                say(page, WIDTH - MARGIN - width(page, 7.5f), 7.5f, MUTED, false);
+            }
+        }
+        stream = null;
+    }
+
+    private List<String> wrap(String text, float maxWidth, float size) throws IOException {
+        List<String> lines = new ArrayList<>();
+        StringBuilder line = new StringBuilder();
+        for (String word : text.split(" ")) {
+            String candidate = line.length() == 0 ? word : line + " " + word;
+            if (width(candidate, size) > maxWidth && line.length() > 0) {
+                lines.add(line.toString());
+                line = new StringBuilder(word);
+            } else {
+                line = new StringBuilder(candidate);
+            }
+        }
+        if (line.length() > 0) {
+            lines.add(line.toString());
+        }
+        return lines;
+    }
+
+    private float width(String text, float size) throws IOException {
+        return font.getStringWidth(clean(text)) / 1000f * size;
+    }
+
+    /** Replaces characters the font cannot show by '?', so a name in any script never breaks the sheet. */
+    private String clean(String text) {
+        StringBuilder out = new StringBuilder(text.length());
+        text.codePoints().forEach(cp -> {
+            boolean ok = printable.computeIfAbsent(cp, c -> {
+                try {
+                    font.encode(new String(Character.toChars(c)));
+                    return true;
+                } catch (IllegalArgumentException | IOException e) {
+                    return false;
+                }
+            });
+            out.append(ok ? new String(Character.toChars(cp)) : "?");
+        });
+        return out.toString();
+    }
+}
