@@ -14,7 +14,9 @@ public enum DesignMethod {
     /** Exact minimum of the peak response over the band (H-infinity), computed. */
     EXACT_PEAK("exact-peak", "exact minimum of the peak response over the band (H-infinity)"),
     /** Exact minimum of the mean-square response to white noise (H2), computed. */
-    EXACT_VARIANCE("exact-variance", "exact minimum of the mean-square response to white noise (H2)");
+    EXACT_VARIANCE("exact-variance", "exact minimum of the mean-square response to white noise (H2)"),
+    /** Least worst-case peak over the expected mistuning of structure and absorber, computed. */
+    ROBUST_PEAK("robust-peak", "least worst-case peak over the expected mistuning of structure and absorber");
 
     private final String id;
     private final String description;

@@ -18,10 +18,31 @@ import org.counterpoise.core.response.ResponseKind;
  * @param hangsVertically true when the absorber spring carries the absorber's weight (static sag)
  * @param strokeMargin clearance over the computed peak stroke (&gt;= 1; 1.5 is common practice)
  * @param constraints limits on the design (used by the exact-peak method)
+ * @param robustness expected mistuning, target and tolerances (used by robust-peak and the
+ *     robustness study)
  */
 public record DesignStudy(String name, Structure structure, Excitation excitation, ResponseKind response,
         AbsorberSizing sizing, DesignMethod method, boolean hangsVertically, double strokeMargin,
-        DesignConstraints constraints) {
+        DesignConstraints constraints, RobustnessSettings robustness) {
+
+    /**
+     * A study with default robustness settings.
+     * @param name project name
+     * @param structure the structure
+     * @param excitation the disturbance
+     * @param response the response that matters
+     * @param sizing mass ratio, mass or target
+     * @param method design method
+     * @param hangsVertically true when the spring carries the absorber's weight
+     * @param strokeMargin clearance over the computed stroke
+     * @param constraints limits on the design
+     */
+    public DesignStudy(String name, Structure structure, Excitation excitation, ResponseKind response,
+            AbsorberSizing sizing, DesignMethod method, boolean hangsVertically, double strokeMargin,
+            DesignConstraints constraints) {
+        this(name, structure, excitation, response, sizing, method, hangsVertically, strokeMargin, constraints,
+                RobustnessSettings.DEFAULT);
+    }
 
     /**
      * A study without constraints.
@@ -49,6 +70,7 @@ public record DesignStudy(String name, Structure structure, Excitation excitatio
         Checks.present("absorber.method", method, "one of " + DesignMethod.ids());
         Checks.inRange("absorber.stroke_margin", strokeMargin, 1.0, 10.0);
         Checks.present("absorber", constraints, "design constraints");
+        Checks.present("robustness", robustness, "robustness settings");
         if (sizing.byTarget() && method != DesignMethod.EXACT_PEAK) {
             throw new org.counterpoise.core.error.InvalidInputException("absorber.target", Checks.show(sizing.target()),
                     "sizing for a target needs the exact-peak method");

@@ -25,6 +25,8 @@ import org.counterpoise.core.optim.PeakProblem;
 import org.counterpoise.core.optim.VarianceOptimiser;
 import org.counterpoise.core.optim.VarianceOptimum;
 import org.counterpoise.core.response.ResponseScale;
+import org.counterpoise.core.robust.Mistuning;
+import org.counterpoise.core.robust.RobustDesign;
 import org.counterpoise.core.tuning.ClosedForm;
 import org.counterpoise.core.tuning.ClosedForms;
 import org.counterpoise.core.tuning.UndampedAbsorber;
@@ -131,6 +133,19 @@ public final class Designer {
                     "Frahm (1909), US patent 989958; Den Hartog (1956), Mechanical Vibrations, section 3.2",
                     "tuned to one forcing frequency");
             case EXACT_PEAK -> exactPeak(study, peakProblem(study, mu), warnings);
+            case ROBUST_PEAK -> {
+                Tuning nominal = exactPeak(study, peakProblem(study, mu), new ArrayList<>()).tuning();
+                RobustnessSettings r = study.robustness();
+                RobustDesign robust = RobustnessAnalysis.robustDesign(new Mistuning(structure, excitation,
+                        study.response()), nominal, r.structureRange(), r.absorberRange());
+                if (!robust.converged()) {
+                    warnings.add(new Warning("OPTIMUM_NOT_VERIFIED", "The robust-design search stopped at its"
+                            + " evaluation limit; the design is the best found."));
+                }
+                yield new ClosedForm(robust.tuning(), EXACT_SOURCE, String.format(Locale.ROOT,
+                        "least worst case with the structure's frequency within +/-%.3g %% and the absorber's within"
+                                + " +/-%.3g %%", 100 * r.structureRange(), 100 * r.absorberRange()));
+            }
             case EXACT_VARIANCE -> {
                 VarianceOptimum o = VarianceOptimiser.optimise(PeakProblem.allFrequencies(excitation.kind(),
                         study.response(), mu, structure.dampingRatio()));

@@ -5,9 +5,7 @@ import org.apache.commons.math3.analysis.solvers.BrentSolver;
 import org.counterpoise.core.model.Absorber;
 import org.counterpoise.core.model.Excitation;
 import org.counterpoise.core.model.Structure;
-import org.counterpoise.core.model.Tuning;
 import org.counterpoise.core.response.ResponseKind;
-import org.counterpoise.core.response.SystemResponse;
 
 /**
  * How far a built design may be off-tune before its worst response over the forcing band rises by
@@ -35,13 +33,8 @@ public final class ToleratedDetuning {
      */
     public static DetuningRange ofStructure(Structure structure, Absorber absorber, Excitation excitation,
             ResponseKind response, double allowance, double searchLimit) {
-        DoubleUnaryOperator peak = factor -> {
-            Structure moved = structure.withFrequencyScaledBy(factor);
-            Tuning t = absorber.tuningOn(moved);
-            return new SystemResponse(moved, t, excitation.kind(), excitation.amplitude())
-                    .peakOver(response, excitation.band()).value();
-        };
-        return search(peak, allowance, searchLimit);
+        Mistuning m = new Mistuning(structure, excitation, response);
+        return search(factor -> m.peak(absorber, factor, 1.0), allowance, searchLimit);
     }
 
     /**
@@ -56,12 +49,27 @@ public final class ToleratedDetuning {
      */
     public static DetuningRange ofAbsorber(Structure structure, Absorber absorber, Excitation excitation,
             ResponseKind response, double allowance, double searchLimit) {
-        DoubleUnaryOperator peak = factor -> {
-            Absorber moved = new Absorber(absorber.mass(), absorber.stiffness() * factor * factor, absorber.damping());
-            return new SystemResponse(structure, moved.tuningOn(structure), excitation.kind(), excitation.amplitude())
-                    .peakOver(response, excitation.band()).value();
-        };
-        return search(peak, allowance, searchLimit);
+        Mistuning m = new Mistuning(structure, excitation, response);
+        return search(factor -> m.peak(absorber, 1.0, factor), allowance, searchLimit);
+    }
+
+    /**
+     * The structure detuning range within which the peak stays at or below an absolute target.
+     * @param m the mistuning model
+     * @param absorber the absorber
+     * @param target the largest allowed peak, SI
+     * @param searchLimit largest detuning searched each side (fraction)
+     * @return tolerated factors of the structure's natural frequency (allowance: the target over
+     *     the nominal peak, minus one); not defined when the nominal design already exceeds it
+     */
+    public static DetuningRange ofStructureForTarget(Mistuning m, Absorber absorber, double target,
+            double searchLimit) {
+        DoubleUnaryOperator peak = factor -> m.peak(absorber, factor, 1.0);
+        double nominal = peak.applyAsDouble(1.0);
+        if (!(nominal <= target) || !(nominal > 0)) {
+            return new DetuningRange(Double.NaN, Double.NaN, target / nominal - 1, searchLimit, false);
+        }
+        return within(peak, target, target / nominal - 1, searchLimit);
     }
 
     private static DetuningRange search(DoubleUnaryOperator peak, double allowance, double searchLimit) {
@@ -69,7 +77,10 @@ public final class ToleratedDetuning {
         if (!(nominal > 0) || Double.isInfinite(nominal)) {
             return new DetuningRange(Double.NaN, Double.NaN, allowance, searchLimit, false);
         }
-        double limit = nominal * (1 + allowance);
+        return within(peak, nominal * (1 + allowance), allowance, searchLimit);
+    }
+
+    private static DetuningRange within(DoubleUnaryOperator peak, double limit, double allowance, double searchLimit) {
         DoubleUnaryOperator excess = f -> {
             double v = peak.applyAsDouble(f);
             return Double.isInfinite(v) ? 1.0 : Math.log(v / limit);

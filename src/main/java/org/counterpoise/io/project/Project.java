@@ -3,6 +3,9 @@ package org.counterpoise.io.project;
 import java.util.List;
 import org.counterpoise.core.design.AbsorberSizing;
 import org.counterpoise.core.design.DesignConstraints;
+import org.counterpoise.core.design.RobustnessSettings;
+import org.counterpoise.core.robust.Tolerance;
+import org.counterpoise.core.robust.ToleranceSet;
 import org.counterpoise.core.design.DesignStudy;
 import org.counterpoise.core.error.Checks;
 import org.counterpoise.core.error.InvalidInputException;
@@ -22,9 +25,10 @@ import org.counterpoise.core.response.ResponseKind;
  * @param structure the structure as known
  * @param disturbance the disturbance
  * @param absorber the designer's choices
+ * @param robustness expected mistuning, target and tolerances, or null for the defaults
  */
 public record Project(String name, String notes, StructureInput structure, DisturbanceInput disturbance,
-        AbsorberInput absorber) {
+        AbsorberInput absorber, RobustnessInput robustness) {
 
     /** The project-file format version this build writes. */
     public static final int FORMAT_VERSION = 1;
@@ -126,7 +130,48 @@ public record Project(String name, String notes, StructureInput structure, Distu
                 a.strokeLimit() == null ? Double.NaN : Checks.positive("absorber.stroke_limit.value", a.strokeLimit().si()),
                 a.fixedDampingRatio(), a.fixedTuningRatio());
         return new DesignStudy(name, s, toExcitation(), a.response(), sizing, a.method(), a.hangsVertically(),
-                a.strokeMargin(), constraints);
+                a.strokeMargin(), constraints, toRobustness());
+    }
+
+    /** @return the robustness settings in SI (the defaults where the project gives none) */
+    public RobustnessSettings toRobustness() {
+        RobustnessInput r = robustness;
+        if (r == null) {
+            return RobustnessSettings.DEFAULT;
+        }
+        RobustnessSettings d = RobustnessSettings.DEFAULT;
+        double structureRange = Double.isNaN(r.structureDetuningPercent()) ? d.structureRange()
+                : Checks.inRange("robustness.structure_detuning", r.structureDetuningPercent(), 0, 50) / 100;
+        double absorberRange = Double.isNaN(r.absorberDetuningPercent()) ? d.absorberRange()
+                : Checks.inRange("robustness.absorber_detuning", r.absorberDetuningPercent(), 0, 50) / 100;
+        double target = r.target() == null ? Double.NaN : Checks.positive("robustness.target.value", r.target().si());
+        ToleranceSet set = new ToleranceSet(tolerance("robustness.tolerances.structure_mass", r.structureMass()),
+                tolerance("robustness.tolerances.structure_stiffness", r.structureStiffness()),
+                tolerance("robustness.tolerances.absorber_mass", r.absorberMass()),
+                tolerance("robustness.tolerances.absorber_stiffness", r.absorberStiffness()),
+                tolerance("robustness.tolerances.absorber_damping", r.absorberDamping()));
+        return new RobustnessSettings(structureRange, absorberRange, target, set,
+                r.samples() == 0 ? d.samples() : r.samples(), r.seed());
+    }
+
+    private static Tolerance tolerance(String field, RobustnessInput.ToleranceInput t) {
+        if (t == null) {
+            return Tolerance.NONE;
+        }
+        Tolerance.Distribution kind = switch (t.distribution()) {
+            case "uniform" -> Tolerance.Distribution.UNIFORM;
+            case "normal" -> Tolerance.Distribution.NORMAL;
+            case "none" -> Tolerance.Distribution.NONE;
+            default -> throw new InvalidInputException(field + ".distribution", "\"" + t.distribution() + "\"",
+                    "one of uniform, normal, none");
+        };
+        if (!Double.isNaN(t.percent()) == (t.absolute() != null)) {
+            throw new InvalidInputException(field, "percent and absolute", "give either percent or absolute");
+        }
+        if (t.absolute() != null) {
+            return new Tolerance(kind, Checks.nonNegative(field + ".absolute.value", t.absolute().si()), false);
+        }
+        return new Tolerance(kind, Checks.inRange(field + ".percent", t.percent(), 0, 90) / 100, true);
     }
 
     private static int count(Object... entries) {

@@ -69,8 +69,10 @@ public final class ProjectReader {
         StructureInput structure = structure(top.object("structure"));
         DisturbanceInput disturbance = disturbance(top.object("disturbance"));
         AbsorberInput absorber = absorber(top.object("absorber"));
+        JsonFields robust = top.optionalObject("robustness");
+        RobustnessInput robustness = robust == null ? null : robustness(robust, absorber.response());
         top.finish();
-        return new LoadedProject(new Project(name, notes, structure, disturbance, absorber), unknown);
+        return new LoadedProject(new Project(name, notes, structure, disturbance, absorber, robustness), unknown);
     }
 
     /**
@@ -80,6 +82,41 @@ public final class ProjectReader {
      */
     public static DesignStudy readStudy(Path file) {
         return read(file).project().toStudy();
+    }
+
+    private static RobustnessInput robustness(JsonFields r, ResponseKind response) {
+        double structure = r.number("structure_detuning", Double.NaN);
+        double absorber = r.number("absorber_detuning", Double.NaN);
+        QuantityInput target = r.optionalQuantity("target", response.dimension());
+        double samples = r.number("samples", 0);
+        if (samples != Math.rint(samples) || samples < 0 || samples > 1_000_000) {
+            throw new InvalidInputException(r.pathOf("samples"), Double.toString(samples),
+                    "a whole number from 1 to 1000000");
+        }
+        double seed = r.number("seed", 1);
+        if (seed != Math.rint(seed)) {
+            throw new InvalidInputException(r.pathOf("seed"), Double.toString(seed), "a whole number");
+        }
+        JsonFields t = r.optionalObject("tolerances");
+        RobustnessInput.ToleranceInput[] tol = new RobustnessInput.ToleranceInput[5];
+        String[] keys = {"structure_mass", "structure_stiffness", "absorber_mass", "absorber_stiffness",
+            "absorber_damping"};
+        Dimension[] dims = {Dimension.MASS, Dimension.STIFFNESS, Dimension.MASS, Dimension.STIFFNESS,
+            Dimension.DAMPING_COEFFICIENT};
+        if (t != null) {
+            for (int i = 0; i < keys.length; i++) {
+                JsonFields one = t.optionalObject(keys[i]);
+                if (one != null) {
+                    tol[i] = new RobustnessInput.ToleranceInput(one.text("distribution"),
+                            one.number("percent", Double.NaN), one.optionalQuantity("absolute", dims[i]));
+                    one.finish();
+                }
+            }
+            t.finish();
+        }
+        r.finish();
+        return new RobustnessInput(structure, absorber, target, (int) samples, (long) seed, tol[0], tol[1], tol[2],
+                tol[3], tol[4]);
     }
 
     private static StructureInput structure(JsonFields s) {

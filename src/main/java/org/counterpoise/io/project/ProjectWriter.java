@@ -26,6 +26,9 @@ public final class ProjectWriter {
         root.add("structure", structure(project.structure()));
         root.add("disturbance", disturbance(project.disturbance()));
         root.add("absorber", absorber(project.absorber()));
+        if (project.robustness() != null) {
+            root.add("robustness", robustness(project.robustness()));
+        }
         return new GsonBuilder().setPrettyPrinting().disableHtmlEscaping().create().toJson(root) + "\n";
     }
 
@@ -101,6 +104,35 @@ public final class ProjectWriter {
         put(o, "stroke_limit", a.strokeLimit());
         putNumber(o, "fixed_damping_ratio", a.fixedDampingRatio());
         putNumber(o, "fixed_tuning_ratio", a.fixedTuningRatio());
+        return o;
+    }
+
+    private static JsonObject robustness(RobustnessInput r) {
+        JsonObject o = new JsonObject();
+        putNumber(o, "structure_detuning", r.structureDetuningPercent());
+        putNumber(o, "absorber_detuning", r.absorberDetuningPercent());
+        put(o, "target", r.target());
+        if (r.samples() > 0) {
+            o.addProperty("samples", r.samples());
+        }
+        o.addProperty("seed", r.seed());
+        JsonObject t = new JsonObject();
+        String[] keys = {"structure_mass", "structure_stiffness", "absorber_mass", "absorber_stiffness",
+            "absorber_damping"};
+        RobustnessInput.ToleranceInput[] values = {r.structureMass(), r.structureStiffness(), r.absorberMass(),
+            r.absorberStiffness(), r.absorberDamping()};
+        for (int i = 0; i < keys.length; i++) {
+            if (values[i] != null) {
+                JsonObject one = new JsonObject();
+                one.addProperty("distribution", values[i].distribution());
+                putNumber(one, "percent", values[i].percent());
+                put(one, "absolute", values[i].absolute());
+                t.add(keys[i], one);
+            }
+        }
+        if (!t.isEmpty()) {
+            o.add("tolerances", t);
+        }
         return o;
     }
 

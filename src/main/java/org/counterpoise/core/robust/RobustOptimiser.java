@@ -1,0 +1,74 @@
+package org.counterpoise.core.robust;
+
+import java.util.List;
+import org.apache.commons.math3.exception.TooManyEvaluationsException;
+import org.apache.commons.math3.optim.InitialGuess;
+import org.apache.commons.math3.optim.MaxEval;
+import org.apache.commons.math3.optim.PointValuePair;
+import org.apache.commons.math3.optim.nonlinear.scalar.GoalType;
+import org.apache.commons.math3.optim.nonlinear.scalar.ObjectiveFunction;
+import org.apache.commons.math3.optim.nonlinear.scalar.noderiv.NelderMeadSimplex;
+import org.apache.commons.math3.optim.nonlinear.scalar.noderiv.SimplexOptimizer;
+import org.counterpoise.core.model.Absorber;
+import org.counterpoise.core.model.Tuning;
+
+/**
+ * The robust absorber: the tuning ratio and damping ratio that minimise the worst response over
+ * the band when the structure's natural frequency is anywhere within +/- ds of nominal and the
+ * absorber's within +/- da ({@link WorstCase}). The worst case is a maximum of maxima, not smooth,
+ * so it is minimised by Nelder-Mead in (ln f, ln zeta_a) from each seed (the nominal optimum and
+ * the classical design), to 1e-9 relative in the worst case; the best result is kept. By
+ * construction it is never worse than any seed's worst case.
+ */
+public final class RobustOptimiser {
+    private RobustOptimiser() {
+    }
+
+    /**
+     * @param m the mistuning model (nominal structure, disturbance, response)
+     * @param massRatio mu
+     * @param structureRange ds, fraction
+     * @param absorberRange da, fraction
+     * @param seeds starting tunings (their mass ratio is replaced by mu)
+     * @return the robust design
+     */
+    public static RobustDesign optimise(Mistuning m, double massRatio, double structureRange, double absorberRange,
+            List<Tuning> seeds) {
+        int[] count = {0};
+        ObjectiveFunction worst = new ObjectiveFunction(v -> {
+            double f = Math.exp(v[0]);
+            double zeta = Math.exp(v[1]);
+            if (!(f > 0.05 && f < 20 && zeta > 1e-5 && zeta < 4)) {
+                return Double.POSITIVE_INFINITY;
+            }
+            count[0]++;
+            Absorber a = Absorber.of(m.structure(), new Tuning(massRatio, f, zeta));
+            return Math.log(WorstCase.of(m, a, structureRange, absorberRange).peak());
+        });
+        double[] bestPoint = null;
+        double bestValue = Double.POSITIVE_INFINITY;
+        boolean converged = true;
+        for (Tuning seed : seeds) {
+            double[] start = {Math.log(seed.tuningRatio()), Math.log(Math.max(seed.dampingRatio(), 1e-3))};
+            double startValue = worst.getObjectiveFunction().value(start);
+            if (startValue < bestValue) {
+                bestValue = startValue;
+                bestPoint = start;
+            }
+            try {
+                PointValuePair p = new SimplexOptimizer(1e-9, 1e-12).optimize(new MaxEval(1500), worst,
+                        GoalType.MINIMIZE, new InitialGuess(start), new NelderMeadSimplex(new double[] {0.03, 0.25}));
+                if (p.getValue() < bestValue) {
+                    bestValue = p.getValue();
+                    bestPoint = p.getPoint();
+                }
+            } catch (TooManyEvaluationsException e) {
+                converged = false;
+            }
+        }
+        Tuning t = new Tuning(massRatio, Math.exp(bestPoint[0]), Math.exp(bestPoint[1]));
+        Absorber a = Absorber.of(m.structure(), t);
+        return new RobustDesign(t, WorstCase.of(m, a, structureRange, absorberRange), m.peak(a, 1, 1), count[0],
+                converged);
+    }
+}

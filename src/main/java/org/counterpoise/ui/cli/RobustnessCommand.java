@@ -1,0 +1,59 @@
+package org.counterpoise.ui.cli;
+
+import java.nio.file.Path;
+import java.util.concurrent.Callable;
+import org.counterpoise.core.design.DesignResult;
+import org.counterpoise.core.design.Designer;
+import org.counterpoise.core.design.RobustnessAnalysis;
+import org.counterpoise.core.design.RobustnessResult;
+import org.counterpoise.core.design.RobustnessSettings;
+import org.counterpoise.core.error.Checks;
+import org.counterpoise.io.export.RobustnessJson;
+import org.counterpoise.io.project.LoadedProject;
+import org.counterpoise.io.project.ProjectReader;
+import org.counterpoise.io.text.RobustnessReport;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+/** {@code robustness FILE}: sensitivity, worst case, robust design and Monte Carlo of the project's design. */
+@Command(name = "robustness", mixinStandardHelpOptions = true, sortOptions = false,
+        description = "How the project's design fares when structure and absorber are off-tune.")
+public final class RobustnessCommand implements Callable<Integer> {
+    @Spec
+    private CommandSpec spec;
+
+    @Parameters(index = "0", paramLabel = "FILE", description = "project file (JSON)")
+    private Path file;
+
+    @Option(names = "--samples", paramLabel = "N", description = "Monte Carlo samples (default: the project's, or 10000)")
+    private Integer samples;
+
+    @Option(names = "--seed", paramLabel = "S", description = "Monte Carlo seed (default: the project's, or 1)")
+    private Long seed;
+
+    @Option(names = "--json", description = "print one JSON object (SI units)")
+    private boolean json;
+
+    @Override
+    public Integer call() {
+        LoadedProject loaded = ProjectReader.read(file);
+        for (String unknown : loaded.unknownFields()) {
+            spec.commandLine().getErr().println("note: " + file + ": field " + unknown
+                    + " is not part of the project format and was not used");
+        }
+        DesignResult design = Designer.design(loaded.project().toStudy());
+        RobustnessSettings s = design.study().robustness();
+        if (samples != null) {
+            Checks.inRange("--samples", samples, 1, 1_000_000);
+        }
+        RobustnessSettings used = new RobustnessSettings(s.structureRange(), s.absorberRange(), s.target(),
+                s.tolerances(), samples == null ? s.samples() : samples, seed == null ? s.seed() : seed);
+        RobustnessResult r = RobustnessAnalysis.run(design, used);
+        spec.commandLine().getOut().print(json ? RobustnessJson.toJson(design, r) : RobustnessReport.render(design, r));
+        spec.commandLine().getOut().flush();
+        return 0;
+    }
+}
