@@ -182,6 +182,24 @@ class CliTest {
     }
 
     @Test
+    void robustnessReportsWorstCaseRobustDesignAndMonteCarlo() {
+        Run r = run("robustness", "presets/rooftop-fan-platform.json", "--samples", "500", "--json");
+        assertEquals(0, r.code(), r.err());
+        JsonObject o = JsonParser.parseString(r.out()).getAsJsonObject();
+        assertTrue(o.get("robust_worst_case_peak").getAsDouble() <= o.get("worst_case_peak").getAsDouble());
+        assertTrue(o.get("worst_case_peak").getAsDouble() >= o.get("nominal_peak").getAsDouble());
+        JsonObject mc = o.getAsJsonObject("monte_carlo");
+        assertEquals(500, mc.get("samples").getAsInt());
+        assertEquals(7, mc.get("seed").getAsInt());
+        assertTrue(mc.get("p50").getAsDouble() <= mc.get("p90").getAsDouble());
+        Run text = run("robustness", "presets/rooftop-fan-platform.json", "--samples", "200");
+        assertTrue(text.out().contains("Tolerance Monte Carlo (200 samples, seed 7)"), text.out());
+        Run bad = run("robustness", "presets/rooftop-fan-platform.json", "--samples", "0");
+        assertEquals(2, bad.code());
+        assertTrue(bad.err().contains("--samples: 0 is not allowed"), bad.err());
+    }
+
+    @Test
     void unknownFieldsAreReportedOnStandardError(@TempDir Path dir) throws Exception {
         Path file = dir.resolve("extra.json");
         Files.writeString(file, Files.readString(Path.of("presets/pump-skid-mezzanine.json"))
