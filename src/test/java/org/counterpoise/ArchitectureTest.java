@@ -47,6 +47,12 @@ class ArchitectureTest {
     }
 
     @Test
+    void nothingOutsideTheUserInterfaceImportsIt() throws IOException {
+        assertEquals(List.of(), violations("core", "org.counterpoise.ui"));
+        assertEquals(List.of(), violations("io", "org.counterpoise.ui"));
+    }
+
+    @Test
     void commandLineImportsNoSwing() throws IOException {
         assertEquals(List.of(), violations("ui/cli", "javax.swing", "org.counterpoise.ui.gui"));
     }

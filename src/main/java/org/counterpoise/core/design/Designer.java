@@ -163,7 +163,7 @@ public final class Designer {
             + " checked against Nishihara and Asami (2002), Crandall and Mark (1963) and Warburton (1982)";
 
     /** The non-dimensional problem of a study; one forcing frequency is treated as all frequencies. */
-    private static PeakProblem peakProblem(DesignStudy study, double mu) {
+    static PeakProblem peakProblem(DesignStudy study, double mu) {
         Structure s = study.structure();
         FrequencyBand band = study.excitation().band();
         double omega1 = s.naturalFrequency();

@@ -1,0 +1,27 @@
+package org.counterpoise.ui.gui;
+
+import java.util.logging.Level;
+import java.util.logging.Logger;
+import javax.swing.JOptionPane;
+import javax.swing.SwingUtilities;
+import org.counterpoise.ui.gui.wizard.WizardFrame;
+
+/** Starts the wizard: look and feel first, then the window on the event thread. */
+public final class GuiMain {
+    private GuiMain() {
+    }
+
+    /** Opens the wizard. Unexpected failures are logged and shown as a short message, never a stack trace. */
+    public static void launch() {
+        Thread.setDefaultUncaughtExceptionHandler((thread, e) -> {
+            Logger.getLogger("counterpoise").log(Level.SEVERE, "unexpected failure", e);
+            SwingUtilities.invokeLater(() -> JOptionPane.showMessageDialog(null,
+                    "Something went wrong (" + e.getClass().getSimpleName() + "). Your inputs are kept;"
+                            + " please report what you were doing.", "Counterpoise", JOptionPane.ERROR_MESSAGE));
+        });
+        SwingUtilities.invokeLater(() -> {
+            Themes.apply(false);
+            new WizardFrame().setVisible(true);
+        });
+    }
+}

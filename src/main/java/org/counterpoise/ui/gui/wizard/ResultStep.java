@@ -1,0 +1,221 @@
+package org.counterpoise.ui.gui.wizard;
+
+import java.awt.BorderLayout;
+import java.awt.FlowLayout;
+import java.awt.GridLayout;
+import java.awt.event.MouseAdapter;
+import java.awt.event.MouseEvent;
+import java.nio.file.Path;
+import java.util.List;
+import javax.swing.JButton;
+import javax.swing.JComponent;
+import javax.swing.JFileChooser;
+import javax.swing.JLabel;
+import javax.swing.JOptionPane;
+import javax.swing.JPanel;
+import javax.swing.JScrollPane;
+import javax.swing.JSplitPane;
+import javax.swing.JTable;
+import javax.swing.JTextArea;
+import javax.swing.JToggleButton;
+import javax.swing.table.DefaultTableModel;
+import org.counterpoise.core.design.Cautions;
+import org.counterpoise.core.design.DesignCurves;
+import org.counterpoise.core.design.DesignResult;
+import org.counterpoise.core.response.ResponseKind;
+import org.counterpoise.core.response.SystemResponse;
+import org.counterpoise.core.units.Unit;
+import org.counterpoise.io.AtomicFiles;
+import org.counterpoise.io.chart.ChartFactory;
+import org.counterpoise.io.chart.ChartFiles;
+import org.counterpoise.io.sheet.SheetContent;
+import org.counterpoise.io.text.DisplayUnits;
+import org.counterpoise.ui.gui.field.QuantityField;
+import org.counterpoise.ui.gui.plot.ChartHost;
+import org.knowm.xchart.XYChart;
+
+/** Step 4: the absorber to build, and the response before and after. */
+final class ResultStep extends Step {
+    private final DefaultTableModel table = new DefaultTableModel(new String[] {"Quantity", "Value", "Unit"}, 0) {
+        @Override
+        public boolean isCellEditable(int row, int column) {
+            return false;
+        }
+    };
+    private final ChartHost responseChart = new ChartHost("chart.response");
+    private final ChartHost strokeChart = new ChartHost("chart.stroke");
+    private final JToggleButton logAxis = new JToggleButton("Logarithmic response axis", true);
+    private final JLabel readout = new JLabel("Move the pointer over a chart to read the exact values there.");
+    private final JComponent page;
+    private DesignResult result;
+    private DesignCurves curves;
+
+    ResultStep() {
+        JTable t = new JTable(table);
+        t.setName("result.table");
+        t.setRowHeight(t.getRowHeight() + 4);
+        t.getColumnModel().getColumn(0).setPreferredWidth(230);
+        t.getColumnModel().getColumn(1).setPreferredWidth(150);
+        t.getColumnModel().getColumn(2).setPreferredWidth(60);
+        javax.swing.table.DefaultTableCellRenderer numbers = new javax.swing.table.DefaultTableCellRenderer();
+        numbers.setHorizontalAlignment(JLabel.RIGHT);
+        t.getColumnModel().getColumn(1).setCellRenderer(numbers);
+        JTextArea cautions = new JTextArea(String.join("\n", Cautions.STANDARD.stream().map(c -> "\u2022 " + c).toList()));
+        cautions.setName("result.cautions");
+        cautions.setEditable(false);
+        cautions.setLineWrap(true);
+        cautions.setWrapStyleWord(true);
+        cautions.setRows(7);
+        cautions.setOpaque(false);
+        JPanel left = new JPanel(new BorderLayout(0, 6));
+        left.add(new JScrollPane(t), BorderLayout.CENTER);
+        JPanel caution = new JPanel(new BorderLayout());
+        caution.add(new JLabel("Cautions"), BorderLayout.NORTH);
+        caution.add(cautions, BorderLayout.CENTER);
+        left.add(caution, BorderLayout.SOUTH);
+        JPanel charts = new JPanel(new GridLayout(2, 1, 0, 6));
+        charts.add(responseChart);
+        charts.add(strokeChart);
+        JPanel controls = new JPanel(new FlowLayout(FlowLayout.LEFT, 6, 2));
+        logAxis.setName("result.log");
+        logAxis.setMnemonic('l');
+        logAxis.addActionListener(e -> redraw());
+        JButton png = new JButton("Export charts as PNG\u2026");
+        png.setMnemonic('p');
+        png.addActionListener(e -> export(true));
+        JButton svg = new JButton("Export charts as SVG\u2026");
+        svg.setMnemonic('v');
+        svg.addActionListener(e -> export(false));
+        controls.add(logAxis);
+        controls.add(png);
+        controls.add(svg);
+        readout.setName("result.readout");
+        JPanel right = new JPanel(new BorderLayout());
+        right.add(controls, BorderLayout.NORTH);
+        right.add(charts, BorderLayout.CENTER);
+        right.add(readout, BorderLayout.SOUTH);
+        JSplitPane split = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, left, right);
+        split.setResizeWeight(0.36);
+        split.setBorder(null);
+        page = split;
+    }
+
+    @Override
+    String title() {
+        return "Result";
+    }
+
+    @Override
+    JComponent component() {
+        return page;
+    }
+
+    /** @param r the new result, or null while none is valid */
+    void show(DesignResult r) {
+        result = r;
+        table.setRowCount(0);
+        if (r == null) {
+            curves = null;
+            responseChart.message("Fix the inputs to see the design.");
+            strokeChart.message(" ");
+            return;
+        }
+        curves = DesignCurves.of(r);
+        SheetContent content = SheetContent.of(r, "", "", "");
+        List<SheetContent.Section> sections = new java.util.ArrayList<>(content.sections());
+        // What to build and what it achieves first; the inputs echoed last.
+        sections.sort(java.util.Comparator.comparingInt(sec -> sec.title().startsWith("Absorber") ? 0
+                : sec.title().contains("response") || sec.title().contains("Response") ? 1
+                : sec.title().startsWith("Design") ? 2 : sec.title().startsWith("Robust") ? 3 : 4));
+        for (SheetContent.Section section : sections) {
+            table.addRow(new Object[] {"\u2014 " + section.title(), "", ""});
+            for (SheetContent.Row row : section.rows()) {
+                table.addRow(new Object[] {row.label(), row.value(), QuantityField.pretty(row.unit())});
+            }
+        }
+        for (var w : r.warnings()) {
+            table.addRow(new Object[] {"Warning", w.text(), ""});
+        }
+        redraw();
+    }
+
+    private void redraw() {
+        if (result == null) {
+            return;
+        }
+        XYChart response = ChartFactory.response(result, curves, logAxis.isSelected(), 640, 300);
+        XYChart stroke = ChartFactory.stroke(result, curves, false, 640, 300);
+        responseChart.show(response);
+        strokeChart.show(stroke);
+        for (ChartHost host : List.of(responseChart, strokeChart)) {
+            JComponent panel = (JComponent) host.getComponent(0);
+            panel.addMouseMotionListener(new MouseAdapter() {
+                @Override
+                public void mouseMoved(MouseEvent e) {
+                    read(host.chart().getChartXFromCoordinate(e.getX()));
+                }
+            });
+        }
+    }
+
+    /** Shows the exact values at a frequency (Hz) under the pointer. */
+    void read(double hz) {
+        if (result == null || !(hz > 0)) {
+            return;
+        }
+        double w = Unit.HERTZ.toSi(hz);
+        var study = result.study();
+        SystemResponse bare = new SystemResponse(study.structure(), null, study.excitation().kind(),
+                study.excitation().amplitude());
+        SystemResponse fitted = new SystemResponse(study.structure(), result.tuning(), study.excitation().kind(),
+                study.excitation().amplitude());
+        ResponseKind k = study.response();
+        readout.setText(String.format(java.util.Locale.ROOT, "At %.4g Hz:  without %s,  with %s,  stroke %s", hz,
+                pretty(DisplayUnits.format(bare.amplitudeAt(k, w), k.dimension())),
+                pretty(DisplayUnits.format(fitted.amplitudeAt(k, w), k.dimension())),
+                DisplayUnits.format(fitted.amplitudeAt(ResponseKind.STROKE, w),
+                        org.counterpoise.core.units.Dimension.LENGTH)));
+    }
+
+    String readout() {
+        return readout.getText();
+    }
+
+    private static String pretty(String s) {
+        return QuantityField.pretty(s);
+    }
+
+    private void export(boolean png) {
+        if (result == null) {
+            return;
+        }
+        JFileChooser chooser = new JFileChooser();
+        chooser.setFileSelectionMode(JFileChooser.DIRECTORIES_ONLY);
+        chooser.setDialogTitle("Folder for response and stroke charts");
+        if (chooser.showSaveDialog(page) != JFileChooser.APPROVE_OPTION) {
+            return;
+        }
+        Path dir = chooser.getSelectedFile().toPath();
+        String ext = png ? ".png" : ".svg";
+        try {
+            for (ChartHost host : List.of(responseChart, strokeChart)) {
+                XYChart chart = host.chart();
+                String name = host == responseChart ? "response" : "stroke";
+                AtomicFiles.write(dir.resolve(name + ext), out -> {
+                    if (png) {
+                        ChartFiles.png(chart, out);
+                    } else {
+                        ChartFiles.svg(chart, out);
+                    }
+                });
+            }
+        } catch (java.io.IOException e) {
+            JOptionPane.showMessageDialog(page, "The charts could not be written to " + dir + ": " + e.getMessage(),
+                    "Export", JOptionPane.WARNING_MESSAGE);
+        }
+    }
+
+    DefaultTableModel table() {
+        return table;
+    }
+}

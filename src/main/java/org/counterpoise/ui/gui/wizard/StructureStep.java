@@ -1,0 +1,164 @@
+package org.counterpoise.ui.gui.wizard;
+
+import java.util.List;
+import javax.swing.JComboBox;
+import javax.swing.JComponent;
+import javax.swing.JLabel;
+import javax.swing.JPanel;
+import javax.swing.JScrollPane;
+import org.counterpoise.core.model.Structure;
+import org.counterpoise.core.units.Dimension;
+import org.counterpoise.core.units.Unit;
+import org.counterpoise.io.project.DampingInput;
+import org.counterpoise.io.project.QuantityInput;
+import org.counterpoise.io.project.StructureInput;
+import org.counterpoise.io.text.DisplayUnits;
+import org.counterpoise.io.text.QuantityFormat;
+import org.counterpoise.ui.gui.field.Form;
+import org.counterpoise.ui.gui.field.QuantityField;
+
+/** Step 1: the structure as the engineer knows it, with the derived values shown at once. */
+final class StructureStep extends Step {
+    private static final List<Unit> MASS = List.of(Unit.KILOGRAM, Unit.TONNE, Unit.GRAM);
+    private static final List<Unit> WEIGHT = List.of(Unit.NEWTON, Unit.KILONEWTON);
+    private static final List<Unit> STIFFNESS = List.of(Unit.KILONEWTON_PER_METRE, Unit.NEWTON_PER_METRE,
+            Unit.NEWTON_PER_MILLIMETRE, Unit.KILONEWTON_PER_MILLIMETRE);
+    private static final List<Unit> FREQUENCY = List.of(Unit.HERTZ, Unit.REV_PER_MINUTE, Unit.RADIAN_PER_SECOND);
+    private static final List<Unit> LENGTH = List.of(Unit.MILLIMETRE, Unit.METRE, Unit.MICROMETRE);
+
+    private final JComboBox<String> massForm = new JComboBox<>(new String[] {"mass", "weight"});
+    private final QuantityField mass = new QuantityField("structure.mass", "Modal mass of the mode to calm", MASS);
+    private final JComboBox<String> stiffnessForm = new JComboBox<>(
+            new String[] {"stiffness", "natural frequency", "static deflection"});
+    private final QuantityField stiffness = new QuantityField("structure.stiffness",
+            "Modal stiffness; or the measured natural frequency; or the sag under the structure's own weight",
+            STIFFNESS);
+    private final JComboBox<String> dampingForm = new JComboBox<>(
+            new String[] {"damping ratio \u03b6", "loss factor \u03b7", "Q factor", "half-power bandwidth"});
+    private final QuantityField damping = new QuantityField("structure.damping",
+            "Modal damping: ratio to critical, loss factor (2\u03b6), Q (1/2\u03b6) or -3 dB bandwidth (2\u03b6 f)",
+            List.of(Unit.RATIO));
+    private final QuantityField modeShape = new QuantityField("structure.mode_shape_at_absorber",
+            "Mode-shape value at the absorber point, 1 at the antinode: effective mass = modal mass / \u03c6\u00b2",
+            List.of(Unit.RATIO));
+    private final JLabel derivedMass = derived("derived.mass");
+    private final JLabel derivedStiffness = derived("derived.stiffness");
+    private final JLabel derivedFrequency = derived("derived.frequency");
+    private final JLabel derivedDamping = derived("derived.damping");
+    private final JComponent page;
+
+    StructureStep(Runnable changed) {
+        massForm.setName("structure.massForm");
+        stiffnessForm.setName("structure.stiffnessForm");
+        dampingForm.setName("structure.dampingForm");
+        Form form = new Form();
+        form.heading("The structure, at the point where the absorber will sit");
+        form.row("Given as", 'g', massForm, "Mass, or weight under standard gravity");
+        form.row("Value", 'm', mass, "Modal mass or weight");
+        form.row("Stiffness given as", 's', stiffnessForm, "How the stiffness is known");
+        form.row("Value", 'v', stiffness, "Stiffness, natural frequency or static deflection");
+        form.row("Damping given as", 'd', dampingForm, "The measure of damping you have");
+        form.row("Value", 'a', damping, "Damping value");
+        form.row("Mode shape at absorber \u03c6", 'p', modeShape, "1 at the antinode, less elsewhere");
+        form.heading("Derived (effective values at the absorber point)");
+        form.derived("Mass", derivedMass);
+        form.derived("Stiffness", derivedStiffness);
+        form.derived("Natural frequency", derivedFrequency);
+        form.derived("Damping ratio", derivedDamping);
+        form.end();
+        JPanel holder = new JPanel(new java.awt.BorderLayout());
+        holder.add(form);
+        page = new JScrollPane(holder);
+        ((JScrollPane) page).setBorder(null);
+        own("structure.mass", mass);
+        own("structure.weight", mass);
+        own("structure", stiffness);
+        own("structure.damping", damping);
+        own("structure.mode_shape", modeShape);
+        massForm.addActionListener(e -> {
+            mass.setUnits(massForm.getSelectedIndex() == 0 ? MASS : WEIGHT);
+            changed.run();
+        });
+        stiffnessForm.addActionListener(e -> {
+            stiffness.setUnits(switch (stiffnessForm.getSelectedIndex()) {
+                case 0 -> STIFFNESS;
+                case 1 -> FREQUENCY;
+                default -> LENGTH;
+            });
+            changed.run();
+        });
+        dampingForm.addActionListener(e -> {
+            damping.setUnits(dampingForm.getSelectedIndex() == 3 ? FREQUENCY : List.of(Unit.RATIO));
+            changed.run();
+        });
+        for (QuantityField f : List.of(mass, stiffness, damping, modeShape)) {
+            f.onChange(changed);
+        }
+    }
+
+    @Override
+    String title() {
+        return "Structure";
+    }
+
+    @Override
+    JComponent component() {
+        return page;
+    }
+
+    /** @return the structure as typed (throws InvalidInputException naming the field) */
+    StructureInput input() {
+        QuantityInput m = mass.input();
+        QuantityInput k = stiffness.input();
+        int sf = stiffnessForm.getSelectedIndex();
+        int df = dampingForm.getSelectedIndex();
+        DampingInput d = df == 3 ? new DampingInput(DampingInput.Measure.HALF_POWER_BANDWIDTH, Double.NaN, damping.input())
+                : new DampingInput(DampingInput.Measure.values()[df], damping.number(), null);
+        boolean weight = massForm.getSelectedIndex() == 1;
+        return new StructureInput(weight ? null : m, weight ? m : null, sf == 0 ? k : null, sf == 1 ? k : null,
+                sf == 2 ? k : null, d, modeShape.number());
+    }
+
+    void load(StructureInput s) {
+        if (s.weight() != null) {
+            massForm.setSelectedIndex(1);
+            mass.show(s.weight().value(), s.weight().unit());
+        } else if (s.mass() != null) {
+            massForm.setSelectedIndex(0);
+            mass.show(s.mass().value(), s.mass().unit());
+        }
+        QuantityInput k = s.stiffness() != null ? s.stiffness() : s.naturalFrequency() != null
+                ? s.naturalFrequency() : s.staticDeflection();
+        stiffnessForm.setSelectedIndex(s.stiffness() != null ? 0 : s.naturalFrequency() != null ? 1 : 2);
+        stiffness.show(k.value(), k.unit());
+        DampingInput d = s.damping() == null ? DampingInput.ratio(0) : s.damping();
+        dampingForm.setSelectedIndex(d.measure().ordinal());
+        if (d.measure() == DampingInput.Measure.HALF_POWER_BANDWIDTH) {
+            damping.show(d.bandwidth().value(), d.bandwidth().unit());
+        } else {
+            damping.show(d.value(), Unit.RATIO);
+        }
+        modeShape.show(s.modeShapeAtAbsorber(), Unit.RATIO);
+    }
+
+    /** @param s the structure, or null when the input is not valid */
+    void showDerived(Structure s) {
+        if (s == null) {
+            for (JLabel l : List.of(derivedMass, derivedStiffness, derivedFrequency, derivedDamping)) {
+                l.setText("\u2014");
+            }
+            return;
+        }
+        derivedMass.setText(DisplayUnits.format(s.effectiveMass(), Dimension.MASS));
+        derivedStiffness.setText(DisplayUnits.format(s.effectiveStiffness(), Dimension.STIFFNESS));
+        derivedFrequency.setText(QuantityFormat.number(Unit.HERTZ.fromSi(s.naturalFrequency()), 4) + " Hz  ("
+                + QuantityFormat.format(s.naturalFrequency(), Unit.REV_PER_MINUTE) + ")");
+        derivedDamping.setText(QuantityFormat.number(s.dampingRatio(), 3));
+    }
+
+    static JLabel derived(String name) {
+        JLabel l = new JLabel("\u2014");
+        l.setName(name);
+        return l;
+    }
+}
