@@ -46,6 +46,17 @@ class ProjectFileTest {
     }
 
     @Test
+    void presetIndexListsEveryPresetAndTheFirstIsTheDefault() throws IOException {
+        java.util.Set<String> files;
+        try (Stream<Path> list = presets()) {
+            files = list.map(p -> p.getFileName().toString()).collect(java.util.stream.Collectors.toSet());
+        }
+        assertEquals(files, new java.util.HashSet<>(org.counterpoise.io.preset.Presets.names()));
+        assertEquals(org.counterpoise.io.preset.Presets.load(org.counterpoise.io.preset.Presets.names().get(0))
+                .project(), org.counterpoise.io.preset.Presets.defaultProject().project());
+    }
+
+    @Test
     void readsTheDocumentedExample() {
         DesignStudy s = ProjectReader.read(new StringReader(GOOD)).project().toStudy();
         assertEquals(2 * Math.PI * 10, s.structure().naturalFrequency(), 1e-12);
