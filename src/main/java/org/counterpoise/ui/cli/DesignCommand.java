@@ -6,7 +6,6 @@ import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.Designer;
 import org.counterpoise.io.export.ResultJson;
 import org.counterpoise.io.project.LoadedProject;
-import org.counterpoise.io.project.ProjectReader;
 import org.counterpoise.io.text.DesignReport;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
@@ -29,11 +28,7 @@ public final class DesignCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        LoadedProject loaded = ProjectReader.read(file);
-        for (String unknown : loaded.unknownFields()) {
-            spec.commandLine().getErr().println("note: " + file + ": field " + unknown
-                    + " is not part of the project format and was not used");
-        }
+        LoadedProject loaded = ProjectFiles.read(spec, file);
         DesignResult result = Designer.design(loaded.project().toStudy());
         spec.commandLine().getOut().print(json ? ResultJson.toJson(result) : DesignReport.render(result));
         spec.commandLine().getOut().flush();

@@ -10,7 +10,6 @@ import org.counterpoise.core.design.RobustnessSettings;
 import org.counterpoise.core.error.Checks;
 import org.counterpoise.io.export.RobustnessJson;
 import org.counterpoise.io.project.LoadedProject;
-import org.counterpoise.io.project.ProjectReader;
 import org.counterpoise.io.text.RobustnessReport;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
@@ -39,11 +38,7 @@ public final class RobustnessCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        LoadedProject loaded = ProjectReader.read(file);
-        for (String unknown : loaded.unknownFields()) {
-            spec.commandLine().getErr().println("note: " + file + ": field " + unknown
-                    + " is not part of the project format and was not used");
-        }
+        LoadedProject loaded = ProjectFiles.read(spec, file);
         DesignResult design = Designer.design(loaded.project().toStudy());
         RobustnessSettings s = design.study().robustness();
         if (samples != null) {

@@ -6,7 +6,6 @@ import java.util.concurrent.Callable;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.Designer;
 import org.counterpoise.io.project.LoadedProject;
-import org.counterpoise.io.project.ProjectReader;
 import org.counterpoise.io.sheet.SheetFiles;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
@@ -46,11 +45,7 @@ public final class SheetCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        LoadedProject loaded = ProjectReader.read(file);
-        for (String unknown : loaded.unknownFields()) {
-            spec.commandLine().getErr().println("note: " + file + ": field " + unknown
-                    + " is not part of the project format and was not used");
-        }
+        LoadedProject loaded = ProjectFiles.read(spec, file);
         DesignResult result = Designer.design(loaded.project().toStudy());
         String issued = (date == null ? LocalDate.now() : date).toString();
         SheetFiles.writeSheet(result, loaded.project().notes(), output, issued, revision, force, "--output");
