@@ -73,6 +73,19 @@ public record SheetContent(String projectName, String notes, String date, String
      * @return the sheet content
      */
     public static SheetContent of(DesignResult r, String notes, String date, String revision) {
+        return of(r, notes, date, revision, null);
+    }
+
+    /**
+     * @param r the design result
+     * @param notes the project's notes, or empty
+     * @param date date of issue
+     * @param revision revision mark
+     * @param monteCarlo a tolerance Monte Carlo of the design, or null when none was run
+     * @return the sheet content
+     */
+    public static SheetContent of(DesignResult r, String notes, String date, String revision,
+            org.counterpoise.core.robust.MonteCarloResult monteCarlo) {
         DesignStudy study = r.study();
         Structure s = study.structure();
         Excitation e = study.excitation();
@@ -154,6 +167,22 @@ public record SheetContent(String projectName, String notes, String date, String
         robust.add(text("Same result by softening the structure", alternative(d.softerFactor(), d.target())));
         sections.add(new Section("Robustness (peak in band rising by at most " + percent(DesignResult.TOLERANCE_ALLOWANCE)
                 + ") and the alternative", robust));
+        if (monteCarlo != null) {
+            Dimension rd = study.response().dimension();
+            Unit ru = DisplayUnits.of(rd);
+            List<Row> mc = new ArrayList<>();
+            mc.add(text("Samples (seed)", monteCarlo.samples() + " (seed " + monteCarlo.seed() + ")"));
+            mc.add(new Row("Mean peak", QuantityFormat.number(ru.fromSi(monteCarlo.mean()), 4), ru.symbol()));
+            mc.add(new Row("P50 / P90", QuantityFormat.number(ru.fromSi(monteCarlo.p50()), 4) + "  /  "
+                    + QuantityFormat.number(ru.fromSi(monteCarlo.p90()), 4), ru.symbol()));
+            mc.add(new Row("P95 / P99", QuantityFormat.number(ru.fromSi(monteCarlo.p95()), 4) + "  /  "
+                    + QuantityFormat.number(ru.fromSi(monteCarlo.p99()), 4), ru.symbol()));
+            if (!Double.isNaN(monteCarlo.probabilityExceeding())) {
+                mc.add(new Row("Probability above the target", QuantityFormat.number(
+                        100 * monteCarlo.probabilityExceeding(), 3), "%"));
+            }
+            sections.add(new Section("Tolerance Monte Carlo of the peak in band", mc));
+        }
 
         List<String> warnings = r.warnings().stream().map(Warning::text).toList();
         return new SheetContent(study.name(), notes, date, revision, sections, ASSUMPTIONS, warnings,

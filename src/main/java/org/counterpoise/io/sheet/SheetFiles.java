@@ -53,9 +53,24 @@ public final class SheetFiles {
     public static void writeSheet(DesignResult r, String notes, Path pdf, String date, String revision, boolean force,
             String option) {
         checkTarget(pdf, force, option);
-        SheetContent content = SheetContent.of(r, notes, date, revision);
+        SheetContent content = SheetContent.of(r, notes, date, revision, monteCarlo(r));
         List<XYChart> charts = charts(r, DesignCurves.of(r));
         atomically(pdf, option, out -> SheetWriter.write(content, charts, out));
+    }
+
+    /**
+     * @param r the design
+     * @return the Monte Carlo of the project's tolerances, or null when it has none
+     */
+    public static org.counterpoise.core.robust.MonteCarloResult monteCarlo(DesignResult r) {
+        var settings = r.study().robustness();
+        if (settings.tolerances().equals(org.counterpoise.core.robust.ToleranceSet.NONE)) {
+            return null;
+        }
+        var m = new org.counterpoise.core.robust.Mistuning(r.study().structure(), r.study().excitation(),
+                r.study().response());
+        return org.counterpoise.core.robust.MonteCarlo.run(m, r.absorber(), settings.tolerances(), settings.samples(),
+                settings.seed(), settings.target());
     }
 
     /**

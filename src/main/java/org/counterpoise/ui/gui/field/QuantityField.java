@@ -140,6 +140,14 @@ public final class QuantityField extends JPanel {
         onChange = keep;
     }
 
+    /** Empties the field without firing a change. */
+    public void clear() {
+        Runnable keep = onChange;
+        onChange = () -> { };
+        text.setText("");
+        onChange = keep;
+    }
+
     /** @param problem what is wrong, or null to clear */
     public void setProblem(String problem) {
         text.putClientProperty("JComponent.outline", problem == null ? null : "error");

@@ -30,6 +30,9 @@ final class GoalStep extends Step {
     private final QuantityField margin = new QuantityField("absorber.stroke_margin",
             "Clearance to leave over the computed peak stroke (1.5 is common practice)", List.of(Unit.RATIO));
     private final JCheckBox hangs = new JCheckBox("the absorber hangs on its spring");
+    private final QuantityField strokeLimit = new QuantityField("absorber.stroke_limit",
+            "Largest allowed peak stroke in the band (exact-peak only); leave empty for none",
+            List.of(Unit.MILLIMETRE, Unit.METRE, Unit.MICROMETRE));
     private final JLabel methodNote = new JLabel(" ");
     private final ChartHost massChart = new ChartHost("chart.massRatio");
     private final JComponent page;
@@ -63,6 +66,7 @@ final class GoalStep extends Step {
         form.row("Design method", 'm', method, "How tuning and damping are chosen");
         form.row("Response that matters", 'r', response, "The response the design reduces");
         form.row("Stroke margin", 'n', margin, "Clearance over the computed stroke");
+        form.row("Stroke limit (optional)", 't', strokeLimit, "Clearance available in the band, exact-peak only");
         form.row("", (char) 0, hangs, "Gives the static sag of the spring");
         form.derived("", methodNote);
         form.end();
@@ -79,6 +83,7 @@ final class GoalStep extends Step {
         own("absorber", size);
         own("absorber.target", size);
         own("absorber.stroke_margin", margin);
+        own("absorber.stroke_limit", strokeLimit);
         sizing.addActionListener(e -> {
             sizeUnits();
             changed.run();
@@ -93,6 +98,7 @@ final class GoalStep extends Step {
         hangs.addActionListener(e -> changed.run());
         size.onChange(changed);
         margin.onChange(changed);
+        strokeLimit.onChange(changed);
     }
 
     private void sizeUnits() {
@@ -144,7 +150,7 @@ final class GoalStep extends Step {
         boolean exact = m == DesignMethod.EXACT_PEAK;
         return new AbsorberInput(ratio, mass, m, (ResponseKind) response.getSelectedItem(), hangs.isSelected(),
                 margin.number(), target, kind == 2 && keep != null ? keep.maxMassRatio() : Double.NaN,
-                exact && keep != null ? keep.strokeLimit() : null,
+                strokeLimit.textField().getText().isBlank() ? null : strokeLimit.input(),
                 exact && keep != null ? keep.fixedDampingRatio() : Double.NaN,
                 exact && keep != null ? keep.fixedTuningRatio() : Double.NaN);
     }
@@ -163,6 +169,11 @@ final class GoalStep extends Step {
             size.show(a.target().value(), a.target().unit());
         }
         margin.show(a.strokeMargin(), Unit.RATIO);
+        if (a.strokeLimit() != null) {
+            strokeLimit.show(a.strokeLimit().value(), a.strokeLimit().unit());
+        } else {
+            strokeLimit.clear();
+        }
         hangs.setSelected(a.hangsVertically());
     }
 

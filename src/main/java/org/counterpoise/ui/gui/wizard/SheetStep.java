@@ -78,7 +78,8 @@ final class SheetStep extends Step {
         }
         try {
             ByteArrayOutputStream pdf = new ByteArrayOutputStream();
-            SheetWriter.write(SheetContent.of(result, notes, LocalDate.now().toString(), "draft"),
+            SheetWriter.write(SheetContent.of(result, notes, LocalDate.now().toString(), "draft",
+                    SheetFiles.monteCarlo(result)),
                     SheetFiles.charts(result, DesignCurves.of(result)), pdf);
             try (PDDocument doc = Loader.loadPDF(pdf.toByteArray())) {
                 BufferedImage page1 = new PDFRenderer(doc).renderImageWithDPI(0, 80);

@@ -52,6 +52,11 @@ abstract class Step {
         return true;
     }
 
+    /** @param message a problem shown elsewhere on the step (not under a number field) */
+    final void markProblem(String message) {
+        problem = message;
+    }
+
     /** Clears every inline problem. */
     final void clearProblems() {
         owners.values().forEach(f -> f.setProblem(null));

@@ -291,7 +291,6 @@ public final class WizardFrame extends JFrame {
                 disturbance.showDerived(p.toExcitation(), builtStructure);
                 if (disturbance.broadband() && goal.method() != DesignMethod.MINIMUM_VARIANCE
                         && goal.method() != DesignMethod.EXACT_VARIANCE) {
-                    goal.methodProblem("A broadband force needs minimum-variance or exact-variance.");
                     throw new InvalidInputException("absorber.method", goal.method().id(),
                             "a broadband force needs minimum-variance or exact-variance");
                 }
@@ -338,6 +337,11 @@ public final class WizardFrame extends JFrame {
     }
 
     private void route(InvalidInputException e) {
+        if (e.field().equals("absorber.method")) {
+            goal.methodProblem(e.getMessage().substring(e.getMessage().indexOf(':') + 1).strip());
+            goal.markProblem(e.getMessage());
+            return;
+        }
         for (Step s : steps) {
             if (s.showProblem(e)) {
                 return;
