@@ -149,6 +149,18 @@ class WizardGuiTest {
                 "fixed");
         assertEquals(2000, onEdt(() -> frame.shownResult().study().structure().modalMass()), 1e-9);
         assertTrue(onEdt(frame::dirty));
+        // A method that has no published form for the chosen response is refused with the reason.
+        @SuppressWarnings("unchecked")
+        javax.swing.JComboBox<org.counterpoise.core.response.ResponseKind> response =
+                (javax.swing.JComboBox<org.counterpoise.core.response.ResponseKind>) find("absorber.response");
+        onEdt(() -> {
+            frame.showStep(2);
+            response.setSelectedItem(org.counterpoise.core.response.ResponseKind.VELOCITY);
+            return null;
+        });
+        waitFor(() -> onEdtQuietly(() -> !frame.nextEnabled()), "method refused");
+        assertTrue(onEdt(frame::statusText).contains("no published equal-peak closed form"), onEdt(frame::statusText));
+        screenshot("method-refused");
     }
 
     @Test

@@ -39,6 +39,9 @@ public final class QuantityField extends JPanel {
         text.setName(fieldId);
         text.setToolTipText(tooltip);
         text.setHorizontalAlignment(JTextField.RIGHT);
+        // Never squeeze a field to nothing when its form is short of room.
+        text.setMinimumSize(text.getPreferredSize());
+        setMinimumSize(getPreferredSize());
         units.setName(fieldId + ".unit");
         units.setRenderer(new javax.swing.DefaultListCellRenderer() {
             @Override

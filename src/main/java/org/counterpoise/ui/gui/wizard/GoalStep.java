@@ -34,6 +34,10 @@ final class GoalStep extends Step {
             "Largest allowed peak stroke in the band (exact-peak only); leave empty for none",
             List.of(Unit.MILLIMETRE, Unit.METRE, Unit.MICROMETRE));
     private final JLabel methodNote = new JLabel(" ");
+    {
+        methodNote.setName("absorber.methodNote");
+        methodNote.setForeground(new java.awt.Color(0xb0, 0x2a, 0x1e));
+    }
     private final ChartHost massChart = new ChartHost("chart.massRatio");
     private final JComponent page;
 
@@ -74,8 +78,10 @@ final class GoalStep extends Step {
         JLabel caption = new JLabel("  Least peak an optimally tuned absorber can reach, against its mass ratio");
         chartPanel.add(caption, BorderLayout.NORTH);
         chartPanel.add(massChart, BorderLayout.CENTER);
-        JSplitPane split = new JSplitPane(JSplitPane.VERTICAL_SPLIT, form, chartPanel);
-        split.setResizeWeight(0.45);
+        javax.swing.JScrollPane formScroll = new javax.swing.JScrollPane(form);
+        formScroll.setBorder(null);
+        JSplitPane split = new JSplitPane(JSplitPane.VERTICAL_SPLIT, formScroll, chartPanel);
+        split.setResizeWeight(0.55);
         split.setBorder(null);
         page = split;
         own("absorber.mass", size);
@@ -178,7 +184,8 @@ final class GoalStep extends Step {
     }
 
     void note(String text) {
-        methodNote.setText(text == null ? " " : text);
+        methodNote.setText(text == null ? " " : "<html><body style='width: 520px'>" + text
+                .replace("&", "&amp;").replace("<", "&lt;") + "</body></html>");
     }
 
     /** Shows a problem on the method list (not a number field). */

@@ -400,6 +400,9 @@ public final class WizardFrame extends JFrame {
     private void failed(Throwable cause) {
         shown = null;
         result.show(null);
+        robustness.show(null, null);
+        sheet.show(null, base.notes());
+        goal.massChart().message("Fix the inputs to see the curve.");
         if (cause instanceof InvalidInputException bad) {
             route(bad);
         } else {
