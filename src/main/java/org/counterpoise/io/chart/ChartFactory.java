@@ -90,7 +90,24 @@ public final class ChartFactory {
         XYChart chart = new XYChartBuilder().width(width).height(height).title(title)
                 .xAxisTitle("Forcing frequency (Hz)").yAxisTitle(title + " (" + pretty(unit.symbol()) + ")").build();
         var s = chart.getStyler();
+        houseStyle(s);
         s.setYAxisLogarithmic(logarithmic);
+        s.setXAxisDecimalPattern("#,##0.##");
+        s.setYAxisDecimalPattern(logarithmic ? "0.##########" : "#,##0.#####");
+        s.setAnnotationLineColor(BAND_EDGE);
+        s.setAnnotationLineStroke(new BasicStroke(1.6f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 10f,
+                new float[] {2f, 3f}, 0f));
+        s.setAnnotationTextFont(new Font(Font.SANS_SERIF, Font.PLAIN, 10));
+        s.setAnnotationTextFontColor(BAND_EDGE.darker());
+        return chart;
+    }
+
+    /** Marks the forcing band by its two ends (one line for one frequency) and a label. */
+    /**
+     * The look every Counterpoise XY chart shares: white ground, light grid, small sans-serif type.
+     * @param s the chart's styler
+     */
+    static void houseStyle(org.knowm.xchart.style.XYStyler s) {
         s.setChartBackgroundColor(Color.WHITE);
         s.setPlotBackgroundColor(Color.WHITE);
         s.setPlotBorderVisible(true);
@@ -105,17 +122,8 @@ public final class ChartFactory {
         s.setLegendFont(new Font(Font.SANS_SERIF, Font.PLAIN, 10));
         s.setMarkerSize(0);
         s.setAntiAlias(true);
-        s.setXAxisDecimalPattern("#,##0.##");
-        s.setYAxisDecimalPattern(logarithmic ? "0.##########" : "#,##0.#####");
-        s.setAnnotationLineColor(BAND_EDGE);
-        s.setAnnotationLineStroke(new BasicStroke(1.6f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 10f,
-                new float[] {2f, 3f}, 0f));
-        s.setAnnotationTextFont(new Font(Font.SANS_SERIF, Font.PLAIN, 10));
-        s.setAnnotationTextFontColor(BAND_EDGE.darker());
-        return chart;
     }
 
-    /** Marks the forcing band by its two ends (one line for one frequency) and a label. */
     private static void shadeBand(XYChart chart, DesignResult r, double floor, double top) {
         double lo = Unit.HERTZ.fromSi(r.study().excitation().band().low());
         double hi = Unit.HERTZ.fromSi(r.study().excitation().band().high());

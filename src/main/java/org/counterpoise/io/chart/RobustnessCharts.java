@@ -208,16 +208,7 @@ public final class RobustnessCharts {
     }
 
     private static void style(org.knowm.xchart.style.XYStyler s) {
-        s.setChartBackgroundColor(Color.WHITE);
-        s.setPlotBackgroundColor(Color.WHITE);
-        s.setPlotGridLinesColor(new Color(0xe6, 0xe8, 0xeb));
-        s.setChartTitleBoxVisible(false);
-        s.setChartTitleFont(new Font(Font.SANS_SERIF, Font.BOLD, 13));
-        s.setAxisTitleFont(new Font(Font.SANS_SERIF, Font.PLAIN, 11));
-        s.setAxisTickLabelsFont(new Font(Font.SANS_SERIF, Font.PLAIN, 10));
-        s.setLegendFont(new Font(Font.SANS_SERIF, Font.PLAIN, 10));
-        s.setLegendPosition(Styler.LegendPosition.InsideNE);
-        s.setMarkerSize(0);
+        ChartFactory.houseStyle(s);
         s.setXAxisDecimalPattern("#,##0.###");
         s.setYAxisDecimalPattern("#,##0.#####");
     }
