@@ -88,6 +88,11 @@ public final class HInfinityOptimiser {
         if (!problem.allFrequencies()) {
             seeds.addAll(scan(problem, counter));
         }
+        // The classical design is always a candidate (not a start), so the result is never worse.
+        Tuning classical = DenHartogEqualPeak.tuning(problem.massRatio());
+        double cf = fixedOr(problem.fixedTuning(), classical.tuningRatio());
+        double cz = fixedOr(problem.fixedDamping(), classical.dampingRatio());
+        best.offer(cf, cz, peakOf(problem, cf, cz, counter), "seed", false);
         if (Double.isInfinite(best.peak)) {
             throw new InvalidInputException("band", problem.bandLow() + ":" + problem.bandHigh(),
                     "the response " + problem.response().label() + " under " + problem.excitation().label()
@@ -187,6 +192,7 @@ public final class HInfinityOptimiser {
         }
         seeds.add(new double[] {fixedOr(p.fixedTuning(), base.tuningRatio()),
             fixedOr(p.fixedDamping(), base.dampingRatio())});
+
         if (!p.allFrequencies()) {
             double top = Double.isInfinite(p.bandHigh()) ? 2 * Math.max(p.bandLow(), 0.5) : p.bandHigh();
             double centre = 0.5 * (p.bandLow() + top);
