@@ -110,8 +110,11 @@ final class ResultStep extends Step {
         return page;
     }
 
-    /** @param r the new result, or null while none is valid */
-    void show(DesignResult r) {
+    /**
+     * @param r the new result, or null while none is valid
+     * @param c its curves (computed with it, off the event thread)
+     */
+    void show(DesignResult r, DesignCurves c) {
         result = r;
         table.setRowCount(0);
         if (r == null) {
@@ -120,7 +123,7 @@ final class ResultStep extends Step {
             strokeChart.message(" ");
             return;
         }
-        curves = DesignCurves.of(r);
+        curves = c;
         SheetContent content = SheetContent.of(r, "", "", "");
         List<SheetContent.Section> sections = new java.util.ArrayList<>(content.sections());
         // What to build and what it achieves first; the inputs echoed last.

@@ -17,6 +17,7 @@ import javax.swing.JOptionPane;
 import javax.swing.JPanel;
 import javax.swing.JScrollPane;
 import javax.swing.SwingConstants;
+import javax.swing.SwingWorker;
 import javax.swing.filechooser.FileNameExtensionFilter;
 import org.apache.pdfbox.Loader;
 import org.apache.pdfbox.pdmodel.PDDocument;
@@ -70,25 +71,41 @@ final class SheetStep extends Step {
         preview.setText(r == null ? "Fix the inputs to see the sheet." : "Open this step to render the preview.");
     }
 
-    /** Renders the first page of the sheet (done when the step is shown). */
+    /** Renders the first page of the sheet in the background when the step is shown. */
     @Override
     void shown() {
-        if (result == null) {
+        DesignResult r = result;
+        if (r == null || previewShown()) {
             return;
         }
-        try {
-            ByteArrayOutputStream pdf = new ByteArrayOutputStream();
-            SheetWriter.write(SheetContent.of(result, notes, LocalDate.now().toString(), "draft",
-                    SheetFiles.monteCarlo(result)),
-                    SheetFiles.charts(result, DesignCurves.of(result)), pdf);
-            try (PDDocument doc = Loader.loadPDF(pdf.toByteArray())) {
-                BufferedImage page1 = new PDFRenderer(doc).renderImageWithDPI(0, 80);
-                preview.setIcon(new ImageIcon(page1));
-                preview.setText(null);
+        String projectNotes = notes;
+        preview.setText("drawing the preview\u2026");
+        new SwingWorker<BufferedImage, Void>() {
+            @Override
+            protected BufferedImage doInBackground() throws IOException {
+                ByteArrayOutputStream pdf = new ByteArrayOutputStream();
+                SheetWriter.write(SheetContent.of(r, projectNotes, LocalDate.now().toString(), "draft",
+                        SheetFiles.monteCarlo(r)), SheetFiles.charts(r, DesignCurves.of(r)), pdf);
+                try (PDDocument doc = Loader.loadPDF(pdf.toByteArray())) {
+                    return new PDFRenderer(doc).renderImageWithDPI(0, 80);
+                }
             }
-        } catch (IOException e) {
-            preview.setText("The preview could not be drawn: " + e.getMessage());
-        }
+
+            @Override
+            protected void done() {
+                if (r != result) {
+                    return; // a newer design arrived meanwhile
+                }
+                try {
+                    preview.setIcon(new ImageIcon(get()));
+                    preview.setText(null);
+                } catch (java.util.concurrent.ExecutionException e) {
+                    preview.setText("The preview could not be drawn: " + e.getCause().getMessage());
+                } catch (InterruptedException e) {
+                    Thread.currentThread().interrupt();
+                }
+            }
+        }.execute();
     }
 
     private void savePdf() {

@@ -6,7 +6,6 @@ import java.awt.Color;
 import java.awt.Component;
 import java.awt.Dimension;
 import java.awt.FlowLayout;
-import java.awt.Font;
 import java.awt.event.ActionEvent;
 import java.awt.event.KeyEvent;
 import java.awt.event.WindowAdapter;
@@ -36,6 +35,7 @@ import javax.swing.SwingWorker;
 import javax.swing.Timer;
 import javax.swing.filechooser.FileNameExtensionFilter;
 import org.counterpoise.core.design.AchievablePeak;
+import org.counterpoise.core.design.DesignCurves;
 import org.counterpoise.core.design.DesignMethod;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.DesignStudy;
@@ -314,7 +314,7 @@ public final class WizardFrame extends JFrame {
         if (study == null) {
             shown = null;
             shownGeneration = gen;
-            result.show(null);
+            result.show(null, null);
             robustness.show(null, null);
             sheet.show(null, base.notes());
             goal.massChart().message("Fix the inputs to see the curve.");
@@ -361,10 +361,11 @@ public final class WizardFrame extends JFrame {
 
     private void startDesign(DesignStudy study, long gen) {
         stale.setText("computing\u2026");
-        new SwingWorker<DesignResult, Void>() {
+        new SwingWorker<Computed, Void>() {
             @Override
-            protected DesignResult doInBackground() {
-                return Designer.design(study);
+            protected Computed doInBackground() {
+                DesignResult r = Designer.design(study);
+                return new Computed(r, DesignCurves.of(r));
             }
 
             @Override
@@ -373,10 +374,11 @@ public final class WizardFrame extends JFrame {
                     return; // inputs changed meanwhile: never show a stale result as current
                 }
                 try {
-                    DesignResult r = get();
+                    Computed c = get();
+                    DesignResult r = c.result();
                     shown = r;
                     shownGeneration = gen;
-                    result.show(r);
+                    result.show(r, c.curves());
                     sheet.show(r, base.notes());
                     if (current == steps.indexOf(sheet)) {
                         sheet.shown();
@@ -397,9 +399,13 @@ public final class WizardFrame extends JFrame {
         }.execute();
     }
 
+    /** A design and its curves, both computed off the event thread. */
+    private record Computed(DesignResult result, DesignCurves curves) {
+    }
+
     private void failed(Throwable cause) {
         shown = null;
-        result.show(null);
+        result.show(null, null);
         robustness.show(null, null);
         sheet.show(null, base.notes());
         goal.massChart().message("Fix the inputs to see the curve.");
@@ -716,9 +722,5 @@ public final class WizardFrame extends JFrame {
     public String readoutAt(double hz) {
         result.read(hz);
         return result.readout();
-    }
-
-    static Font bold(Font f) {
-        return f.deriveFont(Font.BOLD);
     }
 }
