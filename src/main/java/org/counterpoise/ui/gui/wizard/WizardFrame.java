@@ -514,7 +514,7 @@ public final class WizardFrame extends JFrame {
     private void updateNavigation() {
         back.setEnabled(current > 0);
         String reason = null;
-        for (int i = 0; i <= current && i < 3; i++) {
+        for (int i = 0; i <= current; i++) {
             if (steps.get(i).problem() != null) {
                 reason = "Next is not possible: " + steps.get(i).title() + ": "
                         + steps.get(i).problem().substring(steps.get(i).problem().indexOf(':') + 1).strip();
