@@ -44,7 +44,9 @@ public final class TransferFunction {
      */
     public double magnitudeSquared(double x) {
         double q = RealPolynomials.value(magnitudeDenominator, x);
-        double p = RealPolynomials.value(magnitudeNumerator, x);
+        // P = |N|^2 >= 0; at an exact zero of N (an undamped absorber's notch) round-off in the
+        // expanded polynomial can leave a tiny negative value, which must read as zero.
+        double p = Math.max(RealPolynomials.value(magnitudeNumerator, x), 0.0);
         return q > 0 ? p / q : Double.POSITIVE_INFINITY;
     }
 
