@@ -45,30 +45,35 @@ public final class RobustOptimiser {
             Absorber a = Absorber.of(m.structure(), new Tuning(massRatio, f, zeta));
             return Math.log(WorstCase.of(m, a, structureRange, absorberRange).peak());
         });
-        double[] bestPoint = null;
-        double bestValue = Double.POSITIVE_INFINITY;
+        Tuning best = null;
+        WorstCase.Point bestWorst = null;
         boolean converged = true;
         for (Tuning seed : seeds) {
-            double[] start = {Math.log(seed.tuningRatio()), Math.log(Math.max(seed.dampingRatio(), 1e-3))};
-            double startValue = worst.getObjectiveFunction().value(start);
-            if (startValue < bestValue) {
-                bestValue = startValue;
-                bestPoint = start;
+            // Each seed is itself a candidate, evaluated exactly as given (not through ln and exp),
+            // so the result is never worse than any seed.
+            Tuning exactSeed = new Tuning(massRatio, seed.tuningRatio(), seed.dampingRatio());
+            WorstCase.Point seedWorst = WorstCase.of(m, Absorber.of(m.structure(), exactSeed), structureRange,
+                    absorberRange);
+            if (bestWorst == null || seedWorst.peak() < bestWorst.peak()) {
+                best = exactSeed;
+                bestWorst = seedWorst;
             }
+            double[] start = {Math.log(seed.tuningRatio()), Math.log(Math.max(seed.dampingRatio(), 1e-3))};
             try {
                 PointValuePair p = new SimplexOptimizer(1e-9, 1e-12).optimize(new MaxEval(1500), worst,
                         GoalType.MINIMIZE, new InitialGuess(start), new NelderMeadSimplex(new double[] {0.03, 0.25}));
-                if (p.getValue() < bestValue) {
-                    bestValue = p.getValue();
-                    bestPoint = p.getPoint();
+                Tuning found = new Tuning(massRatio, Math.exp(p.getPoint()[0]), Math.exp(p.getPoint()[1]));
+                WorstCase.Point foundWorst = WorstCase.of(m, Absorber.of(m.structure(), found), structureRange,
+                        absorberRange);
+                if (foundWorst.peak() < bestWorst.peak()) {
+                    best = found;
+                    bestWorst = foundWorst;
                 }
             } catch (TooManyEvaluationsException e) {
                 converged = false;
             }
         }
-        Tuning t = new Tuning(massRatio, Math.exp(bestPoint[0]), Math.exp(bestPoint[1]));
-        Absorber a = Absorber.of(m.structure(), t);
-        return new RobustDesign(t, WorstCase.of(m, a, structureRange, absorberRange), m.peak(a, 1, 1), count[0],
-                converged);
+        Absorber a = Absorber.of(m.structure(), best);
+        return new RobustDesign(best, bestWorst, m.peak(a, 1, 1), count[0], converged);
     }
 }

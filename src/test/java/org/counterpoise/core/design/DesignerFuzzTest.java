@@ -44,6 +44,17 @@ class DesignerFuzzTest {
             try {
                 DesignResult r = Designer.design(study);
                 designed++;
+                if (designed % 8 == 0) {
+                    RobustnessResult rr = RobustnessAnalysis.run(r, new RobustnessSettings(0.1, 0.02, Double.NaN,
+                            new org.counterpoise.core.robust.ToleranceSet(
+                                    org.counterpoise.core.robust.Tolerance.uniform(0.05),
+                                    org.counterpoise.core.robust.Tolerance.normal(0.05),
+                                    org.counterpoise.core.robust.Tolerance.NONE,
+                                    org.counterpoise.core.robust.Tolerance.uniform(0.03),
+                                    org.counterpoise.core.robust.Tolerance.uniform(0.2)), 200, trial));
+                    assertTrue(rr.robust().worstCase().peak() <= rr.worstCase().peak() * (1 + 1e-9)
+                            || Double.isInfinite(rr.worstCase().peak()), "robust never worse, trial " + trial + " " + r.tuning() + " " + study.method() + " " + rr.worstCase() + " " + rr.robust());
+                }
                 for (double v : new double[] {r.absorber().mass(), r.absorber().stiffness(), r.absorber().damping(),
                     r.clearance(), r.responseAfter().value(), r.strokeInBand().value(), r.springForce().value()}) {
                     assertTrue(v >= 0 && !Double.isNaN(v), "trial " + trial + " value " + v + " " + study + " " + r);
