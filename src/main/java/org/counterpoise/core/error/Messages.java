@@ -10,16 +10,10 @@ import java.util.Locale;
 public enum Messages {
     /** {0} field, {1} value, {2} allowed. */
     INVALID_VALUE("{0}: {1} is not allowed; {2}"),
-    /** {0} field, {2} allowed. */
+    /** {0} field, {1} allowed. */
     MISSING_VALUE("{0}: missing; {1}"),
-    /** {0} field, {1} the other field. */
-    CONFLICTING_FIELDS("{0}: give either {0} or {1}, not both"),
-    /** {0} unit symbol, {1} field, {2} allowed units. */
-    UNKNOWN_UNIT("{1}: unit \"{0}\" is not known here; allowed units: {2}"),
     /** {0} description of the internal failure. */
-    BUG("bug in Counterpoise (please report it): {0}"),
-    /** {0} method, {1} reason. */
-    METHOD_NOT_APPLICABLE("method {0} cannot be used here: {1}");
+    BUG("bug in Counterpoise (please report it): {0}");
 
     private final String pattern;
 
