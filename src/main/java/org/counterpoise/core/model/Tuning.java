@@ -22,20 +22,4 @@ public record Tuning(double massRatio, double tuningRatio, double dampingRatio) 
         Checks.inOpenRange("absorber.tuning_ratio", tuningRatio, 0.0, 100.0);
         Checks.inRange("absorber.damping_ratio", dampingRatio, 0.0, 10.0);
     }
-
-    /**
-     * @param f another tuning ratio
-     * @return a copy with that tuning
-     */
-    public Tuning withTuningRatio(double f) {
-        return new Tuning(massRatio, f, dampingRatio);
-    }
-
-    /**
-     * @param zeta another damping ratio
-     * @return a copy with that damping
-     */
-    public Tuning withDampingRatio(double zeta) {
-        return new Tuning(massRatio, tuningRatio, zeta);
-    }
 }

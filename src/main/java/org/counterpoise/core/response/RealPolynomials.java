@@ -11,10 +11,6 @@ final class RealPolynomials {
     private RealPolynomials() {
     }
 
-    static double[] of(double... coefficients) {
-        return coefficients.clone();
-    }
-
     static double[] multiply(double[] a, double[] b) {
         double[] out = new double[a.length + b.length - 1];
         for (int i = 0; i < a.length; i++) {
@@ -69,10 +65,6 @@ final class RealPolynomials {
             n--;
         }
         return n == a.length ? a : Arrays.copyOf(a, n);
-    }
-
-    static int degree(double[] a) {
-        return trim(a).length - 1;
     }
 
     /** Horner evaluation at a real point. */

@@ -74,29 +74,6 @@ public final class Sensitivity {
         return new SensitivityMap(rows, cols, z);
     }
 
-    /**
-     * @param m the mistuning model
-     * @param absorber the absorber
-     * @param structureRange structure detuning each side (rows)
-     * @param dampingRange absorber damping change each side (columns)
-     * @param points grid points along each axis
-     * @return peak over structure detuning x absorber damping factor
-     */
-    public static SensitivityMap structureByDamping(Mistuning m, Absorber absorber, double structureRange,
-            double dampingRange, int points) {
-        double[] rows = factors(structureRange, points);
-        double[] cols = factors(dampingRange, points);
-        double[][] z = IntStream.range(0, rows.length).parallel().mapToObj(i -> {
-            double[] row = new double[cols.length];
-            var s = m.structure().withFrequencyScaledBy(rows[i]);
-            for (int j = 0; j < cols.length; j++) {
-                row[j] = m.peak(s, withDamping(absorber, cols[j]));
-            }
-            return row;
-        }).toArray(double[][]::new);
-        return new SensitivityMap(rows, cols, z);
-    }
-
     private static Absorber withDamping(Absorber a, double factor) {
         return new Absorber(a.mass(), a.stiffness(), a.damping() * factor);
     }

@@ -3,7 +3,6 @@ package org.counterpoise.io.chart;
 import java.awt.BasicStroke;
 import java.awt.Color;
 import java.awt.Font;
-import java.util.ArrayList;
 import java.util.List;
 import org.counterpoise.core.design.DesignCurves;
 import org.counterpoise.core.design.DesignResult;
@@ -215,8 +214,4 @@ public final class ChartFactory {
         return Character.toUpperCase(s.charAt(0)) + s.substring(1);
     }
 
-    /** @return the names of the series a response chart holds, in drawing order (for tests) */
-    public static List<String> seriesNames(XYChart chart) {
-        return new ArrayList<>(chart.getSeriesMap().keySet());
-    }
 }
