@@ -198,7 +198,7 @@ public final class DesignReport {
         out.append(String.format(Locale.ROOT, "  %-" + (LABEL - 2) + "s %s%n", label, value));
     }
 
-    private static void bullet(StringBuilder out, String text) {
+    static void bullet(StringBuilder out, String text) {
         StringBuilder line = new StringBuilder("  - ");
         for (String word : text.split(" ")) {
             if (line.length() + word.length() > 98) {

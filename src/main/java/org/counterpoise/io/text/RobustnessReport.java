@@ -66,7 +66,7 @@ public final class RobustnessReport {
         }
         out.append("\nCautions\n");
         for (String c : Cautions.STANDARD) {
-            out.append("  - ").append(c).append('\n');
+            DesignReport.bullet(out, c);
         }
         return out.toString();
     }

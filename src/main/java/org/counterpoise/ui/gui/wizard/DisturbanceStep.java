@@ -61,7 +61,7 @@ final class DisturbanceStep extends Step {
         form.row("Speed", (char) 0, radios, "One fixed speed, or a variable-speed drive's range");
         form.row("Shaft speed", 's', speed, "The one speed");
         form.row("Lowest speed", 'l', low, "Bottom of the speed range");
-        form.row("Highest speed", 'h', high, "Top of the speed range (same unit as the lowest)");
+        form.row("Highest speed (same unit)", 'h', high, "Top of the speed range, in the unit of the lowest speed");
         form.row("Harmonic order", 'o', order, "Forcing cycles per revolution");
         form.heading("Derived");
         form.derived("Forcing frequency", derivedBand);

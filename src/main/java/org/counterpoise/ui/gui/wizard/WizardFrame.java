@@ -67,7 +67,8 @@ import org.knowm.xchart.style.markers.SeriesMarkers;
  * short pause; a result is shown only if no edit came after the inputs it was computed from.
  */
 public final class WizardFrame extends JFrame {
-    private static final int PAUSE_MS = 120;
+    /** Pause after the last keystroke before recomputing; the design itself takes a few ms. */
+    private static final int PAUSE_MS = 60;
 
     private final StructureStep structure = new StructureStep(this::edited);
     private final DisturbanceStep disturbance = new DisturbanceStep(this::edited);
