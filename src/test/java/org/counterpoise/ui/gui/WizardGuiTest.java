@@ -149,6 +149,27 @@ class WizardGuiTest {
                 "fixed");
         assertEquals(2000, onEdt(() -> frame.shownResult().study().structure().modalMass()), 1e-9);
         assertTrue(onEdt(frame::dirty));
+        // Typed through the keyboard like a person (java.awt.Robot): select all, then 1500.
+        onEdt(() -> {
+            frame.toFront();
+            mass.requestFocusInWindow();
+            return null;
+        });
+        waitFor(() -> onEdtQuietly(mass::isFocusOwner), "focus on the mass field");
+        Robot robot = new Robot();
+        robot.setAutoDelay(20);
+        robot.keyPress(java.awt.event.KeyEvent.VK_CONTROL);
+        robot.keyPress(java.awt.event.KeyEvent.VK_A);
+        robot.keyRelease(java.awt.event.KeyEvent.VK_A);
+        robot.keyRelease(java.awt.event.KeyEvent.VK_CONTROL);
+        for (int key : new int[] {java.awt.event.KeyEvent.VK_1, java.awt.event.KeyEvent.VK_5,
+            java.awt.event.KeyEvent.VK_0, java.awt.event.KeyEvent.VK_0}) {
+            robot.keyPress(key);
+            robot.keyRelease(key);
+        }
+        waitFor(() -> onEdtQuietly(() -> frame.settled() && frame.shownResult() != null
+                && frame.shownResult().study().structure().modalMass() == 1500), "typed 1500");
+        assertEquals("1500", onEdt(mass::getText));
         // A method that has no published form for the chosen response is refused with the reason.
         @SuppressWarnings("unchecked")
         javax.swing.JComboBox<org.counterpoise.core.response.ResponseKind> response =
