@@ -35,6 +35,7 @@ import org.counterpoise.core.response.ResponsePeak;
  * @param absorberForce spring plus damper force in band, N
  * @param coupledNaturalFrequencies the two natural frequencies of the undamped pair, rad/s
  * @param detuning the stiffness change of the bare structure that would do as well
+ * @param massDetuning the mass change of the bare structure that would do as well
  * @param structureTolerance how far the structure's natural frequency may be off before the
  *     response that matters rises by {@link #TOLERANCE_ALLOWANCE}
  * @param absorberTolerance the same for the absorber's natural frequency (spring rate factor squared)
@@ -45,7 +46,7 @@ public record DesignResult(DesignStudy study, String methodSource, String method
         Map<ResponseKind, ResponsePeak> motionBefore, Map<ResponseKind, ResponsePeak> motionAfter,
         ResponsePeak strokeInBand, ResponsePeak strokeRunUp, double clearance, ResponsePeak springForce,
         ResponsePeak damperForce, ResponsePeak absorberForce, double[] coupledNaturalFrequencies,
-        DetuningAlternative detuning, DetuningRange structureTolerance, DetuningRange absorberTolerance,
+        DetuningAlternative detuning, DetuningAlternative massDetuning, DetuningRange structureTolerance, DetuningRange absorberTolerance,
         List<Warning> warnings) {
 
     /** The rise of the peak response that defines the tolerated detuning (a design choice: 10 %). */

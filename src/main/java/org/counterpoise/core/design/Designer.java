@@ -83,9 +83,12 @@ public final class Designer {
         double[] split = UndampedAbsorber.naturalFrequencies(mu, tuning.tuningRatio());
         double[] coupled = {split[0] * omega1, split[1] * omega1};
 
-        DetuningAlternative detuning = after.unbounded() || after.value() == 0.0 ? new DetuningAlternative(after.value(), Double.NaN, Double.NaN)
-                : StructureDetuning.search(structure, excitation.kind(), excitation.amplitude(), band, kind,
-                        after.value());
+        boolean noTarget = after.unbounded() || after.value() == 0.0;
+        DetuningAlternative none = new DetuningAlternative(after.value(), Double.NaN, Double.NaN);
+        DetuningAlternative detuning = noTarget ? none : StructureDetuning.search(structure, excitation.kind(),
+                excitation.amplitude(), band, kind, after.value());
+        DetuningAlternative massDetuning = noTarget ? none : StructureDetuning.searchMass(structure,
+                excitation.kind(), excitation.amplitude(), band, kind, after.value());
 
         addWarnings(warnings, study, mu, tuning, before, after, strokeRunUp, coupled);
         double sag = study.hangsVertically()
@@ -94,7 +97,7 @@ public final class Designer {
         return new DesignResult(study, chosen.source(), chosen.note(), tuning, absorber, sag, before, after, motionBefore,
                 motionAfter, strokeInBand, strokeRunUp, clearance,
                 fitted.peakOver(ResponseKind.SPRING_FORCE, band), fitted.peakOver(ResponseKind.DAMPER_FORCE, band),
-                fitted.peakOver(ResponseKind.ABSORBER_FORCE, band), coupled, detuning,
+                fitted.peakOver(ResponseKind.ABSORBER_FORCE, band), coupled, detuning, massDetuning,
                 ToleratedDetuning.ofStructure(structure, absorber, excitation, kind, DesignResult.TOLERANCE_ALLOWANCE,
                         DesignResult.TOLERANCE_SEARCH),
                 ToleratedDetuning.ofAbsorber(structure, absorber, excitation, kind, DesignResult.TOLERANCE_ALLOWANCE,

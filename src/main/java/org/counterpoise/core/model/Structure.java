@@ -71,6 +71,16 @@ public record Structure(double modalMass, double modalStiffness, double dampingR
     }
 
     /**
+     * @param mass new modal mass, kg
+     * @return this structure with another mass and the same viscous damper (c1 kept)
+     */
+    public Structure withMassKeepingDamper(double mass) {
+        double c = 2.0 * dampingRatio * Math.sqrt(modalStiffness * modalMass);
+        double zeta = c / (2.0 * Math.sqrt(modalStiffness * mass));
+        return new Structure(mass, modalStiffness, Math.min(zeta, 0.99), modeShapeAtAbsorber);
+    }
+
+    /**
      * @param factor scale of the natural frequency (1.05 = 5 % high), by scaling the stiffness
      * @return the detuned structure with the same damping ratio
      */

@@ -1,23 +1,16 @@
 package org.counterpoise.core.remedy;
 
 /**
- * Stiffness changes of the bare structure that bring its worst response over the band down to a
- * target level. A factor of 1.0 means no change is needed; NaN means no change in the searched
- * range (stiffer up to 10 000 times, softer down to one millionth) reaches the target.
+ * Changes of the bare structure that bring its worst response over the band down to a target:
+ * one that raises its natural frequency above the band, one that lowers it below. For a
+ * stiffness change the factors are new over old stiffness (raise: stiffer, &gt; 1; lower: softer,
+ * &lt; 1); for a mass change, new over old mass (raise: lighter, &lt; 1; lower: heavier, &gt; 1). A
+ * factor of 1.0 means no change is needed; NaN means no change in the searched range (10 000 times
+ * either way for stiffness and mass, down to one millionth of the stiffness) reaches the target.
  *
  * @param target the SI level aimed at
- * @param stifferFactor new stiffness over old, &gt;= 1, or NaN
- * @param softerFactor new stiffness over old, &lt;= 1, or NaN
+ * @param raiseFactor the change that raises the natural frequency, or NaN
+ * @param lowerFactor the change that lowers it, or NaN
  */
-public record DetuningAlternative(double target, double stifferFactor, double softerFactor) {
-
-    /** @return true when stiffening alone can reach the target */
-    public boolean stifferReachable() {
-        return !Double.isNaN(stifferFactor);
-    }
-
-    /** @return true when softening alone can reach the target */
-    public boolean softerReachable() {
-        return !Double.isNaN(softerFactor);
-    }
+public record DetuningAlternative(double target, double raiseFactor, double lowerFactor) {
 }

@@ -8,16 +8,18 @@ import org.counterpoise.core.response.ResponseKind;
 import org.counterpoise.core.response.SystemResponse;
 
 /**
- * The remedy an absorber replaces: change the structure's stiffness until, without any absorber,
- * its worst response over the forcing band falls to a target. Searched both ways, stiffer (natural
- * frequency pushed above the band) and softer (pushed below it); the viscous damper of the
- * structure is kept, as it is when a real structure is stiffened or softened. The worst response
+ * The remedy an absorber replaces: change the structure's stiffness, or its mass, until, without
+ * any absorber, its worst response over the forcing band falls to a target. Searched both ways,
+ * natural frequency pushed above the band (stiffer, or lighter) and below it (softer, or heavier);
+ * the viscous damper of the structure is kept, as it is when a real structure is changed. The worst response
  * is the exact band peak; the stiffness factor is found by Brent's method on a bracket, to a
  * relative accuracy of 1e-10.
  */
 public final class StructureDetuning {
     private static final double MAX_STIFFER = 1e4;
     private static final double MIN_SOFTER = 1e-6;
+    private static final double MAX_HEAVIER = 1e4;
+    private static final double MIN_LIGHTER = 1e-4;
 
     private StructureDetuning() {
     }
@@ -34,17 +36,39 @@ public final class StructureDetuning {
     public static DetuningAlternative search(Structure structure, ExcitationKind excitation, double amplitude,
             FrequencyBand band, ResponseKind response, double target) {
         double omega1 = structure.naturalFrequency();
-        double stiffStart = Math.max(1.0, sq(band.high() / omega1));
-        double softStart = Math.min(1.0, sq(band.low() / omega1));
-        java.util.function.DoubleUnaryOperator excess = factor -> {
-            Structure changed = structure.withStiffnessKeepingDamper(structure.modalStiffness() * factor);
-            double peak = new SystemResponse(changed, null, excitation, amplitude).peakOver(response, band).value();
+        java.util.function.DoubleUnaryOperator excess = excess(factor -> structure.withStiffnessKeepingDamper(
+                structure.modalStiffness() * factor), excitation, amplitude, band, response, target);
+        return new DetuningAlternative(target, solve(excess, Math.max(1.0, sq(band.high() / omega1)), MAX_STIFFER),
+                solve(excess, Math.min(1.0, sq(band.low() / omega1)), MIN_SOFTER));
+    }
+
+    /**
+     * @param structure the bare structure
+     * @param excitation excitation kind
+     * @param amplitude SI amplitude
+     * @param band forcing band
+     * @param response response kind that matters
+     * @param target SI level to reach
+     * @return the mass factors that reach it (raise: lighter, lower: heavier), NaN where none does
+     */
+    public static DetuningAlternative searchMass(Structure structure, ExcitationKind excitation, double amplitude,
+            FrequencyBand band, ResponseKind response, double target) {
+        double omega1 = structure.naturalFrequency();
+        java.util.function.DoubleUnaryOperator excess = excess(factor -> structure.withMassKeepingDamper(
+                structure.modalMass() * factor), excitation, amplitude, band, response, target);
+        // Natural frequency goes as 1/sqrt(mass): above the band needs factor <= (omega1/high)^2.
+        return new DetuningAlternative(target, solve(excess, Math.min(1.0, sq(omega1 / band.high())), MIN_LIGHTER),
+                solve(excess, Math.max(1.0, sq(omega1 / band.low())), MAX_HEAVIER));
+    }
+
+    private static java.util.function.DoubleUnaryOperator excess(java.util.function.DoubleFunction<Structure> change,
+            ExcitationKind excitation, double amplitude, FrequencyBand band, ResponseKind response, double target) {
+        return factor -> {
+            double peak = new SystemResponse(change.apply(factor), null, excitation, amplitude)
+                    .peakOver(response, band).value();
             // Compare on a log scale: well conditioned over many decades, finite at a resonance.
             return Double.isInfinite(peak) ? 50.0 : Math.log(peak / target);
         };
-        double stiffer = solve(excess, stiffStart, MAX_STIFFER);
-        double softer = solve(excess, softStart, MIN_SOFTER);
-        return new DetuningAlternative(target, stiffer, softer);
     }
 
     /**

@@ -67,8 +67,10 @@ public final class ResultJson {
             coupled.add(hz(w));
         }
         o.add("coupled_natural_frequencies_Hz", coupled);
-        number(o, "detuning_stiffer_factor", r.detuning().stifferFactor());
-        number(o, "detuning_softer_factor", r.detuning().softerFactor());
+        number(o, "detuning_stiffer_factor", r.detuning().raiseFactor());
+        number(o, "detuning_softer_factor", r.detuning().lowerFactor());
+        number(o, "mass_change_lighter_factor", r.massDetuning().raiseFactor());
+        number(o, "mass_change_heavier_factor", r.massDetuning().lowerFactor());
         tolerance(o, "structure_frequency", r.structureTolerance());
         tolerance(o, "absorber_frequency", r.absorberTolerance());
         o.addProperty("tolerance_allowance", DesignResult.TOLERANCE_ALLOWANCE);

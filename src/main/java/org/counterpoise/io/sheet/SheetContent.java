@@ -163,8 +163,12 @@ public record SheetContent(String projectName, String notes, String date, String
         robust.add(text("Structure natural frequency may be off by", DesignReport.tolerance(r.structureTolerance(), 1)));
         robust.add(text("Absorber natural frequency may be off by", DesignReport.tolerance(r.absorberTolerance(), 1)));
         DetuningAlternative d = r.detuning();
-        robust.add(text("Same result by stiffening the structure", alternative(d.stifferFactor(), d.target())));
-        robust.add(text("Same result by softening the structure", alternative(d.softerFactor(), d.target())));
+        robust.add(text("Same result by stiffening the structure", alternative(d.raiseFactor(), d.target(), "stiffness")));
+        robust.add(text("Same result by softening the structure", alternative(d.lowerFactor(), d.target(), "stiffness")));
+        DetuningAlternative md = r.massDetuning();
+        robust.add(text("Same result by lightening the structure", alternative(md.raiseFactor(), md.target(), "mass")));
+        robust.add(text("Same result by adding mass to the structure", alternative(md.lowerFactor(), md.target(),
+                "mass")));
         sections.add(new Section("Robustness (peak in band rising by at most " + percent(DesignResult.TOLERANCE_ALLOWANCE)
                 + ") and the alternative", robust));
         if (monteCarlo != null) {
@@ -189,16 +193,16 @@ public record SheetContent(String projectName, String notes, String date, String
                 Cautions.STANDARD);
     }
 
-    private static String alternative(double factor, double target) {
+    private static String alternative(double factor, double target, String what) {
         if (target == 0.0) {
             return "not possible (the absorber holds the structure still)";
         }
         if (Double.isNaN(factor)) {
-            return "not reachable by stiffness alone";
+            return "not reachable by " + what + " alone";
         }
         double change = 100 * (factor - 1);
         return factor == 1.0 ? "no change needed" : (change > 0 ? "+" : "") + QuantityFormat.number(change, 3)
-                + " % stiffness";
+                + " % " + what;
     }
 
     private static Row compare(String label, ResponsePeak before, ResponsePeak after, Dimension d) {

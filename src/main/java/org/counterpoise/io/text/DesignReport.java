@@ -102,14 +102,17 @@ public final class DesignReport {
         row(out, "structure natural frequency", tolerance(r.structureTolerance(), 1));
         row(out, "absorber spring rate", tolerance(r.absorberTolerance(), 2));
 
-        section(out, "Alternative: change the structure's stiffness instead");
+        section(out, "Alternative: change the structure itself instead");
         DetuningAlternative d = r.detuning();
         row(out, "target (what the absorber achieves)", DisplayUnits.format(d.target(), study.response().dimension()));
         if (d.target() == 0.0) {
             row(out, "stiffer or softer", "no stiffness change stops the motion entirely");
         } else {
-            row(out, "stiffer", stiffness(d.stifferFactor(), s));
-            row(out, "softer", stiffness(d.softerFactor(), s));
+            row(out, "stiffer", change(d.raiseFactor(), s, 1, "stiffness"));
+            row(out, "softer", change(d.lowerFactor(), s, 1, "stiffness"));
+            DetuningAlternative m = r.massDetuning();
+            row(out, "lighter", change(m.raiseFactor(), s, -1, "mass"));
+            row(out, "heavier", change(m.lowerFactor(), s, -1, "mass"));
         }
 
         if (!r.warnings().isEmpty()) {
@@ -157,16 +160,20 @@ public final class DesignReport {
                 + QuantityFormat.number(r.reductionDecibels(), 3) + " dB)";
     }
 
-    private static String stiffness(double factor, Structure s) {
+    /**
+     * @param factor new over old stiffness or mass
+     * @param power +1 for stiffness (frequency goes as its square root), -1 for mass
+     */
+    private static String change(double factor, Structure s, int power, String what) {
         if (Double.isNaN(factor)) {
             return "cannot reach the target alone";
         }
         if (factor == 1.0) {
             return "no change needed";
         }
-        return String.format(Locale.ROOT, "%s %% (natural frequency %s)",
-                (factor > 1 ? "+" : "") + QuantityFormat.number(100 * (factor - 1), 3),
-                frequency(s.naturalFrequency() * Math.sqrt(factor)));
+        return String.format(Locale.ROOT, "%s %% %s (natural frequency %s)",
+                (factor > 1 ? "+" : "") + QuantityFormat.number(100 * (factor - 1), 3), what,
+                frequency(s.naturalFrequency() * Math.pow(factor, 0.5 * power)));
     }
 
     private static String shortLabel(ResponseKind k) {

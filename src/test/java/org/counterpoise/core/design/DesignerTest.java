@@ -63,8 +63,8 @@ class DesignerTest {
         FrequencyBand band = new FrequencyBand(2 * Math.PI * 9.5, 2 * Math.PI * 10.5);
         Excitation e = new Excitation(ExcitationKind.FORCE, 1000, band);
         DesignResult r = Designer.design(study(s, e, DesignMethod.EQUAL_PEAK, AbsorberSizing.ofMassRatio(0.05)));
-        double stiffer = r.detuning().stifferFactor();
-        double softer = r.detuning().softerFactor();
+        double stiffer = r.detuning().raiseFactor();
+        double softer = r.detuning().lowerFactor();
         assertTrue(stiffer > 1.21 && softer < 0.9025, "resonance moved out of the band both ways");
         for (double factor : new double[] {stiffer, softer}) {
             Structure changed = s.withStiffnessKeepingDamper(s.modalStiffness() * factor);
@@ -72,6 +72,13 @@ class DesignerTest {
                     .peakOver(ResponseKind.DISPLACEMENT, band).value();
             assertEquals(r.responseAfter().value(), peak, 1e-8 * peak);
         }
+        // The same by a mass change: heavier pushes the resonance below the band, lighter above.
+        double heavier = r.massDetuning().lowerFactor();
+        assertTrue(heavier > 1 / 0.9025, "heavier " + heavier);
+        Structure heavy = s.withMassKeepingDamper(s.modalMass() * heavier);
+        double peak = new SystemResponse(heavy, null, ExcitationKind.FORCE, 1000).peakOver(ResponseKind.DISPLACEMENT,
+                band).value();
+        assertEquals(r.responseAfter().value(), peak, 1e-8 * peak);
     }
 
     @Test
