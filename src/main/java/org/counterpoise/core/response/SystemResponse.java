@@ -32,11 +32,6 @@ public final class SystemResponse {
         this.amplitude = amplitude;
     }
 
-    /** @return true when an absorber is fitted */
-    public boolean hasAbsorber() {
-        return tuning != null;
-    }
-
     /**
      * @param kind response kind
      * @return its non-dimensional transfer function

@@ -30,8 +30,7 @@ public record Mistuning(Structure structure, Excitation excitation, ResponseKind
         Absorber a = absorberFactor == 1.0 ? absorber
                 : new Absorber(absorber.mass(), absorber.stiffness() * absorberFactor * absorberFactor,
                         absorber.damping());
-        return new SystemResponse(s, a.tuningOn(s), excitation.kind(), excitation.amplitude())
-                .peakOver(response, excitation.band()).value();
+        return peak(s, a);
     }
 
     /**

@@ -96,7 +96,6 @@ public final class WizardFrame extends JFrame {
     private long generation;
     private long shownGeneration = -1;
     private DesignResult shown;
-    private DesignStudy lastStudy;
 
     /** Builds the window with the default preset loaded. */
     public WizardFrame() {
@@ -322,7 +321,6 @@ public final class WizardFrame extends JFrame {
             stale.setText(" ");
             return;
         }
-        lastStudy = study;
         startDesign(study, gen);
     }
 
@@ -671,11 +669,6 @@ public final class WizardFrame extends JFrame {
     /** @return true when the result on screen belongs to the latest inputs */
     public boolean settled() {
         return shownGeneration == generation && !pause.isRunning();
-    }
-
-    /** @return the study last sent for design */
-    public DesignStudy lastStudy() {
-        return lastStudy;
     }
 
     /** @return true when Next is enabled */
