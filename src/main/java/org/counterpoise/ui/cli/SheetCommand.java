@@ -27,7 +27,7 @@ public final class SheetCommand implements Callable<Integer> {
     private Path output;
 
     @Option(names = "--csv", paramLabel = "DIR",
-            description = "also write curves.csv and result.json into DIR")
+            description = "also write curves.csv and result.json into DIR (with the sheet: all files or none)")
     private Path csvDir;
 
     @Option(names = "--plots", paramLabel = "DIR",
@@ -48,15 +48,19 @@ public final class SheetCommand implements Callable<Integer> {
         LoadedProject loaded = ProjectFiles.read(spec, file);
         DesignResult result = Designer.design(loaded.project().toStudy());
         String issued = (date == null ? LocalDate.now() : date).toString();
-        SheetFiles.writeSheet(result, loaded.project().notes(), output, issued, revision, force, "--output");
+        // The sheet and every export are one set: all are written, or none and nothing changes.
+        SheetFiles.Outputs outputs = new SheetFiles.Outputs(result)
+                .sheet(output, loaded.project().notes(), issued, revision, "--output")
+                .sparing(file, "the project file being read");
+        if (csvDir != null) {
+            outputs.data(csvDir, "--csv");
+        }
+        if (plotsDir != null) {
+            outputs.data(plotsDir, "--plots").charts(plotsDir, "--plots");
+        }
         var out = spec.commandLine().getOut();
-        out.println("wrote " + output);
-        for (Path dir : new Path[] {csvDir, plotsDir}) {
-            if (dir != null) {
-                for (Path p : SheetFiles.writeExports(result, dir, force, dir == csvDir ? "--csv" : "--plots")) {
-                    out.println("wrote " + p);
-                }
-            }
+        for (Path p : outputs.write(force)) {
+            out.println("wrote " + p);
         }
         out.flush();
         return 0;

@@ -1,0 +1,127 @@
+package org.counterpoise.io;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+import static org.junit.jupiter.api.Assertions.fail;
+
+import java.io.BufferedReader;
+import java.io.File;
+import java.io.IOException;
+import java.io.InputStreamReader;
+import java.net.URISyntaxException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Random;
+import java.util.concurrent.TimeUnit;
+import java.util.stream.Collectors;
+import java.util.stream.Stream;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * Kills a process that saves in a loop ({@link SaveLoop}) at seeded random moments, with SIGTERM
+ * (shutdown hooks run) and SIGKILL (nothing runs), and checks what a user would find: the file is
+ * one complete generation, never older than the last save that had finished, and no temporary file
+ * survives (after SIGTERM at once; after SIGKILL once the next save has run in that folder). The
+ * moments are random, the assertions are not: they hold whatever the kill interrupted.
+ * The safe-save guarantee itself (write, flush, rename) is common practice; see AtomicFiles.
+ */
+class AtomicFilesKillTest {
+    private static final int TRIALS = 30;
+    private static final long SEED = 20261203L;
+    /** Upper end of the random wait after the writer's first save, in milliseconds. */
+    private static final int MAX_DELAY_MS = 120;
+
+    @Test
+    void killedSavesLeaveACompleteFileAndNoTemporaryFile(@TempDir Path dir) throws Exception {
+        assertTrue(!System.getProperty("os.name", "").startsWith("Windows"), "POSIX signals needed");
+        Path target = dir.resolve("project.json");
+        AtomicFiles.write(target, out -> SaveLoop.write(out, 0));
+        Random random = new Random(SEED);
+        long first = 1;
+        int terms = 0;
+        int kills = 0;
+        int tempsAfterKill = 0;
+        int unchanged = 0;
+        for (int trial = 0; trial < TRIALS; trial++) {
+            boolean sigkill = random.nextBoolean();
+            int delay = random.nextInt(MAX_DELAY_MS);
+            Process writer = start(target, first);
+            try (BufferedReader out = new BufferedReader(new InputStreamReader(writer.getInputStream(),
+                    StandardCharsets.UTF_8))) {
+                String line = out.readLine();
+                final int t = trial;
+                assertEquals("ready", line, () -> "trial " + t + ": the writer did not start: " + errors(writer));
+                Thread.sleep(delay);
+                if (sigkill) {
+                    writer.destroyForcibly();
+                } else {
+                    writer.destroy();
+                }
+                if (!writer.waitFor(20, TimeUnit.SECONDS)) {
+                    writer.destroyForcibly();
+                    fail("trial " + trial + ": the writer did not end after the signal");
+                }
+            }
+            String what = "trial " + trial + " (" + (sigkill ? "SIGKILL" : "SIGTERM") + " after " + delay + " ms)";
+            long found = SaveLoop.generationOf(target);
+            assertTrue(found >= first, what + ": found generation " + found + ", older than the finished save "
+                    + first);
+            if (found == first) {
+                unchanged++;
+            }
+            if (sigkill) {
+                kills++;
+                tempsAfterKill += others(dir, target).isEmpty() ? 0 : 1;
+            } else {
+                terms++;
+                assertEquals(List.of(), others(dir, target), what + ": the shutdown hook left temporary files");
+            }
+            // The next save, here in this process, removes what the killed writer left.
+            long next = found + 1;
+            AtomicFiles.write(target, out -> SaveLoop.write(out, next));
+            assertEquals(List.of(), others(dir, target), what + ": a temporary file survived the next save");
+            assertEquals(next, SaveLoop.generationOf(target));
+            first = next + 1;
+        }
+        System.out.printf("kill test: %d trials (%d SIGTERM, %d SIGKILL); %d SIGKILL trials left a temporary file"
+                + " that the next save removed; %d trials found the writer's first save, the rest a later one%n",
+                TRIALS, terms, kills, tempsAfterKill, unchanged);
+    }
+
+    private static Process start(Path target, long firstGeneration) throws IOException, URISyntaxException {
+        String java = Path.of(System.getProperty("java.home"), "bin", "java").toString();
+        String classpath = Stream.of(AtomicFiles.class, SaveLoop.class)
+                .map(AtomicFilesKillTest::location).distinct().collect(Collectors.joining(File.pathSeparator));
+        return new ProcessBuilder(java, "-Xshare:auto", "-XX:TieredStopAtLevel=1", "-XX:+UseSerialGC", "-Xmx64m",
+                "-cp", classpath, SaveLoop.class.getName(), target.toString(), Long.toString(firstGeneration))
+                .redirectError(ProcessBuilder.Redirect.PIPE).start();
+    }
+
+    private static String location(Class<?> c) {
+        try {
+            return Path.of(c.getProtectionDomain().getCodeSource().getLocation().toURI()).toString();
+        } catch (URISyntaxException e) {
+            throw new IllegalStateException(e);
+        }
+    }
+
+    private static String errors(Process p) {
+        try {
+            if (!p.waitFor(5, TimeUnit.SECONDS)) {
+                p.destroyForcibly().waitFor();
+            }
+            return new String(p.getErrorStream().readAllBytes(), StandardCharsets.UTF_8);
+        } catch (IOException | InterruptedException e) {
+            return "(no error output)";
+        }
+    }
+
+    private static List<String> others(Path dir, Path target) throws IOException {
+        try (Stream<Path> files = Files.list(dir)) {
+            return files.filter(p -> !p.equals(target)).map(p -> p.getFileName().toString()).sorted().toList();
+        }
+    }
+}
