@@ -46,7 +46,10 @@ import java.util.regex.Pattern;
  * deletes the ones in flight when the program is stopped (SIGTERM, SIGINT, closing the window);
  * and since nothing runs after SIGKILL or a power cut, temporary files are named
  * {@code .NAME.counterpoise-PID-N.tmp} and every write removes those of processes that no longer
- * run from its folder. No other file is ever touched by that clean-up.
+ * run from its folder. No other file is ever touched by that clean-up. (Two machines or
+ * containers writing the same file in a shared folder at the same moment could see each other's
+ * writer as ended; the one whose temporary file is removed then reports a failed write and
+ * changes nothing.)
  *
  * <p>What is replaced: only an ordinary file. A folder, device, pipe or socket is refused, and so
  * is a read-only file. A symbolic link is followed to the file it names, and that file is replaced
@@ -440,6 +443,9 @@ public final class AtomicFiles {
             if (!a.isRegularFile()) {
                 throw new FileWriteException(target, "is a device, pipe or socket, not an ordinary file;"
                         + " only ordinary files are replaced");
+            }
+            if (Files.getFileStore(p).isReadOnly()) {
+                throw new FileWriteException(target, "is on a read-only disk; choose another folder");
             }
             if (!Files.isWritable(p)) {
                 throw new FileWriteException(target, "is read-only; make it writable or choose another name");
