@@ -101,6 +101,7 @@ public final class AtomicFiles {
     };
 
     private static final String MARK = ".counterpoise-";
+    private static final String NOTHING_CHANGED = "nothing was changed";
     /** Our temporary files and no one else's: hidden, our mark, the writer's process id, a counter. */
     private static final Pattern OURS = Pattern.compile("\\..*\\.counterpoise-(\\d{1,18})-\\d{1,19}\\.tmp");
     private static final long PID = ProcessHandle.current().pid();
@@ -170,7 +171,7 @@ public final class AtomicFiles {
         Set<Path> folders = new LinkedHashSet<>();
         for (Entry e : entries) {
             Path real = destination(e.target());
-            if (!seen.add(real)) {
+            if (!seen.add(real.normalize())) {
                 throw new FileWriteException(e.target(), "is named twice among the files to write");
             }
             slots.add(new Slot(e, real));
@@ -188,7 +189,7 @@ public final class AtomicFiles {
             renameAll(slots, faults);
             syncFolders(slots);
         } catch (IOException e) {
-            throw failure(current, slots, e);
+            throw failure(current, slots, e, NOTHING_CHANGED);
         } finally {
             for (Slot s : slots) {
                 discard(s.temp);
@@ -246,12 +247,8 @@ public final class AtomicFiles {
                     }
                 }
             }
-            FileWriteException f = failure(current, slots, e);
-            if (!restored) {
-                f = new FileWriteException(f.path(), f.problem().replace("; nothing was changed", "")
-                        + "; some files of the set were already replaced and could not be put back");
-            }
-            throw f;
+            throw failure(current, slots, e, restored ? NOTHING_CHANGED
+                    : "some files of the set were already replaced and could not be put back");
         }
     }
 
@@ -458,7 +455,7 @@ public final class AtomicFiles {
         }
     }
 
-    private static FileWriteException failure(Slot current, List<Slot> slots, IOException e) {
+    private static FileWriteException failure(Slot current, List<Slot> slots, IOException e, String outcome) {
         if (e instanceof FileWriteException f) {
             return f;
         }
@@ -467,7 +464,7 @@ public final class AtomicFiles {
         if (reason.contains(MARK)) {
             reason = "the system refused the write";
         }
-        return new FileWriteException(named, "cannot be written here (" + reason + "); nothing was changed");
+        return new FileWriteException(named, "cannot be written here (" + reason + "); " + outcome);
     }
 
     /** One destination in a write: the entry, its resolved file, its temporary file and backup. */
