@@ -1,6 +1,7 @@
 package org.counterpoise.ui.cli;
 
 import java.nio.file.Path;
+import org.counterpoise.io.PlainText;
 import java.util.concurrent.Callable;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.Designer;
@@ -30,7 +31,7 @@ public final class DesignCommand implements Callable<Integer> {
     public Integer call() {
         LoadedProject loaded = ProjectFiles.read(spec, file);
         DesignResult result = Designer.design(loaded.project().toStudy());
-        spec.commandLine().getOut().print(json ? ResultJson.toJson(result) : DesignReport.render(result));
+        spec.commandLine().getOut().print(PlainText.forTerminal(json ? ResultJson.toJson(result) : DesignReport.render(result)));
         spec.commandLine().getOut().flush();
         return 0;
     }

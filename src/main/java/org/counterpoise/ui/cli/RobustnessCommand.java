@@ -1,6 +1,7 @@
 package org.counterpoise.ui.cli;
 
 import java.nio.file.Path;
+import org.counterpoise.io.PlainText;
 import java.util.concurrent.Callable;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.Designer;
@@ -47,7 +48,8 @@ public final class RobustnessCommand implements Callable<Integer> {
         RobustnessSettings used = new RobustnessSettings(s.structureRange(), s.absorberRange(), s.target(),
                 s.tolerances(), samples == null ? s.samples() : samples, seed == null ? s.seed() : seed);
         RobustnessResult r = RobustnessAnalysis.run(design, used);
-        spec.commandLine().getOut().print(json ? RobustnessJson.toJson(design, r) : RobustnessReport.render(design, r));
+        spec.commandLine().getOut().print(PlainText.forTerminal(json ? RobustnessJson.toJson(design, r)
+                : RobustnessReport.render(design, r)));
         spec.commandLine().getOut().flush();
         return 0;
     }

@@ -1,6 +1,7 @@
 package org.counterpoise.ui.cli;
 
 import java.nio.file.Path;
+import org.counterpoise.io.PlainText;
 import java.time.LocalDate;
 import java.util.concurrent.Callable;
 import org.counterpoise.core.design.DesignResult;
@@ -50,11 +51,11 @@ public final class SheetCommand implements Callable<Integer> {
         String issued = (date == null ? LocalDate.now() : date).toString();
         SheetFiles.writeSheet(result, loaded.project().notes(), output, issued, revision, force, "--output");
         var out = spec.commandLine().getOut();
-        out.println("wrote " + output);
+        out.println("wrote " + PlainText.escape(output.toString()));
         for (Path dir : new Path[] {csvDir, plotsDir}) {
             if (dir != null) {
                 for (Path p : SheetFiles.writeExports(result, dir, force, dir == csvDir ? "--csv" : "--plots")) {
-                    out.println("wrote " + p);
+                    out.println("wrote " + PlainText.escape(p.toString()));
                 }
             }
         }
