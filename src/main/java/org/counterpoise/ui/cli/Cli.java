@@ -98,8 +98,14 @@ public final class Cli {
         return cl.execute(args);
     }
 
-    /** An internal failure: one plain sentence, the details into a file for the bug report. */
-    private static int failed(Throwable e, String[] args, PrintWriter err) {
+    /**
+     * An internal failure: one plain sentence, the details into a file for the bug report.
+     * @param e the failure
+     * @param args the arguments run
+     * @param err standard error
+     * @return {@link #FAILED}
+     */
+    static int failed(Throwable e, String[] args, PrintWriter err) {
         if (e instanceof OutOfMemoryError) {
             err.println("error: the computer ran out of memory for this task; ask for fewer cases or samples,"
                     + " or give Java more memory (java -Xmx4g -jar counterpoise.jar ...)");
