@@ -25,7 +25,7 @@ public final class GuiMain {
         Thread.setDefaultUncaughtExceptionHandler((thread, e) -> {
             Logger.getLogger("counterpoise").log(Level.SEVERE, "unexpected failure", e);
             SwingUtilities.invokeLater(() -> JOptionPane.showMessageDialog(null,
-                    "Something went wrong (" + e.getClass().getSimpleName() + "). Your inputs are kept;"
+                    "Something went wrong inside Counterpoise (a bug, not your input). Your inputs are kept;"
                             + " please report what you were doing.", "Counterpoise", JOptionPane.ERROR_MESSAGE));
         });
         SwingUtilities.invokeLater(() -> {
