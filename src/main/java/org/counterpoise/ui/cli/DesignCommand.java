@@ -1,10 +1,10 @@
 package org.counterpoise.ui.cli;
 
 import java.nio.file.Path;
-import org.counterpoise.io.PlainText;
 import java.util.concurrent.Callable;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.Designer;
+import org.counterpoise.io.PlainText;
 import org.counterpoise.io.export.ResultJson;
 import org.counterpoise.io.project.LoadedProject;
 import org.counterpoise.io.text.DesignReport;

@@ -1,7 +1,6 @@
 package org.counterpoise.ui.cli;
 
 import java.nio.file.Path;
-import org.counterpoise.io.PlainText;
 import java.util.concurrent.Callable;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.Designer;
@@ -9,6 +8,7 @@ import org.counterpoise.core.design.RobustnessAnalysis;
 import org.counterpoise.core.design.RobustnessResult;
 import org.counterpoise.core.design.RobustnessSettings;
 import org.counterpoise.core.error.Checks;
+import org.counterpoise.io.PlainText;
 import org.counterpoise.io.export.RobustnessJson;
 import org.counterpoise.io.project.LoadedProject;
 import org.counterpoise.io.text.RobustnessReport;

@@ -1,11 +1,12 @@
 package org.counterpoise.ui.cli;
 
 import java.nio.file.Path;
-import org.counterpoise.io.PlainText;
 import java.time.LocalDate;
 import java.util.concurrent.Callable;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.Designer;
+import org.counterpoise.core.error.InvalidInputException;
+import org.counterpoise.io.PlainText;
 import org.counterpoise.io.project.LoadedProject;
 import org.counterpoise.io.sheet.SheetFiles;
 import picocli.CommandLine.Command;
@@ -46,6 +47,10 @@ public final class SheetCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
+        if (revision.length() > 20 || !revision.equals(PlainText.escape(revision))) {
+            throw new InvalidInputException("--revision", "\"" + PlainText.quote(revision) + "\"",
+                    "a short mark of at most 20 characters without control characters, such as A or 2b");
+        }
         LoadedProject loaded = ProjectFiles.read(spec, file);
         DesignResult result = Designer.design(loaded.project().toStudy());
         String issued = (date == null ? LocalDate.now() : date).toString();
