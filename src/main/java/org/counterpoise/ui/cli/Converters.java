@@ -67,7 +67,7 @@ final class Converters {
                 return v;
             }
         }
-        throw new TypeConversionException("must be a whole number from " + min + " to " + max);
+        throw new TypeConversionException("must be a whole number written with digits only, such as 500");
     }
 
     private static LocalDate date(String text) {
