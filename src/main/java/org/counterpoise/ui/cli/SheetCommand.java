@@ -5,6 +5,8 @@ import java.time.LocalDate;
 import java.util.concurrent.Callable;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.Designer;
+import org.counterpoise.core.error.InvalidInputException;
+import org.counterpoise.io.PlainText;
 import org.counterpoise.io.project.LoadedProject;
 import org.counterpoise.io.sheet.SheetFiles;
 import picocli.CommandLine.Command;
@@ -45,6 +47,10 @@ public final class SheetCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
+        if (revision.length() > 20 || !revision.equals(PlainText.escape(revision))) {
+            throw new InvalidInputException("--revision", "\"" + PlainText.quote(revision) + "\"",
+                    "a short mark of at most 20 characters without control characters, such as A or 2b");
+        }
         LoadedProject loaded = ProjectFiles.read(spec, file);
         DesignResult result = Designer.design(loaded.project().toStudy());
         String issued = (date == null ? LocalDate.now() : date).toString();
@@ -60,7 +66,7 @@ public final class SheetCommand implements Callable<Integer> {
         }
         var out = spec.commandLine().getOut();
         for (Path p : outputs.write(force)) {
-            out.println("wrote " + p);
+            out.println("wrote " + PlainText.escape(p.toString()));
         }
         out.flush();
         return 0;
