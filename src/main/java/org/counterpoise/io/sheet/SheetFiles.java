@@ -15,6 +15,7 @@ import org.counterpoise.io.chart.ChartFactory;
 import org.counterpoise.io.chart.ChartFiles;
 import org.counterpoise.io.export.CurveCsv;
 import org.counterpoise.io.export.ResultJson;
+import org.counterpoise.io.project.ProjectIdentity;
 import org.knowm.xchart.XYChart;
 
 /**
@@ -52,8 +53,23 @@ public final class SheetFiles {
      */
     public static void writeSheet(DesignResult r, String notes, Path pdf, String date, String revision, boolean force,
             String option) {
+        writeSheet(r, notes, pdf, date, revision, force, option, ProjectIdentity.EMPTY);
+    }
+
+    /**
+     * @param r the design
+     * @param notes the project's notes, or empty
+     * @param pdf the PDF to write
+     * @param date date of issue
+     * @param revision revision mark
+     * @param force true to replace an existing file
+     * @param option the option the path came from (for messages)
+     * @param identity the project's engineer and client or site
+     */
+    public static void writeSheet(DesignResult r, String notes, Path pdf, String date, String revision, boolean force,
+            String option, ProjectIdentity identity) {
         checkTarget(pdf, force, option);
-        SheetContent content = SheetContent.of(r, notes, date, revision, monteCarlo(r));
+        SheetContent content = SheetContent.of(r, notes, date, revision, monteCarlo(r), identity);
         List<XYChart> charts = charts(r, DesignCurves.of(r));
         atomically(pdf, option, out -> SheetWriter.write(content, charts, out));
     }

@@ -30,7 +30,8 @@ public final class DesignCommand implements Callable<Integer> {
     public Integer call() {
         LoadedProject loaded = ProjectFiles.read(spec, file);
         DesignResult result = Designer.design(loaded.project().toStudy());
-        spec.commandLine().getOut().print(json ? ResultJson.toJson(result) : DesignReport.render(result));
+        spec.commandLine().getOut().print(json ? ResultJson.toJson(result) : DesignReport.render(result,
+                loaded.project().identity()));
         spec.commandLine().getOut().flush();
         return 0;
     }

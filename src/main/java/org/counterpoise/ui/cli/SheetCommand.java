@@ -34,10 +34,11 @@ public final class SheetCommand implements Callable<Integer> {
             description = "also write the charts as PNG and SVG (and the CSV and JSON) into DIR")
     private Path plotsDir;
 
-    @Option(names = "--revision", paramLabel = "REV", defaultValue = "A", description = "revision mark (default ${DEFAULT-VALUE})")
+    @Option(names = "--revision", paramLabel = "REV",
+            description = "revision mark (default: the project's revision, else A)")
     private String revision;
 
-    @Option(names = "--date", paramLabel = "YYYY-MM-DD", description = "date of issue (default today)")
+    @Option(names = "--date", paramLabel = "YYYY-MM-DD", description = "date of issue (default: the project's date, else today)")
     private LocalDate date;
 
     @Option(names = "--force", description = "replace files that already exist")
@@ -47,8 +48,11 @@ public final class SheetCommand implements Callable<Integer> {
     public Integer call() {
         LoadedProject loaded = ProjectFiles.read(spec, file);
         DesignResult result = Designer.design(loaded.project().toStudy());
-        String issued = (date == null ? LocalDate.now() : date).toString();
-        SheetFiles.writeSheet(result, loaded.project().notes(), output, issued, revision, force, "--output");
+        var identity = loaded.project().identity();
+        String issued = date != null ? date.toString()
+                : identity.date().isEmpty() ? LocalDate.now().toString() : identity.date();
+        String mark = revision != null ? revision : identity.revision().isEmpty() ? "A" : identity.revision();
+        SheetFiles.writeSheet(result, loaded.project().notes(), output, issued, mark, force, "--output", identity);
         var out = spec.commandLine().getOut();
         out.println("wrote " + output);
         for (Path dir : new Path[] {csvDir, plotsDir}) {

@@ -194,8 +194,12 @@ class WizardGuiTest {
         });
         waitFor(() -> onEdtQuietly(() -> frame.settled() && frame.shownResult() != null), "edit");
         Path file = dir.resolve("saved project.json");
-        assertTrue(onEdt(() -> frame.saveTo(file)));
         Project saved = onEdt(frame::currentProject);
+        onEdt(() -> {
+            frame.saveTo(file);
+            return null;
+        });
+        waitFor(() -> onEdtQuietly(() -> !frame.dirty() && Files.exists(file)), "saved in the background");
         assertEquals(saved, ProjectReader.read(file).project());
         assertFalse(onEdt(frame::dirty));
         for (String name : Presets.names()) {
