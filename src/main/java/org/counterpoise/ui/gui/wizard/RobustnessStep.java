@@ -37,7 +37,7 @@ final class RobustnessStep extends Step {
             List.of(Unit.PERCENT, Unit.KILONEWTON_PER_METRE, Unit.NEWTON_PER_METRE, Unit.NEWTON_PER_MILLIMETRE),
             List.of(Unit.PERCENT, Unit.NEWTON_SECOND_PER_METRE, Unit.KILONEWTON_SECOND_PER_METRE));
     /** Distributions as listed; index 0 means no tolerance. Their file ids are in {@link #DISTRIBUTION_IDS}. */
-    private static final String[] DISTRIBUTIONS = {"none", "uniform, \u00b1 half-width", "normal, standard deviation"};
+    private static final String[] DISTRIBUTIONS = {"none", "uniform \u00b1", "normal \u03c3"};
     private static final String[] DISTRIBUTION_IDS = {null, "uniform", "normal"};
 
     private final QuantityField structureRange = new QuantityField("robustness.structure_detuning",
@@ -79,7 +79,8 @@ final class RobustnessStep extends Step {
             both.setOpaque(false);
             both.add(kind);
             both.add(value);
-            tolerancesForm.row(TOLERANCE_LABELS[i], (char) 0, both, "Distribution and size of the tolerance");
+            tolerancesForm.row(TOLERANCE_LABELS[i], (char) 0, both,
+                    "Uniform: every value within \u00b1 the amount; normal: the amount is the standard deviation");
             tolerancesForm.derived("", value.messageLabel());
             distributions.add(kind);
             tolerances.add(value);
@@ -100,9 +101,9 @@ final class RobustnessStep extends Step {
         JPanel charts = new JPanel(new GridLayout(1, 2, 6, 0));
         charts.add(left);
         charts.add(mapHolder);
-        JPanel forms = new JPanel(new GridLayout(1, 2));
-        forms.add(form);
-        forms.add(tolerancesForm);
+        JPanel forms = new JPanel(new BorderLayout());
+        forms.add(form, BorderLayout.WEST);
+        forms.add(tolerancesForm, BorderLayout.CENTER);
         JPanel top = new JPanel(new BorderLayout());
         top.add(forms, BorderLayout.CENTER);
         top.add(summary, BorderLayout.SOUTH);
