@@ -234,6 +234,238 @@ class WizardGuiTest {
         assertEquals(saved, onEdt(frame::currentProject));
     }
 
+    @Test
+    void aResponseSwitchClearsTheTargetVisiblyAndTheSavedFileIsAcceptedByEveryCommand(@TempDir Path dir)
+            throws Exception {
+        open();
+        JTextField target = (JTextField) find("robustness.target");
+        assertEquals("0.15", onEdt(target::getText), "the scenario's target, in mm");
+        @SuppressWarnings("unchecked")
+        javax.swing.JComboBox<org.counterpoise.core.response.ResponseKind> response =
+                (javax.swing.JComboBox<org.counterpoise.core.response.ResponseKind>) find("absorber.response");
+        @SuppressWarnings("unchecked")
+        javax.swing.JComboBox<org.counterpoise.core.design.DesignMethod> method =
+                (javax.swing.JComboBox<org.counterpoise.core.design.DesignMethod>) find("absorber.method");
+        onEdt(() -> {
+            frame.showStep(2);
+            method.setSelectedItem(org.counterpoise.core.design.DesignMethod.EXACT_PEAK);
+            response.setSelectedItem(org.counterpoise.core.response.ResponseKind.VELOCITY);
+            return null;
+        });
+        assertEquals("", onEdt(target::getText), "the mm target is cleared, not read as mm/s");
+        assertTrue(onEdt(frame::statusText).contains("robustness target (0.1500 mm) was cleared"),
+                onEdt(frame::statusText));
+        assertEquals(null, onEdt(() -> frame.document().project().robustness().target()));
+        onEdt(() -> {
+            frame.showStep(4);
+            return null;
+        });
+        waitFor(() -> onEdtQuietly(() -> frame.settled() && frame.robustnessSummary().contains("Worst case")),
+                "robustness after the switch");
+        assertFalse(onEdt(frame::robustnessSummary).contains("above the target"), "no stale target is judged");
+        // A new target typed in the unit now offered (mm/s) is the one the study judges against.
+        onEdt(() -> {
+            target.setText("12");
+            return null;
+        });
+        String expected = "above the target of " + org.counterpoise.io.text.DisplayUnits.format(0.012,
+                org.counterpoise.core.units.Dimension.VELOCITY);
+        waitFor(() -> onEdtQuietly(() -> frame.settled() && frame.robustnessSummary().contains(expected)),
+                "robustness judged against 12 mm/s");
+        screenshot("robustness-velocity-target");
+        Path file = dir.resolve("velocity.json");
+        Project shown = onEdt(frame::currentProject);
+        onEdt(() -> {
+            frame.saveTo(file);
+            return null;
+        });
+        waitFor(() -> onEdtQuietly(() -> !frame.dirty() && Files.exists(file)), "saved");
+        assertEquals(shown, ProjectReader.read(file).project());
+        for (String[] args : List.of(new String[] {"design", file.toString()},
+                new String[] {"robustness", file.toString()},
+                new String[] {"sheet", file.toString(), "-o", dir.resolve("velocity.pdf").toString()})) {
+            java.io.StringWriter err = new java.io.StringWriter();
+            int code = org.counterpoise.ui.cli.Cli.run(args, new java.io.PrintWriter(new java.io.StringWriter()),
+                    new java.io.PrintWriter(err));
+            assertEquals(0, code, args[0] + ": " + err);
+        }
+        assertTrue(onEdt(() -> frame.openFile(file)));
+        waitFor(() -> onEdtQuietly(() -> frame.settled() && frame.shownResult() != null), "reopened");
+        assertEquals(shown, onEdt(frame::currentProject));
+        assertEquals("12", onEdt(target::getText));
+    }
+
+    @Test
+    void undoAndRedoWorkFromTheKeyboardOnEveryEdit() throws Exception {
+        open();
+        JTextField mass = (JTextField) find("structure.mass");
+        JTextField order = (JTextField) find("disturbance.harmonic_order");
+        focus(mass);
+        Robot robot = new Robot();
+        robot.setAutoDelay(20);
+        keys(robot, java.awt.event.KeyEvent.VK_CONTROL, java.awt.event.KeyEvent.VK_A);
+        for (int key : new int[] {java.awt.event.KeyEvent.VK_2, java.awt.event.KeyEvent.VK_0,
+            java.awt.event.KeyEvent.VK_0, java.awt.event.KeyEvent.VK_0}) {
+            keys(robot, key);
+        }
+        waitFor(() -> onEdtQuietly(() -> frame.settled() && frame.shownResult() != null
+                && frame.shownResult().study().structure().modalMass() == 2000), "typed 2000");
+        onEdt(() -> {
+            frame.showStep(1);
+            order.setText("3");
+            frame.showStep(0);
+            return null;
+        });
+        focus(mass);
+        assertTrue(onEdt(frame::dirty));
+        assertTrue(onEdt(frame::getTitle).startsWith("\u2022 Untitled"), onEdt(frame::getTitle));
+        keys(robot, java.awt.event.KeyEvent.VK_CONTROL, java.awt.event.KeyEvent.VK_Z);
+        waitFor(() -> onEdtQuietly(() -> order.getText().equals("1")), "order undone");
+        assertEquals("2000", onEdt(mass::getText));
+        keys(robot, java.awt.event.KeyEvent.VK_CONTROL, java.awt.event.KeyEvent.VK_Z);
+        waitFor(() -> onEdtQuietly(() -> mass.getText().equals("1800")), "typing undone as one step");
+        waitFor(() -> onEdtQuietly(() -> frame.settled() && frame.shownResult() != null
+                && frame.shownResult().study().structure().modalMass() == 1800), "result of the undone state");
+        assertFalse(onEdt(frame::dirty), "undone to the state it started from");
+        keys(robot, java.awt.event.KeyEvent.VK_CONTROL, java.awt.event.KeyEvent.VK_Y);
+        waitFor(() -> onEdtQuietly(() -> mass.getText().equals("2000")), "redo with Ctrl+Y");
+        keys(robot, java.awt.event.KeyEvent.VK_CONTROL, java.awt.event.KeyEvent.VK_SHIFT,
+                java.awt.event.KeyEvent.VK_Z);
+        waitFor(() -> onEdtQuietly(() -> order.getText().equals("3")), "redo with Ctrl+Shift+Z");
+        waitFor(() -> onEdtQuietly(() -> frame.settled() && frame.shownResult() != null
+                && frame.shownResult().study().excitation().band().low() > 0
+                && frame.shownResult().study().structure().modalMass() == 2000), "result of the redone state");
+        assertEquals(3.0, onEdt(() -> frame.document().project().disturbance().harmonicOrder()));
+    }
+
+    @Test
+    void ctrlSOnTheGoalStepSavesTheProjectAndOpensNoChartDialog(@TempDir Path dir) throws Exception {
+        open();
+        Path file = dir.resolve("fan.json");
+        Files.copy(Path.of("presets", "rooftop-fan-platform.json"), file);
+        assertTrue(onEdt(() -> frame.openFile(file)));
+        JTextField margin = (JTextField) find("absorber.stroke_margin");
+        onEdt(() -> {
+            frame.showStep(2);
+            margin.setText("2");
+            return null;
+        });
+        waitFor(() -> onEdtQuietly(() -> frame.settled() && frame.shownResult() != null), "design");
+        Component chart = find("chart.massRatio");
+        waitFor(() -> onEdtQuietly(() -> chart instanceof Container c && c.getComponentCount() > 0
+                && c.getComponent(0) instanceof org.knowm.xchart.XChartPanel), "mass-ratio chart");
+        // Click the chart (where XChart would take Ctrl+S for its own PNG dialog), then Ctrl+S.
+        java.awt.Point at = onEdt(() -> {
+            java.awt.Point p = chart.getLocationOnScreen();
+            return new java.awt.Point(p.x + chart.getWidth() / 2, p.y + chart.getHeight() / 2);
+        });
+        Robot robot = new Robot();
+        robot.setAutoDelay(20);
+        onEdt(() -> {
+            frame.toFront();
+            margin.requestFocusInWindow();
+            return null;
+        });
+        robot.mouseMove(at.x, at.y);
+        robot.mousePress(java.awt.event.InputEvent.BUTTON1_DOWN_MASK);
+        robot.mouseRelease(java.awt.event.InputEvent.BUTTON1_DOWN_MASK);
+        keys(robot, java.awt.event.KeyEvent.VK_CONTROL, java.awt.event.KeyEvent.VK_S);
+        waitFor(() -> onEdtQuietly(() -> !frame.dirty()), "saved by Ctrl+S");
+        assertEquals(2.0, ProjectReader.read(file).project().absorber().strokeMargin());
+        assertFalse(onEdt(() -> java.util.Arrays.stream(java.awt.Window.getWindows())
+                .anyMatch(w -> w instanceof javax.swing.JDialog && w.isShowing())), "no chart save dialog");
+    }
+
+    @Test
+    void aNewProjectIsUntitledAndItsDetailsRoundTripThroughTheFile(@TempDir Path dir) throws Exception {
+        open();
+        assertEquals("Untitled", onEdt(() -> frame.document().project().name()));
+        assertTrue(onEdt(frame::getTitle).startsWith("Untitled"), onEdt(frame::getTitle));
+        onEdt(() -> {
+            frame.load(Presets.load(Presets.names().get(1)), null);
+            frame.toFront();
+            return null;
+        });
+        focus((JTextField) find("structure.mass"));
+        keys(new Robot(), java.awt.event.KeyEvent.VK_CONTROL, java.awt.event.KeyEvent.VK_N);
+        waitFor(() -> onEdtQuietly(() -> frame.document().project().name().equals("Untitled")), "Ctrl+N");
+        onEdt(() -> {
+            frame.showProjectDetails();
+            return null;
+        });
+        javax.swing.JDialog dialog = onEdt(() -> (javax.swing.JDialog) java.util.Arrays.stream(
+                java.awt.Window.getWindows()).filter(w -> "project.dialog".equals(w.getName())).findFirst()
+                .orElseThrow());
+        java.util.Map<String, javax.swing.text.JTextComponent> fields = new java.util.HashMap<>();
+        for (String id : List.of("project.name", "project.revision", "project.date", "project.engineer",
+                "project.client", "project.notes")) {
+            fields.put(id, (javax.swing.text.JTextComponent) onEdt(() -> find(dialog.getContentPane(), id)));
+        }
+        onEdt(() -> {
+            fields.get("project.name").setText("Dryer hall walkway");
+            fields.get("project.revision").setText("B");
+            fields.get("project.date").setText("30.11.2026");
+            fields.get("project.engineer").setText("M. Okafor");
+            fields.get("project.client").setText("Invented mill, hall 3");
+            fields.get("project.notes").setText("Invented for this test.\nSecond line.");
+            return null;
+        });
+        JLabel dateMessage = (JLabel) onEdt(() -> find(dialog.getContentPane(), "project.date.message"));
+        assertTrue(onEdt(dateMessage::getText).contains("YYYY-MM-DD"), onEdt(dateMessage::getText));
+        assertEquals("", onEdt(() -> frame.document().project().identity().date()), "a bad date is not taken");
+        onEdt(() -> {
+            fields.get("project.date").setText("2026-11-30");
+            return null;
+        });
+        screenshot("project-details");
+        org.counterpoise.io.project.ProjectIdentity expected = new org.counterpoise.io.project.ProjectIdentity("B",
+                "M. Okafor", "Invented mill, hall 3", "2026-11-30");
+        assertEquals(expected, onEdt(() -> frame.document().project().identity()));
+        assertTrue(onEdt(frame::getTitle).contains("Dryer hall walkway"));
+        Path file = dir.resolve("walkway.json");
+        onEdt(() -> {
+            dialog.dispose();
+            frame.saveTo(file);
+            return null;
+        });
+        waitFor(() -> onEdtQuietly(() -> !frame.dirty() && Files.exists(file)), "saved");
+        Project read = ProjectReader.read(file).project();
+        assertEquals("Dryer hall walkway", read.name());
+        assertEquals("Invented for this test.\nSecond line.", read.notes());
+        assertEquals(expected, read.identity());
+        java.io.StringWriter out = new java.io.StringWriter();
+        assertEquals(0, org.counterpoise.ui.cli.Cli.run(new String[] {"design", file.toString()},
+                new java.io.PrintWriter(out), new java.io.PrintWriter(new java.io.StringWriter())));
+        assertTrue(out.toString().contains("M. Okafor") && out.toString().contains("Invented mill, hall 3"));
+        onEdt(() -> {
+            frame.load(Presets.defaultProject(), null);
+            return null;
+        });
+        assertTrue(onEdt(() -> frame.openFile(file)));
+        assertEquals("M. Okafor", onEdt(() -> fields.get("project.engineer").getText()));
+        assertEquals("2026-11-30", onEdt(() -> fields.get("project.date").getText()));
+    }
+
+    private void focus(JTextField field) throws Exception {
+        onEdt(() -> {
+            frame.toFront();
+            field.requestFocusInWindow();
+            return null;
+        });
+        waitFor(() -> onEdtQuietly(field::isFocusOwner), "focus on " + field.getName());
+    }
+
+    /** Presses the keys in order and releases them in reverse, like a person's chord. */
+    private static void keys(Robot robot, int... codes) {
+        for (int k : codes) {
+            robot.keyPress(k);
+        }
+        for (int i = codes.length - 1; i >= 0; i--) {
+            robot.keyRelease(codes[i]);
+        }
+        robot.waitForIdle();
+    }
+
     private static String value(List<String[]> rows, String label) {
         return rows.stream().filter(r -> r[0].equals(label)).findFirst().map(r -> r[1])
                 .orElseThrow(() -> new AssertionError("no row " + label + " in "
