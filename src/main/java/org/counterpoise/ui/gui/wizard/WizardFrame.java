@@ -20,10 +20,6 @@ import javax.swing.JDialog;
 import javax.swing.JFrame;
 import javax.swing.JLabel;
 import javax.swing.JList;
-import javax.swing.JMenu;
-import javax.swing.JMenuBar;
-import javax.swing.JMenuItem;
-import javax.swing.JOptionPane;
 import javax.swing.JPanel;
 import javax.swing.ListSelectionModel;
 import javax.swing.UIManager;
@@ -31,11 +27,10 @@ import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.io.preset.Presets;
 import org.counterpoise.io.project.LoadedProject;
 import org.counterpoise.io.project.Project;
-import org.counterpoise.ui.gui.Themes;
 import org.counterpoise.ui.gui.action.Actions;
 import org.counterpoise.ui.gui.action.EditActions;
 import org.counterpoise.ui.gui.action.FileActions;
-import org.counterpoise.ui.gui.action.Shortcuts;
+import org.counterpoise.ui.gui.action.WizardMenus;
 import org.counterpoise.ui.gui.document.DesignDocument;
 import org.counterpoise.ui.gui.document.DocumentChange;
 import org.counterpoise.ui.gui.task.TaskBar;
@@ -53,6 +48,7 @@ public final class WizardFrame extends JFrame {
     private final DesignDocument document = new DesignDocument(FileActions.untitled());
     private final TaskBar taskBar = new TaskBar();
     private final JLabel status = new JLabel(" ");
+    private final JLabel projectName = new JLabel(" ");
     private final DesignRun run;
     private final TaskRunner tasks;
     private final List<Step> steps;
@@ -104,7 +100,8 @@ public final class WizardFrame extends JFrame {
         files = new FileActions(this, document, tasks, run::fieldsValid, this::say);
         stepList = stepList();
         setContentPane(layoutRoot());
-        setJMenuBar(menus());
+        setJMenuBar(WizardMenus.build(this, files, edits, this::showDetails,
+                name -> files.whenDiscarded(() -> load(Presets.load(name), null)), this::closeRequested));
         files.bind(getRootPane());
         edits.bind(getRootPane());
         document.addListener(this::documentChanged);
@@ -164,12 +161,18 @@ public final class WizardFrame extends JFrame {
         south.add(buttons, BorderLayout.EAST);
         JButton project = new JButton("Project details\u2026");
         project.setName("project.open");
+        project.setMnemonic('j');
+        project.setToolTipText("Name, revision, date of issue, engineer, client or site, notes");
         project.addActionListener(e -> showDetails());
+        projectName.setName("project.title");
+        projectName.setFont(projectName.getFont().deriveFont(java.awt.Font.BOLD));
+        JPanel header = new JPanel(new BorderLayout(0, 4));
+        header.setBorder(BorderFactory.createEmptyBorder(10, 14, 0, 10));
+        header.add(projectName, BorderLayout.NORTH);
+        header.add(project, BorderLayout.WEST);
         JPanel west = new JPanel(new BorderLayout());
+        west.add(header, BorderLayout.NORTH);
         west.add(stepList, BorderLayout.CENTER);
-        JPanel projectButton = new JPanel(new FlowLayout(FlowLayout.CENTER, 6, 8));
-        projectButton.add(project);
-        west.add(projectButton, BorderLayout.SOUTH);
         JPanel root = new JPanel(new BorderLayout());
         root.add(west, BorderLayout.WEST);
         root.add(center, BorderLayout.CENTER);
@@ -178,55 +181,19 @@ public final class WizardFrame extends JFrame {
         return root;
     }
 
-    private JMenuBar menus() {
-        JMenuBar bar = new JMenuBar();
-        JMenu fileMenu = new JMenu("File");
-        fileMenu.setMnemonic('f');
-        files.fill(fileMenu);
-        fileMenu.add(new JMenuItem(Actions.of("Project details\u2026", KeyEvent.VK_D,
-                Shortcuts.menuKey(KeyEvent.VK_D, true), e -> showDetails())));
-        fileMenu.addSeparator();
-        JMenu presets = new JMenu("Example scenarios (invented)");
-        presets.setName("menu.presets");
-        presets.setMnemonic('e');
-        for (String name : Presets.names()) {
-            LoadedProject preset = Presets.load(name);
-            JMenuItem it = new JMenuItem(preset.project().name());
-            it.setName("preset." + name);
-            it.addActionListener(e -> files.whenDiscarded(() -> load(Presets.load(name), null)));
-            presets.add(it);
-        }
-        fileMenu.add(presets);
-        fileMenu.addSeparator();
-        fileMenu.add(new JMenuItem(Actions.of("Quit", KeyEvent.VK_Q, Shortcuts.menuKey(KeyEvent.VK_Q, false),
-                e -> closeRequested())));
-        JMenu edit = new JMenu("Edit");
-        edit.setMnemonic('e');
-        edit.add(new JMenuItem(edits.undo()));
-        edit.add(new JMenuItem(edits.redo()));
-        JMenu view = new JMenu("View");
-        view.setMnemonic('v');
-        view.add(new JMenuItem(Actions.of("Light theme", KeyEvent.VK_L, null, e -> Themes.apply(false, this))));
-        view.add(new JMenuItem(Actions.of("Dark theme", KeyEvent.VK_D, null, e -> Themes.apply(true, this))));
-        JMenu help = new JMenu("Help");
-        help.setMnemonic('h');
-        help.add(new JMenuItem(Actions.of("About Counterpoise", KeyEvent.VK_A, null, e -> JOptionPane.showMessageDialog(
-                this, "Counterpoise: design of dynamic vibration absorbers (tuned mass dampers).\n"
-                        + "A preliminary design aid on a single-mode linear model: verify by measurement;\n"
-                        + "local codes and licensed engineering practice govern.", "About",
-                JOptionPane.INFORMATION_MESSAGE))));
-        bar.add(fileMenu);
-        bar.add(edit);
-        bar.add(view);
-        bar.add(help);
-        return bar;
-    }
-
     private void showDetails() {
         if (detailsDialog == null) {
             detailsDialog = new JDialog(this, "Project details", false);
             detailsDialog.setName("project.dialog");
-            detailsDialog.setContentPane(details);
+            JPanel content = new JPanel(new BorderLayout());
+            content.add(details, BorderLayout.CENTER);
+            JButton close = new JButton("Close");
+            close.setName("project.close");
+            close.addActionListener(e -> detailsDialog.setVisible(false));
+            JPanel buttons = new JPanel(new FlowLayout(FlowLayout.RIGHT, 8, 6));
+            buttons.add(close);
+            content.add(buttons, BorderLayout.SOUTH);
+            detailsDialog.setContentPane(content);
             files.bind(detailsDialog.getRootPane());
             edits.bind(detailsDialog.getRootPane());
             detailsDialog.pack();
@@ -322,6 +289,9 @@ public final class WizardFrame extends JFrame {
 
     private void updateTitle() {
         Path file = document.file();
+        String name = document.project().name();
+        projectName.setText(name.length() > 26 ? name.substring(0, 25) + "\u2026" : name);
+        projectName.setToolTipText(name);
         setTitle((document.dirty() ? "\u2022 " : "") + document.project().name()
                 + (file == null ? "" : " \u2014 " + file.getFileName()) + " \u2014 Counterpoise");
     }
