@@ -89,6 +89,11 @@ class WizardGuiTest {
     @Test
     void defaultScenarioShowsTheCoresNumbersOnEveryStep() throws Exception {
         open();
+        onEdt(() -> {
+            frame.load(Presets.defaultProject(), null);
+            return null;
+        });
+        waitFor(() -> onEdtQuietly(() -> frame.settled() && frame.shownResult() != null), "the scenario");
         DesignResult expected = Designer.design(Presets.defaultProject().project().toStudy());
         List<String[]> rows = onEdt(frame::resultRows);
         assertEquals(QuantityFormat.number(Unit.KILONEWTON_PER_METRE.fromSi(expected.absorber().stiffness()), 4),
