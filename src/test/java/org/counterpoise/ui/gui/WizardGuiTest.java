@@ -379,6 +379,27 @@ class WizardGuiTest {
         assertEquals(2.0, ProjectReader.read(file).project().absorber().strokeMargin());
         assertFalse(onEdt(() -> java.util.Arrays.stream(java.awt.Window.getWindows())
                 .anyMatch(w -> w instanceof javax.swing.JDialog && w.isShowing())), "no chart save dialog");
+        // Every step: click in the middle of the page (a chart, a table or a field), then Ctrl+S.
+        for (int step = 0; step < 6; step++) {
+            int index = step;
+            Files.delete(file);
+            onEdt(() -> {
+                frame.showStep(index);
+                return null;
+            });
+            java.awt.Point middle = onEdt(() -> {
+                Component page = frame.getContentPane();
+                java.awt.Point p = page.getLocationOnScreen();
+                return new java.awt.Point(p.x + page.getWidth() * 3 / 5, p.y + page.getHeight() / 2);
+            });
+            robot.mouseMove(middle.x, middle.y);
+            robot.mousePress(java.awt.event.InputEvent.BUTTON1_DOWN_MASK);
+            robot.mouseRelease(java.awt.event.InputEvent.BUTTON1_DOWN_MASK);
+            keys(robot, java.awt.event.KeyEvent.VK_CONTROL, java.awt.event.KeyEvent.VK_S);
+            waitFor(() -> Files.exists(file), "Ctrl+S on step " + (index + 1));
+            assertFalse(onEdt(() -> java.util.Arrays.stream(java.awt.Window.getWindows())
+                    .anyMatch(w -> w instanceof javax.swing.JDialog && w.isShowing())), "no dialog, step " + index);
+        }
     }
 
     @Test
