@@ -89,6 +89,10 @@ class WizardGuiTest {
     @Test
     void defaultScenarioShowsTheCoresNumbersOnEveryStep() throws Exception {
         open();
+        // Measured, not asserted (speed belongs to benchmarks): the longest event on the event thread
+        // from here on (after start-up, which loads the classes), test steps included.
+        EventTimer timer = new EventTimer();
+        java.awt.Toolkit.getDefaultToolkit().getSystemEventQueue().push(timer);
         onEdt(() -> {
             frame.load(Presets.defaultProject(), null);
             return null;
@@ -105,6 +109,7 @@ class WizardGuiTest {
         String[] names = {"1-structure", "2-disturbance", "3-goal", "4-result", "5-robustness", "6-sheet"};
         for (int i = 0; i < names.length; i++) {
             int step = i;
+            STEP.set("step " + step);
             onEdt(() -> {
                 frame.showStep(step);
                 return null;
@@ -124,6 +129,34 @@ class WizardGuiTest {
                 org.counterpoise.core.response.ResponseKind.DISPLACEMENT, Unit.HERTZ.toSi(14.0)),
                 org.counterpoise.core.units.Dimension.LENGTH);
         assertTrue(readout.startsWith("At 14.00 Hz:") && readout.contains("with " + after + ","), readout);
+        System.out.println("longest event on the event thread during the tour: " + timer.longest());
+    }
+
+    /** Times every event the event thread dispatches (a measurement for the notes, never a pass/fail). */
+    private static final AtomicReference<String> STEP = new AtomicReference<>("");
+
+    private static final class EventTimer extends java.awt.EventQueue {
+        private long longestNanos;
+        private String what = "";
+
+        @Override
+        protected void dispatchEvent(java.awt.AWTEvent event) {
+            long start = System.nanoTime();
+            super.dispatchEvent(event);
+            long took = System.nanoTime() - start;
+            if (took > 50_000_000L && Boolean.getBoolean("counterpoise.edt.log")) {
+                System.out.println("EDT " + took / 1_000_000 + " ms " + event.paramString() + " " + STEP.get());
+            }
+            if (took > longestNanos) {
+                longestNanos = took;
+                what = event.getClass().getSimpleName() + " " + event.paramString();
+            }
+        }
+
+        String longest() {
+            return String.format(java.util.Locale.ROOT, "%.1f ms (%s)", longestNanos / 1e6,
+                    what.length() > 120 ? what.substring(0, 120) : what);
+        }
     }
 
     @Test
