@@ -54,9 +54,10 @@ public final class TaskRunner {
      * @param job the work
      * @param done called on the event thread with a current result
      * @param failed called on the event thread with the failure of a current job
+     * @return the worker (its state turns DONE after the callbacks ran)
      */
-    public <T> void current(String title, Job<T> job, Consumer<T> done, Consumer<Throwable> failed) {
-        current(title, job, done, failed, () -> { });
+    public <T> SwingWorker<T, Void> current(String title, Job<T> job, Consumer<T> done, Consumer<Throwable> failed) {
+        return current(title, job, done, failed, () -> { });
     }
 
     /**
@@ -67,11 +68,12 @@ public final class TaskRunner {
      * @param done called on the event thread with a current result
      * @param failed called on the event thread with the failure of a current job
      * @param cancelled called on the event thread when the user cancelled a current job
+     * @return the worker (its state turns DONE after the callbacks ran)
      */
-    public <T> void current(String title, Job<T> job, Consumer<T> done, Consumer<Throwable> failed,
+    public <T> SwingWorker<T, Void> current(String title, Job<T> job, Consumer<T> done, Consumer<Throwable> failed,
             Runnable cancelled) {
         long started = generation.getAsLong();
-        start(title, job, r -> {
+        return start(title, job, r -> {
             if (generation.getAsLong() == started) {
                 done.accept(r);
             }
@@ -95,13 +97,14 @@ public final class TaskRunner {
      * @param done called on the event thread with the result
      * @param failed called on the event thread with the failure
      * @param cancelled called on the event thread when the user cancelled it
+     * @return the worker (its state turns DONE after the callbacks ran)
      */
-    public <T> void requested(String title, Job<T> job, Consumer<T> done, Consumer<Throwable> failed,
+    public <T> SwingWorker<T, Void> requested(String title, Job<T> job, Consumer<T> done, Consumer<Throwable> failed,
             Runnable cancelled) {
-        start(title, job, done, failed, cancelled);
+        return start(title, job, done, failed, cancelled);
     }
 
-    private <T> void start(String title, Job<T> job, Consumer<T> done, Consumer<Throwable> failed, Runnable cancelled) {
+    private <T> SwingWorker<T, Void> start(String title, Job<T> job, Consumer<T> done, Consumer<Throwable> failed, Runnable cancelled) {
         AtomicBoolean cancel = new AtomicBoolean();
         TaskBar.Entry entry = title == null || bar == null ? null : bar.add(title, () -> cancel.set(true));
         Progress progress = new Progress() {
@@ -119,7 +122,7 @@ public final class TaskRunner {
                 }
             }
         };
-        new SwingWorker<T, Void>() {
+        SwingWorker<T, Void> worker = new SwingWorker<T, Void>() {
             @Override
             protected T doInBackground() throws Exception {
                 progress.checkCancelled();
@@ -146,6 +149,8 @@ public final class TaskRunner {
                     Thread.currentThread().interrupt();
                 }
             }
-        }.execute();
+        };
+        worker.execute();
+        return worker;
     }
 }
