@@ -505,6 +505,69 @@ class WizardGuiTest {
         assertEquals("2026-11-30", onEdt(() -> fields.get("project.date").getText()));
     }
 
+    @Test
+    void unsavedChangesAreAskedAboutBeforeANewProject() throws Exception {
+        open();
+        JTextField mass = (JTextField) find("structure.mass");
+        onEdt(() -> {
+            mass.setText("2200");
+            return null;
+        });
+        waitFor(() -> onEdtQuietly(frame::dirty), "edited");
+        focus(mass);
+        Robot robot = new Robot();
+        robot.setAutoDelay(20);
+        keys(robot, java.awt.event.KeyEvent.VK_CONTROL, java.awt.event.KeyEvent.VK_N);
+        waitFor(() -> onEdtQuietly(() -> showingDialog() != null), "the unsaved-changes question");
+        screenshot("unsaved-changes");
+        keys(robot, java.awt.event.KeyEvent.VK_ESCAPE);
+        waitFor(() -> onEdtQuietly(() -> showingDialog() == null), "question dismissed");
+        assertEquals("2200", onEdt(mass::getText), "Escape keeps the edited project");
+        assertTrue(onEdt(frame::dirty));
+        // Without a window manager the focus does not come back to the window by itself: click the field.
+        java.awt.Point inField = onEdt(() -> {
+            java.awt.Point p = mass.getLocationOnScreen();
+            return new java.awt.Point(p.x + mass.getWidth() / 2, p.y + mass.getHeight() / 2);
+        });
+        robot.mouseMove(inField.x, inField.y);
+        robot.mousePress(java.awt.event.InputEvent.BUTTON1_DOWN_MASK);
+        robot.mouseRelease(java.awt.event.InputEvent.BUTTON1_DOWN_MASK);
+        waitFor(() -> onEdtQuietly(mass::isFocusOwner), "focus back on the mass field");
+        keys(robot, java.awt.event.KeyEvent.VK_CONTROL, java.awt.event.KeyEvent.VK_N);
+        waitFor(() -> onEdtQuietly(() -> showingDialog() != null), "asked again");
+        onEdt(() -> {
+            javax.swing.JButton no = (javax.swing.JButton) findButton(showingDialog(), "No");
+            no.doClick();
+            return null;
+        });
+        waitFor(() -> onEdtQuietly(() -> !frame.dirty() && mass.getText().equals("1800")), "discarded: new project");
+        assertEquals("Untitled", onEdt(() -> frame.document().project().name()));
+    }
+
+    private static javax.swing.JDialog showingDialog() {
+        for (java.awt.Window w : java.awt.Window.getWindows()) {
+            if (w instanceof javax.swing.JDialog d && d.isShowing()) {
+                return d;
+            }
+        }
+        return null;
+    }
+
+    private static Component findButton(Container root, String text) {
+        for (Component c : root.getComponents()) {
+            if (c instanceof javax.swing.JButton b && text.equals(b.getText())) {
+                return c;
+            }
+            if (c instanceof Container sub) {
+                Component found = findButton(sub, text);
+                if (found != null) {
+                    return found;
+                }
+            }
+        }
+        return null;
+    }
+
     private void focus(JTextField field) throws Exception {
         onEdt(() -> {
             frame.toFront();
