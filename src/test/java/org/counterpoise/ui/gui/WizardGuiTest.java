@@ -334,6 +334,42 @@ class WizardGuiTest {
     }
 
     @Test
+    void aSizingTargetIsEmptiedWhenTheResponseChangesQuantityAndNotReadInTheNewUnit() throws Exception {
+        open();
+        onEdt(() -> {
+            frame.load(Presets.load("compressor-frame-speed-band.json"), null);
+            frame.showStep(2);
+            return null;
+        });
+        waitFor(() -> onEdtQuietly(() -> frame.settled() && frame.shownResult() != null), "the scenario");
+        JTextField size = (JTextField) find("absorber.mass_ratio");
+        assertEquals("2", onEdt(size::getText), "2 m/s², the scenario's acceleration target");
+        JTextField maxRatio = (JTextField) find("absorber.max_mass_ratio");
+        assertEquals("0.2", onEdt(maxRatio::getText), "the largest mass ratio is shown, not kept hidden");
+        @SuppressWarnings("unchecked")
+        javax.swing.JComboBox<org.counterpoise.core.response.ResponseKind> response =
+                (javax.swing.JComboBox<org.counterpoise.core.response.ResponseKind>) find("absorber.response");
+        onEdt(() -> {
+            response.setSelectedItem(org.counterpoise.core.response.ResponseKind.VELOCITY);
+            return null;
+        });
+        assertEquals("", onEdt(size::getText), "2 m/s² is not read as 2 mm/s");
+        JLabel note = (JLabel) find("absorber.methodNote");
+        assertTrue(onEdt(note::getText).contains("was emptied"), onEdt(note::getText));
+        waitFor(() -> onEdtQuietly(() -> frame.settled() && !frame.nextEnabled()), "Next waits for a target");
+        assertEquals(null, onEdt(frame::shownResult), "no result for the old target");
+        onEdt(() -> {
+            size.setText("5");
+            return null;
+        });
+        waitFor(() -> onEdtQuietly(() -> frame.settled() && frame.shownResult() != null), "designed for 5 mm/s");
+        assertEquals(org.counterpoise.core.response.ResponseKind.VELOCITY,
+                onEdt(() -> frame.shownResult().study().response()));
+        assertEquals(new org.counterpoise.io.project.QuantityInput(5, Unit.MILLIMETRE_PER_SECOND),
+                onEdt(() -> frame.document().project().absorber().target()));
+    }
+
+    @Test
     void undoAndRedoWorkFromTheKeyboardOnEveryEdit() throws Exception {
         open();
         JTextField mass = (JTextField) find("structure.mass");

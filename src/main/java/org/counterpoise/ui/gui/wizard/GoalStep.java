@@ -39,6 +39,8 @@ final class GoalStep extends Step {
             "Exact-peak only: a tuning ratio you must use; leave empty to optimise it", List.of(Unit.RATIO));
     /** The response the size field's target was typed for (to notice a change of quantity). */
     private ResponseKind targetResponse;
+    /** Says why the target field was emptied, until a new target is typed. */
+    private String targetNote;
     private final QuantityField strokeLimit = new QuantityField("absorber.stroke_limit",
             "Largest allowed peak stroke in the band (exact-peak only); leave empty for none",
             List.of(Unit.MILLIMETRE, Unit.METRE, Unit.MICROMETRE));
@@ -138,18 +140,25 @@ final class GoalStep extends Step {
         String was = size.textField().getText().strip();
         if (!was.isEmpty()) {
             size.clear();
-            note("The target (" + was + " for the " + targetResponse.label() + ") was emptied: type the largest "
-                    + now.label() + " you accept.");
+            targetNote = "The target (" + was + " for the " + targetResponse.label() + ") was emptied: type the"
+                    + " largest " + now.label() + " you accept.";
+            note(targetNote);
         }
         targetResponse = now;
     }
 
     private void edited(String key) {
+        if (!size.textField().getText().isBlank()) {
+            targetNote = null;
+        }
         commit(() -> ProjectEdits.absorber(key, input()));
     }
 
     @Override
     void showProject(Project p, boolean loaded) {
+        if (loaded) {
+            targetNote = null;
+        }
         load(p.absorber());
         targetResponse = p.absorber().response();
     }
@@ -261,6 +270,6 @@ final class GoalStep extends Step {
     /** Shows a problem on the method list (not a number field). */
     void methodProblem(String text) {
         method.putClientProperty("JComponent.outline", text == null ? null : "error");
-        note(text);
+        note(text != null ? text : targetNote);
     }
 }
