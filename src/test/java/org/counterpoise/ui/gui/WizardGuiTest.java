@@ -659,19 +659,7 @@ class WizardGuiTest {
     }
 
     private static <T> T onEdt(Callable<T> task) throws Exception {
-        AtomicReference<T> out = new AtomicReference<>();
-        AtomicReference<Exception> error = new AtomicReference<>();
-        SwingUtilities.invokeAndWait(() -> {
-            try {
-                out.set(task.call());
-            } catch (Exception e) {
-                error.set(e);
-            }
-        });
-        if (error.get() != null) {
-            throw error.get();
-        }
-        return out.get();
+        return Edt.call(task);
     }
 
     private static boolean onEdtQuietly(Callable<Boolean> task) {

@@ -4,13 +4,14 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
+import java.util.concurrent.Callable;
 import java.util.concurrent.CopyOnWriteArrayList;
 import java.util.concurrent.CountDownLatch;
 import java.util.concurrent.TimeUnit;
 import java.util.concurrent.atomic.AtomicLong;
-import java.util.concurrent.atomic.AtomicReference;
 import javax.swing.JButton;
 import javax.swing.SwingUtilities;
+import org.counterpoise.ui.gui.Edt;
 import org.junit.jupiter.api.Test;
 
 /**
@@ -126,19 +127,7 @@ class TaskRunnerTest {
         SwingUtilities.invokeAndWait(() -> { });
     }
 
-    private static <T> T onEdt(java.util.concurrent.Callable<T> task) throws Exception {
-        AtomicReference<T> out = new AtomicReference<>();
-        AtomicReference<Exception> error = new AtomicReference<>();
-        SwingUtilities.invokeAndWait(() -> {
-            try {
-                out.set(task.call());
-            } catch (Exception e) {
-                error.set(e);
-            }
-        });
-        if (error.get() != null) {
-            throw error.get();
-        }
-        return out.get();
+    private static <T> T onEdt(Callable<T> task) throws Exception {
+        return Edt.call(task);
     }
 }
