@@ -78,13 +78,16 @@ public final class ProjectReader {
         }
         String name = top.text("name", "Untitled");
         String notes = top.text("notes", "");
+        ProjectIdentity identity = new ProjectIdentity(top.text("revision", ""), top.text("engineer", ""),
+                top.text("client", ""), top.text("date", ""));
         StructureInput structure = structure(top.object("structure"));
         DisturbanceInput disturbance = disturbance(top.object("disturbance"));
         AbsorberInput absorber = absorber(top.object("absorber"));
         JsonFields robust = top.optionalObject("robustness");
         RobustnessInput robustness = robust == null ? null : robustness(robust, absorber.response());
         top.finish();
-        return new LoadedProject(new Project(name, notes, structure, disturbance, absorber, robustness), unknown);
+        return new LoadedProject(new Project(name, notes, structure, disturbance, absorber, robustness,
+                identity), unknown);
     }
 
     /**

@@ -22,6 +22,7 @@ import org.counterpoise.io.chart.ChartFactory;
 import org.counterpoise.io.chart.ChartFiles;
 import org.counterpoise.io.export.CurveCsv;
 import org.counterpoise.io.export.ResultJson;
+import org.counterpoise.io.project.ProjectIdentity;
 import org.knowm.xchart.XYChart;
 
 /**
@@ -59,7 +60,22 @@ public final class SheetFiles {
      */
     public static void writeSheet(DesignResult r, String notes, Path pdf, String date, String revision, boolean force,
             String option) {
-        new Outputs(r).sheet(pdf, notes, date, revision, option).write(force);
+        writeSheet(r, notes, pdf, date, revision, force, option, ProjectIdentity.EMPTY);
+    }
+
+    /**
+     * @param r the design
+     * @param notes the project's notes, or empty
+     * @param pdf the PDF to write
+     * @param date date of issue
+     * @param revision revision mark
+     * @param force true to replace an existing file
+     * @param option the option the path came from (for messages)
+     * @param identity the project's engineer and client or site
+     */
+    public static void writeSheet(DesignResult r, String notes, Path pdf, String date, String revision, boolean force,
+            String option, ProjectIdentity identity) {
+        new Outputs(r).sheet(pdf, notes, date, revision, option, identity).write(force);
     }
 
     /**
@@ -110,6 +126,7 @@ public final class SheetFiles {
         }
 
         /**
+         * The sheet without project identity lines.
          * @param pdf the PDF
          * @param notes the project's notes, or empty
          * @param date date of issue
@@ -118,8 +135,22 @@ public final class SheetFiles {
          * @return this
          */
         public Outputs sheet(Path pdf, String notes, String date, String revision, String option) {
+            return sheet(pdf, notes, date, revision, option, ProjectIdentity.EMPTY);
+        }
+
+        /**
+         * @param pdf the PDF
+         * @param notes the project's notes, or empty
+         * @param date date of issue
+         * @param revision revision mark
+         * @param option the option the path came from (for messages)
+         * @param identity the project's engineer and client or site
+         * @return this
+         */
+        public Outputs sheet(Path pdf, String notes, String date, String revision, String option,
+                ProjectIdentity identity) {
             return add(pdf, "sheet", option, out -> SheetWriter.write(
-                    SheetContent.of(result, notes, date, revision, monteCarlo(result)), charts(), out));
+                    SheetContent.of(result, notes, date, revision, monteCarlo(result), identity), charts(), out));
         }
 
         /**

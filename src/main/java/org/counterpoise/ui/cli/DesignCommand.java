@@ -31,7 +31,8 @@ public final class DesignCommand implements Callable<Integer> {
     public Integer call() {
         LoadedProject loaded = ProjectFiles.read(spec, file);
         DesignResult result = Designer.design(loaded.project().toStudy());
-        spec.commandLine().getOut().print(PlainText.forTerminal(json ? ResultJson.toJson(result) : DesignReport.render(result)));
+        spec.commandLine().getOut().print(PlainText.forTerminal(json ? ResultJson.toJson(result)
+                : DesignReport.render(result, loaded.project().identity())));
         spec.commandLine().getOut().flush();
         return 0;
     }

@@ -36,10 +36,11 @@ public final class SheetCommand implements Callable<Integer> {
             description = "also write the charts as PNG and SVG (and the CSV and JSON) into DIR")
     private Path plotsDir;
 
-    @Option(names = "--revision", paramLabel = "REV", defaultValue = "A", description = "revision mark (default ${DEFAULT-VALUE})")
+    @Option(names = "--revision", paramLabel = "REV",
+            description = "revision mark (default: the project's revision, else A)")
     private String revision;
 
-    @Option(names = "--date", paramLabel = "YYYY-MM-DD", description = "date of issue (default today)")
+    @Option(names = "--date", paramLabel = "YYYY-MM-DD", description = "date of issue (default: the project's date, else today)")
     private LocalDate date;
 
     @Option(names = "--force", description = "replace files that already exist")
@@ -47,16 +48,19 @@ public final class SheetCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        if (revision.length() > 20 || !revision.equals(PlainText.escape(revision))) {
+        if (revision != null && (revision.length() > 20 || !revision.equals(PlainText.escape(revision)))) {
             throw new InvalidInputException("--revision", "\"" + PlainText.quote(revision) + "\"",
                     "a short mark of at most 20 characters without control characters, such as A or 2b");
         }
         LoadedProject loaded = ProjectFiles.read(spec, file);
         DesignResult result = Designer.design(loaded.project().toStudy());
-        String issued = (date == null ? LocalDate.now() : date).toString();
+        var identity = loaded.project().identity();
+        String issued = date != null ? date.toString()
+                : identity.date().isEmpty() ? LocalDate.now().toString() : identity.date();
+        String mark = revision != null ? revision : identity.revision().isEmpty() ? "A" : identity.revision();
         // The sheet and every export are one set: all are written, or none and nothing changes.
         SheetFiles.Outputs outputs = new SheetFiles.Outputs(result)
-                .sheet(output, loaded.project().notes(), issued, revision, "--output")
+                .sheet(output, loaded.project().notes(), issued, mark, "--output", identity)
                 .sparing(file, "the project file being read");
         if (csvDir != null) {
             outputs.data(csvDir, "--csv");
