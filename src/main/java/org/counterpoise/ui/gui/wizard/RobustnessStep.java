@@ -17,7 +17,6 @@ import org.counterpoise.io.text.QuantityFormat;
 import org.counterpoise.ui.gui.field.Form;
 import org.counterpoise.ui.gui.field.QuantityField;
 import org.counterpoise.ui.gui.plot.ChartHost;
-import org.knowm.xchart.XChartPanel;
 
 /** Step 5: how the design fares off-tune, the robust alternative and the tolerance Monte Carlo. */
 final class RobustnessStep extends Step {
@@ -30,7 +29,7 @@ final class RobustnessStep extends Step {
     private final JLabel summary = new JLabel(" ");
     private final ChartHost sensitivity = new ChartHost("chart.sensitivity");
     private final ChartHost histogram = new ChartHost("chart.histogram");
-    private final JPanel mapHolder = new JPanel(new BorderLayout());
+    private final ChartHost mapHolder = new ChartHost("chart.map");
     private final JComponent page;
 
     RobustnessStep(Runnable changed) {
@@ -42,7 +41,6 @@ final class RobustnessStep extends Step {
         form.end();
         summary.setName("robustness.summary");
         summary.setBorder(javax.swing.BorderFactory.createEmptyBorder(4, 14, 8, 14));
-        mapHolder.setName("chart.map");
         JPanel left = new JPanel(new GridLayout(2, 1, 0, 6));
         left.add(sensitivity);
         left.add(histogram);
@@ -105,7 +103,7 @@ final class RobustnessStep extends Step {
         if (design == null || r == null) {
             sensitivity.message(design == null ? "Fix the inputs to see the robustness study." : "computing\u2026");
             histogram.message(" ");
-            mapHolder.removeAll();
+            mapHolder.message(" ");
             summary.setText(" ");
             return;
         }
@@ -118,12 +116,9 @@ final class RobustnessStep extends Step {
                 + DisplayUnits.format(mc.p50(), unitDim) + " / " + DisplayUnits.format(mc.p95(), unitDim)
                 + (Double.isNaN(mc.probabilityExceeding()) ? "" : "; above target "
                         + QuantityFormat.number(100 * mc.probabilityExceeding(), 3) + " %") + "</html>");
-        sensitivity.show(RobustnessCharts.sensitivity(design, r, 420, 320));
-        histogram.show(RobustnessCharts.histogram(design, mc, 420, 320));
-        mapHolder.removeAll();
-        mapHolder.add(new XChartPanel<>(RobustnessCharts.map(design, r, 520, 480, 3)), BorderLayout.CENTER);
-        mapHolder.revalidate();
-        mapHolder.repaint();
+        sensitivity.show(theme -> RobustnessCharts.sensitivity(design, r, theme, 420, 320));
+        histogram.show(theme -> RobustnessCharts.histogram(design, mc, theme, 420, 320));
+        mapHolder.show(theme -> RobustnessCharts.map(design, r, theme, 520, 480, 3));
     }
 
     String summary() {

@@ -57,9 +57,6 @@ import org.counterpoise.io.preset.Presets;
 import org.counterpoise.ui.gui.Themes;
 import org.counterpoise.ui.gui.session.RecentFiles;
 import org.knowm.xchart.XYChart;
-import org.knowm.xchart.XYChartBuilder;
-import org.knowm.xchart.XYSeries;
-import org.knowm.xchart.style.markers.SeriesMarkers;
 
 /**
  * The design wizard: a list of steps on the left, the current step in the middle, Back and Next
@@ -460,7 +457,8 @@ public final class WizardFrame extends JFrame {
                     return;
                 }
                 try {
-                    goal.massChart().show(massChart(study, r, mus, get()));
+                    double[] peaks = get();
+                    goal.massChart().show(theme -> massChart(study, r, mus, peaks, theme));
                 } catch (ExecutionException e) {
                     goal.massChart().message("No optimum peak for this case: " + e.getCause().getMessage());
                 } catch (InterruptedException e) {
@@ -470,31 +468,15 @@ public final class WizardFrame extends JFrame {
         }.execute();
     }
 
-    private static XYChart massChart(DesignStudy study, DesignResult r, double[] mus, double[] peaks) {
+    private static XYChart massChart(DesignStudy study, DesignResult r, double[] mus, double[] peaks,
+            org.counterpoise.io.chart.ChartTheme theme) {
         var unit = org.counterpoise.io.text.DisplayUnits.of(study.response().dimension());
-        XYChart c = new XYChartBuilder().width(560).height(260).xAxisTitle("Mass ratio \u03bc")
-                .yAxisTitle("Least peak " + org.counterpoise.ui.gui.field.QuantityField.pretty(unit.symbol())).build();
-        c.getStyler().setChartBackgroundColor(Color.WHITE);
-        c.getStyler().setPlotBackgroundColor(Color.WHITE);
-        c.getStyler().setLegendVisible(false);
-        c.getStyler().setXAxisLogarithmic(true);
-        c.getStyler().setYAxisLogarithmic(true);
-        c.getStyler().setXAxisDecimalPattern("0.###");
-        c.getStyler().setYAxisDecimalPattern("0.##########");
         double[] y = new double[peaks.length];
         for (int i = 0; i < y.length; i++) {
             y[i] = unit.fromSi(peaks[i]);
         }
-        XYSeries s = c.addSeries("least peak", mus, y);
-        s.setLineColor(org.counterpoise.io.chart.ChartFactory.AFTER);
-        s.setMarker(SeriesMarkers.CIRCLE);
-        s.setMarkerColor(org.counterpoise.io.chart.ChartFactory.AFTER);
-        XYSeries now = c.addSeries("this design", new double[] {r.tuning().massRatio()},
-                new double[] {unit.fromSi(r.responseAfter().value())});
-        now.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Scatter);
-        now.setMarkerColor(new Color(0xb3, 0x5c, 0x1e));
-        now.setMarker(SeriesMarkers.DIAMOND);
-        return c;
+        return org.counterpoise.io.chart.ChartFactory.massRatio(mus, y, unit, r.tuning().massRatio(),
+                unit.fromSi(r.responseAfter().value()), theme, 560, 260);
     }
 
     private void go(int index) {
