@@ -164,6 +164,10 @@ public final class ChartFactory {
         double[] y = points.stream().mapToDouble(p -> p[1]).toArray();
         double[] xr = span(x, here ? massRatio : Double.NaN);
         double[] yr = span(y, here ? peak : Double.NaN);
+        for (int i = 0; i < x.length; i++) {
+            x[i] = Math.max(x[i], xr[0]);
+            y[i] = Math.max(y[i], yr[0]);
+        }
         logAxis(c.getStyler(), true, xr[0] / 1.2, xr[1] * 1.2);
         logAxis(c.getStyler(), false, yr[0] / 1.3, yr[1] * 1.3);
         if (x.length > 0) {
@@ -198,7 +202,8 @@ public final class ChartFactory {
             lo = hi / 2;
             hi = hi * 2;
         }
-        return new double[] {lo, hi};
+        // A logarithmic axis over more than twelve decades tells nothing: the rest sits at its floor.
+        return new double[] {Math.max(lo, hi * 1e-12), hi};
     }
 
     private static XYChart base(int width, int height, String title, Unit unit, ChartTheme theme) {

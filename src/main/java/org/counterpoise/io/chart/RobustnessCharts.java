@@ -308,6 +308,14 @@ public final class RobustnessCharts {
             ChartFactory.note(chart, text);
             return ChartFactory.emptyNote(chart, text, theme);
         }
+        for (int i = 1; i < edges.length; i++) {
+            if (!Double.isFinite(edges[i]) || edges[i] < edges[i - 1]) {
+                String text = Double.isFinite(edges[i]) ? "The Monte Carlo bins are out of order: no histogram to draw."
+                        : "The peak is unbounded in some sampled builds: no histogram to draw.";
+                ChartFactory.note(chart, text);
+                return ChartFactory.emptyNote(chart, text, theme);
+            }
+        }
         if (!(high > low)) {
             String text = "All " + mc.samples() + " sampled builds give the same peak, "
                     + QuantityFormat.number(low, QuantityFormat.FIGURES) + " " + unit.symbol() + ".";
