@@ -60,6 +60,8 @@ public final class RobustnessCharts {
                 .xAxisTitle("Structure natural frequency offset (%)")
                 .yAxisTitle("Peak (" + ChartFactory.pretty(unit.symbol()) + ")").build();
         ChartFactory.houseStyle(chart.getStyler(), theme);
+        // The curves run along the top of the plot; the legend goes below them.
+        chart.getStyler().setLegendPosition(Styler.LegendPosition.InsideS);
         double[][] x = {percent(r.structureCurve()), percent(r.robustStructureCurve())};
         double[][] y = {toUnit(r.structureCurve().peaks(), unit), toUnit(r.robustStructureCurve().peaks(), unit)};
         double typical = PlotRange.typical(y);
@@ -259,12 +261,15 @@ public final class RobustnessCharts {
             min = top;
         }
         double bottom = Math.min(min, top * 0.9999);
+        // The colour bar prints its ends as plain doubles: round them to three significant figures
+        // in decimal, so the bar reads 0.072 and not 0.07200000000000001.
         if (bottom > 0) {
-            double magnitude = Math.pow(10, Math.floor(Math.log10(bottom)) - 2);
-            bottom = Math.floor(bottom / magnitude) * magnitude; // three significant figures on the scale
+            bottom = new java.math.BigDecimal(bottom).round(new java.math.MathContext(3, java.math.RoundingMode.FLOOR))
+                    .doubleValue();
         }
         s.setMin(bottom);
-        s.setMax(top);
+        s.setMax(Double.parseDouble(ChartNumbers.label(top)) >= top ? Double.parseDouble(ChartNumbers.label(top))
+                : top);
         s.setHeatMapDecimalValueFormatter(v -> QuantityFormat.number(v, 3));
         if (!cells.isEmpty()) {
             chart.addSeries("peak", xs, ys, cells);
