@@ -326,7 +326,25 @@ public final class ChartFactory {
         s.setXAxisMin(xLow);
         s.setXAxisMax(xHigh);
         s.setxAxisTickLabelsFormattingFunction(ChartNumbers.linearAxis(xLow, xHigh));
-        double yTop = logarithmic ? top * 1.6 : top * 1.1;
+        // Curves with the probed resonances, and where each is unbounded, before the axes are set:
+        // a chart with notes keeps a band above the plotting range for them, over no curve.
+        double[][][] xys = new double[curves.length][][];
+        List<double[]> marks = new ArrayList<>();
+        for (int k = 0; k < curves.length && hz.length > 0; k++) {
+            xys[k] = withProbes(hz, ys[k], probes, curves[k].at(), typical);
+            for (double at : PlotRange.unboundedAt(xys[k][0], xys[k][1], typical)) {
+                marks.add(new double[] {at, top});
+                note(chart, curves[k].name() + ": unbounded at "
+                        + QuantityFormat.format(Unit.HERTZ.toSi(at), Unit.HERTZ));
+            }
+        }
+        if (allZero) {
+            note(chart, "every value is zero");
+        }
+        int lines = notes(chart).size();
+        double headroom = lines == 0 ? 0 : Math.min(0.45, 0.06 + 0.075 * lines);
+        double yTop = logarithmic ? top * 1.6 * Math.pow(top * 1.6 / floor, headroom / (1 - headroom))
+                : top * 1.1 + headroom / (1 - headroom) * (top * 1.1 - floor);
         if (logarithmic) {
             logAxis(s, false, floor, yTop);
         } else {
@@ -335,18 +353,10 @@ public final class ChartFactory {
             s.setyAxisTickLabelsFormattingFunction(ChartNumbers.linearAxis(floor, yTop));
         }
         chart.getStyler().setYAxisLogarithmic(logarithmic);
-        List<double[]> marks = new ArrayList<>();
-        for (int k = 0; k < curves.length; k++) {
+        for (int k = 0; k < curves.length && hz.length > 0; k++) {
             Curve c = curves[k];
-            if (hz.length == 0) {
-                break;
-            }
-            double[][] xy = withProbes(hz, ys[k], probes, c.at(), typical);
-            line(chart, c.name(), xy[0], PlotRange.clip(xy[1], typical, floor, top), c.color(), c.width(), c.dashed());
-            for (double at : PlotRange.unboundedAt(xy[0], xy[1], typical)) {
-                marks.add(new double[] {at, top});
-                note(chart, c.name() + ": unbounded at " + QuantityFormat.format(Unit.HERTZ.toSi(at), Unit.HERTZ));
-            }
+            line(chart, c.name(), xys[k][0], PlotRange.clip(xys[k][1], typical, floor, top), c.color(), c.width(),
+                    c.dashed());
         }
         if (Double.isFinite(level) && level > 0) {
             line(chart, "clearance", new double[] {xLow, xHigh}, new double[] {level, level}, curves[0].color(), 1.0f,
@@ -360,18 +370,17 @@ public final class ChartFactory {
             m.setMarkerColor(theme.alarm());
             chart.getStyler().setMarkerSize(9);
         }
-        if (allZero) {
-            note(chart, "every value is zero");
-        }
-        notePanel(chart, theme);
+        notePanel(chart, theme, logarithmic ? top * 1.6 : top * 1.1);
     }
 
     /**
-     * Writes the chart's notes in a box at the top left of its plot (the axes' ranges must be set).
+     * Writes the chart's notes in a box at the left of its plot, its lower edge at a given height
+     * (the axes' ranges must be set).
      * @param chart the chart
      * @param theme colours
+     * @param above the height the box's lower edge sits at, in data units; NaN for near the top
      */
-    static void notePanel(XYChart chart, ChartTheme theme) {
+    static void notePanel(XYChart chart, ChartTheme theme, double above) {
         List<String> notes = notes(chart);
         AxesChartStyler s = chart.getStyler();
         if (notes.isEmpty() || s.getXAxisMin() == null || s.getXAxisMax() == null || s.getYAxisMin() == null
@@ -388,7 +397,8 @@ public final class ChartFactory {
         double y1 = s.getYAxisMax();
         double x = s.isXAxisLogarithmic() ? x0 * Math.pow(x1 / x0, 0.015) : x0 + 0.015 * (x1 - x0);
         double lines = Math.min(0.5, 0.03 + 0.07 * notes.size());
-        double y = s.isYAxisLogarithmic() ? y1 / Math.pow(y1 / y0, lines) : y1 - lines * (y1 - y0);
+        double y = !Double.isNaN(above) ? above
+                : s.isYAxisLogarithmic() ? y1 / Math.pow(y1 / y0, lines) : y1 - lines * (y1 - y0);
         chart.addAnnotation(new AnnotationTextPanel(String.join("\n", notes), x, y, false));
     }
 

@@ -145,7 +145,7 @@ public final class RobustnessCharts {
         m.setMarker(SeriesMarkers.TRIANGLE_UP);
         m.setMarkerColor(theme.alarm());
         chart.getStyler().setMarkerSize(9);
-        ChartFactory.notePanel(chart, theme);
+        ChartFactory.notePanel(chart, theme, Double.NaN);
     }
 
     private static double[] percent(SensitivityCurve c) {
@@ -268,8 +268,8 @@ public final class RobustnessCharts {
                     .doubleValue();
         }
         s.setMin(bottom);
-        s.setMax(Double.parseDouble(ChartNumbers.label(top)) >= top ? Double.parseDouble(ChartNumbers.label(top))
-                : top);
+        s.setMax(top > 0 ? new java.math.BigDecimal(top).round(new java.math.MathContext(3,
+                java.math.RoundingMode.CEILING)).doubleValue() : top);
         s.setHeatMapDecimalValueFormatter(v -> QuantityFormat.number(v, 3));
         if (!cells.isEmpty()) {
             chart.addSeries("peak", xs, ys, cells);

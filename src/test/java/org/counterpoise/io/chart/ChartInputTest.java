@@ -231,6 +231,10 @@ class ChartInputTest {
         assertEquals("1.5e-05", ChartNumbers.label(1.5e-5));
         assertEquals("0", ChartNumbers.linearAxis(0, 1).apply(1.3e-17));
         assertEquals("-0.25", ChartNumbers.linearAxis(-1, 1).apply(-0.25));
+        var small = ChartNumbers.linearAxis(0, 0.00014);
+        assertEquals(List.of("0.00008", "0.0001", "0.00012"), List.of(small.apply(8e-5), small.apply(1.0000000000000002e-4),
+                small.apply(1.2e-4)));
+        assertEquals("0.072", ChartNumbers.linearAxis(0.06, 0.16).apply(0.07200000000000001));
     }
 
     @Test
