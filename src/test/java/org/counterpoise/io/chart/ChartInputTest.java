@@ -199,14 +199,25 @@ class ChartInputTest {
     }
 
     @Test
-    void histogramBarsFollowSturgesRuleWithAMinimum() {
-        // Sturges (1926), J. Am. Stat. Assoc. 21(153), 65-66: k = 1 + log2(n) classes. The 40 equal
-        // bins of the Monte Carlo are joined in groups that divide 40, to the bar count nearest k.
-        assertEquals(10, 40 / RobustnessCharts.grouping(40, 10_000)); // k = 14.3: 10 bars (20 is farther)
-        assertEquals(8, 40 / RobustnessCharts.grouping(40, 100)); // k = 7.6
-        assertEquals(20, 40 / RobustnessCharts.grouping(40, 1_000_000)); // k = 20.9
-        assertEquals(RobustnessCharts.MIN_BINS, 40 / RobustnessCharts.grouping(40, 10)); // k = 4.3, minimum 5
-        assertEquals(RobustnessCharts.MIN_BINS, 40 / RobustnessCharts.grouping(40, 1));
+    void histogramBarsFollowFreedmanDiaconisWithAMinimum() {
+        // Freedman and Diaconis (1981), Z. Wahrscheinlichkeitstheorie verw. Gebiete 57, 453-476: bar
+        // width h = 2 IQR n^(-1/3). Counts spread evenly over 40 bins have IQR = 20 bins, so the
+        // wanted bar count is 40 / (40 n^(-1/3)) = n^(1/3); the bars are joined bins, a divisor of 40.
+        int[] even = new int[40];
+        java.util.Arrays.fill(even, 25); // n = 1000: n^(1/3) = 10 bars
+        assertEquals(10, 40 / RobustnessCharts.grouping(even, 1000));
+        java.util.Arrays.fill(even, 1000); // n = 40 000: 34.2 wanted, 40 is nearest
+        assertEquals(40, 40 / RobustnessCharts.grouping(even, 40_000));
+        java.util.Arrays.fill(even, 200); // n = 8000: 20 bars
+        assertEquals(20, 40 / RobustnessCharts.grouping(even, 8000));
+        // Few samples: n^(1/3) = 2.2, raised to the minimum of 5 bars.
+        int[] few = new int[40];
+        few[3] = 4;
+        few[30] = 6;
+        assertEquals(RobustnessCharts.MIN_BINS, 40 / RobustnessCharts.grouping(few, 10));
+        // Counts that give no quartiles: Sturges (1926), J. Am. Stat. Assoc. 21(153), 65-66,
+        // 1 + log2(10 000) = 14.3 classes: 10 bars are nearer than 20.
+        assertEquals(10, 40 / RobustnessCharts.grouping(new int[40], 10_000));
     }
 
     @Test
