@@ -19,7 +19,6 @@ import org.counterpoise.io.text.DisplayUnits;
 import org.counterpoise.io.text.QuantityFormat;
 import org.knowm.xchart.AnnotationLine;
 import org.knowm.xchart.AnnotationText;
-import org.knowm.xchart.AnnotationTextPanel;
 import org.knowm.xchart.XYChart;
 import org.knowm.xchart.XYChartBuilder;
 import org.knowm.xchart.XYSeries;
@@ -342,6 +341,11 @@ public final class ChartFactory {
             note(chart, "every value is zero");
         }
         int lines = notes(chart).size();
+        if (lines > 0) {
+            // The notes take the top left of the plot; the legend goes below the plot, clear of them.
+            s.setLegendPosition(Styler.LegendPosition.OutsideS);
+            s.setLegendLayout(Styler.LegendLayout.Horizontal);
+        }
         double headroom = lines == 0 ? 0 : Math.min(0.45, 0.06 + 0.075 * lines);
         double yTop = logarithmic ? top * 1.6 * Math.pow(top * 1.6 / floor, headroom / (1 - headroom))
                 : top * 1.1 + headroom / (1 - headroom) * (top * 1.1 - floor);
@@ -387,10 +391,6 @@ public final class ChartFactory {
                 || s.getYAxisMax() == null) {
             return;
         }
-        s.setAnnotationTextPanelBackgroundColor(theme.plot());
-        s.setAnnotationTextPanelBorderColor(theme.alarm());
-        s.setAnnotationTextPanelFontColor(theme.alarm());
-        s.setAnnotationTextPanelFont(new Font(Font.SANS_SERIF, Font.PLAIN, 10));
         double x0 = s.getXAxisMin();
         double x1 = s.getXAxisMax();
         double y0 = s.getYAxisMin();
@@ -399,7 +399,7 @@ public final class ChartFactory {
         double lines = Math.min(0.5, 0.03 + 0.07 * notes.size());
         double y = !Double.isNaN(above) ? above
                 : s.isYAxisLogarithmic() ? y1 / Math.pow(y1 / y0, lines) : y1 - lines * (y1 - y0);
-        chart.addAnnotation(new AnnotationTextPanel(String.join("\n", notes), x, y, false));
+        chart.addAnnotation(new NoteBox(notes, x, y, theme.plot(), theme.alarm()));
     }
 
     /**
