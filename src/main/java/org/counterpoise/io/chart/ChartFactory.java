@@ -146,7 +146,7 @@ public final class ChartFactory {
         XYChart c = new XYChartBuilder().width(width).height(height).xAxisTitle("Mass ratio \u03bc")
                 .yAxisTitle("Least peak (" + pretty(unit.symbol()) + ")").build();
         houseStyle(c.getStyler(), theme);
-        c.getStyler().setLegendVisible(false);
+        // The legend tells the curve of least peaks from this design's diamond.
         List<double[]> points = new ArrayList<>();
         for (int i = 0; i < Math.min(massRatios.length, leastPeaks.length); i++) {
             if (massRatios[i] > 0 && Double.isFinite(massRatios[i]) && leastPeaks[i] > 0
