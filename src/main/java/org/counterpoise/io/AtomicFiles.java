@@ -208,7 +208,7 @@ public final class AtomicFiles {
                     syncFolder(folder);
                 } catch (IOException e) {
                     throw new FileWriteException(s.entry.target(), "was written, but its folder could not be flushed"
-                            + " to the disk (" + WriteErrors.reason(e) + "); it may not survive a power cut");
+                            + " to the disk (" + PlainMessages.writeFailure(e) + "); it may not survive a power cut");
                 }
             }
         }
@@ -451,7 +451,7 @@ public final class AtomicFiles {
         } catch (FileWriteException e) {
             throw e;
         } catch (IOException e) {
-            throw new FileWriteException(target, "cannot be written here (" + WriteErrors.reason(e) + ")");
+            throw new FileWriteException(target, "cannot be written here (" + PlainMessages.writeFailure(e) + ")");
         }
     }
 
@@ -460,7 +460,7 @@ public final class AtomicFiles {
             return f;
         }
         Path named = current != null ? current.entry.target() : slots.get(0).entry.target();
-        String reason = stopping ? "Counterpoise was stopped while writing" : WriteErrors.reason(e);
+        String reason = stopping ? "Counterpoise was stopped while writing" : PlainMessages.writeFailure(e);
         if (reason.contains(MARK)) {
             reason = "the system refused the write";
         }

@@ -86,21 +86,23 @@ class AtomicFilesTest {
     @Test
     void commonWriteErrorsInPlainWordsWithoutTemporaryNames() {
         String temp = ".a.json.counterpoise-12-3.tmp";
-        assertEquals("permission denied", WriteErrors.reason(new AccessDeniedException(temp)));
-        assertEquals("its folder does not exist", WriteErrors.reason(new NoSuchFileException(temp)));
-        assertEquals("the disk is full", WriteErrors.reason(new IOException("No space left on device")));
+        assertEquals("permission denied", PlainMessages.writeFailure(new AccessDeniedException(temp)));
+        assertEquals("its folder does not exist", PlainMessages.writeFailure(new NoSuchFileException(temp)));
+        assertEquals("the disk is full", PlainMessages.writeFailure(new IOException("No space left on device")));
         assertEquals("the disk is full",
-                WriteErrors.reason(new FileSystemException(temp, null, "No space left on device")));
+                PlainMessages.writeFailure(new FileSystemException(temp, null, "No space left on device")));
         assertEquals("the disk is read-only",
-                WriteErrors.reason(new FileSystemException(temp, null, "Read-only file system")));
-        assertEquals("the disk quota is used up", WriteErrors.reason(new IOException("Disk quota exceeded")));
-        assertEquals("stale file handle",
-                WriteErrors.reason(new IOException(new IOException("stale file handle"))).toLowerCase());
-        assertEquals("the system refused it without saying why", WriteErrors.reason(new IOException()));
+                PlainMessages.writeFailure(new FileSystemException(temp, null, "Read-only file system")));
+        assertEquals("the disk quota is used up", PlainMessages.writeFailure(new IOException("Disk quota exceeded")));
+        assertEquals("the disk or network failed while writing",
+                PlainMessages.writeFailure(new IOException(new IOException("Stale file handle"))));
+        assertEquals("the disk or network failed while writing", PlainMessages.writeFailure(new IOException()));
+        assertEquals("the disk is full", PlainMessages.writeFailure(
+                new IOException("Error writing SVG", new IOException("No space left on device"))));
         for (IOException e : List.of(new AccessDeniedException(temp), new FileSystemException(temp, null, "Odd"),
                 new IOException(new java.io.UncheckedIOException(new IOException("x"))))) {
-            assertPlain(WriteErrors.reason(e));
-            assertFalse(WriteErrors.reason(e).contains("counterpoise-"), WriteErrors.reason(e));
+            assertPlain(PlainMessages.writeFailure(e));
+            assertFalse(PlainMessages.writeFailure(e).contains("counterpoise-"), PlainMessages.writeFailure(e));
         }
     }
 

@@ -17,7 +17,7 @@ import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.io.AtomicFiles;
 import org.counterpoise.io.FileWriteException;
-import org.counterpoise.io.WriteErrors;
+import org.counterpoise.io.PlainMessages;
 import org.counterpoise.io.chart.ChartFactory;
 import org.counterpoise.io.chart.ChartFiles;
 import org.counterpoise.io.export.CurveCsv;
@@ -318,7 +318,7 @@ public final class SheetFiles {
             created.addAll(missing);
         } catch (IOException e) {
             throw new InvalidInputException(option, dir.toString(),
-                    "cannot be written here (" + WriteErrors.reason(e) + ")");
+                    "cannot be written here (" + PlainMessages.writeFailure(e) + ")");
         }
     }
 
