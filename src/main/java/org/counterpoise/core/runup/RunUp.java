@@ -193,6 +193,7 @@ public final class RunUp {
         private double nextSample;
         private long samples;
         private double windowStart;
+        private double windowStartPhase;
         private int steps;
 
         Sampler(RunUpEquations equations, double dt, double longestWindow, List<ResponseKind> kinds,
@@ -276,7 +277,7 @@ public final class RunUp {
                 previous1[i] = current[i];
             }
             SpeedRamp ramp = equations.ramp();
-            if (Math.abs(ramp.phaseAt(t) - ramp.phaseAt(windowStart)) >= 2.0 * Math.PI
+            if (ramp.phaseAt(t) - windowStartPhase >= 2.0 * Math.PI
                     || t - windowStart >= longestWindow) {
                 closeWindow(t);
             }
@@ -302,6 +303,7 @@ public final class RunUp {
             windows.add(windowMax.clone());
             java.util.Arrays.fill(windowMax, 0.0);
             windowStart = t;
+            windowStartPhase = equations.ramp().phaseAt(t);
         }
 
         RunUpResult result(SpeedRamp ramp, boolean withAbsorber, int evaluations) {

@@ -106,6 +106,16 @@ public record Project(String name, String notes, StructureInput structure, Distu
         return new Excitation(d.kind(), Checks.positive("disturbance.amplitude.value", d.amplitude().si()), band);
     }
 
+    /**
+     * @return the shaft's angular acceleration at start and stop, rad/s^2, when the file states
+     *     {@code disturbance.run_up_rate}
+     */
+    public java.util.OptionalDouble runUpRate() {
+        QuantityInput rate = disturbance.runUpRate();
+        return rate == null ? java.util.OptionalDouble.empty()
+                : java.util.OptionalDouble.of(Checks.positive("disturbance.run_up_rate.value", rate.si()));
+    }
+
     /** @return the study the core designs */
     public DesignStudy toStudy() {
         AbsorberInput a = absorber;

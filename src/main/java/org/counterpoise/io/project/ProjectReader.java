@@ -154,6 +154,7 @@ public final class ProjectReader {
                 d.pathOf("kind"), "\"" + kindText + "\"", "one of " + Ids.list(ExcitationKind.values())));
         QuantityInput amplitude = d.quantity("amplitude", kind.amplitudeDimension());
         double order = d.number("harmonic_order", 1.0);
+        QuantityInput runUpRate = d.optionalQuantity("run_up_rate", Dimension.ANGULAR_ACCELERATION);
         QuantityInput frequency = d.optionalQuantity("frequency", Dimension.FREQUENCY);
         JsonFields band = d.optionalObject("band");
         if ((frequency == null) == (band == null)) {
@@ -171,7 +172,7 @@ public final class ProjectReader {
             out = new DisturbanceInput(kind, amplitude, frequency, Double.NaN, Double.NaN, null, order);
         }
         d.finish();
-        return out;
+        return out.withRunUpRate(runUpRate);
     }
 
     private static AbsorberInput absorber(JsonFields a) {

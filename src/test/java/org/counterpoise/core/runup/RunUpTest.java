@@ -74,9 +74,9 @@ class RunUpTest {
 
     @Test
     void aVerySlowRunUpReproducesTheSteadyStatePeak() {
-        // Check (1): sweep rate eta = alpha/omega1^2 = 2e-6 (about 6 000 forcing cycles up to
+        // Check (1): sweep rate eta = alpha/omega1^2 = 1e-5 (about 12 000 forcing cycles up to
         // 1.25 omega1); the steady-state peaks are SystemResponse's exact peaks over the same speeds.
-        SpeedRamp ramp = SpeedRamp.runUp(1.25 * OMEGA1, 2e-6 * OMEGA1 * OMEGA1);
+        SpeedRamp ramp = SpeedRamp.runUp(1.25 * OMEGA1, 1e-5 * OMEGA1 * OMEGA1);
         RunUpComparison c = RunUpComparison.of(STRUCTURE, TUNING, ExcitationKind.UNBALANCE, 0.05, ramp,
                 RunUp.Start.REST, ProgressListener.NONE);
         for (ResponseKind k : RunUp.quantities(true)) {
@@ -95,7 +95,7 @@ class RunUpTest {
 
     @Test
     void aVerySlowRunDownReproducesTheSteadyStatePeakAndStartsInTheSteadyState() {
-        SpeedRamp ramp = SpeedRamp.runDown(1.25 * OMEGA1, 2e-6 * OMEGA1 * OMEGA1);
+        SpeedRamp ramp = SpeedRamp.runDown(1.25 * OMEGA1, 1e-5 * OMEGA1 * OMEGA1);
         RunUpResult r = RunUp.simulate(STRUCTURE, null, ExcitationKind.FORCE, 1000.0, ramp,
                 RunUp.Start.STEADY_STATE, ProgressListener.NONE);
         SystemResponse response = new SystemResponse(STRUCTURE, null, ExcitationKind.FORCE, 1000.0);
