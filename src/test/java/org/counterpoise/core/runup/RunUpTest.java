@@ -218,7 +218,8 @@ class RunUpTest {
         for (ResponseKind k : RunUp.quantities(true)) {
             double a = normal.peak(k).orElseThrow().value();
             double b = tight.peak(k).orElseThrow().value();
-            assertEquals(b, a, 1e-6 * b, k.toString());
+            // Measured 8e-9 at the time of writing.
+            assertEquals(b, a, 1e-7 * b, k.toString());
         }
     }
 
