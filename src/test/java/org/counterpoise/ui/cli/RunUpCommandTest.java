@@ -75,6 +75,24 @@ class RunUpCommandTest {
     }
 
     @Test
+    void anUndampedStructureGivesNullAndUnboundedNeverInfinity(@TempDir Path dir) throws Exception {
+        String text = Files.readString(Path.of(FAN));
+        String undamped = text.replaceFirst("\"damping\": \\{[^}]*}", "\"damping\": {\"ratio\": 0}");
+        assertTrue(!undamped.equals(text), "the preset's damping was replaced");
+        Path file = dir.resolve("undamped.json");
+        Files.writeString(file, undamped);
+        Run r = CliTest.run("runup", file.toString(), "--rate", "30", "--json");
+        assertEquals(0, r.code(), r.err());
+        JsonObject without = strictJson(r.out()).getAsJsonObject("without_absorber");
+        assertTrue(without.get("steady_peak_structure_displacement_m").isJsonNull());
+        assertTrue(without.get("steady_peak_structure_displacement_m_unbounded").getAsBoolean());
+        // The transit itself stays finite: the undamped passage peaks near 1.17 sqrt(pi/(2 eta)) times static.
+        assertTrue(without.get("peak_structure_displacement_m").getAsDouble() > 0);
+        Run text2 = CliTest.run("runup", file.toString(), "--rate", "30");
+        assertTrue(text2.out().contains("unbounded (undamped resonance)"), text2.out());
+    }
+
+    @Test
     void runDownStartsFromSteadyRunning() {
         Run r = CliTest.run("runup", FAN, "--rate", "40", "--run-down", "--final-speed", "1000", "--json");
         assertEquals(0, r.code(), r.err());
