@@ -1,8 +1,10 @@
 package org.counterpoise.core.runup;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.EnumMap;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 import org.apache.commons.math3.exception.MathIllegalStateException;
 import org.apache.commons.math3.ode.nonstiff.DormandPrince853Integrator;
@@ -109,7 +111,7 @@ public final class RunUp {
     public static RunUpResult simulate(Structure structure, Tuning tuning, ExcitationKind kind, double amplitude,
             SpeedRamp ramp, Start start, ProgressListener listener, double tolerance) {
         if (ramp.forcingCycles() > MAX_CYCLES) {
-            throw new InvalidInputException("run_up.rate", String.format(java.util.Locale.ROOT,
+            throw new InvalidInputException("run_up.rate", String.format(Locale.ROOT,
                     "a ramp of %.3g forcing cycles", ramp.forcingCycles()),
                     "at most " + (long) MAX_CYCLES + " forcing cycles; choose a faster rate or a lower final speed");
         }
@@ -170,7 +172,7 @@ public final class RunUp {
     }
 
     private static String hz(double omega) {
-        return String.format(java.util.Locale.ROOT, "%.4g Hz", omega / (2.0 * Math.PI));
+        return String.format(Locale.ROOT, "%.4g Hz", omega / (2.0 * Math.PI));
     }
 
     /** Samples the dense output, tracks peaks and the per-cycle envelope, polls the listener. */
@@ -325,7 +327,7 @@ public final class RunUp {
             windowTimes.add(middle);
             windowSpeeds.add(equations.ramp().speedAt(middle));
             windows.add(windowMax.clone());
-            java.util.Arrays.fill(windowMax, 0.0);
+            Arrays.fill(windowMax, 0.0);
             windowStart = t;
             windowStartPhase = equations.ramp().phaseAt(t);
         }
