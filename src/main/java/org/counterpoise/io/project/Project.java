@@ -45,18 +45,26 @@ public record Project(String name, String notes, StructureInput structure, Distu
             throw new InvalidInputException("structure.weight", "given with structure.mass",
                     "give either structure.mass or structure.weight, not both");
         }
-        Double mass = s.mass() != null ? Checks.positive("structure.mass.value", s.mass().si())
-                : s.weight() != null ? StructureConversions.massFromWeight(s.weight().si()) : null;
+        // No mixed double/null conditional here: unboxing its null result was a NullPointerException
+        // for the documented form "stiffness and natural frequency without a mass".
+        boolean massGiven = s.mass() != null || s.weight() != null;
+        double mass = s.mass() != null ? Checks.positive("structure.mass.value", s.mass().si())
+                : s.weight() != null ? StructureConversions.massFromWeight(s.weight().si()) : Double.NaN;
         int stiffnessForms = count(s.stiffness(), s.naturalFrequency(), s.staticDeflection());
         double stiffness;
-        if (mass == null) {
+        if (!massGiven) {
+            if (s.staticDeflection() != null) {
+                throw new InvalidInputException("structure.static_deflection", "given without a mass",
+                        "a static deflection needs structure.mass or structure.weight beside it");
+            }
             if (s.stiffness() == null || s.naturalFrequency() == null) {
                 throw InvalidInputException.missing("structure.mass",
                         "give structure.mass or structure.weight, or both structure.stiffness and"
                                 + " structure.natural_frequency");
             }
             stiffness = Checks.positive("structure.stiffness.value", s.stiffness().si());
-            mass = StructureConversions.massFromFrequency(stiffness, s.naturalFrequency().si());
+            mass = StructureConversions.massFromFrequency(stiffness,
+                    Checks.positive("structure.natural_frequency.value", s.naturalFrequency().si()));
         } else if (stiffnessForms != 1) {
             throw new InvalidInputException("structure", stiffnessForms + " stiffness entries",
                     "with a mass or weight give exactly one of structure.stiffness, structure.natural_frequency"
