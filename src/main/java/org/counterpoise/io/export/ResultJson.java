@@ -100,6 +100,9 @@ public final class ResultJson {
     private static void tolerance(JsonObject o, String key, org.counterpoise.core.robust.DetuningRange range) {
         number(o, "tolerated_" + key + "_factor_low", range.low());
         number(o, "tolerated_" + key + "_factor_high", range.high());
+        if (range.ofBareResponse()) {
+            o.addProperty("tolerated_" + key + "_basis", "below allowance times bare structure response");
+        }
     }
 
     private static void peak(JsonObject o, String key, ResponsePeak p) {

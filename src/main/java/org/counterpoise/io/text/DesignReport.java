@@ -137,7 +137,9 @@ public final class DesignReport {
         if (!range.defined()) {
             return "not defined (the nominal response is zero or unbounded)";
         }
-        return side(range.low(), power, range.searchLimit(), -1) + " to " + side(range.high(), power, range.searchLimit(), 1);
+        return side(range.low(), power, range.searchLimit(), -1) + " to " + side(range.high(), power, range.searchLimit(), 1)
+                + (range.ofBareResponse() ? " (response kept below " + QuantityFormat.number(100 * range.allowance(), 2)
+                        + " % of the bare structure's: the design cancels it at its one speed)" : "");
     }
 
     private static String side(double factor, int power, double limit, int sign) {
