@@ -71,6 +71,13 @@ public final class ResultJson {
         number(o, "detuning_softer_factor", r.detuning().lowerFactor());
         number(o, "mass_change_lighter_factor", r.massDetuning().raiseFactor());
         number(o, "mass_change_heavier_factor", r.massDetuning().lowerFactor());
+        r.rms().ifPresent(rms -> {
+            o.addProperty("spectrum", "white-noise");
+            number(o, "psd_level_SI_per_Hz", rms.psdLevel());
+            number(o, "rms_before", rms.before());
+            number(o, "rms_after", rms.after());
+            number(o, "rms_stroke_m", rms.stroke());
+        });
         tolerance(o, "structure_frequency", r.structureTolerance());
         tolerance(o, "absorber_frequency", r.absorberTolerance());
         o.addProperty("tolerance_allowance", DesignResult.TOLERANCE_ALLOWANCE);

@@ -12,6 +12,7 @@ import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.model.DampingConversions;
 import org.counterpoise.core.model.Excitation;
 import org.counterpoise.core.model.FrequencyBand;
+import org.counterpoise.core.model.Spectrum;
 import org.counterpoise.core.model.Structure;
 import org.counterpoise.core.model.StructureConversions;
 import org.counterpoise.core.response.ResponseKind;
@@ -111,7 +112,13 @@ public record Project(String name, String notes, StructureInput structure, Distu
             double w = Checks.positive("disturbance.frequency.value", d.frequency().si());
             band = FrequencyBand.ofRotor(w, w, order);
         }
-        return new Excitation(d.kind(), Checks.positive("disturbance.amplitude.value", d.amplitude().si()), band);
+        Spectrum spectrum = Spectrum.HARMONIC;
+        if (d.spectrum() != null && d.spectrum().kind() == Spectrum.Kind.WHITE_NOISE) {
+            spectrum = Spectrum.whiteNoise(Checks.positive("disturbance.spectrum.psd.value",
+                    d.spectrum().psdUnit().toSi(d.spectrum().psdValue())));
+        }
+        return new Excitation(d.kind(), Checks.positive("disturbance.amplitude.value", d.amplitude().si()), band,
+                spectrum);
     }
 
     /** @return the study the core designs */

@@ -86,6 +86,17 @@ public final class ProjectWriter {
             o.add("frequency", quantity(d.frequency()));
         }
         o.addProperty("harmonic_order", d.harmonicOrder());
+        if (d.spectrum() != null) {
+            JsonObject spectrum = new JsonObject();
+            spectrum.addProperty("kind", d.spectrum().kind().id());
+            if (d.spectrum().psdUnit() != null) {
+                JsonObject psd = new JsonObject();
+                psd.addProperty("value", d.spectrum().psdValue());
+                psd.addProperty("unit", d.spectrum().psdUnit().symbol());
+                spectrum.add("psd", psd);
+            }
+            o.add("spectrum", spectrum);
+        }
         return o;
     }
 
