@@ -14,7 +14,8 @@ import org.counterpoise.core.response.TuningSensitivity;
  * stationarity for a pointwise maximum): there are multipliers lambda_i &gt;= 0, sum 1, with
  * r = sum lambda_i grad ln h_i having r_j = 0 for a free variable inside the box, r_j &gt;= 0 for a
  * variable at its lower bound and r_j &lt;= 0 at its upper bound. The measure returned is the least
- * violation over the simplex, relative to the largest active gradient; it is found by projected
+ * violation over the simplex, each variable relative to its largest active gradient component;
+ * it is found by projected
  * gradient descent on the simplex (a small convex problem; 4000 steps, far beyond what two
  * variables and a handful of maxima need).
  *
@@ -91,10 +92,21 @@ final class MinimaxCertificate {
         int[] side = {boundSide(tuningFree, f, p.minTuning(), p.maxTuning()),
             boundSide(dampingFree, zeta, 0.0, PeakProblem.MAX_DAMPING)};
         int k = gradients.size();
+        // Each variable is scaled by its own largest active component (a diagonal change of
+        // variables leaves the conditions unchanged): a violation in a variable whose gradients
+        // are small (the damping near zeta_a = 0 beside a sharp peak in f) is not drowned by the other.
+        double[] scale = new double[2];
+        for (double[] gi : gradients) {
+            scale[0] = Math.max(scale[0], Math.abs(gi[0]));
+            scale[1] = Math.max(scale[1], Math.abs(gi[1]));
+        }
         double[][] g = new double[k][];
         double lipschitz = 0;
         for (int i = 0; i < k; i++) {
-            g[i] = new double[] {gradients.get(i)[0] / largest, gradients.get(i)[1] / largest};
+            g[i] = new double[2];
+            for (int j = 0; j < 2; j++) {
+                g[i][j] = scale[j] > 1e-14 * largest && scale[j] > 1e-300 ? gradients.get(i)[j] / scale[j] : 0.0;
+            }
             lipschitz += g[i][0] * g[i][0] + g[i][1] * g[i][1];
         }
         double step = 0.5 / Math.max(lipschitz, 1e-12);
