@@ -139,7 +139,9 @@ public final class Designer {
                     "tuned to one forcing frequency");
             case EXACT_PEAK -> exactPeak(study, peakProblem(study, mu), warnings);
             case ROBUST_PEAK -> {
-                Tuning nominal = exactPeak(study, peakProblem(study, mu), new ArrayList<>()).tuning();
+                // the nominal optimum is only a seed here (the robust design is never worse than it),
+                // so an uncertified one is still a useful start
+                Tuning nominal = HInfinityOptimiser.optimise(peakProblem(study, mu)).tuning();
                 RobustnessSettings r = study.robustness();
                 RobustDesign robust = RobustnessAnalysis.robustDesign(new Mistuning(structure, excitation,
                         study.response()), nominal, r.structureRange(), r.absorberRange());
