@@ -145,6 +145,20 @@ public final class HInfinityOptimiser {
         for (double[] point : scan) {
             scanBest = Math.min(scanBest, point[2]);
         }
+        if (!best.converged) {
+            // No active set was solved: Nelder-Mead may have stalled in a narrow valley. Restart it
+            // from the best point with smaller simplices (the usual remedy), then certify.
+            for (double size : new double[] {0.01, 0.001}) {
+                double[] again = nelderMead(problem, new double[] {best.f, best.zeta}, counter, size);
+                best.offer(again[0], again[1], peakOf(problem, again[0], again[1], counter), "search", false);
+            }
+            // and from the best scan points: a flat problem can hold nearby local minima
+            for (int i = 0; i < Math.min(3, scan.size()); i++) {
+                double[] s0 = scan.get(i);
+                double[] again = nelderMead(problem, new double[] {s0[0], s0[1]}, counter, 0.02);
+                best.offer(again[0], again[1], peakOf(problem, again[0], again[1], counter), "search", false);
+            }
+        }
         double violation = MinimaxCertificate.violation(problem, best.f, best.zeta);
         for (int attempt = 0; attempt < 2 && violation > MinimaxCertificate.STATIONARY; attempt++) {
             // a point where the first-order conditions fail has a descent direction: search on
@@ -549,6 +563,10 @@ public final class HInfinityOptimiser {
     }
 
     private static double[] nelderMead(PeakProblem p, double[] start, Counter counter) {
+        return nelderMead(p, start, counter, 0.05);
+    }
+
+    private static double[] nelderMead(PeakProblem p, double[] start, Counter counter, double size) {
         // Search in logarithms so that f and zeta_a stay positive without bounds.
         // The box is kept by clamping each trial into it and adding the distance outside as a
         // penalty (a continuous exact penalty), so no trial is ever built outside the box.
@@ -571,7 +589,7 @@ public final class HInfinityOptimiser {
         });
         try {
             new SimplexOptimizer(1e-12, 1e-14).optimize(new MaxEval(MAX_SIMPLEX_EVALUATIONS), objective,
-                    GoalType.MINIMIZE, new InitialGuess(guess), new NelderMeadSimplex(new double[] {0.05, 0.3}));
+                    GoalType.MINIMIZE, new InitialGuess(guess), new NelderMeadSimplex(new double[] {size, 6 * size}));
         } catch (TooManyEvaluationsException limit) {
             // the best point seen is kept; certification decides whether it is an optimum
         }

@@ -410,6 +410,8 @@ public final class WizardFrame extends JFrame {
         goal.massChart().message("Fix the inputs to see the curve.");
         if (cause instanceof InvalidInputException bad) {
             route(bad);
+        } else if (cause instanceof org.counterpoise.core.error.NotFoundException notFound) {
+            status.setText(notFound.getMessage()); // a plain sentence: no certified optimum, what to try
         } else {
             java.util.logging.Logger.getLogger("counterpoise").log(java.util.logging.Level.WARNING, "design failed",
                     cause);
