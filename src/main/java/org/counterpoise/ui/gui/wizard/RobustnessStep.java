@@ -22,7 +22,6 @@ import org.counterpoise.ui.gui.document.ProjectEdits;
 import org.counterpoise.ui.gui.field.Form;
 import org.counterpoise.ui.gui.field.QuantityField;
 import org.counterpoise.ui.gui.plot.ChartHost;
-import org.knowm.xchart.XChartPanel;
 
 /** Step 5: how the design fares off-tune, the robust alternative and the tolerance Monte Carlo. */
 final class RobustnessStep extends Step {
@@ -55,7 +54,7 @@ final class RobustnessStep extends Step {
     private final JLabel summary = new JLabel(" ");
     private final ChartHost sensitivity = new ChartHost("chart.sensitivity");
     private final ChartHost histogram = new ChartHost("chart.histogram");
-    private final JPanel mapHolder = new JPanel(new BorderLayout());
+    private final ChartHost mapHolder = new ChartHost("chart.map");
     private final JComponent page;
 
     RobustnessStep() {
@@ -94,7 +93,6 @@ final class RobustnessStep extends Step {
         tolerancesForm.end();
         summary.setName("robustness.summary");
         summary.setBorder(javax.swing.BorderFactory.createEmptyBorder(4, 14, 8, 14));
-        mapHolder.setName("chart.map");
         JPanel left = new JPanel(new GridLayout(2, 1, 0, 6));
         left.add(sensitivity);
         left.add(histogram);
@@ -213,7 +211,7 @@ final class RobustnessStep extends Step {
         if (design == null || r == null) {
             sensitivity.message(design == null ? "Fix the inputs to see the robustness study." : "computing\u2026");
             histogram.message(" ");
-            mapHolder.removeAll();
+            mapHolder.message(" ");
             summary.setText(" ");
             return;
         }
@@ -227,24 +225,16 @@ final class RobustnessStep extends Step {
                 + (Double.isNaN(mc.probabilityExceeding()) ? "" : "; above the target of "
                         + DisplayUnits.format(r.settings().target(), unitDim) + ": "
                         + QuantityFormat.number(100 * mc.probabilityExceeding(), 3) + " %") + "</html>");
-        sensitivity.show(RobustnessCharts.sensitivity(design, r, 420, 320));
-        histogram.show(RobustnessCharts.histogram(design, mc, 420, 320));
-        mapHolder.removeAll();
-        XChartPanel<?> map = new XChartPanel<>(RobustnessCharts.map(design, r, 520, 480, 3));
-        // The application's shortcuts win: XChart's own Ctrl+S/Ctrl+P would open its save dialog.
-        map.getInputMap(JComponent.WHEN_IN_FOCUSED_WINDOW).clear();
-        mapHolder.add(map, BorderLayout.CENTER);
-        mapHolder.revalidate();
-        mapHolder.repaint();
+        sensitivity.show(theme -> RobustnessCharts.sensitivity(design, r, theme, 420, 320));
+        histogram.show(theme -> RobustnessCharts.histogram(design, mc, theme, 420, 320));
+        mapHolder.show(theme -> RobustnessCharts.map(design, r, theme, 520, 480, 3));
     }
 
     /** Says the study was cancelled (instead of a stale or half-made result). */
     void cancelled() {
         sensitivity.message("The robustness study was cancelled; it runs again after the next edit.");
         histogram.message(" ");
-        mapHolder.removeAll();
-        mapHolder.revalidate();
-        mapHolder.repaint();
+        mapHolder.message(" ");
         summary.setText(" ");
     }
 
