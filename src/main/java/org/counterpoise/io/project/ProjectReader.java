@@ -173,6 +173,7 @@ public final class ProjectReader {
         QuantityInput amplitude = d.quantity("amplitude", kind.amplitudeDimension());
         double order = PhysicalRange.HARMONIC_ORDER.check(d.pathOf("harmonic_order"), d.number("harmonic_order", 1.0),
                 null);
+        QuantityInput runUpRate = d.optionalQuantity("run_up_rate", Dimension.ANGULAR_ACCELERATION);
         QuantityInput frequency = d.optionalQuantity("frequency", Dimension.FREQUENCY);
         JsonFields band = d.optionalObject("band");
         if ((frequency == null) == (band == null)) {
@@ -188,12 +189,12 @@ public final class ProjectReader {
             PhysicalRange.FREQUENCY.check(band.pathOf("low"), low, unit);
             PhysicalRange.FREQUENCY.check(band.pathOf("high"), high, unit);
             band.finish();
-            out = new DisturbanceInput(kind, amplitude, null, low, high, unit, order, spectrum);
+            out = new DisturbanceInput(kind, amplitude, null, low, high, unit, order, null, spectrum);
         } else {
-            out = new DisturbanceInput(kind, amplitude, frequency, Double.NaN, Double.NaN, null, order, spectrum);
+            out = new DisturbanceInput(kind, amplitude, frequency, Double.NaN, Double.NaN, null, order, null, spectrum);
         }
         d.finish();
-        return out;
+        return out.withRunUpRate(runUpRate);
     }
 
     /**
