@@ -73,6 +73,15 @@ public record DesignResult(DesignStudy study, String methodSource, String method
         return coupledNaturalFrequencies.clone();
     }
 
+    /**
+     * @return the rms figures when the disturbance is white noise (computed on each call, from
+     *     the exact mean square), empty for a harmonic disturbance
+     */
+    public java.util.Optional<RmsFigures> rms() {
+        return study.excitation().spectrum().isWhiteNoise() ? java.util.Optional.of(RmsFigures.of(this))
+                : java.util.Optional.empty();
+    }
+
     /** @return before over after for the response that matters; +infinity when before is unbounded */
     public double reductionFactor() {
         return responseBefore.value() / responseAfter.value();

@@ -79,6 +79,25 @@ public record DesignStudy(String name, Structure structure, Excitation excitatio
             throw new org.counterpoise.core.error.InvalidInputException("absorber.method", method.id(),
                     "a stroke limit, fixed damping or fixed tuning needs the exact-peak method");
         }
+        if (excitation.spectrum().isWhiteNoise()) {
+            if (excitation.kind() != org.counterpoise.core.model.ExcitationKind.FORCE
+                    && excitation.kind() != org.counterpoise.core.model.ExcitationKind.BASE_ACCELERATION) {
+                throw new org.counterpoise.core.error.InvalidInputException("disturbance.spectrum",
+                        "white-noise " + excitation.kind().label(),
+                        "white noise is a force or a base acceleration; choose disturbance.kind force or"
+                                + " base-acceleration, or a harmonic spectrum");
+            }
+            if (method != DesignMethod.EXACT_VARIANCE && method != DesignMethod.MINIMUM_VARIANCE) {
+                throw new org.counterpoise.core.error.InvalidInputException("absorber.method", method.id(),
+                        "under white noise the design minimises the rms response: choose exact-variance (any"
+                                + " structure damping) or minimum-variance (the published closed form)");
+            }
+            if (sizing.byTarget() || constraints.any()) {
+                throw new org.counterpoise.core.error.InvalidInputException("absorber", "a target or a constraint",
+                        "targets, stroke limits and fixed tuning or damping work on peaks; leave them out under"
+                                + " white noise");
+            }
+        }
         if (response.needsAbsorber()) {
             throw new org.counterpoise.core.error.InvalidInputException("absorber.response", response.name(),
                     "the response to reduce must be a response of the structure, not of the absorber");

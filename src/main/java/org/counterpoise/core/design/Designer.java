@@ -6,9 +6,11 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import org.counterpoise.core.error.InvalidInputException;
+import org.counterpoise.core.error.NotFoundException;
 import org.counterpoise.core.error.Warning;
 import org.counterpoise.core.model.Absorber;
 import org.counterpoise.core.model.Excitation;
+import org.counterpoise.core.model.ExcitationKind;
 import org.counterpoise.core.model.FrequencyBand;
 import org.counterpoise.core.model.Structure;
 import org.counterpoise.core.model.Tuning;
@@ -137,7 +139,9 @@ public final class Designer {
                     "tuned to one forcing frequency");
             case EXACT_PEAK -> exactPeak(study, peakProblem(study, mu), warnings);
             case ROBUST_PEAK -> {
-                Tuning nominal = exactPeak(study, peakProblem(study, mu), new ArrayList<>()).tuning();
+                // the nominal optimum is only a seed here (the robust design is never worse than it),
+                // so an uncertified one is still a useful start
+                Tuning nominal = HInfinityOptimiser.optimise(peakProblem(study, mu)).tuning();
                 RobustnessSettings r = study.robustness();
                 RobustDesign robust = RobustnessAnalysis.robustDesign(new Mistuning(structure, excitation,
                         study.response()), nominal, r.structureRange(), r.absorberRange());
@@ -153,14 +157,17 @@ public final class Designer {
                 VarianceOptimum o = VarianceOptimiser.optimise(PeakProblem.allFrequencies(excitation.kind(),
                         study.response(), mu, structure.dampingRatio()));
                 if (!o.converged()) {
-                    warnings.add(new Warning("OPTIMUM_NOT_VERIFIED", "The minimum-variance search stopped before"
-                            + " its convergence test was met; the design is the best found."));
+                    throw new NotFoundException("certified exact-variance optimum", "the search could not confirm that"
+                            + " no other tuning and damping gives a smaller mean square", NOT_FOUND_ADVICE);
                 }
                 yield new ClosedForm(o.tuning(), EXACT_SOURCE,
                         "exact minimum of the mean square under white noise over all frequencies");
             }
         };
     }
+
+    private static final String NOT_FOUND_ADVICE = "choose another method (equal-peak or robust-peak), or change"
+            + " the band or the mass ratio slightly";
 
     private static final String EXACT_SOURCE = "exact optimum computed by Counterpoise (docs/optimiser.md),"
             + " checked against Nishihara and Asami (2002), Crandall and Mark (1963) and Warburton (1982)";
@@ -171,10 +178,10 @@ public final class Designer {
         FrequencyBand band = study.excitation().band();
         double omega1 = s.naturalFrequency();
         DesignConstraints c = study.constraints();
-        PeakProblem p = band.isSingle()
-                ? PeakProblem.allFrequencies(study.excitation().kind(), study.response(), mu, s.dampingRatio())
-                : new PeakProblem(study.excitation().kind(), study.response(), mu, s.dampingRatio(),
-                        band.low() / omega1, band.high() / omega1, Double.NaN, Double.NaN);
+        double[] g = band.isSingle() ? singleSpeedBand(study.excitation().kind(), study.response(), mu,
+                s.dampingRatio(), band.low() / omega1) : new double[] {band.low() / omega1, band.high() / omega1};
+        PeakProblem p = new PeakProblem(study.excitation().kind(), study.response(), mu, s.dampingRatio(), g[0], g[1],
+                Double.NaN, Double.NaN);
         if (!Double.isNaN(c.fixedDampingRatio())) {
             p = p.withFixedDamping(c.fixedDampingRatio());
         }
@@ -188,19 +195,47 @@ public final class Designer {
         return p;
     }
 
+    /**
+     * The band of frequency ratios a peak design uses for ONE forcing frequency g0: all frequencies
+     * (which also covers start-up and mistuning), unless the response has no finite peak there for
+     * any absorber (a pole at zero frequency, or a response growing without bound with frequency,
+     * such as velocity under unbalance); then the run-up [0, g0], the speeds passed on start-up;
+     * and when that too is unbounded, the octave either side of the speed [g0 / 2, 2 g0].
+     * Whether a peak is finite does not depend on the absorber's tuning or (positive) damping, so
+     * Den Hartog's design decides it.
+     */
+    static double[] singleSpeedBand(ExcitationKind kind, ResponseKind response, double mu, double zeta1, double g0) {
+        Tuning probe = org.counterpoise.core.tuning.DenHartogEqualPeak.tuning(mu);
+        org.counterpoise.core.response.TransferFunction h =
+                org.counterpoise.core.response.TransferFunctions.of(kind, response, zeta1, probe);
+        double[][] choices = {{0.0, Double.POSITIVE_INFINITY}, {0.0, g0}, {0.5 * g0, 2 * g0}};
+        for (double[] c : choices) {
+            if (Double.isFinite(org.counterpoise.core.response.PeakFinder.over(h, c[0], c[1]).magnitude())) {
+                return c;
+            }
+        }
+        return choices[2];
+    }
+
     private static ClosedForm exactPeak(DesignStudy study, PeakProblem problem, List<Warning> warnings) {
         return exactPeakResult(study, HInfinityOptimiser.optimise(problem), warnings);
     }
 
     private static ClosedForm exactPeakResult(DesignStudy study, PeakOptimum o, List<Warning> warnings) {
         if (!o.converged()) {
-            warnings.add(new Warning("OPTIMUM_NOT_VERIFIED", "The optimality conditions could not be verified for"
-                    + " this case; the design is the best found by a direct search of the exact peak."));
+            throw new NotFoundException("certified exact-peak optimum", "the search could not confirm that no other"
+                    + " tuning and damping gives a lower peak", NOT_FOUND_ADVICE);
         }
         if (study.excitation().band().isSingle()) {
+            PeakProblem used = peakProblem(study, o.tuning().massRatio());
+            String over = used.allFrequencies() ? "over all frequencies, which also covers start-up and mistuning"
+                    : used.bandLow() == 0 ? "over the speeds passed on start-up, up to the forcing frequency (the"
+                            + " response has no finite peak over all frequencies)"
+                    : "over the octave either side of the forcing frequency (the response has no finite peak over"
+                            + " all frequencies or over start-up)";
             warnings.add(new Warning("SINGLE_FREQUENCY_EXACT", "The disturbance has one frequency: the exact-peak"
-                    + " design minimises the peak over all frequencies, which also covers start-up and mistuning;"
-                    + " for the least response at that one frequency choose undamped-single-speed."));
+                    + " design minimises the peak " + over + "; for the least response at that one frequency choose"
+                    + " undamped-single-speed."));
         }
         String note = "maxima equal at the optimum: " + o.activeSet()
                 + (o.activeConstraint().equals("none") ? "" : "; active constraint: " + o.activeConstraint());

@@ -65,8 +65,9 @@ public record Structure(double modalMass, double modalStiffness, double dampingR
      *     damping ratio changes as 1/sqrt(k)), which is what stiffening a real structure does
      */
     public Structure withStiffnessKeepingDamper(double stiffness) {
-        double c = 2.0 * dampingRatio * Math.sqrt(modalStiffness * modalMass);
-        double zeta = c / (2.0 * Math.sqrt(stiffness * modalMass));
+        // c1 = 2 zeta sqrt(k m) kept: zeta' = zeta sqrt(k / k'), written as a ratio so that
+        // sqrt(k m) cannot underflow or overflow (it did at 1e-300 kg, giving 0/0)
+        double zeta = dampingRatio * Math.sqrt(modalStiffness / stiffness);
         return new Structure(modalMass, stiffness, Math.min(zeta, 0.99), modeShapeAtAbsorber);
     }
 
@@ -75,8 +76,7 @@ public record Structure(double modalMass, double modalStiffness, double dampingR
      * @return this structure with another mass and the same viscous damper (c1 kept)
      */
     public Structure withMassKeepingDamper(double mass) {
-        double c = 2.0 * dampingRatio * Math.sqrt(modalStiffness * modalMass);
-        double zeta = c / (2.0 * Math.sqrt(modalStiffness * mass));
+        double zeta = dampingRatio * Math.sqrt(modalMass / mass); // c1 kept, as a ratio (see above)
         return new Structure(mass, modalStiffness, Math.min(zeta, 0.99), modeShapeAtAbsorber);
     }
 

@@ -177,7 +177,7 @@ final class ActiveSetNewton {
         double[] s = solution(u);
         double f = s[0];
         double zeta = s[1];
-        if (!(f > 0) || !(zeta >= 0) || !(zeta < 5) || !(f < 20)) {
+        if (!(f > 0) || !(zeta >= 0) || !problem.inBox(f, zeta)) {
             return null;
         }
         int k = interior.length;

@@ -4,7 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import org.apache.commons.math3.optim.InitialGuess;
 import org.apache.commons.math3.optim.MaxEval;
-import org.apache.commons.math3.optim.PointValuePair;
+import org.apache.commons.math3.exception.TooManyEvaluationsException;
 import org.apache.commons.math3.optim.nonlinear.scalar.GoalType;
 import org.apache.commons.math3.optim.nonlinear.scalar.ObjectiveFunction;
 import org.apache.commons.math3.optim.nonlinear.scalar.noderiv.NelderMeadSimplex;
@@ -52,8 +52,17 @@ public final class HInfinityOptimiser {
     private static final double SEED_CUTOFF = 1.2;
     private static final int SCAN_TUNINGS = 16;
     private static final double MIN_DAMPING = 1e-4;
-    private static final double MAX_DAMPING = 4.0;
+    private static final double MAX_DAMPING = PeakProblem.MAX_DAMPING;
     private static final int SCAN_DAMPINGS = 10;
+    private static final int SCAN_BOX_TUNINGS = 48;
+    private static final int SCAN_BAND_TUNINGS = 12;
+    private static final int SCAN_BOX_DAMPINGS = 15;
+    /** A scan point must beat the optimum by this much (relative) to force a restart. */
+    private static final double SCAN_MARGIN = 1e-9;
+    private static final int MAX_RESTARTS = 4;
+    /** A probe must lower the peak by this much (relative) to refute a stationary point. */
+    private static final double PROBE_MARGIN = 1e-9;
+    private static final int MAX_SIMPLEX_EVALUATIONS = 4000;
 
     private HInfinityOptimiser() {
     }
@@ -108,15 +117,179 @@ public final class HInfinityOptimiser {
             solveFrom(problem, seed[0], seed[1], best, counter);
         }
         if (!best.converged) {
-            double[] start = {best.f, best.zeta};
-            double[] near = nelderMead(problem, start, counter);
-            best.offer(near[0], near[1], peakOf(problem, near[0], near[1], counter), "search", false);
-            solveFrom(problem, near[0], near[1], best, counter);
+            polish(problem, best, counter);
         }
+        // Certification, independent of how the design was found: never worse than a coarse scan
+        // of the whole search box and the classical designs (restart from any point that beats
+        // it), and the first-order minimax conditions hold (MinimaxCertificate).
+        List<double[]> scan = globalScan(problem, counter);
+        for (int restart = 0; restart < MAX_RESTARTS; restart++) {
+            double[] better = null;
+            for (double[] point : scan) {
+                if (point[2] < best.peak * (1 - SCAN_MARGIN)) {
+                    better = point;
+                    break;
+                }
+            }
+            if (better == null) {
+                break;
+            }
+            scan.remove(better);
+            best.offer(better[0], better[1], better[2], "scan", false);
+            solveFrom(problem, better[0], better[1], best, counter);
+            if (!best.converged) {
+                polish(problem, best, counter);
+            }
+        }
+        double scanBest = scan.isEmpty() ? Double.POSITIVE_INFINITY : scan.get(0)[2];
+        for (double[] point : scan) {
+            scanBest = Math.min(scanBest, point[2]);
+        }
+        if (!best.converged) {
+            // No active set was solved: Nelder-Mead may have stalled in a narrow valley. Restart it
+            // from the best point with smaller simplices (the usual remedy), then certify.
+            for (double size : new double[] {0.01, 0.001}) {
+                double[] again = nelderMead(problem, new double[] {best.f, best.zeta}, counter, size);
+                best.offer(again[0], again[1], peakOf(problem, again[0], again[1], counter), "search", false);
+            }
+            // and from the best scan points: a flat problem can hold nearby local minima
+            for (int i = 0; i < Math.min(3, scan.size()); i++) {
+                double[] s0 = scan.get(i);
+                double[] again = nelderMead(problem, new double[] {s0[0], s0[1]}, counter, 0.02);
+                best.offer(again[0], again[1], peakOf(problem, again[0], again[1], counter), "search", false);
+            }
+        }
+        double violation = MinimaxCertificate.violation(problem, best.f, best.zeta);
+        for (int attempt = 0; attempt < 2 && violation > MinimaxCertificate.STATIONARY; attempt++) {
+            // a point where the first-order conditions fail has a descent direction: search on
+            polish(problem, best, counter);
+            violation = MinimaxCertificate.violation(problem, best.f, best.zeta);
+        }
+        counter.count++;
+        boolean stationary = violation <= MinimaxCertificate.STATIONARY
+                || noDescentByProbe(problem, best.f, best.zeta, best.peak, counter);
+        boolean certified = Double.isFinite(best.peak) && best.peak <= scanBest * (1 + SCAN_MARGIN) && stationary;
         String constraint = !Double.isNaN(problem.fixedDamping()) ? "fixed damping"
                 : !Double.isNaN(problem.fixedTuning()) ? "fixed tuning" : "none";
-        return new PeakOptimum(problem.tuning(best.f, best.zeta), best.peak, best.activeSet, counter.count,
-                best.converged, constraint);
+        if (Double.isNaN(problem.fixedTuning()) && (best.f <= problem.minTuning() * (1 + 1e-9)
+                || best.f >= problem.maxTuning() * (1 - 1e-9))) {
+            constraint = "tuning-ratio search bound";
+        }
+        return new PeakOptimum(problem.tuning(best.f, best.zeta), best.peak,
+                best.converged || !certified ? best.activeSet : "stationary point of the peak (direct search)",
+                counter.count, certified, constraint);
+    }
+
+    /**
+     * The fallback first-order test, on values: where the gradient test fails only because the
+     * optimum is too flat in one variable to locate it to round-off (a very narrow band, a tiny
+     * damping), no move of 10^-1 ... 10^-8 (relative in f; times max(zeta_a, 0.01) in zeta_a) in
+     * any of the eight directions of the (f, zeta_a) plane, inside the box, lowers the peak by more
+     * than 1e-9 relative.
+     */
+    private static boolean noDescentByProbe(PeakProblem p, double f, double zeta, double peak, Counter counter) {
+        double floor = peak * (1 - PROBE_MARGIN);
+        boolean tuningFree = Double.isNaN(p.fixedTuning());
+        boolean dampingFree = Double.isNaN(p.fixedDamping());
+        for (int k = 1; k <= 8; k++) {
+            double h = Math.pow(10, -k);
+            for (int a = -1; a <= 1; a++) {
+                for (int b = -1; b <= 1; b++) {
+                    if ((a == 0 && b == 0) || (a != 0 && !tuningFree) || (b != 0 && !dampingFree)) {
+                        continue;
+                    }
+                    double ft = f * (1 + a * h);
+                    double zt = zeta + b * h * Math.max(zeta, 1e-2);
+                    if (zt < 0 || !p.inBox(ft, zt)) {
+                        continue;
+                    }
+                    if (peakOf(p, ft, zt, counter) < floor) {
+                        return false;
+                    }
+                }
+            }
+        }
+        return true;
+    }
+
+    /** Nelder-Mead on the exact peak from the best point so far, then the active sets from there. */
+    private static void polish(PeakProblem problem, Best best, Counter counter) {
+        double[] near = nelderMead(problem, new double[] {best.f, best.zeta}, counter);
+        best.offer(near[0], near[1], peakOf(problem, near[0], near[1], counter), "search", false);
+        solveFrom(problem, near[0], near[1], best, counter);
+        if (Double.isNaN(problem.fixedDamping()) && Double.isNaN(problem.fixedTuning()) && best.zeta < SMALL_DAMPING
+                && !best.converged) {
+            // the bound zeta_a = 0 is outside Nelder-Mead's logarithmic variables: search on it too
+            PeakProblem undamped = problem.withFixedDamping(0.0);
+            double[] onBound = nelderMead(undamped, new double[] {best.f, 0.0}, counter);
+            best.offer(onBound[0], 0.0, peakOf(problem, onBound[0], 0.0, counter), "search, absorber damping 0", false);
+            tryActiveSets(undamped, onBound[0], 0.0, best, counter);
+        }
+    }
+
+    /**
+     * The coarse global scan that certifies an optimum: the band peak on a grid over the whole
+     * search box (48 tunings log-spaced over [minTuning, maxTuning], plus 12 spread over the band
+     * itself, times the damping 0 and 15 values log-spaced over [1e-3, MAX_DAMPING]), and the
+     * classical designs (Den Hartog, the published equal-peak form of the pair, Ioi and Ikeda,
+     * Nishihara and Asami) where they lie in the box. Sorted by peak, lowest first.
+     */
+    static List<double[]> globalScan(PeakProblem p, Counter counter) {
+        List<Double> tunings = new ArrayList<>();
+        if (!Double.isNaN(p.fixedTuning())) {
+            tunings.add(p.fixedTuning());
+        } else {
+            for (int i = 0; i < SCAN_BOX_TUNINGS; i++) {
+                tunings.add(p.minTuning() * Math.pow(p.maxTuning() / p.minTuning(), i / (SCAN_BOX_TUNINGS - 1.0)));
+            }
+            if (!p.allFrequencies()) {
+                double top = Double.isFinite(p.bandHigh()) ? p.bandHigh() : 2 * Math.max(p.bandLow(), 0.5);
+                for (int i = 0; i < SCAN_BAND_TUNINGS; i++) {
+                    double f = p.bandLow() + (top - p.bandLow()) * (i + 0.5) / SCAN_BAND_TUNINGS;
+                    if (f >= p.minTuning() && f <= p.maxTuning()) {
+                        tunings.add(f);
+                    }
+                }
+            }
+        }
+        List<Double> dampings = new ArrayList<>();
+        if (!Double.isNaN(p.fixedDamping())) {
+            dampings.add(p.fixedDamping());
+        } else {
+            dampings.add(0.0);
+            for (int j = 0; j < SCAN_BOX_DAMPINGS; j++) {
+                dampings.add(1e-3 * Math.pow(PeakProblem.MAX_DAMPING / 1e-3, j / (SCAN_BOX_DAMPINGS - 1.0)));
+            }
+        }
+        List<double[]> points = new ArrayList<>();
+        for (double f : tunings) {
+            for (double zeta : dampings) {
+                points.add(new double[] {f, zeta, peakOf(p, f, zeta, counter)});
+            }
+        }
+        for (Tuning t : classicalDesigns(p)) {
+            double f = fixedOr(p.fixedTuning(), t.tuningRatio());
+            double zeta = fixedOr(p.fixedDamping(), t.dampingRatio());
+            points.add(new double[] {f, zeta, peakOf(p, f, zeta, counter)});
+        }
+        points.removeIf(point -> !Double.isFinite(point[2]));
+        points.sort((a, b) -> Double.compare(a[2], b[2]));
+        return points;
+    }
+
+    /** The published designs that apply to the problem's pair and mass ratio. */
+    private static List<Tuning> classicalDesigns(PeakProblem p) {
+        double mu = p.massRatio();
+        List<Tuning> out = new ArrayList<>();
+        out.add(DenHartogEqualPeak.tuning(mu));
+        ClosedForms.equalPeak(p.excitation(), p.response(), mu).map(ClosedForm::tuning).ifPresent(out::add);
+        if (p.excitation() == ExcitationKind.FORCE && p.response() == ResponseKind.DISPLACEMENT) {
+            out.add(org.counterpoise.core.tuning.NishiharaAsamiExact.tuning(mu));
+            if (p.structureDamping() > 0) {
+                out.add(IoiIkeda.tuning(mu, Math.min(p.structureDamping(), 0.1)));
+            }
+        }
+        return out;
     }
 
     /**
@@ -144,8 +317,13 @@ public final class HInfinityOptimiser {
             if (excess.value(MIN_DAMPING) <= 0) {
                 return MIN_DAMPING;
             }
-            return new org.apache.commons.math3.analysis.solvers.BrentSolver(1e-14, 1e-12)
-                    .solve(200, excess, MIN_DAMPING, MAX_DAMPING);
+            try {
+                return new org.apache.commons.math3.analysis.solvers.BrentSolver(1e-14, 1e-12)
+                        .solve(200, excess, MIN_DAMPING, MAX_DAMPING);
+            } catch (org.apache.commons.math3.exception.MathIllegalStateException
+                    | org.apache.commons.math3.exception.MathIllegalArgumentException notBracketed) {
+                return Double.NaN; // treated as "no damping meets the limit at this tuning"
+            }
         };
         double f0 = free.tuning().tuningRatio();
         if (!Double.isNaN(problem.fixedTuning())) {
@@ -158,20 +336,66 @@ public final class HInfinityOptimiser {
         }
         org.apache.commons.math3.analysis.UnivariateFunction alongLimit = f -> {
             double z = dampingOnLimit.applyAsDouble(f);
-            return Double.isNaN(z) ? 1e300 : peakOf(problem, f, z, counter);
+            double peak = Double.isNaN(z) ? 1e300 : peakOf(problem, f, z, counter);
+            return Double.isFinite(peak) ? peak : 1e300;
         };
-        org.apache.commons.math3.optim.univariate.UnivariatePointValuePair best =
-                new org.apache.commons.math3.optim.univariate.BrentOptimizer(1e-10, 1e-14).optimize(
-                        new MaxEval(500), new org.apache.commons.math3.optim.univariate.UnivariateObjectiveFunction(
-                                alongLimit), GoalType.MINIMIZE,
-                        new org.apache.commons.math3.optim.univariate.SearchInterval(0.5 * f0, 1.5 * f0, f0));
-        if (best.getValue() >= 1e300) {
+        double low = Math.max(0.5 * f0, problem.minTuning());
+        double high = Math.min(1.5 * f0, problem.maxTuning());
+        double[] found = minimiseAlongLimit(alongLimit, low, high, f0);
+        // Certification on the limit curve: a coarse scan of tunings over the whole search box;
+        // a point that beats the local minimum restarts Brent's search around it.
+        int points = 24;
+        double[] grid = new double[points];
+        for (int i = 0; i < points; i++) {
+            grid[i] = problem.minTuning() * Math.pow(problem.maxTuning() / problem.minTuning(), i / (points - 1.0));
+        }
+        double scanBest = Double.POSITIVE_INFINITY;
+        double scanAt = Double.NaN;
+        for (double f : grid) {
+            double v = alongLimit.value(f);
+            if (v < scanBest) {
+                scanBest = v;
+                scanAt = f;
+            }
+        }
+        if (scanBest < found[1] * (1 - SCAN_MARGIN)) {
+            double ratio = Math.pow(problem.maxTuning() / problem.minTuning(), 1.0 / (points - 1.0));
+            double[] again = minimiseAlongLimit(alongLimit, Math.max(scanAt / ratio, problem.minTuning()),
+                    Math.min(scanAt * ratio, problem.maxTuning()), scanAt);
+            if (again[1] < found[1]) {
+                found = again;
+            }
+        }
+        if (found[1] >= 1e300) {
             throw unreachable(problem);
         }
-        double f = best.getPoint();
+        double f = found[0];
         double z = dampingOnLimit.applyAsDouble(f);
+        boolean certified = found[1] <= Math.min(scanBest, 1e300) * (1 + SCAN_MARGIN) && !Double.isNaN(z);
+        if (Double.isNaN(z)) {
+            throw unreachable(problem);
+        }
         return new PeakOptimum(problem.tuning(f, z), peakOf(problem, f, z, counter), "stroke on its limit",
-                counter.count, true, "stroke limit");
+                counter.count, certified, "stroke limit");
+    }
+
+    /** Brent's minimiser of the peak along the stroke limit over [low, high]; {f, value}. */
+    private static double[] minimiseAlongLimit(org.apache.commons.math3.analysis.UnivariateFunction alongLimit,
+            double low, double high, double start) {
+        if (!(high > low)) {
+            return new double[] {low, alongLimit.value(low)};
+        }
+        try {
+            org.apache.commons.math3.optim.univariate.UnivariatePointValuePair best =
+                    new org.apache.commons.math3.optim.univariate.BrentOptimizer(1e-10, 1e-14).optimize(
+                            new MaxEval(500), new org.apache.commons.math3.optim.univariate.UnivariateObjectiveFunction(
+                                    alongLimit), GoalType.MINIMIZE,
+                            new org.apache.commons.math3.optim.univariate.SearchInterval(low, high,
+                                    Math.max(low, Math.min(high, start))));
+            return new double[] {best.getPoint(), best.getValue()};
+        } catch (TooManyEvaluationsException limit) {
+            return new double[] {start, alongLimit.value(start)};
+        }
     }
 
     private static InvalidInputException unreachable(PeakProblem problem) {
@@ -281,7 +505,9 @@ public final class HInfinityOptimiser {
             }
             double active = Math.sqrt(Math.exp(problem.transferFunction(s[0], s[1]).logMagnitudeSquared(s[2])));
             double peak = peakOf(problem, s[0], s[1], counter);
-            if (peak <= active * (1 + ACCEPT) && isLocalMinimum(problem, s[0], s[1], peak, counter)) {
+            if (peak <= active * (1 + ACCEPT) && isLocalMinimum(problem, s[0], s[1], peak, counter)
+                    && MinimaxCertificate.violation(problem, s[0], s[1])
+                            <= MinimaxCertificate.STATIONARY) {
                 best.offer(s[0], s[1], peak, describe(interior, problem.fixedDamping() == 0.0), true);
                 return true;
             }
@@ -329,17 +555,49 @@ public final class HInfinityOptimiser {
 
     private static double peakOf(PeakProblem p, double f, double zeta, Counter counter) {
         counter.count++;
+        if (!p.inBox(f, zeta)) {
+            return Double.POSITIVE_INFINITY; // outside the search box: never built, never reported
+        }
         Peak peak = PeakFinder.over(p.transferFunction(f, zeta), p.bandLow(), p.bandHigh());
         return peak.magnitude();
     }
 
     private static double[] nelderMead(PeakProblem p, double[] start, Counter counter) {
+        return nelderMead(p, start, counter, 0.05);
+    }
+
+    private static double[] nelderMead(PeakProblem p, double[] start, Counter counter, double size) {
         // Search in logarithms so that f and zeta_a stay positive without bounds.
-        double[] guess = {Math.log(start[0]), Math.log(Math.max(start[1], 1e-4))};
-        PointValuePair result = new SimplexOptimizer(1e-12, 1e-14).optimize(new MaxEval(4000),
-                new ObjectiveFunction(v -> Math.log(peakOf(p, Math.exp(v[0]), Math.exp(v[1]), counter))),
-                GoalType.MINIMIZE, new InitialGuess(guess), new NelderMeadSimplex(new double[] {0.05, 0.3}));
-        return new double[] {Math.exp(result.getPoint()[0]), Math.exp(result.getPoint()[1])};
+        // The box is kept by clamping each trial into it and adding the distance outside as a
+        // penalty (a continuous exact penalty), so no trial is ever built outside the box.
+        double lowF = Math.log(p.minTuning());
+        double highF = Math.log(p.maxTuning());
+        double lowZ = Math.log(1e-8);
+        double highZ = Math.log(PeakProblem.MAX_DAMPING);
+        double[] guess = {clamp(Math.log(start[0]), lowF, highF), clamp(Math.log(Math.max(start[1], 1e-4)), lowZ, highZ)};
+        double[] bestSeen = {Double.POSITIVE_INFINITY, guess[0], guess[1]};
+        ObjectiveFunction objective = new ObjectiveFunction(v -> {
+            double a = clamp(v[0], lowF, highF);
+            double b = clamp(v[1], lowZ, highZ);
+            double value = Math.log(peakOf(p, Math.exp(a), Math.exp(b), counter));
+            if (value < bestSeen[0]) {
+                bestSeen[0] = value;
+                bestSeen[1] = a;
+                bestSeen[2] = b;
+            }
+            return value + Math.abs(v[0] - a) + Math.abs(v[1] - b);
+        });
+        try {
+            new SimplexOptimizer(1e-12, 1e-14).optimize(new MaxEval(MAX_SIMPLEX_EVALUATIONS), objective,
+                    GoalType.MINIMIZE, new InitialGuess(guess), new NelderMeadSimplex(new double[] {size, 6 * size}));
+        } catch (TooManyEvaluationsException limit) {
+            // the best point seen is kept; certification decides whether it is an optimum
+        }
+        return new double[] {Math.exp(bestSeen[1]), Math.exp(bestSeen[2])};
+    }
+
+    private static double clamp(double v, double low, double high) {
+        return Math.max(low, Math.min(high, v));
     }
 
     private static String describe(boolean[] interior, boolean undamped) {

@@ -43,9 +43,15 @@ public final class MinimumMass {
                 if (Double.isNaN(previous)) {
                     return new Result(true, o);
                 }
-                double mu0 = new BrentSolver(1e-8 * mu, 1e-12).solve(200,
-                        m -> Math.log(HInfinityOptimiser.optimise(problem.withMassRatio(m)).peak() / target),
-                        previous, mu);
+                double mu0;
+                try {
+                    mu0 = new BrentSolver(1e-8 * mu, 1e-12).solve(200,
+                            m -> Math.log(HInfinityOptimiser.optimise(problem.withMassRatio(m)).peak() / target),
+                            previous, mu);
+                } catch (org.apache.commons.math3.exception.MathIllegalStateException
+                        | org.apache.commons.math3.exception.MathIllegalArgumentException noRoot) {
+                    return new Result(true, o); // the scanned mass ratio meets the target: keep it
+                }
                 PeakOptimum at = HInfinityOptimiser.optimise(problem.withMassRatio(mu0));
                 // Brent returns a point within tolerance on either side; step to the sufficient side.
                 if (at.peak() > target) {

@@ -138,6 +138,47 @@ public record PeakProblem(ExcitationKind excitation, ResponseKind response, doub
                 bandLow, bandHigh).magnitude();
     }
 
+    /**
+     * The largest absorber damping ratio any optimiser considers: beyond it the absorber is
+     * practically locked to the structure (a plain added mass), so nothing is lost.
+     */
+    public static final double MAX_DAMPING = 4.0;
+
+    /**
+     * The lowest tuning ratio searched: 0.05 times the lower of 1 and the band's low end (the band's
+     * low end is replaced by 1 when the band starts at zero frequency). Below it the absorber's
+     * spring is so soft that it barely couples to the structure at any forcing frequency: such an
+     * absorber does nothing, and must never be reported as an optimum.
+     *
+     * @return the lowest tuning ratio of the search box
+     */
+    public double minTuning() {
+        double reference = bandLow > 0 ? Math.min(1.0, bandLow) : 1.0;
+        return 0.05 * reference;
+    }
+
+    /**
+     * The highest tuning ratio searched: 5 times the larger of 1 and the top of the band (the low
+     * end for an open band), at most 50. Above it the absorber is practically rigid over the band.
+     *
+     * @return the highest tuning ratio of the search box
+     */
+    public double maxTuning() {
+        double top = Double.isFinite(bandHigh) ? bandHigh : bandLow;
+        return Math.min(50.0, 5.0 * Math.max(1.0, top));
+    }
+
+    /**
+     * @param f tuning ratio
+     * @param zeta absorber damping ratio
+     * @return true when (f, zeta) lies in the search box (fixed values are taken as given)
+     */
+    public boolean inBox(double f, double zeta) {
+        boolean tuningOk = !Double.isNaN(fixedTuning) || (f >= minTuning() * (1 - 1e-12) && f <= maxTuning() * (1 + 1e-12));
+        boolean dampingOk = !Double.isNaN(fixedDamping) || (zeta >= 0 && zeta <= MAX_DAMPING);
+        return tuningOk && dampingOk;
+    }
+
     /** @return true when the band covers all frequencies */
     public boolean allFrequencies() {
         return bandLow == 0.0 && Double.isInfinite(bandHigh);

@@ -65,7 +65,21 @@ public final class MeanSquare {
         }
         RealVector rhs = new ArrayRealVector(size);
         rhs.setEntry((n - 1) + n * (n - 1), -1.0);
-        RealVector p = new LUDecomposition(kron).getSolver().solve(rhs);
+        // The Lyapunov operator of a stable A is never singular (no two eigenvalues sum to zero),
+        // but its entries scale with the poles, so LU's default ABSOLUTE pivot threshold (1e-11)
+        // called it singular for slow poles. Use a threshold relative to the operator's size.
+        double size1 = 0;
+        for (int r = 0; r < size; r++) {
+            for (int s = 0; s < size; s++) {
+                size1 = Math.max(size1, Math.abs(kron.getEntry(r, s)));
+            }
+        }
+        org.apache.commons.math3.linear.DecompositionSolver solver =
+                new LUDecomposition(kron, 1e-14 * size1).getSolver();
+        if (!solver.isNonSingular()) {
+            return Double.POSITIVE_INFINITY; // a pole on (or numerically at) the frequency axis
+        }
+        RealVector p = solver.solve(rhs);
         double j = 0;
         for (int r = 0; r < n; r++) {
             for (int s = 0; s < n; s++) {

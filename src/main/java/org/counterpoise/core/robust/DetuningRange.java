@@ -8,7 +8,23 @@ package org.counterpoise.core.robust;
  * @param high highest tolerated factor (&gt;= 1), or NaN when the search limit was reached first
  * @param allowance the allowed rise of the peak, as a fraction (0.1 = 10 %)
  * @param searchLimit how far each side was searched, as a fraction (0.3 = 30 %)
- * @param defined false when the nominal peak is zero or unbounded, so a relative rise means nothing
+ * @param defined false when the nominal peak is unbounded, so a relative rise means nothing
+ * @param ofBareResponse true when the nominal design cancels the response (an undamped absorber at
+ *     its one speed): the range then keeps the response within the allowance times the BARE
+ *     structure's response, since a rise relative to zero means nothing
  */
-public record DetuningRange(double low, double high, double allowance, double searchLimit, boolean defined) {
+public record DetuningRange(double low, double high, double allowance, double searchLimit, boolean defined,
+        boolean ofBareResponse) {
+
+    /**
+     * A range relative to the design's own nominal peak.
+     * @param low lowest tolerated factor or NaN
+     * @param high highest tolerated factor or NaN
+     * @param allowance allowed rise, fraction
+     * @param searchLimit searched each side, fraction
+     * @param defined false when not defined
+     */
+    public DetuningRange(double low, double high, double allowance, double searchLimit, boolean defined) {
+        this(low, high, allowance, searchLimit, defined, false);
+    }
 }

@@ -62,7 +62,8 @@ public final class MonteCarlo {
         double mean = 0;
         int above = 0;
         for (int i = 0; i < samples; i++) {
-            mean += (peaks[i] - mean) / (i + 1);
+            // an unbounded sample makes the mean unbounded (inf - inf would give NaN)
+            mean = Double.isInfinite(mean) ? mean : Double.isInfinite(peaks[i]) ? peaks[i] : mean + (peaks[i] - mean) / (i + 1);
             if (peaks[i] > target) {
                 above++;
             }

@@ -43,7 +43,8 @@ public final class RobustOptimiser {
             }
             count[0]++;
             Absorber a = Absorber.of(m.structure(), new Tuning(massRatio, f, zeta));
-            return Math.log(WorstCase.of(m, a, structureRange, absorberRange).peak());
+            double value = Math.log(WorstCase.of(m, a, structureRange, absorberRange).peak());
+            return Double.isNaN(value) || value == Double.NEGATIVE_INFINITY ? Double.POSITIVE_INFINITY : value;
         });
         Tuning best = null;
         WorstCase.Point bestWorst = null;
@@ -57,6 +58,11 @@ public final class RobustOptimiser {
             if (bestWorst == null || seedWorst.peak() < bestWorst.peak()) {
                 best = exactSeed;
                 bestWorst = seedWorst;
+            }
+            if (!(seedWorst.peak() > 0) || Double.isInfinite(seedWorst.peak())) {
+                // zero (the response underflows in SI) or unbounded: nothing to compare, no search
+                converged = false;
+                continue;
             }
             double[] start = {Math.log(seed.tuningRatio()), Math.log(Math.max(seed.dampingRatio(), 1e-3))};
             try {

@@ -6,6 +6,7 @@ import org.counterpoise.core.model.Absorber;
 import org.counterpoise.core.model.Excitation;
 import org.counterpoise.core.model.Structure;
 import org.counterpoise.core.response.ResponseKind;
+import org.counterpoise.core.response.SystemResponse;
 
 /**
  * How far a built design may be off-tune before its worst response over the forcing band rises by
@@ -15,6 +16,9 @@ import org.counterpoise.core.response.ResponseKind;
  * band peak. From the nominal design the factor is stepped outwards by 0.5 % to the search limit;
  * the first step whose peak exceeds the allowance brackets the crossing, refined by Brent's method
  * to 1e-9. A rise narrower than one step could be missed; the peak varies smoothly with detuning.
+ * A design that cancels the response at its one speed (an undamped absorber tuned to it; the
+ * nominal response is zero, so a relative rise means nothing) is judged instead by the response
+ * at that speed staying within the allowance times the bare structure's response there.
  */
 public final class ToleratedDetuning {
     private static final double STEP = 0.005;
@@ -34,7 +38,8 @@ public final class ToleratedDetuning {
     public static DetuningRange ofStructure(Structure structure, Absorber absorber, Excitation excitation,
             ResponseKind response, double allowance, double searchLimit) {
         Mistuning m = new Mistuning(structure, excitation, response);
-        return search(factor -> m.peak(absorber, factor, 1.0), allowance, searchLimit);
+        return search(factor -> m.peak(absorber, factor, 1.0), allowance, searchLimit,
+                bare(structure, excitation, response));
     }
 
     /**
@@ -50,7 +55,8 @@ public final class ToleratedDetuning {
     public static DetuningRange ofAbsorber(Structure structure, Absorber absorber, Excitation excitation,
             ResponseKind response, double allowance, double searchLimit) {
         Mistuning m = new Mistuning(structure, excitation, response);
-        return search(factor -> m.peak(absorber, 1.0, factor), allowance, searchLimit);
+        return search(factor -> m.peak(absorber, 1.0, factor), allowance, searchLimit,
+                bare(structure, excitation, response));
     }
 
     /**
@@ -72,9 +78,30 @@ public final class ToleratedDetuning {
         return within(peak, target, target / nominal - 1, searchLimit);
     }
 
-    private static DetuningRange search(DoubleUnaryOperator peak, double allowance, double searchLimit) {
+    /** The bare structure's peak over the band, SI (the reference when a design cancels the response). */
+    private static double bare(Structure structure, Excitation excitation, ResponseKind response) {
+        return new SystemResponse(structure, null, excitation.kind(), excitation.amplitude())
+                .peakOver(response, excitation.band()).value();
+    }
+
+    /**
+     * A design whose nominal response is below this fraction of the bare structure's cancels it
+     * (an undamped absorber tuned to its one speed: exactly zero, up to round-off).
+     */
+    private static final double CANCELLED = 1e-6;
+
+    private static DetuningRange search(DoubleUnaryOperator peak, double allowance, double searchLimit, double bare) {
         double nominal = peak.applyAsDouble(1.0);
-        if (!(nominal > 0) || Double.isInfinite(nominal)) {
+        if (!(nominal >= 0) || Double.isInfinite(nominal)) {
+            return new DetuningRange(Double.NaN, Double.NaN, allowance, searchLimit, false);
+        }
+        if (nominal <= CANCELLED * bare && Double.isFinite(bare)) {
+            // At its one speed the design cancels the response: the criterion is that response,
+            // kept within the allowance of the bare structure's (90 % of the reduction kept).
+            DetuningRange r = within(peak, allowance * bare, allowance, searchLimit);
+            return new DetuningRange(r.low(), r.high(), allowance, searchLimit, true, true);
+        }
+        if (!(nominal > 0)) {
             return new DetuningRange(Double.NaN, Double.NaN, allowance, searchLimit, false);
         }
         return within(peak, nominal * (1 + allowance), allowance, searchLimit);

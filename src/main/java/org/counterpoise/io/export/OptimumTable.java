@@ -19,7 +19,7 @@ public final class OptimumTable {
      * @param absorberDamping optimum zeta_a
      * @param value optimum peak or variance
      * @param activeSet which maxima are equal (peak objective), or empty
-     * @param converged true when verified
+     * @param converged true when the optimum is certified (docs/optimiser.md); false: not found
      */
     public record Row(double massRatio, double structureDamping, double tuningRatio, double absorberDamping,
             double value, String activeSet, boolean converged) {
@@ -74,6 +74,7 @@ public final class OptimumTable {
                 o.addProperty("active_set", r.activeSet());
             }
             o.addProperty("converged", r.converged());
+            o.addProperty("status", r.converged() ? "certified" : "not found");
             array.add(o);
         }
         return JsonNumbers.write(array);
@@ -81,6 +82,6 @@ public final class OptimumTable {
 
     private static String note(Row r) {
         String set = r.activeSet().isEmpty() ? "" : r.activeSet();
-        return r.converged() ? set : (set.isEmpty() ? "" : set + "; ") + "not verified (best found)";
+        return r.converged() ? set : "NOT FOUND: no certified optimum (the numbers are the best point seen, not an optimum)";
     }
 }

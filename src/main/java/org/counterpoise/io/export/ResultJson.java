@@ -70,6 +70,13 @@ public final class ResultJson {
         number(o, "detuning_softer_factor", r.detuning().lowerFactor());
         number(o, "mass_change_lighter_factor", r.massDetuning().raiseFactor());
         number(o, "mass_change_heavier_factor", r.massDetuning().lowerFactor());
+        r.rms().ifPresent(rms -> {
+            o.addProperty("spectrum", "white-noise");
+            number(o, "psd_level_SI_per_Hz", rms.psdLevel());
+            number(o, "rms_before", rms.before());
+            number(o, "rms_after", rms.after());
+            number(o, "rms_stroke_m", rms.stroke());
+        });
         tolerance(o, "structure_frequency", r.structureTolerance());
         tolerance(o, "absorber_frequency", r.absorberTolerance());
         number(o, "tolerance_allowance", DesignResult.TOLERANCE_ALLOWANCE);
@@ -98,6 +105,9 @@ public final class ResultJson {
     private static void tolerance(JsonObject o, String key, org.counterpoise.core.robust.DetuningRange range) {
         number(o, "tolerated_" + key + "_factor_low", range.low());
         number(o, "tolerated_" + key + "_factor_high", range.high());
+        if (range.ofBareResponse()) {
+            o.addProperty("tolerated_" + key + "_basis", "below allowance times bare structure response");
+        }
     }
 
     private static void peak(JsonObject o, String key, ResponsePeak p) {

@@ -16,9 +16,28 @@ import org.counterpoise.core.units.Unit;
  * @param harmonicOrder forcing cycles per revolution (&gt; 0)
  * @param runUpRate how fast the shaft speed changes at start and stop (e.g. rpm/s), or null when
  *     not stated (optional since format 1; files without it load unchanged)
+ * @param spectrum the spectrum (white noise and its level), or null for harmonic (optional since
+ *     format 1; files without it load unchanged)
  */
 public record DisturbanceInput(ExcitationKind kind, QuantityInput amplitude, QuantityInput frequency,
-        double bandLow, double bandHigh, Unit bandUnit, double harmonicOrder, QuantityInput runUpRate) {
+        double bandLow, double bandHigh, Unit bandUnit, double harmonicOrder, QuantityInput runUpRate,
+        SpectrumInput spectrum) {
+
+    /**
+     * A harmonic disturbance with a run-up rate.
+     * @param kind what drives the structure
+     * @param amplitude its amplitude
+     * @param frequency one frequency, or null for a band
+     * @param bandLow low end of the band, or NaN
+     * @param bandHigh high end of the band, or NaN
+     * @param bandUnit unit of the band ends, or null
+     * @param harmonicOrder forcing cycles per revolution (&gt; 0)
+     * @param runUpRate the run-up rate, or null
+     */
+    public DisturbanceInput(ExcitationKind kind, QuantityInput amplitude, QuantityInput frequency,
+            double bandLow, double bandHigh, Unit bandUnit, double harmonicOrder, QuantityInput runUpRate) {
+        this(kind, amplitude, frequency, bandLow, bandHigh, bandUnit, harmonicOrder, runUpRate, null);
+    }
 
     /**
      * A disturbance without a run-up rate.
@@ -32,7 +51,7 @@ public record DisturbanceInput(ExcitationKind kind, QuantityInput amplitude, Qua
      */
     public DisturbanceInput(ExcitationKind kind, QuantityInput amplitude, QuantityInput frequency,
             double bandLow, double bandHigh, Unit bandUnit, double harmonicOrder) {
-        this(kind, amplitude, frequency, bandLow, bandHigh, bandUnit, harmonicOrder, null);
+        this(kind, amplitude, frequency, bandLow, bandHigh, bandUnit, harmonicOrder, null, null);
     }
 
     /**
@@ -40,7 +59,17 @@ public record DisturbanceInput(ExcitationKind kind, QuantityInput amplitude, Qua
      * @return this disturbance with that run-up rate
      */
     public DisturbanceInput withRunUpRate(QuantityInput rate) {
-        return new DisturbanceInput(kind, amplitude, frequency, bandLow, bandHigh, bandUnit, harmonicOrder, rate);
+        return new DisturbanceInput(kind, amplitude, frequency, bandLow, bandHigh, bandUnit, harmonicOrder, rate,
+                spectrum);
+    }
+
+    /**
+     * @param newSpectrum the spectrum (white noise and its level), or null for harmonic
+     * @return this disturbance with that spectrum
+     */
+    public DisturbanceInput withSpectrum(SpectrumInput newSpectrum) {
+        return new DisturbanceInput(kind, amplitude, frequency, bandLow, bandHigh, bandUnit, harmonicOrder, runUpRate,
+                newSpectrum);
     }
 
     /** @return true when a band is given */

@@ -13,6 +13,7 @@ import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.model.DampingConversions;
 import org.counterpoise.core.model.Excitation;
 import org.counterpoise.core.model.FrequencyBand;
+import org.counterpoise.core.model.Spectrum;
 import org.counterpoise.core.model.Structure;
 import org.counterpoise.core.model.StructureConversions;
 import org.counterpoise.core.response.ResponseKind;
@@ -71,18 +72,26 @@ public record Project(String name, String notes, StructureInput structure, Distu
             throw new InvalidInputException("structure.weight", "given with structure.mass",
                     "give either structure.mass or structure.weight, not both");
         }
-        Double mass = s.mass() != null ? Checks.positive("structure.mass.value", s.mass().si())
-                : s.weight() != null ? StructureConversions.massFromWeight(s.weight().si()) : null;
+        // No mixed double/null conditional here: unboxing its null result was a NullPointerException
+        // for the documented form "stiffness and natural frequency without a mass".
+        boolean massGiven = s.mass() != null || s.weight() != null;
+        double mass = s.mass() != null ? Checks.positive("structure.mass.value", s.mass().si())
+                : s.weight() != null ? StructureConversions.massFromWeight(s.weight().si()) : Double.NaN;
         int stiffnessForms = count(s.stiffness(), s.naturalFrequency(), s.staticDeflection());
         double stiffness;
-        if (mass == null) {
+        if (!massGiven) {
+            if (s.staticDeflection() != null) {
+                throw new InvalidInputException("structure.static_deflection", "given without a mass",
+                        "a static deflection needs structure.mass or structure.weight beside it");
+            }
             if (s.stiffness() == null || s.naturalFrequency() == null) {
                 throw InvalidInputException.missing("structure.mass",
                         "give structure.mass or structure.weight, or both structure.stiffness and"
                                 + " structure.natural_frequency");
             }
             stiffness = Checks.positive("structure.stiffness.value", s.stiffness().si());
-            mass = StructureConversions.massFromFrequency(stiffness, s.naturalFrequency().si());
+            mass = StructureConversions.massFromFrequency(stiffness,
+                    Checks.positive("structure.natural_frequency.value", s.naturalFrequency().si()));
         } else if (stiffnessForms != 1) {
             throw new InvalidInputException("structure", stiffnessForms + " stiffness entries",
                     "with a mass or weight give exactly one of structure.stiffness, structure.natural_frequency"
@@ -129,7 +138,13 @@ public record Project(String name, String notes, StructureInput structure, Distu
             double w = Checks.positive("disturbance.frequency.value", d.frequency().si());
             band = FrequencyBand.ofRotor(w, w, order);
         }
-        return new Excitation(d.kind(), Checks.positive("disturbance.amplitude.value", d.amplitude().si()), band);
+        Spectrum spectrum = Spectrum.HARMONIC;
+        if (d.spectrum() != null && d.spectrum().kind() == Spectrum.Kind.WHITE_NOISE) {
+            spectrum = Spectrum.whiteNoise(Checks.positive("disturbance.spectrum.psd.value",
+                    d.spectrum().psdUnit().toSi(d.spectrum().psdValue())));
+        }
+        return new Excitation(d.kind(), Checks.positive("disturbance.amplitude.value", d.amplitude().si()), band,
+                spectrum);
     }
 
     /**

@@ -9,6 +9,8 @@ import org.counterpoise.core.design.DesignMethod;
 import org.counterpoise.core.design.DesignStudy;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.model.ExcitationKind;
+import org.counterpoise.core.model.Spectrum;
+import org.counterpoise.core.units.SpectralDensityUnit;
 import org.counterpoise.core.response.ResponseKind;
 import org.counterpoise.core.units.Dimension;
 import org.counterpoise.core.units.PhysicalRange;
@@ -178,6 +180,7 @@ public final class ProjectReader {
             throw new InvalidInputException(d.pathOf("frequency"), frequency == null ? "neither" : "both",
                     "give either disturbance.frequency or disturbance.band");
         }
+        SpectrumInput spectrum = spectrum(d.optionalObject("spectrum"), kind);
         DisturbanceInput out;
         if (band != null) {
             double low = band.number("low");
@@ -186,12 +189,43 @@ public final class ProjectReader {
             PhysicalRange.FREQUENCY.check(band.pathOf("low"), low, unit);
             PhysicalRange.FREQUENCY.check(band.pathOf("high"), high, unit);
             band.finish();
-            out = new DisturbanceInput(kind, amplitude, null, low, high, unit, order);
+            out = new DisturbanceInput(kind, amplitude, null, low, high, unit, order, null, spectrum);
         } else {
-            out = new DisturbanceInput(kind, amplitude, frequency, Double.NaN, Double.NaN, null, order);
+            out = new DisturbanceInput(kind, amplitude, frequency, Double.NaN, Double.NaN, null, order, null, spectrum);
         }
         d.finish();
         return out.withRunUpRate(runUpRate);
+    }
+
+    /**
+     * The optional spectrum; absent (every file written before spectra existed, including those
+     * with the exact-variance method) means harmonic, which is what those files meant.
+     */
+    private static SpectrumInput spectrum(JsonFields s, ExcitationKind kind) {
+        if (s == null) {
+            return null;
+        }
+        String text = s.text("kind");
+        Spectrum.Kind k = java.util.Arrays.stream(Spectrum.Kind.values()).filter(x -> x.id().equals(text)).findFirst()
+                .orElseThrow(() -> new InvalidInputException(s.pathOf("kind"), "\"" + text + "\"",
+                        "one of harmonic, white-noise"));
+        SpectrumInput out;
+        if (k == Spectrum.Kind.WHITE_NOISE) {
+            JsonFields psd = s.object("psd");
+            double value = psd.number("value");
+            String unitText = psd.text("unit");
+            SpectralDensityUnit unit = SpectralDensityUnit.bySymbol(unitText, kind.amplitudeDimension())
+                    .orElseThrow(() -> new InvalidInputException(psd.pathOf("unit"), "\"" + unitText + "\"",
+                            SpectralDensityUnit.symbols(kind.amplitudeDimension()).isEmpty()
+                                    ? "white noise is a force or a base acceleration"
+                                    : "allowed units: " + SpectralDensityUnit.symbols(kind.amplitudeDimension())));
+            psd.finish();
+            out = SpectrumInput.whiteNoise(value, unit);
+        } else {
+            out = new SpectrumInput(k, Double.NaN, null);
+        }
+        s.finish();
+        return out;
     }
 
     private static AbsorberInput absorber(JsonFields a) {

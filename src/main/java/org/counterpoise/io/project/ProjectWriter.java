@@ -94,6 +94,17 @@ public final class ProjectWriter {
         if (d.runUpRate() != null) {
             o.add("run_up_rate", quantity(d.runUpRate()));
         }
+        if (d.spectrum() != null) {
+            JsonObject spectrum = new JsonObject();
+            spectrum.addProperty("kind", d.spectrum().kind().id());
+            if (d.spectrum().psdUnit() != null) {
+                JsonObject psd = new JsonObject();
+                psd.addProperty("value", d.spectrum().psdValue());
+                psd.addProperty("unit", d.spectrum().psdUnit().symbol());
+                spectrum.add("psd", psd);
+            }
+            o.add("spectrum", spectrum);
+        }
         return o;
     }
 

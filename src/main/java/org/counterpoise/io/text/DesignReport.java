@@ -101,6 +101,15 @@ public final class DesignReport {
         }
         row(out, "reduction of " + shortLabel(study.response()), reduction(r));
 
+        r.rms().ifPresent(rms -> {
+            section(out, "Response to the white-noise disturbance (root mean square)");
+            row(out, "spectral density (one-sided)", QuantityFormat.number(rms.psdLevel(), 4)
+                    + (study.excitation().kind() == org.counterpoise.core.model.ExcitationKind.FORCE ? " N^2/Hz"
+                            : " (m/s^2)^2/Hz"));
+            row(out, "rms without absorber", rmsText(rms.before(), study.response().dimension()));
+            row(out, "rms with absorber", rmsText(rms.after(), study.response().dimension()));
+            row(out, "rms absorber stroke", rmsText(rms.stroke(), Dimension.LENGTH));
+        });
         section(out, "Stroke and forces");
         row(out, "absorber stroke in band", DisplayUnits.format(r.strokeInBand().value(), Dimension.LENGTH));
         row(out, "absorber stroke during run-up", DisplayUnits.format(r.strokeRunUp().value(), Dimension.LENGTH)
@@ -154,7 +163,9 @@ public final class DesignReport {
         if (!range.defined()) {
             return "not defined (the nominal response is zero or unbounded)";
         }
-        return side(range.low(), power, range.searchLimit(), -1) + " to " + side(range.high(), power, range.searchLimit(), 1);
+        return side(range.low(), power, range.searchLimit(), -1) + " to " + side(range.high(), power, range.searchLimit(), 1)
+                + (range.ofBareResponse() ? " (response kept below " + QuantityFormat.number(100 * range.allowance(), 2)
+                        + " % of the bare structure's: the design cancels it at its one speed)" : "");
     }
 
     private static String side(double factor, int power, double limit, int sign) {
@@ -164,6 +175,11 @@ public final class DesignReport {
         }
         double change = 100 * (Math.pow(factor, power) - 1);
         return (change > 0 ? "+" : "") + QuantityFormat.number(change, 2) + " %";
+    }
+
+    private static String rmsText(double value, Dimension dimension) {
+        return Double.isFinite(value) ? DisplayUnits.format(value, dimension)
+                : "unbounded (undamped structure: the mean square diverges)";
     }
 
     private static String reduction(DesignResult r) {

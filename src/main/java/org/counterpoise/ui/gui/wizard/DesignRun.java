@@ -187,6 +187,8 @@ final class DesignRun {
         clearResults(gen);
         if (cause instanceof InvalidInputException bad) {
             route(bad);
+        } else if (cause instanceof org.counterpoise.core.error.NotFoundException notFound) {
+            status.accept(notFound.getMessage()); // a plain sentence: no certified optimum, what to try
         } else {
             Logger.getLogger("counterpoise").log(Level.WARNING, "design failed", cause);
             status.accept("The design could not be computed for these inputs; please report this case.");

@@ -1,0 +1,51 @@
+package org.counterpoise.core.design;
+
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import org.counterpoise.core.error.CoreException;
+import org.counterpoise.core.model.Excitation;
+import org.counterpoise.core.model.ExcitationKind;
+import org.counterpoise.core.model.FrequencyBand;
+import org.counterpoise.core.model.Structure;
+import org.counterpoise.core.response.ResponseKind;
+import org.counterpoise.core.robust.Tolerance;
+import org.counterpoise.core.robust.ToleranceSet;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.CsvSource;
+
+/**
+ * Magnitudes far outside physics (1e-300 kg, 1e300 N) must end: with a result or a typed
+ * refusal, never a hang or a NaN. (The command line refuses such inputs earlier with plausibility
+ * ranges; the core must still terminate.) Before the fix, 1e300 kg under 1e-300 N underflowed
+ * every response to 0 and the robust design ran Nelder-Mead on ln 0 to its evaluation limit for
+ * each seed (hours), and 1e-300 kg gave an internal damping ratio of 0/0 reported as
+ * "structure.damping: not a number is not allowed". Nothing here is timed: the test only has to
+ * finish.
+ */
+class ExtremeScalesTest {
+
+    @ParameterizedTest
+    @CsvSource({"1e-300, 1e-300", "1e-300, 1e300", "1e300, 1e-300", "1e300, 1e300", "1e-30, 1e30", "1, 1"})
+    void designAndRobustnessTerminateWithAResultOrATypedRefusal(double mass, double force) {
+        Structure s = Structure.of(mass, mass * Math.pow(2 * Math.PI * 10, 2), 0.02);
+        Excitation e = new Excitation(ExcitationKind.FORCE, force,
+                new FrequencyBand(2 * Math.PI * 500 / 60, 2 * Math.PI * 700 / 60));
+        RobustnessSettings settings = new RobustnessSettings(0.1, 0.02, Double.NaN, new ToleranceSet(
+                Tolerance.normal(0.05), Tolerance.NONE, Tolerance.NONE, Tolerance.uniform(0.05), Tolerance.NONE),
+                200, 1L);
+        DesignStudy study = new DesignStudy("extreme", s, e, ResponseKind.DISPLACEMENT,
+                AbsorberSizing.ofMassRatio(0.05), DesignMethod.EXACT_PEAK, false, 1.5, DesignConstraints.NONE,
+                settings);
+        try {
+            DesignResult r = Designer.design(study);
+            // the non-dimensional design does not depend on the scale
+            assertTrue(r.tuning().tuningRatio() > 0.8 && r.tuning().tuningRatio() < 1.2, r.tuning().toString());
+            RobustnessResult robust = RobustnessAnalysis.run(r, settings);
+            assertFalse(Double.isNaN(robust.monteCarlo().mean()), "NaN mean");
+            assertFalse(Double.isNaN(robust.worstCase().peak()), "NaN worst case");
+        } catch (CoreException typed) {
+            assertFalse(typed.getMessage().contains("not a number"), typed.getMessage());
+        }
+    }
+}
