@@ -9,12 +9,17 @@ import javax.swing.JLabel;
 import javax.swing.JPanel;
 import javax.swing.JSplitPane;
 import org.counterpoise.core.design.DesignMethod;
+import org.counterpoise.core.design.DesignResult;
+import org.counterpoise.core.model.Structure;
 import org.counterpoise.core.response.ResponseKind;
+import org.counterpoise.core.units.Dimension;
 import org.counterpoise.core.units.Unit;
 import org.counterpoise.io.project.AbsorberInput;
 import org.counterpoise.io.project.Project;
 import org.counterpoise.io.project.QuantityInput;
+import org.counterpoise.io.text.UnitChoices;
 import org.counterpoise.ui.gui.field.Form;
+import org.counterpoise.ui.gui.field.FormSwitch;
 import org.counterpoise.ui.gui.field.QuantityField;
 import org.counterpoise.ui.gui.plot.ChartHost;
 
@@ -23,16 +28,16 @@ final class GoalStep extends Step {
     private final JComboBox<String> sizing = new JComboBox<>(
             new String[] {"mass ratio \u03bc", "absorber mass", "lightest for a target response"});
     private final QuantityField size = new QuantityField("absorber.mass_ratio",
-            "Absorber mass over the structure's effective mass, or the mass budget", List.of(Unit.RATIO));
+            "Absorber mass over the structure's effective mass, or the mass budget", UnitChoices.of(Dimension.RATIO));
     private final JComboBox<DesignMethod> method = new JComboBox<>(DesignMethod.values());
     private final JComboBox<ResponseKind> response = new JComboBox<>(
             Project.DESIGN_RESPONSES.toArray(new ResponseKind[0]));
     private final QuantityField margin = new QuantityField("absorber.stroke_margin",
-            "Clearance to leave over the computed peak stroke (1.5 is common practice)", List.of(Unit.RATIO));
+            "Clearance to leave over the computed peak stroke (1.5 is common practice)", UnitChoices.of(Dimension.RATIO));
     private final JCheckBox hangs = new JCheckBox("the absorber hangs on its spring");
     private final QuantityField strokeLimit = new QuantityField("absorber.stroke_limit",
             "Largest allowed peak stroke in the band (exact-peak only); leave empty for none",
-            List.of(Unit.MILLIMETRE, Unit.METRE, Unit.MICROMETRE));
+            UnitChoices.of(Dimension.LENGTH));
     private final JLabel methodNote = new JLabel(" ");
     {
         methodNote.setName("absorber.methodNote");
@@ -40,6 +45,17 @@ final class GoalStep extends Step {
     }
     private final ChartHost massChart = new ChartHost("chart.massRatio");
     private final JComponent page;
+    private SizingContext sizingContext = new SizingContext() {
+        @Override
+        public Structure structure() {
+            return null;
+        }
+
+        @Override
+        public DesignResult design() {
+            return null;
+        }
+    };
 
     GoalStep(Runnable changed) {
         sizing.setName("absorber.sizing");
@@ -62,6 +78,9 @@ final class GoalStep extends Step {
                         index, selected, focus);
             }
         });
+        // The longest method description would make the form wider than a small screen; the open list shows it whole.
+        java.awt.Dimension methodSize = method.getPreferredSize();
+        method.setPreferredSize(new java.awt.Dimension(Math.min(methodSize.width, 460), methodSize.height));
         Form form = new Form();
         form.heading("The absorber you can fit");
         form.row("Size given as", 'z', sizing,
@@ -105,24 +124,57 @@ final class GoalStep extends Step {
         size.onChange(changed);
         margin.onChange(changed);
         strokeLimit.onChange(changed);
+        convertOnSizingChange();
     }
 
     private void sizeUnits() {
-        size.setUnits(switch (sizing.getSelectedIndex()) {
-            case 0 -> List.of(Unit.RATIO);
-            case 1 -> List.of(Unit.KILOGRAM, Unit.TONNE, Unit.GRAM);
-            default -> unitsOf((ResponseKind) response.getSelectedItem());
-        });
+        size.setUnits(sizeUnits(sizing.getSelectedIndex()));
     }
 
-    private static List<Unit> unitsOf(ResponseKind r) {
-        return switch (r.dimension()) {
-            case LENGTH -> List.of(Unit.MILLIMETRE, Unit.MICROMETRE, Unit.METRE);
-            case VELOCITY -> List.of(Unit.MILLIMETRE_PER_SECOND, Unit.METRE_PER_SECOND);
-            case ACCELERATION -> List.of(Unit.METRE_PER_SECOND_SQUARED, Unit.STANDARD_GRAVITY);
-            case FORCE -> List.of(Unit.NEWTON, Unit.KILONEWTON);
-            default -> List.of(Unit.RATIO);
+    private List<Unit> sizeUnits(int sizingForm) {
+        return switch (sizingForm) {
+            case 0 -> UnitChoices.of(Dimension.RATIO);
+            case 1 -> UnitChoices.of(Dimension.MASS);
+            default -> UnitChoices.of(((ResponseKind) response.getSelectedItem()).dimension());
         };
+    }
+
+    /** What converting the size between its forms needs from the rest of the wizard. */
+    interface SizingContext {
+        /** @return the structure as entered, or null while it is not valid */
+        Structure structure();
+
+        /** @return the design on screen, or null */
+        DesignResult design();
+    }
+
+    /** @param c where the structure and the design shown come from */
+    void sizingContext(SizingContext c) {
+        sizingContext = c;
+    }
+
+    /**
+     * A change of sizing converts the value: a mass ratio becomes the absorber mass it means on the
+     * structure's effective mass (never 0.05 kg), and a target starts from what the design on
+     * screen reaches; attached after the other listeners, so it runs first.
+     */
+    private void convertOnSizingChange() {
+        FormSwitch.attach(sizing, size, this::sizeUnits, (from, to, v) -> {
+            Structure s = sizingContext.structure();
+            DesignResult d = sizingContext.design();
+            if (to == 2) {
+                return d != null && d.study().response() == response.getSelectedItem() ? d.responseAfter().value()
+                        : Double.NaN;
+            }
+            if (from == 2) {
+                return d == null ? Double.NaN : to == 0 ? d.tuning().massRatio() : d.absorber().mass();
+            }
+            if (s == null) {
+                return Double.NaN;
+            }
+            return to == 1 ? v * s.effectiveMass() : v / s.effectiveMass();
+        }, i -> i == 0 ? "type the mass ratio" : i == 1 ? "type the absorber mass"
+                : "type the largest " + ((ResponseKind) response.getSelectedItem()).label() + " you accept");
     }
 
     @Override
@@ -184,7 +236,7 @@ final class GoalStep extends Step {
     }
 
     void note(String text) {
-        methodNote.setText(text == null ? " " : "<html><body style='width: 520px'>" + text
+        methodNote.setText(text == null ? " " : "<html><body style='width: 440pt'>" + text
                 .replace("&", "&amp;").replace("<", "&lt;") + "</body></html>");
     }
 

@@ -10,10 +10,12 @@ import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.RobustnessResult;
 import org.counterpoise.core.design.RobustnessSettings;
 import org.counterpoise.core.robust.MonteCarloResult;
+import org.counterpoise.core.units.Dimension;
 import org.counterpoise.core.units.Unit;
 import org.counterpoise.io.chart.RobustnessCharts;
 import org.counterpoise.io.text.DisplayUnits;
 import org.counterpoise.io.text.QuantityFormat;
+import org.counterpoise.io.text.UnitChoices;
 import org.counterpoise.ui.gui.field.Form;
 import org.counterpoise.ui.gui.field.QuantityField;
 import org.counterpoise.ui.gui.plot.ChartHost;
@@ -22,16 +24,18 @@ import org.knowm.xchart.XChartPanel;
 /** Step 5: how the design fares off-tune, the robust alternative and the tolerance Monte Carlo. */
 final class RobustnessStep extends Step {
     private final QuantityField structureRange = new QuantityField("robustness.structure_detuning",
-            "How far the structure's natural frequency may be off, in percent each way", List.of(Unit.RATIO));
+            "How far the structure's natural frequency may be off, in percent each way", UnitChoices.of(Dimension.RATIO));
     private final QuantityField absorberRange = new QuantityField("robustness.absorber_detuning",
-            "How far the absorber's natural frequency may be off, in percent each way", List.of(Unit.RATIO));
+            "How far the absorber's natural frequency may be off, in percent each way", UnitChoices.of(Dimension.RATIO));
     private final QuantityField samples = new QuantityField("robustness.samples",
-            "Monte Carlo samples (the tolerances come from the project file)", List.of(Unit.RATIO));
+            "Monte Carlo samples (the tolerances come from the project file)", UnitChoices.of(Dimension.RATIO));
     private final JLabel summary = new JLabel(" ");
     private final ChartHost sensitivity = new ChartHost("chart.sensitivity");
     private final ChartHost histogram = new ChartHost("chart.histogram");
     private final JPanel mapHolder = new JPanel(new BorderLayout());
     private final JComponent page;
+    /** The summary's text without its width, so it can be rewrapped when the page is resized. */
+    private String summaryHtml = "";
 
     RobustnessStep(Runnable changed) {
         Form form = new Form();
@@ -55,6 +59,15 @@ final class RobustnessStep extends Step {
         JPanel p = new JPanel(new BorderLayout());
         p.add(top, BorderLayout.NORTH);
         p.add(charts, BorderLayout.CENTER);
+        // Below this the page scrolls rather than squeezing the charts unreadable.
+        charts.setMinimumSize(new java.awt.Dimension(620, 420));
+        summary.setMinimumSize(new java.awt.Dimension(300, 0));
+        summary.addComponentListener(new java.awt.event.ComponentAdapter() {
+            @Override
+            public void componentResized(java.awt.event.ComponentEvent e) {
+                wrapSummary();
+            }
+        });
         page = p;
         own("robustness.structure_detuning", structureRange);
         own("robustness.absorber_detuning", absorberRange);
@@ -106,24 +119,37 @@ final class RobustnessStep extends Step {
             sensitivity.message(design == null ? "Fix the inputs to see the robustness study." : "computing\u2026");
             histogram.message(" ");
             mapHolder.removeAll();
+            summaryHtml = "";
             summary.setText(" ");
             return;
         }
         var unitDim = design.study().response().dimension();
         MonteCarloResult mc = r.monteCarlo();
-        summary.setText("<html><body style='width: 760px'>Worst case of this design <b>" + DisplayUnits.format(r.worstCase().peak(), unitDim)
+        summaryHtml = ("Worst case of this design <b>" + DisplayUnits.format(r.worstCase().peak(), unitDim)
                 + "</b>; robust design (f " + QuantityFormat.number(r.robust().tuning().tuningRatio(), 4) + ", \u03b6a "
                 + QuantityFormat.number(r.robust().tuning().dampingRatio(), 3) + ") <b>"
                 + DisplayUnits.format(r.robust().worstCase().peak(), unitDim) + "</b>. Monte Carlo P50 / P95: "
                 + DisplayUnits.format(mc.p50(), unitDim) + " / " + DisplayUnits.format(mc.p95(), unitDim)
                 + (Double.isNaN(mc.probabilityExceeding()) ? "" : "; above target "
-                        + QuantityFormat.number(100 * mc.probabilityExceeding(), 3) + " %") + "</html>");
+                        + QuantityFormat.number(100 * mc.probabilityExceeding(), 3) + " %"));
+        wrapSummary();
         sensitivity.show(RobustnessCharts.sensitivity(design, r, 420, 320));
         histogram.show(RobustnessCharts.histogram(design, mc, 420, 320));
         mapHolder.removeAll();
         mapHolder.add(new XChartPanel<>(RobustnessCharts.map(design, r, 520, 480, 3)), BorderLayout.CENTER);
         mapHolder.revalidate();
         mapHolder.repaint();
+    }
+
+    /** Wraps the summary to the width it is given (an HTML label wraps only at a width it is given). */
+    private void wrapSummary() {
+        if (summaryHtml.isEmpty()) {
+            summary.setText(" ");
+            return;
+        }
+        int width = Math.max(280, summary.getWidth() == 0 ? 760 : summary.getWidth() - 40);
+        // Swing's HTML takes a CSS px as 1.3 screen pixels (and a pt as one), so the width goes in pt.
+        summary.setText("<html><body style='width: " + width + "pt'>" + summaryHtml + "</body></html>");
     }
 
     String summary() {

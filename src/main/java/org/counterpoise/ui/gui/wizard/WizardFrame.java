@@ -55,7 +55,9 @@ import org.counterpoise.io.project.RobustnessInput;
 import org.counterpoise.io.project.StructureInput;
 import org.counterpoise.io.preset.Presets;
 import org.counterpoise.ui.gui.Themes;
+import org.counterpoise.ui.gui.field.ScrollingPage;
 import org.counterpoise.ui.gui.session.RecentFiles;
+import org.counterpoise.ui.gui.session.WindowPlacement;
 import org.knowm.xchart.XYChart;
 import org.knowm.xchart.XYChartBuilder;
 import org.knowm.xchart.XYSeries;
@@ -110,7 +112,7 @@ public final class WizardFrame extends JFrame {
         });
         pause.setRepeats(false);
         for (Step s : steps) {
-            center.add(s.component(), s.title());
+            center.add(ScrollingPage.of(s.component()), s.title());
         }
         stepList.setName("steps");
         stepList.setSelectionMode(ListSelectionModel.SINGLE_SELECTION);
@@ -159,11 +161,25 @@ public final class WizardFrame extends JFrame {
         setContentPane(root);
         setJMenuBar(menus());
         getRootPane().setDefaultButton(nextButton);
+        goal.sizingContext(new GoalStep.SizingContext() {
+            @Override
+            public Structure structure() {
+                try {
+                    return new Project(base.name(), base.notes(), structure.input(), base.disturbance(),
+                            base.absorber(), null).toStructure();
+                } catch (InvalidInputException e) {
+                    return null;
+                }
+            }
+
+            @Override
+            public DesignResult design() {
+                return shown;
+            }
+        });
         load(Presets.defaultProject(), null);
         go(0);
-        setMinimumSize(new Dimension(1100, 720));
-        setSize(1280, 800);
-        setLocationRelativeTo(null);
+        WindowPlacement.restore(this, new Dimension(1280, 800));
     }
 
     private JMenuBar menus() {
