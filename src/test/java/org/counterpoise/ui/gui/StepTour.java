@@ -38,6 +38,12 @@ public final class StepTour {
             frame.set(f);
         });
         waitSettled(frame.get());
+        String typed = System.getProperty("tour.mass");
+        if (typed != null) {
+            SwingUtilities.invokeAndWait(() -> ((javax.swing.JTextField) find(frame.get().getContentPane(), "structure.mass"))
+                    .setText(typed));
+            Thread.sleep(1500);
+        }
         Rectangle screen = GraphicsEnvironment.getLocalGraphicsEnvironment().getDefaultScreenDevice()
                 .getDefaultConfiguration().getBounds();
         for (int step = 0; step < 6; step++) {
@@ -52,6 +58,21 @@ public final class StepTour {
         }
         SwingUtilities.invokeAndWait(() -> frame.get().dispose());
         System.exit(0);
+    }
+
+    private static java.awt.Component find(java.awt.Container root, String name) {
+        for (java.awt.Component c : root.getComponents()) {
+            if (name.equals(c.getName())) {
+                return c;
+            }
+            if (c instanceof java.awt.Container sub) {
+                java.awt.Component found = find(sub, name);
+                if (found != null) {
+                    return found;
+                }
+            }
+        }
+        return null;
     }
 
     private static void dump(java.awt.Component c, String indent) {

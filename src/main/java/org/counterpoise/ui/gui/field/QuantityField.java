@@ -41,6 +41,8 @@ public final class QuantityField extends JPanel {
     /** Why the field was emptied when its quantity changed form, until something is typed. */
     private String clearedBecause;
     private boolean problemShown;
+    private String messageText = " ";
+    private int wrappedAt = -1;
     /** Counts values shown from a project (not typed), so remembered values of other forms can be forgotten. */
     private int shownValues;
     private boolean quiet;
@@ -73,6 +75,13 @@ public final class QuantityField extends JPanel {
         message.setName(fieldId + ".message");
         message.setForeground(ERROR);
         message.setFont(message.getFont().deriveFont(message.getFont().getSize2D() - 1f));
+        // A long message wraps within the form instead of running off a small window.
+        message.addHierarchyBoundsListener(new java.awt.event.HierarchyBoundsAdapter() {
+            @Override
+            public void ancestorResized(java.awt.event.HierarchyEvent e) {
+                wrapMessage();
+            }
+        });
         add(text);
         add(units);
         text.getDocument().addDocumentListener(new DocumentListener() {
@@ -240,14 +249,53 @@ public final class QuantityField extends JPanel {
         text.putClientProperty("JComponent.outline", problem == null ? null : "error");
         Color muted = UIManager.getColor("Label.disabledForeground");
         message.setForeground(problem == null && muted != null ? muted : ERROR);
-        message.setText(problem != null ? problem : hint != null ? hint : " ");
+        messageText = problem != null ? problem : hint != null ? hint : " ";
         problemShown = problem != null;
+        wrapMessage();
         text.repaint();
     }
 
     /** @return how many values were shown from a project so far (not typed by the user) */
     int shownValues() {
         return shownValues;
+    }
+
+    /** @return the message as said, without the markup that wraps it */
+    public String messageText() {
+        return messageText;
+    }
+
+    /** Sets the message, wrapped to the room its form has right of the label column. */
+    private void wrapMessage() {
+        // The room visible, not the form's width: a message wider than the window would keep its form wide.
+        java.awt.Container area = (java.awt.Container) javax.swing.SwingUtilities.getAncestorOfClass(
+                javax.swing.JViewport.class, message);
+        if (area == null) {
+            area = message.getParent();
+        }
+        int room = 0;
+        if (area != null && area.getWidth() > 0 && message.getParent() != null) {
+            int x = javax.swing.SwingUtilities.convertPoint(message.getParent(), message.getX(), 0, area).x;
+            room = area.getWidth() - x - 16;
+        }
+        String plain = messageText;
+        if (room <= 0 || message.getFontMetrics(message.getFont()).stringWidth(plain) <= room) {
+            wrappedAt = -1;
+            if (!plain.equals(message.getText())) {
+                message.setText(plain);
+            }
+            return;
+        }
+        if (room == wrappedAt && message.getText().contains(escape(plain))) {
+            return;
+        }
+        wrappedAt = room;
+        // Swing's HTML takes a CSS px as 1.3 screen pixels and a pt as one, so the width goes in pt.
+        message.setText("<html><body style='width: " + Math.max(120, room) + "pt'>" + escape(plain) + "</body></html>");
+    }
+
+    private static String escape(String s) {
+        return s.replace("&", "&amp;").replace("<", "&lt;").replace(">", "&gt;");
     }
 
     /** @return the text component (for focus and tests) */
