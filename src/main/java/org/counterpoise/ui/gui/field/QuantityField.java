@@ -260,11 +260,6 @@ public final class QuantityField extends JPanel {
         return shownValues;
     }
 
-    /** @return the message as said, without the markup that wraps it */
-    public String messageText() {
-        return messageText;
-    }
-
     /** Sets the message, wrapped to the room its form has right of the label column. */
     private void wrapMessage() {
         // The room visible, not the form's width: a message wider than the window would keep its form wide.
@@ -301,11 +296,6 @@ public final class QuantityField extends JPanel {
     /** @return the text component (for focus and tests) */
     public JTextField textField() {
         return text;
-    }
-
-    /** @return the unit selector (for tests) */
-    public JComboBox<Unit> unitBox() {
-        return units;
     }
 
     /** @return the locale numbers are typed in (read each time: the user or a test may change it) */

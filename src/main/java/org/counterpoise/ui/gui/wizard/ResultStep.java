@@ -47,7 +47,6 @@ final class ResultStep extends Step {
     private final JToggleButton logAxis = new JToggleButton("Log axis", true);
     private final JLabel readout = new JLabel("Move the pointer over a chart to read the exact values there.");
     private final JTextPane notes = new JTextPane();
-    private List<String> shownWarnings = List.of();
     private final JComponent page;
     private DesignResult result;
     private DesignCurves curves;
@@ -190,17 +189,6 @@ final class ResultStep extends Step {
             throw new IllegalStateException("bug: writing at the end of the notes", e);
         }
         notes.setCaretPosition(0);
-        shownWarnings = List.copyOf(warnings);
-    }
-
-    /** @return the warnings on screen, each whole */
-    List<String> warnings() {
-        return shownWarnings;
-    }
-
-    /** @return the pane showing warnings and cautions */
-    JTextPane notes() {
-        return notes;
     }
 
     private void redraw() {
