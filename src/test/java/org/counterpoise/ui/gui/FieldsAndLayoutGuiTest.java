@@ -317,7 +317,8 @@ class FieldsAndLayoutGuiTest {
     void sizeAndPlaceAreRememberedAcrossAReopen() throws Exception {
         open(US);
         Rectangle screen = onEdt(() -> frame.getGraphicsConfiguration().getBounds());
-        assertTrue(screen.contains(onEdt(frame::getBounds)), "the window opens within the screen");
+        Rectangle first = onEdt(frame::getBounds);
+        assertTrue(screen.contains(first), first + " opens within " + screen);
         Rectangle chosen = new Rectangle(screen.x + 30, screen.y + 20, 1000, 640);
         onEdt(() -> {
             frame.setBounds(chosen);
