@@ -4,14 +4,17 @@ import java.awt.GraphicsEnvironment;
 import java.io.PrintWriter;
 import java.nio.charset.StandardCharsets;
 import org.counterpoise.core.design.Designer;
+import java.nio.file.Path;
+import org.counterpoise.io.PlainText;
 import org.counterpoise.io.preset.Presets;
 import org.counterpoise.io.text.DesignReport;
 import org.counterpoise.ui.cli.Cli;
 import org.counterpoise.ui.gui.GuiMain;
 
 /**
- * Entry point: with arguments, the command line; without, the wizard, or on a machine with no
- * display the default scenario's design report.
+ * Entry point: with arguments, the command line; with one project file as the only argument, the
+ * wizard on that file; without, the wizard. On a machine with no display, instead of the wizard,
+ * the design report of that file or of the default scenario.
  */
 public final class Main {
     private Main() {
@@ -32,6 +35,15 @@ public final class Main {
                 System.exit(0);
             }
             GuiMain.launch();
+            return;
+        }
+        if (Cli.isProjectFile(args)) {
+            if (GraphicsEnvironment.isHeadless()) {
+                out.println("No display: printing the design report of " + PlainText.escape(args[0])
+                        + " instead of opening the wizard.");
+                System.exit(Cli.run(new String[] {"design", args[0]}, out, err));
+            }
+            GuiMain.open(Path.of(args[0]));
             return;
         }
         System.exit(Cli.run(args, out, err));

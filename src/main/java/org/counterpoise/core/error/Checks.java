@@ -88,6 +88,7 @@ public final class Checks {
         if (value == Math.rint(value) && Math.abs(value) < 1e15) {
             return Long.toString((long) value);
         }
-        return Double.toString(value);
+        // 1.0E300 -> 1e300, 2.5E-4 -> 2.5e-4: as people write it
+        return Double.toString(value).replace(".0E", "E").replace("E", "e");
     }
 }

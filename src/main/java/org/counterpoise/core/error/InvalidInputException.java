@@ -28,8 +28,19 @@ public final class InvalidInputException extends CoreException {
         return new InvalidInputException(Messages.MISSING_VALUE, field, "", allowed);
     }
 
+    /**
+     * For a file or field that cannot be used as a whole (a folder, not UTF-8, not valid JSON...).
+     * @param field the file or field the user knows
+     * @param problem what is wrong, in plain words
+     * @param allowed what is allowed, or what to do
+     * @return the exception
+     */
+    public static InvalidInputException unusable(String field, String problem, String allowed) {
+        return new InvalidInputException(Messages.UNUSABLE, field, problem, allowed);
+    }
+
     private InvalidInputException(Messages key, String field, String value, String allowed) {
-        super(key, field, allowed);
+        super(key, key == Messages.UNUSABLE ? new Object[] {field, value, allowed} : new Object[] {field, allowed});
         this.field = field;
         this.value = value;
         this.allowed = allowed;
@@ -59,6 +70,9 @@ public final class InvalidInputException extends CoreException {
     public InvalidInputException renamed(String newField) {
         if (value.isEmpty() && key() == Messages.MISSING_VALUE) {
             return missing(newField, allowed);
+        }
+        if (key() == Messages.UNUSABLE) {
+            return unusable(newField, value, allowed);
         }
         return new InvalidInputException(newField, value, allowed);
     }

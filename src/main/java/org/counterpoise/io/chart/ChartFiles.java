@@ -6,6 +6,9 @@ import java.awt.image.BufferedImage;
 import java.io.IOException;
 import java.io.OutputStream;
 import javax.imageio.ImageIO;
+import javax.imageio.ImageWriter;
+import javax.imageio.stream.ImageOutputStream;
+import javax.imageio.stream.MemoryCacheImageOutputStream;
 import org.knowm.xchart.VectorGraphicsEncoder;
 import org.knowm.xchart.XYChart;
 
@@ -32,7 +35,15 @@ public final class ChartFiles {
         } finally {
             g.dispose();
         }
-        ImageIO.write(image, "png", out);
+        // In memory, not ImageIO's default file cache: that would be one more temporary file (in
+        // the system's temp folder) for a kill to leave behind.
+        ImageWriter writer = ImageIO.getImageWritersByFormatName("png").next();
+        try (ImageOutputStream stream = new MemoryCacheImageOutputStream(out)) {
+            writer.setOutput(stream);
+            writer.write(image);
+        } finally {
+            writer.dispose();
+        }
     }
 
     /**

@@ -8,7 +8,8 @@ import org.counterpoise.io.project.Ids;
 /**
  * The plotted curves of a design as CSV: one row per frequency, one column per curve, every
  * header naming its quantity and SI unit. Numbers carry 17 significant digits, so a curve read
- * back equals the computed one.
+ * back equals the computed one. A value that is unbounded (an undamped structure exactly at
+ * resonance) is an empty cell, never "Infinity" or "NaN". Lines end with a line feed on every system.
  */
 public final class CurveCsv {
     private CurveCsv() {
@@ -29,9 +30,14 @@ public final class CurveCsv {
         double[] after = curves.after();
         double[] stroke = curves.stroke();
         for (int i = 0; i < w.length; i++) {
-            out.append(String.format(Locale.ROOT, "%.17g,%.17g,%.17g,%.17g%n", Unit.HERTZ.fromSi(w[i]), before[i],
-                    after[i], stroke[i]));
+            out.append(cell(Unit.HERTZ.fromSi(w[i]))).append(',').append(cell(before[i])).append(',')
+                    .append(cell(after[i])).append(',').append(cell(stroke[i])).append('\n');
         }
         return out.toString();
+    }
+
+    /** A number with 17 significant digits; an unbounded value (undamped, exactly at resonance) is an empty cell. */
+    private static String cell(double v) {
+        return Double.isFinite(v) ? String.format(Locale.ROOT, "%.17g", v) : "";
     }
 }

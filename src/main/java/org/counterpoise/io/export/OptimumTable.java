@@ -1,6 +1,5 @@
 package org.counterpoise.io.export;
 
-import com.google.gson.GsonBuilder;
 import com.google.gson.JsonArray;
 import com.google.gson.JsonObject;
 import java.util.List;
@@ -66,18 +65,18 @@ public final class OptimumTable {
         JsonArray array = new JsonArray();
         for (Row r : rows) {
             JsonObject o = new JsonObject();
-            o.addProperty("mass_ratio", r.massRatio());
-            o.addProperty("structure_damping_ratio", r.structureDamping());
-            o.addProperty("tuning_ratio", r.tuningRatio());
-            o.addProperty("absorber_damping_ratio", r.absorberDamping());
-            o.addProperty(valueKey, r.value());
+            JsonNumbers.put(o, "mass_ratio", r.massRatio());
+            JsonNumbers.put(o, "structure_damping_ratio", r.structureDamping());
+            JsonNumbers.put(o, "tuning_ratio", r.tuningRatio());
+            JsonNumbers.put(o, "absorber_damping_ratio", r.absorberDamping());
+            JsonNumbers.put(o, valueKey, r.value());
             if (!r.activeSet().isEmpty()) {
                 o.addProperty("active_set", r.activeSet());
             }
             o.addProperty("converged", r.converged());
             array.add(o);
         }
-        return new GsonBuilder().setPrettyPrinting().create().toJson(array) + "\n";
+        return JsonNumbers.write(array);
     }
 
     private static String note(Row r) {

@@ -1,6 +1,5 @@
 package org.counterpoise.io.export;
 
-import com.google.gson.GsonBuilder;
 import com.google.gson.JsonArray;
 import com.google.gson.JsonObject;
 import org.counterpoise.core.design.Cautions;
@@ -32,19 +31,19 @@ public final class ResultJson {
         o.addProperty("method", study.method().id());
         o.addProperty("method_source", r.methodSource());
         o.addProperty("excitation", Ids.of(study.excitation().kind()));
-        o.addProperty("forcing_frequency_low_Hz", hz(study.excitation().band().low()));
-        o.addProperty("forcing_frequency_high_Hz", hz(study.excitation().band().high()));
-        o.addProperty("mass_ratio", r.tuning().massRatio());
-        o.addProperty("tuning_ratio", r.tuning().tuningRatio());
-        o.addProperty("absorber_damping_ratio", r.tuning().dampingRatio());
-        o.addProperty("primary_mass_kg", s.effectiveMass());
-        o.addProperty("primary_stiffness_N_per_m", s.effectiveStiffness());
-        o.addProperty("primary_frequency_Hz", hz(s.naturalFrequency()));
-        o.addProperty("primary_damping_ratio", s.dampingRatio());
-        o.addProperty("absorber_mass_kg", r.absorber().mass());
-        o.addProperty("absorber_stiffness_N_per_m", r.absorber().stiffness());
-        o.addProperty("absorber_damping_Ns_per_m", r.absorber().damping());
-        o.addProperty("absorber_frequency_Hz", hz(r.absorber().naturalFrequency()));
+        number(o, "forcing_frequency_low_Hz", hz(study.excitation().band().low()));
+        number(o, "forcing_frequency_high_Hz", hz(study.excitation().band().high()));
+        number(o, "mass_ratio", r.tuning().massRatio());
+        number(o, "tuning_ratio", r.tuning().tuningRatio());
+        number(o, "absorber_damping_ratio", r.tuning().dampingRatio());
+        number(o, "primary_mass_kg", s.effectiveMass());
+        number(o, "primary_stiffness_N_per_m", s.effectiveStiffness());
+        number(o, "primary_frequency_Hz", hz(s.naturalFrequency()));
+        number(o, "primary_damping_ratio", s.dampingRatio());
+        number(o, "absorber_mass_kg", r.absorber().mass());
+        number(o, "absorber_stiffness_N_per_m", r.absorber().stiffness());
+        number(o, "absorber_damping_Ns_per_m", r.absorber().damping());
+        number(o, "absorber_frequency_Hz", hz(r.absorber().naturalFrequency()));
         number(o, "absorber_static_sag_m", r.staticSag());
         o.addProperty("response_quantity", Ids.of(study.response()));
         o.addProperty("response_unit", study.response().dimension().siSymbol());
@@ -62,18 +61,18 @@ public final class ResultJson {
         peak(o, "peak_spring_force_N", r.springForce());
         peak(o, "peak_damper_force_N", r.damperForce());
         peak(o, "peak_absorber_force_N", r.absorberForce());
-        JsonArray coupled = new JsonArray();
-        for (double w : r.coupledNaturalFrequencies()) {
-            coupled.add(hz(w));
+        double[] coupled = r.coupledNaturalFrequencies().clone();
+        for (int i = 0; i < coupled.length; i++) {
+            coupled[i] = hz(coupled[i]);
         }
-        o.add("coupled_natural_frequencies_Hz", coupled);
+        JsonNumbers.putAll(o, "coupled_natural_frequencies_Hz", coupled);
         number(o, "detuning_stiffer_factor", r.detuning().raiseFactor());
         number(o, "detuning_softer_factor", r.detuning().lowerFactor());
         number(o, "mass_change_lighter_factor", r.massDetuning().raiseFactor());
         number(o, "mass_change_heavier_factor", r.massDetuning().lowerFactor());
         tolerance(o, "structure_frequency", r.structureTolerance());
         tolerance(o, "absorber_frequency", r.absorberTolerance());
-        o.addProperty("tolerance_allowance", DesignResult.TOLERANCE_ALLOWANCE);
+        number(o, "tolerance_allowance", DesignResult.TOLERANCE_ALLOWANCE);
         JsonArray warnings = new JsonArray();
         for (Warning w : r.warnings()) {
             JsonObject wo = new JsonObject();
@@ -93,8 +92,7 @@ public final class ResultJson {
      * @return pretty-printed JSON text
      */
     public static String toJson(DesignResult r) {
-        return new GsonBuilder().setPrettyPrinting().serializeNulls().disableHtmlEscaping().create().toJson(of(r))
-                + "\n";
+        return JsonNumbers.write(of(r));
     }
 
     private static void tolerance(JsonObject o, String key, org.counterpoise.core.robust.DetuningRange range) {
@@ -107,14 +105,7 @@ public final class ResultJson {
     }
 
     private static void number(JsonObject o, String key, double v) {
-        if (Double.isFinite(v)) {
-            o.addProperty(key, v);
-        } else {
-            o.add(key, com.google.gson.JsonNull.INSTANCE);
-            if (Double.isInfinite(v)) {
-                o.addProperty(key + "_unbounded", true);
-            }
-        }
+        JsonNumbers.put(o, key, v);
     }
 
     private static double hz(double omega) {

@@ -1,8 +1,6 @@
 package org.counterpoise.io.export;
 
-import com.google.gson.GsonBuilder;
 import com.google.gson.JsonArray;
-import com.google.gson.JsonNull;
 import com.google.gson.JsonObject;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.RobustnessResult;
@@ -25,19 +23,19 @@ public final class RobustnessJson {
         o.addProperty("response_quantity", design.study().response().name().toLowerCase(java.util.Locale.ROOT)
                 .replace('_', '-'));
         o.addProperty("response_unit", design.study().response().dimension().siSymbol());
-        o.addProperty("structure_detuning_range", r.settings().structureRange());
-        o.addProperty("absorber_detuning_range", r.settings().absorberRange());
+        number(o, "structure_detuning_range", r.settings().structureRange());
+        number(o, "absorber_detuning_range", r.settings().absorberRange());
         number(o, "target", r.settings().target());
-        o.addProperty("nominal_peak", design.responseAfter().value());
-        o.addProperty("worst_case_peak", r.worstCase().peak());
-        o.addProperty("worst_case_structure_factor", r.worstCase().structureFactor());
-        o.addProperty("worst_case_absorber_factor", r.worstCase().absorberFactor());
-        o.addProperty("robust_tuning_ratio", r.robust().tuning().tuningRatio());
-        o.addProperty("robust_absorber_damping_ratio", r.robust().tuning().dampingRatio());
-        o.addProperty("robust_absorber_stiffness_N_per_m", r.robustAbsorber().stiffness());
-        o.addProperty("robust_absorber_damping_Ns_per_m", r.robustAbsorber().damping());
-        o.addProperty("robust_worst_case_peak", r.robust().worstCase().peak());
-        o.addProperty("robust_nominal_peak", r.robust().nominalPeak());
+        number(o, "nominal_peak", design.responseAfter().value());
+        number(o, "worst_case_peak", r.worstCase().peak());
+        number(o, "worst_case_structure_factor", r.worstCase().structureFactor());
+        number(o, "worst_case_absorber_factor", r.worstCase().absorberFactor());
+        number(o, "robust_tuning_ratio", r.robust().tuning().tuningRatio());
+        number(o, "robust_absorber_damping_ratio", r.robust().tuning().dampingRatio());
+        number(o, "robust_absorber_stiffness_N_per_m", r.robustAbsorber().stiffness());
+        number(o, "robust_absorber_damping_Ns_per_m", r.robustAbsorber().damping());
+        number(o, "robust_worst_case_peak", r.robust().worstCase().peak());
+        number(o, "robust_nominal_peak", r.robust().nominalPeak());
         number(o, "target_structure_factor_low", r.toleratedForTarget().low());
         number(o, "target_structure_factor_high", r.toleratedForTarget().high());
         o.add("structure_sensitivity", curve(r.structureCurve()));
@@ -48,48 +46,32 @@ public final class RobustnessJson {
         JsonObject m = new JsonObject();
         m.addProperty("samples", mc.samples());
         m.addProperty("seed", mc.seed());
-        m.addProperty("mean", mc.mean());
-        m.addProperty("p50", mc.p50());
-        m.addProperty("p90", mc.p90());
-        m.addProperty("p95", mc.p95());
-        m.addProperty("p99", mc.p99());
-        m.addProperty("min", mc.min());
-        m.addProperty("max", mc.max());
+        number(m, "mean", mc.mean());
+        number(m, "p50", mc.p50());
+        number(m, "p90", mc.p90());
+        number(m, "p95", mc.p95());
+        number(m, "p99", mc.p99());
+        number(m, "min", mc.min());
+        number(m, "max", mc.max());
         number(m, "probability_exceeding_target", mc.probabilityExceeding());
-        JsonArray edges = new JsonArray();
-        for (double e : mc.binEdges()) {
-            edges.add(e);
-        }
+        JsonNumbers.putAll(m, "histogram_edges", mc.binEdges());
         JsonArray counts = new JsonArray();
         for (int c : mc.counts()) {
             counts.add(c);
         }
-        m.add("histogram_edges", edges);
         m.add("histogram_counts", counts);
         o.add("monte_carlo", m);
-        return new GsonBuilder().setPrettyPrinting().serializeNulls().create().toJson(o) + "\n";
+        return JsonNumbers.write(o);
     }
 
     private static JsonObject curve(SensitivityCurve c) {
         JsonObject o = new JsonObject();
-        JsonArray f = new JsonArray();
-        JsonArray p = new JsonArray();
-        for (double v : c.factors()) {
-            f.add(v);
-        }
-        for (double v : c.peaks()) {
-            p.add(v);
-        }
-        o.add("factors", f);
-        o.add("peaks", p);
+        JsonNumbers.putAll(o, "factors", c.factors());
+        JsonNumbers.putAll(o, "peaks", c.peaks());
         return o;
     }
 
     private static void number(JsonObject o, String key, double v) {
-        if (Double.isFinite(v)) {
-            o.addProperty(key, v);
-        } else {
-            o.add(key, JsonNull.INSTANCE);
-        }
+        JsonNumbers.put(o, key, v);
     }
 }

@@ -9,7 +9,9 @@ import java.util.List;
 import java.util.Set;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.units.Dimension;
+import org.counterpoise.core.units.PhysicalRange;
 import org.counterpoise.core.units.Unit;
+import org.counterpoise.io.PlainText;
 
 /**
  * Reads one JSON object field by field, naming each problem by its path in the file, and keeps
@@ -27,9 +29,10 @@ final class JsonFields {
         this.unknown = unknown;
     }
 
-    static JsonFields root(JsonElement element, List<String> unknown) {
+    static JsonFields root(JsonElement element, List<String> unknown, String fileName) {
         if (element == null || !element.isJsonObject()) {
-            throw new InvalidInputException("(file)", describe(element), "the file must hold one JSON object");
+            throw InvalidInputException.unusable(PlainText.escape(fileName), "holds " + describe(element)
+                    + " instead of one JSON object { ... }", "a project file is one object, as docs/project-file.md shows");
         }
         return new JsonFields(element.getAsJsonObject(), "", unknown);
     }
@@ -75,7 +78,15 @@ final class JsonFields {
         if (!e.isJsonPrimitive() || !e.getAsJsonPrimitive().isString()) {
             throw new InvalidInputException(pathOf(key), describe(e), "must be a text in quotes");
         }
-        return e.getAsString();
+        String text = e.getAsString();
+        for (int i = 0; i < text.length(); i++) {
+            char c = text.charAt(i);
+            if (c < 0x20 && c != '\n' && c != '\t' && c != '\r' || c >= 0x7f && c <= 0x9f) {
+                throw new InvalidInputException(pathOf(key), describe(e), "a text without control characters"
+                        + " (line breaks and tabs are allowed)");
+            }
+        }
+        return text;
     }
 
     String text(String key, String fallback) {
@@ -100,6 +111,7 @@ final class JsonFields {
         JsonFields q = object(key);
         double value = q.number("value");
         Unit unit = unit(q, "unit", dimension);
+        PhysicalRange.of(dimension).check(q.pathOf("value"), value, unit);
         q.finish();
         return new QuantityInput(value, unit);
     }
@@ -111,7 +123,7 @@ final class JsonFields {
     static Unit unit(JsonFields fields, String key, Dimension dimension) {
         String symbol = fields.text(key);
         return Unit.find(symbol, dimension).orElseThrow(() -> new InvalidInputException(fields.pathOf(key),
-                "\"" + symbol + "\"", "allowed units: " + Unit.symbolsOf(dimension)));
+                "\"" + PlainText.quote(symbol) + "\"", "allowed units: " + Unit.symbolsOf(dimension)));
     }
 
     /** Records every key not read as unknown. */
@@ -131,16 +143,23 @@ final class JsonFields {
         return object.get(key);
     }
 
+    /** @return the value of a key as the user wrote it, for a message */
+    String shown(String key) {
+        return describe(object.get(key));
+    }
+
     static String describe(JsonElement e) {
         if (e == null || e.isJsonNull()) {
             return "null";
         }
         if (e.isJsonPrimitive()) {
             JsonPrimitive p = e.getAsJsonPrimitive();
-            return p.isString() ? "\"" + p.getAsString() + "\"" : p.toString();
+            return p.isString() ? "\"" + PlainText.quote(p.getAsString()) + "\"" : PlainText.quote(p.toString());
         }
-        String s = e.toString();
-        return s.length() > 40 ? s.substring(0, 37) + "..." : s;
+        if (e.isJsonObject()) {
+            return "an object { ... }";
+        }
+        return "a list [ ... ]";
     }
 
     static List<String> newUnknownList() {

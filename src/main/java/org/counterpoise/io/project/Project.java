@@ -26,9 +26,34 @@ import org.counterpoise.core.response.ResponseKind;
  * @param disturbance the disturbance
  * @param absorber the designer's choices
  * @param robustness expected mistuning, target and tolerances, or null for the defaults
+ * @param identity revision, engineer, client or site and date (never null; empty when not given)
  */
 public record Project(String name, String notes, StructureInput structure, DisturbanceInput disturbance,
-        AbsorberInput absorber, RobustnessInput robustness) {
+        AbsorberInput absorber, RobustnessInput robustness, ProjectIdentity identity) {
+
+    /** The name of a project that has not been named yet. */
+    public static final String UNTITLED = "Untitled";
+
+    /** Absent name, notes and identity get their empty values. */
+    public Project {
+        name = name == null || name.isBlank() ? UNTITLED : name;
+        notes = notes == null ? "" : notes;
+        identity = identity == null ? ProjectIdentity.EMPTY : identity;
+    }
+
+    /**
+     * A project without identity details (revision, engineer, client, date).
+     * @param name project name
+     * @param notes free text
+     * @param structure the structure as known
+     * @param disturbance the disturbance
+     * @param absorber the designer's choices
+     * @param robustness robustness settings, or null for the defaults
+     */
+    public Project(String name, String notes, StructureInput structure, DisturbanceInput disturbance,
+            AbsorberInput absorber, RobustnessInput robustness) {
+        this(name, notes, structure, disturbance, absorber, robustness, ProjectIdentity.EMPTY);
+    }
 
     /** The project-file format version this build writes. */
     public static final int FORMAT_VERSION = 1;

@@ -1,14 +1,8 @@
 package org.counterpoise.io.project;
 
 import com.google.gson.JsonElement;
-import com.google.gson.JsonParseException;
-import com.google.gson.JsonParser;
-import com.google.gson.stream.JsonReader;
 import java.io.IOException;
 import java.io.Reader;
-import java.io.StringReader;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import org.counterpoise.core.design.DesignMethod;
@@ -17,13 +11,24 @@ import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.model.ExcitationKind;
 import org.counterpoise.core.response.ResponseKind;
 import org.counterpoise.core.units.Dimension;
+import org.counterpoise.core.units.PhysicalRange;
 import org.counterpoise.core.units.Unit;
+import org.counterpoise.io.PlainMessages;
+import org.counterpoise.io.PlainText;
+import org.counterpoise.io.TextFiles;
 
 /**
  * Reads a project file (format described in docs/project-file.md). Every problem becomes an
  * {@link InvalidInputException} naming the JSON path, the value found and what is allowed.
  */
 public final class ProjectReader {
+    /**
+     * The largest project file read: 1 MiB. The shipped projects are 1 to 2 kB and a project with
+     * every field and a page of notes stays under 20 kB, so the cap leaves fifty times that, while
+     * a file of many megabytes (a wrong file chosen, /dev/zero, a log) is refused before it is read.
+     */
+    public static final long MAX_BYTES = 1L << 20;
+
     private ProjectReader() {
     }
 
@@ -33,46 +38,56 @@ public final class ProjectReader {
      * @throws InvalidInputException when the file cannot be read or holds a bad value
      */
     public static LoadedProject read(Path file) {
-        String text;
-        try {
-            text = Files.readString(file, StandardCharsets.UTF_8);
-        } catch (IOException e) {
-            throw new InvalidInputException("(file)", file.toString(), "must be a readable project file ("
-                    + e.getClass().getSimpleName() + (e.getMessage() == null ? "" : ": " + e.getMessage()) + ")");
-        }
-        return read(new StringReader(text));
+        String text = TextFiles.readUtf8(file, file.toString(), MAX_BYTES, "project file (.json)");
+        return read(file.toString(), text);
     }
 
     /**
-     * @param reader JSON text
+     * @param reader JSON text (at most {@link #MAX_BYTES} characters are read)
      * @return the project and its unknown fields
      */
     public static LoadedProject read(Reader reader) {
-        JsonElement root;
+        char[] buffer = new char[(int) MAX_BYTES + 1];
+        int n = 0;
         try {
-            JsonReader json = new JsonReader(reader);
-            json.setStrictness(com.google.gson.Strictness.STRICT);
-            root = JsonParser.parseReader(json);
-        } catch (JsonParseException | IllegalStateException e) {
-            String detail = e.getMessage() == null ? "" : e.getMessage().replaceAll("\\s*See https?://\\S+", "");
-            throw new InvalidInputException("(file)", "not valid JSON", "must be a JSON object; " + detail);
+            for (int got; n < buffer.length && (got = reader.read(buffer, n, buffer.length - n)) > 0;) {
+                n += got;
+            }
+        } catch (IOException e) {
+            throw PlainMessages.unreadable("(project)", e);
         }
+        if (n > MAX_BYTES) {
+            throw InvalidInputException.unusable("(project)", "is larger than " + TextFiles.size(MAX_BYTES),
+                    "a project file is a few kB");
+        }
+        return read("(project)", new String(buffer, 0, n));
+    }
+
+    private static LoadedProject read(String fileName, String text) {
+        JsonElement root = StrictJson.parse(fileName, text);
         List<String> unknown = JsonFields.newUnknownList();
-        JsonFields top = JsonFields.root(root, unknown);
-        int version = (int) top.number("format_version");
-        if (version != Project.FORMAT_VERSION) {
-            throw new InvalidInputException("format_version", Integer.toString(version),
-                    "this version of Counterpoise reads format_version " + Project.FORMAT_VERSION);
+        JsonFields top = JsonFields.root(root, unknown, fileName);
+        double versionNumber = top.number("format_version");
+        if (versionNumber != Project.FORMAT_VERSION) {
+            throw new InvalidInputException("format_version", top.shown("format_version"),
+                    versionNumber == Math.rint(versionNumber) && versionNumber > Project.FORMAT_VERSION
+                            ? "this file was written by a newer Counterpoise; this version reads format_version "
+                                    + Project.FORMAT_VERSION
+                            : "a whole number; this version of Counterpoise reads format_version "
+                                    + Project.FORMAT_VERSION);
         }
         String name = top.text("name", "Untitled");
         String notes = top.text("notes", "");
+        ProjectIdentity identity = new ProjectIdentity(top.text("revision", ""), top.text("engineer", ""),
+                top.text("client", ""), top.text("date", ""));
         StructureInput structure = structure(top.object("structure"));
         DisturbanceInput disturbance = disturbance(top.object("disturbance"));
         AbsorberInput absorber = absorber(top.object("absorber"));
         JsonFields robust = top.optionalObject("robustness");
         RobustnessInput robustness = robust == null ? null : robustness(robust, absorber.response());
         top.finish();
-        return new LoadedProject(new Project(name, notes, structure, disturbance, absorber, robustness), unknown);
+        return new LoadedProject(new Project(name, notes, structure, disturbance, absorber, robustness,
+                identity), unknown);
     }
 
     /**
@@ -90,12 +105,13 @@ public final class ProjectReader {
         QuantityInput target = r.optionalQuantity("target", response.dimension());
         double samples = r.number("samples", 0);
         if (samples != Math.rint(samples) || samples < 0 || samples > 1_000_000) {
-            throw new InvalidInputException(r.pathOf("samples"), Double.toString(samples),
+            throw new InvalidInputException(r.pathOf("samples"), r.shown("samples"),
                     "a whole number from 1 to 1000000");
         }
         double seed = r.number("seed", 1);
-        if (seed != Math.rint(seed)) {
-            throw new InvalidInputException(r.pathOf("seed"), Double.toString(seed), "a whole number");
+        if (seed != Math.rint(seed) || Math.abs(seed) > 1e15) {
+            throw new InvalidInputException(r.pathOf("seed"), r.shown("seed"),
+                    "a whole number from -10^15 to 10^15");
         }
         JsonFields t = r.optionalObject("tolerances");
         RobustnessInput.ToleranceInput[] tol = new RobustnessInput.ToleranceInput[5];
@@ -151,9 +167,10 @@ public final class ProjectReader {
     private static DisturbanceInput disturbance(JsonFields d) {
         String kindText = d.text("kind");
         ExcitationKind kind = Ids.parse(ExcitationKind.class, kindText).orElseThrow(() -> new InvalidInputException(
-                d.pathOf("kind"), "\"" + kindText + "\"", "one of " + Ids.list(ExcitationKind.values())));
+                d.pathOf("kind"), "\"" + PlainText.quote(kindText) + "\"", "one of " + Ids.list(ExcitationKind.values())));
         QuantityInput amplitude = d.quantity("amplitude", kind.amplitudeDimension());
-        double order = d.number("harmonic_order", 1.0);
+        double order = PhysicalRange.HARMONIC_ORDER.check(d.pathOf("harmonic_order"), d.number("harmonic_order", 1.0),
+                null);
         QuantityInput frequency = d.optionalQuantity("frequency", Dimension.FREQUENCY);
         JsonFields band = d.optionalObject("band");
         if ((frequency == null) == (band == null)) {
@@ -165,6 +182,8 @@ public final class ProjectReader {
             double low = band.number("low");
             double high = band.number("high");
             Unit unit = JsonFields.unit(band, "unit", Dimension.FREQUENCY);
+            PhysicalRange.FREQUENCY.check(band.pathOf("low"), low, unit);
+            PhysicalRange.FREQUENCY.check(band.pathOf("high"), high, unit);
             band.finish();
             out = new DisturbanceInput(kind, amplitude, null, low, high, unit, order);
         } else {
@@ -175,15 +194,16 @@ public final class ProjectReader {
     }
 
     private static AbsorberInput absorber(JsonFields a) {
-        double ratio = a.has("mass_ratio") ? a.number("mass_ratio") : Double.NaN;
+        double ratio = a.has("mass_ratio")
+                ? PhysicalRange.MASS_RATIO.check(a.pathOf("mass_ratio"), a.number("mass_ratio"), null) : Double.NaN;
         QuantityInput mass = a.optionalQuantity("mass", Dimension.MASS);
         String methodText = a.text("method", DesignMethod.EQUAL_PEAK.id());
         DesignMethod method = DesignMethod.byId(methodText).orElseThrow(() -> new InvalidInputException(
-                a.pathOf("method"), "\"" + methodText + "\"", "one of " + DesignMethod.ids()));
+                a.pathOf("method"), "\"" + PlainText.quote(methodText) + "\"", "one of " + DesignMethod.ids()));
         String responseText = a.text("response", Ids.of(ResponseKind.DISPLACEMENT));
         ResponseKind response = Ids.parse(ResponseKind.class, responseText)
                 .filter(Project.DESIGN_RESPONSES::contains)
-                .orElseThrow(() -> new InvalidInputException(a.pathOf("response"), "\"" + responseText + "\"",
+                .orElseThrow(() -> new InvalidInputException(a.pathOf("response"), "\"" + PlainText.quote(responseText) + "\"",
                         "one of " + Ids.list(Project.DESIGN_RESPONSES.toArray(new ResponseKind[0]))));
         boolean hangs = a.bool("hangs_vertically", false);
         double margin = a.number("stroke_margin", DesignStudy.DEFAULT_STROKE_MARGIN);

@@ -23,6 +23,11 @@ public final class ProjectWriter {
         if (!project.notes().isEmpty()) {
             root.addProperty("notes", project.notes());
         }
+        ProjectIdentity id = project.identity();
+        putText(root, "revision", id.revision());
+        putText(root, "engineer", id.engineer());
+        putText(root, "client", id.client());
+        putText(root, "date", id.date());
         root.add("structure", structure(project.structure()));
         root.add("disturbance", disturbance(project.disturbance()));
         root.add("absorber", absorber(project.absorber()));
@@ -134,6 +139,12 @@ public final class ProjectWriter {
             o.add("tolerances", t);
         }
         return o;
+    }
+
+    private static void putText(JsonObject o, String key, String text) {
+        if (!text.isEmpty()) {
+            o.addProperty(key, text);
+        }
     }
 
     private static void putNumber(JsonObject o, String key, double v) {

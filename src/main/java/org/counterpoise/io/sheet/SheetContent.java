@@ -14,6 +14,7 @@ import org.counterpoise.core.response.ResponseKind;
 import org.counterpoise.core.response.ResponsePeak;
 import org.counterpoise.core.units.Dimension;
 import org.counterpoise.core.units.Unit;
+import org.counterpoise.io.project.ProjectIdentity;
 import org.counterpoise.io.text.DesignReport;
 import org.counterpoise.io.text.DisplayUnits;
 import org.counterpoise.io.text.QuantityFormat;
@@ -86,11 +87,36 @@ public record SheetContent(String projectName, String notes, String date, String
      */
     public static SheetContent of(DesignResult r, String notes, String date, String revision,
             org.counterpoise.core.robust.MonteCarloResult monteCarlo) {
+        return of(r, notes, date, revision, monteCarlo, ProjectIdentity.EMPTY);
+    }
+
+    /**
+     * @param r the design result
+     * @param notes the project's notes, or empty
+     * @param date date of issue
+     * @param revision revision mark
+     * @param monteCarlo a tolerance Monte Carlo of the design, or null when none was run
+     * @param identity the project's engineer and client or site, printed first when given (its
+     *     revision and date are the caller's to pass as {@code revision} and {@code date})
+     * @return the sheet content
+     */
+    public static SheetContent of(DesignResult r, String notes, String date, String revision,
+            org.counterpoise.core.robust.MonteCarloResult monteCarlo, ProjectIdentity identity) {
         DesignStudy study = r.study();
         Structure s = study.structure();
         Excitation e = study.excitation();
         FrequencyBand band = e.band();
         List<Section> sections = new ArrayList<>();
+        List<Row> project = new ArrayList<>();
+        if (!identity.engineer().isBlank()) {
+            project.add(new Row("Engineer", identity.engineer().strip(), ""));
+        }
+        if (!identity.client().isBlank()) {
+            project.add(new Row("Client or site", identity.client().strip(), ""));
+        }
+        if (!project.isEmpty()) {
+            sections.add(new Section("Project", project));
+        }
 
         List<Row> structure = new ArrayList<>();
         structure.add(quantity("Effective mass m1", s.effectiveMass(), Dimension.MASS));

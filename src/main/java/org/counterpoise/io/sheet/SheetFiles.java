@@ -2,26 +2,34 @@ package org.counterpoise.io.sheet;
 
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
-import java.nio.file.AccessDeniedException;
 import java.nio.file.Files;
-import java.nio.file.NoSuchFileException;
+import java.nio.file.LinkOption;
 import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.LinkedHashSet;
 import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import java.util.function.BiFunction;
 import org.counterpoise.core.design.DesignCurves;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.io.AtomicFiles;
+import org.counterpoise.io.FileWriteException;
+import org.counterpoise.io.WriteErrors;
 import org.counterpoise.io.chart.ChartFactory;
 import org.counterpoise.io.chart.ChartFiles;
 import org.counterpoise.io.export.CurveCsv;
 import org.counterpoise.io.export.ResultJson;
+import org.counterpoise.io.project.ProjectIdentity;
 import org.knowm.xchart.XYChart;
 
 /**
- * Writes the parameter sheet and the exports to files. Every file is written to a temporary file
- * in the same folder and renamed over the target, so a crash never leaves a broken file. An
- * existing file is replaced only when the caller says so; every failure is reported as a clear
- * message naming the path.
+ * Writes the parameter sheet and the exports to files through {@link AtomicFiles}: a crash never
+ * leaves a broken file, and the files of one request are written all or none. An existing file is
+ * replaced only when the caller says so, and only if it is an ordinary file; every failure is
+ * reported as a clear message naming the option and the path.
  */
 public final class SheetFiles {
     /** Chart size for the sheet and the exports, in points or pixels. */
@@ -52,10 +60,22 @@ public final class SheetFiles {
      */
     public static void writeSheet(DesignResult r, String notes, Path pdf, String date, String revision, boolean force,
             String option) {
-        checkTarget(pdf, force, option);
-        SheetContent content = SheetContent.of(r, notes, date, revision, monteCarlo(r));
-        List<XYChart> charts = charts(r, DesignCurves.of(r));
-        atomically(pdf, option, out -> SheetWriter.write(content, charts, out));
+        writeSheet(r, notes, pdf, date, revision, force, option, ProjectIdentity.EMPTY);
+    }
+
+    /**
+     * @param r the design
+     * @param notes the project's notes, or empty
+     * @param pdf the PDF to write
+     * @param date date of issue
+     * @param revision revision mark
+     * @param force true to replace an existing file
+     * @param option the option the path came from (for messages)
+     * @param identity the project's engineer and client or site
+     */
+    public static void writeSheet(DesignResult r, String notes, Path pdf, String date, String revision, boolean force,
+            String option, ProjectIdentity identity) {
+        new Outputs(r).sheet(pdf, notes, date, revision, option, identity).write(force);
     }
 
     /**
@@ -74,7 +94,8 @@ public final class SheetFiles {
     }
 
     /**
-     * Writes curves.csv, result.json, and response and stroke charts as PNG and SVG into a folder.
+     * Writes curves.csv, result.json, and response and stroke charts as PNG and SVG into a folder,
+     * all or none.
      * @param r the design
      * @param dir the folder (created when missing)
      * @param force true to replace existing files
@@ -82,54 +103,233 @@ public final class SheetFiles {
      * @return the files written
      */
     public static List<Path> writeExports(DesignResult r, Path dir, boolean force, String option) {
-        try {
-            Files.createDirectories(dir);
-        } catch (IOException e) {
-            throw unwritable(dir, option, e);
+        return new Outputs(r).data(dir, option).charts(dir, option).write(force);
+    }
+
+    /**
+     * The files of one request (sheet, data, charts), written as one set: every file or none.
+     * Before anything is written, every destination is checked (an existing file needs
+     * {@code force}; only an ordinary file is ever replaced); on a failure the files already
+     * there are left as they were and folders this request created are removed again.
+     */
+    public static final class Outputs {
+        private final DesignResult result;
+        private final Map<Path, Planned> planned = new LinkedHashMap<>();
+        private final Set<Path> folders = new LinkedHashSet<>();
+        private final Map<Path, String> spared = new LinkedHashMap<>();
+        private DesignCurves curves;
+        private List<XYChart> charts;
+
+        /** @param result the design whose sheet and exports are written */
+        public Outputs(DesignResult result) {
+            this.result = result;
         }
-        DesignCurves curves = DesignCurves.of(r);
-        Path csv = dir.resolve("curves.csv");
-        Path json = dir.resolve("result.json");
-        Path responsePng = dir.resolve("response.png");
-        Path responseSvg = dir.resolve("response.svg");
-        Path strokePng = dir.resolve("stroke.png");
-        Path strokeSvg = dir.resolve("stroke.svg");
-        List<Path> all = List.of(csv, json, responsePng, responseSvg, strokePng, strokeSvg);
-        for (Path p : all) {
-            checkTarget(p, force, option);
+
+        /**
+         * The sheet without project identity lines.
+         * @param pdf the PDF
+         * @param notes the project's notes, or empty
+         * @param date date of issue
+         * @param revision revision mark
+         * @param option the option the path came from (for messages)
+         * @return this
+         */
+        public Outputs sheet(Path pdf, String notes, String date, String revision, String option) {
+            return sheet(pdf, notes, date, revision, option, ProjectIdentity.EMPTY);
         }
-        atomically(csv, option, out -> out.write(CurveCsv.of(curves).getBytes(StandardCharsets.UTF_8)));
-        atomically(json, option, out -> out.write(ResultJson.toJson(r).getBytes(StandardCharsets.UTF_8)));
-        List<XYChart> charts = charts(r, curves);
-        atomically(responsePng, option, out -> ChartFiles.png(charts.get(0), out));
-        atomically(responseSvg, option, out -> ChartFiles.svg(charts.get(0), out));
-        atomically(strokePng, option, out -> ChartFiles.png(charts.get(1), out));
-        atomically(strokeSvg, option, out -> ChartFiles.svg(charts.get(1), out));
-        return all;
+
+        /**
+         * @param pdf the PDF
+         * @param notes the project's notes, or empty
+         * @param date date of issue
+         * @param revision revision mark
+         * @param option the option the path came from (for messages)
+         * @param identity the project's engineer and client or site
+         * @return this
+         */
+        public Outputs sheet(Path pdf, String notes, String date, String revision, String option,
+                ProjectIdentity identity) {
+            return add(pdf, "sheet", option, out -> SheetWriter.write(
+                    SheetContent.of(result, notes, date, revision, monteCarlo(result), identity), charts(), out));
+        }
+
+        /**
+         * @param dir folder for curves.csv and result.json (created when missing)
+         * @param option the option the folder came from
+         * @return this
+         */
+        public Outputs data(Path dir, String option) {
+            folders.add(dir);
+            add(dir.resolve("curves.csv"), "curves.csv", option,
+                    out -> out.write(CurveCsv.of(curves()).getBytes(StandardCharsets.UTF_8)));
+            return add(dir.resolve("result.json"), "result.json", option,
+                    out -> out.write(ResultJson.toJson(result).getBytes(StandardCharsets.UTF_8)));
+        }
+
+        /**
+         * @param dir folder for the response and stroke charts as PNG and SVG (created when missing)
+         * @param option the option the folder came from
+         * @return this
+         */
+        public Outputs charts(Path dir, String option) {
+            folders.add(dir);
+            add(dir.resolve("response.png"), "response.png", option, out -> ChartFiles.png(charts().get(0), out));
+            add(dir.resolve("response.svg"), "response.svg", option, out -> ChartFiles.svg(charts().get(0), out));
+            add(dir.resolve("stroke.png"), "stroke.png", option, out -> ChartFiles.png(charts().get(1), out));
+            return add(dir.resolve("stroke.svg"), "stroke.svg", option, out -> ChartFiles.svg(charts().get(1), out));
+        }
+
+        /**
+         * A file no output may replace, even with force (the project being read, say).
+         * @param kept the file
+         * @param what what it is, for the message
+         * @return this
+         */
+        public Outputs sparing(Path kept, String what) {
+            spared.put(kept, what);
+            return this;
+        }
+
+        /** @return the files this request writes, in order */
+        public List<Path> paths() {
+            return List.copyOf(planned.keySet());
+        }
+
+        /**
+         * @param force true to replace existing files
+         * @return the files written
+         * @throws InvalidInputException naming the option and the path when a file must not be
+         *     replaced or cannot be written; nothing is then changed
+         */
+        public List<Path> write(boolean force) {
+            return write(force, (index, body) -> body);
+        }
+
+        /** @param decorate wraps the body of the file at an index (tests inject failures with it) */
+        List<Path> write(boolean force, BiFunction<Integer, AtomicFiles.Body, AtomicFiles.Body> decorate) {
+            for (Planned p : planned.values()) {
+                checkSpared(p);
+                checkTarget(p.path, force, p.option);
+            }
+            List<Path> created = new ArrayList<>();
+            for (Path dir : folders) {
+                createFolder(dir, optionFor(dir), created);
+            }
+            List<AtomicFiles.Entry> entries = new ArrayList<>();
+            int index = 0;
+            for (Planned p : planned.values()) {
+                entries.add(new AtomicFiles.Entry(p.path, decorate.apply(index++, p.body)));
+            }
+            boolean done = false;
+            try {
+                AtomicFiles.writeAll(entries);
+                done = true;
+            } catch (FileWriteException e) {
+                Planned failed = planned.get(e.path());
+                throw new InvalidInputException(failed == null ? "output" : failed.option, e.path().toString(),
+                        e.problem());
+            } finally {
+                if (!done) {
+                    removeEmpty(created);
+                }
+            }
+            return paths();
+        }
+
+        private void checkSpared(Planned p) {
+            for (Map.Entry<Path, String> kept : spared.entrySet()) {
+                try {
+                    if (Files.exists(p.path) && Files.isSameFile(p.path, kept.getKey())) {
+                        throw new InvalidInputException(p.option, p.path.toString(),
+                                "is " + kept.getValue() + "; choose another name");
+                    }
+                } catch (IOException unreadable) {
+                    // a path that cannot be examined is reported by the write itself
+                }
+            }
+        }
+
+        private Outputs add(Path path, String kind, String option, AtomicFiles.Body body) {
+            Planned before = planned.get(path);
+            if (before == null) {
+                planned.put(path, new Planned(path, kind, option, body));
+            } else if (!before.kind.equals(kind)) {
+                throw new InvalidInputException(option, path.toString(), "is also where the " + before.kind
+                        + " goes (" + before.option + "); give another name");
+            }
+            return this;
+        }
+
+        private String optionFor(Path dir) {
+            for (Planned p : planned.values()) {
+                if (dir.equals(p.path.getParent())) {
+                    return p.option;
+                }
+            }
+            return "output";
+        }
+
+        private DesignCurves curves() {
+            if (curves == null) {
+                curves = DesignCurves.of(result);
+            }
+            return curves;
+        }
+
+        private List<XYChart> charts() {
+            if (charts == null) {
+                charts = SheetFiles.charts(result, curves());
+            }
+            return charts;
+        }
+    }
+
+    private record Planned(Path path, String kind, String option, AtomicFiles.Body body) {
     }
 
     private static void checkTarget(Path target, boolean force, String option) {
-        if (Files.isDirectory(target)) {
-            throw new InvalidInputException(option, target.toString(), "is a folder; give a file name");
-        }
-        if (Files.exists(target) && !force) {
-            throw new InvalidInputException(option, target.toString(),
-                    "already exists; add --force to replace it, or choose another name");
+        if (Files.exists(target, LinkOption.NOFOLLOW_LINKS)) {
+            try {
+                AtomicFiles.checkReplaceable(target);
+            } catch (FileWriteException e) {
+                throw new InvalidInputException(option, target.toString(), e.problem());
+            }
+            if (!force) {
+                throw new InvalidInputException(option, target.toString(),
+                        "already exists; add --force to replace it, or choose another name");
+            }
         }
     }
 
-    private static void atomically(Path target, String option, AtomicFiles.Body body) {
+    /** Creates a folder and its missing parents, noting each one created (outermost first). */
+    private static void createFolder(Path dir, String option, List<Path> created) {
+        if (Files.isDirectory(dir)) {
+            return;
+        }
+        if (Files.exists(dir)) {
+            throw new InvalidInputException(option, dir.toString(), "is a file, not a folder; give a folder");
+        }
+        List<Path> missing = new ArrayList<>();
+        for (Path p = dir.toAbsolutePath(); p != null && !Files.exists(p, LinkOption.NOFOLLOW_LINKS); p = p.getParent()) {
+            missing.add(0, p);
+        }
         try {
-            AtomicFiles.write(target, body);
+            Files.createDirectories(dir);
+            created.addAll(missing);
         } catch (IOException e) {
-            throw unwritable(target, option, e);
+            throw new InvalidInputException(option, dir.toString(),
+                    "cannot be written here (" + WriteErrors.reason(e) + ")");
         }
     }
 
-    private static InvalidInputException unwritable(Path target, String option, IOException e) {
-        String why = e instanceof NoSuchFileException ? "its folder does not exist"
-                : e instanceof AccessDeniedException ? "permission denied"
-                : e.getMessage() == null ? e.getClass().getSimpleName() : e.getMessage();
-        return new InvalidInputException(option, target.toString(), "cannot be written here (" + why + ")");
+    /** Removes folders this request created, innermost first, as long as they are empty. */
+    private static void removeEmpty(List<Path> created) {
+        for (int i = created.size() - 1; i >= 0; i--) {
+            try {
+                Files.deleteIfExists(created.get(i));
+            } catch (IOException notEmptyOrGone) {
+                return;
+            }
+        }
     }
 }

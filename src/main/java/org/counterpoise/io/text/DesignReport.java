@@ -14,6 +14,7 @@ import org.counterpoise.core.response.ResponseKind;
 import org.counterpoise.core.response.ResponsePeak;
 import org.counterpoise.core.units.Dimension;
 import org.counterpoise.core.units.Unit;
+import org.counterpoise.io.project.ProjectIdentity;
 
 /** The plain-text design report printed by the command line. */
 public final class DesignReport {
@@ -27,11 +28,27 @@ public final class DesignReport {
      * @return the report, lines ending in '\n'
      */
     public static String render(DesignResult r) {
+        return render(r, ProjectIdentity.EMPTY);
+    }
+
+    /**
+     * @param r the design result
+     * @param identity revision, engineer, client or site and date, printed under the title when given
+     * @return the report, lines ending in '\n'
+     */
+    public static String render(DesignResult r, ProjectIdentity identity) {
         StringBuilder out = new StringBuilder();
         DesignStudy study = r.study();
         Structure s = study.structure();
         Excitation e = study.excitation();
         out.append("Counterpoise absorber design: ").append(study.name()).append('\n');
+        if (!identity.isEmpty()) {
+            section(out, "Project");
+            identityRow(out, "revision", identity.revision());
+            identityRow(out, "date", identity.date());
+            identityRow(out, "engineer", identity.engineer());
+            identityRow(out, "client or site", identity.client());
+        }
 
         section(out, "Structure (effective values at the absorber point)");
         row(out, "mass", DisplayUnits.format(s.effectiveMass(), Dimension.MASS));
@@ -215,5 +232,11 @@ public final class DesignReport {
             line.append(word).append(' ');
         }
         out.append(line.toString().stripTrailing()).append('\n');
+    }
+
+    private static void identityRow(StringBuilder out, String label, String value) {
+        if (!value.isBlank()) {
+            row(out, label, value.strip().replaceAll("\\s+", " "));
+        }
     }
 }

@@ -5,7 +5,7 @@ import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Spec;
 
 /** The top command: lists the sub-commands. */
-@Command(name = "counterpoise", mixinStandardHelpOptions = true, version = "Counterpoise 0.1",
+@Command(name = "counterpoise", mixinStandardHelpOptions = true, versionProvider = Version.class,
         description = {"Design assistant for dynamic vibration absorbers (tuned mass dampers).",
             "A preliminary design aid: verify by measurement; local codes and licensed practice govern."},
         subcommands = {DesignCommand.class, OptimumCommand.class, RobustnessCommand.class, SheetCommand.class})

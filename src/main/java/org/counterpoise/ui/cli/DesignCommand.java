@@ -4,6 +4,7 @@ import java.nio.file.Path;
 import java.util.concurrent.Callable;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.Designer;
+import org.counterpoise.io.PlainText;
 import org.counterpoise.io.export.ResultJson;
 import org.counterpoise.io.project.LoadedProject;
 import org.counterpoise.io.text.DesignReport;
@@ -30,7 +31,8 @@ public final class DesignCommand implements Callable<Integer> {
     public Integer call() {
         LoadedProject loaded = ProjectFiles.read(spec, file);
         DesignResult result = Designer.design(loaded.project().toStudy());
-        spec.commandLine().getOut().print(json ? ResultJson.toJson(result) : DesignReport.render(result));
+        spec.commandLine().getOut().print(PlainText.forTerminal(json ? ResultJson.toJson(result)
+                : DesignReport.render(result, loaded.project().identity())));
         spec.commandLine().getOut().flush();
         return 0;
     }

@@ -2,8 +2,6 @@ package org.counterpoise.ui.cli;
 
 import java.io.IOException;
 import java.io.PrintWriter;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Arrays;
@@ -18,6 +16,9 @@ import org.counterpoise.core.optim.PeakProblem;
 import org.counterpoise.core.optim.VarianceOptimiser;
 import org.counterpoise.core.optim.VarianceOptimum;
 import org.counterpoise.core.response.ResponseKind;
+import org.counterpoise.core.units.PhysicalRange;
+import org.counterpoise.io.PlainText;
+import org.counterpoise.io.TextFiles;
 import org.counterpoise.io.export.OptimumTable;
 import org.counterpoise.io.project.Ids;
 import picocli.CommandLine.Command;
@@ -33,6 +34,16 @@ public final class OptimumCommand implements Callable<Integer> {
     private static final List<ResponseKind> RESPONSES = List.of(ResponseKind.DISPLACEMENT, ResponseKind.VELOCITY,
             ResponseKind.ACCELERATION, ResponseKind.RELATIVE_DISPLACEMENT, ResponseKind.STROKE,
             ResponseKind.TRANSMITTED_FORCE);
+
+    /**
+     * Most cases in one run: 100 000. A design chart needs a few hundred points; one case takes
+     * about 1 ms (H-infinity or H2, measured on the presets' problems), so the cap is about two
+     * minutes of work and some 30 MB of output, while a 10^4 x 10^4 grid (10^8 cases, days of work
+     * and more memory than a desktop has) is refused before anything is computed.
+     */
+    static final int MAX_CASES = 100_000;
+    /** Largest --cases file: 100 000 rows of a few dozen characters stay below 8 MiB. */
+    static final long MAX_CASES_BYTES = 8L << 20;
 
     @Spec
     private CommandSpec spec;
@@ -132,9 +143,18 @@ public final class OptimumCommand implements Callable<Integer> {
         ExcitationKind e = parseExcitation(excitation, "--excitation");
         ResponseKind r = parseResponse(response, "--response");
         double[] g = parseBand(band);
+        double[] mus = range("--mass-ratio", massRatio);
+        double[] zetas = range("--structure-damping", structureDamping);
+        long count = (long) mus.length * zetas.length;
+        if (count > MAX_CASES) {
+            throw new InvalidInputException("--mass-ratio", mus.length + " values times --structure-damping "
+                    + zetas.length + " values = " + count + " cases", "at most " + MAX_CASES + " cases in one run;"
+                    + " use fewer values or split the grid into several runs");
+        }
         List<PeakProblem> out = new ArrayList<>();
-        for (double mu : range("--mass-ratio", massRatio)) {
-            for (double z : range("--structure-damping", structureDamping)) {
+        for (double mu : mus) {
+            PhysicalRange.MASS_RATIO.check("--mass-ratio", mu, null);
+            for (double z : zetas) {
                 out.add(problem(e, r, mu, z, g));
             }
         }
@@ -156,31 +176,35 @@ public final class OptimumCommand implements Callable<Integer> {
     }
 
     private List<PeakProblem> fromCases(Path file) throws IOException {
-        List<String> lines;
-        try {
-            lines = Files.readAllLines(file, StandardCharsets.UTF_8);
-        } catch (IOException e) {
-            throw new InvalidInputException("--cases", file.toString(), "must be a readable CSV file");
-        }
+        String text = TextFiles.readUtf8(file, "--cases " + file, MAX_CASES_BYTES, "CSV file of cases");
+        List<String> lines = new ArrayList<>(text.lines().toList());
         lines.removeIf(String::isBlank);
-        if (lines.isEmpty()) {
-            throw new InvalidInputException("--cases", file.toString(), "must hold a header line and cases");
+        if (lines.size() < 2) {
+            throw InvalidInputException.unusable("--cases " + PlainText.escape(file.toString()),
+                    lines.isEmpty() ? "is empty" : "holds a header line but no cases",
+                    "a header line such as mass_ratio,structure_damping_ratio and one line per case");
+        }
+        if (lines.size() - 1 > MAX_CASES) {
+            throw InvalidInputException.unusable("--cases " + PlainText.escape(file.toString()), "holds "
+                    + (lines.size() - 1) + " cases", "at most " + MAX_CASES + " cases in one run; split the file");
         }
         List<String> header = Arrays.stream(lines.get(0).split(",")).map(String::strip).toList();
         int mu = header.indexOf("mass_ratio");
         if (mu < 0) {
-            throw new InvalidInputException("--cases", "header " + lines.get(0),
+            throw new InvalidInputException("--cases", "header " + PlainText.quote(lines.get(0)),
                     "needs a mass_ratio column (and optionally structure_damping_ratio, excitation, response,"
                             + " band_low, band_high)");
         }
         List<PeakProblem> out = new ArrayList<>();
         for (int i = 1; i < lines.size(); i++) {
             String[] cells = lines.get(i).split(",", -1);
-            String where = file.getFileName() + " line " + (i + 1);
+            String where = PlainText.escape(String.valueOf(file.getFileName())) + " line " + (i + 1);
             if (cells.length != header.size()) {
-                throw new InvalidInputException(where, lines.get(i), "needs " + header.size() + " comma-separated cells");
+                throw new InvalidInputException(where, PlainText.quote(lines.get(i)),
+                        "needs " + header.size() + " comma-separated cells, as the header has");
             }
-            double m = number(where + " mass_ratio", cells[mu]);
+            double m = PhysicalRange.MASS_RATIO.check(where + " mass_ratio", number(where + " mass_ratio", cells[mu]),
+                    null);
             double z = column(header, cells, "structure_damping_ratio", where, 0.0);
             ExcitationKind e = header.contains("excitation")
                     ? parseExcitation(cells[header.indexOf("excitation")].strip(), where + " excitation")
@@ -211,13 +235,14 @@ public final class OptimumCommand implements Callable<Integer> {
     }
 
     private static ExcitationKind parseExcitation(String text, String field) {
-        return Ids.parse(ExcitationKind.class, text).orElseThrow(() -> new InvalidInputException(field, text,
+        return Ids.parse(ExcitationKind.class, text).orElseThrow(() -> new InvalidInputException(field,
+                PlainText.quote(text),
                 "one of " + Ids.list(ExcitationKind.values())));
     }
 
     private static ResponseKind parseResponse(String text, String field) {
         return Ids.parse(ResponseKind.class, text).filter(RESPONSES::contains).orElseThrow(() ->
-                new InvalidInputException(field, text, "one of " + Ids.list(RESPONSES.toArray(new ResponseKind[0]))));
+                new InvalidInputException(field, PlainText.quote(text), "one of " + Ids.list(RESPONSES.toArray(new ResponseKind[0]))));
     }
 
     private static double[] parseBand(String text) {
@@ -226,12 +251,15 @@ public final class OptimumCommand implements Callable<Integer> {
         }
         String[] parts = text.split(":", -1);
         if (parts.length != 2) {
-            throw new InvalidInputException("--band", text, "LO:HI, two frequency ratios such as 0.9:1.1");
+            throw new InvalidInputException("--band", PlainText.quote(text),
+                    "LO:HI, two frequency ratios such as 0.9:1.1 (HI may be inf)");
         }
         double lo = number("--band", parts[0]);
-        double hi = parts[1].strip().equalsIgnoreCase("inf") ? Double.POSITIVE_INFINITY : number("--band", parts[1]);
+        double hi = parts[1].strip().equalsIgnoreCase("inf") ? Double.POSITIVE_INFINITY
+                : number("--band", parts[1]);
         if (!(lo >= 0) || !(hi > lo)) {
-            throw new InvalidInputException("--band", text, "needs 0 <= LO < HI (an empty band has no peak)");
+            throw new InvalidInputException("--band", PlainText.quote(text),
+                    "needs 0 <= LO < HI (an empty band has no peak)");
         }
         return new double[] {lo, hi};
     }
@@ -242,7 +270,8 @@ public final class OptimumCommand implements Callable<Integer> {
             return new double[] {number(option, parts[0])};
         }
         if (parts.length != 3) {
-            throw new InvalidInputException(option, text, "a number, or LO:HI:N for N values from LO to HI");
+            throw new InvalidInputException(option, PlainText.quote(text),
+                    "a number, or LO:HI:N for N values from LO to HI");
         }
         double lo = number(option, parts[0]);
         double hi = number(option, parts[1]);
@@ -250,13 +279,15 @@ public final class OptimumCommand implements Callable<Integer> {
         try {
             n = Integer.parseInt(parts[2].strip());
         } catch (NumberFormatException e) {
-            throw new InvalidInputException(option, text, "N in LO:HI:N must be a whole number from 1 to 10000");
+            throw new InvalidInputException(option, PlainText.quote(text), "N in LO:HI:N must be a whole number from 1 to "
+                    + MAX_CASES);
         }
-        if (n < 1 || n > 10000) {
-            throw new InvalidInputException(option, text, "N in LO:HI:N must be a whole number from 1 to 10000");
+        if (n < 1 || n > MAX_CASES) {
+            throw new InvalidInputException(option, PlainText.quote(text), "N in LO:HI:N must be a whole number from 1 to "
+                    + MAX_CASES);
         }
         if (hi < lo) {
-            throw new InvalidInputException(option, text, "HI must not be below LO");
+            throw new InvalidInputException(option, PlainText.quote(text), "HI must not be below LO");
         }
         double[] out = new double[n];
         for (int i = 0; i < n; i++) {
@@ -267,13 +298,9 @@ public final class OptimumCommand implements Callable<Integer> {
 
     private static double number(String field, String text) {
         try {
-            double v = Double.parseDouble(text.strip());
-            if (!Double.isFinite(v)) {
-                throw new NumberFormatException();
-            }
-            return v;
-        } catch (NumberFormatException e) {
-            throw new InvalidInputException(field, "\"" + text + "\"", "must be a finite number");
+            return Converters.real(text);
+        } catch (picocli.CommandLine.TypeConversionException e) {
+            throw new InvalidInputException(field, Converters.shown(text), e.getMessage());
         }
     }
 }

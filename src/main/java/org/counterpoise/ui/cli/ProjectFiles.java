@@ -1,6 +1,7 @@
 package org.counterpoise.ui.cli;
 
 import java.nio.file.Path;
+import org.counterpoise.io.PlainText;
 import org.counterpoise.io.project.LoadedProject;
 import org.counterpoise.io.project.ProjectReader;
 import picocli.CommandLine.Model.CommandSpec;
@@ -13,8 +14,8 @@ final class ProjectFiles {
     static LoadedProject read(CommandSpec spec, Path file) {
         LoadedProject loaded = ProjectReader.read(file);
         for (String unknown : loaded.unknownFields()) {
-            spec.commandLine().getErr().println("note: " + file + ": field " + unknown
-                    + " is not part of the project format and was not used");
+            spec.commandLine().getErr().println("note: " + PlainText.escape(file.toString()) + ": field "
+                    + PlainText.quote(unknown) + " is not part of the project format and was not used");
         }
         return loaded;
     }

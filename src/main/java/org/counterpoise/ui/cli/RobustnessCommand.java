@@ -8,6 +8,7 @@ import org.counterpoise.core.design.RobustnessAnalysis;
 import org.counterpoise.core.design.RobustnessResult;
 import org.counterpoise.core.design.RobustnessSettings;
 import org.counterpoise.core.error.Checks;
+import org.counterpoise.io.PlainText;
 import org.counterpoise.io.export.RobustnessJson;
 import org.counterpoise.io.project.LoadedProject;
 import org.counterpoise.io.text.RobustnessReport;
@@ -47,7 +48,8 @@ public final class RobustnessCommand implements Callable<Integer> {
         RobustnessSettings used = new RobustnessSettings(s.structureRange(), s.absorberRange(), s.target(),
                 s.tolerances(), samples == null ? s.samples() : samples, seed == null ? s.seed() : seed);
         RobustnessResult r = RobustnessAnalysis.run(design, used);
-        spec.commandLine().getOut().print(json ? RobustnessJson.toJson(design, r) : RobustnessReport.render(design, r));
+        spec.commandLine().getOut().print(PlainText.forTerminal(json ? RobustnessJson.toJson(design, r)
+                : RobustnessReport.render(design, r)));
         spec.commandLine().getOut().flush();
         return 0;
     }

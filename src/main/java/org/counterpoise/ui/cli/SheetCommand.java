@@ -5,6 +5,8 @@ import java.time.LocalDate;
 import java.util.concurrent.Callable;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.Designer;
+import org.counterpoise.core.error.InvalidInputException;
+import org.counterpoise.io.PlainText;
 import org.counterpoise.io.project.LoadedProject;
 import org.counterpoise.io.sheet.SheetFiles;
 import picocli.CommandLine.Command;
@@ -27,17 +29,18 @@ public final class SheetCommand implements Callable<Integer> {
     private Path output;
 
     @Option(names = "--csv", paramLabel = "DIR",
-            description = "also write curves.csv and result.json into DIR")
+            description = "also write curves.csv and result.json into DIR (with the sheet: all files or none)")
     private Path csvDir;
 
     @Option(names = "--plots", paramLabel = "DIR",
             description = "also write the charts as PNG and SVG (and the CSV and JSON) into DIR")
     private Path plotsDir;
 
-    @Option(names = "--revision", paramLabel = "REV", defaultValue = "A", description = "revision mark (default ${DEFAULT-VALUE})")
+    @Option(names = "--revision", paramLabel = "REV",
+            description = "revision mark (default: the project's revision, else A)")
     private String revision;
 
-    @Option(names = "--date", paramLabel = "YYYY-MM-DD", description = "date of issue (default today)")
+    @Option(names = "--date", paramLabel = "YYYY-MM-DD", description = "date of issue (default: the project's date, else today)")
     private LocalDate date;
 
     @Option(names = "--force", description = "replace files that already exist")
@@ -45,18 +48,29 @@ public final class SheetCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
+        if (revision != null && (revision.length() > 20 || !revision.equals(PlainText.escape(revision)))) {
+            throw new InvalidInputException("--revision", "\"" + PlainText.quote(revision) + "\"",
+                    "a short mark of at most 20 characters without control characters, such as A or 2b");
+        }
         LoadedProject loaded = ProjectFiles.read(spec, file);
         DesignResult result = Designer.design(loaded.project().toStudy());
-        String issued = (date == null ? LocalDate.now() : date).toString();
-        SheetFiles.writeSheet(result, loaded.project().notes(), output, issued, revision, force, "--output");
+        var identity = loaded.project().identity();
+        String issued = date != null ? date.toString()
+                : identity.date().isEmpty() ? LocalDate.now().toString() : identity.date();
+        String mark = revision != null ? revision : identity.revision().isEmpty() ? "A" : identity.revision();
+        // The sheet and every export are one set: all are written, or none and nothing changes.
+        SheetFiles.Outputs outputs = new SheetFiles.Outputs(result)
+                .sheet(output, loaded.project().notes(), issued, mark, "--output", identity)
+                .sparing(file, "the project file being read");
+        if (csvDir != null) {
+            outputs.data(csvDir, "--csv");
+        }
+        if (plotsDir != null) {
+            outputs.data(plotsDir, "--plots").charts(plotsDir, "--plots");
+        }
         var out = spec.commandLine().getOut();
-        out.println("wrote " + output);
-        for (Path dir : new Path[] {csvDir, plotsDir}) {
-            if (dir != null) {
-                for (Path p : SheetFiles.writeExports(result, dir, force, dir == csvDir ? "--csv" : "--plots")) {
-                    out.println("wrote " + p);
-                }
-            }
+        for (Path p : outputs.write(force)) {
+            out.println("wrote " + PlainText.escape(p.toString()));
         }
         out.flush();
         return 0;

@@ -13,15 +13,28 @@ public final class GuiMain {
 
     /** Opens the wizard. Unexpected failures are logged and shown as a short message, never a stack trace. */
     public static void launch() {
+        open(null);
+    }
+
+    /**
+     * Opens the wizard on a project file (as {@code java -jar counterpoise.jar FILE.json} does); a
+     * file that cannot be opened is reported in the wizard, which then starts as usual.
+     * @param project the project file, or null for a new project
+     */
+    public static void open(java.nio.file.Path project) {
         Thread.setDefaultUncaughtExceptionHandler((thread, e) -> {
             Logger.getLogger("counterpoise").log(Level.SEVERE, "unexpected failure", e);
             SwingUtilities.invokeLater(() -> JOptionPane.showMessageDialog(null,
-                    "Something went wrong (" + e.getClass().getSimpleName() + "). Your inputs are kept;"
+                    "Something went wrong inside Counterpoise (a bug, not your input). Your inputs are kept;"
                             + " please report what you were doing.", "Counterpoise", JOptionPane.ERROR_MESSAGE));
         });
         SwingUtilities.invokeLater(() -> {
             Themes.apply(false);
-            new WizardFrame().setVisible(true);
+            WizardFrame frame = new WizardFrame();
+            frame.setVisible(true);
+            if (project != null) {
+                frame.openFile(project);
+            }
         });
     }
 }

@@ -8,15 +8,18 @@ import javax.swing.JLabel;
 import javax.swing.JPanel;
 import javax.swing.JRadioButton;
 import javax.swing.JScrollPane;
+import org.counterpoise.core.design.DesignMethod;
 import org.counterpoise.core.model.Excitation;
 import org.counterpoise.core.model.ExcitationKind;
 import org.counterpoise.core.model.Structure;
 import org.counterpoise.core.units.Dimension;
 import org.counterpoise.core.units.Unit;
 import org.counterpoise.io.project.DisturbanceInput;
+import org.counterpoise.io.project.Project;
 import org.counterpoise.io.project.QuantityInput;
 import org.counterpoise.io.text.QuantityFormat;
 import org.counterpoise.io.text.UnitChoices;
+import org.counterpoise.ui.gui.document.ProjectEdits;
 import org.counterpoise.ui.gui.field.Form;
 import org.counterpoise.ui.gui.field.FormSwitch;
 import org.counterpoise.ui.gui.field.QuantityField;
@@ -45,7 +48,7 @@ final class DisturbanceStep extends Step {
     private final JLabel derivedRatio = StructureStep.derived("derived.ratio");
     private final JComponent page;
 
-    DisturbanceStep(Runnable changed) {
+    DisturbanceStep() {
         kind.setName("disturbance.kind");
         oneSpeed.setName("disturbance.oneSpeed");
         speedRange.setName("disturbance.speedRange");
@@ -81,18 +84,18 @@ final class DisturbanceStep extends Step {
         own("disturbance", amplitude);
         kind.addActionListener(e -> {
             amplitude.setUnits(units(kindOf(kind.getSelectedIndex())));
-            changed.run();
+            edited("disturbance.kind");
         });
         oneSpeed.addActionListener(e -> {
             enableSpeeds();
-            changed.run();
+            edited("disturbance.speed");
         });
         speedRange.addActionListener(e -> {
             enableSpeeds();
-            changed.run();
+            edited("disturbance.speed");
         });
         for (QuantityField f : List.of(amplitude, speed, low, high, order)) {
-            f.onChange(changed);
+            f.onChange(() -> edited(f.fieldId()));
         }
         enableSpeeds();
         convertOnChange();
@@ -113,6 +116,28 @@ final class DisturbanceStep extends Step {
                     case UNBALANCE -> "unbalance m\u00b7e";
                     default -> "amplitude of the base motion";
                 });
+    }
+
+    private void edited(String key) {
+        commit(() -> ProjectEdits.disturbance(key, input()));
+    }
+
+    @Override
+    void showProject(Project p, boolean loaded) {
+        boolean variance = p.absorber().method() == DesignMethod.EXACT_VARIANCE
+                || p.absorber().method() == DesignMethod.MINIMUM_VARIANCE;
+        load(p.disturbance(), loaded && variance && p.disturbance().kind() == ExcitationKind.FORCE);
+    }
+
+    @Override
+    boolean fieldsValid() {
+        boolean ok = check(amplitude) & check(order);
+        if (speedRange.isSelected()) {
+            ok &= check(low) & check(high);
+        } else {
+            ok &= check(speed);
+        }
+        return ok;
     }
 
     private void enableSpeeds() {
@@ -147,21 +172,32 @@ final class DisturbanceStep extends Step {
         return new DisturbanceInput(k, a, speed.input(), Double.NaN, Double.NaN, null, h);
     }
 
-    void load(DisturbanceInput d, boolean broadband) {
-        kind.setSelectedIndex(broadband ? BROADBAND : d.kind().ordinal());
-        amplitude.show(d.amplitude().value(), d.amplitude().unit());
+    /**
+     * @param d the disturbance
+     * @param broadband true to show a force as broadband (a file says so through its variance method)
+     */
+    private void load(DisturbanceInput d, boolean broadband) {
+        // A broadband force is a force in the file: keep the broadband choice unless the kind changed.
+        if (broadband || kindOf(kind.getSelectedIndex()) != d.kind()) {
+            select(kind, broadband ? BROADBAND : d.kind().ordinal());
+        }
+        showValue(amplitude, d.amplitude());
         if (d.isBand()) {
             speedRange.setSelected(true);
-            low.show(d.bandLow(), d.bandUnit());
-            high.show(d.bandHigh(), null);
-            speed.show(d.bandLow(), d.bandUnit());
+            showValue(low, d.bandLow(), d.bandUnit());
+            showValue(high, d.bandHigh(), null);
+            if (speed.textField().getText().isBlank()) {
+                speed.show(d.bandLow(), d.bandUnit()); // a start for switching to one speed
+            }
         } else {
             oneSpeed.setSelected(true);
-            speed.show(d.frequency().value(), d.frequency().unit());
-            low.show(d.frequency().value(), d.frequency().unit());
-            high.show(d.frequency().value(), null);
+            showValue(speed, d.frequency());
+            if (low.textField().getText().isBlank() || high.textField().getText().isBlank()) {
+                low.show(d.frequency().value(), d.frequency().unit()); // a start for switching to a range
+                high.show(d.frequency().value(), null);
+            }
         }
-        order.show(d.harmonicOrder(), Unit.RATIO);
+        showValue(order, d.harmonicOrder(), Unit.RATIO);
         enableSpeeds();
     }
 

@@ -18,6 +18,7 @@ import org.counterpoise.io.project.AbsorberInput;
 import org.counterpoise.io.project.Project;
 import org.counterpoise.io.project.QuantityInput;
 import org.counterpoise.io.text.UnitChoices;
+import org.counterpoise.ui.gui.document.ProjectEdits;
 import org.counterpoise.ui.gui.field.Form;
 import org.counterpoise.ui.gui.field.FormSwitch;
 import org.counterpoise.ui.gui.field.QuantityField;
@@ -35,6 +36,16 @@ final class GoalStep extends Step {
     private final QuantityField margin = new QuantityField("absorber.stroke_margin",
             "Clearance to leave over the computed peak stroke (1.5 is common practice)", UnitChoices.of(Dimension.RATIO));
     private final JCheckBox hangs = new JCheckBox("the absorber hangs on its spring");
+    private final QuantityField maxMassRatio = new QuantityField("absorber.max_mass_ratio",
+            "With a target: the largest mass ratio to consider; leave empty for the default", UnitChoices.of(Dimension.RATIO));
+    private final QuantityField fixedDamping = new QuantityField("absorber.fixed_damping_ratio",
+            "Exact-peak only: an absorber damping ratio you must use; leave empty to optimise it", UnitChoices.of(Dimension.RATIO));
+    private final QuantityField fixedTuning = new QuantityField("absorber.fixed_tuning_ratio",
+            "Exact-peak only: a tuning ratio you must use; leave empty to optimise it", UnitChoices.of(Dimension.RATIO));
+    /** The response the size field's target was typed for (to notice a change of quantity). */
+    private ResponseKind targetResponse;
+    /** Says why the target field was emptied, until a new target is typed. */
+    private String targetNote;
     private final QuantityField strokeLimit = new QuantityField("absorber.stroke_limit",
             "Largest allowed peak stroke in the band (exact-peak only); leave empty for none",
             UnitChoices.of(Dimension.LENGTH));
@@ -57,7 +68,7 @@ final class GoalStep extends Step {
         }
     };
 
-    GoalStep(Runnable changed) {
+    GoalStep() {
         sizing.setName("absorber.sizing");
         method.setName("absorber.method");
         response.setName("absorber.response");
@@ -91,6 +102,10 @@ final class GoalStep extends Step {
         form.row("Stroke margin", 'n', margin, "Clearance over the computed stroke");
         form.row("Stroke limit (optional)", 't', strokeLimit, "Clearance available in the band, exact-peak only");
         form.row("", (char) 0, hangs, "Gives the static sag of the spring");
+        form.row("Largest mass ratio (target)", 'x', maxMassRatio,
+                "With a target: the search for the lightest absorber stops here; empty for the default");
+        form.row("Fixed damping ratio \u03b6a", 'f', fixedDamping, "Exact-peak: empty to optimise, or the ratio to use");
+        form.row("Fixed tuning ratio f", 'u', fixedTuning, "Exact-peak: empty to optimise, or the ratio to use");
         form.derived("", methodNote);
         form.end();
         JPanel chartPanel = new JPanel(new BorderLayout());
@@ -109,33 +124,94 @@ final class GoalStep extends Step {
         own("absorber.target", size);
         own("absorber.stroke_margin", margin);
         own("absorber.stroke_limit", strokeLimit);
+        own("absorber.max_mass_ratio", maxMassRatio);
+        own("absorber.fixed_damping_ratio", fixedDamping);
+        own("absorber.fixed_tuning_ratio", fixedTuning);
         sizing.addActionListener(e -> {
             sizeUnits();
-            changed.run();
+            edited("absorber.sizing");
         });
-        method.addActionListener(e -> changed.run());
+        method.addActionListener(e -> edited("absorber.method"));
         response.addActionListener(e -> {
             if (sizing.getSelectedIndex() == 2) {
                 sizeUnits();
+                targetQuantityChanged();
             }
-            changed.run();
+            edited("absorber.response");
         });
-        hangs.addActionListener(e -> changed.run());
-        size.onChange(changed);
-        margin.onChange(changed);
-        strokeLimit.onChange(changed);
+        hangs.addActionListener(e -> edited("absorber.hangs"));
+        for (QuantityField f : List.of(size, margin, strokeLimit, maxMassRatio, fixedDamping, fixedTuning)) {
+            f.onChange(() -> edited(f.fieldId()));
+        }
         convertOnSizingChange();
+    }
+
+    /**
+     * A target typed as a displacement means nothing as a velocity: when the response's quantity
+     * changes, the target is emptied (and said so) rather than read in the new unit.
+     */
+    private void targetQuantityChanged() {
+        ResponseKind now = (ResponseKind) response.getSelectedItem();
+        if (syncing() || targetResponse == null || now == null
+                || targetResponse.dimension() == now.dimension()) {
+            targetResponse = now;
+            return;
+        }
+        String was = size.textField().getText().strip();
+        if (!was.isEmpty()) {
+            size.clear();
+            targetNote = "The target (" + was + " for the " + targetResponse.label() + ") was emptied: type the"
+                    + " largest " + now.label() + " you accept.";
+            note(targetNote);
+        }
+        targetResponse = now;
+    }
+
+    private void edited(String key) {
+        if (!size.textField().getText().isBlank()) {
+            targetNote = null;
+        }
+        commit(() -> ProjectEdits.absorber(key, input()));
+    }
+
+    @Override
+    void showProject(Project p, boolean loaded) {
+        if (loaded) {
+            targetNote = null;
+        }
+        load(p.absorber());
+        targetResponse = p.absorber().response();
+    }
+
+    @Override
+    boolean fieldsValid() {
+        boolean ok = check(size) & check(margin);
+        for (QuantityField f : List.of(strokeLimit, maxMassRatio, fixedDamping, fixedTuning)) {
+            if (!f.textField().getText().isBlank()) {
+                ok &= check(f);
+            }
+        }
+        return ok;
+    }
+
+    private static double optional(QuantityField f) {
+        return f.textField().getText().isBlank() ? Double.NaN : f.number();
     }
 
     private void sizeUnits() {
         size.setUnits(sizeUnits(sizing.getSelectedIndex()));
     }
 
+    /** @param r a response @return the units its targets are typed in */
+    static List<Unit> unitsOf(ResponseKind r) {
+        return UnitChoices.of(r.dimension());
+    }
+
     private List<Unit> sizeUnits(int sizingForm) {
         return switch (sizingForm) {
             case 0 -> UnitChoices.of(Dimension.RATIO);
             case 1 -> UnitChoices.of(Dimension.MASS);
-            default -> UnitChoices.of(((ResponseKind) response.getSelectedItem()).dimension());
+            default -> unitsOf((ResponseKind) response.getSelectedItem());
         };
     }
 
@@ -195,44 +271,51 @@ final class GoalStep extends Step {
         return (DesignMethod) method.getSelectedItem();
     }
 
-    /**
-     * @param keep constraints and target of the loaded project, carried over unchanged
-     * @return the absorber choices
-     */
-    AbsorberInput input(AbsorberInput keep) {
+    /** @return the absorber choices as shown (throws InvalidInputException naming a field) */
+    AbsorberInput input() {
         int kind = sizing.getSelectedIndex();
         double ratio = kind == 0 ? size.number() : Double.NaN;
         QuantityInput mass = kind == 1 ? size.input() : null;
         QuantityInput target = kind == 2 ? size.input() : null;
-        DesignMethod m = method();
-        boolean exact = m == DesignMethod.EXACT_PEAK;
-        return new AbsorberInput(ratio, mass, m, (ResponseKind) response.getSelectedItem(), hangs.isSelected(),
-                margin.number(), target, kind == 2 && keep != null ? keep.maxMassRatio() : Double.NaN,
+        return new AbsorberInput(ratio, mass, method(), (ResponseKind) response.getSelectedItem(), hangs.isSelected(),
+                margin.number(), target, optional(maxMassRatio),
                 strokeLimit.textField().getText().isBlank() ? null : strokeLimit.input(),
-                exact && keep != null ? keep.fixedDampingRatio() : Double.NaN,
-                exact && keep != null ? keep.fixedTuningRatio() : Double.NaN);
+                optional(fixedDamping), optional(fixedTuning));
     }
 
-    void load(AbsorberInput a) {
-        method.setSelectedItem(a.method());
-        response.setSelectedItem(a.response());
+    private void load(AbsorberInput a) {
+        if (method.getSelectedItem() != a.method()) {
+            method.setSelectedItem(a.method());
+        }
+        if (response.getSelectedItem() != a.response()) {
+            response.setSelectedItem(a.response());
+        }
         if (a.mass() != null) {
-            sizing.setSelectedIndex(1);
-            size.show(a.mass().value(), a.mass().unit());
+            select(sizing, 1);
+            showValue(size, a.mass());
         } else if (!Double.isNaN(a.massRatio())) {
-            sizing.setSelectedIndex(0);
-            size.show(a.massRatio(), Unit.RATIO);
+            select(sizing, 0);
+            showValue(size, a.massRatio(), Unit.RATIO);
         } else {
-            sizing.setSelectedIndex(2);
-            size.show(a.target().value(), a.target().unit());
+            select(sizing, 2);
+            showValue(size, a.target());
         }
-        margin.show(a.strokeMargin(), Unit.RATIO);
-        if (a.strokeLimit() != null) {
-            strokeLimit.show(a.strokeLimit().value(), a.strokeLimit().unit());
+        showValue(margin, a.strokeMargin(), Unit.RATIO);
+        showValue(strokeLimit, a.strokeLimit());
+        showOptional(maxMassRatio, a.maxMassRatio());
+        showOptional(fixedDamping, a.fixedDampingRatio());
+        showOptional(fixedTuning, a.fixedTuningRatio());
+        if (hangs.isSelected() != a.hangsVertically()) {
+            hangs.setSelected(a.hangsVertically());
+        }
+    }
+
+    private static void showOptional(QuantityField f, double v) {
+        if (Double.isNaN(v)) {
+            showValue(f, null);
         } else {
-            strokeLimit.clear();
+            showValue(f, v, Unit.RATIO);
         }
-        hangs.setSelected(a.hangsVertically());
     }
 
     void note(String text) {
@@ -243,6 +326,6 @@ final class GoalStep extends Step {
     /** Shows a problem on the method list (not a number field). */
     void methodProblem(String text) {
         method.putClientProperty("JComponent.outline", text == null ? null : "error");
-        note(text);
+        note(text != null ? text : targetNote);
     }
 }

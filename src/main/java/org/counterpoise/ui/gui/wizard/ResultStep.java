@@ -28,10 +28,12 @@ import org.counterpoise.core.units.Unit;
 import org.counterpoise.io.AtomicFiles;
 import org.counterpoise.io.chart.ChartFactory;
 import org.counterpoise.io.chart.ChartFiles;
+import org.counterpoise.io.project.Project;
 import org.counterpoise.io.sheet.SheetContent;
 import org.counterpoise.io.text.DisplayUnits;
 import org.counterpoise.ui.gui.field.QuantityField;
 import org.counterpoise.ui.gui.plot.ChartHost;
+import org.counterpoise.ui.gui.task.TaskRunner;
 import org.knowm.xchart.XYChart;
 
 /** Step 4: the absorber to build, and the response before and after. */
@@ -48,10 +50,14 @@ final class ResultStep extends Step {
     private final JLabel readout = new JLabel("Move the pointer over a chart to read the exact values there.");
     private final JTextPane notes = new JTextPane();
     private final JComponent page;
+    private final TaskRunner tasks;
+    private final SheetStep.Messages messages;
     private DesignResult result;
     private DesignCurves curves;
 
-    ResultStep() {
+    ResultStep(TaskRunner tasks, SheetStep.Messages messages) {
+        this.tasks = tasks;
+        this.messages = messages;
         JTable t = new JTable(table);
         t.setName("result.table");
         t.setRowHeight(t.getRowHeight() + 4);
@@ -113,6 +119,16 @@ final class ResultStep extends Step {
     @Override
     String title() {
         return "Result";
+    }
+
+    @Override
+    void showProject(Project p, boolean loaded) {
+        // Results arrive from the design task (see show).
+    }
+
+    @Override
+    boolean fieldsValid() {
+        return true;
     }
 
     @Override
@@ -249,11 +265,14 @@ final class ResultStep extends Step {
         }
         Path dir = chooser.getSelectedFile().toPath();
         String ext = png ? ".png" : ".svg";
-        try {
-            for (ChartHost host : List.of(responseChart, strokeChart)) {
-                XYChart chart = host.chart();
-                String name = host == responseChart ? "response" : "stroke";
-                AtomicFiles.write(dir.resolve(name + ext), out -> {
+        List<XYChart> charts = List.of(responseChart.chart(), strokeChart.chart());
+        tasks.requested("Exporting the charts as " + (png ? "PNG" : "SVG"), progress -> {
+            String[] names = {"response", "stroke"};
+            for (int i = 0; i < charts.size(); i++) {
+                progress.checkCancelled();
+                progress.phase(names[i] + ext);
+                XYChart chart = charts.get(i);
+                AtomicFiles.write(dir.resolve(names[i] + ext), out -> {
                     if (png) {
                         ChartFiles.png(chart, out);
                     } else {
@@ -261,10 +280,11 @@ final class ResultStep extends Step {
                     }
                 });
             }
-        } catch (java.io.IOException e) {
-            JOptionPane.showMessageDialog(page, "The charts could not be written to " + dir + ": " + e.getMessage(),
-                    "Export", JOptionPane.WARNING_MESSAGE);
-        }
+            return dir;
+        }, d -> messages.say("Wrote response" + ext + " and stroke" + ext + " to " + d + "."),
+                e -> JOptionPane.showMessageDialog(page, "The charts could not be written to " + dir + ": "
+                        + e.getMessage(), "Export", JOptionPane.WARNING_MESSAGE),
+                () -> messages.say("The chart export was cancelled."));
     }
 
     DefaultTableModel table() {

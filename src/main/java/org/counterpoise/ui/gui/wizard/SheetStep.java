@@ -4,10 +4,11 @@ import java.awt.BorderLayout;
 import java.awt.FlowLayout;
 import java.awt.image.BufferedImage;
 import java.io.ByteArrayOutputStream;
-import java.io.IOException;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.LocalDate;
 import java.util.List;
+import java.util.Locale;
 import javax.swing.ImageIcon;
 import javax.swing.JButton;
 import javax.swing.JComponent;
@@ -17,32 +18,49 @@ import javax.swing.JOptionPane;
 import javax.swing.JPanel;
 import javax.swing.JScrollPane;
 import javax.swing.SwingConstants;
-import javax.swing.SwingWorker;
 import javax.swing.filechooser.FileNameExtensionFilter;
 import org.apache.pdfbox.Loader;
 import org.apache.pdfbox.pdmodel.PDDocument;
 import org.apache.pdfbox.rendering.PDFRenderer;
 import org.counterpoise.core.design.DesignCurves;
 import org.counterpoise.core.design.DesignResult;
-import org.counterpoise.core.error.InvalidInputException;
+import org.counterpoise.io.project.Project;
+import org.counterpoise.io.project.ProjectIdentity;
 import org.counterpoise.io.sheet.SheetContent;
 import org.counterpoise.io.sheet.SheetFiles;
 import org.counterpoise.io.sheet.SheetWriter;
+import org.counterpoise.ui.gui.task.TaskRunner;
 
-/** Step 6: preview of the parameter sheet, and the buttons that save it and the exports. */
+/**
+ * Step 6: preview of the parameter sheet, and the buttons that save it and the exports. The
+ * preview, the PDF and the exports are made off the event thread; the PDF and the exports show on
+ * the task bar and can be cancelled.
+ */
 final class SheetStep extends Step {
     private final JLabel preview = new JLabel("The sheet preview appears here.", SwingConstants.CENTER);
     private final JComponent page;
+    private final TaskRunner tasks;
+    private final Messages messages;
     private DesignResult result;
-    private String notes = "";
+    private Project project;
 
-    SheetStep() {
+    /** Where the outcome of a save is said (the status line). */
+    @FunctionalInterface
+    interface Messages {
+        /** @param text a short sentence */
+        void say(String text);
+    }
+
+    SheetStep(TaskRunner tasks, Messages messages) {
+        this.tasks = tasks;
+        this.messages = messages;
         preview.setName("sheet.preview");
         JButton savePdf = new JButton("Save sheet as PDF\u2026");
         savePdf.setName("sheet.save");
         savePdf.setMnemonic('s');
         savePdf.addActionListener(e -> savePdf());
         JButton saveExports = new JButton("Save curves, result and charts\u2026");
+        saveExports.setName("sheet.exports");
         saveExports.setMnemonic('e');
         saveExports.addActionListener(e -> saveExports());
         JPanel buttons = new JPanel(new FlowLayout(FlowLayout.LEFT));
@@ -64,11 +82,33 @@ final class SheetStep extends Step {
         return page;
     }
 
-    void show(DesignResult r, String projectNotes) {
+    @Override
+    void showProject(Project p, boolean loaded) {
+        // The sheet shows results; its project details arrive with them (see show).
+    }
+
+    @Override
+    boolean fieldsValid() {
+        return true;
+    }
+
+    /**
+     * @param r the design now shown, or null
+     * @param p the project it was computed from
+     */
+    void show(DesignResult r, Project p) {
         result = r;
-        notes = projectNotes == null ? "" : projectNotes;
+        project = p;
         preview.setIcon(null);
         preview.setText(r == null ? "Fix the inputs to see the sheet." : "Open this step to render the preview.");
+    }
+
+    private String issued() {
+        return project.identity().date().isEmpty() ? LocalDate.now().toString() : project.identity().date();
+    }
+
+    private String revision(String fallback) {
+        return project.identity().revision().isEmpty() ? fallback : project.identity().revision();
     }
 
     /** Renders the first page of the sheet in the background when the step is shown. */
@@ -78,34 +118,24 @@ final class SheetStep extends Step {
         if (r == null || previewShown()) {
             return;
         }
-        String projectNotes = notes;
+        String notes = project.notes();
+        String date = issued();
+        String revision = revision("draft");
+        ProjectIdentity identity = project.identity();
         preview.setText("drawing the preview\u2026");
-        new SwingWorker<BufferedImage, Void>() {
-            @Override
-            protected BufferedImage doInBackground() throws IOException {
-                ByteArrayOutputStream pdf = new ByteArrayOutputStream();
-                SheetWriter.write(SheetContent.of(r, projectNotes, LocalDate.now().toString(), "draft",
-                        SheetFiles.monteCarlo(r)), SheetFiles.charts(r, DesignCurves.of(r)), pdf);
-                try (PDDocument doc = Loader.loadPDF(pdf.toByteArray())) {
-                    return new PDFRenderer(doc).renderImageWithDPI(0, 80);
-                }
+        tasks.current(null, progress -> {
+            ByteArrayOutputStream pdf = new ByteArrayOutputStream();
+            SheetWriter.write(SheetContent.of(r, notes, date, revision, SheetFiles.monteCarlo(r), identity),
+                    SheetFiles.charts(r, DesignCurves.of(r)), pdf);
+            try (PDDocument doc = Loader.loadPDF(pdf.toByteArray())) {
+                return new PDFRenderer(doc).renderImageWithDPI(0, 80);
             }
-
-            @Override
-            protected void done() {
-                if (r != result) {
-                    return; // a newer design arrived meanwhile
-                }
-                try {
-                    preview.setIcon(new ImageIcon(get()));
-                    preview.setText(null);
-                } catch (java.util.concurrent.ExecutionException e) {
-                    preview.setText("The preview could not be drawn: " + e.getCause().getMessage());
-                } catch (InterruptedException e) {
-                    Thread.currentThread().interrupt();
-                }
+        }, (BufferedImage image) -> {
+            if (r == result) {
+                preview.setIcon(new ImageIcon(image));
+                preview.setText(null);
             }
-        }.execute();
+        }, e -> preview.setText("The preview could not be drawn: " + e.getMessage()));
     }
 
     private void savePdf() {
@@ -118,20 +148,34 @@ final class SheetStep extends Step {
             return;
         }
         Path file = chooser.getSelectedFile().toPath();
-        if (!file.toString().toLowerCase(java.util.Locale.ROOT).endsWith(".pdf")) {
+        if (!file.toString().toLowerCase(Locale.ROOT).endsWith(".pdf")) {
             file = file.resolveSibling(file.getFileName() + ".pdf");
         }
-        boolean replace = !java.nio.file.Files.exists(file) || JOptionPane.showConfirmDialog(page,
+        boolean replace = !Files.exists(file) || JOptionPane.showConfirmDialog(page,
                 file.getFileName() + " exists. Replace it?", "Save sheet", JOptionPane.YES_NO_OPTION)
                 == JOptionPane.YES_OPTION;
-        if (!replace) {
-            return;
+        if (replace) {
+            writeSheet(file);
         }
-        try {
-            SheetFiles.writeSheet(result, notes, file, LocalDate.now().toString(), "A", true, "sheet file");
-        } catch (InvalidInputException e) {
-            JOptionPane.showMessageDialog(page, e.getMessage(), "Save sheet", JOptionPane.WARNING_MESSAGE);
-        }
+    }
+
+    /**
+     * Writes the sheet in the background (replacing an existing file), with progress and Cancel.
+     * @param file the PDF
+     */
+    void writeSheet(Path file) {
+        DesignResult r = result;
+        String notes = project.notes();
+        String date = issued();
+        String revision = revision("A");
+        ProjectIdentity identity = project.identity();
+        tasks.requested("Saving the sheet " + file.getFileName(), progress -> {
+            progress.phase("computing and drawing");
+            SheetFiles.writeSheet(r, notes, file, date, revision, true, "sheet file", identity);
+            return file;
+        }, f -> messages.say("Saved the sheet to " + f + "."),
+                e -> JOptionPane.showMessageDialog(page, e.getMessage(), "Save sheet", JOptionPane.WARNING_MESSAGE),
+                () -> messages.say("Saving the sheet was cancelled."));
     }
 
     private void saveExports() {
@@ -143,13 +187,14 @@ final class SheetStep extends Step {
         if (chooser.showSaveDialog(page) != JFileChooser.APPROVE_OPTION) {
             return;
         }
-        try {
-            List<Path> written = SheetFiles.writeExports(result, chooser.getSelectedFile().toPath(), true, "folder");
-            JOptionPane.showMessageDialog(page, "Wrote " + written.size() + " files.", "Exports",
-                    JOptionPane.INFORMATION_MESSAGE);
-        } catch (InvalidInputException e) {
-            JOptionPane.showMessageDialog(page, e.getMessage(), "Exports", JOptionPane.WARNING_MESSAGE);
-        }
+        Path dir = chooser.getSelectedFile().toPath();
+        DesignResult r = result;
+        tasks.requested("Saving curves, result and charts", progress -> {
+            progress.phase("writing six files");
+            return SheetFiles.writeExports(r, dir, true, "folder");
+        }, (List<Path> written) -> messages.say("Wrote " + written.size() + " files to " + dir + "."),
+                e -> JOptionPane.showMessageDialog(page, e.getMessage(), "Exports", JOptionPane.WARNING_MESSAGE),
+                () -> messages.say("Saving the exports was cancelled."));
     }
 
     boolean previewShown() {

@@ -13,11 +13,13 @@ import org.counterpoise.core.units.Dimension;
 import org.counterpoise.core.units.Gravity;
 import org.counterpoise.core.units.Unit;
 import org.counterpoise.io.project.DampingInput;
+import org.counterpoise.io.project.Project;
 import org.counterpoise.io.project.QuantityInput;
 import org.counterpoise.io.project.StructureInput;
 import org.counterpoise.io.text.DisplayUnits;
 import org.counterpoise.io.text.QuantityFormat;
 import org.counterpoise.io.text.UnitChoices;
+import org.counterpoise.ui.gui.document.ProjectEdits;
 import org.counterpoise.ui.gui.field.Form;
 import org.counterpoise.ui.gui.field.FormSwitch;
 import org.counterpoise.ui.gui.field.QuantityField;
@@ -52,7 +54,7 @@ final class StructureStep extends Step {
     private final JLabel derivedDamping = derived("derived.damping");
     private final JComponent page;
 
-    StructureStep(Runnable changed) {
+    StructureStep() {
         massForm.setName("structure.massForm");
         stiffnessForm.setName("structure.stiffnessForm");
         dampingForm.setName("structure.dampingForm");
@@ -82,7 +84,7 @@ final class StructureStep extends Step {
         own("structure.mode_shape", modeShape);
         massForm.addActionListener(e -> {
             mass.setUnits(massForm.getSelectedIndex() == 0 ? MASS : WEIGHT);
-            changed.run();
+            edited("structure.massForm");
         });
         stiffnessForm.addActionListener(e -> {
             stiffness.setUnits(switch (stiffnessForm.getSelectedIndex()) {
@@ -90,14 +92,14 @@ final class StructureStep extends Step {
                 case 1 -> FREQUENCY;
                 default -> LENGTH;
             });
-            changed.run();
+            edited("structure.stiffnessForm");
         });
         dampingForm.addActionListener(e -> {
             damping.setUnits(dampingForm.getSelectedIndex() == 3 ? FREQUENCY : RATIO);
-            changed.run();
+            edited("structure.dampingForm");
         });
         for (QuantityField f : List.of(mass, stiffness, damping, modeShape)) {
-            f.onChange(changed);
+            f.onChange(() -> edited(f.fieldId()));
         }
         convertOnFormChange();
     }
@@ -165,6 +167,24 @@ final class StructureStep extends Step {
         };
     }
 
+    private void edited(String key) {
+        commit(() -> ProjectEdits.structure(key, input()));
+    }
+
+    @Override
+    void showProject(Project p, boolean loaded) {
+        load(p.structure());
+    }
+
+    @Override
+    boolean fieldsValid() {
+        boolean ok = true;
+        for (QuantityField f : List.of(mass, stiffness, damping, modeShape)) {
+            ok &= check(f);
+        }
+        return ok;
+    }
+
     @Override
     String title() {
         return "Structure";
@@ -188,26 +208,28 @@ final class StructureStep extends Step {
                 sf == 2 ? k : null, d, modeShape.number());
     }
 
-    void load(StructureInput s) {
+    private void load(StructureInput s) {
         if (s.weight() != null) {
-            massForm.setSelectedIndex(1);
-            mass.show(s.weight().value(), s.weight().unit());
+            select(massForm, 1);
+            showValue(mass, s.weight());
         } else if (s.mass() != null) {
-            massForm.setSelectedIndex(0);
-            mass.show(s.mass().value(), s.mass().unit());
+            select(massForm, 0);
+            showValue(mass, s.mass());
+        } else {
+            showValue(mass, null);
         }
         QuantityInput k = s.stiffness() != null ? s.stiffness() : s.naturalFrequency() != null
                 ? s.naturalFrequency() : s.staticDeflection();
-        stiffnessForm.setSelectedIndex(s.stiffness() != null ? 0 : s.naturalFrequency() != null ? 1 : 2);
-        stiffness.show(k.value(), k.unit());
+        select(stiffnessForm, s.stiffness() != null ? 0 : s.naturalFrequency() != null ? 1 : 2);
+        showValue(stiffness, k);
         DampingInput d = s.damping() == null ? DampingInput.ratio(0) : s.damping();
-        dampingForm.setSelectedIndex(d.measure().ordinal());
+        select(dampingForm, d.measure().ordinal());
         if (d.measure() == DampingInput.Measure.HALF_POWER_BANDWIDTH) {
-            damping.show(d.bandwidth().value(), d.bandwidth().unit());
+            showValue(damping, d.bandwidth());
         } else {
-            damping.show(d.value(), Unit.RATIO);
+            showValue(damping, d.value(), Unit.RATIO);
         }
-        modeShape.show(s.modeShapeAtAbsorber(), Unit.RATIO);
+        showValue(modeShape, s.modeShapeAtAbsorber(), Unit.RATIO);
     }
 
     /** @param s the structure, or null when the input is not valid */

@@ -1,0 +1,70 @@
+package org.counterpoise.ui.gui.action;
+
+import java.awt.event.KeyEvent;
+import java.util.function.Consumer;
+import javax.swing.JFrame;
+import javax.swing.JMenu;
+import javax.swing.JMenuBar;
+import javax.swing.JMenuItem;
+import javax.swing.JOptionPane;
+import org.counterpoise.io.preset.Presets;
+import org.counterpoise.ui.gui.Themes;
+
+/** The wizard's menu bar: File, Edit, View, Help, built from the actions. */
+public final class WizardMenus {
+    private WizardMenus() {
+    }
+
+    /**
+     * @param frame the window
+     * @param files file actions
+     * @param edits undo and redo
+     * @param details opens the project details
+     * @param preset opens an invented scenario by its preset name
+     * @param quit closes the window (asking about unsaved changes)
+     * @return the menu bar
+     */
+    public static JMenuBar build(JFrame frame, FileActions files, EditActions edits, Runnable details,
+            Consumer<String> preset, Runnable quit) {
+        JMenuBar bar = new JMenuBar();
+        JMenu fileMenu = new JMenu("File");
+        fileMenu.setMnemonic('f');
+        files.fill(fileMenu);
+        fileMenu.add(new JMenuItem(Actions.of("Project details\u2026", KeyEvent.VK_D,
+                Shortcuts.menuKey(KeyEvent.VK_D, true), e -> details.run())));
+        fileMenu.addSeparator();
+        JMenu presets = new JMenu("Example scenarios (invented)");
+        presets.setName("menu.presets");
+        presets.setMnemonic('e');
+        for (String name : Presets.names()) {
+            JMenuItem it = new JMenuItem(Presets.load(name).project().name());
+            it.setName("preset." + name);
+            it.addActionListener(e -> preset.accept(name));
+            presets.add(it);
+        }
+        fileMenu.add(presets);
+        fileMenu.addSeparator();
+        fileMenu.add(new JMenuItem(Actions.of("Quit", KeyEvent.VK_Q, Shortcuts.menuKey(KeyEvent.VK_Q, false),
+                e -> quit.run())));
+        JMenu edit = new JMenu("Edit");
+        edit.setMnemonic('e');
+        edit.add(new JMenuItem(edits.undo()));
+        edit.add(new JMenuItem(edits.redo()));
+        JMenu view = new JMenu("View");
+        view.setMnemonic('v');
+        view.add(new JMenuItem(Actions.of("Light theme", KeyEvent.VK_L, null, e -> Themes.apply(false, frame))));
+        view.add(new JMenuItem(Actions.of("Dark theme", KeyEvent.VK_D, null, e -> Themes.apply(true, frame))));
+        JMenu help = new JMenu("Help");
+        help.setMnemonic('h');
+        help.add(new JMenuItem(Actions.of("About Counterpoise", KeyEvent.VK_A, null, e -> JOptionPane.showMessageDialog(
+                frame, "Counterpoise: design of dynamic vibration absorbers (tuned mass dampers).\n"
+                        + "A preliminary design aid on a single-mode linear model: verify by measurement;\n"
+                        + "local codes and licensed engineering practice govern.", "About",
+                JOptionPane.INFORMATION_MESSAGE))));
+        bar.add(fileMenu);
+        bar.add(edit);
+        bar.add(view);
+        bar.add(help);
+        return bar;
+    }
+}

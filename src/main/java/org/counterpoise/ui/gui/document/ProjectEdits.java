@@ -1,0 +1,118 @@
+package org.counterpoise.ui.gui.document;
+
+import org.counterpoise.core.response.ResponseKind;
+import org.counterpoise.io.project.AbsorberInput;
+import org.counterpoise.io.project.DisturbanceInput;
+import org.counterpoise.io.project.Project;
+import org.counterpoise.io.project.ProjectIdentity;
+import org.counterpoise.io.project.QuantityInput;
+import org.counterpoise.io.project.RobustnessInput;
+import org.counterpoise.io.project.StructureInput;
+import org.counterpoise.io.text.QuantityFormat;
+
+/**
+ * The edits the wizard's views make, one per section of the project, and the rule that keeps a
+ * project consistent after any of them. Plain Java (no Swing), so tests apply exactly the edits
+ * the views apply.
+ */
+public final class ProjectEdits {
+    private ProjectEdits() {
+    }
+
+    /**
+     * @param key the field edited
+     * @param s the structure section as now shown
+     * @return the edit
+     */
+    public static Edit structure(String key, StructureInput s) {
+        return new Edit(key, "structure", p -> new Project(p.name(), p.notes(), s, p.disturbance(), p.absorber(),
+                p.robustness(), p.identity()));
+    }
+
+    /**
+     * @param key the field edited
+     * @param d the disturbance section as now shown
+     * @return the edit
+     */
+    public static Edit disturbance(String key, DisturbanceInput d) {
+        return new Edit(key, "disturbance", p -> new Project(p.name(), p.notes(), p.structure(), d, p.absorber(),
+                p.robustness(), p.identity()));
+    }
+
+    /**
+     * @param key the field edited
+     * @param a the absorber section as now shown
+     * @return the edit
+     */
+    public static Edit absorber(String key, AbsorberInput a) {
+        return new Edit(key, "absorber goal", p -> new Project(p.name(), p.notes(), p.structure(), p.disturbance(), a,
+                p.robustness(), p.identity()));
+    }
+
+    /**
+     * @param key the field edited
+     * @param r the robustness section as now shown (null for the defaults)
+     * @return the edit
+     */
+    public static Edit robustness(String key, RobustnessInput r) {
+        return new Edit(key, "robustness", p -> new Project(p.name(), p.notes(), p.structure(), p.disturbance(),
+                p.absorber(), r, p.identity()));
+    }
+
+    /**
+     * @param key the field edited
+     * @param name project name
+     * @param notes notes
+     * @param identity revision, engineer, client or site, date
+     * @return the edit
+     */
+    public static Edit identity(String key, String name, String notes, ProjectIdentity identity) {
+        return new Edit(key, "project details", p -> new Project(name, notes, p.structure(), p.disturbance(),
+                p.absorber(), p.robustness(), identity));
+    }
+
+    /**
+     * A new project: the numbers of a template to start from (an invented scenario), but none of
+     * its name, notes or identity, which belong to the scenario and not to the user's project.
+     * @param template the scenario to start from
+     * @return an untitled project
+     */
+    public static Project untitled(Project template) {
+        return new Project(Project.UNTITLED, "", template.structure(), template.disturbance(), template.absorber(),
+                template.robustness(), ProjectIdentity.EMPTY);
+    }
+
+    /**
+     * The project after an edit, made consistent: a robustness target whose quantity no longer
+     * matches the response that matters (say a displacement target after the response became a
+     * velocity) cannot be converted without a frequency, so it is cleared and the user is told.
+     *
+     * @param p the project as edited
+     * @return the consistent project and what was changed beyond the edit (null when nothing)
+     */
+    public static Consistent consistent(Project p) {
+        RobustnessInput r = p.robustness();
+        ResponseKind response = p.absorber().response();
+        if (r == null || r.target() == null || r.target().unit().dimension() == response.dimension()) {
+            return new Consistent(p, null);
+        }
+        QuantityInput old = r.target();
+        RobustnessInput cleared = new RobustnessInput(r.structureDetuningPercent(), r.absorberDetuningPercent(), null,
+                r.samples(), r.seed(), r.structureMass(), r.structureStiffness(), r.absorberMass(),
+                r.absorberStiffness(), r.absorberDamping());
+        String note = "The robustness target (" + QuantityFormat.number(old.value(), 4) + " " + old.unit().symbol()
+                + ") was cleared: the response that matters is now the " + response.label()
+                + ". Give a new target on the Robustness step.";
+        return new Consistent(new Project(p.name(), p.notes(), p.structure(), p.disturbance(), p.absorber(), cleared,
+                p.identity()), note);
+    }
+
+    /**
+     * A consistent project and a note on what was changed to make it so.
+     *
+     * @param project the project
+     * @param note what changed beyond the edit, or null
+     */
+    public record Consistent(Project project, String note) {
+    }
+}

@@ -1,0 +1,225 @@
+package org.counterpoise.ui.gui.wizard;
+
+import java.util.List;
+import java.util.function.Consumer;
+import java.util.logging.Level;
+import java.util.logging.Logger;
+import javax.swing.Timer;
+import org.counterpoise.core.design.AchievablePeak;
+import org.counterpoise.core.design.DesignCurves;
+import org.counterpoise.core.design.DesignMethod;
+import org.counterpoise.core.design.DesignResult;
+import org.counterpoise.core.design.DesignStudy;
+import org.counterpoise.core.design.Designer;
+import org.counterpoise.core.design.RobustnessAnalysis;
+import org.counterpoise.core.design.RobustnessResult;
+import org.counterpoise.core.error.InvalidInputException;
+import org.counterpoise.core.model.Structure;
+import org.counterpoise.io.project.Project;
+import org.counterpoise.ui.gui.document.DesignDocument;
+import org.counterpoise.ui.gui.task.TaskRunner;
+
+/**
+ * Turns the document into results on screen: after a short pause it checks every step's fields,
+ * routes each problem to the field it belongs to, and computes the design, its robustness study
+ * and the mass-ratio curve in the background. A result is shown only for the inputs it was
+ * computed from: every change of the document or of a field's text moves {@link #generation()},
+ * and the task runner drops results of an older generation.
+ */
+final class DesignRun {
+    /** Pause after the last keystroke before recomputing; the design itself takes a few ms. */
+    private static final int PAUSE_MS = 60;
+
+    private final DesignDocument document;
+    private final Steps steps;
+    private final Consumer<String> status;
+    private final Runnable navigation;
+    private final Timer pause = new Timer(PAUSE_MS, e -> recompute());
+    private TaskRunner tasks;
+    private long generation;
+    private long shownGeneration = -1;
+    private DesignResult shown;
+
+    /**
+     * The steps this run reads and fills.
+     *
+     * @param structure step 1
+     * @param disturbance step 2
+     * @param goal step 3
+     * @param result step 4
+     * @param robustness step 5
+     * @param sheet step 6
+     */
+    record Steps(StructureStep structure, DisturbanceStep disturbance, GoalStep goal, ResultStep result,
+            RobustnessStep robustness, SheetStep sheet) {
+        List<Step> all() {
+            return List.of(structure, disturbance, goal, result, robustness, sheet);
+        }
+    }
+
+    DesignRun(DesignDocument document, Steps steps, Consumer<String> status, Runnable navigation) {
+        this.document = document;
+        this.steps = steps;
+        this.status = status;
+        this.navigation = navigation;
+        pause.setRepeats(false);
+    }
+
+    /** @param runner the runner whose generation is {@link #generation()} */
+    void use(TaskRunner runner) {
+        this.tasks = runner;
+    }
+
+    /** @return grows with every change of the inputs, committed or not */
+    long generation() {
+        return generation;
+    }
+
+    /** Inputs changed (an edit, or text that is not a number yet): recompute after a pause. */
+    void changed() {
+        generation++;
+        pause.restart();
+    }
+
+    /** @return the result on screen, or null */
+    DesignResult shown() {
+        return shown;
+    }
+
+    /** @return true when the result on screen belongs to the latest inputs */
+    boolean settled() {
+        return shownGeneration == generation && !pause.isRunning();
+    }
+
+    /** @return true when every field on every step holds a value */
+    boolean fieldsValid() {
+        boolean ok = true;
+        for (Step s : steps.all()) {
+            ok &= s.fieldsValid();
+        }
+        return ok;
+    }
+
+    /** Validates every step, then starts the background design of the document's project. */
+    void recompute() {
+        pause.stop();
+        long gen = ++generation;
+        steps.all().forEach(Step::clearProblems);
+        steps.goal().methodProblem(null);
+        Project p = document.project();
+        DesignStudy study = null;
+        Structure built = null;
+        if (fieldsValid()) {
+            try {
+                built = p.toStructure();
+                steps.structure().showDerived(built);
+                steps.disturbance().showDerived(p.toExcitation(), built);
+                DesignMethod m = p.absorber().method();
+                if (steps.disturbance().broadband() && m != DesignMethod.MINIMUM_VARIANCE
+                        && m != DesignMethod.EXACT_VARIANCE) {
+                    throw new InvalidInputException("absorber.method", m.id(),
+                            "a broadband force needs minimum-variance or exact-variance");
+                }
+                p.toRobustness();
+                study = p.toStudy();
+            } catch (InvalidInputException e) {
+                route(e);
+            }
+        }
+        if (built == null) {
+            steps.structure().showDerived(null);
+        }
+        if (study == null) {
+            clearResults(gen);
+            navigation.run();
+            return;
+        }
+        startDesign(study, p, gen);
+        navigation.run();
+    }
+
+    private void clearResults(long gen) {
+        shown = null;
+        shownGeneration = gen;
+        steps.result().show(null, null);
+        steps.robustness().show(null, null);
+        steps.sheet().show(null, document.project());
+        steps.goal().massChart().message("Fix the inputs to see the curve.");
+    }
+
+    /** @param e a problem: shown under its field, or on the status line when no field owns it */
+    void route(InvalidInputException e) {
+        if (e.field().equals("absorber.method")) {
+            steps.goal().methodProblem(e.getMessage().substring(e.getMessage().indexOf(':') + 1).strip());
+            steps.goal().markProblem(e.getMessage());
+            return;
+        }
+        for (Step s : steps.all()) {
+            if (s.showProblem(e)) {
+                return;
+            }
+        }
+        status.accept(e.getMessage());
+    }
+
+    private record Computed(DesignResult result, DesignCurves curves) {
+    }
+
+    private void startDesign(DesignStudy study, Project p, long gen) {
+        tasks.current(null, progress -> {
+            DesignResult r = Designer.design(study);
+            return new Computed(r, DesignCurves.of(r));
+        }, (Computed c) -> {
+            shown = c.result();
+            shownGeneration = gen;
+            steps.result().show(c.result(), c.curves());
+            steps.sheet().show(c.result(), p);
+            if (steps.sheet().component().isShowing()) {
+                steps.sheet().shown();
+            }
+            navigation.run();
+            startRobustness(c.result());
+            startMassChart(study, c.result());
+        }, e -> failed(e, gen));
+    }
+
+    private void failed(Throwable cause, long gen) {
+        clearResults(gen);
+        if (cause instanceof InvalidInputException bad) {
+            route(bad);
+        } else {
+            Logger.getLogger("counterpoise").log(Level.WARNING, "design failed", cause);
+            status.accept("The design could not be computed for these inputs; please report this case.");
+        }
+        navigation.run();
+    }
+
+    private void startRobustness(DesignResult r) {
+        steps.robustness().show(r, null);
+        tasks.current("Robustness study and Monte Carlo", progress -> {
+            progress.phase(r.study().robustness().samples() + " sampled builds");
+            RobustnessResult result = RobustnessAnalysis.run(r, r.study().robustness());
+            progress.checkCancelled();
+            return result;
+        }, (RobustnessResult result) -> steps.robustness().show(r, result), e -> {
+            steps.robustness().show(null, null);
+            if (e instanceof InvalidInputException bad) {
+                route(bad);
+                navigation.run();
+            } else {
+                Logger.getLogger("counterpoise").log(Level.WARNING, "robustness failed", e);
+                status.accept("The robustness study could not be computed for these inputs.");
+            }
+        }, () -> {
+            steps.robustness().cancelled();
+            status.accept("The robustness study was cancelled; it runs again after the next edit.");
+        });
+    }
+
+    private void startMassChart(DesignStudy study, DesignResult r) {
+        double[] mus = AchievablePeak.massRatios(0.005, 0.3, 16);
+        tasks.current(null, progress -> AchievablePeak.overMassRatio(study, mus),
+                (double[] peaks) -> steps.goal().massChart().show(MassRatioChart.of(study, r, mus, peaks)),
+                e -> steps.goal().massChart().message("No optimum peak for this case: " + e.getMessage()));
+    }
+}

@@ -1,0 +1,181 @@
+package org.counterpoise.ui.gui.wizard;
+
+import java.awt.BorderLayout;
+import java.awt.Color;
+import java.awt.GridBagConstraints;
+import java.awt.GridBagLayout;
+import java.awt.Insets;
+import java.util.List;
+import javax.swing.BorderFactory;
+import javax.swing.JComponent;
+import javax.swing.JLabel;
+import javax.swing.JPanel;
+import javax.swing.JScrollPane;
+import javax.swing.JTextArea;
+import javax.swing.JTextField;
+import javax.swing.event.DocumentEvent;
+import javax.swing.text.JTextComponent;
+import org.counterpoise.core.error.InvalidInputException;
+import org.counterpoise.io.project.Project;
+import org.counterpoise.io.project.ProjectIdentity;
+import org.counterpoise.ui.gui.document.DesignDocument;
+import org.counterpoise.ui.gui.document.ProjectEdits;
+
+/**
+ * Who and what the project is: name, revision, date of issue, engineer, client or site, notes. A
+ * view of the document like the steps; printed on the report and the sheet.
+ */
+final class ProjectDetails extends JPanel {
+    private final DesignDocument document;
+    private final JTextField name = text("project.name", 28);
+    private final JTextField revision = text("project.revision", 6);
+    private final JTextField date = text("project.date", 10);
+    private final JTextField engineer = text("project.engineer", 28);
+    private final JTextField client = text("project.client", 28);
+    private final JTextArea notes = new JTextArea(6, 40);
+    private final JLabel dateProblem = new JLabel(" ");
+    private boolean syncing;
+    /** The component whose typing makes the edit being applied (never re-set while it notifies). */
+    private String editing;
+
+    ProjectDetails(DesignDocument document) {
+        super(new BorderLayout());
+        this.document = document;
+        setName("project.details");
+        notes.setName("project.notes");
+        notes.setLineWrap(true);
+        notes.setWrapStyleWord(true);
+        dateProblem.setName("project.date.message");
+        dateProblem.setForeground(new Color(0xb0, 0x2a, 0x1e));
+        JPanel form = new JPanel(new GridBagLayout());
+        form.setBorder(BorderFactory.createEmptyBorder(10, 12, 10, 12));
+        int row = 0;
+        row = row(form, row, "Project name", 'n', name, "Printed as the title of the report and the sheet");
+        row = row(form, row, "Revision", 'r', revision, "Revision mark of this issue, e.g. B");
+        row = row(form, row, "Date of issue", 'd', date, "YYYY-MM-DD; empty to print the day the sheet is made");
+        GridBagConstraints mc = at(1, row++);
+        form.add(dateProblem, mc);
+        row = row(form, row, "Engineer", 'e', engineer, "Who designed the absorber");
+        row = row(form, row, "Client or site", 'c', client, "Whom or where the absorber is for");
+        row = row(form, row, "Notes", 'o', new JScrollPane(notes), "Anything the reader of the sheet should know");
+        GridBagConstraints filler = at(0, row);
+        filler.weighty = 1;
+        form.add(new JLabel(), filler);
+        add(form, BorderLayout.CENTER);
+        for (JTextComponent c : List.of(name, revision, date, engineer, client, notes)) {
+            c.getDocument().addDocumentListener(new javax.swing.event.DocumentListener() {
+                @Override
+                public void insertUpdate(DocumentEvent e) {
+                    edited(c.getName());
+                }
+
+                @Override
+                public void removeUpdate(DocumentEvent e) {
+                    edited(c.getName());
+                }
+
+                @Override
+                public void changedUpdate(DocumentEvent e) {
+                    edited(c.getName());
+                }
+            });
+        }
+    }
+
+    private static JTextField text(String id, int columns) {
+        JTextField f = new JTextField(columns);
+        f.setName(id);
+        return f;
+    }
+
+    private static int row(JPanel form, int row, String label, char mnemonic, JComponent field, String tip) {
+        JLabel l = new JLabel(label);
+        l.setDisplayedMnemonic(mnemonic);
+        l.setLabelFor(field instanceof JScrollPane s ? s.getViewport().getView() : field);
+        l.setToolTipText(tip);
+        field.setToolTipText(tip);
+        GridBagConstraints lc = at(0, row);
+        lc.anchor = GridBagConstraints.FIRST_LINE_END;
+        lc.insets = new Insets(4, 0, 4, 10);
+        form.add(l, lc);
+        GridBagConstraints fc = at(1, row);
+        fc.fill = field instanceof JScrollPane ? GridBagConstraints.BOTH : GridBagConstraints.NONE;
+        fc.weightx = 1;
+        form.add(field, fc);
+        return row + 1;
+    }
+
+    private static GridBagConstraints at(int x, int y) {
+        GridBagConstraints c = new GridBagConstraints();
+        c.gridx = x;
+        c.gridy = y;
+        c.anchor = GridBagConstraints.LINE_START;
+        c.insets = new Insets(3, 0, 3, 0);
+        return c;
+    }
+
+    private void edited(String key) {
+        if (syncing) {
+            return;
+        }
+        ProjectIdentity identity;
+        try {
+            identity = new ProjectIdentity(revision.getText(), engineer.getText(), client.getText(), date.getText());
+            dateProblem.setText(" ");
+            date.putClientProperty("JComponent.outline", null);
+        } catch (InvalidInputException e) {
+            dateProblem.setText(e.getMessage().substring(e.getMessage().indexOf(':') + 1).strip());
+            date.putClientProperty("JComponent.outline", "error");
+            return; // a half-typed date is kept on screen, not saved
+        }
+        editing = key;
+        try {
+            document.apply(ProjectEdits.identity(key, name.getText().strip(), notes.getText(), identity));
+        } finally {
+            editing = null;
+        }
+    }
+
+    /** @param p the project to show (only what differs is touched) */
+    void sync(Project p) {
+        show(p, false);
+    }
+
+    private void show(Project p, boolean all) {
+        syncing = true;
+        try {
+            for (JTextComponent c : List.of(name, notes, revision, engineer, client, date)) {
+                if (all || !c.getName().equals(editing)) {
+                    set(c, switch (c.getName()) {
+                        case "project.name" -> p.name();
+                        case "project.notes" -> p.notes();
+                        case "project.revision" -> p.identity().revision();
+                        case "project.engineer" -> p.identity().engineer();
+                        case "project.client" -> p.identity().client();
+                        default -> all || " ".equals(dateProblem.getText()) ? p.identity().date() : c.getText();
+                    });
+                }
+            }
+        } finally {
+            syncing = false;
+        }
+    }
+
+    /** @param p a project just opened, undone or redone: every field shows it, a bad date too */
+    void load(Project p) {
+        dateProblem.setText(" ");
+        date.putClientProperty("JComponent.outline", null);
+        show(p, true);
+    }
+
+    /**
+     * @param c a text component
+     * @param text what the project holds
+     */
+    private static void set(JTextComponent c, String text) {
+        String shown = c.getText();
+        if (!shown.equals(text) && !shown.strip().equals(text)) {
+            c.setText(text);
+        }
+    }
+}
