@@ -61,7 +61,6 @@ public final class QuantityField extends JPanel {
         text.setHorizontalAlignment(JTextField.RIGHT);
         // Never squeeze a field to nothing when its form is short of room.
         text.setMinimumSize(text.getPreferredSize());
-        setMinimumSize(getPreferredSize());
         units.setName(fieldId + ".unit");
         units.setRenderer(new javax.swing.DefaultListCellRenderer() {
             @Override
@@ -105,6 +104,12 @@ public final class QuantityField extends JPanel {
                 unitPicked();
             }
         });
+    }
+
+    /** Never less than the text and its unit list: a form short of room scrolls instead of clipping them. */
+    @Override
+    public java.awt.Dimension getMinimumSize() {
+        return isMinimumSizeSet() ? super.getMinimumSize() : getPreferredSize();
     }
 
     /** @return the line under the field where problems are said; the form places it */
