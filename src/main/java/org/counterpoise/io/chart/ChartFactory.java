@@ -3,117 +3,476 @@ package org.counterpoise.io.chart;
 import java.awt.BasicStroke;
 import java.awt.Color;
 import java.awt.Font;
+import java.util.ArrayList;
+import java.util.Collections;
 import java.util.List;
+import java.util.Map;
+import java.util.WeakHashMap;
+import java.util.function.DoubleUnaryOperator;
 import org.counterpoise.core.design.DesignCurves;
 import org.counterpoise.core.design.DesignResult;
+import org.counterpoise.core.response.ResponseKind;
+import org.counterpoise.core.response.SystemResponse;
 import org.counterpoise.core.units.Dimension;
 import org.counterpoise.core.units.Unit;
 import org.counterpoise.io.text.DisplayUnits;
+import org.counterpoise.io.text.QuantityFormat;
 import org.knowm.xchart.AnnotationLine;
 import org.knowm.xchart.AnnotationText;
 import org.knowm.xchart.XYChart;
 import org.knowm.xchart.XYChartBuilder;
 import org.knowm.xchart.XYSeries;
+import org.knowm.xchart.internal.chartpart.Chart;
+import org.knowm.xchart.style.AxesChartStyler;
 import org.knowm.xchart.style.Styler;
+import org.knowm.xchart.style.XYStyler;
 import org.knowm.xchart.style.markers.SeriesMarkers;
 
 /**
  * Builds the charts of a design as XChart data, to be painted on any Graphics2D: the wizard's
  * panels, PNG and SVG files and the PDF sheet all use these. Frequencies in Hz, responses in the
- * display units of {@link DisplayUnits}. On a logarithmic axis a value of zero (an undamped
- * absorber holds the structure still at one frequency) is drawn at the axis floor, a decade and a
- * half below the smallest positive value.
+ * display units of {@link DisplayUnits}, colours from a {@link ChartTheme}. On a logarithmic axis
+ * a value of zero (an undamped absorber holds the structure still at one frequency) is drawn at
+ * the axis floor, a decade and a half below the smallest positive value; the axis labels its
+ * decades and marks 2 to 9 times each decade with unlabelled minor ticks (every tick is labelled
+ * when the axis spans less than about one decade). Values that are unbounded (see
+ * {@link PlotRange}) are drawn at the top of the plotting range, marked, and named in the chart's
+ * {@link #notes}.
  */
 public final class ChartFactory {
-    /** Colour of the curve without an absorber. */
-    public static final Color BEFORE = new Color(0x8a, 0x8f, 0x98);
-    /** Colour of the curve with the absorber. */
-    public static final Color AFTER = new Color(0x0b, 0x6e, 0x69);
-    /** Colour of the stroke curve. */
-    public static final Color STROKE = new Color(0xb3, 0x5c, 0x1e);
-    /** Colour of the forcing band's edges. */
-    public static final Color BAND_EDGE = new Color(0xc9, 0x8f, 0x00);
+    /** Colour of the curve without an absorber (light theme). */
+    public static final Color BEFORE = ChartTheme.LIGHT.before();
+    /** Colour of the curve with the absorber (light theme). */
+    public static final Color AFTER = ChartTheme.LIGHT.after();
+    /** Colour of the stroke curve (light theme). */
+    public static final Color STROKE = ChartTheme.LIGHT.stroke();
+    /** Colour of the forcing band's edges (light theme). */
+    public static final Color BAND_EDGE = ChartTheme.LIGHT.band();
+    /** Name of the series that marks unbounded values at the top of a chart. */
+    public static final String UNBOUNDED_SERIES = "unbounded (drawn to the top)";
+
+    /** Notes of each chart built here (weak keys: a chart forgotten takes its notes with it). */
+    private static final Map<Chart<?, ?>, List<String>> NOTES = Collections.synchronizedMap(new WeakHashMap<>());
 
     private ChartFactory() {
+    }
+
+    /**
+     * @param chart a chart built by this package
+     * @return what the chart says beside its curves, e.g. "without absorber: unbounded at 14.20 Hz";
+     *     empty when nothing
+     */
+    public static List<String> notes(Chart<?, ?> chart) {
+        List<String> n = NOTES.get(chart);
+        return n == null ? List.of() : List.copyOf(n);
+    }
+
+    static void note(Chart<?, ?> chart, String text) {
+        NOTES.computeIfAbsent(chart, c -> new ArrayList<>()).add(text);
+    }
+
+    /** The response chart in the light (print) theme. */
+    public static XYChart response(DesignResult r, DesignCurves curves, boolean logarithmic, int width, int height) {
+        return response(r, curves, logarithmic, ChartTheme.LIGHT, width, height);
     }
 
     /**
      * @param r the design result
      * @param curves its curves
      * @param logarithmic true for a logarithmic response axis
+     * @param theme colours
      * @param width pixels
      * @param height pixels
-     * @return the response before and after, with the forcing band shaded
+     * @return the response before and after, with the forcing band marked
      */
-    public static XYChart response(DesignResult r, DesignCurves curves, boolean logarithmic, int width, int height) {
+    public static XYChart response(DesignResult r, DesignCurves curves, boolean logarithmic, ChartTheme theme,
+            int width, int height) {
         Dimension d = curves.response().dimension();
         Unit unit = DisplayUnits.of(d);
-        XYChart chart = base(width, height, capitalised(curves.response().label()), unit, logarithmic);
+        XYChart chart = base(width, height, capitalised(curves.response().label()), unit, theme);
         double[] hz = toHz(curves.frequency());
         double[] before = toUnit(curves.before(), unit);
         double[] after = toUnit(curves.after(), unit);
-        double top = max(after, before);
-        double floor = logarithmic ? floor(before, after, top) : 0.0;
-        range(chart, floor, top, logarithmic);
-        shadeBand(chart, r, floor, top);
-        line(chart, "without absorber", hz, clean(before, floor), BEFORE, 1.4f, true);
-        line(chart, "with absorber", hz, clean(after, floor), AFTER, 2.2f, false);
+        ResponseKind kind = curves.response();
+        Curve[] lines = {new Curve("without absorber", before, theme.before(), 1.4f, true, exact(r, false, kind, unit)),
+            new Curve("with absorber", after, theme.after(), 2.2f, false, exact(r, true, kind, unit))};
+        plot(chart, hz, lines, logarithmic, Double.NaN, resonances(r), theme);
+        shadeBand(chart, r, theme);
         return chart;
+    }
+
+    /** The stroke chart in the light (print) theme. */
+    public static XYChart stroke(DesignResult r, DesignCurves curves, boolean logarithmic, int width, int height) {
+        return stroke(r, curves, logarithmic, ChartTheme.LIGHT, width, height);
     }
 
     /**
      * @param r the design result
      * @param curves its curves
      * @param logarithmic true for a logarithmic axis
+     * @param theme colours
      * @param width pixels
      * @param height pixels
      * @return the absorber stroke against frequency, with the clearance marked
      */
-    public static XYChart stroke(DesignResult r, DesignCurves curves, boolean logarithmic, int width, int height) {
+    public static XYChart stroke(DesignResult r, DesignCurves curves, boolean logarithmic, ChartTheme theme,
+            int width, int height) {
         Unit unit = DisplayUnits.of(Dimension.LENGTH);
-        XYChart chart = base(width, height, "Absorber stroke", unit, logarithmic);
+        XYChart chart = base(width, height, "Absorber stroke", unit, theme);
         double[] hz = toHz(curves.frequency());
         double[] stroke = toUnit(curves.stroke(), unit);
         double clearance = unit.fromSi(r.clearance());
-        double top = Math.max(max(stroke, stroke), clearance);
-        double floor = logarithmic ? floor(stroke, stroke, top) : 0.0;
-        range(chart, floor, top, logarithmic);
-        shadeBand(chart, r, floor, top);
-        line(chart, "stroke", hz, clean(stroke, floor), STROKE, 2.0f, false);
-        line(chart, "clearance", new double[] {hz[0], hz[hz.length - 1]}, new double[] {clearance, clearance},
-                STROKE, 1.0f, true);
+        Curve[] lines = {new Curve("stroke", stroke, theme.stroke(), 2.0f, false,
+            exact(r, true, ResponseKind.STROKE, unit))};
+        plot(chart, hz, lines, logarithmic, clearance, resonances(r), theme);
+        shadeBand(chart, r, theme);
         return chart;
     }
 
-    private static XYChart base(int width, int height, String title, Unit unit, boolean logarithmic) {
+    /**
+     * The least peak reachable for each mass ratio, on logarithmic axes, with this design marked.
+     * @param massRatios mass ratios (x)
+     * @param leastPeaks least peak for each, in the display unit
+     * @param unit the display unit of the response
+     * @param massRatio this design's mass ratio
+     * @param peak this design's peak, in the display unit
+     * @param theme colours
+     * @param width pixels
+     * @param height pixels
+     * @return the chart
+     */
+    public static XYChart massRatio(double[] massRatios, double[] leastPeaks, Unit unit, double massRatio, double peak,
+            ChartTheme theme, int width, int height) {
+        XYChart c = new XYChartBuilder().width(width).height(height).xAxisTitle("Mass ratio \u03bc")
+                .yAxisTitle("Least peak (" + pretty(unit.symbol()) + ")").build();
+        houseStyle(c.getStyler(), theme);
+        // The legend tells the curve of least peaks from this design's diamond.
+        List<double[]> points = new ArrayList<>();
+        for (int i = 0; i < Math.min(massRatios.length, leastPeaks.length); i++) {
+            if (massRatios[i] > 0 && Double.isFinite(massRatios[i]) && leastPeaks[i] > 0
+                    && Double.isFinite(leastPeaks[i])) {
+                points.add(new double[] {massRatios[i], leastPeaks[i]});
+            }
+        }
+        boolean here = massRatio > 0 && Double.isFinite(massRatio) && peak > 0 && Double.isFinite(peak);
+        if (points.isEmpty() && !here) {
+            note(c, "no finite least peak to draw");
+            return emptyNote(c, "no finite least peak to draw", theme);
+        }
+        double[] x = points.stream().mapToDouble(p -> p[0]).toArray();
+        double[] y = points.stream().mapToDouble(p -> p[1]).toArray();
+        double[] xr = span(x, here ? massRatio : Double.NaN);
+        double[] yr = span(y, here ? peak : Double.NaN);
+        for (int i = 0; i < x.length; i++) {
+            x[i] = Math.max(x[i], xr[0]);
+            y[i] = Math.max(y[i], yr[0]);
+        }
+        logAxis(c.getStyler(), true, xr[0] / 1.2, xr[1] * 1.2);
+        logAxis(c.getStyler(), false, yr[0] / 1.3, yr[1] * 1.3);
+        if (x.length > 0) {
+            XYSeries s = c.addSeries("least peak", x, y);
+            s.setLineColor(theme.after());
+            s.setMarker(SeriesMarkers.CIRCLE);
+            s.setMarkerColor(theme.after());
+        }
+        if (here) {
+            XYSeries now = c.addSeries("this design", new double[] {massRatio}, new double[] {peak});
+            now.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Scatter);
+            now.setMarkerColor(theme.stroke());
+            now.setMarker(SeriesMarkers.DIAMOND);
+        }
+        c.getStyler().setMarkerSize(6);
+        return c;
+    }
+
+    /** Smallest and largest of the values and an extra point (NaN: none); never equal. */
+    private static double[] span(double[] v, double extra) {
+        double lo = Double.POSITIVE_INFINITY;
+        double hi = 0;
+        for (double a : v) {
+            lo = Math.min(lo, a);
+            hi = Math.max(hi, a);
+        }
+        if (!Double.isNaN(extra)) {
+            lo = Math.min(lo, extra);
+            hi = Math.max(hi, extra);
+        }
+        if (!(hi > lo)) {
+            lo = hi / 2;
+            hi = hi * 2;
+        }
+        // A logarithmic axis over more than twelve decades tells nothing: the rest sits at its floor.
+        return new double[] {Math.max(lo, hi * 1e-12), hi};
+    }
+
+    private static XYChart base(int width, int height, String title, Unit unit, ChartTheme theme) {
         XYChart chart = new XYChartBuilder().width(width).height(height).title(title)
                 .xAxisTitle("Forcing frequency (Hz)").yAxisTitle(title + " (" + pretty(unit.symbol()) + ")").build();
         var s = chart.getStyler();
-        houseStyle(s);
-        s.setYAxisLogarithmic(logarithmic);
-        s.setXAxisDecimalPattern("#,##0.##");
-        s.setYAxisDecimalPattern(logarithmic ? "0.##########" : "#,##0.#####");
-        s.setAnnotationLineColor(BAND_EDGE);
+        houseStyle(s, theme);
+        s.setAnnotationLineColor(theme.band());
         s.setAnnotationLineStroke(new BasicStroke(1.6f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 10f,
                 new float[] {2f, 3f}, 0f));
         s.setAnnotationTextFont(new Font(Font.SANS_SERIF, Font.PLAIN, 10));
-        s.setAnnotationTextFontColor(BAND_EDGE.darker());
+        s.setAnnotationTextFontColor(theme.dark() ? theme.band() : theme.band().darker());
         return chart;
     }
 
-    /** Marks the forcing band by its two ends (one line for one frequency) and a label. */
     /**
-     * The look every Counterpoise XY chart shares: white ground, light grid, small sans-serif type.
-     * @param s the chart's styler
+     * One curve of a chart.
+     * @param at the curve's exact value at a frequency in Hz (display unit), for probing
+     *     resonances that fall between grid points
      */
-    static void houseStyle(org.knowm.xchart.style.XYStyler s) {
-        s.setChartBackgroundColor(Color.WHITE);
-        s.setPlotBackgroundColor(Color.WHITE);
+    private record Curve(String name, double[] y, Color color, float width, boolean dashed, DoubleUnaryOperator at) {
+    }
+
+    /**
+     * The frequencies (Hz) where an undamped system's response is unbounded: the structure's own
+     * natural frequency when it is undamped, and the coupled natural frequencies when the structure
+     * and the absorber are both undamped. The grid rarely holds them exactly, so they are probed.
+     */
+    private static double[] resonances(DesignResult r) {
+        var structure = r.study().structure();
+        List<Double> hz = new ArrayList<>();
+        if (structure.dampingRatio() == 0) {
+            hz.add(Unit.HERTZ.fromSi(structure.naturalFrequency()));
+            if (r.tuning().dampingRatio() == 0) {
+                for (double w : r.coupledNaturalFrequencies()) {
+                    hz.add(Unit.HERTZ.fromSi(w));
+                }
+            }
+        }
+        return hz.stream().mapToDouble(Double::doubleValue).toArray();
+    }
+
+    private static DoubleUnaryOperator exact(DesignResult r, boolean withAbsorber, ResponseKind kind, Unit unit) {
+        var study = r.study();
+        SystemResponse system = new SystemResponse(study.structure(), withAbsorber ? r.tuning() : null,
+                study.excitation().kind(), study.excitation().amplitude());
+        return hz -> unit.fromSi(system.amplitudeAt(kind, Unit.HERTZ.toSi(hz)));
+    }
+
+    /** The curve with the probed frequencies added where its value there is unbounded. */
+    private static double[][] withProbes(double[] x, double[] y, double[] probes, DoubleUnaryOperator at,
+            double typical) {
+        java.util.TreeMap<Double, Double> points = new java.util.TreeMap<>();
+        for (int i = 0; i < x.length; i++) {
+            points.put(x[i], y[i]);
+        }
+        if (at != null && x.length > 1) {
+            for (double f : probes) {
+                if (f > x[0] && f < x[x.length - 1]) {
+                    double v = at.applyAsDouble(f);
+                    if (PlotRange.unbounded(v, typical)) {
+                        points.put(f, v);
+                    }
+                }
+            }
+        }
+        double[][] out = new double[2][points.size()];
+        int k = 0;
+        for (var e : points.entrySet()) {
+            out[0][k] = e.getKey();
+            out[1][k++] = e.getValue();
+        }
+        return out;
+    }
+
+    /**
+     * Sets the axes and adds the curves, clipped to the plotting range, with unbounded stretches
+     * marked at the top and named in the notes.
+     */
+    private static void plot(XYChart chart, double[] x, Curve[] curves, boolean logarithmic, double level,
+            double[] probes, ChartTheme theme) {
+        // Points whose frequency is not a finite positive number cannot be placed at all.
+        boolean[] keep = new boolean[x.length];
+        int n = 0;
+        for (int i = 0; i < x.length; i++) {
+            keep[i] = Double.isFinite(x[i]) && x[i] > 0;
+            n += keep[i] ? 1 : 0;
+        }
+        double[] hz = select(x, keep, n);
+        double[][] ys = new double[curves.length][];
+        for (int k = 0; k < curves.length; k++) {
+            ys[k] = select(curves[k].y(), keep, n);
+        }
+        double typical = PlotRange.typical(ys);
+        double top = Math.max(PlotRange.top(typical, ys), Double.isFinite(level) ? level : 0);
+        double bottom = 0;
+        for (double[] y : ys) {
+            for (double v : y) {
+                if (!PlotRange.unbounded(v, typical)) {
+                    bottom = Math.min(bottom, v);
+                }
+            }
+        }
+        boolean allZero = !(top > 0);
+        if (allZero) {
+            top = 1;
+        }
+        double floor = logarithmic ? floor(ys, top) : bottom;
+        double xLow = hz.length > 0 ? hz[0] : 1;
+        double xHigh = hz.length > 0 ? hz[hz.length - 1] : 2;
+        for (double v : hz) {
+            xLow = Math.min(xLow, v);
+            xHigh = Math.max(xHigh, v);
+        }
+        if (!(xHigh > xLow)) {
+            xLow = xLow * 0.9;
+            xHigh = xHigh * 1.1;
+        }
+        AxesChartStyler s = chart.getStyler();
+        s.setXAxisMin(xLow);
+        s.setXAxisMax(xHigh);
+        s.setxAxisTickLabelsFormattingFunction(ChartNumbers.linearAxis(xLow, xHigh));
+        // Curves with the probed resonances, and where each is unbounded, before the axes are set:
+        // a chart with notes keeps a band above the plotting range for them, over no curve.
+        double[][][] xys = new double[curves.length][][];
+        List<double[]> marks = new ArrayList<>();
+        for (int k = 0; k < curves.length && hz.length > 0; k++) {
+            xys[k] = withProbes(hz, ys[k], probes, curves[k].at(), typical);
+            for (double at : PlotRange.unboundedAt(xys[k][0], xys[k][1], typical)) {
+                marks.add(new double[] {at, top});
+                note(chart, curves[k].name() + ": unbounded at "
+                        + QuantityFormat.format(Unit.HERTZ.toSi(at), Unit.HERTZ));
+            }
+        }
+        if (allZero) {
+            note(chart, "every value is zero");
+        }
+        int lines = notes(chart).size();
+        if (lines > 0) {
+            // The notes take the top left of the plot; the legend goes below the plot, clear of them.
+            s.setLegendPosition(Styler.LegendPosition.OutsideS);
+            s.setLegendLayout(Styler.LegendLayout.Horizontal);
+        }
+        double headroom = lines == 0 ? 0 : Math.min(0.45, 0.06 + 0.075 * lines);
+        double yTop = logarithmic ? top * 1.6 * Math.pow(top * 1.6 / floor, headroom / (1 - headroom))
+                : top * 1.1 + headroom / (1 - headroom) * (top * 1.1 - floor);
+        if (logarithmic) {
+            logAxis(s, false, floor, yTop);
+        } else {
+            s.setYAxisMin(floor);
+            s.setYAxisMax(yTop);
+            s.setyAxisTickLabelsFormattingFunction(ChartNumbers.linearAxis(floor, yTop));
+        }
+        chart.getStyler().setYAxisLogarithmic(logarithmic);
+        for (int k = 0; k < curves.length && hz.length > 0; k++) {
+            Curve c = curves[k];
+            line(chart, c.name(), xys[k][0], PlotRange.clip(xys[k][1], typical, floor, top), c.color(), c.width(),
+                    c.dashed());
+        }
+        if (Double.isFinite(level) && level > 0) {
+            line(chart, "clearance", new double[] {xLow, xHigh}, new double[] {level, level}, curves[0].color(), 1.0f,
+                    true);
+        }
+        if (!marks.isEmpty()) {
+            XYSeries m = chart.addSeries(UNBOUNDED_SERIES, marks.stream().mapToDouble(p -> p[0]).toArray(),
+                    marks.stream().mapToDouble(p -> p[1]).toArray());
+            m.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Scatter);
+            m.setMarker(SeriesMarkers.TRIANGLE_UP);
+            m.setMarkerColor(theme.alarm());
+            chart.getStyler().setMarkerSize(9);
+        }
+        notePanel(chart, theme, logarithmic ? top * 1.6 : top * 1.1);
+    }
+
+    /**
+     * Writes the chart's notes in a box at the left of its plot, its lower edge at a given height
+     * (the axes' ranges must be set).
+     * @param chart the chart
+     * @param theme colours
+     * @param above the height the box's lower edge sits at, in data units; NaN for near the top
+     */
+    static void notePanel(XYChart chart, ChartTheme theme, double above) {
+        List<String> notes = notes(chart);
+        AxesChartStyler s = chart.getStyler();
+        if (notes.isEmpty() || s.getXAxisMin() == null || s.getXAxisMax() == null || s.getYAxisMin() == null
+                || s.getYAxisMax() == null) {
+            return;
+        }
+        double x0 = s.getXAxisMin();
+        double x1 = s.getXAxisMax();
+        double y0 = s.getYAxisMin();
+        double y1 = s.getYAxisMax();
+        double x = s.isXAxisLogarithmic() ? x0 * Math.pow(x1 / x0, 0.015) : x0 + 0.015 * (x1 - x0);
+        double lines = Math.min(0.5, 0.03 + 0.07 * notes.size());
+        double y = !Double.isNaN(above) ? above
+                : s.isYAxisLogarithmic() ? y1 / Math.pow(y1 / y0, lines) : y1 - lines * (y1 - y0);
+        chart.addAnnotation(new NoteBox(notes, x, y, theme.plot(), theme.alarm()));
+    }
+
+    /**
+     * A logarithmic axis over [low, high] that labels its decades and marks 2 to 9 times each decade
+     * with unlabelled minor ticks; when it spans less than about one decade it labels every tick,
+     * so it never shows an axis without a number.
+     */
+    static void logAxis(AxesChartStyler s, boolean xAxis, double low, double high) {
+        boolean fewDecades = Math.log10(high / low) < 1.3;
+        String pattern = low < 1e-4 || high > 1e6 ? "0.##E0" : "0.##########";
+        if (xAxis) {
+            s.setXAxisLogarithmic(true);
+            s.setXAxisMin(low);
+            s.setXAxisMax(high);
+            s.setXAxisLogarithmicDecadeOnly(!fewDecades);
+            s.setXAxisDecimalPattern(pattern);
+        } else {
+            s.setYAxisLogarithmic(true);
+            s.setYAxisMin(low);
+            s.setYAxisMax(high);
+            s.setYAxisLogarithmicDecadeOnly(!fewDecades);
+            s.setYAxisDecimalPattern(pattern);
+        }
+    }
+
+    private static double[] select(double[] v, boolean[] keep, int n) {
+        double[] out = new double[n];
+        int k = 0;
+        for (int i = 0; i < v.length && i < keep.length; i++) {
+            if (keep[i]) {
+                out[k++] = v[i];
+            }
+        }
+        return out;
+    }
+
+    /** A chart with nothing to draw but a note in the middle of its plot. */
+    static XYChart emptyNote(XYChart c, String text, ChartTheme theme) {
+        c.getStyler().setXAxisLogarithmic(false);
+        c.getStyler().setYAxisLogarithmic(false);
+        c.getStyler().setXAxisMin(0.0);
+        c.getStyler().setXAxisMax(1.0);
+        c.getStyler().setYAxisMin(0.0);
+        c.getStyler().setYAxisMax(1.0);
+        c.getStyler().setAxisTicksVisible(false);
+        c.getStyler().setAnnotationTextFontColor(theme.text());
+        c.getStyler().setAnnotationTextFont(new Font(Font.SANS_SERIF, Font.PLAIN, 12));
+        XYSeries blank = c.addSeries(" ", new double[] {0, 1}, new double[] {0, 0});
+        blank.setLineColor(new Color(0, 0, 0, 0));
+        blank.setMarker(SeriesMarkers.NONE);
+        blank.setShowInLegend(false);
+        c.addAnnotation(new AnnotationText(text, 0.5, 0.5, false));
+        return c;
+    }
+
+    /**
+     * The look every Counterpoise XY chart shares: light grid, small sans-serif type, colours of
+     * the theme.
+     * @param s the chart's styler
+     * @param theme colours
+     */
+    static void houseStyle(XYStyler s, ChartTheme theme) {
+        s.setChartBackgroundColor(theme.background());
+        s.setPlotBackgroundColor(theme.plot());
         s.setPlotBorderVisible(true);
-        s.setPlotBorderColor(new Color(0xc8, 0xcc, 0xd2));
-        s.setPlotGridLinesColor(new Color(0xe6, 0xe8, 0xeb));
+        s.setPlotBorderColor(theme.border());
+        s.setPlotGridLinesColor(theme.grid());
+        s.setChartFontColor(theme.text());
+        s.setAxisTickLabelsColor(theme.text());
+        s.setAxisTickMarksColor(theme.border());
+        s.setLegendBackgroundColor(theme.plot());
         s.setLegendPosition(Styler.LegendPosition.InsideNE);
-        s.setLegendBorderColor(new Color(0xc8, 0xcc, 0xd2));
+        s.setLegendBorderColor(theme.border());
         s.setChartTitleBoxVisible(false);
         s.setChartTitleFont(new Font(Font.SANS_SERIF, Font.BOLD, 13));
         s.setAxisTitleFont(new Font(Font.SANS_SERIF, Font.PLAIN, 11));
@@ -121,17 +480,29 @@ public final class ChartFactory {
         s.setLegendFont(new Font(Font.SANS_SERIF, Font.PLAIN, 10));
         s.setMarkerSize(0);
         s.setAntiAlias(true);
+        // The wizard shows values in its own readout; the chart library's pointer aids stay off.
+        s.setToolTipsEnabled(false);
+        s.setCursorEnabled(false);
+        s.setZoomEnabled(false);
     }
 
-    private static void shadeBand(XYChart chart, DesignResult r, double floor, double top) {
+    /** Marks the forcing band by its two ends (one line for one frequency) and a label at the top. */
+    private static void shadeBand(XYChart chart, DesignResult r, ChartTheme theme) {
         double lo = Unit.HERTZ.fromSi(r.study().excitation().band().low());
         double hi = Unit.HERTZ.fromSi(r.study().excitation().band().high());
+        if (!Double.isFinite(lo) || !Double.isFinite(hi)) {
+            return;
+        }
         chart.addAnnotation(new AnnotationLine(lo, true, false));
         if (hi > lo) {
             chart.addAnnotation(new AnnotationLine(hi, true, false));
         }
-        chart.addAnnotation(new AnnotationText(hi > lo ? "forcing band" : "forcing", 0.5 * (lo + hi),
-                floor > 0 ? top * 1.3 : top * 1.04, false));
+        Double yMax = chart.getStyler().getYAxisMax();
+        Double yMin = chart.getStyler().getYAxisMin();
+        if (yMax != null && yMin != null) {
+            double y = chart.getStyler().isYAxisLogarithmic() ? yMax / 1.25 : yMax - 0.04 * (yMax - yMin);
+            chart.addAnnotation(new AnnotationText(hi > lo ? "forcing band" : "forcing", 0.5 * (lo + hi), y, false));
+        }
     }
 
     private static void line(XYChart chart, String name, double[] x, double[] y, Color color, float width,
@@ -144,49 +515,22 @@ public final class ChartFactory {
                 new float[] {6f, 4f}, 0f) : new BasicStroke(width, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND));
     }
 
-    /** Values at or below the floor (zeros on a log axis) drawn at the floor. */
-    static double[] clean(double[] v, double floor) {
-        double[] out = v.clone();
-        for (int i = 0; i < out.length; i++) {
-            if (!(out[i] > floor)) {
-                out[i] = floor;
-            }
-        }
-        return out;
-    }
-
-    /** The axis floor: the smallest positive value, but never more than four decades below the top. */
-    private static double floor(double[] a, double[] b, double top) {
+    /**
+     * The floor of a logarithmic axis: the decade at or below the smallest positive value, but
+     * never more than four decades below the top.
+     */
+    private static double floor(double[][] curves, double top) {
         double min = Double.POSITIVE_INFINITY;
-        for (double[] arr : List.of(a, b)) {
+        for (double[] arr : curves) {
             for (double v : arr) {
                 if (v > 0) {
                     min = Math.min(min, v);
                 }
             }
         }
-        if (Double.isInfinite(min) || !(top > 0)) {
-            return 1e-12;
-        }
-        return Math.max(min / 1.5, top * 1e-4);
-    }
-
-    private static void range(XYChart chart, double floor, double top, boolean logarithmic) {
-        if (top > 0) {
-            chart.getStyler().setYAxisMax(logarithmic ? top * 1.6 : top * 1.1);
-            chart.getStyler().setYAxisMin(logarithmic ? floor : 0.0);
-        }
-    }
-
-    private static double max(double[] a, double[] b) {
-        double m = 0;
-        for (double v : a) {
-            m = Math.max(m, v);
-        }
-        for (double v : b) {
-            m = Math.max(m, v);
-        }
-        return m;
+        double lowest = top * 1e-4;
+        double f = Double.isInfinite(min) ? lowest : Math.max(min / 1.5, lowest);
+        return Math.min(f, top / 10);
     }
 
     private static double[] toHz(double[] omega) {
@@ -213,5 +557,4 @@ public final class ChartFactory {
     private static String capitalised(String s) {
         return Character.toUpperCase(s.charAt(0)) + s.substring(1);
     }
-
 }

@@ -103,9 +103,15 @@ public final class SheetWriter {
         heading("Response with and without the absorber", 11.5f, ACCENT);
         rule();
         for (XYChart chart : charts) {
-            ensure(chartHeight + 10);
+            List<String> notes = ChartFactory.notes(chart);
+            ensure(chartHeight + 10 + notes.size() * LINE);
             drawChart(chart, MARGIN, y - chartHeight, chartWidth, chartHeight);
             y -= chartHeight + 14;
+            // What the chart cannot draw (an unbounded resonance) is also said in the text.
+            for (String note : notes) {
+                say("Note: " + note + "; drawn to the top of the chart.", MARGIN, 8.5f, INK, false);
+                y -= LINE;
+            }
         }
         newPage();
         paragraphs("Assumptions of the model", content.assumptions());

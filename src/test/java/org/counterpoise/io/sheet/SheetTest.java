@@ -87,7 +87,7 @@ class SheetTest {
         var response = new org.counterpoise.core.response.SystemResponse(r.study().structure(), r.tuning(),
                 r.study().excitation().kind(), r.study().excitation().amplitude());
         List<String> lines = Files.readAllLines(folder.resolve("curves.csv"));
-        assertEquals("frequency_Hz,displacement_without_absorber_m,displacement_with_absorber_m,absorber_stroke_m",
+        assertEquals("frequency_Hz,displacement_without_absorber_m,displacement_with_absorber_m,absorber_stroke_m,status",
                 lines.get(0));
         for (String line : lines.subList(1, lines.size())) {
             String[] cells = line.split(",");
@@ -96,6 +96,7 @@ class SheetTest {
             assertEquals(after, Double.parseDouble(cells[2]), 1e-12 * after);
             double stroke = response.amplitudeAt(org.counterpoise.core.response.ResponseKind.STROKE, omega);
             assertEquals(stroke, Double.parseDouble(cells[3]), 1e-12 * stroke);
+            assertEquals("ok", cells[4]);
         }
         var e = org.junit.jupiter.api.Assertions.assertThrows(
                 org.counterpoise.core.error.InvalidInputException.class,

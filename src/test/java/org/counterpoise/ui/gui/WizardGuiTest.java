@@ -426,8 +426,8 @@ class WizardGuiTest {
         });
         waitFor(() -> onEdtQuietly(() -> frame.settled() && frame.shownResult() != null), "design");
         Component chart = find("chart.massRatio");
-        waitFor(() -> onEdtQuietly(() -> chart instanceof Container c && c.getComponentCount() > 0
-                && c.getComponent(0) instanceof org.knowm.xchart.XChartPanel), "mass-ratio chart");
+        waitFor(() -> onEdtQuietly(() -> ((org.counterpoise.ui.gui.plot.ChartHost) chart).shownChart() != null),
+                "mass-ratio chart");
         // Click the chart (where XChart would take Ctrl+S for its own PNG dialog), then Ctrl+S.
         java.awt.Point at = onEdt(() -> {
             java.awt.Point p = chart.getLocationOnScreen();

@@ -3,8 +3,6 @@ package org.counterpoise.ui.gui.wizard;
 import java.awt.BorderLayout;
 import java.awt.FlowLayout;
 import java.awt.GridLayout;
-import java.awt.event.MouseAdapter;
-import java.awt.event.MouseEvent;
 import java.nio.file.Path;
 import java.util.List;
 import javax.swing.JButton;
@@ -47,7 +45,8 @@ final class ResultStep extends Step {
     private final ChartHost responseChart = new ChartHost("chart.response");
     private final ChartHost strokeChart = new ChartHost("chart.stroke");
     private final JToggleButton logAxis = new JToggleButton("Log axis", true);
-    private final JLabel readout = new JLabel("Move the pointer over a chart to read the exact values there.");
+    private static final String READOUT_HINT = "Move the pointer over a chart to read the exact values there.";
+    private final JLabel readout = new JLabel(READOUT_HINT);
     private final JTextPane notes = new JTextPane();
     private final JComponent page;
     private final TaskRunner tasks;
@@ -106,6 +105,16 @@ final class ResultStep extends Step {
         controls.add(png);
         controls.add(svg);
         readout.setName("result.readout");
+        for (ChartHost host : List.of(responseChart, strokeChart)) {
+            // A new chart (or none) clears the readout: it never describes an old result.
+            host.onPointer(hz -> {
+                if (Double.isNaN(hz)) {
+                    readout.setText(READOUT_HINT);
+                } else {
+                    read(hz);
+                }
+            });
+        }
         JPanel right = new JPanel(new BorderLayout());
         right.add(controls, BorderLayout.NORTH);
         right.add(charts, BorderLayout.CENTER);
@@ -211,19 +220,11 @@ final class ResultStep extends Step {
         if (result == null) {
             return;
         }
-        XYChart response = ChartFactory.response(result, curves, logAxis.isSelected(), 640, 300);
-        XYChart stroke = ChartFactory.stroke(result, curves, false, 640, 300);
-        responseChart.show(response);
-        strokeChart.show(stroke);
-        for (ChartHost host : List.of(responseChart, strokeChart)) {
-            JComponent panel = (JComponent) host.getComponent(0);
-            panel.addMouseMotionListener(new MouseAdapter() {
-                @Override
-                public void mouseMoved(MouseEvent e) {
-                    read(host.chart().getChartXFromCoordinate(e.getX()));
-                }
-            });
-        }
+        DesignResult r = result;
+        DesignCurves c = curves;
+        boolean log = logAxis.isSelected();
+        responseChart.show(theme -> ChartFactory.response(r, c, log, theme, 640, 300));
+        strokeChart.show(theme -> ChartFactory.stroke(r, c, false, theme, 640, 300));
     }
 
     /** Shows the exact values at a frequency (Hz) under the pointer. */

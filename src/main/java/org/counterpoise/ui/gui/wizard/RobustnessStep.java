@@ -24,7 +24,6 @@ import org.counterpoise.ui.gui.document.ProjectEdits;
 import org.counterpoise.ui.gui.field.Form;
 import org.counterpoise.ui.gui.field.QuantityField;
 import org.counterpoise.ui.gui.plot.ChartHost;
-import org.knowm.xchart.XChartPanel;
 
 /** Step 5: how the design fares off-tune, the robust alternative and the tolerance Monte Carlo. */
 final class RobustnessStep extends Step {
@@ -57,7 +56,7 @@ final class RobustnessStep extends Step {
     private final JLabel summary = new JLabel(" ");
     private final ChartHost sensitivity = new ChartHost("chart.sensitivity");
     private final ChartHost histogram = new ChartHost("chart.histogram");
-    private final JPanel mapHolder = new JPanel(new BorderLayout());
+    private final ChartHost mapHolder = new ChartHost("chart.map");
     private final JComponent page;
     /** The summary's text without its width, so it can be rewrapped when the page is resized. */
     private String summaryHtml = "";
@@ -98,7 +97,6 @@ final class RobustnessStep extends Step {
         tolerancesForm.end();
         summary.setName("robustness.summary");
         summary.setBorder(javax.swing.BorderFactory.createEmptyBorder(4, 14, 8, 14));
-        mapHolder.setName("chart.map");
         JPanel left = new JPanel(new GridLayout(2, 1, 0, 6));
         left.add(sensitivity);
         left.add(histogram);
@@ -226,7 +224,7 @@ final class RobustnessStep extends Step {
         if (design == null || r == null) {
             sensitivity.message(design == null ? "Fix the inputs to see the robustness study." : "computing\u2026");
             histogram.message(" ");
-            mapHolder.removeAll();
+            mapHolder.message(" ");
             summaryHtml = "";
             summary.setText(" ");
             return;
@@ -242,15 +240,9 @@ final class RobustnessStep extends Step {
                         + DisplayUnits.format(r.settings().target(), unitDim) + ": "
                         + QuantityFormat.number(100 * mc.probabilityExceeding(), 3) + " %"));
         wrapSummary();
-        sensitivity.show(RobustnessCharts.sensitivity(design, r, 420, 320));
-        histogram.show(RobustnessCharts.histogram(design, mc, 420, 320));
-        mapHolder.removeAll();
-        XChartPanel<?> map = new XChartPanel<>(RobustnessCharts.map(design, r, 520, 480, 3));
-        // The application's shortcuts win: XChart's own Ctrl+S/Ctrl+P would open its save dialog.
-        map.getInputMap(JComponent.WHEN_IN_FOCUSED_WINDOW).clear();
-        mapHolder.add(map, BorderLayout.CENTER);
-        mapHolder.revalidate();
-        mapHolder.repaint();
+        sensitivity.show(theme -> RobustnessCharts.sensitivity(design, r, theme, 420, 320));
+        histogram.show(theme -> RobustnessCharts.histogram(design, mc, theme, 420, 320));
+        mapHolder.show(theme -> RobustnessCharts.map(design, r, theme, 520, 480, 3));
     }
 
     /** Wraps the summary to the width it is given (an HTML label wraps only at a width it is given). */
@@ -268,9 +260,7 @@ final class RobustnessStep extends Step {
     void cancelled() {
         sensitivity.message("The robustness study was cancelled; it runs again after the next edit.");
         histogram.message(" ");
-        mapHolder.removeAll();
-        mapHolder.revalidate();
-        mapHolder.repaint();
+        mapHolder.message(" ");
         summaryHtml = "";
         summary.setText(" ");
     }
