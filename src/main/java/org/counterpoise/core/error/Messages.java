@@ -14,6 +14,8 @@ public enum Messages {
     MISSING_VALUE("{0}: missing; {1}"),
     /** {0} file or field, {1} what is wrong with it, {2} what is allowed or what to do. */
     UNUSABLE("{0}: {1}; {2}"),
+    /** {0} what was stopped. */
+    CANCELLED("{0} was cancelled"),
     /** {0} description of the internal failure. */
     BUG("bug in Counterpoise (please report it): {0}");
 

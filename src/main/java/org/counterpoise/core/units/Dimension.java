@@ -21,7 +21,9 @@ public enum Dimension {
     /** kg*m, the unbalance of a rotor (mass times eccentricity). */
     UNBALANCE("kg*m"),
     /** pure number. */
-    RATIO("");
+    RATIO(""),
+    /** rad/s^2: how fast a speed changes (a run-up rate). */
+    ANGULAR_ACCELERATION("rad/s^2");
 
     private final String siSymbol;
 

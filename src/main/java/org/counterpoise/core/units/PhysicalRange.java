@@ -33,6 +33,11 @@ public enum PhysicalRange {
     ACCELERATION(Dimension.ACCELERATION, 1e-9, 1e5),
     /** From 1 ug*m (a balanced small rotor) to 10^6 kg*m (far beyond a turbine rotor's unbalance). */
     UNBALANCE(Dimension.UNBALANCE, 1e-9, 1e6),
+    /**
+     * Shaft angular acceleration of a run-up, from 10^-4 rad/s^2 (about 0.001 rpm/s, a turbine's
+     * slowest warm-up) to 10^5 rad/s^2 (about 10^6 rpm/s, far beyond a motor's direct-on-line start).
+     */
+    ANGULAR_ACCELERATION(Dimension.ANGULAR_ACCELERATION, 1e-4, 1e5),
     /** mu = m2/m1: below 10^-5 no absorber does anything measurable; above 10 it is no longer an add-on. */
     MASS_RATIO(Dimension.RATIO, 1e-5, 10),
     /** Order of the disturbing harmonic of the running speed: half-order whirl up to a blade-pass order of 1000. */

@@ -35,7 +35,11 @@ public enum Unit {
     KILOGRAM_METRE("kg*m", Dimension.UNBALANCE, 1.0),
     GRAM_MILLIMETRE("g*mm", Dimension.UNBALANCE, 1e-6),
     RATIO("", Dimension.RATIO, 1.0),
-    PERCENT("%", Dimension.RATIO, 0.01);
+    PERCENT("%", Dimension.RATIO, 0.01),
+    /** Shaft speed change per second, the usual way to state a run-up rate. */
+    RPM_PER_SECOND("rpm/s", Dimension.ANGULAR_ACCELERATION, 2.0 * Math.PI / 60.0),
+    HERTZ_PER_SECOND("Hz/s", Dimension.ANGULAR_ACCELERATION, 2.0 * Math.PI),
+    RADIAN_PER_SECOND_SQUARED("rad/s^2", Dimension.ANGULAR_ACCELERATION, 1.0);
 
     private final String symbol;
     private final Dimension dimension;
@@ -115,6 +119,12 @@ public enum Unit {
         }
         if (s.equalsIgnoreCase("rpm") || s.equalsIgnoreCase("r/min")) {
             return "rpm";
+        }
+        if (s.equalsIgnoreCase("rpm/s") || s.equalsIgnoreCase("r/min/s")) {
+            return "rpm/s";
+        }
+        if (s.equalsIgnoreCase("hz/s")) {
+            return "Hz/s";
         }
         if (s.equalsIgnoreCase("hz")) {
             return "Hz";

@@ -1,6 +1,7 @@
 package org.counterpoise.io.project;
 
 import java.util.List;
+import java.util.OptionalDouble;
 import org.counterpoise.core.design.AbsorberSizing;
 import org.counterpoise.core.design.DesignConstraints;
 import org.counterpoise.core.design.RobustnessSettings;
@@ -129,6 +130,16 @@ public record Project(String name, String notes, StructureInput structure, Distu
             band = FrequencyBand.ofRotor(w, w, order);
         }
         return new Excitation(d.kind(), Checks.positive("disturbance.amplitude.value", d.amplitude().si()), band);
+    }
+
+    /**
+     * @return the shaft's angular acceleration at start and stop, rad/s^2, when the file states
+     *     {@code disturbance.run_up_rate}
+     */
+    public OptionalDouble runUpRate() {
+        QuantityInput rate = disturbance.runUpRate();
+        return rate == null ? OptionalDouble.empty()
+                : OptionalDouble.of(Checks.positive("disturbance.run_up_rate.value", rate.si()));
     }
 
     /** @return the study the core designs */

@@ -171,6 +171,7 @@ public final class ProjectReader {
         QuantityInput amplitude = d.quantity("amplitude", kind.amplitudeDimension());
         double order = PhysicalRange.HARMONIC_ORDER.check(d.pathOf("harmonic_order"), d.number("harmonic_order", 1.0),
                 null);
+        QuantityInput runUpRate = d.optionalQuantity("run_up_rate", Dimension.ANGULAR_ACCELERATION);
         QuantityInput frequency = d.optionalQuantity("frequency", Dimension.FREQUENCY);
         JsonFields band = d.optionalObject("band");
         if ((frequency == null) == (band == null)) {
@@ -190,7 +191,7 @@ public final class ProjectReader {
             out = new DisturbanceInput(kind, amplitude, frequency, Double.NaN, Double.NaN, null, order);
         }
         d.finish();
-        return out;
+        return out.withRunUpRate(runUpRate);
     }
 
     private static AbsorberInput absorber(JsonFields a) {

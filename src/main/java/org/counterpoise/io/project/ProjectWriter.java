@@ -91,6 +91,9 @@ public final class ProjectWriter {
             o.add("frequency", quantity(d.frequency()));
         }
         o.addProperty("harmonic_order", d.harmonicOrder());
+        if (d.runUpRate() != null) {
+            o.add("run_up_rate", quantity(d.runUpRate()));
+        }
         return o;
     }
 

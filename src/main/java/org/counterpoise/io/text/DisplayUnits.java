@@ -24,6 +24,7 @@ public final class DisplayUnits {
             case ACCELERATION -> Unit.METRE_PER_SECOND_SQUARED;
             case UNBALANCE -> Unit.GRAM_MILLIMETRE;
             case RATIO -> Unit.RATIO;
+            case ANGULAR_ACCELERATION -> Unit.RPM_PER_SECOND;
         };
     }
 

@@ -8,7 +8,8 @@ import picocli.CommandLine.Spec;
 @Command(name = "counterpoise", mixinStandardHelpOptions = true, versionProvider = Version.class,
         description = {"Design assistant for dynamic vibration absorbers (tuned mass dampers).",
             "A preliminary design aid: verify by measurement; local codes and licensed practice govern."},
-        subcommands = {DesignCommand.class, OptimumCommand.class, RobustnessCommand.class, SheetCommand.class})
+        subcommands = {DesignCommand.class, OptimumCommand.class, RobustnessCommand.class, SheetCommand.class,
+            RunUpCommand.class})
 public final class CounterpoiseCommand implements Runnable {
     @Spec
     private CommandSpec spec;

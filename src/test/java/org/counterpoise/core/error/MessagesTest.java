@@ -12,7 +12,7 @@ import org.junit.jupiter.api.Test;
 class MessagesTest {
     /** How many values each message is given by the code that raises it. */
     private static final Map<Messages, Integer> ARGUMENTS = Map.of(Messages.INVALID_VALUE, 3,
-            Messages.MISSING_VALUE, 2, Messages.UNUSABLE, 3, Messages.BUG, 1);
+            Messages.MISSING_VALUE, 2, Messages.UNUSABLE, 3, Messages.CANCELLED, 1, Messages.BUG, 1);
 
     @Test
     void everyKeyHasAsManySlotsAsItIsGivenValuesAndFillsThemAll() {

@@ -1,0 +1,116 @@
+package org.counterpoise.io.text;
+
+import java.util.Locale;
+import java.util.Map;
+import org.counterpoise.core.response.ResponseKind;
+import org.counterpoise.core.response.ResponsePeak;
+import org.counterpoise.core.runup.RunUp;
+import org.counterpoise.core.runup.RunUpReportData;
+import org.counterpoise.core.runup.RunUpResult;
+import org.counterpoise.core.runup.SpeedRamp;
+import org.counterpoise.core.runup.TransientPeak;
+import org.counterpoise.core.units.Unit;
+
+/** The plain-text run-up report printed by {@code runup FILE}, aligned like the design report. */
+public final class RunUpReport {
+    private static final int LABEL = 40;
+    private static final int COLUMN = 32;
+
+    private RunUpReport() {
+    }
+
+    /**
+     * @param d the study
+     * @return the report, lines ending in '\n'
+     */
+    public static String render(RunUpReportData d) {
+        StringBuilder out = new StringBuilder();
+        String what = d.runDown() ? "run-down" : "run-up";
+        out.append("Counterpoise ").append(what).append(" through resonance: ").append(d.name()).append('\n');
+        SpeedRamp ramp = d.comparison().withAbsorber().ramp();
+
+        out.append('\n').append(d.runDown() ? "Run-down" : "Run-up").append('\n');
+        double from = d.shaftSpeed(ramp.startSpeed());
+        double to = d.shaftSpeed(ramp.speedAt(ramp.duration()));
+        row(out, "shaft speed", QuantityFormat.format(from, Unit.REV_PER_MINUTE) + " to "
+                + QuantityFormat.format(to, Unit.REV_PER_MINUTE) + " at "
+                + QuantityFormat.format(d.shaftRate(), Unit.RPM_PER_SECOND));
+        row(out, "duration", QuantityFormat.number(ramp.duration(), 4) + " s");
+        row(out, "forcing cycles", QuantityFormat.number(ramp.forcingCycles(), 4));
+        row(out, "start", d.runDown() ? "steady running at the top speed" : "at rest");
+
+        out.append('\n');
+        header(out, "Peaks during the " + what);
+        for (ResponseKind k : RunUpReportData.QUANTITIES) {
+            columns(out, label(k), transientPeak(d, d.comparison().withAbsorber(), k),
+                    transientPeak(d, d.comparison().withoutAbsorber(), k));
+        }
+
+        out.append('\n');
+        header(out, "Steady state over the same speeds");
+        for (ResponseKind k : RunUpReportData.QUANTITIES) {
+            columns(out, label(k), steadyPeak(d, d.comparison().steadyWithAbsorber(), k),
+                    steadyPeak(d, d.comparison().steadyWithoutAbsorber(), k));
+        }
+
+        out.append("\nNotes\n");
+        DesignReport.bullet(out, "Time integration of the linear single-mode model at constant shaft acceleration"
+                + " (Dormand-Prince 8(5,3), relative tolerance 1e" + Math.round(Math.log10(RunUp.DEFAULT_TOLERANCE))
+                + "); an unbalance force includes the tangential term of the angular acceleration. See docs/runup.md.");
+        DesignReport.bullet(out, "Speeds are shaft speeds; the steady-state column is what the machine would"
+                + " reach if it dwelt at each speed it passes.");
+        return out.toString();
+    }
+
+    private static String transientPeak(RunUpReportData d, RunUpResult r, ResponseKind k) {
+        return r.peak(k).map(p -> value(p.value(), k) + " at " + rpm(d, p)).orElse("-");
+    }
+
+    private static String steadyPeak(RunUpReportData d, Map<ResponseKind, ResponsePeak> peaks, ResponseKind k) {
+        ResponsePeak p = peaks.get(k);
+        if (p == null) {
+            return "-";
+        }
+        if (p.unbounded()) {
+            return "unbounded (undamped resonance)";
+        }
+        return value(p.value(), k) + " at " + QuantityFormat.format(d.shaftSpeed(p.frequency()), Unit.REV_PER_MINUTE);
+    }
+
+    private static String rpm(RunUpReportData d, TransientPeak p) {
+        return QuantityFormat.format(d.shaftSpeed(p.speed()), Unit.REV_PER_MINUTE);
+    }
+
+    private static String value(double v, ResponseKind k) {
+        return DisplayUnits.format(v, k.dimension());
+    }
+
+    /**
+     * @param k a reported quantity
+     * @return its words in the report (and, with underscores, in the JSON keys)
+     */
+    public static String label(ResponseKind k) {
+        return switch (k) {
+            case DISPLACEMENT -> "structure displacement";
+            case VELOCITY -> "structure velocity";
+            case ACCELERATION -> "structure acceleration";
+            case STROKE -> "absorber stroke";
+            case SPRING_FORCE -> "absorber spring force";
+            default -> k.label();
+        };
+    }
+
+    private static void row(StringBuilder out, String label, String value) {
+        out.append(String.format(Locale.ROOT, "  %-" + (LABEL - 2) + "s %s%n", label, value));
+    }
+
+    private static void header(StringBuilder out, String title) {
+        out.append(String.format(Locale.ROOT, "%-" + LABEL + "s %-" + COLUMN + "s %s%n", title, "with absorber",
+                "without absorber"));
+    }
+
+    private static void columns(StringBuilder out, String label, String with, String without) {
+        out.append(String.format(Locale.ROOT, "  %-" + (LABEL - 2) + "s %-" + COLUMN + "s %s%n", label, with,
+                without).stripTrailing()).append('\n');
+    }
+}

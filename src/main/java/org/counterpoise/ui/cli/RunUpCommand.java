@@ -1,0 +1,114 @@
+package org.counterpoise.ui.cli;
+
+import java.nio.file.Path;
+import java.util.concurrent.Callable;
+import org.counterpoise.core.design.DesignResult;
+import org.counterpoise.core.design.Designer;
+import org.counterpoise.core.error.InvalidInputException;
+import org.counterpoise.core.model.Excitation;
+import org.counterpoise.core.runup.ProgressListener;
+import org.counterpoise.core.runup.RunUp;
+import org.counterpoise.core.runup.RunUpComparison;
+import org.counterpoise.core.runup.RunUpReportData;
+import org.counterpoise.core.runup.SpeedRamp;
+import org.counterpoise.core.units.Unit;
+import org.counterpoise.io.export.RunUpJson;
+import org.counterpoise.io.project.LoadedProject;
+import org.counterpoise.io.project.Project;
+import org.counterpoise.io.text.QuantityFormat;
+import org.counterpoise.io.text.RunUpReport;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+/**
+ * {@code runup FILE}: designs the absorber of a project file, then runs the machine up through
+ * resonance (or down from running speed) in the time domain, with and without the absorber.
+ */
+@Command(name = "runup", mixinStandardHelpOptions = true,
+        description = {"Run the machine up from rest (or down from running speed) at a constant shaft acceleration"
+            + " and report the peak response met on the way, with and without the absorber, beside the"
+            + " steady-state peaks (or JSON with --json). See docs/runup.md."})
+public final class RunUpCommand implements Callable<Integer> {
+    /** How far above the top running speed the ramp goes by default. */
+    static final double DEFAULT_OVERSPEED = 1.25;
+
+    @Spec
+    private CommandSpec spec;
+
+    @Parameters(index = "0", paramLabel = "FILE", description = "project file (JSON, see docs/project-file.md)")
+    private Path file;
+
+    @Option(names = "--rate", paramLabel = "RPM_PER_S",
+            description = "shaft speed change per second, rpm/s (default: disturbance.run_up_rate in the file)")
+    private Double rate;
+
+    @Option(names = "--final-speed", paramLabel = "RPM",
+            description = "shaft speed the run-up ends at (or the run-down starts from), rpm"
+                    + " (default: 1.25 x the top running speed)")
+    private Double finalSpeed;
+
+    @Option(names = "--run-down", description = "run down from steady running at the final speed to rest instead")
+    private boolean runDown;
+
+    @Option(names = "--json", description = "print the result as one JSON object with SI units in the key names")
+    private boolean json;
+
+    @Override
+    public Integer call() {
+        LoadedProject loaded = ProjectFiles.read(spec, file);
+        Project project = loaded.project();
+        DesignResult design = Designer.design(project.toStudy());
+        Excitation excitation = design.study().excitation();
+        double order = project.disturbance().harmonicOrder();
+        double shaftRate = shaftRate(project);
+        double topShaft = excitation.band().high() / order;
+        double finalShaft = topShaft * DEFAULT_OVERSPEED;
+        if (finalSpeed != null) {
+            if (!Double.isFinite(finalSpeed) || finalSpeed <= 0.0 || Unit.REV_PER_MINUTE.toSi(finalSpeed) > 10.0 * topShaft) {
+                throw new InvalidInputException("--final-speed", String.valueOf(finalSpeed),
+                        "a shaft speed in rpm above 0 and at most 10 times the top running speed ("
+                                + QuantityFormat.format(10.0 * topShaft, Unit.REV_PER_MINUTE) + ")");
+            }
+            finalShaft = Unit.REV_PER_MINUTE.toSi(finalSpeed);
+        }
+        SpeedRamp ramp;
+        try {
+            ramp = runDown ? SpeedRamp.runDown(finalShaft * order, shaftRate * order)
+                    : SpeedRamp.runUp(finalShaft * order, shaftRate * order);
+        } catch (InvalidInputException e) {
+            throw e.renamed(rate != null ? "--rate" : "disturbance.run_up_rate");
+        }
+        RunUpComparison comparison;
+        try {
+            comparison = RunUpComparison.of(design.study().structure(), design.tuning(), excitation.kind(),
+                    excitation.amplitude(), ramp, runDown ? RunUp.Start.STEADY_STATE : RunUp.Start.REST,
+                    ProgressListener.NONE);
+        } catch (InvalidInputException e) {
+            throw switch (e.field()) {
+                case "run_up.rate" -> e.renamed(rate != null ? "--rate" : "disturbance.run_up_rate");
+                case "run_up.final_speed" -> e.renamed(finalSpeed != null ? "--final-speed" : "disturbance");
+                default -> e;
+            };
+        }
+        RunUpReportData data = new RunUpReportData(design.study().name(), runDown, order, comparison);
+        spec.commandLine().getOut().print(json ? RunUpJson.toJson(data) : RunUpReport.render(data));
+        spec.commandLine().getOut().flush();
+        return 0;
+    }
+
+    /** @return the shaft's angular acceleration, rad/s^2, from --rate or the file */
+    private double shaftRate(Project project) {
+        if (rate != null) {
+            if (!Double.isFinite(rate) || rate <= 0.0) {
+                throw new InvalidInputException("--rate", String.valueOf(rate),
+                        "a shaft speed change per second in rpm/s, greater than 0");
+            }
+            return Unit.RPM_PER_SECOND.toSi(rate);
+        }
+        return project.runUpRate().orElseThrow(() -> InvalidInputException.missing("--rate",
+                "give the shaft speed change per second in rpm/s with --rate, or disturbance.run_up_rate in the file"));
+    }
+}
