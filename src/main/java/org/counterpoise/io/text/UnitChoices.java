@@ -31,7 +31,8 @@ public final class UnitChoices {
             case ACCELERATION -> List.of(Unit.METRE_PER_SECOND_SQUARED, Unit.STANDARD_GRAVITY);
             case UNBALANCE -> List.of(Unit.GRAM_MILLIMETRE, Unit.KILOGRAM_METRE);
             case RATIO -> List.of(Unit.RATIO);
-            case ANGULAR_ACCELERATION -> List.of(Unit.RPM_PER_SECOND, Unit.HERTZ_PER_SECOND, Unit.RADIAN_PER_SECOND_SQUARED);
+            case ANGULAR_ACCELERATION -> List.of(Unit.RPM_PER_SECOND, Unit.HERTZ_PER_SECOND,
+                    Unit.RADIAN_PER_SECOND_SQUARED);
         };
     }
 }
