@@ -251,7 +251,15 @@ final class RobustnessStep extends Step {
             summary.setText(" ");
             return;
         }
-        int width = Math.max(280, summary.getWidth() == 0 ? 760 : summary.getWidth() - 40);
+        // The width that can be seen: when the page scrolls sideways, the label is wider than that.
+        java.awt.Container view = (java.awt.Container) javax.swing.SwingUtilities.getAncestorOfClass(
+                javax.swing.JViewport.class, summary);
+        int seen = summary.getWidth();
+        if (view != null && summary.getParent() != null && view.getWidth() > 0) {
+            seen = Math.min(seen, view.getWidth()
+                    - javax.swing.SwingUtilities.convertPoint(summary.getParent(), summary.getX(), 0, view).x);
+        }
+        int width = Math.max(280, seen <= 0 ? 760 : seen - 40);
         // Swing's HTML takes a CSS px as 1.3 screen pixels (and a pt as one), so the width goes in pt.
         summary.setText("<html><body style='width: " + width + "pt'>" + summaryHtml + "</body></html>");
     }
