@@ -40,4 +40,29 @@ public final class DampingConversions {
         return Checks.inRange("structure.damping.half_power_bandwidth", bandwidth / (2.0 * naturalFrequency),
                 0.0, 0.95);
     }
+
+    /**
+     * @param dampingRatio zeta
+     * @return the loss factor eta = 2 zeta (the inverse of {@link #fromLossFactor})
+     */
+    public static double lossFactor(double dampingRatio) {
+        return 2.0 * dampingRatio;
+    }
+
+    /**
+     * @param dampingRatio zeta
+     * @return Q = 1 / (2 zeta); NaN for zero damping, whose Q is unbounded
+     */
+    public static double qualityFactor(double dampingRatio) {
+        return dampingRatio > 0 ? 1.0 / (2.0 * dampingRatio) : Double.NaN;
+    }
+
+    /**
+     * @param dampingRatio zeta
+     * @param naturalFrequency natural frequency (any unit)
+     * @return half-power bandwidth 2 zeta f_n, in the unit of the frequency
+     */
+    public static double halfPowerBandwidth(double dampingRatio, double naturalFrequency) {
+        return 2.0 * dampingRatio * naturalFrequency;
+    }
 }

@@ -56,4 +56,45 @@ public final class StructureConversions {
         Checks.positive("structure.static_deflection", staticDeflection);
         return mass * Gravity.STANDARD / staticDeflection;
     }
+
+    /**
+     * Weight under standard gravity: W = m g0 (the inverse of {@link #massFromWeight}).
+     * @param mass kg
+     * @return weight, N
+     */
+    public static double weightFromMass(double mass) {
+        return mass * Gravity.STANDARD;
+    }
+
+    /**
+     * Natural frequency of a mass on a spring: omega = sqrt(k / m) (the inverse of
+     * {@link #stiffnessFromFrequency}). NaN when the mass is not positive or the stiffness negative.
+     * @param mass kg
+     * @param stiffness N/m
+     * @return natural frequency, rad/s
+     */
+    public static double naturalFrequency(double mass, double stiffness) {
+        return mass > 0 && stiffness >= 0 ? Math.sqrt(stiffness / mass) : Double.NaN;
+    }
+
+    /**
+     * Static deflection of a mass under its own weight on the spring that gives it this natural
+     * frequency: delta = g0 / omega^2 (common practice; the inverse of
+     * {@link #frequencyFromStaticDeflection}). NaN when the frequency is not positive.
+     * @param naturalFrequency rad/s
+     * @return static deflection, m
+     */
+    public static double staticDeflection(double naturalFrequency) {
+        return naturalFrequency > 0 ? Gravity.STANDARD / (naturalFrequency * naturalFrequency) : Double.NaN;
+    }
+
+    /**
+     * Natural frequency from the static deflection under the own weight: omega = sqrt(g0 / delta)
+     * (common practice). NaN when the deflection is not positive.
+     * @param staticDeflection m
+     * @return natural frequency, rad/s
+     */
+    public static double frequencyFromStaticDeflection(double staticDeflection) {
+        return staticDeflection > 0 ? Math.sqrt(Gravity.STANDARD / staticDeflection) : Double.NaN;
+    }
 }

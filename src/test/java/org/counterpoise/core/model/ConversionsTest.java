@@ -81,4 +81,23 @@ class ConversionsTest {
         e = assertThrows(InvalidInputException.class, () -> DampingConversions.fromQualityFactor(0.1));
         assertEquals("structure.damping.q_factor", e.field());
     }
+
+    @Test
+    void everyFormConvertsBackToWhereItCameFrom() {
+        // The wizard converts a value when its form changes; each inverse must undo its forward relation.
+        assertEquals(9806.65, StructureConversions.weightFromMass(1000), 1e-9);
+        double w = 2 * Math.PI * 14.2;
+        assertEquals(w, StructureConversions.naturalFrequency(1800, StructureConversions.stiffnessFromFrequency(1800, w)),
+                1e-12 * w);
+        // 10 mm sag <-> 4.984 Hz (common practice, as above), both ways.
+        assertEquals(0.010, StructureConversions.staticDeflection(StructureConversions.frequencyFromStaticDeflection(0.010)),
+                1e-15);
+        assertEquals(4.984, StructureConversions.frequencyFromStaticDeflection(0.010) / (2 * Math.PI), 5e-4);
+        assertEquals(0.04, DampingConversions.lossFactor(0.02), 1e-15);
+        assertEquals(25, DampingConversions.qualityFactor(0.02), 1e-12);
+        assertEquals(0.4, DampingConversions.halfPowerBandwidth(0.02, 10), 1e-15);
+        assertTrue(Double.isNaN(DampingConversions.qualityFactor(0)), "Q of an undamped mode is unbounded");
+        assertTrue(Double.isNaN(StructureConversions.naturalFrequency(0, 1e6)));
+        assertTrue(Double.isNaN(StructureConversions.staticDeflection(0)));
+    }
 }

@@ -18,15 +18,18 @@ import org.counterpoise.io.project.DisturbanceInput;
 import org.counterpoise.io.project.Project;
 import org.counterpoise.io.project.QuantityInput;
 import org.counterpoise.io.text.QuantityFormat;
+import org.counterpoise.io.text.UnitChoices;
 import org.counterpoise.ui.gui.document.ProjectEdits;
 import org.counterpoise.ui.gui.field.Form;
+import org.counterpoise.ui.gui.field.FormSwitch;
 import org.counterpoise.ui.gui.field.QuantityField;
 
 /** Step 2: what shakes the structure, and at which speeds. */
 final class DisturbanceStep extends Step {
     /** Index of the broadband choice in the kind list (a white-noise force). */
     static final int BROADBAND = 4;
-    private static final List<Unit> FREQUENCY = List.of(Unit.REV_PER_MINUTE, Unit.HERTZ, Unit.RADIAN_PER_SECOND);
+    private static final List<Unit> FREQUENCY = UnitChoices.of(Dimension.FREQUENCY);
+    private static final List<Unit> RATIO = UnitChoices.of(Dimension.RATIO);
 
     private final JComboBox<String> kind = new JComboBox<>(new String[] {"harmonic force", "rotating unbalance",
         "base displacement", "base acceleration", "broadband force (white noise)"});
@@ -38,9 +41,9 @@ final class DisturbanceStep extends Step {
             "Shaft speed (or forcing frequency when the harmonic order is 1)", FREQUENCY);
     private final QuantityField low = new QuantityField("disturbance.band.low", "Lowest shaft speed", FREQUENCY);
     private final QuantityField high = new QuantityField("disturbance.band.high", "Highest shaft speed",
-            List.of(Unit.RATIO));
+            RATIO);
     private final QuantityField order = new QuantityField("disturbance.harmonic_order",
-            "Forcing cycles per revolution: 1 for unbalance, the blade count for blade-pass", List.of(Unit.RATIO));
+            "Forcing cycles per revolution: 1 for unbalance, the blade count for blade-pass", RATIO);
     private final JLabel derivedBand = StructureStep.derived("derived.forcing");
     private final JLabel derivedRatio = StructureStep.derived("derived.ratio");
     private final JComponent page;
@@ -95,6 +98,24 @@ final class DisturbanceStep extends Step {
             f.onChange(() -> edited(f.fieldId()));
         }
         enableSpeeds();
+        convertOnChange();
+    }
+
+    /**
+     * The highest speed is typed in the lowest speed's unit, so it follows when that unit changes.
+     * A force, an unbalance and a base motion are different quantities: a change of kind brings
+     * back the amplitude last typed for that kind, or empties the field and says what to type
+     * (a force and a broadband force share theirs). Attached after the other listeners.
+     */
+    private void convertOnChange() {
+        low.onUnitChange((from, to) -> high.scale(from.toSi(1) / to.toSi(1)));
+        FormSwitch.attach(kind, amplitude, i -> units(kindOf(i)),
+                (from, to, v) -> kindOf(from) == kindOf(to) ? v : Double.NaN,
+                i -> "type the " + switch (kindOf(i)) {
+                    case FORCE -> "force amplitude";
+                    case UNBALANCE -> "unbalance m\u00b7e";
+                    default -> "amplitude of the base motion";
+                });
     }
 
     private void edited(String key) {
@@ -202,12 +223,6 @@ final class DisturbanceStep extends Step {
     }
 
     private static List<Unit> units(ExcitationKind k) {
-        return switch (k.amplitudeDimension()) {
-            case FORCE -> List.of(Unit.NEWTON, Unit.KILONEWTON);
-            case UNBALANCE -> List.of(Unit.GRAM_MILLIMETRE, Unit.KILOGRAM_METRE);
-            case LENGTH -> List.of(Unit.MILLIMETRE, Unit.MICROMETRE, Unit.METRE);
-            case ACCELERATION -> List.of(Unit.METRE_PER_SECOND_SQUARED, Unit.STANDARD_GRAVITY);
-            default -> List.of(Unit.values()).stream().filter(u -> u.dimension() == Dimension.RATIO).toList();
-        };
+        return UnitChoices.of(k.amplitudeDimension());
     }
 }

@@ -9,13 +9,18 @@ import javax.swing.JLabel;
 import javax.swing.JPanel;
 import javax.swing.JSplitPane;
 import org.counterpoise.core.design.DesignMethod;
+import org.counterpoise.core.design.DesignResult;
+import org.counterpoise.core.model.Structure;
 import org.counterpoise.core.response.ResponseKind;
+import org.counterpoise.core.units.Dimension;
 import org.counterpoise.core.units.Unit;
 import org.counterpoise.io.project.AbsorberInput;
 import org.counterpoise.io.project.Project;
 import org.counterpoise.io.project.QuantityInput;
+import org.counterpoise.io.text.UnitChoices;
 import org.counterpoise.ui.gui.document.ProjectEdits;
 import org.counterpoise.ui.gui.field.Form;
+import org.counterpoise.ui.gui.field.FormSwitch;
 import org.counterpoise.ui.gui.field.QuantityField;
 import org.counterpoise.ui.gui.plot.ChartHost;
 
@@ -24,26 +29,26 @@ final class GoalStep extends Step {
     private final JComboBox<String> sizing = new JComboBox<>(
             new String[] {"mass ratio \u03bc", "absorber mass", "lightest for a target response"});
     private final QuantityField size = new QuantityField("absorber.mass_ratio",
-            "Absorber mass over the structure's effective mass, or the mass budget", List.of(Unit.RATIO));
+            "Absorber mass over the structure's effective mass, or the mass budget", UnitChoices.of(Dimension.RATIO));
     private final JComboBox<DesignMethod> method = new JComboBox<>(DesignMethod.values());
     private final JComboBox<ResponseKind> response = new JComboBox<>(
             Project.DESIGN_RESPONSES.toArray(new ResponseKind[0]));
     private final QuantityField margin = new QuantityField("absorber.stroke_margin",
-            "Clearance to leave over the computed peak stroke (1.5 is common practice)", List.of(Unit.RATIO));
+            "Clearance to leave over the computed peak stroke (1.5 is common practice)", UnitChoices.of(Dimension.RATIO));
     private final JCheckBox hangs = new JCheckBox("the absorber hangs on its spring");
     private final QuantityField maxMassRatio = new QuantityField("absorber.max_mass_ratio",
-            "With a target: the largest mass ratio to consider; leave empty for the default", List.of(Unit.RATIO));
+            "With a target: the largest mass ratio to consider; leave empty for the default", UnitChoices.of(Dimension.RATIO));
     private final QuantityField fixedDamping = new QuantityField("absorber.fixed_damping_ratio",
-            "Exact-peak only: an absorber damping ratio you must use; leave empty to optimise it", List.of(Unit.RATIO));
+            "Exact-peak only: an absorber damping ratio you must use; leave empty to optimise it", UnitChoices.of(Dimension.RATIO));
     private final QuantityField fixedTuning = new QuantityField("absorber.fixed_tuning_ratio",
-            "Exact-peak only: a tuning ratio you must use; leave empty to optimise it", List.of(Unit.RATIO));
+            "Exact-peak only: a tuning ratio you must use; leave empty to optimise it", UnitChoices.of(Dimension.RATIO));
     /** The response the size field's target was typed for (to notice a change of quantity). */
     private ResponseKind targetResponse;
     /** Says why the target field was emptied, until a new target is typed. */
     private String targetNote;
     private final QuantityField strokeLimit = new QuantityField("absorber.stroke_limit",
             "Largest allowed peak stroke in the band (exact-peak only); leave empty for none",
-            List.of(Unit.MILLIMETRE, Unit.METRE, Unit.MICROMETRE));
+            UnitChoices.of(Dimension.LENGTH));
     private final JLabel methodNote = new JLabel(" ");
     {
         methodNote.setName("absorber.methodNote");
@@ -51,6 +56,17 @@ final class GoalStep extends Step {
     }
     private final ChartHost massChart = new ChartHost("chart.massRatio");
     private final JComponent page;
+    private SizingContext sizingContext = new SizingContext() {
+        @Override
+        public Structure structure() {
+            return null;
+        }
+
+        @Override
+        public DesignResult design() {
+            return null;
+        }
+    };
 
     GoalStep() {
         sizing.setName("absorber.sizing");
@@ -73,6 +89,9 @@ final class GoalStep extends Step {
                         index, selected, focus);
             }
         });
+        // The longest method description would make the form wider than a small screen; the open list shows it whole.
+        java.awt.Dimension methodSize = method.getPreferredSize();
+        method.setPreferredSize(new java.awt.Dimension(Math.min(methodSize.width, 460), methodSize.height));
         Form form = new Form();
         form.heading("The absorber you can fit");
         form.row("Size given as", 'z', sizing,
@@ -124,6 +143,7 @@ final class GoalStep extends Step {
         for (QuantityField f : List.of(size, margin, strokeLimit, maxMassRatio, fixedDamping, fixedTuning)) {
             f.onChange(() -> edited(f.fieldId()));
         }
+        convertOnSizingChange();
     }
 
     /**
@@ -179,22 +199,58 @@ final class GoalStep extends Step {
     }
 
     private void sizeUnits() {
-        size.setUnits(switch (sizing.getSelectedIndex()) {
-            case 0 -> List.of(Unit.RATIO);
-            case 1 -> List.of(Unit.KILOGRAM, Unit.TONNE, Unit.GRAM);
-            default -> unitsOf((ResponseKind) response.getSelectedItem());
-        });
+        size.setUnits(sizeUnits(sizing.getSelectedIndex()));
     }
 
     /** @param r a response @return the units its targets are typed in */
     static List<Unit> unitsOf(ResponseKind r) {
-        return switch (r.dimension()) {
-            case LENGTH -> List.of(Unit.MILLIMETRE, Unit.MICROMETRE, Unit.METRE);
-            case VELOCITY -> List.of(Unit.MILLIMETRE_PER_SECOND, Unit.METRE_PER_SECOND);
-            case ACCELERATION -> List.of(Unit.METRE_PER_SECOND_SQUARED, Unit.STANDARD_GRAVITY);
-            case FORCE -> List.of(Unit.NEWTON, Unit.KILONEWTON);
-            default -> List.of(Unit.RATIO);
+        return UnitChoices.of(r.dimension());
+    }
+
+    private List<Unit> sizeUnits(int sizingForm) {
+        return switch (sizingForm) {
+            case 0 -> UnitChoices.of(Dimension.RATIO);
+            case 1 -> UnitChoices.of(Dimension.MASS);
+            default -> unitsOf((ResponseKind) response.getSelectedItem());
         };
+    }
+
+    /** What converting the size between its forms needs from the rest of the wizard. */
+    interface SizingContext {
+        /** @return the structure as entered, or null while it is not valid */
+        Structure structure();
+
+        /** @return the design on screen, or null */
+        DesignResult design();
+    }
+
+    /** @param c where the structure and the design shown come from */
+    void sizingContext(SizingContext c) {
+        sizingContext = c;
+    }
+
+    /**
+     * A change of sizing converts the value: a mass ratio becomes the absorber mass it means on the
+     * structure's effective mass (never 0.05 kg), and a target starts from what the design on
+     * screen reaches; attached after the other listeners, so it runs first.
+     */
+    private void convertOnSizingChange() {
+        FormSwitch.attach(sizing, size, this::sizeUnits, (from, to, v) -> {
+            Structure s = sizingContext.structure();
+            DesignResult d = sizingContext.design();
+            if (to == 2) {
+                return d != null && d.study().response() == response.getSelectedItem() ? d.responseAfter().value()
+                        : Double.NaN;
+            }
+            if (from == 2) {
+                return d == null ? Double.NaN : to == 0 ? d.tuning().massRatio() : d.absorber().mass();
+            }
+            if (s == null) {
+                return Double.NaN;
+            }
+            return to == 1 ? v * s.effectiveMass() : v / s.effectiveMass();
+        }, i -> i == 0 ? "type the mass ratio" : i == 1 ? "type the absorber mass"
+                : "type the largest " + ((ResponseKind) response.getSelectedItem()).label() + " you accept");
     }
 
     @Override
@@ -263,7 +319,7 @@ final class GoalStep extends Step {
     }
 
     void note(String text) {
-        methodNote.setText(text == null ? " " : "<html><body style='width: 520px'>" + text
+        methodNote.setText(text == null ? " " : "<html><body style='width: 440pt'>" + text
                 .replace("&", "&amp;").replace("<", "&lt;") + "</body></html>");
     }
 

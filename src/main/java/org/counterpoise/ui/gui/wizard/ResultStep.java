@@ -14,7 +14,7 @@ import javax.swing.JPanel;
 import javax.swing.JScrollPane;
 import javax.swing.JSplitPane;
 import javax.swing.JTable;
-import javax.swing.JTextArea;
+import javax.swing.JTextPane;
 import javax.swing.JToggleButton;
 import javax.swing.table.DefaultTableModel;
 import org.counterpoise.core.design.Cautions;
@@ -44,9 +44,10 @@ final class ResultStep extends Step {
     };
     private final ChartHost responseChart = new ChartHost("chart.response");
     private final ChartHost strokeChart = new ChartHost("chart.stroke");
-    private final JToggleButton logAxis = new JToggleButton("Logarithmic response axis", true);
+    private final JToggleButton logAxis = new JToggleButton("Log axis", true);
     private static final String READOUT_HINT = "Move the pointer over a chart to read the exact values there.";
     private final JLabel readout = new JLabel(READOUT_HINT);
+    private final JTextPane notes = new JTextPane();
     private final JComponent page;
     private final TaskRunner tasks;
     private final SheetStep.Messages messages;
@@ -62,33 +63,42 @@ final class ResultStep extends Step {
         t.getColumnModel().getColumn(0).setPreferredWidth(230);
         t.getColumnModel().getColumn(1).setPreferredWidth(150);
         t.getColumnModel().getColumn(2).setPreferredWidth(60);
-        javax.swing.table.DefaultTableCellRenderer numbers = new javax.swing.table.DefaultTableCellRenderer();
-        numbers.setHorizontalAlignment(JLabel.RIGHT);
-        t.getColumnModel().getColumn(1).setCellRenderer(numbers);
-        JTextArea cautions = new JTextArea(String.join("\n", Cautions.STANDARD.stream().map(c -> "\u2022 " + c).toList()));
-        cautions.setName("result.cautions");
-        cautions.setEditable(false);
-        cautions.setLineWrap(true);
-        cautions.setWrapStyleWord(true);
-        cautions.setRows(7);
-        cautions.setOpaque(false);
-        JPanel left = new JPanel(new BorderLayout(0, 6));
-        left.add(new JScrollPane(t), BorderLayout.CENTER);
-        JPanel caution = new JPanel(new BorderLayout());
-        caution.add(new JLabel("Cautions"), BorderLayout.NORTH);
-        caution.add(cautions, BorderLayout.CENTER);
-        left.add(caution, BorderLayout.SOUTH);
+        // A cell too narrow for its text still shows it whole under the pointer.
+        t.setDefaultRenderer(Object.class, wholeUnderPointer(JLabel.LEFT));
+        t.getColumnModel().getColumn(1).setCellRenderer(wholeUnderPointer(JLabel.RIGHT));
+        notes.setName("result.notes");
+        notes.setEditable(false);
+        notes.setOpaque(false);
+        notes.setBorder(javax.swing.BorderFactory.createEmptyBorder(4, 4, 4, 4));
+        writeNotes(List.of());
+        JScrollPane notesScroll = new JScrollPane(notes);
+        notesScroll.setName("result.notes.scroll");
+        notesScroll.setBorder(null);
+        notesScroll.setHorizontalScrollBarPolicy(JScrollPane.HORIZONTAL_SCROLLBAR_NEVER);
+        // Warnings and cautions are sentences: wrapped in their own pane, never cut off in a table cell.
+        JScrollPane tableScroll = new JScrollPane(t);
+        tableScroll.setPreferredSize(new java.awt.Dimension(470, 330));
+        tableScroll.setMinimumSize(new java.awt.Dimension(300, 120));
+        notesScroll.setPreferredSize(new java.awt.Dimension(470, 220));
+        notesScroll.setMinimumSize(new java.awt.Dimension(300, 100));
+        JSplitPane left = new JSplitPane(JSplitPane.VERTICAL_SPLIT, tableScroll, notesScroll);
+        left.setResizeWeight(0.6);
+        left.setBorder(null);
         JPanel charts = new JPanel(new GridLayout(2, 1, 0, 6));
         charts.add(responseChart);
         charts.add(strokeChart);
+        charts.setMinimumSize(new java.awt.Dimension(360, 300));
         JPanel controls = new JPanel(new FlowLayout(FlowLayout.LEFT, 6, 2));
         logAxis.setName("result.log");
         logAxis.setMnemonic('l');
         logAxis.addActionListener(e -> redraw());
-        JButton png = new JButton("Export charts as PNG\u2026");
+        logAxis.setToolTipText("Logarithmic response axis");
+        JButton png = new JButton("Charts as PNG\u2026");
+        png.setToolTipText("Export the response and stroke charts as PNG images");
         png.setMnemonic('p');
         png.addActionListener(e -> export(true));
-        JButton svg = new JButton("Export charts as SVG\u2026");
+        JButton svg = new JButton("Charts as SVG\u2026");
+        svg.setToolTipText("Export the response and stroke charts as SVG drawings");
         svg.setMnemonic('v');
         svg.addActionListener(e -> export(false));
         controls.add(logAxis);
@@ -144,6 +154,7 @@ final class ResultStep extends Step {
         table.setRowCount(0);
         if (r == null) {
             curves = null;
+            writeNotes(List.of());
             responseChart.message("Fix the inputs to see the design.");
             strokeChart.message(" ");
             return;
@@ -161,10 +172,48 @@ final class ResultStep extends Step {
                 table.addRow(new Object[] {row.label(), row.value(), QuantityField.pretty(row.unit())});
             }
         }
-        for (var w : r.warnings()) {
-            table.addRow(new Object[] {"Warning", w.text(), ""});
-        }
+        writeNotes(r.warnings().stream().map(w -> w.text()).toList());
         redraw();
+    }
+
+    private static javax.swing.table.DefaultTableCellRenderer wholeUnderPointer(int alignment) {
+        javax.swing.table.DefaultTableCellRenderer r = new javax.swing.table.DefaultTableCellRenderer() {
+            @Override
+            public java.awt.Component getTableCellRendererComponent(JTable table, Object value, boolean selected,
+                    boolean focus, int row, int column) {
+                JLabel l = (JLabel) super.getTableCellRendererComponent(table, value, selected, focus, row, column);
+                l.setToolTipText(value == null || value.toString().isEmpty() ? null : value.toString());
+                return l;
+            }
+        };
+        r.setHorizontalAlignment(alignment);
+        return r;
+    }
+
+    /** Writes the design's warnings (first, in the problem colour) and the standing cautions, wrapped. */
+    private void writeNotes(List<String> warnings) {
+        javax.swing.text.StyledDocument doc = notes.getStyledDocument();
+        javax.swing.text.SimpleAttributeSet heading = new javax.swing.text.SimpleAttributeSet();
+        javax.swing.text.StyleConstants.setBold(heading, true);
+        javax.swing.text.SimpleAttributeSet warning = new javax.swing.text.SimpleAttributeSet();
+        javax.swing.text.StyleConstants.setForeground(warning, QuantityField.ERROR);
+        javax.swing.text.SimpleAttributeSet plain = new javax.swing.text.SimpleAttributeSet();
+        try {
+            doc.remove(0, doc.getLength());
+            if (!warnings.isEmpty()) {
+                doc.insertString(doc.getLength(), warnings.size() == 1 ? "Warning\n" : "Warnings\n", heading);
+                for (String w : warnings) {
+                    doc.insertString(doc.getLength(), "\u2022 " + w + "\n", warning);
+                }
+                doc.insertString(doc.getLength(), "\n", plain);
+            }
+            doc.insertString(doc.getLength(), "Cautions\n", heading);
+            doc.insertString(doc.getLength(), String.join("\n", Cautions.STANDARD.stream().map(c -> "\u2022 " + c)
+                    .toList()), plain);
+        } catch (javax.swing.text.BadLocationException e) {
+            throw new IllegalStateException("bug: writing at the end of the notes", e);
+        }
+        notes.setCaretPosition(0);
     }
 
     private void redraw() {

@@ -12,12 +12,14 @@ import org.counterpoise.core.design.RobustnessResult;
 import org.counterpoise.core.design.RobustnessSettings;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.robust.MonteCarloResult;
+import org.counterpoise.core.units.Dimension;
 import org.counterpoise.core.units.Unit;
 import org.counterpoise.io.chart.RobustnessCharts;
 import org.counterpoise.io.project.Project;
 import org.counterpoise.io.project.RobustnessInput;
 import org.counterpoise.io.text.DisplayUnits;
 import org.counterpoise.io.text.QuantityFormat;
+import org.counterpoise.io.text.UnitChoices;
 import org.counterpoise.ui.gui.document.ProjectEdits;
 import org.counterpoise.ui.gui.field.Form;
 import org.counterpoise.ui.gui.field.QuantityField;
@@ -40,15 +42,15 @@ final class RobustnessStep extends Step {
     private static final String[] DISTRIBUTION_IDS = {null, "uniform", "normal"};
 
     private final QuantityField structureRange = new QuantityField("robustness.structure_detuning",
-            "How far the structure's natural frequency may be off, in percent each way", List.of(Unit.RATIO));
+            "How far the structure's natural frequency may be off, in percent each way", UnitChoices.of(Dimension.RATIO));
     private final QuantityField absorberRange = new QuantityField("robustness.absorber_detuning",
-            "How far the absorber's natural frequency may be off, in percent each way", List.of(Unit.RATIO));
+            "How far the absorber's natural frequency may be off, in percent each way", UnitChoices.of(Dimension.RATIO));
     private final QuantityField target = new QuantityField("robustness.target",
-            "Largest acceptable peak of the response that matters; empty for none", List.of(Unit.MILLIMETRE));
+            "Largest acceptable peak of the response that matters; empty for none", UnitChoices.of(Dimension.LENGTH));
     private final QuantityField samples = new QuantityField("robustness.samples",
-            "Number of sampled builds in the Monte Carlo", List.of(Unit.RATIO));
+            "Number of sampled builds in the Monte Carlo", UnitChoices.of(Dimension.RATIO));
     private final QuantityField seed = new QuantityField("robustness.seed",
-            "Seed of the Monte Carlo's random numbers: the same seed gives the same result", List.of(Unit.RATIO));
+            "Seed of the Monte Carlo's random numbers: the same seed gives the same result", UnitChoices.of(Dimension.RATIO));
     private final List<JComboBox<String>> distributions = new java.util.ArrayList<>();
     private final List<QuantityField> tolerances = new java.util.ArrayList<>();
     private final JLabel summary = new JLabel(" ");
@@ -56,6 +58,8 @@ final class RobustnessStep extends Step {
     private final ChartHost histogram = new ChartHost("chart.histogram");
     private final ChartHost mapHolder = new ChartHost("chart.map");
     private final JComponent page;
+    /** The summary's text without its width, so it can be rewrapped when the page is resized. */
+    private String summaryHtml = "";
 
     RobustnessStep() {
         Form form = new Form();
@@ -108,6 +112,15 @@ final class RobustnessStep extends Step {
         JPanel p = new JPanel(new BorderLayout());
         p.add(top, BorderLayout.NORTH);
         p.add(charts, BorderLayout.CENTER);
+        // Below this the page scrolls rather than squeezing the charts unreadable.
+        charts.setMinimumSize(new java.awt.Dimension(620, 420));
+        summary.setMinimumSize(new java.awt.Dimension(300, 0));
+        summary.addComponentListener(new java.awt.event.ComponentAdapter() {
+            @Override
+            public void componentResized(java.awt.event.ComponentEvent e) {
+                wrapSummary();
+            }
+        });
         page = p;
         own("robustness.structure_detuning", structureRange);
         own("robustness.absorber_detuning", absorberRange);
@@ -212,22 +225,43 @@ final class RobustnessStep extends Step {
             sensitivity.message(design == null ? "Fix the inputs to see the robustness study." : "computing\u2026");
             histogram.message(" ");
             mapHolder.message(" ");
+            summaryHtml = "";
             summary.setText(" ");
             return;
         }
         var unitDim = design.study().response().dimension();
         MonteCarloResult mc = r.monteCarlo();
-        summary.setText("<html><body style='width: 760px'>Worst case of this design <b>" + DisplayUnits.format(r.worstCase().peak(), unitDim)
+        summaryHtml = ("Worst case of this design <b>" + DisplayUnits.format(r.worstCase().peak(), unitDim)
                 + "</b>; robust design (f " + QuantityFormat.number(r.robust().tuning().tuningRatio(), 4) + ", \u03b6a "
                 + QuantityFormat.number(r.robust().tuning().dampingRatio(), 3) + ") <b>"
                 + DisplayUnits.format(r.robust().worstCase().peak(), unitDim) + "</b>. Monte Carlo P50 / P95: "
                 + DisplayUnits.format(mc.p50(), unitDim) + " / " + DisplayUnits.format(mc.p95(), unitDim)
                 + (Double.isNaN(mc.probabilityExceeding()) ? "" : "; above the target of "
                         + DisplayUnits.format(r.settings().target(), unitDim) + ": "
-                        + QuantityFormat.number(100 * mc.probabilityExceeding(), 3) + " %") + "</html>");
+                        + QuantityFormat.number(100 * mc.probabilityExceeding(), 3) + " %"));
+        wrapSummary();
         sensitivity.show(theme -> RobustnessCharts.sensitivity(design, r, theme, 420, 320));
         histogram.show(theme -> RobustnessCharts.histogram(design, mc, theme, 420, 320));
         mapHolder.show(theme -> RobustnessCharts.map(design, r, theme, 520, 480, 3));
+    }
+
+    /** Wraps the summary to the width it is given (an HTML label wraps only at a width it is given). */
+    private void wrapSummary() {
+        if (summaryHtml.isEmpty()) {
+            summary.setText(" ");
+            return;
+        }
+        // The width that can be seen: when the page scrolls sideways, the label is wider than that.
+        java.awt.Container view = (java.awt.Container) javax.swing.SwingUtilities.getAncestorOfClass(
+                javax.swing.JViewport.class, summary);
+        int seen = summary.getWidth();
+        if (view != null && summary.getParent() != null && view.getWidth() > 0) {
+            seen = Math.min(seen, view.getWidth()
+                    - javax.swing.SwingUtilities.convertPoint(summary.getParent(), summary.getX(), 0, view).x);
+        }
+        int width = Math.max(280, seen <= 0 ? 760 : seen - 40);
+        // Swing's HTML takes a CSS px as 1.3 screen pixels (and a pt as one), so the width goes in pt.
+        summary.setText("<html><body style='width: " + width + "pt'>" + summaryHtml + "</body></html>");
     }
 
     /** Says the study was cancelled (instead of a stale or half-made result). */
@@ -235,6 +269,7 @@ final class RobustnessStep extends Step {
         sensitivity.message("The robustness study was cancelled; it runs again after the next edit.");
         histogram.message(" ");
         mapHolder.message(" ");
+        summaryHtml = "";
         summary.setText(" ");
     }
 

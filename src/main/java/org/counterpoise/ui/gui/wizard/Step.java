@@ -94,7 +94,13 @@ abstract class Step {
             uncommitted.run();
             return;
         }
+        Object before = document.project();
         document.apply(edit);
+        if (document.project() == before) {
+            // Nothing changed in the document (a value typed back as it was, a kind switched back):
+            // the views may have held text that was not a number meanwhile, so the design is redone.
+            uncommitted.run();
+        }
     }
 
     /** @return true while {@link #sync} runs */

@@ -6,8 +6,11 @@ import javax.swing.JComponent;
 import javax.swing.JLabel;
 import javax.swing.JPanel;
 import javax.swing.JScrollPane;
+import org.counterpoise.core.model.DampingConversions;
 import org.counterpoise.core.model.Structure;
+import org.counterpoise.core.model.StructureConversions;
 import org.counterpoise.core.units.Dimension;
+import org.counterpoise.core.units.Gravity;
 import org.counterpoise.core.units.Unit;
 import org.counterpoise.io.project.DampingInput;
 import org.counterpoise.io.project.Project;
@@ -15,18 +18,20 @@ import org.counterpoise.io.project.QuantityInput;
 import org.counterpoise.io.project.StructureInput;
 import org.counterpoise.io.text.DisplayUnits;
 import org.counterpoise.io.text.QuantityFormat;
+import org.counterpoise.io.text.UnitChoices;
 import org.counterpoise.ui.gui.document.ProjectEdits;
 import org.counterpoise.ui.gui.field.Form;
+import org.counterpoise.ui.gui.field.FormSwitch;
 import org.counterpoise.ui.gui.field.QuantityField;
 
 /** Step 1: the structure as the engineer knows it, with the derived values shown at once. */
 final class StructureStep extends Step {
-    private static final List<Unit> MASS = List.of(Unit.KILOGRAM, Unit.TONNE, Unit.GRAM);
-    private static final List<Unit> WEIGHT = List.of(Unit.NEWTON, Unit.KILONEWTON);
-    private static final List<Unit> STIFFNESS = List.of(Unit.KILONEWTON_PER_METRE, Unit.NEWTON_PER_METRE,
-            Unit.NEWTON_PER_MILLIMETRE, Unit.KILONEWTON_PER_MILLIMETRE);
-    private static final List<Unit> FREQUENCY = List.of(Unit.HERTZ, Unit.REV_PER_MINUTE, Unit.RADIAN_PER_SECOND);
-    private static final List<Unit> LENGTH = List.of(Unit.MILLIMETRE, Unit.METRE, Unit.MICROMETRE);
+    private static final List<Unit> MASS = UnitChoices.of(Dimension.MASS);
+    private static final List<Unit> WEIGHT = UnitChoices.of(Dimension.FORCE);
+    private static final List<Unit> STIFFNESS = UnitChoices.of(Dimension.STIFFNESS);
+    private static final List<Unit> FREQUENCY = UnitChoices.of(Dimension.FREQUENCY);
+    private static final List<Unit> LENGTH = UnitChoices.of(Dimension.LENGTH);
+    private static final List<Unit> RATIO = UnitChoices.of(Dimension.RATIO);
 
     private final JComboBox<String> massForm = new JComboBox<>(new String[] {"mass", "weight"});
     private final QuantityField mass = new QuantityField("structure.mass", "Modal mass of the mode to calm", MASS);
@@ -39,10 +44,10 @@ final class StructureStep extends Step {
             new String[] {"damping ratio \u03b6", "loss factor \u03b7", "Q factor", "half-power bandwidth"});
     private final QuantityField damping = new QuantityField("structure.damping",
             "Modal damping: ratio to critical, loss factor (2\u03b6), Q (1/2\u03b6) or -3 dB bandwidth (2\u03b6 f)",
-            List.of(Unit.RATIO));
+            RATIO);
     private final QuantityField modeShape = new QuantityField("structure.mode_shape_at_absorber",
             "Mode-shape value at the absorber point, 1 at the antinode: effective mass = modal mass / \u03c6\u00b2",
-            List.of(Unit.RATIO));
+            RATIO);
     private final JLabel derivedMass = derived("derived.mass");
     private final JLabel derivedStiffness = derived("derived.stiffness");
     private final JLabel derivedFrequency = derived("derived.frequency");
@@ -90,12 +95,76 @@ final class StructureStep extends Step {
             edited("structure.stiffnessForm");
         });
         dampingForm.addActionListener(e -> {
-            damping.setUnits(dampingForm.getSelectedIndex() == 3 ? FREQUENCY : List.of(Unit.RATIO));
+            damping.setUnits(dampingForm.getSelectedIndex() == 3 ? FREQUENCY : RATIO);
             edited("structure.dampingForm");
         });
         for (QuantityField f : List.of(mass, stiffness, damping, modeShape)) {
             f.onChange(() -> edited(f.fieldId()));
         }
+        convertOnFormChange();
+    }
+
+    /**
+     * A change of form converts the value (1800 kg becomes 17652 N, 14.2 Hz becomes the stiffness
+     * that gives it with the mass shown); attached after the other listeners, so it runs first.
+     */
+    private void convertOnFormChange() {
+        FormSwitch.attach(massForm, mass, i -> i == 0 ? MASS : WEIGHT,
+                (from, to, v) -> to == 1 ? StructureConversions.weightFromMass(v) : v / Gravity.STANDARD,
+                i -> i == 0 ? "type the modal mass" : "type the weight");
+        FormSwitch.attach(stiffnessForm, stiffness, StructureStep::stiffnessUnits, (from, to, v) -> {
+            double m = modalMassOrNaN();
+            double w = switch (from) {
+                case 0 -> StructureConversions.naturalFrequency(m, v);
+                case 1 -> v;
+                default -> StructureConversions.frequencyFromStaticDeflection(v);
+            };
+            return switch (to) {
+                case 0 -> m * w * w;
+                case 1 -> w;
+                default -> StructureConversions.staticDeflection(w);
+            };
+        }, i -> i == 0 ? "type the stiffness (a mass is needed to convert)" : i == 1 ? "type the natural frequency"
+                : "type the static deflection");
+        FormSwitch.attach(dampingForm, damping, i -> i == 3 ? FREQUENCY : RATIO, (from, to, v) -> {
+            double w = naturalFrequencyOrNaN();
+            double zeta = switch (from) {
+                case 0 -> v;
+                case 1 -> v / 2;
+                case 2 -> v > 0 ? 1 / (2 * v) : Double.NaN;
+                default -> v / (2 * w);
+            };
+            return switch (to) {
+                case 0 -> zeta;
+                case 1 -> DampingConversions.lossFactor(zeta);
+                case 2 -> DampingConversions.qualityFactor(zeta);
+                default -> DampingConversions.halfPowerBandwidth(zeta, w);
+            };
+        }, i -> "type the " + dampingForm.getItemAt(i));
+    }
+
+    private static List<Unit> stiffnessUnits(int form) {
+        return switch (form) {
+            case 0 -> STIFFNESS;
+            case 1 -> FREQUENCY;
+            default -> LENGTH;
+        };
+    }
+
+    /** @return the modal mass shown (from a weight if so given), kg; NaN when not a number yet */
+    private double modalMassOrNaN() {
+        double v = mass.siOrNaN();
+        return massForm.getSelectedIndex() == 0 ? v : v / Gravity.STANDARD;
+    }
+
+    /** @return the natural frequency the fields shown give, rad/s; NaN when they do not give one */
+    private double naturalFrequencyOrNaN() {
+        double v = stiffness.siOrNaN();
+        return switch (stiffnessForm.getSelectedIndex()) {
+            case 0 -> StructureConversions.naturalFrequency(modalMassOrNaN(), v);
+            case 1 -> v;
+            default -> StructureConversions.frequencyFromStaticDeflection(v);
+        };
     }
 
     private void edited(String key) {

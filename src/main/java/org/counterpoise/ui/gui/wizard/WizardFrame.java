@@ -24,6 +24,8 @@ import javax.swing.JPanel;
 import javax.swing.ListSelectionModel;
 import javax.swing.UIManager;
 import org.counterpoise.core.design.DesignResult;
+import org.counterpoise.core.error.InvalidInputException;
+import org.counterpoise.core.model.Structure;
 import org.counterpoise.io.preset.Presets;
 import org.counterpoise.io.project.LoadedProject;
 import org.counterpoise.io.project.Project;
@@ -33,6 +35,8 @@ import org.counterpoise.ui.gui.action.FileActions;
 import org.counterpoise.ui.gui.action.WizardMenus;
 import org.counterpoise.ui.gui.document.DesignDocument;
 import org.counterpoise.ui.gui.document.DocumentChange;
+import org.counterpoise.ui.gui.field.ScrollingPage;
+import org.counterpoise.ui.gui.session.WindowPlacement;
 import org.counterpoise.ui.gui.task.TaskBar;
 import org.counterpoise.ui.gui.task.TaskRunner;
 
@@ -95,7 +99,7 @@ public final class WizardFrame extends JFrame {
                 run.changed();
                 updateTitle();
             });
-            center.add(s.component(), s.title());
+            center.add(ScrollingPage.of(s.component()), s.title());
         }
         files = new FileActions(this, document, tasks, run::fieldsValid, this::say);
         stepList = stepList();
@@ -104,12 +108,25 @@ public final class WizardFrame extends JFrame {
                 name -> files.whenDiscarded(() -> load(Presets.load(name), null)), this::closeRequested));
         files.bind(getRootPane());
         edits.bind(getRootPane());
+        goal.sizingContext(new GoalStep.SizingContext() {
+            @Override
+            public Structure structure() {
+                try {
+                    return document.project().toStructure();
+                } catch (InvalidInputException e) {
+                    return null;
+                }
+            }
+
+            @Override
+            public DesignResult design() {
+                return run.shown();
+            }
+        });
         document.addListener(this::documentChanged);
         documentChanged(new DocumentChange(DocumentChange.Kind.LOADED, document.project(), null));
         go(0);
-        setMinimumSize(new Dimension(1100, 720));
-        setSize(1280, 800);
-        setLocationRelativeTo(null);
+        WindowPlacement.restore(this, new Dimension(1280, 800));
     }
 
     private JList<Step> stepList() {

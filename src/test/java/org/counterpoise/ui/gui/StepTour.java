@@ -1,0 +1,102 @@
+package org.counterpoise.ui.gui;
+
+import java.awt.GraphicsEnvironment;
+import java.awt.Rectangle;
+import java.awt.Robot;
+import java.awt.image.BufferedImage;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.concurrent.atomic.AtomicReference;
+import javax.imageio.ImageIO;
+import javax.swing.SwingUtilities;
+import org.counterpoise.io.preset.Presets;
+import org.counterpoise.ui.gui.wizard.WizardFrame;
+
+/**
+ * Not a test: opens the wizard as a user would and photographs the whole screen on every step,
+ * for a person to look at (run it under Xvfb at several screen sizes and scalings):
+ * {@code java -Dsun.java2d.uiScale=2 -cp target/counterpoise.jar:target/test-classes
+ * org.counterpoise.ui.gui.StepTour target/tour [preset]}.
+ */
+public final class StepTour {
+    private StepTour() {
+    }
+
+    /** @param args output folder, then optionally a preset name */
+    public static void main(String[] args) throws Exception {
+        Path out = Path.of(args.length > 0 ? args[0] : "target/tour");
+        Files.createDirectories(out);
+        System.setProperty("counterpoise.prefs", "memory");
+        AtomicReference<WizardFrame> frame = new AtomicReference<>();
+        SwingUtilities.invokeAndWait(() -> {
+            Themes.apply(false);
+            WizardFrame f = new WizardFrame();
+            if (args.length > 1) {
+                f.load(Presets.load(args[1]), null);
+            }
+            f.setVisible(true);
+            frame.set(f);
+        });
+        waitSettled(frame.get());
+        String typed = System.getProperty("tour.mass");
+        if (typed != null) {
+            SwingUtilities.invokeAndWait(() -> ((javax.swing.JTextField) find(frame.get().getContentPane(), "structure.mass"))
+                    .setText(typed));
+            Thread.sleep(1500);
+        }
+        Rectangle screen = GraphicsEnvironment.getLocalGraphicsEnvironment().getDefaultScreenDevice()
+                .getDefaultConfiguration().getBounds();
+        for (int step = 0; step < 6; step++) {
+            int s = step;
+            SwingUtilities.invokeAndWait(() -> frame.get().showStep(s));
+            Thread.sleep(step >= 3 ? 4000 : 1200);
+            if (Boolean.getBoolean("tour.dump")) {
+                SwingUtilities.invokeAndWait(() -> dump(frame.get().getContentPane(), ""));
+            }
+            BufferedImage image = new Robot().createScreenCapture(screen);
+            ImageIO.write(image, "png", out.resolve("step" + (step + 1) + ".png").toFile());
+        }
+        SwingUtilities.invokeAndWait(() -> frame.get().dispose());
+        System.exit(0);
+    }
+
+    private static java.awt.Component find(java.awt.Container root, String name) {
+        for (java.awt.Component c : root.getComponents()) {
+            if (name.equals(c.getName())) {
+                return c;
+            }
+            if (c instanceof java.awt.Container sub) {
+                java.awt.Component found = find(sub, name);
+                if (found != null) {
+                    return found;
+                }
+            }
+        }
+        return null;
+    }
+
+    private static void dump(java.awt.Component c, String indent) {
+        if (!c.isShowing() || indent.length() > 24) {
+            return;
+        }
+        System.out.println(indent + c.getClass().getSimpleName() + " " + c.getName() + " " + c.getBounds().width + "x"
+                + c.getBounds().height + " min " + c.getMinimumSize().width + "x" + c.getMinimumSize().height + " pref "
+                + c.getPreferredSize().width + "x" + c.getPreferredSize().height);
+        if (c instanceof java.awt.Container k) {
+            for (java.awt.Component child : k.getComponents()) {
+                dump(child, indent + "  ");
+            }
+        }
+    }
+
+    private static void waitSettled(WizardFrame f) throws Exception {
+        for (int i = 0; i < 600; i++) {
+            AtomicReference<Boolean> done = new AtomicReference<>(false);
+            SwingUtilities.invokeAndWait(() -> done.set(f.settled() && f.shownResult() != null));
+            if (done.get()) {
+                return;
+            }
+            Thread.sleep(100);
+        }
+    }
+}
