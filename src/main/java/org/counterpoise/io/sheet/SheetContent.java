@@ -36,6 +36,13 @@ import org.counterpoise.io.text.QuantityFormat;
 public record SheetContent(String projectName, String notes, String date, String revision, List<Section> sections,
         List<String> assumptions, List<String> warnings, List<String> cautions) {
 
+    /** Title of the section of harmonic peaks at one forcing frequency. */
+    public static final String PEAKS_AT_FREQUENCY = "Response at the forcing frequency (before / after)";
+    /** Title of the section of harmonic peaks over a band. */
+    public static final String PEAKS_IN_BAND = "Worst response in the band (before / after)";
+    /** Title of the section of root-mean-square responses to white noise (only for a white-noise disturbance). */
+    public static final String RMS = "Response to the white-noise disturbance (root mean square)";
+
     /**
      * A table of the sheet.
      *
@@ -182,8 +189,17 @@ public record SheetContent(String projectName, String notes, String date, String
         double[] w = r.coupledNaturalFrequencies();
         response.add(new Row("Natural frequencies with absorber", QuantityFormat.number(Unit.HERTZ.fromSi(w[0]), 4)
                 + " and " + QuantityFormat.number(Unit.HERTZ.fromSi(w[1]), 4), "Hz"));
-        sections.add(new Section(band.isSingle() ? "Response at the forcing frequency (before / after)"
-                : "Worst response in the band (before / after)", response));
+        sections.add(new Section(band.isSingle() ? PEAKS_AT_FREQUENCY : PEAKS_IN_BAND, response));
+        r.rms().ifPresent(rms -> {
+            Dimension d = study.response().dimension();
+            String what = study.response().label();
+            sections.add(new Section(RMS, List.of(
+                    new Row("Spectral density of the disturbance (one-sided)", QuantityFormat.number(rms.psdLevel(), 4),
+                            e.kind() == org.counterpoise.core.model.ExcitationKind.FORCE ? "N^2/Hz" : "(m/s^2)^2/Hz"),
+                    quantity("Rms " + what + " without absorber", rms.before(), d),
+                    quantity("Rms " + what + " with absorber", rms.after(), d),
+                    quantity("Rms absorber stroke", rms.stroke(), Dimension.LENGTH))));
+        });
 
         List<Row> robust = new ArrayList<>();
         robust.add(text("Structure natural frequency may be off by", DesignReport.tolerance(r.structureTolerance(), 1)));

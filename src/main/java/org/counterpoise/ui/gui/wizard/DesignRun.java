@@ -114,12 +114,7 @@ final class DesignRun {
                 built = p.toStructure();
                 steps.structure().showDerived(built);
                 steps.disturbance().showDerived(p.toExcitation(), built);
-                DesignMethod m = p.absorber().method();
-                if (steps.disturbance().broadband() && m != DesignMethod.MINIMUM_VARIANCE
-                        && m != DesignMethod.EXACT_VARIANCE) {
-                    throw new InvalidInputException("absorber.method", m.id(),
-                            "a broadband force needs minimum-variance or exact-variance");
-                }
+                p.runUpRate();
                 p.toRobustness();
                 study = p.toStudy();
             } catch (InvalidInputException e) {

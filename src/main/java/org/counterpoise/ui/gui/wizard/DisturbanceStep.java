@@ -8,15 +8,18 @@ import javax.swing.JLabel;
 import javax.swing.JPanel;
 import javax.swing.JRadioButton;
 import javax.swing.JScrollPane;
-import org.counterpoise.core.design.DesignMethod;
+import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.model.Excitation;
 import org.counterpoise.core.model.ExcitationKind;
+import org.counterpoise.core.model.Spectrum;
 import org.counterpoise.core.model.Structure;
 import org.counterpoise.core.units.Dimension;
+import org.counterpoise.core.units.SpectralDensityUnit;
 import org.counterpoise.core.units.Unit;
 import org.counterpoise.io.project.DisturbanceInput;
 import org.counterpoise.io.project.Project;
 import org.counterpoise.io.project.QuantityInput;
+import org.counterpoise.io.project.SpectrumInput;
 import org.counterpoise.io.text.QuantityFormat;
 import org.counterpoise.io.text.UnitChoices;
 import org.counterpoise.ui.gui.document.ProjectEdits;
@@ -26,13 +29,11 @@ import org.counterpoise.ui.gui.field.QuantityField;
 
 /** Step 2: what shakes the structure, and at which speeds. */
 final class DisturbanceStep extends Step {
-    /** Index of the broadband choice in the kind list (a white-noise force). */
-    static final int BROADBAND = 4;
     private static final List<Unit> FREQUENCY = UnitChoices.of(Dimension.FREQUENCY);
     private static final List<Unit> RATIO = UnitChoices.of(Dimension.RATIO);
 
     private final JComboBox<String> kind = new JComboBox<>(new String[] {"harmonic force", "rotating unbalance",
-        "base displacement", "base acceleration", "broadband force (white noise)"});
+        "base displacement", "base acceleration"});
     private final QuantityField amplitude = new QuantityField("disturbance.amplitude",
             "Force amplitude; unbalance m\u00b7e; or base motion amplitude", units(ExcitationKind.FORCE));
     private final JRadioButton oneSpeed = new JRadioButton("one speed");
@@ -44,6 +45,19 @@ final class DisturbanceStep extends Step {
             RATIO);
     private final QuantityField order = new QuantityField("disturbance.harmonic_order",
             "Forcing cycles per revolution: 1 for unbalance, the blade count for blade-pass", RATIO);
+    private final JRadioButton harmonic = new JRadioButton("harmonic");
+    private final JRadioButton broadband = new JRadioButton("broadband (white noise)");
+    private final QuantityField psd = new QuantityField("disturbance.spectrum.psd.value",
+            "One-sided power spectral density of the force or base acceleration, per hertz", List.of());
+    private final JComboBox<SpectralDensityUnit> psdUnit = new JComboBox<>();
+    /** The PSD unit the number on screen is in, to convert it when another unit is picked. */
+    private SpectralDensityUnit psdShownUnit;
+    private boolean fillingPsdUnits;
+    /** A harmonic spectrum written out in the file ({"kind": "harmonic"}), kept as it was; else null. */
+    private SpectrumInput statedHarmonic;
+    private final QuantityField runUp = new QuantityField("disturbance.run_up_rate",
+            "How fast the shaft speed changes at start and stop; leave empty when not known",
+            UnitChoices.of(Dimension.ANGULAR_ACCELERATION));
     private final JLabel derivedBand = StructureStep.derived("derived.forcing");
     private final JLabel derivedRatio = StructureStep.derived("derived.ratio");
     private final JComponent page;
@@ -56,10 +70,34 @@ final class DisturbanceStep extends Step {
         g.add(oneSpeed);
         g.add(speedRange);
         oneSpeed.setSelected(true);
+        harmonic.setName("disturbance.spectrum.harmonic");
+        broadband.setName("disturbance.spectrum.whiteNoise");
+        ButtonGroup spectra = new ButtonGroup();
+        spectra.add(harmonic);
+        spectra.add(broadband);
+        harmonic.setSelected(true);
+        psdUnit.setName("disturbance.spectrum.psd.unit");
+        psdUnit.setRenderer(new javax.swing.DefaultListCellRenderer() {
+            @Override
+            public java.awt.Component getListCellRendererComponent(javax.swing.JList<?> list, Object value,
+                    int index, boolean selected, boolean focus) {
+                return super.getListCellRendererComponent(list, value instanceof SpectralDensityUnit u
+                        ? QuantityField.pretty(u.symbol()) : "", index, selected, focus);
+            }
+        });
+        psd.add(psdUnit); // the unit list sits beside the number, as in every other field
+        fillPsdUnits(ExcitationKind.FORCE);
         Form form = new Form();
         form.heading("The disturbance");
         form.row("Kind", 'k', kind, "What drives the structure");
-        form.row("Amplitude", 'a', amplitude, "Amplitude of the drive");
+        JPanel spectrumRadios = new JPanel(new java.awt.FlowLayout(java.awt.FlowLayout.LEFT, 0, 0));
+        spectrumRadios.setOpaque(false);
+        spectrumRadios.add(harmonic);
+        spectrumRadios.add(broadband);
+        form.row("Spectrum", (char) 0, spectrumRadios, "Harmonic: a sinusoid at one speed or anywhere in a range."
+                + " Broadband: random force or base acceleration of constant spectral density, judged by rms values");
+        form.row("PSD level (broadband)", 'p', psd, "Power spectral density of the white noise, one-sided, per hertz");
+        form.row("Amplitude", 'a', amplitude, "Amplitude of the drive (with broadband: for the harmonic rows)");
         JPanel radios = new JPanel(new java.awt.FlowLayout(java.awt.FlowLayout.LEFT, 0, 0));
         radios.setOpaque(false);
         radios.add(oneSpeed);
@@ -69,6 +107,8 @@ final class DisturbanceStep extends Step {
         form.row("Lowest speed", 'l', low, "Bottom of the speed range");
         form.row("Highest speed (same unit)", 'h', high, "Top of the speed range, in the unit of the lowest speed");
         form.row("Harmonic order", 'o', order, "Forcing cycles per revolution");
+        form.row("Run-up rate (optional)", 'r', runUp,
+                "How fast the shaft speeds up at start and slows at stop; empty when not given");
         form.heading("Derived");
         form.derived("Forcing frequency", derivedBand);
         form.derived("Over the structure's natural frequency", derivedRatio);
@@ -82,10 +122,20 @@ final class DisturbanceStep extends Step {
         own("disturbance.frequency_high", high);
         own("disturbance.harmonic_order", order);
         own("disturbance", amplitude);
+        own("disturbance.spectrum", psd);
+        own("disturbance.run_up_rate", runUp);
         kind.addActionListener(e -> {
             amplitude.setUnits(units(kindOf(kind.getSelectedIndex())));
+            psdFollowsKind();
             edited("disturbance.kind");
         });
+        for (JRadioButton b : List.of(harmonic, broadband)) {
+            b.addActionListener(e -> {
+                enableSpectrum();
+                edited("disturbance.spectrum");
+            });
+        }
+        psdUnit.addActionListener(e -> psdUnitPicked());
         oneSpeed.addActionListener(e -> {
             enableSpeeds();
             edited("disturbance.speed");
@@ -94,23 +144,23 @@ final class DisturbanceStep extends Step {
             enableSpeeds();
             edited("disturbance.speed");
         });
-        for (QuantityField f : List.of(amplitude, speed, low, high, order)) {
+        for (QuantityField f : List.of(amplitude, speed, low, high, order, psd, runUp)) {
             f.onChange(() -> edited(f.fieldId()));
         }
         enableSpeeds();
+        enableSpectrum();
         convertOnChange();
     }
 
     /**
      * The highest speed is typed in the lowest speed's unit, so it follows when that unit changes.
      * A force, an unbalance and a base motion are different quantities: a change of kind brings
-     * back the amplitude last typed for that kind, or empties the field and says what to type
-     * (a force and a broadband force share theirs). Attached after the other listeners.
+     * back the amplitude last typed for that kind, or empties the field and says what to type.
+     * Attached after the other listeners.
      */
     private void convertOnChange() {
         low.onUnitChange((from, to) -> high.scale(from.toSi(1) / to.toSi(1)));
-        FormSwitch.attach(kind, amplitude, i -> units(kindOf(i)),
-                (from, to, v) -> kindOf(from) == kindOf(to) ? v : Double.NaN,
+        FormSwitch.attach(kind, amplitude, i -> units(kindOf(i)), (from, to, v) -> Double.NaN,
                 i -> "type the " + switch (kindOf(i)) {
                     case FORCE -> "force amplitude";
                     case UNBALANCE -> "unbalance m\u00b7e";
@@ -122,16 +172,82 @@ final class DisturbanceStep extends Step {
         commit(() -> ProjectEdits.disturbance(key, input()));
     }
 
+    /**
+     * The PSD units follow the kind (N^2/Hz for a force, (m/s^2)^2/Hz for a base acceleration, none
+     * for the others); a level typed for another quantity means nothing now, so it is emptied, and
+     * said so while broadband is chosen.
+     */
+    private void psdFollowsKind() {
+        ExcitationKind now = kindOf(kind.getSelectedIndex());
+        SpectralDensityUnit was = (SpectralDensityUnit) psdUnit.getSelectedItem();
+        fillPsdUnits(now);
+        if (was != null && was.of() != now.amplitudeDimension() && !psd.textField().getText().isBlank()) {
+            if (broadband.isSelected()) {
+                psd.convertTo(List.of(), Double.NaN, "type the PSD level of the "
+                        + (now == ExcitationKind.FORCE ? "force" : "base acceleration"));
+            } else {
+                psd.clear();
+            }
+        }
+    }
+
+    private void fillPsdUnits(ExcitationKind k) {
+        fillingPsdUnits = true;
+        try {
+            psdUnit.removeAllItems();
+            for (SpectralDensityUnit u : SpectralDensityUnit.values()) {
+                if (u.of() == k.amplitudeDimension()) {
+                    psdUnit.addItem(u);
+                }
+            }
+            psdShownUnit = (SpectralDensityUnit) psdUnit.getSelectedItem();
+        } finally {
+            fillingPsdUnits = false;
+        }
+        psdUnit.setVisible(psdUnit.getItemCount() > 0);
+    }
+
+    /** Another PSD unit: the number follows, so the spectral density stays what it was. */
+    private void psdUnitPicked() {
+        if (fillingPsdUnits || syncing()) {
+            psdShownUnit = (SpectralDensityUnit) psdUnit.getSelectedItem();
+            return;
+        }
+        SpectralDensityUnit now = (SpectralDensityUnit) psdUnit.getSelectedItem();
+        SpectralDensityUnit before = psdShownUnit;
+        psdShownUnit = now;
+        double v = psd.siOrNaN();
+        if (before != null && now != null && before != now && Double.isFinite(v)) {
+            psd.show(v * before.toSi(1) / now.toSi(1), null);
+        }
+        edited("disturbance.spectrum.psd.unit");
+    }
+
+    private void enableSpectrum() {
+        boolean white = broadband.isSelected();
+        psd.textField().setEnabled(white);
+        psdUnit.setEnabled(white);
+    }
+
     @Override
     void showProject(Project p, boolean loaded) {
-        boolean variance = p.absorber().method() == DesignMethod.EXACT_VARIANCE
-                || p.absorber().method() == DesignMethod.MINIMUM_VARIANCE;
-        load(p.disturbance(), loaded && variance && p.disturbance().kind() == ExcitationKind.FORCE);
+        load(p.disturbance());
     }
 
     @Override
     boolean fieldsValid() {
         boolean ok = check(amplitude) & check(order);
+        if (!runUp.textField().getText().isBlank()) {
+            ok &= check(runUp);
+        }
+        if (broadband.isSelected()) {
+            try {
+                spectrum();
+            } catch (InvalidInputException e) {
+                showProblem(e);
+                ok = false;
+            }
+        }
         if (speedRange.isSelected()) {
             ok &= check(low) & check(high);
         } else {
@@ -157,30 +273,51 @@ final class DisturbanceStep extends Step {
         return page;
     }
 
-    /** @return true when a broadband (white-noise) force is chosen */
-    boolean broadband() {
-        return kind.getSelectedIndex() == BROADBAND;
-    }
-
     DisturbanceInput input() {
         ExcitationKind k = kindOf(kind.getSelectedIndex());
         QuantityInput a = amplitude.input();
         double h = order.number();
+        QuantityInput rate = runUp.textField().getText().isBlank() ? null : runUp.input();
+        SpectrumInput sp = spectrum();
         if (speedRange.isSelected()) {
-            return new DisturbanceInput(k, a, null, low.number(), high.number(), low.unit(), h);
+            return new DisturbanceInput(k, a, null, low.number(), high.number(), low.unit(), h, rate, sp);
         }
-        return new DisturbanceInput(k, a, speed.input(), Double.NaN, Double.NaN, null, h);
+        return new DisturbanceInput(k, a, speed.input(), Double.NaN, Double.NaN, null, h, rate, sp);
     }
 
-    /**
-     * @param d the disturbance
-     * @param broadband true to show a force as broadband (a file says so through its variance method)
-     */
-    private void load(DisturbanceInput d, boolean broadband) {
-        // A broadband force is a force in the file: keep the broadband choice unless the kind changed.
-        if (broadband || kindOf(kind.getSelectedIndex()) != d.kind()) {
-            select(kind, broadband ? BROADBAND : d.kind().ordinal());
+    /** @return the spectrum as shown: null (harmonic) or white noise of the level typed */
+    private SpectrumInput spectrum() {
+        if (!broadband.isSelected()) {
+            return statedHarmonic;
         }
+        SpectralDensityUnit u = (SpectralDensityUnit) psdUnit.getSelectedItem();
+        if (u == null) {
+            throw new InvalidInputException("disturbance.spectrum", "white noise with a "
+                    + kindOf(kind.getSelectedIndex()).label(), "white noise is a force or a base acceleration:"
+                    + " choose one of those kinds, or the harmonic spectrum");
+        }
+        return SpectrumInput.whiteNoise(psd.number(), u);
+    }
+
+    /** @param d the disturbance */
+    private void load(DisturbanceInput d) {
+        if (kindOf(kind.getSelectedIndex()) != d.kind()) {
+            select(kind, d.kind().ordinal());
+        }
+        SpectrumInput sp = d.spectrum();
+        boolean white = sp != null && sp.kind() == Spectrum.Kind.WHITE_NOISE;
+        statedHarmonic = white ? null : sp;
+        if (white) {
+            broadband.setSelected(true);
+            if (psdUnit.getSelectedItem() != sp.psdUnit()) {
+                psdUnit.setSelectedItem(sp.psdUnit());
+            }
+            showValue(psd, sp.psdValue(), null);
+        } else {
+            harmonic.setSelected(true);
+        }
+        enableSpectrum();
+        showValue(runUp, d.runUpRate());
         showValue(amplitude, d.amplitude());
         if (d.isBand()) {
             speedRange.setSelected(true);
@@ -219,7 +356,7 @@ final class DisturbanceStep extends Step {
     }
 
     static ExcitationKind kindOf(int index) {
-        return index == BROADBAND ? ExcitationKind.FORCE : ExcitationKind.values()[index];
+        return ExcitationKind.values()[index];
     }
 
     private static List<Unit> units(ExcitationKind k) {

@@ -162,6 +162,11 @@ final class ResultStep extends Step {
         curves = c;
         SheetContent content = SheetContent.of(r, "", "", "");
         List<SheetContent.Section> sections = new java.util.ArrayList<>(content.sections());
+        if (r.rms().isPresent()) {
+            // Under white noise the design is judged by rms values: they stand in for the harmonic peaks.
+            sections.removeIf(sec -> sec.title().equals(SheetContent.PEAKS_AT_FREQUENCY)
+                    || sec.title().equals(SheetContent.PEAKS_IN_BAND));
+        }
         // What to build and what it achieves first; the inputs echoed last.
         sections.sort(java.util.Comparator.comparingInt(sec -> sec.title().startsWith("Absorber") ? 0
                 : sec.title().contains("response") || sec.title().contains("Response") ? 1

@@ -80,6 +80,8 @@ class DesignDocumentPropertyTest {
         }
         ProjectWriter.writeAtomically(file, json);
         Statistics.collect("saved");
+        Statistics.label("saved disturbance").collect(edited.disturbance().spectrum() != null ? "white noise" : "harmonic",
+                edited.disturbance().runUpRate() != null ? "run-up rate" : "no run-up rate");
         assertEquals(edited, ProjectReader.read(file).project(), "reopens equal");
         System.setProperty("counterpoise.test.project", json);
         assertEquals(0, run("design", file.toString()));
@@ -158,7 +160,15 @@ class DesignDocumentPropertyTest {
         Arbitrary<Double> width = Arbitraries.of(0.0, 0.05, 0.2);
         Arbitrary<Boolean> band = Arbitraries.of(true, false);
         Arbitrary<Integer> order = Arbitraries.integers().between(1, 3);
-        return Combinators.combine(kind, low, width, band, order).as((k, lo, wd, b, h) -> {
+        // The run-up rate is optional: absent, or a rate in any unit the wizard offers.
+        Arbitrary<QuantityInput> runUp = Arbitraries.oneOf(Arbitraries.just(null), quantity(0.2, 20,
+                org.counterpoise.io.text.UnitChoices.of(org.counterpoise.core.units.Dimension.ANGULAR_ACCELERATION)
+                        .toArray(new Unit[0])));
+        // Harmonic (no spectrum) twice as often as white noise; the level in any unit of the kind's quantity.
+        Arbitrary<Double> psdLevel = Arbitraries.doubles().between(1e-3, 1e3).ofScale(6).map(DesignDocumentPropertyTest::round);
+        Arbitrary<Integer> spectrum = Arbitraries.integers().between(0, 2);
+        return Combinators.combine(kind, low, width, band, order, runUp, spectrum, psdLevel).as(
+                (k, lo, wd, b, h, rate, sp, g0) -> {
             QuantityInput amplitude = switch (k) {
                 case FORCE -> new QuantityInput(500, Unit.NEWTON);
                 case UNBALANCE -> new QuantityInput(20_000, Unit.GRAM_MILLIMETRE);
@@ -169,14 +179,21 @@ class DesignDocumentPropertyTest {
                     Unit.REV_PER_MINUTE, h)
                     : new DisturbanceInput(k, amplitude, new QuantityInput(lo, Unit.REV_PER_MINUTE), Double.NaN,
                             Double.NaN, null, h);
-            return ProjectEdits.disturbance("disturbance.kind", d);
+            List<org.counterpoise.core.units.SpectralDensityUnit> psdUnits = java.util.Arrays.stream(
+                    org.counterpoise.core.units.SpectralDensityUnit.values()).filter(u -> u.of() == k.amplitudeDimension())
+                    .toList();
+            if (sp == 2 && !psdUnits.isEmpty()) {
+                d = d.withSpectrum(org.counterpoise.io.project.SpectrumInput.whiteNoise(g0,
+                        psdUnits.get(lo.intValue() % psdUnits.size())));
+            }
+            return ProjectEdits.disturbance("disturbance.kind", d.withRunUpRate(rate));
         });
     }
 
     private Arbitrary<Edit> absorber() {
         Arbitrary<Double> ratio = Arbitraries.doubles().between(0.01, 0.2).ofScale(4).map(DesignDocumentPropertyTest::round);
         Arbitrary<DesignMethod> method = Arbitraries.of(DesignMethod.EQUAL_PEAK, DesignMethod.EXACT_PEAK, DesignMethod.EXACT_PEAK,
-                DesignMethod.UNDAMPED_SINGLE_SPEED, DesignMethod.MINIMUM_VARIANCE);
+                DesignMethod.UNDAMPED_SINGLE_SPEED, DesignMethod.MINIMUM_VARIANCE, DesignMethod.MINIMUM_VARIANCE);
         Arbitrary<ResponseKind> response = Arbitraries.of(Project.DESIGN_RESPONSES);
         Arbitrary<Boolean> hangs = Arbitraries.of(true, false);
         Arbitrary<Double> margin = Arbitraries.of(1.2, 1.5, 2.0);
