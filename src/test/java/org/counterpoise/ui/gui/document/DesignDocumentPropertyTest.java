@@ -115,7 +115,29 @@ class DesignDocumentPropertyTest {
 
     @Provide
     Arbitrary<List<Edit>> edits() {
-        return Arbitraries.oneOf(structure(), disturbance(), absorber(), robustness(), identity()).list();
+        return Arbitraries.oneOf(structure(), disturbance(), spectrum(), absorber(), robustness(), identity()).list();
+    }
+
+    /**
+     * The disturbance step's spectrum choice on its own: broadband (white noise of a level in a unit
+     * of the kind's quantity) or harmonic, the rest of the disturbance as it is.
+     */
+    private Arbitrary<Edit> spectrum() {
+        Arbitrary<Double> level = Arbitraries.doubles().between(1e-3, 1e3).ofScale(6).map(DesignDocumentPropertyTest::round);
+        Arbitrary<Boolean> white = Arbitraries.of(true, true, false);
+        Arbitrary<Integer> unit = Arbitraries.integers().between(0, 1);
+        return Combinators.combine(white, level, unit).as((w, g0, u) -> new Edit("disturbance.spectrum", "disturbance",
+                p -> {
+                    List<org.counterpoise.core.units.SpectralDensityUnit> units = java.util.Arrays.stream(
+                            org.counterpoise.core.units.SpectralDensityUnit.values())
+                            .filter(x -> x.of() == p.disturbance().kind().amplitudeDimension()).toList();
+                    // The wizard offers no PSD unit for an unbalance or a base displacement: it stays harmonic.
+                    org.counterpoise.io.project.SpectrumInput sp = w && !units.isEmpty()
+                            ? org.counterpoise.io.project.SpectrumInput.whiteNoise(g0, units.get(u % units.size()))
+                            : null;
+                    return ProjectEdits.disturbance("disturbance.spectrum", p.disturbance().withSpectrum(sp)).change()
+                            .apply(p);
+                }));
     }
 
     private static Arbitrary<QuantityInput> quantity(double lowSi, double highSi, Unit... units) {
