@@ -41,7 +41,7 @@ public record SheetContent(String projectName, String notes, String date, String
     /** Title of the section of harmonic peaks over a band. */
     public static final String PEAKS_IN_BAND = "Worst response in the band (before / after)";
     /** Title of the section of root-mean-square responses to white noise (only for a white-noise disturbance). */
-    public static final String RMS = "Response to the white-noise disturbance (root mean square)";
+    public static final String RMS = "Rms under white noise";
 
     /**
      * A table of the sheet.
@@ -192,12 +192,12 @@ public record SheetContent(String projectName, String notes, String date, String
         sections.add(new Section(band.isSingle() ? PEAKS_AT_FREQUENCY : PEAKS_IN_BAND, response));
         r.rms().ifPresent(rms -> {
             Dimension d = study.response().dimension();
-            String what = study.response().label();
+            // Short labels (they fit the wizard's table); the response is named in the Disturbance section.
             sections.add(new Section(RMS, List.of(
-                    new Row("Spectral density of the disturbance (one-sided)", QuantityFormat.number(rms.psdLevel(), 4),
+                    new Row("PSD level (one-sided)", QuantityFormat.number(rms.psdLevel(), 4),
                             e.kind() == org.counterpoise.core.model.ExcitationKind.FORCE ? "N^2/Hz" : "(m/s^2)^2/Hz"),
-                    quantity("Rms " + what + " without absorber", rms.before(), d),
-                    quantity("Rms " + what + " with absorber", rms.after(), d),
+                    quantity("Rms without absorber", rms.before(), d),
+                    quantity("Rms with absorber", rms.after(), d),
                     quantity("Rms absorber stroke", rms.stroke(), Dimension.LENGTH))));
         });
 

@@ -16,13 +16,13 @@ import org.counterpoise.ui.gui.wizard.WizardFrame;
  * Not a test: opens the wizard as a user would and photographs the whole screen on every step,
  * for a person to look at (run it under Xvfb at several screen sizes and scalings):
  * {@code java -Dsun.java2d.uiScale=2 -cp target/counterpoise.jar:target/test-classes
- * org.counterpoise.ui.gui.StepTour target/tour [preset]}.
+ * org.counterpoise.ui.gui.StepTour target/tour [preset or project file]}.
  */
 public final class StepTour {
     private StepTour() {
     }
 
-    /** @param args output folder, then optionally a preset name */
+    /** @param args output folder, then optionally a preset name or a project file */
     public static void main(String[] args) throws Exception {
         Path out = Path.of(args.length > 0 ? args[0] : "target/tour");
         Files.createDirectories(out);
@@ -31,7 +31,9 @@ public final class StepTour {
         SwingUtilities.invokeAndWait(() -> {
             Themes.apply(false);
             WizardFrame f = new WizardFrame();
-            if (args.length > 1) {
+            if (args.length > 1 && args[1].endsWith(".json") && Files.isRegularFile(Path.of(args[1]))) {
+                f.openFile(Path.of(args[1])); // a project file of one's own
+            } else if (args.length > 1) {
                 f.load(Presets.load(args[1]), null);
             }
             f.setVisible(true);

@@ -214,6 +214,12 @@ final class DesignRun {
     }
 
     private void startMassChart(DesignStudy study, DesignResult r) {
+        if (study.excitation().spectrum().isWhiteNoise()) {
+            // The curve is of harmonic peaks (exact-peak designs); white noise is judged by rms values.
+            steps.goal().massChart().message("This curve is for a harmonic disturbance; under white noise the"
+                    + " design is judged by its rms response (see the Result step).");
+            return;
+        }
         double[] mus = AchievablePeak.massRatios(0.005, 0.3, 16);
         tasks.current(null, progress -> AchievablePeak.overMassRatio(study, mus),
                 (double[] peaks) -> steps.goal().massChart().show(MassRatioChart.of(study, r, mus, peaks)),

@@ -32,7 +32,7 @@ final class DisturbanceStep extends Step {
     private static final List<Unit> FREQUENCY = UnitChoices.of(Dimension.FREQUENCY);
     private static final List<Unit> RATIO = UnitChoices.of(Dimension.RATIO);
 
-    private final JComboBox<String> kind = new JComboBox<>(new String[] {"harmonic force", "rotating unbalance",
+    private final JComboBox<String> kind = new JComboBox<>(new String[] {"force", "rotating unbalance",
         "base displacement", "base acceleration"});
     private final QuantityField amplitude = new QuantityField("disturbance.amplitude",
             "Force amplitude; unbalance m\u00b7e; or base motion amplitude", units(ExcitationKind.FORCE));
