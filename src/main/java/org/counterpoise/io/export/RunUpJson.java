@@ -1,7 +1,6 @@
 package org.counterpoise.io.export;
 
 import com.google.gson.GsonBuilder;
-import com.google.gson.JsonNull;
 import com.google.gson.JsonObject;
 import java.util.Map;
 import org.counterpoise.core.response.ResponseKind;
@@ -86,13 +85,6 @@ public final class RunUpJson {
     }
 
     private static void number(JsonObject o, String key, double v) {
-        if (Double.isFinite(v)) {
-            o.addProperty(key, v);
-        } else {
-            o.add(key, JsonNull.INSTANCE);
-            if (Double.isInfinite(v)) {
-                o.addProperty(key + "_unbounded", true);
-            }
-        }
+        JsonNumbers.put(o, key, v);
     }
 }
