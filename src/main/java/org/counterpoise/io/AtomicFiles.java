@@ -36,8 +36,8 @@ import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
 /**
- * The one way Counterpoise writes a file (projects, sheets, charts, exports), after OpenRocket's
- * safe save: the content goes into a hidden temporary file beside the destination, is flushed to
+ * The one way Counterpoise writes a file (projects, sheets, charts, exports), by the usual safe-save
+ * pattern: the content goes into a hidden temporary file beside the destination, is flushed to
  * the disk, and is renamed over the destination in one step; then the folder is flushed, so the
  * rename itself survives a power cut. A crash, a kill or a full disk therefore leaves either the
  * complete old file or the complete new one.

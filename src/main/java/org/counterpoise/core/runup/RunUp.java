@@ -6,11 +6,13 @@ import java.util.EnumMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import org.apache.commons.math3.exception.MathIllegalArgumentException;
 import org.apache.commons.math3.exception.MathIllegalStateException;
 import org.apache.commons.math3.ode.nonstiff.DormandPrince853Integrator;
 import org.apache.commons.math3.ode.sampling.StepHandler;
 import org.apache.commons.math3.ode.sampling.StepInterpolator;
 import org.counterpoise.core.error.CoreException;
+import org.counterpoise.core.error.NotFoundException;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.error.Messages;
 import org.counterpoise.core.model.ExcitationKind;
@@ -134,8 +136,11 @@ public final class RunUp {
         double[] y = initialState(structure, tuning, kind, amplitude, ramp, start, n);
         try {
             integrator.integrate(equations, 0.0, y, ramp.duration(), y);
-        } catch (MathIllegalStateException e) {
-            throw CoreException.bug("the run-up integration failed", e);
+        } catch (MathIllegalStateException | MathIllegalArgumentException e) {
+            // Commons Math signals an exhausted evaluation count (state) or a step below its minimum
+            // (argument): on a linear model both mean the requested accuracy could not be held.
+            throw new NotFoundException("run-up history", "the integration could not hold its accuracy over this ramp",
+                    "try a slower or faster rate, or a lower final speed");
         }
         return sampler.result(ramp, tuning != null, integrator.getEvaluations());
     }

@@ -16,12 +16,12 @@ public enum PhysicalRange {
     MASS(Dimension.MASS, 1e-4, 1e9),
     /** From 1 uN (a lab shaker's smallest force) to the weight of the heaviest mass above, 10^10 N. */
     FORCE(Dimension.FORCE, 1e-6, 1e10),
-    /** From 1 pm (below any measurable vibration) to 100 m (a static sag for a 0.05 Hz mode is 0.1 m). */
+    /** From 1 pm (below any measurable vibration) to 100 m (the static sag g/(2 pi f)^2 of a 0.05 Hz mode is 99 m). */
     LENGTH(Dimension.LENGTH, 1e-12, 100),
     /** From 1 mN/m to 10^15 N/m: a 10^9 kg mass at 160 Hz; lab springs start around 1 N/m. */
     STIFFNESS(Dimension.STIFFNESS, 1e-3, 1e15),
-    /** Up to 10^12 N s/m, critical damping of the largest mass at the highest stiffness above. */
-    DAMPING_COEFFICIENT(Dimension.DAMPING_COEFFICIENT, 1e-9, 1e12),
+    /** Up to 2*10^12 N s/m, the critical damping 2 sqrt(k m) of the largest mass on the highest stiffness above. */
+    DAMPING_COEFFICIENT(Dimension.DAMPING_COEFFICIENT, 1e-9, 2e12),
     /**
      * From 10^-5 Hz (a half-power bandwidth of a very lightly damped 0.05 Hz tower mode is 10^-4 Hz)
      * to 100 kHz (tool chatter absorbers work up to a few kHz). Stored in rad/s.

@@ -4,6 +4,7 @@ import java.nio.file.Path;
 import java.util.concurrent.Callable;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.Designer;
+import org.counterpoise.core.error.Checks;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.model.Excitation;
 import org.counterpoise.core.runup.ProgressListener;
@@ -67,8 +68,8 @@ public final class RunUpCommand implements Callable<Integer> {
         double topShaft = excitation.band().high() / order;
         double finalShaft = topShaft * DEFAULT_OVERSPEED;
         if (finalSpeed != null) {
-            if (!Double.isFinite(finalSpeed) || finalSpeed <= 0.0 || Unit.REV_PER_MINUTE.toSi(finalSpeed) > 10.0 * topShaft) {
-                throw new InvalidInputException("--final-speed", String.valueOf(finalSpeed),
+            if (finalSpeed <= 0.0 || Unit.REV_PER_MINUTE.toSi(finalSpeed) > 10.0 * topShaft) {
+                throw new InvalidInputException("--final-speed", Checks.show(finalSpeed),
                         "a shaft speed in rpm above 0 and at most 10 times the top running speed ("
                                 + QuantityFormat.format(10.0 * topShaft, Unit.REV_PER_MINUTE) + ")");
             }
@@ -102,8 +103,8 @@ public final class RunUpCommand implements Callable<Integer> {
     /** @return the shaft's angular acceleration, rad/s^2, from --rate or the file */
     private double shaftRate(Project project) {
         if (rate != null) {
-            if (!Double.isFinite(rate) || rate <= 0.0) {
-                throw new InvalidInputException("--rate", String.valueOf(rate),
+            if (rate <= 0.0) {
+                throw new InvalidInputException("--rate", Checks.show(rate),
                         "a shaft speed change per second in rpm/s, greater than 0");
             }
             return Unit.RPM_PER_SECOND.toSi(rate);

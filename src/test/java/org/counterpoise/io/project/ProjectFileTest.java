@@ -115,4 +115,23 @@ class ProjectFileTest {
             assertEquals(1, files.count());
         }
     }
+
+    /**
+     * A value typed in the wizard reaches the core through Project, not through the file reader:
+     * the plausibility range must hold on that route too, naming the field (found in review: a
+     * 1e-7 kg structure designed in the wizard, then its save was refused).
+     */
+    @ParameterizedTest
+    @CsvSource({"1e-7", "1e12"})
+    void implausibleMagnitudesAreRefusedOnTheWizardsRouteToo(double kilograms) {
+        Project p = org.counterpoise.io.preset.Presets.load("pump-skid-mezzanine.json").project();
+        StructureInput s = p.structure();
+        StructureInput odd = new StructureInput(new QuantityInput(kilograms, org.counterpoise.core.units.Unit.KILOGRAM),
+                null, s.stiffness(), s.naturalFrequency(), s.staticDeflection(), s.damping(), s.modeShapeAtAbsorber());
+        Project typed = new Project(p.name(), p.notes(), odd, p.disturbance(), p.absorber(), p.robustness(),
+                p.identity());
+        InvalidInputException e = assertThrows(InvalidInputException.class, typed::toStudy);
+        assertEquals("structure.mass.value", e.field());
+        assertTrue(e.getMessage().contains("0.0001 kg to 1e+9 kg"), e.getMessage());
+    }
 }

@@ -2,6 +2,7 @@ package org.counterpoise.ui.gui.document;
 
 import java.io.StringReader;
 import org.counterpoise.core.design.Designer;
+import org.counterpoise.core.error.NotFoundException;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.io.project.Project;
 import org.counterpoise.io.project.ProjectReader;
@@ -29,7 +30,12 @@ public final class ProjectCheck {
                     "the file would not reopen with the values shown; please report this case");
         }
         back.toRobustness();
-        Designer.design(back.toStudy());
+        try {
+            Designer.design(back.toStudy());
+        } catch (NotFoundException e) {
+            // The inputs are valid; only the optimiser found no certified optimum for them. The
+            // project is the user's work and is saved; the design step says what was not found.
+        }
         return json;
     }
 }
