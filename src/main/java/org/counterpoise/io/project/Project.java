@@ -75,7 +75,7 @@ public record Project(String name, String notes, StructureInput structure, Distu
         // No mixed double/null conditional here: unboxing its null result was a NullPointerException
         // for the documented form "stiffness and natural frequency without a mass".
         boolean massGiven = s.mass() != null || s.weight() != null;
-        double mass = s.mass() != null ? Checks.positive("structure.mass.value", s.mass().si("structure.mass.value"))
+        double mass = s.mass() != null ? s.mass().positiveSi("structure.mass.value")
                 : s.weight() != null ? StructureConversions.massFromWeight(s.weight().si("structure.weight.value")) : Double.NaN;
         int stiffnessForms = count(s.stiffness(), s.naturalFrequency(), s.staticDeflection());
         double stiffness;
@@ -89,21 +89,21 @@ public record Project(String name, String notes, StructureInput structure, Distu
                         "give structure.mass or structure.weight, or both structure.stiffness and"
                                 + " structure.natural_frequency");
             }
-            stiffness = Checks.positive("structure.stiffness.value", s.stiffness().si("structure.stiffness.value"));
+            stiffness = s.stiffness().positiveSi("structure.stiffness.value");
             mass = StructureConversions.massFromFrequency(stiffness,
-                    Checks.positive("structure.natural_frequency.value", s.naturalFrequency().si("structure.natural_frequency.value")));
+                    s.naturalFrequency().positiveSi("structure.natural_frequency.value"));
         } else if (stiffnessForms != 1) {
             throw new InvalidInputException("structure", stiffnessForms + " stiffness entries",
                     "with a mass or weight give exactly one of structure.stiffness, structure.natural_frequency"
                             + " and structure.static_deflection");
         } else if (s.stiffness() != null) {
-            stiffness = Checks.positive("structure.stiffness.value", s.stiffness().si("structure.stiffness.value"));
+            stiffness = s.stiffness().positiveSi("structure.stiffness.value");
         } else if (s.naturalFrequency() != null) {
             stiffness = StructureConversions.stiffnessFromFrequency(mass,
-                    Checks.positive("structure.natural_frequency.value", s.naturalFrequency().si("structure.natural_frequency.value")));
+                    s.naturalFrequency().positiveSi("structure.natural_frequency.value"));
         } else {
             stiffness = StructureConversions.stiffnessFromStaticDeflection(mass,
-                    Checks.positive("structure.static_deflection.value", s.staticDeflection().si("structure.static_deflection.value")));
+                    s.staticDeflection().positiveSi("structure.static_deflection.value"));
         }
         double zeta = dampingRatio(s.damping(), Math.sqrt(stiffness / mass));
         return new Structure(mass, stiffness, zeta, s.modeShapeAtAbsorber());
@@ -136,7 +136,7 @@ public record Project(String name, String notes, StructureInput structure, Distu
             }
             band = FrequencyBand.ofRotor(d.bandUnit().toSi(d.bandLow()), d.bandUnit().toSi(d.bandHigh()), order);
         } else {
-            double w = Checks.positive("disturbance.frequency.value", d.frequency().si("disturbance.frequency.value"));
+            double w = d.frequency().positiveSi("disturbance.frequency.value");
             band = FrequencyBand.ofRotor(w, w, order);
         }
         Spectrum spectrum = Spectrum.HARMONIC;
@@ -144,7 +144,7 @@ public record Project(String name, String notes, StructureInput structure, Distu
             spectrum = Spectrum.whiteNoise(Checks.positive("disturbance.spectrum.psd.value",
                     d.spectrum().psdUnit().toSi(d.spectrum().psdValue())));
         }
-        return new Excitation(d.kind(), Checks.positive("disturbance.amplitude.value", d.amplitude().si("disturbance.amplitude.value")), band,
+        return new Excitation(d.kind(), d.amplitude().positiveSi("disturbance.amplitude.value"), band,
                 spectrum);
     }
 
@@ -155,7 +155,7 @@ public record Project(String name, String notes, StructureInput structure, Distu
     public OptionalDouble runUpRate() {
         QuantityInput rate = disturbance.runUpRate();
         return rate == null ? OptionalDouble.empty()
-                : OptionalDouble.of(Checks.positive("disturbance.run_up_rate.value", rate.si("disturbance.run_up_rate.value")));
+                : OptionalDouble.of(rate.positiveSi("disturbance.run_up_rate.value"));
     }
 
     /** @return the study the core designs */
@@ -168,18 +168,18 @@ public record Project(String name, String notes, StructureInput structure, Distu
             throw new InvalidInputException("absorber", sizes + " sizes given",
                     "give one of absorber.mass_ratio, absorber.mass and absorber.target");
         } else if (a.target() != null) {
-            sizing = AbsorberSizing.ofTarget(Checks.positive("absorber.target.value", a.target().si("absorber.target.value")),
+            sizing = AbsorberSizing.ofTarget(a.target().positiveSi("absorber.target.value"),
                     Double.isNaN(a.maxMassRatio()) ? AbsorberSizing.DEFAULT_MAX_MASS_RATIO : a.maxMassRatio());
         } else if (!Double.isNaN(a.massRatio())) {
             sizing = AbsorberSizing.ofMassRatio(a.massRatio());
         } else if (a.mass() != null) {
-            sizing = AbsorberSizing.ofMass(Checks.positive("absorber.mass.value", a.mass().si("absorber.mass.value")));
+            sizing = AbsorberSizing.ofMass(a.mass().positiveSi("absorber.mass.value"));
         } else {
             throw InvalidInputException.missing("absorber.mass_ratio",
                     "give absorber.mass_ratio, absorber.mass or absorber.target");
         }
         DesignConstraints constraints = new DesignConstraints(
-                a.strokeLimit() == null ? Double.NaN : Checks.positive("absorber.stroke_limit.value", a.strokeLimit().si("absorber.stroke_limit.value")),
+                a.strokeLimit() == null ? Double.NaN : a.strokeLimit().positiveSi("absorber.stroke_limit.value"),
                 a.fixedDampingRatio(), a.fixedTuningRatio());
         return new DesignStudy(name, s, toExcitation(), a.response(), sizing, a.method(), a.hangsVertically(),
                 a.strokeMargin(), constraints, toRobustness());
@@ -196,7 +196,7 @@ public record Project(String name, String notes, StructureInput structure, Distu
                 : Checks.inRange("robustness.structure_detuning", r.structureDetuningPercent(), 0, 50) / 100;
         double absorberRange = Double.isNaN(r.absorberDetuningPercent()) ? d.absorberRange()
                 : Checks.inRange("robustness.absorber_detuning", r.absorberDetuningPercent(), 0, 50) / 100;
-        double target = r.target() == null ? Double.NaN : Checks.positive("robustness.target.value", r.target().si("robustness.target.value"));
+        double target = r.target() == null ? Double.NaN : r.target().positiveSi("robustness.target.value");
         ToleranceSet set = new ToleranceSet(tolerance("robustness.tolerances.structure_mass", r.structureMass()),
                 tolerance("robustness.tolerances.structure_stiffness", r.structureStiffness()),
                 tolerance("robustness.tolerances.absorber_mass", r.absorberMass()),

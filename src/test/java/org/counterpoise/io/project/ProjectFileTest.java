@@ -66,7 +66,7 @@ class ProjectFileTest {
     @ParameterizedTest
     @CsvSource(delimiter = '|', value = {
         "\"unit\": \"kg\"|\"unit\": \"lb\"|structure.mass.unit: \"lb\" is not allowed; allowed units: kg, g, t",
-        "\"value\": 1000|\"value\": -1000|structure.mass.value: -1000 is not allowed; must be a finite number greater than 0",
+        "\"value\": 1000|\"value\": -1000|structure.mass.value: -1000 kg is not allowed; must be a finite number greater than 0",
         "\"value\": 1000|\"value\": \"heavy\"|structure.mass.value: \"heavy\" is not allowed; must be a number",
         "\"force\"|\"wind\"|disturbance.kind: \"wind\" is not allowed; one of force, unbalance, base-displacement, base-acceleration",
         "\"equal-peak\"|\"guess\"|absorber.method: \"guess\" is not allowed; one of equal-peak, minimum-variance, undamped-single-speed, exact-peak, exact-variance, robust-peak",

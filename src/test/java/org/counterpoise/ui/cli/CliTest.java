@@ -92,7 +92,7 @@ class CliTest {
                 .replace("\"value\": 600", "\"value\": -600"));
         Run r = run("design", bad.toString());
         assertEquals(2, r.code());
-        assertEquals("error: disturbance.amplitude.value: -600 is not allowed; must be a finite number greater than 0",
+        assertEquals("error: disturbance.amplitude.value: -600 N is not allowed; must be a finite number greater than 0",
                 r.err().strip());
 
         Run flag = run("design", "--jsn", "x.json");

@@ -1,6 +1,8 @@
 package org.counterpoise.ui.gui.wizard;
 
 import java.awt.BorderLayout;
+import java.math.BigDecimal;
+import java.math.MathContext;
 import java.util.List;
 import javax.swing.JCheckBox;
 import javax.swing.JComboBox;
@@ -239,8 +241,10 @@ final class GoalStep extends Step {
             Structure s = sizingContext.structure();
             DesignResult d = sizingContext.design();
             if (to == 2) {
-                return d != null && d.study().response() == response.getSelectedItem() ? d.responseAfter().value()
-                        : Double.NaN;
+                // A target is a round figure a person states: start from what the design reaches,
+                // to three significant figures (not 0.00436614115883 mm).
+                return d != null && d.study().response() == response.getSelectedItem()
+                        ? roundedTo3Figures(d.responseAfter().value()) : Double.NaN;
             }
             if (from == 2) {
                 return d == null ? Double.NaN : to == 0 ? d.tuning().massRatio() : d.absorber().mass();
@@ -251,6 +255,11 @@ final class GoalStep extends Step {
             return to == 1 ? v * s.effectiveMass() : v / s.effectiveMass();
         }, i -> i == 0 ? "type the mass ratio" : i == 1 ? "type the absorber mass"
                 : "type the largest " + ((ResponseKind) response.getSelectedItem()).label() + " you accept");
+    }
+
+    private static double roundedTo3Figures(double value) {
+        return Double.isFinite(value) && value > 0
+                ? new BigDecimal(value).round(new MathContext(3)).doubleValue() : value;
     }
 
     @Override
