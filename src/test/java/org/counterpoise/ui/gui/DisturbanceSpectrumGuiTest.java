@@ -70,6 +70,9 @@ class DisturbanceSpectrumGuiTest {
             if (Boolean.getBoolean("counterpoise.gui.required")) {
                 fail("GUI tests must run in CI but no display is available (is Xvfb installed and running?)");
             }
+            // Surefire does not print an aborted class's reason: say it, so a skip is never silent.
+            System.out.println("NOTE: no display: " + DisturbanceSpectrumGuiTest.class.getSimpleName()
+                    + " skipped (run the GUI tests under xvfb-run)");
             Assumptions.abort("no display: the GUI tests are skipped (run them under xvfb-run)");
         }
         System.setProperty("counterpoise.prefs", "memory");
