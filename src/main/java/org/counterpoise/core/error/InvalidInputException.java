@@ -56,6 +56,12 @@ public final class InvalidInputException extends CoreException {
         return value;
     }
 
+    /** @return what is wrong and what is allowed, without the field (to show beside the field itself) */
+    public String problem() {
+        return key() == Messages.MISSING_VALUE ? key().formatWithoutField(field, allowed)
+                : key().formatWithoutField(field, value, allowed);
+    }
+
     /** @return what is allowed */
     public String allowed() {
         return allowed;

@@ -40,4 +40,18 @@ public enum Messages {
     public String format(Object... arguments) {
         return new MessageFormat(pattern.replace("'", "''"), Locale.ROOT).format(arguments);
     }
+
+    /**
+     * Fills the pattern without its leading field slot ("{0}: "), for a message shown beside the
+     * field it concerns; a pattern without that slot is filled whole.
+     * @param arguments values for the slots, in order ({0} is not used)
+     * @return the English message without the field
+     */
+    public String formatWithoutField(Object... arguments) {
+        String field = "{0}: ";
+        if (!pattern.startsWith(field)) {
+            return format(arguments);
+        }
+        return new MessageFormat(pattern.substring(field.length()).replace("'", "''"), Locale.ROOT).format(arguments);
+    }
 }

@@ -145,8 +145,8 @@ final class DesignRun {
     /** @param e a problem: shown under its field, or on the status line when no field owns it */
     void route(InvalidInputException e) {
         if (e.field().equals("absorber.method")) {
-            steps.goal().methodProblem(e.getMessage().substring(e.getMessage().indexOf(':') + 1).strip());
-            steps.goal().markProblem(e.getMessage());
+            steps.goal().methodProblem(e.problem());
+            steps.goal().markProblem(e.problem());
             return;
         }
         for (Step s : steps.all()) {

@@ -124,7 +124,7 @@ final class ProjectDetails extends JPanel {
             dateProblem.setText(" ");
             date.putClientProperty("JComponent.outline", null);
         } catch (InvalidInputException e) {
-            dateProblem.setText(e.getMessage().substring(e.getMessage().indexOf(':') + 1).strip());
+            dateProblem.setText(e.problem());
             date.putClientProperty("JComponent.outline", "error");
             return; // a half-typed date is kept on screen, not saved
         }

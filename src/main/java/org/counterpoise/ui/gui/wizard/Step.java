@@ -188,8 +188,8 @@ abstract class Step {
         if (best == null) {
             return false;
         }
-        best.setProblem(e.getMessage().substring(e.getMessage().indexOf(':') + 1).strip());
-        problem = e.getMessage();
+        best.setProblem(e.problem());
+        problem = e.problem();
         return true;
     }
 

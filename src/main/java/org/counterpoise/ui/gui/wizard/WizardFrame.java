@@ -52,6 +52,8 @@ public final class WizardFrame extends JFrame {
     private final DesignDocument document = new DesignDocument(FileActions.untitled());
     private final TaskBar taskBar = new TaskBar();
     private final JLabel status = new JLabel(" ");
+    /** True while the status line shows why Next is disabled (cleared when that reason goes). */
+    private boolean statusSaysWhyNextIsOff;
     private final JLabel projectName = new JLabel(" ");
     private final DesignRun run;
     private final TaskRunner tasks;
@@ -246,6 +248,7 @@ public final class WizardFrame extends JFrame {
     }
 
     private void say(String text) {
+        statusSaysWhyNextIsOff = false;
         status.setText(text);
         status.setForeground(UIManager.getColor("Label.foreground"));
     }
@@ -283,7 +286,7 @@ public final class WizardFrame extends JFrame {
             String problem = steps.get(i).problem();
             if (problem != null) {
                 reason = "Next is not possible: " + steps.get(i).title() + ": "
-                        + problem.substring(problem.indexOf(':') + 1).strip();
+                        + problem;
                 break;
             }
         }
@@ -295,7 +298,8 @@ public final class WizardFrame extends JFrame {
         if (reason != null) {
             status.setText(reason);
             status.setForeground(PROBLEM);
-        } else if (status.getText().startsWith("Next is not possible")) {
+            statusSaysWhyNextIsOff = true;
+        } else if (statusSaysWhyNextIsOff) {
             say(" ");
         }
     }
