@@ -511,6 +511,11 @@ class WizardGuiTest {
         JLabel dateMessage = (JLabel) onEdt(() -> find(dialog.getContentPane(), "project.date.message"));
         assertTrue(onEdt(dateMessage::getText).contains("YYYY-MM-DD"), onEdt(dateMessage::getText));
         assertEquals("", onEdt(() -> frame.document().project().identity().date()), "a bad date is not taken");
+        assertTrue(onEdt(() -> {
+            dialog.validate();
+            javax.swing.text.JTextComponent engineer = fields.get("project.engineer");
+            return engineer.getWidth() >= engineer.getPreferredSize().width;
+        }), "the fields keep their width while a refused date's message is shown");
         onEdt(() -> {
             fields.get("project.date").setText("2026-11-30");
             return null;

@@ -85,6 +85,8 @@ final class ProjectDetails extends JPanel {
     private static JTextField text(String id, int columns) {
         JTextField f = new JTextField(columns);
         f.setName(id);
+        // GridBagLayout shrinks a field to its minimum (a sliver) once a row is too wide: never below its columns.
+        f.setMinimumSize(f.getPreferredSize());
         return f;
     }
 
@@ -124,7 +126,8 @@ final class ProjectDetails extends JPanel {
             dateProblem.setText(" ");
             date.putClientProperty("JComponent.outline", null);
         } catch (InvalidInputException e) {
-            dateProblem.setText(e.problem());
+            // Wrapped to the form's width, so a long message neither runs off nor squeezes the fields.
+            dateProblem.setText("<html><div style='width:240pt'>" + escapeHtml(e.problem()) + "</div></html>");
             date.putClientProperty("JComponent.outline", "error");
             return; // a half-typed date is kept on screen, not saved
         }
@@ -177,5 +180,9 @@ final class ProjectDetails extends JPanel {
         if (!shown.equals(text) && !shown.strip().equals(text)) {
             c.setText(text);
         }
+    }
+
+    private static String escapeHtml(String text) {
+        return text.replace("&", "&amp;").replace("<", "&lt;").replace(">", "&gt;");
     }
 }
