@@ -360,6 +360,10 @@ class WizardGuiTest {
         JLabel note = (JLabel) find("absorber.methodNote");
         assertTrue(onEdt(note::getText).contains("was emptied"), onEdt(note::getText));
         waitFor(() -> onEdtQuietly(() -> frame.settled() && !frame.nextEnabled()), "Next waits for a target");
+        // The reason stands under the field itself too (a new user saw only "an empty field" there).
+        JLabel fieldMessage = (JLabel) find("absorber.mass_ratio.message");
+        assertTrue(onEdt(fieldMessage::getText).contains("(2 for the structure acceleration) was emptied"),
+                onEdt(fieldMessage::getText));
         assertEquals(null, onEdt(frame::shownResult), "no result for the old target");
         onEdt(() -> {
             size.setText("5");

@@ -202,6 +202,18 @@ public final class QuantityField extends JPanel {
         });
     }
 
+    /**
+     * Empties the field without firing a change, and says under it why until something is typed.
+     * @param why the reason and what to type, e.g. "the target was for a displacement: type a velocity"
+     */
+    public void clearBecause(String why) {
+        quietly(() -> {
+            text.setText("");
+            hint = null;
+            clearedBecause = why;
+        });
+    }
+
     /** Empties the field without firing a change. */
     public void clear() {
         quietly(() -> {

@@ -161,9 +161,11 @@ final class GoalStep extends Step {
         }
         String was = size.textField().getText().strip();
         if (!was.isEmpty()) {
-            size.clear();
-            targetNote = "The target (" + was + " for the " + targetResponse.label() + ") was emptied: type the"
-                    + " largest " + now.label() + " you accept.";
+            // The unit list has already moved to the new quantity here, so the old unit is not named.
+            targetNote = "The target (" + was + " for the " + targetResponse.label() + ") was emptied: type"
+                    + " the largest " + now.label() + " you accept.";
+            // Said under the field itself, where the eye is, and in the step's note.
+            size.clearBecause(Character.toLowerCase(targetNote.charAt(0)) + targetNote.substring(1));
             note(targetNote);
         }
         targetResponse = now;
