@@ -1,7 +1,9 @@
 package org.counterpoise.ui.gui;
 
 import com.formdev.flatlaf.FlatDarkLaf;
+import com.formdev.flatlaf.FlatLaf;
 import com.formdev.flatlaf.FlatLightLaf;
+import java.awt.Color;
 import java.awt.Window;
 import javax.swing.SwingUtilities;
 
@@ -24,5 +26,15 @@ public final class Themes {
         for (Window w : windows) {
             SwingUtilities.updateComponentTreeUI(w);
         }
+    }
+
+    /**
+     * The colour of a problem's words in the current theme: a dark red on light grounds, a light
+     * red on dark ones (the dark red was hard to read on the dark theme). Read it when the words
+     * are shown, so a theme change applies from the next message on.
+     * @return the colour
+     */
+    public static Color problemColour() {
+        return FlatLaf.isLafDark() ? new Color(0xff, 0x8a, 0x7d) : new Color(0xb0, 0x2a, 0x1e);
     }
 }

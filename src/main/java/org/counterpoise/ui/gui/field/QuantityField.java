@@ -17,6 +17,7 @@ import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.units.Unit;
 import org.counterpoise.io.project.QuantityInput;
 import org.counterpoise.io.text.TypedNumbers;
+import org.counterpoise.ui.gui.Themes;
 
 /**
  * A number with a unit selector and an inline message line. What the user typed is never
@@ -27,7 +28,6 @@ import org.counterpoise.io.text.TypedNumbers;
  */
 public final class QuantityField extends JPanel {
     /** The colour of problems said under a field. */
-    public static final Color ERROR = new Color(0xb0, 0x2a, 0x1e);
     private final String fieldId;
     private final JTextField text = new JTextField(9);
     private final JComboBox<Unit> units = new JComboBox<>();
@@ -72,7 +72,7 @@ public final class QuantityField extends JPanel {
         });
         setUnits(choices);
         message.setName(fieldId + ".message");
-        message.setForeground(ERROR);
+        message.setForeground(Themes.problemColour());
         message.setFont(message.getFont().deriveFont(message.getFont().getSize2D() - 1f));
         // A long message wraps within the form instead of running off a small window.
         message.addHierarchyBoundsListener(new java.awt.event.HierarchyBoundsAdapter() {
@@ -265,7 +265,7 @@ public final class QuantityField extends JPanel {
     public void setProblem(String problem) {
         text.putClientProperty("JComponent.outline", problem == null ? null : "error");
         Color muted = UIManager.getColor("Label.disabledForeground");
-        message.setForeground(problem == null && muted != null ? muted : ERROR);
+        message.setForeground(problem == null && muted != null ? muted : Themes.problemColour());
         messageText = problem != null ? problem : hint != null ? hint : " ";
         problemShown = problem != null;
         wrapMessage();

@@ -1,7 +1,6 @@
 package org.counterpoise.ui.gui.wizard;
 
 import java.awt.BorderLayout;
-import java.awt.Color;
 import java.awt.GridBagConstraints;
 import java.awt.GridBagLayout;
 import java.awt.Insets;
@@ -18,6 +17,7 @@ import javax.swing.text.JTextComponent;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.io.project.Project;
 import org.counterpoise.io.project.ProjectIdentity;
+import org.counterpoise.ui.gui.Themes;
 import org.counterpoise.ui.gui.document.DesignDocument;
 import org.counterpoise.ui.gui.document.ProjectEdits;
 
@@ -46,7 +46,6 @@ final class ProjectDetails extends JPanel {
         notes.setLineWrap(true);
         notes.setWrapStyleWord(true);
         dateProblem.setName("project.date.message");
-        dateProblem.setForeground(new Color(0xb0, 0x2a, 0x1e));
         JPanel form = new JPanel(new GridBagLayout());
         form.setBorder(BorderFactory.createEmptyBorder(10, 12, 10, 12));
         int row = 0;
@@ -127,6 +126,7 @@ final class ProjectDetails extends JPanel {
             date.putClientProperty("JComponent.outline", null);
         } catch (InvalidInputException e) {
             // Wrapped to the form's width, so a long message neither runs off nor squeezes the fields.
+            dateProblem.setForeground(Themes.problemColour());
             dateProblem.setText("<html><div style='width:240pt'>" + escapeHtml(e.problem()) + "</div></html>");
             date.putClientProperty("JComponent.outline", "error");
             return; // a half-typed date is kept on screen, not saved

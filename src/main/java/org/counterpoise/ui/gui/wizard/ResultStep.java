@@ -29,6 +29,7 @@ import org.counterpoise.io.chart.ChartFiles;
 import org.counterpoise.io.project.Project;
 import org.counterpoise.io.sheet.SheetContent;
 import org.counterpoise.io.text.DisplayUnits;
+import org.counterpoise.ui.gui.Themes;
 import org.counterpoise.ui.gui.field.QuantityField;
 import org.counterpoise.ui.gui.plot.ChartHost;
 import org.counterpoise.ui.gui.task.TaskRunner;
@@ -201,7 +202,7 @@ final class ResultStep extends Step {
         javax.swing.text.SimpleAttributeSet heading = new javax.swing.text.SimpleAttributeSet();
         javax.swing.text.StyleConstants.setBold(heading, true);
         javax.swing.text.SimpleAttributeSet warning = new javax.swing.text.SimpleAttributeSet();
-        javax.swing.text.StyleConstants.setForeground(warning, QuantityField.ERROR);
+        javax.swing.text.StyleConstants.setForeground(warning, Themes.problemColour());
         javax.swing.text.SimpleAttributeSet plain = new javax.swing.text.SimpleAttributeSet();
         try {
             doc.remove(0, doc.getLength());

@@ -2,7 +2,6 @@ package org.counterpoise.ui.gui.wizard;
 
 import java.awt.BorderLayout;
 import java.awt.CardLayout;
-import java.awt.Color;
 import java.awt.Component;
 import java.awt.Dimension;
 import java.awt.FlowLayout;
@@ -29,6 +28,7 @@ import org.counterpoise.core.model.Structure;
 import org.counterpoise.io.preset.Presets;
 import org.counterpoise.io.project.LoadedProject;
 import org.counterpoise.io.project.Project;
+import org.counterpoise.ui.gui.Themes;
 import org.counterpoise.ui.gui.action.Actions;
 import org.counterpoise.ui.gui.action.EditActions;
 import org.counterpoise.ui.gui.action.FileActions;
@@ -47,7 +47,6 @@ import org.counterpoise.ui.gui.task.TaskRunner;
  * {@link DesignRun} computes results, and the actions do files, undo and redo.
  */
 public final class WizardFrame extends JFrame {
-    private static final Color PROBLEM = new Color(0xb0, 0x2a, 0x1e);
 
     private final DesignDocument document = new DesignDocument(FileActions.untitled());
     private final TaskBar taskBar = new TaskBar();
@@ -149,7 +148,7 @@ public final class WizardFrame extends JFrame {
                         index, selected, focus);
                 label.setBorder(BorderFactory.createEmptyBorder(7, 8, 7, 8));
                 if (s.problem() != null && !selected) {
-                    label.setForeground(PROBLEM);
+                    label.setForeground(Themes.problemColour());
                 }
                 return label;
             }
@@ -297,7 +296,7 @@ public final class WizardFrame extends JFrame {
         next.putValue(Action.SHORT_DESCRIPTION, reason);
         if (reason != null) {
             status.setText(reason);
-            status.setForeground(PROBLEM);
+            status.setForeground(Themes.problemColour());
             statusSaysWhyNextIsOff = true;
         } else if (statusSaysWhyNextIsOff) {
             say(" ");
