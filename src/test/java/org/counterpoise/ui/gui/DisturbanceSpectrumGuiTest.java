@@ -9,7 +9,6 @@ import static org.junit.jupiter.api.Assertions.fail;
 
 import java.awt.Component;
 import java.awt.Container;
-import java.awt.GraphicsEnvironment;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
@@ -42,7 +41,6 @@ import org.counterpoise.io.text.DisplayUnits;
 import org.counterpoise.io.text.QuantityFormat;
 import org.counterpoise.ui.gui.wizard.WizardFrame;
 import org.junit.jupiter.api.AfterEach;
-import org.junit.jupiter.api.Assumptions;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -59,22 +57,7 @@ class DisturbanceSpectrumGuiTest {
 
     @BeforeAll
     static void needsADisplay() throws Exception {
-        boolean display;
-        try {
-            display = !GraphicsEnvironment.isHeadless()
-                    && GraphicsEnvironment.getLocalGraphicsEnvironment().getScreenDevices().length > 0;
-        } catch (Throwable e) {
-            display = false;
-        }
-        if (!display) {
-            if (Boolean.getBoolean("counterpoise.gui.required")) {
-                fail("GUI tests must run in CI but no display is available (is Xvfb installed and running?)");
-            }
-            // Surefire does not print an aborted class's reason: say it, so a skip is never silent.
-            System.out.println("NOTE: no display: " + DisturbanceSpectrumGuiTest.class.getSimpleName()
-                    + " skipped (run the GUI tests under xvfb-run)");
-            Assumptions.abort("no display: the GUI tests are skipped (run them under xvfb-run)");
-        }
+        Edt.requireDisplay(DisturbanceSpectrumGuiTest.class);
         System.setProperty("counterpoise.prefs", "memory");
         SwingUtilities.invokeAndWait(() -> Themes.apply(false));
     }
@@ -289,18 +272,7 @@ class DisturbanceSpectrumGuiTest {
     }
 
     private static Component find(Container root, String name) {
-        for (Component c : root.getComponents()) {
-            if (name.equals(c.getName())) {
-                return c;
-            }
-            if (c instanceof Container sub) {
-                Component found = find(sub, name);
-                if (found != null) {
-                    return found;
-                }
-            }
-        }
-        return null;
+        return Edt.find(root, name);
     }
 
     private static <T> T onEdt(Callable<T> task) throws Exception {
@@ -308,22 +280,10 @@ class DisturbanceSpectrumGuiTest {
     }
 
     private static boolean onEdtQuietly(Callable<Boolean> task) {
-        try {
-            return onEdt(task);
-        } catch (Exception e) {
-            return false;
-        }
+        return Edt.callQuietly(task);
     }
 
-    /** Waits for a condition (generous limit: this checks behaviour, not speed). */
     private static void waitFor(BooleanSupplier condition, String what) throws InterruptedException {
-        long end = System.nanoTime() + 60_000_000_000L;
-        while (System.nanoTime() < end) {
-            if (condition.getAsBoolean()) {
-                return;
-            }
-            Thread.sleep(50);
-        }
-        fail("timed out waiting for: " + what);
+        Edt.waitFor(condition, what);
     }
 }

@@ -1,12 +1,46 @@
 package org.counterpoise.ui.gui;
 
+import static org.junit.jupiter.api.Assertions.fail;
+
+import java.awt.Component;
+import java.awt.Container;
+import java.awt.GraphicsEnvironment;
 import java.util.concurrent.Callable;
 import java.util.concurrent.atomic.AtomicReference;
+import java.util.function.BooleanSupplier;
 import javax.swing.SwingUtilities;
+import org.junit.jupiter.api.Assumptions;
 
-/** Runs test code on the Swing event thread and hands back its result or its exception. */
+/**
+ * What every GUI test needs, in one place: the display rule (skip with a printed note, or fail
+ * when CI requires a display), code run on the Swing event thread, waiting for a condition and
+ * finding a component by name.
+ */
 public final class Edt {
     private Edt() {
+    }
+
+    /**
+     * Skips the test class (with a note on the console: Surefire prints no reason for an aborted
+     * class) when there is no display, or fails when {@code counterpoise.gui.required} is set.
+     * @param testClass the GUI test class
+     */
+    public static void requireDisplay(Class<?> testClass) {
+        boolean display;
+        try {
+            display = !GraphicsEnvironment.isHeadless()
+                    && GraphicsEnvironment.getLocalGraphicsEnvironment().getScreenDevices().length > 0;
+        } catch (Throwable e) {
+            display = false;
+        }
+        if (!display) {
+            if (Boolean.getBoolean("counterpoise.gui.required")) {
+                fail("GUI tests must run in CI but no display is available (is Xvfb installed and running?)");
+            }
+            System.out.println("NOTE: no display: " + testClass.getSimpleName()
+                    + " skipped (run the GUI tests under xvfb-run)");
+            Assumptions.abort("no display: the GUI tests are skipped (run them under xvfb-run)");
+        }
     }
 
     /**
@@ -29,5 +63,54 @@ public final class Edt {
             throw error.get();
         }
         return out.get();
+    }
+
+    /**
+     * @param task a condition evaluated on the event thread
+     * @return its value, or false when it threw
+     */
+    public static boolean callQuietly(Callable<Boolean> task) {
+        try {
+            return call(task);
+        } catch (Exception e) {
+            return false;
+        }
+    }
+
+    /**
+     * Waits for a condition (generous limit: the tests check behaviour, not speed).
+     * @param condition the condition
+     * @param what what is awaited, for the failure message
+     * @throws InterruptedException when interrupted
+     */
+    public static void waitFor(BooleanSupplier condition, String what) throws InterruptedException {
+        long end = System.nanoTime() + 60_000_000_000L;
+        while (System.nanoTime() < end) {
+            if (condition.getAsBoolean()) {
+                return;
+            }
+            Thread.sleep(50);
+        }
+        fail("timed out waiting for: " + what);
+    }
+
+    /**
+     * @param root where to look
+     * @param name the component's name
+     * @return the first component of that name below root (depth first), or null
+     */
+    public static Component find(Container root, String name) {
+        for (Component c : root.getComponents()) {
+            if (name.equals(c.getName())) {
+                return c;
+            }
+            if (c instanceof Container sub) {
+                Component found = find(sub, name);
+                if (found != null) {
+                    return found;
+                }
+            }
+        }
+        return null;
     }
 }

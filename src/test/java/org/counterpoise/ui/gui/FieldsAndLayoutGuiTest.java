@@ -4,12 +4,10 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
-import static org.junit.jupiter.api.Assertions.fail;
 
 import java.awt.Component;
 import java.awt.Container;
 import java.awt.Dimension;
-import java.awt.GraphicsEnvironment;
 import java.awt.Rectangle;
 import java.awt.Robot;
 import java.awt.event.KeyEvent;
@@ -20,7 +18,6 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
-import java.util.concurrent.atomic.AtomicReference;
 import java.util.function.BooleanSupplier;
 import javax.imageio.ImageIO;
 import javax.swing.AbstractButton;
@@ -38,7 +35,6 @@ import org.counterpoise.core.units.Unit;
 import org.counterpoise.io.preset.Presets;
 import org.counterpoise.ui.gui.wizard.WizardFrame;
 import org.junit.jupiter.api.AfterEach;
-import org.junit.jupiter.api.Assumptions;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 
@@ -58,26 +54,10 @@ class FieldsAndLayoutGuiTest {
 
     @BeforeAll
     static void needsADisplay() throws Exception {
-        if (GraphicsEnvironment.isHeadless() || !screens()) {
-            if (Boolean.getBoolean("counterpoise.gui.required")) {
-                fail("GUI tests must run in CI but no display is available (is Xvfb installed and running?)");
-            }
-            // Surefire does not print an aborted class's reason: say it, so a skip is never silent.
-            System.out.println("NOTE: no display: " + FieldsAndLayoutGuiTest.class.getSimpleName()
-                    + " skipped (run the GUI tests under xvfb-run)");
-            Assumptions.abort("no display: the GUI tests are skipped (run them under xvfb-run)");
-        }
+        Edt.requireDisplay(FieldsAndLayoutGuiTest.class);
         System.setProperty("counterpoise.prefs", "memory");
         Files.createDirectories(SHOTS);
         SwingUtilities.invokeAndWait(() -> Themes.apply(false));
-    }
-
-    private static boolean screens() {
-        try {
-            return GraphicsEnvironment.getLocalGraphicsEnvironment().getScreenDevices().length > 0;
-        } catch (Throwable e) {
-            return false;
-        }
     }
 
     @AfterEach
@@ -437,18 +417,7 @@ class FieldsAndLayoutGuiTest {
     }
 
     private static Component find(Container root, String name) {
-        for (Component c : root.getComponents()) {
-            if (name.equals(c.getName())) {
-                return c;
-            }
-            if (c instanceof Container sub) {
-                Component found = find(sub, name);
-                if (found != null) {
-                    return found;
-                }
-            }
-        }
-        return null;
+        return Edt.find(root, name);
     }
 
     private void screenshot(String name) throws Exception {
@@ -459,38 +428,14 @@ class FieldsAndLayoutGuiTest {
     }
 
     private static <T> T onEdt(Callable<T> task) throws Exception {
-        AtomicReference<T> out = new AtomicReference<>();
-        AtomicReference<Exception> error = new AtomicReference<>();
-        SwingUtilities.invokeAndWait(() -> {
-            try {
-                out.set(task.call());
-            } catch (Exception e) {
-                error.set(e);
-            }
-        });
-        if (error.get() != null) {
-            throw error.get();
-        }
-        return out.get();
+        return Edt.call(task);
     }
 
     private static boolean onEdtQuietly(Callable<Boolean> task) {
-        try {
-            return onEdt(task);
-        } catch (Exception e) {
-            return false;
-        }
+        return Edt.callQuietly(task);
     }
 
-    /** Waits for a condition (generous limit: this checks behaviour, not speed). */
     private static void waitFor(BooleanSupplier condition, String what) throws InterruptedException {
-        long end = System.nanoTime() + 60_000_000_000L;
-        while (System.nanoTime() < end) {
-            if (condition.getAsBoolean()) {
-                return;
-            }
-            Thread.sleep(50);
-        }
-        fail("timed out waiting for: " + what);
+        Edt.waitFor(condition, what);
     }
 }

@@ -4,13 +4,11 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.fail;
 
 import java.awt.Frame;
-import java.awt.GraphicsEnvironment;
 import java.nio.file.Path;
 import java.util.concurrent.atomic.AtomicReference;
 import javax.swing.SwingUtilities;
 import org.counterpoise.io.project.ProjectReader;
 import org.counterpoise.ui.gui.wizard.WizardFrame;
-import org.junit.jupiter.api.Assumptions;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 
@@ -18,22 +16,7 @@ import org.junit.jupiter.api.Test;
 class OpenFromCommandLineTest {
     @BeforeAll
     static void needsADisplay() {
-        boolean display;
-        try {
-            display = !GraphicsEnvironment.isHeadless()
-                    && GraphicsEnvironment.getLocalGraphicsEnvironment().getScreenDevices().length > 0;
-        } catch (Throwable e) {
-            display = false;
-        }
-        if (!display) {
-            if (Boolean.getBoolean("counterpoise.gui.required")) {
-                fail("GUI tests must run in CI but no display is available");
-            }
-            // Surefire does not print an aborted class's reason: say it, so a skip is never silent.
-            System.out.println("NOTE: no display: " + OpenFromCommandLineTest.class.getSimpleName()
-                    + " skipped (run the GUI tests under xvfb-run)");
-            Assumptions.abort("no display: the GUI tests are skipped (run them under xvfb-run)");
-        }
+        Edt.requireDisplay(OpenFromCommandLineTest.class);
         System.setProperty("counterpoise.prefs", "memory");
     }
 

@@ -8,7 +8,6 @@ import static org.junit.jupiter.api.Assertions.fail;
 
 import java.awt.Component;
 import java.awt.Container;
-import java.awt.GraphicsEnvironment;
 import java.awt.Rectangle;
 import java.awt.Robot;
 import java.awt.image.BufferedImage;
@@ -31,7 +30,6 @@ import org.counterpoise.io.project.ProjectReader;
 import org.counterpoise.io.text.QuantityFormat;
 import org.counterpoise.ui.gui.wizard.WizardFrame;
 import org.junit.jupiter.api.AfterEach;
-import org.junit.jupiter.api.Assumptions;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -47,30 +45,10 @@ class WizardGuiTest {
 
     @BeforeAll
     static void needsADisplay() throws Exception {
-        if (!displayAvailable()) {
-            if (Boolean.getBoolean("counterpoise.gui.required")) {
-                fail("GUI tests must run in CI but no display is available (is Xvfb installed and running?)");
-            }
-            // Surefire does not print an aborted class's reason: say it, so a skip is never silent.
-            System.out.println("NOTE: no display: " + WizardGuiTest.class.getSimpleName()
-                    + " skipped (run the GUI tests under xvfb-run)");
-            Assumptions.abort("no display: the GUI tests are skipped (run them under xvfb-run)");
-        }
+        Edt.requireDisplay(WizardGuiTest.class);
         System.setProperty("counterpoise.prefs", "memory");
         Files.createDirectories(SHOTS);
         SwingUtilities.invokeAndWait(() -> Themes.apply(false));
-    }
-
-    /** A display the JVM can open (the headless flag alone is not enough: DISPLAY may be unset or dead). */
-    private static boolean displayAvailable() {
-        if (GraphicsEnvironment.isHeadless()) {
-            return false;
-        }
-        try {
-            return GraphicsEnvironment.getLocalGraphicsEnvironment().getScreenDevices().length > 0;
-        } catch (Throwable e) {
-            return false;
-        }
     }
 
     @AfterEach
@@ -649,18 +627,7 @@ class WizardGuiTest {
     }
 
     private static Component find(Container root, String name) {
-        for (Component c : root.getComponents()) {
-            if (name.equals(c.getName())) {
-                return c;
-            }
-            if (c instanceof Container sub) {
-                Component found = find(sub, name);
-                if (found != null) {
-                    return found;
-                }
-            }
-        }
-        return null;
+        return Edt.find(root, name);
     }
 
     private void screenshot(String name) throws Exception {
@@ -675,22 +642,10 @@ class WizardGuiTest {
     }
 
     private static boolean onEdtQuietly(Callable<Boolean> task) {
-        try {
-            return onEdt(task);
-        } catch (Exception e) {
-            return false;
-        }
+        return Edt.callQuietly(task);
     }
 
-    /** Waits for a condition (generous limit: this checks behaviour, not speed). */
     private static void waitFor(BooleanSupplier condition, String what) throws InterruptedException {
-        long end = System.nanoTime() + 60_000_000_000L;
-        while (System.nanoTime() < end) {
-            if (condition.getAsBoolean()) {
-                return;
-            }
-            Thread.sleep(50);
-        }
-        fail("timed out waiting for: " + what);
+        Edt.waitFor(condition, what);
     }
 }

@@ -4,12 +4,10 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
-import static org.junit.jupiter.api.Assertions.fail;
 
 import java.awt.BorderLayout;
 import java.awt.Component;
 import java.awt.Container;
-import java.awt.GraphicsEnvironment;
 import java.awt.Toolkit;
 import java.awt.event.KeyEvent;
 import java.awt.event.MouseEvent;
@@ -17,7 +15,6 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.Callable;
-import java.util.concurrent.atomic.AtomicReference;
 import java.util.function.BooleanSupplier;
 import javax.swing.InputMap;
 import javax.swing.JComponent;
@@ -32,10 +29,10 @@ import org.counterpoise.core.design.Designer;
 import org.counterpoise.io.chart.ChartFactory;
 import org.counterpoise.io.chart.ChartTheme;
 import org.counterpoise.io.project.ProjectReader;
+import org.counterpoise.ui.gui.Edt;
 import org.counterpoise.ui.gui.Themes;
 import org.counterpoise.ui.gui.wizard.WizardFrame;
 import org.junit.jupiter.api.AfterEach;
-import org.junit.jupiter.api.Assumptions;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.knowm.xchart.XYChart;
@@ -54,22 +51,7 @@ class ChartHostGuiTest {
 
     @BeforeAll
     static void needsADisplay() throws Exception {
-        boolean display;
-        try {
-            display = !GraphicsEnvironment.isHeadless()
-                    && GraphicsEnvironment.getLocalGraphicsEnvironment().getScreenDevices().length > 0;
-        } catch (Throwable e) {
-            display = false;
-        }
-        if (!display) {
-            if (Boolean.getBoolean("counterpoise.gui.required")) {
-                fail("GUI tests must run in CI but no display is available (is Xvfb installed and running?)");
-            }
-            // Surefire does not print an aborted class's reason: say it, so a skip is never silent.
-            System.out.println("NOTE: no display: " + ChartHostGuiTest.class.getSimpleName()
-                    + " skipped (run the GUI tests under xvfb-run)");
-            Assumptions.abort("no display: the GUI tests are skipped (run them under xvfb-run)");
-        }
+        Edt.requireDisplay(ChartHostGuiTest.class);
         System.setProperty("counterpoise.prefs", "memory");
         SwingUtilities.invokeAndWait(() -> Themes.apply(false));
     }
@@ -280,38 +262,14 @@ class ChartHostGuiTest {
     }
 
     private static <T> T onEdt(Callable<T> task) throws Exception {
-        AtomicReference<T> out = new AtomicReference<>();
-        AtomicReference<Exception> error = new AtomicReference<>();
-        SwingUtilities.invokeAndWait(() -> {
-            try {
-                out.set(task.call());
-            } catch (Exception e) {
-                error.set(e);
-            }
-        });
-        if (error.get() != null) {
-            throw error.get();
-        }
-        return out.get();
+        return Edt.call(task);
     }
 
     private static boolean onEdtQuietly(Callable<Boolean> task) {
-        try {
-            return onEdt(task);
-        } catch (Exception e) {
-            return false;
-        }
+        return Edt.callQuietly(task);
     }
 
-    /** Waits for a condition (generous limit: this checks behaviour, not speed). */
     private static void waitFor(BooleanSupplier condition, String what) throws InterruptedException {
-        long end = System.nanoTime() + 60_000_000_000L;
-        while (System.nanoTime() < end) {
-            if (condition.getAsBoolean()) {
-                return;
-            }
-            Thread.sleep(50);
-        }
-        fail("timed out waiting for: " + what);
+        Edt.waitFor(condition, what);
     }
 }
