@@ -1,7 +1,7 @@
 package org.counterpoise.testing;
 
 import org.apache.commons.math3.analysis.integration.IterativeLegendreGaussIntegrator;
-import org.counterpoise.core.response.TransferFunction;
+import org.counterpoise.core.rational.TransferFunction;
 
 /**
  * An independent route to the mean square of a response to white noise: Gauss-Legendre

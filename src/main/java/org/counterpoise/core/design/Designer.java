@@ -206,11 +206,11 @@ public final class Designer {
      */
     static double[] singleSpeedBand(ExcitationKind kind, ResponseKind response, double mu, double zeta1, double g0) {
         Tuning probe = org.counterpoise.core.tuning.DenHartogEqualPeak.tuning(mu);
-        org.counterpoise.core.response.TransferFunction h =
+        org.counterpoise.core.rational.TransferFunction h =
                 org.counterpoise.core.response.TransferFunctions.of(kind, response, zeta1, probe);
         double[][] choices = {{0.0, Double.POSITIVE_INFINITY}, {0.0, g0}, {0.5 * g0, 2 * g0}};
         for (double[] c : choices) {
-            if (Double.isFinite(org.counterpoise.core.response.PeakFinder.over(h, c[0], c[1]).magnitude())) {
+            if (Double.isFinite(org.counterpoise.core.rational.PeakFinder.over(h, c[0], c[1]).magnitude())) {
                 return c;
             }
         }

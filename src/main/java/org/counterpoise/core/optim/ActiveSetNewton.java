@@ -5,7 +5,7 @@ import org.apache.commons.math3.linear.Array2DRowRealMatrix;
 import org.apache.commons.math3.linear.ArrayRealVector;
 import org.apache.commons.math3.linear.LUDecomposition;
 import org.apache.commons.math3.linear.RealVector;
-import org.counterpoise.core.response.TransferFunction;
+import org.counterpoise.core.rational.TransferFunction;
 import org.counterpoise.core.response.TuningSensitivity;
 
 /**

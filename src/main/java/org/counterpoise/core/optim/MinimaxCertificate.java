@@ -2,8 +2,8 @@ package org.counterpoise.core.optim;
 
 import java.util.ArrayList;
 import java.util.List;
-import org.counterpoise.core.response.PeakFinder;
-import org.counterpoise.core.response.TransferFunction;
+import org.counterpoise.core.rational.PeakFinder;
+import org.counterpoise.core.rational.TransferFunction;
 import org.counterpoise.core.response.TuningSensitivity;
 
 /**

@@ -5,7 +5,7 @@ import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.model.ExcitationKind;
 import org.counterpoise.core.model.Tuning;
 import org.counterpoise.core.response.ResponseKind;
-import org.counterpoise.core.response.TransferFunction;
+import org.counterpoise.core.rational.TransferFunction;
 import org.counterpoise.core.response.TransferFunctions;
 import org.counterpoise.core.response.TuningSensitivity;
 
@@ -133,7 +133,7 @@ public record PeakProblem(ExcitationKind excitation, ResponseKind response, doub
      * @return the peak non-dimensional stroke over the band for the design (f, zeta)
      */
     public double strokePeak(double f, double zeta) {
-        return org.counterpoise.core.response.PeakFinder.over(
+        return org.counterpoise.core.rational.PeakFinder.over(
                 TransferFunctions.of(excitation, ResponseKind.STROKE, structureDamping, tuning(f, zeta)),
                 bandLow, bandHigh).magnitude();
     }

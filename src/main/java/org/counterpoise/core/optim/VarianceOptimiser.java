@@ -4,7 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.model.Tuning;
-import org.counterpoise.core.response.MeanSquare;
+import org.counterpoise.core.rational.MeanSquare;
 import org.counterpoise.core.tuning.ClosedForm;
 import org.counterpoise.core.tuning.ClosedForms;
 import org.counterpoise.core.tuning.DenHartogEqualPeak;

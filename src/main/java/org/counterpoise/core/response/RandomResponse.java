@@ -1,5 +1,6 @@
 package org.counterpoise.core.response;
 
+import org.counterpoise.core.rational.MeanSquare;
 import org.counterpoise.core.model.ExcitationKind;
 import org.counterpoise.core.model.Structure;
 import org.counterpoise.core.model.Tuning;

@@ -1,5 +1,8 @@
 package org.counterpoise.core.response;
 
+import org.counterpoise.core.rational.TransferFunction;
+import org.counterpoise.core.rational.PeakFinder;
+import org.counterpoise.core.rational.Peak;
 import java.util.EnumMap;
 import java.util.Map;
 import org.counterpoise.core.model.ExcitationKind;

@@ -1,5 +1,7 @@
 package org.counterpoise.core.response;
 
+import org.counterpoise.core.rational.TransferFunction;
+import org.counterpoise.core.rational.RealPolynomials;
 import org.counterpoise.core.model.ExcitationKind;
 import org.counterpoise.core.model.Tuning;
 
@@ -43,7 +45,7 @@ public final class TransferFunctions {
         double[][] nd = tuning == null
                 ? build(excitation, response, structureDamping, 0.0, null)
                 : build(excitation, response, structureDamping, tuning.massRatio(), absorberPolynomial(tuning));
-        return new TransferFunction(nd[0], nd[1]);
+        return TransferFunction.of(nd[0], nd[1]);
     }
 
     /**

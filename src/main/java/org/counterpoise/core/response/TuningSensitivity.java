@@ -1,5 +1,6 @@
 package org.counterpoise.core.response;
 
+import org.counterpoise.core.rational.RealPolynomials;
 import org.counterpoise.core.model.Tuning;
 
 /**

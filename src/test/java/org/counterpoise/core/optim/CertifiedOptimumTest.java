@@ -18,8 +18,8 @@ import org.apache.commons.math3.optim.nonlinear.scalar.noderiv.NelderMeadSimplex
 import org.apache.commons.math3.optim.nonlinear.scalar.noderiv.SimplexOptimizer;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.model.ExcitationKind;
-import org.counterpoise.core.response.MeanSquare;
-import org.counterpoise.core.response.PeakFinder;
+import org.counterpoise.core.rational.MeanSquare;
+import org.counterpoise.core.rational.PeakFinder;
 import org.counterpoise.core.response.ResponseKind;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;

@@ -1,5 +1,6 @@
 package org.counterpoise.core.response;
 
+import org.counterpoise.core.rational.TransferFunction;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
 import org.counterpoise.core.model.ExcitationKind;

@@ -17,9 +17,9 @@ import org.counterpoise.core.model.ExcitationKind;
 import org.counterpoise.core.model.FrequencyBand;
 import org.counterpoise.core.model.Structure;
 import org.counterpoise.core.model.Tuning;
-import org.counterpoise.core.response.PeakFinder;
+import org.counterpoise.core.rational.PeakFinder;
 import org.counterpoise.core.response.ResponseKind;
-import org.counterpoise.core.response.TransferFunction;
+import org.counterpoise.core.rational.TransferFunction;
 import org.counterpoise.core.response.TransferFunctions;
 
 /** Properties over random mass ratios and damping (jqwik). */

@@ -6,7 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import org.counterpoise.core.model.ExcitationKind;
 import org.counterpoise.core.model.Tuning;
 import org.counterpoise.core.response.ResponseKind;
-import org.counterpoise.core.response.TransferFunction;
+import org.counterpoise.core.rational.TransferFunction;
 import org.counterpoise.core.response.TransferFunctions;
 import org.counterpoise.testing.Quadrature;
 import org.junit.jupiter.api.Test;

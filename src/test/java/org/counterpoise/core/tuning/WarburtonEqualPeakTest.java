@@ -5,7 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import org.counterpoise.core.model.ExcitationKind;
 import org.counterpoise.core.model.Tuning;
-import org.counterpoise.core.response.PeakFinder;
+import org.counterpoise.core.rational.PeakFinder;
 import org.counterpoise.core.response.ResponseKind;
 import org.counterpoise.core.response.TransferFunctions;
 import org.junit.jupiter.api.Test;

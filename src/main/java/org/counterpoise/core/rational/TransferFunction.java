@@ -1,4 +1,4 @@
-package org.counterpoise.core.response;
+package org.counterpoise.core.rational;
 
 /**
  * A non-dimensional frequency response H(s) = N(s) / D(s) in s = i g, g = omega / omega1, with
@@ -10,7 +10,16 @@ public final class TransferFunction {
     private final double[] magnitudeNumerator;
     private final double[] magnitudeDenominator;
 
-    TransferFunction(double[] numerator, double[] denominator) {
+    /**
+     * @param numerator coefficients of N(s), lowest power first
+     * @param denominator coefficients of D(s), lowest power first
+     * @return N(s) / D(s), with common factors of s cancelled
+     */
+    public static TransferFunction of(double[] numerator, double[] denominator) {
+        return new TransferFunction(numerator.clone(), denominator.clone());
+    }
+
+    private TransferFunction(double[] numerator, double[] denominator) {
         // Cancel common factors of s exactly; they come only from exact shifts.
         int common = Math.min(RealPolynomials.lowestPower(numerator), RealPolynomials.lowestPower(denominator));
         this.numerator = RealPolynomials.trim(RealPolynomials.unshift(numerator, common));

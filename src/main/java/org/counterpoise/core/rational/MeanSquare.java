@@ -1,4 +1,4 @@
-package org.counterpoise.core.response;
+package org.counterpoise.core.rational;
 
 import org.apache.commons.math3.linear.Array2DRowRealMatrix;
 import org.apache.commons.math3.linear.ArrayRealVector;

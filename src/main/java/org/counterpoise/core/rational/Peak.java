@@ -1,4 +1,4 @@
-package org.counterpoise.core.response;
+package org.counterpoise.core.rational;
 
 /**
  * The largest magnitude of a response over a range of frequencies.

@@ -1,4 +1,4 @@
-package org.counterpoise.core.response;
+package org.counterpoise.core.rational;
 
 import java.util.Arrays;
 
@@ -13,7 +13,7 @@ import java.util.Arrays;
  * returned among the critical points; callers that look for extrema of a function whose
  * stationary points are the roots of p use both lists (see {@link PeakFinder}).
  */
-final class RealRoots {
+public final class RealRoots {
     private static final int MAX_ITERATIONS = 200;
 
     private RealRoots() {
@@ -25,7 +25,7 @@ final class RealRoots {
      * @param hi interval end (may be +infinity: replaced by Cauchy's bound on the roots)
      * @return the sign-changing roots of p in [lo, hi] followed by the roots of p' in it
      */
-    static double[] rootsAndCriticalPoints(double[] p, double lo, double hi) {
+    public static double[] rootsAndCriticalPoints(double[] p, double lo, double hi) {
         double[] poly = RealPolynomials.trim(p);
         double top = Math.min(hi, cauchyBound(poly));
         if (!(top >= lo)) {
@@ -39,7 +39,7 @@ final class RealRoots {
     }
 
     /** @return sorted real roots of p in [lo, hi] where p changes sign or vanishes exactly */
-    static double[] roots(double[] p, double lo, double hi) {
+    public static double[] roots(double[] p, double lo, double hi) {
         double[] poly = RealPolynomials.trim(p);
         int degree = poly.length - 1;
         if (degree < 1) {

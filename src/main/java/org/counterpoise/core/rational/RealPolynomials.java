@@ -1,4 +1,4 @@
-package org.counterpoise.core.response;
+package org.counterpoise.core.rational;
 
 import java.util.Arrays;
 
@@ -7,11 +7,11 @@ import java.util.Arrays;
  * (c[0] + c[1] s + c[2] s^2 ...). Multiplying by s is an exact shift, so factors of s that cancel
  * between numerator and denominator leave exact zeros that {@link #lowestPower} can count.
  */
-final class RealPolynomials {
+public final class RealPolynomials {
     private RealPolynomials() {
     }
 
-    static double[] multiply(double[] a, double[] b) {
+    public static double[] multiply(double[] a, double[] b) {
         double[] out = new double[a.length + b.length - 1];
         for (int i = 0; i < a.length; i++) {
             for (int j = 0; j < b.length; j++) {
@@ -21,7 +21,7 @@ final class RealPolynomials {
         return out;
     }
 
-    static double[] add(double[] a, double[] b) {
+    public static double[] add(double[] a, double[] b) {
         double[] out = new double[Math.max(a.length, b.length)];
         for (int i = 0; i < out.length; i++) {
             out[i] = (i < a.length ? a[i] : 0.0) + (i < b.length ? b[i] : 0.0);
@@ -29,7 +29,7 @@ final class RealPolynomials {
         return out;
     }
 
-    static double[] scale(double[] a, double factor) {
+    public static double[] scale(double[] a, double factor) {
         double[] out = new double[a.length];
         for (int i = 0; i < a.length; i++) {
             out[i] = a[i] * factor;
@@ -38,14 +38,14 @@ final class RealPolynomials {
     }
 
     /** @return a times s^power (an exact shift) */
-    static double[] shift(double[] a, int power) {
+    public static double[] shift(double[] a, int power) {
         double[] out = new double[a.length + power];
         System.arraycopy(a, 0, out, power, a.length);
         return out;
     }
 
     /** @return the power of the lowest non-zero coefficient (a.length for the zero polynomial) */
-    static int lowestPower(double[] a) {
+    public static int lowestPower(double[] a) {
         int k = 0;
         while (k < a.length && a[k] == 0.0) {
             k++;
@@ -54,12 +54,12 @@ final class RealPolynomials {
     }
 
     /** @return a divided by s^power, where the lowest power coefficients are exact zeros */
-    static double[] unshift(double[] a, int power) {
+    public static double[] unshift(double[] a, int power) {
         return Arrays.copyOfRange(a, power, a.length);
     }
 
     /** @return a without leading (highest power) exact zeros; at least one coefficient */
-    static double[] trim(double[] a) {
+    public static double[] trim(double[] a) {
         int n = a.length;
         while (n > 1 && a[n - 1] == 0.0) {
             n--;
@@ -68,7 +68,7 @@ final class RealPolynomials {
     }
 
     /** Horner evaluation at a real point. */
-    static double value(double[] a, double x) {
+    public static double value(double[] a, double x) {
         double v = 0.0;
         for (int i = a.length - 1; i >= 0; i--) {
             v = v * x + a[i];
@@ -77,7 +77,7 @@ final class RealPolynomials {
     }
 
     /** Horner evaluation of the derivative at a real point. */
-    static double derivativeValue(double[] a, double x) {
+    public static double derivativeValue(double[] a, double x) {
         double v = 0.0;
         for (int i = a.length - 1; i >= 1; i--) {
             v = v * x + i * a[i];
@@ -89,7 +89,7 @@ final class RealPolynomials {
      * Evaluates the polynomial at s = i g.
      * @return {real part, imaginary part}
      */
-    static double[] valueOnImaginaryAxis(double[] a, double g) {
+    public static double[] valueOnImaginaryAxis(double[] a, double g) {
         // Horner in complex arithmetic with s = i g.
         double re = 0.0;
         double im = 0.0;
@@ -106,7 +106,7 @@ final class RealPolynomials {
      * |N(i g)|^2 as a polynomial in x = g^2: with E(x) = sum_j n_2j (-1)^j x^j and
      * O(x) = sum_j n_(2j+1) (-1)^j x^j, N(i g) = E + i g O, so |N|^2 = E^2 + x O^2.
      */
-    static double[] magnitudeSquaredInX(double[] n) {
+    public static double[] magnitudeSquaredInX(double[] n) {
         int half = (n.length + 1) / 2;
         double[] even = new double[half];
         double[] odd = new double[half];
@@ -127,7 +127,7 @@ final class RealPolynomials {
      * cancels exactly when deg P = deg Q, instead of leaving round-off that would add a spurious
      * huge root.
      */
-    static double[] quotientDerivativeNumerator(double[] p, double[] q) {
+    public static double[] quotientDerivativeNumerator(double[] p, double[] q) {
         int size = Math.max(1, p.length + q.length - 2);
         double[] r = new double[size];
         for (int i = 0; i < p.length; i++) {

@@ -1,4 +1,4 @@
-package org.counterpoise.core.response;
+package org.counterpoise.core.rational;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -6,6 +6,8 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.util.Random;
 import org.counterpoise.core.model.ExcitationKind;
 import org.counterpoise.core.model.Tuning;
+import org.counterpoise.core.response.ResponseKind;
+import org.counterpoise.core.response.TransferFunctions;
 import org.junit.jupiter.api.Test;
 
 /** The exact peak search against an independent brute force: a dense grid refined by golden section. */
