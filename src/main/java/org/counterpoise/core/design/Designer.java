@@ -8,6 +8,8 @@ import java.util.Map;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.error.NotFoundException;
 import org.counterpoise.core.error.Warning;
+import org.counterpoise.core.error.WarningKind;
+import org.counterpoise.core.error.WarningParameter.PeakBand;
 import org.counterpoise.core.model.Absorber;
 import org.counterpoise.core.model.Excitation;
 import org.counterpoise.core.model.ExcitationKind;
@@ -20,6 +22,7 @@ import org.counterpoise.core.robust.ToleratedDetuning;
 import org.counterpoise.core.response.ResponseKind;
 import org.counterpoise.core.response.ResponsePeak;
 import org.counterpoise.core.response.SystemResponse;
+import org.counterpoise.core.optim.ActiveConstraint;
 import org.counterpoise.core.optim.HInfinityOptimiser;
 import org.counterpoise.core.optim.MinimumMass;
 import org.counterpoise.core.optim.PeakOptimum;
@@ -29,6 +32,7 @@ import org.counterpoise.core.optim.VarianceOptimum;
 import org.counterpoise.core.response.ResponseScale;
 import org.counterpoise.core.robust.Mistuning;
 import org.counterpoise.core.robust.RobustDesign;
+import org.counterpoise.core.tuning.Assumption;
 import org.counterpoise.core.tuning.ClosedForm;
 import org.counterpoise.core.tuning.ClosedForms;
 import org.counterpoise.core.tuning.UndampedAbsorber;
@@ -58,11 +62,8 @@ public final class Designer {
         Tuning tuning = chosen.tuning();
         double mu = tuning.massRatio();
         Absorber absorber = Absorber.of(structure, tuning);
-        if (structure.dampingRatio() > 0 && chosen.note().contains(ClosedForms.UNDAMPED_STRUCTURE)) {
-            warnings.add(new Warning("DAMPED_STRUCTURE", String.format(Locale.ROOT,
-                    "The %s closed form assumes an undamped structure; with the structure's damping ratio of"
-                            + " %.3g the tuning is close to, but not exactly, the optimum.",
-                    study.method().id(), structure.dampingRatio())));
+        if (structure.dampingRatio() > 0 && chosen.assumptions().contains(Assumption.UNDAMPED_STRUCTURE)) {
+            warnings.add(Warning.of(WarningKind.DAMPED_STRUCTURE, study.method().id(), structure.dampingRatio()));
         }
 
         SystemResponse bare = new SystemResponse(structure, null, excitation.kind(), excitation.amplitude());
@@ -146,8 +147,7 @@ public final class Designer {
                 RobustDesign robust = RobustnessAnalysis.robustDesign(new Mistuning(structure, excitation,
                         study.response()), nominal, r.structureRange(), r.absorberRange());
                 if (!robust.converged()) {
-                    warnings.add(new Warning("OPTIMUM_NOT_VERIFIED", "The robust-design search stopped at its"
-                            + " evaluation limit; the design is the best found."));
+                    warnings.add(Warning.of(WarningKind.OPTIMUM_NOT_VERIFIED));
                 }
                 yield new ClosedForm(robust.tuning(), EXACT_SOURCE, String.format(Locale.ROOT,
                         "least worst case with the structure's frequency within +/-%.3g %% and the absorber's within"
@@ -165,6 +165,11 @@ public final class Designer {
             }
         };
     }
+
+    /** The method note's words for an active constraint (the note is read by people, never decided on). */
+    private static final Map<ActiveConstraint, String> CONSTRAINT_NOTES = Map.of(ActiveConstraint.STROKE_LIMIT,
+            "stroke limit", ActiveConstraint.FIXED_DAMPING, "fixed damping", ActiveConstraint.FIXED_TUNING,
+            "fixed tuning", ActiveConstraint.TUNING_SEARCH_BOUND, "tuning-ratio search bound");
 
     private static final String NOT_FOUND_ADVICE = "choose another method (equal-peak or robust-peak), or change"
             + " the band or the mass ratio slightly";
@@ -228,17 +233,13 @@ public final class Designer {
         }
         if (study.excitation().band().isSingle()) {
             PeakProblem used = peakProblem(study, o.tuning().massRatio());
-            String over = used.allFrequencies() ? "over all frequencies, which also covers start-up and mistuning"
-                    : used.bandLow() == 0 ? "over the speeds passed on start-up, up to the forcing frequency (the"
-                            + " response has no finite peak over all frequencies)"
-                    : "over the octave either side of the forcing frequency (the response has no finite peak over"
-                            + " all frequencies or over start-up)";
-            warnings.add(new Warning("SINGLE_FREQUENCY_EXACT", "The disturbance has one frequency: the exact-peak"
-                    + " design minimises the peak " + over + "; for the least response at that one frequency choose"
-                    + " undamped-single-speed."));
+            PeakBand over = used.allFrequencies() ? PeakBand.ALL_FREQUENCIES
+                    : used.bandLow() == 0 ? PeakBand.RUN_UP : PeakBand.OCTAVE;
+            warnings.add(Warning.of(WarningKind.SINGLE_FREQUENCY_EXACT, over.name()));
         }
         String note = "maxima equal at the optimum: " + o.activeSet()
-                + (o.activeConstraint().equals("none") ? "" : "; active constraint: " + o.activeConstraint());
+                + (o.activeConstraint() == ActiveConstraint.NONE ? "" : "; active constraint: "
+                        + CONSTRAINT_NOTES.get(o.activeConstraint()));
         return new ClosedForm(o.tuning(), EXACT_SOURCE, note);
     }
 
@@ -250,9 +251,7 @@ public final class Designer {
         PeakProblem problem = peakProblem(study, sizing.maxMassRatio());
         MinimumMass.Result r = MinimumMass.find(problem, sizing.target() / scale, sizing.maxMassRatio());
         if (!r.reachable()) {
-            warnings.add(new Warning("TARGET_NOT_MET", String.format(Locale.ROOT, "No absorber up to a mass ratio of"
-                    + " %.3g meets the target; the design shown is the best at that mass ratio.",
-                    sizing.maxMassRatio())));
+            warnings.add(Warning.of(WarningKind.TARGET_NOT_MET, sizing.maxMassRatio()));
         }
         ClosedForm exact = exactPeakResult(study, r.optimum(), warnings);
         return new ClosedForm(exact.tuning(), exact.source(), (r.reachable() ? "lightest absorber that meets the"
@@ -273,46 +272,31 @@ public final class Designer {
             ResponsePeak before, ResponsePeak after, ResponsePeak strokeRunUp, double[] coupled) {
         FrequencyBand band = study.excitation().band();
         if (before.unbounded()) {
-            warnings.add(new Warning("RESONANT_UNDAMPED", "The bare structure is undamped and resonant within the"
-                    + " forcing band, so its response there is unbounded; the reduction cannot be given as a"
-                    + " number."));
+            warnings.add(Warning.of(WarningKind.RESONANT_UNDAMPED));
         }
         if (!before.unbounded() && !after.unbounded() && after.value() > before.value()) {
-            warnings.add(new Warning("WORSE_WITH_ABSORBER", "With this absorber the response that matters is"
-                    + " larger than without it: the disturbance lies away from the structure's resonance."));
+            warnings.add(Warning.of(WarningKind.WORSE_WITH_ABSORBER));
         }
         if (mu > HEAVY_MASS_RATIO) {
-            warnings.add(new Warning("HEAVY_ABSORBER", String.format(Locale.ROOT, "A mass ratio of %.3g is unusually"
-                    + " large; check that the structure can carry the added mass.", mu)));
+            warnings.add(Warning.of(WarningKind.HEAVY_ABSORBER, mu));
         }
         if (mu < LIGHT_MASS_RATIO) {
-            warnings.add(new Warning("LIGHT_ABSORBER", String.format(Locale.ROOT, "A mass ratio of %.3g is very small:"
-                    + " the design is sharply tuned and sensitive to mistuning, and the stroke is large.", mu)));
+            warnings.add(Warning.of(WarningKind.LIGHT_ABSORBER, mu));
         }
         if (study.method() != DesignMethod.UNDAMPED_SINGLE_SPEED && band.isSingle()) {
-            warnings.add(new Warning("SINGLE_FREQUENCY", "The disturbance has one frequency: an absorber tuned to"
-                    + " that frequency with little damping reduces the response there far more than a design for"
-                    + " all frequencies; consider undamped-single-speed, and weigh its start-up hazard."));
+            warnings.add(Warning.of(WarningKind.SINGLE_FREQUENCY));
         }
         if (study.method() == DesignMethod.UNDAMPED_SINGLE_SPEED && !band.isSingle()) {
-            warnings.add(new Warning("UNDAMPED_IN_BAND", "An undamped absorber works at one frequency only; it was"
-                    + " tuned to the centre of the band and the response elsewhere in the band may be large."));
+            warnings.add(Warning.of(WarningKind.UNDAMPED_IN_BAND));
         }
         if (coupled[0] < band.low()) {
-            warnings.add(new Warning("START_UP_RESONANCE", String.format(Locale.ROOT,
-                    "Start-up hazard: the structure with the absorber has natural frequencies at %.4g Hz and"
-                            + " %.4g Hz (undamped values); the machine passes through the lower one each time it"
-                            + " starts and stops. Pass through it quickly.",
-                    coupled[0] / (2 * Math.PI), coupled[1] / (2 * Math.PI))));
+            warnings.add(Warning.of(WarningKind.START_UP_RESONANCE, coupled[0], coupled[1]));
         }
         if (strokeRunUp.unbounded()) {
-            warnings.add(new Warning("UNBOUNDED_TRANSIT_STROKE", "With no absorber damping the stroke grows without"
-                    + " bound at a resonance passed during run-up; stroke stops are essential and the clearance"
-                    + " given covers running in the band only."));
+            warnings.add(Warning.of(WarningKind.UNBOUNDED_TRANSIT_STROKE));
         }
         if (tuning.dampingRatio() == 0.0 && !band.isSingle()) {
-            warnings.add(new Warning("NO_DAMPING", "The absorber has no damping: any drift of the forcing frequency"
-                    + " away from the tuned value moves the structure towards a resonance."));
+            warnings.add(Warning.of(WarningKind.NO_DAMPING));
         }
     }
 }

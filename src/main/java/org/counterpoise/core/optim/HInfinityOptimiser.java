@@ -169,11 +169,11 @@ public final class HInfinityOptimiser {
         boolean stationary = violation <= MinimaxCertificate.STATIONARY
                 || noDescentByProbe(problem, best.f, best.zeta, best.peak, counter);
         boolean certified = Double.isFinite(best.peak) && best.peak <= scanBest * (1 + SCAN_MARGIN) && stationary;
-        String constraint = !Double.isNaN(problem.fixedDamping()) ? "fixed damping"
-                : !Double.isNaN(problem.fixedTuning()) ? "fixed tuning" : "none";
+        ActiveConstraint constraint = !Double.isNaN(problem.fixedDamping()) ? ActiveConstraint.FIXED_DAMPING
+                : !Double.isNaN(problem.fixedTuning()) ? ActiveConstraint.FIXED_TUNING : ActiveConstraint.NONE;
         if (Double.isNaN(problem.fixedTuning()) && (best.f <= problem.minTuning() * (1 + 1e-9)
                 || best.f >= problem.maxTuning() * (1 - 1e-9))) {
-            constraint = "tuning-ratio search bound";
+            constraint = ActiveConstraint.TUNING_SEARCH_BOUND;
         }
         return new PeakOptimum(problem.tuning(best.f, best.zeta), best.peak,
                 best.converged || !certified ? best.activeSet : "stationary point of the peak (direct search)",
@@ -332,7 +332,7 @@ public final class HInfinityOptimiser {
                 throw unreachable(problem);
             }
             return new PeakOptimum(problem.tuning(f0, z), peakOf(problem, f0, z, counter), "stroke on its limit",
-                    counter.count, true, "stroke limit");
+                    counter.count, true, ActiveConstraint.STROKE_LIMIT);
         }
         org.apache.commons.math3.analysis.UnivariateFunction alongLimit = f -> {
             double z = dampingOnLimit.applyAsDouble(f);
@@ -376,7 +376,7 @@ public final class HInfinityOptimiser {
             throw unreachable(problem);
         }
         return new PeakOptimum(problem.tuning(f, z), peakOf(problem, f, z, counter), "stroke on its limit",
-                counter.count, certified, "stroke limit");
+                counter.count, certified, ActiveConstraint.STROKE_LIMIT);
     }
 
     /** Brent's minimiser of the peak along the stroke limit over [low, high]; {f, value}. */

@@ -10,9 +10,8 @@ import org.counterpoise.core.model.Tuning;
  * @param activeSet which maxima are equal at the optimum, in words (e.g. "two interior peaks")
  * @param evaluations transfer functions built (a cost measure)
  * @param converged true when the optimality conditions were solved and verified
- * @param activeConstraint the designer's constraint that holds the optimum back, in words
- *     ("none", "stroke limit", "fixed damping", "fixed tuning")
+ * @param activeConstraint the designer's constraint that holds the optimum back
  */
 public record PeakOptimum(Tuning tuning, double peak, String activeSet, int evaluations, boolean converged,
-        String activeConstraint) {
+        ActiveConstraint activeConstraint) {
 }

@@ -1,6 +1,7 @@
 package org.counterpoise.core.tuning;
 
 import java.util.Optional;
+import java.util.Set;
 import org.counterpoise.core.model.ExcitationKind;
 import org.counterpoise.core.response.ResponseKind;
 
@@ -18,6 +19,9 @@ public final class ClosedForms {
             + WARBURTON;
     /** The note of every closed form that assumes an undamped structure. */
     public static final String UNDAMPED_STRUCTURE = "assumes an undamped structure";
+    private static final Set<Assumption> UNDAMPED = Set.of(Assumption.UNDAMPED_STRUCTURE);
+    private static final Set<Assumption> UNDAMPED_WHITE_NOISE =
+            Set.of(Assumption.UNDAMPED_STRUCTURE, Assumption.WHITE_NOISE);
 
     private ClosedForms() {
     }
@@ -30,15 +34,16 @@ public final class ClosedForms {
      */
     public static Optional<ClosedForm> equalPeak(ExcitationKind excitation, ResponseKind response, double massRatio) {
         if (isReceptanceLike(excitation, response)) {
-            return Optional.of(new ClosedForm(DenHartogEqualPeak.tuning(massRatio), DEN_HARTOG, UNDAMPED_STRUCTURE));
+            return Optional.of(new ClosedForm(DenHartogEqualPeak.tuning(massRatio), DEN_HARTOG, UNDAMPED_STRUCTURE,
+                    UNDAMPED));
         }
         if (isForceAccelerationLike(excitation, response)) {
             return Optional.of(new ClosedForm(WarburtonEqualPeak.forceAcceleration(massRatio), WARBURTON,
-                    UNDAMPED_STRUCTURE));
+                    UNDAMPED_STRUCTURE, UNDAMPED));
         }
         if (excitation == ExcitationKind.BASE_ACCELERATION && response == ResponseKind.RELATIVE_DISPLACEMENT) {
             return Optional.of(new ClosedForm(WarburtonEqualPeak.baseAccelerationRelativeDisplacement(massRatio),
-                    WARBURTON, UNDAMPED_STRUCTURE));
+                    WARBURTON, UNDAMPED_STRUCTURE, UNDAMPED));
         }
         return Optional.empty();
     }
@@ -53,16 +58,16 @@ public final class ClosedForms {
             double massRatio) {
         if (isReceptanceLike(excitation, response)) {
             return Optional.of(new ClosedForm(MinimumVariance.forceDisplacement(massRatio), CRANDALL_MARK,
-                    UNDAMPED_STRUCTURE + "; white-noise excitation"));
+                    UNDAMPED_STRUCTURE + "; white-noise excitation", UNDAMPED_WHITE_NOISE));
         }
         if (excitation == ExcitationKind.BASE_ACCELERATION && response == ResponseKind.RELATIVE_DISPLACEMENT) {
             return Optional.of(new ClosedForm(MinimumVariance.baseAccelerationRelativeDisplacement(massRatio),
-                    WARBURTON, UNDAMPED_STRUCTURE + "; white-noise base acceleration"));
+                    WARBURTON, UNDAMPED_STRUCTURE + "; white-noise base acceleration", UNDAMPED_WHITE_NOISE));
         }
         if (excitation == ExcitationKind.FORCE && response == ResponseKind.VELOCITY) {
             return Optional.of(new ClosedForm(MinimumVariance.forceVelocity(massRatio),
                     "derived for Counterpoise from the closed-form mean square",
-                    UNDAMPED_STRUCTURE + "; white-noise force"));
+                    UNDAMPED_STRUCTURE + "; white-noise force", UNDAMPED_WHITE_NOISE));
         }
         return Optional.empty();
     }

@@ -9,6 +9,7 @@ import org.counterpoise.core.response.ResponseKind;
 import org.counterpoise.core.response.ResponsePeak;
 import org.counterpoise.core.units.Unit;
 import org.counterpoise.io.project.Ids;
+import org.counterpoise.io.text.WarningText;
 
 /**
  * The design result as one JSON object with SI units in the key names (documented in
@@ -84,7 +85,7 @@ public final class ResultJson {
         for (Warning w : r.warnings()) {
             JsonObject wo = new JsonObject();
             wo.addProperty("code", w.code());
-            wo.addProperty("text", w.text());
+            wo.addProperty("text", WarningText.of(w));
             warnings.add(wo);
         }
         o.add("warnings", warnings);

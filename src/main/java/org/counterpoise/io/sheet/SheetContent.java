@@ -5,7 +5,6 @@ import java.util.List;
 import org.counterpoise.core.design.Cautions;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.DesignStudy;
-import org.counterpoise.core.error.Warning;
 import org.counterpoise.core.model.Excitation;
 import org.counterpoise.core.model.FrequencyBand;
 import org.counterpoise.core.model.Structure;
@@ -18,6 +17,7 @@ import org.counterpoise.io.project.ProjectIdentity;
 import org.counterpoise.io.text.DesignReport;
 import org.counterpoise.io.text.DisplayUnits;
 import org.counterpoise.io.text.QuantityFormat;
+import org.counterpoise.io.text.WarningText;
 
 /**
  * Everything the parameter sheet prints, as text, built from a design result. Kept apart from the
@@ -230,7 +230,7 @@ public record SheetContent(String projectName, String notes, String date, String
             sections.add(new Section("Tolerance Monte Carlo of the peak in band", mc));
         }
 
-        List<String> warnings = r.warnings().stream().map(Warning::text).toList();
+        List<String> warnings = r.warnings().stream().map(WarningText::of).toList();
         return new SheetContent(study.name(), notes, date, revision, sections, ASSUMPTIONS, warnings,
                 Cautions.STANDARD);
     }

@@ -144,7 +144,7 @@ public final class DesignReport {
         if (!r.warnings().isEmpty()) {
             section(out, "Warnings");
             for (Warning warning : r.warnings()) {
-                bullet(out, warning.text());
+                bullet(out, WarningText.of(warning));
             }
         }
         section(out, "Cautions");

@@ -1,10 +1,14 @@
 package org.counterpoise.core.design;
 
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertNotNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.junit.jupiter.api.Assertions.fail;
 
 import java.util.Random;
+import java.util.Set;
 import org.counterpoise.core.error.InvalidInputException;
+import org.counterpoise.core.error.Warning;
 import org.counterpoise.core.model.Excitation;
 import org.counterpoise.core.model.ExcitationKind;
 import org.counterpoise.core.model.FrequencyBand;
@@ -54,6 +58,12 @@ class DesignerFuzzTest {
                                     org.counterpoise.core.robust.Tolerance.uniform(0.2)), 200, trial));
                     assertTrue(rr.robust().worstCase().peak() <= rr.worstCase().peak() * (1 + 1e-9)
                             || Double.isInfinite(rr.worstCase().peak()), "robust never worse, trial " + trial + " " + r.tuning() + " " + study.method() + " " + rr.worstCase() + " " + rr.robust());
+                }
+                for (Warning w : r.warnings()) {
+                    // the design never emits a warning without its kind and exactly the kind's parameters
+                    assertNotNull(w.kind(), "trial " + trial);
+                    assertEquals(Set.copyOf(w.kind().parameters()), w.parameters().keySet(), "trial " + trial);
+                    assertEquals(w.kind().name(), w.code());
                 }
                 for (double v : new double[] {r.absorber().mass(), r.absorber().stiffness(), r.absorber().damping(),
                     r.clearance(), r.responseAfter().value(), r.strokeInBand().value(), r.springForce().value()}) {

@@ -4,6 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
+import org.counterpoise.io.text.WarningText;
 
 import java.awt.Component;
 import java.awt.Container;
@@ -286,7 +287,7 @@ class FieldsAndLayoutGuiTest {
             JTextPane notes = (JTextPane) find("result.notes");
             String text = onEdt(notes::getText);
             for (Warning w : warnings) {
-                assertTrue(text.contains(w.text()), "warning shown whole: " + w.text());
+                assertTrue(text.contains(WarningText.of(w)), "warning shown whole: " + WarningText.of(w));
             }
             // Wrapped, not cut: the text is no wider than the pane that shows it, and the pane can be seen.
             assertTrue(onEdt(() -> notes.getWidth() <= notes.getParent().getWidth() && notes.getParent().isShowing()

@@ -34,6 +34,7 @@ import org.counterpoise.ui.gui.field.QuantityField;
 import org.counterpoise.ui.gui.plot.ChartHost;
 import org.counterpoise.ui.gui.task.TaskRunner;
 import org.knowm.xchart.XYChart;
+import org.counterpoise.io.text.WarningText;
 
 /** Step 4: the absorber to build, and the response before and after. */
 final class ResultStep extends Step {
@@ -178,7 +179,7 @@ final class ResultStep extends Step {
                 table.addRow(new Object[] {row.label(), row.value(), QuantityField.pretty(row.unit())});
             }
         }
-        writeNotes(r.warnings().stream().map(w -> w.text()).toList());
+        writeNotes(r.warnings().stream().map(WarningText::of).toList());
         redraw();
     }
 

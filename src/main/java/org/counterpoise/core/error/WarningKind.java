@@ -1,0 +1,48 @@
+package org.counterpoise.core.error;
+
+import java.util.List;
+
+/**
+ * What a {@link Warning} is about. The constant's name is the stable code written to JSON outputs
+ * and compared by the golden results, so a name never changes; the words live in
+ * {@code io.text.WarningText}. Each kind lists the parameters it carries.
+ */
+public enum WarningKind {
+    /** A closed form that assumes an undamped structure was used on a damped one. */
+    DAMPED_STRUCTURE(WarningParameter.METHOD_ID, WarningParameter.STRUCTURE_DAMPING_RATIO),
+    /** The robust-design search stopped at its evaluation limit. */
+    OPTIMUM_NOT_VERIFIED,
+    /** A one-frequency disturbance designed by exact peak: says which band was used. */
+    SINGLE_FREQUENCY_EXACT(WarningParameter.PEAK_BAND),
+    /** No absorber up to the largest mass ratio meets the target. */
+    TARGET_NOT_MET(WarningParameter.MAX_MASS_RATIO),
+    /** The bare structure is undamped and resonant in the band. */
+    RESONANT_UNDAMPED,
+    /** The absorber makes the response that matters larger. */
+    WORSE_WITH_ABSORBER,
+    /** The mass ratio is unusually large. */
+    HEAVY_ABSORBER(WarningParameter.MASS_RATIO),
+    /** The mass ratio is very small. */
+    LIGHT_ABSORBER(WarningParameter.MASS_RATIO),
+    /** One forcing frequency with a design for all frequencies. */
+    SINGLE_FREQUENCY,
+    /** An undamped absorber tuned to the centre of a band. */
+    UNDAMPED_IN_BAND,
+    /** The lower coupled natural frequency lies below the band. */
+    START_UP_RESONANCE(WarningParameter.LOWER_NATURAL_FREQUENCY, WarningParameter.UPPER_NATURAL_FREQUENCY),
+    /** The run-up stroke is unbounded (no absorber damping). */
+    UNBOUNDED_TRANSIT_STROKE,
+    /** The absorber has no damping and the band is not one frequency. */
+    NO_DAMPING;
+
+    private final List<WarningParameter> parameters;
+
+    WarningKind(WarningParameter... parameters) {
+        this.parameters = List.of(parameters);
+    }
+
+    /** @return the parameters a warning of this kind carries, in the order its words use them */
+    public List<WarningParameter> parameters() {
+        return parameters;
+    }
+}

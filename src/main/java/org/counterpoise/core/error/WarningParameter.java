@@ -1,0 +1,43 @@
+package org.counterpoise.core.error;
+
+/**
+ * A value a {@link Warning} carries, in SI units (frequencies angular, rad/s), or a token (a
+ * stable identifier such as a design method's id, never words).
+ */
+public enum WarningParameter {
+    /** The absorber's mass ratio mu = m2 / m1 (non-dimensional). */
+    MASS_RATIO(false),
+    /** The largest mass ratio considered when sizing for a target (non-dimensional). */
+    MAX_MASS_RATIO(false),
+    /** The structure's damping ratio zeta1 (non-dimensional). */
+    STRUCTURE_DAMPING_RATIO(false),
+    /** The lower undamped natural frequency of the structure with the absorber, rad/s. */
+    LOWER_NATURAL_FREQUENCY(false),
+    /** The upper undamped natural frequency of the structure with the absorber, rad/s. */
+    UPPER_NATURAL_FREQUENCY(false),
+    /** The design method's id as files and the command line spell it (a token). */
+    METHOD_ID(true),
+    /** The band the exact-peak design minimises over for one forcing frequency (a {@link PeakBand} name). */
+    PEAK_BAND(true);
+
+    private final boolean token;
+
+    WarningParameter(boolean token) {
+        this.token = token;
+    }
+
+    /** @return true when the value is a token (String), false when it is a number (Double) */
+    public boolean token() {
+        return token;
+    }
+
+    /** Which band a one-frequency exact-peak design minimises the peak over. */
+    public enum PeakBand {
+        /** All frequencies (which also covers start-up and mistuning). */
+        ALL_FREQUENCIES,
+        /** The speeds passed on start-up, up to the forcing frequency. */
+        RUN_UP,
+        /** The octave either side of the forcing frequency. */
+        OCTAVE
+    }
+}

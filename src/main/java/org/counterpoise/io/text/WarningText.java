@@ -1,0 +1,75 @@
+package org.counterpoise.io.text;
+
+import java.util.Locale;
+import org.counterpoise.core.error.Warning;
+import org.counterpoise.core.error.WarningParameter;
+import org.counterpoise.core.error.WarningParameter.PeakBand;
+
+/**
+ * The one place a {@link Warning} becomes English words. Every front end (text report, JSON,
+ * PDF sheet, wizard) renders warnings through {@link #of}; the core only chooses the kind and its
+ * SI values. Frequencies are printed in Hz.
+ */
+public final class WarningText {
+
+    private WarningText() {
+    }
+
+    /**
+     * @param w the warning
+     * @return its sentence, never with NaN or Infinity (the core refuses non-finite values)
+     */
+    public static String of(Warning w) {
+        return switch (w.kind()) {
+            case DAMPED_STRUCTURE -> String.format(Locale.ROOT, "The %s closed form assumes an undamped structure;"
+                    + " with the structure's damping ratio of %.3g the tuning is close to, but not exactly, the"
+                    + " optimum.", w.token(WarningParameter.METHOD_ID),
+                    w.number(WarningParameter.STRUCTURE_DAMPING_RATIO));
+            case OPTIMUM_NOT_VERIFIED -> "The robust-design search stopped at its evaluation limit; the design is the"
+                    + " best found.";
+            case SINGLE_FREQUENCY_EXACT -> "The disturbance has one frequency: the exact-peak design minimises the"
+                    + " peak " + over(PeakBand.valueOf(w.token(WarningParameter.PEAK_BAND))) + "; for the least"
+                    + " response at that one frequency choose undamped-single-speed.";
+            case TARGET_NOT_MET -> String.format(Locale.ROOT, "No absorber up to a mass ratio of %.3g meets the target;"
+                    + " the design shown is the best at that mass ratio.", w.number(WarningParameter.MAX_MASS_RATIO));
+            case RESONANT_UNDAMPED -> "The bare structure is undamped and resonant within the forcing band, so its"
+                    + " response there is unbounded; the reduction cannot be given as a number.";
+            case WORSE_WITH_ABSORBER -> "With this absorber the response that matters is larger than without it: the"
+                    + " disturbance lies away from the structure's resonance.";
+            case HEAVY_ABSORBER -> String.format(Locale.ROOT, "A mass ratio of %.3g is unusually large; check that"
+                    + " the structure can carry the added mass.", w.number(WarningParameter.MASS_RATIO));
+            case LIGHT_ABSORBER -> String.format(Locale.ROOT, "A mass ratio of %.3g is very small: the design is"
+                    + " sharply tuned and sensitive to mistuning, and the stroke is large.",
+                    w.number(WarningParameter.MASS_RATIO));
+            case SINGLE_FREQUENCY -> "The disturbance has one frequency: an absorber tuned to that frequency with"
+                    + " little damping reduces the response there far more than a design for all frequencies;"
+                    + " consider undamped-single-speed, and weigh its start-up hazard.";
+            case UNDAMPED_IN_BAND -> "An undamped absorber works at one frequency only; it was tuned to the centre of"
+                    + " the band and the response elsewhere in the band may be large.";
+            case START_UP_RESONANCE -> String.format(Locale.ROOT, "Start-up hazard: the structure with the absorber"
+                    + " has natural frequencies at %.4g Hz and %.4g Hz (undamped values); the machine passes through"
+                    + " the lower one each time it starts and stops. Pass through it quickly.",
+                    hertz(w.number(WarningParameter.LOWER_NATURAL_FREQUENCY)),
+                    hertz(w.number(WarningParameter.UPPER_NATURAL_FREQUENCY)));
+            case UNBOUNDED_TRANSIT_STROKE -> "With no absorber damping the stroke grows without bound at a resonance"
+                    + " passed during run-up; stroke stops are essential and the clearance given covers running in"
+                    + " the band only.";
+            case NO_DAMPING -> "The absorber has no damping: any drift of the forcing frequency away from the tuned"
+                    + " value moves the structure towards a resonance.";
+        };
+    }
+
+    private static String over(PeakBand band) {
+        return switch (band) {
+            case ALL_FREQUENCIES -> "over all frequencies, which also covers start-up and mistuning";
+            case RUN_UP -> "over the speeds passed on start-up, up to the forcing frequency (the response has no"
+                    + " finite peak over all frequencies)";
+            case OCTAVE -> "over the octave either side of the forcing frequency (the response has no finite peak"
+                    + " over all frequencies or over start-up)";
+        };
+    }
+
+    private static double hertz(double radiansPerSecond) {
+        return radiansPerSecond / (2 * Math.PI);
+    }
+}
