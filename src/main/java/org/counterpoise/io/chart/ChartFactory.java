@@ -7,6 +7,7 @@ import java.util.ArrayList;
 import java.util.Collections;
 import java.util.List;
 import java.util.Map;
+import java.util.TreeMap;
 import java.util.WeakHashMap;
 import java.util.function.DoubleUnaryOperator;
 import org.counterpoise.core.design.DesignCurves;
@@ -255,7 +256,7 @@ public final class ChartFactory {
     /** The curve with the probed frequencies added where its value there is unbounded. */
     private static double[][] withProbes(double[] x, double[] y, double[] probes, DoubleUnaryOperator at,
             double typical) {
-        java.util.TreeMap<Double, Double> points = new java.util.TreeMap<>();
+        TreeMap<Double, Double> points = new TreeMap<>();
         for (int i = 0; i < x.length; i++) {
             points.put(x[i], y[i]);
         }

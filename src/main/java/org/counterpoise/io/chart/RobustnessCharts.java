@@ -3,6 +3,9 @@ package org.counterpoise.io.chart;
 import java.awt.BasicStroke;
 import java.awt.Color;
 import java.awt.Font;
+import java.math.BigDecimal;
+import java.math.MathContext;
+import java.math.RoundingMode;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
@@ -264,12 +267,12 @@ public final class RobustnessCharts {
         // The colour bar prints its ends as plain doubles: round them to three significant figures
         // in decimal, so the bar reads 0.072 and not 0.07200000000000001.
         if (bottom > 0) {
-            bottom = new java.math.BigDecimal(bottom).round(new java.math.MathContext(3, java.math.RoundingMode.FLOOR))
+            bottom = new BigDecimal(bottom).round(new MathContext(3, RoundingMode.FLOOR))
                     .doubleValue();
         }
         s.setMin(bottom);
-        s.setMax(top > 0 ? new java.math.BigDecimal(top).round(new java.math.MathContext(3,
-                java.math.RoundingMode.CEILING)).doubleValue() : top);
+        s.setMax(top > 0 ? new BigDecimal(top).round(new MathContext(3,
+                RoundingMode.CEILING)).doubleValue() : top);
         s.setHeatMapDecimalValueFormatter(v -> QuantityFormat.number(v, 3));
         if (!cells.isEmpty()) {
             chart.addSeries("peak", xs, ys, cells);
