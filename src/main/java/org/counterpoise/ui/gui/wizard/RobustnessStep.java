@@ -23,6 +23,7 @@ import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.robust.MonteCarloResult;
 import org.counterpoise.core.units.Dimension;
 import org.counterpoise.core.units.Unit;
+import org.counterpoise.io.chart.MonteCarloCharts;
 import org.counterpoise.io.chart.RobustnessCharts;
 import org.counterpoise.io.project.Project;
 import org.counterpoise.io.project.RobustnessInput;
@@ -251,7 +252,7 @@ final class RobustnessStep extends Step {
                         + QuantityFormat.number(100 * mc.probabilityExceeding(), 3) + " %"));
         wrapSummary();
         sensitivity.show(theme -> RobustnessCharts.sensitivity(design, r, theme, 420, 320));
-        histogram.show(theme -> RobustnessCharts.histogram(design, mc, theme, 420, 320));
+        histogram.show(theme -> MonteCarloCharts.histogram(design, mc, theme, 420, 320));
         mapHolder.show(theme -> RobustnessCharts.map(design, r, theme, 520, 480, 3));
     }
 
