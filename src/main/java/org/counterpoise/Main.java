@@ -1,6 +1,7 @@
 package org.counterpoise;
 
 import java.awt.GraphicsEnvironment;
+import java.io.OutputStreamWriter;
 import java.io.PrintWriter;
 import java.nio.charset.StandardCharsets;
 import org.counterpoise.core.design.Designer;
@@ -24,8 +25,8 @@ public final class Main {
      * @param args command-line arguments
      */
     public static void main(String[] args) {
-        PrintWriter out = new PrintWriter(new java.io.OutputStreamWriter(System.out, StandardCharsets.UTF_8), true);
-        PrintWriter err = new PrintWriter(new java.io.OutputStreamWriter(System.err, StandardCharsets.UTF_8), true);
+        PrintWriter out = new PrintWriter(new OutputStreamWriter(System.out, StandardCharsets.UTF_8), true);
+        PrintWriter err = new PrintWriter(new OutputStreamWriter(System.err, StandardCharsets.UTF_8), true);
         if (args.length == 0) {
             if (GraphicsEnvironment.isHeadless()) {
                 out.println("No display: running the default example scenario through the design report instead"

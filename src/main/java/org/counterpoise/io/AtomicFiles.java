@@ -6,9 +6,6 @@ import java.io.OutputStream;
 import java.nio.channels.Channels;
 import java.nio.channels.FileChannel;
 import java.nio.file.AtomicMoveNotSupportedException;
-import java.nio.file.DirectoryIteratorException;
-import java.nio.file.DirectoryStream;
-import java.nio.file.FileAlreadyExistsException;
 import java.nio.file.FileSystems;
 import java.nio.file.Files;
 import java.nio.file.LinkOption;
@@ -17,23 +14,14 @@ import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.nio.file.StandardOpenOption;
 import java.nio.file.attribute.BasicFileAttributes;
-import java.nio.file.attribute.FileAttribute;
 import java.nio.file.attribute.PosixFilePermission;
 import java.nio.file.attribute.PosixFilePermissions;
-import java.nio.charset.StandardCharsets;
 import java.util.ArrayList;
 import java.util.HashSet;
 import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Objects;
 import java.util.Set;
-import java.util.concurrent.ConcurrentHashMap;
-import java.util.concurrent.atomic.AtomicLong;
-import java.util.concurrent.locks.Lock;
-import java.util.concurrent.locks.ReadWriteLock;
-import java.util.concurrent.locks.ReentrantReadWriteLock;
-import java.util.regex.Matcher;
-import java.util.regex.Pattern;
 
 /**
  * The one way Counterpoise writes a file (projects, sheets, charts, exports), by the usual safe-save
@@ -46,7 +34,7 @@ import java.util.regex.Pattern;
  * deletes the ones in flight when the program is stopped (SIGTERM, SIGINT, closing the window);
  * and since nothing runs after SIGKILL or a power cut, temporary files are named
  * {@code .NAME.counterpoise-PID-N.tmp} and every write removes those of processes that no longer
- * run from its folder. No other file is ever touched by that clean-up. (Two machines or
+ * run from its folder ({@link TempFiles}). No other file is ever touched by that clean-up. (Two machines or
  * containers writing the same file in a shared folder at the same moment could see each other's
  * writer as ended; the one whose temporary file is removed then reports a failed write and
  * changes nothing.)
@@ -100,35 +88,13 @@ public final class AtomicFiles {
     private static final Faults NONE = new Faults() {
     };
 
-    private static final String MARK = ".counterpoise-";
     private static final String NOTHING_CHANGED = "nothing was changed";
-    /** Our temporary files and no one else's: hidden, our mark, the writer's process id, a counter. */
-    private static final Pattern OURS = Pattern.compile("\\..*\\.counterpoise-(\\d{1,18})-\\d{1,19}\\.tmp");
-    private static final long PID = ProcessHandle.current().pid();
-    private static final AtomicLong COUNTER = new AtomicLong();
     /** Same limit as Linux's path resolution (MAXSYMLINKS). */
     private static final int MAX_LINK_HOPS = 40;
-    /** Room for the destination's name inside a temporary name; file names are limited to 255 bytes. */
-    private static final int NAME_BYTES = 150;
     private static final int BUFFER = 1 << 16;
-    private static final boolean POSIX = FileSystems.getDefault().supportedFileAttributeViews().contains("posix");
+    static final boolean POSIX = FileSystems.getDefault().supportedFileAttributeViews().contains("posix");
     private static final boolean WINDOWS = System.getProperty("os.name", "").startsWith("Windows");
     private static final Set<PosixFilePermission> NEW_FILE = PosixFilePermissions.fromString("rw-r--r--");
-    private static final Set<PosixFilePermission> PRIVATE = PosixFilePermissions.fromString("rw-------");
-
-    /** Temporary files on the disk right now; the shutdown hook deletes them. */
-    private static final Set<Path> IN_FLIGHT = ConcurrentHashMap.newKeySet();
-    /** Writers hold the read side while creating and registering a temporary file; the hook the write side. */
-    private static final ReadWriteLock REGISTRY = new ReentrantReadWriteLock();
-    private static volatile boolean stopping;
-
-    static {
-        try {
-            Runtime.getRuntime().addShutdownHook(new Thread(AtomicFiles::removeInFlight, "counterpoise-temp-cleanup"));
-        } catch (IllegalStateException alreadyShuttingDown) {
-            stopping = true;
-        }
-    }
 
     private AtomicFiles() {
     }
@@ -177,12 +143,12 @@ public final class AtomicFiles {
             slots.add(new Slot(e, real));
             folders.add(real.getParent());
         }
-        folders.forEach(AtomicFiles::removeStale);
+        folders.forEach(TempFiles::removeStale);
         Slot current = null;
         try {
             for (Slot s : slots) {
                 current = s;
-                s.temp = registered(s.real, temp -> Files.createFile(temp, privateFile()));
+                s.temp = TempFiles.registered(s.real, temp -> Files.createFile(temp, TempFiles.privateFile()));
                 writeTemp(s, faults);
             }
             current = null;
@@ -192,8 +158,8 @@ public final class AtomicFiles {
             throw failure(current, slots, e, NOTHING_CHANGED);
         } finally {
             for (Slot s : slots) {
-                discard(s.temp);
-                discard(s.backup);
+                TempFiles.discard(s.temp);
+                TempFiles.discard(s.backup);
             }
         }
     }
@@ -275,9 +241,9 @@ public final class AtomicFiles {
     /** A hard link to the file about to be replaced, so it can be put back; a copy where links are not possible. */
     private static Path backup(Path real) throws IOException {
         try {
-            return registered(real, temp -> Files.createLink(temp, real));
+            return TempFiles.registered(real, temp -> Files.createLink(temp, real));
         } catch (UnsupportedOperationException | IOException noLinks) {
-            return registered(real, temp -> Files.copy(real, temp, StandardCopyOption.COPY_ATTRIBUTES));
+            return TempFiles.registered(real, temp -> Files.copy(real, temp, StandardCopyOption.COPY_ATTRIBUTES));
         }
     }
 
@@ -303,102 +269,6 @@ public final class AtomicFiles {
             channel.force(true);
         } catch (UnsupportedOperationException notSupported) {
             // a file system provider without file channels: nothing to flush through
-        }
-    }
-
-    private interface Create {
-        void at(Path temp) throws IOException;
-    }
-
-    /**
-     * Creates a temporary file beside {@code real} under a fresh name and registers it for the
-     * shutdown hook, both under the registry's read lock: the hook then either sees the file or
-     * has already stopped new ones.
-     */
-    private static Path registered(Path real, Create create) throws IOException {
-        Lock lock = REGISTRY.readLock();
-        lock.lock();
-        try {
-            if (stopping) {
-                throw new IOException("stopping");
-            }
-            while (true) {
-                Path temp = real.resolveSibling(tempName(real.getFileName().toString()));
-                IN_FLIGHT.add(temp);
-                try {
-                    create.at(temp);
-                    return temp;
-                } catch (FileAlreadyExistsException taken) {
-                    IN_FLIGHT.remove(temp);
-                } catch (IOException | RuntimeException e) {
-                    IN_FLIGHT.remove(temp);
-                    throw e;
-                }
-            }
-        } finally {
-            lock.unlock();
-        }
-    }
-
-    static String tempName(String name) {
-        String shortened = name;
-        while (shortened.getBytes(StandardCharsets.UTF_8).length > NAME_BYTES) {
-            shortened = shortened.substring(0, shortened.offsetByCodePoints(shortened.length(), -1));
-        }
-        return "." + shortened + MARK + PID + "-" + COUNTER.incrementAndGet() + ".tmp";
-    }
-
-    private static FileAttribute<?>[] privateFile() {
-        return POSIX ? new FileAttribute<?>[] {PosixFilePermissions.asFileAttribute(PRIVATE)} : new FileAttribute<?>[0];
-    }
-
-    private static void discard(Path temp) {
-        if (temp == null) {
-            return;
-        }
-        try {
-            Files.deleteIfExists(temp);
-        } catch (IOException e) {
-            // left for the next write to this folder, which removes it once this process has ended
-            return;
-        }
-        IN_FLIGHT.remove(temp);
-    }
-
-    /** Deletes this folder's temporary files of processes that no longer run. */
-    static void removeStale(Path folder) {
-        try (DirectoryStream<Path> entries = Files.newDirectoryStream(folder,
-                p -> OURS.matcher(p.getFileName().toString()).matches())) {
-            for (Path p : entries) {
-                Matcher m = OURS.matcher(p.getFileName().toString());
-                if (!m.matches()) {
-                    continue;
-                }
-                long pid = Long.parseLong(m.group(1));
-                boolean running = pid == PID || ProcessHandle.of(pid).map(ProcessHandle::isAlive).orElse(false);
-                if (!running && Files.isRegularFile(p, LinkOption.NOFOLLOW_LINKS)) {
-                    Files.deleteIfExists(p);
-                }
-            }
-        } catch (IOException | DirectoryIteratorException | SecurityException e) {
-            // Best effort: a folder that cannot be listed or cleaned is reported by the write itself.
-        }
-    }
-
-    private static void removeInFlight() {
-        Lock lock = REGISTRY.writeLock();
-        lock.lock();
-        try {
-            stopping = true;
-            for (Path temp : IN_FLIGHT) {
-                try {
-                    Files.deleteIfExists(temp);
-                } catch (IOException e) {
-                    // the next write to this folder removes it
-                }
-            }
-        } finally {
-            lock.unlock();
         }
     }
 
@@ -460,10 +330,7 @@ public final class AtomicFiles {
             return f;
         }
         Path named = current != null ? current.entry.target() : slots.get(0).entry.target();
-        String reason = stopping ? "Counterpoise was stopped while writing" : PlainMessages.writeFailure(e);
-        if (reason.contains(MARK)) {
-            reason = "the system refused the write";
-        }
+        String reason = TempFiles.stopping() ? "Counterpoise was stopped while writing" : PlainMessages.writeFailure(e);
         return new FileWriteException(named, "cannot be written here (" + reason + "); " + outcome);
     }
 

@@ -203,7 +203,7 @@ class AtomicFilesTest {
         Path target = dir.resolve(name);
         AtomicFiles.write(target, text("long"));
         assertEquals("long", Files.readString(target));
-        assertTrue(AtomicFiles.tempName(name).getBytes(StandardCharsets.UTF_8).length <= 255);
+        assertTrue(TempFiles.tempName(name).getBytes(StandardCharsets.UTF_8).length <= 255);
     }
 
     @ParameterizedTest

@@ -2,6 +2,7 @@ package org.counterpoise.core.design;
 
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import org.counterpoise.core.error.Warning;
 import org.counterpoise.core.model.Absorber;
 import org.counterpoise.core.model.Tuning;
@@ -77,9 +78,9 @@ public record DesignResult(DesignStudy study, String methodSource, String method
      * @return the rms figures when the disturbance is white noise (computed on each call, from
      *     the exact mean square), empty for a harmonic disturbance
      */
-    public java.util.Optional<RmsFigures> rms() {
-        return study.excitation().spectrum().isWhiteNoise() ? java.util.Optional.of(RmsFigures.of(this))
-                : java.util.Optional.empty();
+    public Optional<RmsFigures> rms() {
+        return study.excitation().spectrum().isWhiteNoise() ? Optional.of(RmsFigures.of(this))
+                : Optional.empty();
     }
 
     /** @return before over after for the response that matters; +infinity when before is unbounded */

@@ -1,7 +1,9 @@
 package org.counterpoise.core.design;
 
 import org.counterpoise.core.error.Checks;
+import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.model.Excitation;
+import org.counterpoise.core.model.ExcitationKind;
 import org.counterpoise.core.model.Structure;
 import org.counterpoise.core.response.ResponseKind;
 
@@ -72,34 +74,34 @@ public record DesignStudy(String name, Structure structure, Excitation excitatio
         Checks.present("absorber", constraints, "design constraints");
         Checks.present("robustness", robustness, "robustness settings");
         if (sizing.byTarget() && method != DesignMethod.EXACT_PEAK) {
-            throw new org.counterpoise.core.error.InvalidInputException("absorber.target", Checks.show(sizing.target()),
+            throw new InvalidInputException("absorber.target", Checks.show(sizing.target()),
                     "sizing for a target needs the exact-peak method");
         }
         if (constraints.any() && method != DesignMethod.EXACT_PEAK) {
-            throw new org.counterpoise.core.error.InvalidInputException("absorber.method", method.id(),
+            throw new InvalidInputException("absorber.method", method.id(),
                     "a stroke limit, fixed damping or fixed tuning needs the exact-peak method");
         }
         if (excitation.spectrum().isWhiteNoise()) {
-            if (excitation.kind() != org.counterpoise.core.model.ExcitationKind.FORCE
-                    && excitation.kind() != org.counterpoise.core.model.ExcitationKind.BASE_ACCELERATION) {
-                throw new org.counterpoise.core.error.InvalidInputException("disturbance.spectrum",
+            if (excitation.kind() != ExcitationKind.FORCE
+                    && excitation.kind() != ExcitationKind.BASE_ACCELERATION) {
+                throw new InvalidInputException("disturbance.spectrum",
                         "white-noise " + excitation.kind().label(),
                         "white noise is a force or a base acceleration; choose disturbance.kind force or"
                                 + " base-acceleration, or a harmonic spectrum");
             }
             if (method != DesignMethod.EXACT_VARIANCE && method != DesignMethod.MINIMUM_VARIANCE) {
-                throw new org.counterpoise.core.error.InvalidInputException("absorber.method", method.id(),
+                throw new InvalidInputException("absorber.method", method.id(),
                         "under white noise the design minimises the rms response: choose exact-variance (any"
                                 + " structure damping) or minimum-variance (the published closed form)");
             }
             if (sizing.byTarget() || constraints.any()) {
-                throw new org.counterpoise.core.error.InvalidInputException("absorber", "a target or a constraint",
+                throw new InvalidInputException("absorber", "a target or a constraint",
                         "targets, stroke limits and fixed tuning or damping work on peaks; leave them out under"
                                 + " white noise");
             }
         }
         if (response.needsAbsorber()) {
-            throw new org.counterpoise.core.error.InvalidInputException("absorber.response", response.name(),
+            throw new InvalidInputException("absorber.response", response.name(),
                     "the response to reduce must be a response of the structure, not of the absorber");
         }
     }

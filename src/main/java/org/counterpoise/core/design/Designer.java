@@ -16,8 +16,11 @@ import org.counterpoise.core.model.ExcitationKind;
 import org.counterpoise.core.model.FrequencyBand;
 import org.counterpoise.core.model.Structure;
 import org.counterpoise.core.model.Tuning;
+import org.counterpoise.core.rational.PeakFinder;
+import org.counterpoise.core.rational.TransferFunction;
 import org.counterpoise.core.remedy.DetuningAlternative;
 import org.counterpoise.core.remedy.StructureDetuning;
+import org.counterpoise.core.response.TransferFunctions;
 import org.counterpoise.core.robust.ToleratedDetuning;
 import org.counterpoise.core.response.ResponseKind;
 import org.counterpoise.core.response.ResponsePeak;
@@ -35,7 +38,9 @@ import org.counterpoise.core.robust.RobustDesign;
 import org.counterpoise.core.tuning.Assumption;
 import org.counterpoise.core.tuning.ClosedForm;
 import org.counterpoise.core.tuning.ClosedForms;
+import org.counterpoise.core.tuning.DenHartogEqualPeak;
 import org.counterpoise.core.tuning.UndampedAbsorber;
+import org.counterpoise.core.units.Gravity;
 
 /**
  * The one entry point every front end calls: {@link DesignStudy} in, {@link DesignResult} out.
@@ -95,7 +100,7 @@ public final class Designer {
 
         addWarnings(warnings, study, mu, tuning, before, after, strokeRunUp, coupled);
         double sag = study.hangsVertically()
-                ? org.counterpoise.core.units.Gravity.STANDARD / (absorber.naturalFrequency() * absorber.naturalFrequency())
+                ? Gravity.STANDARD / (absorber.naturalFrequency() * absorber.naturalFrequency())
                 : Double.NaN;
         return new DesignResult(study, chosen.source(), chosen.note(), tuning, absorber, sag, before, after, motionBefore,
                 motionAfter, strokeInBand, strokeRunUp, clearance,
@@ -210,12 +215,11 @@ public final class Designer {
      * Den Hartog's design decides it.
      */
     static double[] singleSpeedBand(ExcitationKind kind, ResponseKind response, double mu, double zeta1, double g0) {
-        Tuning probe = org.counterpoise.core.tuning.DenHartogEqualPeak.tuning(mu);
-        org.counterpoise.core.rational.TransferFunction h =
-                org.counterpoise.core.response.TransferFunctions.of(kind, response, zeta1, probe);
+        Tuning probe = DenHartogEqualPeak.tuning(mu);
+        TransferFunction h = TransferFunctions.of(kind, response, zeta1, probe);
         double[][] choices = {{0.0, Double.POSITIVE_INFINITY}, {0.0, g0}, {0.5 * g0, 2 * g0}};
         for (double[] c : choices) {
-            if (Double.isFinite(org.counterpoise.core.rational.PeakFinder.over(h, c[0], c[1]).magnitude())) {
+            if (Double.isFinite(PeakFinder.over(h, c[0], c[1]).magnitude())) {
                 return c;
             }
         }

@@ -1,6 +1,7 @@
 package org.counterpoise.core.optim;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 import org.counterpoise.core.rational.PeakFinder;
 import org.counterpoise.core.rational.TransferFunction;
@@ -111,7 +112,7 @@ final class MinimaxCertificate {
         }
         double step = 0.5 / Math.max(lipschitz, 1e-12);
         double[] lambda = new double[k];
-        java.util.Arrays.fill(lambda, 1.0 / k);
+        Arrays.fill(lambda, 1.0 / k);
         double best = Double.POSITIVE_INFINITY;
         for (int iteration = 0; iteration < STEPS; iteration++) {
             double[] r = combine(g, lambda);
@@ -167,7 +168,7 @@ final class MinimaxCertificate {
     /** Euclidean projection onto the probability simplex (sort-based; Held, Wolfe and Crowder 1974). */
     private static double[] projectOntoSimplex(double[] y) {
         double[] u = y.clone();
-        java.util.Arrays.sort(u);
+        Arrays.sort(u);
         double cumulative = 0;
         double theta = 0;
         for (int i = u.length - 1; i >= 0; i--) {

@@ -1,6 +1,8 @@
 package org.counterpoise.core.optim;
 
 import org.apache.commons.math3.analysis.solvers.BrentSolver;
+import org.apache.commons.math3.exception.MathIllegalArgumentException;
+import org.apache.commons.math3.exception.MathIllegalStateException;
 import org.counterpoise.core.error.Checks;
 
 /**
@@ -48,8 +50,8 @@ public final class MinimumMass {
                     mu0 = new BrentSolver(1e-8 * mu, 1e-12).solve(200,
                             m -> Math.log(HInfinityOptimiser.optimise(problem.withMassRatio(m)).peak() / target),
                             previous, mu);
-                } catch (org.apache.commons.math3.exception.MathIllegalStateException
-                        | org.apache.commons.math3.exception.MathIllegalArgumentException noRoot) {
+                } catch (MathIllegalStateException
+                        | MathIllegalArgumentException noRoot) {
                     return new Result(true, o); // the scanned mass ratio meets the target: keep it
                 }
                 PeakOptimum at = HInfinityOptimiser.optimise(problem.withMassRatio(mu0));

@@ -1,9 +1,11 @@
 package org.counterpoise.core.optim;
 
+import java.util.Locale;
 import org.counterpoise.core.error.Checks;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.model.ExcitationKind;
 import org.counterpoise.core.model.Tuning;
+import org.counterpoise.core.rational.PeakFinder;
 import org.counterpoise.core.response.ResponseKind;
 import org.counterpoise.core.rational.TransferFunction;
 import org.counterpoise.core.response.TransferFunctions;
@@ -70,7 +72,7 @@ public record PeakProblem(ExcitationKind excitation, ResponseKind response, doub
             Checks.positive("stroke limit", strokeLimit);
         }
         if (response == ResponseKind.STROKE || response.needsAbsorber()) {
-            throw new InvalidInputException("response", response.name().toLowerCase(java.util.Locale.ROOT),
+            throw new InvalidInputException("response", response.name().toLowerCase(Locale.ROOT),
                     "the absorber's own stroke or force has no minimum-peak design: it falls towards zero as the"
                             + " absorber damping grows and the absorber locks; use a response of the structure"
                             + " and limit the stroke instead");
@@ -133,7 +135,7 @@ public record PeakProblem(ExcitationKind excitation, ResponseKind response, doub
      * @return the peak non-dimensional stroke over the band for the design (f, zeta)
      */
     public double strokePeak(double f, double zeta) {
-        return org.counterpoise.core.rational.PeakFinder.over(
+        return PeakFinder.over(
                 TransferFunctions.of(excitation, ResponseKind.STROKE, structureDamping, tuning(f, zeta)),
                 bandLow, bandHigh).magnitude();
     }

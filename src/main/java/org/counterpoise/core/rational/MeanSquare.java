@@ -2,6 +2,7 @@ package org.counterpoise.core.rational;
 
 import org.apache.commons.math3.linear.Array2DRowRealMatrix;
 import org.apache.commons.math3.linear.ArrayRealVector;
+import org.apache.commons.math3.linear.DecompositionSolver;
 import org.apache.commons.math3.linear.LUDecomposition;
 import org.apache.commons.math3.linear.RealMatrix;
 import org.apache.commons.math3.linear.RealVector;
@@ -74,7 +75,7 @@ public final class MeanSquare {
                 size1 = Math.max(size1, Math.abs(kron.getEntry(r, s)));
             }
         }
-        org.apache.commons.math3.linear.DecompositionSolver solver =
+        DecompositionSolver solver =
                 new LUDecomposition(kron, 1e-14 * size1).getSolver();
         if (!solver.isNonSingular()) {
             return Double.POSITIVE_INFINITY; // a pole on (or numerically at) the frequency axis

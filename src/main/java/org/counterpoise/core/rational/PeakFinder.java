@@ -1,5 +1,7 @@
 package org.counterpoise.core.rational;
 
+import java.util.Arrays;
+
 
 /**
  * Exact global maximum of |H(i g)| over a closed band of g, or over all g &gt;= 0.
@@ -95,7 +97,7 @@ public final class PeakFinder {
                 out[n++] = Math.sqrt(x);
             }
         }
-        return java.util.Arrays.copyOf(out, n);
+        return Arrays.copyOf(out, n);
     }
 
     /** With no damping Q = E(x)^2; a root of E in the band is a resonance: unbounded. */

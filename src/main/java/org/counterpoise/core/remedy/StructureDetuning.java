@@ -1,5 +1,7 @@
 package org.counterpoise.core.remedy;
 
+import java.util.function.DoubleFunction;
+import java.util.function.DoubleUnaryOperator;
 import org.apache.commons.math3.analysis.solvers.BrentSolver;
 import org.counterpoise.core.model.ExcitationKind;
 import org.counterpoise.core.model.FrequencyBand;
@@ -36,7 +38,7 @@ public final class StructureDetuning {
     public static DetuningAlternative search(Structure structure, ExcitationKind excitation, double amplitude,
             FrequencyBand band, ResponseKind response, double target) {
         double omega1 = structure.naturalFrequency();
-        java.util.function.DoubleUnaryOperator excess = excess(factor -> structure.withStiffnessKeepingDamper(
+        DoubleUnaryOperator excess = excess(factor -> structure.withStiffnessKeepingDamper(
                 structure.modalStiffness() * factor), excitation, amplitude, band, response, target);
         return new DetuningAlternative(target, solve(excess, Math.max(1.0, sq(band.high() / omega1)), MAX_STIFFER),
                 solve(excess, Math.min(1.0, sq(band.low() / omega1)), MIN_SOFTER));
@@ -54,14 +56,14 @@ public final class StructureDetuning {
     public static DetuningAlternative searchMass(Structure structure, ExcitationKind excitation, double amplitude,
             FrequencyBand band, ResponseKind response, double target) {
         double omega1 = structure.naturalFrequency();
-        java.util.function.DoubleUnaryOperator excess = excess(factor -> structure.withMassKeepingDamper(
+        DoubleUnaryOperator excess = excess(factor -> structure.withMassKeepingDamper(
                 structure.modalMass() * factor), excitation, amplitude, band, response, target);
         // Natural frequency goes as 1/sqrt(mass): above the band needs factor <= (omega1/high)^2.
         return new DetuningAlternative(target, solve(excess, Math.min(1.0, sq(omega1 / band.high())), MIN_LIGHTER),
                 solve(excess, Math.max(1.0, sq(omega1 / band.low())), MAX_HEAVIER));
     }
 
-    private static java.util.function.DoubleUnaryOperator excess(java.util.function.DoubleFunction<Structure> change,
+    private static DoubleUnaryOperator excess(DoubleFunction<Structure> change,
             ExcitationKind excitation, double amplitude, FrequencyBand band, ResponseKind response, double target) {
         return factor -> {
             double peak = new SystemResponse(change.apply(factor), null, excitation, amplitude)
@@ -75,7 +77,7 @@ public final class StructureDetuning {
      * Walks geometrically from the band edge towards the limit until the target is met, then
      * refines the crossing with Brent's method.
      */
-    private static double solve(java.util.function.DoubleUnaryOperator excess, double start, double limit) {
+    private static double solve(DoubleUnaryOperator excess, double start, double limit) {
         if (excess.applyAsDouble(1.0) <= 0.0) {
             return 1.0;
         }

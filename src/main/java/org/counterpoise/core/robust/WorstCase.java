@@ -1,6 +1,7 @@
 package org.counterpoise.core.robust;
 
 import java.util.function.DoubleBinaryOperator;
+import java.util.function.DoubleUnaryOperator;
 import org.apache.commons.math3.optim.MaxEval;
 import org.apache.commons.math3.optim.nonlinear.scalar.GoalType;
 import org.apache.commons.math3.optim.univariate.BrentOptimizer;
@@ -57,7 +58,7 @@ public final class WorstCase {
         return twoDimensions(peak, structureRange, absorberRange);
     }
 
-    private static Point oneDimension(java.util.function.DoubleUnaryOperator f, double range, boolean structure) {
+    private static Point oneDimension(DoubleUnaryOperator f, double range, boolean structure) {
         double[] x = Sensitivity.factors(range, POINTS_1D);
         double[] v = new double[x.length];
         for (int i = 0; i < x.length; i++) {
@@ -134,7 +135,7 @@ public final class WorstCase {
     }
 
     /** @return {x, value} of the maximum on [lo, hi], never worse than the start point */
-    private static double[] maximise(java.util.function.DoubleUnaryOperator f, double lo, double hi, double start,
+    private static double[] maximise(DoubleUnaryOperator f, double lo, double hi, double start,
             double startValue) {
         if (hi <= lo) {
             return new double[] {start, startValue};

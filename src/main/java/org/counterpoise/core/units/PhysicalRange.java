@@ -1,5 +1,7 @@
 package org.counterpoise.core.units;
 
+import java.math.BigDecimal;
+import java.math.MathContext;
 import org.counterpoise.core.error.Checks;
 import org.counterpoise.core.error.InvalidInputException;
 
@@ -97,7 +99,7 @@ public enum PhysicalRange {
 
     private static String shown(Unit unit, double si) {
         double v = unit == null ? si : unit.fromSi(si);
-        java.math.BigDecimal d = new java.math.BigDecimal(v).round(new java.math.MathContext(3)).stripTrailingZeros();
+        BigDecimal d = new BigDecimal(v).round(new MathContext(3)).stripTrailingZeros();
         double m = Math.abs(v);
         return m >= 1e-4 && m < 1e7 ? d.toPlainString() : d.toString().replace("E", "e");
     }

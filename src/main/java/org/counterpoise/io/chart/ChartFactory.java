@@ -7,6 +7,7 @@ import java.util.ArrayList;
 import java.util.Collections;
 import java.util.List;
 import java.util.Map;
+import java.util.TreeMap;
 import java.util.WeakHashMap;
 import java.util.function.DoubleUnaryOperator;
 import org.counterpoise.core.design.DesignCurves;
@@ -25,12 +26,13 @@ import org.knowm.xchart.XYSeries;
 import org.knowm.xchart.internal.chartpart.Chart;
 import org.knowm.xchart.style.AxesChartStyler;
 import org.knowm.xchart.style.Styler;
-import org.knowm.xchart.style.XYStyler;
 import org.knowm.xchart.style.markers.SeriesMarkers;
 
 /**
- * Builds the charts of a design as XChart data, to be painted on any Graphics2D: the wizard's
- * panels, PNG and SVG files and the PDF sheet all use these. Frequencies in Hz, responses in the
+ * Builds the response and stroke charts of a design as XChart data, to be painted on any
+ * Graphics2D: the wizard's panels, PNG and SVG files and the PDF sheet all use these, and every
+ * chart of the package keeps its notes here. The look they share is {@link ChartStyle}; the
+ * mass-ratio chart is {@link MassRatioCharts}. Frequencies in Hz, responses in the
  * display units of {@link DisplayUnits}, colours from a {@link ChartTheme}. On a logarithmic axis
  * a value of zero (an undamped absorber holds the structure still at one frequency) is drawn at
  * the axis floor, a decade and a half below the smallest positive value; the axis labels its
@@ -90,9 +92,9 @@ public final class ChartFactory {
         Dimension d = curves.response().dimension();
         Unit unit = DisplayUnits.of(d);
         XYChart chart = base(width, height, capitalised(curves.response().label()), unit, theme);
-        double[] hz = toHz(curves.frequency());
-        double[] before = toUnit(curves.before(), unit);
-        double[] after = toUnit(curves.after(), unit);
+        double[] hz = ChartStyle.inUnit(curves.frequency(), Unit.HERTZ);
+        double[] before = ChartStyle.inUnit(curves.before(), unit);
+        double[] after = ChartStyle.inUnit(curves.after(), unit);
         ResponseKind kind = curves.response();
         Curve[] lines = {new Curve("without absorber", before, theme.before(), 1.4f, true, exact(r, false, kind, unit)),
             new Curve("with absorber", after, theme.after(), 2.2f, false, exact(r, true, kind, unit))};
@@ -119,8 +121,8 @@ public final class ChartFactory {
             int width, int height) {
         Unit unit = DisplayUnits.of(Dimension.LENGTH);
         XYChart chart = base(width, height, "Absorber stroke", unit, theme);
-        double[] hz = toHz(curves.frequency());
-        double[] stroke = toUnit(curves.stroke(), unit);
+        double[] hz = ChartStyle.inUnit(curves.frequency(), Unit.HERTZ);
+        double[] stroke = ChartStyle.inUnit(curves.stroke(), unit);
         double clearance = unit.fromSi(r.clearance());
         Curve[] lines = {new Curve("stroke", stroke, theme.stroke(), 2.0f, false,
             exact(r, true, ResponseKind.STROKE, unit))};
@@ -129,87 +131,11 @@ public final class ChartFactory {
         return chart;
     }
 
-    /**
-     * The least peak reachable for each mass ratio, on logarithmic axes, with this design marked.
-     * @param massRatios mass ratios (x)
-     * @param leastPeaks least peak for each, in the display unit
-     * @param unit the display unit of the response
-     * @param massRatio this design's mass ratio
-     * @param peak this design's peak, in the display unit
-     * @param theme colours
-     * @param width pixels
-     * @param height pixels
-     * @return the chart
-     */
-    public static XYChart massRatio(double[] massRatios, double[] leastPeaks, Unit unit, double massRatio, double peak,
-            ChartTheme theme, int width, int height) {
-        XYChart c = new XYChartBuilder().width(width).height(height).xAxisTitle("Mass ratio \u03bc")
-                .yAxisTitle("Least peak (" + pretty(unit.symbol()) + ")").build();
-        houseStyle(c.getStyler(), theme);
-        // The legend tells the curve of least peaks from this design's diamond.
-        List<double[]> points = new ArrayList<>();
-        for (int i = 0; i < Math.min(massRatios.length, leastPeaks.length); i++) {
-            if (massRatios[i] > 0 && Double.isFinite(massRatios[i]) && leastPeaks[i] > 0
-                    && Double.isFinite(leastPeaks[i])) {
-                points.add(new double[] {massRatios[i], leastPeaks[i]});
-            }
-        }
-        boolean here = massRatio > 0 && Double.isFinite(massRatio) && peak > 0 && Double.isFinite(peak);
-        if (points.isEmpty() && !here) {
-            note(c, "no finite least peak to draw");
-            return emptyNote(c, "no finite least peak to draw", theme);
-        }
-        double[] x = points.stream().mapToDouble(p -> p[0]).toArray();
-        double[] y = points.stream().mapToDouble(p -> p[1]).toArray();
-        double[] xr = span(x, here ? massRatio : Double.NaN);
-        double[] yr = span(y, here ? peak : Double.NaN);
-        for (int i = 0; i < x.length; i++) {
-            x[i] = Math.max(x[i], xr[0]);
-            y[i] = Math.max(y[i], yr[0]);
-        }
-        logAxis(c.getStyler(), true, xr[0] / 1.2, xr[1] * 1.2);
-        logAxis(c.getStyler(), false, yr[0] / 1.3, yr[1] * 1.3);
-        if (x.length > 0) {
-            XYSeries s = c.addSeries("least peak", x, y);
-            s.setLineColor(theme.after());
-            s.setMarker(SeriesMarkers.CIRCLE);
-            s.setMarkerColor(theme.after());
-        }
-        if (here) {
-            XYSeries now = c.addSeries("this design", new double[] {massRatio}, new double[] {peak});
-            now.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Scatter);
-            now.setMarkerColor(theme.stroke());
-            now.setMarker(SeriesMarkers.DIAMOND);
-        }
-        c.getStyler().setMarkerSize(6);
-        return c;
-    }
-
-    /** Smallest and largest of the values and an extra point (NaN: none); never equal. */
-    private static double[] span(double[] v, double extra) {
-        double lo = Double.POSITIVE_INFINITY;
-        double hi = 0;
-        for (double a : v) {
-            lo = Math.min(lo, a);
-            hi = Math.max(hi, a);
-        }
-        if (!Double.isNaN(extra)) {
-            lo = Math.min(lo, extra);
-            hi = Math.max(hi, extra);
-        }
-        if (!(hi > lo)) {
-            lo = hi / 2;
-            hi = hi * 2;
-        }
-        // A logarithmic axis over more than twelve decades tells nothing: the rest sits at its floor.
-        return new double[] {Math.max(lo, hi * 1e-12), hi};
-    }
-
     private static XYChart base(int width, int height, String title, Unit unit, ChartTheme theme) {
         XYChart chart = new XYChartBuilder().width(width).height(height).title(title)
                 .xAxisTitle("Forcing frequency (Hz)").yAxisTitle(title + " (" + pretty(unit.symbol()) + ")").build();
         var s = chart.getStyler();
-        houseStyle(s, theme);
+        ChartStyle.houseStyle(s, theme);
         s.setAnnotationLineColor(theme.band());
         s.setAnnotationLineStroke(new BasicStroke(1.6f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 10f,
                 new float[] {2f, 3f}, 0f));
@@ -255,7 +181,7 @@ public final class ChartFactory {
     /** The curve with the probed frequencies added where its value there is unbounded. */
     private static double[][] withProbes(double[] x, double[] y, double[] probes, DoubleUnaryOperator at,
             double typical) {
-        java.util.TreeMap<Double, Double> points = new java.util.TreeMap<>();
+        TreeMap<Double, Double> points = new TreeMap<>();
         for (int i = 0; i < x.length; i++) {
             points.put(x[i], y[i]);
         }
@@ -291,10 +217,10 @@ public final class ChartFactory {
             keep[i] = Double.isFinite(x[i]) && x[i] > 0;
             n += keep[i] ? 1 : 0;
         }
-        double[] hz = select(x, keep, n);
+        double[] hz = ChartStyle.select(x, keep, n);
         double[][] ys = new double[curves.length][];
         for (int k = 0; k < curves.length; k++) {
-            ys[k] = select(curves[k].y(), keep, n);
+            ys[k] = ChartStyle.select(curves[k].y(), keep, n);
         }
         double typical = PlotRange.typical(ys);
         double top = Math.max(PlotRange.top(typical, ys), Double.isFinite(level) ? level : 0);
@@ -350,7 +276,7 @@ public final class ChartFactory {
         double yTop = logarithmic ? top * 1.6 * Math.pow(top * 1.6 / floor, headroom / (1 - headroom))
                 : top * 1.1 + headroom / (1 - headroom) * (top * 1.1 - floor);
         if (logarithmic) {
-            logAxis(s, false, floor, yTop);
+            ChartStyle.logAxis(s, false, floor, yTop);
         } else {
             s.setYAxisMin(floor);
             s.setYAxisMax(yTop);
@@ -374,116 +300,7 @@ public final class ChartFactory {
             m.setMarkerColor(theme.alarm());
             chart.getStyler().setMarkerSize(9);
         }
-        notePanel(chart, theme, logarithmic ? top * 1.6 : top * 1.1);
-    }
-
-    /**
-     * Writes the chart's notes in a box at the left of its plot, its lower edge at a given height
-     * (the axes' ranges must be set).
-     * @param chart the chart
-     * @param theme colours
-     * @param above the height the box's lower edge sits at, in data units; NaN for near the top
-     */
-    static void notePanel(XYChart chart, ChartTheme theme, double above) {
-        List<String> notes = notes(chart);
-        AxesChartStyler s = chart.getStyler();
-        if (notes.isEmpty() || s.getXAxisMin() == null || s.getXAxisMax() == null || s.getYAxisMin() == null
-                || s.getYAxisMax() == null) {
-            return;
-        }
-        double x0 = s.getXAxisMin();
-        double x1 = s.getXAxisMax();
-        double y0 = s.getYAxisMin();
-        double y1 = s.getYAxisMax();
-        double x = s.isXAxisLogarithmic() ? x0 * Math.pow(x1 / x0, 0.015) : x0 + 0.015 * (x1 - x0);
-        double lines = Math.min(0.5, 0.03 + 0.07 * notes.size());
-        double y = !Double.isNaN(above) ? above
-                : s.isYAxisLogarithmic() ? y1 / Math.pow(y1 / y0, lines) : y1 - lines * (y1 - y0);
-        chart.addAnnotation(new NoteBox(notes, x, y, theme.plot(), theme.alarm()));
-    }
-
-    /**
-     * A logarithmic axis over [low, high] that labels its decades and marks 2 to 9 times each decade
-     * with unlabelled minor ticks; when it spans less than about one decade it labels every tick,
-     * so it never shows an axis without a number.
-     */
-    static void logAxis(AxesChartStyler s, boolean xAxis, double low, double high) {
-        boolean fewDecades = Math.log10(high / low) < 1.3;
-        String pattern = low < 1e-4 || high > 1e6 ? "0.##E0" : "0.##########";
-        if (xAxis) {
-            s.setXAxisLogarithmic(true);
-            s.setXAxisMin(low);
-            s.setXAxisMax(high);
-            s.setXAxisLogarithmicDecadeOnly(!fewDecades);
-            s.setXAxisDecimalPattern(pattern);
-        } else {
-            s.setYAxisLogarithmic(true);
-            s.setYAxisMin(low);
-            s.setYAxisMax(high);
-            s.setYAxisLogarithmicDecadeOnly(!fewDecades);
-            s.setYAxisDecimalPattern(pattern);
-        }
-    }
-
-    private static double[] select(double[] v, boolean[] keep, int n) {
-        double[] out = new double[n];
-        int k = 0;
-        for (int i = 0; i < v.length && i < keep.length; i++) {
-            if (keep[i]) {
-                out[k++] = v[i];
-            }
-        }
-        return out;
-    }
-
-    /** A chart with nothing to draw but a note in the middle of its plot. */
-    static XYChart emptyNote(XYChart c, String text, ChartTheme theme) {
-        c.getStyler().setXAxisLogarithmic(false);
-        c.getStyler().setYAxisLogarithmic(false);
-        c.getStyler().setXAxisMin(0.0);
-        c.getStyler().setXAxisMax(1.0);
-        c.getStyler().setYAxisMin(0.0);
-        c.getStyler().setYAxisMax(1.0);
-        c.getStyler().setAxisTicksVisible(false);
-        c.getStyler().setAnnotationTextFontColor(theme.text());
-        c.getStyler().setAnnotationTextFont(new Font(Font.SANS_SERIF, Font.PLAIN, 12));
-        XYSeries blank = c.addSeries(" ", new double[] {0, 1}, new double[] {0, 0});
-        blank.setLineColor(new Color(0, 0, 0, 0));
-        blank.setMarker(SeriesMarkers.NONE);
-        blank.setShowInLegend(false);
-        c.addAnnotation(new AnnotationText(text, 0.5, 0.5, false));
-        return c;
-    }
-
-    /**
-     * The look every Counterpoise XY chart shares: light grid, small sans-serif type, colours of
-     * the theme.
-     * @param s the chart's styler
-     * @param theme colours
-     */
-    static void houseStyle(XYStyler s, ChartTheme theme) {
-        s.setChartBackgroundColor(theme.background());
-        s.setPlotBackgroundColor(theme.plot());
-        s.setPlotBorderVisible(true);
-        s.setPlotBorderColor(theme.border());
-        s.setPlotGridLinesColor(theme.grid());
-        s.setChartFontColor(theme.text());
-        s.setAxisTickLabelsColor(theme.text());
-        s.setAxisTickMarksColor(theme.border());
-        s.setLegendBackgroundColor(theme.plot());
-        s.setLegendPosition(Styler.LegendPosition.InsideNE);
-        s.setLegendBorderColor(theme.border());
-        s.setChartTitleBoxVisible(false);
-        s.setChartTitleFont(new Font(Font.SANS_SERIF, Font.BOLD, 13));
-        s.setAxisTitleFont(new Font(Font.SANS_SERIF, Font.PLAIN, 11));
-        s.setAxisTickLabelsFont(new Font(Font.SANS_SERIF, Font.PLAIN, 10));
-        s.setLegendFont(new Font(Font.SANS_SERIF, Font.PLAIN, 10));
-        s.setMarkerSize(0);
-        s.setAntiAlias(true);
-        // The wizard shows values in its own readout; the chart library's pointer aids stay off.
-        s.setToolTipsEnabled(false);
-        s.setCursorEnabled(false);
-        s.setZoomEnabled(false);
+        ChartStyle.notePanel(chart, theme, logarithmic ? top * 1.6 : top * 1.1);
     }
 
     /** Marks the forcing band by its two ends (one line for one frequency) and a label at the top. */
@@ -531,22 +348,6 @@ public final class ChartFactory {
         double lowest = top * 1e-4;
         double f = Double.isInfinite(min) ? lowest : Math.max(min / 1.5, lowest);
         return Math.min(f, top / 10);
-    }
-
-    private static double[] toHz(double[] omega) {
-        double[] out = new double[omega.length];
-        for (int i = 0; i < omega.length; i++) {
-            out[i] = Unit.HERTZ.fromSi(omega[i]);
-        }
-        return out;
-    }
-
-    private static double[] toUnit(double[] si, Unit unit) {
-        double[] out = new double[si.length];
-        for (int i = 0; i < si.length; i++) {
-            out[i] = unit.fromSi(si[i]);
-        }
-        return out;
     }
 
     /** Unit symbols as typeset: N*s/m as N·s/m, m/s^2 as m/s². */

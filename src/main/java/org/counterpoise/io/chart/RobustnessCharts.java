@@ -3,12 +3,14 @@ package org.counterpoise.io.chart;
 import java.awt.BasicStroke;
 import java.awt.Color;
 import java.awt.Font;
+import java.math.BigDecimal;
+import java.math.MathContext;
+import java.math.RoundingMode;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.RobustnessResult;
-import org.counterpoise.core.robust.MonteCarloResult;
 import org.counterpoise.core.robust.SensitivityCurve;
 import org.counterpoise.core.robust.SensitivityMap;
 import org.counterpoise.core.units.Dimension;
@@ -27,14 +29,11 @@ import org.knowm.xchart.style.markers.SeriesMarkers;
 /**
  * Charts of a robustness study, as data to paint anywhere: the sensitivity of the design and of
  * the robust design to structure mistuning (with the target line), the map over structure x
- * absorber mistuning (cells at or above the target in the top colour), and the Monte Carlo
- * histogram (with the target line). Unbounded peaks (see {@link PlotRange}) never reach the chart
+ * absorber mistuning (cells at or above the target in the top colour); the Monte Carlo histogram
+ * is drawn by {@link MonteCarloCharts}. Unbounded peaks (see {@link PlotRange}) never reach the chart
  * library: they are drawn at the top of the range and named in {@link ChartFactory#notes}.
  */
 public final class RobustnessCharts {
-    /** The fewest bars a histogram of more than one distinct value is drawn with. */
-    static final int MIN_BINS = 5;
-
     private RobustnessCharts() {
     }
 
@@ -59,11 +58,11 @@ public final class RobustnessCharts {
                 .title("Peak in band, structure off-tune")
                 .xAxisTitle("Structure natural frequency offset (%)")
                 .yAxisTitle("Peak (" + ChartFactory.pretty(unit.symbol()) + ")").build();
-        ChartFactory.houseStyle(chart.getStyler(), theme);
+        ChartStyle.houseStyle(chart.getStyler(), theme);
         // The curves run along the top of the plot; the legend goes below them.
         chart.getStyler().setLegendPosition(Styler.LegendPosition.InsideS);
         double[][] x = {percent(r.structureCurve()), percent(r.robustStructureCurve())};
-        double[][] y = {toUnit(r.structureCurve().peaks(), unit), toUnit(r.robustStructureCurve().peaks(), unit)};
+        double[][] y = {ChartStyle.inUnit(r.structureCurve().peaks(), unit), ChartStyle.inUnit(r.robustStructureCurve().peaks(), unit)};
         double typical = PlotRange.typical(y);
         double target = unit.fromSi(r.settings().target());
         boolean hasTarget = Double.isFinite(target) && target > 0;
@@ -102,8 +101,8 @@ public final class RobustnessCharts {
             if (n == 0) {
                 continue;
             }
-            double[] xs = keepOnly(x[k], keep, n);
-            double[] ys = keepOnly(y[k], keep, n);
+            double[] xs = ChartStyle.select(x[k], keep, n);
+            double[] ys = ChartStyle.select(y[k], keep, n);
             XYSeries series = chart.addSeries(names[k], xs, PlotRange.clip(ys, typical, 0, top));
             series.setLineColor(colours[k]);
             series.setMarker(SeriesMarkers.NONE);
@@ -145,7 +144,7 @@ public final class RobustnessCharts {
         m.setMarker(SeriesMarkers.TRIANGLE_UP);
         m.setMarkerColor(theme.alarm());
         chart.getStyler().setMarkerSize(9);
-        ChartFactory.notePanel(chart, theme, Double.NaN);
+        ChartStyle.notePanel(chart, theme, Double.NaN);
     }
 
     private static double[] percent(SensitivityCurve c) {
@@ -154,25 +153,6 @@ public final class RobustnessCharts {
             x[i] = 100 * (x[i] - 1);
         }
         return x;
-    }
-
-    private static double[] toUnit(double[] si, Unit unit) {
-        double[] out = new double[si.length];
-        for (int i = 0; i < si.length; i++) {
-            out[i] = unit.fromSi(si[i]);
-        }
-        return out;
-    }
-
-    private static double[] keepOnly(double[] v, boolean[] keep, int n) {
-        double[] out = new double[n];
-        int k = 0;
-        for (int i = 0; i < keep.length; i++) {
-            if (keep[i]) {
-                out[k++] = v[i];
-            }
-        }
-        return out;
     }
 
     /** The map in the light (print) theme. */
@@ -200,7 +180,7 @@ public final class RobustnessCharts {
         double[][] z = m.peaks();
         double[][] shown = new double[z.length][];
         for (int i = 0; i < z.length; i++) {
-            shown[i] = toUnit(z[i], unit);
+            shown[i] = ChartStyle.inUnit(z[i], unit);
         }
         double typical = PlotRange.typical(shown);
         double target = unit.fromSi(r.settings().target());
@@ -264,157 +244,16 @@ public final class RobustnessCharts {
         // The colour bar prints its ends as plain doubles: round them to three significant figures
         // in decimal, so the bar reads 0.072 and not 0.07200000000000001.
         if (bottom > 0) {
-            bottom = new java.math.BigDecimal(bottom).round(new java.math.MathContext(3, java.math.RoundingMode.FLOOR))
+            bottom = new BigDecimal(bottom).round(new MathContext(3, RoundingMode.FLOOR))
                     .doubleValue();
         }
         s.setMin(bottom);
-        s.setMax(top > 0 ? new java.math.BigDecimal(top).round(new java.math.MathContext(3,
-                java.math.RoundingMode.CEILING)).doubleValue() : top);
+        s.setMax(top > 0 ? new BigDecimal(top).round(new MathContext(3,
+                RoundingMode.CEILING)).doubleValue() : top);
         s.setHeatMapDecimalValueFormatter(v -> QuantityFormat.number(v, 3));
         if (!cells.isEmpty()) {
             chart.addSeries("peak", xs, ys, cells);
         }
         return chart;
-    }
-
-    /** The histogram in the light (print) theme. */
-    public static XYChart histogram(DesignResult design, MonteCarloResult mc, int width, int height) {
-        return histogram(design, mc, ChartTheme.LIGHT, width, height);
-    }
-
-    /**
-     * The histogram of the peak among sampled builds. The Monte Carlo counts its samples in equal
-     * bins; the chart joins neighbouring bins to about the Freedman-Diaconis width (see
-     * {@link #grouping}), but never to fewer than {@link #MIN_BINS} bars. When every sample gives the same peak, or a peak is unbounded,
-     * the chart says so in words instead of drawing bars.
-     * @param design the design
-     * @param mc its Monte Carlo result
-     * @param theme colours
-     * @param width pixels
-     * @param height pixels
-     * @return the histogram of the peak among sampled builds, with the target line
-     */
-    public static XYChart histogram(DesignResult design, MonteCarloResult mc, ChartTheme theme, int width,
-            int height) {
-        Unit unit = DisplayUnits.of(design.study().response().dimension());
-        XYChart chart = new XYChartBuilder().width(width).height(height)
-                .title("Peak of " + mc.samples() + " sampled builds")
-                .xAxisTitle("Peak (" + ChartFactory.pretty(unit.symbol()) + ")").yAxisTitle("Builds").build();
-        ChartFactory.houseStyle(chart.getStyler(), theme);
-        chart.getStyler().setLegendVisible(false);
-        double[] edges = toUnit(mc.binEdges(), unit);
-        int[] counts = mc.counts();
-        double low = edges.length > 0 ? edges[0] : Double.NaN;
-        double high = edges.length > 0 ? edges[edges.length - 1] : Double.NaN;
-        if (counts.length == 0 || edges.length != counts.length + 1 || !Double.isFinite(low)
-                || !Double.isFinite(high) || PlotRange.unbounded(high, PlotRange.typical(new double[] {low}))) {
-            String text = "The peak is unbounded in some sampled builds: no histogram to draw.";
-            ChartFactory.note(chart, text);
-            return ChartFactory.emptyNote(chart, text, theme);
-        }
-        for (int i = 1; i < edges.length; i++) {
-            if (!Double.isFinite(edges[i]) || edges[i] < edges[i - 1]) {
-                String text = Double.isFinite(edges[i]) ? "The Monte Carlo bins are out of order: no histogram to draw."
-                        : "The peak is unbounded in some sampled builds: no histogram to draw.";
-                ChartFactory.note(chart, text);
-                return ChartFactory.emptyNote(chart, text, theme);
-            }
-        }
-        if (!(high > low)) {
-            String text = "All " + mc.samples() + " sampled builds give the same peak, "
-                    + QuantityFormat.number(low, QuantityFormat.FIGURES) + " " + unit.symbol() + ".";
-            ChartFactory.note(chart, text);
-            return ChartFactory.emptyNote(chart, text, theme);
-        }
-        int group = grouping(counts, mc.samples());
-        int bars = counts.length / group;
-        double[] x = new double[2 * bars + 2];
-        double[] y = new double[x.length];
-        x[0] = low;
-        int tallest = 0;
-        for (int b = 0; b < bars; b++) {
-            int c = 0;
-            for (int k = b * group; k < (b + 1) * group; k++) {
-                c += counts[k];
-            }
-            tallest = Math.max(tallest, c);
-            x[2 * b + 1] = edges[b * group];
-            y[2 * b + 1] = c;
-            x[2 * b + 2] = edges[(b + 1) * group];
-            y[2 * b + 2] = c;
-        }
-        x[x.length - 1] = high;
-        var s = chart.getStyler();
-        double pad = 0.04 * (high - low);
-        double target = unit.fromSi(mc.target());
-        double xLow = low - pad;
-        double xHigh = high + pad;
-        if (Double.isFinite(target) && target > 0 && !PlotRange.unbounded(target, high)) {
-            xLow = Math.min(xLow, target - pad);
-            xHigh = Math.max(xHigh, target + pad);
-            s.setAnnotationLineColor(theme.alarm());
-            s.setAnnotationLineStroke(new BasicStroke(1.6f));
-            chart.addAnnotation(new AnnotationLine(target, true, false));
-        }
-        s.setXAxisMin(xLow);
-        s.setXAxisMax(xHigh);
-        s.setYAxisMin(0.0);
-        s.setYAxisMax(Math.max(1.0, tallest * 1.08));
-        s.setxAxisTickLabelsFormattingFunction(ChartNumbers.linearAxis(xLow, xHigh));
-        s.setyAxisTickLabelsFormattingFunction(ChartNumbers.linearAxis(0, tallest));
-        XYSeries series = chart.addSeries("builds", x, y);
-        series.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Area);
-        series.setFillColor(theme.fill());
-        series.setLineColor(theme.after());
-        series.setMarker(SeriesMarkers.NONE);
-        return chart;
-    }
-
-    /**
-     * How many neighbouring bins of the Monte Carlo make one bar. The wanted bar width is Freedman
-     * and Diaconis' h = 2 IQR n^(-1/3) (Freedman and Diaconis 1981, Z. Wahrscheinlichkeitstheorie
-     * verw. Gebiete 57, 453-476), with the quartiles read from the counts by linear interpolation
-     * within a bin; when the counts give no quartiles (none counted), Sturges' 1 + log2(n) classes (Sturges 1926, J. Am.
-     * Stat. Assoc. 21(153), 65-66). The bar count is the one nearest the wanted count among the
-     * divisors of the bin count (more bars on a tie), and at least {@link #MIN_BINS} when there
-     * are that many bins.
-     * @param counts samples per equal bin
-     * @param samples number of samples
-     * @return bins per bar
-     */
-    static int grouping(int[] counts, int samples) {
-        int bins = counts.length;
-        double q1 = quantile(counts, 0.25);
-        double q3 = quantile(counts, 0.75);
-        double wanted = q3 > q1 ? bins / (2 * (q3 - q1) * Math.pow(Math.max(1, samples), -1.0 / 3))
-                : 1 + Math.log(Math.max(1, samples)) / Math.log(2);
-        wanted = Math.max(MIN_BINS, wanted);
-        int best = 1;
-        for (int g = 1; g <= bins; g++) {
-            if (bins % g != 0 || (bins / g < MIN_BINS && bins >= MIN_BINS)) {
-                continue;
-            }
-            if (Math.abs(bins / g - wanted) < Math.abs(bins / best - wanted)) {
-                best = g;
-            }
-        }
-        return best;
-    }
-
-    /** The p-quantile of binned data, in units of bin widths from the lower edge. */
-    private static double quantile(int[] counts, double p) {
-        long total = 0;
-        for (int c : counts) {
-            total += c;
-        }
-        double rank = p * total;
-        long below = 0;
-        for (int b = 0; b < counts.length; b++) {
-            if (counts[b] > 0 && below + counts[b] >= rank) {
-                return b + (rank - below) / counts[b];
-            }
-            below += counts[b];
-        }
-        return counts.length;
     }
 }

@@ -7,6 +7,7 @@ import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.error.Warning;
 import org.counterpoise.core.response.ResponseKind;
 import org.counterpoise.core.response.ResponsePeak;
+import org.counterpoise.core.robust.DetuningRange;
 import org.counterpoise.core.units.Unit;
 import org.counterpoise.io.project.Ids;
 import org.counterpoise.io.text.WarningText;
@@ -103,7 +104,7 @@ public final class ResultJson {
         return JsonNumbers.write(of(r));
     }
 
-    private static void tolerance(JsonObject o, String key, org.counterpoise.core.robust.DetuningRange range) {
+    private static void tolerance(JsonObject o, String key, DetuningRange range) {
         number(o, "tolerated_" + key + "_factor_low", range.low());
         number(o, "tolerated_" + key + "_factor_high", range.high());
         if (range.ofBareResponse()) {

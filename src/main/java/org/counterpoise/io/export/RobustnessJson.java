@@ -2,6 +2,7 @@ package org.counterpoise.io.export;
 
 import com.google.gson.JsonArray;
 import com.google.gson.JsonObject;
+import java.util.Locale;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.RobustnessResult;
 import org.counterpoise.core.robust.MonteCarloResult;
@@ -20,7 +21,7 @@ public final class RobustnessJson {
     public static String toJson(DesignResult design, RobustnessResult r) {
         JsonObject o = new JsonObject();
         o.addProperty("name", design.study().name());
-        o.addProperty("response_quantity", design.study().response().name().toLowerCase(java.util.Locale.ROOT)
+        o.addProperty("response_quantity", design.study().response().name().toLowerCase(Locale.ROOT)
                 .replace('_', '-'));
         o.addProperty("response_unit", design.study().response().dimension().siSymbol());
         number(o, "structure_detuning_range", r.settings().structureRange());

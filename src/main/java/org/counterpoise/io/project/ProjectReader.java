@@ -4,6 +4,7 @@ import com.google.gson.JsonElement;
 import java.io.IOException;
 import java.io.Reader;
 import java.nio.file.Path;
+import java.util.Arrays;
 import java.util.List;
 import org.counterpoise.core.design.DesignMethod;
 import org.counterpoise.core.design.DesignStudy;
@@ -206,7 +207,7 @@ public final class ProjectReader {
             return null;
         }
         String text = s.text("kind");
-        Spectrum.Kind k = java.util.Arrays.stream(Spectrum.Kind.values()).filter(x -> x.id().equals(text)).findFirst()
+        Spectrum.Kind k = Arrays.stream(Spectrum.Kind.values()).filter(x -> x.id().equals(text)).findFirst()
                 .orElseThrow(() -> new InvalidInputException(s.pathOf("kind"), "\"" + text + "\"",
                         "one of harmonic, white-noise"));
         SpectrumInput out;

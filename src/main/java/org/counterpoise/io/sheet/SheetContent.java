@@ -6,11 +6,13 @@ import org.counterpoise.core.design.Cautions;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.DesignStudy;
 import org.counterpoise.core.model.Excitation;
+import org.counterpoise.core.model.ExcitationKind;
 import org.counterpoise.core.model.FrequencyBand;
 import org.counterpoise.core.model.Structure;
 import org.counterpoise.core.remedy.DetuningAlternative;
 import org.counterpoise.core.response.ResponseKind;
 import org.counterpoise.core.response.ResponsePeak;
+import org.counterpoise.core.robust.MonteCarloResult;
 import org.counterpoise.core.units.Dimension;
 import org.counterpoise.core.units.Unit;
 import org.counterpoise.io.project.ProjectIdentity;
@@ -93,7 +95,7 @@ public record SheetContent(String projectName, String notes, String date, String
      * @return the sheet content
      */
     public static SheetContent of(DesignResult r, String notes, String date, String revision,
-            org.counterpoise.core.robust.MonteCarloResult monteCarlo) {
+            MonteCarloResult monteCarlo) {
         return of(r, notes, date, revision, monteCarlo, ProjectIdentity.EMPTY);
     }
 
@@ -108,7 +110,7 @@ public record SheetContent(String projectName, String notes, String date, String
      * @return the sheet content
      */
     public static SheetContent of(DesignResult r, String notes, String date, String revision,
-            org.counterpoise.core.robust.MonteCarloResult monteCarlo, ProjectIdentity identity) {
+            MonteCarloResult monteCarlo, ProjectIdentity identity) {
         DesignStudy study = r.study();
         Structure s = study.structure();
         Excitation e = study.excitation();
@@ -195,7 +197,7 @@ public record SheetContent(String projectName, String notes, String date, String
             // Short labels (they fit the wizard's table); the response is named in the Disturbance section.
             sections.add(new Section(RMS, List.of(
                     new Row("PSD level (one-sided)", QuantityFormat.number(rms.psdLevel(), 4),
-                            e.kind() == org.counterpoise.core.model.ExcitationKind.FORCE ? "N^2/Hz" : "(m/s^2)^2/Hz"),
+                            e.kind() == ExcitationKind.FORCE ? "N^2/Hz" : "(m/s^2)^2/Hz"),
                     quantity("Rms without absorber", rms.before(), d),
                     quantity("Rms with absorber", rms.after(), d),
                     quantity("Rms absorber stroke", rms.stroke(), Dimension.LENGTH))));

@@ -15,6 +15,10 @@ import java.util.function.BiFunction;
 import org.counterpoise.core.design.DesignCurves;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.error.InvalidInputException;
+import org.counterpoise.core.robust.Mistuning;
+import org.counterpoise.core.robust.MonteCarlo;
+import org.counterpoise.core.robust.MonteCarloResult;
+import org.counterpoise.core.robust.ToleranceSet;
 import org.counterpoise.io.AtomicFiles;
 import org.counterpoise.io.FileWriteException;
 import org.counterpoise.io.PlainMessages;
@@ -82,14 +86,14 @@ public final class SheetFiles {
      * @param r the design
      * @return the Monte Carlo of the project's tolerances, or null when it has none
      */
-    public static org.counterpoise.core.robust.MonteCarloResult monteCarlo(DesignResult r) {
+    public static MonteCarloResult monteCarlo(DesignResult r) {
         var settings = r.study().robustness();
-        if (settings.tolerances().equals(org.counterpoise.core.robust.ToleranceSet.NONE)) {
+        if (settings.tolerances().equals(ToleranceSet.NONE)) {
             return null;
         }
-        var m = new org.counterpoise.core.robust.Mistuning(r.study().structure(), r.study().excitation(),
+        var m = new Mistuning(r.study().structure(), r.study().excitation(),
                 r.study().response());
-        return org.counterpoise.core.robust.MonteCarlo.run(m, r.absorber(), settings.tolerances(), settings.samples(),
+        return MonteCarlo.run(m, r.absorber(), settings.tolerances(), settings.samples(),
                 settings.seed(), settings.target());
     }
 

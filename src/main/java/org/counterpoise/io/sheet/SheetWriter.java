@@ -9,6 +9,7 @@ import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.regex.Pattern;
 import org.apache.pdfbox.pdmodel.PDDocument;
 import org.apache.pdfbox.pdmodel.PDPage;
 import org.apache.pdfbox.pdmodel.PDPageContentStream;
@@ -37,7 +38,7 @@ public final class SheetWriter {
     private static final float BODY = 9.5f;
     private static final float LINE = 12.5f;
     /** A value printed right-aligned as a number (digits, signs, separators), not as text. */
-    private static final java.util.regex.Pattern NUMERIC = java.util.regex.Pattern.compile("[-+0-9.,/ e]+");
+    private static final Pattern NUMERIC = Pattern.compile("[-+0-9.,/ e]+");
     private static final Color INK = new Color(0x1d, 0x23, 0x2b);
     private static final Color MUTED = new Color(0x6b, 0x72, 0x7c);
     private static final Color ACCENT = new Color(0x0b, 0x6e, 0x69);

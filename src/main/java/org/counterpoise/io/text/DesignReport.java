@@ -6,6 +6,7 @@ import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.DesignStudy;
 import org.counterpoise.core.error.Warning;
 import org.counterpoise.core.model.Excitation;
+import org.counterpoise.core.model.ExcitationKind;
 import org.counterpoise.core.model.FrequencyBand;
 import org.counterpoise.core.model.Structure;
 import org.counterpoise.core.remedy.DetuningAlternative;
@@ -104,7 +105,7 @@ public final class DesignReport {
         r.rms().ifPresent(rms -> {
             section(out, "Response to the white-noise disturbance (root mean square)");
             row(out, "spectral density (one-sided)", QuantityFormat.number(rms.psdLevel(), 4)
-                    + (study.excitation().kind() == org.counterpoise.core.model.ExcitationKind.FORCE ? " N^2/Hz"
+                    + (study.excitation().kind() == ExcitationKind.FORCE ? " N^2/Hz"
                             : " (m/s^2)^2/Hz"));
             row(out, "rms without absorber", rmsText(rms.before(), study.response().dimension()));
             row(out, "rms with absorber", rmsText(rms.after(), study.response().dimension()));

@@ -2,6 +2,7 @@ package org.counterpoise.io.text;
 
 import java.math.BigDecimal;
 import java.math.MathContext;
+import java.math.RoundingMode;
 import java.util.Locale;
 import org.counterpoise.core.units.Unit;
 
@@ -50,7 +51,7 @@ public final class QuantityFormat {
         if (abs >= 1e-4 && abs < 1e7) {
             // Keep trailing zeros so every value shows the same number of significant figures.
             int exponent = rounded.precision() - rounded.scale() - 1;
-            return rounded.setScale(Math.max(0, figures - 1 - exponent), java.math.RoundingMode.HALF_EVEN)
+            return rounded.setScale(Math.max(0, figures - 1 - exponent), RoundingMode.HALF_EVEN)
                     .toPlainString();
         }
         return String.format(Locale.ROOT, "%." + (figures - 1) + "e", rounded.doubleValue());

@@ -5,6 +5,7 @@ import java.io.PrintWriter;
 import java.io.StringWriter;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
+import java.nio.file.InvalidPathException;
 import java.nio.file.Path;
 import java.time.LocalDateTime;
 import java.time.format.DateTimeFormatter;
@@ -68,7 +69,7 @@ public final class Cli {
         }
         try {
             return Files.isRegularFile(Path.of(args[0]));
-        } catch (java.nio.file.InvalidPathException e) {
+        } catch (InvalidPathException e) {
             return false;
         }
     }

@@ -21,6 +21,7 @@ import org.counterpoise.io.PlainText;
 import org.counterpoise.io.TextFiles;
 import org.counterpoise.io.export.OptimumTable;
 import org.counterpoise.io.project.Ids;
+import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
@@ -299,7 +300,7 @@ public final class OptimumCommand implements Callable<Integer> {
     private static double number(String field, String text) {
         try {
             return Converters.real(text);
-        } catch (picocli.CommandLine.TypeConversionException e) {
+        } catch (CommandLine.TypeConversionException e) {
             throw new InvalidInputException(field, Converters.shown(text), e.getMessage());
         }
     }

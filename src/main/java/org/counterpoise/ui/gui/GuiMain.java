@@ -1,5 +1,6 @@
 package org.counterpoise.ui.gui;
 
+import java.nio.file.Path;
 import java.util.logging.Level;
 import java.util.logging.Logger;
 import javax.swing.JOptionPane;
@@ -21,7 +22,7 @@ public final class GuiMain {
      * file that cannot be opened is reported in the wizard, which then starts as usual.
      * @param project the project file, or null for a new project
      */
-    public static void open(java.nio.file.Path project) {
+    public static void open(Path project) {
         Thread.setDefaultUncaughtExceptionHandler((thread, e) -> {
             Logger.getLogger("counterpoise").log(Level.SEVERE, "unexpected failure", e);
             SwingUtilities.invokeLater(() -> JOptionPane.showMessageDialog(null,

@@ -156,7 +156,7 @@ class ChartInputTest {
             }
             String csv = CurveCsv.of(c);
             assertFalse(csv.contains("NaN") || csv.contains("Infinity"), where);
-            assertDrawable(ChartFactory.massRatio(w, y[0], Unit.MILLIMETRE, y[1].length > 0 ? y[1][0] : Double.NaN,
+            assertDrawable(MassRatioCharts.massRatio(w, y[0], Unit.MILLIMETRE, y[1].length > 0 ? y[1][0] : Double.NaN,
                     y[2].length > 0 ? y[2][0] : Double.NaN, theme, 400, 300), encode);
         }
     }
@@ -193,7 +193,7 @@ class ChartInputTest {
                     base.toleratedForTarget(), mc);
             ChartTheme theme = trial % 2 == 0 ? ChartTheme.LIGHT : ChartTheme.DARK;
             assertDrawable(RobustnessCharts.sensitivity(FAN, r, theme, 400, 300), false);
-            assertDrawable(RobustnessCharts.histogram(FAN, mc, theme, 400, 300), false);
+            assertDrawable(MonteCarloCharts.histogram(FAN, mc, theme, 400, 300), false);
             paint(RobustnessCharts.map(FAN, r, theme, 400, 300, 1 + random.nextInt(3)));
         }
     }
@@ -205,19 +205,19 @@ class ChartInputTest {
         // wanted bar count is 40 / (40 n^(-1/3)) = n^(1/3); the bars are joined bins, a divisor of 40.
         int[] even = new int[40];
         java.util.Arrays.fill(even, 25); // n = 1000: n^(1/3) = 10 bars
-        assertEquals(10, 40 / RobustnessCharts.grouping(even, 1000));
+        assertEquals(10, 40 / MonteCarloCharts.grouping(even, 1000));
         java.util.Arrays.fill(even, 1000); // n = 40 000: 34.2 wanted, 40 is nearest
-        assertEquals(40, 40 / RobustnessCharts.grouping(even, 40_000));
+        assertEquals(40, 40 / MonteCarloCharts.grouping(even, 40_000));
         java.util.Arrays.fill(even, 200); // n = 8000: 20 bars
-        assertEquals(20, 40 / RobustnessCharts.grouping(even, 8000));
+        assertEquals(20, 40 / MonteCarloCharts.grouping(even, 8000));
         // Few samples: n^(1/3) = 2.2, raised to the minimum of 5 bars.
         int[] few = new int[40];
         few[3] = 4;
         few[30] = 6;
-        assertEquals(RobustnessCharts.MIN_BINS, 40 / RobustnessCharts.grouping(few, 10));
+        assertEquals(MonteCarloCharts.MIN_BINS, 40 / MonteCarloCharts.grouping(few, 10));
         // Counts that give no quartiles: Sturges (1926), J. Am. Stat. Assoc. 21(153), 65-66,
         // 1 + log2(10 000) = 14.3 classes: 10 bars are nearer than 20.
-        assertEquals(10, 40 / RobustnessCharts.grouping(new int[40], 10_000));
+        assertEquals(10, 40 / MonteCarloCharts.grouping(new int[40], 10_000));
     }
 
     @Test
@@ -228,7 +228,7 @@ class ChartInputTest {
         counts[0] = 500;
         MonteCarloResult mc = new MonteCarloResult(500, 1, 2e-4, 2e-4, 2e-4, 2e-4, 2e-4, 2e-4, 2e-4, 2e-4,
                 Double.NaN, Double.NaN, edges, counts);
-        XYChart chart = RobustnessCharts.histogram(FAN, mc, 400, 300);
+        XYChart chart = MonteCarloCharts.histogram(FAN, mc, 400, 300);
         assertDrawable(chart);
         assertNull(chart.getSeriesMap().get("builds"));
         assertEquals(List.of("All 500 sampled builds give the same peak, 0.2000 mm."), ChartFactory.notes(chart));
@@ -254,7 +254,7 @@ class ChartInputTest {
         assertTrue(wide.getStyler().isYAxisLogarithmic());
         assertTrue(wide.getStyler().isYAxisLogarithmicDecadeOnly());
         assertTrue(wide.getStyler().getYAxisMax() / wide.getStyler().getYAxisMin() >= 10, "at least one decade");
-        XYChart narrow = ChartFactory.massRatio(new double[] {0.02, 0.05}, new double[] {0.30, 0.12}, Unit.MILLIMETRE,
+        XYChart narrow = MassRatioCharts.massRatio(new double[] {0.02, 0.05}, new double[] {0.30, 0.12}, Unit.MILLIMETRE,
                 0.05, 0.12, ChartTheme.LIGHT, 400, 300);
         assertFalse(narrow.getStyler().isYAxisLogarithmicDecadeOnly(), "a narrow axis labels 2..9 too");
     }

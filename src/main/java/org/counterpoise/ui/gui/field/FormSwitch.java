@@ -1,5 +1,6 @@
 package org.counterpoise.ui.gui.field;
 
+import java.util.Arrays;
 import java.util.List;
 import java.util.function.IntFunction;
 import javax.swing.JComboBox;
@@ -41,7 +42,7 @@ public final class FormSwitch {
             Conversion conversion, IntFunction<String> whenCleared) {
         int count = forms.getItemCount();
         double[] remembered = new double[count];
-        java.util.Arrays.fill(remembered, Double.NaN);
+        Arrays.fill(remembered, Double.NaN);
         int[] shown = {forms.getSelectedIndex()};
         int[] project = {field.shownValues()};
         forms.addActionListener(e -> {
@@ -52,7 +53,7 @@ public final class FormSwitch {
                 return;
             }
             if (project[0] != field.shownValues()) {
-                java.util.Arrays.fill(remembered, Double.NaN); // another project was shown: its values are not this one's
+                Arrays.fill(remembered, Double.NaN); // another project was shown: its values are not this one's
                 project[0] = field.shownValues();
             }
             double si = field.siOrNaN();

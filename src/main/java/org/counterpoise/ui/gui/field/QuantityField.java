@@ -1,15 +1,24 @@
 package org.counterpoise.ui.gui.field;
 
 import java.awt.Color;
+import java.awt.Component;
+import java.awt.Container;
+import java.awt.Dimension;
 import java.awt.FlowLayout;
+import java.awt.event.HierarchyBoundsAdapter;
+import java.awt.event.HierarchyEvent;
 import java.util.List;
 import java.util.Locale;
 import java.util.function.BiConsumer;
 import javax.swing.DefaultComboBoxModel;
+import javax.swing.DefaultListCellRenderer;
 import javax.swing.JComboBox;
 import javax.swing.JLabel;
+import javax.swing.JList;
 import javax.swing.JPanel;
 import javax.swing.JTextField;
+import javax.swing.JViewport;
+import javax.swing.SwingUtilities;
 import javax.swing.UIManager;
 import javax.swing.event.DocumentEvent;
 import javax.swing.event.DocumentListener;
@@ -62,9 +71,9 @@ public final class QuantityField extends JPanel {
         // Never squeeze a field to nothing when its form is short of room.
         text.setMinimumSize(text.getPreferredSize());
         units.setName(fieldId + ".unit");
-        units.setRenderer(new javax.swing.DefaultListCellRenderer() {
+        units.setRenderer(new DefaultListCellRenderer() {
             @Override
-            public java.awt.Component getListCellRendererComponent(javax.swing.JList<?> list, Object value,
+            public Component getListCellRendererComponent(JList<?> list, Object value,
                     int index, boolean selected, boolean focus) {
                 return super.getListCellRendererComponent(list, value instanceof Unit u ? pretty(u.symbol()) : value,
                         index, selected, focus);
@@ -75,9 +84,9 @@ public final class QuantityField extends JPanel {
         message.setForeground(Themes.problemColour());
         message.setFont(message.getFont().deriveFont(message.getFont().getSize2D() - 1f));
         // A long message wraps within the form instead of running off a small window.
-        message.addHierarchyBoundsListener(new java.awt.event.HierarchyBoundsAdapter() {
+        message.addHierarchyBoundsListener(new HierarchyBoundsAdapter() {
             @Override
-            public void ancestorResized(java.awt.event.HierarchyEvent e) {
+            public void ancestorResized(HierarchyEvent e) {
                 wrapMessage();
             }
         });
@@ -108,7 +117,7 @@ public final class QuantityField extends JPanel {
 
     /** Never less than the text and its unit list: a form short of room scrolls instead of clipping them. */
     @Override
-    public java.awt.Dimension getMinimumSize() {
+    public Dimension getMinimumSize() {
         return isMinimumSizeSet() ? super.getMinimumSize() : getPreferredSize();
     }
 
@@ -280,14 +289,14 @@ public final class QuantityField extends JPanel {
     /** Sets the message, wrapped to the room its form has right of the label column. */
     private void wrapMessage() {
         // The room visible, not the form's width: a message wider than the window would keep its form wide.
-        java.awt.Container area = (java.awt.Container) javax.swing.SwingUtilities.getAncestorOfClass(
-                javax.swing.JViewport.class, message);
+        Container area = (Container) SwingUtilities.getAncestorOfClass(
+                JViewport.class, message);
         if (area == null) {
             area = message.getParent();
         }
         int room = 0;
         if (area != null && area.getWidth() > 0 && message.getParent() != null) {
-            int x = javax.swing.SwingUtilities.convertPoint(message.getParent(), message.getX(), 0, area).x;
+            int x = SwingUtilities.convertPoint(message.getParent(), message.getX(), 0, area).x;
             room = area.getWidth() - x - 16;
         }
         String plain = messageText;

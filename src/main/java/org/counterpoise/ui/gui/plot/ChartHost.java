@@ -2,6 +2,7 @@ package org.counterpoise.ui.gui.plot;
 
 import com.formdev.flatlaf.FlatLaf;
 import java.awt.BorderLayout;
+import java.awt.Dimension;
 import java.awt.Graphics;
 import java.awt.Graphics2D;
 import java.awt.Toolkit;
@@ -58,7 +59,7 @@ public final class ChartHost extends JPanel {
     public ChartHost(String name) {
         super(new BorderLayout());
         setName(name);
-        setPreferredSize(new java.awt.Dimension(560, 300));
+        setPreferredSize(new Dimension(560, 300));
         copyValues.putValue(Action.SHORT_DESCRIPTION, "Copy the plotted values as tab-separated text");
         message("computing\u2026");
     }

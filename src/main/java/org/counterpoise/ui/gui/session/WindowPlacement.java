@@ -12,6 +12,7 @@ import java.awt.event.ComponentAdapter;
 import java.awt.event.ComponentEvent;
 import java.awt.event.WindowAdapter;
 import java.awt.event.WindowEvent;
+import java.util.HashMap;
 import java.util.Map;
 import java.util.concurrent.ConcurrentHashMap;
 import java.util.prefs.Preferences;
@@ -99,7 +100,7 @@ public final class WindowPlacement {
     /** Remembers the frame's normal (not maximised) bounds and whether it is maximised. */
     static void remember(JFrame frame) {
         boolean maximized = (frame.getExtendedState() & Frame.MAXIMIZED_BOTH) == Frame.MAXIMIZED_BOTH;
-        Map<String, Integer> values = new java.util.HashMap<>();
+        Map<String, Integer> values = new HashMap<>();
         values.put("maximized", maximized ? 1 : 0);
         if (!maximized && (frame.getExtendedState() & Frame.ICONIFIED) == 0) {
             Rectangle b = frame.getBounds();
@@ -137,7 +138,7 @@ public final class WindowPlacement {
     }
 
     private static Map<String, Integer> read() {
-        Map<String, Integer> out = new java.util.HashMap<>();
+        Map<String, Integer> out = new HashMap<>();
         if (inMemory()) {
             out.putAll(MEMORY);
             return out;

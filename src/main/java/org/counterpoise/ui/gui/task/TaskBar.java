@@ -1,5 +1,6 @@
 package org.counterpoise.ui.gui.task;
 
+import java.awt.Dimension;
 import java.awt.FlowLayout;
 import java.util.ArrayList;
 import java.util.List;
@@ -26,7 +27,7 @@ public final class TaskBar extends JPanel {
         label.setName("tasks.label");
         cancel.setName("tasks.cancel");
         bar.setIndeterminate(true);
-        bar.setPreferredSize(new java.awt.Dimension(120, bar.getPreferredSize().height));
+        bar.setPreferredSize(new Dimension(120, bar.getPreferredSize().height));
         cancel.addActionListener(e -> {
             if (!running.isEmpty()) {
                 Entry top = running.get(running.size() - 1);

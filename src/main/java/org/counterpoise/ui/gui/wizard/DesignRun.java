@@ -14,6 +14,7 @@ import org.counterpoise.core.design.Designer;
 import org.counterpoise.core.design.RobustnessAnalysis;
 import org.counterpoise.core.design.RobustnessResult;
 import org.counterpoise.core.error.InvalidInputException;
+import org.counterpoise.core.error.NotFoundException;
 import org.counterpoise.core.model.Structure;
 import org.counterpoise.io.project.Project;
 import org.counterpoise.ui.gui.document.DesignDocument;
@@ -182,7 +183,7 @@ final class DesignRun {
         clearResults(gen);
         if (cause instanceof InvalidInputException bad) {
             route(bad);
-        } else if (cause instanceof org.counterpoise.core.error.NotFoundException notFound) {
+        } else if (cause instanceof NotFoundException notFound) {
             status.accept(notFound.getMessage()); // a plain sentence: no certified optimum, what to try
         } else {
             Logger.getLogger("counterpoise").log(Level.WARNING, "design failed", cause);

@@ -1,10 +1,14 @@
 package org.counterpoise.ui.gui.wizard;
 
+import java.awt.Component;
+import java.awt.FlowLayout;
 import java.util.List;
 import javax.swing.ButtonGroup;
+import javax.swing.DefaultListCellRenderer;
 import javax.swing.JComboBox;
 import javax.swing.JComponent;
 import javax.swing.JLabel;
+import javax.swing.JList;
 import javax.swing.JPanel;
 import javax.swing.JRadioButton;
 import javax.swing.JScrollPane;
@@ -77,9 +81,9 @@ final class DisturbanceStep extends Step {
         spectra.add(broadband);
         harmonic.setSelected(true);
         psdUnit.setName("disturbance.spectrum.psd.unit");
-        psdUnit.setRenderer(new javax.swing.DefaultListCellRenderer() {
+        psdUnit.setRenderer(new DefaultListCellRenderer() {
             @Override
-            public java.awt.Component getListCellRendererComponent(javax.swing.JList<?> list, Object value,
+            public Component getListCellRendererComponent(JList<?> list, Object value,
                     int index, boolean selected, boolean focus) {
                 return super.getListCellRendererComponent(list, value instanceof SpectralDensityUnit u
                         ? QuantityField.pretty(u.symbol()) : "", index, selected, focus);
@@ -90,7 +94,7 @@ final class DisturbanceStep extends Step {
         Form form = new Form();
         form.heading("The disturbance");
         form.row("Kind", 'k', kind, "What drives the structure");
-        JPanel spectrumRadios = new JPanel(new java.awt.FlowLayout(java.awt.FlowLayout.LEFT, 0, 0));
+        JPanel spectrumRadios = new JPanel(new FlowLayout(FlowLayout.LEFT, 0, 0));
         spectrumRadios.setOpaque(false);
         spectrumRadios.add(harmonic);
         spectrumRadios.add(broadband);
@@ -98,7 +102,7 @@ final class DisturbanceStep extends Step {
                 + " Broadband: random force or base acceleration of constant spectral density, judged by rms values");
         form.row("PSD level (broadband)", 'p', psd, "Power spectral density of the white noise, one-sided, per hertz");
         form.row("Amplitude", 'a', amplitude, "Amplitude of the drive (with broadband: for the harmonic rows)");
-        JPanel radios = new JPanel(new java.awt.FlowLayout(java.awt.FlowLayout.LEFT, 0, 0));
+        JPanel radios = new JPanel(new FlowLayout(FlowLayout.LEFT, 0, 0));
         radios.setOpaque(false);
         radios.add(oneSpeed);
         radios.add(speedRange);

@@ -1,14 +1,19 @@
 package org.counterpoise.ui.gui.wizard;
 
 import java.awt.BorderLayout;
+import java.awt.Color;
+import java.awt.Component;
 import java.math.BigDecimal;
 import java.math.MathContext;
 import java.util.List;
+import javax.swing.DefaultListCellRenderer;
 import javax.swing.JCheckBox;
 import javax.swing.JComboBox;
 import javax.swing.JComponent;
 import javax.swing.JLabel;
+import javax.swing.JList;
 import javax.swing.JPanel;
+import javax.swing.JScrollPane;
 import javax.swing.JSplitPane;
 import org.counterpoise.core.design.DesignMethod;
 import org.counterpoise.core.design.DesignResult;
@@ -24,6 +29,7 @@ import org.counterpoise.ui.gui.document.ProjectEdits;
 import org.counterpoise.ui.gui.field.Form;
 import org.counterpoise.ui.gui.field.FormSwitch;
 import org.counterpoise.ui.gui.field.QuantityField;
+import org.counterpoise.ui.gui.field.Sizes;
 import org.counterpoise.ui.gui.plot.ChartHost;
 
 /** Step 3: how big the absorber may be, how to design it, and what response matters. */
@@ -54,7 +60,7 @@ final class GoalStep extends Step {
     private final JLabel methodNote = new JLabel(" ");
     {
         methodNote.setName("absorber.methodNote");
-        methodNote.setForeground(new java.awt.Color(0xb0, 0x2a, 0x1e));
+        methodNote.setForeground(new Color(0xb0, 0x2a, 0x1e));
     }
     private final ChartHost massChart = new ChartHost("chart.massRatio");
     private final JComponent page;
@@ -75,25 +81,25 @@ final class GoalStep extends Step {
         method.setName("absorber.method");
         response.setName("absorber.response");
         hangs.setName("absorber.hangs");
-        method.setRenderer(new javax.swing.DefaultListCellRenderer() {
+        method.setRenderer(new DefaultListCellRenderer() {
             @Override
-            public java.awt.Component getListCellRendererComponent(javax.swing.JList<?> list, Object value,
+            public Component getListCellRendererComponent(JList<?> list, Object value,
                     int index, boolean selected, boolean focus) {
                 String text = value instanceof DesignMethod m ? m.id() + "  \u2014  " + m.description() : "";
                 return super.getListCellRendererComponent(list, text, index, selected, focus);
             }
         });
-        response.setRenderer(new javax.swing.DefaultListCellRenderer() {
+        response.setRenderer(new DefaultListCellRenderer() {
             @Override
-            public java.awt.Component getListCellRendererComponent(javax.swing.JList<?> list, Object value,
+            public Component getListCellRendererComponent(JList<?> list, Object value,
                     int index, boolean selected, boolean focus) {
                 return super.getListCellRendererComponent(list, value instanceof ResponseKind r ? r.label() : "",
                         index, selected, focus);
             }
         });
         // The longest method description would make the form wider than a small screen; the open list shows it whole.
-        java.awt.Dimension methodSize = method.getPreferredSize();
-        method.setPreferredSize(new java.awt.Dimension(Math.min(methodSize.width, 460), methodSize.height));
+        var methodSize = method.getPreferredSize();
+        method.setPreferredSize(Sizes.of(Math.min(methodSize.width, 460), methodSize.height));
         Form form = new Form();
         form.heading("The absorber you can fit");
         form.row("Size given as", 'z', sizing,
@@ -114,7 +120,7 @@ final class GoalStep extends Step {
         JLabel caption = new JLabel("  Least peak an optimally tuned absorber can reach, against its mass ratio");
         chartPanel.add(caption, BorderLayout.NORTH);
         chartPanel.add(massChart, BorderLayout.CENTER);
-        javax.swing.JScrollPane formScroll = new javax.swing.JScrollPane(form);
+        JScrollPane formScroll = new JScrollPane(form);
         formScroll.setBorder(null);
         JSplitPane split = new JSplitPane(JSplitPane.VERTICAL_SPLIT, formScroll, chartPanel);
         split.setResizeWeight(0.55);

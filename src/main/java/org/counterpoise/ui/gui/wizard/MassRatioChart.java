@@ -3,8 +3,8 @@ package org.counterpoise.ui.gui.wizard;
 import java.util.function.Function;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.DesignStudy;
-import org.counterpoise.io.chart.ChartFactory;
 import org.counterpoise.io.chart.ChartTheme;
+import org.counterpoise.io.chart.MassRatioCharts;
 import org.counterpoise.io.text.DisplayUnits;
 import org.knowm.xchart.XYChart;
 
@@ -22,6 +22,6 @@ final class MassRatioChart {
         }
         double designMu = r.tuning().massRatio();
         double designPeak = unit.fromSi(r.responseAfter().value());
-        return theme -> ChartFactory.massRatio(mus, y, unit, designMu, designPeak, theme, 560, 260);
+        return theme -> MassRatioCharts.massRatio(mus, y, unit, designMu, designPeak, theme, 560, 260);
     }
 }

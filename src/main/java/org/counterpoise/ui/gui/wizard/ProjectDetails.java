@@ -13,6 +13,7 @@ import javax.swing.JScrollPane;
 import javax.swing.JTextArea;
 import javax.swing.JTextField;
 import javax.swing.event.DocumentEvent;
+import javax.swing.event.DocumentListener;
 import javax.swing.text.JTextComponent;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.io.project.Project;
@@ -62,7 +63,7 @@ final class ProjectDetails extends JPanel {
         form.add(new JLabel(), filler);
         add(form, BorderLayout.CENTER);
         for (JTextComponent c : List.of(name, revision, date, engineer, client, notes)) {
-            c.getDocument().addDocumentListener(new javax.swing.event.DocumentListener() {
+            c.getDocument().addDocumentListener(new DocumentListener() {
                 @Override
                 public void insertUpdate(DocumentEvent e) {
                     edited(c.getName());

@@ -1,12 +1,21 @@
 package org.counterpoise.ui.gui.wizard;
 
 import java.awt.BorderLayout;
+import java.awt.Container;
+import java.awt.FlowLayout;
 import java.awt.GridLayout;
+import java.awt.event.ComponentAdapter;
+import java.awt.event.ComponentEvent;
+import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
+import javax.swing.BorderFactory;
 import javax.swing.JComboBox;
 import javax.swing.JComponent;
 import javax.swing.JLabel;
 import javax.swing.JPanel;
+import javax.swing.JViewport;
+import javax.swing.SwingUtilities;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.RobustnessResult;
 import org.counterpoise.core.design.RobustnessSettings;
@@ -14,6 +23,7 @@ import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.robust.MonteCarloResult;
 import org.counterpoise.core.units.Dimension;
 import org.counterpoise.core.units.Unit;
+import org.counterpoise.io.chart.MonteCarloCharts;
 import org.counterpoise.io.chart.RobustnessCharts;
 import org.counterpoise.io.project.Project;
 import org.counterpoise.io.project.RobustnessInput;
@@ -23,6 +33,7 @@ import org.counterpoise.io.text.UnitChoices;
 import org.counterpoise.ui.gui.document.ProjectEdits;
 import org.counterpoise.ui.gui.field.Form;
 import org.counterpoise.ui.gui.field.QuantityField;
+import org.counterpoise.ui.gui.field.Sizes;
 import org.counterpoise.ui.gui.plot.ChartHost;
 
 /** Step 5: how the design fares off-tune, the robust alternative and the tolerance Monte Carlo. */
@@ -51,8 +62,8 @@ final class RobustnessStep extends Step {
             "Number of sampled builds in the Monte Carlo", UnitChoices.of(Dimension.RATIO));
     private final QuantityField seed = new QuantityField("robustness.seed",
             "Seed of the Monte Carlo's random numbers: the same seed gives the same result", UnitChoices.of(Dimension.RATIO));
-    private final List<JComboBox<String>> distributions = new java.util.ArrayList<>();
-    private final List<QuantityField> tolerances = new java.util.ArrayList<>();
+    private final List<JComboBox<String>> distributions = new ArrayList<>();
+    private final List<QuantityField> tolerances = new ArrayList<>();
     private final JLabel summary = new JLabel(" ");
     private final ChartHost sensitivity = new ChartHost("chart.sensitivity");
     private final ChartHost histogram = new ChartHost("chart.histogram");
@@ -78,7 +89,7 @@ final class RobustnessStep extends Step {
             kind.setName(id + ".distribution");
             QuantityField value = new QuantityField(id, TOLERANCE_LABELS[i] + ": percent or an absolute amount",
                     TOLERANCE_UNITS.get(i));
-            JPanel both = new JPanel(new java.awt.FlowLayout(java.awt.FlowLayout.LEFT, 0, 0));
+            JPanel both = new JPanel(new FlowLayout(FlowLayout.LEFT, 0, 0));
             both.setOpaque(false);
             both.add(kind);
             both.add(value);
@@ -96,7 +107,7 @@ final class RobustnessStep extends Step {
         }
         tolerancesForm.end();
         summary.setName("robustness.summary");
-        summary.setBorder(javax.swing.BorderFactory.createEmptyBorder(4, 14, 8, 14));
+        summary.setBorder(BorderFactory.createEmptyBorder(4, 14, 8, 14));
         JPanel left = new JPanel(new GridLayout(2, 1, 0, 6));
         left.add(sensitivity);
         left.add(histogram);
@@ -113,11 +124,11 @@ final class RobustnessStep extends Step {
         p.add(top, BorderLayout.NORTH);
         p.add(charts, BorderLayout.CENTER);
         // Below this the page scrolls rather than squeezing the charts unreadable.
-        charts.setMinimumSize(new java.awt.Dimension(620, 420));
-        summary.setMinimumSize(new java.awt.Dimension(300, 0));
-        summary.addComponentListener(new java.awt.event.ComponentAdapter() {
+        charts.setMinimumSize(Sizes.of(620, 420));
+        summary.setMinimumSize(Sizes.of(300, 0));
+        summary.addComponentListener(new ComponentAdapter() {
             @Override
-            public void componentResized(java.awt.event.ComponentEvent e) {
+            public void componentResized(ComponentEvent e) {
                 wrapSummary();
             }
         });
@@ -191,7 +202,7 @@ final class RobustnessStep extends Step {
                 : new RobustnessInput.ToleranceInput[] {r.structureMass(), r.structureStiffness(), r.absorberMass(),
                     r.absorberStiffness(), r.absorberDamping()};
         for (int i = 0; i < t.length; i++) {
-            int index = t[i] == null ? 0 : java.util.Arrays.asList(DISTRIBUTION_IDS).indexOf(t[i].distribution());
+            int index = t[i] == null ? 0 : Arrays.asList(DISTRIBUTION_IDS).indexOf(t[i].distribution());
             select(distributions.get(i), Math.max(index, 0));
             QuantityField f = tolerances.get(i);
             f.textField().setEnabled(index > 0);
@@ -241,7 +252,7 @@ final class RobustnessStep extends Step {
                         + QuantityFormat.number(100 * mc.probabilityExceeding(), 3) + " %"));
         wrapSummary();
         sensitivity.show(theme -> RobustnessCharts.sensitivity(design, r, theme, 420, 320));
-        histogram.show(theme -> RobustnessCharts.histogram(design, mc, theme, 420, 320));
+        histogram.show(theme -> MonteCarloCharts.histogram(design, mc, theme, 420, 320));
         mapHolder.show(theme -> RobustnessCharts.map(design, r, theme, 520, 480, 3));
     }
 
@@ -252,12 +263,12 @@ final class RobustnessStep extends Step {
             return;
         }
         // The width that can be seen: when the page scrolls sideways, the label is wider than that.
-        java.awt.Container view = (java.awt.Container) javax.swing.SwingUtilities.getAncestorOfClass(
-                javax.swing.JViewport.class, summary);
+        Container view = (Container) SwingUtilities.getAncestorOfClass(
+                JViewport.class, summary);
         int seen = summary.getWidth();
         if (view != null && summary.getParent() != null && view.getWidth() > 0) {
             seen = Math.min(seen, view.getWidth()
-                    - javax.swing.SwingUtilities.convertPoint(summary.getParent(), summary.getX(), 0, view).x);
+                    - SwingUtilities.convertPoint(summary.getParent(), summary.getX(), 0, view).x);
         }
         int width = Math.max(280, seen <= 0 ? 760 : seen - 40);
         // Swing's HTML takes a CSS px as 1.3 screen pixels (and a pt as one), so the width goes in pt.

@@ -2,6 +2,7 @@ package org.counterpoise.ui.gui.wizard;
 
 import java.util.LinkedHashMap;
 import java.util.Map;
+import java.util.function.Supplier;
 import javax.swing.JComboBox;
 import javax.swing.JComponent;
 import org.counterpoise.core.error.InvalidInputException;
@@ -83,7 +84,7 @@ abstract class Step {
      * is not a number yet the frame is told, so it shows the problem and no result.
      * @param build builds the edit (may throw InvalidInputException naming the field)
      */
-    final void commit(java.util.function.Supplier<Edit> build) {
+    final void commit(Supplier<Edit> build) {
         if (syncing || document == null) {
             return;
         }

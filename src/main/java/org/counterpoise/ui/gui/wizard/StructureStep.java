@@ -1,5 +1,6 @@
 package org.counterpoise.ui.gui.wizard;
 
+import java.awt.BorderLayout;
 import java.util.List;
 import javax.swing.JComboBox;
 import javax.swing.JComponent;
@@ -73,7 +74,7 @@ final class StructureStep extends Step {
         form.derived("Natural frequency", derivedFrequency);
         form.derived("Damping ratio", derivedDamping);
         form.end();
-        JPanel holder = new JPanel(new java.awt.BorderLayout());
+        JPanel holder = new JPanel(new BorderLayout());
         holder.add(form);
         page = new JScrollPane(holder);
         ((JScrollPane) page).setBorder(null);

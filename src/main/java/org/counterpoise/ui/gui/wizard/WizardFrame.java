@@ -5,6 +5,7 @@ import java.awt.CardLayout;
 import java.awt.Component;
 import java.awt.Dimension;
 import java.awt.FlowLayout;
+import java.awt.Font;
 import java.awt.event.KeyEvent;
 import java.awt.event.WindowAdapter;
 import java.awt.event.WindowEvent;
@@ -183,7 +184,7 @@ public final class WizardFrame extends JFrame {
         project.setToolTipText("Name, revision, date of issue, engineer, client or site, notes");
         project.addActionListener(e -> showDetails());
         projectName.setName("project.title");
-        projectName.setFont(projectName.getFont().deriveFont(java.awt.Font.BOLD));
+        projectName.setFont(projectName.getFont().deriveFont(Font.BOLD));
         JPanel header = new JPanel(new BorderLayout(0, 4));
         header.setBorder(BorderFactory.createEmptyBorder(10, 14, 0, 10));
         header.add(projectName, BorderLayout.NORTH);
