@@ -159,15 +159,14 @@ public final class HInfinityOptimiser {
                 best.offer(again[0], again[1], peakOf(problem, again[0], again[1], counter), "search", false);
             }
         }
-        double violation = MinimaxCertificate.violation(problem, best.f, best.zeta);
-        for (int attempt = 0; attempt < 2 && violation > MinimaxCertificate.STATIONARY; attempt++) {
+        boolean firstOrder = MinimaxCertificate.isStationary(problem, best.f, best.zeta);
+        for (int attempt = 0; attempt < 2 && !firstOrder; attempt++) {
             // a point where the first-order conditions fail has a descent direction: search on
             polish(problem, best, counter);
-            violation = MinimaxCertificate.violation(problem, best.f, best.zeta);
+            firstOrder = MinimaxCertificate.isStationary(problem, best.f, best.zeta);
         }
         counter.count++;
-        boolean stationary = violation <= MinimaxCertificate.STATIONARY
-                || noDescentByProbe(problem, best.f, best.zeta, best.peak, counter);
+        boolean stationary = firstOrder || noDescentByProbe(problem, best.f, best.zeta, best.peak, counter);
         boolean certified = Double.isFinite(best.peak) && best.peak <= scanBest * (1 + SCAN_MARGIN) && stationary;
         ActiveConstraint constraint = !Double.isNaN(problem.fixedDamping()) ? ActiveConstraint.FIXED_DAMPING
                 : !Double.isNaN(problem.fixedTuning()) ? ActiveConstraint.FIXED_TUNING : ActiveConstraint.NONE;
@@ -506,8 +505,7 @@ public final class HInfinityOptimiser {
             double active = Math.sqrt(Math.exp(problem.transferFunction(s[0], s[1]).logMagnitudeSquared(s[2])));
             double peak = peakOf(problem, s[0], s[1], counter);
             if (peak <= active * (1 + ACCEPT) && isLocalMinimum(problem, s[0], s[1], peak, counter)
-                    && MinimaxCertificate.violation(problem, s[0], s[1])
-                            <= MinimaxCertificate.STATIONARY) {
+                    && MinimaxCertificate.isStationary(problem, s[0], s[1])) {
                 best.offer(s[0], s[1], peak, describe(interior, problem.fixedDamping() == 0.0), true);
                 return true;
             }

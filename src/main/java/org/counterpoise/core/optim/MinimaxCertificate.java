@@ -42,6 +42,28 @@ final class MinimaxCertificate {
      *     or +infinity when the peak is not finite
      */
     static double violation(PeakProblem p, double f, double zeta) {
+        return violation(p, f, zeta, 0.0);
+    }
+
+    /**
+     * Whether a design is {@link #STATIONARY}: the least violation is searched only until it is
+     * known to be below that bound, so a certified design costs a few steps, not {@value #STEPS}.
+     *
+     * @param p the problem
+     * @param f tuning ratio of the design
+     * @param zeta absorber damping ratio of the design
+     * @return true when the first-order conditions hold to {@link #STATIONARY}
+     */
+    static boolean isStationary(PeakProblem p, double f, double zeta) {
+        return violation(p, f, zeta, STATIONARY) <= STATIONARY;
+    }
+
+    /**
+     * @param enough the search for the least violation stops once it is at or below this
+     * @return as {@link #violation(PeakProblem, double, double)}, but any value at or below
+     *     {@code enough} may stand for a smaller one
+     */
+    private static double violation(PeakProblem p, double f, double zeta, double enough) {
         TransferFunction h = p.transferFunction(f, zeta);
         List<Double> xs = new ArrayList<>();
         List<Double> values = new ArrayList<>();
@@ -113,19 +135,25 @@ final class MinimaxCertificate {
         double step = 0.5 / Math.max(lipschitz, 1e-12);
         double[] lambda = new double[k];
         Arrays.fill(lambda, 1.0 / k);
+        double[] sorted = new double[k];
         double best = Double.POSITIVE_INFINITY;
         for (int iteration = 0; iteration < STEPS; iteration++) {
-            double[] r = combine(g, lambda);
-            double[] v = violationVector(r, side);
-            best = Math.min(best, Math.hypot(v[0], v[1]));
-            if (best < 1e-15) {
+            double r0 = 0;
+            double r1 = 0;
+            for (int i = 0; i < k; i++) {
+                r0 += lambda[i] * g[i][0];
+                r1 += lambda[i] * g[i][1];
+            }
+            double v0 = allowedPart(r0, side[0]);
+            double v1 = allowedPart(r1, side[1]);
+            best = Math.min(best, Math.hypot(v0, v1));
+            if (best < 1e-15 || best <= enough) {
                 break;
             }
-            double[] next = new double[k];
             for (int i = 0; i < k; i++) {
-                next[i] = lambda[i] - step * 2 * (v[0] * g[i][0] + v[1] * g[i][1]);
+                lambda[i] = lambda[i] - step * 2 * (v0 * g[i][0] + v1 * g[i][1]);
             }
-            lambda = projectOntoSimplex(next);
+            projectOntoSimplex(lambda, sorted);
         }
         return best;
     }
@@ -143,46 +171,35 @@ final class MinimaxCertificate {
         return 0;
     }
 
-    private static double[] combine(double[][] g, double[] lambda) {
-        double[] r = new double[2];
-        for (int i = 0; i < g.length; i++) {
-            r[0] += lambda[i] * g[i][0];
-            r[1] += lambda[i] * g[i][1];
-        }
-        return r;
+    /** The part of a residual component that violates its condition (see the class comment). */
+    private static double allowedPart(double r, int side) {
+        return switch (side) {
+            case 0 -> r;
+            case 1 -> Math.min(r, 0.0);
+            case -1 -> Math.max(r, 0.0);
+            default -> 0.0;
+        };
     }
 
-    private static double[] violationVector(double[] r, int[] side) {
-        double[] v = new double[2];
-        for (int j = 0; j < 2; j++) {
-            v[j] = switch (side[j]) {
-                case 0 -> r[j];
-                case 1 -> Math.min(r[j], 0.0);
-                case -1 -> Math.max(r[j], 0.0);
-                default -> 0.0;
-            };
-        }
-        return v;
-    }
-
-    /** Euclidean projection onto the probability simplex (sort-based; Held, Wolfe and Crowder 1974). */
-    private static double[] projectOntoSimplex(double[] y) {
-        double[] u = y.clone();
-        Arrays.sort(u);
+    /**
+     * Euclidean projection onto the probability simplex (sort-based; Held, Wolfe and Crowder 1974),
+     * in place; {@code sorted} is scratch space of the same length.
+     */
+    private static void projectOntoSimplex(double[] y, double[] sorted) {
+        System.arraycopy(y, 0, sorted, 0, y.length);
+        Arrays.sort(sorted);
         double cumulative = 0;
         double theta = 0;
-        for (int i = u.length - 1; i >= 0; i--) {
-            cumulative += u[i];
-            double t = (cumulative - 1) / (u.length - i);
-            if (i == 0 || u[i - 1] <= t) {
+        for (int i = sorted.length - 1; i >= 0; i--) {
+            cumulative += sorted[i];
+            double t = (cumulative - 1) / (sorted.length - i);
+            if (i == 0 || sorted[i - 1] <= t) {
                 theta = t;
                 break;
             }
         }
-        double[] out = new double[y.length];
         for (int i = 0; i < y.length; i++) {
-            out[i] = Math.max(y[i] - theta, 0.0);
+            y[i] = Math.max(y[i] - theta, 0.0);
         }
-        return out;
     }
 }
