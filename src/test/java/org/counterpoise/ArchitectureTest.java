@@ -197,6 +197,24 @@ class ArchitectureTest {
     }
 
     @Test
+    void everyCorePackageSaysWhatItHoldsAndMayUse() throws IOException {
+        List<String> out = new ArrayList<>();
+        for (String own : CORE_LAYERS.keySet().stream().sorted().toList()) {
+            if (!Files.isRegularFile(ROOT.resolve("core").resolve(own).resolve("package-info.java"))) {
+                out.add("org/counterpoise/core/" + own + ":1: a core package has a package-info.java saying what it"
+                        + " holds and which core packages it may use");
+            }
+        }
+        try (Stream<Path> dirs = Files.list(ROOT.resolve("core"))) {
+            dirs.filter(Files::isDirectory).map(d -> d.getFileName().toString())
+                    .filter(d -> !CORE_LAYERS.containsKey(d)).sorted()
+                    .forEach(d -> out.add("org/counterpoise/core/" + d + ":1: core package '" + d
+                            + "' has no place in CORE_LAYERS of ArchitectureTest"));
+        }
+        assertEquals(List.of(), out);
+    }
+
+    @Test
     void ioImportsNoSwingAndNoUserInterface() {
         assertEquals(List.of(), importsOf("io", "io imports no Swing and nothing of ui", "javax.swing",
                 "org.knowm.xchart.XChartPanel", "org.counterpoise.ui"));
