@@ -1,5 +1,6 @@
 package org.counterpoise.io.project;
 
+import java.util.Locale;
 import org.counterpoise.core.units.Dimension;
 
 /**
@@ -9,34 +10,32 @@ import org.counterpoise.core.units.Dimension;
  */
 public enum ToleranceKey {
     /** The structure's modal mass. */
-    STRUCTURE_MASS("structure_mass", "Structure mass", Dimension.MASS),
+    STRUCTURE_MASS("Structure mass", Dimension.MASS),
     /** The structure's modal stiffness. */
-    STRUCTURE_STIFFNESS("structure_stiffness", "Structure stiffness", Dimension.STIFFNESS),
+    STRUCTURE_STIFFNESS("Structure stiffness", Dimension.STIFFNESS),
     /** The absorber's mass. */
-    ABSORBER_MASS("absorber_mass", "Absorber mass", Dimension.MASS),
+    ABSORBER_MASS("Absorber mass", Dimension.MASS),
     /** The absorber's spring rate. */
-    ABSORBER_STIFFNESS("absorber_stiffness", "Absorber spring rate", Dimension.STIFFNESS),
+    ABSORBER_STIFFNESS("Absorber spring rate", Dimension.STIFFNESS),
     /** The absorber's damping coefficient. */
-    ABSORBER_DAMPING("absorber_damping", "Absorber damping", Dimension.DAMPING_COEFFICIENT);
+    ABSORBER_DAMPING("Absorber damping", Dimension.DAMPING_COEFFICIENT);
 
-    private final String key;
     private final String label;
     private final Dimension dimension;
 
-    ToleranceKey(String key, String label, Dimension dimension) {
-        this.key = key;
+    ToleranceKey(String label, Dimension dimension) {
         this.label = label;
         this.dimension = dimension;
     }
 
-    /** @return the key in the project file's {@code robustness.tolerances} object */
+    /** @return the key in the project file's {@code robustness.tolerances} object: the name in lower case */
     public String key() {
-        return key;
+        return name().toLowerCase(Locale.ROOT);
     }
 
     /** @return the field's path in a project file, e.g. {@code robustness.tolerances.structure_mass} */
     public String path() {
-        return "robustness.tolerances." + key;
+        return "robustness.tolerances." + key();
     }
 
     /** @return the words that name it, capitalised */
