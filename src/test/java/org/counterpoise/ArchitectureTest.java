@@ -231,6 +231,12 @@ class ArchitectureTest {
     }
 
     @Test
+    void documentModelImportsNoSwing() {
+        assertEquals(List.of(), importsOf("ui/gui/document",
+                "the document model (project, dirty flag, undo) imports no Swing or AWT", "javax.swing", "java.awt"));
+    }
+
+    @Test
     void noQualifiedNameWrittenInlineInCode() {
         List<String> out = new ArrayList<>();
         for (Source s : sources("")) {
