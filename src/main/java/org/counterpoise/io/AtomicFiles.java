@@ -34,10 +34,10 @@ import java.util.Set;
  * deletes the ones in flight when the program is stopped (SIGTERM, SIGINT, closing the window);
  * and since nothing runs after SIGKILL or a power cut, temporary files are named
  * {@code .NAME.counterpoise-PID-N.tmp} and every write removes those of processes that no longer
- * run from its folder ({@link TempFiles}). No other file is ever touched by that clean-up. (Two machines or
- * containers writing the same file in a shared folder at the same moment could see each other's
- * writer as ended; the one whose temporary file is removed then reports a failed write and
- * changes nothing.)
+ * run from its folder ({@link TempFiles}). No other file is ever touched by that clean-up. (Two
+ * machines or containers writing the same file in a shared folder at the same moment could see
+ * each other's writer as ended; the one whose temporary file is removed then reports a failed
+ * write and changes nothing.)
  *
  * <p>What is replaced: only an ordinary file. A folder, device, pipe or socket is refused, and so
  * is a read-only file. A symbolic link is followed to the file it names, and that file is replaced

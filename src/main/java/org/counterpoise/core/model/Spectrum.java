@@ -19,20 +19,9 @@ public record Spectrum(Kind kind, double psdLevel) {
     /** The kinds of spectrum. */
     public enum Kind {
         /** A sinusoid at one frequency or anywhere in a band. */
-        HARMONIC("harmonic"),
+        HARMONIC,
         /** Broadband random excitation of constant spectral density. */
-        WHITE_NOISE("white-noise");
-
-        private final String id;
-
-        Kind(String id) {
-            this.id = id;
-        }
-
-        /** @return the identifier used in project files */
-        public String id() {
-            return id;
-        }
+        WHITE_NOISE
     }
 
     /** A harmonic disturbance (every project file before spectra were added means this). */

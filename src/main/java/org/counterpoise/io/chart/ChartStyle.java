@@ -28,21 +28,13 @@ final class ChartStyle {
      * @param theme colours
      */
     static void houseStyle(XYStyler s, ChartTheme theme) {
-        s.setChartBackgroundColor(theme.background());
-        s.setPlotBackgroundColor(theme.plot());
+        frame(s, theme, 10);
         s.setPlotBorderVisible(true);
         s.setPlotBorderColor(theme.border());
         s.setPlotGridLinesColor(theme.grid());
-        s.setChartFontColor(theme.text());
-        s.setAxisTickLabelsColor(theme.text());
         s.setAxisTickMarksColor(theme.border());
         s.setLegendBackgroundColor(theme.plot());
         s.setLegendPosition(Styler.LegendPosition.InsideNE);
-        s.setLegendBorderColor(theme.border());
-        s.setChartTitleBoxVisible(false);
-        s.setChartTitleFont(new Font(Font.SANS_SERIF, Font.BOLD, 13));
-        s.setAxisTitleFont(new Font(Font.SANS_SERIF, Font.PLAIN, 11));
-        s.setAxisTickLabelsFont(new Font(Font.SANS_SERIF, Font.PLAIN, 10));
         s.setLegendFont(new Font(Font.SANS_SERIF, Font.PLAIN, 10));
         s.setMarkerSize(0);
         s.setAntiAlias(true);
@@ -50,6 +42,25 @@ final class ChartStyle {
         s.setToolTipsEnabled(false);
         s.setCursorEnabled(false);
         s.setZoomEnabled(false);
+    }
+
+    /**
+     * What every chart of the package shares, XY charts and the heat map alike: backgrounds, text
+     * colour, the legend's border, and the type of titles and tick labels.
+     * @param s the chart's styler
+     * @param theme colours
+     * @param tickPoints size of the tick labels' type, in points
+     */
+    static void frame(AxesChartStyler s, ChartTheme theme, int tickPoints) {
+        s.setChartBackgroundColor(theme.background());
+        s.setPlotBackgroundColor(theme.plot());
+        s.setChartFontColor(theme.text());
+        s.setAxisTickLabelsColor(theme.text());
+        s.setLegendBorderColor(theme.border());
+        s.setChartTitleBoxVisible(false);
+        s.setChartTitleFont(new Font(Font.SANS_SERIF, Font.BOLD, 13));
+        s.setAxisTitleFont(new Font(Font.SANS_SERIF, Font.PLAIN, 11));
+        s.setAxisTickLabelsFont(new Font(Font.SANS_SERIF, Font.PLAIN, tickPoints));
     }
 
     /**

@@ -2,7 +2,6 @@ package org.counterpoise.io.chart;
 
 import java.awt.BasicStroke;
 import java.awt.Color;
-import java.awt.Font;
 import java.math.BigDecimal;
 import java.math.MathContext;
 import java.math.RoundingMode;
@@ -222,16 +221,8 @@ public final class RobustnessCharts {
             chart.setTitle(title + "; unbounded in " + unbounded + " cells");
         }
         var s = chart.getStyler();
-        s.setChartBackgroundColor(theme.background());
-        s.setPlotBackgroundColor(theme.plot());
-        s.setChartFontColor(theme.text());
-        s.setAxisTickLabelsColor(theme.text());
+        ChartStyle.frame(s, theme, 9);
         s.setLegendBackgroundColor(theme.background());
-        s.setLegendBorderColor(theme.border());
-        s.setChartTitleBoxVisible(false);
-        s.setChartTitleFont(new Font(Font.SANS_SERIF, Font.BOLD, 13));
-        s.setAxisTitleFont(new Font(Font.SANS_SERIF, Font.PLAIN, 11));
-        s.setAxisTickLabelsFont(new Font(Font.SANS_SERIF, Font.PLAIN, 9));
         s.setLegendPosition(Styler.LegendPosition.OutsideE);
         s.setShowValue(false);
         s.setToolTipsEnabled(false);

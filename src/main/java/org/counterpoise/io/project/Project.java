@@ -197,16 +197,16 @@ public record Project(String name, String notes, StructureInput structure, Distu
         double absorberRange = Double.isNaN(r.absorberDetuningPercent()) ? d.absorberRange()
                 : Checks.inRange("robustness.absorber_detuning", r.absorberDetuningPercent(), 0, 50) / 100;
         double target = r.target() == null ? Double.NaN : r.target().positiveSi("robustness.target.value");
-        ToleranceSet set = new ToleranceSet(tolerance("robustness.tolerances.structure_mass", r.structureMass()),
-                tolerance("robustness.tolerances.structure_stiffness", r.structureStiffness()),
-                tolerance("robustness.tolerances.absorber_mass", r.absorberMass()),
-                tolerance("robustness.tolerances.absorber_stiffness", r.absorberStiffness()),
-                tolerance("robustness.tolerances.absorber_damping", r.absorberDamping()));
+        ToleranceSet set = new ToleranceSet(tolerance(ToleranceKey.STRUCTURE_MASS, r),
+                tolerance(ToleranceKey.STRUCTURE_STIFFNESS, r), tolerance(ToleranceKey.ABSORBER_MASS, r),
+                tolerance(ToleranceKey.ABSORBER_STIFFNESS, r), tolerance(ToleranceKey.ABSORBER_DAMPING, r));
         return new RobustnessSettings(structureRange, absorberRange, target, set,
                 r.samples() == 0 ? d.samples() : r.samples(), r.seed());
     }
 
-    private static Tolerance tolerance(String field, RobustnessInput.ToleranceInput t) {
+    private static Tolerance tolerance(ToleranceKey key, RobustnessInput r) {
+        String field = key.path();
+        RobustnessInput.ToleranceInput t = key.of(r);
         if (t == null) {
             return Tolerance.NONE;
         }

@@ -4,7 +4,6 @@ import com.google.gson.JsonElement;
 import java.io.IOException;
 import java.io.Reader;
 import java.nio.file.Path;
-import java.util.Arrays;
 import java.util.List;
 import org.counterpoise.core.design.DesignMethod;
 import org.counterpoise.core.design.DesignStudy;
@@ -117,17 +116,13 @@ public final class ProjectReader {
                     "a whole number from -10^15 to 10^15");
         }
         JsonFields t = r.optionalObject("tolerances");
-        RobustnessInput.ToleranceInput[] tol = new RobustnessInput.ToleranceInput[5];
-        String[] keys = {"structure_mass", "structure_stiffness", "absorber_mass", "absorber_stiffness",
-            "absorber_damping"};
-        Dimension[] dims = {Dimension.MASS, Dimension.STIFFNESS, Dimension.MASS, Dimension.STIFFNESS,
-            Dimension.DAMPING_COEFFICIENT};
+        RobustnessInput.ToleranceInput[] tol = new RobustnessInput.ToleranceInput[ToleranceKey.values().length];
         if (t != null) {
-            for (int i = 0; i < keys.length; i++) {
-                JsonFields one = t.optionalObject(keys[i]);
+            for (ToleranceKey k : ToleranceKey.values()) {
+                JsonFields one = t.optionalObject(k.key());
                 if (one != null) {
-                    tol[i] = new RobustnessInput.ToleranceInput(one.text("distribution"),
-                            one.number("percent", Double.NaN), one.optionalQuantity("absolute", dims[i]));
+                    tol[k.ordinal()] = new RobustnessInput.ToleranceInput(one.text("distribution"),
+                            one.number("percent", Double.NaN), one.optionalQuantity("absolute", k.dimension()));
                     one.finish();
                 }
             }
@@ -207,9 +202,8 @@ public final class ProjectReader {
             return null;
         }
         String text = s.text("kind");
-        Spectrum.Kind k = Arrays.stream(Spectrum.Kind.values()).filter(x -> x.id().equals(text)).findFirst()
-                .orElseThrow(() -> new InvalidInputException(s.pathOf("kind"), "\"" + text + "\"",
-                        "one of harmonic, white-noise"));
+        Spectrum.Kind k = Ids.parse(Spectrum.Kind.class, text).orElseThrow(() -> new InvalidInputException(
+                s.pathOf("kind"), "\"" + PlainText.quote(text) + "\"", "one of " + Ids.list(Spectrum.Kind.values())));
         SpectrumInput out;
         if (k == Spectrum.Kind.WHITE_NOISE) {
             JsonFields psd = s.object("psd");

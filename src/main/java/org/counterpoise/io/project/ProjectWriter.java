@@ -96,7 +96,7 @@ public final class ProjectWriter {
         }
         if (d.spectrum() != null) {
             JsonObject spectrum = new JsonObject();
-            spectrum.addProperty("kind", d.spectrum().kind().id());
+            spectrum.addProperty("kind", Ids.of(d.spectrum().kind()));
             if (d.spectrum().psdUnit() != null) {
                 JsonObject psd = new JsonObject();
                 psd.addProperty("value", d.spectrum().psdValue());
@@ -136,17 +136,14 @@ public final class ProjectWriter {
         }
         o.addProperty("seed", r.seed());
         JsonObject t = new JsonObject();
-        String[] keys = {"structure_mass", "structure_stiffness", "absorber_mass", "absorber_stiffness",
-            "absorber_damping"};
-        RobustnessInput.ToleranceInput[] values = {r.structureMass(), r.structureStiffness(), r.absorberMass(),
-            r.absorberStiffness(), r.absorberDamping()};
-        for (int i = 0; i < keys.length; i++) {
-            if (values[i] != null) {
+        for (ToleranceKey k : ToleranceKey.values()) {
+            RobustnessInput.ToleranceInput value = k.of(r);
+            if (value != null) {
                 JsonObject one = new JsonObject();
-                one.addProperty("distribution", values[i].distribution());
-                putNumber(one, "percent", values[i].percent());
-                put(one, "absolute", values[i].absolute());
-                t.add(keys[i], one);
+                one.addProperty("distribution", value.distribution());
+                putNumber(one, "percent", value.percent());
+                put(one, "absolute", value.absolute());
+                t.add(k.key(), one);
             }
         }
         if (!t.isEmpty()) {

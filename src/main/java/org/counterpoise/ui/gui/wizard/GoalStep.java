@@ -1,7 +1,6 @@
 package org.counterpoise.ui.gui.wizard;
 
 import java.awt.BorderLayout;
-import java.awt.Color;
 import java.awt.Component;
 import java.math.BigDecimal;
 import java.math.MathContext;
@@ -25,6 +24,7 @@ import org.counterpoise.io.project.AbsorberInput;
 import org.counterpoise.io.project.Project;
 import org.counterpoise.io.project.QuantityInput;
 import org.counterpoise.io.text.UnitChoices;
+import org.counterpoise.ui.gui.Themes;
 import org.counterpoise.ui.gui.document.ProjectEdits;
 import org.counterpoise.ui.gui.field.Form;
 import org.counterpoise.ui.gui.field.FormSwitch;
@@ -60,7 +60,7 @@ final class GoalStep extends Step {
     private final JLabel methodNote = new JLabel(" ");
     {
         methodNote.setName("absorber.methodNote");
-        methodNote.setForeground(new Color(0xb0, 0x2a, 0x1e));
+        methodNote.setForeground(Themes.problemColour());
     }
     private final ChartHost massChart = new ChartHost("chart.massRatio");
     private final JComponent page;

@@ -27,6 +27,7 @@ import org.counterpoise.io.chart.MonteCarloCharts;
 import org.counterpoise.io.chart.RobustnessCharts;
 import org.counterpoise.io.project.Project;
 import org.counterpoise.io.project.RobustnessInput;
+import org.counterpoise.io.project.ToleranceKey;
 import org.counterpoise.io.text.DisplayUnits;
 import org.counterpoise.io.text.QuantityFormat;
 import org.counterpoise.io.text.UnitChoices;
@@ -38,10 +39,7 @@ import org.counterpoise.ui.gui.plot.ChartHost;
 
 /** Step 5: how the design fares off-tune, the robust alternative and the tolerance Monte Carlo. */
 final class RobustnessStep extends Step {
-    private static final String[] TOLERANCE_KEYS = {"structure_mass", "structure_stiffness", "absorber_mass",
-        "absorber_stiffness", "absorber_damping"};
-    private static final String[] TOLERANCE_LABELS = {"Structure mass", "Structure stiffness", "Absorber mass",
-        "Absorber spring rate", "Absorber damping"};
+    /** Units offered for each tolerance, in the order of {@link ToleranceKey}. */
     private static final List<List<Unit>> TOLERANCE_UNITS = List.of(
             List.of(Unit.PERCENT, Unit.KILOGRAM, Unit.TONNE),
             List.of(Unit.PERCENT, Unit.KILONEWTON_PER_METRE, Unit.NEWTON_PER_METRE, Unit.NEWTON_PER_MILLIMETRE),
@@ -83,17 +81,17 @@ final class RobustnessStep extends Step {
         form.end();
         Form tolerancesForm = new Form();
         tolerancesForm.heading("Manufacturing tolerances (Monte Carlo)");
-        for (int i = 0; i < TOLERANCE_KEYS.length; i++) {
-            String id = "robustness.tolerances." + TOLERANCE_KEYS[i];
+        for (ToleranceKey k : ToleranceKey.values()) {
+            String id = k.path();
             JComboBox<String> kind = new JComboBox<>(DISTRIBUTIONS);
             kind.setName(id + ".distribution");
-            QuantityField value = new QuantityField(id, TOLERANCE_LABELS[i] + ": percent or an absolute amount",
-                    TOLERANCE_UNITS.get(i));
+            QuantityField value = new QuantityField(id, k.label() + ": percent or an absolute amount",
+                    TOLERANCE_UNITS.get(k.ordinal()));
             JPanel both = new JPanel(new FlowLayout(FlowLayout.LEFT, 0, 0));
             both.setOpaque(false);
             both.add(kind);
             both.add(value);
-            tolerancesForm.row(TOLERANCE_LABELS[i], (char) 0, both,
+            tolerancesForm.row(k.label(), (char) 0, both,
                     "Uniform: every value within \u00b1 the amount; normal: the amount is the standard deviation");
             tolerancesForm.derived("", value.messageLabel());
             distributions.add(kind);
@@ -169,7 +167,7 @@ final class RobustnessStep extends Step {
         if (s != Math.rint(s) || Math.abs(s) > 1e15) {
             throw new InvalidInputException("robustness.seed", QuantityFormat.number(s, 6), "a whole number");
         }
-        RobustnessInput.ToleranceInput[] t = new RobustnessInput.ToleranceInput[TOLERANCE_KEYS.length];
+        RobustnessInput.ToleranceInput[] t = new RobustnessInput.ToleranceInput[ToleranceKey.values().length];
         for (int i = 0; i < t.length; i++) {
             String id = DISTRIBUTION_IDS[distributions.get(i).getSelectedIndex()];
             QuantityField f = tolerances.get(i);
@@ -198,9 +196,10 @@ final class RobustnessStep extends Step {
         showValue(target, r == null ? null : r.target());
         showValue(samples, r == null || r.samples() == 0 ? d.samples() : r.samples(), Unit.RATIO);
         showValue(seed, r == null ? d.seed() : r.seed(), Unit.RATIO);
-        RobustnessInput.ToleranceInput[] t = r == null ? new RobustnessInput.ToleranceInput[5]
-                : new RobustnessInput.ToleranceInput[] {r.structureMass(), r.structureStiffness(), r.absorberMass(),
-                    r.absorberStiffness(), r.absorberDamping()};
+        RobustnessInput.ToleranceInput[] t = new RobustnessInput.ToleranceInput[ToleranceKey.values().length];
+        for (ToleranceKey k : ToleranceKey.values()) {
+            t[k.ordinal()] = r == null ? null : k.of(r);
+        }
         for (int i = 0; i < t.length; i++) {
             int index = t[i] == null ? 0 : Arrays.asList(DISTRIBUTION_IDS).indexOf(t[i].distribution());
             select(distributions.get(i), Math.max(index, 0));

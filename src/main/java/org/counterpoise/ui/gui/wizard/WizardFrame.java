@@ -2,7 +2,6 @@ package org.counterpoise.ui.gui.wizard;
 
 import java.awt.BorderLayout;
 import java.awt.CardLayout;
-import java.awt.Component;
 import java.awt.Dimension;
 import java.awt.FlowLayout;
 import java.awt.Font;
@@ -14,14 +13,10 @@ import java.util.ArrayList;
 import java.util.List;
 import javax.swing.Action;
 import javax.swing.BorderFactory;
-import javax.swing.DefaultListCellRenderer;
 import javax.swing.JButton;
-import javax.swing.JDialog;
 import javax.swing.JFrame;
 import javax.swing.JLabel;
-import javax.swing.JList;
 import javax.swing.JPanel;
-import javax.swing.ListSelectionModel;
 import javax.swing.UIManager;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.error.InvalidInputException;
@@ -63,13 +58,13 @@ public final class WizardFrame extends JFrame {
     private final RobustnessStep robustness;
     private final CardLayout cards = new CardLayout();
     private final JPanel center = new JPanel(cards);
-    private final JList<Step> stepList;
+    private final StepList stepList;
     private final Action back = Actions.of("Back", KeyEvent.VK_B, null, e -> go(this.current - 1));
     private final Action next = Actions.of("Next", KeyEvent.VK_N, null, e -> go(this.current + 1));
     private final FileActions files;
     private final EditActions edits = new EditActions(document);
     private final ProjectDetails details = new ProjectDetails(document);
-    private JDialog detailsDialog;
+    private final ProjectDetailsDialog detailsDialog;
     private int current;
 
     /** Builds the window with a new, untitled project. */
@@ -104,7 +99,8 @@ public final class WizardFrame extends JFrame {
             center.add(ScrollingPage.of(s.component()), s.title());
         }
         files = new FileActions(this, document, tasks, run::fieldsValid, this::say);
-        stepList = stepList();
+        stepList = new StepList(steps, this::go, () -> current);
+        detailsDialog = new ProjectDetailsDialog(this, details, files, edits);
         setContentPane(layoutRoot());
         setJMenuBar(WizardMenus.build(this, files, edits, this::showDetails,
                 name -> files.whenDiscarded(() -> load(Presets.load(name), null)), this::closeRequested));
@@ -129,37 +125,6 @@ public final class WizardFrame extends JFrame {
         documentChanged(new DocumentChange(DocumentChange.Kind.LOADED, document.project(), null));
         go(0);
         WindowPlacement.restore(this, new Dimension(1280, 800));
-    }
-
-    private JList<Step> stepList() {
-        JList<Step> list = new JList<>(steps.toArray(new Step[0]));
-        list.setName("steps");
-        list.setSelectionMode(ListSelectionModel.SINGLE_SELECTION);
-        list.setFixedCellWidth(190);
-        list.setBorder(BorderFactory.createEmptyBorder(10, 6, 10, 6));
-        list.setCellRenderer(new DefaultListCellRenderer() {
-            private static final long serialVersionUID = 1L;
-
-            @Override
-            public Component getListCellRendererComponent(JList<?> l, Object value, int index, boolean selected,
-                    boolean focus) {
-                Step s = (Step) value;
-                String mark = s.problem() != null ? "  \u25cf" : "";
-                JLabel label = (JLabel) super.getListCellRendererComponent(l, (index + 1) + "   " + s.title() + mark,
-                        index, selected, focus);
-                label.setBorder(BorderFactory.createEmptyBorder(7, 8, 7, 8));
-                if (s.problem() != null && !selected) {
-                    label.setForeground(Themes.problemColour());
-                }
-                return label;
-            }
-        });
-        list.addListSelectionListener(e -> {
-            if (!e.getValueIsAdjusting() && list.getSelectedIndex() >= 0 && list.getSelectedIndex() != current) {
-                go(list.getSelectedIndex());
-            }
-        });
-        return list;
     }
 
     private JPanel layoutRoot() {
@@ -201,24 +166,7 @@ public final class WizardFrame extends JFrame {
     }
 
     private void showDetails() {
-        if (detailsDialog == null) {
-            detailsDialog = new JDialog(this, "Project details", false);
-            detailsDialog.setName("project.dialog");
-            JPanel content = new JPanel(new BorderLayout());
-            content.add(details, BorderLayout.CENTER);
-            JButton close = new JButton("Close");
-            close.setName("project.close");
-            close.addActionListener(e -> detailsDialog.setVisible(false));
-            JPanel buttons = new JPanel(new FlowLayout(FlowLayout.RIGHT, 8, 6));
-            buttons.add(close);
-            content.add(buttons, BorderLayout.SOUTH);
-            detailsDialog.setContentPane(content);
-            files.bind(detailsDialog.getRootPane());
-            edits.bind(detailsDialog.getRootPane());
-            detailsDialog.pack();
-            detailsDialog.setLocationRelativeTo(this);
-        }
-        detailsDialog.setVisible(true);
+        detailsDialog.show();
     }
 
     private void documentChanged(DocumentChange change) {
