@@ -148,6 +148,25 @@ public final class HInfinityOptimiser {
                 counter.count(), certified, constraint);
     }
 
+    /**
+     * The certificate on its own, for a design found by any route: the first-order minimax
+     * conditions hold (or no probe lowers the peak) and no point of the global scan or classical
+     * design is lower. The same rule {@link #optimise} applies to its own result.
+     *
+     * @return true when (f, zeta) is certified as the optimum of the problem (no stroke limit)
+     */
+    static boolean certifies(PeakProblem problem, double f, double zeta) {
+        EvaluationCounter counter = new EvaluationCounter();
+        double peak = PeakScan.peakOf(problem, f, zeta, counter);
+        if (!Double.isFinite(peak)) {
+            return false;
+        }
+        PeakScan.GlobalScan scan = PeakScan.global(problem, counter, peak, new double[] {f, zeta});
+        boolean stationary = MinimaxCertificate.isStationary(problem, f, zeta)
+                || PeakDirectSearch.noDescentByProbe(problem, f, zeta, peak, counter);
+        return peak <= scan.lowest() * (1 + SCAN_MARGIN) && stationary;
+    }
+
     /** Nelder-Mead on the exact peak from the best point so far, then the active sets from there. */
     private static void polish(PeakProblem problem, Best best, EvaluationCounter counter) {
         double[] near = PeakDirectSearch.nelderMead(problem, new double[] {best.f, best.zeta}, counter);
