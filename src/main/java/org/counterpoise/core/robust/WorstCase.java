@@ -1,6 +1,7 @@
 package org.counterpoise.core.robust;
 
 import java.util.function.DoubleBinaryOperator;
+import java.util.stream.IntStream;
 import org.apache.commons.math3.optim.MaxEval;
 import org.apache.commons.math3.optim.nonlinear.scalar.GoalType;
 import org.apache.commons.math3.optim.univariate.BrentOptimizer;
@@ -60,9 +61,7 @@ public final class WorstCase {
     private static Point oneDimension(java.util.function.DoubleUnaryOperator f, double range, boolean structure) {
         double[] x = Sensitivity.factors(range, POINTS_1D);
         double[] v = new double[x.length];
-        for (int i = 0; i < x.length; i++) {
-            v[i] = f.applyAsDouble(x[i]);
-        }
+        IntStream.range(0, x.length).parallel().forEach(i -> v[i] = f.applyAsDouble(x[i]));
         double bestX = 1;
         double best = Double.NEGATIVE_INFINITY;
         for (int i = 0; i < x.length; i++) {
@@ -83,11 +82,10 @@ public final class WorstCase {
         double[] s = Sensitivity.factors(sRange, POINTS_2D);
         double[] a = Sensitivity.factors(aRange, POINTS_2D);
         double[][] v = new double[s.length][a.length];
-        for (int i = 0; i < s.length; i++) {
-            for (int j = 0; j < a.length; j++) {
-                v[i][j] = f.applyAsDouble(s[i], a[j]);
-            }
-        }
+        // The grid values are independent: computed on all cores, each into its own cell, so the
+        // result does not depend on the thread count.
+        IntStream.range(0, s.length * a.length).parallel()
+                .forEach(k -> v[k / a.length][k % a.length] = f.applyAsDouble(s[k / a.length], a[k % a.length]));
         Point best = new Point(1, 1, Double.NEGATIVE_INFINITY);
         for (int i = 0; i < s.length; i++) {
             for (int j = 0; j < a.length; j++) {
