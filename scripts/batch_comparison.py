@@ -17,7 +17,7 @@ docs/performance.md: time per design, the ratio, the peak memory of the tool's p
 far the script's optimum peak lies above the tool's (the tool's peak is exact).
 
 Usage: python3 scripts/batch_comparison.py [--cases 2000] [--script-cases 2000]
-       [--jar target/counterpoise.jar]
+       [--java-options "-XX:TieredStopAtLevel=1 -XX:+UseSerialGC"] [--jar target/counterpoise.jar]
 (--script-cases runs the script on the first N cases only, when the whole batch takes too long.)
 """
 import argparse
@@ -132,6 +132,8 @@ def main():
     parser = argparse.ArgumentParser()
     parser.add_argument("--cases", type=int, default=2000)
     parser.add_argument("--script-cases", type=int, default=None)
+    parser.add_argument("--java-options", default="",
+                        help="JVM options for the tool, e.g. \"-XX:TieredStopAtLevel=1 -XX:+UseSerialGC\"")
     parser.add_argument("--jar", default=os.path.join(os.path.dirname(__file__), "..", "target", "counterpoise.jar"))
     args = parser.parse_args()
     cases = make_cases(args.cases)
@@ -140,7 +142,7 @@ def main():
         path = os.path.join(tmp, "cases.csv")
         write_cases(cases, path)
         t0 = time.perf_counter()
-        run = subprocess.run(["java", "-jar", args.jar, "optimum", "--cases", path, "--csv"],
+        run = subprocess.run(["java", *args.java_options.split(), "-jar", args.jar, "optimum", "--cases", path, "--csv"],
                              capture_output=True, text=True)
         tool_seconds = time.perf_counter() - t0
         if run.returncode != 0:
@@ -160,7 +162,8 @@ def main():
     print(f"cases: {len(cases)} (tool, whole process), {script_n} (script); certified by the tool: {certified}")
     print("| route | designs | total | per design | peak memory |")
     print("|---|---|---|---|---|")
-    print(f"| Counterpoise `optimum --cases` (whole process, JVM start included) | {len(cases)} | "
+    flags = f" with `{args.java_options}`" if args.java_options else ""
+    print(f"| Counterpoise `optimum --cases`{flags} (whole process, JVM start included) | {len(cases)} | "
           f"{tool_seconds:.2f} s | {tool_per * 1e3:.2f} ms | {tool_rss_mib:.0f} MiB |")
     print(f"| script (numpy/scipy grid + Nelder-Mead from Den Hartog) | {script_n} | {script_seconds:.1f} s | "
           f"{script_per * 1e3:.1f} ms | - |")
