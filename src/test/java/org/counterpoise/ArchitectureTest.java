@@ -54,13 +54,6 @@ class ArchitectureTest {
     private static final List<String> CORE_MAY_NOT_IMPORT = List.of("java.awt", "java.util.prefs", "java.io.File",
             "java.nio.file");
 
-    /**
-     * Files excused from the inline-name and length rules while another branch rewrites them. The
-     * optimiser is being split into smaller classes on branch h-speed; remove the entry when that
-     * lands (a name that no longer exists is harmless, but the entry should not outlive it).
-     */
-    private static final Set<String> BEING_SPLIT = Set.of("org/counterpoise/core/optim/HInfinityOptimiser.java");
-
     private static final int LONGEST_CLASS = 400;
     private static final String LONG_CLASS_NOTE = "Longer than 400 lines because";
 
@@ -240,9 +233,6 @@ class ArchitectureTest {
     void noQualifiedNameWrittenInlineInCode() {
         List<String> out = new ArrayList<>();
         for (Source s : sources("")) {
-            if (BEING_SPLIT.contains(s.name())) {
-                continue;
-            }
             for (int i = 0; i < s.code().size(); i++) {
                 String t = s.code().get(i).strip();
                 if (t.startsWith("import ") || t.startsWith("package ")) {
@@ -261,7 +251,7 @@ class ArchitectureTest {
     void longClassesSayWhy() {
         List<String> out = new ArrayList<>();
         for (Source s : sources("")) {
-            if (s.lines().size() > LONGEST_CLASS && !BEING_SPLIT.contains(s.name()) && !topOf(s).contains(LONG_CLASS_NOTE)) {
+            if (s.lines().size() > LONGEST_CLASS && !topOf(s).contains(LONG_CLASS_NOTE)) {
                 out.add(s.name() + ":1: " + s.lines().size() + " lines; split it, or say at its top \""
                         + LONG_CLASS_NOTE + " ...\"");
             }

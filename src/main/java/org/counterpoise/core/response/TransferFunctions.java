@@ -71,6 +71,26 @@ public final class TransferFunctions {
                 RealPolynomials.add(shifted[1], RealPolynomials.scale(nd[1], -1.0)), tuning);
     }
 
+    /**
+     * The response written out in the absorber polynomial K(s), for cheap evaluation of many
+     * designs: the same algebra as {@link #sensitivity}, with K = 0 and K = 1.
+     * @param excitation what drives the structure
+     * @param response the response wanted (not the spring or damper force alone)
+     * @param structureDamping zeta1
+     * @param massRatio mu
+     * @return N0, N1, D0, D1 with H = (N0 + K N1) / (D0 + K D1)
+     */
+    public static AbsorberAffineResponse affineInAbsorber(ExcitationKind excitation, ResponseKind response,
+            double structureDamping, double massRatio) {
+        if (response == ResponseKind.SPRING_FORCE || response == ResponseKind.DAMPER_FORCE) {
+            throw new IllegalArgumentException(response + " depends on the spring and damper separately");
+        }
+        double[][] zero = build(excitation, response, structureDamping, massRatio, new double[] {0.0, 0.0});
+        double[][] one = build(excitation, response, structureDamping, massRatio, new double[] {1.0, 0.0});
+        return new AbsorberAffineResponse(zero[0], RealPolynomials.add(one[0], RealPolynomials.scale(zero[0], -1.0)),
+                zero[1], RealPolynomials.add(one[1], RealPolynomials.scale(zero[1], -1.0)));
+    }
+
     /** K(s) = f^2 + 2 zeta_a f s, the absorber's normalised spring and damper. */
     private static double[] absorberPolynomial(Tuning tuning) {
         return new double[] {tuning.tuningRatio() * tuning.tuningRatio(), 2.0 * tuning.dampingRatio() * tuning.tuningRatio()};

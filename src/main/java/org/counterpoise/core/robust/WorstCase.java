@@ -1,7 +1,10 @@
 package org.counterpoise.core.robust;
 
+import java.util.ArrayList;
+import java.util.List;
 import java.util.function.DoubleBinaryOperator;
 import java.util.function.DoubleUnaryOperator;
+import java.util.stream.IntStream;
 import org.apache.commons.math3.optim.MaxEval;
 import org.apache.commons.math3.optim.nonlinear.scalar.GoalType;
 import org.apache.commons.math3.optim.univariate.BrentOptimizer;
@@ -61,9 +64,7 @@ public final class WorstCase {
     private static Point oneDimension(DoubleUnaryOperator f, double range, boolean structure) {
         double[] x = Sensitivity.factors(range, POINTS_1D);
         double[] v = new double[x.length];
-        for (int i = 0; i < x.length; i++) {
-            v[i] = f.applyAsDouble(x[i]);
-        }
+        IntStream.range(0, x.length).parallel().forEach(i -> v[i] = f.applyAsDouble(x[i]));
         double bestX = 1;
         double best = Double.NEGATIVE_INFINITY;
         for (int i = 0; i < x.length; i++) {
@@ -84,40 +85,50 @@ public final class WorstCase {
         double[] s = Sensitivity.factors(sRange, POINTS_2D);
         double[] a = Sensitivity.factors(aRange, POINTS_2D);
         double[][] v = new double[s.length][a.length];
+        // The grid values are independent: computed on all cores, each into its own cell, so the
+        // result does not depend on the thread count.
+        IntStream.range(0, s.length * a.length).parallel()
+                .forEach(k -> v[k / a.length][k % a.length] = f.applyAsDouble(s[k / a.length], a[k % a.length]));
+        List<int[]> maxima = new ArrayList<>();
         for (int i = 0; i < s.length; i++) {
             for (int j = 0; j < a.length; j++) {
-                v[i][j] = f.applyAsDouble(s[i], a[j]);
+                if (isLocalMax(v, i, j)) {
+                    maxima.add(new int[] {i, j});
+                }
             }
         }
+        // Each local maximum is refined on its own (on all cores); the highest wins, the first in
+        // grid order among equals, as in a sequential sweep.
+        List<Point> refined = maxima.parallelStream().map(ij -> refine(f, s, a, v, ij[0], ij[1])).toList();
         Point best = new Point(1, 1, Double.NEGATIVE_INFINITY);
-        for (int i = 0; i < s.length; i++) {
-            for (int j = 0; j < a.length; j++) {
-                if (!isLocalMax(v, i, j)) {
-                    continue;
-                }
-                double si = s[i];
-                double aj = a[j];
-                double value = v[i][j];
-                double sLo = s[Math.max(i - 1, 0)];
-                double sHi = s[Math.min(i + 1, s.length - 1)];
-                double aLo = a[Math.max(j - 1, 0)];
-                double aHi = a[Math.min(j + 1, a.length - 1)];
-                for (int round = 0; round < 3; round++) {
-                    final double fixedA = aj;
-                    double[] rs = maximise(x -> f.applyAsDouble(x, fixedA), sLo, sHi, si, value);
-                    si = rs[0];
-                    value = rs[1];
-                    final double fixedS = si;
-                    double[] ra = maximise(x -> f.applyAsDouble(fixedS, x), aLo, aHi, aj, value);
-                    aj = ra[0];
-                    value = ra[1];
-                }
-                if (value > best.peak()) {
-                    best = new Point(si, aj, value);
-                }
+        for (Point point : refined) {
+            if (point.peak() > best.peak()) {
+                best = point;
             }
         }
         return best;
+    }
+
+    /** Three rounds of alternating Brent searches from grid point (i, j) within its neighbours. */
+    private static Point refine(DoubleBinaryOperator f, double[] s, double[] a, double[][] v, int i, int j) {
+        double si = s[i];
+        double aj = a[j];
+        double value = v[i][j];
+        double sLo = s[Math.max(i - 1, 0)];
+        double sHi = s[Math.min(i + 1, s.length - 1)];
+        double aLo = a[Math.max(j - 1, 0)];
+        double aHi = a[Math.min(j + 1, a.length - 1)];
+        for (int round = 0; round < 3; round++) {
+            final double fixedA = aj;
+            double[] rs = maximise(x -> f.applyAsDouble(x, fixedA), sLo, sHi, si, value);
+            si = rs[0];
+            value = rs[1];
+            final double fixedS = si;
+            double[] ra = maximise(x -> f.applyAsDouble(fixedS, x), aLo, aHi, aj, value);
+            aj = ra[0];
+            value = ra[1];
+        }
+        return new Point(si, aj, value);
     }
 
     private static boolean isLocalMax(double[][] v, int i, int j) {

@@ -6,6 +6,8 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
+import java.util.stream.Collectors;
+import java.util.stream.IntStream;
 import java.util.Map;
 import java.util.concurrent.Callable;
 import org.counterpoise.core.error.InvalidInputException;
@@ -43,6 +45,8 @@ public final class OptimumCommand implements Callable<Integer> {
      * and more memory than a desktop has) is refused before anything is computed.
      */
     static final int MAX_CASES = 100_000;
+    /** Rows solved together before they are printed: enough to keep both cores busy. */
+    private static final int CHUNK = 64;
     /** Largest --cases file: 100 000 rows of a few dozen characters stay below 8 MiB. */
     static final long MAX_CASES_BYTES = 8L << 20;
 
@@ -113,24 +117,47 @@ public final class OptimumCommand implements Callable<Integer> {
             default -> throw new InvalidInputException("--objective", objective, "peak or variance");
         };
         List<PeakProblem> problems = cases == null ? fromOptions() : fromCases(cases);
-        List<OptimumTable.Row> rows = new ArrayList<>();
-        for (PeakProblem p : problems) {
-            if (variance) {
-                VarianceOptimum o = VarianceOptimiser.optimise(p);
-                rows.add(new OptimumTable.Row(p.massRatio(), p.structureDamping(), o.tuning().tuningRatio(),
-                        o.tuning().dampingRatio(), o.variance(), "", o.converged()));
-            } else {
-                PeakOptimum o = HInfinityOptimiser.optimise(p);
-                rows.add(new OptimumTable.Row(p.massRatio(), p.structureDamping(), o.tuning().tuningRatio(),
-                        o.tuning().dampingRatio(), o.peak(), o.activeSet(), o.converged()));
-            }
-        }
         PrintWriter out = spec.commandLine().getOut();
-        String valueKey = variance ? "variance" : "peak";
-        out.print(json ? OptimumTable.json(rows, valueKey) : csv ? OptimumTable.csv(rows, valueKey)
-                : OptimumTable.text(rows, valueKey));
+        OptimumTable.Streamed table = new OptimumTable.Streamed(json ? OptimumTable.Format.JSON
+                : csv ? OptimumTable.Format.CSV : OptimumTable.Format.TEXT, variance ? "variance" : "peak");
+        // Rows are independent: each chunk is solved on all cores, then printed in order, so the
+        // output is that of a sequential run and memory stays bounded however long the batch.
+        boolean started = false;
+        for (int start = 0; start < problems.size(); start += CHUNK) {
+            List<Object> solved = IntStream.range(start, Math.min(start + CHUNK, problems.size())).parallel()
+                    .mapToObj(i -> solve(problems.get(i), variance)).collect(Collectors.toList());
+            for (Object result : solved) {
+                if (result instanceof InvalidInputException refused) {
+                    out.flush();
+                    throw refused; // the first refused row in order, as a sequential run would report
+                }
+                if (!started) {
+                    out.print(table.start()); // not before a row: a refused first case prints nothing
+                    started = true;
+                }
+                out.print(table.row((OptimumTable.Row) result));
+            }
+            out.flush();
+        }
+        out.print(table.end());
         out.flush();
         return 0;
+    }
+
+    /** @return the row of one case, or the refusal of a case that has no answer */
+    private static Object solve(PeakProblem p, boolean variance) {
+        try {
+            if (variance) {
+                VarianceOptimum o = VarianceOptimiser.optimise(p);
+                return new OptimumTable.Row(p.massRatio(), p.structureDamping(), o.tuning().tuningRatio(),
+                        o.tuning().dampingRatio(), o.variance(), "", o.converged());
+            }
+            PeakOptimum o = HInfinityOptimiser.optimise(p);
+            return new OptimumTable.Row(p.massRatio(), p.structureDamping(), o.tuning().tuningRatio(),
+                    o.tuning().dampingRatio(), o.peak(), o.activeSet(), o.converged());
+        } catch (InvalidInputException refused) {
+            return refused;
+        }
     }
 
     private static final Map<String, String> OPTIONS = Map.of("mass ratio", "--mass-ratio", "structure damping",
