@@ -5,6 +5,7 @@ import java.util.EnumMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.OptionalDouble;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.error.NotFoundException;
 import org.counterpoise.core.error.Warning;
@@ -36,6 +37,7 @@ import org.counterpoise.core.tuning.Assumption;
 import org.counterpoise.core.tuning.ClosedForm;
 import org.counterpoise.core.tuning.ClosedForms;
 import org.counterpoise.core.tuning.UndampedAbsorber;
+import org.counterpoise.core.units.Gravity;
 
 /**
  * The one entry point every front end calls: {@link DesignStudy} in, {@link DesignResult} out.
@@ -87,16 +89,15 @@ public final class Designer {
         double[] coupled = {split[0] * omega1, split[1] * omega1};
 
         boolean noTarget = after.unbounded() || after.value() == 0.0;
-        DetuningAlternative none = new DetuningAlternative(after.value(), Double.NaN, Double.NaN);
+        DetuningAlternative none = DetuningAlternative.none(after.value());
         DetuningAlternative detuning = noTarget ? none : StructureDetuning.search(structure, excitation.kind(),
                 excitation.amplitude(), band, kind, after.value());
         DetuningAlternative massDetuning = noTarget ? none : StructureDetuning.searchMass(structure,
                 excitation.kind(), excitation.amplitude(), band, kind, after.value());
 
         addWarnings(warnings, study, mu, tuning, before, after, strokeRunUp, coupled);
-        double sag = study.hangsVertically()
-                ? org.counterpoise.core.units.Gravity.STANDARD / (absorber.naturalFrequency() * absorber.naturalFrequency())
-                : Double.NaN;
+        OptionalDouble sag = study.hangsVertically() ? OptionalDouble.of(
+                Gravity.STANDARD / (absorber.naturalFrequency() * absorber.naturalFrequency())) : OptionalDouble.empty();
         return new DesignResult(study, chosen.source(), chosen.note(), tuning, absorber, sag, before, after, motionBefore,
                 motionAfter, strokeInBand, strokeRunUp, clearance,
                 fitted.peakOver(ResponseKind.SPRING_FORCE, band), fitted.peakOver(ResponseKind.DAMPER_FORCE, band),
@@ -125,8 +126,8 @@ public final class Designer {
     private static ClosedForm chooseUnnamed(DesignStudy study, List<Warning> warnings) {
         Excitation excitation = study.excitation();
         Structure structure = study.structure();
-        if (study.sizing().byTarget()) {
-            return lightestForTarget(study, warnings);
+        if (study.sizing() instanceof AbsorberSizing.ByTarget target) {
+            return lightestForTarget(study, target, warnings);
         }
         double mu = study.sizing().massRatioOn(structure);
         return switch (study.method()) {
@@ -185,17 +186,17 @@ public final class Designer {
         DesignConstraints c = study.constraints();
         double[] g = band.isSingle() ? singleSpeedBand(study.excitation().kind(), study.response(), mu,
                 s.dampingRatio(), band.low() / omega1) : new double[] {band.low() / omega1, band.high() / omega1};
-        PeakProblem p = new PeakProblem(study.excitation().kind(), study.response(), mu, s.dampingRatio(), g[0], g[1],
-                Double.NaN, Double.NaN);
-        if (!Double.isNaN(c.fixedDampingRatio())) {
-            p = p.withFixedDamping(c.fixedDampingRatio());
+        PeakProblem p = PeakProblem.free(study.excitation().kind(), study.response(), mu, s.dampingRatio(), g[0],
+                g[1]);
+        if (c.fixedDampingRatio().isPresent()) {
+            p = p.withFixedDamping(c.fixedDampingRatio().getAsDouble());
         }
-        if (!Double.isNaN(c.fixedTuningRatio())) {
-            p = p.withFixedTuning(c.fixedTuningRatio());
+        if (c.fixedTuningRatio().isPresent()) {
+            p = p.withFixedTuning(c.fixedTuningRatio().getAsDouble());
         }
-        if (!Double.isNaN(c.strokeLimit())) {
-            p = p.withStrokeLimit(c.strokeLimit() / ResponseScale.referenceLength(s, study.excitation().kind(),
-                    study.excitation().amplitude()));
+        if (c.strokeLimit().isPresent()) {
+            p = p.withStrokeLimit(c.strokeLimit().getAsDouble() / ResponseScale.referenceLength(s,
+                    study.excitation().kind(), study.excitation().amplitude()));
         }
         return p;
     }
@@ -243,11 +244,11 @@ public final class Designer {
         return new ClosedForm(o.tuning(), EXACT_SOURCE, note);
     }
 
-    private static ClosedForm lightestForTarget(DesignStudy study, List<Warning> warnings) {
+    private static ClosedForm lightestForTarget(DesignStudy study, AbsorberSizing.ByTarget sizing,
+            List<Warning> warnings) {
         Structure s = study.structure();
         Excitation e = study.excitation();
         double scale = ResponseScale.of(s, e.kind(), e.amplitude(), study.response());
-        AbsorberSizing sizing = study.sizing();
         PeakProblem problem = peakProblem(study, sizing.maxMassRatio());
         MinimumMass.Result r = MinimumMass.find(problem, sizing.target() / scale, sizing.maxMassRatio());
         if (!r.reachable()) {

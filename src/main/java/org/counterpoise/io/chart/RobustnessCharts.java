@@ -65,7 +65,7 @@ public final class RobustnessCharts {
         double[][] x = {percent(r.structureCurve()), percent(r.robustStructureCurve())};
         double[][] y = {toUnit(r.structureCurve().peaks(), unit), toUnit(r.robustStructureCurve().peaks(), unit)};
         double typical = PlotRange.typical(y);
-        double target = unit.fromSi(r.settings().target());
+        double target = unit.fromSi(r.settings().target().orElse(0.0)); // 0: no target line
         boolean hasTarget = Double.isFinite(target) && target > 0;
         double top = Math.max(PlotRange.top(typical, y), hasTarget ? target : 0);
         if (!(top > 0)) {
@@ -203,7 +203,7 @@ public final class RobustnessCharts {
             shown[i] = toUnit(z[i], unit);
         }
         double typical = PlotRange.typical(shown);
-        double target = unit.fromSi(r.settings().target());
+        double target = unit.fromSi(r.settings().target().orElse(0.0)); // 0: no target line
         boolean hasTarget = Double.isFinite(target) && target > 0;
         double max = PlotRange.top(typical, shown);
         double top = hasTarget ? target : max;
@@ -346,7 +346,7 @@ public final class RobustnessCharts {
         x[x.length - 1] = high;
         var s = chart.getStyler();
         double pad = 0.04 * (high - low);
-        double target = unit.fromSi(mc.target());
+        double target = unit.fromSi(mc.target().orElse(0.0)); // 0: no target line
         double xLow = low - pad;
         double xHigh = high + pad;
         if (Double.isFinite(target) && target > 0 && !PlotRange.unbounded(target, high)) {

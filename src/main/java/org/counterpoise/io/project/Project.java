@@ -179,8 +179,9 @@ public record Project(String name, String notes, StructureInput structure, Distu
                     "give absorber.mass_ratio, absorber.mass or absorber.target");
         }
         DesignConstraints constraints = new DesignConstraints(
-                a.strokeLimit() == null ? Double.NaN : a.strokeLimit().positiveSi("absorber.stroke_limit.value"),
-                a.fixedDampingRatio(), a.fixedTuningRatio());
+                a.strokeLimit() == null ? OptionalDouble.empty()
+                        : OptionalDouble.of(a.strokeLimit().positiveSi("absorber.stroke_limit.value")),
+                given(a.fixedDampingRatio()), given(a.fixedTuningRatio()));
         return new DesignStudy(name, s, toExcitation(), a.response(), sizing, a.method(), a.hangsVertically(),
                 a.strokeMargin(), constraints, toRobustness());
     }
@@ -196,7 +197,8 @@ public record Project(String name, String notes, StructureInput structure, Distu
                 : Checks.inRange("robustness.structure_detuning", r.structureDetuningPercent(), 0, 50) / 100;
         double absorberRange = Double.isNaN(r.absorberDetuningPercent()) ? d.absorberRange()
                 : Checks.inRange("robustness.absorber_detuning", r.absorberDetuningPercent(), 0, 50) / 100;
-        double target = r.target() == null ? Double.NaN : r.target().positiveSi("robustness.target.value");
+        OptionalDouble target = r.target() == null ? OptionalDouble.empty()
+                : OptionalDouble.of(r.target().positiveSi("robustness.target.value"));
         ToleranceSet set = new ToleranceSet(tolerance("robustness.tolerances.structure_mass", r.structureMass()),
                 tolerance("robustness.tolerances.structure_stiffness", r.structureStiffness()),
                 tolerance("robustness.tolerances.absorber_mass", r.absorberMass()),
@@ -210,13 +212,8 @@ public record Project(String name, String notes, StructureInput structure, Distu
         if (t == null) {
             return Tolerance.NONE;
         }
-        Tolerance.Distribution kind = switch (t.distribution()) {
-            case "uniform" -> Tolerance.Distribution.UNIFORM;
-            case "normal" -> Tolerance.Distribution.NORMAL;
-            case "none" -> Tolerance.Distribution.NONE;
-            default -> throw new InvalidInputException(field + ".distribution", "\"" + t.distribution() + "\"",
-                    "one of uniform, normal, none");
-        };
+        Tolerance.Distribution kind = t.kind().orElseThrow(() -> new InvalidInputException(
+                field + ".distribution", "\"" + t.distribution() + "\"", RobustnessInput.ToleranceInput.tokens()));
         if (!Double.isNaN(t.percent()) == (t.absolute() != null)) {
             throw new InvalidInputException(field, "percent and absolute", "give either percent or absolute");
         }
@@ -224,6 +221,11 @@ public record Project(String name, String notes, StructureInput structure, Distu
             return new Tolerance(kind, Checks.nonNegative(field + ".absolute.value", t.absolute().si(field + ".absolute.value")), false);
         }
         return new Tolerance(kind, Checks.inRange(field + ".percent", t.percent(), 0, 90) / 100, true);
+    }
+
+    /** An input record's NaN (not given) as the core's empty value. */
+    private static OptionalDouble given(double value) {
+        return Double.isNaN(value) ? OptionalDouble.empty() : OptionalDouble.of(value);
     }
 
     private static int count(Object... entries) {

@@ -2,6 +2,7 @@ package org.counterpoise.io.sheet;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.OptionalDouble;
 import org.counterpoise.core.design.Cautions;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.DesignStudy;
@@ -161,8 +162,8 @@ public record SheetContent(String projectName, String notes, String date, String
                 DesignReport.tolerance(r.absorberTolerance(), 2)));
         build.add(quantity("Damping coefficient c2", r.absorber().damping(), Dimension.DAMPING_COEFFICIENT));
         build.add(quantity("Absorber natural frequency", r.absorber().naturalFrequency(), Dimension.FREQUENCY));
-        if (!Double.isNaN(r.staticSag())) {
-            build.add(quantity("Static sag of the spring", r.staticSag(), Dimension.LENGTH));
+        if (r.staticSag().isPresent()) {
+            build.add(quantity("Static sag of the spring", r.staticSag().getAsDouble(), Dimension.LENGTH));
         }
         build.add(quantity("Peak stroke in band", r.strokeInBand().value(), Dimension.LENGTH));
         build.add(quantity("Peak stroke during run-up", r.strokeRunUp().value(), Dimension.LENGTH));
@@ -223,9 +224,9 @@ public record SheetContent(String projectName, String notes, String date, String
                     + QuantityFormat.number(ru.fromSi(monteCarlo.p90()), 4), ru.symbol()));
             mc.add(new Row("P95 / P99", QuantityFormat.number(ru.fromSi(monteCarlo.p95()), 4) + "  /  "
                     + QuantityFormat.number(ru.fromSi(monteCarlo.p99()), 4), ru.symbol()));
-            if (!Double.isNaN(monteCarlo.probabilityExceeding())) {
+            if (monteCarlo.probabilityExceeding().isPresent()) {
                 mc.add(new Row("Probability above the target", QuantityFormat.number(
-                        100 * monteCarlo.probabilityExceeding(), 3), "%"));
+                        100 * monteCarlo.probabilityExceeding().getAsDouble(), 3), "%"));
             }
             sections.add(new Section("Tolerance Monte Carlo of the peak in band", mc));
         }
@@ -235,13 +236,14 @@ public record SheetContent(String projectName, String notes, String date, String
                 Cautions.STANDARD);
     }
 
-    private static String alternative(double factor, double target, String what) {
+    private static String alternative(OptionalDouble found, double target, String what) {
         if (target == 0.0) {
             return "not possible (the absorber holds the structure still)";
         }
-        if (Double.isNaN(factor)) {
+        if (found.isEmpty()) {
             return "not reachable by " + what + " alone";
         }
+        double factor = found.getAsDouble();
         double change = 100 * (factor - 1);
         return factor == 1.0 ? "no change needed" : (change > 0 ? "+" : "") + QuantityFormat.number(change, 3)
                 + " % " + what;
