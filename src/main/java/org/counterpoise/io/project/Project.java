@@ -163,15 +163,15 @@ public record Project(String name, String notes, StructureInput structure, Distu
         AbsorberInput a = absorber;
         Structure s = toStructure();
         AbsorberSizing sizing;
-        int sizes = (Double.isNaN(a.massRatio()) ? 0 : 1) + (a.mass() == null ? 0 : 1) + (a.target() == null ? 0 : 1);
+        int sizes = (a.massRatio().isPresent() ? 1 : 0) + (a.mass() == null ? 0 : 1) + (a.target() == null ? 0 : 1);
         if (sizes > 1) {
             throw new InvalidInputException("absorber", sizes + " sizes given",
                     "give one of absorber.mass_ratio, absorber.mass and absorber.target");
         } else if (a.target() != null) {
             sizing = AbsorberSizing.ofTarget(a.target().positiveSi("absorber.target.value"),
-                    Double.isNaN(a.maxMassRatio()) ? AbsorberSizing.DEFAULT_MAX_MASS_RATIO : a.maxMassRatio());
-        } else if (!Double.isNaN(a.massRatio())) {
-            sizing = AbsorberSizing.ofMassRatio(a.massRatio());
+                    a.maxMassRatio().orElse(AbsorberSizing.DEFAULT_MAX_MASS_RATIO));
+        } else if (a.massRatio().isPresent()) {
+            sizing = AbsorberSizing.ofMassRatio(a.massRatio().getAsDouble());
         } else if (a.mass() != null) {
             sizing = AbsorberSizing.ofMass(a.mass().positiveSi("absorber.mass.value"));
         } else {
@@ -181,7 +181,7 @@ public record Project(String name, String notes, StructureInput structure, Distu
         DesignConstraints constraints = new DesignConstraints(
                 a.strokeLimit() == null ? OptionalDouble.empty()
                         : OptionalDouble.of(a.strokeLimit().positiveSi("absorber.stroke_limit.value")),
-                given(a.fixedDampingRatio()), given(a.fixedTuningRatio()));
+                a.fixedDampingRatio(), a.fixedTuningRatio());
         return new DesignStudy(name, s, toExcitation(), a.response(), sizing, a.method(), a.hangsVertically(),
                 a.strokeMargin(), constraints, toRobustness());
     }
@@ -221,11 +221,6 @@ public record Project(String name, String notes, StructureInput structure, Distu
             return new Tolerance(kind, Checks.nonNegative(field + ".absolute.value", t.absolute().si(field + ".absolute.value")), false);
         }
         return new Tolerance(kind, Checks.inRange(field + ".percent", t.percent(), 0, 90) / 100, true);
-    }
-
-    /** An input record's NaN (not given) as the core's empty value. */
-    private static OptionalDouble given(double value) {
-        return Double.isNaN(value) ? OptionalDouble.empty() : OptionalDouble.of(value);
     }
 
     private static int count(Object... entries) {

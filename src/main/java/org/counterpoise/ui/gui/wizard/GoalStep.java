@@ -4,6 +4,7 @@ import java.awt.BorderLayout;
 import java.math.BigDecimal;
 import java.math.MathContext;
 import java.util.List;
+import java.util.OptionalDouble;
 import javax.swing.JCheckBox;
 import javax.swing.JComboBox;
 import javax.swing.JComponent;
@@ -213,8 +214,8 @@ final class GoalStep extends Step {
         return ok;
     }
 
-    private static double optional(QuantityField f) {
-        return f.textField().getText().isBlank() ? Double.NaN : f.number();
+    private static OptionalDouble optional(QuantityField f) {
+        return f.textField().getText().isBlank() ? OptionalDouble.empty() : OptionalDouble.of(f.number());
     }
 
     private void sizeUnits() {
@@ -303,7 +304,7 @@ final class GoalStep extends Step {
     /** @return the absorber choices as shown (throws InvalidInputException naming a field) */
     AbsorberInput input() {
         SizingForm kind = (SizingForm) sizing.getSelectedItem();
-        double ratio = kind == SizingForm.MASS_RATIO ? size.number() : Double.NaN;
+        OptionalDouble ratio = kind == SizingForm.MASS_RATIO ? OptionalDouble.of(size.number()) : OptionalDouble.empty();
         QuantityInput mass = kind == SizingForm.MASS ? size.input() : null;
         QuantityInput target = kind == SizingForm.TARGET ? size.input() : null;
         return new AbsorberInput(ratio, mass, method(), (ResponseKind) response.getSelectedItem(), hangs.isSelected(),
@@ -322,9 +323,9 @@ final class GoalStep extends Step {
         if (a.mass() != null) {
             selectItem(sizing, SizingForm.MASS);
             showValue(size, a.mass());
-        } else if (!Double.isNaN(a.massRatio())) {
+        } else if (a.massRatio().isPresent()) {
             selectItem(sizing, SizingForm.MASS_RATIO);
-            showValue(size, a.massRatio(), Unit.RATIO);
+            showValue(size, a.massRatio().getAsDouble(), Unit.RATIO);
         } else {
             selectItem(sizing, SizingForm.TARGET);
             showValue(size, a.target());
@@ -339,11 +340,11 @@ final class GoalStep extends Step {
         }
     }
 
-    private static void showOptional(QuantityField f, double v) {
-        if (Double.isNaN(v)) {
-            showValue(f, null);
+    private static void showOptional(QuantityField f, OptionalDouble v) {
+        if (v.isPresent()) {
+            showValue(f, v.getAsDouble(), Unit.RATIO);
         } else {
-            showValue(f, v, Unit.RATIO);
+            showValue(f, null);
         }
     }
 
