@@ -6,6 +6,7 @@ import java.util.OptionalDouble;
 import org.counterpoise.core.error.Warning;
 import org.counterpoise.core.model.Absorber;
 import org.counterpoise.core.model.Tuning;
+import org.counterpoise.core.optim.ActiveConstraint;
 import org.counterpoise.core.remedy.DetuningAlternative;
 import org.counterpoise.core.robust.DetuningRange;
 import org.counterpoise.core.response.ResponseKind;
@@ -41,6 +42,8 @@ import org.counterpoise.core.response.ResponsePeak;
  *     response that matters rises by {@link #TOLERANCE_ALLOWANCE}
  * @param absorberTolerance the same for the absorber's natural frequency (spring rate factor squared)
  * @param warnings non-fatal findings
+ * @param activeConstraint the designer's constraint that holds an exact-peak optimum back
+ *     ({@code NONE} for every other method); the words are in {@code io.text.MethodNoteText}
  */
 public record DesignResult(DesignStudy study, String methodSource, String methodNote, Tuning tuning, Absorber absorber,
         OptionalDouble staticSag, ResponsePeak responseBefore, ResponsePeak responseAfter,
@@ -48,7 +51,7 @@ public record DesignResult(DesignStudy study, String methodSource, String method
         ResponsePeak strokeInBand, ResponsePeak strokeRunUp, double clearance, ResponsePeak springForce,
         ResponsePeak damperForce, ResponsePeak absorberForce, double[] coupledNaturalFrequencies,
         DetuningAlternative detuning, DetuningAlternative massDetuning, DetuningRange structureTolerance, DetuningRange absorberTolerance,
-        List<Warning> warnings) {
+        List<Warning> warnings, ActiveConstraint activeConstraint) {
 
     /** The rise of the peak response that defines the tolerated detuning (a design choice: 10 %). */
     public static final double TOLERANCE_ALLOWANCE = 0.10;

@@ -60,7 +60,9 @@ public final class Designer {
         Excitation excitation = study.excitation();
         FrequencyBand band = excitation.band();
         List<Warning> warnings = new ArrayList<>();
-        ClosedForm chosen = choose(study, warnings);
+        // the constraint that holds an exact-peak optimum back, set where the optimum is found
+        ActiveConstraint[] active = {ActiveConstraint.NONE};
+        ClosedForm chosen = choose(study, warnings, active);
         Tuning tuning = chosen.tuning();
         double mu = tuning.massRatio();
         Absorber absorber = Absorber.of(structure, tuning);
@@ -106,12 +108,12 @@ public final class Designer {
                         DesignResult.TOLERANCE_SEARCH),
                 ToleratedDetuning.ofAbsorber(structure, absorber, excitation, kind, DesignResult.TOLERANCE_ALLOWANCE,
                         DesignResult.TOLERANCE_SEARCH),
-                warnings);
+                warnings, active[0]);
     }
 
-    private static ClosedForm choose(DesignStudy study, List<Warning> warnings) {
+    private static ClosedForm choose(DesignStudy study, List<Warning> warnings, ActiveConstraint[] active) {
         try {
-            return chooseUnnamed(study, warnings);
+            return chooseUnnamed(study, warnings, active);
         } catch (InvalidInputException e) {
             throw e.renamed(PROBLEM_FIELDS.getOrDefault(e.field(), e.field()));
         }
@@ -123,11 +125,12 @@ public final class Designer {
             "fixed tuning ratio", "absorber.fixed_tuning_ratio", "fixed absorber damping ratio",
             "absorber.fixed_damping_ratio", "target", "absorber.target");
 
-    private static ClosedForm chooseUnnamed(DesignStudy study, List<Warning> warnings) {
+    private static ClosedForm chooseUnnamed(DesignStudy study, List<Warning> warnings,
+            ActiveConstraint[] active) {
         Excitation excitation = study.excitation();
         Structure structure = study.structure();
         if (study.sizing() instanceof AbsorberSizing.ByTarget target) {
-            return lightestForTarget(study, target, warnings);
+            return lightestForTarget(study, target, warnings, active);
         }
         double mu = study.sizing().massRatioOn(structure);
         return switch (study.method()) {
@@ -139,7 +142,7 @@ public final class Designer {
                     UndampedAbsorber.tuning(mu, excitation.band().centre() / structure.naturalFrequency()),
                     "Frahm (1909), US patent 989958; Den Hartog (1956), Mechanical Vibrations, section 3.2",
                     "tuned to one forcing frequency");
-            case EXACT_PEAK -> exactPeak(study, peakProblem(study, mu), warnings);
+            case EXACT_PEAK -> exactPeak(study, peakProblem(study, mu), warnings, active);
             case ROBUST_PEAK -> {
                 // the nominal optimum is only a seed here (the robust design is never worse than it),
                 // so an uncertified one is still a useful start
@@ -166,11 +169,6 @@ public final class Designer {
             }
         };
     }
-
-    /** The method note's words for an active constraint (the note is read by people, never decided on). */
-    private static final Map<ActiveConstraint, String> CONSTRAINT_NOTES = Map.of(ActiveConstraint.STROKE_LIMIT,
-            "stroke limit", ActiveConstraint.FIXED_DAMPING, "fixed damping", ActiveConstraint.FIXED_TUNING,
-            "fixed tuning", ActiveConstraint.TUNING_SEARCH_BOUND, "tuning-ratio search bound");
 
     private static final String NOT_FOUND_ADVICE = "choose another method (equal-peak or robust-peak), or change"
             + " the band or the mass ratio slightly";
@@ -223,11 +221,13 @@ public final class Designer {
         return choices[2];
     }
 
-    private static ClosedForm exactPeak(DesignStudy study, PeakProblem problem, List<Warning> warnings) {
-        return exactPeakResult(study, HInfinityOptimiser.optimise(problem), warnings);
+    private static ClosedForm exactPeak(DesignStudy study, PeakProblem problem, List<Warning> warnings,
+            ActiveConstraint[] active) {
+        return exactPeakResult(study, HInfinityOptimiser.optimise(problem), warnings, active);
     }
 
-    private static ClosedForm exactPeakResult(DesignStudy study, PeakOptimum o, List<Warning> warnings) {
+    private static ClosedForm exactPeakResult(DesignStudy study, PeakOptimum o, List<Warning> warnings,
+            ActiveConstraint[] active) {
         if (!o.converged()) {
             throw new NotFoundException("certified exact-peak optimum", "the search could not confirm that no other"
                     + " tuning and damping gives a lower peak", NOT_FOUND_ADVICE);
@@ -238,14 +238,12 @@ public final class Designer {
                     : used.bandLow() == 0 ? PeakBand.RUN_UP : PeakBand.OCTAVE;
             warnings.add(Warning.of(WarningKind.SINGLE_FREQUENCY_EXACT, over.name()));
         }
-        String note = "maxima equal at the optimum: " + o.activeSet()
-                + (o.activeConstraint() == ActiveConstraint.NONE ? "" : "; active constraint: "
-                        + CONSTRAINT_NOTES.get(o.activeConstraint()));
-        return new ClosedForm(o.tuning(), EXACT_SOURCE, note);
+        active[0] = o.activeConstraint();
+        return new ClosedForm(o.tuning(), EXACT_SOURCE, "maxima equal at the optimum: " + o.activeSet());
     }
 
     private static ClosedForm lightestForTarget(DesignStudy study, AbsorberSizing.ByTarget sizing,
-            List<Warning> warnings) {
+            List<Warning> warnings, ActiveConstraint[] active) {
         Structure s = study.structure();
         Excitation e = study.excitation();
         double scale = ResponseScale.of(s, e.kind(), e.amplitude(), study.response());
@@ -254,7 +252,7 @@ public final class Designer {
         if (!r.reachable()) {
             warnings.add(Warning.of(WarningKind.TARGET_NOT_MET, sizing.maxMassRatio()));
         }
-        ClosedForm exact = exactPeakResult(study, r.optimum(), warnings);
+        ClosedForm exact = exactPeakResult(study, r.optimum(), warnings, active);
         return new ClosedForm(exact.tuning(), exact.source(), (r.reachable() ? "lightest absorber that meets the"
                 + " target; " : "target not met; ") + exact.note());
     }

@@ -17,6 +17,7 @@ import org.counterpoise.core.units.Unit;
 import org.counterpoise.io.project.ProjectIdentity;
 import org.counterpoise.io.text.DesignReport;
 import org.counterpoise.io.text.DisplayUnits;
+import org.counterpoise.io.text.MethodNoteText;
 import org.counterpoise.io.text.QuantityFormat;
 import org.counterpoise.io.text.WarningText;
 
@@ -149,7 +150,7 @@ public record SheetContent(String projectName, String notes, String date, String
         List<Row> method = new ArrayList<>();
         method.add(text("Method", study.method().id() + ": " + study.method().description()));
         method.add(text("Source", r.methodSource()));
-        method.add(text("Note", r.methodNote()));
+        method.add(text("Note", MethodNoteText.of(r)));
         method.add(number("Mass ratio \u03bc", r.tuning().massRatio(), 4));
         method.add(number("Tuning ratio f", r.tuning().tuningRatio(), 4));
         method.add(number("Absorber damping ratio \u03b6a", r.tuning().dampingRatio(), 4));

@@ -76,7 +76,7 @@ public final class DesignReport {
         section(out, "Design");
         row(out, "method", study.method().id() + " (" + study.method().description() + ")");
         row(out, "source", r.methodSource());
-        row(out, "note", r.methodNote());
+        row(out, "note", MethodNoteText.of(r));
         row(out, "response reduced", study.response().label());
         row(out, "mass ratio mu", ratio(r.tuning().massRatio()));
         row(out, "tuning ratio f", ratio(r.tuning().tuningRatio()));
