@@ -5,29 +5,47 @@ import org.counterpoise.core.model.Structure;
 
 /**
  * How big the absorber may be: a mass ratio mu, a mass budget in kg, or a target response level
- * for which the lightest sufficient absorber is sought (with the exact-peak method).
- *
- * @param massRatio mu, or NaN
- * @param mass absorber mass in kg, or NaN
- * @param target the largest allowed peak of the response that matters, SI, or NaN
- * @param maxMassRatio with a target: the largest mass ratio considered
+ * for which the lightest sufficient absorber is sought (with the exact-peak method). Exactly one
+ * of the three, by type.
  */
-public record AbsorberSizing(double massRatio, double mass, double target, double maxMassRatio) {
+public sealed interface AbsorberSizing {
 
     /** Default largest mass ratio considered when sizing for a target (common practice). */
-    public static final double DEFAULT_MAX_MASS_RATIO = 0.25;
+    double DEFAULT_MAX_MASS_RATIO = 0.25;
 
-    /** Exactly one of mass ratio, mass and target must be given. */
-    public AbsorberSizing {
-        int given = (Double.isNaN(massRatio) ? 0 : 1) + (Double.isNaN(mass) ? 0 : 1) + (Double.isNaN(target) ? 0 : 1);
-        if (given != 1) {
-            throw new IllegalArgumentException("give exactly one of mass ratio, mass and target");
-        }
-        if (!Double.isNaN(massRatio)) {
+    /**
+     * Sized by a mass ratio.
+     *
+     * @param massRatio mu = m2 / m1, in (0, 2)
+     */
+    record ByMassRatio(double massRatio) implements AbsorberSizing {
+        /** Validates the ratio. */
+        public ByMassRatio {
             Checks.inOpenRange("absorber.mass_ratio", massRatio, 0.0, 2.0);
-        } else if (!Double.isNaN(mass)) {
+        }
+    }
+
+    /**
+     * Sized by a mass budget.
+     *
+     * @param mass absorber mass, kg (&gt; 0)
+     */
+    record ByMass(double mass) implements AbsorberSizing {
+        /** Validates the mass. */
+        public ByMass {
             Checks.positive("absorber.mass", mass);
-        } else {
+        }
+    }
+
+    /**
+     * Sized for a target: the lightest absorber whose peak meets it.
+     *
+     * @param target the largest allowed peak of the response that matters, SI (&gt; 0)
+     * @param maxMassRatio the largest mass ratio considered, in (0, 2)
+     */
+    record ByTarget(double target, double maxMassRatio) implements AbsorberSizing {
+        /** Validates the target and the largest ratio. */
+        public ByTarget {
             Checks.positive("absorber.target", target);
             Checks.inOpenRange("absorber.max_mass_ratio", maxMassRatio, 0.0, 2.0);
         }
@@ -37,16 +55,16 @@ public record AbsorberSizing(double massRatio, double mass, double target, doubl
      * @param mu mass ratio
      * @return sizing by mass ratio
      */
-    public static AbsorberSizing ofMassRatio(double mu) {
-        return new AbsorberSizing(mu, Double.NaN, Double.NaN, Double.NaN);
+    static AbsorberSizing ofMassRatio(double mu) {
+        return new ByMassRatio(mu);
     }
 
     /**
      * @param kilograms absorber mass
      * @return sizing by mass
      */
-    public static AbsorberSizing ofMass(double kilograms) {
-        return new AbsorberSizing(Double.NaN, kilograms, Double.NaN, Double.NaN);
+    static AbsorberSizing ofMass(double kilograms) {
+        return new ByMass(kilograms);
     }
 
     /**
@@ -54,32 +72,27 @@ public record AbsorberSizing(double massRatio, double mass, double target, doubl
      * @param maxMu the largest mass ratio to consider
      * @return sizing for the lightest absorber that meets the target
      */
-    public static AbsorberSizing ofTarget(double targetSi, double maxMu) {
-        return new AbsorberSizing(Double.NaN, Double.NaN, targetSi, maxMu);
-    }
-
-    /** @return true when sized by mass ratio */
-    public boolean byRatio() {
-        return !Double.isNaN(massRatio);
+    static AbsorberSizing ofTarget(double targetSi, double maxMu) {
+        return new ByTarget(targetSi, maxMu);
     }
 
     /** @return true when sized for a target response */
-    public boolean byTarget() {
-        return !Double.isNaN(target);
+    default boolean byTarget() {
+        return this instanceof ByTarget;
     }
 
     /**
      * @param structure the structure (its effective mass at the absorber point)
-     * @return the mass ratio mu = m2 / m1 (not for target sizing)
+     * @return the mass ratio mu = m2 / m1 (not for target sizing, whose ratio the design finds)
      */
-    public double massRatioOn(Structure structure) {
-        if (byTarget()) {
-            throw new IllegalStateException("target sizing has no mass ratio before the design");
+    default double massRatioOn(Structure structure) {
+        if (this instanceof ByMassRatio r) {
+            return r.massRatio();
         }
-        if (byRatio()) {
-            return massRatio;
+        if (this instanceof ByMass m) {
+            double mu = m.mass() / structure.effectiveMass();
+            return Checks.inOpenRange("absorber.mass (as a ratio of the structure's effective mass)", mu, 0.0, 2.0);
         }
-        double mu = mass / structure.effectiveMass();
-        return Checks.inOpenRange("absorber.mass (as a ratio of the structure's effective mass)", mu, 0.0, 2.0);
+        throw new IllegalStateException("bug: target sizing has no mass ratio before the design");
     }
 }

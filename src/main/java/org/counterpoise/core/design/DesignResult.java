@@ -3,9 +3,11 @@ package org.counterpoise.core.design;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.OptionalDouble;
 import org.counterpoise.core.error.Warning;
 import org.counterpoise.core.model.Absorber;
 import org.counterpoise.core.model.Tuning;
+import org.counterpoise.core.optim.ActiveConstraint;
 import org.counterpoise.core.remedy.DetuningAlternative;
 import org.counterpoise.core.robust.DetuningRange;
 import org.counterpoise.core.response.ResponseKind;
@@ -22,7 +24,7 @@ import org.counterpoise.core.response.ResponsePeak;
  * @param methodNote what the method assumed or found (e.g. which peaks are equal at the optimum)
  * @param tuning mass ratio, tuning ratio, absorber damping ratio
  * @param absorber absorber mass, spring rate, damping coefficient
- * @param staticSag static deflection of the absorber spring under the absorber's weight, m (NaN
+ * @param staticSag static deflection of the absorber spring under the absorber's weight, m (empty
  *     when the absorber does not hang on its spring)
  * @param responseBefore the response that matters, bare structure, in band
  * @param responseAfter the response that matters, with the absorber, in band
@@ -41,14 +43,16 @@ import org.counterpoise.core.response.ResponsePeak;
  *     response that matters rises by {@link #TOLERANCE_ALLOWANCE}
  * @param absorberTolerance the same for the absorber's natural frequency (spring rate factor squared)
  * @param warnings non-fatal findings
+ * @param activeConstraint the designer's constraint that holds an exact-peak optimum back
+ *     ({@code NONE} for every other method); the words are in {@code io.text.MethodNoteText}
  */
 public record DesignResult(DesignStudy study, String methodSource, String methodNote, Tuning tuning, Absorber absorber,
-        double staticSag, ResponsePeak responseBefore, ResponsePeak responseAfter,
+        OptionalDouble staticSag, ResponsePeak responseBefore, ResponsePeak responseAfter,
         Map<ResponseKind, ResponsePeak> motionBefore, Map<ResponseKind, ResponsePeak> motionAfter,
         ResponsePeak strokeInBand, ResponsePeak strokeRunUp, double clearance, ResponsePeak springForce,
         ResponsePeak damperForce, ResponsePeak absorberForce, double[] coupledNaturalFrequencies,
         DetuningAlternative detuning, DetuningAlternative massDetuning, DetuningRange structureTolerance, DetuningRange absorberTolerance,
-        List<Warning> warnings) {
+        List<Warning> warnings, ActiveConstraint activeConstraint) {
 
     /** The rise of the peak response that defines the tolerated detuning (a design choice: 10 %). */
     public static final double TOLERANCE_ALLOWANCE = 0.10;

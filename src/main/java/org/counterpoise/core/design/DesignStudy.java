@@ -73,8 +73,8 @@ public record DesignStudy(String name, Structure structure, Excitation excitatio
         Checks.inRange("absorber.stroke_margin", strokeMargin, 1.0, 10.0);
         Checks.present("absorber", constraints, "design constraints");
         Checks.present("robustness", robustness, "robustness settings");
-        if (sizing.byTarget() && method != DesignMethod.EXACT_PEAK) {
-            throw new InvalidInputException("absorber.target", Checks.show(sizing.target()),
+        if (sizing instanceof AbsorberSizing.ByTarget t && method != DesignMethod.EXACT_PEAK) {
+            throw new InvalidInputException("absorber.target", Checks.show(t.target()),
                     "sizing for a target needs the exact-peak method");
         }
         if (constraints.any() && method != DesignMethod.EXACT_PEAK) {

@@ -5,6 +5,7 @@ import java.util.EnumMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.OptionalDouble;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.error.NotFoundException;
 import org.counterpoise.core.error.Warning;
@@ -63,7 +64,9 @@ public final class Designer {
         Excitation excitation = study.excitation();
         FrequencyBand band = excitation.band();
         List<Warning> warnings = new ArrayList<>();
-        ClosedForm chosen = choose(study, warnings);
+        // the constraint that holds an exact-peak optimum back, set where the optimum is found
+        ActiveConstraint[] active = {ActiveConstraint.NONE};
+        ClosedForm chosen = choose(study, warnings, active);
         Tuning tuning = chosen.tuning();
         double mu = tuning.massRatio();
         Absorber absorber = Absorber.of(structure, tuning);
@@ -92,16 +95,15 @@ public final class Designer {
         double[] coupled = {split[0] * omega1, split[1] * omega1};
 
         boolean noTarget = after.unbounded() || after.value() == 0.0;
-        DetuningAlternative none = new DetuningAlternative(after.value(), Double.NaN, Double.NaN);
+        DetuningAlternative none = DetuningAlternative.none(after.value());
         DetuningAlternative detuning = noTarget ? none : StructureDetuning.search(structure, excitation.kind(),
                 excitation.amplitude(), band, kind, after.value());
         DetuningAlternative massDetuning = noTarget ? none : StructureDetuning.searchMass(structure,
                 excitation.kind(), excitation.amplitude(), band, kind, after.value());
 
         addWarnings(warnings, study, mu, tuning, before, after, strokeRunUp, coupled);
-        double sag = study.hangsVertically()
-                ? Gravity.STANDARD / (absorber.naturalFrequency() * absorber.naturalFrequency())
-                : Double.NaN;
+        OptionalDouble sag = study.hangsVertically() ? OptionalDouble.of(
+                Gravity.STANDARD / (absorber.naturalFrequency() * absorber.naturalFrequency())) : OptionalDouble.empty();
         return new DesignResult(study, chosen.source(), chosen.note(), tuning, absorber, sag, before, after, motionBefore,
                 motionAfter, strokeInBand, strokeRunUp, clearance,
                 fitted.peakOver(ResponseKind.SPRING_FORCE, band), fitted.peakOver(ResponseKind.DAMPER_FORCE, band),
@@ -110,12 +112,12 @@ public final class Designer {
                         DesignResult.TOLERANCE_SEARCH),
                 ToleratedDetuning.ofAbsorber(structure, absorber, excitation, kind, DesignResult.TOLERANCE_ALLOWANCE,
                         DesignResult.TOLERANCE_SEARCH),
-                warnings);
+                warnings, active[0]);
     }
 
-    private static ClosedForm choose(DesignStudy study, List<Warning> warnings) {
+    private static ClosedForm choose(DesignStudy study, List<Warning> warnings, ActiveConstraint[] active) {
         try {
-            return chooseUnnamed(study, warnings);
+            return chooseUnnamed(study, warnings, active);
         } catch (InvalidInputException e) {
             throw e.renamed(PROBLEM_FIELDS.getOrDefault(e.field(), e.field()));
         }
@@ -127,11 +129,12 @@ public final class Designer {
             "fixed tuning ratio", "absorber.fixed_tuning_ratio", "fixed absorber damping ratio",
             "absorber.fixed_damping_ratio", "target", "absorber.target");
 
-    private static ClosedForm chooseUnnamed(DesignStudy study, List<Warning> warnings) {
+    private static ClosedForm chooseUnnamed(DesignStudy study, List<Warning> warnings,
+            ActiveConstraint[] active) {
         Excitation excitation = study.excitation();
         Structure structure = study.structure();
-        if (study.sizing().byTarget()) {
-            return lightestForTarget(study, warnings);
+        if (study.sizing() instanceof AbsorberSizing.ByTarget target) {
+            return lightestForTarget(study, target, warnings, active);
         }
         double mu = study.sizing().massRatioOn(structure);
         return switch (study.method()) {
@@ -143,7 +146,7 @@ public final class Designer {
                     UndampedAbsorber.tuning(mu, excitation.band().centre() / structure.naturalFrequency()),
                     "Frahm (1909), US patent 989958; Den Hartog (1956), Mechanical Vibrations, section 3.2",
                     "tuned to one forcing frequency");
-            case EXACT_PEAK -> exactPeak(study, peakProblem(study, mu), warnings);
+            case EXACT_PEAK -> exactPeak(study, peakProblem(study, mu), warnings, active);
             case ROBUST_PEAK -> {
                 // the nominal optimum is only a seed here (the robust design is never worse than it),
                 // so an uncertified one is still a useful start
@@ -171,11 +174,6 @@ public final class Designer {
         };
     }
 
-    /** The method note's words for an active constraint (the note is read by people, never decided on). */
-    private static final Map<ActiveConstraint, String> CONSTRAINT_NOTES = Map.of(ActiveConstraint.STROKE_LIMIT,
-            "stroke limit", ActiveConstraint.FIXED_DAMPING, "fixed damping", ActiveConstraint.FIXED_TUNING,
-            "fixed tuning", ActiveConstraint.TUNING_SEARCH_BOUND, "tuning-ratio search bound");
-
     private static final String NOT_FOUND_ADVICE = "choose another method (equal-peak or robust-peak), or change"
             + " the band or the mass ratio slightly";
 
@@ -190,17 +188,17 @@ public final class Designer {
         DesignConstraints c = study.constraints();
         double[] g = band.isSingle() ? singleSpeedBand(study.excitation().kind(), study.response(), mu,
                 s.dampingRatio(), band.low() / omega1) : new double[] {band.low() / omega1, band.high() / omega1};
-        PeakProblem p = new PeakProblem(study.excitation().kind(), study.response(), mu, s.dampingRatio(), g[0], g[1],
-                Double.NaN, Double.NaN);
-        if (!Double.isNaN(c.fixedDampingRatio())) {
-            p = p.withFixedDamping(c.fixedDampingRatio());
+        PeakProblem p = PeakProblem.free(study.excitation().kind(), study.response(), mu, s.dampingRatio(), g[0],
+                g[1]);
+        if (c.fixedDampingRatio().isPresent()) {
+            p = p.withFixedDamping(c.fixedDampingRatio().getAsDouble());
         }
-        if (!Double.isNaN(c.fixedTuningRatio())) {
-            p = p.withFixedTuning(c.fixedTuningRatio());
+        if (c.fixedTuningRatio().isPresent()) {
+            p = p.withFixedTuning(c.fixedTuningRatio().getAsDouble());
         }
-        if (!Double.isNaN(c.strokeLimit())) {
-            p = p.withStrokeLimit(c.strokeLimit() / ResponseScale.referenceLength(s, study.excitation().kind(),
-                    study.excitation().amplitude()));
+        if (c.strokeLimit().isPresent()) {
+            p = p.withStrokeLimit(c.strokeLimit().getAsDouble() / ResponseScale.referenceLength(s,
+                    study.excitation().kind(), study.excitation().amplitude()));
         }
         return p;
     }
@@ -226,11 +224,13 @@ public final class Designer {
         return choices[2];
     }
 
-    private static ClosedForm exactPeak(DesignStudy study, PeakProblem problem, List<Warning> warnings) {
-        return exactPeakResult(study, HInfinityOptimiser.optimise(problem), warnings);
+    private static ClosedForm exactPeak(DesignStudy study, PeakProblem problem, List<Warning> warnings,
+            ActiveConstraint[] active) {
+        return exactPeakResult(study, HInfinityOptimiser.optimise(problem), warnings, active);
     }
 
-    private static ClosedForm exactPeakResult(DesignStudy study, PeakOptimum o, List<Warning> warnings) {
+    private static ClosedForm exactPeakResult(DesignStudy study, PeakOptimum o, List<Warning> warnings,
+            ActiveConstraint[] active) {
         if (!o.converged()) {
             throw new NotFoundException("certified exact-peak optimum", "the search could not confirm that no other"
                     + " tuning and damping gives a lower peak", NOT_FOUND_ADVICE);
@@ -241,23 +241,21 @@ public final class Designer {
                     : used.bandLow() == 0 ? PeakBand.RUN_UP : PeakBand.OCTAVE;
             warnings.add(Warning.of(WarningKind.SINGLE_FREQUENCY_EXACT, over.name()));
         }
-        String note = "maxima equal at the optimum: " + o.activeSet()
-                + (o.activeConstraint() == ActiveConstraint.NONE ? "" : "; active constraint: "
-                        + CONSTRAINT_NOTES.get(o.activeConstraint()));
-        return new ClosedForm(o.tuning(), EXACT_SOURCE, note);
+        active[0] = o.activeConstraint();
+        return new ClosedForm(o.tuning(), EXACT_SOURCE, "maxima equal at the optimum: " + o.activeSet());
     }
 
-    private static ClosedForm lightestForTarget(DesignStudy study, List<Warning> warnings) {
+    private static ClosedForm lightestForTarget(DesignStudy study, AbsorberSizing.ByTarget sizing,
+            List<Warning> warnings, ActiveConstraint[] active) {
         Structure s = study.structure();
         Excitation e = study.excitation();
         double scale = ResponseScale.of(s, e.kind(), e.amplitude(), study.response());
-        AbsorberSizing sizing = study.sizing();
         PeakProblem problem = peakProblem(study, sizing.maxMassRatio());
         MinimumMass.Result r = MinimumMass.find(problem, sizing.target() / scale, sizing.maxMassRatio());
         if (!r.reachable()) {
             warnings.add(Warning.of(WarningKind.TARGET_NOT_MET, sizing.maxMassRatio()));
         }
-        ClosedForm exact = exactPeakResult(study, r.optimum(), warnings);
+        ClosedForm exact = exactPeakResult(study, r.optimum(), warnings, active);
         return new ClosedForm(exact.tuning(), exact.source(), (r.reachable() ? "lightest absorber that meets the"
                 + " target; " : "target not met; ") + exact.note());
     }

@@ -22,7 +22,7 @@ public record RmsFigures(double psdLevel, double before, double after, double st
      */
     static RmsFigures of(DesignResult r) {
         Excitation e = r.study().excitation();
-        double g0 = e.spectrum().psdLevel();
+        double g0 = e.spectrum().psdLevel().orElseThrow();
         return new RmsFigures(g0,
                 RandomResponse.rms(r.study().structure(), null, e.kind(), g0, r.study().response()),
                 RandomResponse.rms(r.study().structure(), r.tuning(), e.kind(), g0, r.study().response()),

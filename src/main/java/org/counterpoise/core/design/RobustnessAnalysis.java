@@ -1,6 +1,7 @@
 package org.counterpoise.core.design;
 
 import java.util.List;
+import java.util.Optional;
 import org.counterpoise.core.model.Absorber;
 import org.counterpoise.core.model.Tuning;
 import org.counterpoise.core.robust.DetuningRange;
@@ -37,9 +38,9 @@ public final class RobustnessAnalysis {
         double curveRange = Math.max(Math.max(sRange, aRange), 0.05);
         RobustDesign robust = robustDesign(m, design.tuning(), sRange, aRange);
         Absorber robustAbsorber = Absorber.of(study.structure(), robust.tuning());
-        DetuningRange forTarget = Double.isNaN(settings.target())
-                ? new DetuningRange(Double.NaN, Double.NaN, Double.NaN, curveRange, false)
-                : ToleratedDetuning.ofStructureForTarget(m, a, settings.target(), 0.5);
+        Optional<DetuningRange> forTarget = settings.target().isPresent()
+                ? Optional.of(ToleratedDetuning.ofStructureForTarget(m, a, settings.target().getAsDouble(), 0.5))
+                : Optional.empty();
         return new RobustnessResult(settings,
                 Sensitivity.structure(m, a, curveRange, CURVE_POINTS),
                 Sensitivity.absorberFrequency(m, a, curveRange, CURVE_POINTS),

@@ -1,5 +1,6 @@
 package org.counterpoise.core.design;
 
+import java.util.Optional;
 import org.counterpoise.core.model.Absorber;
 import org.counterpoise.core.robust.DetuningRange;
 import org.counterpoise.core.robust.MonteCarloResult;
@@ -21,11 +22,11 @@ import org.counterpoise.core.robust.WorstCase;
  * @param robust the robust design for the same mass
  * @param robustAbsorber the robust design's absorber
  * @param toleratedForTarget the structure detuning range that keeps the design within the target
- *     (not defined without a target, or when the nominal design misses it)
+ *     (empty without a target; not defined when the nominal design misses it)
  * @param monteCarlo the tolerance Monte Carlo of the design
  */
 public record RobustnessResult(RobustnessSettings settings, SensitivityCurve structureCurve,
         SensitivityCurve absorberCurve, SensitivityCurve dampingCurve, SensitivityCurve robustStructureCurve,
         SensitivityMap map, WorstCase.Point worstCase, RobustDesign robust, Absorber robustAbsorber,
-        DetuningRange toleratedForTarget, MonteCarloResult monteCarlo) {
+        Optional<DetuningRange> toleratedForTarget, MonteCarloResult monteCarlo) {
 }

@@ -1,6 +1,8 @@
 package org.counterpoise.core.model;
 
+import java.util.OptionalDouble;
 import org.counterpoise.core.error.Checks;
+import org.counterpoise.core.error.InvalidInputException;
 
 /**
  * What the disturbance's frequency content is. {@link Kind#HARMONIC}: a sinusoid at one forcing
@@ -11,10 +13,10 @@ import org.counterpoise.core.error.Checks;
  *
  * @param kind harmonic or white noise
  * @param psdLevel with white noise: the one-sided power spectral density G0, in N^2/Hz for a
- *     force and (m/s^2)^2/Hz for a base acceleration (per hertz, the trade's convention); NaN for
- *     a harmonic disturbance
+ *     force and (m/s^2)^2/Hz for a base acceleration (per hertz, the trade's convention); empty
+ *     for a harmonic disturbance
  */
-public record Spectrum(Kind kind, double psdLevel) {
+public record Spectrum(Kind kind, OptionalDouble psdLevel) {
 
     /** The kinds of spectrum. */
     public enum Kind {
@@ -25,13 +27,20 @@ public record Spectrum(Kind kind, double psdLevel) {
     }
 
     /** A harmonic disturbance (every project file before spectra were added means this). */
-    public static final Spectrum HARMONIC = new Spectrum(Kind.HARMONIC, Double.NaN);
+    public static final Spectrum HARMONIC = new Spectrum(Kind.HARMONIC, OptionalDouble.empty());
 
     /** Validates the record. */
     public Spectrum {
         Checks.present("disturbance.spectrum.kind", kind, "harmonic or white-noise");
+        Checks.present("disturbance.spectrum.psd", psdLevel, "a spectral density or none");
         if (kind == Kind.WHITE_NOISE) {
-            Checks.positive("disturbance.spectrum.psd", psdLevel);
+            if (psdLevel.isEmpty()) {
+                throw InvalidInputException.missing("disturbance.spectrum.psd", "white noise needs a spectral density");
+            }
+            Checks.positive("disturbance.spectrum.psd", psdLevel.getAsDouble());
+        } else if (psdLevel.isPresent()) {
+            throw new InvalidInputException("disturbance.spectrum.psd", Checks.show(psdLevel.getAsDouble()),
+                    "no spectral density for a harmonic disturbance");
         }
     }
 
@@ -40,7 +49,7 @@ public record Spectrum(Kind kind, double psdLevel) {
      * @return white noise of that level
      */
     public static Spectrum whiteNoise(double psdLevel) {
-        return new Spectrum(Kind.WHITE_NOISE, psdLevel);
+        return new Spectrum(Kind.WHITE_NOISE, OptionalDouble.of(psdLevel));
     }
 
     /** @return true for white noise */

@@ -80,6 +80,23 @@ public record PeakProblem(ExcitationKind excitation, ResponseKind response, doub
     }
 
     /**
+     * A band, both design variables free and no stroke limit (the way in from other packages: the
+     * NaN that marks a free variable stays inside {@code core.optim}).
+     * @param excitation excitation kind
+     * @param response response kind
+     * @param massRatio mu
+     * @param structureDamping zeta1
+     * @param bandLow lowest g
+     * @param bandHigh highest g (+infinity for all frequencies)
+     * @return the problem
+     */
+    public static PeakProblem free(ExcitationKind excitation, ResponseKind response, double massRatio,
+            double structureDamping, double bandLow, double bandHigh) {
+        return new PeakProblem(excitation, response, massRatio, structureDamping, bandLow, bandHigh, Double.NaN,
+                Double.NaN);
+    }
+
+    /**
      * All frequencies, both design variables free.
      * @param excitation excitation kind
      * @param response response kind

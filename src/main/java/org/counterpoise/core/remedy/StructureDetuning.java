@@ -1,5 +1,6 @@
 package org.counterpoise.core.remedy;
 
+import java.util.OptionalDouble;
 import java.util.function.DoubleFunction;
 import java.util.function.DoubleUnaryOperator;
 import org.apache.commons.math3.analysis.solvers.BrentSolver;
@@ -33,7 +34,7 @@ public final class StructureDetuning {
      * @param band forcing band
      * @param response response kind that matters
      * @param target SI level to reach (for example what the absorber achieves)
-     * @return the stiffness factors that reach it, each NaN where no change in range does
+     * @return the stiffness factors that reach it, each empty where no change in range does
      */
     public static DetuningAlternative search(Structure structure, ExcitationKind excitation, double amplitude,
             FrequencyBand band, ResponseKind response, double target) {
@@ -51,7 +52,7 @@ public final class StructureDetuning {
      * @param band forcing band
      * @param response response kind that matters
      * @param target SI level to reach
-     * @return the mass factors that reach it (raise: lighter, lower: heavier), NaN where none does
+     * @return the mass factors that reach it (raise: lighter, lower: heavier), empty where none does
      */
     public static DetuningAlternative searchMass(Structure structure, ExcitationKind excitation, double amplitude,
             FrequencyBand band, ResponseKind response, double target) {
@@ -77,24 +78,25 @@ public final class StructureDetuning {
      * Walks geometrically from the band edge towards the limit until the target is met, then
      * refines the crossing with Brent's method.
      */
-    private static double solve(DoubleUnaryOperator excess, double start, double limit) {
+    private static OptionalDouble solve(DoubleUnaryOperator excess, double start,
+            double limit) {
         if (excess.applyAsDouble(1.0) <= 0.0) {
-            return 1.0;
+            return OptionalDouble.of(1.0);
         }
         if (excess.applyAsDouble(start) <= 0.0) {
-            return start;
+            return OptionalDouble.of(start);
         }
         double ratio = limit > start ? 1.5 : 1.0 / 1.5;
         double previous = start;
         while (limit > start ? previous < limit : previous > limit) {
             double next = limit > start ? Math.min(previous * ratio, limit) : Math.max(previous * ratio, limit);
             if (excess.applyAsDouble(next) <= 0.0) {
-                return new BrentSolver(1e-12, 1e-10).solve(200, excess::applyAsDouble,
-                        Math.min(previous, next), Math.max(previous, next));
+                return OptionalDouble.of(new BrentSolver(1e-12, 1e-10).solve(200, excess::applyAsDouble,
+                        Math.min(previous, next), Math.max(previous, next)));
             }
             previous = next;
         }
-        return Double.NaN;
+        return OptionalDouble.empty();
     }
 
     private static double sq(double v) {

@@ -1,6 +1,7 @@
 package org.counterpoise.core.robust;
 
 import java.util.Arrays;
+import java.util.OptionalDouble;
 import java.util.stream.IntStream;
 import org.apache.commons.math3.random.RandomGenerator;
 import org.apache.commons.math3.random.Well19937c;
@@ -31,11 +32,11 @@ public final class MonteCarlo {
      * @param tolerances the spreads
      * @param samples number of samples (1 to 10 000 000)
      * @param seed random seed
-     * @param target the target peak, SI, or NaN
+     * @param target the target peak, SI, when one is set
      * @return the distribution of the peak
      */
     public static MonteCarloResult run(Mistuning m, Absorber absorber, ToleranceSet tolerances, int samples,
-            long seed, double target) {
+            long seed, OptionalDouble target) {
         Checks.inRange("samples", samples, 1, 10_000_000);
         Structure s0 = m.structure();
         RandomGenerator random = new Well19937c(seed);
@@ -64,7 +65,7 @@ public final class MonteCarlo {
         for (int i = 0; i < samples; i++) {
             // an unbounded sample makes the mean unbounded (inf - inf would give NaN)
             mean = Double.isInfinite(mean) ? mean : Double.isInfinite(peaks[i]) ? peaks[i] : mean + (peaks[i] - mean) / (i + 1);
-            if (peaks[i] > target) {
+            if (target.isPresent() && peaks[i] > target.getAsDouble()) {
                 above++;
             }
         }
@@ -84,7 +85,8 @@ public final class MonteCarlo {
         }
         return new MonteCarloResult(samples, seed, m.peak(absorber, 1, 1), mean, rank(sorted, 0.50),
                 rank(sorted, 0.90), rank(sorted, 0.95), rank(sorted, 0.99), min, max, target,
-                Double.isNaN(target) ? Double.NaN : (double) above / samples, edges, counts);
+                target.isPresent() ? OptionalDouble.of((double) above / samples) : OptionalDouble.empty(), edges,
+                counts);
     }
 
     /** Nearest-rank percentile of sorted data: the value at rank ceil(p N). */

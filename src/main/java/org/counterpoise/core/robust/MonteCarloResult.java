@@ -1,5 +1,7 @@
 package org.counterpoise.core.robust;
 
+import java.util.OptionalDouble;
+
 /**
  * The distribution of the peak response over the band among sampled builds.
  *
@@ -13,13 +15,13 @@ package org.counterpoise.core.robust;
  * @param p99 99th percentile, SI
  * @param min smallest sampled peak, SI
  * @param max largest sampled peak, SI
- * @param target the target, SI, or NaN when none
- * @param probabilityExceeding fraction of samples above the target, or NaN when none
+ * @param target the target, SI, when one is set
+ * @param probabilityExceeding fraction of samples above the target, when a target is set
  * @param binEdges histogram bin edges (bins + 1), SI
  * @param counts samples per bin
  */
 public record MonteCarloResult(int samples, long seed, double nominal, double mean, double p50, double p90,
-        double p95, double p99, double min, double max, double target, double probabilityExceeding,
+        double p95, double p99, double min, double max, OptionalDouble target, OptionalDouble probabilityExceeding,
         double[] binEdges, int[] counts) {
 
     /** Defensive copies. */

@@ -1,5 +1,6 @@
 package org.counterpoise.core.robust;
 
+import java.util.OptionalDouble;
 import java.util.function.DoubleUnaryOperator;
 import org.apache.commons.math3.analysis.solvers.BrentSolver;
 import org.counterpoise.core.model.Absorber;
@@ -73,7 +74,7 @@ public final class ToleratedDetuning {
         DoubleUnaryOperator peak = factor -> m.peak(absorber, factor, 1.0);
         double nominal = peak.applyAsDouble(1.0);
         if (!(nominal <= target) || !(nominal > 0)) {
-            return new DetuningRange(Double.NaN, Double.NaN, target / nominal - 1, searchLimit, false);
+            return DetuningRange.undefined(target / nominal - 1, searchLimit);
         }
         return within(peak, target, target / nominal - 1, searchLimit);
     }
@@ -93,7 +94,7 @@ public final class ToleratedDetuning {
     private static DetuningRange search(DoubleUnaryOperator peak, double allowance, double searchLimit, double bare) {
         double nominal = peak.applyAsDouble(1.0);
         if (!(nominal >= 0) || Double.isInfinite(nominal)) {
-            return new DetuningRange(Double.NaN, Double.NaN, allowance, searchLimit, false);
+            return DetuningRange.undefined(allowance, searchLimit);
         }
         if (nominal <= CANCELLED * bare && Double.isFinite(bare)) {
             // At its one speed the design cancels the response: the criterion is that response,
@@ -102,7 +103,7 @@ public final class ToleratedDetuning {
             return new DetuningRange(r.low(), r.high(), allowance, searchLimit, true, true);
         }
         if (!(nominal > 0)) {
-            return new DetuningRange(Double.NaN, Double.NaN, allowance, searchLimit, false);
+            return DetuningRange.undefined(allowance, searchLimit);
         }
         return within(peak, nominal * (1 + allowance), allowance, searchLimit);
     }
@@ -116,17 +117,17 @@ public final class ToleratedDetuning {
                 searchLimit, true);
     }
 
-    private static double crossing(DoubleUnaryOperator excess, int direction, double searchLimit) {
+    private static OptionalDouble crossing(DoubleUnaryOperator excess, int direction, double searchLimit) {
         double previous = 1.0;
         int steps = (int) Math.ceil(searchLimit / STEP);
         for (int i = 1; i <= steps; i++) {
             double factor = 1.0 + direction * Math.min(i * STEP, searchLimit);
             if (excess.applyAsDouble(factor) > 0) {
-                return new BrentSolver(1e-12, 1e-9).solve(200, excess::applyAsDouble,
-                        Math.min(previous, factor), Math.max(previous, factor));
+                return OptionalDouble.of(new BrentSolver(1e-12, 1e-9).solve(200, excess::applyAsDouble,
+                        Math.min(previous, factor), Math.max(previous, factor)));
             }
             previous = factor;
         }
-        return Double.NaN;
+        return OptionalDouble.empty();
     }
 }

@@ -93,7 +93,7 @@ public final class MonteCarloCharts {
         x[x.length - 1] = high;
         var s = chart.getStyler();
         double pad = 0.04 * (high - low);
-        double target = unit.fromSi(mc.target());
+        double target = unit.fromSi(mc.target().orElse(0.0)); // 0: no target line
         double xLow = low - pad;
         double xHigh = high + pad;
         if (Double.isFinite(target) && target > 0 && !PlotRange.unbounded(target, high)) {

@@ -63,7 +63,7 @@ public final class RobustnessCharts {
         double[][] x = {percent(r.structureCurve()), percent(r.robustStructureCurve())};
         double[][] y = {ChartStyle.inUnit(r.structureCurve().peaks(), unit), ChartStyle.inUnit(r.robustStructureCurve().peaks(), unit)};
         double typical = PlotRange.typical(y);
-        double target = unit.fromSi(r.settings().target());
+        double target = unit.fromSi(r.settings().target().orElse(0.0)); // 0: no target line
         boolean hasTarget = Double.isFinite(target) && target > 0;
         double top = Math.max(PlotRange.top(typical, y), hasTarget ? target : 0);
         if (!(top > 0)) {
@@ -182,7 +182,7 @@ public final class RobustnessCharts {
             shown[i] = ChartStyle.inUnit(z[i], unit);
         }
         double typical = PlotRange.typical(shown);
-        double target = unit.fromSi(r.settings().target());
+        double target = unit.fromSi(r.settings().target().orElse(0.0)); // 0: no target line
         boolean hasTarget = Double.isFinite(target) && target > 0;
         double max = PlotRange.top(typical, shown);
         double top = hasTarget ? target : max;

@@ -6,6 +6,7 @@ import com.google.gson.JsonElement;
 import com.google.gson.JsonNull;
 import com.google.gson.JsonObject;
 import com.google.gson.Strictness;
+import java.util.OptionalDouble;
 
 /**
  * Numbers into JSON the one way every export writes them: JSON has no NaN or Infinity, so an
@@ -31,6 +32,19 @@ public final class JsonNumbers {
             if (Double.isInfinite(v)) {
                 o.addProperty(key + "_unbounded", true);
             }
+        }
+    }
+
+    /**
+     * @param o the object
+     * @param key the key
+     * @param v the value when there is one; empty (not given, not applicable) is written as null
+     */
+    public static void put(JsonObject o, String key, OptionalDouble v) {
+        if (v.isPresent()) {
+            put(o, key, v.getAsDouble());
+        } else {
+            o.add(key, JsonNull.INSTANCE);
         }
     }
 

@@ -2,6 +2,7 @@ package org.counterpoise.io.export;
 
 import com.google.gson.JsonArray;
 import com.google.gson.JsonObject;
+import java.util.OptionalDouble;
 import org.counterpoise.core.design.Cautions;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.error.Warning;
@@ -117,6 +118,10 @@ public final class ResultJson {
     }
 
     private static void number(JsonObject o, String key, double v) {
+        JsonNumbers.put(o, key, v);
+    }
+
+    private static void number(JsonObject o, String key, OptionalDouble v) {
         JsonNumbers.put(o, key, v);
     }
 

@@ -3,8 +3,10 @@ package org.counterpoise.io.export;
 import com.google.gson.JsonArray;
 import com.google.gson.JsonObject;
 import java.util.Locale;
+import java.util.OptionalDouble;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.RobustnessResult;
+import org.counterpoise.core.robust.DetuningRange;
 import org.counterpoise.core.robust.MonteCarloResult;
 import org.counterpoise.core.robust.SensitivityCurve;
 
@@ -26,7 +28,7 @@ public final class RobustnessJson {
         o.addProperty("response_unit", design.study().response().dimension().siSymbol());
         number(o, "structure_detuning_range", r.settings().structureRange());
         number(o, "absorber_detuning_range", r.settings().absorberRange());
-        number(o, "target", r.settings().target());
+        JsonNumbers.put(o, "target", r.settings().target());
         number(o, "nominal_peak", design.responseAfter().value());
         number(o, "worst_case_peak", r.worstCase().peak());
         number(o, "worst_case_structure_factor", r.worstCase().structureFactor());
@@ -37,8 +39,10 @@ public final class RobustnessJson {
         number(o, "robust_absorber_damping_Ns_per_m", r.robustAbsorber().damping());
         number(o, "robust_worst_case_peak", r.robust().worstCase().peak());
         number(o, "robust_nominal_peak", r.robust().nominalPeak());
-        number(o, "target_structure_factor_low", r.toleratedForTarget().low());
-        number(o, "target_structure_factor_high", r.toleratedForTarget().high());
+        JsonNumbers.put(o, "target_structure_factor_low",
+                r.toleratedForTarget().map(DetuningRange::low).orElse(OptionalDouble.empty()));
+        JsonNumbers.put(o, "target_structure_factor_high",
+                r.toleratedForTarget().map(DetuningRange::high).orElse(OptionalDouble.empty()));
         o.add("structure_sensitivity", curve(r.structureCurve()));
         o.add("robust_structure_sensitivity", curve(r.robustStructureCurve()));
         o.add("absorber_sensitivity", curve(r.absorberCurve()));
@@ -54,7 +58,7 @@ public final class RobustnessJson {
         number(m, "p99", mc.p99());
         number(m, "min", mc.min());
         number(m, "max", mc.max());
-        number(m, "probability_exceeding_target", mc.probabilityExceeding());
+        JsonNumbers.put(m, "probability_exceeding_target", mc.probabilityExceeding());
         JsonNumbers.putAll(m, "histogram_edges", mc.binEdges());
         JsonArray counts = new JsonArray();
         for (int c : mc.counts()) {

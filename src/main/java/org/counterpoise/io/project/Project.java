@@ -163,15 +163,15 @@ public record Project(String name, String notes, StructureInput structure, Distu
         AbsorberInput a = absorber;
         Structure s = toStructure();
         AbsorberSizing sizing;
-        int sizes = (Double.isNaN(a.massRatio()) ? 0 : 1) + (a.mass() == null ? 0 : 1) + (a.target() == null ? 0 : 1);
+        int sizes = (a.massRatio().isPresent() ? 1 : 0) + (a.mass() == null ? 0 : 1) + (a.target() == null ? 0 : 1);
         if (sizes > 1) {
             throw new InvalidInputException("absorber", sizes + " sizes given",
                     "give one of absorber.mass_ratio, absorber.mass and absorber.target");
         } else if (a.target() != null) {
             sizing = AbsorberSizing.ofTarget(a.target().positiveSi("absorber.target.value"),
-                    Double.isNaN(a.maxMassRatio()) ? AbsorberSizing.DEFAULT_MAX_MASS_RATIO : a.maxMassRatio());
-        } else if (!Double.isNaN(a.massRatio())) {
-            sizing = AbsorberSizing.ofMassRatio(a.massRatio());
+                    a.maxMassRatio().orElse(AbsorberSizing.DEFAULT_MAX_MASS_RATIO));
+        } else if (a.massRatio().isPresent()) {
+            sizing = AbsorberSizing.ofMassRatio(a.massRatio().getAsDouble());
         } else if (a.mass() != null) {
             sizing = AbsorberSizing.ofMass(a.mass().positiveSi("absorber.mass.value"));
         } else {
@@ -179,7 +179,8 @@ public record Project(String name, String notes, StructureInput structure, Distu
                     "give absorber.mass_ratio, absorber.mass or absorber.target");
         }
         DesignConstraints constraints = new DesignConstraints(
-                a.strokeLimit() == null ? Double.NaN : a.strokeLimit().positiveSi("absorber.stroke_limit.value"),
+                a.strokeLimit() == null ? OptionalDouble.empty()
+                        : OptionalDouble.of(a.strokeLimit().positiveSi("absorber.stroke_limit.value")),
                 a.fixedDampingRatio(), a.fixedTuningRatio());
         return new DesignStudy(name, s, toExcitation(), a.response(), sizing, a.method(), a.hangsVertically(),
                 a.strokeMargin(), constraints, toRobustness());
@@ -196,7 +197,8 @@ public record Project(String name, String notes, StructureInput structure, Distu
                 : Checks.inRange("robustness.structure_detuning", r.structureDetuningPercent(), 0, 50) / 100;
         double absorberRange = Double.isNaN(r.absorberDetuningPercent()) ? d.absorberRange()
                 : Checks.inRange("robustness.absorber_detuning", r.absorberDetuningPercent(), 0, 50) / 100;
-        double target = r.target() == null ? Double.NaN : r.target().positiveSi("robustness.target.value");
+        OptionalDouble target = r.target() == null ? OptionalDouble.empty()
+                : OptionalDouble.of(r.target().positiveSi("robustness.target.value"));
         ToleranceSet set = new ToleranceSet(tolerance(ToleranceKey.STRUCTURE_MASS, r),
                 tolerance(ToleranceKey.STRUCTURE_STIFFNESS, r), tolerance(ToleranceKey.ABSORBER_MASS, r),
                 tolerance(ToleranceKey.ABSORBER_STIFFNESS, r), tolerance(ToleranceKey.ABSORBER_DAMPING, r));
@@ -210,13 +212,8 @@ public record Project(String name, String notes, StructureInput structure, Distu
         if (t == null) {
             return Tolerance.NONE;
         }
-        Tolerance.Distribution kind = switch (t.distribution()) {
-            case "uniform" -> Tolerance.Distribution.UNIFORM;
-            case "normal" -> Tolerance.Distribution.NORMAL;
-            case "none" -> Tolerance.Distribution.NONE;
-            default -> throw new InvalidInputException(field + ".distribution", "\"" + t.distribution() + "\"",
-                    "one of uniform, normal, none");
-        };
+        Tolerance.Distribution kind = t.kind().orElseThrow(() -> new InvalidInputException(
+                field + ".distribution", "\"" + t.distribution() + "\"", RobustnessInput.ToleranceInput.tokens()));
         if (!Double.isNaN(t.percent()) == (t.absolute() != null)) {
             throw new InvalidInputException(field, "percent and absolute", "give either percent or absolute");
         }

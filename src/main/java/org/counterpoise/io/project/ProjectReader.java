@@ -5,6 +5,7 @@ import java.io.IOException;
 import java.io.Reader;
 import java.nio.file.Path;
 import java.util.List;
+import java.util.OptionalDouble;
 import org.counterpoise.core.design.DesignMethod;
 import org.counterpoise.core.design.DesignStudy;
 import org.counterpoise.core.error.InvalidInputException;
@@ -223,9 +224,15 @@ public final class ProjectReader {
         return out;
     }
 
+    /** A number the file may leave out: empty when absent. */
+    private static OptionalDouble optionalNumber(JsonFields o, String key) {
+        return o.has(key) ? OptionalDouble.of(o.number(key)) : OptionalDouble.empty();
+    }
+
     private static AbsorberInput absorber(JsonFields a) {
-        double ratio = a.has("mass_ratio")
-                ? PhysicalRange.MASS_RATIO.check(a.pathOf("mass_ratio"), a.number("mass_ratio"), null) : Double.NaN;
+        OptionalDouble ratio = a.has("mass_ratio") ? OptionalDouble.of(
+                PhysicalRange.MASS_RATIO.check(a.pathOf("mass_ratio"), a.number("mass_ratio"), null))
+                : OptionalDouble.empty();
         QuantityInput mass = a.optionalQuantity("mass", Dimension.MASS);
         String methodText = a.text("method", DesignMethod.EQUAL_PEAK.id());
         DesignMethod method = DesignMethod.byId(methodText).orElseThrow(() -> new InvalidInputException(
@@ -238,10 +245,10 @@ public final class ProjectReader {
         boolean hangs = a.bool("hangs_vertically", false);
         double margin = a.number("stroke_margin", DesignStudy.DEFAULT_STROKE_MARGIN);
         QuantityInput target = a.optionalQuantity("target", response.dimension());
-        double maxMassRatio = a.number("max_mass_ratio", Double.NaN);
+        OptionalDouble maxMassRatio = optionalNumber(a, "max_mass_ratio");
         QuantityInput strokeLimit = a.optionalQuantity("stroke_limit", Dimension.LENGTH);
-        double fixedDamping = a.number("fixed_damping_ratio", Double.NaN);
-        double fixedTuning = a.number("fixed_tuning_ratio", Double.NaN);
+        OptionalDouble fixedDamping = optionalNumber(a, "fixed_damping_ratio");
+        OptionalDouble fixedTuning = optionalNumber(a, "fixed_tuning_ratio");
         a.finish();
         return new AbsorberInput(ratio, mass, method, response, hangs, margin, target, maxMassRatio, strokeLimit,
                 fixedDamping, fixedTuning);

@@ -5,6 +5,7 @@ import com.google.gson.JsonObject;
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
+import java.util.OptionalDouble;
 import org.counterpoise.io.AtomicFiles;
 
 /** Writes a project file in the current format, safely: a temporary file, then an atomic rename. */
@@ -110,9 +111,7 @@ public final class ProjectWriter {
 
     private static JsonObject absorber(AbsorberInput a) {
         JsonObject o = new JsonObject();
-        if (!Double.isNaN(a.massRatio())) {
-            o.addProperty("mass_ratio", a.massRatio());
-        }
+        putNumber(o, "mass_ratio", a.massRatio());
         put(o, "mass", a.mass());
         o.addProperty("method", a.method().id());
         o.addProperty("response", Ids.of(a.response()));
@@ -162,6 +161,10 @@ public final class ProjectWriter {
         if (!Double.isNaN(v)) {
             o.addProperty(key, v);
         }
+    }
+
+    private static void putNumber(JsonObject o, String key, OptionalDouble v) {
+        v.ifPresent(x -> o.addProperty(key, x));
     }
 
     private static void put(JsonObject o, String key, QuantityInput q) {

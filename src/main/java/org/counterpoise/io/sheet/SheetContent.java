@@ -2,6 +2,7 @@ package org.counterpoise.io.sheet;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.OptionalDouble;
 import org.counterpoise.core.design.Cautions;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.DesignStudy;
@@ -18,6 +19,7 @@ import org.counterpoise.core.units.Unit;
 import org.counterpoise.io.project.ProjectIdentity;
 import org.counterpoise.io.text.DesignReport;
 import org.counterpoise.io.text.DisplayUnits;
+import org.counterpoise.io.text.MethodNoteText;
 import org.counterpoise.io.text.QuantityFormat;
 import org.counterpoise.io.text.WarningText;
 
@@ -150,7 +152,7 @@ public record SheetContent(String projectName, String notes, String date, String
         List<Row> method = new ArrayList<>();
         method.add(text("Method", study.method().id() + ": " + study.method().description()));
         method.add(text("Source", r.methodSource()));
-        method.add(text("Note", r.methodNote()));
+        method.add(text("Note", MethodNoteText.of(r)));
         method.add(number("Mass ratio \u03bc", r.tuning().massRatio(), 4));
         method.add(number("Tuning ratio f", r.tuning().tuningRatio(), 4));
         method.add(number("Absorber damping ratio \u03b6a", r.tuning().dampingRatio(), 4));
@@ -163,8 +165,8 @@ public record SheetContent(String projectName, String notes, String date, String
                 DesignReport.tolerance(r.absorberTolerance(), 2)));
         build.add(quantity("Damping coefficient c2", r.absorber().damping(), Dimension.DAMPING_COEFFICIENT));
         build.add(quantity("Absorber natural frequency", r.absorber().naturalFrequency(), Dimension.FREQUENCY));
-        if (!Double.isNaN(r.staticSag())) {
-            build.add(quantity("Static sag of the spring", r.staticSag(), Dimension.LENGTH));
+        if (r.staticSag().isPresent()) {
+            build.add(quantity("Static sag of the spring", r.staticSag().getAsDouble(), Dimension.LENGTH));
         }
         build.add(quantity("Peak stroke in band", r.strokeInBand().value(), Dimension.LENGTH));
         build.add(quantity("Peak stroke during run-up", r.strokeRunUp().value(), Dimension.LENGTH));
@@ -225,9 +227,9 @@ public record SheetContent(String projectName, String notes, String date, String
                     + QuantityFormat.number(ru.fromSi(monteCarlo.p90()), 4), ru.symbol()));
             mc.add(new Row("P95 / P99", QuantityFormat.number(ru.fromSi(monteCarlo.p95()), 4) + "  /  "
                     + QuantityFormat.number(ru.fromSi(monteCarlo.p99()), 4), ru.symbol()));
-            if (!Double.isNaN(monteCarlo.probabilityExceeding())) {
+            if (monteCarlo.probabilityExceeding().isPresent()) {
                 mc.add(new Row("Probability above the target", QuantityFormat.number(
-                        100 * monteCarlo.probabilityExceeding(), 3), "%"));
+                        100 * monteCarlo.probabilityExceeding().getAsDouble(), 3), "%"));
             }
             sections.add(new Section("Tolerance Monte Carlo of the peak in band", mc));
         }
@@ -237,13 +239,14 @@ public record SheetContent(String projectName, String notes, String date, String
                 Cautions.STANDARD);
     }
 
-    private static String alternative(double factor, double target, String what) {
+    private static String alternative(OptionalDouble found, double target, String what) {
         if (target == 0.0) {
             return "not possible (the absorber holds the structure still)";
         }
-        if (Double.isNaN(factor)) {
+        if (found.isEmpty()) {
             return "not reachable by " + what + " alone";
         }
+        double factor = found.getAsDouble();
         double change = 100 * (factor - 1);
         return factor == 1.0 ? "no change needed" : (change > 0 ? "+" : "") + QuantityFormat.number(change, 3)
                 + " % " + what;

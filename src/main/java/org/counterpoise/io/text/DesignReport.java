@@ -1,6 +1,7 @@
 package org.counterpoise.io.text;
 
 import java.util.Locale;
+import java.util.OptionalDouble;
 import org.counterpoise.core.design.Cautions;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.DesignStudy;
@@ -76,7 +77,7 @@ public final class DesignReport {
         section(out, "Design");
         row(out, "method", study.method().id() + " (" + study.method().description() + ")");
         row(out, "source", r.methodSource());
-        row(out, "note", r.methodNote());
+        row(out, "note", MethodNoteText.of(r));
         row(out, "response reduced", study.response().label());
         row(out, "mass ratio mu", ratio(r.tuning().massRatio()));
         row(out, "tuning ratio f", ratio(r.tuning().tuningRatio()));
@@ -87,8 +88,8 @@ public final class DesignReport {
         row(out, "spring rate", DisplayUnits.format(r.absorber().stiffness(), Dimension.STIFFNESS));
         row(out, "damping coefficient", DisplayUnits.format(r.absorber().damping(), Dimension.DAMPING_COEFFICIENT));
         row(out, "natural frequency", frequency(r.absorber().naturalFrequency()));
-        if (!Double.isNaN(r.staticSag())) {
-            row(out, "static sag of the spring", DisplayUnits.format(r.staticSag(), Dimension.LENGTH));
+        if (r.staticSag().isPresent()) {
+            row(out, "static sag of the spring", DisplayUnits.format(r.staticSag().getAsDouble(), Dimension.LENGTH));
         }
 
         section(out, band.isSingle() ? "Structure response at the forcing frequency"
@@ -164,17 +165,18 @@ public final class DesignReport {
         if (!range.defined()) {
             return "not defined (the nominal response is zero or unbounded)";
         }
-        return side(range.low(), power, range.searchLimit(), -1) + " to " + side(range.high(), power, range.searchLimit(), 1)
+        return side(range.low(), power, range.searchLimit(), -1) + " to "
+                + side(range.high(), power, range.searchLimit(), 1)
                 + (range.ofBareResponse() ? " (response kept below " + QuantityFormat.number(100 * range.allowance(), 2)
                         + " % of the bare structure's: the design cancels it at its one speed)" : "");
     }
 
-    private static String side(double factor, int power, double limit, int sign) {
-        if (Double.isNaN(factor)) {
+    private static String side(OptionalDouble found, int power, double limit, int sign) {
+        if (found.isEmpty()) {
             double bound = Math.pow(1 + sign * limit, power) - 1;
             return "beyond " + (bound > 0 ? "+" : "") + QuantityFormat.number(100 * bound, 2) + " %";
         }
-        double change = 100 * (Math.pow(factor, power) - 1);
+        double change = 100 * (Math.pow(found.getAsDouble(), power) - 1);
         return (change > 0 ? "+" : "") + QuantityFormat.number(change, 2) + " %";
     }
 
@@ -198,10 +200,11 @@ public final class DesignReport {
      * @param factor new over old stiffness or mass
      * @param power +1 for stiffness (frequency goes as its square root), -1 for mass
      */
-    private static String change(double factor, Structure s, int power, String what) {
-        if (Double.isNaN(factor)) {
+    private static String change(OptionalDouble found, Structure s, int power, String what) {
+        if (found.isEmpty()) {
             return "cannot reach the target alone";
         }
+        double factor = found.getAsDouble();
         if (factor == 1.0) {
             return "no change needed";
         }

@@ -4,6 +4,7 @@ import java.util.Locale;
 import org.counterpoise.core.design.Cautions;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.RobustnessResult;
+import org.counterpoise.core.robust.DetuningRange;
 import org.counterpoise.core.robust.MonteCarloResult;
 import org.counterpoise.core.robust.SensitivityCurve;
 import org.counterpoise.core.robust.WorstCase;
@@ -40,10 +41,11 @@ public final class RobustnessReport {
                 + DisplayUnits.format(r.robustAbsorber().damping(), Dimension.DAMPING_COEFFICIENT));
         line(out, "its worst case / nominal", DisplayUnits.format(r.robust().worstCase().peak(), d) + " / "
                 + DisplayUnits.format(r.robust().nominalPeak(), d));
-        if (!Double.isNaN(r.settings().target())) {
-            line(out, "target", DisplayUnits.format(r.settings().target(), d));
-            line(out, "structure detuning within target", r.toleratedForTarget().defined()
-                    ? DesignReport.tolerance(r.toleratedForTarget(), 1) : "none: the nominal design misses the target");
+        if (r.settings().target().isPresent() && r.toleratedForTarget().isPresent()) {
+            DetuningRange forTarget = r.toleratedForTarget().get();
+            line(out, "target", DisplayUnits.format(r.settings().target().getAsDouble(), d));
+            line(out, "structure detuning within target", forTarget.defined()
+                    ? DesignReport.tolerance(forTarget, 1) : "none: the nominal design misses the target");
         }
         out.append("\nSensitivity: worst response in band against structure frequency\n");
         out.append(String.format(Locale.ROOT, "  %-12s %-18s %s%n", "structure", "this design", "robust design"));
@@ -61,8 +63,9 @@ public final class RobustnessReport {
         line(out, "P50 / P90 / P95 / P99", DisplayUnits.format(mc.p50(), d) + " / " + DisplayUnits.format(mc.p90(), d)
                 + " / " + DisplayUnits.format(mc.p95(), d) + " / " + DisplayUnits.format(mc.p99(), d));
         line(out, "range", DisplayUnits.format(mc.min(), d) + " to " + DisplayUnits.format(mc.max(), d));
-        if (!Double.isNaN(mc.probabilityExceeding())) {
-            line(out, "probability above target", QuantityFormat.number(100 * mc.probabilityExceeding(), 3) + " %");
+        if (mc.probabilityExceeding().isPresent()) {
+            line(out, "probability above target",
+                    QuantityFormat.number(100 * mc.probabilityExceeding().getAsDouble(), 3) + " %");
         }
         out.append("\nCautions\n");
         for (String c : Cautions.STANDARD) {

@@ -190,7 +190,7 @@ public final class OptimumCommand implements Callable<Integer> {
     }
 
     private PeakProblem problem(ExcitationKind e, ResponseKind r, double mu, double z, double[] g) {
-        PeakProblem p = new PeakProblem(e, r, mu, z, g[0], g[1], Double.NaN, Double.NaN);
+        PeakProblem p = PeakProblem.free(e, r, mu, z, g[0], g[1]);
         if (fixedDamping != null) {
             p = p.withFixedDamping(fixedDamping);
         }

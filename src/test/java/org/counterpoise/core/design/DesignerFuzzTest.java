@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertNotNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.junit.jupiter.api.Assertions.fail;
 
+import java.util.OptionalDouble;
 import java.util.Random;
 import java.util.Set;
 import org.counterpoise.core.error.InvalidInputException;
@@ -49,7 +50,7 @@ class DesignerFuzzTest {
                 DesignResult r = Designer.design(study);
                 designed++;
                 if (designed % 8 == 0) {
-                    RobustnessResult rr = RobustnessAnalysis.run(r, new RobustnessSettings(0.1, 0.02, Double.NaN,
+                    RobustnessResult rr = RobustnessAnalysis.run(r, new RobustnessSettings(0.1, 0.02, OptionalDouble.empty(),
                             new org.counterpoise.core.robust.ToleranceSet(
                                     org.counterpoise.core.robust.Tolerance.uniform(0.05),
                                     org.counterpoise.core.robust.Tolerance.normal(0.05),

@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.util.OptionalDouble;
 import java.util.Set;
 import org.counterpoise.core.error.CoreException;
 import org.counterpoise.core.error.InvalidInputException;
@@ -41,7 +42,7 @@ class ExtremeScalesTest {
     }
 
     private static RobustnessSettings settings() {
-        return new RobustnessSettings(0.1, 0.02, Double.NaN, new ToleranceSet(
+        return new RobustnessSettings(0.1, 0.02, OptionalDouble.empty(), new ToleranceSet(
                 Tolerance.normal(0.05), Tolerance.NONE, Tolerance.NONE, Tolerance.uniform(0.05), Tolerance.NONE),
                 200, 1L);
     }

@@ -11,6 +11,7 @@ import java.awt.image.BufferedImage;
 import java.io.ByteArrayOutputStream;
 import java.nio.file.Path;
 import java.util.List;
+import java.util.OptionalDouble;
 import java.util.Random;
 import org.counterpoise.core.design.DesignCurves;
 import org.counterpoise.core.design.DesignResult;
@@ -187,7 +188,8 @@ class ChartInputTest {
             }
             SensitivityCurve curve = new SensitivityCurve(factors, peaks);
             MonteCarloResult mc = new MonteCarloResult(1 + random.nextInt(5000), 1, 1e-4, 1e-4, 1e-4, 1e-4, 1e-4, 1e-4,
-                    edges[0], edges[n], trial % 2 == 0 ? Double.NaN : 1.5e-4, 0.1, edges, counts);
+                    edges[0], edges[n], trial % 2 == 0 ? OptionalDouble.empty() : OptionalDouble.of(1.5e-4),
+                    OptionalDouble.of(0.1), edges, counts);
             RobustnessResult r = new RobustnessResult(base.settings(), curve, curve, curve, curve,
                     new SensitivityMap(factors, factors, cells), base.worstCase(), base.robust(), base.robustAbsorber(),
                     base.toleratedForTarget(), mc);
@@ -227,7 +229,7 @@ class ChartInputTest {
         int[] counts = new int[40];
         counts[0] = 500;
         MonteCarloResult mc = new MonteCarloResult(500, 1, 2e-4, 2e-4, 2e-4, 2e-4, 2e-4, 2e-4, 2e-4, 2e-4,
-                Double.NaN, Double.NaN, edges, counts);
+                OptionalDouble.empty(), OptionalDouble.empty(), edges, counts);
         XYChart chart = MonteCarloCharts.histogram(FAN, mc, 400, 300);
         assertDrawable(chart);
         assertNull(chart.getSeriesMap().get("builds"));

@@ -12,6 +12,7 @@ import java.awt.Container;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
+import java.util.OptionalDouble;
 import java.util.concurrent.Callable;
 import java.util.function.BooleanSupplier;
 import javax.swing.JComboBox;
@@ -85,7 +86,7 @@ class DisturbanceSpectrumGuiTest {
                 new QuantityInput(860, Unit.REV_PER_MINUTE), Double.NaN, Double.NaN, null, 1,
                 new QuantityInput(12, Unit.RPM_PER_SECOND),
                 SpectrumInput.whiteNoise(2.5, SpectralDensityUnit.KILONEWTON_SQUARED_PER_HERTZ));
-        AbsorberInput a = new AbsorberInput(0.05, null, DesignMethod.MINIMUM_VARIANCE, ResponseKind.DISPLACEMENT,
+        AbsorberInput a = new AbsorberInput(OptionalDouble.of(0.05), null, DesignMethod.MINIMUM_VARIANCE, ResponseKind.DISPLACEMENT,
                 false, 1.5);
         return new Project(base.name(), base.notes(), base.structure(), d, a, base.robustness(), base.identity());
     }
@@ -116,7 +117,7 @@ class DisturbanceSpectrumGuiTest {
         // A harmonic file with a run-up rate stays harmonic and keeps its rate.
         Project harmonic = new Project(written.name(), written.notes(), written.structure(),
                 written.disturbance().withSpectrum(null).withRunUpRate(new QuantityInput(0.5, Unit.HERTZ_PER_SECOND)),
-                new AbsorberInput(0.05, null, DesignMethod.EQUAL_PEAK, ResponseKind.DISPLACEMENT, false, 1.5),
+                new AbsorberInput(OptionalDouble.of(0.05), null, DesignMethod.EQUAL_PEAK, ResponseKind.DISPLACEMENT, false, 1.5),
                 written.robustness(), written.identity());
         Path harmonicFile = dir.resolve("harmonic.json");
         ProjectWriter.writeAtomically(harmonicFile, ProjectWriter.toJson(harmonic));

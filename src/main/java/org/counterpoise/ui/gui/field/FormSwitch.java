@@ -2,6 +2,7 @@ package org.counterpoise.ui.gui.field;
 
 import java.util.Arrays;
 import java.util.List;
+import java.util.function.Function;
 import java.util.function.IntFunction;
 import javax.swing.JComboBox;
 import org.counterpoise.core.units.Unit;
@@ -26,7 +27,39 @@ public final class FormSwitch {
         double convert(int from, int to, double siValue);
     }
 
+    /**
+     * Converts a value between two forms named by the list's items.
+     * @param <T> the item type (an enum of forms)
+     */
+    @FunctionalInterface
+    public interface ItemConversion<T> {
+        /**
+         * @param from the form the value is in
+         * @param to the form wanted
+         * @param siValue the value in SI units of the old form
+         * @return the value in SI units of the new form, or NaN when it cannot be converted
+         */
+        double convert(T from, T to, double siValue);
+    }
+
     private FormSwitch() {
+    }
+
+    /**
+     * As {@link #attach(JComboBox, QuantityField, IntFunction, Conversion, IntFunction)}, for a list
+     * whose items are the forms themselves (an enum), so no caller decides by position.
+     * @param <T> the item type
+     * @param forms the list of forms
+     * @param field the field holding the value
+     * @param units the units of each form
+     * @param conversion the conversion between forms
+     * @param whenCleared what to say under the field when it is emptied, for each form
+     */
+    public static <T> void attachItems(JComboBox<T> forms, QuantityField field, Function<T, List<Unit>> units,
+            ItemConversion<T> conversion, Function<T, String> whenCleared) {
+        attach(forms, field, i -> units.apply(forms.getItemAt(i)),
+                (from, to, v) -> conversion.convert(forms.getItemAt(from), forms.getItemAt(to), v),
+                i -> whenCleared.apply(forms.getItemAt(i)));
     }
 
     /**

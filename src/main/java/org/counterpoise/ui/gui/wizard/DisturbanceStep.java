@@ -29,6 +29,7 @@ import org.counterpoise.io.text.UnitChoices;
 import org.counterpoise.ui.gui.document.ProjectEdits;
 import org.counterpoise.ui.gui.field.Form;
 import org.counterpoise.ui.gui.field.FormSwitch;
+import org.counterpoise.ui.gui.field.ItemWords;
 import org.counterpoise.ui.gui.field.QuantityField;
 
 /** Step 2: what shakes the structure, and at which speeds. */
@@ -36,8 +37,7 @@ final class DisturbanceStep extends Step {
     private static final List<Unit> FREQUENCY = UnitChoices.of(Dimension.FREQUENCY);
     private static final List<Unit> RATIO = UnitChoices.of(Dimension.RATIO);
 
-    private final JComboBox<String> kind = new JComboBox<>(new String[] {"force", "rotating unbalance",
-        "base displacement", "base acceleration"});
+    private final JComboBox<ExcitationKind> kind = new JComboBox<>(ExcitationKind.values());
     private final QuantityField amplitude = new QuantityField("disturbance.amplitude",
             "Force amplitude; unbalance m\u00b7e; or base motion amplitude", units(ExcitationKind.FORCE));
     private final JRadioButton oneSpeed = new JRadioButton("one speed");
@@ -68,6 +68,12 @@ final class DisturbanceStep extends Step {
 
     DisturbanceStep() {
         kind.setName("disturbance.kind");
+        ItemWords.show(kind, ExcitationKind.class, k -> switch (k) {
+            case FORCE -> "force";
+            case UNBALANCE -> "rotating unbalance";
+            case BASE_DISPLACEMENT -> "base displacement";
+            case BASE_ACCELERATION -> "base acceleration";
+        });
         oneSpeed.setName("disturbance.oneSpeed");
         speedRange.setName("disturbance.speedRange");
         ButtonGroup g = new ButtonGroup();
@@ -129,7 +135,7 @@ final class DisturbanceStep extends Step {
         own("disturbance.spectrum", psd);
         own("disturbance.run_up_rate", runUp);
         kind.addActionListener(e -> {
-            amplitude.setUnits(units(kindOf(kind.getSelectedIndex())));
+            amplitude.setUnits(units(selectedKind()));
             psdFollowsKind();
             edited("disturbance.kind");
         });
@@ -164,8 +170,8 @@ final class DisturbanceStep extends Step {
      */
     private void convertOnChange() {
         low.onUnitChange((from, to) -> high.scale(from.toSi(1) / to.toSi(1)));
-        FormSwitch.attach(kind, amplitude, i -> units(kindOf(i)), (from, to, v) -> Double.NaN,
-                i -> "type the " + switch (kindOf(i)) {
+        FormSwitch.attachItems(kind, amplitude, DisturbanceStep::units, (from, to, v) -> Double.NaN,
+                k -> "type the " + switch (k) {
                     case FORCE -> "force amplitude";
                     case UNBALANCE -> "unbalance m\u00b7e";
                     default -> "amplitude of the base motion";
@@ -182,7 +188,7 @@ final class DisturbanceStep extends Step {
      * said so while broadband is chosen.
      */
     private void psdFollowsKind() {
-        ExcitationKind now = kindOf(kind.getSelectedIndex());
+        ExcitationKind now = selectedKind();
         SpectralDensityUnit was = (SpectralDensityUnit) psdUnit.getSelectedItem();
         fillPsdUnits(now);
         if (was != null && was.of() != now.amplitudeDimension() && !psd.textField().getText().isBlank()) {
@@ -278,7 +284,7 @@ final class DisturbanceStep extends Step {
     }
 
     DisturbanceInput input() {
-        ExcitationKind k = kindOf(kind.getSelectedIndex());
+        ExcitationKind k = selectedKind();
         QuantityInput a = amplitude.input();
         double h = order.number();
         QuantityInput rate = runUp.textField().getText().isBlank() ? null : runUp.input();
@@ -297,7 +303,7 @@ final class DisturbanceStep extends Step {
         SpectralDensityUnit u = (SpectralDensityUnit) psdUnit.getSelectedItem();
         if (u == null) {
             throw new InvalidInputException("disturbance.spectrum", "white noise with a "
-                    + kindOf(kind.getSelectedIndex()).label(), "white noise is a force or a base acceleration:"
+                    + selectedKind().label(), "white noise is a force or a base acceleration:"
                     + " choose one of those kinds, or the harmonic spectrum");
         }
         return SpectrumInput.whiteNoise(psd.number(), u);
@@ -305,9 +311,7 @@ final class DisturbanceStep extends Step {
 
     /** @param d the disturbance */
     private void load(DisturbanceInput d) {
-        if (kindOf(kind.getSelectedIndex()) != d.kind()) {
-            select(kind, d.kind().ordinal());
-        }
+        selectItem(kind, d.kind());
         SpectrumInput sp = d.spectrum();
         boolean white = sp != null && sp.kind() == Spectrum.Kind.WHITE_NOISE;
         statedHarmonic = white ? null : sp;
@@ -359,8 +363,8 @@ final class DisturbanceStep extends Step {
         }
     }
 
-    static ExcitationKind kindOf(int index) {
-        return ExcitationKind.values()[index];
+    private ExcitationKind selectedKind() {
+        return (ExcitationKind) kind.getSelectedItem();
     }
 
     private static List<Unit> units(ExcitationKind k) {

@@ -5,6 +5,7 @@ import java.awt.Component;
 import java.math.BigDecimal;
 import java.math.MathContext;
 import java.util.List;
+import java.util.OptionalDouble;
 import javax.swing.DefaultListCellRenderer;
 import javax.swing.JCheckBox;
 import javax.swing.JComboBox;
@@ -28,14 +29,24 @@ import org.counterpoise.ui.gui.Themes;
 import org.counterpoise.ui.gui.document.ProjectEdits;
 import org.counterpoise.ui.gui.field.Form;
 import org.counterpoise.ui.gui.field.FormSwitch;
+import org.counterpoise.ui.gui.field.ItemWords;
 import org.counterpoise.ui.gui.field.QuantityField;
 import org.counterpoise.ui.gui.field.Sizes;
 import org.counterpoise.ui.gui.plot.ChartHost;
 
 /** Step 3: how big the absorber may be, how to design it, and what response matters. */
 final class GoalStep extends Step {
-    private final JComboBox<String> sizing = new JComboBox<>(
-            new String[] {"mass ratio \u03bc", "absorber mass", "lightest for a target response"});
+    /** The forms the absorber's size is given in, as the list offers them. */
+    enum SizingForm {
+        /** A mass ratio mu. */
+        MASS_RATIO,
+        /** An absorber mass. */
+        MASS,
+        /** The lightest absorber for a target response. */
+        TARGET
+    }
+
+    private final JComboBox<SizingForm> sizing = new JComboBox<>(SizingForm.values());
     private final QuantityField size = new QuantityField("absorber.mass_ratio",
             "Absorber mass over the structure's effective mass, or the mass budget", UnitChoices.of(Dimension.RATIO));
     private final JComboBox<DesignMethod> method = new JComboBox<>(DesignMethod.values());
@@ -78,6 +89,11 @@ final class GoalStep extends Step {
 
     GoalStep() {
         sizing.setName("absorber.sizing");
+        ItemWords.show(sizing, SizingForm.class, f -> switch (f) {
+            case MASS_RATIO -> "mass ratio \u03bc";
+            case MASS -> "absorber mass";
+            case TARGET -> "lightest for a target response";
+        });
         method.setName("absorber.method");
         response.setName("absorber.response");
         hangs.setName("absorber.hangs");
@@ -141,7 +157,7 @@ final class GoalStep extends Step {
         });
         method.addActionListener(e -> edited("absorber.method"));
         response.addActionListener(e -> {
-            if (sizing.getSelectedIndex() == 2) {
+            if (sizing.getSelectedItem() == SizingForm.TARGET) {
                 sizeUnits();
                 targetQuantityChanged();
             }
@@ -204,12 +220,12 @@ final class GoalStep extends Step {
         return ok;
     }
 
-    private static double optional(QuantityField f) {
-        return f.textField().getText().isBlank() ? Double.NaN : f.number();
+    private static OptionalDouble optional(QuantityField f) {
+        return f.textField().getText().isBlank() ? OptionalDouble.empty() : OptionalDouble.of(f.number());
     }
 
     private void sizeUnits() {
-        size.setUnits(sizeUnits(sizing.getSelectedIndex()));
+        size.setUnits(sizeUnits((SizingForm) sizing.getSelectedItem()));
     }
 
     /** @param r a response @return the units its targets are typed in */
@@ -217,11 +233,11 @@ final class GoalStep extends Step {
         return UnitChoices.of(r.dimension());
     }
 
-    private List<Unit> sizeUnits(int sizingForm) {
+    private List<Unit> sizeUnits(SizingForm sizingForm) {
         return switch (sizingForm) {
-            case 0 -> UnitChoices.of(Dimension.RATIO);
-            case 1 -> UnitChoices.of(Dimension.MASS);
-            default -> unitsOf((ResponseKind) response.getSelectedItem());
+            case MASS_RATIO -> UnitChoices.of(Dimension.RATIO);
+            case MASS -> UnitChoices.of(Dimension.MASS);
+            case TARGET -> unitsOf((ResponseKind) response.getSelectedItem());
         };
     }
 
@@ -245,24 +261,27 @@ final class GoalStep extends Step {
      * screen reaches; attached after the other listeners, so it runs first.
      */
     private void convertOnSizingChange() {
-        FormSwitch.attach(sizing, size, this::sizeUnits, (from, to, v) -> {
+        FormSwitch.attachItems(sizing, size, this::sizeUnits, (from, to, v) -> {
             Structure s = sizingContext.structure();
             DesignResult d = sizingContext.design();
-            if (to == 2) {
+            if (to == SizingForm.TARGET) {
                 // A target is a round figure a person states: start from what the design reaches,
                 // to three significant figures (not 0.00436614115883 mm).
                 return d != null && d.study().response() == response.getSelectedItem()
                         ? roundedTo3Figures(d.responseAfter().value()) : Double.NaN;
             }
-            if (from == 2) {
-                return d == null ? Double.NaN : to == 0 ? d.tuning().massRatio() : d.absorber().mass();
+            if (from == SizingForm.TARGET) {
+                return d == null ? Double.NaN : to == SizingForm.MASS_RATIO ? d.tuning().massRatio() : d.absorber().mass();
             }
             if (s == null) {
                 return Double.NaN;
             }
-            return to == 1 ? v * s.effectiveMass() : v / s.effectiveMass();
-        }, i -> i == 0 ? "type the mass ratio" : i == 1 ? "type the absorber mass"
-                : "type the largest " + ((ResponseKind) response.getSelectedItem()).label() + " you accept");
+            return to == SizingForm.MASS ? v * s.effectiveMass() : v / s.effectiveMass();
+        }, f -> switch (f) {
+            case MASS_RATIO -> "type the mass ratio";
+            case MASS -> "type the absorber mass";
+            case TARGET -> "type the largest " + ((ResponseKind) response.getSelectedItem()).label() + " you accept";
+        });
     }
 
     private static double roundedTo3Figures(double value) {
@@ -290,10 +309,10 @@ final class GoalStep extends Step {
 
     /** @return the absorber choices as shown (throws InvalidInputException naming a field) */
     AbsorberInput input() {
-        int kind = sizing.getSelectedIndex();
-        double ratio = kind == 0 ? size.number() : Double.NaN;
-        QuantityInput mass = kind == 1 ? size.input() : null;
-        QuantityInput target = kind == 2 ? size.input() : null;
+        SizingForm kind = (SizingForm) sizing.getSelectedItem();
+        OptionalDouble ratio = kind == SizingForm.MASS_RATIO ? OptionalDouble.of(size.number()) : OptionalDouble.empty();
+        QuantityInput mass = kind == SizingForm.MASS ? size.input() : null;
+        QuantityInput target = kind == SizingForm.TARGET ? size.input() : null;
         return new AbsorberInput(ratio, mass, method(), (ResponseKind) response.getSelectedItem(), hangs.isSelected(),
                 margin.number(), target, optional(maxMassRatio),
                 strokeLimit.textField().getText().isBlank() ? null : strokeLimit.input(),
@@ -308,13 +327,13 @@ final class GoalStep extends Step {
             response.setSelectedItem(a.response());
         }
         if (a.mass() != null) {
-            select(sizing, 1);
+            selectItem(sizing, SizingForm.MASS);
             showValue(size, a.mass());
-        } else if (!Double.isNaN(a.massRatio())) {
-            select(sizing, 0);
-            showValue(size, a.massRatio(), Unit.RATIO);
+        } else if (a.massRatio().isPresent()) {
+            selectItem(sizing, SizingForm.MASS_RATIO);
+            showValue(size, a.massRatio().getAsDouble(), Unit.RATIO);
         } else {
-            select(sizing, 2);
+            selectItem(sizing, SizingForm.TARGET);
             showValue(size, a.target());
         }
         showValue(margin, a.strokeMargin(), Unit.RATIO);
@@ -327,11 +346,11 @@ final class GoalStep extends Step {
         }
     }
 
-    private static void showOptional(QuantityField f, double v) {
-        if (Double.isNaN(v)) {
-            showValue(f, null);
+    private static void showOptional(QuantityField f, OptionalDouble v) {
+        if (v.isPresent()) {
+            showValue(f, v.getAsDouble(), Unit.RATIO);
         } else {
-            showValue(f, v, Unit.RATIO);
+            showValue(f, null);
         }
     }
 

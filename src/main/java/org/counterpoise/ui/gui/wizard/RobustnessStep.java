@@ -21,6 +21,7 @@ import org.counterpoise.core.design.RobustnessResult;
 import org.counterpoise.core.design.RobustnessSettings;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.robust.MonteCarloResult;
+import org.counterpoise.core.robust.Tolerance;
 import org.counterpoise.core.units.Dimension;
 import org.counterpoise.core.units.Unit;
 import org.counterpoise.io.chart.MonteCarloCharts;
@@ -33,6 +34,7 @@ import org.counterpoise.io.text.QuantityFormat;
 import org.counterpoise.io.text.UnitChoices;
 import org.counterpoise.ui.gui.document.ProjectEdits;
 import org.counterpoise.ui.gui.field.Form;
+import org.counterpoise.ui.gui.field.ItemWords;
 import org.counterpoise.ui.gui.field.QuantityField;
 import org.counterpoise.ui.gui.field.Sizes;
 import org.counterpoise.ui.gui.plot.ChartHost;
@@ -46,9 +48,6 @@ final class RobustnessStep extends Step {
             List.of(Unit.PERCENT, Unit.KILOGRAM, Unit.GRAM),
             List.of(Unit.PERCENT, Unit.KILONEWTON_PER_METRE, Unit.NEWTON_PER_METRE, Unit.NEWTON_PER_MILLIMETRE),
             List.of(Unit.PERCENT, Unit.NEWTON_SECOND_PER_METRE, Unit.KILONEWTON_SECOND_PER_METRE));
-    /** Distributions as listed; index 0 means no tolerance. Their file ids are in {@link #DISTRIBUTION_IDS}. */
-    private static final String[] DISTRIBUTIONS = {"none", "uniform \u00b1", "normal \u03c3"};
-    private static final String[] DISTRIBUTION_IDS = {null, "uniform", "normal"};
 
     private final QuantityField structureRange = new QuantityField("robustness.structure_detuning",
             "How far the structure's natural frequency may be off, in percent each way", UnitChoices.of(Dimension.RATIO));
@@ -60,7 +59,7 @@ final class RobustnessStep extends Step {
             "Number of sampled builds in the Monte Carlo", UnitChoices.of(Dimension.RATIO));
     private final QuantityField seed = new QuantityField("robustness.seed",
             "Seed of the Monte Carlo's random numbers: the same seed gives the same result", UnitChoices.of(Dimension.RATIO));
-    private final List<JComboBox<String>> distributions = new ArrayList<>();
+    private final List<JComboBox<Tolerance.Distribution>> distributions = new ArrayList<>();
     private final List<QuantityField> tolerances = new ArrayList<>();
     private final JLabel summary = new JLabel(" ");
     private final ChartHost sensitivity = new ChartHost("chart.sensitivity");
@@ -83,8 +82,13 @@ final class RobustnessStep extends Step {
         tolerancesForm.heading("Manufacturing tolerances (Monte Carlo)");
         for (ToleranceKey k : ToleranceKey.values()) {
             String id = k.path();
-            JComboBox<String> kind = new JComboBox<>(DISTRIBUTIONS);
+            JComboBox<Tolerance.Distribution> kind = new JComboBox<>(Tolerance.Distribution.values());
             kind.setName(id + ".distribution");
+            ItemWords.show(kind, Tolerance.Distribution.class, d -> switch (d) {
+                case NONE -> "none";
+                case UNIFORM -> "uniform \u00b1";
+                case NORMAL -> "normal \u03c3";
+            });
             QuantityField value = new QuantityField(id, k.label() + ": percent or an absolute amount",
                     TOLERANCE_UNITS.get(k.ordinal()));
             JPanel both = new JPanel(new FlowLayout(FlowLayout.LEFT, 0, 0));
@@ -98,7 +102,7 @@ final class RobustnessStep extends Step {
             tolerances.add(value);
             own(id, value);
             kind.addActionListener(e -> {
-                value.textField().setEnabled(kind.getSelectedIndex() != 0);
+                value.textField().setEnabled(kind.getSelectedItem() != Tolerance.Distribution.NONE);
                 edited(kind.getName());
             });
             value.onChange(() -> edited(id));
@@ -169,9 +173,10 @@ final class RobustnessStep extends Step {
         }
         RobustnessInput.ToleranceInput[] t = new RobustnessInput.ToleranceInput[ToleranceKey.values().length];
         for (int i = 0; i < t.length; i++) {
-            String id = DISTRIBUTION_IDS[distributions.get(i).getSelectedIndex()];
+            Tolerance.Distribution d = (Tolerance.Distribution) distributions.get(i).getSelectedItem();
             QuantityField f = tolerances.get(i);
-            if (id != null) {
+            if (d != Tolerance.Distribution.NONE) {
+                String id = RobustnessInput.ToleranceInput.token(d);
                 t[i] = f.unit() == Unit.PERCENT ? new RobustnessInput.ToleranceInput(id, f.number(), null)
                         : new RobustnessInput.ToleranceInput(id, Double.NaN, f.input());
             }
@@ -201,11 +206,12 @@ final class RobustnessStep extends Step {
             t[k.ordinal()] = r == null ? null : k.of(r);
         }
         for (int i = 0; i < t.length; i++) {
-            int index = t[i] == null ? 0 : Arrays.asList(DISTRIBUTION_IDS).indexOf(t[i].distribution());
-            select(distributions.get(i), Math.max(index, 0));
+            Tolerance.Distribution shape = t[i] == null ? Tolerance.Distribution.NONE
+                    : t[i].kind().orElse(Tolerance.Distribution.NONE);
+            selectItem(distributions.get(i), shape);
             QuantityField f = tolerances.get(i);
-            f.textField().setEnabled(index > 0);
-            if (t[i] == null || index <= 0) {
+            f.textField().setEnabled(shape != Tolerance.Distribution.NONE);
+            if (shape == Tolerance.Distribution.NONE) {
                 continue;
             }
             if (t[i].absolute() != null) {
@@ -223,7 +229,7 @@ final class RobustnessStep extends Step {
             ok &= check(target);
         }
         for (int i = 0; i < tolerances.size(); i++) {
-            if (distributions.get(i).getSelectedIndex() != 0) {
+            if (distributions.get(i).getSelectedItem() != Tolerance.Distribution.NONE) {
                 ok &= check(tolerances.get(i));
             }
         }
@@ -246,9 +252,9 @@ final class RobustnessStep extends Step {
                 + QuantityFormat.number(r.robust().tuning().dampingRatio(), 3) + ") <b>"
                 + DisplayUnits.format(r.robust().worstCase().peak(), unitDim) + "</b>. Monte Carlo P50 / P95: "
                 + DisplayUnits.format(mc.p50(), unitDim) + " / " + DisplayUnits.format(mc.p95(), unitDim)
-                + (Double.isNaN(mc.probabilityExceeding()) ? "" : "; above the target of "
-                        + DisplayUnits.format(r.settings().target(), unitDim) + ": "
-                        + QuantityFormat.number(100 * mc.probabilityExceeding(), 3) + " %"));
+                + (mc.probabilityExceeding().isEmpty() || mc.target().isEmpty() ? "" : "; above the target of "
+                        + DisplayUnits.format(mc.target().getAsDouble(), unitDim) + ": "
+                        + QuantityFormat.number(100 * mc.probabilityExceeding().getAsDouble(), 3) + " %"));
         wrapSummary();
         sensitivity.show(theme -> RobustnessCharts.sensitivity(design, r, theme, 420, 320));
         histogram.show(theme -> MonteCarloCharts.histogram(design, mc, theme, 420, 320));

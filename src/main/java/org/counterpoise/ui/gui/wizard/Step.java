@@ -151,6 +151,17 @@ abstract class Step {
     }
 
     /**
+     * @param <T> the item type
+     * @param combo a list of values
+     * @param item the value to select; nothing happens when it is already selected
+     */
+    static <T> void selectItem(JComboBox<T> combo, T item) {
+        if (combo.getSelectedItem() != item) {
+            combo.setSelectedItem(item);
+        }
+    }
+
+    /**
      * @param field a field of this step
      * @return true when it holds a number; otherwise its problem is shown
      */

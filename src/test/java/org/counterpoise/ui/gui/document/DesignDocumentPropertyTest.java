@@ -9,6 +9,7 @@ import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
+import java.util.OptionalDouble;
 import net.jqwik.api.Arbitraries;
 import net.jqwik.api.Arbitrary;
 import net.jqwik.api.Combinators;
@@ -220,7 +221,7 @@ class DesignDocumentPropertyTest {
         Arbitrary<Boolean> hangs = Arbitraries.of(true, false);
         Arbitrary<Double> margin = Arbitraries.of(1.2, 1.5, 2.0);
         return Combinators.combine(ratio, method, response, hangs, margin).as((mu, m, r, h, s) ->
-                ProjectEdits.absorber("absorber.response", new AbsorberInput(mu, null, m, r, h, s)));
+                ProjectEdits.absorber("absorber.response", new AbsorberInput(OptionalDouble.of(mu), null, m, r, h, s)));
     }
 
     private Arbitrary<Edit> robustness() {
