@@ -2,18 +2,33 @@ package org.counterpoise.io.export;
 
 import com.google.gson.JsonArray;
 import com.google.gson.JsonObject;
-import org.counterpoise.core.design.Cautions;
+import java.util.List;
 import org.counterpoise.core.design.DesignResult;
-import org.counterpoise.core.error.Warning;
-import org.counterpoise.core.response.ResponseKind;
-import org.counterpoise.core.response.ResponsePeak;
+import org.counterpoise.core.units.Dimension;
 import org.counterpoise.core.units.Unit;
-import org.counterpoise.io.project.Ids;
+import org.counterpoise.io.text.DesignContent;
+import org.counterpoise.io.text.ReportContent;
+import org.counterpoise.io.text.ReportKey;
+import org.counterpoise.io.text.ReportRow;
+import org.counterpoise.io.text.ReportValue;
+import org.counterpoise.io.text.ReportValue.Change;
+import org.counterpoise.io.text.ReportValue.Level;
+import org.counterpoise.io.text.ReportValue.NotApplicable;
+import org.counterpoise.io.text.ReportValue.Pair;
+import org.counterpoise.io.text.ReportValue.PeakAt;
+import org.counterpoise.io.text.ReportValue.Percent;
+import org.counterpoise.io.text.ReportValue.Quantity;
+import org.counterpoise.io.text.ReportValue.Reduction;
+import org.counterpoise.io.text.ReportValue.Series;
+import org.counterpoise.io.text.ReportValue.Tolerance;
+import org.counterpoise.io.text.ReportValue.Unbounded;
+import org.counterpoise.io.text.ReportValue.Words;
 
 /**
  * The design result as one JSON object with SI units in the key names (documented in
- * docs/cli.md). An unbounded value is written as null with a companion key
- * {@code <key>_unbounded: true}; no key ever holds Infinity or NaN.
+ * docs/cli.md): the {@link ReportContent} rendered under the keys of {@link ReportKey}, in that
+ * table's order. Frequencies are in Hz, everything else in SI. An unbounded value is written as
+ * null with a companion key {@code <key>_unbounded: true}; no key ever holds Infinity or NaN.
  */
 public final class ResultJson {
     private ResultJson() {
@@ -24,64 +39,23 @@ public final class ResultJson {
      * @return the JSON object
      */
     public static JsonObject of(DesignResult r) {
+        return of(DesignContent.of(r));
+    }
+
+    /**
+     * @param content a design's report content
+     * @return the JSON object
+     */
+    public static JsonObject of(ReportContent content) {
         JsonObject o = new JsonObject();
-        var study = r.study();
-        var s = study.structure();
-        o.addProperty("name", study.name());
-        o.addProperty("method", study.method().id());
-        o.addProperty("method_source", r.methodSource());
-        o.addProperty("excitation", Ids.of(study.excitation().kind()));
-        number(o, "forcing_frequency_low_Hz", hz(study.excitation().band().low()));
-        number(o, "forcing_frequency_high_Hz", hz(study.excitation().band().high()));
-        number(o, "mass_ratio", r.tuning().massRatio());
-        number(o, "tuning_ratio", r.tuning().tuningRatio());
-        number(o, "absorber_damping_ratio", r.tuning().dampingRatio());
-        number(o, "primary_mass_kg", s.effectiveMass());
-        number(o, "primary_stiffness_N_per_m", s.effectiveStiffness());
-        number(o, "primary_frequency_Hz", hz(s.naturalFrequency()));
-        number(o, "primary_damping_ratio", s.dampingRatio());
-        number(o, "absorber_mass_kg", r.absorber().mass());
-        number(o, "absorber_stiffness_N_per_m", r.absorber().stiffness());
-        number(o, "absorber_damping_Ns_per_m", r.absorber().damping());
-        number(o, "absorber_frequency_Hz", hz(r.absorber().naturalFrequency()));
-        number(o, "absorber_static_sag_m", r.staticSag());
-        o.addProperty("response_quantity", Ids.of(study.response()));
-        o.addProperty("response_unit", study.response().dimension().siSymbol());
-        peak(o, "peak_response_before", r.responseBefore());
-        peak(o, "peak_response_after", r.responseAfter());
-        number(o, "reduction_factor", r.reductionFactor());
-        for (ResponseKind k : DesignResult.MOTIONS) {
-            String unit = k.dimension().siSymbol().replace("/s^2", "_per_s2").replace("/s", "_per_s");
-            peak(o, "peak_" + Ids.of(k).replace('-', '_') + "_before_" + unit, r.motionBefore().get(k));
-            peak(o, "peak_" + Ids.of(k).replace('-', '_') + "_after_" + unit, r.motionAfter().get(k));
+        o.addProperty("name", content.name());
+        for (ReportKey key : ReportKey.values()) {
+            if (!key.jsonKeys().isEmpty()) {
+                content.row(key).ifPresent(row -> write(o, row));
+            }
         }
-        peak(o, "peak_stroke_m", r.strokeInBand());
-        peak(o, "peak_stroke_run_up_m", r.strokeRunUp());
-        number(o, "stroke_clearance_m", r.clearance());
-        peak(o, "peak_spring_force_N", r.springForce());
-        peak(o, "peak_damper_force_N", r.damperForce());
-        peak(o, "peak_absorber_force_N", r.absorberForce());
-        double[] coupled = r.coupledNaturalFrequencies().clone();
-        for (int i = 0; i < coupled.length; i++) {
-            coupled[i] = hz(coupled[i]);
-        }
-        JsonNumbers.putAll(o, "coupled_natural_frequencies_Hz", coupled);
-        number(o, "detuning_stiffer_factor", r.detuning().raiseFactor());
-        number(o, "detuning_softer_factor", r.detuning().lowerFactor());
-        number(o, "mass_change_lighter_factor", r.massDetuning().raiseFactor());
-        number(o, "mass_change_heavier_factor", r.massDetuning().lowerFactor());
-        r.rms().ifPresent(rms -> {
-            o.addProperty("spectrum", "white-noise");
-            number(o, "psd_level_SI_per_Hz", rms.psdLevel());
-            number(o, "rms_before", rms.before());
-            number(o, "rms_after", rms.after());
-            number(o, "rms_stroke_m", rms.stroke());
-        });
-        tolerance(o, "structure_frequency", r.structureTolerance());
-        tolerance(o, "absorber_frequency", r.absorberTolerance());
-        number(o, "tolerance_allowance", DesignResult.TOLERANCE_ALLOWANCE);
         JsonArray warnings = new JsonArray();
-        for (Warning w : r.warnings()) {
+        for (ReportContent.Note w : content.warnings()) {
             JsonObject wo = new JsonObject();
             wo.addProperty("code", w.code());
             wo.addProperty("text", w.text());
@@ -89,7 +63,7 @@ public final class ResultJson {
         }
         o.add("warnings", warnings);
         JsonArray cautions = new JsonArray();
-        Cautions.STANDARD.forEach(cautions::add);
+        content.cautions().forEach(cautions::add);
         o.add("cautions", cautions);
         return o;
     }
@@ -102,23 +76,57 @@ public final class ResultJson {
         return JsonNumbers.write(of(r));
     }
 
-    private static void tolerance(JsonObject o, String key, org.counterpoise.core.robust.DetuningRange range) {
-        number(o, "tolerated_" + key + "_factor_low", range.low());
-        number(o, "tolerated_" + key + "_factor_high", range.high());
-        if (range.ofBareResponse()) {
-            o.addProperty("tolerated_" + key + "_basis", "below allowance times bare structure response");
+    private static void write(JsonObject o, ReportRow row) {
+        List<String> keys = row.key().jsonKeys();
+        ReportValue v = row.value();
+        if (v instanceof Pair p) {
+            write(o, keys.get(0), p.first());
+            write(o, keys.get(1), p.second());
+        } else if (v instanceof Reduction r) {
+            write(o, keys.get(0), r.before());
+            write(o, keys.get(1), r.after());
+            JsonNumbers.put(o, keys.get(2), r.factor());
+        } else if (v instanceof Tolerance t) {
+            JsonNumbers.put(o, keys.get(0), t.range().low());
+            JsonNumbers.put(o, keys.get(1), t.range().high());
+            if (t.range().ofBareResponse()) {
+                o.addProperty(keys.get(2), "below allowance times bare structure response");
+            }
+        } else if (v instanceof Words w && !w.ids().isEmpty()) {
+            for (int i = 0; i < keys.size(); i++) {
+                o.addProperty(keys.get(i), w.ids().get(i));
+            }
+        } else {
+            write(o, keys.get(0), v);
         }
     }
 
-    private static void peak(JsonObject o, String key, ResponsePeak p) {
-        number(o, key, p.value());
+    private static void write(JsonObject o, String key, ReportValue v) {
+        if (v instanceof Quantity q) {
+            JsonNumbers.put(o, key, json(q.si(), q.dimension()));
+        } else if (v instanceof Unbounded) {
+            JsonNumbers.put(o, key, Double.POSITIVE_INFINITY);
+        } else if (v instanceof NotApplicable) {
+            JsonNumbers.put(o, key, Double.NaN);
+        } else if (v instanceof Words w) {
+            o.addProperty(key, w.text());
+        } else if (v instanceof Level l) {
+            JsonNumbers.put(o, key, l.value());
+        } else if (v instanceof Percent p) {
+            JsonNumbers.put(o, key, p.fraction());
+        } else if (v instanceof Series s) {
+            JsonNumbers.putAll(o, key, s.si().stream().mapToDouble(x -> json(x, s.dimension())).toArray());
+        } else if (v instanceof Change c) {
+            JsonNumbers.put(o, key, c.factor());
+        } else if (v instanceof PeakAt p) {
+            write(o, key, p.peak());
+        } else {
+            throw new IllegalStateException("bug: no JSON form for " + v + " under " + key);
+        }
     }
 
-    private static void number(JsonObject o, String key, double v) {
-        JsonNumbers.put(o, key, v);
-    }
-
-    private static double hz(double omega) {
-        return Unit.HERTZ.fromSi(omega);
+    /** The JSON's units: frequencies in Hz (the keys say _Hz), everything else in SI. */
+    private static double json(double si, Dimension d) {
+        return d == Dimension.FREQUENCY ? Unit.HERTZ.fromSi(si) : si;
     }
 }

@@ -4,7 +4,10 @@ import java.awt.BorderLayout;
 import java.awt.FlowLayout;
 import java.awt.GridLayout;
 import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Comparator;
 import java.util.List;
+import java.util.Set;
 import javax.swing.JButton;
 import javax.swing.JComponent;
 import javax.swing.JFileChooser;
@@ -27,8 +30,12 @@ import org.counterpoise.io.AtomicFiles;
 import org.counterpoise.io.chart.ChartFactory;
 import org.counterpoise.io.chart.ChartFiles;
 import org.counterpoise.io.project.Project;
-import org.counterpoise.io.sheet.SheetContent;
+import org.counterpoise.io.text.DesignContent;
 import org.counterpoise.io.text.DisplayUnits;
+import org.counterpoise.io.text.ReportContent;
+import org.counterpoise.io.text.ReportSection.SectionId;
+import org.counterpoise.io.text.ReportTable;
+import org.counterpoise.io.text.ValueText;
 import org.counterpoise.ui.gui.Themes;
 import org.counterpoise.ui.gui.field.QuantityField;
 import org.counterpoise.ui.gui.plot.ChartHost;
@@ -37,6 +44,12 @@ import org.knowm.xchart.XYChart;
 
 /** Step 4: the absorber to build, and the response before and after. */
 final class ResultStep extends Step {
+    /** What to build and what it achieves first; the inputs echoed last. */
+    private static final List<SectionId> ORDER = List.of(SectionId.ABSORBER, SectionId.RESPONSE, SectionId.RMS,
+            SectionId.STROKE_AND_FORCES, SectionId.DESIGN, SectionId.TOLERANCE, SectionId.ALTERNATIVE,
+            SectionId.STRUCTURE, SectionId.DISTURBANCE, SectionId.PROJECT, SectionId.MONTE_CARLO);
+    /** Each table row's source and caution, shown under the pointer on its label. */
+    private final List<String> rowNotes = new ArrayList<>();
     private final DefaultTableModel table = new DefaultTableModel(new String[] {"Quantity", "Value", "Unit"}, 0) {
         @Override
         public boolean isCellEditable(int row, int column) {
@@ -66,6 +79,7 @@ final class ResultStep extends Step {
         t.getColumnModel().getColumn(2).setPreferredWidth(60);
         // A cell too narrow for its text still shows it whole under the pointer.
         t.setDefaultRenderer(Object.class, wholeUnderPointer(JLabel.LEFT));
+        t.getColumnModel().getColumn(0).setCellRenderer(labelWithNote());
         t.getColumnModel().getColumn(1).setCellRenderer(wholeUnderPointer(JLabel.RIGHT));
         notes.setName("result.notes");
         notes.setEditable(false);
@@ -153,6 +167,7 @@ final class ResultStep extends Step {
     void show(DesignResult r, DesignCurves c) {
         result = r;
         table.setRowCount(0);
+        rowNotes.clear();
         if (r == null) {
             curves = null;
             writeNotes(List.of());
@@ -161,24 +176,23 @@ final class ResultStep extends Step {
             return;
         }
         curves = c;
-        SheetContent content = SheetContent.of(r, "", "", "");
-        List<SheetContent.Section> sections = new java.util.ArrayList<>(content.sections());
+        ReportContent content = DesignContent.of(r);
+        List<ReportTable.Section> sections = new ArrayList<>(ReportTable.of(content, Set.of()));
         if (r.rms().isPresent()) {
             // Under white noise the design is judged by rms values: they stand in for the harmonic peaks.
-            sections.removeIf(sec -> sec.title().equals(SheetContent.PEAKS_AT_FREQUENCY)
-                    || sec.title().equals(SheetContent.PEAKS_IN_BAND));
+            sections.removeIf(sec -> sec.id() == SectionId.RESPONSE);
         }
-        // What to build and what it achieves first; the inputs echoed last.
-        sections.sort(java.util.Comparator.comparingInt(sec -> sec.title().startsWith("Absorber") ? 0
-                : sec.title().contains("response") || sec.title().contains("Response") ? 1
-                : sec.title().startsWith("Design") ? 2 : sec.title().startsWith("Robust") ? 3 : 4));
-        for (SheetContent.Section section : sections) {
+        sections.sort(Comparator.comparingInt(sec -> ORDER.indexOf(sec.id())));
+        rowNotes.clear();
+        for (ReportTable.Section section : sections) {
             table.addRow(new Object[] {"\u2014 " + section.title(), "", ""});
-            for (SheetContent.Row row : section.rows()) {
-                table.addRow(new Object[] {row.label(), row.value(), QuantityField.pretty(row.unit())});
+            rowNotes.add("");
+            for (ReportTable.Row row : section.rows()) {
+                table.addRow(new Object[] {row.label(), row.value(), ValueText.pretty(row.unit())});
+                rowNotes.add(row.note());
             }
         }
-        writeNotes(r.warnings().stream().map(w -> w.text()).toList());
+        writeNotes(content.warnings().stream().map(ReportContent.Note::text).toList());
         redraw();
     }
 
@@ -194,6 +208,22 @@ final class ResultStep extends Step {
         };
         r.setHorizontalAlignment(alignment);
         return r;
+    }
+
+    /** The label cell: under the pointer, the row's source and caution (or the whole label when it has none). */
+    private javax.swing.table.DefaultTableCellRenderer labelWithNote() {
+        return new javax.swing.table.DefaultTableCellRenderer() {
+            @Override
+            public java.awt.Component getTableCellRendererComponent(JTable table, Object value, boolean selected,
+                    boolean focus, int row, int column) {
+                JLabel l = (JLabel) super.getTableCellRendererComponent(table, value, selected, focus, row, column);
+                int model = table.convertRowIndexToModel(row);
+                String note = model < rowNotes.size() ? rowNotes.get(model) : "";
+                String text = value == null ? "" : value.toString();
+                l.setToolTipText(!note.isEmpty() ? text + ": " + note : text.isEmpty() ? null : text);
+                return l;
+            }
+        };
     }
 
     /** Writes the design's warnings (first, in the problem colour) and the standing cautions, wrapped. */
