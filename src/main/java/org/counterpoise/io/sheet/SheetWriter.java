@@ -124,7 +124,8 @@ public final class SheetWriter {
     }
 
     private void section(ReportTable.Section section) throws IOException {
-        ensure(LINE * 3);
+        // A short table starts on a new page rather than leave its last rows alone on the next one.
+        ensure(LINE * Math.min(3 + section.rows().size(), 14));
         y -= 6;
         heading(section.title(), 11.5f, ACCENT);
         rule();
