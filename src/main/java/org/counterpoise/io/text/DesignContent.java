@@ -255,20 +255,34 @@ public final class DesignContent {
     }
 
     private void monteCarlo(MonteCarloResult mc) {
-        Dimension d = study.response().dimension();
         begin();
-        add(ReportKey.MONTE_CARLO_SAMPLES, "samples (seed)", "",
-                new Words(mc.samples() + " (seed " + mc.seed() + ")", List.of()));
-        add(ReportKey.MONTE_CARLO_MEAN, "mean peak", "", quantity(mc.mean(), d));
-        add(ReportKey.MONTE_CARLO_P50_P90, "P50 / P90", "",
-                new Pair(quantity(mc.p50(), d), quantity(mc.p90(), d), PairKind.SIDE_BY_SIDE));
-        add(ReportKey.MONTE_CARLO_P95_P99, "P95 / P99", "",
-                new Pair(quantity(mc.p95(), d), quantity(mc.p99(), d), PairKind.SIDE_BY_SIDE));
-        if (!Double.isNaN(mc.probabilityExceeding())) {
-            add(ReportKey.MONTE_CARLO_EXCEEDING, "probability above the target", "",
-                    new Percent(mc.probabilityExceeding(), 3));
-        }
+        rows.addAll(monteCarloRows(mc, study.response().dimension()));
         end(SectionId.MONTE_CARLO, "Tolerance Monte Carlo of the peak in band");
+    }
+
+    /**
+     * The rows of a tolerance Monte Carlo, the same on the sheet and in the robustness study.
+     * @param mc the Monte Carlo
+     * @param d the dimension of the response
+     * @return its rows
+     */
+    static List<ReportRow> monteCarloRows(MonteCarloResult mc, Dimension d) {
+        String source = "seeded Monte Carlo over the project's tolerances";
+        List<ReportRow> out = new ArrayList<>();
+        out.add(new ReportRow(ReportKey.MONTE_CARLO_SAMPLES, "samples", "", new ReportValue.Count(mc.samples()),
+                source, ""));
+        out.add(new ReportRow(ReportKey.MONTE_CARLO_SEED, "seed", "", new ReportValue.Count(mc.seed()), source, ""));
+        out.add(new ReportRow(ReportKey.MONTE_CARLO_MEAN, "mean peak", "", quantity(mc.mean(), d), source, ""));
+        out.add(new ReportRow(ReportKey.MONTE_CARLO_P50_P90, "P50 / P90", "",
+                new Pair(quantity(mc.p50(), d), quantity(mc.p90(), d), PairKind.SIDE_BY_SIDE), source, ""));
+        out.add(new ReportRow(ReportKey.MONTE_CARLO_P95_P99, "P95 / P99", "",
+                new Pair(quantity(mc.p95(), d), quantity(mc.p99(), d), PairKind.SIDE_BY_SIDE), source, ""));
+        out.add(new ReportRow(ReportKey.MONTE_CARLO_RANGE, "range", "",
+                new Pair(quantity(mc.min(), d), quantity(mc.max(), d), PairKind.RANGE), source, ""));
+        out.add(new ReportRow(ReportKey.MONTE_CARLO_EXCEEDING, "probability above the target", "",
+                Double.isNaN(mc.probabilityExceeding()) ? new NotApplicable()
+                        : new Percent(mc.probabilityExceeding(), 3), source, ""));
+        return out;
     }
 
     /**
@@ -297,7 +311,7 @@ public final class DesignContent {
         return quantity(p.value(), d);
     }
 
-    private static ReportValue quantity(double si, Dimension d) {
+    static ReportValue quantity(double si, Dimension d) {
         return quantity(si, d, QuantityFormat.FIGURES);
     }
 

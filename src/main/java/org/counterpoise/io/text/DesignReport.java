@@ -40,25 +40,7 @@ public final class DesignReport {
         StringBuilder out = new StringBuilder();
         out.append("Counterpoise absorber design: ").append(content.name()).append('\n');
         for (ReportSection section : content.sections()) {
-            out.append('\n').append(section.title()).append('\n');
-            boolean columns = false;
-            for (ReportRow row : section.rows()) {
-                if (!row.shown()) {
-                    continue;
-                }
-                String label = row.symbol().isEmpty() ? row.label() : row.label() + " " + ValueText.ascii(row.symbol());
-                if (row.value() instanceof Pair p && p.kind() == PairKind.BEFORE_AFTER) {
-                    if (!columns) {
-                        out.append(String.format(Locale.ROOT, "  %-" + (LABEL - 2) + "s %-16s %s%n", "", "before",
-                                "after"));
-                        columns = true;
-                    }
-                    out.append(String.format(Locale.ROOT, "  %-" + (LABEL - 2) + "s %-16s %s%n", label,
-                            ValueText.inline(p.first()), ValueText.inline(p.second())));
-                } else {
-                    row(out, label, ValueText.inline(row.value()));
-                }
-            }
+            section(out, section);
         }
         if (!content.warnings().isEmpty()) {
             out.append("\nWarnings\n");
@@ -71,6 +53,34 @@ public final class DesignReport {
             bullet(out, caution);
         }
         return out.toString();
+    }
+
+    /**
+     * Appends a section: its title after a blank line, then one aligned line per row shown (two
+     * columns for values before and after).
+     * @param out the report being written
+     * @param section the section
+     */
+    static void section(StringBuilder out, ReportSection section) {
+        out.append('\n').append(section.title()).append('\n');
+        boolean columns = false;
+        for (ReportRow row : section.rows()) {
+            if (!row.shown()) {
+                continue;
+            }
+            String label = row.symbol().isEmpty() ? row.label() : row.label() + " " + ValueText.ascii(row.symbol());
+            if (row.value() instanceof Pair p && p.kind() == PairKind.BEFORE_AFTER) {
+                if (!columns) {
+                    out.append(String.format(Locale.ROOT, "  %-" + (LABEL - 2) + "s %-16s %s%n", "", "before",
+                            "after"));
+                    columns = true;
+                }
+                out.append(String.format(Locale.ROOT, "  %-" + (LABEL - 2) + "s %-16s %s%n", label,
+                        ValueText.inline(p.first()), ValueText.inline(p.second())));
+            } else {
+                row(out, label, ValueText.inline(row.value()));
+            }
+        }
     }
 
     /**

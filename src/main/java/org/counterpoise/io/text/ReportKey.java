@@ -6,7 +6,8 @@ import java.util.List;
  * The stable identity of every report row and the one table of the design JSON's keys: a row
  * carries its key, and {@code io.export.ResultJson} writes the rows' values under these JSON keys,
  * in this order. A key renamed here is renamed in the JSON; a row whose constant lists no JSON
- * key is shown in the text report, the sheet and the wizard but not written to the JSON.
+ * key is shown in the text report, the sheet and the wizard but not written to the JSON. A JSON key
+ * {@code a.b} is the key {@code b} of the nested object {@code a}.
  */
 public enum ReportKey {
     METHOD("method"),
@@ -52,6 +53,27 @@ public enum ReportKey {
             "tolerated_absorber_frequency_factor_high", "tolerated_absorber_frequency_basis"),
     TOLERANCE_ALLOWANCE("tolerance_allowance"),
 
+    // The robustness study (robustness --json; RESPONSE above names its response too).
+    STRUCTURE_MISTUNING("structure_detuning_range"),
+    ABSORBER_MISTUNING("absorber_detuning_range"),
+    TARGET("target"),
+    NOMINAL_PEAK("nominal_peak"),
+    WORST_CASE_PEAK("worst_case_peak"),
+    WORST_CASE_AT("worst_case_structure_factor", "worst_case_absorber_factor"),
+    ROBUST_TUNING_RATIO("robust_tuning_ratio"),
+    ROBUST_ABSORBER_DAMPING_RATIO("robust_absorber_damping_ratio"),
+    ROBUST_ABSORBER_STIFFNESS("robust_absorber_stiffness_N_per_m"),
+    ROBUST_ABSORBER_DAMPING("robust_absorber_damping_Ns_per_m"),
+    ROBUST_PEAKS("robust_worst_case_peak", "robust_nominal_peak"),
+    TOLERATED_FOR_TARGET("target_structure_factor_low", "target_structure_factor_high"),
+    MONTE_CARLO_SAMPLES("monte_carlo.samples"),
+    MONTE_CARLO_SEED("monte_carlo.seed"),
+    MONTE_CARLO_MEAN("monte_carlo.mean"),
+    MONTE_CARLO_P50_P90("monte_carlo.p50", "monte_carlo.p90"),
+    MONTE_CARLO_P95_P99("monte_carlo.p95", "monte_carlo.p99"),
+    MONTE_CARLO_RANGE("monte_carlo.min", "monte_carlo.max"),
+    MONTE_CARLO_EXCEEDING("monte_carlo.probability_exceeding_target"),
+
     // Rows not in the design JSON.
     REVISION,
     DATE,
@@ -65,11 +87,7 @@ public enum ReportKey {
     RESPONSE_PEAKS,
     TOLERATED_SPRING_RATE,
     DETUNING_TARGET,
-    MONTE_CARLO_SAMPLES,
-    MONTE_CARLO_MEAN,
-    MONTE_CARLO_P50_P90,
-    MONTE_CARLO_P95_P99,
-    MONTE_CARLO_EXCEEDING;
+    ROBUSTNESS_DESIGN;
 
     private final List<String> jsonKeys;
 

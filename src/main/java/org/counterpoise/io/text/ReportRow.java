@@ -21,6 +21,9 @@ public record ReportRow(ReportKey key, String label, String symbol, ReportValue 
 
     /** @return true when renderers of tables and text show this row (a value that does not apply is left out) */
     public boolean shown() {
+        if (value instanceof ReportValue.Pair p) {
+            return !(p.first() instanceof ReportValue.NotApplicable && p.second() instanceof ReportValue.NotApplicable);
+        }
         return !(value instanceof ReportValue.NotApplicable);
     }
 }

@@ -48,6 +48,10 @@ public record ReportSection(SectionId id, String title, List<ReportRow> rows) {
         /** a change of the structure that would do as well */
         ALTERNATIVE,
         /** the tolerance Monte Carlo of the peak in band */
-        MONTE_CARLO
+        MONTE_CARLO,
+        /** what a robustness study examines: the design, the response, the expected mistuning */
+        ROBUSTNESS_STUDY,
+        /** the worst case of the design, and the robust design at the same mass */
+        WORST_CASE
     }
 }

@@ -98,8 +98,32 @@ public sealed interface ReportValue {
      * The detuning a design tolerates ({@link ValueText#tolerance}).
      * @param range tolerated frequency factors
      * @param power 1 to show it as a frequency change, 2 as a stiffness change (frequency squared)
+     * @param ifUndefined the words when the range is not defined, or empty for the standard words
      */
-    record Tolerance(DetuningRange range, int power) implements ReportValue {
+    record Tolerance(DetuningRange range, int power, String ifUndefined) implements ReportValue {
+        /**
+         * A tolerance that says the standard words when it is not defined.
+         * @param range tolerated frequency factors
+         * @param power 1 for a frequency change, 2 for a stiffness change
+         */
+        public Tolerance(DetuningRange range, int power) {
+            this(range, power, "");
+        }
+    }
+
+    /**
+     * A factor shown as the signed change it makes ("+2.29 %"), written to JSON as the factor.
+     * @param factor the factor (1 = nominal)
+     * @param figures significant figures of the percentage
+     */
+    record Factor(double factor, int figures) implements ReportValue {
+    }
+
+    /**
+     * A whole number (a count of samples, a seed), written to JSON as an integer.
+     * @param value the number
+     */
+    record Count(long value) implements ReportValue {
     }
 
     /**

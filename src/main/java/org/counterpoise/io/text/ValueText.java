@@ -6,6 +6,8 @@ import org.counterpoise.core.robust.DetuningRange;
 import org.counterpoise.core.units.Dimension;
 import org.counterpoise.core.units.Unit;
 import org.counterpoise.io.text.ReportValue.Change;
+import org.counterpoise.io.text.ReportValue.Count;
+import org.counterpoise.io.text.ReportValue.Factor;
 import org.counterpoise.io.text.ReportValue.Level;
 import org.counterpoise.io.text.ReportValue.NotApplicable;
 import org.counterpoise.io.text.ReportValue.Pair;
@@ -68,7 +70,11 @@ public final class ValueText {
             return new Cells(s.si().stream().map(x -> QuantityFormat.number(unit.fromSi(x), QuantityFormat.FIGURES))
                     .collect(Collectors.joining(" and ")), unit.symbol(), false);
         } else if (v instanceof Tolerance t) {
-            return new Cells(tolerance(t.range(), t.power()), "", true);
+            return new Cells(tolerance(t), "", true);
+        } else if (v instanceof Factor f) {
+            return new Cells(signedPercent(f.factor(), f.figures()), "", false);
+        } else if (v instanceof Count c) {
+            return new Cells(Long.toString(c.value()), "", false);
         } else if (v instanceof Reduction r) {
             return new Cells(reduction(r), "", true);
         } else if (v instanceof Change c) {
@@ -113,7 +119,11 @@ public final class ValueText {
             return s.si().stream().map(x -> quantity(x, s.dimension(), QuantityFormat.FIGURES))
                     .collect(Collectors.joining(" and "));
         } else if (v instanceof Tolerance t) {
-            return tolerance(t.range(), t.power());
+            return tolerance(t);
+        } else if (v instanceof Factor f) {
+            return signedPercent(f.factor(), f.figures());
+        } else if (v instanceof Count c) {
+            return Long.toString(c.value());
         } else if (v instanceof Reduction r) {
             return reduction(r);
         } else if (v instanceof Change c) {
@@ -146,6 +156,10 @@ public final class ValueText {
         Unit unit = DisplayUnits.of(dimension);
         String number = QuantityFormat.number(unit.fromSi(si), figures);
         return unit.symbol().isEmpty() ? number : number + " " + unit.symbol();
+    }
+
+    private static String tolerance(Tolerance t) {
+        return !t.range().defined() && !t.ifUndefined().isEmpty() ? t.ifUndefined() : tolerance(t.range(), t.power());
     }
 
     /**

@@ -6,6 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import com.google.gson.JsonElement;
 import com.google.gson.JsonObject;
+import com.google.gson.JsonParser;
 import java.io.IOException;
 import java.io.StringReader;
 import java.nio.file.Files;
@@ -22,6 +23,9 @@ import org.counterpoise.core.design.DesignMethod;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.Designer;
 import org.counterpoise.core.design.RmsFigures;
+import org.counterpoise.core.design.RobustnessAnalysis;
+import org.counterpoise.core.design.RobustnessResult;
+import org.counterpoise.core.design.RobustnessSettings;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.model.ExcitationKind;
 import org.counterpoise.core.model.Structure;
@@ -31,6 +35,7 @@ import org.counterpoise.core.units.Dimension;
 import org.counterpoise.core.units.SpectralDensityUnit;
 import org.counterpoise.core.units.Unit;
 import org.counterpoise.io.export.ResultJson;
+import org.counterpoise.io.export.RobustnessJson;
 import org.counterpoise.io.preset.Presets;
 import org.counterpoise.io.project.AbsorberInput;
 import org.counterpoise.io.project.DisturbanceInput;
@@ -42,6 +47,8 @@ import org.counterpoise.io.project.SpectrumInput;
 import org.counterpoise.io.sheet.SheetContent;
 import org.counterpoise.io.sheet.SheetFiles;
 import org.counterpoise.io.text.ReportValue.Change;
+import org.counterpoise.io.text.ReportValue.Count;
+import org.counterpoise.io.text.ReportValue.Factor;
 import org.counterpoise.io.text.ReportValue.Level;
 import org.counterpoise.io.text.ReportValue.NotApplicable;
 import org.counterpoise.io.text.ReportValue.Pair;
@@ -67,10 +74,10 @@ import org.junit.jupiter.params.provider.MethodSource;
  * Monte Carlo where the project has tolerances.
  */
 class ReportContentTest {
-    /** The Monte Carlo rows are on the sheet only; the robustness report prints its own summary. */
+    /** The Monte Carlo rows are on the design's sheet, and in the robustness study; not in the design report. */
     private static final Set<ReportKey> MONTE_CARLO_ROWS = Set.of(ReportKey.MONTE_CARLO_SAMPLES,
-            ReportKey.MONTE_CARLO_MEAN, ReportKey.MONTE_CARLO_P50_P90, ReportKey.MONTE_CARLO_P95_P99,
-            ReportKey.MONTE_CARLO_EXCEEDING);
+            ReportKey.MONTE_CARLO_SEED, ReportKey.MONTE_CARLO_MEAN, ReportKey.MONTE_CARLO_P50_P90,
+            ReportKey.MONTE_CARLO_P95_P99, ReportKey.MONTE_CARLO_RANGE, ReportKey.MONTE_CARLO_EXCEEDING);
     private static final ProjectIdentity IDENTITY = new ProjectIdentity("C", "R. Aberg", "Plant  4", "2026-11-30");
 
     static Stream<Named<DesignResult>> designs() throws IOException {
@@ -155,13 +162,73 @@ class ReportContentTest {
         m.put(ReportKey.SOFTER, List.of(r.detuning().lowerFactor()));
         m.put(ReportKey.LIGHTER, List.of(r.massDetuning().raiseFactor()));
         m.put(ReportKey.HEAVIER, List.of(r.massDetuning().lowerFactor()));
-        mc.ifPresent(c -> {
-            m.put(ReportKey.MONTE_CARLO_MEAN, List.of(c.mean()));
-            m.put(ReportKey.MONTE_CARLO_P50_P90, List.of(c.p50(), c.p90()));
-            m.put(ReportKey.MONTE_CARLO_P95_P99, List.of(c.p95(), c.p99()));
-            m.put(ReportKey.MONTE_CARLO_EXCEEDING, List.of(c.probabilityExceeding()));
-        });
+        mc.ifPresent(c -> monteCarlo(m, c));
         return m;
+    }
+
+    private static void monteCarlo(Map<ReportKey, List<Double>> m, MonteCarloResult c) {
+        m.put(ReportKey.MONTE_CARLO_SAMPLES, List.of((double) c.samples()));
+        m.put(ReportKey.MONTE_CARLO_SEED, List.of((double) c.seed()));
+        m.put(ReportKey.MONTE_CARLO_MEAN, List.of(c.mean()));
+        m.put(ReportKey.MONTE_CARLO_P50_P90, List.of(c.p50(), c.p90()));
+        m.put(ReportKey.MONTE_CARLO_P95_P99, List.of(c.p95(), c.p99()));
+        m.put(ReportKey.MONTE_CARLO_RANGE, List.of(c.min(), c.max()));
+        m.put(ReportKey.MONTE_CARLO_EXCEEDING, List.of(c.probabilityExceeding()));
+    }
+
+    /** The core figures of a robustness study's rows, from its result's own fields. */
+    private static Map<ReportKey, List<Double>> core(DesignResult design, RobustnessResult r) {
+        Map<ReportKey, List<Double>> m = new EnumMap<>(ReportKey.class);
+        m.put(ReportKey.STRUCTURE_MISTUNING, List.of(r.settings().structureRange()));
+        m.put(ReportKey.ABSORBER_MISTUNING, List.of(r.settings().absorberRange()));
+        m.put(ReportKey.TARGET, List.of(r.settings().target()));
+        m.put(ReportKey.NOMINAL_PEAK, List.of(design.responseAfter().value()));
+        m.put(ReportKey.WORST_CASE_PEAK, List.of(r.worstCase().peak()));
+        m.put(ReportKey.WORST_CASE_AT, List.of(r.worstCase().structureFactor(), r.worstCase().absorberFactor()));
+        m.put(ReportKey.ROBUST_TUNING_RATIO, List.of(r.robust().tuning().tuningRatio()));
+        m.put(ReportKey.ROBUST_ABSORBER_DAMPING_RATIO, List.of(r.robust().tuning().dampingRatio()));
+        m.put(ReportKey.ROBUST_ABSORBER_STIFFNESS, List.of(r.robustAbsorber().stiffness()));
+        m.put(ReportKey.ROBUST_ABSORBER_DAMPING, List.of(r.robustAbsorber().damping()));
+        m.put(ReportKey.ROBUST_PEAKS, List.of(r.robust().worstCase().peak(), r.robust().nominalPeak()));
+        m.put(ReportKey.TOLERATED_FOR_TARGET, List.of(r.toleratedForTarget().low(), r.toleratedForTarget().high()));
+        monteCarlo(m, r.monteCarlo());
+        return m;
+    }
+
+    static Stream<Named<DesignResult>> presetDesigns() throws IOException {
+        return designs().filter(n -> n.getName().endsWith(".json"));
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @MethodSource("presetDesigns")
+    void robustnessRowsShowTheCoreFiguresInTextAndJson(DesignResult design) {
+        RobustnessSettings s = design.study().robustness();
+        RobustnessResult r = RobustnessAnalysis.run(design, new RobustnessSettings(s.structureRange(),
+                s.absorberRange(), s.target(), s.tolerances(), 400, s.seed()));
+        ReportContent content = RobustnessContent.of(design, r);
+        Map<ReportKey, List<Double>> core = core(design, r);
+        String text = RobustnessReport.render(design, r);
+        JsonObject json = JsonParser.parseString(RobustnessJson.toJson(design, r)).getAsJsonObject();
+        for (ReportRow row : content.sections().stream().flatMap(x -> x.rows().stream()).toList()) {
+            List<Figure> figures = figures(row.value());
+            if (!figures.isEmpty()) {
+                List<Double> expected = core.get(row.key());
+                assertEquals(expected.size(), figures.size(), row.key().toString());
+                for (int i = 0; i < expected.size(); i++) {
+                    assertEquals(0, Double.compare(expected.get(i), figures.get(i).value()), row.key() + "[" + i + "]");
+                    String path = row.key().jsonKeys().get(i);
+                    JsonObject holder = path.contains(".") ? json.getAsJsonObject(path.substring(0, path.indexOf('.')))
+                            : json;
+                    JsonElement e = holder.get(path.substring(path.indexOf('.') + 1));
+                    assertJsonNumber(figures.get(i), e, path);
+                }
+            }
+            if (row.shown()) {
+                String label = row.symbol().isEmpty() ? row.label() : row.label() + " " + ValueText.ascii(row.symbol());
+                assertTrue(text.lines().anyMatch(l -> l.startsWith("  " + label + " ")
+                        && l.endsWith(" " + ValueText.inline(row.value()))), "robustness report lacks " + label);
+            }
+        }
     }
 
     private static void rms(Map<ReportKey, List<Double>> m, RmsFigures rms) {
@@ -205,6 +272,10 @@ class ReportContentTest {
             out.add(new Figure(r.factor(), Dimension.RATIO));
         } else if (v instanceof Change c) {
             out.add(new Figure(c.factor(), Dimension.RATIO));
+        } else if (v instanceof Factor f) {
+            out.add(new Figure(f.factor(), Dimension.RATIO));
+        } else if (v instanceof Count c) {
+            out.add(new Figure(c.value(), Dimension.RATIO));
         } else if (v instanceof PeakAt p) {
             out.addAll(figures(p.peak()));
         }
@@ -284,7 +355,7 @@ class ReportContentTest {
             // unbounded or not defined).
             List<String> keys = row.key().jsonKeys();
             jsonKeysWritten.addAll(keys);
-            if (keys.isEmpty()) {
+            if (keys.isEmpty() || MONTE_CARLO_ROWS.contains(row.key())) { // the design JSON has no Monte Carlo
                 continue;
             }
             if (row.value() instanceof Words w) {
