@@ -19,7 +19,6 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
 import java.util.stream.Stream;
-import org.counterpoise.core.design.DesignMethod;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.Designer;
 import org.counterpoise.core.design.RmsFigures;
@@ -27,23 +26,15 @@ import org.counterpoise.core.design.RobustnessAnalysis;
 import org.counterpoise.core.design.RobustnessResult;
 import org.counterpoise.core.design.RobustnessSettings;
 import org.counterpoise.core.error.InvalidInputException;
-import org.counterpoise.core.model.ExcitationKind;
 import org.counterpoise.core.model.Structure;
 import org.counterpoise.core.response.ResponseKind;
 import org.counterpoise.core.robust.MonteCarloResult;
 import org.counterpoise.core.units.Dimension;
-import org.counterpoise.core.units.SpectralDensityUnit;
-import org.counterpoise.core.units.Unit;
 import org.counterpoise.io.export.ResultJson;
 import org.counterpoise.io.export.RobustnessJson;
-import org.counterpoise.io.preset.Presets;
-import org.counterpoise.io.project.AbsorberInput;
-import org.counterpoise.io.project.DisturbanceInput;
 import org.counterpoise.io.project.Project;
 import org.counterpoise.io.project.ProjectIdentity;
 import org.counterpoise.io.project.ProjectReader;
-import org.counterpoise.io.project.QuantityInput;
-import org.counterpoise.io.project.SpectrumInput;
 import org.counterpoise.io.sheet.SheetContent;
 import org.counterpoise.io.sheet.SheetFiles;
 import org.counterpoise.io.text.ReportValue.Change;
@@ -61,6 +52,7 @@ import org.counterpoise.io.text.ReportValue.Series;
 import org.counterpoise.io.text.ReportValue.Tolerance;
 import org.counterpoise.io.text.ReportValue.Unbounded;
 import org.counterpoise.io.text.ReportValue.Words;
+import org.counterpoise.testing.Scenarios;
 import org.junit.jupiter.api.Named;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.MethodSource;
@@ -101,14 +93,7 @@ class ReportContentTest {
 
     /** An invented scenario: the first preset's structure under a white-noise force, minimum-variance design. */
     private static Project whiteNoiseProject() {
-        Project base = Presets.defaultProject().project();
-        DisturbanceInput d = new DisturbanceInput(ExcitationKind.FORCE, new QuantityInput(300, Unit.NEWTON),
-                new QuantityInput(860, Unit.REV_PER_MINUTE), Double.NaN, Double.NaN, null, 1,
-                new QuantityInput(12, Unit.RPM_PER_SECOND),
-                SpectrumInput.whiteNoise(2.5, SpectralDensityUnit.KILONEWTON_SQUARED_PER_HERTZ));
-        AbsorberInput a = new AbsorberInput(0.05, null, DesignMethod.MINIMUM_VARIANCE, ResponseKind.DISPLACEMENT,
-                false, 1.5);
-        return new Project(base.name(), base.notes(), base.structure(), d, a, base.robustness(), base.identity());
+        return Scenarios.whiteNoiseProject();
     }
 
     /**

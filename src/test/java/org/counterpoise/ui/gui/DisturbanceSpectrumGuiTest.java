@@ -30,7 +30,6 @@ import org.counterpoise.core.units.SpectralDensityUnit;
 import org.counterpoise.core.units.Unit;
 import org.counterpoise.io.preset.Presets;
 import org.counterpoise.io.project.AbsorberInput;
-import org.counterpoise.io.project.DisturbanceInput;
 import org.counterpoise.io.project.Project;
 import org.counterpoise.io.project.ProjectReader;
 import org.counterpoise.io.project.ProjectWriter;
@@ -41,6 +40,7 @@ import org.counterpoise.io.text.DisplayUnits;
 import org.counterpoise.io.text.ReportSection.SectionId;
 import org.counterpoise.io.text.QuantityFormat;
 import org.counterpoise.ui.gui.wizard.WizardFrame;
+import org.counterpoise.testing.Scenarios;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
@@ -80,15 +80,8 @@ class DisturbanceSpectrumGuiTest {
     }
 
     /** An invented scenario: the first preset's structure under a white-noise force, minimum-variance design. */
-    private static Project whiteNoiseProject() throws Exception {
-        Project base = Presets.defaultProject().project();
-        DisturbanceInput d = new DisturbanceInput(ExcitationKind.FORCE, new QuantityInput(300, Unit.NEWTON),
-                new QuantityInput(860, Unit.REV_PER_MINUTE), Double.NaN, Double.NaN, null, 1,
-                new QuantityInput(12, Unit.RPM_PER_SECOND),
-                SpectrumInput.whiteNoise(2.5, SpectralDensityUnit.KILONEWTON_SQUARED_PER_HERTZ));
-        AbsorberInput a = new AbsorberInput(0.05, null, DesignMethod.MINIMUM_VARIANCE, ResponseKind.DISPLACEMENT,
-                false, 1.5);
-        return new Project(base.name(), base.notes(), base.structure(), d, a, base.robustness(), base.identity());
+    private static Project whiteNoiseProject() {
+        return Scenarios.whiteNoiseProject();
     }
 
     @Test

@@ -1,6 +1,7 @@
 package org.counterpoise.ui.gui.wizard;
 
 import java.awt.BorderLayout;
+import java.awt.Component;
 import java.awt.FlowLayout;
 import java.awt.GridLayout;
 import java.nio.file.Path;
@@ -19,6 +20,7 @@ import javax.swing.JSplitPane;
 import javax.swing.JTable;
 import javax.swing.JTextPane;
 import javax.swing.JToggleButton;
+import javax.swing.table.DefaultTableCellRenderer;
 import javax.swing.table.DefaultTableModel;
 import org.counterpoise.core.design.Cautions;
 import org.counterpoise.core.design.DesignCurves;
@@ -211,10 +213,10 @@ final class ResultStep extends Step {
     }
 
     /** The label cell: under the pointer, the row's source and caution (or the whole label when it has none). */
-    private javax.swing.table.DefaultTableCellRenderer labelWithNote() {
-        return new javax.swing.table.DefaultTableCellRenderer() {
+    private DefaultTableCellRenderer labelWithNote() {
+        return new DefaultTableCellRenderer() {
             @Override
-            public java.awt.Component getTableCellRendererComponent(JTable table, Object value, boolean selected,
+            public Component getTableCellRendererComponent(JTable table, Object value, boolean selected,
                     boolean focus, int row, int column) {
                 JLabel l = (JLabel) super.getTableCellRendererComponent(table, value, selected, focus, row, column);
                 int model = table.convertRowIndexToModel(row);
