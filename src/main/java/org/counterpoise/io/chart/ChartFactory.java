@@ -18,6 +18,7 @@ import org.counterpoise.core.units.Dimension;
 import org.counterpoise.core.units.Unit;
 import org.counterpoise.io.text.DisplayUnits;
 import org.counterpoise.io.text.QuantityFormat;
+import org.counterpoise.io.text.ValueText;
 import org.knowm.xchart.AnnotationLine;
 import org.knowm.xchart.AnnotationText;
 import org.knowm.xchart.XYChart;
@@ -352,7 +353,7 @@ public final class ChartFactory {
 
     /** Unit symbols as typeset: N*s/m as N·s/m, m/s^2 as m/s². */
     public static String pretty(String symbol) {
-        return symbol.replace("*", "\u00b7").replace("^2", "\u00b2");
+        return ValueText.pretty(symbol);
     }
 
     private static String capitalised(String s) {

@@ -9,7 +9,6 @@ import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
-import java.util.regex.Pattern;
 import org.apache.pdfbox.pdmodel.PDDocument;
 import org.apache.pdfbox.pdmodel.PDPage;
 import org.apache.pdfbox.pdmodel.PDPageContentStream;
@@ -19,6 +18,8 @@ import org.apache.pdfbox.pdmodel.graphics.form.PDFormXObject;
 import org.apache.pdfbox.pdmodel.graphics.state.RenderingMode;
 import org.apache.pdfbox.util.Matrix;
 import org.counterpoise.io.chart.ChartFactory;
+import org.counterpoise.io.text.ReportTable;
+import org.counterpoise.io.text.ValueText;
 import org.knowm.xchart.XYChart;
 
 /**
@@ -37,8 +38,6 @@ public final class SheetWriter {
     private static final float TEXT_LEFT = 262f;
     private static final float BODY = 9.5f;
     private static final float LINE = 12.5f;
-    /** A value printed right-aligned as a number (digits, signs, separators), not as text. */
-    private static final Pattern NUMERIC = Pattern.compile("[-+0-9.,/ e]+");
     private static final Color INK = new Color(0x1d, 0x23, 0x2b);
     private static final Color MUTED = new Color(0x6b, 0x72, 0x7c);
     private static final Color ACCENT = new Color(0x0b, 0x6e, 0x69);
@@ -94,7 +93,7 @@ public final class SheetWriter {
                 y -= 11;
             }
         }
-        for (SheetContent.Section section : content.sections()) {
+        for (ReportTable.Section section : content.sections()) {
             section(section);
         }
         float chartWidth = WIDTH - 2 * MARGIN;
@@ -124,20 +123,20 @@ public final class SheetWriter {
         footers();
     }
 
-    private void section(SheetContent.Section section) throws IOException {
-        ensure(LINE * 3);
+    private void section(ReportTable.Section section) throws IOException {
+        // A short table starts on a new page rather than leave its last rows alone on the next one.
+        ensure(LINE * Math.min(3 + section.rows().size(), 14));
         y -= 6;
         heading(section.title(), 11.5f, ACCENT);
         rule();
-        for (SheetContent.Row row : section.rows()) {
+        for (ReportTable.Row row : section.rows()) {
             row(row);
         }
         y -= 4;
     }
 
-    private void row(SheetContent.Row row) throws IOException {
-        boolean textual = row.unit().isEmpty() && !NUMERIC.matcher(row.value()).matches();
-        if (textual) {
+    private void row(ReportTable.Row row) throws IOException {
+        if (row.textual()) {
             List<String> lines = wrap(clean(row.value()), WIDTH - MARGIN - TEXT_LEFT, BODY);
             ensure(LINE * lines.size());
             say(row.label(), MARGIN, BODY, MUTED, false);
@@ -151,7 +150,7 @@ public final class SheetWriter {
         say(row.label(), MARGIN, BODY, MUTED, false);
         String value = clean(row.value());
         say(value, VALUE_RIGHT - width(value, BODY), BODY, INK, false);
-        say(ChartFactory.pretty(row.unit()), UNIT_LEFT, BODY, INK, false);
+        say(ValueText.pretty(row.unit()), UNIT_LEFT, BODY, INK, false);
         y -= LINE;
     }
 

@@ -13,6 +13,7 @@ import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.io.preset.Presets;
 import org.counterpoise.io.sheet.SheetContent;
 import org.counterpoise.io.text.DesignReport;
+import org.counterpoise.io.text.ReportTable;
 import org.junit.jupiter.api.Test;
 
 /**
@@ -64,10 +65,11 @@ class ProjectIdentityTest {
                 "a project without identity prints as before");
         assertFalse(DesignReport.render(r).contains("\nProject\n"));
         SheetContent sheet = SheetContent.of(r, "", "2026-11-30", "C", null, id);
-        SheetContent.Section first = sheet.sections().get(0);
+        ReportTable.Section first = sheet.sections().get(0);
         assertEquals("Project", first.title());
-        assertEquals(List.of(new SheetContent.Row("Engineer", "R. Aberg", ""),
-                new SheetContent.Row("Client or site", "Plant 4", "")), first.rows());
+        // The sheet prints revision and date in its header, so its Project table has only these two.
+        assertEquals(List.of(List.of("Engineer", "R. Aberg", ""), List.of("Client or site", "Plant 4", "")),
+                first.rows().stream().map(row -> List.of(row.label(), row.value(), row.unit())).toList());
         assertFalse(SheetContent.of(r, "", "", "").sections().get(0).title().equals("Project"));
     }
 }

@@ -195,7 +195,9 @@ class CliTest {
         assertEquals(7, mc.get("seed").getAsInt());
         assertTrue(mc.get("p50").getAsDouble() <= mc.get("p90").getAsDouble());
         Run text = run("robustness", "presets/rooftop-fan-platform.json", "--samples", "200");
-        assertTrue(text.out().contains("Tolerance Monte Carlo (200 samples, seed 7)"), text.out());
+        assertTrue(text.out().contains("\nTolerance Monte Carlo of the peak in band\n"), text.out());
+        assertTrue(text.out().lines().anyMatch(l -> l.matches("  samples +200")), text.out());
+        assertTrue(text.out().lines().anyMatch(l -> l.matches("  seed +7")), text.out());
         Run bad = run("robustness", "presets/rooftop-fan-platform.json", "--samples", "0");
         assertEquals(2, bad.code());
         assertTrue(bad.err().contains("--samples: 0 is not allowed"), bad.err());

@@ -13,7 +13,10 @@ import java.awt.Robot;
 import java.awt.image.BufferedImage;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
+import java.util.Set;
 import java.util.concurrent.Callable;
 import java.util.concurrent.atomic.AtomicReference;
 import java.util.function.BooleanSupplier;
@@ -27,7 +30,11 @@ import org.counterpoise.core.units.Unit;
 import org.counterpoise.io.preset.Presets;
 import org.counterpoise.io.project.Project;
 import org.counterpoise.io.project.ProjectReader;
+import org.counterpoise.io.text.DesignContent;
 import org.counterpoise.io.text.QuantityFormat;
+import org.counterpoise.io.text.ReportSection.SectionId;
+import org.counterpoise.io.text.ReportTable;
+import org.counterpoise.io.text.ValueText;
 import org.counterpoise.ui.gui.wizard.WizardFrame;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeAll;
@@ -86,7 +93,22 @@ class WizardGuiTest {
         assertEquals(QuantityFormat.number(expected.absorber().mass(), 4), value(rows, "Absorber mass m2"));
         assertEquals(QuantityFormat.number(expected.absorber().damping(), 4), value(rows, "Damping coefficient c2"));
         assertEquals(QuantityFormat.number(Unit.MILLIMETRE.fromSi(expected.clearance()), 4),
-                value(rows, "Stroke clearance (x1.5 margin)"));
+                value(rows, "Clearance to leave (x1.50)"));
+        // The wizard's table renders the one report model: every row of its tables, with the same
+        // cells, what to build first and the inputs echoed last.
+        List<String[]> model = new ArrayList<>();
+        List<ReportTable.Section> tables = new ArrayList<>(ReportTable.of(DesignContent.of(expected), Set.of()));
+        for (ReportTable.Section section : tables) {
+            for (ReportTable.Row row : section.rows()) {
+                model.add(new String[] {row.label(), row.value(), ValueText.pretty(row.unit())});
+            }
+        }
+        assertEquals(model.size() + tables.size(), rows.size(), "one wizard row per model row and section");
+        for (String[] row : model) {
+            assertTrue(rows.stream().anyMatch(r -> Arrays.equals(r, row)), "wizard lacks " + row[0]);
+        }
+        assertTrue(rows.get(0)[0].endsWith(tables.stream().filter(t -> t.id() == SectionId.ABSORBER).findFirst()
+                .orElseThrow().title()), "the absorber to build comes first: " + rows.get(0)[0]);
         String[] names = {"1-structure", "2-disturbance", "3-goal", "4-result", "5-robustness", "6-sheet"};
         for (int i = 0; i < names.length; i++) {
             int step = i;

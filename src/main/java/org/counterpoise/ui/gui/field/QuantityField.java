@@ -26,6 +26,7 @@ import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.units.Unit;
 import org.counterpoise.io.project.QuantityInput;
 import org.counterpoise.io.text.TypedNumbers;
+import org.counterpoise.io.text.ValueText;
 import org.counterpoise.ui.gui.Themes;
 
 /**
@@ -362,6 +363,6 @@ public final class QuantityField extends JPanel {
 
     /** @param symbol unit symbol as typed in files @return as shown: N·s/m, m/s² */
     public static String pretty(String symbol) {
-        return symbol.replace("*", "\u00b7").replace("^2", "\u00b2");
+        return ValueText.pretty(symbol);
     }
 }

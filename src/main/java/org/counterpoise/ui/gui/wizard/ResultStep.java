@@ -1,18 +1,14 @@
 package org.counterpoise.ui.gui.wizard;
 
-import static org.counterpoise.core.units.Dimension.LENGTH;
-
 import java.awt.BorderLayout;
 import java.awt.Component;
-import java.awt.Dimension;
 import java.awt.FlowLayout;
 import java.awt.GridLayout;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
-import java.util.Locale;
-import javax.swing.BorderFactory;
+import java.util.Set;
 import javax.swing.JButton;
 import javax.swing.JComponent;
 import javax.swing.JFileChooser;
@@ -26,10 +22,6 @@ import javax.swing.JTextPane;
 import javax.swing.JToggleButton;
 import javax.swing.table.DefaultTableCellRenderer;
 import javax.swing.table.DefaultTableModel;
-import javax.swing.text.BadLocationException;
-import javax.swing.text.SimpleAttributeSet;
-import javax.swing.text.StyleConstants;
-import javax.swing.text.StyledDocument;
 import org.counterpoise.core.design.Cautions;
 import org.counterpoise.core.design.DesignCurves;
 import org.counterpoise.core.design.DesignResult;
@@ -40,17 +32,26 @@ import org.counterpoise.io.AtomicFiles;
 import org.counterpoise.io.chart.ChartFactory;
 import org.counterpoise.io.chart.ChartFiles;
 import org.counterpoise.io.project.Project;
-import org.counterpoise.io.sheet.SheetContent;
+import org.counterpoise.io.text.DesignContent;
 import org.counterpoise.io.text.DisplayUnits;
+import org.counterpoise.io.text.ReportContent;
+import org.counterpoise.io.text.ReportSection.SectionId;
+import org.counterpoise.io.text.ReportTable;
+import org.counterpoise.io.text.ValueText;
 import org.counterpoise.ui.gui.Themes;
 import org.counterpoise.ui.gui.field.QuantityField;
 import org.counterpoise.ui.gui.plot.ChartHost;
 import org.counterpoise.ui.gui.task.TaskRunner;
 import org.knowm.xchart.XYChart;
-import org.counterpoise.io.text.WarningText;
 
 /** Step 4: the absorber to build, and the response before and after. */
 final class ResultStep extends Step {
+    /** What to build and what it achieves first; the inputs echoed last. */
+    private static final List<SectionId> ORDER = List.of(SectionId.ABSORBER, SectionId.RESPONSE, SectionId.RMS,
+            SectionId.STROKE_AND_FORCES, SectionId.DESIGN, SectionId.TOLERANCE, SectionId.ALTERNATIVE,
+            SectionId.STRUCTURE, SectionId.DISTURBANCE, SectionId.PROJECT, SectionId.MONTE_CARLO);
+    /** Each table row's source and caution, shown under the pointer on its label. */
+    private final List<String> rowNotes = new ArrayList<>();
     private final DefaultTableModel table = new DefaultTableModel(new String[] {"Quantity", "Value", "Unit"}, 0) {
         @Override
         public boolean isCellEditable(int row, int column) {
@@ -80,11 +81,12 @@ final class ResultStep extends Step {
         t.getColumnModel().getColumn(2).setPreferredWidth(60);
         // A cell too narrow for its text still shows it whole under the pointer.
         t.setDefaultRenderer(Object.class, wholeUnderPointer(JLabel.LEFT));
+        t.getColumnModel().getColumn(0).setCellRenderer(labelWithNote());
         t.getColumnModel().getColumn(1).setCellRenderer(wholeUnderPointer(JLabel.RIGHT));
         notes.setName("result.notes");
         notes.setEditable(false);
         notes.setOpaque(false);
-        notes.setBorder(BorderFactory.createEmptyBorder(4, 4, 4, 4));
+        notes.setBorder(javax.swing.BorderFactory.createEmptyBorder(4, 4, 4, 4));
         writeNotes(List.of());
         JScrollPane notesScroll = new JScrollPane(notes);
         notesScroll.setName("result.notes.scroll");
@@ -92,17 +94,17 @@ final class ResultStep extends Step {
         notesScroll.setHorizontalScrollBarPolicy(JScrollPane.HORIZONTAL_SCROLLBAR_NEVER);
         // Warnings and cautions are sentences: wrapped in their own pane, never cut off in a table cell.
         JScrollPane tableScroll = new JScrollPane(t);
-        tableScroll.setPreferredSize(new Dimension(470, 330));
-        tableScroll.setMinimumSize(new Dimension(300, 120));
-        notesScroll.setPreferredSize(new Dimension(470, 220));
-        notesScroll.setMinimumSize(new Dimension(300, 100));
+        tableScroll.setPreferredSize(new java.awt.Dimension(470, 330));
+        tableScroll.setMinimumSize(new java.awt.Dimension(300, 120));
+        notesScroll.setPreferredSize(new java.awt.Dimension(470, 220));
+        notesScroll.setMinimumSize(new java.awt.Dimension(300, 100));
         JSplitPane left = new JSplitPane(JSplitPane.VERTICAL_SPLIT, tableScroll, notesScroll);
         left.setResizeWeight(0.6);
         left.setBorder(null);
         JPanel charts = new JPanel(new GridLayout(2, 1, 0, 6));
         charts.add(responseChart);
         charts.add(strokeChart);
-        charts.setMinimumSize(new Dimension(360, 300));
+        charts.setMinimumSize(new java.awt.Dimension(360, 300));
         JPanel controls = new JPanel(new FlowLayout(FlowLayout.LEFT, 6, 2));
         logAxis.setName("result.log");
         logAxis.setMnemonic('l');
@@ -167,6 +169,7 @@ final class ResultStep extends Step {
     void show(DesignResult r, DesignCurves c) {
         result = r;
         table.setRowCount(0);
+        rowNotes.clear();
         if (r == null) {
             curves = null;
             writeNotes(List.of());
@@ -175,31 +178,30 @@ final class ResultStep extends Step {
             return;
         }
         curves = c;
-        SheetContent content = SheetContent.of(r, "", "", "");
-        List<SheetContent.Section> sections = new ArrayList<>(content.sections());
+        ReportContent content = DesignContent.of(r);
+        List<ReportTable.Section> sections = new ArrayList<>(ReportTable.of(content, Set.of()));
         if (r.rms().isPresent()) {
             // Under white noise the design is judged by rms values: they stand in for the harmonic peaks.
-            sections.removeIf(sec -> sec.title().equals(SheetContent.PEAKS_AT_FREQUENCY)
-                    || sec.title().equals(SheetContent.PEAKS_IN_BAND));
+            sections.removeIf(sec -> sec.id() == SectionId.RESPONSE);
         }
-        // What to build and what it achieves first; the inputs echoed last.
-        sections.sort(Comparator.comparingInt(sec -> sec.title().startsWith("Absorber") ? 0
-                : sec.title().contains("response") || sec.title().contains("Response") ? 1
-                : sec.title().startsWith("Design") ? 2 : sec.title().startsWith("Robust") ? 3 : 4));
-        for (SheetContent.Section section : sections) {
+        sections.sort(Comparator.comparingInt(sec -> ORDER.indexOf(sec.id())));
+        rowNotes.clear();
+        for (ReportTable.Section section : sections) {
             table.addRow(new Object[] {"\u2014 " + section.title(), "", ""});
-            for (SheetContent.Row row : section.rows()) {
-                table.addRow(new Object[] {row.label(), row.value(), QuantityField.pretty(row.unit())});
+            rowNotes.add("");
+            for (ReportTable.Row row : section.rows()) {
+                table.addRow(new Object[] {row.label(), row.value(), ValueText.pretty(row.unit())});
+                rowNotes.add(row.note());
             }
         }
-        writeNotes(r.warnings().stream().map(WarningText::of).toList());
+        writeNotes(content.warnings().stream().map(ReportContent.Note::text).toList());
         redraw();
     }
 
-    private static DefaultTableCellRenderer wholeUnderPointer(int alignment) {
-        DefaultTableCellRenderer r = new DefaultTableCellRenderer() {
+    private static javax.swing.table.DefaultTableCellRenderer wholeUnderPointer(int alignment) {
+        javax.swing.table.DefaultTableCellRenderer r = new javax.swing.table.DefaultTableCellRenderer() {
             @Override
-            public Component getTableCellRendererComponent(JTable table, Object value, boolean selected,
+            public java.awt.Component getTableCellRendererComponent(JTable table, Object value, boolean selected,
                     boolean focus, int row, int column) {
                 JLabel l = (JLabel) super.getTableCellRendererComponent(table, value, selected, focus, row, column);
                 l.setToolTipText(value == null || value.toString().isEmpty() ? null : value.toString());
@@ -210,14 +212,30 @@ final class ResultStep extends Step {
         return r;
     }
 
+    /** The label cell: under the pointer, the row's source and caution (or the whole label when it has none). */
+    private DefaultTableCellRenderer labelWithNote() {
+        return new DefaultTableCellRenderer() {
+            @Override
+            public Component getTableCellRendererComponent(JTable table, Object value, boolean selected,
+                    boolean focus, int row, int column) {
+                JLabel l = (JLabel) super.getTableCellRendererComponent(table, value, selected, focus, row, column);
+                int model = table.convertRowIndexToModel(row);
+                String note = model < rowNotes.size() ? rowNotes.get(model) : "";
+                String text = value == null ? "" : value.toString();
+                l.setToolTipText(!note.isEmpty() ? text + ": " + note : text.isEmpty() ? null : text);
+                return l;
+            }
+        };
+    }
+
     /** Writes the design's warnings (first, in the problem colour) and the standing cautions, wrapped. */
     private void writeNotes(List<String> warnings) {
-        StyledDocument doc = notes.getStyledDocument();
-        SimpleAttributeSet heading = new SimpleAttributeSet();
-        StyleConstants.setBold(heading, true);
-        SimpleAttributeSet warning = new SimpleAttributeSet();
-        StyleConstants.setForeground(warning, Themes.problemColour());
-        SimpleAttributeSet plain = new SimpleAttributeSet();
+        javax.swing.text.StyledDocument doc = notes.getStyledDocument();
+        javax.swing.text.SimpleAttributeSet heading = new javax.swing.text.SimpleAttributeSet();
+        javax.swing.text.StyleConstants.setBold(heading, true);
+        javax.swing.text.SimpleAttributeSet warning = new javax.swing.text.SimpleAttributeSet();
+        javax.swing.text.StyleConstants.setForeground(warning, Themes.problemColour());
+        javax.swing.text.SimpleAttributeSet plain = new javax.swing.text.SimpleAttributeSet();
         try {
             doc.remove(0, doc.getLength());
             if (!warnings.isEmpty()) {
@@ -230,7 +248,7 @@ final class ResultStep extends Step {
             doc.insertString(doc.getLength(), "Cautions\n", heading);
             doc.insertString(doc.getLength(), String.join("\n", Cautions.STANDARD.stream().map(c -> "\u2022 " + c)
                     .toList()), plain);
-        } catch (BadLocationException e) {
+        } catch (javax.swing.text.BadLocationException e) {
             throw new IllegalStateException("bug: writing at the end of the notes", e);
         }
         notes.setCaretPosition(0);
@@ -259,11 +277,11 @@ final class ResultStep extends Step {
         SystemResponse fitted = new SystemResponse(study.structure(), result.tuning(), study.excitation().kind(),
                 study.excitation().amplitude());
         ResponseKind k = study.response();
-        readout.setText(String.format(Locale.ROOT, "At %.4g Hz:  without %s,  with %s,  stroke %s", hz,
+        readout.setText(String.format(java.util.Locale.ROOT, "At %.4g Hz:  without %s,  with %s,  stroke %s", hz,
                 pretty(DisplayUnits.format(bare.amplitudeAt(k, w), k.dimension())),
                 pretty(DisplayUnits.format(fitted.amplitudeAt(k, w), k.dimension())),
                 DisplayUnits.format(fitted.amplitudeAt(ResponseKind.STROKE, w),
-                        LENGTH)));
+                        org.counterpoise.core.units.Dimension.LENGTH)));
     }
 
     String readout() {

@@ -29,8 +29,13 @@ import org.counterpoise.io.chart.RobustnessCharts;
 import org.counterpoise.io.project.Project;
 import org.counterpoise.io.project.RobustnessInput;
 import org.counterpoise.io.project.ToleranceKey;
-import org.counterpoise.io.text.DisplayUnits;
 import org.counterpoise.io.text.QuantityFormat;
+import org.counterpoise.io.text.ReportContent;
+import org.counterpoise.io.text.ReportKey;
+import org.counterpoise.io.text.ReportRow;
+import org.counterpoise.io.text.ReportValue;
+import org.counterpoise.io.text.RobustnessContent;
+import org.counterpoise.io.text.ValueText;
 import org.counterpoise.io.text.UnitChoices;
 import org.counterpoise.ui.gui.document.ProjectEdits;
 import org.counterpoise.ui.gui.field.Form;
@@ -245,20 +250,30 @@ final class RobustnessStep extends Step {
             summary.setText(" ");
             return;
         }
-        var unitDim = design.study().response().dimension();
         MonteCarloResult mc = r.monteCarlo();
-        summaryHtml = ("Worst case of this design <b>" + DisplayUnits.format(r.worstCase().peak(), unitDim)
-                + "</b>; robust design (f " + QuantityFormat.number(r.robust().tuning().tuningRatio(), 4) + ", \u03b6a "
-                + QuantityFormat.number(r.robust().tuning().dampingRatio(), 3) + ") <b>"
-                + DisplayUnits.format(r.robust().worstCase().peak(), unitDim) + "</b>. Monte Carlo P50 / P95: "
-                + DisplayUnits.format(mc.p50(), unitDim) + " / " + DisplayUnits.format(mc.p95(), unitDim)
-                + (mc.probabilityExceeding().isEmpty() || mc.target().isEmpty() ? "" : "; above the target of "
-                        + DisplayUnits.format(mc.target().getAsDouble(), unitDim) + ": "
-                        + QuantityFormat.number(100 * mc.probabilityExceeding().getAsDouble(), 3) + " %"));
+        // The figures are the robustness report's rows, in its words for values.
+        ReportContent c = RobustnessContent.of(design, r);
+        ReportRow exceeding = c.row(ReportKey.MONTE_CARLO_EXCEEDING).orElseThrow();
+        summaryHtml = "Worst case of this design <b>" + value(c, ReportKey.WORST_CASE_PEAK)
+                + "</b>; robust design (f " + value(c, ReportKey.ROBUST_TUNING_RATIO) + ", \u03b6a "
+                + value(c, ReportKey.ROBUST_ABSORBER_DAMPING_RATIO) + ") <b>" + value(c, ReportKey.ROBUST_PEAKS)
+                + "</b>. Monte Carlo P50 / P95: " + value(c, ReportKey.MONTE_CARLO_P50_P90) + " / "
+                + value(c, ReportKey.MONTE_CARLO_P95_P99) + (exceeding.shown() ? "; above the target of "
+                        + value(c, ReportKey.TARGET) + ": " + value(c, ReportKey.MONTE_CARLO_EXCEEDING) : "");
         wrapSummary();
         sensitivity.show(theme -> RobustnessCharts.sensitivity(design, r, theme, 420, 320));
         histogram.show(theme -> MonteCarloCharts.histogram(design, mc, theme, 420, 320));
         mapHolder.show(theme -> RobustnessCharts.map(design, r, theme, 520, 480, 3));
+    }
+
+    /**
+     * @param c a report
+     * @param key one of its rows
+     * @return the value in the report's words (the first of a pair)
+     */
+    private static String value(ReportContent c, ReportKey key) {
+        ReportValue v = c.row(key).orElseThrow().value();
+        return ValueText.inline(v instanceof ReportValue.Pair p ? p.first() : v);
     }
 
     /** Wraps the summary to the width it is given (an HTML label wraps only at a width it is given). */

@@ -1,0 +1,125 @@
+package org.counterpoise.io.export;
+
+import com.google.gson.JsonObject;
+import java.util.List;
+import org.counterpoise.core.units.Dimension;
+import org.counterpoise.core.units.Unit;
+import org.counterpoise.io.text.ReportContent;
+import org.counterpoise.io.text.ReportKey;
+import org.counterpoise.io.text.ReportRow;
+import org.counterpoise.io.text.ReportValue;
+import org.counterpoise.io.text.ReportValue.Change;
+import org.counterpoise.io.text.ReportValue.Count;
+import org.counterpoise.io.text.ReportValue.Factor;
+import org.counterpoise.io.text.ReportValue.Level;
+import org.counterpoise.io.text.ReportValue.NotApplicable;
+import org.counterpoise.io.text.ReportValue.Pair;
+import org.counterpoise.io.text.ReportValue.PeakAt;
+import org.counterpoise.io.text.ReportValue.Percent;
+import org.counterpoise.io.text.ReportValue.Quantity;
+import org.counterpoise.io.text.ReportValue.Reduction;
+import org.counterpoise.io.text.ReportValue.Series;
+import org.counterpoise.io.text.ReportValue.Tolerance;
+import org.counterpoise.io.text.ReportValue.Unbounded;
+import org.counterpoise.io.text.ReportValue.Words;
+
+/**
+ * Report rows into JSON, the one way the design and robustness JSON write them: each row's value
+ * under its {@link ReportKey}'s JSON keys, in the order of that table; a key {@code a.b} goes
+ * into the object {@code a}. Frequencies are in Hz (the keys say _Hz), everything else in SI; an
+ * unbounded value is null with {@code <key>_unbounded: true} and a value that does not apply is
+ * null ({@link JsonNumbers}).
+ */
+final class ReportJson {
+    private ReportJson() {
+    }
+
+    /**
+     * @param o the object to fill
+     * @param content the report whose rows are written
+     */
+    static void put(JsonObject o, ReportContent content) {
+        for (ReportKey key : ReportKey.values()) {
+            if (!key.jsonKeys().isEmpty()) {
+                content.row(key).ifPresent(row -> write(o, row));
+            }
+        }
+    }
+
+    private static void write(JsonObject o, ReportRow row) {
+        List<String> keys = row.key().jsonKeys();
+        ReportValue v = row.value();
+        if (v instanceof Pair p) {
+            write(o, keys.get(0), p.first());
+            write(o, keys.get(1), p.second());
+        } else if (v instanceof Reduction r) {
+            write(o, keys.get(0), r.before());
+            write(o, keys.get(1), r.after());
+            write(o, keys.get(2), number(r.factor()));
+        } else if (v instanceof Tolerance t) {
+            write(o, keys.get(0), number(t.range().low().orElse(Double.NaN)));
+            write(o, keys.get(1), number(t.range().high().orElse(Double.NaN)));
+            if (t.range().ofBareResponse() && keys.size() > 2) {
+                write(o, keys.get(2), new Words("below allowance times bare structure response", List.of()));
+            }
+        } else if (v instanceof Words w && !w.ids().isEmpty()) {
+            for (int i = 0; i < keys.size(); i++) {
+                write(o, keys.get(i), new Words(w.ids().get(i), List.of()));
+            }
+        } else {
+            write(o, keys.get(0), v);
+        }
+    }
+
+    private static void write(JsonObject root, String path, ReportValue v) {
+        int dot = path.indexOf('.');
+        JsonObject o = root;
+        String key = path;
+        if (dot > 0) {
+            String parent = path.substring(0, dot);
+            if (!root.has(parent)) {
+                root.add(parent, new JsonObject());
+            }
+            o = root.getAsJsonObject(parent);
+            key = path.substring(dot + 1);
+        }
+        if (v instanceof Quantity q) {
+            JsonNumbers.put(o, key, json(q.si(), q.dimension()));
+        } else if (v instanceof Unbounded) {
+            JsonNumbers.put(o, key, Double.POSITIVE_INFINITY);
+        } else if (v instanceof NotApplicable) {
+            JsonNumbers.put(o, key, Double.NaN);
+        } else if (v instanceof Words w) {
+            o.addProperty(key, w.text());
+        } else if (v instanceof Level l) {
+            JsonNumbers.put(o, key, l.value());
+        } else if (v instanceof Percent p) {
+            JsonNumbers.put(o, key, p.fraction());
+        } else if (v instanceof Series s) {
+            JsonNumbers.putAll(o, key, s.si().stream().mapToDouble(x -> json(x, s.dimension())).toArray());
+        } else if (v instanceof Change c) {
+            JsonNumbers.put(o, key, c.factor());
+        } else if (v instanceof Factor f) {
+            JsonNumbers.put(o, key, f.factor());
+        } else if (v instanceof Count c) {
+            o.addProperty(key, c.value());
+        } else if (v instanceof PeakAt p) {
+            write(o, key, p.peak());
+        } else {
+            throw new IllegalStateException("bug: no JSON form for " + v + " under " + key);
+        }
+    }
+
+    /** The JSON's units: frequencies in Hz (the keys say _Hz), everything else in SI. */
+    private static double json(double si, Dimension d) {
+        return d == Dimension.FREQUENCY ? Unit.HERTZ.fromSi(si) : si;
+    }
+
+    /** A plain number (a factor): null when not defined, null and unbounded when infinite. */
+    private static ReportValue number(double v) {
+        if (Double.isNaN(v)) {
+            return new NotApplicable();
+        }
+        return Double.isInfinite(v) ? new Unbounded(Dimension.RATIO, "") : new Quantity(v, Dimension.RATIO, 4);
+    }
+}

@@ -1,0 +1,51 @@
+package org.counterpoise.io.text;
+
+import java.util.List;
+import java.util.Optional;
+import org.counterpoise.io.text.ReportSection.SectionId;
+
+/**
+ * The one report model: what a design reports, in which sections, with which words, built once
+ * from the core results ({@link DesignContent}) and rendered by the text report
+ * ({@link DesignReport}), the JSON ({@code io.export.ResultJson}), the PDF sheet
+ * ({@code io.sheet.SheetContent}) and the wizard's result table (all tables through
+ * {@link ReportTable}). A quantity added here appears in all of them.
+ *
+ * @param name the project name
+ * @param sections sections in print order
+ * @param warnings the design's warnings, in words, with their stable codes
+ * @param cautions the standing cautions
+ */
+public record ReportContent(String name, List<ReportSection> sections, List<Note> warnings, List<String> cautions) {
+
+    /** Defensive copies. */
+    public ReportContent {
+        sections = List.copyOf(sections);
+        warnings = List.copyOf(warnings);
+        cautions = List.copyOf(cautions);
+    }
+
+    /**
+     * @param id a section
+     * @return the section, if the report has it
+     */
+    public Optional<ReportSection> section(SectionId id) {
+        return sections.stream().filter(s -> s.id() == id).findFirst();
+    }
+
+    /**
+     * @param key a row key
+     * @return the row with that key, if the report has it
+     */
+    public Optional<ReportRow> row(ReportKey key) {
+        return sections.stream().flatMap(s -> s.rows().stream()).filter(r -> r.key() == key).findFirst();
+    }
+
+    /**
+     * A finding in words.
+     * @param code its stable code
+     * @param text the sentence
+     */
+    public record Note(String code, String text) {
+    }
+}

@@ -1,0 +1,57 @@
+package org.counterpoise.io.text;
+
+import java.util.List;
+import java.util.Optional;
+
+/**
+ * A section of the report.
+ *
+ * @param id which section, so renderers order and choose sections by type, never by title
+ * @param title heading
+ * @param rows rows in order
+ */
+public record ReportSection(SectionId id, String title, List<ReportRow> rows) {
+
+    /** Defensive copy. */
+    public ReportSection {
+        rows = List.copyOf(rows);
+    }
+
+    /**
+     * @param key a row key
+     * @return the row with that key, if this section has it
+     */
+    public Optional<ReportRow> row(ReportKey key) {
+        return rows.stream().filter(r -> r.key() == key).findFirst();
+    }
+
+    /** The sections a report can have, in the order the text report and the sheet print them. */
+    public enum SectionId {
+        /** revision, date, engineer, client or site */
+        PROJECT,
+        /** the structure's effective values at the absorber point */
+        STRUCTURE,
+        /** the disturbance */
+        DISTURBANCE,
+        /** the method and the non-dimensional design */
+        DESIGN,
+        /** the absorber to build */
+        ABSORBER,
+        /** harmonic peaks without and with the absorber */
+        RESPONSE,
+        /** root-mean-square responses to a white-noise disturbance */
+        RMS,
+        /** absorber stroke and forces */
+        STROKE_AND_FORCES,
+        /** how far structure and absorber may be off-tune */
+        TOLERANCE,
+        /** a change of the structure that would do as well */
+        ALTERNATIVE,
+        /** the tolerance Monte Carlo of the peak in band */
+        MONTE_CARLO,
+        /** what a robustness study examines: the design, the response, the expected mistuning */
+        ROBUSTNESS_STUDY,
+        /** the worst case of the design, and the robust design at the same mass */
+        WORST_CASE
+    }
+}

@@ -1,0 +1,70 @@
+package org.counterpoise.io.text;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Set;
+import org.counterpoise.io.text.ReportSection.SectionId;
+
+/**
+ * The report as tables of label, value and unit cells: what the PDF sheet and the wizard's result
+ * table show. Labels are capitalised and carry their symbols; the cells come from {@link ValueText}.
+ */
+public final class ReportTable {
+    private ReportTable() {
+    }
+
+    /**
+     * One table.
+     * @param id the section it shows
+     * @param title its heading
+     * @param rows its rows
+     */
+    public record Section(SectionId id, String title, List<Row> rows) {
+        /** Defensive copy. */
+        public Section {
+            rows = List.copyOf(rows);
+        }
+    }
+
+    /**
+     * One row of a table.
+     * @param key the report row it shows
+     * @param label what it is, capitalised, with its symbol
+     * @param value the value as printed
+     * @param unit the unit symbol as typed ({@link ValueText#pretty} for print), or empty
+     * @param textual true when the value is words (left-aligned, wrapped), false for a number
+     * @param note the row's source and caution, for a tooltip, or empty
+     */
+    public record Row(ReportKey key, String label, String value, String unit, boolean textual, String note) {
+    }
+
+    /**
+     * @param content the report
+     * @param leftOut rows the caller shows elsewhere (the sheet prints revision and date in its header)
+     * @return its tables, in the report's order; a section left with no rows is dropped
+     */
+    public static List<Section> of(ReportContent content, Set<ReportKey> leftOut) {
+        List<Section> tables = new ArrayList<>();
+        for (ReportSection section : content.sections()) {
+            List<Row> rows = new ArrayList<>();
+            for (ReportRow row : section.rows()) {
+                if (row.shown() && !leftOut.contains(row.key())) {
+                    ValueText.Cells cells = ValueText.cells(row.value());
+                    rows.add(new Row(row.key(), ValueText.capitalised(row.labelWithSymbol()), cells.value(),
+                            cells.unit(), cells.textual(), note(row)));
+                }
+            }
+            if (!rows.isEmpty()) {
+                tables.add(new Section(section.id(), section.title(), rows));
+            }
+        }
+        return tables;
+    }
+
+    private static String note(ReportRow row) {
+        if (row.source().isEmpty() || row.caution().isEmpty()) {
+            return row.source().isEmpty() ? ValueText.capitalised(row.caution()) : "Source: " + row.source();
+        }
+        return "Source: " + row.source() + ". " + ValueText.capitalised(row.caution());
+    }
+}
