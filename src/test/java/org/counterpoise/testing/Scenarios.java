@@ -1,5 +1,6 @@
 package org.counterpoise.testing;
 
+import java.util.OptionalDouble;
 import org.counterpoise.core.design.DesignMethod;
 import org.counterpoise.core.model.ExcitationKind;
 import org.counterpoise.core.response.ResponseKind;
@@ -24,7 +25,7 @@ public final class Scenarios {
                 new QuantityInput(860, Unit.REV_PER_MINUTE), Double.NaN, Double.NaN, null, 1,
                 new QuantityInput(12, Unit.RPM_PER_SECOND),
                 SpectrumInput.whiteNoise(2.5, SpectralDensityUnit.KILONEWTON_SQUARED_PER_HERTZ));
-        AbsorberInput a = new AbsorberInput(0.05, null, DesignMethod.MINIMUM_VARIANCE, ResponseKind.DISPLACEMENT,
+        AbsorberInput a = new AbsorberInput(OptionalDouble.of(0.05), null, DesignMethod.MINIMUM_VARIANCE, ResponseKind.DISPLACEMENT,
                 false, 1.5);
         return new Project(base.name(), base.notes(), base.structure(), d, a, base.robustness(), base.identity());
     }

@@ -121,7 +121,7 @@ class ReportContentTest {
         m.put(ReportKey.ABSORBER_STIFFNESS, List.of(r.absorber().stiffness()));
         m.put(ReportKey.ABSORBER_DAMPING, List.of(r.absorber().damping()));
         m.put(ReportKey.ABSORBER_FREQUENCY, List.of(r.absorber().naturalFrequency()));
-        m.put(ReportKey.STATIC_SAG, List.of(r.staticSag()));
+        m.put(ReportKey.STATIC_SAG, List.of(r.staticSag().orElse(Double.NaN)));
         double[] w = r.coupledNaturalFrequencies();
         m.put(ReportKey.COUPLED_FREQUENCIES, List.of(w[0], w[1]));
         m.put(ReportKey.DISPLACEMENT_PEAKS, peaks(r, ResponseKind.DISPLACEMENT));
@@ -138,15 +138,15 @@ class ReportContentTest {
         m.put(ReportKey.ABSORBER_FORCE, List.of(r.absorberForce().value()));
         r.rms().ifPresent(rms -> rms(m, rms));
         m.put(ReportKey.TOLERANCE_ALLOWANCE, List.of(DesignResult.TOLERANCE_ALLOWANCE));
-        m.put(ReportKey.TOLERATED_STRUCTURE_FREQUENCY, List.of(r.structureTolerance().low(),
-                r.structureTolerance().high()));
-        m.put(ReportKey.TOLERATED_ABSORBER_FREQUENCY, List.of(r.absorberTolerance().low(), r.absorberTolerance().high()));
-        m.put(ReportKey.TOLERATED_SPRING_RATE, List.of(r.absorberTolerance().low(), r.absorberTolerance().high()));
+        m.put(ReportKey.TOLERATED_STRUCTURE_FREQUENCY, List.of(r.structureTolerance().low().orElse(Double.NaN),
+                r.structureTolerance().high().orElse(Double.NaN)));
+        m.put(ReportKey.TOLERATED_ABSORBER_FREQUENCY, List.of(r.absorberTolerance().low().orElse(Double.NaN), r.absorberTolerance().high().orElse(Double.NaN)));
+        m.put(ReportKey.TOLERATED_SPRING_RATE, List.of(r.absorberTolerance().low().orElse(Double.NaN), r.absorberTolerance().high().orElse(Double.NaN)));
         m.put(ReportKey.DETUNING_TARGET, List.of(r.detuning().target()));
-        m.put(ReportKey.STIFFER, List.of(r.detuning().raiseFactor()));
-        m.put(ReportKey.SOFTER, List.of(r.detuning().lowerFactor()));
-        m.put(ReportKey.LIGHTER, List.of(r.massDetuning().raiseFactor()));
-        m.put(ReportKey.HEAVIER, List.of(r.massDetuning().lowerFactor()));
+        m.put(ReportKey.STIFFER, List.of(r.detuning().raiseFactor().orElse(Double.NaN)));
+        m.put(ReportKey.SOFTER, List.of(r.detuning().lowerFactor().orElse(Double.NaN)));
+        m.put(ReportKey.LIGHTER, List.of(r.massDetuning().raiseFactor().orElse(Double.NaN)));
+        m.put(ReportKey.HEAVIER, List.of(r.massDetuning().lowerFactor().orElse(Double.NaN)));
         mc.ifPresent(c -> monteCarlo(m, c));
         return m;
     }
@@ -158,7 +158,7 @@ class ReportContentTest {
         m.put(ReportKey.MONTE_CARLO_P50_P90, List.of(c.p50(), c.p90()));
         m.put(ReportKey.MONTE_CARLO_P95_P99, List.of(c.p95(), c.p99()));
         m.put(ReportKey.MONTE_CARLO_RANGE, List.of(c.min(), c.max()));
-        m.put(ReportKey.MONTE_CARLO_EXCEEDING, List.of(c.probabilityExceeding()));
+        m.put(ReportKey.MONTE_CARLO_EXCEEDING, List.of(c.probabilityExceeding().orElse(Double.NaN)));
     }
 
     /** The core figures of a robustness study's rows, from its result's own fields. */
@@ -166,7 +166,7 @@ class ReportContentTest {
         Map<ReportKey, List<Double>> m = new EnumMap<>(ReportKey.class);
         m.put(ReportKey.STRUCTURE_MISTUNING, List.of(r.settings().structureRange()));
         m.put(ReportKey.ABSORBER_MISTUNING, List.of(r.settings().absorberRange()));
-        m.put(ReportKey.TARGET, List.of(r.settings().target()));
+        m.put(ReportKey.TARGET, List.of(r.settings().target().orElse(Double.NaN)));
         m.put(ReportKey.NOMINAL_PEAK, List.of(design.responseAfter().value()));
         m.put(ReportKey.WORST_CASE_PEAK, List.of(r.worstCase().peak()));
         m.put(ReportKey.WORST_CASE_AT, List.of(r.worstCase().structureFactor(), r.worstCase().absorberFactor()));
@@ -175,7 +175,9 @@ class ReportContentTest {
         m.put(ReportKey.ROBUST_ABSORBER_STIFFNESS, List.of(r.robustAbsorber().stiffness()));
         m.put(ReportKey.ROBUST_ABSORBER_DAMPING, List.of(r.robustAbsorber().damping()));
         m.put(ReportKey.ROBUST_PEAKS, List.of(r.robust().worstCase().peak(), r.robust().nominalPeak()));
-        m.put(ReportKey.TOLERATED_FOR_TARGET, List.of(r.toleratedForTarget().low(), r.toleratedForTarget().high()));
+        m.put(ReportKey.TOLERATED_FOR_TARGET, List.of(
+                r.toleratedForTarget().map(t -> t.low().orElse(Double.NaN)).orElse(Double.NaN),
+                r.toleratedForTarget().map(t -> t.high().orElse(Double.NaN)).orElse(Double.NaN)));
         monteCarlo(m, r.monteCarlo());
         return m;
     }
@@ -249,8 +251,8 @@ class ReportContentTest {
         } else if (v instanceof Series s) {
             s.si().forEach(x -> out.add(new Figure(x, s.dimension())));
         } else if (v instanceof Tolerance t) {
-            out.add(new Figure(t.range().low(), Dimension.RATIO));
-            out.add(new Figure(t.range().high(), Dimension.RATIO));
+            out.add(new Figure(t.range().low().orElse(Double.NaN), Dimension.RATIO));
+            out.add(new Figure(t.range().high().orElse(Double.NaN), Dimension.RATIO));
         } else if (v instanceof Reduction r) {
             out.addAll(figures(r.before()));
             out.addAll(figures(r.after()));

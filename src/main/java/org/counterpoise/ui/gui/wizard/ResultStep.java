@@ -1,5 +1,14 @@
 package org.counterpoise.ui.gui.wizard;
 
+import static org.counterpoise.core.units.Dimension.LENGTH;
+
+import java.awt.Dimension;
+import java.util.Locale;
+import javax.swing.BorderFactory;
+import javax.swing.text.BadLocationException;
+import javax.swing.text.SimpleAttributeSet;
+import javax.swing.text.StyleConstants;
+import javax.swing.text.StyledDocument;
 import java.awt.BorderLayout;
 import java.awt.Component;
 import java.awt.FlowLayout;
@@ -86,7 +95,7 @@ final class ResultStep extends Step {
         notes.setName("result.notes");
         notes.setEditable(false);
         notes.setOpaque(false);
-        notes.setBorder(javax.swing.BorderFactory.createEmptyBorder(4, 4, 4, 4));
+        notes.setBorder(BorderFactory.createEmptyBorder(4, 4, 4, 4));
         writeNotes(List.of());
         JScrollPane notesScroll = new JScrollPane(notes);
         notesScroll.setName("result.notes.scroll");
@@ -94,17 +103,17 @@ final class ResultStep extends Step {
         notesScroll.setHorizontalScrollBarPolicy(JScrollPane.HORIZONTAL_SCROLLBAR_NEVER);
         // Warnings and cautions are sentences: wrapped in their own pane, never cut off in a table cell.
         JScrollPane tableScroll = new JScrollPane(t);
-        tableScroll.setPreferredSize(new java.awt.Dimension(470, 330));
-        tableScroll.setMinimumSize(new java.awt.Dimension(300, 120));
-        notesScroll.setPreferredSize(new java.awt.Dimension(470, 220));
-        notesScroll.setMinimumSize(new java.awt.Dimension(300, 100));
+        tableScroll.setPreferredSize(new Dimension(470, 330));
+        tableScroll.setMinimumSize(new Dimension(300, 120));
+        notesScroll.setPreferredSize(new Dimension(470, 220));
+        notesScroll.setMinimumSize(new Dimension(300, 100));
         JSplitPane left = new JSplitPane(JSplitPane.VERTICAL_SPLIT, tableScroll, notesScroll);
         left.setResizeWeight(0.6);
         left.setBorder(null);
         JPanel charts = new JPanel(new GridLayout(2, 1, 0, 6));
         charts.add(responseChart);
         charts.add(strokeChart);
-        charts.setMinimumSize(new java.awt.Dimension(360, 300));
+        charts.setMinimumSize(new Dimension(360, 300));
         JPanel controls = new JPanel(new FlowLayout(FlowLayout.LEFT, 6, 2));
         logAxis.setName("result.log");
         logAxis.setMnemonic('l');
@@ -198,10 +207,10 @@ final class ResultStep extends Step {
         redraw();
     }
 
-    private static javax.swing.table.DefaultTableCellRenderer wholeUnderPointer(int alignment) {
-        javax.swing.table.DefaultTableCellRenderer r = new javax.swing.table.DefaultTableCellRenderer() {
+    private static DefaultTableCellRenderer wholeUnderPointer(int alignment) {
+        DefaultTableCellRenderer r = new DefaultTableCellRenderer() {
             @Override
-            public java.awt.Component getTableCellRendererComponent(JTable table, Object value, boolean selected,
+            public Component getTableCellRendererComponent(JTable table, Object value, boolean selected,
                     boolean focus, int row, int column) {
                 JLabel l = (JLabel) super.getTableCellRendererComponent(table, value, selected, focus, row, column);
                 l.setToolTipText(value == null || value.toString().isEmpty() ? null : value.toString());
@@ -230,12 +239,12 @@ final class ResultStep extends Step {
 
     /** Writes the design's warnings (first, in the problem colour) and the standing cautions, wrapped. */
     private void writeNotes(List<String> warnings) {
-        javax.swing.text.StyledDocument doc = notes.getStyledDocument();
-        javax.swing.text.SimpleAttributeSet heading = new javax.swing.text.SimpleAttributeSet();
-        javax.swing.text.StyleConstants.setBold(heading, true);
-        javax.swing.text.SimpleAttributeSet warning = new javax.swing.text.SimpleAttributeSet();
-        javax.swing.text.StyleConstants.setForeground(warning, Themes.problemColour());
-        javax.swing.text.SimpleAttributeSet plain = new javax.swing.text.SimpleAttributeSet();
+        StyledDocument doc = notes.getStyledDocument();
+        SimpleAttributeSet heading = new SimpleAttributeSet();
+        StyleConstants.setBold(heading, true);
+        SimpleAttributeSet warning = new SimpleAttributeSet();
+        StyleConstants.setForeground(warning, Themes.problemColour());
+        SimpleAttributeSet plain = new SimpleAttributeSet();
         try {
             doc.remove(0, doc.getLength());
             if (!warnings.isEmpty()) {
@@ -248,7 +257,7 @@ final class ResultStep extends Step {
             doc.insertString(doc.getLength(), "Cautions\n", heading);
             doc.insertString(doc.getLength(), String.join("\n", Cautions.STANDARD.stream().map(c -> "\u2022 " + c)
                     .toList()), plain);
-        } catch (javax.swing.text.BadLocationException e) {
+        } catch (BadLocationException e) {
             throw new IllegalStateException("bug: writing at the end of the notes", e);
         }
         notes.setCaretPosition(0);
@@ -277,11 +286,11 @@ final class ResultStep extends Step {
         SystemResponse fitted = new SystemResponse(study.structure(), result.tuning(), study.excitation().kind(),
                 study.excitation().amplitude());
         ResponseKind k = study.response();
-        readout.setText(String.format(java.util.Locale.ROOT, "At %.4g Hz:  without %s,  with %s,  stroke %s", hz,
+        readout.setText(String.format(Locale.ROOT, "At %.4g Hz:  without %s,  with %s,  stroke %s", hz,
                 pretty(DisplayUnits.format(bare.amplitudeAt(k, w), k.dimension())),
                 pretty(DisplayUnits.format(fitted.amplitudeAt(k, w), k.dimension())),
                 DisplayUnits.format(fitted.amplitudeAt(ResponseKind.STROKE, w),
-                        org.counterpoise.core.units.Dimension.LENGTH)));
+                        LENGTH)));
     }
 
     String readout() {
