@@ -1,7 +1,9 @@
 package org.counterpoise.io.export;
 
 import com.google.gson.JsonArray;
+import com.google.gson.JsonNull;
 import com.google.gson.JsonObject;
+import java.util.Locale;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.RobustnessResult;
 import org.counterpoise.core.robust.MonteCarloResult;
@@ -42,7 +44,17 @@ public final class RobustnessJson {
         o.add("robust_structure_sensitivity", curve(r.robustStructureCurve()));
         o.add("absorber_sensitivity", curve(r.absorberCurve()));
         o.add("absorber_damping_sensitivity", curve(r.dampingCurve()));
-        MonteCarloResult mc = r.monteCarlo();
+        // A run that was not made is null, with the reason beside it (never a distribution of
+        // identical samples); docs/cli.md lists the reasons.
+        r.monteCarlo().result().ifPresentOrElse(mc -> o.add("monte_carlo", monteCarlo(mc)), () -> {
+            o.add("monte_carlo", JsonNull.INSTANCE);
+            o.addProperty("monte_carlo_not_run", r.monteCarlo().notRun().orElseThrow().name()
+                    .toLowerCase(Locale.ROOT).replace('_', '-'));
+        });
+        return JsonNumbers.write(o);
+    }
+
+    private static JsonObject monteCarlo(MonteCarloResult mc) {
         JsonObject m = new JsonObject();
         m.addProperty("samples", mc.samples());
         m.addProperty("seed", mc.seed());
@@ -60,8 +72,7 @@ public final class RobustnessJson {
             counts.add(c);
         }
         m.add("histogram_counts", counts);
-        o.add("monte_carlo", m);
-        return JsonNumbers.write(o);
+        return m;
     }
 
     private static JsonObject curve(SensitivityCurve c) {

@@ -2,6 +2,7 @@ package org.counterpoise.io.sheet;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 import org.counterpoise.core.design.Cautions;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.DesignStudy;
@@ -12,12 +13,15 @@ import org.counterpoise.core.model.Structure;
 import org.counterpoise.core.remedy.DetuningAlternative;
 import org.counterpoise.core.response.ResponseKind;
 import org.counterpoise.core.response.ResponsePeak;
+import org.counterpoise.core.robust.MonteCarloOutcome;
+import org.counterpoise.core.robust.MonteCarloResult;
 import org.counterpoise.core.units.Dimension;
 import org.counterpoise.core.units.Unit;
 import org.counterpoise.io.project.ProjectIdentity;
 import org.counterpoise.io.text.DesignReport;
 import org.counterpoise.io.text.DisplayUnits;
 import org.counterpoise.io.text.QuantityFormat;
+import org.counterpoise.io.text.RobustnessReport;
 
 /**
  * Everything the parameter sheet prints, as text, built from a design result. Kept apart from the
@@ -78,10 +82,10 @@ public record SheetContent(String projectName, String notes, String date, String
      * @param notes the project's notes, or empty
      * @param date date of issue
      * @param revision revision mark
-     * @return the sheet content
+     * @return the sheet content without the Monte Carlo section (the wizard's result table)
      */
     public static SheetContent of(DesignResult r, String notes, String date, String revision) {
-        return of(r, notes, date, revision, null);
+        return of(r, notes, date, revision, Optional.empty(), ProjectIdentity.EMPTY);
     }
 
     /**
@@ -89,26 +93,18 @@ public record SheetContent(String projectName, String notes, String date, String
      * @param notes the project's notes, or empty
      * @param date date of issue
      * @param revision revision mark
-     * @param monteCarlo a tolerance Monte Carlo of the design, or null when none was run
-     * @return the sheet content
-     */
-    public static SheetContent of(DesignResult r, String notes, String date, String revision,
-            org.counterpoise.core.robust.MonteCarloResult monteCarlo) {
-        return of(r, notes, date, revision, monteCarlo, ProjectIdentity.EMPTY);
-    }
-
-    /**
-     * @param r the design result
-     * @param notes the project's notes, or empty
-     * @param date date of issue
-     * @param revision revision mark
-     * @param monteCarlo a tolerance Monte Carlo of the design, or null when none was run
+     * @param monteCarlo the design's tolerance Monte Carlo, or why it was not run
      * @param identity the project's engineer and client or site, printed first when given (its
      *     revision and date are the caller's to pass as {@code revision} and {@code date})
      * @return the sheet content
      */
     public static SheetContent of(DesignResult r, String notes, String date, String revision,
-            org.counterpoise.core.robust.MonteCarloResult monteCarlo, ProjectIdentity identity) {
+            MonteCarloOutcome monteCarlo, ProjectIdentity identity) {
+        return of(r, notes, date, revision, Optional.of(monteCarlo), identity);
+    }
+
+    private static SheetContent of(DesignResult r, String notes, String date, String revision,
+            Optional<MonteCarloOutcome> outcome, ProjectIdentity identity) {
         DesignStudy study = r.study();
         Structure s = study.structure();
         Excitation e = study.excitation();
@@ -213,6 +209,9 @@ public record SheetContent(String projectName, String notes, String date, String
                 "mass")));
         sections.add(new Section("Robustness (peak in band rising by at most " + percent(DesignResult.TOLERANCE_ALLOWANCE)
                 + ") and the alternative", robust));
+        MonteCarloResult monteCarlo = outcome.flatMap(MonteCarloOutcome::result).orElse(null);
+        outcome.flatMap(MonteCarloOutcome::notRun).ifPresent(why -> sections.add(new Section(
+                "Tolerance Monte Carlo of the peak in band", List.of(text("Not run", RobustnessReport.notRun(why))))));
         if (monteCarlo != null) {
             Dimension rd = study.response().dimension();
             Unit ru = DisplayUnits.of(rd);

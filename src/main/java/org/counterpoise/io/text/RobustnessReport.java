@@ -4,6 +4,7 @@ import java.util.Locale;
 import org.counterpoise.core.design.Cautions;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.RobustnessResult;
+import org.counterpoise.core.robust.MonteCarloOutcome;
 import org.counterpoise.core.robust.MonteCarloResult;
 import org.counterpoise.core.robust.SensitivityCurve;
 import org.counterpoise.core.robust.WorstCase;
@@ -54,7 +55,17 @@ public final class RobustnessReport {
             out.append(String.format(Locale.ROOT, "  %-12s %-18s %s%n", signed(f[i]), DisplayUnits.format(a.peaks()[i], d),
                     DisplayUnits.format(b.peaks()[i], d)));
         }
-        MonteCarloResult mc = r.monteCarlo();
+        r.monteCarlo().result().ifPresentOrElse(mc -> monteCarlo(out, mc, d), () -> out
+                .append("\nTolerance Monte Carlo\n  ").append(notRun(r.monteCarlo().notRun().orElseThrow()))
+                .append('\n'));
+        out.append("\nCautions\n");
+        for (String c : Cautions.STANDARD) {
+            DesignReport.bullet(out, c);
+        }
+        return out.toString();
+    }
+
+    private static void monteCarlo(StringBuilder out, MonteCarloResult mc, Dimension d) {
         out.append("\nTolerance Monte Carlo (").append(mc.samples()).append(" samples, seed ").append(mc.seed())
                 .append(")\n");
         line(out, "mean", DisplayUnits.format(mc.mean(), d));
@@ -64,11 +75,18 @@ public final class RobustnessReport {
         if (!Double.isNaN(mc.probabilityExceeding())) {
             line(out, "probability above target", QuantityFormat.number(100 * mc.probabilityExceeding(), 3) + " %");
         }
-        out.append("\nCautions\n");
-        for (String c : Cautions.STANDARD) {
-            DesignReport.bullet(out, c);
-        }
-        return out.toString();
+    }
+
+    /**
+     * The one wording of why a Monte Carlo run was not made (report, sheet and wizard).
+     * @param reason the reason
+     * @return a plain sentence
+     */
+    public static String notRun(MonteCarloOutcome.NotRun reason) {
+        return switch (reason) {
+            case NO_TOLERANCES -> "Not run: the project gives no tolerances (robustness.tolerances), so every sampled"
+                    + " build would be the nominal design.";
+        };
     }
 
     private static String pct(double fraction) {

@@ -11,7 +11,7 @@ import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.RobustnessResult;
 import org.counterpoise.core.design.RobustnessSettings;
 import org.counterpoise.core.error.InvalidInputException;
-import org.counterpoise.core.robust.MonteCarloResult;
+import org.counterpoise.core.robust.MonteCarloOutcome;
 import org.counterpoise.core.units.Dimension;
 import org.counterpoise.core.units.Unit;
 import org.counterpoise.io.chart.RobustnessCharts;
@@ -19,6 +19,7 @@ import org.counterpoise.io.project.Project;
 import org.counterpoise.io.project.RobustnessInput;
 import org.counterpoise.io.text.DisplayUnits;
 import org.counterpoise.io.text.QuantityFormat;
+import org.counterpoise.io.text.RobustnessReport;
 import org.counterpoise.io.text.UnitChoices;
 import org.counterpoise.ui.gui.document.ProjectEdits;
 import org.counterpoise.ui.gui.field.Form;
@@ -230,18 +231,22 @@ final class RobustnessStep extends Step {
             return;
         }
         var unitDim = design.study().response().dimension();
-        MonteCarloResult mc = r.monteCarlo();
-        summaryHtml = ("Worst case of this design <b>" + DisplayUnits.format(r.worstCase().peak(), unitDim)
-                + "</b>; robust design (f " + QuantityFormat.number(r.robust().tuning().tuningRatio(), 4) + ", \u03b6a "
-                + QuantityFormat.number(r.robust().tuning().dampingRatio(), 3) + ") <b>"
-                + DisplayUnits.format(r.robust().worstCase().peak(), unitDim) + "</b>. Monte Carlo P50 / P95: "
+        MonteCarloOutcome outcome = r.monteCarlo();
+        String monteCarlo = outcome.result().map(mc -> "Monte Carlo P50 / P95: "
                 + DisplayUnits.format(mc.p50(), unitDim) + " / " + DisplayUnits.format(mc.p95(), unitDim)
                 + (Double.isNaN(mc.probabilityExceeding()) ? "" : "; above the target of "
                         + DisplayUnits.format(r.settings().target(), unitDim) + ": "
-                        + QuantityFormat.number(100 * mc.probabilityExceeding(), 3) + " %"));
+                        + QuantityFormat.number(100 * mc.probabilityExceeding(), 3) + " %"))
+                .orElseGet(() -> "Monte Carlo: " + RobustnessReport.notRun(outcome.notRun().orElseThrow()));
+        summaryHtml = "Worst case of this design <b>" + DisplayUnits.format(r.worstCase().peak(), unitDim)
+                + "</b>; robust design (f " + QuantityFormat.number(r.robust().tuning().tuningRatio(), 4) + ", \u03b6a "
+                + QuantityFormat.number(r.robust().tuning().dampingRatio(), 3) + ") <b>"
+                + DisplayUnits.format(r.robust().worstCase().peak(), unitDim) + "</b>. " + monteCarlo;
         wrapSummary();
         sensitivity.show(theme -> RobustnessCharts.sensitivity(design, r, theme, 420, 320));
-        histogram.show(theme -> RobustnessCharts.histogram(design, mc, theme, 420, 320));
+        outcome.result().ifPresentOrElse(
+                mc -> histogram.show(theme -> RobustnessCharts.histogram(design, mc, theme, 420, 320)),
+                () -> histogram.message("No histogram: the Monte Carlo was not run (no tolerances given)."));
         mapHolder.show(theme -> RobustnessCharts.map(design, r, theme, 520, 480, 3));
     }
 
