@@ -10,6 +10,7 @@ import java.util.List;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.Designer;
 import org.counterpoise.core.error.InvalidInputException;
+import org.counterpoise.core.robust.MonteCarloOutcome;
 import org.counterpoise.io.preset.Presets;
 import org.counterpoise.io.sheet.SheetContent;
 import org.counterpoise.io.text.DesignReport;
@@ -63,7 +64,7 @@ class ProjectIdentityTest {
         assertEquals(DesignReport.render(r), DesignReport.render(r, ProjectIdentity.EMPTY),
                 "a project without identity prints as before");
         assertFalse(DesignReport.render(r).contains("\nProject\n"));
-        SheetContent sheet = SheetContent.of(r, "", "2026-11-30", "C", null, id);
+        SheetContent sheet = SheetContent.of(r, "", "2026-11-30", "C", MonteCarloOutcome.notRun(MonteCarloOutcome.NotRun.NO_TOLERANCES), id);
         SheetContent.Section first = sheet.sections().get(0);
         assertEquals("Project", first.title());
         assertEquals(List.of(new SheetContent.Row("Engineer", "R. Aberg", ""),
