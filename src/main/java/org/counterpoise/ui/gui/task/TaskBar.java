@@ -4,6 +4,7 @@ import java.awt.Dimension;
 import java.awt.FlowLayout;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 import javax.swing.JButton;
 import javax.swing.JLabel;
 import javax.swing.JPanel;
@@ -63,6 +64,11 @@ public final class TaskBar extends JPanel {
     /** @return the text shown, or empty while idle (for tests) */
     public String shown() {
         return running.isEmpty() ? "" : label.getText();
+    }
+
+    /** @return the state of the job shown, or empty while idle (for tests) */
+    Optional<State> shownState() {
+        return running.isEmpty() ? Optional.empty() : Optional.of(running.get(running.size() - 1).state);
     }
 
     private void refresh() {
