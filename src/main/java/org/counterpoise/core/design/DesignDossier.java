@@ -32,9 +32,10 @@ public final class DesignDossier {
     private final Part<RobustnessResult> robustness = new Part<>("the robustness study");
 
     /**
-     * The analyses a dossier runs. The core's own are {@link #CORE}; tests substitute counting ones.
+     * The analyses a dossier runs. The core's own are {@link #CORE}; tests substitute counting ones
+     * (the seam through which "computed once" is checked, in core and in the wizard).
      */
-    interface Computations {
+    public interface Computations {
         /** The core's analyses. */
         Computations CORE = new Computations() {
         };
@@ -195,7 +196,7 @@ public final class DesignDossier {
         }
 
         /** @param computations the analyses its dossiers run */
-        Cache(Computations computations) {
+        public Cache(Computations computations) {
             this.computations = computations;
         }
 
