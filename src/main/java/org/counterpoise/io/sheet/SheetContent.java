@@ -211,7 +211,8 @@ public record SheetContent(String projectName, String notes, String date, String
                 + ") and the alternative", robust));
         MonteCarloResult monteCarlo = outcome.flatMap(MonteCarloOutcome::result).orElse(null);
         outcome.flatMap(MonteCarloOutcome::notRun).ifPresent(why -> sections.add(new Section(
-                "Tolerance Monte Carlo of the peak in band", List.of(text("Not run", RobustnessReport.notRun(why))))));
+                "Tolerance Monte Carlo of the peak in band",
+                List.of(text("Not run", RobustnessReport.notRun(why) + ".")))));
         if (monteCarlo != null) {
             Dimension rd = study.response().dimension();
             Unit ru = DisplayUnits.of(rd);

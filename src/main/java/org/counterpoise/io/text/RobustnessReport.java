@@ -56,8 +56,8 @@ public final class RobustnessReport {
                     DisplayUnits.format(b.peaks()[i], d)));
         }
         r.monteCarlo().result().ifPresentOrElse(mc -> monteCarlo(out, mc, d), () -> out
-                .append("\nTolerance Monte Carlo\n  ").append(notRun(r.monteCarlo().notRun().orElseThrow()))
-                .append('\n'));
+                .append("\nTolerance Monte Carlo\n  not run: ").append(notRun(r.monteCarlo().notRun().orElseThrow()))
+                .append(".\n"));
         out.append("\nCautions\n");
         for (String c : Cautions.STANDARD) {
             DesignReport.bullet(out, c);
@@ -80,12 +80,12 @@ public final class RobustnessReport {
     /**
      * The one wording of why a Monte Carlo run was not made (report, sheet and wizard).
      * @param reason the reason
-     * @return a plain sentence
+     * @return the reason in words, without a capital or a full stop ("not run: " goes before it)
      */
     public static String notRun(MonteCarloOutcome.NotRun reason) {
         return switch (reason) {
-            case NO_TOLERANCES -> "Not run: the project gives no tolerances (robustness.tolerances), so every sampled"
-                    + " build would be the nominal design.";
+            case NO_TOLERANCES -> "the project gives no tolerances (robustness.tolerances), so every sampled build"
+                    + " would be the nominal design";
         };
     }
 

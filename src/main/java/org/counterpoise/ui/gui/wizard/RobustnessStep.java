@@ -237,7 +237,7 @@ final class RobustnessStep extends Step {
                 + (Double.isNaN(mc.probabilityExceeding()) ? "" : "; above the target of "
                         + DisplayUnits.format(r.settings().target(), unitDim) + ": "
                         + QuantityFormat.number(100 * mc.probabilityExceeding(), 3) + " %"))
-                .orElseGet(() -> "Monte Carlo: " + RobustnessReport.notRun(outcome.notRun().orElseThrow()));
+                .orElseGet(() -> "Monte Carlo not run: " + RobustnessReport.notRun(outcome.notRun().orElseThrow()) + ".");
         summaryHtml = "Worst case of this design <b>" + DisplayUnits.format(r.worstCase().peak(), unitDim)
                 + "</b>; robust design (f " + QuantityFormat.number(r.robust().tuning().tuningRatio(), 4) + ", \u03b6a "
                 + QuantityFormat.number(r.robust().tuning().dampingRatio(), 3) + ") <b>"
