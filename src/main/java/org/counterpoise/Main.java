@@ -4,7 +4,7 @@ import java.awt.GraphicsEnvironment;
 import java.io.OutputStreamWriter;
 import java.io.PrintWriter;
 import java.nio.charset.StandardCharsets;
-import org.counterpoise.core.design.Designer;
+import org.counterpoise.core.design.DesignDossier;
 import java.nio.file.Path;
 import org.counterpoise.io.PlainText;
 import org.counterpoise.io.preset.Presets;
@@ -31,7 +31,7 @@ public final class Main {
             if (GraphicsEnvironment.isHeadless()) {
                 out.println("No display: running the default example scenario through the design report instead"
                         + " of opening the wizard.");
-                out.print(DesignReport.render(Designer.design(Presets.defaultProject().project().toStudy())));
+                out.print(DesignReport.render(DesignDossier.of(Presets.defaultProject().project().toStudy()).design()));
                 out.flush();
                 System.exit(0);
             }

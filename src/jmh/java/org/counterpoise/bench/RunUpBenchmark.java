@@ -4,7 +4,7 @@ import java.util.concurrent.TimeUnit;
 import org.counterpoise.core.model.ExcitationKind;
 import org.counterpoise.core.model.Structure;
 import org.counterpoise.core.model.Tuning;
-import org.counterpoise.core.runup.ProgressListener;
+import org.counterpoise.core.progress.ProgressListener;
 import org.counterpoise.core.runup.RunUp;
 import org.counterpoise.core.runup.RunUpResult;
 import org.counterpoise.core.runup.SpeedRamp;

@@ -106,6 +106,15 @@ public record DesignStudy(String name, Structure structure, Excitation excitatio
         }
     }
 
+    /**
+     * @param settings other robustness settings (the command line's sample count or seed, say)
+     * @return this study with them
+     */
+    public DesignStudy withRobustness(RobustnessSettings settings) {
+        return new DesignStudy(name, structure, excitation, response, sizing, method, hangsVertically, strokeMargin,
+                constraints, settings);
+    }
+
     /** Common-practice clearance margin over the computed stroke (no published source). */
     public static final double DEFAULT_STROKE_MARGIN = 1.5;
 }

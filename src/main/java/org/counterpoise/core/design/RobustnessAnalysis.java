@@ -4,22 +4,30 @@ import java.util.List;
 import java.util.Optional;
 import org.counterpoise.core.model.Absorber;
 import org.counterpoise.core.model.Tuning;
+import org.counterpoise.core.progress.ProgressListener;
 import org.counterpoise.core.robust.DetuningRange;
 import org.counterpoise.core.robust.Mistuning;
-import org.counterpoise.core.robust.MonteCarlo;
+import org.counterpoise.core.robust.MonteCarloOutcome;
 import org.counterpoise.core.robust.RobustDesign;
 import org.counterpoise.core.robust.RobustOptimiser;
 import org.counterpoise.core.robust.Sensitivity;
+import org.counterpoise.core.robust.SensitivityCurve;
+import org.counterpoise.core.robust.SensitivityMap;
 import org.counterpoise.core.robust.ToleratedDetuning;
 import org.counterpoise.core.robust.WorstCase;
 import org.counterpoise.core.tuning.DenHartogEqualPeak;
 
-/** Orchestrates the robustness study of a design: no formulas here, see {@code core.robust}. */
+/**
+ * Orchestrates the robustness study of a design: no formulas here, see {@code core.robust}. The
+ * Monte Carlo is a part of its own ({@link #monteCarlo}), so that a {@link DesignDossier} computes
+ * it once for the sheet and the study alike.
+ */
 public final class RobustnessAnalysis {
     /** Points on each sensitivity curve (odd, so the nominal is on it). */
     public static final int CURVE_POINTS = 61;
     /** Points along each axis of the map. */
     public static final int MAP_POINTS = 31;
+    private static final String WHAT = "the robustness study";
 
     private RobustnessAnalysis() {
     }
@@ -30,25 +38,57 @@ public final class RobustnessAnalysis {
      * @return sensitivity curves and map, worst case, the robust design and the Monte Carlo
      */
     public static RobustnessResult run(DesignResult design, RobustnessSettings settings) {
+        return run(design, settings, monteCarlo(design, settings, ProgressListener.NONE), ProgressListener.NONE);
+    }
+
+    /**
+     * The tolerance Monte Carlo of a design, run only when the settings give a tolerance.
+     * @param design the design to examine
+     * @param settings tolerances, samples, seed and target
+     * @param listener progress and cancellation
+     * @return the run's result, or why it was not run
+     */
+    public static MonteCarloOutcome monteCarlo(DesignResult design, RobustnessSettings settings,
+            ProgressListener listener) {
+        return MonteCarloOutcome.of(mistuning(design.study()), design.absorber(), settings.tolerances(),
+                settings.samples(), settings.seed(), settings.target(), listener);
+    }
+
+    /**
+     * @param design the design to examine
+     * @param settings ranges, target and tolerances
+     * @param monteCarlo the design's Monte Carlo outcome for these settings
+     * @param listener progress (the robust design is most of the work) and cancellation
+     * @return sensitivity curves and map, worst case, the robust design and the Monte Carlo
+     */
+    public static RobustnessResult run(DesignResult design, RobustnessSettings settings, MonteCarloOutcome monteCarlo,
+            ProgressListener listener) {
         DesignStudy study = design.study();
-        Mistuning m = new Mistuning(study.structure(), study.excitation(), study.response());
+        Mistuning m = mistuning(study);
         Absorber a = design.absorber();
         double sRange = settings.structureRange();
         double aRange = settings.absorberRange();
         double curveRange = Math.max(Math.max(sRange, aRange), 0.05);
-        RobustDesign robust = robustDesign(m, design.tuning(), sRange, aRange);
+        listener.checkCancelled(WHAT);
+        RobustDesign robust = RobustOptimiser.optimise(m, design.tuning().massRatio(), sRange, aRange,
+                seeds(design.tuning()), listener.part(0.0, 0.7));
         Absorber robustAbsorber = Absorber.of(study.structure(), robust.tuning());
+        listener.checkCancelled(WHAT);
         Optional<DetuningRange> forTarget = settings.target().isPresent()
                 ? Optional.of(ToleratedDetuning.ofStructureForTarget(m, a, settings.target().getAsDouble(), 0.5))
                 : Optional.empty();
-        return new RobustnessResult(settings,
-                Sensitivity.structure(m, a, curveRange, CURVE_POINTS),
-                Sensitivity.absorberFrequency(m, a, curveRange, CURVE_POINTS),
-                Sensitivity.absorberDamping(m, a, 0.5, CURVE_POINTS),
-                Sensitivity.structure(m, robustAbsorber, curveRange, CURVE_POINTS),
-                Sensitivity.structureByAbsorber(m, a, curveRange, curveRange, MAP_POINTS),
-                WorstCase.of(m, a, sRange, aRange), robust, robustAbsorber, forTarget,
-                MonteCarlo.run(m, a, settings.tolerances(), settings.samples(), settings.seed(), settings.target()));
+        SensitivityCurve structureCurve = Sensitivity.structure(m, a, curveRange, CURVE_POINTS);
+        SensitivityCurve absorberCurve = Sensitivity.absorberFrequency(m, a, curveRange, CURVE_POINTS);
+        SensitivityCurve dampingCurve = Sensitivity.absorberDamping(m, a, 0.5, CURVE_POINTS);
+        SensitivityCurve robustCurve = Sensitivity.structure(m, robustAbsorber, curveRange, CURVE_POINTS);
+        listener.checkCancelled(WHAT);
+        listener.progress(0.8);
+        SensitivityMap map = Sensitivity.structureByAbsorber(m, a, curveRange, curveRange, MAP_POINTS);
+        listener.checkCancelled(WHAT);
+        WorstCase.Point worst = WorstCase.of(m, a, sRange, aRange);
+        listener.progress(1.0);
+        return new RobustnessResult(settings, structureCurve, absorberCurve, dampingCurve, robustCurve, map, worst,
+                robust, robustAbsorber, forTarget, monteCarlo);
     }
 
     /**
@@ -60,7 +100,14 @@ public final class RobustnessAnalysis {
      * @return the robust design
      */
     public static RobustDesign robustDesign(Mistuning m, Tuning nominal, double structureRange, double absorberRange) {
-        return RobustOptimiser.optimise(m, nominal.massRatio(), structureRange, absorberRange,
-                List.of(nominal, DenHartogEqualPeak.tuning(nominal.massRatio())));
+        return RobustOptimiser.optimise(m, nominal.massRatio(), structureRange, absorberRange, seeds(nominal));
+    }
+
+    private static List<Tuning> seeds(Tuning nominal) {
+        return List.of(nominal, DenHartogEqualPeak.tuning(nominal.massRatio()));
+    }
+
+    private static Mistuning mistuning(DesignStudy study) {
+        return new Mistuning(study.structure(), study.excitation(), study.response());
     }
 }

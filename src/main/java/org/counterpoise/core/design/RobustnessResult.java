@@ -3,7 +3,7 @@ package org.counterpoise.core.design;
 import java.util.Optional;
 import org.counterpoise.core.model.Absorber;
 import org.counterpoise.core.robust.DetuningRange;
-import org.counterpoise.core.robust.MonteCarloResult;
+import org.counterpoise.core.robust.MonteCarloOutcome;
 import org.counterpoise.core.robust.RobustDesign;
 import org.counterpoise.core.robust.SensitivityCurve;
 import org.counterpoise.core.robust.SensitivityMap;
@@ -23,10 +23,10 @@ import org.counterpoise.core.robust.WorstCase;
  * @param robustAbsorber the robust design's absorber
  * @param toleratedForTarget the structure detuning range that keeps the design within the target
  *     (empty without a target; not defined when the nominal design misses it)
- * @param monteCarlo the tolerance Monte Carlo of the design
+ * @param monteCarlo the tolerance Monte Carlo of the design, or why it was not run (no tolerance given)
  */
 public record RobustnessResult(RobustnessSettings settings, SensitivityCurve structureCurve,
         SensitivityCurve absorberCurve, SensitivityCurve dampingCurve, SensitivityCurve robustStructureCurve,
         SensitivityMap map, WorstCase.Point worstCase, RobustDesign robust, Absorber robustAbsorber,
-        Optional<DetuningRange> toleratedForTarget, MonteCarloResult monteCarlo) {
+        Optional<DetuningRange> toleratedForTarget, MonteCarloOutcome monteCarlo) {
 }

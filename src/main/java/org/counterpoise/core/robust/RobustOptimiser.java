@@ -9,8 +9,11 @@ import org.apache.commons.math3.optim.nonlinear.scalar.GoalType;
 import org.apache.commons.math3.optim.nonlinear.scalar.ObjectiveFunction;
 import org.apache.commons.math3.optim.nonlinear.scalar.noderiv.NelderMeadSimplex;
 import org.apache.commons.math3.optim.nonlinear.scalar.noderiv.SimplexOptimizer;
+import org.counterpoise.core.error.CoreException;
+import org.counterpoise.core.error.Messages;
 import org.counterpoise.core.model.Absorber;
 import org.counterpoise.core.model.Tuning;
+import org.counterpoise.core.progress.ProgressListener;
 
 /**
  * The robust absorber: the tuning ratio and damping ratio that minimise the worst response over
@@ -21,6 +24,9 @@ import org.counterpoise.core.model.Tuning;
  * construction it is never worse than any seed's worst case.
  */
 public final class RobustOptimiser {
+    /** What a cancelled search says it was. */
+    private static final String WHAT = "the robust design";
+
     private RobustOptimiser() {
     }
 
@@ -34,8 +40,24 @@ public final class RobustOptimiser {
      */
     public static RobustDesign optimise(Mistuning m, double massRatio, double structureRange, double absorberRange,
             List<Tuning> seeds) {
+        return optimise(m, massRatio, structureRange, absorberRange, seeds, ProgressListener.NONE);
+    }
+
+    /**
+     * @param m the mistuning model (nominal structure, disturbance, response)
+     * @param massRatio mu
+     * @param structureRange ds, fraction
+     * @param absorberRange da, fraction
+     * @param seeds starting tunings (their mass ratio is replaced by mu)
+     * @param listener progress (per seed) and cancellation (asked before every worst-case evaluation)
+     * @return the robust design
+     * @throws CoreException with key {@link Messages#CANCELLED} when cancelled
+     */
+    public static RobustDesign optimise(Mistuning m, double massRatio, double structureRange, double absorberRange,
+            List<Tuning> seeds, ProgressListener listener) {
         int[] count = {0};
         ObjectiveFunction worst = new ObjectiveFunction(v -> {
+            listener.checkCancelled(WHAT);
             double f = Math.exp(v[0]);
             double zeta = Math.exp(v[1]);
             if (!(f > 0.05 && f < 20 && zeta > 1e-5 && zeta < 4)) {
@@ -50,6 +72,7 @@ public final class RobustOptimiser {
         WorstCase.Point bestWorst = null;
         boolean converged = true;
         for (Tuning seed : seeds) {
+            listener.progress((double) seeds.indexOf(seed) / seeds.size());
             // Each seed is itself a candidate, evaluated exactly as given (not through ln and exp),
             // so the result is never worse than any seed.
             Tuning exactSeed = new Tuning(massRatio, seed.tuningRatio(), seed.dampingRatio());

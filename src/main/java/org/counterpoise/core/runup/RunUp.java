@@ -18,6 +18,7 @@ import org.counterpoise.core.error.Messages;
 import org.counterpoise.core.model.ExcitationKind;
 import org.counterpoise.core.model.Structure;
 import org.counterpoise.core.model.Tuning;
+import org.counterpoise.core.progress.ProgressListener;
 import org.counterpoise.core.response.ResponseKind;
 import org.counterpoise.core.response.ResponseScale;
 import org.counterpoise.core.response.SystemResponse;
@@ -241,9 +242,7 @@ public final class RunUp {
                 closeWindow(end);
             }
             listener.progress(Math.min(1.0, end / equations.ramp().duration()));
-            if (listener.cancelled() || Thread.currentThread().isInterrupted()) {
-                throw new CoreException(Messages.CANCELLED, "the run-up");
-            }
+            listener.checkCancelled("the run-up");
         }
 
         /** @param regular true on the uniform grid (where the parabola refinement holds) */

@@ -5,6 +5,7 @@ import java.util.Map;
 import org.counterpoise.core.model.ExcitationKind;
 import org.counterpoise.core.model.Structure;
 import org.counterpoise.core.model.Tuning;
+import org.counterpoise.core.progress.ProgressListener;
 import org.counterpoise.core.response.ResponseKind;
 import org.counterpoise.core.response.ResponsePeak;
 import org.counterpoise.core.response.SystemResponse;
@@ -43,8 +44,8 @@ public record RunUpComparison(RunUpResult withAbsorber, RunUpResult withoutAbsor
      */
     public static RunUpComparison of(Structure structure, Tuning tuning, ExcitationKind kind, double amplitude,
             SpeedRamp ramp, RunUp.Start start, ProgressListener listener) {
-        RunUpResult with = RunUp.simulate(structure, tuning, kind, amplitude, ramp, start, half(listener, 0.0));
-        RunUpResult without = RunUp.simulate(structure, null, kind, amplitude, ramp, start, half(listener, 0.5));
+        RunUpResult with = RunUp.simulate(structure, tuning, kind, amplitude, ramp, start, listener.part(0.0, 0.5));
+        RunUpResult without = RunUp.simulate(structure, null, kind, amplitude, ramp, start, listener.part(0.5, 0.5));
         return new RunUpComparison(with, without, steady(structure, tuning, kind, amplitude, ramp),
                 steady(structure, null, kind, amplitude, ramp));
     }
@@ -57,19 +58,5 @@ public record RunUpComparison(RunUpResult withAbsorber, RunUpResult withoutAbsor
             out.put(k, response.peakBetween(k, 0.0, ramp.topSpeed()));
         }
         return out;
-    }
-
-    private static ProgressListener half(ProgressListener listener, double offset) {
-        return new ProgressListener() {
-            @Override
-            public void progress(double fraction) {
-                listener.progress(offset + 0.5 * fraction);
-            }
-
-            @Override
-            public boolean cancelled() {
-                return listener.cancelled();
-            }
-        };
     }
 }

@@ -1,6 +1,7 @@
 package org.counterpoise.io.export;
 
 import com.google.gson.JsonArray;
+import com.google.gson.JsonNull;
 import com.google.gson.JsonObject;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.RobustnessResult;
@@ -24,12 +25,18 @@ public final class RobustnessJson {
         ReportJson.put(o, RobustnessContent.of(design, r));
         // The curves are series, written from the result; they come before the Monte Carlo
         // summary, which ends with its histogram (the documented key order).
-        JsonObject m = o.remove("monte_carlo").getAsJsonObject();
+        // Without tolerances the Monte Carlo is not run: "monte_carlo" is null and
+        // "monte_carlo_not_run" (a row of the report) says why; docs/cli.md lists the reasons.
+        JsonObject m = o.has("monte_carlo") ? o.remove("monte_carlo").getAsJsonObject() : null;
         o.add("structure_sensitivity", curve(r.structureCurve()));
         o.add("robust_structure_sensitivity", curve(r.robustStructureCurve()));
         o.add("absorber_sensitivity", curve(r.absorberCurve()));
         o.add("absorber_damping_sensitivity", curve(r.dampingCurve()));
-        MonteCarloResult mc = r.monteCarlo();
+        if (m == null || r.monteCarlo().result().isEmpty()) {
+            o.add("monte_carlo", JsonNull.INSTANCE);
+            return JsonNumbers.write(o);
+        }
+        MonteCarloResult mc = r.monteCarlo().result().get();
         JsonNumbers.putAll(m, "histogram_edges", mc.binEdges());
         JsonArray counts = new JsonArray();
         for (int c : mc.counts()) {

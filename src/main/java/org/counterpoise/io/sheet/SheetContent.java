@@ -4,6 +4,7 @@ import java.util.List;
 import java.util.Optional;
 import java.util.Set;
 import org.counterpoise.core.design.DesignResult;
+import org.counterpoise.core.robust.MonteCarloOutcome;
 import org.counterpoise.core.robust.MonteCarloResult;
 import org.counterpoise.io.project.ProjectIdentity;
 import org.counterpoise.io.text.DesignContent;
@@ -76,7 +77,29 @@ public record SheetContent(String projectName, String notes, String date, String
      */
     public static SheetContent of(DesignResult r, String notes, String date, String revision,
             MonteCarloResult monteCarlo, ProjectIdentity identity) {
-        ReportContent report = DesignContent.of(r, identity, Optional.ofNullable(monteCarlo));
+        return of(r, notes, date, revision, monteCarlo == null ? Optional.empty() : Optional.of(monteCarlo), identity);
+    }
+
+    /**
+     * @param r the design result
+     * @param notes the project's notes, or empty
+     * @param date date of issue
+     * @param revision revision mark
+     * @param monteCarlo the design's tolerance Monte Carlo, or why it was not run
+     * @param identity the project's engineer and client or site
+     * @return the sheet content
+     */
+    public static SheetContent of(DesignResult r, String notes, String date, String revision,
+            MonteCarloOutcome monteCarlo, ProjectIdentity identity) {
+        return of(DesignContent.of(r, identity, monteCarlo), notes, date, revision);
+    }
+
+    private static SheetContent of(DesignResult r, String notes, String date, String revision,
+            Optional<MonteCarloResult> monteCarlo, ProjectIdentity identity) {
+        return of(DesignContent.of(r, identity, monteCarlo), notes, date, revision);
+    }
+
+    private static SheetContent of(ReportContent report, String notes, String date, String revision) {
         // The header prints the date and revision of issue.
         List<ReportTable.Section> sections = ReportTable.of(report, Set.of(ReportKey.REVISION, ReportKey.DATE));
         List<String> warnings = report.warnings().stream().map(ReportContent.Note::text).toList();

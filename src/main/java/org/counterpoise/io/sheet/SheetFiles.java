@@ -1,6 +1,7 @@
 package org.counterpoise.io.sheet;
 
 import java.io.IOException;
+import java.io.OutputStream;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.LinkOption;
@@ -13,12 +14,10 @@ import java.util.Map;
 import java.util.Set;
 import java.util.function.BiFunction;
 import org.counterpoise.core.design.DesignCurves;
+import org.counterpoise.core.design.DesignDossier;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.error.InvalidInputException;
-import org.counterpoise.core.robust.Mistuning;
-import org.counterpoise.core.robust.MonteCarlo;
-import org.counterpoise.core.robust.MonteCarloResult;
-import org.counterpoise.core.robust.ToleranceSet;
+import org.counterpoise.core.progress.ProgressListener;
 import org.counterpoise.io.AtomicFiles;
 import org.counterpoise.io.FileWriteException;
 import org.counterpoise.io.PlainMessages;
@@ -30,7 +29,8 @@ import org.counterpoise.io.project.ProjectIdentity;
 import org.knowm.xchart.XYChart;
 
 /**
- * Writes the parameter sheet and the exports to files through {@link AtomicFiles}: a crash never
+ * Writes the parameter sheet and the exports of a {@link DesignDossier} (it computes nothing itself)
+ * to files through {@link AtomicFiles}: a crash never
  * leaves a broken file, and the files of one request are written all or none. An existing file is
  * replaced only when the caller says so, and only if it is an ordinary file; every failure is
  * reported as a clear message naming the option and the path.
@@ -54,7 +54,7 @@ public final class SheetFiles {
     }
 
     /**
-     * @param r the design
+     * @param dossier the design and its analyses
      * @param notes the project's notes, or empty
      * @param pdf the PDF to write
      * @param date date of issue
@@ -62,13 +62,13 @@ public final class SheetFiles {
      * @param force true to replace an existing file
      * @param option the option the path came from (for messages)
      */
-    public static void writeSheet(DesignResult r, String notes, Path pdf, String date, String revision, boolean force,
-            String option) {
-        writeSheet(r, notes, pdf, date, revision, force, option, ProjectIdentity.EMPTY);
+    public static void writeSheet(DesignDossier dossier, String notes, Path pdf, String date, String revision,
+            boolean force, String option) {
+        writeSheet(dossier, notes, pdf, date, revision, force, option, ProjectIdentity.EMPTY);
     }
 
     /**
-     * @param r the design
+     * @param dossier the design and its analyses
      * @param notes the project's notes, or empty
      * @param pdf the PDF to write
      * @param date date of issue
@@ -77,37 +77,45 @@ public final class SheetFiles {
      * @param option the option the path came from (for messages)
      * @param identity the project's engineer and client or site
      */
-    public static void writeSheet(DesignResult r, String notes, Path pdf, String date, String revision, boolean force,
-            String option, ProjectIdentity identity) {
-        new Outputs(r).sheet(pdf, notes, date, revision, option, identity).write(force);
+    public static void writeSheet(DesignDossier dossier, String notes, Path pdf, String date, String revision,
+            boolean force, String option, ProjectIdentity identity) {
+        new Outputs(dossier).sheet(pdf, notes, date, revision, option, identity).write(force);
     }
 
     /**
-     * @param r the design
-     * @return the Monte Carlo of the project's tolerances, or null when it has none
+     * The sheet as PDF bytes (the wizard's preview).
+     * @param dossier the design and its analyses
+     * @param notes the project's notes, or empty
+     * @param date date of issue
+     * @param revision revision mark
+     * @param identity the project's engineer and client or site
+     * @param out where the PDF goes
+     * @throws IOException when the stream cannot be written
      */
-    public static MonteCarloResult monteCarlo(DesignResult r) {
-        var settings = r.study().robustness();
-        if (settings.tolerances().equals(ToleranceSet.NONE)) {
-            return null;
-        }
-        var m = new Mistuning(r.study().structure(), r.study().excitation(),
-                r.study().response());
-        return MonteCarlo.run(m, r.absorber(), settings.tolerances(), settings.samples(),
-                settings.seed(), settings.target());
+    public static void writeSheet(DesignDossier dossier, String notes, String date, String revision,
+            ProjectIdentity identity, OutputStream out) throws IOException {
+        SheetWriter.write(content(dossier, notes, date, revision, identity), charts(dossier.design(), dossier.curves()),
+                out);
+    }
+
+    private static SheetContent content(DesignDossier dossier, String notes, String date, String revision,
+            ProjectIdentity identity) {
+        // the dossier's Monte Carlo: computed once for the project state, whoever asked first
+        return SheetContent.of(dossier.design(), notes, date, revision, dossier.monteCarlo(ProgressListener.NONE),
+                identity);
     }
 
     /**
      * Writes curves.csv, result.json, and response and stroke charts as PNG and SVG into a folder,
      * all or none.
-     * @param r the design
+     * @param dossier the design and its curves
      * @param dir the folder (created when missing)
      * @param force true to replace existing files
      * @param option the option the path came from
      * @return the files written
      */
-    public static List<Path> writeExports(DesignResult r, Path dir, boolean force, String option) {
-        return new Outputs(r).data(dir, option).charts(dir, option).write(force);
+    public static List<Path> writeExports(DesignDossier dossier, Path dir, boolean force, String option) {
+        return new Outputs(dossier).data(dir, option).charts(dir, option).write(force);
     }
 
     /**
@@ -117,16 +125,15 @@ public final class SheetFiles {
      * there are left as they were and folders this request created are removed again.
      */
     public static final class Outputs {
-        private final DesignResult result;
+        private final DesignDossier dossier;
         private final Map<Path, Planned> planned = new LinkedHashMap<>();
         private final Set<Path> folders = new LinkedHashSet<>();
         private final Map<Path, String> spared = new LinkedHashMap<>();
-        private DesignCurves curves;
         private List<XYChart> charts;
 
-        /** @param result the design whose sheet and exports are written */
-        public Outputs(DesignResult result) {
-            this.result = result;
+        /** @param dossier the design whose sheet and exports are written, with its analyses */
+        public Outputs(DesignDossier dossier) {
+            this.dossier = dossier;
         }
 
         /**
@@ -154,7 +161,7 @@ public final class SheetFiles {
         public Outputs sheet(Path pdf, String notes, String date, String revision, String option,
                 ProjectIdentity identity) {
             return add(pdf, "sheet", option, out -> SheetWriter.write(
-                    SheetContent.of(result, notes, date, revision, monteCarlo(result), identity), charts(), out));
+                    content(dossier, notes, date, revision, identity), charts(), out));
         }
 
         /**
@@ -165,9 +172,9 @@ public final class SheetFiles {
         public Outputs data(Path dir, String option) {
             folders.add(dir);
             add(dir.resolve("curves.csv"), "curves.csv", option,
-                    out -> out.write(CurveCsv.of(curves()).getBytes(StandardCharsets.UTF_8)));
+                    out -> out.write(CurveCsv.of(dossier.curves()).getBytes(StandardCharsets.UTF_8)));
             return add(dir.resolve("result.json"), "result.json", option,
-                    out -> out.write(ResultJson.toJson(result).getBytes(StandardCharsets.UTF_8)));
+                    out -> out.write(ResultJson.toJson(dossier.design()).getBytes(StandardCharsets.UTF_8)));
         }
 
         /**
@@ -273,16 +280,9 @@ public final class SheetFiles {
             return "output";
         }
 
-        private DesignCurves curves() {
-            if (curves == null) {
-                curves = DesignCurves.of(result);
-            }
-            return curves;
-        }
-
         private List<XYChart> charts() {
             if (charts == null) {
-                charts = SheetFiles.charts(result, curves());
+                charts = SheetFiles.charts(dossier.design(), dossier.curves());
             }
             return charts;
         }

@@ -2,6 +2,7 @@ package org.counterpoise.io.text;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 import java.util.Optional;
 import org.counterpoise.core.design.Cautions;
 import org.counterpoise.core.design.DesignResult;
@@ -14,6 +15,7 @@ import org.counterpoise.core.model.Structure;
 import org.counterpoise.core.remedy.DetuningAlternative;
 import org.counterpoise.core.response.ResponseKind;
 import org.counterpoise.core.response.ResponsePeak;
+import org.counterpoise.core.robust.MonteCarloOutcome;
 import org.counterpoise.core.robust.MonteCarloResult;
 import org.counterpoise.core.units.Dimension;
 import org.counterpoise.io.project.Ids;
@@ -60,6 +62,44 @@ public final class DesignContent {
      */
     public static ReportContent of(DesignResult r) {
         return of(r, ProjectIdentity.EMPTY, Optional.empty());
+    }
+
+    /**
+     * @param r a design
+     * @param identity revision, date, engineer and client or site (each row only when given)
+     * @param monteCarlo a tolerance Monte Carlo of the design, when one was run
+     * @return the report
+     */
+    public static ReportContent of(DesignResult r, ProjectIdentity identity, MonteCarloOutcome monteCarlo) {
+        ReportContent c = of(r, identity, monteCarlo.result());
+        if (monteCarlo.notRun().isEmpty()) {
+            return c;
+        }
+        List<ReportSection> sections = new ArrayList<>(c.sections());
+        sections.add(new ReportSection(SectionId.MONTE_CARLO, "Tolerance Monte Carlo of the peak in band",
+                List.of(notRunRow(monteCarlo.notRun().get()))));
+        return new ReportContent(c.name(), sections, c.warnings(), c.cautions());
+    }
+
+    /**
+     * @param reason why the Monte Carlo was not run
+     * @return the one row that says so; the JSON writes the reason's id (e.g. "no-tolerances")
+     */
+    static ReportRow notRunRow(MonteCarloOutcome.NotRun reason) {
+        return new ReportRow(ReportKey.MONTE_CARLO_NOT_RUN, "not run", "",
+                new Words(notRun(reason), List.of(reason.name().toLowerCase(Locale.ROOT).replace('_', '-'))),
+                "tolerance Monte Carlo", "");
+    }
+
+    /**
+     * @param reason why the Monte Carlo was not run
+     * @return the reason in words, the one place they are written
+     */
+    public static String notRun(MonteCarloOutcome.NotRun reason) {
+        return switch (reason) {
+            case NO_TOLERANCES -> "the project gives no tolerances (robustness.tolerances), so every sampled build"
+                    + " would be the nominal design";
+        };
     }
 
     /**

@@ -73,6 +73,7 @@ public enum ReportKey {
     MONTE_CARLO_P95_P99("monte_carlo.p95", "monte_carlo.p99"),
     MONTE_CARLO_RANGE("monte_carlo.min", "monte_carlo.max"),
     MONTE_CARLO_EXCEEDING("monte_carlo.probability_exceeding_target"),
+    MONTE_CARLO_NOT_RUN("monte_carlo_not_run"),
 
     // Rows not in the design JSON.
     REVISION,

@@ -80,9 +80,9 @@ public final class RobustnessContent {
                     new Pair(new ReportValue.NotApplicable(), new ReportValue.NotApplicable(), PairKind.RANGE), ""));
         }
         sections.add(new ReportSection(SectionId.WORST_CASE, "Worst case and the robust design", worst));
-        var mc = r.monteCarlo();
         sections.add(new ReportSection(SectionId.MONTE_CARLO, "Tolerance Monte Carlo of the peak in band",
-                DesignContent.monteCarloRows(mc, d)));
+                r.monteCarlo().result().map(mc -> DesignContent.monteCarloRows(mc, d))
+                        .orElseGet(() -> List.of(DesignContent.notRunRow(r.monteCarlo().notRun().orElseThrow())))));
         return new ReportContent(design.study().name(), sections, List.of(), Cautions.STANDARD);
     }
 

@@ -2,8 +2,8 @@ package org.counterpoise.ui.cli;
 
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
+import org.counterpoise.core.design.DesignDossier;
 import org.counterpoise.core.design.DesignResult;
-import org.counterpoise.core.design.Designer;
 import org.counterpoise.io.PlainText;
 import org.counterpoise.io.export.ResultJson;
 import org.counterpoise.io.project.LoadedProject;
@@ -30,7 +30,7 @@ public final class DesignCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         LoadedProject loaded = ProjectFiles.read(spec, file);
-        DesignResult result = Designer.design(loaded.project().toStudy());
+        DesignResult result = DesignDossier.of(loaded.project().toStudy()).design();
         spec.commandLine().getOut().print(PlainText.forTerminal(json ? ResultJson.toJson(result)
                 : DesignReport.render(result, loaded.project().identity())));
         spec.commandLine().getOut().flush();

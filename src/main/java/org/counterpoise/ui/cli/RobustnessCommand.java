@@ -2,12 +2,13 @@ package org.counterpoise.ui.cli;
 
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
+import org.counterpoise.core.design.DesignDossier;
 import org.counterpoise.core.design.DesignResult;
-import org.counterpoise.core.design.Designer;
-import org.counterpoise.core.design.RobustnessAnalysis;
+import org.counterpoise.core.design.DesignStudy;
 import org.counterpoise.core.design.RobustnessResult;
 import org.counterpoise.core.design.RobustnessSettings;
 import org.counterpoise.core.error.Checks;
+import org.counterpoise.core.progress.ProgressListener;
 import org.counterpoise.io.PlainText;
 import org.counterpoise.io.export.RobustnessJson;
 import org.counterpoise.io.project.LoadedProject;
@@ -40,14 +41,17 @@ public final class RobustnessCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         LoadedProject loaded = ProjectFiles.read(spec, file);
-        DesignResult design = Designer.design(loaded.project().toStudy());
-        RobustnessSettings s = design.study().robustness();
+        DesignStudy study = loaded.project().toStudy();
+        RobustnessSettings s = study.robustness();
         if (samples != null) {
             Checks.inRange("--samples", samples, 1, 1_000_000);
         }
         RobustnessSettings used = new RobustnessSettings(s.structureRange(), s.absorberRange(), s.target(),
                 s.tolerances(), samples == null ? s.samples() : samples, seed == null ? s.seed() : seed);
-        RobustnessResult r = RobustnessAnalysis.run(design, used);
+        // the sample count and seed move no part of the design itself, only its Monte Carlo
+        DesignDossier dossier = DesignDossier.of(study.withRobustness(used));
+        DesignResult design = dossier.design();
+        RobustnessResult r = dossier.robustness(ProgressListener.NONE);
         spec.commandLine().getOut().print(PlainText.forTerminal(json ? RobustnessJson.toJson(design, r)
                 : RobustnessReport.render(design, r)));
         spec.commandLine().getOut().flush();

@@ -2,12 +2,12 @@ package org.counterpoise.ui.cli;
 
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
+import org.counterpoise.core.design.DesignDossier;
 import org.counterpoise.core.design.DesignResult;
-import org.counterpoise.core.design.Designer;
 import org.counterpoise.core.error.Checks;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.model.Excitation;
-import org.counterpoise.core.runup.ProgressListener;
+import org.counterpoise.core.progress.ProgressListener;
 import org.counterpoise.core.runup.RunUp;
 import org.counterpoise.core.runup.RunUpComparison;
 import org.counterpoise.core.runup.RunUpReportData;
@@ -61,7 +61,7 @@ public final class RunUpCommand implements Callable<Integer> {
     public Integer call() {
         LoadedProject loaded = ProjectFiles.read(spec, file);
         Project project = loaded.project();
-        DesignResult design = Designer.design(project.toStudy());
+        DesignResult design = DesignDossier.of(project.toStudy()).design();
         Excitation excitation = design.study().excitation();
         double order = project.disturbance().harmonicOrder();
         double shaftRate = shaftRate(project);

@@ -3,8 +3,7 @@ package org.counterpoise.ui.cli;
 import java.nio.file.Path;
 import java.time.LocalDate;
 import java.util.concurrent.Callable;
-import org.counterpoise.core.design.DesignResult;
-import org.counterpoise.core.design.Designer;
+import org.counterpoise.core.design.DesignDossier;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.io.PlainText;
 import org.counterpoise.io.project.LoadedProject;
@@ -53,13 +52,14 @@ public final class SheetCommand implements Callable<Integer> {
                     "a short mark of at most 20 characters without control characters, such as A or 2b");
         }
         LoadedProject loaded = ProjectFiles.read(spec, file);
-        DesignResult result = Designer.design(loaded.project().toStudy());
+        DesignDossier dossier = DesignDossier.of(loaded.project().toStudy());
+        dossier.design(); // a design that cannot be made is reported before any file is touched
         var identity = loaded.project().identity();
         String issued = date != null ? date.toString()
                 : identity.date().isEmpty() ? LocalDate.now().toString() : identity.date();
         String mark = revision != null ? revision : identity.revision().isEmpty() ? "A" : identity.revision();
         // The sheet and every export are one set: all are written, or none and nothing changes.
-        SheetFiles.Outputs outputs = new SheetFiles.Outputs(result)
+        SheetFiles.Outputs outputs = new SheetFiles.Outputs(dossier)
                 .sheet(output, loaded.project().notes(), issued, mark, "--output", identity)
                 .sparing(file, "the project file being read");
         if (csvDir != null) {

@@ -19,6 +19,7 @@ import org.counterpoise.core.design.Designer;
 import org.counterpoise.core.design.RobustnessAnalysis;
 import org.counterpoise.core.design.RobustnessResult;
 import org.counterpoise.core.response.ResponseKind;
+import org.counterpoise.core.robust.MonteCarloOutcome;
 import org.counterpoise.core.robust.MonteCarloResult;
 import org.counterpoise.core.robust.SensitivityCurve;
 import org.counterpoise.core.robust.SensitivityMap;
@@ -192,7 +193,7 @@ class ChartInputTest {
                     OptionalDouble.of(0.1), edges, counts);
             RobustnessResult r = new RobustnessResult(base.settings(), curve, curve, curve, curve,
                     new SensitivityMap(factors, factors, cells), base.worstCase(), base.robust(), base.robustAbsorber(),
-                    base.toleratedForTarget(), mc);
+                    base.toleratedForTarget(), MonteCarloOutcome.ran(mc));
             ChartTheme theme = trial % 2 == 0 ? ChartTheme.LIGHT : ChartTheme.DARK;
             assertDrawable(RobustnessCharts.sensitivity(FAN, r, theme, 400, 300), false);
             assertDrawable(MonteCarloCharts.histogram(FAN, mc, theme, 400, 300), false);

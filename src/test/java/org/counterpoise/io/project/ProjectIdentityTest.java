@@ -1,5 +1,6 @@
 package org.counterpoise.io.project;
 
+import org.counterpoise.core.robust.MonteCarloResult;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
@@ -64,7 +65,7 @@ class ProjectIdentityTest {
         assertEquals(DesignReport.render(r), DesignReport.render(r, ProjectIdentity.EMPTY),
                 "a project without identity prints as before");
         assertFalse(DesignReport.render(r).contains("\nProject\n"));
-        SheetContent sheet = SheetContent.of(r, "", "2026-11-30", "C", null, id);
+        SheetContent sheet = SheetContent.of(r, "", "2026-11-30", "C", (MonteCarloResult) null, id);
         ReportTable.Section first = sheet.sections().get(0);
         assertEquals("Project", first.title());
         // The sheet prints revision and date in its header, so its Project table has only these two.

@@ -15,8 +15,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.stream.Stream;
-import org.counterpoise.core.design.DesignResult;
-import org.counterpoise.core.design.Designer;
+import org.counterpoise.core.design.DesignDossier;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.io.AtomicFiles;
 import org.counterpoise.io.project.ProjectReader;
@@ -37,8 +36,8 @@ class SheetFilesTest {
     @ParameterizedTest
     @ValueSource(ints = {0, 3, 6})
     void aFullDiskAtTheKthFileLeavesThePreviousSetAsItWas(int k, @TempDir Path dir) throws IOException {
-        DesignResult before = design("presets/rooftop-fan-platform.json");
-        DesignResult now = design("presets/pump-skid-mezzanine.json");
+        DesignDossier before = design("presets/rooftop-fan-platform.json");
+        DesignDossier now = design("presets/pump-skid-mezzanine.json");
         Path folder = dir.resolve("exports");
         Path pdf = dir.resolve("sheet.pdf");
         new SheetFiles.Outputs(before).sheet(pdf, "", "2026-12-01", "A", "--output").data(folder, "--plots")
@@ -77,7 +76,7 @@ class SheetFilesTest {
 
     @Test
     void theProjectFileAndTwoOutputsOnOnePathAreRefused(@TempDir Path dir) throws IOException {
-        DesignResult r = design("presets/pump-skid-mezzanine.json");
+        DesignDossier r = design("presets/pump-skid-mezzanine.json");
         Path project = Files.copy(Path.of("presets/pump-skid-mezzanine.json"), dir.resolve("result.json"));
         InvalidInputException e = assertThrows(InvalidInputException.class, () -> new SheetFiles.Outputs(r)
                 .sparing(project, "the project file being read").data(dir, "--csv").write(true));
@@ -90,8 +89,8 @@ class SheetFilesTest {
         assertEquals(List.of("result.json"), names(dir));
     }
 
-    private static DesignResult design(String preset) {
-        return Designer.design(ProjectReader.readStudy(Path.of(preset)));
+    private static DesignDossier design(String preset) {
+        return DesignDossier.of(ProjectReader.readStudy(Path.of(preset)));
     }
 
     /** The body as written to a disk that fills after {@code bytes} bytes. */

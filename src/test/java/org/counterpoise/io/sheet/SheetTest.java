@@ -15,7 +15,7 @@ import org.apache.pdfbox.pdmodel.PDDocument;
 import org.apache.pdfbox.rendering.PDFRenderer;
 import org.apache.pdfbox.text.PDFTextStripper;
 import org.counterpoise.core.design.DesignResult;
-import org.counterpoise.core.design.Designer;
+import org.counterpoise.core.design.DesignDossier;
 import org.counterpoise.core.units.Unit;
 import org.counterpoise.io.project.LoadedProject;
 import org.counterpoise.io.project.ProjectReader;
@@ -38,12 +38,13 @@ class SheetTest {
     @MethodSource("presets")
     void sheetPrintsTheDesignNumbersAndRenders(Path preset) throws IOException {
         LoadedProject loaded = ProjectReader.read(preset);
-        DesignResult r = Designer.design(loaded.project().toStudy());
+        DesignDossier dossier = DesignDossier.of(loaded.project().toStudy());
+        DesignResult r = dossier.design();
         Path out = Path.of("target", "sheets");
         Files.createDirectories(out);
         String name = preset.getFileName().toString().replace(".json", "");
         Path pdf = out.resolve(name + ".pdf");
-        SheetFiles.writeSheet(r, loaded.project().notes(), pdf, "2026-12-02", "B", true, "-o");
+        SheetFiles.writeSheet(dossier, loaded.project().notes(), pdf, "2026-12-02", "B", true, "-o");
 
         try (PDDocument doc = Loader.loadPDF(pdf.toFile())) {
             String text = new PDFTextStripper().getText(doc).replace('\u00a0', ' ');
@@ -76,9 +77,10 @@ class SheetTest {
 
     @org.junit.jupiter.api.Test
     void exportsRoundTripAndRefuseToOverwrite(@org.junit.jupiter.api.io.TempDir Path dir) throws IOException {
-        DesignResult r = Designer.design(ProjectReader.readStudy(Path.of("presets/pump-skid-mezzanine.json")));
+        DesignDossier dossier = DesignDossier.of(ProjectReader.readStudy(Path.of("presets/pump-skid-mezzanine.json")));
+        DesignResult r = dossier.design();
         Path folder = dir.resolve("exports with spaces");
-        List<Path> files = SheetFiles.writeExports(r, folder, false, "--csv");
+        List<Path> files = SheetFiles.writeExports(dossier, folder, false, "--csv");
         assertEquals(6, files.size());
         for (Path f : files) {
             assertTrue(Files.size(f) > 100, f.toString());
@@ -100,8 +102,8 @@ class SheetTest {
         }
         var e = org.junit.jupiter.api.Assertions.assertThrows(
                 org.counterpoise.core.error.InvalidInputException.class,
-                () -> SheetFiles.writeExports(r, folder, false, "--csv"));
+                () -> SheetFiles.writeExports(dossier, folder, false, "--csv"));
         assertTrue(e.getMessage().contains("already exists; add --force"), e.getMessage());
-        SheetFiles.writeExports(r, folder, true, "--csv");
+        SheetFiles.writeExports(dossier, folder, true, "--csv");
     }
 }

@@ -1,5 +1,7 @@
 package org.counterpoise.io.text;
 
+import org.counterpoise.core.design.DesignDossier;
+import org.counterpoise.core.progress.ProgressListener;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -178,7 +180,7 @@ class ReportContentTest {
         m.put(ReportKey.TOLERATED_FOR_TARGET, List.of(
                 r.toleratedForTarget().map(t -> t.low().orElse(Double.NaN)).orElse(Double.NaN),
                 r.toleratedForTarget().map(t -> t.high().orElse(Double.NaN)).orElse(Double.NaN)));
-        monteCarlo(m, r.monteCarlo());
+        r.monteCarlo().result().ifPresent(c -> monteCarlo(m, c));
         return m;
     }
 
@@ -270,7 +272,7 @@ class ReportContentTest {
     }
 
     private static Optional<MonteCarloResult> monteCarlo(DesignResult r) {
-        return Optional.ofNullable(SheetFiles.monteCarlo(r));
+        return DesignDossier.of(r.study()).monteCarlo(ProgressListener.NONE).result();
     }
 
     @ParameterizedTest(name = "{0}")

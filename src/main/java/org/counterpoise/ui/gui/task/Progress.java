@@ -1,12 +1,20 @@
 package org.counterpoise.ui.gui.task;
 
-/** What a background job may tell the task bar, and the question it asks between its phases. */
-public interface Progress {
+import org.counterpoise.core.progress.ProgressListener;
+
+/**
+ * What a background job may tell the task bar, and the question it asks between its phases. It is
+ * also the core's {@link ProgressListener}, so a job hands it straight to a long computation (the
+ * Monte Carlo, the robust design, a run-up), which reports its share done and stops on Cancel or
+ * when the job is dropped as stale.
+ */
+public interface Progress extends ProgressListener {
     /** @param what the phase now running, in a few words */
     void phase(String what);
 
     /**
-     * @throws Cancelled when the user pressed Cancel; the job stops here and nothing is shown
+     * @throws Cancelled when the user pressed Cancel or the job was dropped; the job stops here
+     *     and nothing is shown
      */
     void checkCancelled();
 

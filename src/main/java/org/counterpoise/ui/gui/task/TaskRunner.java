@@ -1,19 +1,26 @@
 package org.counterpoise.ui.gui.task;
 
+import java.util.ArrayList;
+import java.util.List;
 import java.util.concurrent.CancellationException;
 import java.util.concurrent.ExecutionException;
 import java.util.concurrent.atomic.AtomicBoolean;
+import java.util.concurrent.atomic.AtomicInteger;
 import java.util.function.Consumer;
 import java.util.function.LongSupplier;
 import javax.swing.SwingUtilities;
 import javax.swing.SwingWorker;
+import org.counterpoise.core.error.CoreException;
+import org.counterpoise.core.error.Messages;
 
 /**
  * Runs work off the event thread and hands the outcome back on it. Two rules:
  * <ul>
  * <li>stale results are dropped: a job is tagged with the document generation it was computed
  * from, and its result is shown only if the generation is still the same when it ends (a result
- * for an old state is never shown as current);</li>
+ * for an old state is never shown as current); when a job for a newer generation starts, the
+ * jobs of older ones are cancelled and their threads interrupted, so a long computation for a
+ * state nobody looks at any more stops at its next check instead of running on;</li>
  * <li>long jobs the user asked for (saving, the sheet, exports, the Monte Carlo) appear on the
  * {@link TaskBar} with their phase and a Cancel button; cancelling drops the result, and jobs check
  * for it between their phases (a file write that started completes, or leaves the old file).</li>
@@ -22,6 +29,11 @@ import javax.swing.SwingWorker;
 public final class TaskRunner {
     private final LongSupplier generation;
     private final TaskBar bar;
+    /** Jobs of {@link #current} still running, with the generation they were started for; event thread only. */
+    private final List<Running> currentJobs = new ArrayList<>();
+
+    private record Running(long generation, SwingWorker<?, ?> worker, AtomicBoolean cancel) {
+    }
 
     /**
      * @param generation the document's current generation
@@ -73,7 +85,9 @@ public final class TaskRunner {
     public <T> SwingWorker<T, Void> current(String title, Job<T> job, Consumer<T> done, Consumer<Throwable> failed,
             Runnable cancelled) {
         long started = generation.getAsLong();
-        return start(title, job, r -> {
+        cancelStale();
+        AtomicBoolean cancel = new AtomicBoolean();
+        SwingWorker<T, Void> worker = start(title, job, cancel, r -> {
             if (generation.getAsLong() == started) {
                 done.accept(r);
             }
@@ -86,6 +100,35 @@ public final class TaskRunner {
                 cancelled.run();
             }
         });
+        Running running = new Running(started, worker, cancel);
+        currentJobs.add(running);
+        worker.addPropertyChangeListener(e -> {
+            if (worker.isDone()) {
+                currentJobs.remove(running);
+            }
+        });
+        return worker;
+    }
+
+    /**
+     * Cancels every job of {@link #current} started for an older generation than the document's
+     * now, and interrupts its thread; its outcome is dropped. Called when a job for a new generation
+     * starts; a front end may call it as soon as the document changes. Event thread.
+     */
+    public void cancelStale() {
+        long now = generation.getAsLong();
+        for (Running r : List.copyOf(currentJobs)) {
+            if (r.generation() < now) {
+                r.cancel().set(true);
+                r.worker().cancel(true);
+                currentJobs.remove(r);
+            }
+        }
+    }
+
+    /** @return how many jobs of {@link #current} are still running (for tests) */
+    int currentJobsRunning() {
+        return currentJobs.size();
     }
 
     /**
@@ -101,12 +144,13 @@ public final class TaskRunner {
      */
     public <T> SwingWorker<T, Void> requested(String title, Job<T> job, Consumer<T> done, Consumer<Throwable> failed,
             Runnable cancelled) {
-        return start(title, job, done, failed, cancelled);
+        return start(title, job, new AtomicBoolean(), done, failed, cancelled);
     }
 
-    private <T> SwingWorker<T, Void> start(String title, Job<T> job, Consumer<T> done, Consumer<Throwable> failed, Runnable cancelled) {
-        AtomicBoolean cancel = new AtomicBoolean();
+    private <T> SwingWorker<T, Void> start(String title, Job<T> job, AtomicBoolean cancel, Consumer<T> done,
+            Consumer<Throwable> failed, Runnable cancelled) {
         TaskBar.Entry entry = title == null || bar == null ? null : bar.add(title, () -> cancel.set(true));
+        AtomicInteger shownPercent = new AtomicInteger(-1);
         Progress progress = new Progress() {
             @Override
             public void phase(String what) {
@@ -117,8 +161,22 @@ public final class TaskRunner {
 
             @Override
             public void checkCancelled() {
-                if (cancel.get() || Thread.currentThread().isInterrupted()) {
+                if (cancelled() || Thread.currentThread().isInterrupted()) {
                     throw new Progress.Cancelled();
+                }
+            }
+
+            @Override
+            public boolean cancelled() {
+                return cancel.get();
+            }
+
+            @Override
+            public void progress(double fraction) {
+                // throttled: the event thread hears of a whole percent at most once
+                int now = (int) Math.floor(100 * Math.min(1.0, Math.max(0.0, fraction)));
+                if (entry != null && now > shownPercent.getAndAccumulate(now, Math::max)) {
+                    SwingUtilities.invokeLater(() -> entry.percent(now));
                 }
             }
         };
@@ -140,7 +198,7 @@ public final class TaskRunner {
                 } catch (CancellationException e) {
                     cancelled.run();
                 } catch (ExecutionException e) {
-                    if (e.getCause() instanceof Progress.Cancelled) {
+                    if (isCancellation(e.getCause())) {
                         cancelled.run();
                     } else {
                         failed.accept(e.getCause());
@@ -152,5 +210,10 @@ public final class TaskRunner {
         };
         worker.execute();
         return worker;
+    }
+
+    /** @return true for a job's own stop on Cancel: the task bar's kind, or the core's (typed, by key) */
+    private static boolean isCancellation(Throwable t) {
+        return t instanceof Progress.Cancelled || t instanceof CoreException c && c.key() == Messages.CANCELLED;
     }
 }

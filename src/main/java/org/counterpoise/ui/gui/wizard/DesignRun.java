@@ -6,12 +6,10 @@ import java.util.logging.Level;
 import java.util.logging.Logger;
 import javax.swing.Timer;
 import org.counterpoise.core.design.AchievablePeak;
-import org.counterpoise.core.design.DesignCurves;
+import org.counterpoise.core.design.DesignDossier;
 import org.counterpoise.core.design.DesignMethod;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.DesignStudy;
-import org.counterpoise.core.design.Designer;
-import org.counterpoise.core.design.RobustnessAnalysis;
 import org.counterpoise.core.design.RobustnessResult;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.error.NotFoundException;
@@ -36,6 +34,8 @@ final class DesignRun {
     private final Consumer<String> status;
     private final Runnable navigation;
     private final Timer pause = new Timer(PAUSE_MS, e -> recompute());
+    /** The analyses of recent project states: one state is designed and studied once. */
+    private final DesignDossier.Cache dossiers = new DesignDossier.Cache();
     private TaskRunner tasks;
     private long generation;
     private long shownGeneration = -1;
@@ -79,6 +79,9 @@ final class DesignRun {
     /** Inputs changed (an edit, or text that is not a number yet): recompute after a pause. */
     void changed() {
         generation++;
+        if (tasks != null) {
+            tasks.cancelStale(); // work for the old inputs stops now, not after the pause
+        }
         pause.restart();
     }
 
@@ -158,24 +161,22 @@ final class DesignRun {
         status.accept(e.getMessage());
     }
 
-    private record Computed(DesignResult result, DesignCurves curves) {
-    }
-
     private void startDesign(DesignStudy study, Project p, long gen) {
+        DesignDossier dossier = dossiers.dossier(study);
         tasks.current(null, progress -> {
-            DesignResult r = Designer.design(study);
-            return new Computed(r, DesignCurves.of(r));
-        }, (Computed c) -> {
-            shown = c.result();
+            dossier.curves(); // the design and its curves, computed once for this state
+            return dossier;
+        }, (DesignDossier d) -> {
+            shown = d.design();
             shownGeneration = gen;
-            steps.result().show(c.result(), c.curves());
-            steps.sheet().show(c.result(), p);
+            steps.result().show(d.design(), d.curves());
+            steps.sheet().show(d, p);
             if (steps.sheet().component().isShowing()) {
                 steps.sheet().shown();
             }
             navigation.run();
-            startRobustness(c.result());
-            startMassChart(study, c.result());
+            startRobustness(d);
+            startMassChart(study, d.design());
         }, e -> failed(e, gen));
     }
 
@@ -192,11 +193,13 @@ final class DesignRun {
         navigation.run();
     }
 
-    private void startRobustness(DesignResult r) {
+    private void startRobustness(DesignDossier dossier) {
+        DesignResult r = dossier.design();
         steps.robustness().show(r, null);
         tasks.current("Robustness study and Monte Carlo", progress -> {
-            progress.phase(r.study().robustness().samples() + " sampled builds");
-            RobustnessResult result = RobustnessAnalysis.run(r, r.study().robustness());
+            progress.phase(r.study().robustness().tolerances().anyGiven()
+                    ? r.study().robustness().samples() + " sampled builds" : "worst case and robust design");
+            RobustnessResult result = dossier.robustness(progress);
             progress.checkCancelled();
             return result;
         }, (RobustnessResult result) -> steps.robustness().show(r, result), e -> {

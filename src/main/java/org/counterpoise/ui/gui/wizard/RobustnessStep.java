@@ -20,7 +20,7 @@ import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.RobustnessResult;
 import org.counterpoise.core.design.RobustnessSettings;
 import org.counterpoise.core.error.InvalidInputException;
-import org.counterpoise.core.robust.MonteCarloResult;
+import org.counterpoise.core.robust.MonteCarloOutcome;
 import org.counterpoise.core.robust.Tolerance;
 import org.counterpoise.core.units.Dimension;
 import org.counterpoise.core.units.Unit;
@@ -250,19 +250,24 @@ final class RobustnessStep extends Step {
             summary.setText(" ");
             return;
         }
-        MonteCarloResult mc = r.monteCarlo();
+        MonteCarloOutcome outcome = r.monteCarlo();
         // The figures are the robustness report's rows, in its words for values.
         ReportContent c = RobustnessContent.of(design, r);
-        ReportRow exceeding = c.row(ReportKey.MONTE_CARLO_EXCEEDING).orElseThrow();
+        String monteCarlo = outcome.result().isPresent()
+                ? "Monte Carlo P50 / P95: " + value(c, ReportKey.MONTE_CARLO_P50_P90) + " / "
+                        + value(c, ReportKey.MONTE_CARLO_P95_P99)
+                        + (c.row(ReportKey.MONTE_CARLO_EXCEEDING).orElseThrow().shown() ? "; above the target of "
+                                + value(c, ReportKey.TARGET) + ": " + value(c, ReportKey.MONTE_CARLO_EXCEEDING) : "")
+                : "Monte Carlo not run: " + value(c, ReportKey.MONTE_CARLO_NOT_RUN) + ".";
         summaryHtml = "Worst case of this design <b>" + value(c, ReportKey.WORST_CASE_PEAK)
                 + "</b>; robust design (f " + value(c, ReportKey.ROBUST_TUNING_RATIO) + ", \u03b6a "
                 + value(c, ReportKey.ROBUST_ABSORBER_DAMPING_RATIO) + ") <b>" + value(c, ReportKey.ROBUST_PEAKS)
-                + "</b>. Monte Carlo P50 / P95: " + value(c, ReportKey.MONTE_CARLO_P50_P90) + " / "
-                + value(c, ReportKey.MONTE_CARLO_P95_P99) + (exceeding.shown() ? "; above the target of "
-                        + value(c, ReportKey.TARGET) + ": " + value(c, ReportKey.MONTE_CARLO_EXCEEDING) : "");
+                + "</b>. " + monteCarlo;
         wrapSummary();
         sensitivity.show(theme -> RobustnessCharts.sensitivity(design, r, theme, 420, 320));
-        histogram.show(theme -> MonteCarloCharts.histogram(design, mc, theme, 420, 320));
+        outcome.result().ifPresentOrElse(
+                mc -> histogram.show(theme -> MonteCarloCharts.histogram(design, mc, theme, 420, 320)),
+                () -> histogram.message("No histogram: the Monte Carlo was not run (no tolerances given)."));
         mapHolder.show(theme -> RobustnessCharts.map(design, r, theme, 520, 480, 3));
     }
 

@@ -22,13 +22,10 @@ import javax.swing.filechooser.FileNameExtensionFilter;
 import org.apache.pdfbox.Loader;
 import org.apache.pdfbox.pdmodel.PDDocument;
 import org.apache.pdfbox.rendering.PDFRenderer;
-import org.counterpoise.core.design.DesignCurves;
-import org.counterpoise.core.design.DesignResult;
+import org.counterpoise.core.design.DesignDossier;
 import org.counterpoise.io.project.Project;
 import org.counterpoise.io.project.ProjectIdentity;
-import org.counterpoise.io.sheet.SheetContent;
 import org.counterpoise.io.sheet.SheetFiles;
-import org.counterpoise.io.sheet.SheetWriter;
 import org.counterpoise.ui.gui.task.TaskRunner;
 
 /**
@@ -41,7 +38,7 @@ final class SheetStep extends Step {
     private final JComponent page;
     private final TaskRunner tasks;
     private final Messages messages;
-    private DesignResult result;
+    private DesignDossier dossier;
     private Project project;
 
     /** Where the outcome of a save is said (the status line). */
@@ -93,14 +90,14 @@ final class SheetStep extends Step {
     }
 
     /**
-     * @param r the design now shown, or null
+     * @param d the analyses of the design now shown, or null
      * @param p the project it was computed from
      */
-    void show(DesignResult r, Project p) {
-        result = r;
+    void show(DesignDossier d, Project p) {
+        dossier = d;
         project = p;
         preview.setIcon(null);
-        preview.setText(r == null ? "Fix the inputs to see the sheet." : "Open this step to render the preview.");
+        preview.setText(d == null ? "Fix the inputs to see the sheet." : "Open this step to render the preview.");
     }
 
     private String issued() {
@@ -114,8 +111,8 @@ final class SheetStep extends Step {
     /** Renders the first page of the sheet in the background when the step is shown. */
     @Override
     void shown() {
-        DesignResult r = result;
-        if (r == null || previewShown()) {
+        DesignDossier d = dossier;
+        if (d == null || previewShown()) {
             return;
         }
         String notes = project.notes();
@@ -124,14 +121,14 @@ final class SheetStep extends Step {
         ProjectIdentity identity = project.identity();
         preview.setText("drawing the preview\u2026");
         tasks.current(null, progress -> {
+            d.monteCarlo(progress); // the dossier's run, shared with the robustness step: made once
             ByteArrayOutputStream pdf = new ByteArrayOutputStream();
-            SheetWriter.write(SheetContent.of(r, notes, date, revision, SheetFiles.monteCarlo(r), identity),
-                    SheetFiles.charts(r, DesignCurves.of(r)), pdf);
+            SheetFiles.writeSheet(d, notes, date, revision, identity, pdf);
             try (PDDocument doc = Loader.loadPDF(pdf.toByteArray())) {
                 return new PDFRenderer(doc).renderImageWithDPI(0, 80);
             }
         }, (BufferedImage image) -> {
-            if (r == result) {
+            if (d == dossier) {
                 preview.setIcon(new ImageIcon(image));
                 preview.setText(null);
             }
@@ -139,7 +136,7 @@ final class SheetStep extends Step {
     }
 
     private void savePdf() {
-        if (result == null) {
+        if (dossier == null) {
             return;
         }
         JFileChooser chooser = new JFileChooser();
@@ -164,14 +161,17 @@ final class SheetStep extends Step {
      * @param file the PDF
      */
     void writeSheet(Path file) {
-        DesignResult r = result;
+        DesignDossier d = dossier;
         String notes = project.notes();
         String date = issued();
         String revision = revision("A");
         ProjectIdentity identity = project.identity();
         tasks.requested("Saving the sheet " + file.getFileName(), progress -> {
-            progress.phase("computing and drawing");
-            SheetFiles.writeSheet(r, notes, file, date, revision, true, "sheet file", identity);
+            progress.phase("Monte Carlo");
+            d.monteCarlo(progress); // already made for this state unless the robustness step is still at it
+            progress.checkCancelled();
+            progress.phase("drawing");
+            SheetFiles.writeSheet(d, notes, file, date, revision, true, "sheet file", identity);
             return file;
         }, f -> messages.say("Saved the sheet to " + f + "."),
                 e -> JOptionPane.showMessageDialog(page, e.getMessage(), "Save sheet", JOptionPane.WARNING_MESSAGE),
@@ -179,7 +179,7 @@ final class SheetStep extends Step {
     }
 
     private void saveExports() {
-        if (result == null) {
+        if (dossier == null) {
             return;
         }
         JFileChooser chooser = new JFileChooser();
@@ -188,10 +188,10 @@ final class SheetStep extends Step {
             return;
         }
         Path dir = chooser.getSelectedFile().toPath();
-        DesignResult r = result;
+        DesignDossier d = dossier;
         tasks.requested("Saving curves, result and charts", progress -> {
             progress.phase("writing six files");
-            return SheetFiles.writeExports(r, dir, true, "folder");
+            return SheetFiles.writeExports(d, dir, true, "folder");
         }, (List<Path> written) -> messages.say("Wrote " + written.size() + " files to " + dir + "."),
                 e -> JOptionPane.showMessageDialog(page, e.getMessage(), "Exports", JOptionPane.WARNING_MESSAGE),
                 () -> messages.say("Saving the exports was cancelled."));

@@ -1,9 +1,11 @@
 package org.counterpoise.ui.gui.task;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
+import java.util.Optional;
 import java.util.concurrent.Callable;
 import java.util.concurrent.CopyOnWriteArrayList;
 import java.util.concurrent.CountDownLatch;
@@ -11,6 +13,7 @@ import java.util.concurrent.TimeUnit;
 import java.util.concurrent.atomic.AtomicLong;
 import javax.swing.JButton;
 import javax.swing.SwingUtilities;
+import org.counterpoise.core.error.CoreException;
 import org.counterpoise.ui.gui.Edt;
 import org.junit.jupiter.api.Test;
 
@@ -77,10 +80,15 @@ class TaskRunnerTest {
         assertTrue(started.await(30, TimeUnit.SECONDS));
         flush();
         assertTrue(onEdt(bar::shown).startsWith("Saving x.json"), onEdt(bar::shown));
+        assertEquals(Optional.of(TaskBar.State.RUNNING), onEdt(bar::shownState));
         onEdt(() -> {
             cancelButton(bar).doClick();
             return null;
         });
+        // the bar decides on the typed state, not on its text: Cancel is off while the job stops
+        assertEquals(Optional.of(TaskBar.State.CANCELLING), onEdt(bar::shownState));
+        assertEquals("Saving x.json: cancelling\u2026", onEdt(bar::shown));
+        assertFalse(onEdt(() -> cancelButton(bar).isEnabled()));
         release.countDown();
         assertTrue(over.await(30, TimeUnit.SECONDS));
         flush();
@@ -112,6 +120,57 @@ class TaskRunnerTest {
         go.countDown();
         assertTrue(end.await(30, TimeUnit.SECONDS));
         assertEquals(List.of("done written"), outcomes);
+    }
+
+    @Test
+    void aNewGenerationCancelsTheStaleJobsAndInterruptsThem() throws Exception {
+        TaskRunner runner = new TaskRunner(generation::get, null);
+        CountDownLatch bothStarted = new CountDownLatch(2);
+        CountDownLatch bothStopped = new CountDownLatch(2);
+        SwingUtilities.invokeAndWait(() -> {
+            // a job that blocks until it is interrupted
+            runner.current(null, p -> {
+                bothStarted.countDown();
+                try {
+                    new CountDownLatch(1).await();
+                } catch (InterruptedException e) {
+                    outcomes.add("blocked job interrupted");
+                } finally {
+                    bothStopped.countDown();
+                }
+                return "never";
+            }, r -> outcomes.add("shown " + r), e -> outcomes.add("failed"));
+            // a long core computation that asks the core's question between its pieces
+            runner.current(null, p -> {
+                bothStarted.countDown();
+                try {
+                    while (true) {
+                        p.checkCancelled("the long computation"); // ProgressListener's check
+                        Thread.onSpinWait();
+                    }
+                } catch (CoreException e) {
+                    outcomes.add("computation stopped: " + e.key());
+                    throw e;
+                } finally {
+                    bothStopped.countDown();
+                }
+            }, r -> outcomes.add("shown"), e -> outcomes.add("failed"));
+        });
+        assertTrue(bothStarted.await(30, TimeUnit.SECONDS));
+        assertEquals(2, onEdt(runner::currentJobsRunning));
+        CountDownLatch fresh = new CountDownLatch(1);
+        SwingUtilities.invokeAndWait(() -> {
+            generation.incrementAndGet(); // an edit: the two jobs now work for an old state
+            runner.current(null, p -> "new", r -> {
+                outcomes.add("shown " + r);
+                fresh.countDown();
+            }, e -> fresh.countDown());
+        });
+        assertTrue(bothStopped.await(30, TimeUnit.SECONDS), "both stale jobs stopped without finishing");
+        assertTrue(fresh.await(30, TimeUnit.SECONDS));
+        flush();
+        assertEquals(List.of("blocked job interrupted", "computation stopped: CANCELLED", "shown new"),
+                outcomes.stream().sorted().toList());
     }
 
     private static JButton cancelButton(TaskBar bar) {
