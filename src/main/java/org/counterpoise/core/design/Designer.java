@@ -16,7 +16,7 @@ import org.counterpoise.core.model.Structure;
 import org.counterpoise.core.model.Tuning;
 import org.counterpoise.core.remedy.DetuningAlternative;
 import org.counterpoise.core.remedy.StructureDetuning;
-import org.counterpoise.core.robust.ToleratedDetuning;
+import org.counterpoise.core.robust.ToleratedMistuning;
 import org.counterpoise.core.response.ResponseKind;
 import org.counterpoise.core.response.ResponsePeak;
 import org.counterpoise.core.response.SystemResponse;
@@ -87,7 +87,7 @@ public final class Designer {
 
         boolean noTarget = after.unbounded() || after.value() == 0.0;
         DetuningAlternative none = new DetuningAlternative(after.value(), Double.NaN, Double.NaN);
-        DetuningAlternative detuning = noTarget ? none : StructureDetuning.search(structure, excitation.kind(),
+        DetuningAlternative stiffnessDetuning = noTarget ? none : StructureDetuning.search(structure, excitation.kind(),
                 excitation.amplitude(), band, kind, after.value());
         DetuningAlternative massDetuning = noTarget ? none : StructureDetuning.searchMass(structure,
                 excitation.kind(), excitation.amplitude(), band, kind, after.value());
@@ -99,10 +99,10 @@ public final class Designer {
         return new DesignResult(study, chosen.source(), chosen.note(), tuning, absorber, sag, before, after, motionBefore,
                 motionAfter, strokeInBand, strokeRunUp, clearance,
                 fitted.peakOver(ResponseKind.SPRING_FORCE, band), fitted.peakOver(ResponseKind.DAMPER_FORCE, band),
-                fitted.peakOver(ResponseKind.ABSORBER_FORCE, band), coupled, detuning, massDetuning,
-                ToleratedDetuning.ofStructure(structure, absorber, excitation, kind, DesignResult.TOLERANCE_ALLOWANCE,
+                fitted.peakOver(ResponseKind.ABSORBER_FORCE, band), coupled, stiffnessDetuning, massDetuning,
+                ToleratedMistuning.ofStructure(structure, absorber, excitation, kind, DesignResult.TOLERANCE_ALLOWANCE,
                         DesignResult.TOLERANCE_SEARCH),
-                ToleratedDetuning.ofAbsorber(structure, absorber, excitation, kind, DesignResult.TOLERANCE_ALLOWANCE,
+                ToleratedMistuning.ofAbsorber(structure, absorber, excitation, kind, DesignResult.TOLERANCE_ALLOWANCE,
                         DesignResult.TOLERANCE_SEARCH),
                 warnings);
     }

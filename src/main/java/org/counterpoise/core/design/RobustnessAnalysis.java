@@ -3,13 +3,13 @@ package org.counterpoise.core.design;
 import java.util.List;
 import org.counterpoise.core.model.Absorber;
 import org.counterpoise.core.model.Tuning;
-import org.counterpoise.core.robust.DetuningRange;
+import org.counterpoise.core.robust.MistuningRange;
 import org.counterpoise.core.robust.Mistuning;
 import org.counterpoise.core.robust.MonteCarlo;
 import org.counterpoise.core.robust.RobustDesign;
 import org.counterpoise.core.robust.RobustOptimiser;
 import org.counterpoise.core.robust.Sensitivity;
-import org.counterpoise.core.robust.ToleratedDetuning;
+import org.counterpoise.core.robust.ToleratedMistuning;
 import org.counterpoise.core.robust.WorstCase;
 import org.counterpoise.core.tuning.DenHartogEqualPeak;
 
@@ -37,9 +37,9 @@ public final class RobustnessAnalysis {
         double curveRange = Math.max(Math.max(sRange, aRange), 0.05);
         RobustDesign robust = robustDesign(m, design.tuning(), sRange, aRange);
         Absorber robustAbsorber = Absorber.of(study.structure(), robust.tuning());
-        DetuningRange forTarget = Double.isNaN(settings.target())
-                ? new DetuningRange(Double.NaN, Double.NaN, Double.NaN, curveRange, false)
-                : ToleratedDetuning.ofStructureForTarget(m, a, settings.target(), 0.5);
+        MistuningRange forTarget = Double.isNaN(settings.target())
+                ? new MistuningRange(Double.NaN, Double.NaN, Double.NaN, curveRange, false)
+                : ToleratedMistuning.ofStructureForTarget(m, a, settings.target(), 0.5);
         return new RobustnessResult(settings,
                 Sensitivity.structure(m, a, curveRange, CURVE_POINTS),
                 Sensitivity.absorberFrequency(m, a, curveRange, CURVE_POINTS),

@@ -1,7 +1,7 @@
 package org.counterpoise.core.design;
 
 import org.counterpoise.core.model.Absorber;
-import org.counterpoise.core.robust.DetuningRange;
+import org.counterpoise.core.robust.MistuningRange;
 import org.counterpoise.core.robust.MonteCarloResult;
 import org.counterpoise.core.robust.RobustDesign;
 import org.counterpoise.core.robust.SensitivityCurve;
@@ -16,16 +16,16 @@ import org.counterpoise.core.robust.WorstCase;
  * @param absorberCurve design's peak against absorber frequency factor
  * @param dampingCurve design's peak against absorber damping factor
  * @param robustStructureCurve the robust design's peak against structure frequency factor
- * @param map design's peak over structure detuning x absorber detuning
+ * @param map design's peak over structure mistuning x absorber mistuning
  * @param worstCase the design's worst case over the ranges
  * @param robust the robust design for the same mass
  * @param robustAbsorber the robust design's absorber
- * @param toleratedForTarget the structure detuning range that keeps the design within the target
+ * @param toleratedForTarget the structure mistuning range that keeps the design within the target
  *     (not defined without a target, or when the nominal design misses it)
  * @param monteCarlo the tolerance Monte Carlo of the design
  */
 public record RobustnessResult(RobustnessSettings settings, SensitivityCurve structureCurve,
         SensitivityCurve absorberCurve, SensitivityCurve dampingCurve, SensitivityCurve robustStructureCurve,
         SensitivityMap map, WorstCase.Point worstCase, RobustDesign robust, Absorber robustAbsorber,
-        DetuningRange toleratedForTarget, MonteCarloResult monteCarlo) {
+        MistuningRange toleratedForTarget, MonteCarloResult monteCarlo) {
 }

@@ -25,8 +25,8 @@ public record RobustnessSettings(double structureRange, double absorberRange, do
 
     /** Validates the record. */
     public RobustnessSettings {
-        Checks.inRange("robustness.structure_detuning", structureRange, 0.0, 0.5);
-        Checks.inRange("robustness.absorber_detuning", absorberRange, 0.0, 0.5);
+        Checks.inRange("robustness.structure_mistuning", structureRange, 0.0, 0.5);
+        Checks.inRange("robustness.absorber_mistuning", absorberRange, 0.0, 0.5);
         if (!Double.isNaN(target)) {
             Checks.positive("robustness.target", target);
         }

@@ -66,10 +66,10 @@ public final class ResultJson {
             coupled[i] = hz(coupled[i]);
         }
         JsonNumbers.putAll(o, "coupled_natural_frequencies_Hz", coupled);
-        number(o, "detuning_stiffer_factor", r.detuning().raiseFactor());
-        number(o, "detuning_softer_factor", r.detuning().lowerFactor());
-        number(o, "mass_change_lighter_factor", r.massDetuning().raiseFactor());
-        number(o, "mass_change_heavier_factor", r.massDetuning().lowerFactor());
+        number(o, "detuning_stiffer_factor", r.stiffnessDetuning().raiseFactor());
+        number(o, "detuning_softer_factor", r.stiffnessDetuning().lowerFactor());
+        number(o, "detuning_lighter_factor", r.massDetuning().raiseFactor());
+        number(o, "detuning_heavier_factor", r.massDetuning().lowerFactor());
         r.rms().ifPresent(rms -> {
             o.addProperty("spectrum", "white-noise");
             number(o, "psd_level_SI_per_Hz", rms.psdLevel());
@@ -102,7 +102,7 @@ public final class ResultJson {
         return JsonNumbers.write(of(r));
     }
 
-    private static void tolerance(JsonObject o, String key, org.counterpoise.core.robust.DetuningRange range) {
+    private static void tolerance(JsonObject o, String key, org.counterpoise.core.robust.MistuningRange range) {
         number(o, "tolerated_" + key + "_factor_low", range.low());
         number(o, "tolerated_" + key + "_factor_high", range.high());
         if (range.ofBareResponse()) {

@@ -23,8 +23,8 @@ public final class RobustnessJson {
         o.addProperty("response_quantity", design.study().response().name().toLowerCase(java.util.Locale.ROOT)
                 .replace('_', '-'));
         o.addProperty("response_unit", design.study().response().dimension().siSymbol());
-        number(o, "structure_detuning_range", r.settings().structureRange());
-        number(o, "absorber_detuning_range", r.settings().absorberRange());
+        number(o, "structure_mistuning_range", r.settings().structureRange());
+        number(o, "absorber_mistuning_range", r.settings().absorberRange());
         number(o, "target", r.settings().target());
         number(o, "nominal_peak", design.responseAfter().value());
         number(o, "worst_case_peak", r.worstCase().peak());

@@ -204,7 +204,7 @@ public record SheetContent(String projectName, String notes, String date, String
         List<Row> robust = new ArrayList<>();
         robust.add(text("Structure natural frequency may be off by", DesignReport.tolerance(r.structureTolerance(), 1)));
         robust.add(text("Absorber natural frequency may be off by", DesignReport.tolerance(r.absorberTolerance(), 1)));
-        DetuningAlternative d = r.detuning();
+        DetuningAlternative d = r.stiffnessDetuning();
         robust.add(text("Same result by stiffening the structure", alternative(d.raiseFactor(), d.target(), "stiffness")));
         robust.add(text("Same result by softening the structure", alternative(d.lowerFactor(), d.target(), "stiffness")));
         DetuningAlternative md = r.massDetuning();

@@ -9,7 +9,7 @@ import org.counterpoise.core.model.Excitation;
 import org.counterpoise.core.model.FrequencyBand;
 import org.counterpoise.core.model.Structure;
 import org.counterpoise.core.remedy.DetuningAlternative;
-import org.counterpoise.core.robust.DetuningRange;
+import org.counterpoise.core.robust.MistuningRange;
 import org.counterpoise.core.response.ResponseKind;
 import org.counterpoise.core.response.ResponsePeak;
 import org.counterpoise.core.units.Dimension;
@@ -128,8 +128,8 @@ public final class DesignReport {
         row(out, "structure natural frequency", tolerance(r.structureTolerance(), 1));
         row(out, "absorber spring rate", tolerance(r.absorberTolerance(), 2));
 
-        section(out, "Alternative: change the structure itself instead");
-        DetuningAlternative d = r.detuning();
+        section(out, "Alternative: detune the structure instead");
+        DetuningAlternative d = r.stiffnessDetuning();
         row(out, "target (what the absorber achieves)", DisplayUnits.format(d.target(), study.response().dimension()));
         if (d.target() == 0.0) {
             row(out, "stiffer or softer", "no stiffness change stops the motion entirely");
@@ -159,7 +159,7 @@ public final class DesignReport {
      * @param power 1 for a frequency, 2 for a stiffness (proportional to frequency squared)
      * @return e.g. "-3.1 % to +2.7 %"
      */
-    public static String tolerance(DetuningRange range, int power) {
+    public static String tolerance(MistuningRange range, int power) {
         if (!range.defined()) {
             return "not defined (the nominal response is zero or unbounded)";
         }

@@ -42,7 +42,7 @@ public final class RobustnessReport {
                 + DisplayUnits.format(r.robust().nominalPeak(), d));
         if (!Double.isNaN(r.settings().target())) {
             line(out, "target", DisplayUnits.format(r.settings().target(), d));
-            line(out, "structure detuning within target", r.toleratedForTarget().defined()
+            line(out, "structure mistuning within target", r.toleratedForTarget().defined()
                     ? DesignReport.tolerance(r.toleratedForTarget(), 1) : "none: the nominal design misses the target");
         }
         out.append("\nSensitivity: worst response in band against structure frequency\n");

@@ -1,7 +1,7 @@
 package org.counterpoise.core.robust;
 
 /**
- * The range of a frequency factor (1 = nominal) over which a design's peak response over the
+ * A tolerated mistuning: the range of a natural-frequency factor (1 = nominal) over which a design's peak response over the
  * band stays within an allowance of its nominal peak.
  *
  * @param low lowest tolerated factor (&lt;= 1), or NaN when the search limit was reached first
@@ -13,7 +13,7 @@ package org.counterpoise.core.robust;
  *     its one speed): the range then keeps the response within the allowance times the BARE
  *     structure's response, since a rise relative to zero means nothing
  */
-public record DetuningRange(double low, double high, double allowance, double searchLimit, boolean defined,
+public record MistuningRange(double low, double high, double allowance, double searchLimit, boolean defined,
         boolean ofBareResponse) {
 
     /**
@@ -24,7 +24,7 @@ public record DetuningRange(double low, double high, double allowance, double se
      * @param searchLimit searched each side, fraction
      * @param defined false when not defined
      */
-    public DetuningRange(double low, double high, double allowance, double searchLimit, boolean defined) {
+    public MistuningRange(double low, double high, double allowance, double searchLimit, boolean defined) {
         this(low, high, allowance, searchLimit, defined, false);
     }
 }
