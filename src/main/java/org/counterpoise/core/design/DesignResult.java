@@ -21,7 +21,7 @@ import org.counterpoise.core.response.ResponsePeak;
  * @param methodNote what the method assumed or found (e.g. which peaks are equal at the optimum)
  * @param tuning mass ratio, tuning ratio, absorber damping ratio
  * @param absorber absorber mass, spring rate, damping coefficient
- * @param staticSag static deflection of the absorber spring under the absorber's weight, m (NaN
+ * @param staticDeflection static deflection of the absorber spring under the absorber's weight, m (NaN
  *     when the absorber does not hang on its spring)
  * @param responseBefore the response that matters, bare structure, in band
  * @param responseAfter the response that matters, with the absorber, in band
@@ -42,7 +42,7 @@ import org.counterpoise.core.response.ResponsePeak;
  * @param warnings non-fatal findings
  */
 public record DesignResult(DesignStudy study, String methodSource, String methodNote, Tuning tuning, Absorber absorber,
-        double staticSag, ResponsePeak responseBefore, ResponsePeak responseAfter,
+        double staticDeflection, ResponsePeak responseBefore, ResponsePeak responseAfter,
         Map<ResponseKind, ResponsePeak> motionBefore, Map<ResponseKind, ResponsePeak> motionAfter,
         ResponsePeak strokeInBand, ResponsePeak strokeRunUp, double clearance, ResponsePeak springForce,
         ResponsePeak damperForce, ResponsePeak absorberForce, double[] coupledNaturalFrequencies,

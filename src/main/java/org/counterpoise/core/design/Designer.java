@@ -93,11 +93,11 @@ public final class Designer {
                 excitation.kind(), excitation.amplitude(), band, kind, after.value());
 
         addWarnings(warnings, study, mu, tuning, before, after, strokeRunUp, coupled);
-        double sag = study.hangsVertically()
+        double staticDeflection = study.hangsVertically()
                 ? org.counterpoise.core.units.Gravity.STANDARD / (absorber.naturalFrequency() * absorber.naturalFrequency())
                 : Double.NaN;
-        return new DesignResult(study, chosen.source(), chosen.note(), tuning, absorber, sag, before, after, motionBefore,
-                motionAfter, strokeInBand, strokeRunUp, clearance,
+        return new DesignResult(study, chosen.source(), chosen.note(), tuning, absorber, staticDeflection, before,
+                after, motionBefore, motionAfter, strokeInBand, strokeRunUp, clearance,
                 fitted.peakOver(ResponseKind.SPRING_FORCE, band), fitted.peakOver(ResponseKind.DAMPER_FORCE, band),
                 fitted.peakOver(ResponseKind.ABSORBER_FORCE, band), coupled, stiffnessDetuning, massDetuning,
                 ToleratedMistuning.ofStructure(structure, absorber, excitation, kind, DesignResult.TOLERANCE_ALLOWANCE,

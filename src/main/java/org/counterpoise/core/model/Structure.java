@@ -3,7 +3,7 @@ package org.counterpoise.core.model;
 import org.counterpoise.core.error.Checks;
 
 /**
- * The primary structure: one mode, described by its modal mass, modal stiffness and viscous
+ * The structure (the trade also says "primary system"): one mode, described by its modal mass, modal stiffness and viscous
  * damping ratio, and by the value of the mode shape at the point where the absorber is attached.
  *
  * <p>With the mode shape normalised so that the modal mass belongs to a unit value at the

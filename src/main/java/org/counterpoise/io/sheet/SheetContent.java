@@ -161,8 +161,8 @@ public record SheetContent(String projectName, String notes, String date, String
                 DesignReport.tolerance(r.absorberTolerance(), 2)));
         build.add(quantity("Damping coefficient c2", r.absorber().damping(), Dimension.DAMPING_COEFFICIENT));
         build.add(quantity("Absorber natural frequency", r.absorber().naturalFrequency(), Dimension.FREQUENCY));
-        if (!Double.isNaN(r.staticSag())) {
-            build.add(quantity("Static sag of the spring", r.staticSag(), Dimension.LENGTH));
+        if (!Double.isNaN(r.staticDeflection())) {
+            build.add(quantity("Static deflection of the spring", r.staticDeflection(), Dimension.LENGTH));
         }
         build.add(quantity("Peak stroke in band", r.strokeInBand().value(), Dimension.LENGTH));
         build.add(quantity("Peak stroke during run-up", r.strokeRunUp().value(), Dimension.LENGTH));

@@ -86,8 +86,8 @@ public final class DesignReport {
         row(out, "spring rate", DisplayUnits.format(r.absorber().stiffness(), Dimension.STIFFNESS));
         row(out, "damping coefficient", DisplayUnits.format(r.absorber().damping(), Dimension.DAMPING_COEFFICIENT));
         row(out, "natural frequency", frequency(r.absorber().naturalFrequency()));
-        if (!Double.isNaN(r.staticSag())) {
-            row(out, "static sag of the spring", DisplayUnits.format(r.staticSag(), Dimension.LENGTH));
+        if (!Double.isNaN(r.staticDeflection())) {
+            row(out, "static deflection of the spring", DisplayUnits.format(r.staticDeflection(), Dimension.LENGTH));
         }
 
         section(out, band.isSingle() ? "Structure response at the forcing frequency"

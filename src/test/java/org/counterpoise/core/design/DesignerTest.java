@@ -33,8 +33,8 @@ class DesignerTest {
         double wa = omega1 / 1.05;
         assertEquals(100 * wa * wa, r.absorber().stiffness(), 1e-6);
         assertEquals(2 * Math.sqrt(3 * 0.05 / (8 * 1.05)) * 100 * wa, r.absorber().damping(), 1e-9);
-        // Static sag g / omega_a^2 (common practice).
-        assertEquals(9.80665 / (wa * wa), r.staticSag(), 1e-15);
+        // Static deflection g / omega_a^2 (common practice).
+        assertEquals(9.80665 / (wa * wa), r.staticDeflection(), 1e-15);
         // The bare undamped structure is resonant in the band: unbounded before, finite after.
         assertTrue(r.responseBefore().unbounded());
         assertFalse(r.responseAfter().unbounded());
