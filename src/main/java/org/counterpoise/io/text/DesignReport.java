@@ -123,7 +123,7 @@ public final class DesignReport {
         row(out, "natural frequencies with absorber", QuantityFormat.number(hz(w[0]), 4) + " Hz and "
                 + QuantityFormat.number(hz(w[1]), 4) + " Hz (undamped)");
 
-        section(out, "Tolerance to mistuning (peak in band rising by at most "
+        section(out, "Tolerated mistuning (peak in band rising by at most "
                 + QuantityFormat.number(100 * DesignResult.TOLERANCE_ALLOWANCE, 2) + " %)");
         row(out, "structure natural frequency", tolerance(r.structureTolerance(), 1));
         row(out, "absorber spring rate", tolerance(r.absorberTolerance(), 2));
