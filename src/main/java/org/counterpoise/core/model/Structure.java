@@ -82,7 +82,7 @@ public record Structure(double modalMass, double modalStiffness, double dampingR
 
     /**
      * @param factor scale of the natural frequency (1.05 = 5 % high), by scaling the stiffness
-     * @return the detuned structure with the same damping ratio
+     * @return the mistuned structure with the same damping ratio
      */
     public Structure withFrequencyScaledBy(double factor) {
         return new Structure(modalMass, modalStiffness * factor * factor, dampingRatio, modeShapeAtAbsorber);
