@@ -9,7 +9,7 @@ import org.counterpoise.core.model.Absorber;
 import org.counterpoise.core.model.Tuning;
 import org.counterpoise.core.optim.ActiveConstraint;
 import org.counterpoise.core.remedy.DetuningAlternative;
-import org.counterpoise.core.robust.DetuningRange;
+import org.counterpoise.core.robust.MistuningRange;
 import org.counterpoise.core.response.ResponseKind;
 import org.counterpoise.core.response.ResponsePeak;
 
@@ -24,7 +24,7 @@ import org.counterpoise.core.response.ResponsePeak;
  * @param methodNote what the method assumed or found (e.g. which peaks are equal at the optimum)
  * @param tuning mass ratio, tuning ratio, absorber damping ratio
  * @param absorber absorber mass, spring rate, damping coefficient
- * @param staticSag static deflection of the absorber spring under the absorber's weight, m (empty
+ * @param staticDeflection static deflection of the absorber spring under the absorber's weight, m (empty
  *     when the absorber does not hang on its spring)
  * @param responseBefore the response that matters, bare structure, in band
  * @param responseAfter the response that matters, with the absorber, in band
@@ -37,7 +37,7 @@ import org.counterpoise.core.response.ResponsePeak;
  * @param damperForce damper force in band, N
  * @param absorberForce spring plus damper force in band, N
  * @param coupledNaturalFrequencies the two natural frequencies of the undamped pair, rad/s
- * @param detuning the stiffness change of the bare structure that would do as well
+ * @param stiffnessDetuning the stiffness change of the bare structure that would do as well
  * @param massDetuning the mass change of the bare structure that would do as well
  * @param structureTolerance how far the structure's natural frequency may be off before the
  *     response that matters rises by {@link #TOLERANCE_ALLOWANCE}
@@ -47,17 +47,17 @@ import org.counterpoise.core.response.ResponsePeak;
  *     ({@code NONE} for every other method); the words are in {@code io.text.MethodNoteText}
  */
 public record DesignResult(DesignStudy study, String methodSource, String methodNote, Tuning tuning, Absorber absorber,
-        OptionalDouble staticSag, ResponsePeak responseBefore, ResponsePeak responseAfter,
+        OptionalDouble staticDeflection, ResponsePeak responseBefore, ResponsePeak responseAfter,
         Map<ResponseKind, ResponsePeak> motionBefore, Map<ResponseKind, ResponsePeak> motionAfter,
         ResponsePeak strokeInBand, ResponsePeak strokeRunUp, double clearance, ResponsePeak springForce,
         ResponsePeak damperForce, ResponsePeak absorberForce, double[] coupledNaturalFrequencies,
-        DetuningAlternative detuning, DetuningAlternative massDetuning, DetuningRange structureTolerance, DetuningRange absorberTolerance,
+        DetuningAlternative stiffnessDetuning, DetuningAlternative massDetuning, MistuningRange structureTolerance, MistuningRange absorberTolerance,
         List<Warning> warnings, ActiveConstraint activeConstraint) {
 
-    /** The rise of the peak response that defines the tolerated detuning (a design choice: 10 %). */
+    /** The rise of the peak response that defines the tolerated mistuning (a design choice: 10 %). */
     public static final double TOLERANCE_ALLOWANCE = 0.10;
 
-    /** How far each side the tolerated detuning is searched (30 %). */
+    /** How far each side the tolerated mistuning is searched (30 %). */
     public static final double TOLERANCE_SEARCH = 0.30;
 
     /** The three motions reported before and after, in this order. */

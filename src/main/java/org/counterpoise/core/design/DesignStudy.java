@@ -17,7 +17,7 @@ import org.counterpoise.core.response.ResponseKind;
  * @param response the response that matters (the one the design minimises)
  * @param sizing mass ratio or mass budget
  * @param method design method
- * @param hangsVertically true when the absorber spring carries the absorber's weight (static sag)
+ * @param hangsVertically true when the absorber spring carries the absorber's weight (static deflection)
  * @param strokeMargin clearance over the computed peak stroke (&gt;= 1; 1.5 is common practice)
  * @param constraints limits on the design (used by the exact-peak method)
  * @param robustness expected mistuning, target and tolerances (used by robust-peak and the

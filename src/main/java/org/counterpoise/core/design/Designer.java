@@ -22,7 +22,7 @@ import org.counterpoise.core.rational.TransferFunction;
 import org.counterpoise.core.remedy.DetuningAlternative;
 import org.counterpoise.core.remedy.StructureDetuning;
 import org.counterpoise.core.response.TransferFunctions;
-import org.counterpoise.core.robust.ToleratedDetuning;
+import org.counterpoise.core.robust.ToleratedMistuning;
 import org.counterpoise.core.response.ResponseKind;
 import org.counterpoise.core.response.ResponsePeak;
 import org.counterpoise.core.response.SystemResponse;
@@ -108,9 +108,9 @@ public final class Designer {
                 motionAfter, strokeInBand, strokeRunUp, clearance,
                 fitted.peakOver(ResponseKind.SPRING_FORCE, band), fitted.peakOver(ResponseKind.DAMPER_FORCE, band),
                 fitted.peakOver(ResponseKind.ABSORBER_FORCE, band), coupled, detuning, massDetuning,
-                ToleratedDetuning.ofStructure(structure, absorber, excitation, kind, DesignResult.TOLERANCE_ALLOWANCE,
+                ToleratedMistuning.ofStructure(structure, absorber, excitation, kind, DesignResult.TOLERANCE_ALLOWANCE,
                         DesignResult.TOLERANCE_SEARCH),
-                ToleratedDetuning.ofAbsorber(structure, absorber, excitation, kind, DesignResult.TOLERANCE_ALLOWANCE,
+                ToleratedMistuning.ofAbsorber(structure, absorber, excitation, kind, DesignResult.TOLERANCE_ALLOWANCE,
                         DesignResult.TOLERANCE_SEARCH),
                 warnings, active[0]);
     }

@@ -5,7 +5,7 @@ import java.util.Optional;
 import org.counterpoise.core.model.Absorber;
 import org.counterpoise.core.model.Tuning;
 import org.counterpoise.core.progress.ProgressListener;
-import org.counterpoise.core.robust.DetuningRange;
+import org.counterpoise.core.robust.MistuningRange;
 import org.counterpoise.core.robust.Mistuning;
 import org.counterpoise.core.robust.MonteCarloOutcome;
 import org.counterpoise.core.robust.RobustDesign;
@@ -13,7 +13,7 @@ import org.counterpoise.core.robust.RobustOptimiser;
 import org.counterpoise.core.robust.Sensitivity;
 import org.counterpoise.core.robust.SensitivityCurve;
 import org.counterpoise.core.robust.SensitivityMap;
-import org.counterpoise.core.robust.ToleratedDetuning;
+import org.counterpoise.core.robust.ToleratedMistuning;
 import org.counterpoise.core.robust.WorstCase;
 import org.counterpoise.core.tuning.DenHartogEqualPeak;
 
@@ -74,8 +74,8 @@ public final class RobustnessAnalysis {
                 seeds(design.tuning()), listener.part(0.0, 0.7));
         Absorber robustAbsorber = Absorber.of(study.structure(), robust.tuning());
         listener.checkCancelled(WHAT);
-        Optional<DetuningRange> forTarget = settings.target().isPresent()
-                ? Optional.of(ToleratedDetuning.ofStructureForTarget(m, a, settings.target().getAsDouble(), 0.5))
+        Optional<MistuningRange> forTarget = settings.target().isPresent()
+                ? Optional.of(ToleratedMistuning.ofStructureForTarget(m, a, settings.target().getAsDouble(), 0.5))
                 : Optional.empty();
         SensitivityCurve structureCurve = Sensitivity.structure(m, a, curveRange, CURVE_POINTS);
         SensitivityCurve absorberCurve = Sensitivity.absorberFrequency(m, a, curveRange, CURVE_POINTS);

@@ -2,7 +2,7 @@ package org.counterpoise.core.design;
 
 import java.util.Optional;
 import org.counterpoise.core.model.Absorber;
-import org.counterpoise.core.robust.DetuningRange;
+import org.counterpoise.core.robust.MistuningRange;
 import org.counterpoise.core.robust.MonteCarloOutcome;
 import org.counterpoise.core.robust.RobustDesign;
 import org.counterpoise.core.robust.SensitivityCurve;
@@ -28,5 +28,5 @@ import org.counterpoise.core.robust.WorstCase;
 public record RobustnessResult(RobustnessSettings settings, SensitivityCurve structureCurve,
         SensitivityCurve absorberCurve, SensitivityCurve dampingCurve, SensitivityCurve robustStructureCurve,
         SensitivityMap map, WorstCase.Point worstCase, RobustDesign robust, Absorber robustAbsorber,
-        Optional<DetuningRange> toleratedForTarget, MonteCarloOutcome monteCarlo) {
+        Optional<MistuningRange> toleratedForTarget, MonteCarloOutcome monteCarlo) {
 }

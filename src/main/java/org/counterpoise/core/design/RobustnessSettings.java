@@ -26,8 +26,8 @@ public record RobustnessSettings(double structureRange, double absorberRange, Op
 
     /** Validates the record. */
     public RobustnessSettings {
-        Checks.inRange("robustness.structure_detuning", structureRange, 0.0, 0.5);
-        Checks.inRange("robustness.absorber_detuning", absorberRange, 0.0, 0.5);
+        Checks.inRange("robustness.structure_mistuning", structureRange, 0.0, 0.5);
+        Checks.inRange("robustness.absorber_mistuning", absorberRange, 0.0, 0.5);
         Checks.present("robustness.target", target, "a target or none");
         target.ifPresent(v -> Checks.positive("robustness.target", v));
         Checks.present("robustness.tolerances", tolerances, "tolerances");

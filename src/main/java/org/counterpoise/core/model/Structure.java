@@ -3,7 +3,7 @@ package org.counterpoise.core.model;
 import org.counterpoise.core.error.Checks;
 
 /**
- * The primary structure: one mode, described by its modal mass, modal stiffness and viscous
+ * The structure (the trade also says "primary system"): one mode, described by its modal mass, modal stiffness and viscous
  * damping ratio, and by the value of the mode shape at the point where the absorber is attached.
  *
  * <p>With the mode shape normalised so that the modal mass belongs to a unit value at the
@@ -82,7 +82,7 @@ public record Structure(double modalMass, double modalStiffness, double dampingR
 
     /**
      * @param factor scale of the natural frequency (1.05 = 5 % high), by scaling the stiffness
-     * @return the detuned structure with the same damping ratio
+     * @return the mistuned structure with the same damping ratio
      */
     public Structure withFrequencyScaledBy(double factor) {
         return new Structure(modalMass, modalStiffness * factor * factor, dampingRatio, modeShapeAtAbsorber);

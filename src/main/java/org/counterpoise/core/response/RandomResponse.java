@@ -1,6 +1,7 @@
 package org.counterpoise.core.response;
 
 import org.counterpoise.core.rational.MeanSquare;
+import org.counterpoise.core.system.WhiteNoiseMeanSquare;
 import org.counterpoise.core.model.ExcitationKind;
 import org.counterpoise.core.model.Structure;
 import org.counterpoise.core.model.Tuning;
@@ -28,8 +29,9 @@ public final class RandomResponse {
      */
     public static double rms(Structure structure, Tuning tuning, ExcitationKind excitation, double psdLevel,
             ResponseKind response) {
-        double j = MeanSquare.of(TransferFunctions.of(excitation, response, structure.dampingRatio(), tuning));
-        double scale = ResponseScale.of(structure, excitation, 1.0, response);
+        SingleModeSystem system = SingleModeSystem.of(structure, tuning);
+        double j = WhiteNoiseMeanSquare.INSTANCE.of(system, excitation, response);
+        double scale = system.responseScale(excitation, 1.0, response);
         return Math.abs(scale) * Math.sqrt(psdLevel * structure.naturalFrequency() * j / 2.0);
     }
 }

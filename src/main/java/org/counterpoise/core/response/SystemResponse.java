@@ -1,23 +1,25 @@
 package org.counterpoise.core.response;
 
-import org.counterpoise.core.rational.TransferFunction;
-import org.counterpoise.core.rational.PeakFinder;
-import org.counterpoise.core.rational.Peak;
 import java.util.EnumMap;
 import java.util.Map;
 import org.counterpoise.core.model.ExcitationKind;
 import org.counterpoise.core.model.FrequencyBand;
 import org.counterpoise.core.model.Structure;
 import org.counterpoise.core.model.Tuning;
+import org.counterpoise.core.rational.Peak;
+import org.counterpoise.core.rational.TransferFunction;
+import org.counterpoise.core.system.BandPeak;
 
 /**
  * The physical (SI) response of a structure, with or without an absorber, to one disturbance.
- * A thin layer over {@link TransferFunctions} and {@link ResponseScale}: no algebra of its own.
- * Immutable; transfer functions are built once per response kind.
+ * A thin layer over the {@link SingleModeSystem} (a {@code core.system.LinearSystem}) and the
+ * band-peak objective ({@link BandPeak}): no algebra of its own. Immutable; transfer functions are
+ * built once per response kind.
  */
 public final class SystemResponse {
     private final Structure structure;
     private final Tuning tuning;
+    private final SingleModeSystem system;
     private final ExcitationKind excitation;
     private final double amplitude;
     private final Map<ResponseKind, TransferFunction> cache = new EnumMap<>(ResponseKind.class);
@@ -31,6 +33,7 @@ public final class SystemResponse {
     public SystemResponse(Structure structure, Tuning tuning, ExcitationKind excitation, double amplitude) {
         this.structure = structure;
         this.tuning = tuning;
+        this.system = SingleModeSystem.of(structure, tuning);
         this.excitation = excitation;
         this.amplitude = amplitude;
     }
@@ -40,8 +43,7 @@ public final class SystemResponse {
      * @return its non-dimensional transfer function
      */
     public synchronized TransferFunction transferFunction(ResponseKind kind) {
-        return cache.computeIfAbsent(kind,
-                k -> TransferFunctions.of(excitation, k, structure.dampingRatio(), tuning));
+        return cache.computeIfAbsent(kind, k -> system.transferFunction(excitation, k));
     }
 
     /**
@@ -49,7 +51,7 @@ public final class SystemResponse {
      * @return SI value of a non-dimensional response of 1
      */
     public double scale(ResponseKind kind) {
-        return ResponseScale.of(structure, excitation, amplitude, kind);
+        return system.responseScale(excitation, amplitude, kind);
     }
 
     /**
@@ -58,7 +60,7 @@ public final class SystemResponse {
      * @return the SI amplitude of the response at omega (+infinity at an undamped resonance)
      */
     public double amplitudeAt(ResponseKind kind, double omega) {
-        return scale(kind) * transferFunction(kind).magnitude(omega / structure.naturalFrequency());
+        return scale(kind) * transferFunction(kind).magnitude(omega / system.referenceFrequency());
     }
 
     /**
@@ -67,7 +69,7 @@ public final class SystemResponse {
      * @return phase of the response relative to the drive, rad
      */
     public double phaseAt(ResponseKind kind, double omega) {
-        double[] h = transferFunction(kind).value(omega / structure.naturalFrequency());
+        double[] h = transferFunction(kind).value(omega / system.referenceFrequency());
         return Math.atan2(h[1], h[0]);
     }
 
@@ -77,7 +79,7 @@ public final class SystemResponse {
      * @return the exact largest SI amplitude over the closed band, and where
      */
     public ResponsePeak peakOver(ResponseKind kind, FrequencyBand band) {
-        return peakBetween(kind, band.low(), band.high());
+        return peakOf(kind, BandPeak.over(band));
     }
 
     /**
@@ -87,9 +89,18 @@ public final class SystemResponse {
      * @return the exact largest SI amplitude over [omegaLow, omegaHigh]
      */
     public ResponsePeak peakBetween(ResponseKind kind, double omegaLow, double omegaHigh) {
-        double omega1 = structure.naturalFrequency();
-        Peak peak = PeakFinder.over(transferFunction(kind), omegaLow / omega1, omegaHigh / omega1);
+        return peakOf(kind, new BandPeak(omegaLow, omegaHigh));
+    }
+
+    private ResponsePeak peakOf(ResponseKind kind, BandPeak band) {
+        double omega1 = system.referenceFrequency();
+        Peak peak = band.peakOf(transferFunction(kind), omega1);
         return new ResponsePeak(peak.frequencyRatio() * omega1, peak.magnitude() * scale(kind));
+    }
+
+    /** @return the linear system behind these responses */
+    public SingleModeSystem system() {
+        return system;
     }
 
     /** @return the structure */

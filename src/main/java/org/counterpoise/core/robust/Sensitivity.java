@@ -16,7 +16,7 @@ public final class Sensitivity {
     /**
      * @param m the mistuning model
      * @param absorber the absorber
-     * @param range largest detuning each side, fraction (0.15 = 15 %)
+     * @param range largest mistuning each side, fraction (0.15 = 15 %)
      * @param points number of factors (odd keeps the nominal on the grid)
      * @return peak against the structure's frequency factor
      */
@@ -29,7 +29,7 @@ public final class Sensitivity {
     /**
      * @param m the mistuning model
      * @param absorber the absorber
-     * @param range largest detuning each side, fraction
+     * @param range largest mistuning each side, fraction
      * @param points number of factors
      * @return peak against the absorber's frequency factor
      */
@@ -55,10 +55,10 @@ public final class Sensitivity {
     /**
      * @param m the mistuning model
      * @param absorber the absorber
-     * @param structureRange structure detuning each side (rows)
-     * @param absorberRange absorber detuning each side (columns)
+     * @param structureRange structure mistuning each side (rows)
+     * @param absorberRange absorber mistuning each side (columns)
      * @param points grid points along each axis
-     * @return peak over structure detuning x absorber detuning
+     * @return peak over structure mistuning x absorber mistuning
      */
     public static SensitivityMap structureByAbsorber(Mistuning m, Absorber absorber, double structureRange,
             double absorberRange, int points) {

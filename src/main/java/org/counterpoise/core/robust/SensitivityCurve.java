@@ -1,7 +1,7 @@
 package org.counterpoise.core.robust;
 
 /**
- * Peak response over the band against one detuning factor.
+ * Peak response over the band against one mistuning factor.
  *
  * @param factors the factors (1 = nominal), ascending
  * @param peaks the peak response at each, SI

@@ -3,8 +3,8 @@ package org.counterpoise.core.robust;
 /**
  * Peak response over the band on a grid of two factors.
  *
- * @param rows the factor along the rows (structure detuning), ascending
- * @param columns the factor along the columns (absorber detuning or absorber damping), ascending
+ * @param rows the factor along the rows (structure mistuning), ascending
+ * @param columns the factor along the columns (absorber mistuning or absorber damping), ascending
  * @param peaks peaks[i][j] at rows[i], columns[j], SI
  */
 public record SensitivityMap(double[] rows, double[] columns, double[][] peaks) {

@@ -18,7 +18,7 @@ public enum PhysicalRange {
     MASS(Dimension.MASS, 1e-4, 1e9),
     /** From 1 uN (a lab shaker's smallest force) to the weight of the heaviest mass above, 10^10 N. */
     FORCE(Dimension.FORCE, 1e-6, 1e10),
-    /** From 1 pm (below any measurable vibration) to 100 m (the static sag g/(2 pi f)^2 of a 0.05 Hz mode is 99 m). */
+    /** From 1 pm (below any measurable vibration) to 100 m (the static deflection g/(2 pi f)^2 of a 0.05 Hz mode is 99 m). */
     LENGTH(Dimension.LENGTH, 1e-12, 100),
     /** From 1 mN/m to 10^15 N/m: a 10^9 kg mass at 160 Hz; lab springs start around 1 N/m. */
     STIFFNESS(Dimension.STIFFNESS, 1e-3, 1e15),

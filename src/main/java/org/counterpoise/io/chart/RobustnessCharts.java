@@ -54,7 +54,7 @@ public final class RobustnessCharts {
         Dimension d = design.study().response().dimension();
         Unit unit = DisplayUnits.of(d);
         XYChart chart = new XYChartBuilder().width(width).height(height)
-                .title("Peak in band, structure off-tune")
+                .title("Peak in band, structure mistuned")
                 .xAxisTitle("Structure natural frequency offset (%)")
                 .yAxisTitle("Peak (" + ChartFactory.pretty(unit.symbol()) + ")").build();
         ChartStyle.houseStyle(chart.getStyler(), theme);

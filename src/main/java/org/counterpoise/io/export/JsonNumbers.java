@@ -11,7 +11,7 @@ import java.util.OptionalDouble;
 /**
  * Numbers into JSON the one way every export writes them: JSON has no NaN or Infinity, so an
  * unbounded value (an undamped structure at resonance) is null with a companion
- * {@code <key>_unbounded: true}, and a value that is not defined (a static sag when nothing hangs)
+ * {@code <key>_unbounded: true}, and a value that is not defined (a static deflection when nothing hangs)
  * is null alone. The writer is strict, so a non-finite number that slipped past fails loudly
  * instead of printing invalid JSON.
  */

@@ -193,10 +193,10 @@ public record Project(String name, String notes, StructureInput structure, Distu
             return RobustnessSettings.DEFAULT;
         }
         RobustnessSettings d = RobustnessSettings.DEFAULT;
-        double structureRange = Double.isNaN(r.structureDetuningPercent()) ? d.structureRange()
-                : Checks.inRange("robustness.structure_detuning", r.structureDetuningPercent(), 0, 50) / 100;
-        double absorberRange = Double.isNaN(r.absorberDetuningPercent()) ? d.absorberRange()
-                : Checks.inRange("robustness.absorber_detuning", r.absorberDetuningPercent(), 0, 50) / 100;
+        double structureRange = Double.isNaN(r.structureMistuningPercent()) ? d.structureRange()
+                : Checks.inRange("robustness.structure_mistuning", r.structureMistuningPercent(), 0, 50) / 100;
+        double absorberRange = Double.isNaN(r.absorberMistuningPercent()) ? d.absorberRange()
+                : Checks.inRange("robustness.absorber_mistuning", r.absorberMistuningPercent(), 0, 50) / 100;
         OptionalDouble target = r.target() == null ? OptionalDouble.empty()
                 : OptionalDouble.of(r.target().positiveSi("robustness.target.value"));
         ToleranceSet set = new ToleranceSet(tolerance(ToleranceKey.STRUCTURE_MASS, r),

@@ -103,8 +103,8 @@ public final class ProjectReader {
     }
 
     private static RobustnessInput robustness(JsonFields r, ResponseKind response) {
-        double structure = r.number("structure_detuning", Double.NaN);
-        double absorber = r.number("absorber_detuning", Double.NaN);
+        double structure = mistuningPercent(r, "structure_mistuning", "structure_detuning");
+        double absorber = mistuningPercent(r, "absorber_mistuning", "absorber_detuning");
         QuantityInput target = r.optionalQuantity("target", response.dimension());
         double samples = r.number("samples", 0);
         if (samples != Math.rint(samples) || samples < 0 || samples > 1_000_000) {
@@ -132,6 +132,19 @@ public final class ProjectReader {
         r.finish();
         return new RobustnessInput(structure, absorber, target, (int) samples, (long) seed, tol[0], tol[1], tol[2],
                 tol[3], tol[4]);
+    }
+
+    /**
+     * An expected mistuning in percent, or NaN when absent. Files written before the vocabulary was
+     * settled (docs/glossary.md) call it {@code *_detuning}; that older key is still read as the new
+     * one (and written back under the new one), and a file may not give both.
+     */
+    private static double mistuningPercent(JsonFields r, String key, String olderKey) {
+        if (r.has(key) && r.has(olderKey)) {
+            throw new InvalidInputException(r.pathOf(olderKey), r.shown(olderKey),
+                    "give only " + r.pathOf(key) + " (" + olderKey + " is its older name)");
+        }
+        return r.number(r.has(olderKey) ? olderKey : key, Double.NaN);
     }
 
     private static StructureInput structure(JsonFields s) {

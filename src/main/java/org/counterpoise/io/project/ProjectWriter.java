@@ -127,8 +127,8 @@ public final class ProjectWriter {
 
     private static JsonObject robustness(RobustnessInput r) {
         JsonObject o = new JsonObject();
-        putNumber(o, "structure_detuning", r.structureDetuningPercent());
-        putNumber(o, "absorber_detuning", r.absorberDetuningPercent());
+        putNumber(o, "structure_mistuning", r.structureMistuningPercent());
+        putNumber(o, "absorber_mistuning", r.absorberMistuningPercent());
         put(o, "target", r.target());
         if (r.samples() > 0) {
             o.addProperty("samples", r.samples());

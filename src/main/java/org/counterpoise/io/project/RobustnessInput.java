@@ -7,8 +7,8 @@ import org.counterpoise.core.robust.Tolerance;
 /**
  * The robustness section of a project as typed. Percent values; absent entries are NaN or null.
  *
- * @param structureDetuningPercent the structure's natural frequency may be off by +/- this
- * @param absorberDetuningPercent the absorber's natural frequency may be off by +/- this
+ * @param structureMistuningPercent the structure's natural frequency may be off by +/- this
+ * @param absorberMistuningPercent the absorber's natural frequency may be off by +/- this
  * @param target largest acceptable peak of the response that matters, or null
  * @param samples Monte Carlo samples (0 for the default)
  * @param seed Monte Carlo seed
@@ -18,7 +18,7 @@ import org.counterpoise.core.robust.Tolerance;
  * @param absorberStiffness tolerance of the absorber's spring rate, or null
  * @param absorberDamping tolerance of the absorber's damping coefficient, or null
  */
-public record RobustnessInput(double structureDetuningPercent, double absorberDetuningPercent, QuantityInput target,
+public record RobustnessInput(double structureMistuningPercent, double absorberMistuningPercent, QuantityInput target,
         int samples, long seed, ToleranceInput structureMass, ToleranceInput structureStiffness,
         ToleranceInput absorberMass, ToleranceInput absorberStiffness, ToleranceInput absorberDamping) {
 

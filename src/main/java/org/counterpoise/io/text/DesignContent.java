@@ -203,7 +203,7 @@ public final class DesignContent {
                 quantity(result.absorber().damping(), Dimension.DAMPING_COEFFICIENT));
         add(ReportKey.ABSORBER_FREQUENCY, "absorber natural frequency", "",
                 quantity(result.absorber().naturalFrequency(), Dimension.FREQUENCY));
-        add(ReportKey.STATIC_SAG, "static sag of the spring", "", quantity(result.staticSag().orElse(Double.NaN), Dimension.LENGTH));
+        add(ReportKey.STATIC_DEFLECTION, "static deflection of the spring", "", quantity(result.staticDeflection().orElse(Double.NaN), Dimension.LENGTH));
         List<Double> coupled = new ArrayList<>();
         for (double w : result.coupledNaturalFrequencies()) {
             coupled.add(w);
@@ -280,7 +280,7 @@ public final class DesignContent {
     }
 
     private void alternative() {
-        DetuningAlternative d = result.detuning();
+        DetuningAlternative d = result.stiffnessDetuning();
         DetuningAlternative m = result.massDetuning();
         double wn = study.structure().naturalFrequency();
         boolean zero = d.target() == 0.0;

@@ -3,7 +3,7 @@ package org.counterpoise.io.text;
 import java.util.Locale;
 import java.util.Optional;
 import org.counterpoise.core.design.DesignResult;
-import org.counterpoise.core.robust.DetuningRange;
+import org.counterpoise.core.robust.MistuningRange;
 import org.counterpoise.io.project.ProjectIdentity;
 import org.counterpoise.io.text.ReportValue.Pair;
 import org.counterpoise.io.text.ReportValue.PairKind;
@@ -89,7 +89,7 @@ public final class DesignReport {
      * @return e.g. "-3.1 % to +2.7 %"
      * @see ValueText#tolerance
      */
-    public static String tolerance(DetuningRange range, int power) {
+    public static String tolerance(MistuningRange range, int power) {
         return ValueText.tolerance(range, power);
     }
 

@@ -43,7 +43,7 @@ public record ReportSection(SectionId id, String title, List<ReportRow> rows) {
         RMS,
         /** absorber stroke and forces */
         STROKE_AND_FORCES,
-        /** how far structure and absorber may be off-tune */
+        /** how far structure and absorber may be mistuned */
         TOLERANCE,
         /** a change of the structure that would do as well */
         ALTERNATIVE,

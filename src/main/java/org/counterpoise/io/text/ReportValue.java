@@ -1,7 +1,7 @@
 package org.counterpoise.io.text;
 
 import java.util.List;
-import org.counterpoise.core.robust.DetuningRange;
+import org.counterpoise.core.robust.MistuningRange;
 import org.counterpoise.core.units.Dimension;
 
 /**
@@ -100,13 +100,13 @@ public sealed interface ReportValue {
      * @param power 1 to show it as a frequency change, 2 as a stiffness change (frequency squared)
      * @param ifUndefined the words when the range is not defined, or empty for the standard words
      */
-    record Tolerance(DetuningRange range, int power, String ifUndefined) implements ReportValue {
+    record Tolerance(MistuningRange range, int power, String ifUndefined) implements ReportValue {
         /**
          * A tolerance that says the standard words when it is not defined.
          * @param range tolerated frequency factors
          * @param power 1 for a frequency change, 2 for a stiffness change
          */
-        public Tolerance(DetuningRange range, int power) {
+        public Tolerance(MistuningRange range, int power) {
             this(range, power, "");
         }
     }

@@ -73,10 +73,10 @@ public final class RobustnessContent {
                         DesignContent.quantity(r.robust().nominalPeak(), d), PairKind.SIDE_BY_SIDE), robust));
         worst.add(row(ReportKey.TARGET, "target", "", DesignContent.quantity(r.settings().target().orElse(Double.NaN), d), "project"));
         if (r.settings().target().isPresent() && r.toleratedForTarget().isPresent()) {
-            worst.add(row(ReportKey.TOLERATED_FOR_TARGET, "structure detuning within target", "",
+            worst.add(row(ReportKey.TOLERATED_FOR_TARGET, "structure mistuning within target", "",
                     new Tolerance(r.toleratedForTarget().get(), 1, "none: the nominal design misses the target"), ""));
         } else {
-            worst.add(row(ReportKey.TOLERATED_FOR_TARGET, "structure detuning within target", "",
+            worst.add(row(ReportKey.TOLERATED_FOR_TARGET, "structure mistuning within target", "",
                     new Pair(new ReportValue.NotApplicable(), new ReportValue.NotApplicable(), PairKind.RANGE), ""));
         }
         sections.add(new ReportSection(SectionId.WORST_CASE, "Worst case and the robust design", worst));

@@ -2,7 +2,7 @@ package org.counterpoise.io.text;
 
 import java.util.List;
 import java.util.stream.Collectors;
-import org.counterpoise.core.robust.DetuningRange;
+import org.counterpoise.core.robust.MistuningRange;
 import org.counterpoise.core.units.Dimension;
 import org.counterpoise.core.units.Unit;
 import org.counterpoise.io.text.ReportValue.Change;
@@ -167,7 +167,7 @@ public final class ValueText {
      * @param power 1 for a frequency, 2 for a stiffness (proportional to frequency squared)
      * @return e.g. "-3.1 % to +2.7 %"
      */
-    public static String tolerance(DetuningRange range, int power) {
+    public static String tolerance(MistuningRange range, int power) {
         if (!range.defined()) {
             return "not defined (the nominal response is zero or unbounded)";
         }

@@ -21,7 +21,7 @@ import picocli.CommandLine.Spec;
 
 /** {@code robustness FILE}: sensitivity, worst case, robust design and Monte Carlo of the project's design. */
 @Command(name = "robustness", mixinStandardHelpOptions = true, sortOptions = false,
-        description = "How the project's design fares when structure and absorber are off-tune.")
+        description = "How the project's design fares when structure and absorber are mistuned.")
 public final class RobustnessCommand implements Callable<Integer> {
     @Spec
     private CommandSpec spec;

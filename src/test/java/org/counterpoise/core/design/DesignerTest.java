@@ -36,7 +36,7 @@ class DesignerTest {
         assertEquals(100 * wa * wa, r.absorber().stiffness(), 1e-6);
         assertEquals(2 * Math.sqrt(3 * 0.05 / (8 * 1.05)) * 100 * wa, r.absorber().damping(), 1e-9);
         // Static sag g / omega_a^2 (common practice).
-        assertEquals(9.80665 / (wa * wa), r.staticSag().orElseThrow(), 1e-15);
+        assertEquals(9.80665 / (wa * wa), r.staticDeflection().orElseThrow(), 1e-15);
         // The bare undamped structure is resonant in the band: unbounded before, finite after.
         assertTrue(r.responseBefore().unbounded());
         assertFalse(r.responseAfter().unbounded());
@@ -65,8 +65,8 @@ class DesignerTest {
         FrequencyBand band = new FrequencyBand(2 * Math.PI * 9.5, 2 * Math.PI * 10.5);
         Excitation e = new Excitation(ExcitationKind.FORCE, 1000, band);
         DesignResult r = Designer.design(study(s, e, DesignMethod.EQUAL_PEAK, AbsorberSizing.ofMassRatio(0.05)));
-        double stiffer = r.detuning().raiseFactor().orElseThrow();
-        double softer = r.detuning().lowerFactor().orElseThrow();
+        double stiffer = r.stiffnessDetuning().raiseFactor().orElseThrow();
+        double softer = r.stiffnessDetuning().lowerFactor().orElseThrow();
         assertTrue(stiffer > 1.21 && softer < 0.9025, "resonance moved out of the band both ways");
         for (double factor : new double[] {stiffer, softer}) {
             Structure changed = s.withStiffnessKeepingDamper(s.modalStiffness() * factor);

@@ -55,7 +55,8 @@ class TransferFunctionsTest {
         assertEquals(100 / 4e6, r.amplitudeAt(ResponseKind.DISPLACEMENT, 1e-9), 1e-18);
     }
 
-    private static Complex direct(Structure s, Tuning t, ExcitationKind kind, double amplitude, double w,
+    /** The SI complex amplitude of a response by the direct solve of the equations of motion. */
+    static Complex direct(Structure s, Tuning t, ExcitationKind kind, double amplitude, double w,
             ResponseKind r) {
         double m1 = s.effectiveMass();
         double k1 = s.effectiveStiffness();

@@ -56,7 +56,7 @@ class EqualPeakPropertiesTest {
                 AbsorberSizing.ofMassRatio(mu), DesignMethod.EQUAL_PEAK, true, 1.5));
         for (double v : new double[] {r.responseBefore().value(), r.responseAfter().value(), r.clearance(),
             r.strokeRunUp().value(), r.springForce().value(), r.damperForce().value(), r.reductionFactor(),
-            r.staticSag().orElseThrow()}) {
+            r.staticDeflection().orElseThrow()}) {
             assertTrue(Double.isFinite(v) && v > 0, "value " + v);
         }
     }

@@ -123,7 +123,7 @@ class ReportContentTest {
         m.put(ReportKey.ABSORBER_STIFFNESS, List.of(r.absorber().stiffness()));
         m.put(ReportKey.ABSORBER_DAMPING, List.of(r.absorber().damping()));
         m.put(ReportKey.ABSORBER_FREQUENCY, List.of(r.absorber().naturalFrequency()));
-        m.put(ReportKey.STATIC_SAG, List.of(r.staticSag().orElse(Double.NaN)));
+        m.put(ReportKey.STATIC_DEFLECTION, List.of(r.staticDeflection().orElse(Double.NaN)));
         double[] w = r.coupledNaturalFrequencies();
         m.put(ReportKey.COUPLED_FREQUENCIES, List.of(w[0], w[1]));
         m.put(ReportKey.DISPLACEMENT_PEAKS, peaks(r, ResponseKind.DISPLACEMENT));
@@ -144,9 +144,9 @@ class ReportContentTest {
                 r.structureTolerance().high().orElse(Double.NaN)));
         m.put(ReportKey.TOLERATED_ABSORBER_FREQUENCY, List.of(r.absorberTolerance().low().orElse(Double.NaN), r.absorberTolerance().high().orElse(Double.NaN)));
         m.put(ReportKey.TOLERATED_SPRING_RATE, List.of(r.absorberTolerance().low().orElse(Double.NaN), r.absorberTolerance().high().orElse(Double.NaN)));
-        m.put(ReportKey.DETUNING_TARGET, List.of(r.detuning().target()));
-        m.put(ReportKey.STIFFER, List.of(r.detuning().raiseFactor().orElse(Double.NaN)));
-        m.put(ReportKey.SOFTER, List.of(r.detuning().lowerFactor().orElse(Double.NaN)));
+        m.put(ReportKey.DETUNING_TARGET, List.of(r.stiffnessDetuning().target()));
+        m.put(ReportKey.STIFFER, List.of(r.stiffnessDetuning().raiseFactor().orElse(Double.NaN)));
+        m.put(ReportKey.SOFTER, List.of(r.stiffnessDetuning().lowerFactor().orElse(Double.NaN)));
         m.put(ReportKey.LIGHTER, List.of(r.massDetuning().raiseFactor().orElse(Double.NaN)));
         m.put(ReportKey.HEAVIER, List.of(r.massDetuning().lowerFactor().orElse(Double.NaN)));
         mc.ifPresent(c -> monteCarlo(m, c));

@@ -56,7 +56,7 @@ class CliTest {
         assertEquals(expected.absorber().stiffness(), o.get("absorber_stiffness_N_per_m").getAsDouble(), 0);
         assertEquals(expected.responseAfter().value(), o.get("peak_response_after").getAsDouble(), 0);
         assertEquals(expected.strokeInBand().value(), o.get("peak_stroke_m").getAsDouble(), 0);
-        for (String key : new String[] {"primary_mass_kg", "primary_frequency_Hz", "absorber_mass_kg",
+        for (String key : new String[] {"structure_mass_kg", "structure_frequency_Hz", "absorber_mass_kg",
             "absorber_damping_Ns_per_m", "absorber_frequency_Hz", "response_quantity", "response_unit",
             "peak_response_before", "method", "absorber_damping_ratio"}) {
             assertTrue(o.has(key), key);

@@ -97,7 +97,7 @@ public final class ProjectEdits {
             return new Consistent(p, null);
         }
         QuantityInput old = r.target();
-        RobustnessInput cleared = new RobustnessInput(r.structureDetuningPercent(), r.absorberDetuningPercent(), null,
+        RobustnessInput cleared = new RobustnessInput(r.structureMistuningPercent(), r.absorberMistuningPercent(), null,
                 r.samples(), r.seed(), r.structureMass(), r.structureStiffness(), r.absorberMass(),
                 r.absorberStiffness(), r.absorberDamping());
         String note = "The robustness target (" + QuantityFormat.number(old.value(), 4) + " " + old.unit().symbol()

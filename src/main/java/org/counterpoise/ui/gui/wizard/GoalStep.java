@@ -125,7 +125,7 @@ final class GoalStep extends Step {
         form.row("Response that matters", 'r', response, "The response the design reduces");
         form.row("Stroke margin", 'n', margin, "Clearance over the computed stroke");
         form.row("Stroke limit (optional)", 't', strokeLimit, "Clearance available in the band, exact-peak only");
-        form.row("", (char) 0, hangs, "Gives the static sag of the spring");
+        form.row("", (char) 0, hangs, "Gives the static deflection of the spring");
         form.row("Largest mass ratio (target)", 'x', maxMassRatio,
                 "With a target: the search for the lightest absorber stops here; empty for the default");
         form.row("Fixed damping ratio \u03b6a", 'f', fixedDamping, "Exact-peak: empty to optimise, or the ratio to use");

@@ -44,7 +44,7 @@ import org.counterpoise.ui.gui.field.QuantityField;
 import org.counterpoise.ui.gui.field.Sizes;
 import org.counterpoise.ui.gui.plot.ChartHost;
 
-/** Step 5: how the design fares off-tune, the robust alternative and the tolerance Monte Carlo. */
+/** Step 5: how the design fares when mistuned, the robust alternative and the tolerance Monte Carlo. */
 final class RobustnessStep extends Step {
     /** Units offered for each tolerance, in the order of {@link ToleranceKey}. */
     private static final List<List<Unit>> TOLERANCE_UNITS = List.of(
@@ -54,9 +54,9 @@ final class RobustnessStep extends Step {
             List.of(Unit.PERCENT, Unit.KILONEWTON_PER_METRE, Unit.NEWTON_PER_METRE, Unit.NEWTON_PER_MILLIMETRE),
             List.of(Unit.PERCENT, Unit.NEWTON_SECOND_PER_METRE, Unit.KILONEWTON_SECOND_PER_METRE));
 
-    private final QuantityField structureRange = new QuantityField("robustness.structure_detuning",
+    private final QuantityField structureRange = new QuantityField("robustness.structure_mistuning",
             "How far the structure's natural frequency may be off, in percent each way", UnitChoices.of(Dimension.RATIO));
-    private final QuantityField absorberRange = new QuantityField("robustness.absorber_detuning",
+    private final QuantityField absorberRange = new QuantityField("robustness.absorber_mistuning",
             "How far the absorber's natural frequency may be off, in percent each way", UnitChoices.of(Dimension.RATIO));
     private final QuantityField target = new QuantityField("robustness.target",
             "Largest acceptable peak of the response that matters; empty for none", UnitChoices.of(Dimension.LENGTH));
@@ -140,8 +140,8 @@ final class RobustnessStep extends Step {
             }
         });
         page = p;
-        own("robustness.structure_detuning", structureRange);
-        own("robustness.absorber_detuning", absorberRange);
+        own("robustness.structure_mistuning", structureRange);
+        own("robustness.absorber_mistuning", absorberRange);
         own("robustness.target", target);
         own("robustness.samples", samples);
         own("robustness.seed", seed);
@@ -199,10 +199,10 @@ final class RobustnessStep extends Step {
         if (!targetUnits.contains(target.unit())) {
             target.setUnits(targetUnits);
         }
-        showValue(structureRange, r == null || Double.isNaN(r.structureDetuningPercent())
-                ? 100 * d.structureRange() : r.structureDetuningPercent(), Unit.RATIO);
-        showValue(absorberRange, r == null || Double.isNaN(r.absorberDetuningPercent())
-                ? 100 * d.absorberRange() : r.absorberDetuningPercent(), Unit.RATIO);
+        showValue(structureRange, r == null || Double.isNaN(r.structureMistuningPercent())
+                ? 100 * d.structureRange() : r.structureMistuningPercent(), Unit.RATIO);
+        showValue(absorberRange, r == null || Double.isNaN(r.absorberMistuningPercent())
+                ? 100 * d.absorberRange() : r.absorberMistuningPercent(), Unit.RATIO);
         showValue(target, r == null ? null : r.target());
         showValue(samples, r == null || r.samples() == 0 ? d.samples() : r.samples(), Unit.RATIO);
         showValue(seed, r == null ? d.seed() : r.seed(), Unit.RATIO);

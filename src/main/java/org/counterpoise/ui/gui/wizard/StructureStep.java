@@ -39,7 +39,7 @@ final class StructureStep extends Step {
     private final JComboBox<String> stiffnessForm = new JComboBox<>(
             new String[] {"stiffness", "natural frequency", "static deflection"});
     private final QuantityField stiffness = new QuantityField("structure.stiffness",
-            "Modal stiffness; or the measured natural frequency; or the sag under the structure's own weight",
+            "Modal stiffness; or the measured natural frequency; or the static deflection under the structure's own weight",
             STIFFNESS);
     private final JComboBox<String> dampingForm = new JComboBox<>(
             new String[] {"damping ratio \u03b6", "loss factor \u03b7", "Q factor", "half-power bandwidth"});

@@ -10,21 +10,21 @@ import org.counterpoise.core.response.ResponseKind;
 import org.counterpoise.core.response.SystemResponse;
 
 /**
- * How far a built design may be off-tune before its worst response over the forcing band rises by
+ * How far a built design may be mistuned before its worst response over the forcing band rises by
  * more than an allowance: the structure's natural frequency off (its stiffness, contents or
  * supports not as assumed, damping ratio kept), or the absorber's spring rate off (its damper
  * kept, so its damping ratio moves as 1/sqrt(k2)). Both are computed physically from the exact
  * band peak. From the nominal design the factor is stepped outwards by 0.5 % to the search limit;
  * the first step whose peak exceeds the allowance brackets the crossing, refined by Brent's method
- * to 1e-9. A rise narrower than one step could be missed; the peak varies smoothly with detuning.
+ * to 1e-9. A rise narrower than one step could be missed; the peak varies smoothly with mistuning.
  * A design that cancels the response at its one speed (an undamped absorber tuned to it; the
  * nominal response is zero, so a relative rise means nothing) is judged instead by the response
  * at that speed staying within the allowance times the bare structure's response there.
  */
-public final class ToleratedDetuning {
+public final class ToleratedMistuning {
     private static final double STEP = 0.005;
 
-    private ToleratedDetuning() {
+    private ToleratedMistuning() {
     }
 
     /**
@@ -36,7 +36,7 @@ public final class ToleratedDetuning {
      * @param searchLimit largest detuning searched each side (fraction, 0 to 0.9)
      * @return tolerated factors of the structure's natural frequency
      */
-    public static DetuningRange ofStructure(Structure structure, Absorber absorber, Excitation excitation,
+    public static MistuningRange ofStructure(Structure structure, Absorber absorber, Excitation excitation,
             ResponseKind response, double allowance, double searchLimit) {
         Mistuning m = new Mistuning(structure, excitation, response);
         return search(factor -> m.peak(absorber, factor, 1.0), allowance, searchLimit,
@@ -53,7 +53,7 @@ public final class ToleratedDetuning {
      * @return tolerated factors of the absorber's natural frequency (the spring rate factor is the
      *     square)
      */
-    public static DetuningRange ofAbsorber(Structure structure, Absorber absorber, Excitation excitation,
+    public static MistuningRange ofAbsorber(Structure structure, Absorber absorber, Excitation excitation,
             ResponseKind response, double allowance, double searchLimit) {
         Mistuning m = new Mistuning(structure, excitation, response);
         return search(factor -> m.peak(absorber, 1.0, factor), allowance, searchLimit,
@@ -69,12 +69,12 @@ public final class ToleratedDetuning {
      * @return tolerated factors of the structure's natural frequency (allowance: the target over
      *     the nominal peak, minus one); not defined when the nominal design already exceeds it
      */
-    public static DetuningRange ofStructureForTarget(Mistuning m, Absorber absorber, double target,
+    public static MistuningRange ofStructureForTarget(Mistuning m, Absorber absorber, double target,
             double searchLimit) {
         DoubleUnaryOperator peak = factor -> m.peak(absorber, factor, 1.0);
         double nominal = peak.applyAsDouble(1.0);
         if (!(nominal <= target) || !(nominal > 0)) {
-            return DetuningRange.undefined(target / nominal - 1, searchLimit);
+            return MistuningRange.undefined(target / nominal - 1, searchLimit);
         }
         return within(peak, target, target / nominal - 1, searchLimit);
     }
@@ -91,29 +91,29 @@ public final class ToleratedDetuning {
      */
     private static final double CANCELLED = 1e-6;
 
-    private static DetuningRange search(DoubleUnaryOperator peak, double allowance, double searchLimit, double bare) {
+    private static MistuningRange search(DoubleUnaryOperator peak, double allowance, double searchLimit, double bare) {
         double nominal = peak.applyAsDouble(1.0);
         if (!(nominal >= 0) || Double.isInfinite(nominal)) {
-            return DetuningRange.undefined(allowance, searchLimit);
+            return MistuningRange.undefined(allowance, searchLimit);
         }
         if (nominal <= CANCELLED * bare && Double.isFinite(bare)) {
             // At its one speed the design cancels the response: the criterion is that response,
             // kept within the allowance of the bare structure's (90 % of the reduction kept).
-            DetuningRange r = within(peak, allowance * bare, allowance, searchLimit);
-            return new DetuningRange(r.low(), r.high(), allowance, searchLimit, true, true);
+            MistuningRange r = within(peak, allowance * bare, allowance, searchLimit);
+            return new MistuningRange(r.low(), r.high(), allowance, searchLimit, true, true);
         }
         if (!(nominal > 0)) {
-            return DetuningRange.undefined(allowance, searchLimit);
+            return MistuningRange.undefined(allowance, searchLimit);
         }
         return within(peak, nominal * (1 + allowance), allowance, searchLimit);
     }
 
-    private static DetuningRange within(DoubleUnaryOperator peak, double limit, double allowance, double searchLimit) {
+    private static MistuningRange within(DoubleUnaryOperator peak, double limit, double allowance, double searchLimit) {
         DoubleUnaryOperator excess = f -> {
             double v = peak.applyAsDouble(f);
             return Double.isInfinite(v) ? 1.0 : Math.log(v / limit);
         };
-        return new DetuningRange(crossing(excess, -1, searchLimit), crossing(excess, +1, searchLimit), allowance,
+        return new MistuningRange(crossing(excess, -1, searchLimit), crossing(excess, +1, searchLimit), allowance,
                 searchLimit, true);
     }
 

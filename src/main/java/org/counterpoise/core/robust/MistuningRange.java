@@ -16,7 +16,7 @@ import java.util.OptionalDouble;
  *     its one speed): the range then keeps the response within the allowance times the BARE
  *     structure's response, since a rise relative to zero means nothing
  */
-public record DetuningRange(OptionalDouble low, OptionalDouble high, double allowance, double searchLimit, boolean defined,
+public record MistuningRange(OptionalDouble low, OptionalDouble high, double allowance, double searchLimit, boolean defined,
         boolean ofBareResponse) {
 
     /**
@@ -27,7 +27,7 @@ public record DetuningRange(OptionalDouble low, OptionalDouble high, double allo
      * @param searchLimit searched each side, fraction
      * @param defined false when not defined
      */
-    public DetuningRange(OptionalDouble low, OptionalDouble high, double allowance, double searchLimit,
+    public MistuningRange(OptionalDouble low, OptionalDouble high, double allowance, double searchLimit,
             boolean defined) {
         this(low, high, allowance, searchLimit, defined, false);
     }
@@ -38,7 +38,7 @@ public record DetuningRange(OptionalDouble low, OptionalDouble high, double allo
      * @param searchLimit searched each side, fraction
      * @return the range, with no factors
      */
-    public static DetuningRange undefined(double allowance, double searchLimit) {
-        return new DetuningRange(OptionalDouble.empty(), OptionalDouble.empty(), allowance, searchLimit, false);
+    public static MistuningRange undefined(double allowance, double searchLimit) {
+        return new MistuningRange(OptionalDouble.empty(), OptionalDouble.empty(), allowance, searchLimit, false);
     }
 }
