@@ -16,7 +16,7 @@ six excitation and response pairs; seeded), times the tool as a whole process on
 docs/performance.md: time per design, the ratio, the peak memory of the tool's process, and how
 far the script's optimum peak lies above the tool's (the tool's peak is exact).
 
-Usage: python3 scripts/batch_comparison.py [--cases 2000] [--script-cases 2000]
+Usage: python3 src/jmh/python/batch_comparison.py [--cases 2000] [--script-cases 2000]
        [--java-options "-XX:TieredStopAtLevel=1 -XX:+UseSerialGC"] [--jar target/counterpoise.jar]
 (--script-cases runs the script on the first N cases only, when the whole batch takes too long.)
 """
@@ -134,7 +134,7 @@ def main():
     parser.add_argument("--script-cases", type=int, default=None)
     parser.add_argument("--java-options", default="",
                         help="JVM options for the tool, e.g. \"-XX:TieredStopAtLevel=1 -XX:+UseSerialGC\"")
-    parser.add_argument("--jar", default=os.path.join(os.path.dirname(__file__), "..", "target", "counterpoise.jar"))
+    parser.add_argument("--jar", default=os.path.join(os.path.dirname(__file__), "..", "..", "..", "target", "counterpoise.jar"))
     args = parser.parse_args()
     cases = make_cases(args.cases)
     script_n = min(args.script_cases or args.cases, args.cases)
