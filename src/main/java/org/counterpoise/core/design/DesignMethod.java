@@ -1,6 +1,7 @@
 package org.counterpoise.core.design;
 
 import java.util.Arrays;
+import java.util.Map;
 import java.util.Optional;
 
 /** The ways Counterpoise can choose the absorber's tuning and damping. */
@@ -15,8 +16,18 @@ public enum DesignMethod {
     EXACT_PEAK("exact-peak", "exact minimum of the peak response over the band (H-infinity)"),
     /** Exact minimum of the mean-square response to white noise (H2), computed. */
     EXACT_VARIANCE("exact-variance", "exact minimum of the mean-square response to white noise (H2)"),
-    /** Least worst-case peak over the expected mistuning of structure and absorber, computed. */
-    ROBUST_PEAK("robust-peak", "least worst-case peak over the expected mistuning of structure and absorber");
+    /**
+     * Least worst-case peak over the project's tolerance ranges (structure frequency, absorber
+     * frequency, absorber damping), computed: the recommended method.
+     */
+    ROBUST_WORST_CASE("robust-worst-case", "least worst-case peak over the tolerance ranges of structure and absorber");
+
+    /** The method new projects get: the one whose design holds over real tolerances. */
+    public static final DesignMethod RECOMMENDED = ROBUST_WORST_CASE;
+
+    /** Identifiers older project files may use, and the method each now names. */
+    private static final Map<String, DesignMethod> OLDER_IDS = Map.of("robust-peak",
+            ROBUST_WORST_CASE);
 
     private final String id;
     private final String description;
@@ -41,7 +52,8 @@ public enum DesignMethod {
      * @return the method with that id
      */
     public static Optional<DesignMethod> byId(String id) {
-        return Arrays.stream(values()).filter(m -> m.id.equals(id)).findFirst();
+        Optional<DesignMethod> current = Arrays.stream(values()).filter(m -> m.id.equals(id)).findFirst();
+        return current.isPresent() ? current : Optional.ofNullable(OLDER_IDS.get(id));
     }
 
     /** @return all ids, comma separated */

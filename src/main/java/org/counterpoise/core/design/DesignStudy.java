@@ -20,7 +20,7 @@ import org.counterpoise.core.response.ResponseKind;
  * @param hangsVertically true when the absorber spring carries the absorber's weight (static deflection)
  * @param strokeMargin clearance over the computed peak stroke (&gt;= 1; 1.5 is common practice)
  * @param constraints limits on the design (used by the exact-peak method)
- * @param robustness expected mistuning, target and tolerances (used by robust-peak and the
+ * @param robustness expected mistuning, target and tolerances (used by robust-worst-case and the
  *     robustness study)
  */
 public record DesignStudy(String name, Structure structure, Excitation excitation, ResponseKind response,

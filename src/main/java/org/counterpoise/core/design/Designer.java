@@ -147,7 +147,7 @@ public final class Designer {
                     "Frahm (1909), US patent 989958; Den Hartog (1956), Mechanical Vibrations, section 3.2",
                     "tuned to one forcing frequency");
             case EXACT_PEAK -> exactPeak(study, peakProblem(study, mu), warnings, active);
-            case ROBUST_PEAK -> {
+            case ROBUST_WORST_CASE -> {
                 // the nominal optimum is only a seed here (the robust design is never worse than it),
                 // so an uncertified one is still a useful start
                 Tuning nominal = HInfinityOptimiser.optimise(peakProblem(study, mu)).tuning();
@@ -174,7 +174,7 @@ public final class Designer {
         };
     }
 
-    private static final String NOT_FOUND_ADVICE = "choose another method (equal-peak or robust-peak), or change"
+    private static final String NOT_FOUND_ADVICE = "choose another method (equal-peak or robust-worst-case), or change"
             + " the band or the mass ratio slightly";
 
     private static final String EXACT_SOURCE = "exact optimum computed by Counterpoise (docs/optimiser.md),"

@@ -6,6 +6,7 @@ import org.counterpoise.core.design.AbsorberSizing;
 import org.counterpoise.core.design.DesignConstraints;
 import org.counterpoise.core.design.RobustnessSettings;
 import org.counterpoise.core.robust.Tolerance;
+import org.counterpoise.core.robust.ToleranceRanges;
 import org.counterpoise.core.robust.ToleranceSet;
 import org.counterpoise.core.design.DesignStudy;
 import org.counterpoise.core.error.Checks;
@@ -193,16 +194,20 @@ public record Project(String name, String notes, StructureInput structure, Distu
             return RobustnessSettings.DEFAULT;
         }
         RobustnessSettings d = RobustnessSettings.DEFAULT;
-        double structureRange = Double.isNaN(r.structureMistuningPercent()) ? d.structureRange()
-                : Checks.inRange("robustness.structure_mistuning", r.structureMistuningPercent(), 0, 50) / 100;
-        double absorberRange = Double.isNaN(r.absorberMistuningPercent()) ? d.absorberRange()
-                : Checks.inRange("robustness.absorber_mistuning", r.absorberMistuningPercent(), 0, 50) / 100;
+        OptionalDouble structureRange = Double.isNaN(r.structureMistuningPercent()) ? OptionalDouble.empty()
+                : OptionalDouble.of(Checks.inRange("robustness.structure_mistuning", r.structureMistuningPercent(), 0,
+                        50) / 100);
+        OptionalDouble absorberRange = Double.isNaN(r.absorberMistuningPercent()) ? OptionalDouble.empty()
+                : OptionalDouble.of(Checks.inRange("robustness.absorber_mistuning", r.absorberMistuningPercent(), 0,
+                        50) / 100);
+        ToleranceRanges ranges = ToleranceRanges.of(structureRange, absorberRange, OptionalDouble.empty(),
+                ToleranceRanges.FrequencyBasis.NOT_STATED);
         OptionalDouble target = r.target() == null ? OptionalDouble.empty()
                 : OptionalDouble.of(r.target().positiveSi("robustness.target.value"));
         ToleranceSet set = new ToleranceSet(tolerance(ToleranceKey.STRUCTURE_MASS, r),
                 tolerance(ToleranceKey.STRUCTURE_STIFFNESS, r), tolerance(ToleranceKey.ABSORBER_MASS, r),
                 tolerance(ToleranceKey.ABSORBER_STIFFNESS, r), tolerance(ToleranceKey.ABSORBER_DAMPING, r));
-        return new RobustnessSettings(structureRange, absorberRange, target, set,
+        return new RobustnessSettings(ranges, target, set,
                 r.samples() == 0 ? d.samples() : r.samples(), r.seed());
     }
 

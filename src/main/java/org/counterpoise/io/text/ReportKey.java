@@ -64,7 +64,7 @@ public enum ReportKey {
     ROBUST_ABSORBER_DAMPING_RATIO("robust_absorber_damping_ratio"),
     ROBUST_ABSORBER_STIFFNESS("robust_absorber_stiffness_N_per_m"),
     ROBUST_ABSORBER_DAMPING("robust_absorber_damping_Ns_per_m"),
-    ROBUST_PEAKS("robust_worst_case_peak", "robust_nominal_peak"),
+    ROBUST_WORST_CASES("robust_worst_case_peak", "robust_nominal_peak"),
     TOLERATED_FOR_TARGET("target_structure_factor_low", "target_structure_factor_high"),
     MONTE_CARLO_SAMPLES("monte_carlo.samples"),
     MONTE_CARLO_SEED("monte_carlo.seed"),

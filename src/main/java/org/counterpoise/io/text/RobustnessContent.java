@@ -68,7 +68,7 @@ public final class RobustnessContent {
                 DesignContent.quantity(r.robustAbsorber().stiffness(), Dimension.STIFFNESS), robust));
         worst.add(row(ReportKey.ROBUST_ABSORBER_DAMPING, "robust design: damping", "",
                 DesignContent.quantity(r.robustAbsorber().damping(), Dimension.DAMPING_COEFFICIENT), robust));
-        worst.add(row(ReportKey.ROBUST_PEAKS, "its worst case / nominal", "",
+        worst.add(row(ReportKey.ROBUST_WORST_CASES, "its worst case / nominal", "",
                 new Pair(DesignContent.quantity(r.robust().worstCase().peak(), d),
                         DesignContent.quantity(r.robust().nominalPeak(), d), PairKind.SIDE_BY_SIDE), robust));
         worst.add(row(ReportKey.TARGET, "target", "", DesignContent.quantity(r.settings().target().orElse(Double.NaN), d), "project"));

@@ -46,8 +46,8 @@ public final class RobustnessCommand implements Callable<Integer> {
         if (samples != null) {
             Checks.inRange("--samples", samples, 1, 1_000_000);
         }
-        RobustnessSettings used = new RobustnessSettings(s.structureRange(), s.absorberRange(), s.target(),
-                s.tolerances(), samples == null ? s.samples() : samples, seed == null ? s.seed() : seed);
+        RobustnessSettings used = s.withSampling(samples == null ? s.samples() : samples,
+                seed == null ? s.seed() : seed);
         // the sample count and seed move no part of the design itself, only its Monte Carlo
         DesignDossier dossier = DesignDossier.of(study.withRobustness(used));
         DesignResult design = dossier.design();

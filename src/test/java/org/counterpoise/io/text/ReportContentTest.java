@@ -176,7 +176,7 @@ class ReportContentTest {
         m.put(ReportKey.ROBUST_ABSORBER_DAMPING_RATIO, List.of(r.robust().tuning().dampingRatio()));
         m.put(ReportKey.ROBUST_ABSORBER_STIFFNESS, List.of(r.robustAbsorber().stiffness()));
         m.put(ReportKey.ROBUST_ABSORBER_DAMPING, List.of(r.robustAbsorber().damping()));
-        m.put(ReportKey.ROBUST_PEAKS, List.of(r.robust().worstCase().peak(), r.robust().nominalPeak()));
+        m.put(ReportKey.ROBUST_WORST_CASES, List.of(r.robust().worstCase().peak(), r.robust().nominalPeak()));
         m.put(ReportKey.TOLERATED_FOR_TARGET, List.of(
                 r.toleratedForTarget().map(t -> t.low().orElse(Double.NaN)).orElse(Double.NaN),
                 r.toleratedForTarget().map(t -> t.high().orElse(Double.NaN)).orElse(Double.NaN)));

@@ -261,7 +261,7 @@ final class RobustnessStep extends Step {
                 : "Monte Carlo not run: " + value(c, ReportKey.MONTE_CARLO_NOT_RUN) + ".";
         summaryHtml = "Worst case of this design <b>" + value(c, ReportKey.WORST_CASE_PEAK)
                 + "</b>; robust design (f " + value(c, ReportKey.ROBUST_TUNING_RATIO) + ", \u03b6a "
-                + value(c, ReportKey.ROBUST_ABSORBER_DAMPING_RATIO) + ") <b>" + value(c, ReportKey.ROBUST_PEAKS)
+                + value(c, ReportKey.ROBUST_ABSORBER_DAMPING_RATIO) + ") <b>" + value(c, ReportKey.ROBUST_WORST_CASES)
                 + "</b>. " + monteCarlo;
         wrapSummary();
         sensitivity.show(theme -> RobustnessCharts.sensitivity(design, r, theme, 420, 320));
