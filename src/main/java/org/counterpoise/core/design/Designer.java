@@ -197,8 +197,10 @@ public final class Designer {
             p = p.withFixedTuning(c.fixedTuningRatio().getAsDouble());
         }
         if (c.strokeLimit().isPresent()) {
+            // the limit holds during run-up, from standstill to the top of the band (the same
+            // range as DesignResult.strokeRunUp), not only in the band
             p = p.withStrokeLimit(c.strokeLimit().getAsDouble() / ResponseScale.referenceLength(s,
-                    study.excitation().kind(), study.excitation().amplitude()));
+                    study.excitation().kind(), study.excitation().amplitude()), band.high() / omega1);
         }
         return p;
     }

@@ -51,7 +51,8 @@ public final class HInfinityOptimiser {
      */
     public static PeakOptimum optimise(PeakProblem problem) {
         EvaluationCounter counter = new EvaluationCounter();
-        if (!Double.isNaN(problem.strokeLimit())) {
+        if (problem.hasStrokeLimit()) {
+            // the limit holds over the run-up [0, strokeTop]: a loose limit leaves the free optimum
             PeakOptimum free = unconstrained(problem.withStrokeLimit(Double.NaN), counter);
             if (problem.strokePeak(free.tuning().tuningRatio(), free.tuning().dampingRatio())
                     <= problem.strokeLimit()) {
@@ -165,6 +166,17 @@ public final class HInfinityOptimiser {
         boolean stationary = MinimaxCertificate.isStationary(problem, f, zeta)
                 || PeakDirectSearch.noDescentByProbe(problem, f, zeta, peak, counter);
         return peak <= scan.lowest() * (1 + SCAN_MARGIN) && stationary;
+    }
+
+    /**
+     * The first verified active set of the free problem from a start (as the optimiser tries them),
+     * for the stroke-limited search when its best design lies off the limit.
+     *
+     * @return {f, zeta, peak}, or null when no active set from there is verified
+     */
+    static double[] freeActiveSet(PeakProblem problem, double f, double zeta, EvaluationCounter counter) {
+        Best best = new Best();
+        return tryActiveSets(problem, f, zeta, best, counter) ? new double[] {best.f, best.zeta, best.peak} : null;
     }
 
     /** Nelder-Mead on the exact peak from the best point so far, then the active sets from there. */
