@@ -28,13 +28,13 @@ public final class ToleranceRangeRows {
      */
     public static List<ReportRow> of(ToleranceRanges r) {
         FrequencyBasis basis = r.structureBasis();
-        return List.of(range(ReportKey.STRUCTURE_MISTUNING, "expected structure mistuning (+/-)", r,
+        return List.of(range(ReportKey.STRUCTURE_MISTUNING, "expected structure mistuning", r,
                         Range.STRUCTURE_FREQUENCY),
                 new ReportRow(ReportKey.STRUCTURE_FREQUENCY_BASIS, "structure natural frequency found by", "",
                         new Words(words(basis), List.of(Ids.of(basis))),
                         basis == FrequencyBasis.NOT_STATED ? "" : STATED_SOURCE, ""),
-                range(ReportKey.ABSORBER_MISTUNING, "expected absorber mistuning (+/-)", r, Range.ABSORBER_FREQUENCY),
-                range(ReportKey.ABSORBER_DAMPING_RANGE, "expected absorber damping change (+/-)", r,
+                range(ReportKey.ABSORBER_MISTUNING, "expected absorber mistuning", r, Range.ABSORBER_FREQUENCY),
+                range(ReportKey.ABSORBER_DAMPING_RANGE, "expected absorber damping change", r,
                         Range.ABSORBER_DAMPING));
     }
 
@@ -51,9 +51,9 @@ public final class ToleranceRangeRows {
     public static String words(FrequencyBasis basis) {
         return switch (basis) {
             case NOT_STATED -> "not stated";
-            case ESTIMATED -> "estimated (hand calculation, experience)";
-            case CALCULATED -> "calculated (finite-element or other model)";
-            case MEASURED -> "measured on the structure";
+            case ESTIMATED -> "estimated";
+            case CALCULATED -> "calculated (a model)";
+            case MEASURED -> "measured";
         };
     }
 }

@@ -2,6 +2,7 @@ package org.counterpoise.ui.gui.wizard;
 
 import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 import java.util.OptionalDouble;
 import java.util.stream.Collectors;
@@ -14,9 +15,9 @@ import org.counterpoise.core.robust.ToleranceRanges.Range;
 import org.counterpoise.core.units.Unit;
 import org.counterpoise.io.project.Project;
 import org.counterpoise.io.project.RobustnessInput;
-import org.counterpoise.io.text.QuantityFormat;
 import org.counterpoise.io.text.ReportRow;
 import org.counterpoise.io.text.ToleranceRangeRows;
+import org.counterpoise.io.text.TypedNumbers;
 import org.counterpoise.io.text.ValueText;
 import org.counterpoise.ui.gui.field.Form;
 import org.counterpoise.ui.gui.field.ItemWords;
@@ -48,8 +49,10 @@ final class ToleranceRangesForm {
     private static QuantityField field(Range range, String tooltip) {
         QuantityField f = new QuantityField("robustness." + RobustnessInput.Ranges.key(range), tooltip,
                 List.of(Unit.PERCENT));
+        // The default in grey while the field is empty; the note under the fields says what it rests on.
         f.textField().putClientProperty("JTextField.placeholderText",
-                QuantityFormat.number(100 * ToleranceRanges.DEFAULT.of(range), 3) + " (default, common practice)");
+                TypedNumbers.forEditing(100 * ToleranceRanges.DEFAULT.of(range), Locale.getDefault(Locale.Category.FORMAT))
+                        + " (default)");
         return f;
     }
 
@@ -61,13 +64,16 @@ final class ToleranceRangesForm {
         form.heading("Tolerances the design must hold over");
         form.row("Structure frequency \u00b1", 'q', fields.get(Range.STRUCTURE_FREQUENCY),
                 "The structure's natural frequency is rarely known better than a few percent");
-        form.row("Structure frequency found by", 'y', basis, "Estimated, calculated or measured");
+        form.row("Found by", 'y', basis, "How the structure's natural frequency was found: estimated, calculated or"
+                + " measured");
         form.row("Absorber frequency \u00b1", 'b', fields.get(Range.ABSORBER_FREQUENCY),
                 "Spring-rate and mass tolerance, or the tuning adjustment done on site");
         form.row("Absorber damping \u00b1", 'g', fields.get(Range.ABSORBER_DAMPING),
                 "Damper or elastomer tolerance, temperature");
-        form.derived("", new JLabel("<html><body style='width: 260pt'>Empty: the default in grey, common"
-                + " practice with no source; every output marks it so.</body></html>"));
+        JLabel note = new JLabel("<html><body style='width: 150pt'>Empty: the grey default holds (common"
+                + " practice, no source); every output marks it so.</body></html>");
+        note.setName("robustness.rangesNote");
+        form.derived("", note);
     }
 
     /** @return the fields by the key of their project-file field, for the step's problem display */
