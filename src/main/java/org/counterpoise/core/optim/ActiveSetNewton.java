@@ -1,6 +1,7 @@
 package org.counterpoise.core.optim;
 
 import java.util.Arrays;
+import java.util.List;
 import org.apache.commons.math3.linear.Array2DRowRealMatrix;
 import org.apache.commons.math3.linear.ArrayRealVector;
 import org.apache.commons.math3.linear.LUDecomposition;
@@ -59,16 +60,43 @@ final class ActiveSetNewton {
 
     /**
      * @param problem the problem, with a stroke limit
-     * @param interior as {@link #ActiveSetNewton(PeakProblem, boolean[], double[])}
-     * @param x as {@link #ActiveSetNewton(PeakProblem, boolean[], double[])}
+     * @param candidates candidate maxima of the objective {x, 1 for interior or 0 for a band end, value}
+     * @param set indices of the active ones
      * @param strokeInterior true when the active stroke maximum is interior to the run-up, false
      *     for an end of it
      * @param strokeX its starting (interior) or fixed (end) x = g^2
      * @return the solver with the stroke limit active
      */
-    static ActiveSetNewton withStroke(PeakProblem problem, boolean[] interior, double[] x, boolean strokeInterior,
-            double strokeX) {
-        return new ActiveSetNewton(problem, interior, x, true, strokeInterior, strokeX);
+    static ActiveSetNewton withStroke(PeakProblem problem, List<double[]> candidates, int[] set,
+            boolean strokeInterior, double strokeX) {
+        return new ActiveSetNewton(problem, interiorOf(candidates, set), xOf(candidates, set), true, strokeInterior,
+                strokeX);
+    }
+
+    /**
+     * @param problem the problem
+     * @param candidates candidate maxima {x, 1 for interior or 0 for a band end, value}
+     * @param set indices of the active ones
+     * @return the solver for that active set (no stroke limit)
+     */
+    static ActiveSetNewton of(PeakProblem problem, List<double[]> candidates, int[] set) {
+        return new ActiveSetNewton(problem, interiorOf(candidates, set), xOf(candidates, set));
+    }
+
+    private static boolean[] interiorOf(List<double[]> candidates, int[] set) {
+        boolean[] interior = new boolean[set.length];
+        for (int i = 0; i < set.length; i++) {
+            interior[i] = candidates.get(set[i])[1] > 0;
+        }
+        return interior;
+    }
+
+    private static double[] xOf(List<double[]> candidates, int[] set) {
+        double[] x = new double[set.length];
+        for (int i = 0; i < set.length; i++) {
+            x[i] = candidates.get(set[i])[0];
+        }
+        return x;
     }
 
     private ActiveSetNewton(PeakProblem problem, boolean[] interior, double[] x, boolean stroke,
@@ -81,6 +109,11 @@ final class ActiveSetNewton {
         this.stroke = stroke;
         this.strokeInterior = stroke && strokeInterior;
         this.strokeX = strokeX;
+    }
+
+    /** @return for each active maximum of the objective: true for an interior peak, false for a band end */
+    boolean[] interior() {
+        return interior.clone();
     }
 
     int evaluations() {

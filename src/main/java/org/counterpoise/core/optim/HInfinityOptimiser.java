@@ -230,13 +230,7 @@ public final class HInfinityOptimiser {
             }
         }
         for (int[] set : sets) {
-            boolean[] interior = new boolean[set.length];
-            double[] x = new double[set.length];
-            for (int i = 0; i < set.length; i++) {
-                interior[i] = candidates.get(set[i])[1] > 0;
-                x[i] = candidates.get(set[i])[0];
-            }
-            ActiveSetNewton newton = new ActiveSetNewton(problem, interior, x);
+            ActiveSetNewton newton = ActiveSetNewton.of(problem, candidates, set);
             if (!newton.isSquare()) {
                 continue;
             }
@@ -249,7 +243,7 @@ public final class HInfinityOptimiser {
             double peak = PeakScan.peakOf(problem, s[0], s[1], counter);
             if (peak <= active * (1 + ACCEPT) && isLocalMinimum(problem, s[0], s[1], peak, counter)
                     && MinimaxCertificate.isStationary(problem, s[0], s[1])) {
-                best.offer(s[0], s[1], peak, describe(interior, problem.fixedDamping() == 0.0), true);
+                best.offer(s[0], s[1], peak, describe(newton.interior(), problem.fixedDamping() == 0.0), true);
                 return true;
             }
         }

@@ -87,7 +87,7 @@ final class StrokeLimitedOptimum {
             return result(exact[0], exact[1], exact[2], true);
         }
         List<double[]> scan = new ArrayList<>();
-        for (double f : tunings()) {
+        for (double f : PeakScan.tunings(problem, TUNING_SCAN, BAND_TUNINGS)) {
             double[] at = bestAt(f);
             scan.add(new double[] {f, at[1]});
         }
@@ -270,13 +270,8 @@ final class StrokeLimitedOptimum {
         double start = peak(f, zeta);
         for (double[] strokeMax : strokes.subList(0, Math.min(2, strokes.size()))) {
             for (int[] set : sets) {
-                boolean[] interior = new boolean[set.length];
-                double[] x = new double[set.length];
-                for (int i = 0; i < set.length; i++) {
-                    interior[i] = objective.get(set[i])[1] > 0;
-                    x[i] = objective.get(set[i])[0];
-                }
-                ActiveSetNewton newton = ActiveSetNewton.withStroke(problem, interior, x, strokeMax[1] > 0, strokeMax[0]);
+                ActiveSetNewton newton = ActiveSetNewton.withStroke(problem, objective, set, strokeMax[1] > 0,
+                        strokeMax[0]);
                 if (!newton.isSquare()) {
                     continue;
                 }
@@ -310,24 +305,6 @@ final class StrokeLimitedOptimum {
         }
         out.removeIf(c -> !Double.isFinite(c[2]) || !(c[2] > 0));
         out.sort((a, b) -> Double.compare(b[2], a[2]));
-        return out;
-    }
-
-    /** The tunings of the scan: log-spaced over the box, and spread over the band. */
-    private List<Double> tunings() {
-        List<Double> out = new ArrayList<>();
-        for (int i = 0; i < TUNING_SCAN; i++) {
-            out.add(problem.minTuning() * Math.pow(problem.maxTuning() / problem.minTuning(), i / (TUNING_SCAN - 1.0)));
-        }
-        if (!problem.allFrequencies()) {
-            double top = Double.isFinite(problem.bandHigh()) ? problem.bandHigh() : 2 * Math.max(problem.bandLow(), 0.5);
-            for (int i = 0; i < BAND_TUNINGS; i++) {
-                double f = problem.bandLow() + (top - problem.bandLow()) * (i + 0.5) / BAND_TUNINGS;
-                if (f >= problem.minTuning() && f <= problem.maxTuning()) {
-                    out.add(f);
-                }
-            }
-        }
         return out;
     }
 

@@ -3,6 +3,9 @@ package org.counterpoise.core.optim;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.util.Arrays;
+import java.util.Random;
+import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.model.ExcitationKind;
 import org.counterpoise.core.rational.PeakFinder;
 import org.counterpoise.core.response.ResponseKind;
@@ -13,11 +16,11 @@ import org.junit.jupiter.api.Test;
  * frequency as it starts and stops). Checked against an independent brute force written here: the
  * equations of motion of the two masses (non-dimensional: m1 = k1 = omega1 = 1, force 1, or g^2 for
  * an unbalance) solved at each frequency by Cramer's rule, the peaks over the band and over the
- * run-up found by dense sampling (600 and 2400 frequencies) with each sampled maximum refined by a
+ * run-up found by dense sampling (300 and 800 frequencies) with each sampled maximum refined by a
  * golden-section search; for each tuning the least damping whose run-up stroke is within the
  * limit by bisection, and the best damping at or above it by a scan and a ternary search; the
- * tuning over 160 log-spaced values of the search box, refined by a ternary search around the
- * three best. Nothing from the production algebra is used by the brute force.
+ * tuning over 160 log-spaced values of the search box, then zooming scans (800 tunings, then 40
+ * six times) between the neighbours of the best, around the two best of the first scan. Nothing from the production algebra is used by the brute force.
  */
 class StrokeLimitedOptimumTest {
 
@@ -97,7 +100,7 @@ class StrokeLimitedOptimumTest {
 
     /** Brute-force run-up stroke of a design: over [0, g_high]. */
     private static double sampledStroke(Case c, double f, double zeta) {
-        return sampledPeak(c, f, zeta, 1, 0.0, c.high, 2400);
+        return sampledPeak(c, f, zeta, 1, 0.0, c.high, 800);
     }
 
     /**
@@ -133,14 +136,14 @@ class StrokeLimitedOptimumTest {
         if (Double.isNaN(least)) {
             return new double[] {Double.NaN, Double.POSITIVE_INFINITY};
         }
-        double[] best = {least, sampledPeak(c, f, least, 0, c.low, c.high, 600)};
+        double[] best = {least, sampledPeak(c, f, least, 0, c.low, c.high, 300)};
         double low = Math.log(Math.max(least, 1e-7));
         double high = Math.log(PeakProblem.MAX_DAMPING);
         int at = -1;
         double[] zs = new double[nz];
         for (int j = 0; j < nz; j++) {
             zs[j] = Math.exp(low + (high - low) * (j + 1) / nz);
-            double v = sampledPeak(c, f, zs[j], 0, c.low, c.high, 600);
+            double v = sampledPeak(c, f, zs[j], 0, c.low, c.high, 300);
             if (v < best[1]) {
                 best = new double[] {zs[j], v};
                 at = j;
@@ -152,13 +155,13 @@ class StrokeLimitedOptimumTest {
             for (int k = 0; k < 100; k++) {
                 double m1 = a + (b - a) / 3;
                 double m2 = b - (b - a) / 3;
-                if (sampledPeak(c, f, m1, 0, c.low, c.high, 600) < sampledPeak(c, f, m2, 0, c.low, c.high, 600)) {
+                if (sampledPeak(c, f, m1, 0, c.low, c.high, 300) < sampledPeak(c, f, m2, 0, c.low, c.high, 300)) {
                     b = m2;
                 } else {
                     a = m1;
                 }
             }
-            double v = sampledPeak(c, f, 0.5 * (a + b), 0, c.low, c.high, 600);
+            double v = sampledPeak(c, f, 0.5 * (a + b), 0, c.low, c.high, 300);
             if (v < best[1]) {
                 best = new double[] {0.5 * (a + b), v};
             }
@@ -166,7 +169,7 @@ class StrokeLimitedOptimumTest {
         return best;
     }
 
-    /** The brute-force constrained optimum {f, zeta, peak}: 160 tunings, then ternary search near the three best. */
+    /** The brute-force constrained optimum {f, zeta, peak}: 160 tunings, then zooming scans near the two best. */
     private static double[] bruteForce(Case c, double limit) {
         PeakProblem p = c.problem();
         int nf = 160;
@@ -178,25 +181,34 @@ class StrokeLimitedOptimumTest {
             values[i] = bestAt(c, fs[i], limit)[1];
             order[i] = i;
         }
-        java.util.Arrays.sort(order, (a, b) -> Double.compare(values[a], values[b]));
+        Arrays.sort(order, (a, b) -> Double.compare(values[a], values[b]));
         double[] best = {Double.NaN, Double.NaN, Double.POSITIVE_INFINITY};
-        for (int n = 0; n < 3; n++) {
+        for (int n = 0; n < 2; n++) {
             int i = order[n];
+            // zooming scans between the neighbours of the best: 800 tunings, then 40 six times (the
+            // best feasible peak at a tuning jumps where a piece of the feasible dampings appears,
+            // and its minimum can sit in a valley 1e-4 wide beside such a jump, so no search that
+            // assumes one minimum between two points is used)
             double a = fs[Math.max(i - 1, 0)];
             double b = fs[Math.min(i + 1, nf - 1)];
-            for (int k = 0; k < 70; k++) {
-                double m1 = a + (b - a) / 3;
-                double m2 = b - (b - a) / 3;
-                if (bestAt(c, m1, limit)[1] < bestAt(c, m2, limit)[1]) {
-                    b = m2;
-                } else {
-                    a = m1;
+            for (int round = 0; round < 7; round++) {
+                int fine = round == 0 ? 800 : 40;
+                double centre = a;
+                double roundBest = Double.POSITIVE_INFINITY;
+                for (int k = 0; k <= fine; k++) {
+                    double f = a + (b - a) * k / fine;
+                    double[] at = bestAt(c, f, limit);
+                    if (at[1] < roundBest) {
+                        roundBest = at[1];
+                        centre = f;
+                    }
+                    if (at[1] < best[2]) {
+                        best = new double[] {f, at[0], at[1]};
+                    }
                 }
-            }
-            double f = 0.5 * (a + b);
-            double[] at = bestAt(c, f, limit);
-            if (at[1] < best[2]) {
-                best = new double[] {f, at[0], at[1]};
+                double step = (b - a) / fine;
+                a = Math.max(centre - step, a);
+                b = Math.min(centre + step, b);
             }
         }
         return best;
@@ -207,7 +219,7 @@ class StrokeLimitedOptimumTest {
                 p.strokeTop()).magnitude();
     }
 
-    private static void agreesWithBruteForce(Case c, double limitFactor) {
+    private static ActiveConstraint agreesWithBruteForce(Case c, double limitFactor) {
         PeakProblem free = c.problem();
         PeakOptimum unlimited = HInfinityOptimiser.optimise(free);
         double limit = limitFactor * free.withStrokeLimit(1.0).strokePeak(unlimited.tuning().tuningRatio(),
@@ -215,30 +227,69 @@ class StrokeLimitedOptimumTest {
         PeakProblem limited = free.withStrokeLimit(limit);
         PeakOptimum o = HInfinityOptimiser.optimise(limited);
         assertTrue(o.converged(), c + ": certified");
-        assertEquals(ActiveConstraint.STROKE_LIMIT, o.activeConstraint(), c.toString());
-        // the run-up stroke (exact peak search over [0, g_high]) is within the limit, and on it
+        // the run-up stroke (exact peak search over [0, g_high]) is within the limit, and on it when
+        // the limit is the active constraint (a feasible optimum off the limit is possible too)
         assertTrue(runUpStroke(limited, o) <= limit * (1 + 1e-9), c + ": run-up stroke " + runUpStroke(limited, o));
-        assertEquals(limit, runUpStroke(limited, o), 1e-9 * limit, c.toString());
+        if (o.activeConstraint() == ActiveConstraint.STROKE_LIMIT) {
+            assertEquals(limit, runUpStroke(limited, o), 1e-9 * limit, c.toString());
+        }
         double[] brute = bruteForce(c, limit);
         // the brute force finds nothing feasible lower, and its best agrees to 1e-9 (measured: 2e-13)
         assertTrue(brute[2] >= o.peak() * (1 - 1e-9), c + ": brute force " + brute[2] + " below " + o.peak());
         assertEquals(o.peak(), brute[2], 1e-9 * o.peak(), c + ": brute force at f " + brute[0] + " zeta " + brute[1]
                 + ", optimiser at " + o.tuning());
+        return o.activeConstraint();
     }
 
     @Test
     void bandAroundTheResonance() {
-        agreesWithBruteForce(new Case(ExcitationKind.FORCE, ResponseKind.DISPLACEMENT, 0.05, 0.02, 0.85, 1.15), 0.7);
+        assertEquals(ActiveConstraint.STROKE_LIMIT, agreesWithBruteForce(
+                new Case(ExcitationKind.FORCE, ResponseKind.DISPLACEMENT, 0.05, 0.02, 0.85, 1.15), 0.7));
     }
 
     @Test
     void bandAboveTheResonanceAccelerationLikeTheCompressorPreset() {
-        agreesWithBruteForce(new Case(ExcitationKind.FORCE, ResponseKind.ACCELERATION, 0.1, 0.015, 0.94, 1.07), 0.6);
+        assertEquals(ActiveConstraint.STROKE_LIMIT, agreesWithBruteForce(
+                new Case(ExcitationKind.FORCE, ResponseKind.ACCELERATION, 0.1, 0.015, 0.94, 1.07), 0.6));
     }
 
     @Test
     void unbalanceOverABandAboveTheResonance() {
-        agreesWithBruteForce(new Case(ExcitationKind.UNBALANCE, ResponseKind.DISPLACEMENT, 0.08, 0.03, 1.2, 1.5), 0.8);
+        assertEquals(ActiveConstraint.STROKE_LIMIT, agreesWithBruteForce(
+                new Case(ExcitationKind.UNBALANCE, ResponseKind.DISPLACEMENT, 0.08, 0.03, 1.2, 1.5), 0.8));
+    }
+
+    /**
+     * Seeded random problems (force or unbalance, displacement or acceleration, mass ratio 0.02 to
+     * 0.2, structure damping 0.005 to 0.05, bands around, above and below the resonance, limits 30 %
+     * to 95 % of the free optimum's run-up stroke): 1 by default, {@code -DstrokeCases=N} for more.
+     * A limit no damping meets is refused with its reason (checked below), not counted.
+     */
+    @Test
+    void randomProblemsAgreeWithTheBruteForce() {
+        int cases = Integer.getInteger("strokeCases", 1);
+        Random r = new Random(1203L);
+        int done = 0;
+        for (int i = 0; done < cases && i < 10 * cases; i++) {
+            ExcitationKind e = r.nextBoolean() ? ExcitationKind.FORCE : ExcitationKind.UNBALANCE;
+            ResponseKind response = r.nextBoolean() ? ResponseKind.DISPLACEMENT : ResponseKind.ACCELERATION;
+            double mu = 0.02 + 0.18 * r.nextDouble();
+            double zeta1 = 0.005 + 0.045 * r.nextDouble();
+            double low = switch (r.nextInt(3)) {
+                case 0 -> 0.8 + 0.15 * r.nextDouble();
+                case 1 -> 1.1 + 0.4 * r.nextDouble();
+                default -> 0.4 + 0.3 * r.nextDouble();
+            };
+            double high = low * (1.05 + 0.3 * r.nextDouble());
+            double factor = 0.3 + 0.65 * r.nextDouble();
+            try {
+                agreesWithBruteForce(new Case(e, response, mu, zeta1, low, high), factor);
+                done++;
+            } catch (InvalidInputException unreachable) {
+                assertEquals("stroke limit", unreachable.field());
+            }
+        }
+        assertEquals(cases, done);
     }
 
     @Test
