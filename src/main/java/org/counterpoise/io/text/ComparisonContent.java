@@ -25,7 +25,7 @@ public final class ComparisonContent {
             new Column(ReportKey.MASS_RATIO, "\u03bc", false),
             new Column(ReportKey.TUNING_RATIO, "f", true),
             new Column(ReportKey.ABSORBER_DAMPING_RATIO, "\u03b6a", true),
-            new Column(ReportKey.NOMINAL_PEAK, "Nominal", true),
+            new Column(ReportKey.NOMINAL_PEAK, "Nominal peak", true),
             new Column(ReportKey.WORST_CASE_PEAK, "Worst case", true),
             new Column(ReportKey.P95_PEAK, "P95", true),
             new Column(ReportKey.STROKE, "Stroke", true),
