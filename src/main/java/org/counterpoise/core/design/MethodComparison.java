@@ -3,6 +3,7 @@ package org.counterpoise.core.design;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
+import org.counterpoise.core.error.CoreException;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.error.NotFoundException;
 import org.counterpoise.core.model.Tuning;
@@ -124,7 +125,7 @@ public record MethodComparison(List<Candidate> candidates, List<LeftOut> leftOut
      * @param chosen the study's own design (the chosen candidate is this design, not a second one)
      * @param listener progress (one share per method) and cancellation between methods
      * @return the comparison
-     * @throws org.counterpoise.core.error.CoreException with key CANCELLED when cancelled
+     * @throws CoreException with key CANCELLED when cancelled
      */
     public static MethodComparison of(DesignResult chosen, ProgressListener listener) {
         DesignStudy study = chosen.study();
