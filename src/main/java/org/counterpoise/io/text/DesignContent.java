@@ -7,7 +7,6 @@ import java.util.Optional;
 import org.counterpoise.core.design.Cautions;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.DesignStudy;
-import org.counterpoise.core.design.MethodComparison;
 import org.counterpoise.core.design.RmsFigures;
 import org.counterpoise.core.model.Excitation;
 import org.counterpoise.core.model.ExcitationKind;
@@ -80,16 +79,6 @@ public final class DesignContent {
         sections.add(new ReportSection(SectionId.MONTE_CARLO, "Tolerance Monte Carlo of the peak in band",
                 List.of(notRunRow(monteCarlo.notRun().get()))));
         return new ReportContent(c.name(), sections, c.warnings(), c.cautions());
-    }
-
-    /**
-     * @param r a design
-     * @param identity revision, date, engineer and client or site
-     * @param comparison the comparison of methods for the design's study
-     * @return the report with the comparison (the design's own rows stay those of {@code r})
-     */
-    public static ReportContent of(DesignResult r, ProjectIdentity identity, MethodComparison comparison) {
-        return of(r, identity, Optional.empty()).with(ComparisonContent.of(comparison, r.study()));
     }
 
     /**

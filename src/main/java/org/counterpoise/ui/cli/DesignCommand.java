@@ -1,6 +1,7 @@
 package org.counterpoise.ui.cli;
 
 import java.nio.file.Path;
+import java.util.Optional;
 import java.util.concurrent.Callable;
 import org.counterpoise.core.design.DesignDossier;
 import org.counterpoise.core.design.DesignResult;
@@ -10,6 +11,7 @@ import org.counterpoise.io.PlainText;
 import org.counterpoise.io.export.ResultJson;
 import org.counterpoise.io.project.LoadedProject;
 import org.counterpoise.io.project.ProjectIdentity;
+import org.counterpoise.io.text.ComparisonContent;
 import org.counterpoise.io.text.DesignContent;
 import org.counterpoise.io.text.DesignReport;
 import org.counterpoise.io.text.ReportContent;
@@ -39,7 +41,7 @@ public final class DesignCommand implements Callable<Integer> {
         DesignResult result = dossier.design();
         MethodComparison comparison = dossier.comparison(ProgressListener.NONE);
         ReportContent content = DesignContent.of(result, json ? ProjectIdentity.EMPTY : loaded.project().identity(),
-                comparison);
+                Optional.empty()).with(ComparisonContent.of(comparison, result.study()));
         spec.commandLine().getOut().print(PlainText.forTerminal(json ? ResultJson.toJson(content)
                 : DesignReport.render(content)));
         spec.commandLine().getOut().flush();
