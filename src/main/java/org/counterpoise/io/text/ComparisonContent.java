@@ -9,6 +9,7 @@ import org.counterpoise.core.design.MethodComparison;
 import org.counterpoise.core.design.MethodComparison.Candidate;
 import org.counterpoise.core.design.RunUpStroke;
 import org.counterpoise.core.robust.ToleranceRanges;
+import org.counterpoise.core.runup.SpeedRamp;
 import org.counterpoise.core.units.Dimension;
 import org.counterpoise.io.text.ReportComparison.Column;
 import org.counterpoise.io.text.ReportComparison.Line;
@@ -108,8 +109,9 @@ public final class ComparisonContent {
 
     private static String basis(RunUpStroke.Basis b) {
         return switch (b) {
-            case TRANSIENT -> "transient peak of a run-up from rest at the project's run-up rate to 1.25 times the"
-                    + " top of the band, integrated in time";
+            case TRANSIENT -> "transient peak of a run-up from rest at the project's run-up rate to "
+                    + QuantityFormat.number(SpeedRamp.DEFAULT_OVERSPEED, 3) + " times the top of the band, integrated"
+                    + " in time";
             case STEADY_STATE -> "steady-state peak from rest to the top of the band (the project states no run-up"
                     + " rate; a real run-up passes faster but rings on)";
             case STEADY_STATE_NOT_INTEGRATED -> "steady-state peak from rest to the top of the band (this disturbance"

@@ -83,7 +83,7 @@ public final class WarningText {
         return String.format(Locale.ROOT, "The design keeps its peak in band within %s of nominal only while %s"
                 + " stays within %s to %s, narrower than the tolerance range of +/-%s (stated, or the default when"
                 + " none is stated): as built it may perform much worse than computed; robust-worst-case holds"
-                + " over the range.", ValueText.percent(0.10, 2), what,
+                + " over the range.", ValueText.percent(DesignResult.TOLERANCE_ALLOWANCE, 2), what,
                 change(w.number(WarningParameter.TOLERATED_LOW)), change(w.number(WarningParameter.TOLERATED_HIGH)),
                 ValueText.percent(w.number(WarningParameter.STATED_RANGE), 2));
     }
