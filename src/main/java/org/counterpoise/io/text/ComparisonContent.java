@@ -78,7 +78,8 @@ public final class ComparisonContent {
         String title = "Method comparison (same absorber mass"
                 + (c.candidates().isEmpty() ? "" : ", mass ratio " + QuantityFormat.number(
                         c.candidates().get(0).tuning().massRatio(), 4))
-                + "; peaks of " + study.response().label() + " over the band)";
+                + "; peaks of " + study.response().label() + (study.excitation().band().isSingle()
+                        ? " at the forcing frequency)" : " over the band)");
         return new ReportComparison(title, COLUMNS, lines, new Words(recommendation(c, study.robustness().ranges()),
                 List.of(c.recommended().id(), id(c.why()))), chosen(c), notes, leftOut);
     }
