@@ -197,6 +197,13 @@ public record PeakProblem(ExcitationKind excitation, ResponseKind response, doub
     }
 
     /**
+     * Relative round-off within which a stroke on its limit counts as on it, not over it: the
+     * optimiser holds the run-up stroke at the limit to this, and a check of a design against its
+     * limit (in SI, after the conversion) must allow it too.
+     */
+    public static final double STROKE_LIMIT_ROUND_OFF = 1e-9;
+
+    /**
      * The largest absorber damping ratio any optimiser considers: beyond it the absorber is
      * practically locked to the structure (a plain added mass), so nothing is lost.
      */

@@ -47,7 +47,7 @@ final class StrokeLimitedOptimum {
     /** A scan point must beat the optimum by this much (relative) to force a restart. */
     private static final double SCAN_MARGIN = 1e-9;
     /** The run-up stroke of a reported design is within the limit to this (relative). */
-    static final double FEASIBLE = 1e-9;
+    static final double FEASIBLE = PeakProblem.STROKE_LIMIT_ROUND_OFF;
     private static final double ACCEPT = 1e-9;
     private static final int MAX_RESTARTS = 4;
     private static final double INFEASIBLE = 1e300;
