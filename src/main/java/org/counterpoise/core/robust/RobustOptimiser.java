@@ -221,19 +221,18 @@ public final class RobustOptimiser {
             return start;
         }
         double mu = start.massRatio();
+        // null outside the search box (f in 0.05 to 20, zeta_a in 1e-5 to 4), which ranks last
         Function<double[], Tuning> tuningOf = v -> {
             int i = 0;
             double f = tuningFree ? Math.exp(v[i++]) : start.tuningRatio();
             double zeta = dampingFree ? Math.exp(v[i]) : start.dampingRatio();
-            return new Tuning(mu, f, zeta);
+            boolean inBox = (!tuningFree || f > 0.05 && f < 20) && (!dampingFree || zeta > 1e-5 && zeta < 4);
+            return inBox ? new Tuning(mu, f, zeta) : null;
         };
         ObjectiveFunction fn = new ObjectiveFunction(v -> {
             listener.checkCancelled(WHAT);
             Tuning t = tuningOf.apply(v);
-            if (!(t.tuningRatio() > 0.05 && t.tuningRatio() < 20 && t.dampingRatio() > 1e-5 && t.dampingRatio() < 4)) {
-                return Double.POSITIVE_INFINITY;
-            }
-            return penalised(m, limits, objective, t);
+            return t == null ? Double.POSITIVE_INFINITY : penalised(m, limits, objective, t);
         });
         double[] x = new double[n];
         double[] steps = new double[n];
@@ -270,6 +269,6 @@ public final class RobustOptimiser {
             }
         }
         Tuning found = tuningOf.apply(x);
-        return value < bestValue ? found : best;
+        return found != null && value < bestValue ? found : best;
     }
 }
