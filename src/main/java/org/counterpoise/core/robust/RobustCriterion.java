@@ -21,6 +21,18 @@ public interface RobustCriterion {
     /** @return k: the criterion is the k-th largest peak (1 for the worst case) */
     int rank();
 
+    /**
+     * @return the relative accuracy the search closes its gap to: 1e-9 for the worst case; 1e-5 for
+     *     a percentile, whose sampling uncertainty (0.5 % in probability) is far larger anyway
+     */
+    double accuracy();
+
+    /**
+     * @return true to search from every seed (cheap subsets: the worst case), false to search from
+     *     the best seed only (the percentile, whose subset holds a hundred builds and more)
+     */
+    boolean searchFromEverySeed();
+
     /** @return builds to start the subset with (may be empty: the first evaluation supplies them) */
     List<VariedBuild> initialBuilds();
 
@@ -48,6 +60,16 @@ public interface RobustCriterion {
             @Override
             public int rank() {
                 return 1;
+            }
+
+            @Override
+            public double accuracy() {
+                return 1e-9;
+            }
+
+            @Override
+            public boolean searchFromEverySeed() {
+                return true;
             }
 
             @Override
@@ -96,6 +118,16 @@ public interface RobustCriterion {
             }
 
             @Override
+            public double accuracy() {
+                return 1e-5;
+            }
+
+            @Override
+            public boolean searchFromEverySeed() {
+                return false;
+            }
+
+            @Override
             public List<VariedBuild> initialBuilds() {
                 return List.of();
             }
@@ -108,8 +140,9 @@ public interface RobustCriterion {
                 Arrays.setAll(order, i -> i);
                 // highest first; equal peaks in sample order, so the result is deterministic
                 Arrays.sort(order, Comparator.comparingDouble((Integer i) -> -peaks[i]).thenComparingInt(i -> i));
+                // the k that decide it and as many again below them, which may overtake them nearby
                 List<VariedBuild> deciding = new ArrayList<>();
-                for (int j = 0; j < Math.min(n, 2 * k); j++) {
+                for (int j = 0; j < Math.min(n, 3 * k / 2); j++) {
                     deciding.add(builds.get(order[j]));
                 }
                 return new Evaluation(peaks[order[k - 1]], deciding, Optional.empty());

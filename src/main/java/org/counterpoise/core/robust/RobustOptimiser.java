@@ -7,6 +7,7 @@ import java.util.List;
 import java.util.Set;
 import java.util.function.Function;
 import java.util.function.ToDoubleFunction;
+import java.util.stream.IntStream;
 import org.apache.commons.math3.exception.TooManyEvaluationsException;
 import org.apache.commons.math3.optim.InitialGuess;
 import org.apache.commons.math3.optim.MaxEval;
@@ -30,9 +31,11 @@ import org.counterpoise.core.progress.ProgressListener;
  * e.g. Hettich and Kortanek 1993, SIAM Review 35, section 7). The criterion is the k-th largest
  * peak over all builds; over a finite subset of them it is never larger, for every design. So: (1)
  * minimise the k-th largest over the subset (a few to a few hundred exact peak searches per design,
- * instead of a full worst case of several hundred), by Nelder-Mead in (ln f, ln zeta_a), restarted
- * until a restart gains less than 1e-12; (2) evaluate the full criterion at the minimiser; (3) if it
- * exceeds the subset's value by more than 1e-9 relative, add the builds that decide it and repeat
+ * instead of a full worst case of several hundred), by Nelder-Mead in (ln f, ln zeta_a) from each
+ * seed, on all cores (from the best seed only when the criterion says so: the percentile), restarted
+ * until a restart gains less than a thousandth of the criterion's accuracy; (2) evaluate the full
+ * criterion at the minimiser; (3) if it exceeds the subset's value by more than its accuracy
+ * ({@link RobustCriterion#accuracy()}: 1e-9 relative for the worst case), add the builds that decide it and repeat
  * from there. When it stops, the subset minimum is a lower bound on the criterion's minimum and the
  * design's full criterion is within 1e-9 of it (for the local minimum Nelder-Mead found; the
  * search starts from each seed, and the tests scan the whole (f, zeta_a) box). The result is never
@@ -41,8 +44,6 @@ import org.counterpoise.core.progress.ProgressListener;
 public final class RobustOptimiser {
     /** What a cancelled search says it was. */
     private static final String WHAT = "the robust design";
-    /** Relative gap between the subset's value and the full criterion accepted as converged. */
-    static final double GAP = 1e-9;
     private static final int MAX_EXCHANGES = 30;
     private static final int MAX_RESTARTS = 6;
     /** Added to the stroke use of a design over its stroke limit: every allowed design ranks first. */
@@ -118,12 +119,16 @@ public final class RobustOptimiser {
             listener.checkCancelled(WHAT);
             Tuning exact = limits.apply(new Tuning(massRatio, seed.tuningRatio(), seed.dampingRatio()));
             RobustCriterion.Evaluation e = evaluate(m, criterion, exact, count);
-            subset.addAll(e.deciding());
             Minimum candidate = new Minimum(exact, e.value(), e, count[0], false);
             best = better(m, limits, candidate, best);
-            if (e.value() > 0 && Double.isFinite(e.value())) {
+            if (e.value() > 0 && Double.isFinite(e.value()) && criterion.searchFromEverySeed()) {
+                subset.addAll(e.deciding());
                 starts.add(exact);
             }
+        }
+        if (!criterion.searchFromEverySeed() && best.value() > 0 && Double.isFinite(best.value())) {
+            subset.addAll(best.evaluation().deciding());
+            starts.add(best.tuning());
         }
         if (starts.isEmpty()) {
             // zero (the response underflows in SI) or unbounded everywhere: nothing to compare, no search
@@ -136,7 +141,7 @@ public final class RobustOptimiser {
             ToDoubleFunction<Tuning> lower = t -> logKthLargest(builds, criterion.rank(), Absorber.of(m.structure(), t),
                     listener);
             // the starts are independent searches: run on all cores, the best taken in start order
-            List<Tuning> ends = starts.parallelStream().map(start -> search(m, lower, start, limits, listener))
+            List<Tuning> ends = starts.parallelStream().map(start -> search(m, lower, start, limits, criterion.accuracy(), listener))
                     .toList();
             Tuning found = null;
             double foundLower = Double.POSITIVE_INFINITY;
@@ -149,7 +154,7 @@ public final class RobustOptimiser {
             }
             RobustCriterion.Evaluation e = evaluate(m, criterion, found, count);
             best = better(m, limits, new Minimum(found, e.value(), e, count[0], false), best);
-            converged = Math.log(e.value()) <= foundLower + GAP;
+            converged = Math.log(e.value()) <= foundLower + criterion.accuracy();
             subset.addAll(e.deciding());
             starts = List.of(found);
         }
@@ -194,9 +199,8 @@ public final class RobustOptimiser {
             return Double.NEGATIVE_INFINITY;
         }
         double[] peaks = new double[builds.size()];
-        for (int i = 0; i < peaks.length; i++) {
-            peaks[i] = builds.get(i).peak(a);
-        }
+        // each peak into its own slot, on all cores: the sorted result does not depend on the threads
+        IntStream.range(0, peaks.length).parallel().forEach(i -> peaks[i] = builds.get(i).peak(a));
         Arrays.sort(peaks);
         return Math.log(peaks[peaks.length - k]);
     }
@@ -213,7 +217,7 @@ public final class RobustOptimiser {
 
     /** Nelder-Mead in the free coordinates of (ln f, ln zeta_a), restarted while it gains. */
     private static Tuning search(Mistuning m, ToDoubleFunction<Tuning> objective, Tuning start, RobustLimits limits,
-            ProgressListener listener) {
+            double accuracy, ProgressListener listener) {
         boolean tuningFree = limits.fixedTuningRatio().isEmpty();
         boolean dampingFree = limits.fixedDampingRatio().isEmpty();
         int n = (tuningFree ? 1 : 0) + (dampingFree ? 1 : 0);
@@ -251,12 +255,12 @@ public final class RobustOptimiser {
         for (int restart = 0; restart < MAX_RESTARTS; restart++) {
             PointValuePair p;
             try {
-                p = new SimplexOptimizer(1e-12, 1e-14).optimize(new MaxEval(2000), fn, GoalType.MINIMIZE,
+                p = new SimplexOptimizer(1e-3 * accuracy, 1e-14).optimize(new MaxEval(2000), fn, GoalType.MINIMIZE,
                         new InitialGuess(x), new NelderMeadSimplex(steps));
             } catch (TooManyEvaluationsException e) {
                 break;
             }
-            boolean gained = p.getValue() < value - 1e-12;
+            boolean gained = p.getValue() < value - 1e-3 * accuracy;
             if (p.getValue() < value) {
                 x = p.getPoint();
                 value = p.getValue();
