@@ -43,8 +43,9 @@ import org.counterpoise.core.response.ResponsePeak;
  *     response that matters rises by {@link #TOLERANCE_ALLOWANCE}
  * @param absorberTolerance the same for the absorber's natural frequency (spring rate factor squared)
  * @param warnings non-fatal findings
- * @param activeConstraint the designer's constraint that holds an exact-peak optimum back
- *     ({@code NONE} for every other method); the words are in {@code io.text.MethodNoteText}
+ * @param activeConstraint the designer's constraint that holds an exact-peak optimum back (for the
+ *     robust methods: the stroke limit when the run-up stroke sits on it; {@code NONE} for every
+ *     other method); the words are in {@code io.text.MethodNoteText}
  */
 public record DesignResult(DesignStudy study, String methodSource, String methodNote, Tuning tuning, Absorber absorber,
         OptionalDouble staticDeflection, ResponsePeak responseBefore, ResponsePeak responseAfter,

@@ -131,7 +131,7 @@ public final class Designer {
         Excitation excitation = study.excitation();
         Structure structure = study.structure();
         if (study.sizing() instanceof AbsorberSizing.ByTarget target) {
-            return study.method().robust() ? RobustChoice.lightestForTarget(study, target, warnings)
+            return study.method().robust() ? RobustChoice.lightestForTarget(study, target, warnings, active)
                     : lightestForTarget(study, target, warnings, active);
         }
         double mu = study.sizing().massRatioOn(structure);
@@ -145,7 +145,7 @@ public final class Designer {
                     "Frahm (1909), US patent 989958; Den Hartog (1956), Mechanical Vibrations, section 3.2",
                     "tuned to one forcing frequency");
             case EXACT_PEAK -> exactPeak(study, peakProblem(study, mu), warnings, active);
-            case ROBUST_WORST_CASE, ROBUST_P95 -> RobustChoice.forMassRatio(study, mu, warnings);
+            case ROBUST_WORST_CASE, ROBUST_P95 -> RobustChoice.forMassRatio(study, mu, warnings, active);
             case EXACT_VARIANCE -> {
                 VarianceOptimum o = VarianceOptimiser.optimise(PeakProblem.allFrequencies(excitation.kind(),
                         study.response(), mu, structure.dampingRatio()));

@@ -11,6 +11,7 @@ import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.error.Warning;
 import org.counterpoise.core.error.WarningKind;
 import org.counterpoise.core.model.Tuning;
+import org.counterpoise.core.optim.ActiveConstraint;
 import org.counterpoise.core.optim.HInfinityOptimiser;
 import org.counterpoise.core.progress.ProgressListener;
 import org.counterpoise.core.response.ResponseKind;
@@ -40,11 +41,12 @@ final class RobustChoice {
      * @param study a study with a robust method
      * @param mu the mass ratio
      * @param warnings where a warning goes
+     * @param active where the active constraint goes (the stroke limit, when the run-up stroke sits on it)
      * @return the robust tuning, with the ranges or distributions named in its note
      */
-    static ClosedForm forMassRatio(DesignStudy study, double mu, List<Warning> warnings) {
+    static ClosedForm forMassRatio(DesignStudy study, double mu, List<Warning> warnings, ActiveConstraint[] active) {
         RobustOptimiser.Minimum best = minimum(study, mu);
-        return closedForm(study, best, warnings, "");
+        return closedForm(study, best, warnings, active, "");
     }
 
     /**
@@ -56,20 +58,22 @@ final class RobustChoice {
      * @param study a study with a robust method
      * @param sizing the target and the largest mass ratio
      * @param warnings where a warning goes
+     * @param active where the active constraint goes
      * @return the robust tuning
      */
-    static ClosedForm lightestForTarget(DesignStudy study, AbsorberSizing.ByTarget sizing, List<Warning> warnings) {
+    static ClosedForm lightestForTarget(DesignStudy study, AbsorberSizing.ByTarget sizing, List<Warning> warnings,
+            ActiveConstraint[] active) {
         double target = sizing.target();
         double max = sizing.maxMassRatio();
         RobustOptimiser.Minimum atMax = minimum(study, max);
         if (atMax.value() > target) {
             warnings.add(Warning.of(WarningKind.TARGET_NOT_MET, max));
-            return closedForm(study, atMax, warnings, "target not met; ");
+            return closedForm(study, atMax, warnings, active, "target not met; ");
         }
         double lowest = Math.min(1e-3, max / 10);
         RobustOptimiser.Minimum atLowest = minimum(study, lowest);
         if (atLowest.value() <= target) {
-            return closedForm(study, atLowest, warnings, "lightest absorber that meets the target; ");
+            return closedForm(study, atLowest, warnings, active, "lightest absorber that meets the target; ");
         }
         double mu;
         try {
@@ -87,7 +91,7 @@ final class RobustChoice {
         if (at.value() > target) {
             at = atMax;
         }
-        return closedForm(study, at, warnings, "lightest absorber that meets the target; ");
+        return closedForm(study, at, warnings, active, "lightest absorber that meets the target; ");
     }
 
     /**
@@ -124,10 +128,10 @@ final class RobustChoice {
     }
 
     private static ClosedForm closedForm(DesignStudy study, RobustOptimiser.Minimum best, List<Warning> warnings,
-            String sizing) {
+            ActiveConstraint[] active, String sizing) {
         DesignConstraints c = study.constraints();
-        if (c.strokeLimit().isPresent()
-                && runUpStroke(study, best.tuning()) > c.strokeLimit().getAsDouble() * (1 + 1e-9)) {
+        double stroke = c.strokeLimit().isPresent() ? runUpStroke(study, best.tuning()) : 0;
+        if (c.strokeLimit().isPresent() && stroke > c.strokeLimit().getAsDouble() * (1 + 1e-9)) {
             throw new InvalidInputException("absorber.stroke_limit", Checks.show(c.strokeLimit().getAsDouble()),
                     "cannot be met: no tuning and damping keeps the run-up stroke within it; allow a larger stroke,"
                             + " a heavier absorber, or free the damping");
@@ -135,6 +139,9 @@ final class RobustChoice {
         if (!best.converged()) {
             warnings.add(Warning.of(WarningKind.OPTIMUM_NOT_VERIFIED));
         }
+        // the limit holds the design back when the search ended on it (the search's accuracy)
+        active[0] = c.strokeLimit().isPresent() && stroke >= c.strokeLimit().getAsDouble() * (1 - 1e-4)
+                ? ActiveConstraint.STROKE_LIMIT : ActiveConstraint.NONE;
         return new ClosedForm(best.tuning(), Designer.EXACT_SOURCE, sizing + note(study));
     }
 
