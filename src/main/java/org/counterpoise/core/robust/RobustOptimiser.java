@@ -141,8 +141,11 @@ public final class RobustOptimiser {
             ToDoubleFunction<Tuning> lower = t -> logKthLargest(builds, criterion.rank(), Absorber.of(m.structure(), t),
                     listener);
             // the starts are independent searches: run on all cores, the best taken in start order
-            List<Tuning> ends = starts.parallelStream().map(start -> search(m, lower, start, limits, criterion.accuracy(), listener))
-                    .toList();
+            // the first search roams (steps of 3 % in f, 25 % in zeta_a); later ones correct the
+            // design for the builds just added, from where it is, with steps ten times smaller
+            double reach = exchange == 0 ? 1.0 : 0.1;
+            List<Tuning> ends = starts.parallelStream()
+                    .map(start -> search(m, lower, start, limits, criterion.accuracy(), reach, listener)).toList();
             Tuning found = null;
             double foundLower = Double.POSITIVE_INFINITY;
             for (Tuning t : ends) {
@@ -217,7 +220,7 @@ public final class RobustOptimiser {
 
     /** Nelder-Mead in the free coordinates of (ln f, ln zeta_a), restarted while it gains. */
     private static Tuning search(Mistuning m, ToDoubleFunction<Tuning> objective, Tuning start, RobustLimits limits,
-            double accuracy, ProgressListener listener) {
+            double accuracy, double reach, ProgressListener listener) {
         boolean tuningFree = limits.fixedTuningRatio().isEmpty();
         boolean dampingFree = limits.fixedDampingRatio().isEmpty();
         int n = (tuningFree ? 1 : 0) + (dampingFree ? 1 : 0);
@@ -242,11 +245,11 @@ public final class RobustOptimiser {
         double[] steps = new double[n];
         int i = 0;
         if (tuningFree) {
-            steps[i] = 0.03;
+            steps[i] = 0.03 * reach;
             x[i++] = Math.log(start.tuningRatio());
         }
         if (dampingFree) {
-            steps[i] = 0.25;
+            steps[i] = 0.25 * reach;
             x[i] = Math.log(Math.max(start.dampingRatio(), 1e-3));
         }
         double value = fn.getObjectiveFunction().value(x);
