@@ -34,7 +34,7 @@ import picocli.CommandLine.Spec;
             + " steady-state peaks (or JSON with --json). See docs/runup.md."})
 public final class RunUpCommand implements Callable<Integer> {
     /** How far above the top running speed the ramp goes by default. */
-    static final double DEFAULT_OVERSPEED = 1.25;
+    static final double DEFAULT_OVERSPEED = SpeedRamp.DEFAULT_OVERSPEED;
 
     @Spec
     private CommandSpec spec;

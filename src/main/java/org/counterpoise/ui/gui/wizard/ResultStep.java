@@ -76,6 +76,7 @@ final class ResultStep extends Step {
     private final JComponent page;
     private final TaskRunner tasks;
     private final SheetStep.Messages messages;
+    private final ComparisonPanel comparison = new ComparisonPanel();
     private DesignResult result;
     private DesignCurves curves;
 
@@ -143,7 +144,10 @@ final class ResultStep extends Step {
         }
         JPanel right = new JPanel(new BorderLayout());
         right.add(controls, BorderLayout.NORTH);
-        right.add(charts, BorderLayout.CENTER);
+        JSplitPane chartsAndComparison = new JSplitPane(JSplitPane.VERTICAL_SPLIT, charts, comparison.component());
+        chartsAndComparison.setResizeWeight(0.55);
+        chartsAndComparison.setBorder(null);
+        right.add(chartsAndComparison, BorderLayout.CENTER);
         right.add(readout, BorderLayout.SOUTH);
         JSplitPane split = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, left, right);
         split.setResizeWeight(0.36);
@@ -180,6 +184,7 @@ final class ResultStep extends Step {
         table.setRowCount(0);
         rowNotes.clear();
         if (r == null) {
+            comparison.message("Fix the inputs to see the comparison of methods.");
             curves = null;
             writeNotes(List.of());
             responseChart.message("Fix the inputs to see the design.");
@@ -337,5 +342,10 @@ final class ResultStep extends Step {
 
     DefaultTableModel table() {
         return table;
+    }
+
+    /** @return the comparison of methods (computed after the design; see {@code DesignRun}) */
+    ComparisonPanel comparison() {
+        return comparison;
     }
 }
