@@ -42,12 +42,9 @@ import org.counterpoise.core.tuning.ClosedForms;
 public record MethodComparison(List<Candidate> candidates, List<LeftOut> leftOut, DesignMethod recommended,
         RecommendationReason why, DesignMethod chosen) {
 
-    /**
-     * The methods compared, in the order shown: the one list. (The robust 95th-percentile method
-     * joins it here, after robust-worst-case, when it exists.)
-     */
+    /** The methods compared, in the order shown: the one list. */
     public static final List<DesignMethod> COMPARED = List.of(DesignMethod.EQUAL_PEAK, DesignMethod.EXACT_PEAK,
-            DesignMethod.ROBUST_WORST_CASE, DesignMethod.UNDAMPED_SINGLE_SPEED);
+            DesignMethod.ROBUST_WORST_CASE, DesignMethod.ROBUST_P95, DesignMethod.UNDAMPED_SINGLE_SPEED);
 
     /** Relative difference of worst cases taken as a tie (the recommended method then wins the tie). */
     static final double TIE = 1e-9;
