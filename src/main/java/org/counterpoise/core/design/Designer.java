@@ -60,7 +60,7 @@ public final class Designer {
      * end of that span is taken, so the warning fires only where a design clearly asks for less
      * than any damper will give.
      */
-    static final double PRACTICAL_DAMPING_RATIO = 0.01;
+    public static final double PRACTICAL_DAMPING_RATIO = 0.01;
 
     /** The run-up stroke over the in-band stroke above which the design warns (issue 12: twice). */
     static final double RUN_UP_STROKE_RATIO = 2.0;

@@ -112,7 +112,10 @@ public record MethodComparison(List<Candidate> candidates, List<LeftOut> leftOut
 
     /** Why the recommended method is recommended (the words are in {@code io.text}). */
     public enum RecommendationReason {
-        /** It has the least worst-case peak over the tolerance ranges. */
+        /**
+         * It has the least worst-case peak over the tolerance ranges among the designs with at least
+         * a practical damper's damping.
+         */
         LEAST_WORST_CASE,
         /** A white-noise disturbance: the peak methods do not apply, the chosen rms design stands. */
         WHITE_NOISE
@@ -190,10 +193,18 @@ public record MethodComparison(List<Candidate> candidates, List<LeftOut> leftOut
         return Candidate.of(Designer.design(constrained), true);
     }
 
-    /** The candidate with the least worst case; a tie goes to the recommended method, then to the first. */
+    /**
+     * The candidate with the least worst case among those a practical damper can give (damping
+     * ratio at least {@link Designer#PRACTICAL_DAMPING_RATIO}; an undamped or notch design is shown
+     * but not recommended: its damping cannot be built or held, and its run-up stroke grows without
+     * bound); among all when none can. A tie goes to the recommended method, then to the first.
+     */
     private static DesignMethod leastWorstCase(List<Candidate> candidates) {
-        Candidate best = candidates.get(0);
-        for (Candidate c : candidates) {
+        List<Candidate> buildable = candidates.stream()
+                .filter(c -> c.tuning().dampingRatio() >= Designer.PRACTICAL_DAMPING_RATIO).toList();
+        List<Candidate> among = buildable.isEmpty() ? candidates : buildable;
+        Candidate best = among.get(0);
+        for (Candidate c : among) {
             boolean tie = Math.abs(c.worstPeak() - best.worstPeak()) <= TIE * Math.abs(best.worstPeak())
                     || c.worstPeak() == best.worstPeak();
             if (c.worstPeak() < best.worstPeak() && !tie || tie && c.method() == DesignMethod.RECOMMENDED) {

@@ -100,8 +100,31 @@ final class RobustChoice {
      * @return the robust optimum for that mass ratio
      */
     static RobustOptimiser.Minimum minimum(DesignStudy study, double mu) {
-        return RobustOptimiser.minimise(RobustMeasures.mistuning(study), mu, criterion(study), seeds(study, mu),
-                limits(study), ProgressListener.NONE);
+        RobustLimits limits = limits(study);
+        List<Tuning> seeds = seeds(study, mu);
+        RobustOptimiser.Minimum free = RobustOptimiser.minimise(RobustMeasures.mistuning(study), mu, criterion(study),
+                seeds, limits, ProgressListener.NONE);
+        if (limits.fixedDampingRatio().isPresent() || free.tuning().dampingRatio() >= Designer.PRACTICAL_DAMPING_RATIO) {
+            return free;
+        }
+        // The free optimum asks for less damping than any damper gives (typically a notch at one
+        // speed): a design nobody can build to. Re-optimised with the damping ratio held at that
+        // floor, i.e. on the boundary of the buildable region; the tests scan the region above the
+        // floor for anything better.
+        RobustLimits floor = new RobustLimits(limits.fixedTuningRatio(),
+                OptionalDouble.of(Designer.PRACTICAL_DAMPING_RATIO), limits.runUpStrokeLimit());
+        return RobustOptimiser.minimise(RobustMeasures.mistuning(study), mu, criterion(study), seeds, floor,
+                ProgressListener.NONE);
+    }
+
+    /**
+     * @param study a study with a robust method
+     * @param t its robust tuning
+     * @return true when the damping ratio was held at the practical floor (not given by the designer)
+     */
+    private static boolean onDampingFloor(DesignStudy study, Tuning t) {
+        return study.constraints().fixedDampingRatio().isEmpty()
+                && t.dampingRatio() == Designer.PRACTICAL_DAMPING_RATIO;
     }
 
     private static RobustCriterion criterion(DesignStudy study) {
@@ -141,7 +164,8 @@ final class RobustChoice {
         }
         // the limit holds the design back when the search ended on it (the search's accuracy)
         active[0] = c.strokeLimit().isPresent() && stroke >= c.strokeLimit().getAsDouble() * (1 - 1e-4)
-                ? ActiveConstraint.STROKE_LIMIT : ActiveConstraint.NONE;
+                ? ActiveConstraint.STROKE_LIMIT
+                : onDampingFloor(study, best.tuning()) ? ActiveConstraint.PRACTICAL_DAMPING_FLOOR : ActiveConstraint.NONE;
         return new ClosedForm(best.tuning(), Designer.EXACT_SOURCE, sizing + note(study));
     }
 
