@@ -1,0 +1,183 @@
+package org.counterpoise.io.chart;
+
+import java.awt.BasicStroke;
+import java.awt.Color;
+import java.util.ArrayList;
+import java.util.List;
+import org.counterpoise.core.design.RunUpStudy;
+import org.counterpoise.core.response.ResponseKind;
+import org.counterpoise.core.runup.Envelope;
+import org.counterpoise.core.runup.RunUpReportData;
+import org.counterpoise.core.runup.RunUpResult;
+import org.counterpoise.core.runup.SteadyCurves;
+import org.counterpoise.core.units.Unit;
+import org.counterpoise.io.project.DisturbanceInput;
+import org.counterpoise.io.text.DisplayUnits;
+import org.counterpoise.io.text.QuantityFormat;
+import org.counterpoise.io.text.RunUpReport;
+import org.knowm.xchart.XYChart;
+import org.knowm.xchart.XYChartBuilder;
+import org.knowm.xchart.XYSeries;
+import org.knowm.xchart.style.Styler;
+import org.knowm.xchart.style.markers.SeriesMarkers;
+
+/**
+ * The run-up charts: the response envelope met during the ramp (the largest magnitude in each
+ * forcing cycle) against the shaft speed, with and without the absorber, beside the steady-state
+ * amplitude of the same quantity at each speed (a thin, lighter line). One chart for the structure's response,
+ * one for the absorber stroke. They draw numbers they are given (computed by
+ * {@link RunUpStudy#run}) in the house style of {@link ChartStyle}; an unbounded steady-state
+ * value (an undamped resonance) never reaches the chart library: it is drawn to the top edge and
+ * named in the chart's notes ({@link PlotRange}).
+ */
+public final class RunUpCharts {
+    private RunUpCharts() {
+    }
+
+    /**
+     * The envelope of the structure's response, with and without the absorber, and the steady state.
+     * @param result the computed run-up
+     * @param speedUnit the unit of the shaft speed axis (rpm or Hz)
+     * @param theme colours
+     * @param width pixels
+     * @param height pixels
+     * @return the chart
+     */
+    public static XYChart structure(RunUpStudy.Result result, Unit speedUnit, ChartTheme theme, int width,
+            int height) {
+        ResponseKind k = result.study().structureQuantity();
+        RunUpReportData d = result.data();
+        List<Line> lines = List.of(
+                envelope(d, d.comparison().withoutAbsorber(), k, "without absorber, " + direction(d), theme.before(),
+                        speedUnit),
+                envelope(d, d.comparison().withAbsorber(), k, "with absorber, " + direction(d), theme.after(), speedUnit),
+                steady(d, result.steady(), false, k, "without absorber, steady state", theme.before(), speedUnit),
+                steady(d, result.steady(), true, k, "with absorber, steady state", theme.after(), speedUnit));
+        return chart(capitalised(RunUpReport.label(k)) + " during the " + direction(d), k, lines, speedUnit, theme,
+                width, height);
+    }
+
+    /**
+     * The envelope of the absorber stroke and its steady state.
+     * @param result the computed run-up
+     * @param speedUnit the unit of the shaft speed axis (rpm or Hz)
+     * @param theme colours
+     * @param width pixels
+     * @param height pixels
+     * @return the chart
+     */
+    public static XYChart stroke(RunUpStudy.Result result, Unit speedUnit, ChartTheme theme, int width, int height) {
+        RunUpReportData d = result.data();
+        List<Line> lines = List.of(
+                envelope(d, d.comparison().withAbsorber(), ResponseKind.STROKE, "stroke, " + direction(d), theme.stroke(),
+                        speedUnit),
+                steady(d, result.steady(), true, ResponseKind.STROKE, "stroke, steady state", theme.stroke(), speedUnit));
+        return chart("Absorber stroke during the " + direction(d), ResponseKind.STROKE, lines, speedUnit, theme, width,
+                height);
+    }
+
+    /**
+     * The unit of the shaft speed axis: the unit the project states its speeds in when that is
+     * Hz or rpm, otherwise rpm (the trade's unit of shaft speed, common practice).
+     * @param disturbance the disturbance as typed
+     * @return Hz or rpm
+     */
+    public static Unit speedUnit(DisturbanceInput disturbance) {
+        Unit typed = disturbance.isBand() ? disturbance.bandUnit()
+                : disturbance.frequency() == null ? null : disturbance.frequency().unit();
+        return typed == Unit.HERTZ ? Unit.HERTZ : Unit.REV_PER_MINUTE;
+    }
+
+    /** One curve: x in the speed unit, y in the display unit; a steady state is drawn thin and lighter. */
+    private record Line(String name, double[] x, double[] y, Color color, boolean steady) {
+    }
+
+    private static Line envelope(RunUpReportData d, RunUpResult r, ResponseKind k, String name, Color color,
+            Unit speedUnit) {
+        Envelope e = r.envelope();
+        return new Line(name, shaft(d, e.speed(), speedUnit), ChartStyle.inUnit(e.of(k), DisplayUnits.of(k.dimension())),
+                color, false);
+    }
+
+    private static Line steady(RunUpReportData d, SteadyCurves s, boolean withAbsorber, ResponseKind k, String name,
+            Color color, Unit speedUnit) {
+        return new Line(name, shaft(d, s.speed(), speedUnit),
+                ChartStyle.inUnit(s.of(withAbsorber, k), DisplayUnits.of(k.dimension())), color, true);
+    }
+
+    /** Forcing frequencies (rad/s) as shaft speeds in the unit of the axis. */
+    private static double[] shaft(RunUpReportData d, double[] forcing, Unit speedUnit) {
+        double[] out = new double[forcing.length];
+        for (int i = 0; i < forcing.length; i++) {
+            out[i] = speedUnit.fromSi(d.shaftSpeed(forcing[i]));
+        }
+        return out;
+    }
+
+    private static XYChart chart(String title, ResponseKind k, List<Line> lines, Unit speedUnit, ChartTheme theme,
+            int width, int height) {
+        Unit unit = DisplayUnits.of(k.dimension());
+        XYChart c = new XYChartBuilder().width(width).height(height).title(title)
+                .xAxisTitle("Shaft speed (" + ChartFactory.pretty(speedUnit.symbol()) + ")")
+                .yAxisTitle(capitalised(RunUpReport.label(k)) + " (" + ChartFactory.pretty(unit.symbol()) + ")")
+                .build();
+        ChartStyle.houseStyle(c.getStyler(), theme);
+        double[][] ys = lines.stream().map(Line::y).toArray(double[][]::new);
+        double typical = PlotRange.typical(ys);
+        double top = PlotRange.top(typical, ys);
+        if (!(top > 0) || !Double.isFinite(top)) {
+            String text = "No response to draw: every value is zero or unbounded.";
+            ChartFactory.note(c, text);
+            return ChartStyle.emptyNote(c, text, theme);
+        }
+        double ceiling = top * 1.08;
+        double xMax = 0;
+        List<double[]> marks = new ArrayList<>();
+        for (Line line : lines) {
+            for (double v : line.x()) {
+                if (Double.isFinite(v)) {
+                    xMax = Math.max(xMax, v);
+                }
+            }
+            for (double at : PlotRange.unboundedAt(line.x(), line.y(), typical)) {
+                marks.add(new double[] {at, ceiling});
+                ChartFactory.note(c, line.name() + ": unbounded at "
+                        + QuantityFormat.number(at, QuantityFormat.FIGURES) + " " + speedUnit.symbol());
+            }
+            XYSeries s = c.addSeries(line.name(), line.x(), PlotRange.clip(line.y(), typical, 0.0, ceiling));
+            s.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Line);
+            s.setMarker(SeriesMarkers.NONE);
+            // The steady state is thin and lighter, not dashed: the chart library draws a curve of
+            // many short segments, each starting its dash pattern afresh, so a dash would look solid.
+            Color c0 = line.color();
+            s.setLineColor(line.steady() ? new Color(c0.getRed(), c0.getGreen(), c0.getBlue(), 150) : c0);
+            s.setLineStyle(new BasicStroke(line.steady() ? 1.3f : 2.2f, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND));
+        }
+        var s = c.getStyler();
+        s.setXAxisMin(0.0);
+        s.setXAxisMax(xMax > 0 ? xMax : 1.0);
+        s.setYAxisMin(0.0);
+        s.setYAxisMax(ceiling * 1.12);
+        s.setLegendPosition(Styler.LegendPosition.InsideNW);
+        s.setxAxisTickLabelsFormattingFunction(ChartNumbers.linearAxis(0.0, xMax));
+        s.setyAxisTickLabelsFormattingFunction(ChartNumbers.linearAxis(0.0, ceiling));
+        if (!marks.isEmpty()) {
+            XYSeries m = c.addSeries(ChartFactory.UNBOUNDED_SERIES, marks.stream().mapToDouble(p -> p[0]).toArray(),
+                    marks.stream().mapToDouble(p -> p[1]).toArray());
+            m.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Scatter);
+            m.setMarker(SeriesMarkers.TRIANGLE_UP);
+            m.setMarkerColor(theme.alarm());
+            s.setMarkerSize(9);
+        }
+        ChartStyle.notePanel(c, theme, Double.NaN);
+        return c;
+    }
+
+    private static String direction(RunUpReportData d) {
+        return d.runDown() ? "run-down" : "run-up";
+    }
+
+    private static String capitalised(String s) {
+        return Character.toUpperCase(s.charAt(0)) + s.substring(1);
+    }
+}

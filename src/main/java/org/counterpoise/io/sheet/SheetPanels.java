@@ -1,0 +1,32 @@
+package org.counterpoise.io.sheet;
+
+import java.io.IOException;
+import java.util.List;
+
+/** Lays out a {@link SheetPanel} with the {@link SheetWriter}'s type, rules and chart drawing. */
+final class SheetPanels {
+    private SheetPanels() {
+    }
+
+    /**
+     * @param w the writer, on a fresh page
+     * @param panel the page's content
+     * @throws IOException when the PDF cannot be written
+     */
+    static void draw(SheetWriter w, SheetPanel panel) throws IOException {
+        w.title(panel.title());
+        for (String sentence : panel.sentences()) {
+            w.paragraph(sentence);
+        }
+        if (!panel.table().isEmpty()) {
+            float left = SheetWriter.margin();
+            float[] lefts = {left, left + 0.36f * SheetWriter.textWidth(), left + 0.68f * SheetWriter.textWidth()};
+            boolean head = true;
+            for (List<String> row : panel.table()) {
+                w.cells(row, lefts, head);
+                head = false;
+            }
+        }
+        w.charts(panel.charts(), SheetWriter.textWidth(), 290f);
+    }
+}
