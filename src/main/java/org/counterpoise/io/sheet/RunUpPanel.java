@@ -89,13 +89,15 @@ public final class RunUpPanel {
                 "The steady-state column is what the machine would reach if it dwelt at each speed it passes;"
                         + " on the charts it is the thin, lighter line beside the envelope met during the " + what + ".");
         List<List<String>> table = new ArrayList<>();
-        table.add(List.of("quantity", "with absorber", "without absorber"));
+        table.add(List.of("peak during the " + what, "with absorber", "without absorber"));
         for (ResponseKind k : RunUpReportData.QUANTITIES) {
-            table.add(List.of("peak " + RunUpReport.label(k), RunUpReport.transientPeak(d, c.withAbsorber(), k, speedUnit),
+            table.add(List.of(RunUpReport.label(k), RunUpReport.transientPeak(d, c.withAbsorber(), k, speedUnit),
                     RunUpReport.transientPeak(d, c.withoutAbsorber(), k, speedUnit)));
         }
+        table.add(List.of("", "", ""));
+        table.add(List.of("steady state, for comparison", "with absorber", "without absorber"));
         for (ResponseKind k : RunUpReportData.QUANTITIES) {
-            table.add(List.of("steady " + RunUpReport.label(k),
+            table.add(List.of(RunUpReport.label(k),
                     RunUpReport.steadyPeak(d, c.steadyWithAbsorber(), k, speedUnit),
                     RunUpReport.steadyPeak(d, c.steadyWithoutAbsorber(), k, speedUnit)));
         }

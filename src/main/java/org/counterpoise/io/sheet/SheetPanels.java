@@ -2,6 +2,7 @@ package org.counterpoise.io.sheet;
 
 import java.io.IOException;
 import java.util.List;
+import org.counterpoise.io.text.ValueText;
 
 /** Lays out a {@link SheetPanel} with the {@link SheetWriter}'s type, rules and chart drawing. */
 final class SheetPanels {
@@ -23,8 +24,9 @@ final class SheetPanels {
             float[] lefts = {left, left + 0.36f * SheetWriter.textWidth(), left + 0.68f * SheetWriter.textWidth()};
             boolean head = true;
             for (List<String> row : panel.table()) {
-                w.cells(row, lefts, head);
-                head = false;
+                // a blank row ends a block; the row after it heads the next block
+                w.cells(row.stream().map(ValueText::pretty).toList(), lefts, head);
+                head = row.stream().allMatch(String::isEmpty);
             }
         }
         w.charts(panel.charts(), SheetWriter.textWidth(), 290f);
