@@ -117,7 +117,9 @@ public final class SheetWriter {
         rule();
         charts(charts, chartWidth, chartHeight);
         for (SheetPanel panel : panels) {
-            newPage();
+            if (!panel.charts().isEmpty()) {
+                newPage(); // a page with charts starts on its own; a sentence follows the charts above
+            }
             SheetPanels.draw(this, panel);
         }
         newPage();
