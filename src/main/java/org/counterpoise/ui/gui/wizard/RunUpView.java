@@ -1,6 +1,7 @@
 package org.counterpoise.ui.gui.wizard;
 
 import java.awt.BorderLayout;
+import java.awt.Component;
 import java.awt.Dimension;
 import java.awt.FlowLayout;
 import java.awt.GridLayout;
@@ -16,6 +17,7 @@ import javax.swing.JTextField;
 import javax.swing.SwingWorker;
 import javax.swing.event.AncestorEvent;
 import javax.swing.event.AncestorListener;
+import javax.swing.table.DefaultTableCellRenderer;
 import javax.swing.table.DefaultTableModel;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.RunUpStudy;
@@ -43,8 +45,8 @@ import org.counterpoise.ui.gui.task.TaskRunner;
  * run-up rate and may be changed here for a quick look (the project keeps its own).
  */
 final class RunUpView {
-    private static final String[] COLUMNS = {"Peak", "Run-up, with absorber", "Run-up, without",
-        "Steady state, with", "Steady state, without"};
+    private static final String[] COLUMNS = {"Peak", "Run-up, with", "Run-up, without", "Steady, with",
+        "Steady, without"};
     private final TaskRunner tasks;
     private final JPanel panel = new JPanel(new BorderLayout(0, 4));
     private final JTextField rate = new JTextField(7);
@@ -89,9 +91,13 @@ final class RunUpView {
         charts.add(strokeChart);
         JTable t = new JTable(table);
         t.setName("runup.table");
+        // "value at speed" in two lines, so that every column shows its figures whole
+        t.setRowHeight(2 * t.getRowHeight() + 4);
+        t.setDefaultRenderer(Object.class, twoLines());
         t.getColumnModel().getColumn(0).setPreferredWidth(150);
         JScrollPane tableScroll = new JScrollPane(t);
-        tableScroll.setPreferredSize(new Dimension(600, t.getRowHeight() * 6 + 28));
+        tableScroll.setPreferredSize(new Dimension(600, t.getRowHeight() * 5 + t.getTableHeader()
+                .getPreferredSize().height + 4));
         panel.add(controls, BorderLayout.NORTH);
         panel.add(charts, BorderLayout.CENTER);
         panel.add(tableScroll, BorderLayout.SOUTH);
@@ -223,6 +229,27 @@ final class RunUpView {
         }
     }
 
+    private static DefaultTableCellRenderer twoLines() {
+        return new DefaultTableCellRenderer() {
+            @Override
+            public Component getTableCellRendererComponent(JTable table, Object value, boolean selected,
+                    boolean focus, int row, int column) {
+                String text = value == null ? "" : value.toString();
+                int at = text.indexOf(" at ");
+                String shown = at < 0 ? text : "<html>" + escape(text.substring(0, at)) + "<br>"
+                        + escape(text.substring(at + 1)) + "</html>";
+                JLabel l = (JLabel) super.getTableCellRendererComponent(table, shown, selected, focus, row, column);
+                l.setVerticalAlignment(JLabel.TOP);
+                l.setToolTipText(text.isEmpty() ? null : text);
+                return l;
+            }
+        };
+    }
+
+    private static String escape(String s) {
+        return s.replace("&", "&amp;").replace("<", "&lt;").replace(">", "&gt;");
+    }
+
     private void clear(String message) {
         structureChart.message(message);
         strokeChart.message(" ");
@@ -257,6 +284,11 @@ final class RunUpView {
             rows.add(row);
         }
         return rows;
+    }
+
+    /** @return where the rate in the field comes from, in words, for tests */
+    String rateSource() {
+        return rateSource.getText();
     }
 
     /** @return the shaft acceleration field, for tests */
