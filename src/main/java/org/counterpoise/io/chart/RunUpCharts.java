@@ -2,9 +2,11 @@ package org.counterpoise.io.chart;
 
 import java.awt.BasicStroke;
 import java.awt.Color;
+import java.awt.Font;
 import java.util.ArrayList;
 import java.util.List;
 import org.counterpoise.core.design.RunUpStudy;
+import org.counterpoise.core.model.FrequencyBand;
 import org.counterpoise.core.response.ResponseKind;
 import org.counterpoise.core.runup.Envelope;
 import org.counterpoise.core.runup.RunUpReportData;
@@ -15,6 +17,8 @@ import org.counterpoise.io.project.DisturbanceInput;
 import org.counterpoise.io.text.DisplayUnits;
 import org.counterpoise.io.text.QuantityFormat;
 import org.counterpoise.io.text.RunUpReport;
+import org.knowm.xchart.AnnotationLine;
+import org.knowm.xchart.AnnotationText;
 import org.knowm.xchart.XYChart;
 import org.knowm.xchart.XYChartBuilder;
 import org.knowm.xchart.XYSeries;
@@ -54,7 +58,7 @@ public final class RunUpCharts {
                 steady(d, result.steady(), false, k, "without absorber, steady state", theme.before(), speedUnit),
                 steady(d, result.steady(), true, k, "with absorber, steady state", theme.after(), speedUnit));
         return chart(capitalised(RunUpReport.label(k)) + " during the " + direction(d), k, lines, speedUnit, theme,
-                width, height);
+                width, height, band(result, speedUnit));
     }
 
     /**
@@ -73,7 +77,7 @@ public final class RunUpCharts {
                         speedUnit),
                 steady(d, result.steady(), true, ResponseKind.STROKE, "stroke, steady state", theme.stroke(), speedUnit));
         return chart("Absorber stroke during the " + direction(d), ResponseKind.STROKE, lines, speedUnit, theme, width,
-                height);
+                height, band(result, speedUnit));
     }
 
     /**
@@ -114,8 +118,15 @@ public final class RunUpCharts {
         return out;
     }
 
+    /** @return the running speeds {low, high} as shaft speeds in the axis unit */
+    private static double[] band(RunUpStudy.Result result, Unit speedUnit) {
+        FrequencyBand b = result.study().design().study().excitation().band();
+        return new double[] {speedUnit.fromSi(result.data().shaftSpeed(b.low())),
+            speedUnit.fromSi(result.data().shaftSpeed(b.high()))};
+    }
+
     private static XYChart chart(String title, ResponseKind k, List<Line> lines, Unit speedUnit, ChartTheme theme,
-            int width, int height) {
+            int width, int height, double[] band) {
         Unit unit = DisplayUnits.of(k.dimension());
         XYChart c = new XYChartBuilder().width(width).height(height).title(title)
                 .xAxisTitle("Shaft speed (" + ChartFactory.pretty(speedUnit.symbol()) + ")")
@@ -168,6 +179,20 @@ public final class RunUpCharts {
             m.setMarker(SeriesMarkers.TRIANGLE_UP);
             m.setMarkerColor(theme.alarm());
             s.setMarkerSize(9);
+        }
+        // the running speeds, marked as the frequency-response charts mark the forcing band
+        s.setAnnotationLineColor(theme.band());
+        s.setAnnotationLineStroke(new BasicStroke(1.4f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 10f,
+                new float[] {2f, 3f}, 0f));
+        s.setAnnotationTextFont(new Font(Font.SANS_SERIF, Font.PLAIN, 10));
+        s.setAnnotationTextFontColor(theme.dark() ? theme.band() : theme.band().darker());
+        if (Double.isFinite(band[0]) && Double.isFinite(band[1]) && band[1] <= xMax) {
+            c.addAnnotation(new AnnotationLine(band[0], true, false));
+            if (band[1] > band[0]) {
+                c.addAnnotation(new AnnotationLine(band[1], true, false));
+            }
+            c.addAnnotation(new AnnotationText(band[1] > band[0] ? "running speeds" : "running speed",
+                    0.5 * (band[0] + band[1]), ceiling * 1.07, false));
         }
         ChartStyle.notePanel(c, theme, Double.NaN);
         return c;

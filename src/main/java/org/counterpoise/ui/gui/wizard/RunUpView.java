@@ -73,7 +73,7 @@ final class RunUpView {
         rate.setName("runup.rate");
         rate.setToolTipText("Shaft speed change per second at start and stop, rpm/s");
         rate.addActionListener(e -> start());
-        JButton compute = new JButton("Compute run-up");
+        JButton compute = new JButton("Compute");
         compute.setName("runup.compute");
         compute.setMnemonic('u');
         compute.addActionListener(e -> start());
@@ -208,7 +208,7 @@ final class RunUpView {
             }
         }, () -> {
             if (mine == request) {
-                clear("The run-up was cancelled; press Compute run-up to start it again.");
+                clear("The run-up was cancelled; press Compute to start it again.");
             }
         });
     }
