@@ -16,6 +16,7 @@ import org.counterpoise.io.text.ReportValue.NotApplicable;
 import org.counterpoise.io.text.ReportValue.Pair;
 import org.counterpoise.io.text.ReportValue.PeakAt;
 import org.counterpoise.io.text.ReportValue.Percent;
+import org.counterpoise.io.text.ReportValue.PlusMinus;
 import org.counterpoise.io.text.ReportValue.Quantity;
 import org.counterpoise.io.text.ReportValue.Reduction;
 import org.counterpoise.io.text.ReportValue.Series;
@@ -62,6 +63,9 @@ final class ReportJson {
             if (t.range().ofBareResponse() && keys.size() > 2) {
                 write(o, keys.get(2), new Words("below allowance times bare structure response", List.of()));
             }
+        } else if (v instanceof PlusMinus p) {
+            write(o, keys.get(0), new Percent(p.fraction(), p.figures()));
+            write(o, keys.get(1), new Words(p.origin(), List.of()));
         } else if (v instanceof Words w && !w.ids().isEmpty()) {
             for (int i = 0; i < keys.size(); i++) {
                 write(o, keys.get(i), new Words(w.ids().get(i), List.of()));

@@ -4,9 +4,11 @@ import java.util.List;
 import java.util.OptionalDouble;
 import org.counterpoise.core.design.AbsorberSizing;
 import org.counterpoise.core.design.DesignConstraints;
+import org.counterpoise.core.design.DesignMethod;
 import org.counterpoise.core.design.RobustnessSettings;
 import org.counterpoise.core.robust.Tolerance;
 import org.counterpoise.core.robust.ToleranceRanges;
+import org.counterpoise.core.robust.ToleranceRanges.Range;
 import org.counterpoise.core.robust.ToleranceSet;
 import org.counterpoise.core.design.DesignStudy;
 import org.counterpoise.core.error.Checks;
@@ -58,8 +60,23 @@ public record Project(String name, String notes, StructureInput structure, Distu
         this(name, notes, structure, disturbance, absorber, robustness, ProjectIdentity.EMPTY);
     }
 
-    /** The project-file format version this build writes. */
-    public static final int FORMAT_VERSION = 1;
+    /**
+     * The project-file format version this build writes. Version 2 (issue 12) changed the meaning of
+     * an absent {@code absorber.method}: recommended ({@link DesignMethod#RECOMMENDED}) instead of
+     * equal-peak; version-1 files are read as they always meant ({@link #defaultMethod}).
+     */
+    public static final int FORMAT_VERSION = 2;
+
+    /** The oldest project-file format version this build reads (and migrates on load). */
+    public static final int OLDEST_FORMAT_VERSION = 1;
+
+    /**
+     * @param formatVersion the file's format version ({@link #OLDEST_FORMAT_VERSION} to {@link #FORMAT_VERSION})
+     * @return the method a file of that version means when it gives no {@code absorber.method}
+     */
+    public static DesignMethod defaultMethod(int formatVersion) {
+        return formatVersion < 2 ? DesignMethod.EQUAL_PEAK : DesignMethod.RECOMMENDED;
+    }
 
     /** Response kinds a design may reduce (those of the structure). */
     public static final List<ResponseKind> DESIGN_RESPONSES = List.of(ResponseKind.DISPLACEMENT,
@@ -194,14 +211,10 @@ public record Project(String name, String notes, StructureInput structure, Distu
             return RobustnessSettings.DEFAULT;
         }
         RobustnessSettings d = RobustnessSettings.DEFAULT;
-        OptionalDouble structureRange = Double.isNaN(r.structureMistuningPercent()) ? OptionalDouble.empty()
-                : OptionalDouble.of(Checks.inRange("robustness.structure_mistuning", r.structureMistuningPercent(), 0,
-                        50) / 100);
-        OptionalDouble absorberRange = Double.isNaN(r.absorberMistuningPercent()) ? OptionalDouble.empty()
-                : OptionalDouble.of(Checks.inRange("robustness.absorber_mistuning", r.absorberMistuningPercent(), 0,
-                        50) / 100);
-        ToleranceRanges ranges = ToleranceRanges.of(structureRange, absorberRange, OptionalDouble.empty(),
-                ToleranceRanges.FrequencyBasis.NOT_STATED);
+        RobustnessInput.Ranges given = r.ranges();
+        ToleranceRanges ranges = ToleranceRanges.of(percentRange(given, Range.STRUCTURE_FREQUENCY),
+                percentRange(given, Range.ABSORBER_FREQUENCY), percentRange(given, Range.ABSORBER_DAMPING),
+                given.basis());
         OptionalDouble target = r.target() == null ? OptionalDouble.empty()
                 : OptionalDouble.of(r.target().positiveSi("robustness.target.value"));
         ToleranceSet set = new ToleranceSet(tolerance(ToleranceKey.STRUCTURE_MASS, r),
@@ -209,6 +222,21 @@ public record Project(String name, String notes, StructureInput structure, Distu
                 tolerance(ToleranceKey.ABSORBER_STIFFNESS, r), tolerance(ToleranceKey.ABSORBER_DAMPING, r));
         return new RobustnessSettings(ranges, target, set,
                 r.samples() == 0 ? d.samples() : r.samples(), r.seed());
+    }
+
+    /** A range in percent as stated, checked, as a fraction; empty when not stated. */
+    private static OptionalDouble percentRange(RobustnessInput.Ranges given, Range range) {
+        OptionalDouble percent = given.percent(range);
+        if (percent.isEmpty()) {
+            return percent;
+        }
+        double p = percent.getAsDouble();
+        double max = RobustnessInput.Ranges.maxPercent(range);
+        if (!(p >= 0 && p <= max)) {
+            throw new InvalidInputException("robustness." + RobustnessInput.Ranges.key(range), Checks.show(p),
+                    "percent each way, from 0 to " + Checks.show(max));
+        }
+        return OptionalDouble.of(p / 100);
     }
 
     private static Tolerance tolerance(ToleranceKey key, RobustnessInput r) {

@@ -11,6 +11,8 @@ import org.counterpoise.core.design.DesignStudy;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.model.ExcitationKind;
 import org.counterpoise.core.model.Spectrum;
+import org.counterpoise.core.robust.ToleranceRanges.FrequencyBasis;
+import org.counterpoise.core.robust.ToleranceRanges.Range;
 import org.counterpoise.core.units.SpectralDensityUnit;
 import org.counterpoise.core.response.ResponseKind;
 import org.counterpoise.core.units.Dimension;
@@ -70,22 +72,14 @@ public final class ProjectReader {
         JsonElement root = StrictJson.parse(fileName, text);
         List<String> unknown = JsonFields.newUnknownList();
         JsonFields top = JsonFields.root(root, unknown, fileName);
-        double versionNumber = top.number("format_version");
-        if (versionNumber != Project.FORMAT_VERSION) {
-            throw new InvalidInputException("format_version", top.shown("format_version"),
-                    versionNumber == Math.rint(versionNumber) && versionNumber > Project.FORMAT_VERSION
-                            ? "this file was written by a newer Counterpoise; this version reads format_version "
-                                    + Project.FORMAT_VERSION
-                            : "a whole number; this version of Counterpoise reads format_version "
-                                    + Project.FORMAT_VERSION);
-        }
+        int version = formatVersion(top);
         String name = top.text("name", "Untitled");
         String notes = top.text("notes", "");
         ProjectIdentity identity = new ProjectIdentity(top.text("revision", ""), top.text("engineer", ""),
                 top.text("client", ""), top.text("date", ""));
         StructureInput structure = structure(top.object("structure"));
         DisturbanceInput disturbance = disturbance(top.object("disturbance"));
-        AbsorberInput absorber = absorber(top.object("absorber"));
+        AbsorberInput absorber = absorber(top.object("absorber"), version);
         JsonFields robust = top.optionalObject("robustness");
         RobustnessInput robustness = robust == null ? null : robustness(robust, absorber.response());
         top.finish();
@@ -102,9 +96,35 @@ public final class ProjectReader {
         return read(file).project().toStudy();
     }
 
+    /**
+     * The file's format version: {@link Project#OLDEST_FORMAT_VERSION} to {@link Project#FORMAT_VERSION}.
+     * An older version is migrated while it is read (where a version changed the meaning of an
+     * absent field, the reader asks {@link Project#defaultMethod}); a newer one is refused, since
+     * this build cannot know what its fields mean.
+     */
+    private static int formatVersion(JsonFields top) {
+        double v = top.number("format_version");
+        String reads = "this version of Counterpoise reads format_version " + Project.OLDEST_FORMAT_VERSION
+                + " to " + Project.FORMAT_VERSION;
+        if (v != Math.rint(v) || v < Project.OLDEST_FORMAT_VERSION) {
+            throw new InvalidInputException("format_version", top.shown("format_version"), "a whole number; " + reads);
+        }
+        if (v > Project.FORMAT_VERSION) {
+            throw new InvalidInputException("format_version", top.shown("format_version"),
+                    "this file was written by a newer Counterpoise; " + reads);
+        }
+        return (int) v;
+    }
+
     private static RobustnessInput robustness(JsonFields r, ResponseKind response) {
-        double structure = mistuningPercent(r, "structure_mistuning", "structure_detuning");
-        double absorber = mistuningPercent(r, "absorber_mistuning", "absorber_detuning");
+        OptionalDouble[] ranges = new OptionalDouble[Range.values().length];
+        for (Range range : Range.values()) {
+            ranges[range.ordinal()] = rangePercent(r, range);
+        }
+        String basisText = r.text(RobustnessInput.Ranges.BASIS_KEY, Ids.of(FrequencyBasis.NOT_STATED));
+        FrequencyBasis basis = Ids.parse(FrequencyBasis.class, basisText).orElseThrow(() -> new InvalidInputException(
+                r.pathOf(RobustnessInput.Ranges.BASIS_KEY), "\"" + PlainText.quote(basisText) + "\"",
+                "one of " + Ids.list(FrequencyBasis.values())));
         QuantityInput target = r.optionalQuantity("target", response.dimension());
         double samples = r.number("samples", 0);
         if (samples != Math.rint(samples) || samples < 0 || samples > 1_000_000) {
@@ -130,21 +150,26 @@ public final class ProjectReader {
             t.finish();
         }
         r.finish();
-        return new RobustnessInput(structure, absorber, target, (int) samples, (long) seed, tol[0], tol[1], tol[2],
+        return new RobustnessInput(new RobustnessInput.Ranges(ranges[Range.STRUCTURE_FREQUENCY.ordinal()],
+                ranges[Range.ABSORBER_FREQUENCY.ordinal()], ranges[Range.ABSORBER_DAMPING.ordinal()], basis), target,
+                (int) samples, (long) seed, tol[0], tol[1], tol[2],
                 tol[3], tol[4]);
     }
 
     /**
-     * An expected mistuning in percent, or NaN when absent. Files written before the vocabulary was
-     * settled (docs/glossary.md) call it {@code *_detuning}; that older key is still read as the new
-     * one (and written back under the new one), and a file may not give both.
+     * A range in percent, empty when absent. Files written before the vocabulary was settled
+     * (docs/glossary.md) call the frequency ranges {@code *_detuning}; that older key is still read
+     * as the new one (and written back under the new one), and a file may not give both.
      */
-    private static double mistuningPercent(JsonFields r, String key, String olderKey) {
-        if (r.has(key) && r.has(olderKey)) {
+    private static OptionalDouble rangePercent(JsonFields r, Range range) {
+        String key = RobustnessInput.Ranges.key(range);
+        String olderKey = RobustnessInput.Ranges.olderKey(range).orElse(key);
+        if (!olderKey.equals(key) && r.has(key) && r.has(olderKey)) {
             throw new InvalidInputException(r.pathOf(olderKey), r.shown(olderKey),
                     "give only " + r.pathOf(key) + " (" + olderKey + " is its older name)");
         }
-        return r.number(r.has(olderKey) ? olderKey : key, Double.NaN);
+        String given = r.has(olderKey) ? olderKey : key;
+        return r.has(given) ? OptionalDouble.of(r.number(given)) : OptionalDouble.empty();
     }
 
     private static StructureInput structure(JsonFields s) {
@@ -242,12 +267,17 @@ public final class ProjectReader {
         return o.has(key) ? OptionalDouble.of(o.number(key)) : OptionalDouble.empty();
     }
 
-    private static AbsorberInput absorber(JsonFields a) {
+    /**
+     * @param a the absorber object
+     * @param version the file's format version: an absent method means what that version said
+     *     ({@link Project#defaultMethod})
+     */
+    private static AbsorberInput absorber(JsonFields a, int version) {
         OptionalDouble ratio = a.has("mass_ratio") ? OptionalDouble.of(
                 PhysicalRange.MASS_RATIO.check(a.pathOf("mass_ratio"), a.number("mass_ratio"), null))
                 : OptionalDouble.empty();
         QuantityInput mass = a.optionalQuantity("mass", Dimension.MASS);
-        String methodText = a.text("method", DesignMethod.EQUAL_PEAK.id());
+        String methodText = a.text("method", Project.defaultMethod(version).id());
         DesignMethod method = DesignMethod.byId(methodText).orElseThrow(() -> new InvalidInputException(
                 a.pathOf("method"), "\"" + PlainText.quote(methodText) + "\"", "one of " + DesignMethod.ids()));
         String responseText = a.text("response", Ids.of(ResponseKind.DISPLACEMENT));

@@ -6,6 +6,8 @@ import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.util.OptionalDouble;
+import org.counterpoise.core.robust.ToleranceRanges.FrequencyBasis;
+import org.counterpoise.core.robust.ToleranceRanges.Range;
 import org.counterpoise.io.AtomicFiles;
 
 /** Writes a project file in the current format, safely: a temporary file, then an atomic rename. */
@@ -127,8 +129,12 @@ public final class ProjectWriter {
 
     private static JsonObject robustness(RobustnessInput r) {
         JsonObject o = new JsonObject();
-        putNumber(o, "structure_mistuning", r.structureMistuningPercent());
-        putNumber(o, "absorber_mistuning", r.absorberMistuningPercent());
+        for (Range range : Range.values()) {
+            putNumber(o, RobustnessInput.Ranges.key(range), r.ranges().percent(range));
+        }
+        if (r.ranges().basis() != FrequencyBasis.NOT_STATED) {
+            o.addProperty(RobustnessInput.Ranges.BASIS_KEY, Ids.of(r.ranges().basis()));
+        }
         put(o, "target", r.target());
         if (r.samples() > 0) {
             o.addProperty("samples", r.samples());
@@ -158,6 +164,7 @@ public final class ProjectWriter {
     }
 
     private static void putNumber(JsonObject o, String key, double v) {
+        // a tolerance's percent, NaN when it is given as an absolute amount
         if (!Double.isNaN(v)) {
             o.addProperty(key, v);
         }

@@ -276,6 +276,7 @@ public final class DesignContent {
                 new Tolerance(result.absorberTolerance(), 1), TOLERANCE_SEARCH, "");
         add(ReportKey.TOLERATED_SPRING_RATE, "absorber spring rate may be off by", "",
                 new Tolerance(result.absorberTolerance(), 2), TOLERANCE_SEARCH, "");
+        rows.addAll(ToleranceRangeRows.of(study.robustness().ranges()));
         end(SectionId.TOLERANCE, "Tolerance to mistuning");
     }
 

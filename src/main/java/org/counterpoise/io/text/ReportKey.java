@@ -53,9 +53,14 @@ public enum ReportKey {
             "tolerated_absorber_frequency_factor_high", "tolerated_absorber_frequency_basis"),
     TOLERANCE_ALLOWANCE("tolerance_allowance"),
 
+    // The ranges the design must hold over (design and robustness JSON): each with "stated" or
+    // "default" (common practice, no source) under its _origin key.
+    STRUCTURE_MISTUNING("structure_mistuning_range", "structure_mistuning_range_origin"),
+    STRUCTURE_FREQUENCY_BASIS("structure_frequency_basis"),
+    ABSORBER_MISTUNING("absorber_mistuning_range", "absorber_mistuning_range_origin"),
+    ABSORBER_DAMPING_RANGE("absorber_damping_range", "absorber_damping_range_origin"),
+
     // The robustness study (robustness --json; RESPONSE above names its response too).
-    STRUCTURE_MISTUNING("structure_mistuning_range"),
-    ABSORBER_MISTUNING("absorber_mistuning_range"),
     TARGET("target"),
     NOMINAL_PEAK("nominal_peak"),
     WORST_CASE_PEAK("worst_case_peak"),

@@ -64,6 +64,20 @@ public sealed interface ReportValue {
     }
 
     /**
+     * A range the design must hold over, +/- a fraction, and whether the project stated it or it took
+     * its default (common practice, no source); the JSON writes the fraction and "stated" or "default".
+     * @param fraction e.g. 0.05 for +/-5 %
+     * @param figures significant figures of the percentage
+     * @param stated true when the project stated it
+     */
+    record PlusMinus(double fraction, int figures, boolean stated) implements ReportValue {
+        /** @return "stated" or "default": the JSON's word for where it came from */
+        public String origin() {
+            return stated ? "stated" : "default";
+        }
+    }
+
+    /**
      * Two values of one dimension, one per JSON key.
      * @param first before, or the low end
      * @param second after, or the high end

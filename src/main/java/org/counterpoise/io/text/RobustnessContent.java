@@ -13,7 +13,6 @@ import org.counterpoise.io.text.ReportSection.SectionId;
 import org.counterpoise.io.text.ReportValue.Factor;
 import org.counterpoise.io.text.ReportValue.Pair;
 import org.counterpoise.io.text.ReportValue.PairKind;
-import org.counterpoise.io.text.ReportValue.Percent;
 import org.counterpoise.io.text.ReportValue.Tolerance;
 import org.counterpoise.io.text.ReportValue.Words;
 
@@ -44,10 +43,7 @@ public final class RobustnessContent {
                 + QuantityFormat.number(design.tuning().dampingRatio(), 4), List.of()), ""));
         study.add(row(ReportKey.RESPONSE, "response", "", new Words(k.label() + ", worst in the forcing band",
                 List.of(Ids.of(k), d.siSymbol())), ""));
-        study.add(row(ReportKey.STRUCTURE_MISTUNING, "expected structure mistuning (+/-)", "",
-                new Percent(r.settings().structureRange(), 3), "project"));
-        study.add(row(ReportKey.ABSORBER_MISTUNING, "expected absorber mistuning (+/-)", "",
-                new Percent(r.settings().absorberRange(), 3), "project"));
+        study.addAll(ToleranceRangeRows.of(r.settings().ranges()));
         sections.add(new ReportSection(SectionId.ROBUSTNESS_STUDY, "Study", study));
 
         WorstCase.Point w = r.worstCase();

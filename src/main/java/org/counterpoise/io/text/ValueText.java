@@ -14,6 +14,7 @@ import org.counterpoise.io.text.ReportValue.Pair;
 import org.counterpoise.io.text.ReportValue.PairKind;
 import org.counterpoise.io.text.ReportValue.PeakAt;
 import org.counterpoise.io.text.ReportValue.Percent;
+import org.counterpoise.io.text.ReportValue.PlusMinus;
 import org.counterpoise.io.text.ReportValue.Quantity;
 import org.counterpoise.io.text.ReportValue.Reduction;
 import org.counterpoise.io.text.ReportValue.Series;
@@ -63,6 +64,8 @@ public final class ValueText {
             return new Cells(QuantityFormat.number(l.value(), l.figures()), l.unit(), false);
         } else if (v instanceof Percent p) {
             return new Cells(QuantityFormat.number(100 * p.fraction(), p.figures()), "%", false);
+        } else if (v instanceof PlusMinus p) {
+            return new Cells(plusMinus(p), "", true);
         } else if (v instanceof Pair p) {
             return pairCells(p);
         } else if (v instanceof Series s) {
@@ -83,6 +86,12 @@ public final class ValueText {
             return cells(p.peak());
         }
         throw new IllegalStateException("bug: no table cells for " + v);
+    }
+
+    /** A range in words: "+/-5 %", and for a default "+/-5 % (default: common practice, no source)". */
+    private static String plusMinus(PlusMinus p) {
+        return "+/-" + QuantityFormat.number(100 * p.fraction(), p.figures()) + " %"
+                + (p.stated() ? "" : " (default: " + ToleranceRangeRows.DEFAULT_SOURCE + ")");
     }
 
     private static Cells pairCells(Pair p) {
@@ -113,6 +122,8 @@ public final class ValueText {
             return QuantityFormat.number(l.value(), l.figures()) + " " + l.unit();
         } else if (v instanceof Percent p) {
             return percent(p.fraction(), p.figures());
+        } else if (v instanceof PlusMinus p) {
+            return plusMinus(p);
         } else if (v instanceof Pair p) {
             return inlinePair(p);
         } else if (v instanceof Series s) {

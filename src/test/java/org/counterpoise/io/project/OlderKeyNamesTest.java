@@ -30,8 +30,8 @@ class OlderKeyNamesTest {
         LoadedProject loaded = ProjectReader.read(KEPT_V1_FILE);
         assertEquals(0, loaded.unknownFields().size(), loaded.unknownFields().toString());
         RobustnessInput r = loaded.project().robustness();
-        assertEquals(8.0, r.structureMistuningPercent());
-        assertEquals(3.0, r.absorberMistuningPercent());
+        assertEquals(8.0, r.ranges().structurePercent().getAsDouble());
+        assertEquals(3.0, r.ranges().absorberPercent().getAsDouble());
         RobustnessSettings settings = loaded.project().toRobustness();
         assertEquals(0.08, settings.structureRange(), 1e-15);
         assertEquals(0.03, settings.absorberRange(), 1e-15);

@@ -140,6 +140,7 @@ class ReportContentTest {
         m.put(ReportKey.ABSORBER_FORCE, List.of(r.absorberForce().value()));
         r.rms().ifPresent(rms -> rms(m, rms));
         m.put(ReportKey.TOLERANCE_ALLOWANCE, List.of(DesignResult.TOLERANCE_ALLOWANCE));
+        ranges(m, r.study().robustness());
         m.put(ReportKey.TOLERATED_STRUCTURE_FREQUENCY, List.of(r.structureTolerance().low().orElse(Double.NaN),
                 r.structureTolerance().high().orElse(Double.NaN)));
         m.put(ReportKey.TOLERATED_ABSORBER_FREQUENCY, List.of(r.absorberTolerance().low().orElse(Double.NaN), r.absorberTolerance().high().orElse(Double.NaN)));
@@ -166,8 +167,7 @@ class ReportContentTest {
     /** The core figures of a robustness study's rows, from its result's own fields. */
     private static Map<ReportKey, List<Double>> core(DesignResult design, RobustnessResult r) {
         Map<ReportKey, List<Double>> m = new EnumMap<>(ReportKey.class);
-        m.put(ReportKey.STRUCTURE_MISTUNING, List.of(r.settings().structureRange()));
-        m.put(ReportKey.ABSORBER_MISTUNING, List.of(r.settings().absorberRange()));
+        ranges(m, r.settings());
         m.put(ReportKey.TARGET, List.of(r.settings().target().orElse(Double.NaN)));
         m.put(ReportKey.NOMINAL_PEAK, List.of(design.responseAfter().value()));
         m.put(ReportKey.WORST_CASE_PEAK, List.of(r.worstCase().peak()));
@@ -182,6 +182,13 @@ class ReportContentTest {
                 r.toleratedForTarget().map(t -> t.high().orElse(Double.NaN)).orElse(Double.NaN)));
         r.monteCarlo().result().ifPresent(c -> monteCarlo(m, c));
         return m;
+    }
+
+    /** The ranges the design holds over, from the settings' own fields. */
+    private static void ranges(Map<ReportKey, List<Double>> m, RobustnessSettings s) {
+        m.put(ReportKey.STRUCTURE_MISTUNING, List.of(s.structureRange()));
+        m.put(ReportKey.ABSORBER_MISTUNING, List.of(s.absorberRange()));
+        m.put(ReportKey.ABSORBER_DAMPING_RANGE, List.of(s.dampingRange()));
     }
 
     static Stream<Named<DesignResult>> presetDesigns() throws IOException {
@@ -246,6 +253,8 @@ class ReportContentTest {
         } else if (v instanceof Level l) {
             out.add(new Figure(l.value(), Dimension.RATIO));
         } else if (v instanceof Percent p) {
+            out.add(new Figure(p.fraction(), Dimension.RATIO));
+        } else if (v instanceof ReportValue.PlusMinus p) {
             out.add(new Figure(p.fraction(), Dimension.RATIO));
         } else if (v instanceof Pair p) {
             out.addAll(figures(p.first()));
@@ -352,6 +361,10 @@ class ReportContentTest {
                     assertEquals(w.ids().isEmpty() ? w.text() : w.ids().get(i), json.get(keys.get(i)).getAsString());
                 }
                 continue;
+            }
+            if (row.value() instanceof ReportValue.PlusMinus p) {
+                // a range the project did not state is marked as the default in the JSON
+                assertEquals(p.stated() ? "stated" : "default", json.get(keys.get(1)).getAsString(), keys.get(1));
             }
             List<Figure> figures = figures(row.value());
             if (row.value() instanceof Series) {

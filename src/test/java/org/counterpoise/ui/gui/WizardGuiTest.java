@@ -24,6 +24,7 @@ import javax.imageio.ImageIO;
 import javax.swing.JLabel;
 import javax.swing.JTextField;
 import javax.swing.SwingUtilities;
+import org.counterpoise.core.design.DesignMethod;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.Designer;
 import org.counterpoise.core.units.Unit;
@@ -215,8 +216,13 @@ class WizardGuiTest {
         @SuppressWarnings("unchecked")
         javax.swing.JComboBox<org.counterpoise.core.response.ResponseKind> response =
                 (javax.swing.JComboBox<org.counterpoise.core.response.ResponseKind>) find("absorber.response");
+        // A new project starts with the recommended method, which designs for any response; equal-peak is chosen here.
+        @SuppressWarnings("unchecked")
+        javax.swing.JComboBox<DesignMethod> method = (javax.swing.JComboBox<DesignMethod>) find("absorber.method");
+        assertEquals(DesignMethod.RECOMMENDED, onEdt(method::getSelectedItem), "a new project's method");
         onEdt(() -> {
             frame.showStep(2);
+            method.setSelectedItem(DesignMethod.EQUAL_PEAK);
             response.setSelectedItem(org.counterpoise.core.response.ResponseKind.VELOCITY);
             return null;
         });

@@ -1,5 +1,6 @@
 package org.counterpoise.ui.gui.document;
 
+import org.counterpoise.core.design.DesignMethod;
 import org.counterpoise.core.response.ResponseKind;
 import org.counterpoise.io.project.AbsorberInput;
 import org.counterpoise.io.project.DisturbanceInput;
@@ -50,13 +51,41 @@ public final class ProjectEdits {
     }
 
     /**
+     * An edit of the robustness step: target, Monte Carlo and manufacturing tolerances. The ranges
+     * the design must hold over are kept as the project has them: they are edited on the
+     * absorber-goal step ({@link #ranges}), so a view that has not yet shown a change of them never
+     * writes an older value back.
+     *
      * @param key the field edited
-     * @param r the robustness section as now shown (null for the defaults)
+     * @param r the robustness section as now shown (its ranges are ignored)
      * @return the edit
      */
     public static Edit robustness(String key, RobustnessInput r) {
         return new Edit(key, "robustness", p -> new Project(p.name(), p.notes(), p.structure(), p.disturbance(),
-                p.absorber(), r, p.identity()));
+                p.absorber(), r.withRanges(p.robustness() == null ? RobustnessInput.Ranges.NONE
+                        : p.robustness().ranges()), p.identity()));
+    }
+
+    /**
+     * The ranges the design must hold over, edited on the absorber-goal step: they live in the
+     * robustness section (the one place the file, the robustness step and the reports read them),
+     * which is created for them when the project had none and stays absent while nothing is stated.
+     *
+     * @param key the field edited
+     * @param ranges the ranges as now shown
+     * @return the edit
+     */
+    public static Edit ranges(String key, RobustnessInput.Ranges ranges) {
+        return new Edit(key, "tolerance ranges", p -> new Project(p.name(), p.notes(), p.structure(), p.disturbance(),
+                p.absorber(), withRanges(p.robustness(), ranges), p.identity()));
+    }
+
+    private static RobustnessInput withRanges(RobustnessInput r, RobustnessInput.Ranges ranges) {
+        if (r != null) {
+            return r.withRanges(ranges);
+        }
+        // samples 0 and seed 1 are what a section that names neither means (docs/project-file.md)
+        return ranges.isEmpty() ? null : new RobustnessInput(ranges, null, 0, 1, null, null, null, null, null);
     }
 
     /**
@@ -73,12 +102,18 @@ public final class ProjectEdits {
 
     /**
      * A new project: the numbers of a template to start from (an invented scenario), but none of
-     * its name, notes or identity, which belong to the scenario and not to the user's project.
+     * its name, notes or identity, which belong to the scenario and not to the user's project; and
+     * the recommended design method ({@link DesignMethod#RECOMMENDED}, issue 12), whatever the
+     * scenario's was.
      * @param template the scenario to start from
      * @return an untitled project
      */
     public static Project untitled(Project template) {
-        return new Project(Project.UNTITLED, "", template.structure(), template.disturbance(), template.absorber(),
+        AbsorberInput a = template.absorber();
+        AbsorberInput recommended = new AbsorberInput(a.massRatio(), a.mass(), DesignMethod.RECOMMENDED, a.response(),
+                a.hangsVertically(), a.strokeMargin(), a.target(), a.maxMassRatio(), a.strokeLimit(),
+                a.fixedDampingRatio(), a.fixedTuningRatio());
+        return new Project(Project.UNTITLED, "", template.structure(), template.disturbance(), recommended,
                 template.robustness(), ProjectIdentity.EMPTY);
     }
 
@@ -97,9 +132,7 @@ public final class ProjectEdits {
             return new Consistent(p, null);
         }
         QuantityInput old = r.target();
-        RobustnessInput cleared = new RobustnessInput(r.structureMistuningPercent(), r.absorberMistuningPercent(), null,
-                r.samples(), r.seed(), r.structureMass(), r.structureStiffness(), r.absorberMass(),
-                r.absorberStiffness(), r.absorberDamping());
+        RobustnessInput cleared = r.withTarget(null);
         String note = "The robustness target (" + QuantityFormat.number(old.value(), 4) + " " + old.unit().symbol()
                 + ") was cleared: the response that matters is now the " + response.label()
                 + ". Give a new target on the Robustness step.";

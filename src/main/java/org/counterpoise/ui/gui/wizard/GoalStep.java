@@ -4,6 +4,7 @@ import java.awt.BorderLayout;
 import java.awt.Component;
 import java.math.BigDecimal;
 import java.math.MathContext;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.OptionalDouble;
 import javax.swing.DefaultListCellRenderer;
@@ -73,6 +74,8 @@ final class GoalStep extends Step {
         methodNote.setName("absorber.methodNote");
         methodNote.setForeground(Themes.problemColour());
     }
+    /** The ranges the design must hold over (issue 12: stated with the goal, not only later). */
+    private final ToleranceRangesForm ranges = new ToleranceRangesForm();
     private final ChartHost massChart = new ChartHost("chart.massRatio");
     private final JComponent page;
     private SizingContext sizingContext = new SizingContext() {
@@ -115,7 +118,8 @@ final class GoalStep extends Step {
         });
         // The longest method description would make the form wider than a small screen; the open list shows it whole.
         var methodSize = method.getPreferredSize();
-        method.setPreferredSize(Sizes.of(Math.min(methodSize.width, 460), methodSize.height));
+        // 420 leaves room for the tolerance ranges beside the form at 1366 x 768.
+        method.setPreferredSize(Sizes.of(Math.min(methodSize.width, 420), methodSize.height));
         Form form = new Form();
         form.heading("The absorber you can fit");
         form.row("Size given as", 'z', sizing,
@@ -132,11 +136,17 @@ final class GoalStep extends Step {
         form.row("Fixed tuning ratio f", 'u', fixedTuning, "Exact-peak: empty to optimise, or the ratio to use");
         form.derived("", methodNote);
         form.end();
+        Form rangesForm = new Form();
+        ranges.addTo(rangesForm);
+        rangesForm.end();
+        JPanel forms = new JPanel(new BorderLayout());
+        forms.add(form, BorderLayout.WEST);
+        forms.add(rangesForm, BorderLayout.CENTER);
         JPanel chartPanel = new JPanel(new BorderLayout());
         JLabel caption = new JLabel("  Least peak an optimally tuned absorber can reach, against its mass ratio");
         chartPanel.add(caption, BorderLayout.NORTH);
         chartPanel.add(massChart, BorderLayout.CENTER);
-        JScrollPane formScroll = new JScrollPane(form);
+        JScrollPane formScroll = new JScrollPane(forms);
         formScroll.setBorder(null);
         JSplitPane split = new JSplitPane(JSplitPane.VERTICAL_SPLIT, formScroll, chartPanel);
         split.setResizeWeight(0.55);
@@ -167,7 +177,16 @@ final class GoalStep extends Step {
         for (QuantityField f : List.of(size, margin, strokeLimit, maxMassRatio, fixedDamping, fixedTuning)) {
             f.onChange(() -> edited(f.fieldId()));
         }
+        ranges.fieldsByKey().forEach(this::own);
+        for (QuantityField f : ranges.fields()) {
+            f.onChange(() -> editedRanges(f.fieldId()));
+        }
+        ranges.basis().addActionListener(e -> editedRanges(ranges.basis().getName()));
         convertOnSizingChange();
+    }
+
+    private void editedRanges(String key) {
+        commit(() -> ProjectEdits.ranges(key, ranges.ranges()));
     }
 
     /**
@@ -206,13 +225,16 @@ final class GoalStep extends Step {
             targetNote = null;
         }
         load(p.absorber());
+        ranges.show(p);
         targetResponse = p.absorber().response();
     }
 
     @Override
     boolean fieldsValid() {
         boolean ok = check(size) & check(margin);
-        for (QuantityField f : List.of(strokeLimit, maxMassRatio, fixedDamping, fixedTuning)) {
+        List<QuantityField> optional = new ArrayList<>(List.of(strokeLimit, maxMassRatio, fixedDamping, fixedTuning));
+        optional.addAll(ranges.fields());
+        for (QuantityField f : optional) {
             if (!f.textField().getText().isBlank()) {
                 ok &= check(f);
             }

@@ -54,10 +54,8 @@ final class RobustnessStep extends Step {
             List.of(Unit.PERCENT, Unit.KILONEWTON_PER_METRE, Unit.NEWTON_PER_METRE, Unit.NEWTON_PER_MILLIMETRE),
             List.of(Unit.PERCENT, Unit.NEWTON_SECOND_PER_METRE, Unit.KILONEWTON_SECOND_PER_METRE));
 
-    private final QuantityField structureRange = new QuantityField("robustness.structure_mistuning",
-            "How far the structure's natural frequency may be off, in percent each way", UnitChoices.of(Dimension.RATIO));
-    private final QuantityField absorberRange = new QuantityField("robustness.absorber_mistuning",
-            "How far the absorber's natural frequency may be off, in percent each way", UnitChoices.of(Dimension.RATIO));
+    /** The ranges the design must hold over, as the absorber-goal step states them (shown, not edited, here). */
+    private final JLabel ranges = new JLabel(" ");
     private final QuantityField target = new QuantityField("robustness.target",
             "Largest acceptable peak of the response that matters; empty for none", UnitChoices.of(Dimension.LENGTH));
     private final QuantityField samples = new QuantityField("robustness.samples",
@@ -76,9 +74,10 @@ final class RobustnessStep extends Step {
 
     RobustnessStep() {
         Form form = new Form();
-        form.heading("Expected mistuning");
-        form.row("Structure \u00b1 %", 's', structureRange, "Structure natural frequency uncertainty");
-        form.row("Absorber \u00b1 %", 'a', absorberRange, "Absorber natural frequency tolerance");
+        form.heading("Ranges the design must hold over");
+        ranges.setName("robustness.ranges");
+        form.derived("", ranges);
+        form.heading("Target and Monte Carlo");
         form.row("Target (optional)", 't', target, "Largest acceptable peak; the Monte Carlo counts the builds above it");
         form.row("Monte Carlo samples", 'm', samples, "Number of sampled builds");
         form.row("Random seed", 'e', seed, "The same seed repeats the same Monte Carlo");
@@ -140,13 +139,11 @@ final class RobustnessStep extends Step {
             }
         });
         page = p;
-        own("robustness.structure_mistuning", structureRange);
-        own("robustness.absorber_mistuning", absorberRange);
         own("robustness.target", target);
         own("robustness.samples", samples);
         own("robustness.seed", seed);
-        own("robustness", structureRange);
-        for (QuantityField f : List.of(structureRange, absorberRange, target, samples, seed)) {
+        own("robustness", target);
+        for (QuantityField f : List.of(target, samples, seed)) {
             f.onChange(() -> edited(f.fieldId()));
         }
     }
@@ -186,7 +183,8 @@ final class RobustnessStep extends Step {
                         : new RobustnessInput.ToleranceInput(id, Double.NaN, f.input());
             }
         }
-        return new RobustnessInput(structureRange.number(), absorberRange.number(),
+        // The ranges are the absorber-goal step's; the edit keeps the project's (ProjectEdits.robustness).
+        return new RobustnessInput(RobustnessInput.Ranges.NONE,
                 target.textField().getText().isBlank() ? null : target.input(), (int) n, (long) s, t[0], t[1], t[2],
                 t[3], t[4]);
     }
@@ -199,10 +197,7 @@ final class RobustnessStep extends Step {
         if (!targetUnits.contains(target.unit())) {
             target.setUnits(targetUnits);
         }
-        showValue(structureRange, r == null || Double.isNaN(r.structureMistuningPercent())
-                ? 100 * d.structureRange() : r.structureMistuningPercent(), Unit.RATIO);
-        showValue(absorberRange, r == null || Double.isNaN(r.absorberMistuningPercent())
-                ? 100 * d.absorberRange() : r.absorberMistuningPercent(), Unit.RATIO);
+        ranges.setText(ToleranceRangesForm.summary(p));
         showValue(target, r == null ? null : r.target());
         showValue(samples, r == null || r.samples() == 0 ? d.samples() : r.samples(), Unit.RATIO);
         showValue(seed, r == null ? d.seed() : r.seed(), Unit.RATIO);
@@ -229,7 +224,7 @@ final class RobustnessStep extends Step {
 
     @Override
     boolean fieldsValid() {
-        boolean ok = check(structureRange) & check(absorberRange) & check(samples) & check(seed);
+        boolean ok = check(samples) & check(seed);
         if (!target.textField().getText().isBlank()) {
             ok &= check(target);
         }

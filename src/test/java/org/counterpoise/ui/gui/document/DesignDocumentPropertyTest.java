@@ -237,8 +237,11 @@ class DesignDocumentPropertyTest {
                     // The robustness step offers the target in the units of the response now chosen.
                     QuantityInput target = t ? new QuantityInput(1, org.counterpoise.io.text.DisplayUnits.of(
                             p.absorber().response().dimension())) : null;
-                    return ProjectEdits.robustness("robustness.target", new RobustnessInput(s, a, target, n, 7, t1,
-                            null, null, t2, null)).change().apply(p);
+                    // The ranges are edited on the goal step, the rest on the robustness step.
+                    Project ranged = ProjectEdits.ranges("robustness.structure_mistuning",
+                            RobustnessInput.Ranges.ofFrequencies(s, a)).change().apply(p);
+                    return ProjectEdits.robustness("robustness.target", new RobustnessInput(RobustnessInput.Ranges.NONE,
+                            target, n, 7, t1, null, null, t2, null)).change().apply(ranged);
                 }));
     }
 
