@@ -1,6 +1,7 @@
 package org.counterpoise.bench;
 
 import java.util.List;
+import java.util.OptionalDouble;
 import java.util.concurrent.TimeUnit;
 import org.counterpoise.core.model.Absorber;
 import org.counterpoise.core.model.Excitation;
@@ -48,7 +49,7 @@ public class RobustnessBenchmark {
     /** @return 10 000 samples */
     @Benchmark
     public MonteCarloResult monteCarlo10k() {
-        return MonteCarlo.run(mistuning, absorber, spread, 10_000, 1L, 1e-4);
+        return MonteCarlo.run(mistuning, absorber, spread, 10_000, 1L, OptionalDouble.of(1e-4));
     }
 
     /** @return the robust design over +/-10 % structure mistuning */
