@@ -35,6 +35,9 @@ import org.knowm.xchart.style.markers.SeriesMarkers;
  * named in the chart's notes ({@link PlotRange}).
  */
 public final class RunUpCharts {
+    /** A steady state is drawn up to this multiple of the envelope's peak, and cut above it. */
+    static final double ENVELOPE_HEADROOM = 3.0;
+
     private RunUpCharts() {
     }
 
@@ -142,6 +145,14 @@ public final class RunUpCharts {
             return ChartStyle.emptyNote(c, text, theme);
         }
         double ceiling = top * 1.08;
+        // The envelope is what the chart is about: a steady state far above it (an undamped or very
+        // lightly damped resonance) is cut at three times the envelope's peak and its peak named in
+        // a note, so that it does not flatten the envelope to the axis.
+        double envelopeTop = PlotRange.top(typical, lines.stream().filter(l -> !l.steady()).map(Line::y)
+                .toArray(double[][]::new));
+        if (envelopeTop > 0) {
+            ceiling = Math.min(ceiling, ENVELOPE_HEADROOM * envelopeTop * 1.08);
+        }
         double xMax = 0;
         List<double[]> marks = new ArrayList<>();
         for (Line line : lines) {
@@ -150,10 +161,18 @@ public final class RunUpCharts {
                     xMax = Math.max(xMax, v);
                 }
             }
-            for (double at : PlotRange.unboundedAt(line.x(), line.y(), typical)) {
+            List<Double> unbounded = PlotRange.unboundedAt(line.x(), line.y(), typical);
+            for (double at : unbounded) {
                 marks.add(new double[] {at, ceiling});
                 ChartFactory.note(c, line.name() + ": unbounded at "
                         + QuantityFormat.number(at, QuantityFormat.FIGURES) + " " + speedUnit.symbol());
+            }
+            int highest = highest(line.y(), typical);
+            if (unbounded.isEmpty() && highest >= 0 && line.y()[highest] > ceiling) {
+                marks.add(new double[] {line.x()[highest], ceiling});
+                ChartFactory.note(c, line.name() + ": above the chart, peak "
+                        + QuantityFormat.format(unit.toSi(line.y()[highest]), unit) + " at "
+                        + QuantityFormat.number(line.x()[highest], QuantityFormat.FIGURES) + " " + speedUnit.symbol());
             }
             XYSeries s = c.addSeries(line.name(), line.x(), PlotRange.clip(line.y(), typical, 0.0, ceiling));
             s.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Line);
@@ -194,8 +213,20 @@ public final class RunUpCharts {
             c.addAnnotation(new AnnotationText(band[1] > band[0] ? "running speeds" : "running speed",
                     0.5 * (band[0] + band[1]), ceiling * 1.07, false));
         }
-        ChartStyle.notePanel(c, theme, Double.NaN);
+        // the notes' box sits at the left below the legend, where a run-up from rest is still quiet
+        ChartStyle.notePanel(c, theme, 0.3 * ceiling);
         return c;
+    }
+
+    /** @return the index of the largest value that is not unbounded, or -1 */
+    private static int highest(double[] y, double typical) {
+        int best = -1;
+        for (int i = 0; i < y.length; i++) {
+            if (!PlotRange.unbounded(y[i], typical) && (best < 0 || y[i] > y[best])) {
+                best = i;
+            }
+        }
+        return best;
     }
 
     private static String direction(RunUpReportData d) {

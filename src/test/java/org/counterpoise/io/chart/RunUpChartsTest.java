@@ -16,6 +16,8 @@ import org.counterpoise.core.progress.ProgressListener;
 import org.counterpoise.core.response.ResponseKind;
 import org.counterpoise.core.units.Unit;
 import org.counterpoise.io.project.ProjectReader;
+import org.counterpoise.io.text.DisplayUnits;
+import org.counterpoise.io.text.QuantityFormat;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.knowm.xchart.XYChart;
@@ -71,6 +73,26 @@ class RunUpChartsTest {
         assertTrue(ChartFactory.notes(c).stream().anyMatch(n -> n.startsWith("without absorber, steady state:"
                 + " unbounded at 852")), ChartFactory.notes(c).toString());
         assertTrue(c.getSeriesMap().containsKey(ChartFactory.UNBOUNDED_SERIES));
+    }
+
+    @Test
+    void aSteadyPeakFarAboveAFastEnvelopeIsCutAndNamed() throws Exception {
+        RunUpStudy.Result r = fan("presets/rooftop-fan-platform.json", 20_000);
+        XYChart c = RunUpCharts.structure(r, Unit.REV_PER_MINUTE, ChartTheme.LIGHT, 720, 430);
+        assertDrawable(c);
+        var peak = r.data().comparison().steadyWithoutAbsorber().get(ResponseKind.DISPLACEMENT);
+        double envelope = r.data().comparison().withoutAbsorber().peak(ResponseKind.DISPLACEMENT).orElseThrow().value();
+        assertTrue(peak.value() > RunUpCharts.ENVELOPE_HEADROOM * envelope * 1.08, "a fast passage: the case applies");
+        String expected = "without absorber, steady state: above the chart, peak "
+                + QuantityFormat.format(peak.value(), DisplayUnits.of(ResponseKind.DISPLACEMENT.dimension())) + " at ";
+        assertTrue(ChartFactory.notes(c).stream().anyMatch(n -> n.startsWith(expected)), ChartFactory.notes(c)
+                + " should name " + expected);
+        double axisTop = c.getStyler().getYAxisMax();
+        for (XYSeries s : c.getSeriesMap().values()) {
+            for (double v : s.getYData()) {
+                assertTrue(v <= axisTop, s.getName() + " stays on the chart");
+            }
+        }
     }
 
     private static double[] max(XYSeries s) {
