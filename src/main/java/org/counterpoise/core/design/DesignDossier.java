@@ -11,7 +11,7 @@ import org.counterpoise.core.robust.MonteCarloOutcome;
 
 /**
  * Everything computed about one design study, each part computed once: the design, its curves, the
- * tolerance Monte Carlo (or why it was not run) and the robustness study. Front ends and writers
+ * tolerance Monte Carlo (or why it was not run), the robustness study and the comparison of methods. Front ends and writers
  * ask the dossier and render what it gives; none of them computes an analysis itself.
  *
  * <p>A part is computed when it is first asked for, on the asking thread, and kept. Two threads
@@ -30,6 +30,7 @@ public final class DesignDossier {
     private final Part<DesignCurves> curves = new Part<>("the design's curves");
     private final Part<MonteCarloOutcome> monteCarlo = new Part<>("the Monte Carlo run");
     private final Part<RobustnessResult> robustness = new Part<>("the robustness study");
+    private final Part<MethodComparison> comparison = new Part<>("the comparison of methods");
 
     /**
      * The analyses a dossier runs. The core's own are {@link #CORE}; tests substitute counting ones
@@ -74,6 +75,15 @@ public final class DesignDossier {
         default RobustnessResult robustness(DesignResult design, MonteCarloOutcome monteCarlo,
                 ProgressListener listener) {
             return RobustnessAnalysis.run(design, design.study().robustness(), monteCarlo, listener);
+        }
+
+        /**
+         * @param design a design
+         * @param listener progress and cancellation
+         * @return the comparison of the design methods for its study
+         */
+        default MethodComparison comparison(DesignResult design, ProgressListener listener) {
+            return MethodComparison.of(design, listener);
         }
     }
 
@@ -138,6 +148,17 @@ public final class DesignDossier {
             MonteCarloOutcome mc = monteCarlo(listener.part(0.0, 0.2));
             return computations.robustness(d, mc, listener.part(0.2, 0.8));
         });
+    }
+
+    /**
+     * @param listener progress and cancellation, for this request
+     * @return the comparison of the design methods (computed on first request; it designs the study
+     *     by every method, so it is not for the event thread)
+     * @throws CoreException with key {@link Messages#CANCELLED} when cancelled; nothing is kept
+     */
+    public MethodComparison comparison(ProgressListener listener) {
+        DesignResult d = design();
+        return comparison.get(() -> computations.comparison(d, listener));
     }
 
     /** One part: computed once under its lock; a failure keeps nothing. */

@@ -45,6 +45,8 @@ import org.counterpoise.core.response.ResponsePeak;
  * @param warnings non-fatal findings
  * @param activeConstraint the designer's constraint that holds an exact-peak optimum back
  *     ({@code NONE} for every other method); the words are in {@code io.text.MethodNoteText}
+ * @param runUpStroke the stroke during run-up as the comparison of methods and the warnings use
+ *     it: transient at the project's run-up rate when it states one, else {@code strokeRunUp}
  */
 public record DesignResult(DesignStudy study, String methodSource, String methodNote, Tuning tuning, Absorber absorber,
         OptionalDouble staticDeflection, ResponsePeak responseBefore, ResponsePeak responseAfter,
@@ -52,7 +54,7 @@ public record DesignResult(DesignStudy study, String methodSource, String method
         ResponsePeak strokeInBand, ResponsePeak strokeRunUp, double clearance, ResponsePeak springForce,
         ResponsePeak damperForce, ResponsePeak absorberForce, double[] coupledNaturalFrequencies,
         DetuningAlternative stiffnessDetuning, DetuningAlternative massDetuning, MistuningRange structureTolerance, MistuningRange absorberTolerance,
-        List<Warning> warnings, ActiveConstraint activeConstraint) {
+        List<Warning> warnings, ActiveConstraint activeConstraint, RunUpStroke runUpStroke) {
 
     /** The rise of the peak response that defines the tolerated mistuning (a design choice: 10 %). */
     public static final double TOLERANCE_ALLOWANCE = 0.10;

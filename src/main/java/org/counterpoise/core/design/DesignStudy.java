@@ -115,6 +115,26 @@ public record DesignStudy(String name, Structure structure, Excitation excitatio
                 constraints, settings);
     }
 
+    /**
+     * @param other another design method
+     * @return this study designed by that method (validated as any study: a method that does not
+     *     take this study's sizing or constraints is refused with an {@link InvalidInputException})
+     */
+    public DesignStudy withMethod(DesignMethod other) {
+        return new DesignStudy(name, structure, excitation, response, sizing, other, hangsVertically, strokeMargin,
+                constraints, robustness);
+    }
+
+    /**
+     * @param otherSizing another sizing
+     * @param otherConstraints other constraints
+     * @return this study with them
+     */
+    public DesignStudy withSizing(AbsorberSizing otherSizing, DesignConstraints otherConstraints) {
+        return new DesignStudy(name, structure, excitation, response, otherSizing, method, hangsVertically,
+                strokeMargin, otherConstraints, robustness);
+    }
+
     /** Common-practice clearance margin over the computed stroke (no published source). */
     public static final double DEFAULT_STROKE_MARGIN = 1.5;
 }

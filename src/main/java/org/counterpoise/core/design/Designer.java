@@ -11,6 +11,7 @@ import org.counterpoise.core.error.NotFoundException;
 import org.counterpoise.core.error.Warning;
 import org.counterpoise.core.error.WarningKind;
 import org.counterpoise.core.error.WarningParameter.PeakBand;
+import org.counterpoise.core.robust.ToleranceRanges;
 import org.counterpoise.core.model.Absorber;
 import org.counterpoise.core.model.Excitation;
 import org.counterpoise.core.model.ExcitationKind;
@@ -35,6 +36,7 @@ import org.counterpoise.core.optim.VarianceOptimiser;
 import org.counterpoise.core.optim.VarianceOptimum;
 import org.counterpoise.core.response.ResponseScale;
 import org.counterpoise.core.robust.Mistuning;
+import org.counterpoise.core.robust.MistuningRange;
 import org.counterpoise.core.robust.RobustDesign;
 import org.counterpoise.core.tuning.Assumption;
 import org.counterpoise.core.tuning.ClosedForm;
@@ -51,6 +53,20 @@ import org.counterpoise.core.units.Gravity;
 public final class Designer {
     private static final double HEAVY_MASS_RATIO = 0.25;
     private static final double LIGHT_MASS_RATIO = 0.005;
+
+    /**
+     * The least absorber damping ratio a practical damper gives: 0.01 (1 % of critical). Common
+     * practice, no source: a damper fitted to an absorber (viscous, eddy-current or elastomer) adds
+     * at least about 1 to 2 % of critical damping once its seals, its own friction and the
+     * stiffness of its mountings are counted, and an absorber with no damper at all gets a
+     * fraction of a percent from its joints and fixings that nobody can specify or hold. The lower
+     * end of that span is taken, so the warning fires only where a design clearly asks for less
+     * than any damper will give.
+     */
+    static final double PRACTICAL_DAMPING_RATIO = 0.01;
+
+    /** The run-up stroke over the in-band stroke above which the design warns (issue 12: twice). */
+    static final double RUN_UP_STROKE_RATIO = 2.0;
 
     private Designer() {
     }
@@ -101,18 +117,21 @@ public final class Designer {
         DetuningAlternative massDetuning = noTarget ? none : StructureDetuning.searchMass(structure,
                 excitation.kind(), excitation.amplitude(), band, kind, after.value());
 
+        RunUpStroke runUpStroke = RunUpStroke.of(study, tuning, strokeRunUp);
+        MistuningRange structureTolerance = ToleratedMistuning.ofStructure(structure, absorber, excitation, kind,
+                DesignResult.TOLERANCE_ALLOWANCE, DesignResult.TOLERANCE_SEARCH);
+        MistuningRange absorberTolerance = ToleratedMistuning.ofAbsorber(structure, absorber, excitation, kind,
+                DesignResult.TOLERANCE_ALLOWANCE, DesignResult.TOLERANCE_SEARCH);
         addWarnings(warnings, study, mu, tuning, before, after, strokeRunUp, coupled);
+        addWarnings(warnings, study, new Built(tuning, strokeInBand, runUpStroke, structureTolerance,
+                absorberTolerance));
         OptionalDouble sag = study.hangsVertically() ? OptionalDouble.of(
                 Gravity.STANDARD / (absorber.naturalFrequency() * absorber.naturalFrequency())) : OptionalDouble.empty();
         return new DesignResult(study, chosen.source(), chosen.note(), tuning, absorber, sag, before, after, motionBefore,
                 motionAfter, strokeInBand, strokeRunUp, clearance,
                 fitted.peakOver(ResponseKind.SPRING_FORCE, band), fitted.peakOver(ResponseKind.DAMPER_FORCE, band),
                 fitted.peakOver(ResponseKind.ABSORBER_FORCE, band), coupled, detuning, massDetuning,
-                ToleratedMistuning.ofStructure(structure, absorber, excitation, kind, DesignResult.TOLERANCE_ALLOWANCE,
-                        DesignResult.TOLERANCE_SEARCH),
-                ToleratedMistuning.ofAbsorber(structure, absorber, excitation, kind, DesignResult.TOLERANCE_ALLOWANCE,
-                        DesignResult.TOLERANCE_SEARCH),
-                warnings, active[0]);
+                structureTolerance, absorberTolerance, warnings, active[0], runUpStroke);
     }
 
     private static ClosedForm choose(DesignStudy study, List<Warning> warnings, ActiveConstraint[] active) {
@@ -299,6 +318,46 @@ public final class Designer {
         }
         if (tuning.dampingRatio() == 0.0 && !band.isSingle()) {
             warnings.add(Warning.of(WarningKind.NO_DAMPING));
+        }
+    }
+
+    /** What the issue-12 warnings look at: the built design's tuning, strokes and tolerated ranges. */
+    private record Built(Tuning tuning, ResponsePeak strokeInBand, RunUpStroke runUp, MistuningRange structure,
+            MistuningRange absorber) {
+    }
+
+    private static void addWarnings(List<Warning> warnings, DesignStudy study, Built d) {
+        ToleranceRanges stated = study.robustness().ranges();
+        narrower(warnings, WarningKind.STRUCTURE_TOLERANCE_NARROW, d.structure(), stated.structure());
+        narrower(warnings, WarningKind.ABSORBER_TOLERANCE_NARROW, d.absorber(), stated.absorber());
+        double zeta = d.tuning().dampingRatio();
+        if (zeta > 0.0 && zeta < PRACTICAL_DAMPING_RATIO) {
+            warnings.add(Warning.of(WarningKind.DAMPING_BELOW_PRACTICAL, zeta, PRACTICAL_DAMPING_RATIO));
+        }
+        ResponsePeak runUp = d.runUp().peak();
+        if (runUp.unbounded()) {
+            return; // UNBOUNDED_TRANSIT_STROKE says it
+        }
+        String basis = d.runUp().basis().name();
+        if (!d.strokeInBand().unbounded() && runUp.value() > RUN_UP_STROKE_RATIO * d.strokeInBand().value()) {
+            warnings.add(Warning.of(WarningKind.RUN_UP_STROKE_LARGE, runUp.value(), d.strokeInBand().value(), basis));
+        }
+        study.constraints().strokeLimit().ifPresent(limit -> {
+            if (runUp.value() > limit) {
+                warnings.add(Warning.of(WarningKind.RUN_UP_OVER_STROKE_LIMIT, runUp.value(), limit, basis));
+            }
+        });
+    }
+
+    /** Warns when a tolerated range (peak rising at most 10 %) ends inside the stated +/- range. */
+    private static void narrower(List<Warning> warnings, WarningKind kind, MistuningRange tolerated, double stated) {
+        if (!tolerated.defined() || stated <= 0.0) {
+            return;
+        }
+        double low = tolerated.low().orElse(1.0 - tolerated.searchLimit()) - 1.0;
+        double high = tolerated.high().orElse(1.0 + tolerated.searchLimit()) - 1.0;
+        if (low > -stated || high < stated) {
+            warnings.add(Warning.of(kind, low, high, stated));
         }
     }
 }

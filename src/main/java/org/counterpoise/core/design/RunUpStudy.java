@@ -27,9 +27,6 @@ import org.counterpoise.core.runup.SteadyCurves;
 public record RunUpStudy(DesignResult design, double harmonicOrder, double shaftRate, double finalShaftSpeed,
         boolean runDown) {
 
-    /** How far above the top running speed the ramp goes by default. */
-    public static final double DEFAULT_OVERSPEED = 1.25;
-
     /** Validates the numbers; the field names are those of the project file. */
     public RunUpStudy {
         Checks.positive("disturbance.harmonic_order", harmonicOrder);
@@ -38,7 +35,7 @@ public record RunUpStudy(DesignResult design, double harmonicOrder, double shaft
     }
 
     /**
-     * A run-up from rest to {@link #DEFAULT_OVERSPEED} times the top running speed.
+     * A run-up from rest to {@link SpeedRamp#DEFAULT_OVERSPEED} times the top running speed.
      * @param design the design
      * @param harmonicOrder forcing cycles per shaft revolution
      * @param shaftRate the shaft's angular acceleration, rad/s^2
@@ -51,10 +48,10 @@ public record RunUpStudy(DesignResult design, double harmonicOrder, double shaft
     /**
      * @param design the design
      * @param harmonicOrder forcing cycles per shaft revolution
-     * @return {@link #DEFAULT_OVERSPEED} times the top shaft speed of the band (or the single speed), rad/s
+     * @return {@link SpeedRamp#DEFAULT_OVERSPEED} times the top shaft speed of the band (or the single speed), rad/s
      */
     public static double defaultFinalShaftSpeed(DesignResult design, double harmonicOrder) {
-        return DEFAULT_OVERSPEED * topShaftSpeed(design, harmonicOrder);
+        return SpeedRamp.DEFAULT_OVERSPEED * topShaftSpeed(design, harmonicOrder);
     }
 
     /**

@@ -33,7 +33,21 @@ public enum WarningKind {
     /** The run-up stroke is unbounded (no absorber damping). */
     UNBOUNDED_TRANSIT_STROKE,
     /** The absorber has no damping and the band is not one frequency. */
-    NO_DAMPING;
+    NO_DAMPING,
+    /** The structure frequency range within which the peak rises by at most 10 % is narrower than the stated range. */
+    STRUCTURE_TOLERANCE_NARROW(WarningParameter.TOLERATED_LOW, WarningParameter.TOLERATED_HIGH,
+            WarningParameter.STATED_RANGE),
+    /** The same for the absorber's frequency. */
+    ABSORBER_TOLERANCE_NARROW(WarningParameter.TOLERATED_LOW, WarningParameter.TOLERATED_HIGH,
+            WarningParameter.STATED_RANGE),
+    /** The absorber damping ratio is below what a practical damper gives. */
+    DAMPING_BELOW_PRACTICAL(WarningParameter.ABSORBER_DAMPING_RATIO, WarningParameter.PRACTICAL_DAMPING_RATIO),
+    /** The stroke during run-up is more than twice the stroke in band. */
+    RUN_UP_STROKE_LARGE(WarningParameter.RUN_UP_STROKE, WarningParameter.IN_BAND_STROKE,
+            WarningParameter.RUN_UP_BASIS),
+    /** The stroke during run-up exceeds the stroke limit. */
+    RUN_UP_OVER_STROKE_LIMIT(WarningParameter.RUN_UP_STROKE, WarningParameter.STROKE_LIMIT,
+            WarningParameter.RUN_UP_BASIS);
 
     private final List<WarningParameter> parameters;
 

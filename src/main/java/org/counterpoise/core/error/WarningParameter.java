@@ -15,6 +15,24 @@ public enum WarningParameter {
     LOWER_NATURAL_FREQUENCY(false),
     /** The upper undamped natural frequency of the structure with the absorber, rad/s. */
     UPPER_NATURAL_FREQUENCY(false),
+    /** The low end of a tolerated frequency range, as a signed change (-0.005 for -0.5 %; non-dimensional). */
+    TOLERATED_LOW(false),
+    /** The high end of a tolerated frequency range, as a signed change (non-dimensional). */
+    TOLERATED_HIGH(false),
+    /** A stated (or default) tolerance range, +/- this fraction (non-dimensional). */
+    STATED_RANGE(false),
+    /** The absorber's damping ratio zeta_a (non-dimensional). */
+    ABSORBER_DAMPING_RATIO(false),
+    /** The least damping ratio a practical damper gives (non-dimensional). */
+    PRACTICAL_DAMPING_RATIO(false),
+    /** The absorber's peak stroke during run-up, m. */
+    RUN_UP_STROKE(false),
+    /** The absorber's peak stroke in the band, m. */
+    IN_BAND_STROKE(false),
+    /** The stroke limit the designer gave, m. */
+    STROKE_LIMIT(false),
+    /** Which run-up stroke figure (a {@code core.design.RunUpStroke.Basis} name; a token). */
+    RUN_UP_BASIS(true),
     /** The design method's id as files and the command line spell it (a token). */
     METHOD_ID(true),
     /** The band the exact-peak design minimises over for one forcing frequency (a {@link PeakBand} name). */

@@ -1,5 +1,6 @@
 package org.counterpoise.core.model;
 
+import java.util.OptionalDouble;
 import org.counterpoise.core.error.Checks;
 
 /**
@@ -11,8 +12,23 @@ import org.counterpoise.core.error.Checks;
  * @param amplitude amplitude in the SI unit of {@link ExcitationKind#amplitudeDimension()}
  * @param band forcing frequencies, rad/s
  * @param spectrum harmonic, or white noise with its PSD level
+ * @param runUpRate how fast the forcing frequency changes at start and stop, rad/s^2 (the shaft's
+ *     angular acceleration times the harmonic order), when the project states it; the design then
+ *     reports the transient stroke of a run-up at this rate
  */
-public record Excitation(ExcitationKind kind, double amplitude, FrequencyBand band, Spectrum spectrum) {
+public record Excitation(ExcitationKind kind, double amplitude, FrequencyBand band, Spectrum spectrum,
+        OptionalDouble runUpRate) {
+
+    /**
+     * A disturbance without a run-up rate.
+     * @param kind what drives the structure
+     * @param amplitude SI amplitude
+     * @param band forcing frequencies, rad/s
+     * @param spectrum harmonic, or white noise
+     */
+    public Excitation(ExcitationKind kind, double amplitude, FrequencyBand band, Spectrum spectrum) {
+        this(kind, amplitude, band, spectrum, OptionalDouble.empty());
+    }
 
     /**
      * A harmonic disturbance.
@@ -30,5 +46,15 @@ public record Excitation(ExcitationKind kind, double amplitude, FrequencyBand ba
         Checks.positive("disturbance.amplitude", amplitude);
         Checks.present("disturbance.frequency", band, "a frequency or a band");
         Checks.present("disturbance.spectrum", spectrum, "harmonic or white-noise");
+        Checks.present("disturbance.run_up_rate", runUpRate, "a run-up rate or none");
+        runUpRate.ifPresent(r -> Checks.positive("disturbance.run_up_rate", r));
+    }
+
+    /**
+     * @param forcingRate the forcing frequency's rate of change at start and stop, rad/s^2 (&gt; 0)
+     * @return this disturbance with that run-up rate
+     */
+    public Excitation withRunUpRate(double forcingRate) {
+        return new Excitation(kind, amplitude, band, spectrum, OptionalDouble.of(forcingRate));
     }
 }

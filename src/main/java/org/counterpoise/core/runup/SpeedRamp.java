@@ -16,6 +16,12 @@ import org.counterpoise.core.error.InvalidInputException;
  */
 public record SpeedRamp(double startSpeed, double acceleration, double duration) {
 
+    /**
+     * How far above the top forcing frequency a run-up goes by default (1.25 times; a choice, so
+     * that the passage through the upper coupled frequency and the ring-down after it are seen).
+     */
+    public static final double DEFAULT_OVERSPEED = 1.25;
+
     /** Validates the ramp: the speed never goes below zero and the duration is finite. */
     public SpeedRamp {
         Checks.nonNegative("run_up.start_speed", startSpeed);

@@ -75,7 +75,12 @@ final class ReportJson {
         }
     }
 
-    private static void write(JsonObject root, String path, ReportValue v) {
+    /**
+     * @param root the object to write into
+     * @param path the JSON key ({@code a.b} for key b of the nested object a)
+     * @param v the value, in the JSON's units
+     */
+    static void write(JsonObject root, String path, ReportValue v) {
         int dot = path.indexOf('.');
         JsonObject o = root;
         String key = path;

@@ -39,6 +39,7 @@ public final class ResultJson {
             wo.addProperty("text", w.text());
             warnings.add(wo);
         }
+        content.comparison().ifPresent(c -> ComparisonJson.put(o, c));
         o.add("warnings", warnings);
         JsonArray cautions = new JsonArray();
         content.cautions().forEach(cautions::add);
@@ -52,5 +53,13 @@ public final class ResultJson {
      */
     public static String toJson(DesignResult r) {
         return JsonNumbers.write(of(r));
+    }
+
+    /**
+     * @param content a design's report content (with its comparison of methods, when it has one)
+     * @return pretty-printed JSON text
+     */
+    public static String toJson(ReportContent content) {
+        return JsonNumbers.write(of(content));
     }
 }

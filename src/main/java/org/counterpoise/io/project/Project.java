@@ -162,8 +162,11 @@ public record Project(String name, String notes, StructureInput structure, Distu
             spectrum = Spectrum.whiteNoise(Checks.positive("disturbance.spectrum.psd.value",
                     d.spectrum().psdUnit().toSi(d.spectrum().psdValue())));
         }
-        return new Excitation(d.kind(), d.amplitude().positiveSi("disturbance.amplitude.value"), band,
+        Excitation e = new Excitation(d.kind(), d.amplitude().positiveSi("disturbance.amplitude.value"), band,
                 spectrum);
+        // the core's rate is the forcing frequency's (the shaft's times the harmonic order)
+        OptionalDouble shaftRate = runUpRate();
+        return shaftRate.isPresent() ? e.withRunUpRate(shaftRate.getAsDouble() * order) : e;
     }
 
     /**

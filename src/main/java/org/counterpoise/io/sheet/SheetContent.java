@@ -4,9 +4,11 @@ import java.util.List;
 import java.util.Optional;
 import java.util.Set;
 import org.counterpoise.core.design.DesignResult;
+import org.counterpoise.core.design.MethodComparison;
 import org.counterpoise.core.robust.MonteCarloOutcome;
 import org.counterpoise.core.robust.MonteCarloResult;
 import org.counterpoise.io.project.ProjectIdentity;
+import org.counterpoise.io.text.ComparisonContent;
 import org.counterpoise.io.text.DesignContent;
 import org.counterpoise.io.text.ReportContent;
 import org.counterpoise.io.text.ReportKey;
@@ -26,9 +28,10 @@ import org.counterpoise.io.text.ReportTable;
  * @param assumptions the model's assumptions, one sentence each
  * @param warnings the design's warnings
  * @param cautions the standard cautions
+ * @param comparison the comparison of design methods as a table, when one was computed
  */
 public record SheetContent(String projectName, String notes, String date, String revision, List<ReportTable.Section> sections,
-        List<String> assumptions, List<String> warnings, List<String> cautions) {
+        List<String> assumptions, List<String> warnings, List<String> cautions, Optional<ReportTable.Grid> comparison) {
 
     /** The assumptions printed on every sheet. */
     public static final List<String> ASSUMPTIONS = List.of(
@@ -104,6 +107,22 @@ public record SheetContent(String projectName, String notes, String date, String
         List<ReportTable.Section> sections = ReportTable.of(report, Set.of(ReportKey.REVISION, ReportKey.DATE));
         List<String> warnings = report.warnings().stream().map(ReportContent.Note::text).toList();
         return new SheetContent(report.name(), notes, date, revision, sections, ASSUMPTIONS, warnings,
-                report.cautions());
+                report.cautions(), report.comparison().map(ReportTable::comparison));
+    }
+
+    /**
+     * @param r the design result
+     * @param notes the project's notes, or empty
+     * @param date date of issue
+     * @param revision revision mark
+     * @param monteCarlo the design's tolerance Monte Carlo, or why it was not run
+     * @param identity the project's engineer and client or site
+     * @param comparison the comparison of design methods for the design's study
+     * @return the sheet content with the comparison's table
+     */
+    public static SheetContent of(DesignResult r, String notes, String date, String revision,
+            MonteCarloOutcome monteCarlo, ProjectIdentity identity, MethodComparison comparison) {
+        return of(DesignContent.of(r, identity, monteCarlo).with(ComparisonContent.of(comparison, r.study())), notes,
+                date, revision);
     }
 }

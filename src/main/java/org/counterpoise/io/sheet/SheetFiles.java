@@ -121,7 +121,7 @@ public final class SheetFiles {
             ProjectIdentity identity) {
         // the dossier's Monte Carlo: computed once for the project state, whoever asked first
         return SheetContent.of(dossier.design(), notes, date, revision, dossier.monteCarlo(ProgressListener.NONE),
-                identity);
+                identity, dossier.comparison(ProgressListener.NONE));
     }
 
     /**

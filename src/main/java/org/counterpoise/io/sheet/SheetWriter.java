@@ -109,6 +109,9 @@ public final class SheetWriter {
         for (ReportTable.Section section : content.sections()) {
             section(section);
         }
+        if (content.comparison().isPresent()) {
+            comparison(content.comparison().get());
+        }
         float chartWidth = WIDTH - 2 * MARGIN;
         float chartHeight = 300f;
         ensure(chartHeight + 40);
@@ -218,6 +221,61 @@ public final class SheetWriter {
         say(value, VALUE_RIGHT - width(value, BODY), BODY, INK, false);
         say(ValueText.pretty(row.unit()), UNIT_LEFT, BODY, INK, false);
         y -= LINE;
+    }
+
+    /** The comparison of methods: a grid across the page (the recommended line in the accent colour), then its sentences. */
+    private void comparison(ReportTable.Grid grid) throws IOException {
+        float size = 7.5f;
+        ensure(LINE * (4 + grid.cells().size()));
+        y -= 6;
+        for (String line : wrap(clean(grid.title()), WIDTH - 2 * MARGIN, 11.5f)) {
+            heading(line, 11.5f, ACCENT);
+        }
+        rule();
+        int n = grid.headings().size();
+        float[] widths = new float[n];
+        for (int i = 0; i < n; i++) {
+            widths[i] = width(grid.headings().get(i), size);
+            for (List<String> row : grid.cells()) {
+                widths[i] = Math.max(widths[i], width(ValueText.pretty(row.get(i)), size));
+            }
+        }
+        float gap = n > 1 ? Math.max(4f, (WIDTH - 2 * MARGIN - sum(widths)) / (n - 1)) : 0f;
+        cells(grid.headings(), widths, gap, size, MUTED);
+        for (int r = 0; r < grid.cells().size(); r++) {
+            cells(grid.cells().get(r), widths, gap, size, grid.recommended().get(r) ? ACCENT : INK);
+        }
+        y -= 4;
+        for (String sentence : grid.sentences()) {
+            List<String> lines = wrap(clean(sentence), WIDTH - 2 * MARGIN - 12, 8.5f);
+            ensure(11 * lines.size());
+            say("\u2022", MARGIN, 8.5f, ACCENT, false);
+            for (String line : lines) {
+                say(line, MARGIN + 12, 8.5f, INK, false);
+                y -= 11;
+            }
+        }
+        y -= 4;
+    }
+
+    /** One line of the grid: the first cell left-aligned, the figures right-aligned in their columns. */
+    private void cells(List<String> cells, float[] widths, float gap, float size, Color color) throws IOException {
+        ensure(LINE);
+        float x = MARGIN;
+        for (int i = 0; i < cells.size(); i++) {
+            String cell = clean(ValueText.pretty(cells.get(i)));
+            say(cell, i == 0 ? x : x + widths[i] - width(cell, size), size, color, false);
+            x += widths[i] + gap;
+        }
+        y -= LINE - 1;
+    }
+
+    private static float sum(float[] values) {
+        float s = 0;
+        for (float v : values) {
+            s += v;
+        }
+        return s;
     }
 
     private void paragraphs(String title, List<String> texts) throws IOException {

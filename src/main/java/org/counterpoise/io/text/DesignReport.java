@@ -1,5 +1,7 @@
 package org.counterpoise.io.text;
 
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
 import org.counterpoise.core.design.DesignResult;
@@ -42,6 +44,7 @@ public final class DesignReport {
         for (ReportSection section : content.sections()) {
             section(out, section);
         }
+        content.comparison().ifPresent(c -> comparison(out, ReportTable.comparison(c)));
         if (!content.warnings().isEmpty()) {
             out.append("\nWarnings\n");
             for (ReportContent.Note warning : content.warnings()) {
@@ -95,6 +98,37 @@ public final class DesignReport {
 
     private static void row(StringBuilder out, String label, String value) {
         out.append(String.format(Locale.ROOT, "  %-" + (LABEL - 2) + "s %s%n", label, value));
+    }
+
+    /**
+     * Appends the comparison of methods: a table with columns as wide as their widest cell, then
+     * its sentences as bullets.
+     * @param out the report being written
+     * @param grid the comparison's table
+     */
+    static void comparison(StringBuilder out, ReportTable.Grid grid) {
+        out.append('\n').append(grid.title()).append('\n');
+        List<List<String>> rows = new ArrayList<>();
+        rows.add(grid.headings().stream().map(ValueText::ascii).toList());
+        rows.addAll(grid.cells());
+        int[] widths = new int[grid.headings().size()];
+        for (List<String> row : rows) {
+            for (int i = 0; i < row.size(); i++) {
+                widths[i] = Math.max(widths[i], row.get(i).length());
+            }
+        }
+        for (List<String> row : rows) {
+            StringBuilder line = new StringBuilder(" ");
+            for (int i = 0; i < row.size(); i++) {
+                // the method left-aligned, the figures right-aligned
+                String f = i == 0 ? "%-" + widths[i] + "s" : "%" + widths[i] + "s";
+                line.append(' ').append(String.format(Locale.ROOT, f, row.get(i))).append(i == 0 ? " " : "");
+            }
+            out.append(line.toString().stripTrailing()).append('\n');
+        }
+        for (String sentence : grid.sentences()) {
+            bullet(out, sentence);
+        }
     }
 
     static void bullet(StringBuilder out, String text) {

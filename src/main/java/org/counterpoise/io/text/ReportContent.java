@@ -15,14 +15,36 @@ import org.counterpoise.io.text.ReportSection.SectionId;
  * @param sections sections in print order
  * @param warnings the design's warnings, in words, with their stable codes
  * @param cautions the standing cautions
+ * @param comparison the comparison of design methods, when one was computed
  */
-public record ReportContent(String name, List<ReportSection> sections, List<Note> warnings, List<String> cautions) {
+public record ReportContent(String name, List<ReportSection> sections, List<Note> warnings, List<String> cautions,
+        Optional<ReportComparison> comparison) {
+
+    /**
+     * A report without a comparison of methods.
+     * @param name the project name
+     * @param sections sections in print order
+     * @param warnings the warnings
+     * @param cautions the cautions
+     */
+    public ReportContent(String name, List<ReportSection> sections, List<Note> warnings, List<String> cautions) {
+        this(name, sections, warnings, cautions, Optional.empty());
+    }
 
     /** Defensive copies. */
     public ReportContent {
         sections = List.copyOf(sections);
         warnings = List.copyOf(warnings);
         cautions = List.copyOf(cautions);
+        comparison = comparison == null ? Optional.empty() : comparison;
+    }
+
+    /**
+     * @param c a comparison of methods
+     * @return this report with it
+     */
+    public ReportContent with(ReportComparison c) {
+        return new ReportContent(name, sections, warnings, cautions, Optional.of(c));
     }
 
     /**

@@ -80,6 +80,20 @@ public enum ReportKey {
     MONTE_CARLO_EXCEEDING("monte_carlo.probability_exceeding_target"),
     MONTE_CARLO_NOT_RUN("monte_carlo_not_run"),
 
+    // The comparison of methods (design --json): an array under COMPARISON, one object per candidate
+    // with the keys of its columns (METHOD, MASS_RATIO, TUNING_RATIO, ABSORBER_DAMPING_RATIO,
+    // NOMINAL_PEAK, WORST_CASE_PEAK, P95_PEAK, STROKE, STROKE_RUN_UP, RUN_UP_STROKE_BASIS,
+    // SPRING_FORCE) and the flags below; the methods left out under COMPARISON_LEFT_OUT.
+    COMPARISON("comparison"),
+    P95_PEAK("p95_peak"),
+    RUN_UP_STROKE_BASIS("peak_stroke_run_up_basis"),
+    CONSTRAINTS_APPLIED("constraints_applied"),
+    RECOMMENDED_FLAG("recommended"),
+    CHOSEN_FLAG("chosen"),
+    RECOMMENDATION("recommended_method", "recommendation_reason"),
+    COMPARISON_LEFT_OUT("comparison_left_out"),
+    LEFT_OUT_REASON("reason"),
+
     // Rows not in the design JSON.
     REVISION,
     DATE,

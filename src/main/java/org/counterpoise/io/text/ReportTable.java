@@ -61,6 +61,69 @@ public final class ReportTable {
         return tables;
     }
 
+    /**
+     * The comparison of methods as one table of printed cells (values with their units), for the
+     * text report, the sheet and the wizard.
+     * @param title its heading
+     * @param headings the column headings
+     * @param cells one list of cells per candidate, one per heading
+     * @param recommended per candidate, true for the recommended one
+     * @param chosen per candidate, true for the one the design used
+     * @param sentences the recommendation, whose design is shown, and the notes, one sentence each
+     */
+    public record Grid(String title, List<String> headings, List<List<String>> cells, List<Boolean> recommended,
+            List<Boolean> chosen, List<String> sentences) {
+        /** Defensive copies. */
+        public Grid {
+            headings = List.copyOf(headings);
+            cells = cells.stream().map(List::copyOf).toList();
+            recommended = List.copyOf(recommended);
+            chosen = List.copyOf(chosen);
+            sentences = List.copyOf(sentences);
+        }
+    }
+
+    /**
+     * @param c the comparison
+     * @return its table: the tabled columns, the method cell marked "(recommended)" and "(chosen)"
+     */
+    public static Grid comparison(ReportComparison c) {
+        List<String> headings = new ArrayList<>();
+        for (ReportComparison.Column col : c.columns()) {
+            if (col.tabled()) {
+                headings.add(col.heading());
+            }
+        }
+        List<List<String>> cells = new ArrayList<>();
+        for (ReportComparison.Line line : c.lines()) {
+            List<String> row = new ArrayList<>();
+            for (int i = 0; i < c.columns().size(); i++) {
+                if (!c.columns().get(i).tabled()) {
+                    continue;
+                }
+                String cell = ValueText.inline(line.cells().get(i));
+                if (c.columns().get(i).key() == ReportKey.METHOD) {
+                    List<String> marks = new ArrayList<>();
+                    if (line.recommended()) {
+                        marks.add("recommended");
+                    }
+                    if (line.chosen()) {
+                        marks.add("chosen");
+                    }
+                    cell = marks.isEmpty() ? cell : cell + " (" + String.join(", ", marks) + ")";
+                }
+                row.add(cell);
+            }
+            cells.add(row);
+        }
+        List<String> sentences = new ArrayList<>();
+        sentences.add("Recommended: " + c.recommendation().text() + ".");
+        sentences.add(c.chosen());
+        sentences.addAll(c.notes());
+        return new Grid(c.title(), headings, cells, c.lines().stream().map(ReportComparison.Line::recommended).toList(),
+                c.lines().stream().map(ReportComparison.Line::chosen).toList(), sentences);
+    }
+
     private static String note(ReportRow row) {
         if (row.source().isEmpty() || row.caution().isEmpty()) {
             return row.source().isEmpty() ? ValueText.capitalised(row.caution()) : "Source: " + row.source();

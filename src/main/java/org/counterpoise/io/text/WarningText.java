@@ -1,9 +1,12 @@
 package org.counterpoise.io.text;
 
 import java.util.Locale;
+import org.counterpoise.core.design.DesignResult;
+import org.counterpoise.core.design.RunUpStroke;
 import org.counterpoise.core.error.Warning;
 import org.counterpoise.core.error.WarningParameter;
 import org.counterpoise.core.error.WarningParameter.PeakBand;
+import org.counterpoise.core.units.Unit;
 
 /**
  * The one place a {@link Warning} becomes English words. Every front end (text report, JSON,
@@ -56,7 +59,53 @@ public final class WarningText {
                     + " the band only.";
             case NO_DAMPING -> "The absorber has no damping: any drift of the forcing frequency away from the tuned"
                     + " value moves the structure towards a resonance.";
+            case STRUCTURE_TOLERANCE_NARROW -> narrow("the structure's natural frequency", w);
+            case ABSORBER_TOLERANCE_NARROW -> narrow("the absorber's natural frequency", w);
+            case DAMPING_BELOW_PRACTICAL -> String.format(Locale.ROOT, "The absorber damping ratio of %.3g is below"
+                    + " the %.3g that a practical damper gives (common practice, no source): the damping actually"
+                    + " built will be higher and the design will not perform as computed; choose a design with"
+                    + " more damping (robust-worst-case) or fix the damping at what the damper gives.",
+                    w.number(WarningParameter.ABSORBER_DAMPING_RATIO),
+                    w.number(WarningParameter.PRACTICAL_DAMPING_RATIO));
+            case RUN_UP_STROKE_LARGE -> String.format(Locale.ROOT, "The absorber stroke during run-up, %s (%s), is"
+                    + " %.3g times the stroke in the band, %s: leave the clearance for it, or pass the start-up"
+                    + " resonance faster.", millimetres(w.number(WarningParameter.RUN_UP_STROKE)),
+                    runUpBasis(w), w.number(WarningParameter.RUN_UP_STROKE) / w.number(WarningParameter.IN_BAND_STROKE),
+                    millimetres(w.number(WarningParameter.IN_BAND_STROKE)));
+            case RUN_UP_OVER_STROKE_LIMIT -> String.format(Locale.ROOT, "The absorber stroke during run-up, %s (%s),"
+                    + " exceeds the stroke limit of %s: the absorber will strike its stops at start and stop.",
+                    millimetres(w.number(WarningParameter.RUN_UP_STROKE)), runUpBasis(w),
+                    millimetres(w.number(WarningParameter.STROKE_LIMIT)));
         };
+    }
+
+    private static String narrow(String what, Warning w) {
+        return String.format(Locale.ROOT, "The design keeps its peak in band within %s of nominal only while %s"
+                + " stays within %s to %s, narrower than the tolerance range of +/-%s (stated, or the default when"
+                + " none is stated): as built it may perform much worse than computed; robust-worst-case holds"
+                + " over the range.", ValueText.percent(DesignResult.TOLERANCE_ALLOWANCE, 2), what,
+                change(w.number(WarningParameter.TOLERATED_LOW)), change(w.number(WarningParameter.TOLERATED_HIGH)),
+                ValueText.percent(w.number(WarningParameter.STATED_RANGE), 2));
+    }
+
+    /** A signed change, "beyond" at the search limit (the range was not closed there). */
+    private static String change(double fraction) {
+        String sign = fraction < 0 ? "-" : "+";
+        String at = ValueText.percent(Math.abs(fraction), 2);
+        return Math.abs(fraction) >= DesignResult.TOLERANCE_SEARCH - 1e-12 ? "beyond " + sign + at : sign + at;
+    }
+
+    private static String runUpBasis(Warning w) {
+        return switch (RunUpStroke.Basis.valueOf(w.token(WarningParameter.RUN_UP_BASIS))) {
+            case TRANSIENT -> "a run-up from rest at the project's rate, in the time domain";
+            case STEADY_STATE -> "steady state from rest to the top of the band; the project states no run-up rate";
+            case STEADY_STATE_NOT_INTEGRATED -> "steady state from rest to the top of the band; this run-up is not"
+                    + " integrated in time";
+        };
+    }
+
+    private static String millimetres(double metres) {
+        return QuantityFormat.format(metres, Unit.MILLIMETRE);
     }
 
     private static String over(PeakBand band) {

@@ -1,13 +1,20 @@
 package org.counterpoise.ui.cli;
 
 import java.nio.file.Path;
+import java.util.Optional;
 import java.util.concurrent.Callable;
 import org.counterpoise.core.design.DesignDossier;
 import org.counterpoise.core.design.DesignResult;
+import org.counterpoise.core.design.MethodComparison;
+import org.counterpoise.core.progress.ProgressListener;
 import org.counterpoise.io.PlainText;
 import org.counterpoise.io.export.ResultJson;
 import org.counterpoise.io.project.LoadedProject;
+import org.counterpoise.io.project.ProjectIdentity;
+import org.counterpoise.io.text.ComparisonContent;
+import org.counterpoise.io.text.DesignContent;
 import org.counterpoise.io.text.DesignReport;
+import org.counterpoise.io.text.ReportContent;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
@@ -30,9 +37,13 @@ public final class DesignCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         LoadedProject loaded = ProjectFiles.read(spec, file);
-        DesignResult result = DesignDossier.of(loaded.project().toStudy()).design();
-        spec.commandLine().getOut().print(PlainText.forTerminal(json ? ResultJson.toJson(result)
-                : DesignReport.render(result, loaded.project().identity())));
+        DesignDossier dossier = DesignDossier.of(loaded.project().toStudy());
+        DesignResult result = dossier.design();
+        MethodComparison comparison = dossier.comparison(ProgressListener.NONE);
+        ReportContent content = DesignContent.of(result, json ? ProjectIdentity.EMPTY : loaded.project().identity(),
+                Optional.empty()).with(ComparisonContent.of(comparison, result.study()));
+        spec.commandLine().getOut().print(PlainText.forTerminal(json ? ResultJson.toJson(content)
+                : DesignReport.render(content)));
         spec.commandLine().getOut().flush();
         return 0;
     }

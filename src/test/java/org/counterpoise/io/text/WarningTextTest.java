@@ -6,8 +6,10 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 import java.util.Map;
+import org.counterpoise.core.design.RunUpStroke;
 import org.counterpoise.core.error.Warning;
 import org.counterpoise.core.error.WarningKind;
 import org.counterpoise.core.error.WarningParameter;
@@ -32,6 +34,8 @@ class WarningTextTest {
             for (double scale : new double[] {1e-9, 0.05, 1.0, 3e4, 1e12}) {
                 List<String> tokens = kind.parameters().contains(WarningParameter.PEAK_BAND)
                         ? List.of(PeakBand.ALL_FREQUENCIES.name(), PeakBand.RUN_UP.name(), PeakBand.OCTAVE.name())
+                        : kind.parameters().contains(WarningParameter.RUN_UP_BASIS)
+                        ? Arrays.stream(RunUpStroke.Basis.values()).map(Enum::name).toList()
                         : List.of("equal-peak");
                 for (String token : tokens) {
                     String text = WarningText.of(Warning.of(kind, values(kind, scale, token).toArray()));

@@ -7,6 +7,8 @@ import java.util.logging.Logger;
 import javax.swing.Timer;
 import org.counterpoise.core.design.AchievablePeak;
 import org.counterpoise.core.design.DesignDossier;
+import org.counterpoise.io.text.ComparisonContent;
+import org.counterpoise.io.text.ReportTable;
 import org.counterpoise.core.design.DesignMethod;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.DesignStudy;
@@ -176,6 +178,7 @@ final class DesignRun {
                 steps.sheet().shown();
             }
             navigation.run();
+            startComparison(d);
             startRobustness(d);
             startMassChart(study, d.design());
         }, e -> failed(e, gen));
@@ -192,6 +195,18 @@ final class DesignRun {
             status.accept("The design could not be computed for these inputs; please report this case.");
         }
         navigation.run();
+    }
+
+    /** The comparison of methods: several designs, so off the event thread; dropped if the state changed. */
+    private void startComparison(DesignDossier dossier) {
+        DesignStudy study = dossier.study();
+        steps.result().comparison().message("Comparing the design methods\u2026");
+        tasks.current(null, progress -> ReportTable.comparison(ComparisonContent.of(dossier.comparison(progress),
+                study)), (ReportTable.Grid grid) -> steps.result().comparison().show(grid), e -> {
+                    Logger.getLogger("counterpoise").log(Level.WARNING, "comparison failed", e);
+                    steps.result().comparison().message("The comparison of methods could not be computed for these"
+                            + " inputs.");
+                });
     }
 
     private void startRobustness(DesignDossier dossier) {

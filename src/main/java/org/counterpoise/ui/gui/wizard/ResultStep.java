@@ -77,6 +77,7 @@ final class ResultStep extends Step {
     private final JComponent page;
     private final TaskRunner tasks;
     private final SheetStep.Messages messages;
+    private final ComparisonPanel comparison = new ComparisonPanel();
     private final RunUpView runUp;
     private DesignResult result;
     private DesignCurves curves;
@@ -147,7 +148,10 @@ final class ResultStep extends Step {
         }
         JPanel right = new JPanel(new BorderLayout());
         right.add(controls, BorderLayout.NORTH);
-        right.add(charts, BorderLayout.CENTER);
+        JSplitPane chartsAndComparison = new JSplitPane(JSplitPane.VERTICAL_SPLIT, charts, comparison.component());
+        chartsAndComparison.setResizeWeight(0.55);
+        chartsAndComparison.setBorder(null);
+        right.add(chartsAndComparison, BorderLayout.CENTER);
         right.add(readout, BorderLayout.SOUTH);
         JTabbedPane views = new JTabbedPane();
         views.setName("result.views");
@@ -191,6 +195,7 @@ final class ResultStep extends Step {
         table.setRowCount(0);
         rowNotes.clear();
         if (r == null) {
+            comparison.message("Fix the inputs to see the comparison of methods.");
             curves = null;
             writeNotes(List.of());
             responseChart.message("Fix the inputs to see the design.");
@@ -358,5 +363,10 @@ final class ResultStep extends Step {
     /** @return the run-up view, for tests */
     RunUpView runUp() {
         return runUp;
+    }
+
+    /** @return the comparison of methods (computed after the design; see {@code DesignRun}) */
+    ComparisonPanel comparison() {
+        return comparison;
     }
 }
