@@ -20,8 +20,8 @@ final class SheetPanels {
             w.paragraph(sentence);
         }
         if (!panel.table().isEmpty()) {
-            float left = SheetWriter.margin();
-            float[] lefts = {left, left + 0.36f * SheetWriter.textWidth(), left + 0.68f * SheetWriter.textWidth()};
+            float left = SheetWriter.MARGIN;
+            float[] lefts = {left, left + 0.36f * (SheetWriter.WIDTH - 2 * SheetWriter.MARGIN), left + 0.68f * (SheetWriter.WIDTH - 2 * SheetWriter.MARGIN)};
             boolean head = true;
             for (List<String> row : panel.table()) {
                 // a blank row ends a block; the row after it heads the next block
@@ -29,6 +29,6 @@ final class SheetPanels {
                 head = row.stream().allMatch(String::isEmpty);
             }
         }
-        w.charts(panel.charts(), SheetWriter.textWidth(), 290f);
+        w.charts(panel.charts(), (SheetWriter.WIDTH - 2 * SheetWriter.MARGIN), 290f);
     }
 }

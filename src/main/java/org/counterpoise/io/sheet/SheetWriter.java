@@ -22,6 +22,12 @@ import org.counterpoise.io.text.ReportTable;
 import org.counterpoise.io.text.ValueText;
 import org.knowm.xchart.XYChart;
 
+/*
+ * Longer than 400 lines because it is the one place that knows the sheet's page state (the
+ * content stream, the current height, page breaks, the embedded font): every block (tables, the
+ * comparison grid, charts, further pages) draws through it; what a further page holds is built
+ * outside (SheetPanel, SheetPanels).
+ */
 /**
  * Lays out a {@link SheetContent} and the design's charts on A4 pages with PDFBox: tables with
  * labels on the left, numbers right-aligned in one column and units in the next; the charts as
@@ -30,8 +36,10 @@ import org.knowm.xchart.XYChart;
  * embedded as a subset so that Greek letters print.
  */
 public final class SheetWriter {
-    private static final float MARGIN = 48f;
-    private static final float WIDTH = PDRectangle.A4.getWidth();
+    /** Left and right margin, points (also the further pages' layout, {@link SheetPanels}). */
+    static final float MARGIN = 48f;
+    /** Page width, points. */
+    static final float WIDTH = PDRectangle.A4.getWidth();
     private static final float HEIGHT = PDRectangle.A4.getHeight();
     private static final float VALUE_RIGHT = 420f;
     private static final float UNIT_LEFT = 426f;
@@ -180,16 +188,6 @@ public final class SheetWriter {
             say(cells.get(i), lefts[i], BODY, head ? ACCENT : i == 0 ? MUTED : INK, head);
         }
         y -= LINE;
-    }
-
-    /** @return the page width less both margins, points */
-    static float textWidth() {
-        return WIDTH - 2 * MARGIN;
-    }
-
-    /** @return the left margin, points */
-    static float margin() {
-        return MARGIN;
     }
 
     private void section(ReportTable.Section section) throws IOException {
