@@ -20,7 +20,17 @@ public enum DesignMethod {
      * Least worst-case peak over the project's tolerance ranges (structure frequency, absorber
      * frequency, absorber damping), computed: the recommended method.
      */
-    ROBUST_WORST_CASE("robust-worst-case", "least worst-case peak over the tolerance ranges of structure and absorber");
+    ROBUST_WORST_CASE("robust-worst-case", "least worst-case peak over the tolerance ranges of structure and absorber"),
+    /**
+     * Least 95th percentile of the peak over builds drawn from the project's tolerance
+     * distributions (uniform over the tolerance ranges when none are given), computed.
+     */
+    ROBUST_P95("robust-p95", "least 95th percentile of the peak over the tolerances of structure and absorber");
+
+    /** @return true for the methods that minimise a figure over the tolerances (they share their machinery) */
+    public boolean robust() {
+        return this == ROBUST_WORST_CASE || this == ROBUST_P95;
+    }
 
     /** The method new projects get: the one whose design holds over real tolerances. */
     public static final DesignMethod RECOMMENDED = ROBUST_WORST_CASE;

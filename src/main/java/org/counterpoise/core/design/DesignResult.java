@@ -43,8 +43,9 @@ import org.counterpoise.core.response.ResponsePeak;
  *     response that matters rises by {@link #TOLERANCE_ALLOWANCE}
  * @param absorberTolerance the same for the absorber's natural frequency (spring rate factor squared)
  * @param warnings non-fatal findings
- * @param activeConstraint the designer's constraint that holds an exact-peak optimum back
- *     ({@code NONE} for every other method); the words are in {@code io.text.MethodNoteText}
+ * @param activeConstraint the designer's constraint that holds an exact-peak optimum back (for the
+ *     robust methods: the stroke limit when the run-up stroke sits on it; {@code NONE} for every
+ *     other method); the words are in {@code io.text.MethodNoteText}
  * @param runUpStroke the stroke during run-up as the comparison of methods and the warnings use
  *     it: transient at the project's run-up rate when it states one, else {@code strokeRunUp}
  */

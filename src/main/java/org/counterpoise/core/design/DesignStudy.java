@@ -19,7 +19,7 @@ import org.counterpoise.core.response.ResponseKind;
  * @param method design method
  * @param hangsVertically true when the absorber spring carries the absorber's weight (static deflection)
  * @param strokeMargin clearance over the computed peak stroke (&gt;= 1; 1.5 is common practice)
- * @param constraints limits on the design (used by the exact-peak method)
+ * @param constraints limits on the design (used by the exact-peak and robust methods)
  * @param robustness expected mistuning, target and tolerances (used by robust-worst-case and the
  *     robustness study)
  */
@@ -73,13 +73,14 @@ public record DesignStudy(String name, Structure structure, Excitation excitatio
         Checks.inRange("absorber.stroke_margin", strokeMargin, 1.0, 10.0);
         Checks.present("absorber", constraints, "design constraints");
         Checks.present("robustness", robustness, "robustness settings");
-        if (sizing instanceof AbsorberSizing.ByTarget t && method != DesignMethod.EXACT_PEAK) {
+        if (sizing instanceof AbsorberSizing.ByTarget t && method != DesignMethod.EXACT_PEAK && !method.robust()) {
             throw new InvalidInputException("absorber.target", Checks.show(t.target()),
-                    "sizing for a target needs the exact-peak method");
+                    "sizing for a target needs the exact-peak, robust-worst-case or robust-p95 method");
         }
-        if (constraints.any() && method != DesignMethod.EXACT_PEAK) {
+        if (constraints.any() && method != DesignMethod.EXACT_PEAK && !method.robust()) {
             throw new InvalidInputException("absorber.method", method.id(),
-                    "a stroke limit, fixed damping or fixed tuning needs the exact-peak method");
+                    "a stroke limit, fixed damping or fixed tuning needs the exact-peak, robust-worst-case or"
+                            + " robust-p95 method");
         }
         if (excitation.spectrum().isWhiteNoise()) {
             if (excitation.kind() != ExcitationKind.FORCE

@@ -3,7 +3,6 @@ package org.counterpoise.core.design;
 import java.util.ArrayList;
 import java.util.EnumMap;
 import java.util.List;
-import java.util.Locale;
 import java.util.Map;
 import java.util.OptionalDouble;
 import org.counterpoise.core.error.InvalidInputException;
@@ -35,9 +34,7 @@ import org.counterpoise.core.optim.PeakProblem;
 import org.counterpoise.core.optim.VarianceOptimiser;
 import org.counterpoise.core.optim.VarianceOptimum;
 import org.counterpoise.core.response.ResponseScale;
-import org.counterpoise.core.robust.Mistuning;
 import org.counterpoise.core.robust.MistuningRange;
-import org.counterpoise.core.robust.RobustDesign;
 import org.counterpoise.core.tuning.Assumption;
 import org.counterpoise.core.tuning.ClosedForm;
 import org.counterpoise.core.tuning.ClosedForms;
@@ -63,7 +60,7 @@ public final class Designer {
      * end of that span is taken, so the warning fires only where a design clearly asks for less
      * than any damper will give.
      */
-    static final double PRACTICAL_DAMPING_RATIO = 0.01;
+    public static final double PRACTICAL_DAMPING_RATIO = 0.01;
 
     /** The run-up stroke over the in-band stroke above which the design warns (issue 12: twice). */
     static final double RUN_UP_STROKE_RATIO = 2.0;
@@ -153,7 +150,8 @@ public final class Designer {
         Excitation excitation = study.excitation();
         Structure structure = study.structure();
         if (study.sizing() instanceof AbsorberSizing.ByTarget target) {
-            return lightestForTarget(study, target, warnings, active);
+            return study.method().robust() ? RobustChoice.lightestForTarget(study, target, warnings, active)
+                    : lightestForTarget(study, target, warnings, active);
         }
         double mu = study.sizing().massRatioOn(structure);
         return switch (study.method()) {
@@ -166,20 +164,7 @@ public final class Designer {
                     "Frahm (1909), US patent 989958; Den Hartog (1956), Mechanical Vibrations, section 3.2",
                     "tuned to one forcing frequency");
             case EXACT_PEAK -> exactPeak(study, peakProblem(study, mu), warnings, active);
-            case ROBUST_WORST_CASE -> {
-                // the nominal optimum is only a seed here (the robust design is never worse than it),
-                // so an uncertified one is still a useful start
-                Tuning nominal = HInfinityOptimiser.optimise(peakProblem(study, mu)).tuning();
-                RobustnessSettings r = study.robustness();
-                RobustDesign robust = RobustnessAnalysis.robustDesign(new Mistuning(structure, excitation,
-                        study.response()), nominal, r.structureRange(), r.absorberRange());
-                if (!robust.converged()) {
-                    warnings.add(Warning.of(WarningKind.OPTIMUM_NOT_VERIFIED));
-                }
-                yield new ClosedForm(robust.tuning(), EXACT_SOURCE, String.format(Locale.ROOT,
-                        "least worst case with the structure's frequency within +/-%.3g %% and the absorber's within"
-                                + " +/-%.3g %%", 100 * r.structureRange(), 100 * r.absorberRange()));
-            }
+            case ROBUST_WORST_CASE, ROBUST_P95 -> RobustChoice.forMassRatio(study, mu, warnings, active);
             case EXACT_VARIANCE -> {
                 VarianceOptimum o = VarianceOptimiser.optimise(PeakProblem.allFrequencies(excitation.kind(),
                         study.response(), mu, structure.dampingRatio()));
@@ -196,7 +181,7 @@ public final class Designer {
     private static final String NOT_FOUND_ADVICE = "choose another method (equal-peak or robust-worst-case), or change"
             + " the band or the mass ratio slightly";
 
-    private static final String EXACT_SOURCE = "exact optimum computed by Counterpoise (docs/optimiser.md),"
+    static final String EXACT_SOURCE = "exact optimum computed by Counterpoise (docs/optimiser.md),"
             + " checked against Nishihara and Asami (2002), Crandall and Mark (1963) and Warburton (1982)";
 
     /** The non-dimensional problem of a study; one forcing frequency is treated as all frequencies. */

@@ -42,12 +42,9 @@ import org.counterpoise.core.tuning.ClosedForms;
 public record MethodComparison(List<Candidate> candidates, List<LeftOut> leftOut, DesignMethod recommended,
         RecommendationReason why, DesignMethod chosen) {
 
-    /**
-     * The methods compared, in the order shown: the one list. (The robust 95th-percentile method
-     * joins it here, after robust-worst-case, when it exists.)
-     */
+    /** The methods compared, in the order shown: the one list. */
     public static final List<DesignMethod> COMPARED = List.of(DesignMethod.EQUAL_PEAK, DesignMethod.EXACT_PEAK,
-            DesignMethod.ROBUST_WORST_CASE, DesignMethod.UNDAMPED_SINGLE_SPEED);
+            DesignMethod.ROBUST_WORST_CASE, DesignMethod.ROBUST_P95, DesignMethod.UNDAMPED_SINGLE_SPEED);
 
     /** Relative difference of worst cases taken as a tie (the recommended method then wins the tie). */
     static final double TIE = 1e-9;
@@ -115,7 +112,10 @@ public record MethodComparison(List<Candidate> candidates, List<LeftOut> leftOut
 
     /** Why the recommended method is recommended (the words are in {@code io.text}). */
     public enum RecommendationReason {
-        /** It has the least worst-case peak over the tolerance ranges. */
+        /**
+         * It has the least worst-case peak over the tolerance ranges among the designs with at least
+         * a practical damper's damping.
+         */
         LEAST_WORST_CASE,
         /** A white-noise disturbance: the peak methods do not apply, the chosen rms design stands. */
         WHITE_NOISE
@@ -193,10 +193,18 @@ public record MethodComparison(List<Candidate> candidates, List<LeftOut> leftOut
         return Candidate.of(Designer.design(constrained), true);
     }
 
-    /** The candidate with the least worst case; a tie goes to the recommended method, then to the first. */
+    /**
+     * The candidate with the least worst case among those a practical damper can give (damping
+     * ratio at least {@link Designer#PRACTICAL_DAMPING_RATIO}; an undamped or notch design is shown
+     * but not recommended: its damping cannot be built or held, and its run-up stroke grows without
+     * bound); among all when none can. A tie goes to the recommended method, then to the first.
+     */
     private static DesignMethod leastWorstCase(List<Candidate> candidates) {
-        Candidate best = candidates.get(0);
-        for (Candidate c : candidates) {
+        List<Candidate> buildable = candidates.stream()
+                .filter(c -> c.tuning().dampingRatio() >= Designer.PRACTICAL_DAMPING_RATIO).toList();
+        List<Candidate> among = buildable.isEmpty() ? candidates : buildable;
+        Candidate best = among.get(0);
+        for (Candidate c : among) {
             boolean tie = Math.abs(c.worstPeak() - best.worstPeak()) <= TIE * Math.abs(best.worstPeak())
                     || c.worstPeak() == best.worstPeak();
             if (c.worstPeak() < best.worstPeak() && !tie || tie && c.method() == DesignMethod.RECOMMENDED) {

@@ -10,6 +10,7 @@ import org.counterpoise.core.robust.Mistuning;
 import org.counterpoise.core.robust.MonteCarloOutcome;
 import org.counterpoise.core.robust.RobustDesign;
 import org.counterpoise.core.robust.RobustOptimiser;
+import org.counterpoise.core.robust.RobustLimits;
 import org.counterpoise.core.robust.Sensitivity;
 import org.counterpoise.core.robust.SensitivityCurve;
 import org.counterpoise.core.robust.SensitivityMap;
@@ -70,8 +71,8 @@ public final class RobustnessAnalysis {
         double aRange = settings.absorberRange();
         double curveRange = Math.max(Math.max(sRange, aRange), 0.05);
         listener.checkCancelled(WHAT);
-        RobustDesign robust = RobustOptimiser.optimise(m, design.tuning().massRatio(), sRange, aRange,
-                seeds(design.tuning()), listener.part(0.0, 0.7));
+        RobustDesign robust = RobustOptimiser.optimise(m, design.tuning().massRatio(), settings.ranges(),
+                seeds(design.tuning()), RobustLimits.NONE, listener.part(0.0, 0.7));
         Absorber robustAbsorber = Absorber.of(study.structure(), robust.tuning());
         listener.checkCancelled(WHAT);
         Optional<MistuningRange> forTarget = settings.target().isPresent()
@@ -85,25 +86,14 @@ public final class RobustnessAnalysis {
         listener.progress(0.8);
         SensitivityMap map = Sensitivity.structureByAbsorber(m, a, curveRange, curveRange, MAP_POINTS);
         listener.checkCancelled(WHAT);
-        WorstCase.Point worst = WorstCase.of(m, a, sRange, aRange);
+        WorstCase.Point worst = WorstCase.of(m, a, settings.ranges());
         listener.progress(1.0);
         return new RobustnessResult(settings, structureCurve, absorberCurve, dampingCurve, robustCurve, map, worst,
                 robust, robustAbsorber, forTarget, monteCarlo);
     }
 
-    /**
-     * The robust design for a mass ratio, seeded by the given tuning and the classical design.
-     * @param m the mistuning model
-     * @param nominal the nominal design's tuning (its mass ratio is used)
-     * @param structureRange ds
-     * @param absorberRange da
-     * @return the robust design
-     */
-    public static RobustDesign robustDesign(Mistuning m, Tuning nominal, double structureRange, double absorberRange) {
-        return RobustOptimiser.optimise(m, nominal.massRatio(), structureRange, absorberRange, seeds(nominal));
-    }
-
-    private static List<Tuning> seeds(Tuning nominal) {
+    /** The seeds of a robust search: the given design and the classical one for its mass ratio. */
+    static List<Tuning> seeds(Tuning nominal) {
         return List.of(nominal, DenHartogEqualPeak.tuning(nominal.massRatio()));
     }
 

@@ -14,5 +14,10 @@ public enum ActiveConstraint {
     /** The tuning ratio is held fixed. */
     FIXED_TUNING,
     /** The optimum lies on a bound of the tuning-ratio search (not a designer's constraint). */
-    TUNING_SEARCH_BOUND
+    TUNING_SEARCH_BOUND,
+    /**
+     * The damping ratio sits on the least a practical damper gives (the robust methods do not go
+     * below it; the free optimum asked for less).
+     */
+    PRACTICAL_DAMPING_FLOOR
 }

@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import org.counterpoise.core.design.DesignMethod;
+import org.counterpoise.core.design.Designer;
 import org.counterpoise.core.design.DesignStudy;
 import org.counterpoise.core.design.MethodComparison;
 import org.counterpoise.core.design.MethodComparison.Candidate;
@@ -89,7 +90,9 @@ public final class ComparisonContent {
             case LEAST_WORST_CASE -> c.recommended().id() + ": the least worst-case peak over the tolerance ranges"
                     + " (structure frequency +/-" + ValueText.percent(r.structure(), 2) + ", absorber frequency +/-"
                     + ValueText.percent(r.absorber(), 2) + ", absorber damping +/-" + ValueText.percent(r.damping(), 2)
-                    + ")" + (c.recommended() == DesignMethod.ROBUST_WORST_CASE
+                    + ") among the designs with an absorber damping ratio of at least "
+                    + ValueText.percent(Designer.PRACTICAL_DAMPING_RATIO, 2) + " (the least a practical damper gives;"
+                    + " common practice, no source)" + (c.recommended() == DesignMethod.ROBUST_WORST_CASE
                             ? "; robust-worst-case minimises exactly this figure at the same mass, so it is"
                                     + " recommended by construction" : "");
             case WHITE_NOISE -> c.recommended().id() + ": under white noise the design minimises the rms response;"

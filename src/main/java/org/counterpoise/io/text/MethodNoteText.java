@@ -31,6 +31,7 @@ public final class MethodNoteText {
             case FIXED_DAMPING -> "fixed damping";
             case FIXED_TUNING -> "fixed tuning";
             case TUNING_SEARCH_BOUND -> "tuning-ratio search bound";
+            case PRACTICAL_DAMPING_FLOOR -> "damping held at the least a practical damper gives";
         };
     }
 }

@@ -1,0 +1,193 @@
+package org.counterpoise.core.design;
+
+import java.util.List;
+import java.util.Locale;
+import java.util.OptionalDouble;
+import org.apache.commons.math3.analysis.solvers.BrentSolver;
+import org.apache.commons.math3.exception.MathIllegalArgumentException;
+import org.apache.commons.math3.exception.MathIllegalStateException;
+import org.counterpoise.core.error.Checks;
+import org.counterpoise.core.error.InvalidInputException;
+import org.counterpoise.core.error.Warning;
+import org.counterpoise.core.error.WarningKind;
+import org.counterpoise.core.model.Tuning;
+import org.counterpoise.core.optim.ActiveConstraint;
+import org.counterpoise.core.optim.HInfinityOptimiser;
+import org.counterpoise.core.progress.ProgressListener;
+import org.counterpoise.core.response.ResponseKind;
+import org.counterpoise.core.response.SystemResponse;
+import org.counterpoise.core.robust.RobustCriterion;
+import org.counterpoise.core.robust.RobustLimits;
+import org.counterpoise.core.robust.RobustOptimiser;
+import org.counterpoise.core.robust.ToleranceRanges;
+import org.counterpoise.core.tuning.ClosedForm;
+
+/**
+ * The choice of tuning for the robust methods ({@link DesignMethod#robust()}): the least worst
+ * case over the tolerance ranges, or the least 95th percentile over the tolerances
+ * ({@link RobustMeasures}), for a given mass or the lightest absorber that meets a target, with the
+ * design's constraints (fixed tuning ratio, fixed damping ratio, the stroke limit on the nominal
+ * design's run-up stroke, see {@link RobustLimits}). Orchestration only: the search is
+ * {@link RobustOptimiser}.
+ */
+final class RobustChoice {
+    /** Relative accuracy of the lightest mass ratio that meets a target. */
+    static final double MASS_RATIO_ACCURACY = 1e-6;
+
+    private RobustChoice() {
+    }
+
+    /**
+     * @param study a study with a robust method
+     * @param mu the mass ratio
+     * @param warnings where a warning goes
+     * @param active where the active constraint goes (the stroke limit, when the run-up stroke sits on it)
+     * @return the robust tuning, with the ranges or distributions named in its note
+     */
+    static ClosedForm forMassRatio(DesignStudy study, double mu, List<Warning> warnings, ActiveConstraint[] active) {
+        RobustOptimiser.Minimum best = minimum(study, mu);
+        return closedForm(study, best, warnings, active, "");
+    }
+
+    /**
+     * The lightest absorber whose robust criterion meets the target: the criterion of the robust
+     * optimum falls as the mass ratio grows (checked in the tests), so the mass ratio is found by
+     * Brent's root finder on ln(criterion / target), to {@value #MASS_RATIO_ACCURACY} relative,
+     * on the sufficient side.
+     *
+     * @param study a study with a robust method
+     * @param sizing the target and the largest mass ratio
+     * @param warnings where a warning goes
+     * @param active where the active constraint goes
+     * @return the robust tuning
+     */
+    static ClosedForm lightestForTarget(DesignStudy study, AbsorberSizing.ByTarget sizing, List<Warning> warnings,
+            ActiveConstraint[] active) {
+        double target = sizing.target();
+        double max = sizing.maxMassRatio();
+        RobustOptimiser.Minimum atMax = minimum(study, max);
+        if (atMax.value() > target) {
+            warnings.add(Warning.of(WarningKind.TARGET_NOT_MET, max));
+            return closedForm(study, atMax, warnings, active, "target not met; ");
+        }
+        double lowest = Math.min(1e-3, max / 10);
+        RobustOptimiser.Minimum atLowest = minimum(study, lowest);
+        if (atLowest.value() <= target) {
+            return closedForm(study, atLowest, warnings, active, "lightest absorber that meets the target; ");
+        }
+        double mu;
+        try {
+            mu = new BrentSolver(MASS_RATIO_ACCURACY, 1e-12).solve(200,
+                    x -> Math.log(minimum(study, x).value() / target), lowest, max);
+        } catch (MathIllegalStateException | MathIllegalArgumentException noRoot) {
+            mu = max; // the largest mass ratio meets the target: keep it
+        }
+        RobustOptimiser.Minimum at = minimum(study, mu);
+        // Brent returns a point within its tolerance on either side; step to the sufficient side
+        for (int step = 0; step < 8 && at.value() > target && mu < max; step++) {
+            mu = Math.min(max, mu * (1 + MASS_RATIO_ACCURACY));
+            at = minimum(study, mu);
+        }
+        if (at.value() > target) {
+            at = atMax;
+        }
+        return closedForm(study, at, warnings, active, "lightest absorber that meets the target; ");
+    }
+
+    /**
+     * @param study a study with a robust method
+     * @param mu the mass ratio
+     * @return the robust optimum for that mass ratio
+     */
+    static RobustOptimiser.Minimum minimum(DesignStudy study, double mu) {
+        RobustLimits limits = limits(study);
+        List<Tuning> seeds = seeds(study, mu);
+        RobustOptimiser.Minimum free = RobustOptimiser.minimise(RobustMeasures.mistuning(study), mu, criterion(study),
+                seeds, limits, ProgressListener.NONE);
+        if (limits.fixedDampingRatio().isPresent() || free.tuning().dampingRatio() >= Designer.PRACTICAL_DAMPING_RATIO) {
+            return free;
+        }
+        // The free optimum asks for less damping than any damper gives (typically a notch at one
+        // speed): a design nobody can build to. Re-optimised with the damping ratio held at that
+        // floor, i.e. on the boundary of the buildable region; the tests scan the region above the
+        // floor for anything better.
+        RobustLimits floor = new RobustLimits(limits.fixedTuningRatio(),
+                OptionalDouble.of(Designer.PRACTICAL_DAMPING_RATIO), limits.runUpStrokeLimit());
+        return RobustOptimiser.minimise(RobustMeasures.mistuning(study), mu, criterion(study), seeds, floor,
+                ProgressListener.NONE);
+    }
+
+    /**
+     * @param study a study with a robust method
+     * @param t its robust tuning
+     * @return true when the damping ratio was held at the practical floor (not given by the designer)
+     */
+    private static boolean onDampingFloor(DesignStudy study, Tuning t) {
+        return study.constraints().fixedDampingRatio().isEmpty()
+                && t.dampingRatio() == Designer.PRACTICAL_DAMPING_RATIO;
+    }
+
+    private static RobustCriterion criterion(DesignStudy study) {
+        return study.method() == DesignMethod.ROBUST_P95 ? RobustMeasures.percentileCriterion(study)
+                : RobustMeasures.worstCaseCriterion(study);
+    }
+
+    /** The exact nominal optimum (with the fixed ratios, without the stroke limit) and the classical design. */
+    private static List<Tuning> seeds(DesignStudy study, double mu) {
+        DesignConstraints c = study.constraints();
+        DesignStudy free = new DesignStudy(study.name(), study.structure(), study.excitation(), study.response(),
+                AbsorberSizing.ofMassRatio(mu), study.method(), study.hangsVertically(), study.strokeMargin(),
+                new DesignConstraints(OptionalDouble.empty(), c.fixedDampingRatio(), c.fixedTuningRatio()),
+                study.robustness());
+        // the nominal optimum is only a seed here (the robust design is never worse than it), so an
+        // uncertified one is still a useful start
+        Tuning nominal = HInfinityOptimiser.optimise(Designer.peakProblem(free, mu)).tuning();
+        return RobustnessAnalysis.seeds(nominal);
+    }
+
+    private static RobustLimits limits(DesignStudy study) {
+        DesignConstraints c = study.constraints();
+        return new RobustLimits(c.fixedTuningRatio(), c.fixedDampingRatio(), c.strokeLimit());
+    }
+
+    private static ClosedForm closedForm(DesignStudy study, RobustOptimiser.Minimum best, List<Warning> warnings,
+            ActiveConstraint[] active, String sizing) {
+        DesignConstraints c = study.constraints();
+        double stroke = c.strokeLimit().isPresent() ? runUpStroke(study, best.tuning()) : 0;
+        if (c.strokeLimit().isPresent() && stroke > c.strokeLimit().getAsDouble() * (1 + 1e-9)) {
+            throw new InvalidInputException("absorber.stroke_limit", Checks.show(c.strokeLimit().getAsDouble()),
+                    "cannot be met: no tuning and damping keeps the run-up stroke within it; allow a larger stroke,"
+                            + " a heavier absorber, or free the damping");
+        }
+        if (!best.converged()) {
+            warnings.add(Warning.of(WarningKind.OPTIMUM_NOT_VERIFIED));
+        }
+        // the limit holds the design back when the search ended on it (the search's accuracy)
+        active[0] = c.strokeLimit().isPresent() && stroke >= c.strokeLimit().getAsDouble() * (1 - 1e-4)
+                ? ActiveConstraint.STROKE_LIMIT
+                : onDampingFloor(study, best.tuning()) ? ActiveConstraint.PRACTICAL_DAMPING_FLOOR : ActiveConstraint.NONE;
+        return new ClosedForm(best.tuning(), Designer.EXACT_SOURCE, sizing + note(study));
+    }
+
+    private static double runUpStroke(DesignStudy study, Tuning t) {
+        return new SystemResponse(study.structure(), t, study.excitation().kind(),
+                study.excitation().amplitude()).peakBetween(ResponseKind.STROKE, 0.0,
+                        study.excitation().band().high()).value();
+    }
+
+    /** Names the ranges or distributions the criterion used. */
+    private static String note(DesignStudy study) {
+        ToleranceRanges r = study.robustness().ranges();
+        String ranges = String.format(Locale.ROOT, "the structure's frequency within +/-%.3g %%, the absorber's within"
+                + " +/-%.3g %% and its damping within +/-%.3g %%", 100 * r.structure(), 100 * r.absorber(),
+                100 * r.damping());
+        if (study.method() != DesignMethod.ROBUST_P95) {
+            return "least worst case with " + ranges;
+        }
+        return RobustMeasures.sample(study).fromDistributions()
+                ? String.format(Locale.ROOT, "least 95th percentile over %d builds drawn from the tolerances (seed %d)",
+                        RobustMeasures.PERCENTILE_SAMPLES, study.robustness().seed())
+                : String.format(Locale.ROOT, "least 95th percentile over %d builds drawn uniformly with %s (seed %d)",
+                        RobustMeasures.PERCENTILE_SAMPLES, ranges, study.robustness().seed());
+    }
+}
