@@ -114,9 +114,7 @@ public final class RunUp {
     public static RunUpResult simulate(Structure structure, Tuning tuning, ExcitationKind kind, double amplitude,
             SpeedRamp ramp, Start start, ProgressListener listener, double tolerance) {
         if (ramp.forcingCycles() > MAX_CYCLES) {
-            throw new InvalidInputException("run_up.rate", String.format(Locale.ROOT,
-                    "a ramp of %.3g forcing cycles", ramp.forcingCycles()),
-                    "at most " + (long) MAX_CYCLES + " forcing cycles; choose a faster rate or a lower final speed");
+            refuseLong(ramp);
         }
         RunUpEquations equations = new RunUpEquations(structure, tuning, kind, amplitude, ramp);
         double fastest = Math.max(ramp.topSpeed(), equations.naturalFrequencyBound());
@@ -144,6 +142,16 @@ public final class RunUp {
                     "try a slower or faster rate, or a lower final speed");
         }
         return sampler.result(ramp, tuning != null, integrator.getEvaluations());
+    }
+
+    /**
+     * @param ramp a ramp of more than {@link #MAX_CYCLES} forcing cycles
+     * @throws InvalidInputException always, on field run_up.rate, saying what is allowed
+     */
+    public static void refuseLong(SpeedRamp ramp) {
+        throw new InvalidInputException("run_up.rate", String.format(Locale.ROOT,
+                "a ramp of %.3g forcing cycles", ramp.forcingCycles()),
+                "at most " + (long) MAX_CYCLES + " forcing cycles; choose a faster rate or a lower final speed");
     }
 
     private static double[] initialState(Structure structure, Tuning tuning, ExcitationKind kind, double amplitude,

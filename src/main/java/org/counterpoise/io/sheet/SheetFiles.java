@@ -40,6 +40,9 @@ public final class SheetFiles {
     private static final int CHART_WIDTH = 720;
     private static final int CHART_HEIGHT = 430;
 
+    /** File names (without extension) of the run-up page's charts, in order. */
+    public static final List<String> RUN_UP_CHARTS = List.of("runup-response", "runup-stroke");
+
     private SheetFiles() {
     }
 
@@ -94,8 +97,24 @@ public final class SheetFiles {
      */
     public static void writeSheet(DesignDossier dossier, String notes, String date, String revision,
             ProjectIdentity identity, OutputStream out) throws IOException {
+        writeSheet(dossier, notes, date, revision, identity, List.of(), out);
+    }
+
+    /**
+     * The sheet with further pages (the run-up page) as PDF bytes (the wizard's preview).
+     * @param dossier the design and its analyses
+     * @param notes the project's notes, or empty
+     * @param date date of issue
+     * @param revision revision mark
+     * @param identity the project's engineer and client or site
+     * @param panels further pages after the design's charts
+     * @param out where the PDF goes
+     * @throws IOException when the stream cannot be written
+     */
+    public static void writeSheet(DesignDossier dossier, String notes, String date, String revision,
+            ProjectIdentity identity, List<SheetPanel> panels, OutputStream out) throws IOException {
         SheetWriter.write(content(dossier, notes, date, revision, identity), charts(dossier.design(), dossier.curves()),
-                out);
+                panels, out);
     }
 
     private static SheetContent content(DesignDossier dossier, String notes, String date, String revision,
@@ -129,6 +148,7 @@ public final class SheetFiles {
         private final Map<Path, Planned> planned = new LinkedHashMap<>();
         private final Set<Path> folders = new LinkedHashSet<>();
         private final Map<Path, String> spared = new LinkedHashMap<>();
+        private final List<SheetPanel> panels = new ArrayList<>();
         private List<XYChart> charts;
 
         /** @param dossier the design whose sheet and exports are written, with its analyses */
@@ -161,7 +181,32 @@ public final class SheetFiles {
         public Outputs sheet(Path pdf, String notes, String date, String revision, String option,
                 ProjectIdentity identity) {
             return add(pdf, "sheet", option, out -> SheetWriter.write(
-                    content(dossier, notes, date, revision, identity), charts(), out));
+                    content(dossier, notes, date, revision, identity), charts(), panels, out));
+        }
+
+        /**
+         * A further page of the sheet (the run-up page); its charts are written by {@link #charts}
+         * too, named after the page ({@code runup-response}, {@code runup-stroke}).
+         * @param panel the page
+         * @return this
+         */
+        public Outputs panel(SheetPanel panel) {
+            panels.add(panel);
+            return this;
+        }
+
+        /**
+         * A chart of another study as PNG and SVG in a folder, written with the set.
+         * @param dir the folder (created when missing)
+         * @param name the file name without extension
+         * @param option the option the folder came from
+         * @param chart the chart
+         * @return this
+         */
+        public Outputs chart(Path dir, String name, String option, XYChart chart) {
+            folders.add(dir);
+            add(dir.resolve(name + ".png"), name + ".png", option, out -> ChartFiles.png(chart, out));
+            return add(dir.resolve(name + ".svg"), name + ".svg", option, out -> ChartFiles.svg(chart, out));
         }
 
         /**
@@ -187,7 +232,14 @@ public final class SheetFiles {
             add(dir.resolve("response.png"), "response.png", option, out -> ChartFiles.png(charts().get(0), out));
             add(dir.resolve("response.svg"), "response.svg", option, out -> ChartFiles.svg(charts().get(0), out));
             add(dir.resolve("stroke.png"), "stroke.png", option, out -> ChartFiles.png(charts().get(1), out));
-            return add(dir.resolve("stroke.svg"), "stroke.svg", option, out -> ChartFiles.svg(charts().get(1), out));
+            add(dir.resolve("stroke.svg"), "stroke.svg", option, out -> ChartFiles.svg(charts().get(1), out));
+            for (SheetPanel panel : panels) {
+                List<XYChart> extra = panel.charts();
+                for (int i = 0; i < Math.min(extra.size(), RUN_UP_CHARTS.size()); i++) {
+                    chart(dir, RUN_UP_CHARTS.get(i), option, extra.get(i));
+                }
+            }
+            return this;
         }
 
         /**

@@ -22,6 +22,12 @@ import org.counterpoise.io.text.ReportTable;
 import org.counterpoise.io.text.ValueText;
 import org.knowm.xchart.XYChart;
 
+/*
+ * Longer than 400 lines because it is the one place that knows the sheet's page state (the
+ * content stream, the current height, page breaks, the embedded font): every block (tables, the
+ * comparison grid, charts, further pages) draws through it; what a further page holds is built
+ * outside (SheetPanel, SheetPanels).
+ */
 /**
  * Lays out a {@link SheetContent} and the design's charts on A4 pages with PDFBox: tables with
  * labels on the left, numbers right-aligned in one column and units in the next; the charts as
@@ -30,8 +36,10 @@ import org.knowm.xchart.XYChart;
  * embedded as a subset so that Greek letters print.
  */
 public final class SheetWriter {
-    private static final float MARGIN = 48f;
-    private static final float WIDTH = PDRectangle.A4.getWidth();
+    /** Left and right margin, points (also the further pages' layout, {@link SheetPanels}). */
+    static final float MARGIN = 48f;
+    /** Page width, points. */
+    static final float WIDTH = PDRectangle.A4.getWidth();
     private static final float HEIGHT = PDRectangle.A4.getHeight();
     private static final float VALUE_RIGHT = 420f;
     private static final float UNIT_LEFT = 426f;
@@ -71,16 +79,29 @@ public final class SheetWriter {
      * @throws IOException when it cannot be written
      */
     public static void write(SheetContent content, List<XYChart> charts, OutputStream out) throws IOException {
+        write(content, charts, List.of(), out);
+    }
+
+    /**
+     * Writes the sheet with further pages (the run-up) after the design's charts.
+     * @param content the sheet content
+     * @param charts the charts to print, in order (each takes half a page)
+     * @param panels further pages, in order
+     * @param out where the PDF goes
+     * @throws IOException when it cannot be written
+     */
+    public static void write(SheetContent content, List<XYChart> charts, List<SheetPanel> panels, OutputStream out)
+            throws IOException {
         try (PDDocument document = new PDDocument()) {
             document.getDocumentInformation().setTitle("Absorber parameter sheet: " + content.projectName());
             document.getDocumentInformation().setCreator("Counterpoise");
             SheetWriter w = new SheetWriter(document, content);
-            w.layout(charts);
+            w.layout(charts, panels);
             document.save(out);
         }
     }
 
-    private void layout(List<XYChart> charts) throws IOException {
+    private void layout(List<XYChart> charts, List<SheetPanel> panels) throws IOException {
         newPage();
         heading(clean(content.projectName()), 17f, INK);
         y -= 8;
@@ -105,6 +126,25 @@ public final class SheetWriter {
         y -= 6;
         heading("Response with and without the absorber", 11.5f, ACCENT);
         rule();
+        charts(charts, chartWidth, chartHeight);
+        for (SheetPanel panel : panels) {
+            if (!panel.charts().isEmpty()) {
+                newPage(); // a page with charts starts on its own; a sentence follows the charts above
+            }
+            SheetPanels.draw(this, panel);
+        }
+        newPage();
+        paragraphs("Assumptions of the model", content.assumptions());
+        if (!content.warnings().isEmpty()) {
+            paragraphs("Warnings for this design", content.warnings());
+        }
+        paragraphs("Cautions", content.cautions());
+        stream.close();
+        footers();
+    }
+
+    /** Draws charts one under the other, each followed by the notes of what it cannot draw. */
+    void charts(List<XYChart> charts, float chartWidth, float chartHeight) throws IOException {
         for (XYChart chart : charts) {
             List<String> notes = ChartFactory.notes(chart);
             ensure(chartHeight + 10 + notes.size() * LINE);
@@ -116,14 +156,38 @@ public final class SheetWriter {
                 y -= LINE;
             }
         }
-        newPage();
-        paragraphs("Assumptions of the model", content.assumptions());
-        if (!content.warnings().isEmpty()) {
-            paragraphs("Warnings for this design", content.warnings());
+    }
+
+    /** A heading in the accent colour with a rule under it. */
+    void title(String text) throws IOException {
+        ensure(LINE * 4);
+        y -= 6;
+        heading(text, 11.5f, ACCENT);
+        rule();
+    }
+
+    /** A paragraph wrapped to the page's width. */
+    void paragraph(String text) throws IOException {
+        for (String line : wrap(clean(text), WIDTH - 2 * MARGIN, BODY)) {
+            ensure(LINE);
+            say(line, MARGIN, BODY, INK, false);
+            y -= LINE;
         }
-        paragraphs("Cautions", content.cautions());
-        stream.close();
-        footers();
+        y -= 4;
+    }
+
+    /**
+     * A row of text cells at the given left edges (the first in the muted label colour, unless a head).
+     * @param cells the cells
+     * @param lefts the left edge of each cell, points from the page's left
+     * @param head true for the column heads
+     */
+    void cells(List<String> cells, float[] lefts, boolean head) throws IOException {
+        ensure(LINE);
+        for (int i = 0; i < cells.size() && i < lefts.length; i++) {
+            say(cells.get(i), lefts[i], BODY, head ? ACCENT : i == 0 ? MUTED : INK, head);
+        }
+        y -= LINE;
     }
 
     private void section(ReportTable.Section section) throws IOException {

@@ -8,7 +8,6 @@ import org.counterpoise.core.runup.RunUp;
 import org.counterpoise.core.runup.RunUpReportData;
 import org.counterpoise.core.runup.RunUpResult;
 import org.counterpoise.core.runup.SpeedRamp;
-import org.counterpoise.core.runup.TransientPeak;
 import org.counterpoise.core.units.Unit;
 
 /** The plain-text run-up report printed by {@code runup FILE}, aligned like the design report. */
@@ -63,10 +62,34 @@ public final class RunUpReport {
     }
 
     private static String transientPeak(RunUpReportData d, RunUpResult r, ResponseKind k) {
-        return r.peak(k).map(p -> value(p.value(), k) + " at " + rpm(d, p)).orElse("-");
+        return transientPeak(d, r, k, Unit.REV_PER_MINUTE);
     }
 
     private static String steadyPeak(RunUpReportData d, Map<ResponseKind, ResponsePeak> peaks, ResponseKind k) {
+        return steadyPeak(d, peaks, k, Unit.REV_PER_MINUTE);
+    }
+
+    /**
+     * @param d the study
+     * @param r one run (with or without the absorber)
+     * @param k a reported quantity
+     * @param speedUnit the unit of the shaft speed
+     * @return "value at speed", or "-" when the run does not have the quantity
+     */
+    public static String transientPeak(RunUpReportData d, RunUpResult r, ResponseKind k, Unit speedUnit) {
+        return r.peak(k).map(p -> value(p.value(), k) + " at "
+                + QuantityFormat.format(d.shaftSpeed(p.speed()), speedUnit)).orElse("-");
+    }
+
+    /**
+     * @param d the study
+     * @param peaks the steady-state peaks of one side
+     * @param k a reported quantity
+     * @param speedUnit the unit of the shaft speed
+     * @return "value at speed", "unbounded (undamped resonance)", or "-" when the side does not have it
+     */
+    public static String steadyPeak(RunUpReportData d, Map<ResponseKind, ResponsePeak> peaks, ResponseKind k,
+            Unit speedUnit) {
         ResponsePeak p = peaks.get(k);
         if (p == null) {
             return "-";
@@ -74,11 +97,7 @@ public final class RunUpReport {
         if (p.unbounded()) {
             return "unbounded (undamped resonance)";
         }
-        return value(p.value(), k) + " at " + QuantityFormat.format(d.shaftSpeed(p.frequency()), Unit.REV_PER_MINUTE);
-    }
-
-    private static String rpm(RunUpReportData d, TransientPeak p) {
-        return QuantityFormat.format(d.shaftSpeed(p.speed()), Unit.REV_PER_MINUTE);
+        return value(p.value(), k) + " at " + QuantityFormat.format(d.shaftSpeed(p.frequency()), speedUnit);
     }
 
     private static String value(double v, ResponseKind k) {

@@ -1,21 +1,24 @@
 package org.counterpoise.ui.cli;
 
 import java.nio.file.Path;
+import java.util.List;
 import java.util.concurrent.Callable;
 import org.counterpoise.core.design.DesignDossier;
 import org.counterpoise.core.design.DesignResult;
+import org.counterpoise.core.design.RunUpStudy;
 import org.counterpoise.core.error.Checks;
 import org.counterpoise.core.error.InvalidInputException;
-import org.counterpoise.core.model.Excitation;
 import org.counterpoise.core.progress.ProgressListener;
-import org.counterpoise.core.runup.RunUp;
-import org.counterpoise.core.runup.RunUpComparison;
 import org.counterpoise.core.runup.RunUpReportData;
-import org.counterpoise.core.runup.SpeedRamp;
 import org.counterpoise.core.units.Unit;
+import org.counterpoise.io.PlainText;
+import org.counterpoise.io.chart.RunUpCharts;
 import org.counterpoise.io.export.RunUpJson;
 import org.counterpoise.io.project.LoadedProject;
 import org.counterpoise.io.project.Project;
+import org.counterpoise.io.sheet.RunUpPanel;
+import org.counterpoise.io.sheet.SheetFiles;
+import org.counterpoise.io.sheet.SheetPanel;
 import org.counterpoise.io.text.QuantityFormat;
 import org.counterpoise.io.text.RunUpReport;
 import picocli.CommandLine.Command;
@@ -33,9 +36,6 @@ import picocli.CommandLine.Spec;
             + " and report the peak response met on the way, with and without the absorber, beside the"
             + " steady-state peaks (or JSON with --json). See docs/runup.md."})
 public final class RunUpCommand implements Callable<Integer> {
-    /** How far above the top running speed the ramp goes by default. */
-    static final double DEFAULT_OVERSPEED = SpeedRamp.DEFAULT_OVERSPEED;
-
     @Spec
     private CommandSpec spec;
 
@@ -57,16 +57,23 @@ public final class RunUpCommand implements Callable<Integer> {
     @Option(names = "--json", description = "print the result as one JSON object with SI units in the key names")
     private boolean json;
 
+    @Option(names = "--plots", paramLabel = "DIR",
+            description = "also write the envelope charts runup-response and runup-stroke as PNG and SVG into DIR")
+    private Path plotsDir;
+
+    @Option(names = "--force", description = "replace chart files that already exist")
+    private boolean force;
+
     @Override
     public Integer call() {
         LoadedProject loaded = ProjectFiles.read(spec, file);
         Project project = loaded.project();
-        DesignResult design = DesignDossier.of(project.toStudy()).design();
-        Excitation excitation = design.study().excitation();
+        DesignDossier dossier = DesignDossier.of(project.toStudy());
+        DesignResult design = dossier.design();
         double order = project.disturbance().harmonicOrder();
         double shaftRate = shaftRate(project);
-        double topShaft = excitation.band().high() / order;
-        double finalShaft = topShaft * DEFAULT_OVERSPEED;
+        double topShaft = RunUpStudy.topShaftSpeed(design, order);
+        double finalShaft = RunUpStudy.defaultFinalShaftSpeed(design, order);
         if (finalSpeed != null) {
             if (finalSpeed <= 0.0 || Unit.REV_PER_MINUTE.toSi(finalSpeed) > 10.0 * topShaft) {
                 throw new InvalidInputException("--final-speed", Checks.show(finalSpeed),
@@ -75,18 +82,9 @@ public final class RunUpCommand implements Callable<Integer> {
             }
             finalShaft = Unit.REV_PER_MINUTE.toSi(finalSpeed);
         }
-        SpeedRamp ramp;
+        RunUpStudy.Result result;
         try {
-            ramp = runDown ? SpeedRamp.runDown(finalShaft * order, shaftRate * order)
-                    : SpeedRamp.runUp(finalShaft * order, shaftRate * order);
-        } catch (InvalidInputException e) {
-            throw e.renamed(rate != null ? "--rate" : "disturbance.run_up_rate");
-        }
-        RunUpComparison comparison;
-        try {
-            comparison = RunUpComparison.of(design.study().structure(), design.tuning(), excitation.kind(),
-                    excitation.amplitude(), ramp, runDown ? RunUp.Start.STEADY_STATE : RunUp.Start.REST,
-                    ProgressListener.NONE);
+            result = new RunUpStudy(design, order, shaftRate, finalShaft, runDown).run(ProgressListener.NONE);
         } catch (InvalidInputException e) {
             throw switch (e.field()) {
                 case "run_up.rate" -> e.renamed(rate != null ? "--rate" : "disturbance.run_up_rate");
@@ -94,9 +92,25 @@ public final class RunUpCommand implements Callable<Integer> {
                 default -> e;
             };
         }
-        RunUpReportData data = new RunUpReportData(design.study().name(), runDown, order, comparison);
-        spec.commandLine().getOut().print(json ? RunUpJson.toJson(data) : RunUpReport.render(data));
-        spec.commandLine().getOut().flush();
+        RunUpReportData data = result.data();
+        var out = spec.commandLine().getOut();
+        out.print(json ? RunUpJson.toJson(data) : RunUpReport.render(data));
+        if (plotsDir != null) {
+            Unit speedUnit = RunUpCharts.speedUnit(project.disturbance());
+            SheetPanel panel = RunUpPanel.of(result, speedUnit);
+            SheetFiles.Outputs outputs = new SheetFiles.Outputs(dossier).sparing(file, "the project file being read");
+            for (int i = 0; i < SheetFiles.RUN_UP_CHARTS.size(); i++) {
+                outputs.chart(plotsDir, SheetFiles.RUN_UP_CHARTS.get(i), "--plots", panel.charts().get(i));
+            }
+            List<Path> written = outputs.write(force);
+            if (!json) {
+                // with --json, stdout stays one JSON object
+                for (Path p : written) {
+                    out.println("wrote " + PlainText.escape(p.toString()));
+                }
+            }
+        }
+        out.flush();
         return 0;
     }
 

@@ -5,8 +5,10 @@ import java.time.LocalDate;
 import java.util.concurrent.Callable;
 import org.counterpoise.core.design.DesignDossier;
 import org.counterpoise.core.error.InvalidInputException;
+import org.counterpoise.core.progress.ProgressListener;
 import org.counterpoise.io.PlainText;
 import org.counterpoise.io.project.LoadedProject;
+import org.counterpoise.io.sheet.RunUpPanel;
 import org.counterpoise.io.sheet.SheetFiles;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
@@ -61,7 +63,8 @@ public final class SheetCommand implements Callable<Integer> {
         // The sheet and every export are one set: all are written, or none and nothing changes.
         SheetFiles.Outputs outputs = new SheetFiles.Outputs(dossier)
                 .sheet(output, loaded.project().notes(), issued, mark, "--output", identity)
-                .sparing(file, "the project file being read");
+                .sparing(file, "the project file being read")
+                .panel(RunUpPanel.of(loaded.project(), dossier.design(), ProgressListener.NONE));
         if (csvDir != null) {
             outputs.data(csvDir, "--csv");
         }

@@ -135,4 +135,24 @@ class RunUpCommandTest {
             assertFalse(r.err().contains("Exception") || r.err().contains("\tat "), r.err());
         }
     }
+
+    @Test
+    void plotsWritesTheEnvelopeChartsAsASetAndKeepsJsonClean(@TempDir Path dir) throws Exception {
+        Path plots = dir.resolve("charts");
+        Run r = CliTest.run("runup", FAN, "--rate", "200", "--json", "--plots", plots.toString());
+        assertEquals(0, r.code(), r.err());
+        strictJson(r.out()); // stdout stays one JSON object
+        for (String name : new String[] {"runup-response", "runup-stroke"}) {
+            byte[] png = Files.readAllBytes(plots.resolve(name + ".png"));
+            assertEquals((byte) 0x89, png[0], name + " is a PNG");
+            assertEquals('P', png[1]);
+            assertTrue(Files.readString(plots.resolve(name + ".svg")).contains("<svg"), name + " is an SVG");
+        }
+        Run again = CliTest.run("runup", FAN, "--rate", "200", "--plots", plots.toString());
+        assertEquals(2, again.code());
+        assertTrue(again.err().contains("--plots") && again.err().contains("already exists"), again.err());
+        Run forced = CliTest.run("runup", FAN, "--rate", "200", "--plots", plots.toString(), "--force");
+        assertEquals(0, forced.code(), forced.err());
+        assertTrue(forced.out().contains("wrote " + plots.resolve("runup-stroke.svg")), forced.out());
+    }
 }

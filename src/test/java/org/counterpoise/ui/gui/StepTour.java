@@ -16,7 +16,8 @@ import org.counterpoise.ui.gui.wizard.WizardFrame;
  * Not a test: opens the wizard as a user would and photographs the whole screen on every step,
  * for a person to look at (run it under Xvfb at several screen sizes and scalings):
  * {@code java -Dsun.java2d.uiScale=2 -cp target/counterpoise.jar:target/test-classes
- * org.counterpoise.ui.gui.StepTour target/tour [preset or project file]}.
+ * org.counterpoise.ui.gui.StepTour target/tour [preset or project file]}; with
+ * {@code -Dtour.runup=true} also the result step's Run-up tab ({@code step4-runup.png}).
  */
 public final class StepTour {
     private StepTour() {
@@ -57,6 +58,15 @@ public final class StepTour {
             }
             BufferedImage image = new Robot().createScreenCapture(screen);
             ImageIO.write(image, "png", out.resolve("step" + (step + 1) + ".png").toFile());
+            if (step == 3 && Boolean.getBoolean("tour.runup")) {
+                // the result step's Run-up tab (computed when shown)
+                SwingUtilities.invokeAndWait(() -> ((javax.swing.JTabbedPane) find(frame.get().getContentPane(),
+                        "result.views")).setSelectedIndex(1));
+                Thread.sleep(Long.getLong("tour.runup.wait", 8000));
+                ImageIO.write(new Robot().createScreenCapture(screen), "png", out.resolve("step4-runup.png").toFile());
+                SwingUtilities.invokeAndWait(() -> ((javax.swing.JTabbedPane) find(frame.get().getContentPane(),
+                        "result.views")).setSelectedIndex(0));
+            }
         }
         SwingUtilities.invokeAndWait(() -> frame.get().dispose());
         System.exit(0);

@@ -171,6 +171,7 @@ final class DesignRun {
         }, (DesignDossier d) -> {
             shown = d.design();
             shownGeneration = gen;
+            steps.result().designedFrom(p);
             steps.result().show(d.design(), d.curves());
             steps.sheet().show(d, p);
             if (steps.sheet().component().isShowing()) {

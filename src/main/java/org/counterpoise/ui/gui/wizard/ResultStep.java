@@ -26,6 +26,7 @@ import javax.swing.JOptionPane;
 import javax.swing.JPanel;
 import javax.swing.JScrollPane;
 import javax.swing.JSplitPane;
+import javax.swing.JTabbedPane;
 import javax.swing.JTable;
 import javax.swing.JTextPane;
 import javax.swing.JToggleButton;
@@ -77,12 +78,15 @@ final class ResultStep extends Step {
     private final TaskRunner tasks;
     private final SheetStep.Messages messages;
     private final ComparisonPanel comparison = new ComparisonPanel();
+    private final RunUpView runUp;
     private DesignResult result;
     private DesignCurves curves;
+    private Project project;
 
     ResultStep(TaskRunner tasks, SheetStep.Messages messages) {
         this.tasks = tasks;
         this.messages = messages;
+        this.runUp = new RunUpView(tasks);
         JTable t = new JTable(table);
         t.setName("result.table");
         t.setRowHeight(t.getRowHeight() + 4);
@@ -149,7 +153,13 @@ final class ResultStep extends Step {
         chartsAndComparison.setBorder(null);
         right.add(chartsAndComparison, BorderLayout.CENTER);
         right.add(readout, BorderLayout.SOUTH);
-        JSplitPane split = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, left, right);
+        JTabbedPane views = new JTabbedPane();
+        views.setName("result.views");
+        views.addTab("Steady state", right);
+        views.addTab("Run-up", runUp.component());
+        views.setMnemonicAt(0, 's');
+        views.setMnemonicAt(1, 'u');
+        JSplitPane split = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, left, views);
         split.setResizeWeight(0.36);
         split.setBorder(null);
         page = split;
@@ -181,6 +191,7 @@ final class ResultStep extends Step {
      */
     void show(DesignResult r, DesignCurves c) {
         result = r;
+        runUp.design(r, r == null ? null : project);
         table.setRowCount(0);
         rowNotes.clear();
         if (r == null) {
@@ -342,6 +353,16 @@ final class ResultStep extends Step {
 
     DefaultTableModel table() {
         return table;
+    }
+
+    /** @param p the project the next result shown is designed from (its run-up rate, order, speed unit) */
+    void designedFrom(Project p) {
+        project = p;
+    }
+
+    /** @return the run-up view, for tests */
+    RunUpView runUp() {
+        return runUp;
     }
 
     /** @return the comparison of methods (computed after the design; see {@code DesignRun}) */

@@ -25,7 +25,9 @@ import org.apache.pdfbox.rendering.PDFRenderer;
 import org.counterpoise.core.design.DesignDossier;
 import org.counterpoise.io.project.Project;
 import org.counterpoise.io.project.ProjectIdentity;
+import org.counterpoise.io.sheet.RunUpPanel;
 import org.counterpoise.io.sheet.SheetFiles;
+import org.counterpoise.io.sheet.SheetPanel;
 import org.counterpoise.ui.gui.task.TaskRunner;
 
 /**
@@ -166,12 +168,16 @@ final class SheetStep extends Step {
         String date = issued();
         String revision = revision("A");
         ProjectIdentity identity = project.identity();
+        Project p = project;
         tasks.requested("Saving the sheet " + file.getFileName(), progress -> {
             progress.phase("Monte Carlo");
             d.monteCarlo(progress); // already made for this state unless the robustness step is still at it
             progress.checkCancelled();
+            progress.phase("run-up");
+            SheetPanel runUp = RunUpPanel.of(p, d.design(), progress); // as `sheet` prints it (the preview is page 1)
             progress.phase("drawing");
-            SheetFiles.writeSheet(d, notes, file, date, revision, true, "sheet file", identity);
+            new SheetFiles.Outputs(d).panel(runUp).sheet(file, notes, date, revision, "sheet file", identity)
+                    .write(true);
             return file;
         }, f -> messages.say("Saved the sheet to " + f + "."),
                 e -> JOptionPane.showMessageDialog(page, e.getMessage(), "Save sheet", JOptionPane.WARNING_MESSAGE),
