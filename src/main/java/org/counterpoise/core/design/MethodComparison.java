@@ -4,9 +4,13 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 import java.util.concurrent.atomic.AtomicInteger;
-import java.util.stream.IntStream;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.Future;
 import org.counterpoise.core.error.CoreException;
 import org.counterpoise.core.error.InvalidInputException;
+import org.counterpoise.core.error.Messages;
 import org.counterpoise.core.error.NotFoundException;
 import org.counterpoise.core.model.Tuning;
 import org.counterpoise.core.progress.ProgressListener;
@@ -47,6 +51,13 @@ public record MethodComparison(List<Candidate> candidates, List<LeftOut> leftOut
     /** The methods compared, in the order shown: the one list. */
     public static final List<DesignMethod> COMPARED = List.of(DesignMethod.EQUAL_PEAK, DesignMethod.EXACT_PEAK,
             DesignMethod.ROBUST_WORST_CASE, DesignMethod.ROBUST_P95, DesignMethod.UNDAMPED_SINGLE_SPEED);
+
+    /** Threads that design the candidates (daemons, so they never hold the program open). */
+    private static final ExecutorService CANDIDATE_THREADS = Executors.newCachedThreadPool(r -> {
+        Thread t = new Thread(r, "method-comparison");
+        t.setDaemon(true);
+        return t;
+    });
 
     /** Relative difference of worst cases taken as a tie (the recommended method then wins the tie). */
     static final double TIE = 1e-9;
@@ -144,18 +155,38 @@ public record MethodComparison(List<Candidate> candidates, List<LeftOut> leftOut
         double mu = chosen.tuning().massRatio();
         listener.checkCancelled("the comparison of methods");
         listener.progress(0.0);
-        // The candidates are independent designs: computed on all cores (the caller's thread takes
-        // part), each into its own slot, then gathered in the order of the methods, so the output is
-        // the sequential one. Every design is a pure function of its study (its own parallel parts
-        // write into slots too), so no figure depends on the threads.
+        // The candidates are independent designs: each on a thread of its own, gathered in the
+        // order of the methods, so the output is the sequential one. Plain threads, not the common
+        // pool: a pool thread that waits on its own inner parallel work may help by running a whole
+        // other design, which would keep this one waiting. Every design is a pure function of its
+        // study (its own parallel parts write into slots), so no figure depends on the threads.
         Thread caller = Thread.currentThread();
         ProgressListener shared = sharedBy(listener, caller);
         AtomicInteger done = new AtomicInteger();
-        List<Outcome> outcomes = IntStream.range(0, methods.size()).parallel().mapToObj(i -> {
-            Outcome o = outcome(chosen, methods.get(i), mu, shared);
-            shared.progress((double) done.incrementAndGet() / methods.size());
-            return o;
-        }).toList();
+        List<Future<Outcome>> futures = new ArrayList<>();
+        for (DesignMethod m : methods) {
+            futures.add(CANDIDATE_THREADS.submit(() -> {
+                Outcome o = outcome(chosen, m, mu, shared);
+                shared.progress((double) done.incrementAndGet() / methods.size());
+                return o;
+            }));
+        }
+        List<Outcome> outcomes = new ArrayList<>();
+        try {
+            for (Future<Outcome> f : futures) {
+                outcomes.add(f.get());
+            }
+        } catch (InterruptedException e) {
+            futures.forEach(f -> f.cancel(true));
+            Thread.currentThread().interrupt();
+            throw new CoreException(Messages.CANCELLED, "the comparison of methods");
+        } catch (ExecutionException e) {
+            // outcome() returns every exception as a value; only an Error gets here
+            if (e.getCause() instanceof Error error) {
+                throw error;
+            }
+            throw new IllegalStateException(e.getCause());
+        }
         List<Candidate> candidates = new ArrayList<>();
         for (int i = 0; i < methods.size(); i++) {
             Outcome o = outcomes.get(i);
