@@ -7,7 +7,8 @@ import org.counterpoise.core.error.Checks;
  * What the designer cannot change: a stroke clearance the absorber must stay within, a given
  * damper (an elastomer, a stock damper) or a given tuning. An empty value means "free".
  *
- * @param strokeLimit largest allowed peak absorber stroke over the band at the design amplitude, m
+ * @param strokeLimit largest allowed peak absorber stroke from standstill to the top of the band (the
+ *     run-up, steady state) at the design amplitude, m
  * @param fixedDampingRatio the absorber damping ratio zeta_a, held fixed
  * @param fixedTuningRatio the tuning ratio f, held fixed
  */

@@ -1,6 +1,7 @@
 package org.counterpoise.core.optim;
 
 import java.util.Arrays;
+import java.util.List;
 import org.apache.commons.math3.linear.Array2DRowRealMatrix;
 import org.apache.commons.math3.linear.ArrayRealVector;
 import org.apache.commons.math3.linear.LUDecomposition;
@@ -25,6 +26,13 @@ import org.counterpoise.core.response.TuningSensitivity;
  * first-order conditions for a minimum of the largest of the active maxima (Demyanov and
  * Malozemov 1974, Introduction to Minimax, ch. 2); the caller verifies the sign of the
  * multipliers and that no other maximum is higher.
+ *
+ * <p>With the stroke limit active, the stroke's highest maximum over the run-up joins the set as
+ * one more active maximum, tied to the limit instead of to the others: unknowns gain its frequency
+ * (when interior), equations gain its stationarity and ln s - ln L = 0, and with one active
+ * maximum of the objective and two free variables the objective's and the stroke's gradients are
+ * parallel (the Karush-Kuhn-Tucker condition; the sign of the multiplier is checked by
+ * {@link MinimaxCertificate}).
  */
 final class ActiveSetNewton {
     private static final int MAX_ITERATIONS = 40;
@@ -35,6 +43,10 @@ final class ActiveSetNewton {
     private final double[] fixedX;
     private final boolean tuningFree;
     private final boolean dampingFree;
+    /** true when the stroke limit is one of the active maxima */
+    private final boolean stroke;
+    private final boolean strokeInterior;
+    private final double strokeX;
     private int evaluations;
 
     /**
@@ -43,11 +55,65 @@ final class ActiveSetNewton {
      * @param x for each active maximum: its starting (interior) or fixed (band end) x = g^2
      */
     ActiveSetNewton(PeakProblem problem, boolean[] interior, double[] x) {
+        this(problem, interior, x, false, false, Double.NaN);
+    }
+
+    /**
+     * @param problem the problem, with a stroke limit
+     * @param candidates candidate maxima of the objective {x, 1 for interior or 0 for a band end, value}
+     * @param set indices of the active ones
+     * @param strokeInterior true when the active stroke maximum is interior to the run-up, false
+     *     for an end of it
+     * @param strokeX its starting (interior) or fixed (end) x = g^2
+     * @return the solver with the stroke limit active
+     */
+    static ActiveSetNewton withStroke(PeakProblem problem, List<double[]> candidates, int[] set,
+            boolean strokeInterior, double strokeX) {
+        return new ActiveSetNewton(problem, interiorOf(candidates, set), xOf(candidates, set), true, strokeInterior,
+                strokeX);
+    }
+
+    /**
+     * @param problem the problem
+     * @param candidates candidate maxima {x, 1 for interior or 0 for a band end, value}
+     * @param set indices of the active ones
+     * @return the solver for that active set (no stroke limit)
+     */
+    static ActiveSetNewton of(PeakProblem problem, List<double[]> candidates, int[] set) {
+        return new ActiveSetNewton(problem, interiorOf(candidates, set), xOf(candidates, set));
+    }
+
+    private static boolean[] interiorOf(List<double[]> candidates, int[] set) {
+        boolean[] interior = new boolean[set.length];
+        for (int i = 0; i < set.length; i++) {
+            interior[i] = candidates.get(set[i])[1] > 0;
+        }
+        return interior;
+    }
+
+    private static double[] xOf(List<double[]> candidates, int[] set) {
+        double[] x = new double[set.length];
+        for (int i = 0; i < set.length; i++) {
+            x[i] = candidates.get(set[i])[0];
+        }
+        return x;
+    }
+
+    private ActiveSetNewton(PeakProblem problem, boolean[] interior, double[] x, boolean stroke,
+            boolean strokeInterior, double strokeX) {
         this.problem = problem;
         this.interior = interior.clone();
         this.fixedX = x.clone();
         this.tuningFree = Double.isNaN(problem.fixedTuning());
         this.dampingFree = Double.isNaN(problem.fixedDamping());
+        this.stroke = stroke;
+        this.strokeInterior = stroke && strokeInterior;
+        this.strokeX = strokeX;
+    }
+
+    /** @return for each active maximum of the objective: true for an interior peak, false for a band end */
+    boolean[] interior() {
+        return interior.clone();
     }
 
     int evaluations() {
@@ -62,13 +128,14 @@ final class ActiveSetNewton {
     boolean isSquare() {
         int k = interior.length;
         int d = freeCount();
-        return d >= 1 && k >= 1 && k <= d + 1;
+        return d >= 1 && k >= 1 && k <= d + (stroke ? 0 : 1);
     }
 
     /**
      * @param f starting tuning ratio
      * @param zeta starting damping ratio
-     * @return the solution {f, zeta, x_0, ..., x_k-1}, or null when Newton did not converge
+     * @return the solution {f, zeta, x_0, ..., x_k-1} (and the stroke's x last when the stroke is
+     *     active), or null when Newton did not converge
      */
     double[] solve(double f, double zeta) {
         double[] u = initialUnknowns(f, zeta);
@@ -134,7 +201,7 @@ final class ActiveSetNewton {
     }
 
     private double[] initialUnknowns(double f, double zeta) {
-        double[] u = new double[freeCount() + countInterior()];
+        double[] u = new double[freeCount() + countInterior() + (strokeInterior ? 1 : 0)];
         int n = 0;
         if (tuningFree) {
             u[n++] = f;
@@ -146,6 +213,9 @@ final class ActiveSetNewton {
             if (interior[i]) {
                 u[n++] = fixedX[i];
             }
+        }
+        if (strokeInterior) {
+            u[n] = strokeX;
         }
         return u;
     }
@@ -162,12 +232,15 @@ final class ActiveSetNewton {
 
     /** @return {f, zeta, x_0..x_k-1} */
     private double[] solution(double[] u) {
-        double[] out = new double[2 + interior.length];
+        double[] out = new double[2 + interior.length + (stroke ? 1 : 0)];
         int n = 0;
         out[0] = tuningFree ? u[n++] : problem.fixedTuning();
         out[1] = dampingFree ? u[n++] : problem.fixedDamping();
         for (int i = 0; i < interior.length; i++) {
             out[2 + i] = interior[i] ? u[n++] : fixedX[i];
+        }
+        if (stroke) {
+            out[2 + interior.length] = strokeInterior ? u[n] : strokeX;
         }
         return out;
     }
@@ -205,6 +278,28 @@ final class ActiveSetNewton {
             out[n++] = logValue[0] - logValue[j];
         }
         int d = freeCount();
+        if (stroke) {
+            double xs = s[2 + k];
+            if (!(xs >= 0)) {
+                return null;
+            }
+            TransferFunction strokeFunction = problem.strokeTransferFunction(f, zeta);
+            double logStroke = strokeFunction.logMagnitudeSquared(xs);
+            if (!Double.isFinite(logStroke)) {
+                return null;
+            }
+            if (strokeInterior) {
+                out[n++] = xs * strokeFunction.logMagnitudeSquaredSlope(xs);
+            }
+            out[n++] = logStroke - 2 * Math.log(problem.strokeLimit());
+            if (k == 1 && d == 2) {
+                double[] g0 = gradient(sensitivity, f, zeta, x[0]);
+                double[] gs = gradient(problem.strokeSensitivity(f, zeta), f, zeta, xs);
+                double scale = Math.hypot(g0[0], g0[1]) * Math.hypot(gs[0], gs[1]);
+                out[n++] = scale > 0 ? (g0[0] * gs[1] - g0[1] * gs[0]) / scale : 0.0;
+            }
+            return out;
+        }
         if (k == 1) {
             for (double component : gradient(sensitivity, f, zeta, x[0])) {
                 out[n++] = component;

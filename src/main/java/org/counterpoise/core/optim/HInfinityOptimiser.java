@@ -51,7 +51,8 @@ public final class HInfinityOptimiser {
      */
     public static PeakOptimum optimise(PeakProblem problem) {
         EvaluationCounter counter = new EvaluationCounter();
-        if (!Double.isNaN(problem.strokeLimit())) {
+        if (problem.hasStrokeLimit()) {
+            // the limit holds over the run-up [0, strokeTop]: a loose limit leaves the free optimum
             PeakOptimum free = unconstrained(problem.withStrokeLimit(Double.NaN), counter);
             if (problem.strokePeak(free.tuning().tuningRatio(), free.tuning().dampingRatio())
                     <= problem.strokeLimit()) {
@@ -167,6 +168,17 @@ public final class HInfinityOptimiser {
         return peak <= scan.lowest() * (1 + SCAN_MARGIN) && stationary;
     }
 
+    /**
+     * The first verified active set of the free problem from a start (as the optimiser tries them),
+     * for the stroke-limited search when its best design lies off the limit.
+     *
+     * @return {f, zeta, peak}, or null when no active set from there is verified
+     */
+    static double[] freeActiveSet(PeakProblem problem, double f, double zeta, EvaluationCounter counter) {
+        Best best = new Best();
+        return tryActiveSets(problem, f, zeta, best, counter) ? new double[] {best.f, best.zeta, best.peak} : null;
+    }
+
     /** Nelder-Mead on the exact peak from the best point so far, then the active sets from there. */
     private static void polish(PeakProblem problem, Best best, EvaluationCounter counter) {
         double[] near = PeakDirectSearch.nelderMead(problem, new double[] {best.f, best.zeta}, counter);
@@ -218,13 +230,7 @@ public final class HInfinityOptimiser {
             }
         }
         for (int[] set : sets) {
-            boolean[] interior = new boolean[set.length];
-            double[] x = new double[set.length];
-            for (int i = 0; i < set.length; i++) {
-                interior[i] = candidates.get(set[i])[1] > 0;
-                x[i] = candidates.get(set[i])[0];
-            }
-            ActiveSetNewton newton = new ActiveSetNewton(problem, interior, x);
+            ActiveSetNewton newton = ActiveSetNewton.of(problem, candidates, set);
             if (!newton.isSquare()) {
                 continue;
             }
@@ -237,7 +243,7 @@ public final class HInfinityOptimiser {
             double peak = PeakScan.peakOf(problem, s[0], s[1], counter);
             if (peak <= active * (1 + ACCEPT) && isLocalMinimum(problem, s[0], s[1], peak, counter)
                     && MinimaxCertificate.isStationary(problem, s[0], s[1])) {
-                best.offer(s[0], s[1], peak, describe(interior, problem.fixedDamping() == 0.0), true);
+                best.offer(s[0], s[1], peak, describe(newton.interior(), problem.fixedDamping() == 0.0), true);
                 return true;
             }
         }

@@ -23,6 +23,13 @@ import org.counterpoise.core.response.TuningSensitivity;
  * <p>Gradients are exact ({@link TuningSensitivity}) at the frozen frequency of each maximum (the
  * envelope theorem), in the variables (ln f, zeta_a / max(zeta_a, 0.01)) so that both are
  * dimensionless and of order one.
+ *
+ * <p>With a stroke limit on its bound (the run-up stroke within {@link #ACTIVE} of the limit) the
+ * constraint s(p) &lt;= L enters as in the Karush-Kuhn-Tucker conditions: the gradients of the
+ * stroke's active maxima over the run-up join with multipliers nu_j &gt;= 0 of any size, r = sum
+ * lambda_i grad ln h_i + sum nu_j grad ln s_j (a minimax of the objective subject to a minimax
+ * constraint, Demyanov and Malozemov 1974, ch. 2; Clarke 1983, Optimization and Nonsmooth
+ * Analysis, section 6.1). A limit that is not reached adds nothing.
  */
 final class MinimaxCertificate {
     /** A maximum is active when within this relative distance of the peak. */
@@ -102,6 +109,11 @@ final class MinimaxCertificate {
                 largest = Math.max(largest, Math.hypot(g[0], g[1]));
             }
         }
+        List<double[]> strokeGradients = p.hasStrokeLimit() ? strokeGradients(p, f, zeta, tuningFree, dampingFree)
+                : List.of();
+        if (strokeGradients == null) {
+            return Double.POSITIVE_INFINITY;
+        }
         if (gradients.isEmpty()) {
             // The peak is only approached towards infinite frequency. There the absorber's spring
             // and damper (K(s) = f^2 + 2 zeta_a f s, of degree one) drop out of the leading terms of
@@ -132,9 +144,26 @@ final class MinimaxCertificate {
             }
             lipschitz += g[i][0] * g[i][0] + g[i][1] * g[i][1];
         }
+        // stroke generators in the same scaled variables, each of unit length (its multiplier is
+        // unbounded, so only its direction matters)
+        int m = strokeGradients.size();
+        double[][] s = new double[m][];
+        for (int j = 0; j < m; j++) {
+            s[j] = new double[2];
+            for (int c = 0; c < 2; c++) {
+                s[j][c] = scale[c] > 1e-14 * largest && scale[c] > 1e-300 ? strokeGradients.get(j)[c] / scale[c] : 0.0;
+            }
+            double length = Math.hypot(s[j][0], s[j][1]);
+            if (length > 0) {
+                s[j][0] /= length;
+                s[j][1] /= length;
+            }
+            lipschitz += 1.0;
+        }
         double step = 0.5 / Math.max(lipschitz, 1e-12);
         double[] lambda = new double[k];
         Arrays.fill(lambda, 1.0 / k);
+        double[] nu = new double[m];
         double[] sorted = new double[k];
         double best = Double.POSITIVE_INFINITY;
         for (int iteration = 0; iteration < STEPS; iteration++) {
@@ -143,6 +172,10 @@ final class MinimaxCertificate {
             for (int i = 0; i < k; i++) {
                 r0 += lambda[i] * g[i][0];
                 r1 += lambda[i] * g[i][1];
+            }
+            for (int j = 0; j < m; j++) {
+                r0 += nu[j] * s[j][0];
+                r1 += nu[j] * s[j][1];
             }
             double v0 = allowedPart(r0, side[0]);
             double v1 = allowedPart(r1, side[1]);
@@ -153,9 +186,49 @@ final class MinimaxCertificate {
             for (int i = 0; i < k; i++) {
                 lambda[i] = lambda[i] - step * 2 * (v0 * g[i][0] + v1 * g[i][1]);
             }
+            for (int j = 0; j < m; j++) {
+                nu[j] = Math.max(0.0, nu[j] - step * 2 * (v0 * s[j][0] + v1 * s[j][1]));
+            }
             projectOntoSimplex(lambda, sorted);
         }
         return best;
+    }
+
+    /**
+     * @return the gradients (in the free variables, unscaled) of the stroke's maxima over the
+     *     run-up that are within {@link #ACTIVE} of the limit; empty when the limit is not reached;
+     *     null when a gradient is not finite
+     */
+    private static List<double[]> strokeGradients(PeakProblem p, double f, double zeta, boolean tuningFree,
+            boolean dampingFree) {
+        TransferFunction stroke = p.strokeTransferFunction(f, zeta);
+        List<Double> xs = new ArrayList<>();
+        for (double g : PeakFinder.interiorMaxima(stroke, 0.0, p.strokeTop())) {
+            xs.add(g * g);
+        }
+        xs.add(0.0);
+        if (Double.isFinite(p.strokeTop())) {
+            xs.add(p.strokeTop() * p.strokeTop());
+        }
+        List<double[]> out = new ArrayList<>();
+        double level = p.strokeLimit() * (1 - ACTIVE);
+        TuningSensitivity sensitivity = null;
+        for (double x : xs) {
+            double value = stroke.magnitude(Math.sqrt(x));
+            if (!(value >= level) || x == 0.0 && !(value > 0)) {
+                continue;
+            }
+            if (sensitivity == null) {
+                sensitivity = p.strokeSensitivity(f, zeta);
+            }
+            double[] full = sensitivity.gradient(x);
+            double[] g = {tuningFree ? f * full[0] : 0.0, dampingFree ? Math.max(zeta, 1e-2) * full[1] : 0.0};
+            if (!Double.isFinite(g[0]) || !Double.isFinite(g[1])) {
+                return null;
+            }
+            out.add(g);
+        }
+        return out;
     }
 
     private static int boundSide(boolean free, double value, double low, double high) {

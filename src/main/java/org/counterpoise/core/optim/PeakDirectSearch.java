@@ -26,7 +26,8 @@ final class PeakDirectSearch {
      * optimum is too flat in one variable to locate it to round-off (a very narrow band, a tiny
      * damping), no move of 10^-1 ... 10^-8 (relative in f; times max(zeta_a, 0.01) in zeta_a) in
      * any of the eight directions of the (f, zeta_a) plane, inside the box, lowers the peak by more
-     * than 1e-9 relative.
+     * than 1e-9 relative. With a stroke limit only feasible moves count (run-up stroke within
+     * the limit).
      */
     static boolean noDescentByProbe(PeakProblem p, double f, double zeta, double peak, EvaluationCounter counter) {
         double floor = peak * (1 - PROBE_MARGIN);
@@ -44,7 +45,8 @@ final class PeakDirectSearch {
                     if (zt < 0 || !p.inBox(ft, zt)) {
                         continue;
                     }
-                    if (PeakScan.peakOf(p, ft, zt, counter) < floor) {
+                    if (PeakScan.peakOf(p, ft, zt, counter) < floor
+                            && (!p.hasStrokeLimit() || p.strokePeak(ft, zt) <= p.strokeLimit())) {
                         return false;
                     }
                 }

@@ -25,12 +25,15 @@ import org.counterpoise.core.response.TuningSensitivity;
  * @param bandHigh highest frequency ratio g (&gt; bandLow; +infinity for all frequencies)
  * @param fixedTuning a fixed tuning ratio f, or NaN when f is free
  * @param fixedDamping a fixed absorber damping ratio, or NaN when zeta_a is free
- * @param strokeLimit the largest allowed peak absorber stroke over the band, non-dimensional
- *     (divided by the reference length of ResponseScale), or NaN for no limit
+ * @param strokeLimit the largest allowed peak absorber stroke over the run-up [0, strokeTop],
+ *     non-dimensional (divided by the reference length of ResponseScale), or NaN for no limit
+ * @param strokeTop the top of the frequency ratios the stroke limit covers: every machine passes
+ *     through the lower coupled frequency as it starts and stops, so the limit holds from zero
+ *     frequency up to this (the top of the band, or the one forcing frequency); NaN without a limit
  */
 public record PeakProblem(ExcitationKind excitation, ResponseKind response, double massRatio,
         double structureDamping, double bandLow, double bandHigh, double fixedTuning, double fixedDamping,
-        double strokeLimit) {
+        double strokeLimit, double strokeTop) {
 
     /**
      * A problem without a stroke limit.
@@ -46,7 +49,7 @@ public record PeakProblem(ExcitationKind excitation, ResponseKind response, doub
     public PeakProblem(ExcitationKind excitation, ResponseKind response, double massRatio, double structureDamping,
             double bandLow, double bandHigh, double fixedTuning, double fixedDamping) {
         this(excitation, response, massRatio, structureDamping, bandLow, bandHigh, fixedTuning, fixedDamping,
-                Double.NaN);
+                Double.NaN, Double.NaN);
     }
 
     /** Validates the problem; each message names the option a user sets. */
@@ -70,6 +73,10 @@ public record PeakProblem(ExcitationKind excitation, ResponseKind response, doub
         }
         if (!Double.isNaN(strokeLimit)) {
             Checks.positive("stroke limit", strokeLimit);
+            if (!(strokeTop > 0)) {
+                throw new InvalidInputException("stroke limit", Checks.show(strokeTop),
+                        "the run-up range of a stroke limit must end above zero frequency");
+            }
         }
         if (response == ResponseKind.STROKE || response.needsAbsorber()) {
             throw new InvalidInputException("response", response.name().toLowerCase(Locale.ROOT),
@@ -116,7 +123,7 @@ public record PeakProblem(ExcitationKind excitation, ResponseKind response, doub
      */
     public PeakProblem withFixedTuning(double f) {
         return new PeakProblem(excitation, response, massRatio, structureDamping, bandLow, bandHigh, f, fixedDamping,
-                strokeLimit);
+                strokeLimit, strokeTop);
     }
 
     /**
@@ -125,7 +132,7 @@ public record PeakProblem(ExcitationKind excitation, ResponseKind response, doub
      */
     public PeakProblem withFixedDamping(double zeta) {
         return new PeakProblem(excitation, response, massRatio, structureDamping, bandLow, bandHigh, fixedTuning, zeta,
-                strokeLimit);
+                strokeLimit, strokeTop);
     }
 
     /**
@@ -134,28 +141,67 @@ public record PeakProblem(ExcitationKind excitation, ResponseKind response, doub
      */
     public PeakProblem withMassRatio(double mu) {
         return new PeakProblem(excitation, response, mu, structureDamping, bandLow, bandHigh, fixedTuning, fixedDamping,
-                strokeLimit);
+                strokeLimit, strokeTop);
     }
 
     /**
-     * @param limit largest allowed non-dimensional peak stroke over the band
-     * @return this problem with that stroke limit
+     * @param limit largest allowed non-dimensional peak stroke over the run-up [0, bandHigh] (NaN: none)
+     * @return this problem with that stroke limit, over zero frequency up to the top of the band
      */
     public PeakProblem withStrokeLimit(double limit) {
+        return withStrokeLimit(limit, bandHigh);
+    }
+
+    /**
+     * @param limit largest allowed non-dimensional peak stroke over the run-up [0, top] (NaN: none)
+     * @param top the highest frequency ratio of the run-up (the top of the band, or the one
+     *     forcing frequency when the band of the peak is wider)
+     * @return this problem with that stroke limit
+     */
+    public PeakProblem withStrokeLimit(double limit, double top) {
         return new PeakProblem(excitation, response, massRatio, structureDamping, bandLow, bandHigh, fixedTuning,
-                fixedDamping, limit);
+                fixedDamping, limit, Double.isNaN(limit) ? Double.NaN : top);
+    }
+
+    /** @return true when the problem has a stroke limit */
+    public boolean hasStrokeLimit() {
+        return !Double.isNaN(strokeLimit);
     }
 
     /**
      * @param f tuning ratio
      * @param zeta absorber damping ratio
-     * @return the peak non-dimensional stroke over the band for the design (f, zeta)
+     * @return the peak non-dimensional stroke over the run-up [0, strokeTop] for the design (f, zeta)
+     *     (fixed values override); +infinity where it is unbounded
      */
     public double strokePeak(double f, double zeta) {
-        return PeakFinder.over(
-                TransferFunctions.of(excitation, ResponseKind.STROKE, structureDamping, tuning(f, zeta)),
-                bandLow, bandHigh).magnitude();
+        return PeakFinder.over(strokeTransferFunction(f, zeta), 0.0, strokeTop).magnitude();
     }
+
+    /**
+     * @param f tuning ratio
+     * @param zeta absorber damping ratio
+     * @return the absorber stroke's transfer function for the design (f, zeta) (fixed values override)
+     */
+    public TransferFunction strokeTransferFunction(double f, double zeta) {
+        return TransferFunctions.of(excitation, ResponseKind.STROKE, structureDamping, tuning(f, zeta));
+    }
+
+    /**
+     * @param f tuning ratio
+     * @param zeta absorber damping ratio
+     * @return exact derivatives of ln|stroke|^2 in f and zeta_a for the design (f, zeta)
+     */
+    public TuningSensitivity strokeSensitivity(double f, double zeta) {
+        return TransferFunctions.sensitivity(excitation, ResponseKind.STROKE, structureDamping, tuning(f, zeta));
+    }
+
+    /**
+     * Relative round-off within which a stroke on its limit counts as on it, not over it: the
+     * optimiser holds the run-up stroke at the limit to this, and a check of a design against its
+     * limit (in SI, after the conversion) must allow it too.
+     */
+    public static final double STROKE_LIMIT_ROUND_OFF = 1e-9;
 
     /**
      * The largest absorber damping ratio any optimiser considers: beyond it the absorber is

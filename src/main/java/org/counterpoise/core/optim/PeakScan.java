@@ -155,23 +155,8 @@ final class PeakScan {
 
     /** The designs of the global scan in grid order, classical designs last. */
     private static List<double[]> globalDesigns(PeakProblem p) {
-        List<Double> tunings = new ArrayList<>();
-        if (!Double.isNaN(p.fixedTuning())) {
-            tunings.add(p.fixedTuning());
-        } else {
-            for (int i = 0; i < BOX_TUNINGS; i++) {
-                tunings.add(p.minTuning() * Math.pow(p.maxTuning() / p.minTuning(), i / (BOX_TUNINGS - 1.0)));
-            }
-            if (!p.allFrequencies()) {
-                double top = Double.isFinite(p.bandHigh()) ? p.bandHigh() : 2 * Math.max(p.bandLow(), 0.5);
-                for (int i = 0; i < BAND_TUNINGS; i++) {
-                    double f = p.bandLow() + (top - p.bandLow()) * (i + 0.5) / BAND_TUNINGS;
-                    if (f >= p.minTuning() && f <= p.maxTuning()) {
-                        tunings.add(f);
-                    }
-                }
-            }
-        }
+        List<Double> tunings = !Double.isNaN(p.fixedTuning()) ? List.of(p.fixedTuning())
+                : tunings(p, BOX_TUNINGS, BAND_TUNINGS);
         List<Double> dampings = new ArrayList<>();
         if (!Double.isNaN(p.fixedDamping())) {
             dampings.add(p.fixedDamping());
@@ -191,6 +176,27 @@ final class PeakScan {
             designs.add(new double[] {fixedOr(p.fixedTuning(), t.tuningRatio()), fixedOr(p.fixedDamping(), t.dampingRatio())});
         }
         return designs;
+    }
+
+    /**
+     * Tunings of a scan: {@code box} log-spaced over the search box, then {@code inBand} spread
+     * over the band (centres of equal parts; an open band taken up to twice its low end, at least 1).
+     */
+    static List<Double> tunings(PeakProblem p, int box, int inBand) {
+        List<Double> tunings = new ArrayList<>();
+        for (int i = 0; i < box; i++) {
+            tunings.add(p.minTuning() * Math.pow(p.maxTuning() / p.minTuning(), i / (box - 1.0)));
+        }
+        if (!p.allFrequencies()) {
+            double top = Double.isFinite(p.bandHigh()) ? p.bandHigh() : 2 * Math.max(p.bandLow(), 0.5);
+            for (int i = 0; i < inBand; i++) {
+                double f = p.bandLow() + (top - p.bandLow()) * (i + 0.5) / inBand;
+                if (f >= p.minTuning() && f <= p.maxTuning()) {
+                    tunings.add(f);
+                }
+            }
+        }
+        return tunings;
     }
 
     /** The published designs that apply to the problem's pair and mass ratio. */

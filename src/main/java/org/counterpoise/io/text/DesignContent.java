@@ -288,10 +288,16 @@ public final class DesignContent {
         begin();
         add(ReportKey.DETUNING_TARGET, "target (what the absorber achieves)", "",
                 quantity(d.target(), study.response().dimension()));
-        add(ReportKey.STIFFER, "stiffer", "", change(d.raiseFactor().orElse(Double.NaN), Changed.STIFFNESS, wn, zero));
-        add(ReportKey.SOFTER, "softer", "", change(d.lowerFactor().orElse(Double.NaN), Changed.STIFFNESS, wn, zero));
-        add(ReportKey.LIGHTER, "lighter", "", change(m.raiseFactor().orElse(Double.NaN), Changed.MASS, wn, zero));
-        add(ReportKey.HEAVIER, "heavier", "", change(m.lowerFactor().orElse(Double.NaN), Changed.MASS, wn, zero));
+        // an unbounded target (the design's own peak is unbounded) is no level to compare a structure with
+        boolean unbounded = Double.isInfinite(d.target());
+        add(ReportKey.STIFFER, "stiffer", "", unbounded ? new NotApplicable()
+                : change(d.raiseFactor().orElse(Double.NaN), Changed.STIFFNESS, wn, zero));
+        add(ReportKey.SOFTER, "softer", "", unbounded ? new NotApplicable()
+                : change(d.lowerFactor().orElse(Double.NaN), Changed.STIFFNESS, wn, zero));
+        add(ReportKey.LIGHTER, "lighter", "", unbounded ? new NotApplicable()
+                : change(m.raiseFactor().orElse(Double.NaN), Changed.MASS, wn, zero));
+        add(ReportKey.HEAVIER, "heavier", "", unbounded ? new NotApplicable()
+                : change(m.lowerFactor().orElse(Double.NaN), Changed.MASS, wn, zero));
         end(SectionId.ALTERNATIVE, "Alternative: change the structure itself instead");
     }
 

@@ -13,7 +13,7 @@ public final class MethodNoteText {
 
     /**
      * @param r a design
-     * @return its method note, e.g. "maxima equal at the optimum: ...; active constraint: stroke limit"
+     * @return its method note, e.g. "maxima equal at the optimum: ...; active constraint: stroke limit (held during run-up too)"
      */
     public static String of(DesignResult r) {
         ActiveConstraint c = r.activeConstraint();
@@ -27,7 +27,7 @@ public final class MethodNoteText {
     public static String words(ActiveConstraint c) {
         return switch (c) {
             case NONE -> "none";
-            case STROKE_LIMIT -> "stroke limit";
+            case STROKE_LIMIT -> "stroke limit (held during run-up too)";
             case FIXED_DAMPING -> "fixed damping";
             case FIXED_TUNING -> "fixed tuning";
             case TUNING_SEARCH_BOUND -> "tuning-ratio search bound";

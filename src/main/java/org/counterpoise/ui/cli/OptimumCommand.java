@@ -85,7 +85,8 @@ public final class OptimumCommand implements Callable<Integer> {
     private Double fixedTuning;
 
     @Option(names = "--stroke-limit", paramLabel = "S",
-            description = "largest allowed peak stroke over the band, in the stroke's normalisation")
+            description = "largest allowed peak stroke from zero frequency to the top of the band (the run-up),"
+                    + " in the stroke's normalisation")
     private Double strokeLimit;
 
     @Option(names = "--cases", paramLabel = "FILE",

@@ -145,7 +145,7 @@ class DesignWarningsTest {
     }
 
     @Test
-    void aStrokeLimitTheRunUpExceedsWarns() {
+    void aStrokeLimitHoldsDuringRunUpSoTheExactPeakDesignIsNotWarned() {
         // Acceleration under a force over a band around resonance: the exact-peak optimum is a
         // lightly damped notch whose lower coupled resonance, passed on run-up, has a large stroke.
         Excitation force = new Excitation(ExcitationKind.FORCE, 900, new FrequencyBand(0.94 * OMEGA1, 1.07 * OMEGA1));
@@ -153,16 +153,22 @@ class DesignWarningsTest {
         double runUp = free.runUpStroke().peak().value();
         double inBand = free.strokeInBand().value();
         assertTrue(runUp > 2 * inBand, "the case passes a larger stroke on run-up: " + runUp + " " + inBand);
-        // A limit between the two: the design meets it in band (the same design, while the stroke limit
-        // constrains the in-band stroke only), the run-up exceeds it.
+        // A limit between the two: exact-peak holds the steady-state stroke during run-up too (the
+        // stroke limit covers [0, top of band]), so the design moves onto the limit and is not warned.
         double limit = 0.5 * (runUp + inBand);
         DesignResult limited = Designer.design(accelerationStudy(force, new DesignConstraints(OptionalDouble.of(limit),
                 OptionalDouble.empty(), OptionalDouble.empty())));
-        assertEquals(free.tuning().tuningRatio(), limited.tuning().tuningRatio(), 1e-6);
-        Warning w = warning(limited, WarningKind.RUN_UP_OVER_STROKE_LIMIT).orElseThrow();
-        assertEquals(limit, w.number(WarningParameter.STROKE_LIMIT));
-        assertEquals(limited.runUpStroke().peak().value(), w.number(WarningParameter.RUN_UP_STROKE));
-        assertEquals("STEADY_STATE", w.token(WarningParameter.RUN_UP_BASIS));
+        assertEquals(limit, limited.runUpStroke().peak().value(), 1e-9 * limit);
+        assertFalse(warning(limited, WarningKind.RUN_UP_OVER_STROKE_LIMIT).isPresent());
+        // With a run-up rate the figure is the time integration's (from rest to 1.25 times the top of
+        // the band); passing the resonance at a finite rate gives less than the steady state (Lewis
+        // 1932), so the limited design stays within its limit and is not warned either.
+        Excitation ramped = force.withRunUpRate(2 * Math.PI * 2);
+        DesignResult transit = Designer.design(accelerationStudy(ramped, new DesignConstraints(OptionalDouble.of(limit),
+                OptionalDouble.empty(), OptionalDouble.empty())));
+        assertEquals(RunUpStroke.Basis.TRANSIENT, transit.runUpStroke().basis());
+        assertTrue(transit.runUpStroke().peak().value() < limit);
+        assertFalse(warning(transit, WarningKind.RUN_UP_OVER_STROKE_LIMIT).isPresent());
         // A limit above the run-up stroke: no warning.
         DesignResult roomy = Designer.design(accelerationStudy(force, new DesignConstraints(
                 OptionalDouble.of(2 * runUp), OptionalDouble.empty(), OptionalDouble.empty())));

@@ -112,15 +112,55 @@ class DesignerTest {
         DesignResult classical = Designer.design(study(s, e, DesignMethod.EQUAL_PEAK, AbsorberSizing.ofMassRatio(0.05)));
         DesignResult exact = Designer.design(study(s, e, DesignMethod.EXACT_PEAK, AbsorberSizing.ofMassRatio(0.05)));
         assertTrue(exact.responseAfter().value() <= classical.responseAfter().value());
-        // With a stroke limit below the free optimum's stroke, the stroke sits on the limit.
-        double limit = 0.8 * exact.strokeInBand().value();
+        // With a stroke limit below the free optimum's stroke, the stroke during run-up (from
+        // standstill to the top of the band: the limit covers it) sits on the limit.
+        double limit = 0.8 * exact.strokeRunUp().value();
         DesignStudy limited = new DesignStudy("t", s, e, ResponseKind.DISPLACEMENT, AbsorberSizing.ofMassRatio(0.05),
                 DesignMethod.EXACT_PEAK, false, 1.5, new DesignConstraints(OptionalDouble.of(limit), OptionalDouble.empty(),
                         OptionalDouble.empty()));
         DesignResult r = Designer.design(limited);
-        assertEquals(limit, r.strokeInBand().value(), 1e-9 * limit);
+        assertEquals(limit, r.strokeRunUp().value(), 1e-9 * limit);
+        assertTrue(r.strokeInBand().value() <= limit * (1 + 1e-9));
         assertTrue(r.responseAfter().value() >= exact.responseAfter().value());
         assertEquals(ActiveConstraint.STROKE_LIMIT, r.activeConstraint());
+    }
+
+    @Test
+    void aStrokeLimitMetInTheBandButNotDuringRunUpHoldsTheRunUpStroke() {
+        // A band above the structure's resonance: starting up, the machine passes through the lower
+        // coupled frequency, where the absorber swings more than anywhere in the band.
+        Structure s = Structure.of(800, 800 * Math.pow(2 * Math.PI * 25, 2), 0.02);
+        Excitation e = new Excitation(ExcitationKind.FORCE, 400, new FrequencyBand(2 * Math.PI * 29, 2 * Math.PI * 33));
+        DesignResult free = Designer.design(study(s, e, DesignMethod.EXACT_PEAK, AbsorberSizing.ofMassRatio(0.05)));
+        double inBand = free.strokeInBand().value();
+        double runUp = free.strokeRunUp().value();
+        assertTrue(runUp > 1.2 * inBand, "run-up " + runUp + " in band " + inBand);
+        double limit = 0.5 * (inBand + runUp);
+        DesignResult r = Designer.design(new DesignStudy("t", s, e, ResponseKind.DISPLACEMENT,
+                AbsorberSizing.ofMassRatio(0.05), DesignMethod.EXACT_PEAK, false, 1.5,
+                new DesignConstraints(OptionalDouble.of(limit), OptionalDouble.empty(), OptionalDouble.empty())));
+        // independent route: the run-up stroke by the exact peak search of SystemResponse over [0, top of band]
+        double held = new SystemResponse(s, r.tuning(), ExcitationKind.FORCE, 400)
+                .peakBetween(ResponseKind.STROKE, 0.0, 2 * Math.PI * 33).value();
+        assertEquals(limit, held, 1e-9 * limit);
+        assertEquals(ActiveConstraint.STROKE_LIMIT, r.activeConstraint());
+        assertTrue(r.responseAfter().value() > free.responseAfter().value());
+    }
+
+    @Test
+    void aStrokeLimitOnOneSpeedHoldsFromStandstillToThatSpeed() {
+        Structure s = Structure.of(800, 800 * Math.pow(2 * Math.PI * 25, 2), 0.02);
+        double speed = 2 * Math.PI * 27;
+        Excitation e = new Excitation(ExcitationKind.FORCE, 400, FrequencyBand.single(speed));
+        DesignResult free = Designer.design(study(s, e, DesignMethod.EXACT_PEAK, AbsorberSizing.ofMassRatio(0.05)));
+        double limit = 0.7 * free.strokeRunUp().value();
+        DesignResult r = Designer.design(new DesignStudy("t", s, e, ResponseKind.DISPLACEMENT,
+                AbsorberSizing.ofMassRatio(0.05), DesignMethod.EXACT_PEAK, false, 1.5,
+                new DesignConstraints(OptionalDouble.of(limit), OptionalDouble.empty(), OptionalDouble.empty())));
+        double held = new SystemResponse(s, r.tuning(), ExcitationKind.FORCE, 400)
+                .peakBetween(ResponseKind.STROKE, 0.0, speed).value();
+        assertEquals(limit, held, 1e-9 * limit);
+        assertEquals(limit, r.strokeRunUp().value(), 1e-9 * limit);
     }
 
     @Test

@@ -32,7 +32,7 @@ class MethodNoteTextTest {
     @Test
     void aStrokeLimitedDesignSaysSoAsBefore() {
         // An invented floor, 800 kg at 25 Hz, forced over 22-28 Hz; the stroke limited to 80 % of the
-        // free exact optimum's stroke (the limit is then active: the stroke sits on it).
+        // free exact optimum's stroke during run-up (the limit is then active: that stroke sits on it).
         Structure s = Structure.of(800, 800 * Math.pow(2 * Math.PI * 25, 2), 0.02);
         Excitation e = new Excitation(ExcitationKind.FORCE, 400,
                 new FrequencyBand(2 * Math.PI * 22, 2 * Math.PI * 28));
@@ -42,11 +42,11 @@ class MethodNoteTextTest {
         assertEquals(free.methodNote(), MethodNoteText.of(free));
         DesignResult limited = Designer.design(new DesignStudy("t", s, e, ResponseKind.DISPLACEMENT,
                 AbsorberSizing.ofMassRatio(0.05), DesignMethod.EXACT_PEAK, false, 1.5, new DesignConstraints(
-                        OptionalDouble.of(0.8 * free.strokeInBand().value()), OptionalDouble.empty(),
+                        OptionalDouble.of(0.8 * free.strokeRunUp().value()), OptionalDouble.empty(),
                         OptionalDouble.empty())));
         assertEquals(ActiveConstraint.STROKE_LIMIT, limited.activeConstraint());
         String note = MethodNoteText.of(limited);
-        assertTrue(note.startsWith("maxima equal at the optimum: ") && note.endsWith("; active constraint: stroke limit"),
+        assertTrue(note.startsWith("maxima equal at the optimum: ") && note.endsWith("; active constraint: stroke limit (held during run-up too)"),
                 note);
     }
 }

@@ -128,7 +128,7 @@ final class GoalStep extends Step {
         form.row("Design method", 'm', method, "How tuning and damping are chosen");
         form.row("Response that matters", 'r', response, "The response the design reduces");
         form.row("Stroke margin", 'n', margin, "Clearance over the computed stroke");
-        form.row("Stroke limit (optional)", 't', strokeLimit, "Clearance available in the band, exact-peak only");
+        form.row("Stroke limit (optional)", 't', strokeLimit, "Largest stroke allowed from standstill to the top of the band (run-up too), exact-peak only");
         form.row("", (char) 0, hangs, "Gives the static deflection of the spring");
         form.row("Largest mass ratio (target)", 'x', maxMassRatio,
                 "With a target: the search for the lightest absorber stops here; empty for the default");
