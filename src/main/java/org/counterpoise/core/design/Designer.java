@@ -315,8 +315,9 @@ public final class Designer {
 
     private static void addWarnings(List<Warning> warnings, DesignStudy study, Built d) {
         ToleranceRanges stated = study.robustness().ranges();
-        narrower(warnings, WarningKind.STRUCTURE_TOLERANCE_NARROW, d.structure(), stated.structure());
-        narrower(warnings, WarningKind.ABSORBER_TOLERANCE_NARROW, d.absorber(), stated.absorber());
+        String method = study.method().id();
+        narrower(warnings, WarningKind.STRUCTURE_TOLERANCE_NARROW, d.structure(), stated.structure(), method);
+        narrower(warnings, WarningKind.ABSORBER_TOLERANCE_NARROW, d.absorber(), stated.absorber(), method);
         double zeta = d.tuning().dampingRatio();
         if (zeta > 0.0 && zeta < PRACTICAL_DAMPING_RATIO) {
             warnings.add(Warning.of(WarningKind.DAMPING_BELOW_PRACTICAL, zeta, PRACTICAL_DAMPING_RATIO));
@@ -338,14 +339,15 @@ public final class Designer {
     }
 
     /** Warns when a tolerated range (peak rising at most 10 %) ends inside the stated +/- range. */
-    private static void narrower(List<Warning> warnings, WarningKind kind, MistuningRange tolerated, double stated) {
+    private static void narrower(List<Warning> warnings, WarningKind kind, MistuningRange tolerated, double stated,
+            String method) {
         if (!tolerated.defined() || stated <= 0.0) {
             return;
         }
         double low = tolerated.low().orElse(1.0 - tolerated.searchLimit()) - 1.0;
         double high = tolerated.high().orElse(1.0 + tolerated.searchLimit()) - 1.0;
         if (low > -stated || high < stated) {
-            warnings.add(Warning.of(kind, low, high, stated));
+            warnings.add(Warning.of(kind, low, high, stated, method));
         }
     }
 }

@@ -36,10 +36,10 @@ public enum WarningKind {
     NO_DAMPING,
     /** The structure frequency range within which the peak rises by at most 10 % is narrower than the stated range. */
     STRUCTURE_TOLERANCE_NARROW(WarningParameter.TOLERATED_LOW, WarningParameter.TOLERATED_HIGH,
-            WarningParameter.STATED_RANGE),
+            WarningParameter.STATED_RANGE, WarningParameter.METHOD_ID),
     /** The same for the absorber's frequency. */
     ABSORBER_TOLERANCE_NARROW(WarningParameter.TOLERATED_LOW, WarningParameter.TOLERATED_HIGH,
-            WarningParameter.STATED_RANGE),
+            WarningParameter.STATED_RANGE, WarningParameter.METHOD_ID),
     /** The absorber damping ratio is below what a practical damper gives. */
     DAMPING_BELOW_PRACTICAL(WarningParameter.ABSORBER_DAMPING_RATIO, WarningParameter.PRACTICAL_DAMPING_RATIO),
     /** The stroke during run-up is more than twice the stroke in band. */

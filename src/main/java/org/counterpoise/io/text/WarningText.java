@@ -1,6 +1,7 @@
 package org.counterpoise.io.text;
 
 import java.util.Locale;
+import org.counterpoise.core.design.DesignMethod;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.RunUpStroke;
 import org.counterpoise.core.error.Warning;
@@ -82,10 +83,14 @@ public final class WarningText {
     private static String narrow(String what, Warning w) {
         return String.format(Locale.ROOT, "The design keeps its peak in band within %s of nominal only while %s"
                 + " stays within %s to %s, narrower than the tolerance range of +/-%s (stated, or the default when"
-                + " none is stated): as built it may perform much worse than computed; robust-worst-case holds"
-                + " over the range.", ValueText.percent(DesignResult.TOLERANCE_ALLOWANCE, 2), what,
+                + " none is stated): %s", ValueText.percent(DesignResult.TOLERANCE_ALLOWANCE, 2), what,
                 change(w.number(WarningParameter.TOLERATED_LOW)), change(w.number(WarningParameter.TOLERATED_HIGH)),
-                ValueText.percent(w.number(WarningParameter.STATED_RANGE), 2));
+                ValueText.percent(w.number(WarningParameter.STATED_RANGE), 2),
+                DesignMethod.byId(w.token(WarningParameter.METHOD_ID)).filter(DesignMethod::robust).isPresent()
+                        ? "this design already has the least worst case over the ranges for its mass (see the comparison"
+                                + " of methods), so plan to tune the absorber on site to the measured frequency, tighten"
+                                + " the tolerance, or use a heavier absorber."
+                        : "as built it may perform much worse than computed; robust-worst-case holds over the range.");
     }
 
     /** A signed change, "beyond" at the search limit (the range was not closed there). */

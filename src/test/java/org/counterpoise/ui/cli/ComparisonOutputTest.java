@@ -65,7 +65,9 @@ class ComparisonOutputTest {
             assertNumber(k.p95(), o.get("p95_peak"));
             assertNumber(k.strokeInBand().value(), o.get("peak_stroke_m"));
             assertNumber(k.strokeRunUp().peak().value(), o.get("peak_stroke_run_up_m"));
-            assertEquals("steady-state", o.get("peak_stroke_run_up_basis").getAsString());
+            // a project that states its run-up rate gets the integrated run-up; one that does not, the steady state
+            assertEquals(ProjectReader.read(file).project().runUpRate().isPresent() ? "transient" : "steady-state",
+                    o.get("peak_stroke_run_up_basis").getAsString());
             assertNumber(k.springForce().value(), o.get("peak_spring_force_N"));
             assertTrue(o.get("worst_case_peak").getAsDouble() > 0, "a real figure");
             recommended += o.get("recommended").getAsBoolean() ? 1 : 0;
@@ -94,8 +96,13 @@ class ComparisonOutputTest {
     }
 
     @Test
-    void theTextReportHasTheComparisonSection() {
-        CliTest.Run run = CliTest.run("design", "presets/compressor-frame-speed-band.json");
+    void theTextReportHasTheComparisonSection(@TempDir Path dir) throws Exception {
+        // the shipped preset uses the recommended method; here the project chooses exact-peak explicitly
+        String text = Files.readString(Path.of("presets/compressor-frame-speed-band.json"));
+        assertTrue(text.contains("\"method\": \"robust-worst-case\""));
+        Path file = dir.resolve("exact.json");
+        Files.writeString(file, text.replace("\"method\": \"robust-worst-case\"", "\"method\": \"exact-peak\""));
+        CliTest.Run run = CliTest.run("design", file.toString());
         assertEquals(0, run.code(), run.err());
         List<String> lines = run.out().lines().toList();
         int at = lines.indexOf(lines.stream().filter(l -> l.startsWith("Method comparison")).findFirst().orElseThrow());

@@ -59,8 +59,10 @@ class RunUpCommandTest {
 
     @Test
     void harmonicOrderTurnsForcingBackIntoShaftSpeedAndTheFileRateIsUsed(@TempDir Path dir) throws Exception {
-        String text = Files.readString(Path.of(BLOWER)).replace("\"harmonic_order\": 4",
-                "\"harmonic_order\": 4,\n    \"run_up_rate\": {\"value\": 100, \"unit\": \"rpm/s\"}");
+        String preset = Files.readString(Path.of(BLOWER));
+        String shipped = "\"run_up_rate\": {\"value\": 500, \"unit\": \"rpm/s\"}";
+        assertTrue(preset.contains(shipped), "the preset states its rate");
+        String text = preset.replace(shipped, "\"run_up_rate\": {\"value\": 100, \"unit\": \"rpm/s\"}");
         Path file = dir.resolve("blower.json");
         Files.writeString(file, text);
         Run r = CliTest.run("runup", file.toString(), "--json");

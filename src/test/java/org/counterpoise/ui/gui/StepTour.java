@@ -17,7 +17,8 @@ import org.counterpoise.ui.gui.wizard.WizardFrame;
  * for a person to look at (run it under Xvfb at several screen sizes and scalings):
  * {@code java -Dsun.java2d.uiScale=2 -cp target/counterpoise.jar:target/test-classes
  * org.counterpoise.ui.gui.StepTour target/tour [preset or project file]}; with
- * {@code -Dtour.runup=true} also the result step's Run-up tab ({@code step4-runup.png}).
+ * {@code -Dtour.runup=true} also the result step's Run-up tab ({@code step4-runup.png}), with
+ * {@code -Dtour.comparison=true} its comparison of methods ({@code step4-comparison.png}).
  */
 public final class StepTour {
     private StepTour() {
@@ -60,16 +61,28 @@ public final class StepTour {
             ImageIO.write(image, "png", out.resolve("step" + (step + 1) + ".png").toFile());
             if (step == 3 && Boolean.getBoolean("tour.runup")) {
                 // the result step's Run-up tab (computed when shown)
-                SwingUtilities.invokeAndWait(() -> ((javax.swing.JTabbedPane) find(frame.get().getContentPane(),
-                        "result.views")).setSelectedIndex(1));
-                Thread.sleep(Long.getLong("tour.runup.wait", 8000));
-                ImageIO.write(new Robot().createScreenCapture(screen), "png", out.resolve("step4-runup.png").toFile());
-                SwingUtilities.invokeAndWait(() -> ((javax.swing.JTabbedPane) find(frame.get().getContentPane(),
-                        "result.views")).setSelectedIndex(0));
+                photographTab(frame.get(), 1, Long.getLong("tour.runup.wait", 8000), out.resolve("step4-runup.png"));
+            }
+            if (step == 3 && Boolean.getBoolean("tour.comparison")) {
+                // the result step's comparison of methods (computed with the design, in the background)
+                photographTab(frame.get(), 2, Long.getLong("tour.comparison.wait", 6000),
+                        out.resolve("step4-comparison.png"));
             }
         }
         SwingUtilities.invokeAndWait(() -> frame.get().dispose());
         System.exit(0);
+    }
+
+    /** Shows the result step's tab {@code index}, waits, photographs the screen, and goes back to the first tab. */
+    private static void photographTab(WizardFrame frame, int index, long waitMs, Path file) throws Exception {
+        Rectangle screen = GraphicsEnvironment.getLocalGraphicsEnvironment().getDefaultScreenDevice()
+                .getDefaultConfiguration().getBounds();
+        SwingUtilities.invokeAndWait(() -> ((javax.swing.JTabbedPane) find(frame.getContentPane(), "result.views"))
+                .setSelectedIndex(index));
+        Thread.sleep(waitMs);
+        ImageIO.write(new Robot().createScreenCapture(screen), "png", file.toFile());
+        SwingUtilities.invokeAndWait(() -> ((javax.swing.JTabbedPane) find(frame.getContentPane(), "result.views"))
+                .setSelectedIndex(0));
     }
 
     private static java.awt.Component find(java.awt.Container root, String name) {

@@ -8,7 +8,7 @@ import javax.swing.Timer;
 import org.counterpoise.core.design.AchievablePeak;
 import org.counterpoise.core.design.DesignDossier;
 import org.counterpoise.io.text.ComparisonContent;
-import org.counterpoise.io.text.ReportTable;
+import org.counterpoise.io.text.ReportComparison;
 import org.counterpoise.core.design.DesignMethod;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.DesignStudy;
@@ -197,12 +197,16 @@ final class DesignRun {
         navigation.run();
     }
 
-    /** The comparison of methods: several designs, so off the event thread; dropped if the state changed. */
+    /**
+     * The comparison of methods: several designs, so off the event thread; dropped if the state changed.
+     * Started with every new design (not when its tab is shown): the line beside the design names the
+     * recommended method, and the dossier computes it once per state, after the design is on screen.
+     */
     private void startComparison(DesignDossier dossier) {
         DesignStudy study = dossier.study();
         steps.result().comparison().message("Comparing the design methods\u2026");
-        tasks.current(null, progress -> ReportTable.comparison(ComparisonContent.of(dossier.comparison(progress),
-                study)), (ReportTable.Grid grid) -> steps.result().comparison().show(grid), e -> {
+        tasks.current(null, progress -> ComparisonContent.of(dossier.comparison(progress), study),
+                (ReportComparison c) -> steps.result().comparison().show(c), e -> {
                     Logger.getLogger("counterpoise").log(Level.WARNING, "comparison failed", e);
                     steps.result().comparison().message("The comparison of methods could not be computed for these"
                             + " inputs.");

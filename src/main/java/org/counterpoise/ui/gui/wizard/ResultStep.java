@@ -112,7 +112,12 @@ final class ResultStep extends Step {
         tableScroll.setMinimumSize(new Dimension(300, 120));
         notesScroll.setPreferredSize(new Dimension(470, 220));
         notesScroll.setMinimumSize(new Dimension(300, 100));
-        JSplitPane left = new JSplitPane(JSplitPane.VERTICAL_SPLIT, tableScroll, notesScroll);
+        // which method is recommended and whether this design is it, beside the design on every tab
+        JPanel design = new JPanel(new BorderLayout(0, 4));
+        design.add(comparison.summary(), BorderLayout.NORTH);
+        design.add(tableScroll, BorderLayout.CENTER);
+        design.setMinimumSize(new Dimension(300, 160));
+        JSplitPane left = new JSplitPane(JSplitPane.VERTICAL_SPLIT, design, notesScroll);
         left.setResizeWeight(0.6);
         left.setBorder(null);
         JPanel charts = new JPanel(new GridLayout(2, 1, 0, 6));
@@ -148,17 +153,16 @@ final class ResultStep extends Step {
         }
         JPanel right = new JPanel(new BorderLayout());
         right.add(controls, BorderLayout.NORTH);
-        JSplitPane chartsAndComparison = new JSplitPane(JSplitPane.VERTICAL_SPLIT, charts, comparison.component());
-        chartsAndComparison.setResizeWeight(0.55);
-        chartsAndComparison.setBorder(null);
-        right.add(chartsAndComparison, BorderLayout.CENTER);
+        right.add(charts, BorderLayout.CENTER);
         right.add(readout, BorderLayout.SOUTH);
         JTabbedPane views = new JTabbedPane();
         views.setName("result.views");
         views.addTab("Steady state", right);
         views.addTab("Run-up", runUp.component());
+        views.addTab("Comparison of methods", comparison.component());
         views.setMnemonicAt(0, 's');
         views.setMnemonicAt(1, 'u');
+        views.setMnemonicAt(2, 'm');
         JSplitPane split = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, left, views);
         split.setResizeWeight(0.36);
         split.setBorder(null);
