@@ -3,8 +3,14 @@ package org.counterpoise.core.design;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
+import java.util.concurrent.atomic.AtomicInteger;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.Future;
 import org.counterpoise.core.error.CoreException;
 import org.counterpoise.core.error.InvalidInputException;
+import org.counterpoise.core.error.Messages;
 import org.counterpoise.core.error.NotFoundException;
 import org.counterpoise.core.model.Tuning;
 import org.counterpoise.core.progress.ProgressListener;
@@ -45,6 +51,13 @@ public record MethodComparison(List<Candidate> candidates, List<LeftOut> leftOut
     /** The methods compared, in the order shown: the one list. */
     public static final List<DesignMethod> COMPARED = List.of(DesignMethod.EQUAL_PEAK, DesignMethod.EXACT_PEAK,
             DesignMethod.ROBUST_WORST_CASE, DesignMethod.ROBUST_P95, DesignMethod.UNDAMPED_SINGLE_SPEED);
+
+    /** Threads that design the candidates (daemons, so they never hold the program open). */
+    private static final ExecutorService CANDIDATE_THREADS = Executors.newCachedThreadPool(r -> {
+        Thread t = new Thread(r, "method-comparison");
+        t.setDaemon(true);
+        return t;
+    });
 
     /** Relative difference of worst cases taken as a tie (the recommended method then wins the tie). */
     static final double TIE = 1e-9;
@@ -140,32 +153,100 @@ public record MethodComparison(List<Candidate> candidates, List<LeftOut> leftOut
             methods.add(method);
         }
         double mu = chosen.tuning().massRatio();
+        listener.checkCancelled("the comparison of methods");
+        listener.progress(0.0);
+        // The candidates are independent designs: each on a thread of its own, gathered in the
+        // order of the methods, so the output is the sequential one. Plain threads, not the common
+        // pool: a pool thread that waits on its own inner parallel work may help by running a whole
+        // other design, which would keep this one waiting. Every design is a pure function of its
+        // study (its own parallel parts write into slots), so no figure depends on the threads.
+        Thread caller = Thread.currentThread();
+        ProgressListener shared = sharedBy(listener, caller);
+        AtomicInteger done = new AtomicInteger();
+        List<Future<Outcome>> futures = new ArrayList<>();
+        for (DesignMethod m : methods) {
+            futures.add(CANDIDATE_THREADS.submit(() -> {
+                Outcome o = outcome(chosen, m, mu, shared);
+                shared.progress((double) done.incrementAndGet() / methods.size());
+                return o;
+            }));
+        }
+        List<Outcome> outcomes = new ArrayList<>();
+        try {
+            for (Future<Outcome> f : futures) {
+                outcomes.add(f.get());
+            }
+        } catch (InterruptedException e) {
+            futures.forEach(f -> f.cancel(true));
+            Thread.currentThread().interrupt();
+            throw new CoreException(Messages.CANCELLED, "the comparison of methods");
+        } catch (ExecutionException e) {
+            // outcome() returns every exception as a value; only an Error gets here
+            if (e.getCause() instanceof Error error) {
+                throw error;
+            }
+            throw new IllegalStateException(e.getCause());
+        }
         List<Candidate> candidates = new ArrayList<>();
         for (int i = 0; i < methods.size(); i++) {
-            listener.checkCancelled("the comparison of methods");
-            listener.progress((double) i / methods.size());
+            Outcome o = outcomes.get(i);
+            if (o.failure() != null) {
+                throw o.failure();
+            }
+            o.candidate().ifPresent(candidates::add);
             DesignMethod m = methods.get(i);
-            if (m == method) {
-                candidates.add(Candidate.of(chosen, true));
-                continue;
-            }
-            Optional<LeftOutReason> why = notApplicable(study, m, mu);
-            if (why.isPresent()) {
-                leftOut.add(new LeftOut(m, why.get()));
-                continue;
-            }
-            try {
-                Candidate c = candidate(study, m, mu);
-                candidates.add(c);
-            } catch (NotFoundException e) {
-                leftOut.add(new LeftOut(m, LeftOutReason.NO_CERTIFIED_OPTIMUM));
-            } catch (InvalidInputException e) {
-                leftOut.add(new LeftOut(m, LeftOutReason.NOT_FOR_THIS_STUDY));
-            }
+            o.reason().ifPresent(r -> leftOut.add(new LeftOut(m, r)));
         }
+        listener.checkCancelled("the comparison of methods");
         listener.progress(1.0);
         return new MethodComparison(candidates, leftOut, leastWorstCase(candidates),
                 RecommendationReason.LEAST_WORST_CASE, method);
+    }
+
+    /**
+     * What one method gave: its candidate, or why it was left out, or the exception to rethrow on
+     * the caller's thread (a cancellation), so no exception crosses the pool's threads re-wrapped.
+     */
+    private record Outcome(Optional<Candidate> candidate, Optional<LeftOutReason> reason, RuntimeException failure) {
+    }
+
+    private static Outcome outcome(DesignResult chosen, DesignMethod m, double mu, ProgressListener listener) {
+        DesignStudy study = chosen.study();
+        try {
+            listener.checkCancelled("the comparison of methods");
+            if (m == study.method()) {
+                return new Outcome(Optional.of(Candidate.of(chosen, true)), Optional.empty(), null);
+            }
+            Optional<LeftOutReason> why = notApplicable(study, m, mu);
+            if (why.isPresent()) {
+                return new Outcome(Optional.empty(), why, null);
+            }
+            return new Outcome(Optional.of(candidate(study, m, mu)), Optional.empty(), null);
+        } catch (NotFoundException e) {
+            return new Outcome(Optional.empty(), Optional.of(LeftOutReason.NO_CERTIFIED_OPTIMUM), null);
+        } catch (InvalidInputException e) {
+            return new Outcome(Optional.empty(), Optional.of(LeftOutReason.NOT_FOR_THIS_STUDY), null);
+        } catch (RuntimeException e) {
+            return new Outcome(Optional.empty(), Optional.empty(), e);
+        }
+    }
+
+    /**
+     * The listener as the pool's threads ask it: cancelled also when the calling thread is
+     * interrupted (a front end dropping a stale job interrupts the caller, not the pool).
+     */
+    private static ProgressListener sharedBy(ProgressListener listener, Thread caller) {
+        return new ProgressListener() {
+            @Override
+            public void progress(double fraction) {
+                listener.progress(fraction);
+            }
+
+            @Override
+            public boolean cancelled() {
+                return listener.cancelled() || caller.isInterrupted();
+            }
+        };
     }
 
     private static Optional<LeftOutReason> notApplicable(DesignStudy study, DesignMethod m, double mu) {

@@ -86,6 +86,26 @@ public final class RealPolynomials {
     }
 
     /**
+     * Both Horner chains of {@link #value} and {@link #derivativeValue} in one pass: the same
+     * operations in the same order, so the same bits, with the two independent chains interleaved
+     * (the root refinement asks both at every step).
+     *
+     * @param a coefficients, ascending powers
+     * @param x the point
+     * @param out receives {value, derivative}
+     */
+    public static void valueAndDerivative(double[] a, double x, double[] out) {
+        double v = 0.0;
+        double d = 0.0;
+        for (int i = a.length - 1; i >= 1; i--) {
+            v = v * x + a[i];
+            d = d * x + i * a[i];
+        }
+        out[0] = a.length == 0 ? v : v * x + a[0];
+        out[1] = d;
+    }
+
+    /**
      * Evaluates the polynomial at s = i g.
      * @return {real part, imaginary part}
      */

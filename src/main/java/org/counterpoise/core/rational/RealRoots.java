@@ -89,8 +89,10 @@ public final class RealRoots {
         double hi = b;
         boolean riseFromLo = fa < 0;
         double x = 0.5 * (lo + hi);
+        double[] valueAndSlope = new double[2];
         for (int i = 0; i < MAX_ITERATIONS; i++) {
-            double fx = RealPolynomials.value(p, x);
+            RealPolynomials.valueAndDerivative(p, x, valueAndSlope);
+            double fx = valueAndSlope[0];
             if (fx == 0.0) {
                 return x;
             }
@@ -99,7 +101,7 @@ public final class RealRoots {
             } else {
                 hi = x;
             }
-            double d = RealPolynomials.derivativeValue(p, x);
+            double d = valueAndSlope[1];
             double next = d != 0.0 ? x - fx / d : Double.NaN;
             if (!(next > lo && next < hi)) {
                 next = 0.5 * (lo + hi);
