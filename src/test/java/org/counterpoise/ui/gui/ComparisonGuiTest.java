@@ -37,16 +37,12 @@ class ComparisonGuiTest {
 
     @BeforeAll
     static void needsADisplay() throws Exception {
-        Edt.requireDisplay(ComparisonGuiTest.class);
-        System.setProperty("counterpoise.prefs", "memory");
-        SwingUtilities.invokeAndWait(() -> Themes.apply(false));
+        Edt.prepareWizardTests(ComparisonGuiTest.class);
     }
 
     @AfterEach
     void close() throws Exception {
-        if (frame != null) {
-            SwingUtilities.invokeAndWait(frame::dispose);
-        }
+        Edt.dispose(frame);
     }
 
     @Test

@@ -59,16 +59,12 @@ class DisturbanceSpectrumGuiTest {
 
     @BeforeAll
     static void needsADisplay() throws Exception {
-        Edt.requireDisplay(DisturbanceSpectrumGuiTest.class);
-        System.setProperty("counterpoise.prefs", "memory");
-        SwingUtilities.invokeAndWait(() -> Themes.apply(false));
+        Edt.prepareWizardTests(DisturbanceSpectrumGuiTest.class);
     }
 
     @AfterEach
     void close() throws Exception {
-        if (frame != null) {
-            SwingUtilities.invokeAndWait(frame::dispose);
-        }
+        Edt.dispose(frame);
     }
 
     private void open() throws Exception {

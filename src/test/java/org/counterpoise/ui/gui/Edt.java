@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.fail;
 import java.awt.Component;
 import java.awt.Container;
 import java.awt.GraphicsEnvironment;
+import java.awt.Window;
 import java.util.concurrent.Callable;
 import java.util.concurrent.atomic.AtomicReference;
 import java.util.function.BooleanSupplier;
@@ -18,6 +19,30 @@ import org.junit.jupiter.api.Assumptions;
  */
 public final class Edt {
     private Edt() {
+    }
+
+    /**
+     * What a wizard test class needs before its first window: the display rule of
+     * {@link #requireDisplay}, preferences kept in memory (a test never touches the user's) and the
+     * light theme.
+     * @param testClass the GUI test class
+     * @throws Exception when the theme cannot be applied on the event thread
+     */
+    public static void prepareWizardTests(Class<?> testClass) throws Exception {
+        requireDisplay(testClass);
+        System.setProperty("counterpoise.prefs", "memory");
+        SwingUtilities.invokeAndWait(() -> Themes.apply(false));
+    }
+
+    /**
+     * Disposes a test's window on the event thread, if it was opened.
+     * @param window the window, or null
+     * @throws Exception when the event thread fails
+     */
+    public static void dispose(Window window) throws Exception {
+        if (window != null) {
+            SwingUtilities.invokeAndWait(window::dispose);
+        }
     }
 
     /**

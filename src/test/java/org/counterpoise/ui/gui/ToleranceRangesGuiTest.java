@@ -41,16 +41,12 @@ class ToleranceRangesGuiTest {
 
     @BeforeAll
     static void needsADisplay() throws Exception {
-        Edt.requireDisplay(ToleranceRangesGuiTest.class);
-        System.setProperty("counterpoise.prefs", "memory");
-        SwingUtilities.invokeAndWait(() -> Themes.apply(false));
+        Edt.prepareWizardTests(ToleranceRangesGuiTest.class);
     }
 
     @AfterEach
     void close() throws Exception {
-        if (frame != null) {
-            SwingUtilities.invokeAndWait(frame::dispose);
-        }
+        Edt.dispose(frame);
     }
 
     @Test
