@@ -44,6 +44,7 @@ class ArchitectureTest {
             Map.entry("system", 3),
             Map.entry("response", 4),
             Map.entry("tuning", 5), Map.entry("remedy", 5), Map.entry("runup", 5), Map.entry("robust", 5),
+            Map.entry("criteria", 5),
             Map.entry("optim", 6),
             Map.entry("design", 7));
 

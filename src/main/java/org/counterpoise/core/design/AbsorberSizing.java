@@ -52,6 +52,20 @@ public sealed interface AbsorberSizing {
     }
 
     /**
+     * Sized to meet the study's acceptance criterion: the lightest absorber whose verdict passes over
+     * the band, over the tolerance ranges for the robust methods (nominal for exact-peak), or, when
+     * no mass ratio up to the largest can, the best reachable with how far it misses.
+     *
+     * @param maxMassRatio the largest mass ratio considered, in (0, 2)
+     */
+    record MeetCriterion(double maxMassRatio) implements AbsorberSizing {
+        /** Validates the largest ratio. */
+        public MeetCriterion {
+            Checks.inOpenRange("absorber.max_mass_ratio", maxMassRatio, 0.0, 2.0);
+        }
+    }
+
+    /**
      * @param mu mass ratio
      * @return sizing by mass ratio
      */

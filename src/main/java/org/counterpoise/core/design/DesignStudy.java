@@ -1,5 +1,7 @@
 package org.counterpoise.core.design;
 
+import java.util.Optional;
+import org.counterpoise.core.criteria.Criterion;
 import org.counterpoise.core.error.Checks;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.model.Excitation;
@@ -22,10 +24,32 @@ import org.counterpoise.core.response.ResponseKind;
  * @param constraints limits on the design (used by the exact-peak and robust methods)
  * @param robustness expected mistuning, target and tolerances (used by robust-worst-case and the
  *     robustness study)
+ * @param criterion what the response is judged against (the verdict before and after, and the goal of
+ *     {@link AbsorberSizing.MeetCriterion}); empty when the project names none
  */
 public record DesignStudy(String name, Structure structure, Excitation excitation, ResponseKind response,
         AbsorberSizing sizing, DesignMethod method, boolean hangsVertically, double strokeMargin,
-        DesignConstraints constraints, RobustnessSettings robustness) {
+        DesignConstraints constraints, RobustnessSettings robustness, Optional<Criterion> criterion) {
+
+    /**
+     * A study without a criterion.
+     * @param name project name
+     * @param structure the structure
+     * @param excitation the disturbance
+     * @param response the response that matters
+     * @param sizing mass ratio, mass or target
+     * @param method design method
+     * @param hangsVertically true when the spring carries the absorber's weight
+     * @param strokeMargin clearance over the computed stroke
+     * @param constraints limits on the design
+     * @param robustness expected mistuning, target and tolerances
+     */
+    public DesignStudy(String name, Structure structure, Excitation excitation, ResponseKind response,
+            AbsorberSizing sizing, DesignMethod method, boolean hangsVertically, double strokeMargin,
+            DesignConstraints constraints, RobustnessSettings robustness) {
+        this(name, structure, excitation, response, sizing, method, hangsVertically, strokeMargin, constraints,
+                robustness, Optional.empty());
+    }
 
     /**
      * A study with default robustness settings.
@@ -73,6 +97,14 @@ public record DesignStudy(String name, Structure structure, Excitation excitatio
         Checks.inRange("absorber.stroke_margin", strokeMargin, 1.0, 10.0);
         Checks.present("absorber", constraints, "design constraints");
         Checks.present("robustness", robustness, "robustness settings");
+        Checks.present("acceptance", criterion, "a criterion or none");
+        if (sizing instanceof AbsorberSizing.MeetCriterion && criterion.isEmpty()) {
+            throw InvalidInputException.missing("acceptance", "designing to meet the criterion needs a criterion");
+        }
+        if (sizing instanceof AbsorberSizing.MeetCriterion && method != DesignMethod.EXACT_PEAK && !method.robust()) {
+            throw new InvalidInputException("absorber.method", method.id(),
+                    "designing to meet the criterion needs the exact-peak, robust-worst-case or robust-p95 method");
+        }
         if (sizing instanceof AbsorberSizing.ByTarget t && method != DesignMethod.EXACT_PEAK && !method.robust()) {
             throw new InvalidInputException("absorber.target", Checks.show(t.target()),
                     "sizing for a target needs the exact-peak, robust-worst-case or robust-p95 method");
@@ -113,7 +145,7 @@ public record DesignStudy(String name, Structure structure, Excitation excitatio
      */
     public DesignStudy withRobustness(RobustnessSettings settings) {
         return new DesignStudy(name, structure, excitation, response, sizing, method, hangsVertically, strokeMargin,
-                constraints, settings);
+                constraints, settings, criterion);
     }
 
     /**
@@ -123,7 +155,7 @@ public record DesignStudy(String name, Structure structure, Excitation excitatio
      */
     public DesignStudy withMethod(DesignMethod other) {
         return new DesignStudy(name, structure, excitation, response, sizing, other, hangsVertically, strokeMargin,
-                constraints, robustness);
+                constraints, robustness, criterion);
     }
 
     /**
@@ -133,7 +165,16 @@ public record DesignStudy(String name, Structure structure, Excitation excitatio
      */
     public DesignStudy withSizing(AbsorberSizing otherSizing, DesignConstraints otherConstraints) {
         return new DesignStudy(name, structure, excitation, response, otherSizing, method, hangsVertically,
-                strokeMargin, otherConstraints, robustness);
+                strokeMargin, otherConstraints, robustness, criterion);
+    }
+
+    /**
+     * @param judgedAgainst the criterion (empty for none)
+     * @return this study with it
+     */
+    public DesignStudy withCriterion(Optional<Criterion> judgedAgainst) {
+        return new DesignStudy(name, structure, excitation, response, sizing, method, hangsVertically, strokeMargin,
+                constraints, robustness, judgedAgainst);
     }
 
     /** Common-practice clearance margin over the computed stroke (no published source). */
