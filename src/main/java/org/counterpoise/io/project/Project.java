@@ -4,6 +4,7 @@ import java.util.List;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import org.counterpoise.core.criteria.AmplitudeConvention;
+import org.counterpoise.core.criteria.Assessor;
 import org.counterpoise.core.criteria.Criterion;
 import org.counterpoise.core.criteria.UserLimit;
 import org.counterpoise.core.design.AbsorberSizing;
@@ -179,16 +180,15 @@ public record Project(String name, String notes, StructureInput structure, Distu
     }
 
     /**
-     * The order that governs the verdict, whose design then serves the others best.
+     * The order that governs the verdict of the bare structure, which the design then serves (the
+     * disturbance's own order when the project names no criterion, since nothing then governs).
      * @param allOrders the excitation with the disturbance's own order as the design order and the
      *     others beside it (their indices are those of {@link Excitation#orders()})
      * @return the index of the governing order in {@code allOrders.orders()}
      */
     private int governingOrder(Excitation allOrders) {
-        // LEAD (slice B): replace this line by slice B's core method that returns the governing
-        // order's index (for toStructure(), allOrders and the criterion, acceptanceCriterion()).
-        // Until it reaches main, the disturbance's own order (index 0) is the governing one.
-        return 0;
+        Optional<Criterion> criterion = withTargetAsAcceptance().acceptanceCriterion();
+        return criterion.isEmpty() ? 0 : Assessor.governingOrder(criterion.get(), toStructure(), allOrders);
     }
 
     /**
