@@ -288,6 +288,25 @@ public record Project(String name, String notes, StructureInput structure, Distu
     }
 
     /**
+     * The inverse of {@link #withTargetAsAcceptance} where it exists: the absorber sized for the
+     * target that the criterion to meet stands for, when the criterion says exactly what a target of
+     * format 2 said (absorber.meet_acceptance with a user limit of one peak value on
+     * {@code absorber.response}). For a front end that shows sizing by a target (the wizard's goal
+     * step, until it shows criteria); such a target is saved back as the same criterion.
+     * @return the absorber with that target, or empty
+     */
+    public Optional<AbsorberInput> absorberWithTarget() {
+        AbsorberInput a = absorber;
+        if (a.meetAcceptance() && acceptance instanceof AcceptanceInput.StatedLimit s && s.value() != null
+                && s.convention() == AmplitudeConvention.PEAK && s.quantity() == a.response()) {
+            return Optional.of(new AbsorberInput(OptionalDouble.empty(), null, a.method(), a.response(),
+                    a.hangsVertically(), a.strokeMargin(), s.value(), a.maxMassRatio(), a.strokeLimit(),
+                    a.fixedDampingRatio(), a.fixedTuningRatio()));
+        }
+        return Optional.empty();
+    }
+
+    /**
      * @param s the structure as now given
      * @return this project with it
      */

@@ -210,6 +210,13 @@ class AcceptanceFileTest {
         assertTrue(absorber.get("meet_acceptance").getAsBoolean());
         assertEquals("user-limit", written.getAsJsonObject("acceptance").get("criterion").getAsString());
         assertEquals(p, roundTrip(p));
+
+        // shown as the target it stands for (the wizard's goal step), it is saved back the same
+        AbsorberInput shown = p.absorberWithTarget().orElseThrow();
+        assertEquals(new QuantityInput(2.0, Unit.METRE_PER_SECOND_SQUARED), shown.target());
+        assertFalse(shown.meetAcceptance());
+        assertEquals(p, p.withAbsorber(shown).withTargetAsAcceptance());
+        assertEquals(Optional.empty(), read(BASE).absorberWithTarget(), "a mass ratio is no target");
     }
 
     @Test

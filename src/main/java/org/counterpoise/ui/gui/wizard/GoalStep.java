@@ -224,7 +224,9 @@ final class GoalStep extends Step {
         if (loaded) {
             targetNote = null;
         }
-        load(p.absorber());
+        // a criterion to meet that says what a target says is shown as that target (until this step
+        // shows criteria: slice E)
+        load(p.absorberWithTarget().orElse(p.absorber()));
         ranges.show(p);
         targetResponse = p.absorber().response();
     }
