@@ -41,9 +41,13 @@ class MeetCriterionEquivalenceTest {
     }
 
     private static void assertSameDesign(Tuning expected, Tuning actual) {
-        assertEquals(expected.massRatio(), actual.massRatio(), 1e-9 * expected.massRatio(), "mass ratio");
-        assertEquals(expected.tuningRatio(), actual.tuningRatio(), 1e-9, "tuning ratio");
-        assertEquals(expected.dampingRatio(), actual.dampingRatio(), 1e-9, "damping ratio");
+        assertSameDesign(expected, actual, 1e-9);
+    }
+
+    private static void assertSameDesign(Tuning expected, Tuning actual, double tolerance) {
+        assertEquals(expected.massRatio(), actual.massRatio(), tolerance * expected.massRatio(), "mass ratio");
+        assertEquals(expected.tuningRatio(), actual.tuningRatio(), tolerance, "tuning ratio");
+        assertEquals(expected.dampingRatio(), actual.dampingRatio(), tolerance, "damping ratio");
     }
 
     /** The bare peak over the band, SI: the target is a fraction of it, so an absorber is needed. */
@@ -56,7 +60,8 @@ class MeetCriterionEquivalenceTest {
     @EnumSource(value = DesignMethod.class, names = {"EXACT_PEAK", "ROBUST_WORST_CASE", "ROBUST_P95"})
     void aPeakUserLimitOnTheStudysResponseGivesTheTargetSizingsDesign(DesignMethod method) {
         for (Excitation e : List.of(BAND, SPEED)) {
-            double target = barePeak(e) / 6;
+            // reachable by every method: exact-peak designs one speed over all frequencies (a higher peak)
+            double target = barePeak(e) / (e == BAND ? 6 : 2);
             DesignResult byTarget = Designer.design(study(e, method, AbsorberSizing.ofTarget(target, 0.25),
                     Optional.empty()));
             UserLimit limit = new UserLimit(ResponseKind.DISPLACEMENT, AmplitudeConvention.PEAK, LimitCurve.flat(target));
@@ -65,11 +70,14 @@ class MeetCriterionEquivalenceTest {
             assertSameDesign(byTarget.tuning(), meet.tuning());
             assertTrue(meet.tuning().massRatio() < 0.25, "the target is reachable: " + meet.tuning());
             assertTrue(meet.warnings().stream().noneMatch(w -> w.kind() == WarningKind.CRITERION_NOT_MET));
-            // the same limit stated as r.m.s. (peak / sqrt 2, a definition) is the same criterion
+            // the same limit stated as r.m.s. (peak / sqrt 2, a definition) is the same criterion; its
+            // limit differs from the target in the last bit, so the searches may end apart by their own
+            // accuracy (the robust mass search closes to 1e-6 relative, RobustChoice.MASS_RATIO_ACCURACY)
             UserLimit rms = new UserLimit(ResponseKind.DISPLACEMENT, AmplitudeConvention.RMS,
                     LimitCurve.flat(target / Math.sqrt(2)));
             assertSameDesign(byTarget.tuning(), Designer.design(study(e, method,
-                    new AbsorberSizing.MeetCriterion(0.25), Optional.of(rms))).tuning());
+                    new AbsorberSizing.MeetCriterion(0.25), Optional.of(rms))).tuning(),
+                    RobustChoice.MASS_RATIO_ACCURACY);
         }
     }
 
