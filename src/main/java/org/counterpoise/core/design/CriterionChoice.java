@@ -1,7 +1,6 @@
 package org.counterpoise.core.design;
 
 import java.util.List;
-import java.util.OptionalDouble;
 import org.counterpoise.core.error.Warning;
 import org.counterpoise.core.error.WarningKind;
 import org.counterpoise.core.model.Tuning;
@@ -105,9 +104,8 @@ final class CriterionChoice {
                     : Warning.of(WarningKind.CRITERION_NOT_MET_UNBOUNDED, max));
             return;
         }
-        OptionalDouble bare = goal.bare();
-        if (lightestConsidered && bare.isPresent() && bare.getAsDouble() <= 1) {
-            warnings.add(Warning.of(WarningKind.NO_ABSORBER_NEEDED, bare.getAsDouble(), t.massRatio()));
+        if (lightestConsidered && goal.bare() <= 1) {
+            warnings.add(Warning.of(WarningKind.NO_ABSORBER_NEEDED, goal.bare(), t.massRatio()));
         }
     }
 }

@@ -1,12 +1,12 @@
 package org.counterpoise.core.design;
 
-import java.util.OptionalDouble;
+import org.counterpoise.core.criteria.Assessor;
 import org.counterpoise.core.criteria.Criterion;
 import org.counterpoise.core.criteria.UserLimit;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.model.Excitation;
 import org.counterpoise.core.response.ResponseKind;
-import org.counterpoise.core.response.SystemResponse;
+import org.counterpoise.core.robust.BandMeasure;
 import org.counterpoise.core.robust.Mistuning;
 
 /**
@@ -18,16 +18,18 @@ import org.counterpoise.core.robust.Mistuning;
  * band, stated in its convention: its utilisation is convention(peak) / limit, a fixed multiple of
  * the peak. The model then measures the plain peak (the same bits as every other peak design, so
  * a limit in the peak convention gives exactly the target sizing's design) and the target is the
- * limit stated as a peak. Every other criterion (weighted, a curve, several orders) is measured by
- * its exact utilisation.
+ * limit stated as a peak ({@link Assessor} reads the same peak, to round-off). Every other
+ * criterion (weighted, a curve, several orders) is measured by its exact utilisation, the verdict
+ * engine's fast path ({@link Assessor#utilisation}).
  *
  * @param model what a build is judged by
  * @param target the measure at a utilisation of 1
  * @param peakOfStudyResponse true when the measure is the peak of the study's own response (the
  *     exact-peak method then sizes exactly as for a target)
- * @param bare the bare structure's utilisation over the band, as the verdict reads it
+ * @param bare the bare structure's utilisation over the band, as the verdict reads it (+infinity
+ *     when unbounded)
  */
-record CriterionGoal(Mistuning model, double target, boolean peakOfStudyResponse, OptionalDouble bare) {
+record CriterionGoal(Mistuning model, double target, boolean peakOfStudyResponse, double bare) {
 
     /**
      * @param study a study with a criterion
@@ -37,17 +39,24 @@ record CriterionGoal(Mistuning model, double target, boolean peakOfStudyResponse
         Criterion c = study.criterion().orElseThrow(
                 () -> InvalidInputException.missing("acceptance", "designing to meet the criterion needs a criterion"));
         Excitation e = study.excitation();
+        Assessor assessor = Assessor.of(c, e);
+        double bare = assessor.utilisationBare(study.structure());
         if (c instanceof UserLimit u && u.limit().isFlat() && e.otherOrders().isEmpty()) {
             ResponseKind q = u.quantity();
             // the convention is linear in the amplitude: the limit stated as a peak
             double target = u.limit().at(u.limit().lowFrequency()) / u.convention().ofHarmonic(1.0);
-            double bare = new SystemResponse(study.structure(), null, e.kind(), e.amplitude()).peakOver(q, e.band())
-                    .value() / target;
-            return new CriterionGoal(new Mistuning(study.structure(), e, q), target, q == study.response(),
-                    OptionalDouble.of(bare));
+            return new CriterionGoal(new Mistuning(study.structure(), e, q), target, q == study.response(), bare);
         }
-        throw new InvalidInputException("acceptance", c.kind().id(),
-                "designing to meet this criterion needs the verdict engine, which is not yet available; use a flat"
-                        + " user limit on one order");
+        return new CriterionGoal(utilisationModel(study, assessor), 1.0, false, bare);
+    }
+
+    /**
+     * @param study the study
+     * @param assessor its criterion's verdict engine
+     * @return the model that judges a build by the criterion's utilisation
+     */
+    static Mistuning utilisationModel(DesignStudy study, Assessor assessor) {
+        BandMeasure utilisation = (s, a) -> assessor.utilisation(s, a.tuningOn(s));
+        return new Mistuning(study.structure(), study.excitation(), study.response(), utilisation);
     }
 }

@@ -130,7 +130,8 @@ public final class Designer {
                 fitted.peakOver(ResponseKind.SPRING_FORCE, band), fitted.peakOver(ResponseKind.DAMPER_FORCE, band),
                 fitted.peakOver(ResponseKind.ABSORBER_FORCE, band), coupled, detuning, massDetuning,
                 structureTolerance, absorberTolerance, warnings, active[0], runUpStroke,
-                study.criterion().map(c -> Assessor.of(c, excitation).acceptance(structure, tuning)));
+                study.criterion().map(c -> Assessor.of(c, excitation).acceptance(structure, tuning)),
+                ToleranceVerdict.worstCase(study, tuning));
     }
 
     private static ClosedForm choose(DesignStudy study, List<Warning> warnings, ActiveConstraint[] active) {

@@ -56,11 +56,27 @@ public record Mistuning(Structure structure, Excitation excitation, ResponseKind
      * @return the measure (by default the exact peak of the response over the band, SI)
      */
     public double peak(Absorber absorber, double structureFactor, double absorberFactor, double dampingFactor) {
-        Structure s = structureFactor == 1.0 ? structure : structure.withFrequencyScaledBy(structureFactor);
-        Absorber a = absorberFactor == 1.0 && dampingFactor == 1.0 ? absorber
+        return peak(structure(structureFactor), absorber(absorber, absorberFactor, dampingFactor));
+    }
+
+    /**
+     * @param structureFactor structure natural frequency over nominal
+     * @return the structure so varied (stiffness by the square; mass and damping ratio kept)
+     */
+    public Structure structure(double structureFactor) {
+        return structureFactor == 1.0 ? structure : structure.withFrequencyScaledBy(structureFactor);
+    }
+
+    /**
+     * @param absorber the absorber as designed
+     * @param absorberFactor absorber natural frequency over nominal
+     * @param dampingFactor absorber damping coefficient over nominal
+     * @return the absorber so varied (spring rate by the square of the first; mass kept)
+     */
+    public static Absorber absorber(Absorber absorber, double absorberFactor, double dampingFactor) {
+        return absorberFactor == 1.0 && dampingFactor == 1.0 ? absorber
                 : new Absorber(absorber.mass(), absorber.stiffness() * absorberFactor * absorberFactor,
                         absorber.damping() * dampingFactor);
-        return peak(s, a);
     }
 
     /**
