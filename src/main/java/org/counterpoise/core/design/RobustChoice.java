@@ -1,6 +1,8 @@
 package org.counterpoise.core.design;
 
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Locale;
 import java.util.OptionalDouble;
 import java.util.function.DoubleFunction;
@@ -86,12 +88,15 @@ final class RobustChoice {
      * ln(value / target), to {@value #MASS_RATIO_ACCURACY} relative, on the sufficient side; the
      * lightest considered is min(0.001, largest / 10).
      *
-     * @param optimumAt the optimum for a mass ratio
+     * @param search the optimum for a mass ratio
      * @param target the largest allowed value, in the optimum's units
      * @param max the largest mass ratio considered
      * @return the lightest sufficient optimum, or the one at the largest mass ratio
      */
-    static Lightest lightest(DoubleFunction<RobustOptimiser.Minimum> optimumAt, double target, double max) {
+    static Lightest lightest(DoubleFunction<RobustOptimiser.Minimum> search, double target, double max) {
+        // Brent's last trial is usually the mass ratio it returns: each optimum is found once
+        Map<Double, RobustOptimiser.Minimum> found = new HashMap<>();
+        DoubleFunction<RobustOptimiser.Minimum> optimumAt = mu -> found.computeIfAbsent(mu, search::apply);
         RobustOptimiser.Minimum atMax = optimumAt.apply(max);
         if (!(atMax.value() <= target)) {
             return new Lightest(atMax, false, false);

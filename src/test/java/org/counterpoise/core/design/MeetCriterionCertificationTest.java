@@ -1,5 +1,6 @@
 package org.counterpoise.core.design;
 
+import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.Optional;
@@ -15,6 +16,7 @@ import org.counterpoise.core.model.ExcitationKind;
 import org.counterpoise.core.model.FrequencyBand;
 import org.counterpoise.core.model.Structure;
 import org.counterpoise.core.model.Tuning;
+import org.counterpoise.core.progress.ProgressListener;
 import org.counterpoise.core.response.ResponseKind;
 import org.counterpoise.core.response.SystemResponse;
 import org.counterpoise.core.robust.Mistuning;
@@ -130,5 +132,22 @@ class MeetCriterionCertificationTest {
             assertTrue(r.warnings().stream().anyMatch(w -> w.kind() == WarningKind.NO_ABSORBER_NEEDED),
                     r.warnings().toString());
         }
+    }
+
+    @Test
+    void theComparisonOfMethodsAndTheRobustnessStudyTakeTheMassRatioFound() {
+        Excitation e = new Excitation(ExcitationKind.FORCE, 100, new FrequencyBand(0.9 * W1, 1.1 * W1));
+        double bare = new SystemResponse(STRUCTURE, null, e.kind(), e.amplitude())
+                .peakOver(ResponseKind.DISPLACEMENT, e.band()).value();
+        UserLimit u = new UserLimit(ResponseKind.DISPLACEMENT, AmplitudeConvention.PEAK, LimitCurve.flat(bare / 5));
+        DesignDossier dossier = DesignDossier.of(study(e, ResponseKind.DISPLACEMENT, DesignMethod.EXACT_PEAK, u));
+        double mu = dossier.design().tuning().massRatio();
+        MethodComparison comparison = dossier.comparison(ProgressListener.NONE);
+        // every method compared at the same absorber mass (the comparison's rule)
+        assertTrue(comparison.candidates().size() >= 3, comparison.candidates().toString());
+        for (MethodComparison.Candidate c : comparison.candidates()) {
+            assertEquals(mu, c.tuning().massRatio(), 1e-15, c.method().id());
+        }
+        assertEquals(mu, dossier.robustness(ProgressListener.NONE).robust().tuning().massRatio(), 1e-15);
     }
 }
