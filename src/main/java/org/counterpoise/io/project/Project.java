@@ -202,13 +202,12 @@ public record Project(String name, String notes, StructureInput structure, Distu
     }
 
     /**
-     * Slice F's switch. False while the Designer cannot size for {@link AbsorberSizing.MeetCriterion}:
-     * a criterion that says what the old {@code absorber.target} said (one limit on
-     * {@code absorber.response}, one order) is then designed as a target ({@link AbsorberSizing.ByTarget},
-     * the same numbers as before format 3), and any other criterion to meet is refused in plain words.
-     * LEAD (slice F): set to true once the Designer handles MeetCriterion.
+     * Slice F's switch, now true: the Designer sizes for {@link AbsorberSizing.MeetCriterion} (any
+     * criterion; a limit that says what the old {@code absorber.target} said gives the target's design
+     * to 1e-9, MeetCriterionEquivalenceTest). When false, such a limit was designed as a target
+     * ({@link AbsorberSizing.ByTarget}) and any other criterion to meet was refused in plain words.
      */
-    static final boolean DESIGNER_MEETS_CRITERION = false;
+    static final boolean DESIGNER_MEETS_CRITERION = true;
 
     /** @return the study the core designs */
     public DesignStudy toStudy() {
