@@ -3,7 +3,6 @@ package org.counterpoise.io.text;
 import java.util.Arrays;
 import java.util.List;
 import java.util.Locale;
-import java.util.Optional;
 import org.counterpoise.core.criteria.BuildingAxis;
 import org.counterpoise.core.criteria.BuildingVibration;
 import org.counterpoise.core.criteria.ComfortReaction;
@@ -26,14 +25,10 @@ import org.counterpoise.core.units.Dimension;
  * Acceptance criteria in words, the one place they are written (the text report, the JSON, the
  * sheet and the wizard all use it): what the criterion is, what it measures, its source with the
  * standing of its values, and the names of its zones. The standing follows the tags of
- * reference/acceptance-criteria.md that the core tables' javadoc carries: values seen in a public
- * transcription are given as such, values from memory say "from memory: verify" wherever their
- * source is shown.
+ * reference/acceptance-criteria.md that the core tables carry in their sources: values from
+ * memory say "verify before use as a hard limit" wherever their source is shown.
  */
 public final class CriterionText {
-    /** The words every value from memory carries. */
-    public static final String VERIFY = "from memory, verify against the standard before using it as a hard limit";
-
     private CriterionText() {
     }
 
@@ -94,28 +89,12 @@ public final class CriterionText {
 
     /**
      * @param c a criterion
-     * @return its source with the standing of its values, e.g. "ISO 10137:2007 Annex C ... (values
-     *     from memory, verify ...)"
+     * @return its source with the standing of its values: the core's tables state, value by
+     *     value, whether it was checked in a public transcription or is from memory ("verify before
+     *     use as a hard limit"), and that tag is shown wherever the source is
      */
     public static String source(Criterion c) {
-        return c.source() + verification(c).map(v -> " (" + v + ")").orElse("");
-    }
-
-    /**
-     * @param c a criterion
-     * @return what about its values is from memory and must be verified, when anything is
-     */
-    public static Optional<String> verification(Criterion c) {
-        return switch (c.kind()) {
-            case USER_LIMIT -> Optional.empty();
-            // Annex C's end points are transcribed; the intermediate bounds are from memory.
-            case HUMAN_COMFORT -> Optional.of("the intermediate bounds of the comfort reactions are " + VERIFY);
-            // ISO 10816-3:2009 boundaries transcribed; that the 2022 edition keeps them is from memory.
-            case MACHINE -> Optional.of("zone boundaries transcribed from ISO 10816-3:2009; that ISO 20816-3:2022"
-                    + " keeps them is " + VERIFY);
-            case BUILDING -> Optional.of("base curves and factors " + VERIFY);
-            case EQUIPMENT -> Optional.of("curve values " + VERIFY);
-        };
+        return c.source();
     }
 
     /**
@@ -164,8 +143,16 @@ public final class CriterionText {
      * @return e.g. "group 2, rigid support"
      */
     public static String machine(MachineClass m) {
-        String[] parts = m.id().split("-");
-        return "group " + parts[1] + ", " + parts[2] + " support";
+        return switch (m) {
+            case GROUP_1_RIGID -> "group 1 (above 300 kW), rigid support";
+            case GROUP_1_FLEXIBLE -> "group 1 (above 300 kW), flexible support";
+            case GROUP_2_RIGID -> "group 2 (15 to 300 kW), rigid support";
+            case GROUP_2_FLEXIBLE -> "group 2 (15 to 300 kW), flexible support";
+            case CLASS_I -> "class I (small machines up to 15 kW)";
+            case CLASS_II -> "class II (medium machines)";
+            case CLASS_III -> "class III (large machines, rigid heavy foundations)";
+            case CLASS_IV -> "class IV (large machines, soft foundations)";
+        };
     }
 
     /**

@@ -116,7 +116,7 @@ public final class DesignContent {
         List<ReportContent.Note> warnings = r.warnings().stream()
                 .map(w -> new ReportContent.Note(w.code(), WarningText.of(w))).toList();
         return AcceptanceContent.with(new ReportContent(r.study().name(), c.sections, warnings, Cautions.STANDARD),
-                Optional.empty());
+                r.acceptance());
     }
 
     private void project(ProjectIdentity identity) {
