@@ -42,10 +42,18 @@ public final class AcceptanceContent {
      * @param content a design's report
      * @param acceptance its verdict, or empty when the project states no criterion
      * @return the report with the verdict's section first (after the project's details), or with
-     *     the one hidden row that writes {@code "acceptance": null} to the JSON
+     *     the one hidden row that writes {@code "acceptance": null} to the JSON; a verdict already
+     *     in the report is replaced
      */
     public static ReportContent with(ReportContent content, Optional<Acceptance> acceptance) {
-        List<ReportSection> sections = new ArrayList<>(content.sections());
+        // a verdict given again replaces the one there (or the row that says there is none)
+        List<ReportSection> sections = new ArrayList<>();
+        for (ReportSection s : content.sections()) {
+            if (s.id() != SectionId.ACCEPTANCE) {
+                sections.add(new ReportSection(s.id(), s.title(), s.rows().stream()
+                        .filter(r -> r.key() != ReportKey.ACCEPTANCE).toList()));
+            }
+        }
         if (acceptance.isPresent()) {
             int at = sections.isEmpty() || sections.get(0).id() != SectionId.PROJECT ? 0 : 1;
             sections.add(at, section(acceptance.get()));
