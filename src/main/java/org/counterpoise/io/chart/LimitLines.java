@@ -129,7 +129,8 @@ public final class LimitLines {
         }
         Optional<Integer> a = order(quantity);
         Optional<Integer> b = order(shown);
-        return a.isPresent() && b.isPresent() ? Optional.of(a.get() - b.get()) : Optional.empty();
+        // from velocity (1) to displacement (0): one integration, -1 derivative, x = v / omega
+        return a.isPresent() && b.isPresent() ? Optional.of(b.get() - a.get()) : Optional.empty();
     }
 
     private static Optional<Integer> order(ResponseKind k) {

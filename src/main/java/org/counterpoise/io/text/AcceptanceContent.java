@@ -121,8 +121,9 @@ public final class AcceptanceContent {
                 "outside its range a curve is held at its end value"));
         rows.add(row(ReportKey.ACCEPTANCE_UNBOUNDED, "unbounded", before.unbounded() || after.unbounded()
                 ? new Words(UNBOUNDED, List.of()) : new NotApplicable(), ""));
-        return new ReportSection(SectionId.ACCEPTANCE, a.absorberNeeded() ? "Acceptance: the criterion and the verdict"
-                : "Acceptance: no absorber is needed", rows);
+        return new ReportSection(SectionId.ACCEPTANCE, a.absorberNeeded()
+                ? "Acceptance: the verdict without / with the absorber"
+                : "Acceptance: no absorber is needed (verdict without / with it)", rows);
     }
 
     private static ReportRow row(ReportKey key, String label, ReportValue value, String source) {
