@@ -110,7 +110,8 @@ public final class ValueText {
         if (p.kind() == PairKind.RANGE) {
             return a.equals(b) ? a : new Cells(a.value() + " to " + b.value(), unit, false);
         }
-        return new Cells(a.value() + "  /  " + b.value(), unit, false);
+        // two phrases (verdicts, zones) read as words, left-aligned; numbers stay in the number column
+        return new Cells(a.value() + "  /  " + b.value(), unit, a.textual() && b.textual());
     }
 
     /**
