@@ -26,8 +26,7 @@ public final class ProjectEdits {
      * @return the edit
      */
     public static Edit structure(String key, StructureInput s) {
-        return new Edit(key, "structure", p -> new Project(p.name(), p.notes(), s, p.disturbance(), p.absorber(),
-                p.robustness(), p.identity()));
+        return new Edit(key, "structure", p -> p.withStructure(s));
     }
 
     /**
@@ -36,8 +35,7 @@ public final class ProjectEdits {
      * @return the edit
      */
     public static Edit disturbance(String key, DisturbanceInput d) {
-        return new Edit(key, "disturbance", p -> new Project(p.name(), p.notes(), p.structure(), d, p.absorber(),
-                p.robustness(), p.identity()));
+        return new Edit(key, "disturbance", p -> p.withDisturbance(d));
     }
 
     /**
@@ -46,8 +44,7 @@ public final class ProjectEdits {
      * @return the edit
      */
     public static Edit absorber(String key, AbsorberInput a) {
-        return new Edit(key, "absorber goal", p -> new Project(p.name(), p.notes(), p.structure(), p.disturbance(), a,
-                p.robustness(), p.identity()));
+        return new Edit(key, "absorber goal", p -> p.withAbsorber(a));
     }
 
     /**
@@ -61,9 +58,8 @@ public final class ProjectEdits {
      * @return the edit
      */
     public static Edit robustness(String key, RobustnessInput r) {
-        return new Edit(key, "robustness", p -> new Project(p.name(), p.notes(), p.structure(), p.disturbance(),
-                p.absorber(), r.withRanges(p.robustness() == null ? RobustnessInput.Ranges.NONE
-                        : p.robustness().ranges()), p.identity()));
+        return new Edit(key, "robustness", p -> p.withRobustness(
+                r.withRanges(p.robustness() == null ? RobustnessInput.Ranges.NONE : p.robustness().ranges())));
     }
 
     /**
@@ -76,8 +72,8 @@ public final class ProjectEdits {
      * @return the edit
      */
     public static Edit ranges(String key, RobustnessInput.Ranges ranges) {
-        return new Edit(key, "tolerance ranges", p -> new Project(p.name(), p.notes(), p.structure(), p.disturbance(),
-                p.absorber(), withRanges(p.robustness(), ranges), p.identity()));
+        return new Edit(key, "tolerance ranges", p -> p.withRobustness(
+                withRanges(p.robustness(), ranges)));
     }
 
     private static RobustnessInput withRanges(RobustnessInput r, RobustnessInput.Ranges ranges) {
@@ -96,8 +92,7 @@ public final class ProjectEdits {
      * @return the edit
      */
     public static Edit identity(String key, String name, String notes, ProjectIdentity identity) {
-        return new Edit(key, "project details", p -> new Project(name, notes, p.structure(), p.disturbance(),
-                p.absorber(), p.robustness(), identity));
+        return new Edit(key, "project details", p -> p.withDetails(name, notes, identity));
     }
 
     /**
@@ -109,12 +104,8 @@ public final class ProjectEdits {
      * @return an untitled project
      */
     public static Project untitled(Project template) {
-        AbsorberInput a = template.absorber();
-        AbsorberInput recommended = new AbsorberInput(a.massRatio(), a.mass(), DesignMethod.RECOMMENDED, a.response(),
-                a.hangsVertically(), a.strokeMargin(), a.target(), a.maxMassRatio(), a.strokeLimit(),
-                a.fixedDampingRatio(), a.fixedTuningRatio());
-        return new Project(Project.UNTITLED, "", template.structure(), template.disturbance(), recommended,
-                template.robustness(), ProjectIdentity.EMPTY);
+        return template.withDetails(Project.UNTITLED, "", ProjectIdentity.EMPTY)
+                .withAbsorber(template.absorber().withMethod(DesignMethod.RECOMMENDED));
     }
 
     /**
@@ -136,8 +127,7 @@ public final class ProjectEdits {
         String note = "The robustness target (" + QuantityFormat.number(old.value(), 4) + " " + old.unit().symbol()
                 + ") was cleared: the response that matters is now the " + response.label()
                 + ". Give a new target on the Robustness step.";
-        return new Consistent(new Project(p.name(), p.notes(), p.structure(), p.disturbance(), p.absorber(), cleared,
-                p.identity()), note);
+        return new Consistent(p.withRobustness(cleared), note);
     }
 
     /**
