@@ -148,10 +148,6 @@ public final class CriterionText {
             case GROUP_1_FLEXIBLE -> "group 1 (above 300 kW), flexible support";
             case GROUP_2_RIGID -> "group 2 (15 to 300 kW), rigid support";
             case GROUP_2_FLEXIBLE -> "group 2 (15 to 300 kW), flexible support";
-            case CLASS_I -> "class I (small machines up to 15 kW)";
-            case CLASS_II -> "class II (medium machines)";
-            case CLASS_III -> "class III (large machines, rigid heavy foundations)";
-            case CLASS_IV -> "class IV (large machines, soft foundations)";
         };
     }
 

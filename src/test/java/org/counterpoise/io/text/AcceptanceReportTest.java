@@ -181,8 +181,8 @@ class AcceptanceReportTest {
                         ComfortReaction.A_LITTLE_UNCOMFORTABLE)));
         assertEquals("people in buildings (ISO 10137): vertical base curve times 1.4 (residential night)",
                 CriterionText.of(new BuildingVibration(BuildingAxis.VERTICAL, RoomUse.RESIDENTIAL_NIGHT)));
-        assertEquals("machine vibration severity (ISO 20816-3): class I (small machines up to 15 kW), zone A"
-                + " accepted (newly commissioned)", CriterionText.of(new MachineSeverity(MachineClass.CLASS_I,
+        assertEquals("machine vibration severity (ISO 20816-3): group 1 (above 300 kW), flexible support, zone A"
+                + " accepted (newly commissioned)", CriterionText.of(new MachineSeverity(MachineClass.GROUP_1_FLEXIBLE,
                         SeverityZone.A)));
         assertEquals("sensitive equipment (vibration criterion curves): VC-C curve, 0.01250 mm/s r.m.s. in"
                 + " one-third-octave bands", CriterionText.of(new EquipmentVibration(VibrationCriterionCurve.VC_C)));
