@@ -1,8 +1,10 @@
 package org.counterpoise.ui.gui.document;
 
+import org.counterpoise.core.criteria.AmplitudeConvention;
 import org.counterpoise.core.design.DesignMethod;
 import org.counterpoise.core.response.ResponseKind;
 import org.counterpoise.io.project.AbsorberInput;
+import org.counterpoise.io.project.AcceptanceInput;
 import org.counterpoise.io.project.DisturbanceInput;
 import org.counterpoise.io.project.Project;
 import org.counterpoise.io.project.ProjectIdentity;
@@ -26,8 +28,7 @@ public final class ProjectEdits {
      * @return the edit
      */
     public static Edit structure(String key, StructureInput s) {
-        return new Edit(key, "structure", p -> new Project(p.name(), p.notes(), s, p.disturbance(), p.absorber(),
-                p.robustness(), p.identity()));
+        return new Edit(key, "structure", p -> p.withStructure(s));
     }
 
     /**
@@ -36,8 +37,7 @@ public final class ProjectEdits {
      * @return the edit
      */
     public static Edit disturbance(String key, DisturbanceInput d) {
-        return new Edit(key, "disturbance", p -> new Project(p.name(), p.notes(), p.structure(), d, p.absorber(),
-                p.robustness(), p.identity()));
+        return new Edit(key, "disturbance", p -> p.withDisturbance(d));
     }
 
     /**
@@ -46,8 +46,7 @@ public final class ProjectEdits {
      * @return the edit
      */
     public static Edit absorber(String key, AbsorberInput a) {
-        return new Edit(key, "absorber goal", p -> new Project(p.name(), p.notes(), p.structure(), p.disturbance(), a,
-                p.robustness(), p.identity()));
+        return new Edit(key, "absorber goal", p -> p.withAbsorber(a));
     }
 
     /**
@@ -61,9 +60,8 @@ public final class ProjectEdits {
      * @return the edit
      */
     public static Edit robustness(String key, RobustnessInput r) {
-        return new Edit(key, "robustness", p -> new Project(p.name(), p.notes(), p.structure(), p.disturbance(),
-                p.absorber(), r.withRanges(p.robustness() == null ? RobustnessInput.Ranges.NONE
-                        : p.robustness().ranges()), p.identity()));
+        return new Edit(key, "robustness", p -> p.withRobustness(r.withRanges(p.robustness() == null
+                ? RobustnessInput.Ranges.NONE : p.robustness().ranges())));
     }
 
     /**
@@ -76,8 +74,7 @@ public final class ProjectEdits {
      * @return the edit
      */
     public static Edit ranges(String key, RobustnessInput.Ranges ranges) {
-        return new Edit(key, "tolerance ranges", p -> new Project(p.name(), p.notes(), p.structure(), p.disturbance(),
-                p.absorber(), withRanges(p.robustness(), ranges), p.identity()));
+        return new Edit(key, "tolerance ranges", p -> p.withRobustness(withRanges(p.robustness(), ranges)));
     }
 
     private static RobustnessInput withRanges(RobustnessInput r, RobustnessInput.Ranges ranges) {
@@ -96,25 +93,40 @@ public final class ProjectEdits {
      * @return the edit
      */
     public static Edit identity(String key, String name, String notes, ProjectIdentity identity) {
-        return new Edit(key, "project details", p -> new Project(name, notes, p.structure(), p.disturbance(),
-                p.absorber(), p.robustness(), identity));
+        return new Edit(key, "project details", p -> p.withDetails(name, notes, identity));
+    }
+
+    /**
+     * @param key the field edited
+     * @param criterion the acceptance criterion as now shown, or null for none
+     * @return the edit
+     */
+    public static Edit acceptance(String key, AcceptanceInput criterion) {
+        return new Edit(key, "criterion", p -> p.withAcceptance(criterion));
+    }
+
+    /**
+     * @param key the field edited
+     * @param convention how response values are shown: peak, r.m.s. or peak-to-peak
+     * @return the edit
+     */
+    public static Edit displayConvention(String key, AmplitudeConvention convention) {
+        return new Edit(key, "display convention", p -> p.withDisplayConvention(convention));
     }
 
     /**
      * A new project: the numbers of a template to start from (an invented scenario), but none of
-     * its name, notes or identity, which belong to the scenario and not to the user's project; and
+     * its name, notes or identity, which belong to the scenario and not to the user's project (its
+     * criterion and display convention are numbers of the scenario, kept, so a first project shows a
+     * verdict); and
      * the recommended design method ({@link DesignMethod#RECOMMENDED}, issue 12), whatever the
      * scenario's was.
      * @param template the scenario to start from
      * @return an untitled project
      */
     public static Project untitled(Project template) {
-        AbsorberInput a = template.absorber();
-        AbsorberInput recommended = new AbsorberInput(a.massRatio(), a.mass(), DesignMethod.RECOMMENDED, a.response(),
-                a.hangsVertically(), a.strokeMargin(), a.target(), a.maxMassRatio(), a.strokeLimit(),
-                a.fixedDampingRatio(), a.fixedTuningRatio());
-        return new Project(Project.UNTITLED, "", template.structure(), template.disturbance(), recommended,
-                template.robustness(), ProjectIdentity.EMPTY);
+        return template.withAbsorber(template.absorber().withMethod(DesignMethod.RECOMMENDED))
+                .withDetails(Project.UNTITLED, "", ProjectIdentity.EMPTY);
     }
 
     /**
@@ -136,8 +148,7 @@ public final class ProjectEdits {
         String note = "The robustness target (" + QuantityFormat.number(old.value(), 4) + " " + old.unit().symbol()
                 + ") was cleared: the response that matters is now the " + response.label()
                 + ". Give a new target on the Robustness step.";
-        return new Consistent(new Project(p.name(), p.notes(), p.structure(), p.disturbance(), p.absorber(), cleared,
-                p.identity()), note);
+        return new Consistent(p.withRobustness(cleared), note);
     }
 
     /**

@@ -27,11 +27,15 @@ import org.counterpoise.core.criteria.UserLimit;
 import org.counterpoise.core.criteria.VibrationCriterionCurve;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.response.ResponseKind;
-import org.counterpoise.core.units.Unit;
+import org.counterpoise.io.project.AcceptanceInput;
+import org.counterpoise.io.project.AcceptanceInput.CurvePoint;
+import org.counterpoise.io.project.AcceptanceInput.Published;
+import org.counterpoise.io.project.AcceptanceInput.StatedLimit;
 import org.counterpoise.io.project.Project;
 import org.counterpoise.io.text.DisplayUnits;
 import org.counterpoise.io.text.QuantityFormat;
 import org.counterpoise.io.text.UnitChoices;
+import org.counterpoise.ui.gui.Themes;
 import org.counterpoise.ui.gui.field.Form;
 import org.counterpoise.ui.gui.field.ItemWords;
 import org.counterpoise.ui.gui.field.QuantityField;
@@ -82,10 +86,11 @@ final class CriterionForm {
             new SeverityZone[] {SeverityZone.A, SeverityZone.B, SeverityZone.C});
     private final JComboBox<VibrationCriterionCurve> curve = new JComboBox<>(VibrationCriterionCurve.values());
     private final JLabel summary = new JLabel(" ");
+    private final JLabel problem = new JLabel(" ");
     /** The rows of each family, to show only the chosen one's. */
     private final List<Row> rows = new ArrayList<>();
     /** A stated limit that is a curve over frequency (from a file): kept while the value field is empty. */
-    private LimitCurve statedCurve;
+    private List<CurvePoint> statedCurve;
     private Consumer<String> changed = key -> { };
 
     private record Row(Family family, JLabel label, JComponent field) {
@@ -103,6 +108,8 @@ final class CriterionForm {
         zone.setName("acceptance.zone");
         curve.setName("acceptance.curve");
         summary.setName("acceptance.summary");
+        problem.setName("acceptance.problem");
+        problem.setForeground(Themes.problemColour());
         ItemWords.show(family, Family.class, f -> f.kind().map(CriterionWords::of).orElse("none: no verdict"));
         ItemWords.show(quantity, ResponseKind.class, ResponseKind::label);
         ItemWords.show(convention, AmplitudeConvention.class, CriterionWords::of);
@@ -161,6 +168,7 @@ final class CriterionForm {
         add(form, Family.EQUIPMENT, "Curve", 'u', curve, "The vibration criterion curve the equipment needs");
         summary.setForeground(UIManager.getColor("Label.disabledForeground"));
         form.derived("", summary);
+        form.derived("", problem);
         form.row("Show values as", 'p', displayConvention,
                 "Peak, r.m.s. or peak-to-peak: every response value on the result step and the charts says which");
         showFamilyRows();
@@ -201,6 +209,36 @@ final class CriterionForm {
     }
 
     /**
+     * The stated limit follows the response that matters (the lightest absorber is sized for it):
+     * the quantity becomes that response, and a value typed for another dimension is emptied, not
+     * read in the new unit.
+     * @param response the response that matters now
+     * @return what was emptied and what to type, or null when nothing was
+     */
+    String follow(ResponseKind response) {
+        ResponseKind was = selectedQuantity();
+        if (family.getSelectedItem() != Family.USER_LIMIT || response == null || response.needsAbsorber()
+                || was == response) {
+            return null;
+        }
+        String text = limit.textField().getText().strip();
+        boolean sameDimension = was.dimension() == response.dimension();
+        Step.selectItem(quantity, response);
+        if (sameDimension || text.isEmpty()) {
+            return null;
+        }
+        String note = "The limit (" + text + " for the " + was.label() + ") was emptied: type the largest "
+                + response.label() + " you accept.";
+        limit.clearBecause(Character.toLowerCase(note.charAt(0)) + note.substring(1));
+        return note;
+    }
+
+    /** @return true when a stated limit of one value is chosen: its field must hold a number */
+    boolean needsLimit() {
+        return family.getSelectedItem() == Family.USER_LIMIT && statedCurve == null;
+    }
+
+    /**
      * @param response the response that matters: a new stated limit starts as that quantity
      */
     void startUserLimitAs(ResponseKind response) {
@@ -210,102 +248,82 @@ final class CriterionForm {
         }
     }
 
-    /** @return true when a stated limit is chosen and its value is not a number (shown under the field) */
-    boolean limitMissing() {
-        return family.getSelectedItem() == Family.USER_LIMIT && statedCurve == null;
-    }
-
     /**
-     * @return the criterion as shown, or empty for none
+     * @return the criterion as shown, or null for none
      * @throws InvalidInputException naming acceptance.limit when a stated limit is not a number
      */
-    Optional<Criterion> criterion() {
+    AcceptanceInput acceptance() {
         Family f = (Family) family.getSelectedItem();
-        return Optional.ofNullable(switch (f) {
+        return switch (f) {
             case NONE -> null;
-            case USER_LIMIT -> new UserLimit((ResponseKind) quantity.getSelectedItem(),
-                    (AmplitudeConvention) convention.getSelectedItem(),
-                    statedCurve != null && limit.textField().getText().isBlank() ? statedCurve
-                            : LimitCurve.flat(positiveLimit()));
-            case HUMAN_COMFORT -> new HumanComfort((FrequencyWeighting) weighting.getSelectedItem(),
-                    (ComfortReaction) reaction.getSelectedItem());
-            case BUILDING -> new BuildingVibration((BuildingAxis) direction.getSelectedItem(),
-                    (RoomUse) room.getSelectedItem());
-            case MACHINE -> new MachineSeverity((MachineClass) machine.getSelectedItem(),
-                    (SeverityZone) zone.getSelectedItem());
-            case EQUIPMENT -> new EquipmentVibration((VibrationCriterionCurve) curve.getSelectedItem());
-        });
+            case USER_LIMIT -> statedCurve != null && limit.textField().getText().isBlank()
+                    ? new StatedLimit(selectedQuantity(), selectedConvention(), null, statedCurve)
+                    : StatedLimit.flat(selectedQuantity(), selectedConvention(), limit.input());
+            case HUMAN_COMFORT -> new Published(new HumanComfort((FrequencyWeighting) weighting.getSelectedItem(),
+                    (ComfortReaction) reaction.getSelectedItem()));
+            case BUILDING -> new Published(new BuildingVibration((BuildingAxis) direction.getSelectedItem(),
+                    (RoomUse) room.getSelectedItem()));
+            case MACHINE -> new Published(new MachineSeverity((MachineClass) machine.getSelectedItem(),
+                    (SeverityZone) zone.getSelectedItem()));
+            case EQUIPMENT -> new Published(new EquipmentVibration((VibrationCriterionCurve) curve.getSelectedItem()));
+        };
     }
 
-    private double positiveLimit() {
-        double si = limit.siOrNaN();
-        if (!(si > 0)) {
-            limit.number(); // throws the field's own message when it is not a number
-            throw new InvalidInputException("acceptance.limit", limit.textField().getText().strip(),
-                    "a limit above zero");
-        }
-        return si;
+    private ResponseKind selectedQuantity() {
+        return (ResponseKind) quantity.getSelectedItem();
     }
 
-    /** @return the unit the stated limit is typed in */
-    Unit limitUnit() {
-        return limit.unit();
+    private AmplitudeConvention selectedConvention() {
+        return (AmplitudeConvention) convention.getSelectedItem();
     }
 
     /**
      * Shows a criterion (only what differs from the screen is touched).
-     * @param c the criterion, or empty for none
-     * @param unit the unit a stated limit was typed in, or null for the display unit
+     * @param a the criterion as the project holds it, or null for none
      */
-    void show(Optional<Criterion> c, Unit unit) {
-        Step.selectItem(family, c.map(x -> Family.of(x.kind())).orElse(Family.NONE));
-        if (c.isEmpty()) {
-            describe();
-            return;
-        }
-        Criterion shown = c.get();
-        if (shown instanceof UserLimit u) {
+    void show(AcceptanceInput a) {
+        Step.selectItem(family, a == null ? Family.NONE : Family.of(a.kind()));
+        if (a instanceof StatedLimit u) {
             Step.selectItem(quantity, u.quantity());
             Step.selectItem(convention, u.convention());
             limitUnits();
-            if (u.limit().isFlat()) {
+            if (u.value() != null) {
                 statedCurve = null;
-                Unit in = unit != null && unit.dimension() == u.quantity().dimension() ? unit
-                        : DisplayUnits.of(u.quantity().dimension());
-                Step.showValue(limit, in.fromSi(u.limit().at(1.0)), in);
+                Step.showValue(limit, u.value());
             } else {
-                statedCurve = u.limit();
+                statedCurve = u.curve();
                 Step.showValue(limit, null);
             }
-        } else if (shown instanceof HumanComfort h) {
-            Step.selectItem(weighting, h.axisWeighting());
-            Step.selectItem(reaction, h.acceptable());
-        } else if (shown instanceof BuildingVibration b) {
-            Step.selectItem(direction, b.axis());
-            Step.selectItem(room, b.use());
-        } else if (shown instanceof MachineSeverity m) {
-            Step.selectItem(machine, m.machine());
-            Step.selectItem(zone, m.acceptable());
-        } else if (shown instanceof EquipmentVibration e) {
-            Step.selectItem(curve, e.curve());
+        } else if (a instanceof Published published) {
+            Criterion shown = published.criterion();
+            if (shown instanceof HumanComfort h) {
+                Step.selectItem(weighting, h.axisWeighting());
+                Step.selectItem(reaction, h.acceptable());
+            } else if (shown instanceof BuildingVibration b) {
+                Step.selectItem(direction, b.axis());
+                Step.selectItem(room, b.use());
+            } else if (shown instanceof MachineSeverity m) {
+                Step.selectItem(machine, m.machine());
+                Step.selectItem(zone, m.acceptable());
+            } else if (shown instanceof EquipmentVibration e) {
+                Step.selectItem(curve, e.curve());
+            }
         }
         describe();
     }
 
     /** Says what is judged, against which limit, and where the values come from. */
     private void describe() {
-        Optional<Criterion> c;
+        AcceptanceInput a;
+        Criterion c;
         try {
-            c = criterion();
+            a = acceptance();
+            c = a == null ? null : a.toCriterion();
         } catch (InvalidInputException e) {
             summary.setText(" ");
             return;
         }
-        if (c.isEmpty()) {
-            summary.setText(html("The result is shown without a verdict."));
-            return;
-        }
-        summary.setText(html(describe(c.get())));
+        summary.setText(html(c == null ? "The result is shown without a verdict." : describe(c)));
     }
 
     /**
@@ -327,6 +345,12 @@ final class CriterionForm {
     private static String html(String text) {
         return "<html><body style='width: 300pt'>" + text.replace("&", "&amp;").replace("<", "&lt;")
                 + "</body></html>";
+    }
+
+    /** @param text a problem of the criterion (not of its number field), or null to clear it */
+    void problem(String text) {
+        problem.setText(text == null ? " " : html(text));
+        family.putClientProperty("JComponent.outline", text == null ? null : "error");
     }
 
     /** @return the summary line, for tests */
