@@ -86,8 +86,9 @@ public final class Form extends JPanel {
     /**
      * @param label the label
      * @param value a read-only value (derived quantity)
+     * @return the row's label (to hide the row with {@link #showRow})
      */
-    public void derived(String label, JLabel value) {
+    public JLabel derived(String label, JLabel value) {
         JLabel l = new JLabel(label);
         l.setEnabled(false);
         GridBagConstraints lc = constraints(0, row);
@@ -98,6 +99,7 @@ public final class Form extends JPanel {
         fc.anchor = GridBagConstraints.LINE_START;
         fc.insets = new Insets(2, 6, 2, 0);
         add(value, fc);
+        return l;
     }
 
     /** Pushes the rows to the top. */

@@ -41,6 +41,7 @@ final class BalanceGradeForm {
     private final JLabel unbalance = StructureStep.derived("derived.balanceGrade");
     private JLabel[] labels = new JLabel[0];
     private JLabel sourceLabel;
+    private JLabel unbalanceLabel;
     private Consumer<String> changed = key -> { };
 
     BalanceGradeForm() {
@@ -80,7 +81,7 @@ final class BalanceGradeForm {
             form.row("Rotor mass", 'm', rotorMass, "The mass of the rotating part"),
             form.row("Maximum service speed", 'x', maxSpeed, "The highest speed the rotor runs at in service"),
         };
-        form.derived("Permissible residual unbalance", unbalance);
+        unbalanceLabel = form.derived("Permissible residual unbalance", unbalance);
     }
 
     /** @param listener told the key of every change a user makes */
@@ -101,7 +102,9 @@ final class BalanceGradeForm {
         for (int i = 0; i < labels.length; i++) {
             Form.showRow(labels[i], f[i], byGrade);
         }
-        unbalance.setVisible(byGrade);
+        if (unbalanceLabel != null) {
+            Form.showRow(unbalanceLabel, unbalance, byGrade);
+        }
     }
 
     /** @return true when the grade gives the unbalance */

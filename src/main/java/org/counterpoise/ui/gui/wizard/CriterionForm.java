@@ -5,6 +5,7 @@ import java.util.Arrays;
 import java.util.List;
 import java.util.Optional;
 import java.util.function.Consumer;
+import java.util.function.Supplier;
 import javax.swing.JComboBox;
 import javax.swing.JComponent;
 import javax.swing.JLabel;
@@ -92,6 +93,9 @@ final class CriterionForm {
     /** A stated limit that is a curve over frequency (from a file): kept while the value field is empty. */
     private List<CurvePoint> statedCurve;
     private Consumer<String> changed = key -> { };
+    private Supplier<ResponseKind> responseThatMatters = () -> null;
+    /** True while a project's criterion is shown (not a user's pick). */
+    private boolean showing;
 
     private record Row(Family family, JLabel label, JComponent field) {
     }
@@ -127,6 +131,9 @@ final class CriterionForm {
         curve.setSelectedItem(FIRST_CURVE);
         limitUnits();
         family.addActionListener(e -> {
+            if (family.getSelectedItem() == Family.USER_LIMIT && !showing) {
+                startUserLimitAs(responseThatMatters.get());
+            }
             showFamilyRows();
             edited("acceptance.criterion");
         });
@@ -238,13 +245,21 @@ final class CriterionForm {
         return family.getSelectedItem() == Family.USER_LIMIT && statedCurve == null;
     }
 
+    /** @param response where the response that matters is read: a new stated limit starts as that quantity */
+    void responseThatMatters(Supplier<ResponseKind> response) {
+        responseThatMatters = response;
+    }
+
     /**
-     * @param response the response that matters: a new stated limit starts as that quantity
+     * A stated limit chosen by the user starts as the response that matters, and says what to type.
+     * @param response the response that matters
      */
-    void startUserLimitAs(ResponseKind response) {
-        if (limit.textField().getText().isBlank() && statedCurve == null && response != null
-                && !response.needsAbsorber()) {
-            Step.selectItem(quantity, response);
+    private void startUserLimitAs(ResponseKind response) {
+        if (limit.textField().getText().isBlank() && statedCurve == null) {
+            if (response != null && !response.needsAbsorber()) {
+                Step.selectItem(quantity, response);
+            }
+            limit.clearBecause("type the largest " + selectedQuantity().label() + " you accept");
         }
     }
 
@@ -282,7 +297,12 @@ final class CriterionForm {
      * @param a the criterion as the project holds it, or null for none
      */
     void show(AcceptanceInput a) {
-        Step.selectItem(family, a == null ? Family.NONE : Family.of(a.kind()));
+        showing = true;
+        try {
+            Step.selectItem(family, a == null ? Family.NONE : Family.of(a.kind()));
+        } finally {
+            showing = false;
+        }
         if (a instanceof StatedLimit u) {
             Step.selectItem(quantity, u.quantity());
             Step.selectItem(convention, u.convention());

@@ -177,8 +177,15 @@ final class GoalStep extends Step {
             }
             edited("absorber.response");
         });
-        criterion.onChange(key -> commit(() -> ProjectEdits.acceptance(key, criterion.acceptance())));
-        displayConvention.addActionListener(e -> commit(() -> ProjectEdits.displayConvention("display.convention",
+        criterion.onChange(key -> {
+            if (key.equals("acceptance.limit")) {
+                commit(() -> ProjectEdits.acceptance(key, criterion.acceptance()));
+            } else {
+                commitChoice(() -> ProjectEdits.acceptance(key, criterion.acceptance()));
+            }
+        });
+        criterion.responseThatMatters(() -> (ResponseKind) response.getSelectedItem());
+        displayConvention.addActionListener(e -> commitChoice(() -> ProjectEdits.displayConvention("display.convention",
                 (AmplitudeConvention) displayConvention.getSelectedItem())));
         hangs.addActionListener(e -> edited("absorber.hangs"));
         for (QuantityField f : List.of(size, margin, strokeLimit, maxMassRatio, fixedDamping, fixedTuning)) {
