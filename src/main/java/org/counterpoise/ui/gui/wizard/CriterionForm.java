@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Optional;
 import java.util.function.Consumer;
 import java.util.function.Supplier;
+import java.awt.Dimension;
 import javax.swing.JComboBox;
 import javax.swing.JComponent;
 import javax.swing.JLabel;
@@ -40,6 +41,7 @@ import org.counterpoise.ui.gui.Themes;
 import org.counterpoise.ui.gui.field.Form;
 import org.counterpoise.ui.gui.field.ItemWords;
 import org.counterpoise.ui.gui.field.QuantityField;
+import org.counterpoise.ui.gui.field.Sizes;
 
 /**
  * The acceptance criterion as the absorber-goal step shows it: none, or one of the five families
@@ -69,6 +71,9 @@ final class CriterionForm {
     private static final MachineClass FIRST_MACHINE = MachineClass.GROUP_2_RIGID;
     private static final SeverityZone FIRST_ZONE = SeverityZone.B;
     private static final VibrationCriterionCurve FIRST_CURVE = VibrationCriterionCurve.VC_A;
+
+    /** The widest a list of this form is drawn closed, pixels before scaling. */
+    private static final int LIST_WIDTH = 250;
 
     private final JComboBox<Family> family = new JComboBox<>(Family.values());
     private final JComboBox<ResponseKind> quantity = new JComboBox<>(Project.DESIGN_RESPONSES.stream()
@@ -124,6 +129,12 @@ final class CriterionForm {
         ItemWords.show(machine, MachineClass.class, CriterionWords::of);
         ItemWords.show(zone, SeverityZone.class, CriterionWords::of);
         ItemWords.show(curve, VibrationCriterionCurve.class, CriterionWords::of);
+        for (JComboBox<?> c : List.of(family, quantity, convention, weighting, reaction, direction, room, machine, zone,
+                curve)) {
+            // The form stands beside the absorber's at 1366 x 768: the open list shows long choices whole.
+            Dimension size = c.getPreferredSize();
+            c.setPreferredSize(Sizes.of(Math.min(size.width, LIST_WIDTH), size.height));
+        }
         reaction.setSelectedItem(FIRST_REACTION);
         room.setSelectedItem(FIRST_ROOM);
         machine.setSelectedItem(FIRST_MACHINE);
@@ -363,7 +374,7 @@ final class CriterionForm {
     }
 
     private static String html(String text) {
-        return "<html><body style='width: 300pt'>" + text.replace("&", "&amp;").replace("<", "&lt;")
+        return "<html><body style='width: 190pt'>" + text.replace("&", "&amp;").replace("<", "&lt;")
                 + "</body></html>";
     }
 

@@ -119,8 +119,8 @@ final class GoalStep extends Step {
         });
         // The longest method description would make the form wider than a small screen; the open list shows it whole.
         var methodSize = method.getPreferredSize();
-        // 420 leaves room for the tolerance ranges beside the form at 1366 x 768.
-        method.setPreferredSize(Sizes.of(Math.min(methodSize.width, 420), methodSize.height));
+        // 340 leaves room for the criterion and the tolerance ranges beside the form at 1366 x 768.
+        method.setPreferredSize(Sizes.of(Math.min(methodSize.width, 340), methodSize.height));
         Form form = new Form();
         form.heading("The absorber you can fit");
         form.row("Size given as", 'z', sizing,
