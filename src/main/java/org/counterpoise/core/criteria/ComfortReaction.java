@@ -7,10 +7,12 @@ import java.util.Optional;
 /**
  * The likely reactions to weighted r.m.s. acceleration in public transport, ISO 2631-1:1997
  * Annex C, C.2.3 (the ranges overlap in the standard). The end points (below 0.315, above 2 m/s^2)
- * and the overlap are as transcribed in reference/acceptance-criteria.md section 2.2; the
- * intermediate bounds are from memory there and must be checked against the standard before
- * they are used as hard limits. The standard sets no comfort limit: which reaction is acceptable
- * depends on the use, and the user chooses it.
+ * and the overlap are as transcribed in reference/acceptance-criteria.md section 2.2 (from a public
+ * library's documentation); the intermediate bounds (0.315-0.63, 0.5-1, 0.8-1.6, 1.25-2.5) are the
+ * same in two further independent public implementations, but were not read in the standard: verify
+ * them before using them as hard limits. The standard sets no comfort limit: which reaction is
+ * acceptable depends on the trip and the activity, and the user chooses it. A value on a shared
+ * bound belongs to the lower range (the rule of {@link Zone#contains}).
  */
 public enum ComfortReaction {
     NOT_UNCOMFORTABLE("not-uncomfortable", 0.0, 0.315),
@@ -21,7 +23,8 @@ public enum ComfortReaction {
     EXTREMELY_UNCOMFORTABLE("extremely-uncomfortable", 2.0, Double.POSITIVE_INFINITY);
 
     /** Source of the table. */
-    public static final String SOURCE = "ISO 2631-1:1997 Annex C, C.2.3";
+    public static final String SOURCE = "ISO 2631-1:1997 Annex C, C.2.3 (intermediate bounds as publicly"
+            + " transcribed: verify before use as a hard limit)";
 
     private final String id;
     private final double lower;

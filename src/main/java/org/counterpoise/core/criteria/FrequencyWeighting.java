@@ -17,8 +17,11 @@ import org.counterpoise.core.rational.TransferFunction;
  *   Hs = (w5/w6)^2 (1 + s/(Q5 w5) + (s/w5)^2) / (1 + s/(Q6 w6) + (s/w6)^2)
  * </pre>
  *
- * The values are those of ISO 2631-1:1997 Table 3 as transcribed and checked in
- * reference/acceptance-criteria.md section 1.2 (three independent public transcriptions agree).
+ * The constants of Wk and Wd are those of ISO 2631-1:1997 Annex A as three independent public
+ * implementations give them (all agree); Wm is ISO 2631-2:2003 Annex A as given by ISO 8041-1:2017.
+ * The resulting factors are checked against the tables the standards print: ISO 2631-1:1997 Table 3
+ * at the nominal band frequencies (3 significant figures) and ISO 8041-1:2017 Annex B at the exact
+ * band centres (4 significant figures), in FrequencyWeightingTableTest.
  */
 public enum FrequencyWeighting {
     /** Wk: vertical (z) whole-body vibration, seated, standing, recumbent (ISO 2631-1:1997 Table 3). */

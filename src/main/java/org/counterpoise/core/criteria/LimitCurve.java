@@ -24,20 +24,33 @@ public record LimitCurve(List<Point> points) {
      * @param limit the limit there, SI unit of the criterion's quantity, in its convention (&gt; 0)
      */
     public record Point(double frequency, double limit) {
-        /** Validates the point. */
+        /** Validates the point; the message names the point by its two values. */
         public Point {
-            Checks.positive("limit curve frequency", frequency);
-            Checks.positive("limit curve value", limit);
+            if (!(frequency > 0) || Double.isInfinite(frequency)) {
+                throw new InvalidInputException("limit curve point", show(frequency, limit),
+                        "the frequency must be a finite number of hertz greater than 0");
+            }
+            if (!(limit > 0) || Double.isInfinite(limit)) {
+                throw new InvalidInputException("limit curve point", show(frequency, limit),
+                        "the limit must be a finite number greater than 0");
+            }
+        }
+
+        private static String show(double frequency, double limit) {
+            return "(" + Checks.show(frequency) + " Hz, " + Checks.show(limit) + ")";
         }
     }
 
     /** Validates the curve. */
     public LimitCurve {
-        Checks.present("limit curve", points, "at least one point");
-        points = List.copyOf(points);
+        Checks.present("limit curve", points, "at least one point (frequency, limit)");
         if (points.isEmpty()) {
             throw InvalidInputException.missing("limit curve", "at least one point (frequency, limit)");
         }
+        for (int i = 0; i < points.size(); i++) {
+            Checks.present("limit curve point " + (i + 1), points.get(i), "a frequency and a limit");
+        }
+        points = List.copyOf(points);
         for (int i = 1; i < points.size(); i++) {
             if (!(points.get(i).frequency() > points.get(i - 1).frequency())) {
                 throw new InvalidInputException("limit curve point " + (i + 1),
@@ -76,6 +89,7 @@ public record LimitCurve(List<Point> points) {
      * @return the limit there (end values held outside the points)
      */
     public double at(double frequency) {
+        Checks.positive("limit curve frequency", frequency);
         if (frequency <= lowFrequency()) {
             return points.get(0).limit();
         }

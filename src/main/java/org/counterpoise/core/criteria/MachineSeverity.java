@@ -63,6 +63,6 @@ public record MachineSeverity(MachineClass machine, SeverityZone acceptable) imp
 
     @Override
     public String source() {
-        return MachineClass.SOURCE;
+        return machine.source();
     }
 }

@@ -5,6 +5,7 @@ import java.util.EnumMap;
 import java.util.List;
 import java.util.Map;
 import java.util.OptionalDouble;
+import org.counterpoise.core.criteria.Assessor;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.error.NotFoundException;
 import org.counterpoise.core.error.Warning;
@@ -128,7 +129,8 @@ public final class Designer {
                 motionAfter, strokeInBand, strokeRunUp, clearance,
                 fitted.peakOver(ResponseKind.SPRING_FORCE, band), fitted.peakOver(ResponseKind.DAMPER_FORCE, band),
                 fitted.peakOver(ResponseKind.ABSORBER_FORCE, band), coupled, detuning, massDetuning,
-                structureTolerance, absorberTolerance, warnings, active[0], runUpStroke);
+                structureTolerance, absorberTolerance, warnings, active[0], runUpStroke,
+                study.criterion().map(c -> Assessor.of(c, excitation).acceptance(structure, tuning)));
     }
 
     private static ClosedForm choose(DesignStudy study, List<Warning> warnings, ActiveConstraint[] active) {

@@ -1,0 +1,118 @@
+package org.counterpoise.core.criteria;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.Arrays;
+import java.util.List;
+import org.counterpoise.core.error.InvalidInputException;
+import org.counterpoise.core.response.ResponseKind;
+import org.junit.jupiter.api.Test;
+
+/**
+ * Machine vibration severity zones. Groups 1 and 2: ISO 10816-3:2009 Tables A.1 and A.2 (velocity,
+ * mm/s r.m.s.; displacement, um r.m.s.) as transcribed in jmrplens/phonometry and, for velocity,
+ * LGDiMaggio/predictive-maintenance-mcp (both agree). Classes I to IV: ISO 10816-1:1995 Annex B as
+ * several public implementations transcribe it. Exactly the printed values.
+ */
+class MachineClassTest {
+
+    private static void assertBoundaries(MachineClass m, double ab, double bc, double cd) {
+        assertEquals(ab, m.upperBoundary(SeverityZone.A), 0, m.id() + " A/B");
+        assertEquals(bc, m.upperBoundary(SeverityZone.B), 0, m.id() + " B/C");
+        assertEquals(cd, m.upperBoundary(SeverityZone.C), 0, m.id() + " C/D");
+        assertEquals(Double.POSITIVE_INFINITY, m.upperBoundary(SeverityZone.D));
+    }
+
+    private static void assertDisplacement(MachineClass m, double ab, double bc, double cd) {
+        assertTrue(m.hasDisplacementBoundaries());
+        assertEquals(ab, m.upperDisplacementBoundary(SeverityZone.A), 0, m.id() + " A/B");
+        assertEquals(bc, m.upperDisplacementBoundary(SeverityZone.B), 0, m.id() + " B/C");
+        assertEquals(cd, m.upperDisplacementBoundary(SeverityZone.C), 0, m.id() + " C/D");
+    }
+
+    @Test
+    void velocityBoundariesOfIso10816Part3() {
+        // ISO 10816-3:2009 Table A.1 (group 1) and A.2 (group 2), mm/s r.m.s.
+        assertBoundaries(MachineClass.GROUP_1_RIGID, 2.3e-3, 4.5e-3, 7.1e-3);
+        assertBoundaries(MachineClass.GROUP_1_FLEXIBLE, 3.5e-3, 7.1e-3, 11.0e-3);
+        assertBoundaries(MachineClass.GROUP_2_RIGID, 1.4e-3, 2.8e-3, 4.5e-3);
+        assertBoundaries(MachineClass.GROUP_2_FLEXIBLE, 2.3e-3, 4.5e-3, 7.1e-3);
+    }
+
+    @Test
+    void displacementBoundariesOfIso10816Part3() {
+        // ISO 10816-3:2009 Table A.1 and A.2, um r.m.s.
+        assertDisplacement(MachineClass.GROUP_1_RIGID, 29e-6, 57e-6, 90e-6);
+        assertDisplacement(MachineClass.GROUP_1_FLEXIBLE, 45e-6, 90e-6, 140e-6);
+        assertDisplacement(MachineClass.GROUP_2_RIGID, 22e-6, 45e-6, 71e-6);
+        assertDisplacement(MachineClass.GROUP_2_FLEXIBLE, 37e-6, 71e-6, 113e-6);
+    }
+
+    @Test
+    void classesOfIso10816Part1AnnexB() {
+        // ISO 10816-1:1995 Annex B, mm/s r.m.s.; velocity only.
+        assertBoundaries(MachineClass.CLASS_I, 0.71e-3, 1.8e-3, 4.5e-3);
+        assertBoundaries(MachineClass.CLASS_II, 1.12e-3, 2.8e-3, 7.1e-3);
+        assertBoundaries(MachineClass.CLASS_III, 1.8e-3, 4.5e-3, 11.2e-3);
+        assertBoundaries(MachineClass.CLASS_IV, 2.8e-3, 7.1e-3, 18e-3);
+        for (MachineClass m : List.of(MachineClass.CLASS_I, MachineClass.CLASS_II, MachineClass.CLASS_III,
+                MachineClass.CLASS_IV)) {
+            assertFalse(m.hasDisplacementBoundaries());
+            assertEquals(List.of(), m.displacementZones());
+            assertEquals(Double.POSITIVE_INFINITY, m.upperDisplacementBoundary(SeverityZone.B));
+            assertEquals(0, m.displacementGovernsBelow(SeverityZone.B));
+            assertTrue(m.source().contains("ISO 10816-1:1995"));
+        }
+    }
+
+    @Test
+    void zonesFollowTheBoundaries() {
+        List<Zone> v = MachineClass.GROUP_1_FLEXIBLE.zones();
+        assertEquals(List.of(new Zone("A", 0, 3.5e-3), new Zone("B", 3.5e-3, 7.1e-3), new Zone("C", 7.1e-3, 11.0e-3),
+                new Zone("D", 11.0e-3, Double.POSITIVE_INFINITY)), v);
+        List<Zone> d = MachineClass.GROUP_2_RIGID.displacementZones();
+        assertEquals(List.of(new Zone("A", 0, 22e-6), new Zone("B", 22e-6, 45e-6), new Zone("C", 45e-6, 71e-6),
+                new Zone("D", 71e-6, Double.POSITIVE_INFINITY)), d);
+    }
+
+    @Test
+    void belowAboutTenHertzDisplacementIsTheStricterBoundary() {
+        // For one harmonic, d = v / (2 pi f): group 2 rigid B/C, 2.8 mm/s and 45 um meet at
+        // 2.8e-3 / (2 pi 45e-6) = 9.90 Hz; a machine below about 600 r/min is judged by displacement
+        // (the more restrictive zone applies, ISO 10816-3:2009, 5.2.3).
+        assertEquals(9.903, MachineClass.GROUP_2_RIGID.displacementGovernsBelow(SeverityZone.B), 0.001);
+        for (MachineClass m : List.of(MachineClass.GROUP_1_RIGID, MachineClass.GROUP_1_FLEXIBLE,
+                MachineClass.GROUP_2_RIGID, MachineClass.GROUP_2_FLEXIBLE)) {
+            for (SeverityZone z : List.of(SeverityZone.A, SeverityZone.B, SeverityZone.C)) {
+                double f = m.displacementGovernsBelow(z);
+                assertTrue(f > 9 && f < 14, m.id() + " " + z + ": " + f);
+                assertEquals(m.upperBoundary(z), 2 * Math.PI * f * m.upperDisplacementBoundary(z), 1e-15);
+            }
+            assertEquals(0, m.displacementGovernsBelow(SeverityZone.D));
+        }
+    }
+
+    @Test
+    void idsAreUnique() {
+        assertEquals(MachineClass.values().length,
+                Arrays.stream(MachineClass.values()).map(MachineClass::id).distinct().count());
+    }
+
+    @Test
+    void theMachineCriterionJudgesBroadbandRmsVelocityAgainstTheAcceptedZone() {
+        MachineSeverity fan = new MachineSeverity(MachineClass.GROUP_2_FLEXIBLE, SeverityZone.B);
+        assertEquals(4.5e-3, fan.limit().at(24.7), 0);
+        assertEquals(ResponseKind.VELOCITY, fan.quantity());
+        assertEquals(AmplitudeConvention.RMS, fan.convention());
+        assertEquals(OrderCombination.TOGETHER, fan.combination());
+        assertEquals(MachineClass.GROUP_2_FLEXIBLE.zones(), fan.zones());
+        assertTrue(fan.source().contains("ISO 10816-3:2009 Table A.2"));
+        assertTrue(new MachineSeverity(MachineClass.CLASS_I, SeverityZone.A).source().contains("Annex B"));
+        InvalidInputException d = assertThrows(InvalidInputException.class,
+                () -> new MachineSeverity(MachineClass.GROUP_1_RIGID, SeverityZone.D));
+        assertEquals("acceptance.zone", d.field());
+    }
+}
