@@ -6,10 +6,12 @@ import java.util.List;
 import java.util.Optional;
 import java.util.function.Consumer;
 import java.util.function.Supplier;
+import java.awt.Component;
 import java.awt.Dimension;
 import javax.swing.JComboBox;
 import javax.swing.JComponent;
 import javax.swing.JLabel;
+import javax.swing.JList;
 import javax.swing.UIManager;
 import org.counterpoise.core.criteria.AmplitudeConvention;
 import org.counterpoise.core.criteria.BuildingAxis;
@@ -134,6 +136,9 @@ final class CriterionForm {
             // The form stands beside the absorber's at 1366 x 768: the open list shows long choices whole.
             Dimension size = c.getPreferredSize();
             c.setPreferredSize(Sizes.of(Math.min(size.width, LIST_WIDTH), size.height));
+            // the closed list may cut a long choice short: its words stand whole under the pointer
+            c.addActionListener(e -> wholeUnderPointer(c));
+            wholeUnderPointer(c);
         }
         reaction.setSelectedItem(FIRST_REACTION);
         room.setSelectedItem(FIRST_ROOM);
@@ -190,6 +195,13 @@ final class CriterionForm {
         form.row("Show values as", 'p', displayConvention,
                 "Peak, r.m.s. or peak-to-peak: every response value on the result step and the charts says which");
         showFamilyRows();
+    }
+
+    private static <T> void wholeUnderPointer(JComboBox<T> c) {
+        int index = c.getSelectedIndex();
+        Component shown = index < 0 ? null : c.getRenderer().getListCellRendererComponent(new JList<T>(),
+                c.getItemAt(index), -1, false, false);
+        c.setToolTipText(shown instanceof JLabel l ? l.getText() : null);
     }
 
     private void add(Form form, Family f, String label, char mnemonic, JComponent field, String tooltip) {

@@ -23,10 +23,10 @@ final class CriterionWords {
     static String of(CriterionKind k) {
         return switch (k) {
             case USER_LIMIT -> "a limit I state";
-            case HUMAN_COMFORT -> "human comfort (ISO 2631-1)";
-            case BUILDING -> "people in a building (ISO 10137)";
-            case MACHINE -> "machine vibration (ISO 20816-3)";
-            case EQUIPMENT -> "sensitive equipment (VC curves)";
+            case HUMAN_COMFORT -> "human comfort, ISO 2631-1";
+            case BUILDING -> "people in a building, ISO 10137";
+            case MACHINE -> "machine, ISO 20816-3";
+            case EQUIPMENT -> "sensitive equipment, VC curves";
         };
     }
 
@@ -85,10 +85,10 @@ final class CriterionWords {
     /** @param m a machine group and support @return its name in a list */
     static String of(MachineClass m) {
         return switch (m) {
-            case GROUP_1_RIGID -> "group 1 (300 kW to 50 MW), rigid support";
-            case GROUP_1_FLEXIBLE -> "group 1 (300 kW to 50 MW), flexible support";
-            case GROUP_2_RIGID -> "group 2 (15 to 300 kW), rigid support";
-            case GROUP_2_FLEXIBLE -> "group 2 (15 to 300 kW), flexible support";
+            case GROUP_1_RIGID -> "group 1, rigid (300 kW to 50 MW)";
+            case GROUP_1_FLEXIBLE -> "group 1, flexible (300 kW to 50 MW)";
+            case GROUP_2_RIGID -> "group 2, rigid (15 to 300 kW)";
+            case GROUP_2_FLEXIBLE -> "group 2, flexible (15 to 300 kW)";
         };
     }
 
@@ -96,7 +96,7 @@ final class CriterionWords {
     static String of(SeverityZone z) {
         return switch (z) {
             case A -> "A: newly commissioned";
-            case B -> "B: unrestricted long-term operation";
+            case B -> "B: long-term operation";
             case C -> "C: limited periods only";
             case D -> "D: may cause damage";
         };

@@ -48,6 +48,7 @@ final class VerdictPanel {
         headline.setName("result.verdict");
         details.setName("result.verdict.details");
         headline.setFont(headline.getFont().deriveFont(Font.BOLD));
+        details.setFont(details.getFont().deriveFont(details.getFont().getSize2D() - 1f));
         panel.setBorder(BorderFactory.createEmptyBorder(2, 2, 6, 2));
         panel.add(headline, BorderLayout.NORTH);
         panel.add(details, BorderLayout.CENTER);
@@ -107,11 +108,13 @@ final class VerdictPanel {
             headline = "Passes with the absorber: " + value(c, after.value()) + " against a limit of "
                     + value(c, after.limit()) + " (" + margin(after) + ").";
             lines.add("Without the absorber it fails: " + reading(c, before) + ".");
+            zonesAfter(after).ifPresent(lines::add);
         } else {
             passes = false;
             headline = "Fails even with the absorber: " + value(c, after.value()) + " against a limit of "
                     + value(c, after.limit()) + " (" + excess(after) + ").";
             lines.add("Without the absorber: " + reading(c, before) + ".");
+            zonesAfter(after).ifPresent(lines::add);
         }
         if (!after.unbounded()) {
             lines.add("Worst with the absorber at " + ValueText.frequency(after.worstFrequency()) + " forcing"
@@ -122,8 +125,13 @@ final class VerdictPanel {
             lines.add("The worst point lies outside the criterion's frequency range: the limit's end value was"
                     + " used there.");
         }
-        lines.add("Criterion: " + CriterionForm.describe(c));
+        lines.add(CriterionForm.describe(c));
         return new Verdict(headline, passes, lines);
+    }
+
+    private static Optional<String> zonesAfter(Reading after) {
+        return after.zones().isEmpty() ? Optional.empty()
+                : Optional.of("With the absorber: " + zones(after.zones()) + ".");
     }
 
     private static String reading(Criterion c, Reading r) {
