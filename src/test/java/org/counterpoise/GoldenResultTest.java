@@ -33,8 +33,8 @@ import org.junit.jupiter.params.provider.MethodSource;
 
 /**
  * Golden results: the complete {@code --json} output of {@code design} and {@code robustness} for
- * every preset, for the project-file example in docs/project-file.md and for two kept version-1
- * project files, and of {@code optimum} for the README's example, as stored under
+ * every preset, for the project-file example in docs/project-file.md, for two kept version-1
+ * project files and one kept version-2 file, and of {@code optimum} for the README's example, as stored under
  * {@code src/test/resources/golden/}. Each case runs through {@link Cli#run} in process, exactly as a
  * user's command does, and is compared key by key with the stored output.
  *
@@ -67,6 +67,12 @@ class GoldenResultTest {
     static final List<String> KEPT_V1_FILES = List.of("v1-project", "v1-project-written");
 
     /**
+     * A version-2 project file kept verbatim: the compressor preset as shipped in format 2, sized by
+     * {@code absorber.target}, which format 3 reads as a criterion to meet (docs/project-file.md).
+     */
+    static final List<String> KEPT_V2_FILES = List.of("v2-target");
+
+    /**
      * One golden case.
      *
      * @param name the golden file's name without ".json"
@@ -86,6 +92,9 @@ class GoldenResultTest {
         }
         projectCases(cases, "docs-project-file-example", docsExampleFile().toString());
         for (String kept : KEPT_V1_FILES) {
+            projectCases(cases, kept, GOLDEN.resolve(kept + ".json").toString());
+        }
+        for (String kept : KEPT_V2_FILES) {
             projectCases(cases, kept, GOLDEN.resolve(kept + ".json").toString());
         }
         List<String> optimum = new ArrayList<>(List.of(README_OPTIMUM.split(" ")));
@@ -152,6 +161,7 @@ class GoldenResultTest {
         Set<String> expected = new TreeSet<>();
         cases().forEach(c -> expected.add(c.name() + ".json"));
         KEPT_V1_FILES.forEach(k -> expected.add(k + ".json"));
+        KEPT_V2_FILES.forEach(k -> expected.add(k + ".json"));
         Set<String> found = new TreeSet<>();
         try (Stream<Path> files = Files.list(GOLDEN)) {
             files.forEach(f -> found.add(f.getFileName().toString()));
@@ -188,6 +198,13 @@ class GoldenResultTest {
         }
         assertEquals(5, written.getAsJsonObject("robustness").getAsJsonObject("tolerances").size(),
                 "v1-project-written.json fills every tolerance");
+        for (String kept : KEPT_V2_FILES) {
+            Path file = GOLDEN.resolve(kept + ".json");
+            JsonObject raw = JsonParser.parseString(Files.readString(file)).getAsJsonObject();
+            assertEquals(2, raw.get("format_version").getAsInt(), file + " must stay a version-2 file");
+            assertTrue(raw.getAsJsonObject("absorber").has("target"), file + " keeps its absorber.target");
+            assertEquals(List.of(), ProjectReader.read(file).unknownFields(), file.toString());
+        }
     }
 
     /** The comparison itself reports every difference, each with its path, old and new value. */

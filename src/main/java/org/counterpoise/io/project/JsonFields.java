@@ -53,6 +53,34 @@ final class JsonFields {
         return new JsonFields(e.getAsJsonObject(), pathOf(key), unknown);
     }
 
+    /**
+     * A list of objects, each read with its path {@code key[i]}; an absent key is an empty list.
+     */
+    List<JsonFields> objectList(String key) {
+        if (!has(key)) {
+            used.add(key);
+            return List.of();
+        }
+        JsonElement e = require(key, "a list [ ... ]");
+        if (!e.isJsonArray()) {
+            throw new InvalidInputException(pathOf(key), describe(e), "must be a list [ {...}, {...} ]");
+        }
+        List<JsonFields> out = new ArrayList<>();
+        for (JsonElement item : e.getAsJsonArray()) {
+            String itemPath = pathOf(key) + "[" + out.size() + "]";
+            if (!item.isJsonObject()) {
+                throw new InvalidInputException(itemPath, describe(item), "must be an object { ... }");
+            }
+            out.add(new JsonFields(item.getAsJsonObject(), itemPath, unknown));
+        }
+        return out;
+    }
+
+    /** @return true when the key holds a text in quotes */
+    boolean isText(String key) {
+        return has(key) && object.get(key).isJsonPrimitive() && object.get(key).getAsJsonPrimitive().isString();
+    }
+
     JsonFields optionalObject(String key) {
         return has(key) ? object(key) : null;
     }

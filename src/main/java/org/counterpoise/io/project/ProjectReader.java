@@ -6,6 +6,7 @@ import java.io.Reader;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.OptionalDouble;
+import org.counterpoise.core.criteria.AmplitudeConvention;
 import org.counterpoise.core.design.DesignMethod;
 import org.counterpoise.core.design.DesignStudy;
 import org.counterpoise.core.error.InvalidInputException;
@@ -82,10 +83,24 @@ public final class ProjectReader {
         AbsorberInput absorber = absorber(top.object("absorber"), version);
         JsonFields robust = top.optionalObject("robustness");
         RobustnessInput robustness = robust == null ? null : robustness(robust, absorber.response());
+        JsonFields criterion = top.optionalObject(AcceptanceJson.KEY);
+        AcceptanceInput acceptance = criterion == null ? null : AcceptanceJson.read(criterion);
+        String conventionText = top.text(DISPLAY_CONVENTION, Project.DEFAULT_DISPLAY_CONVENTION.id());
+        AmplitudeConvention convention = AmplitudeConvention.byId(conventionText).orElseThrow(() ->
+                new InvalidInputException(DISPLAY_CONVENTION, "\"" + PlainText.quote(conventionText) + "\"",
+                        "one of " + String.join(", ", AmplitudeConvention.ids())));
         top.finish();
+        if (acceptance != null && absorber.target() != null) {
+            throw new InvalidInputException("absorber.target", "given with acceptance",
+                    "format 3 names the limit once: in acceptance, with absorber.meet_acceptance true");
+        }
+        // a target of a format-1 or 2 file becomes the criterion it means (the one migration rule)
         return new LoadedProject(new Project(name, notes, structure, disturbance, absorber, robustness,
-                identity), unknown);
+                identity, acceptance, convention).withTargetAsAcceptance(), unknown);
     }
+
+    /** The top-level key of {@link Project#displayConvention()}. */
+    static final String DISPLAY_CONVENTION = "display_convention";
 
     /**
      * Reads and converts in one step.
@@ -205,9 +220,10 @@ public final class ProjectReader {
         String kindText = d.text("kind");
         ExcitationKind kind = Ids.parse(ExcitationKind.class, kindText).orElseThrow(() -> new InvalidInputException(
                 d.pathOf("kind"), "\"" + PlainText.quote(kindText) + "\"", "one of " + Ids.list(ExcitationKind.values())));
-        QuantityInput amplitude = d.quantity("amplitude", kind.amplitudeDimension());
         double order = PhysicalRange.HARMONIC_ORDER.check(d.pathOf("harmonic_order"), d.number("harmonic_order", 1.0),
                 null);
+        OrderInput own = OrdersJson.amplitudeOf(d, kind, order);
+        QuantityInput amplitude = own.amplitude();
         QuantityInput runUpRate = d.optionalQuantity("run_up_rate", Dimension.ANGULAR_ACCELERATION);
         QuantityInput frequency = d.optionalQuantity("frequency", Dimension.FREQUENCY);
         JsonFields band = d.optionalObject("band");
@@ -228,8 +244,10 @@ public final class ProjectReader {
         } else {
             out = new DisturbanceInput(kind, amplitude, frequency, Double.NaN, Double.NaN, null, order, null, spectrum);
         }
+        List<OrderInput> orders = OrdersJson.orders(d);
+        OptionalDouble designOrder = OrdersJson.designOrder(d);
         d.finish();
-        return out.withRunUpRate(runUpRate);
+        return out.withRunUpRate(runUpRate).withBalanceGrade(own.balanceGrade()).withOrders(orders, designOrder);
     }
 
     /**
@@ -287,13 +305,23 @@ public final class ProjectReader {
                         "one of " + Ids.list(Project.DESIGN_RESPONSES.toArray(new ResponseKind[0]))));
         boolean hangs = a.bool("hangs_vertically", false);
         double margin = a.number("stroke_margin", DesignStudy.DEFAULT_STROKE_MARGIN);
+        if (version >= 3 && a.has("target")) {
+            throw new InvalidInputException(a.pathOf("target"), a.shown("target"), "format 3 states the limit as"
+                    + " the acceptance criterion: {\"criterion\": \"user-limit\", \"quantity\": \""
+                    + Ids.of(response) + "\", \"convention\": \"peak\", \"limit\": {...}} with absorber."
+                    + MEET_ACCEPTANCE + " true (format 1 and 2 files with a target are read so)");
+        }
         QuantityInput target = a.optionalQuantity("target", response.dimension());
+        boolean meet = a.bool(MEET_ACCEPTANCE, false);
         OptionalDouble maxMassRatio = optionalNumber(a, "max_mass_ratio");
         QuantityInput strokeLimit = a.optionalQuantity("stroke_limit", Dimension.LENGTH);
         OptionalDouble fixedDamping = optionalNumber(a, "fixed_damping_ratio");
         OptionalDouble fixedTuning = optionalNumber(a, "fixed_tuning_ratio");
         a.finish();
         return new AbsorberInput(ratio, mass, method, response, hangs, margin, target, maxMassRatio, strokeLimit,
-                fixedDamping, fixedTuning);
+                fixedDamping, fixedTuning, meet);
     }
+
+    /** The key of {@link AbsorberInput#meetAcceptance()} in the {@code absorber} object. */
+    static final String MEET_ACCEPTANCE = "meet_acceptance";
 }

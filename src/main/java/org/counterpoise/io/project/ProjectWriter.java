@@ -16,10 +16,12 @@ public final class ProjectWriter {
     }
 
     /**
-     * @param project the project
+     * @param given the project
      * @return the JSON text
      */
-    public static String toJson(Project project) {
+    public static String toJson(Project given) {
+        // a target typed before criteria existed is written as the criterion it means (format 3)
+        Project project = given.withTargetAsAcceptance();
         JsonObject root = new JsonObject();
         root.addProperty("format_version", Project.FORMAT_VERSION);
         root.addProperty("name", project.name());
@@ -37,6 +39,10 @@ public final class ProjectWriter {
         if (project.robustness() != null) {
             root.add("robustness", robustness(project.robustness()));
         }
+        if (project.acceptance() != null) {
+            root.add(AcceptanceJson.KEY, AcceptanceJson.write(project.acceptance()));
+        }
+        root.addProperty(ProjectReader.DISPLAY_CONVENTION, project.displayConvention().id());
         return new GsonBuilder().setPrettyPrinting().disableHtmlEscaping().create().toJson(root) + "\n";
     }
 
@@ -83,7 +89,7 @@ public final class ProjectWriter {
     private static JsonObject disturbance(DisturbanceInput d) {
         JsonObject o = new JsonObject();
         o.addProperty("kind", Ids.of(d.kind()));
-        o.add("amplitude", quantity(d.amplitude()));
+        OrdersJson.writeAmplitude(o, OrderInput.ofDisturbance(d));
         if (d.isBand()) {
             JsonObject band = new JsonObject();
             band.addProperty("low", d.bandLow());
@@ -108,6 +114,7 @@ public final class ProjectWriter {
             }
             o.add("spectrum", spectrum);
         }
+        OrdersJson.writeOrders(o, d);
         return o;
     }
 
@@ -119,7 +126,9 @@ public final class ProjectWriter {
         o.addProperty("response", Ids.of(a.response()));
         o.addProperty("hangs_vertically", a.hangsVertically());
         o.addProperty("stroke_margin", a.strokeMargin());
-        put(o, "target", a.target());
+        if (a.meetAcceptance()) {
+            o.addProperty(ProjectReader.MEET_ACCEPTANCE, true);
+        }
         putNumber(o, "max_mass_ratio", a.maxMassRatio());
         put(o, "stroke_limit", a.strokeLimit());
         putNumber(o, "fixed_damping_ratio", a.fixedDampingRatio());
@@ -180,7 +189,7 @@ public final class ProjectWriter {
         }
     }
 
-    private static JsonObject quantity(QuantityInput q) {
+    static JsonObject quantity(QuantityInput q) {
         JsonObject o = new JsonObject();
         o.addProperty("value", q.value());
         o.addProperty("unit", q.unit().symbol());

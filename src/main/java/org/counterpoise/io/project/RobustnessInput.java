@@ -4,7 +4,12 @@ import java.util.Map;
 import java.util.Objects;
 import java.util.Optional;
 import java.util.OptionalDouble;
+import org.counterpoise.core.design.RobustnessSettings;
+import org.counterpoise.core.error.Checks;
+import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.robust.Tolerance;
+import org.counterpoise.core.robust.ToleranceRanges;
+import org.counterpoise.core.robust.ToleranceSet;
 import org.counterpoise.core.robust.ToleranceRanges.FrequencyBasis;
 import org.counterpoise.core.robust.ToleranceRanges.Range;
 
@@ -47,6 +52,55 @@ public record RobustnessInput(Ranges ranges, QuantityInput target, int samples, 
     public RobustnessInput withTarget(QuantityInput t) {
         return new RobustnessInput(ranges, t, samples, seed, structureMass, structureStiffness, absorberMass,
                 absorberStiffness, absorberDamping);
+    }
+
+    /** @return these settings in SI (the defaults where the section gives none) */
+    public RobustnessSettings toSettings() {
+        RobustnessInput r = this;
+        RobustnessSettings d = RobustnessSettings.DEFAULT;
+        RobustnessInput.Ranges given = r.ranges();
+        ToleranceRanges ranges = ToleranceRanges.of(percentRange(given, Range.STRUCTURE_FREQUENCY),
+                percentRange(given, Range.ABSORBER_FREQUENCY), percentRange(given, Range.ABSORBER_DAMPING),
+                given.basis());
+        OptionalDouble target = r.target() == null ? OptionalDouble.empty()
+                : OptionalDouble.of(r.target().positiveSi("robustness.target.value"));
+        ToleranceSet set = new ToleranceSet(tolerance(ToleranceKey.STRUCTURE_MASS, r),
+                tolerance(ToleranceKey.STRUCTURE_STIFFNESS, r), tolerance(ToleranceKey.ABSORBER_MASS, r),
+                tolerance(ToleranceKey.ABSORBER_STIFFNESS, r), tolerance(ToleranceKey.ABSORBER_DAMPING, r));
+        return new RobustnessSettings(ranges, target, set,
+                r.samples() == 0 ? d.samples() : r.samples(), r.seed());
+    }
+
+    /** A range in percent as stated, checked, as a fraction; empty when not stated. */
+    private static OptionalDouble percentRange(RobustnessInput.Ranges given, Range range) {
+        OptionalDouble percent = given.percent(range);
+        if (percent.isEmpty()) {
+            return percent;
+        }
+        double p = percent.getAsDouble();
+        double max = RobustnessInput.Ranges.maxPercent(range);
+        if (!(p >= 0 && p <= max)) {
+            throw new InvalidInputException("robustness." + RobustnessInput.Ranges.key(range), Checks.show(p),
+                    "percent each way, from 0 to " + Checks.show(max));
+        }
+        return OptionalDouble.of(p / 100);
+    }
+
+    private static Tolerance tolerance(ToleranceKey key, RobustnessInput r) {
+        String field = key.path();
+        RobustnessInput.ToleranceInput t = key.of(r);
+        if (t == null) {
+            return Tolerance.NONE;
+        }
+        Tolerance.Distribution kind = t.kind().orElseThrow(() -> new InvalidInputException(
+                field + ".distribution", "\"" + t.distribution() + "\"", RobustnessInput.ToleranceInput.tokens()));
+        if (!Double.isNaN(t.percent()) == (t.absolute() != null)) {
+            throw new InvalidInputException(field, "percent and absolute", "give either percent or absolute");
+        }
+        if (t.absolute() != null) {
+            return new Tolerance(kind, Checks.nonNegative(field + ".absolute.value", t.absolute().si(field + ".absolute.value")), false);
+        }
+        return new Tolerance(kind, Checks.inRange(field + ".percent", t.percent(), 0, 90) / 100, true);
     }
 
     /**
