@@ -252,14 +252,15 @@ final class CriterionForm {
             return null;
         }
         String text = limit.textField().getText().strip();
-        boolean sameDimension = was.dimension() == response.dimension();
-        Step.selectItem(quantity, response);
-        if (sameDimension || text.isEmpty()) {
+        if (was.dimension() == response.dimension() || text.isEmpty()) {
+            Step.selectItem(quantity, response);
             return null;
         }
         String note = "The limit (" + text + " for the " + was.label() + ") was emptied: type the largest "
                 + response.label() + " you accept.";
+        // emptied before the quantity changes, so no edit reads it in the new unit
         limit.clearBecause(Character.toLowerCase(note.charAt(0)) + note.substring(1));
+        Step.selectItem(quantity, response);
         return note;
     }
 

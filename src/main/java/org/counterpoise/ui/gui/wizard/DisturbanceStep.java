@@ -162,10 +162,13 @@ final class DisturbanceStep extends Step {
             enableSpeeds();
             edited("disturbance.speed");
         });
-        for (QuantityField f : List.of(amplitude, speed, low, high, order, psd, runUp)) {
+        for (QuantityField f : List.of(amplitude, speed, low, high, psd, runUp)) {
             f.onChange(() -> edited(f.fieldId()));
         }
-        order.onChange(orders::refreshDesignOrders);
+        order.onChange(() -> {
+            orders.refreshDesignOrders(); // the list of the order designed for names this one
+            edited(order.fieldId());
+        });
         balanceGrade.onChange(key -> {
             showAmplitudeRows();
             edited(key);

@@ -172,10 +172,11 @@ final class GoalStep extends Step {
         });
         method.addActionListener(e -> edited("absorber.method"));
         response.addActionListener(e -> {
+            // the response first: the criterion's edit that follows shows the project again
+            edited("absorber.response");
             if (sizing.getSelectedItem() == SizingForm.MEET_CRITERION && !syncing()) {
                 limitFollowsResponse();
             }
-            edited("absorber.response");
         });
         criterion.onChange(key -> {
             if (key.equals("acceptance.limit")) {
