@@ -2,6 +2,7 @@ package org.counterpoise.core.criteria;
 
 import java.util.List;
 import org.counterpoise.core.error.Checks;
+import org.counterpoise.core.error.CoreException;
 import org.counterpoise.core.error.InvalidInputException;
 
 /**
@@ -85,11 +86,13 @@ public record LimitCurve(List<Point> points) {
     }
 
     /**
-     * @param frequency frequency, Hz (&gt; 0)
+     * @param frequency frequency, Hz (0 and below are below the range: the first value holds)
      * @return the limit there (end values held outside the points)
      */
     public double at(double frequency) {
-        Checks.positive("limit curve frequency", frequency);
+        if (Double.isNaN(frequency)) {
+            throw CoreException.bug("a limit curve was asked for its value at a frequency that is not a number", null);
+        }
         if (frequency <= lowFrequency()) {
             return points.get(0).limit();
         }

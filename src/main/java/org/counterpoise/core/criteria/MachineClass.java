@@ -3,7 +3,7 @@ package org.counterpoise.core.criteria;
 import java.util.List;
 
 /**
- * A machine class and the boundaries of its evaluation zones (A/B, B/C, C/D), broadband r.m.s.
+ * A machine group and support, and the boundaries of its evaluation zones (A/B, B/C, C/D), broadband r.m.s.
  * values measured on the bearing housings or pedestals.
  *
  * <p>Groups 1 and 2 with rigid or flexible support: ISO 10816-3:2009 Annex A, Table A.1 (group 1:
@@ -19,12 +19,6 @@ import java.util.List;
  * A support is rigid when its lowest natural frequency in the measured direction is at least 25 %
  * above the main excitation frequency (ISO 10816-3:2009, 4.3), flexible otherwise. When velocity and
  * displacement give different zones, the more restrictive applies (ISO 10816-3:2009, 5.2.3).
- *
- * <p>Classes I to IV: ISO 10816-1:1995 Annex B (informative; the standard is withdrawn, its successor
- * ISO 20816-1:2016 gives only typical ranges in its Annex C), r.m.s. velocity, 10 to 1000 Hz, for
- * machines the machine-specific parts do not cover (small machines up to 15 kW are class I). The
- * values agree in several independent public transcriptions; the class definitions are from memory
- * (reference/acceptance-criteria.md section 3.3): verify before using them as hard limits.
  */
 public enum MachineClass {
     /** Group 1 (above 300 kW to 50 MW; electrical machines of shaft height 315 mm and more), rigid support. */
@@ -38,25 +32,15 @@ public enum MachineClass {
             new double[] {22e-6, 45e-6, 71e-6}),
     /** Group 2, flexible support. */
     GROUP_2_FLEXIBLE("group-2-flexible", Sources.ISO_10816_3_A2, new double[] {2.3e-3, 4.5e-3, 7.1e-3},
-            new double[] {37e-6, 71e-6, 113e-6}),
-    /** Class I: small machines (electric motors up to 15 kW). */
-    CLASS_I("class-i", Sources.ISO_10816_1_B, new double[] {0.71e-3, 1.8e-3, 4.5e-3}, null),
-    /** Class II: medium machines (15 kW to 75 kW, or up to 300 kW on special foundations). */
-    CLASS_II("class-ii", Sources.ISO_10816_1_B, new double[] {1.12e-3, 2.8e-3, 7.1e-3}, null),
-    /** Class III: large machines on rigid, heavy foundations. */
-    CLASS_III("class-iii", Sources.ISO_10816_1_B, new double[] {1.8e-3, 4.5e-3, 11.2e-3}, null),
-    /** Class IV: large machines on soft foundations. */
-    CLASS_IV("class-iv", Sources.ISO_10816_1_B, new double[] {2.8e-3, 7.1e-3, 18e-3}, null);
+            new double[] {37e-6, 71e-6, 113e-6});
 
-    /** Source of the group tables (kept for callers that show one line for the family). */
+    /** Source of the tables, in one line for the family. */
     public static final String SOURCE = "ISO 10816-3:2009 Tables A.1, A.2 (superseded by ISO 20816-3:2022)";
 
     /** The sources, one line each. */
     private static final class Sources {
         static final String ISO_10816_3_A1 = "ISO 10816-3:2009 Table A.1 (superseded by ISO 20816-3:2022)";
         static final String ISO_10816_3_A2 = "ISO 10816-3:2009 Table A.2 (superseded by ISO 20816-3:2022)";
-        static final String ISO_10816_1_B = "ISO 10816-1:1995 Annex B (informative, withdrawn; values"
-                + " as publicly transcribed, verify before use as a hard limit)";
     }
 
     private final String id;
@@ -94,24 +78,17 @@ public enum MachineClass {
         return zonesOf(velocity);
     }
 
-    /** @return true when the table also states the zones in r.m.s. displacement (groups 1 and 2) */
-    public boolean hasDisplacementBoundaries() {
-        return displacement != null;
-    }
-
     /**
      * @param zone a zone
-     * @return the upper boundary of that zone in r.m.s. displacement, m (+infinity for D, and for a
-     *     class whose table states velocity only)
+     * @return the upper boundary of that zone in r.m.s. displacement, m (+infinity for D)
      */
     public double upperDisplacementBoundary(SeverityZone zone) {
-        return zone == SeverityZone.D || displacement == null ? Double.POSITIVE_INFINITY
-                : displacement[zone.ordinal()];
+        return zone == SeverityZone.D ? Double.POSITIVE_INFINITY : displacement[zone.ordinal()];
     }
 
-    /** @return the four zones with their bounds in r.m.s. displacement, m; empty when the table has none */
+    /** @return the four zones with their bounds in r.m.s. displacement, m */
     public List<Zone> displacementZones() {
-        return displacement == null ? List.of() : zonesOf(displacement);
+        return zonesOf(displacement);
     }
 
     /**
@@ -120,11 +97,10 @@ public enum MachineClass {
      * (ISO 10816-3:2009, 5.2.3), above it the velocity boundary.
      *
      * @param zone A, B or C
-     * @return v / (2 pi d) for the zone's upper boundaries, Hz; 0 (displacement never governs) for D
-     *     and for a class whose table states velocity only
+     * @return v / (2 pi d) for the zone's upper boundaries, Hz; 0 for D (no upper boundary)
      */
     public double displacementGovernsBelow(SeverityZone zone) {
-        if (zone == SeverityZone.D || displacement == null) {
+        if (zone == SeverityZone.D) {
             return 0;
         }
         return velocity[zone.ordinal()] / (2 * Math.PI * displacement[zone.ordinal()]);

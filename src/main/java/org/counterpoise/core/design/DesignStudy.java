@@ -1,6 +1,7 @@
 package org.counterpoise.core.design;
 
 import java.util.Optional;
+import org.counterpoise.core.criteria.Assessor;
 import org.counterpoise.core.criteria.Criterion;
 import org.counterpoise.core.error.Checks;
 import org.counterpoise.core.error.InvalidInputException;
@@ -98,6 +99,8 @@ public record DesignStudy(String name, Structure structure, Excitation excitatio
         Checks.present("absorber", constraints, "design constraints");
         Checks.present("robustness", robustness, "robustness settings");
         Checks.present("acceptance", criterion, "a criterion or none");
+        // refuses, on the field acceptance, a criterion that cannot judge this disturbance (white noise)
+        criterion.ifPresent(c -> Assessor.of(c, excitation));
         if (sizing instanceof AbsorberSizing.MeetCriterion && criterion.isEmpty()) {
             throw InvalidInputException.missing("acceptance", "designing to meet the criterion needs a criterion");
         }

@@ -114,7 +114,8 @@ public sealed interface AcceptanceInput {
                 if (i > 0 && !(hertz > points.get(i - 1).frequency())) {
                     throw new InvalidInputException(path + "." + AcceptanceJson.FREQUENCY + ".value",
                             Checks.show(p.frequency().value()) + " " + p.frequency().unit().symbol(),
-                            "the frequencies must rise from point to point");
+                            "the frequencies must rise from point to point (the previous point is at "
+                                    + Checks.show(points.get(i - 1).frequency()) + " Hz)");
                 }
                 points.add(new LimitCurve.Point(hertz, limit));
             }

@@ -93,10 +93,13 @@ final class AcceptanceJson {
     private static AcceptanceInput statedLimit(JsonFields a) {
         ResponseKind quantity = choice(a, QUANTITY, Project.DESIGN_RESPONSES.toArray(new ResponseKind[0]), Ids::of);
         AmplitudeConvention convention = choice(a, CONVENTION, AmplitudeConvention.values(), AmplitudeConvention::id);
-        if (a.has(LIMIT) == a.has(LIMIT_CURVE)) {
-            throw new InvalidInputException(a.pathOf(LIMIT), a.has(LIMIT) ? "given with " + CURVE_PATH : "missing",
-                    "give either " + LIMIT_PATH + " (one value, e.g. {\"value\": 2.8, \"unit\": \"mm/s\"}) or "
-                            + CURVE_PATH + " (a list of points {\"frequency\": ..., \"limit\": ...})");
+        String either = "give either " + LIMIT_PATH + " (one value, e.g. {\"value\": 2.8, \"unit\": \"mm/s\"}) or "
+                + CURVE_PATH + " (a list of points {\"frequency\": ..., \"limit\": ...})";
+        if (!a.has(LIMIT) && !a.has(LIMIT_CURVE)) {
+            throw InvalidInputException.missing(LIMIT_PATH, either);
+        }
+        if (a.has(LIMIT) && a.has(LIMIT_CURVE)) {
+            throw new InvalidInputException(LIMIT_PATH, "given with " + CURVE_PATH, either);
         }
         if (a.has(LIMIT)) {
             return AcceptanceInput.StatedLimit.flat(quantity, convention, a.quantity(LIMIT, quantity.dimension()));

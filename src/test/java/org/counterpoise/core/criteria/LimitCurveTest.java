@@ -7,7 +7,9 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.ArrayList;
 import java.util.List;
+import org.counterpoise.core.error.CoreException;
 import org.counterpoise.core.error.InvalidInputException;
+import org.counterpoise.core.error.Messages;
 import org.junit.jupiter.api.Test;
 
 /**
@@ -110,9 +112,11 @@ class LimitCurveTest {
     }
 
     @Test
-    void aFrequencyThatIsNoFrequencyIsRefusedNotAnswered() {
-        InvalidInputException e = assertThrows(InvalidInputException.class, () -> CURVE.at(Double.NaN));
-        assertEquals("limit curve frequency", e.field());
+    void aFrequencyThatIsNoNumberIsABugNotAnAnswer() {
+        // Zero (the bottom of a band that starts at rest) is below the range and gets the first value.
+        assertEquals(0.01, CURVE.at(0), 0);
+        CoreException e = assertThrows(CoreException.class, () -> CURVE.at(Double.NaN));
+        assertEquals(Messages.BUG, e.key());
     }
 
     @Test

@@ -2,6 +2,7 @@ package org.counterpoise.core.design;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
@@ -9,15 +10,19 @@ import java.util.Optional;
 import org.counterpoise.core.criteria.Acceptance;
 import org.counterpoise.core.criteria.AmplitudeConvention;
 import org.counterpoise.core.criteria.Assessor;
+import org.counterpoise.core.criteria.EquipmentVibration;
 import org.counterpoise.core.criteria.LimitCurve;
 import org.counterpoise.core.criteria.MachineClass;
 import org.counterpoise.core.criteria.MachineSeverity;
 import org.counterpoise.core.criteria.SeverityZone;
 import org.counterpoise.core.criteria.UserLimit;
+import org.counterpoise.core.criteria.VibrationCriterionCurve;
+import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.model.Excitation;
 import org.counterpoise.core.model.ExcitationKind;
 import org.counterpoise.core.model.ExcitationOrder;
 import org.counterpoise.core.model.FrequencyBand;
+import org.counterpoise.core.model.Spectrum;
 import org.counterpoise.core.model.Structure;
 import org.counterpoise.core.response.ResponseKind;
 import org.junit.jupiter.api.Test;
@@ -31,6 +36,22 @@ class DesignAcceptanceTest {
     private static DesignStudy study(Excitation e) {
         return new DesignStudy("verdict", FLOOR, e, ResponseKind.VELOCITY, AbsorberSizing.ofMassRatio(0.05),
                 DesignMethod.EXACT_PEAK, false, 1.5);
+    }
+
+    @Test
+    void aStudyRefusesACriterionThatCannotJudgeWhiteNoise() {
+        Excitation noise = new Excitation(ExcitationKind.FORCE, 1, FrequencyBand.single(2 * Math.PI * 12),
+                Spectrum.whiteNoise(100));
+        DesignStudy study = new DesignStudy("noise", FLOOR, noise, ResponseKind.DISPLACEMENT,
+                AbsorberSizing.ofMassRatio(0.05), DesignMethod.MINIMUM_VARIANCE, false, 1.5);
+        InvalidInputException e = assertThrows(InvalidInputException.class, () -> study.withCriterion(
+                Optional.of(new EquipmentVibration(VibrationCriterionCurve.VC_A))));
+        assertEquals("acceptance", e.field());
+        // an r.m.s. criterion on the whole response is judged: the exact r.m.s. of the design
+        UserLimit rms = new UserLimit(ResponseKind.DISPLACEMENT, AmplitudeConvention.RMS, LimitCurve.flat(1e-3));
+        DesignResult r = Designer.design(study.withCriterion(Optional.of(rms)));
+        assertEquals(r.rms().orElseThrow().after(), r.acceptance().orElseThrow().after().value(),
+                1e-12 * r.acceptance().orElseThrow().after().value());
     }
 
     @Test
