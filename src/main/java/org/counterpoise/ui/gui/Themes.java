@@ -37,4 +37,13 @@ public final class Themes {
     public static Color problemColour() {
         return FlatLaf.isLafDark() ? new Color(0xff, 0x8a, 0x7d) : new Color(0xb0, 0x2a, 0x1e);
     }
+
+    /**
+     * The colour of a verdict that passes, in the current theme (a dark green on light grounds, a
+     * light green on dark ones). Never the only sign: the words say pass or fail too.
+     * @return the colour
+     */
+    public static Color passColour() {
+        return FlatLaf.isLafDark() ? new Color(0x8c, 0xd9, 0x8c) : new Color(0x1e, 0x6e, 0x2a);
+    }
 }

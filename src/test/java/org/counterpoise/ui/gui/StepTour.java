@@ -18,7 +18,8 @@ import org.counterpoise.ui.gui.wizard.WizardFrame;
  * {@code java -Dsun.java2d.uiScale=2 -cp target/counterpoise.jar:target/test-classes
  * org.counterpoise.ui.gui.StepTour target/tour [preset or project file]}; with
  * {@code -Dtour.runup=true} also the result step's Run-up tab ({@code step4-runup.png}), with
- * {@code -Dtour.comparison=true} its comparison of methods ({@code step4-comparison.png}).
+ * {@code -Dtour.comparison=true} its comparison of methods ({@code step4-comparison.png}); with
+ * {@code -Dtour.criterion=MACHINE} (a family of the goal step's criterion list) that criterion first.
  */
 public final class StepTour {
     private StepTour() {
@@ -48,12 +49,27 @@ public final class StepTour {
                     .setText(typed));
             Thread.sleep(1500);
         }
+        String criterion = System.getProperty("tour.criterion");
+        if (criterion != null) {
+            // a family of the goal step's criterion list by its name (MACHINE, HUMAN_COMFORT...)
+            SwingUtilities.invokeAndWait(() -> {
+                javax.swing.JComboBox<?> list = (javax.swing.JComboBox<?>) find(frame.get().getContentPane(),
+                        "acceptance.criterion");
+                for (int i = 0; i < list.getItemCount(); i++) {
+                    if (String.valueOf(list.getItemAt(i)).equals(criterion)) {
+                        list.setSelectedIndex(i);
+                    }
+                }
+            });
+            Thread.sleep(1500);
+            waitSettled(frame.get());
+        }
         Rectangle screen = GraphicsEnvironment.getLocalGraphicsEnvironment().getDefaultScreenDevice()
                 .getDefaultConfiguration().getBounds();
         for (int step = 0; step < 6; step++) {
             int s = step;
             SwingUtilities.invokeAndWait(() -> frame.get().showStep(s));
-            Thread.sleep(step >= 3 ? 4000 : 1200);
+            Thread.sleep(step >= 3 ? 5000 : 2500);
             if (Boolean.getBoolean("tour.dump")) {
                 SwingUtilities.invokeAndWait(() -> dump(frame.get().getContentPane(), ""));
             }

@@ -132,7 +132,8 @@ class WizardGuiTest {
         String after = org.counterpoise.io.text.DisplayUnits.format(fitted.amplitudeAt(
                 org.counterpoise.core.response.ResponseKind.DISPLACEMENT, Unit.HERTZ.toSi(14.0)),
                 org.counterpoise.core.units.Dimension.LENGTH);
-        assertTrue(readout.startsWith("At 14.00 Hz:") && readout.contains("with " + after + ","), readout);
+        // the values say their convention: the project's display convention, peak unless chosen
+        assertTrue(readout.startsWith("At 14.00 Hz (peak):") && readout.contains("with " + after + ","), readout);
         System.out.println("longest event on the event thread during the tour: " + timer.longest());
     }
 
@@ -343,7 +344,7 @@ class WizardGuiTest {
     }
 
     @Test
-    void aSizingTargetIsEmptiedWhenTheResponseChangesQuantityAndNotReadInTheNewUnit() throws Exception {
+    void aStatedLimitToMeetIsEmptiedWhenTheResponseChangesQuantityAndNotReadInTheNewUnit() throws Exception {
         open();
         onEdt(() -> {
             frame.load(Presets.load("compressor-frame-speed-band.json"), null);
@@ -351,8 +352,10 @@ class WizardGuiTest {
             return null;
         });
         waitFor(() -> onEdtQuietly(() -> frame.settled() && frame.shownResult() != null), "the scenario");
-        JTextField size = (JTextField) find("absorber.mass_ratio");
-        assertEquals("2", onEdt(size::getText), "2 m/s², the scenario's acceleration target");
+        // The scenario's absorber is the lightest that meets its stated limit (2 m/s² peak acceleration).
+        JTextField limit = (JTextField) find("acceptance.limit");
+        assertEquals("2", onEdt(limit::getText), "2 m/s², the scenario's acceleration limit");
+        assertTrue(onEdt(() -> frame.document().project().absorber().meetAcceptance()));
         JTextField maxRatio = (JTextField) find("absorber.max_mass_ratio");
         assertEquals("0.2", onEdt(maxRatio::getText), "the largest mass ratio is shown, not kept hidden");
         @SuppressWarnings("unchecked")
@@ -362,24 +365,27 @@ class WizardGuiTest {
             response.setSelectedItem(org.counterpoise.core.response.ResponseKind.VELOCITY);
             return null;
         });
-        assertEquals("", onEdt(size::getText), "2 m/s² is not read as 2 mm/s");
+        assertEquals("", onEdt(limit::getText), "2 m/s² is not read as 2 mm/s");
         JLabel note = (JLabel) find("absorber.methodNote");
         assertTrue(onEdt(note::getText).contains("was emptied"), onEdt(note::getText));
-        waitFor(() -> onEdtQuietly(() -> frame.settled() && !frame.nextEnabled()), "Next waits for a target");
+        waitFor(() -> onEdtQuietly(() -> frame.settled() && !frame.nextEnabled()), "Next waits for a limit");
         // The reason stands under the field itself too (a new user saw only "an empty field" there).
-        JLabel fieldMessage = (JLabel) find("absorber.mass_ratio.message");
+        JLabel fieldMessage = (JLabel) find("acceptance.limit.message");
         assertTrue(onEdt(fieldMessage::getText).contains("(2 for the structure acceleration) was emptied"),
                 onEdt(fieldMessage::getText));
-        assertEquals(null, onEdt(frame::shownResult), "no result for the old target");
+        assertEquals(null, onEdt(frame::shownResult), "no result for the old limit");
         onEdt(() -> {
-            size.setText("5");
+            limit.setText("5");
             return null;
         });
         waitFor(() -> onEdtQuietly(() -> frame.settled() && frame.shownResult() != null), "designed for 5 mm/s");
         assertEquals(org.counterpoise.core.response.ResponseKind.VELOCITY,
                 onEdt(() -> frame.shownResult().study().response()));
-        assertEquals(new org.counterpoise.io.project.QuantityInput(5, Unit.MILLIMETRE_PER_SECOND),
-                onEdt(() -> frame.document().project().absorber().target()));
+        assertEquals(org.counterpoise.io.project.AcceptanceInput.StatedLimit.flat(
+                org.counterpoise.core.response.ResponseKind.VELOCITY,
+                org.counterpoise.core.criteria.AmplitudeConvention.PEAK,
+                new org.counterpoise.io.project.QuantityInput(5, Unit.MILLIMETRE_PER_SECOND)),
+                onEdt(() -> frame.document().project().acceptance()));
     }
 
     @Test

@@ -1,8 +1,10 @@
 package org.counterpoise.ui.gui.document;
 
+import org.counterpoise.core.criteria.AmplitudeConvention;
 import org.counterpoise.core.design.DesignMethod;
 import org.counterpoise.core.response.ResponseKind;
 import org.counterpoise.io.project.AbsorberInput;
+import org.counterpoise.io.project.AcceptanceInput;
 import org.counterpoise.io.project.DisturbanceInput;
 import org.counterpoise.io.project.Project;
 import org.counterpoise.io.project.ProjectIdentity;
@@ -58,8 +60,8 @@ public final class ProjectEdits {
      * @return the edit
      */
     public static Edit robustness(String key, RobustnessInput r) {
-        return new Edit(key, "robustness", p -> p.withRobustness(
-                r.withRanges(p.robustness() == null ? RobustnessInput.Ranges.NONE : p.robustness().ranges())));
+        return new Edit(key, "robustness", p -> p.withRobustness(r.withRanges(p.robustness() == null
+                ? RobustnessInput.Ranges.NONE : p.robustness().ranges())));
     }
 
     /**
@@ -72,8 +74,7 @@ public final class ProjectEdits {
      * @return the edit
      */
     public static Edit ranges(String key, RobustnessInput.Ranges ranges) {
-        return new Edit(key, "tolerance ranges", p -> p.withRobustness(
-                withRanges(p.robustness(), ranges)));
+        return new Edit(key, "tolerance ranges", p -> p.withRobustness(withRanges(p.robustness(), ranges)));
     }
 
     private static RobustnessInput withRanges(RobustnessInput r, RobustnessInput.Ranges ranges) {
@@ -96,16 +97,36 @@ public final class ProjectEdits {
     }
 
     /**
+     * @param key the field edited
+     * @param criterion the acceptance criterion as now shown, or null for none
+     * @return the edit
+     */
+    public static Edit acceptance(String key, AcceptanceInput criterion) {
+        return new Edit(key, "criterion", p -> p.withAcceptance(criterion));
+    }
+
+    /**
+     * @param key the field edited
+     * @param convention how response values are shown: peak, r.m.s. or peak-to-peak
+     * @return the edit
+     */
+    public static Edit displayConvention(String key, AmplitudeConvention convention) {
+        return new Edit(key, "display convention", p -> p.withDisplayConvention(convention));
+    }
+
+    /**
      * A new project: the numbers of a template to start from (an invented scenario), but none of
-     * its name, notes or identity, which belong to the scenario and not to the user's project; and
+     * its name, notes or identity, which belong to the scenario and not to the user's project (its
+     * criterion and display convention are numbers of the scenario, kept, so a first project shows a
+     * verdict); and
      * the recommended design method ({@link DesignMethod#RECOMMENDED}, issue 12), whatever the
      * scenario's was.
      * @param template the scenario to start from
      * @return an untitled project
      */
     public static Project untitled(Project template) {
-        return template.withDetails(Project.UNTITLED, "", ProjectIdentity.EMPTY)
-                .withAbsorber(template.absorber().withMethod(DesignMethod.RECOMMENDED));
+        return template.withAbsorber(template.absorber().withMethod(DesignMethod.RECOMMENDED))
+                .withDetails(Project.UNTITLED, "", ProjectIdentity.EMPTY);
     }
 
     /**

@@ -43,8 +43,9 @@ public final class Form extends JPanel {
      * @param mnemonic key for Alt+key focus, or 0
      * @param field the field
      * @param tooltip what it is
+     * @return the row's label (to hide the row with {@link #showRow})
      */
-    public void row(String label, char mnemonic, JComponent field, String tooltip) {
+    public JLabel row(String label, char mnemonic, JComponent field, String tooltip) {
         JLabel l = new JLabel(label);
         l.setToolTipText(tooltip);
         if (mnemonic != 0) {
@@ -65,13 +66,29 @@ public final class Form extends JPanel {
             mc.insets = new Insets(0, 6, 2, 0);
             add(q.messageLabel(), mc);
         }
+        return l;
+    }
+
+    /**
+     * Shows or hides a row (the layout closes the gap of a hidden one).
+     * @param label the row's label, as {@link #row} returned it
+     * @param field the row's field
+     * @param visible true to show it
+     */
+    public static void showRow(JLabel label, JComponent field, boolean visible) {
+        label.setVisible(visible);
+        field.setVisible(visible);
+        if (field instanceof QuantityField q) {
+            q.messageLabel().setVisible(visible);
+        }
     }
 
     /**
      * @param label the label
      * @param value a read-only value (derived quantity)
+     * @return the row's label (to hide the row with {@link #showRow})
      */
-    public void derived(String label, JLabel value) {
+    public JLabel derived(String label, JLabel value) {
         JLabel l = new JLabel(label);
         l.setEnabled(false);
         GridBagConstraints lc = constraints(0, row);
@@ -82,6 +99,7 @@ public final class Form extends JPanel {
         fc.anchor = GridBagConstraints.LINE_START;
         fc.insets = new Insets(2, 6, 2, 0);
         add(value, fc);
+        return l;
     }
 
     /** Pushes the rows to the top. */

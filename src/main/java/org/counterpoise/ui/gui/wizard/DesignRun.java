@@ -112,6 +112,7 @@ final class DesignRun {
         long gen = ++generation;
         steps.all().forEach(Step::clearProblems);
         steps.goal().methodProblem(null);
+        steps.goal().criterionProblem(null);
         Project p = document.project();
         DesignStudy study = null;
         Structure built = null;
@@ -152,6 +153,13 @@ final class DesignRun {
     void route(InvalidInputException e) {
         if (e.field().equals("absorber.method")) {
             steps.goal().methodProblem(e.problem());
+            steps.goal().markProblem(e.problem());
+            return;
+        }
+        if ((e.field().startsWith("acceptance") && !e.field().startsWith("acceptance.limit"))
+                || e.field().startsWith("absorber.meet_acceptance")) {
+            // the criterion's lists are not number fields: the problem is said under the criterion
+            steps.goal().criterionProblem(e.problem());
             steps.goal().markProblem(e.problem());
             return;
         }

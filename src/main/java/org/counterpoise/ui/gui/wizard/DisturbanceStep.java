@@ -20,6 +20,7 @@ import org.counterpoise.core.model.Structure;
 import org.counterpoise.core.units.Dimension;
 import org.counterpoise.core.units.SpectralDensityUnit;
 import org.counterpoise.core.units.Unit;
+import org.counterpoise.io.project.BalanceGradeInput;
 import org.counterpoise.io.project.DisturbanceInput;
 import org.counterpoise.io.project.Project;
 import org.counterpoise.io.project.QuantityInput;
@@ -62,18 +63,16 @@ final class DisturbanceStep extends Step {
     private final QuantityField runUp = new QuantityField("disturbance.run_up_rate",
             "How fast the shaft speed changes at start and stop; leave empty when not known",
             UnitChoices.of(Dimension.ANGULAR_ACCELERATION));
+    private final BalanceGradeForm balanceGrade = new BalanceGradeForm();
+    private final OrdersForm orders = new OrdersForm(() -> order.siOrNaN());
+    private JLabel amplitudeLabel;
     private final JLabel derivedBand = StructureStep.derived("derived.forcing");
     private final JLabel derivedRatio = StructureStep.derived("derived.ratio");
     private final JComponent page;
 
     DisturbanceStep() {
         kind.setName("disturbance.kind");
-        ItemWords.show(kind, ExcitationKind.class, k -> switch (k) {
-            case FORCE -> "force";
-            case UNBALANCE -> "rotating unbalance";
-            case BASE_DISPLACEMENT -> "base displacement";
-            case BASE_ACCELERATION -> "base acceleration";
-        });
+        ItemWords.show(kind, ExcitationKind.class, DisturbanceStep::words);
         oneSpeed.setName("disturbance.oneSpeed");
         speedRange.setName("disturbance.speedRange");
         ButtonGroup g = new ButtonGroup();
@@ -107,7 +106,10 @@ final class DisturbanceStep extends Step {
         form.row("Spectrum", (char) 0, spectrumRadios, "Harmonic: a sinusoid at one speed or anywhere in a range."
                 + " Broadband: random force or base acceleration of constant spectral density, judged by rms values");
         form.row("PSD level (broadband)", 'p', psd, "Power spectral density of the white noise, one-sided, per hertz");
-        form.row("Amplitude", 'a', amplitude, "Amplitude of the drive (with broadband: for the harmonic rows)");
+        balanceGrade.addSourceTo(form);
+        amplitudeLabel = form.row("Amplitude", 'a', amplitude, "Amplitude of the drive (with broadband: for the"
+                + " harmonic rows)");
+        balanceGrade.addGradeTo(form);
         JPanel radios = new JPanel(new FlowLayout(FlowLayout.LEFT, 0, 0));
         radios.setOpaque(false);
         radios.add(oneSpeed);
@@ -119,6 +121,11 @@ final class DisturbanceStep extends Step {
         form.row("Harmonic order", 'o', order, "Forcing cycles per revolution");
         form.row("Run-up rate (optional)", 'r', runUp,
                 "How fast the shaft speeds up at start and slows at stop; empty when not given");
+        form.heading("Other orders of the rotor");
+        form.row("Orders at the same time", (char) 0, orders.component(),
+                "Other harmonics of the same shaft (twice the speed, blade-pass...) that shake the structure too");
+        form.row("Design for", 'f', orders.designOrderList(), "The order the absorber is tuned to: the one you pick,"
+                + " or the one that governs the verdict");
         form.heading("Derived");
         form.derived("Forcing frequency", derivedBand);
         form.derived("Over the structure's natural frequency", derivedRatio);
@@ -136,6 +143,7 @@ final class DisturbanceStep extends Step {
         own("disturbance.run_up_rate", runUp);
         kind.addActionListener(e -> {
             amplitude.setUnits(units(selectedKind()));
+            showAmplitudeRows();
             psdFollowsKind();
             edited("disturbance.kind");
         });
@@ -154,9 +162,23 @@ final class DisturbanceStep extends Step {
             enableSpeeds();
             edited("disturbance.speed");
         });
-        for (QuantityField f : List.of(amplitude, speed, low, high, order, psd, runUp)) {
+        for (QuantityField f : List.of(amplitude, speed, low, high, psd, runUp)) {
             f.onChange(() -> edited(f.fieldId()));
         }
+        order.onChange(() -> {
+            orders.refreshDesignOrders(); // the list of the order designed for names this one
+            edited(order.fieldId());
+        });
+        balanceGrade.onChange(key -> {
+            showAmplitudeRows();
+            edited(key);
+        });
+        orders.onChange(this::edited);
+        orders.onNewField(f -> own(f.fieldId(), f));
+        own(BalanceGradeForm.PATH, balanceGrade.fields().get(0));
+        own(BalanceGradeForm.PATH + ".rotor_mass", balanceGrade.fields().get(1));
+        own(BalanceGradeForm.PATH + ".max_speed", balanceGrade.fields().get(2));
+        showAmplitudeRows();
         enableSpeeds();
         enableSpectrum();
         convertOnChange();
@@ -246,7 +268,17 @@ final class DisturbanceStep extends Step {
 
     @Override
     boolean fieldsValid() {
-        boolean ok = check(amplitude) & check(order);
+        boolean ok = check(order);
+        if (gradeGivesAmplitude()) {
+            for (QuantityField f : balanceGrade.fields()) {
+                ok &= check(f);
+            }
+        } else {
+            ok &= check(amplitude);
+        }
+        for (QuantityField f : orders.fields()) {
+            ok &= check(f);
+        }
         if (!runUp.textField().getText().isBlank()) {
             ok &= check(runUp);
         }
@@ -285,14 +317,28 @@ final class DisturbanceStep extends Step {
 
     DisturbanceInput input() {
         ExcitationKind k = selectedKind();
-        QuantityInput a = amplitude.input();
+        boolean byGrade = gradeGivesAmplitude();
+        QuantityInput a = byGrade ? null : amplitude.input();
+        BalanceGradeInput g = byGrade ? balanceGrade.input() : null;
         double h = order.number();
         QuantityInput rate = runUp.textField().getText().isBlank() ? null : runUp.input();
         SpectrumInput sp = spectrum();
         if (speedRange.isSelected()) {
-            return new DisturbanceInput(k, a, null, low.number(), high.number(), low.unit(), h, rate, sp);
+            return new DisturbanceInput(k, a, null, low.number(), high.number(), low.unit(), h, rate, sp, g,
+                    orders.orders(), orders.designOrder());
         }
-        return new DisturbanceInput(k, a, speed.input(), Double.NaN, Double.NaN, null, h, rate, sp);
+        return new DisturbanceInput(k, a, speed.input(), Double.NaN, Double.NaN, null, h, rate, sp, g,
+                orders.orders(), orders.designOrder());
+    }
+
+    private boolean gradeGivesAmplitude() {
+        return selectedKind() == ExcitationKind.UNBALANCE && balanceGrade.usesGrade();
+    }
+
+    /** An unbalance may be given by its balance grade: then the grade's rows stand where the amplitude was. */
+    private void showAmplitudeRows() {
+        balanceGrade.showRows(selectedKind() == ExcitationKind.UNBALANCE);
+        Form.showRow(amplitudeLabel, amplitude, !gradeGivesAmplitude());
     }
 
     /** @return the spectrum as shown: null (harmonic) or white noise of the level typed */
@@ -327,6 +373,8 @@ final class DisturbanceStep extends Step {
         enableSpectrum();
         showValue(runUp, d.runUpRate());
         showValue(amplitude, d.amplitude());
+        balanceGrade.show(d.balanceGrade());
+        showAmplitudeRows();
         if (d.isBand()) {
             speedRange.setSelected(true);
             showValue(low, d.bandLow(), d.bandUnit());
@@ -343,6 +391,7 @@ final class DisturbanceStep extends Step {
             }
         }
         showValue(order, d.harmonicOrder(), Unit.RATIO);
+        orders.show(d.orders(), d.designOrder());
         enableSpeeds();
     }
 
@@ -361,6 +410,16 @@ final class DisturbanceStep extends Step {
             derivedRatio.setText(e.band().isSingle() ? QuantityFormat.number(e.band().low() / w, 4)
                     : QuantityFormat.number(e.band().low() / w, 4) + " to " + QuantityFormat.number(e.band().high() / w, 4));
         }
+    }
+
+    /** @param k a kind of disturbance @return its name in a list */
+    static String words(ExcitationKind k) {
+        return switch (k) {
+            case FORCE -> "force";
+            case UNBALANCE -> "rotating unbalance";
+            case BASE_DISPLACEMENT -> "base displacement";
+            case BASE_ACCELERATION -> "base acceleration";
+        };
     }
 
     private ExcitationKind selectedKind() {

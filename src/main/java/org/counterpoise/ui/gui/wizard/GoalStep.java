@@ -2,8 +2,6 @@ package org.counterpoise.ui.gui.wizard;
 
 import java.awt.BorderLayout;
 import java.awt.Component;
-import java.math.BigDecimal;
-import java.math.MathContext;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.OptionalDouble;
@@ -16,6 +14,7 @@ import javax.swing.JList;
 import javax.swing.JPanel;
 import javax.swing.JScrollPane;
 import javax.swing.JSplitPane;
+import org.counterpoise.core.criteria.AmplitudeConvention;
 import org.counterpoise.core.design.DesignMethod;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.model.Structure;
@@ -43,8 +42,8 @@ final class GoalStep extends Step {
         MASS_RATIO,
         /** An absorber mass. */
         MASS,
-        /** The lightest absorber for a target response. */
-        TARGET
+        /** The lightest absorber that meets the project's criterion. */
+        MEET_CRITERION
     }
 
     private final JComboBox<SizingForm> sizing = new JComboBox<>(SizingForm.values());
@@ -57,15 +56,17 @@ final class GoalStep extends Step {
             "Clearance to leave over the computed peak stroke (1.5 is common practice)", UnitChoices.of(Dimension.RATIO));
     private final JCheckBox hangs = new JCheckBox("the absorber hangs on its spring");
     private final QuantityField maxMassRatio = new QuantityField("absorber.max_mass_ratio",
-            "With a target: the largest mass ratio to consider; leave empty for the default", UnitChoices.of(Dimension.RATIO));
+            "To meet the criterion: the largest mass ratio to consider; leave empty for the default",
+            UnitChoices.of(Dimension.RATIO));
     private final QuantityField fixedDamping = new QuantityField("absorber.fixed_damping_ratio",
             "Exact-peak only: an absorber damping ratio you must use; leave empty to optimise it", UnitChoices.of(Dimension.RATIO));
     private final QuantityField fixedTuning = new QuantityField("absorber.fixed_tuning_ratio",
             "Exact-peak only: a tuning ratio you must use; leave empty to optimise it", UnitChoices.of(Dimension.RATIO));
-    /** The response the size field's target was typed for (to notice a change of quantity). */
-    private ResponseKind targetResponse;
-    /** Says why the target field was emptied, until a new target is typed. */
+    /** Says why the stated limit was emptied, until a new one is typed. */
     private String targetNote;
+    /** The criterion the result is judged against, and the lightest absorber may be sized to meet. */
+    private final CriterionForm criterion = new CriterionForm();
+    private final JComboBox<AmplitudeConvention> displayConvention = new JComboBox<>(AmplitudeConvention.values());
     private final QuantityField strokeLimit = new QuantityField("absorber.stroke_limit",
             "Largest allowed peak stroke in the band (exact-peak only); leave empty for none",
             UnitChoices.of(Dimension.LENGTH));
@@ -95,7 +96,7 @@ final class GoalStep extends Step {
         ItemWords.show(sizing, SizingForm.class, f -> switch (f) {
             case MASS_RATIO -> "mass ratio \u03bc";
             case MASS -> "absorber mass";
-            case TARGET -> "lightest for a target response";
+            case MEET_CRITERION -> "lightest that meets the criterion";
         });
         method.setName("absorber.method");
         response.setName("absorber.response");
@@ -118,25 +119,28 @@ final class GoalStep extends Step {
         });
         // The longest method description would make the form wider than a small screen; the open list shows it whole.
         var methodSize = method.getPreferredSize();
-        // 420 leaves room for the tolerance ranges beside the form at 1366 x 768.
-        method.setPreferredSize(Sizes.of(Math.min(methodSize.width, 420), methodSize.height));
+        // 340 leaves room for the criterion and the tolerance ranges beside the form at 1366 x 768.
+        method.setPreferredSize(Sizes.of(Math.min(methodSize.width, 340), methodSize.height));
         Form form = new Form();
         form.heading("The absorber you can fit");
         form.row("Size given as", 'z', sizing,
-                "A mass ratio, a mass budget, or the response level to reach with the lightest absorber (exact-peak)");
+                "A mass ratio, a mass budget, or the lightest absorber that meets the criterion (on the right)");
         form.row("Value", 'v', size, "Mass ratio or mass");
         form.row("Design method", 'm', method, "How tuning and damping are chosen");
         form.row("Response that matters", 'r', response, "The response the design reduces");
         form.row("Stroke margin", 'n', margin, "Clearance over the computed stroke");
         form.row("Stroke limit (optional)", 't', strokeLimit, "Largest stroke allowed from standstill to the top of the band (run-up too), exact-peak only");
         form.row("", (char) 0, hangs, "Gives the static deflection of the spring");
-        form.row("Largest mass ratio (target)", 'x', maxMassRatio,
-                "With a target: the search for the lightest absorber stops here; empty for the default");
+        form.row("Largest mass ratio (to meet)", 'x', maxMassRatio,
+                "To meet the criterion: the search for the lightest absorber stops here; empty for the default");
         form.row("Fixed damping ratio \u03b6a", 'f', fixedDamping, "Exact-peak: empty to optimise, or the ratio to use");
         form.row("Fixed tuning ratio f", 'u', fixedTuning, "Exact-peak: empty to optimise, or the ratio to use");
         form.derived("", methodNote);
         form.end();
         Form rangesForm = new Form();
+        displayConvention.setName("display.convention");
+        ItemWords.show(displayConvention, AmplitudeConvention.class, CriterionWords::of);
+        criterion.addTo(rangesForm, displayConvention);
         ranges.addTo(rangesForm);
         rangesForm.end();
         JPanel forms = new JPanel(new BorderLayout());
@@ -156,6 +160,7 @@ final class GoalStep extends Step {
         own("absorber.mass_ratio", size);
         own("absorber", size);
         own("absorber.target", size);
+        own("acceptance.limit", criterion.limitField());
         own("absorber.stroke_margin", margin);
         own("absorber.stroke_limit", strokeLimit);
         own("absorber.max_mass_ratio", maxMassRatio);
@@ -167,12 +172,22 @@ final class GoalStep extends Step {
         });
         method.addActionListener(e -> edited("absorber.method"));
         response.addActionListener(e -> {
-            if (sizing.getSelectedItem() == SizingForm.TARGET) {
-                sizeUnits();
-                targetQuantityChanged();
-            }
+            // the response first: the criterion's edit that follows shows the project again
             edited("absorber.response");
+            if (sizing.getSelectedItem() == SizingForm.MEET_CRITERION && !syncing()) {
+                limitFollowsResponse();
+            }
         });
+        criterion.onChange(key -> {
+            if (key.equals("acceptance.limit")) {
+                commit(() -> ProjectEdits.acceptance(key, criterion.acceptance()));
+            } else {
+                commitChoice(() -> ProjectEdits.acceptance(key, criterion.acceptance()));
+            }
+        });
+        criterion.responseThatMatters(() -> (ResponseKind) response.getSelectedItem());
+        displayConvention.addActionListener(e -> commitChoice(() -> ProjectEdits.displayConvention("display.convention",
+                (AmplitudeConvention) displayConvention.getSelectedItem())));
         hangs.addActionListener(e -> edited("absorber.hangs"));
         for (QuantityField f : List.of(size, margin, strokeLimit, maxMassRatio, fixedDamping, fixedTuning)) {
             f.onChange(() -> edited(f.fieldId()));
@@ -190,30 +205,21 @@ final class GoalStep extends Step {
     }
 
     /**
-     * A target typed as a displacement means nothing as a velocity: when the response's quantity
-     * changes, the target is emptied (and said so) rather than read in the new unit.
+     * The lightest absorber is sized for the response that matters, so a stated limit follows it; a
+     * limit typed as a displacement means nothing as a velocity: when the quantity changes, the
+     * limit is emptied (and said so) rather than read in the new unit.
      */
-    private void targetQuantityChanged() {
+    private void limitFollowsResponse() {
         ResponseKind now = (ResponseKind) response.getSelectedItem();
-        if (syncing() || targetResponse == null || now == null
-                || targetResponse.dimension() == now.dimension()) {
-            targetResponse = now;
-            return;
+        String note = criterion.follow(now);
+        if (note != null) {
+            targetNote = note;
+            note(note);
         }
-        String was = size.textField().getText().strip();
-        if (!was.isEmpty()) {
-            // The unit list has already moved to the new quantity here, so the old unit is not named.
-            targetNote = "The target (" + was + " for the " + targetResponse.label() + ") was emptied: type"
-                    + " the largest " + now.label() + " you accept.";
-            // Said under the field itself, where the eye is, and in the step's note.
-            size.clearBecause(Character.toLowerCase(targetNote.charAt(0)) + targetNote.substring(1));
-            note(targetNote);
-        }
-        targetResponse = now;
     }
 
     private void edited(String key) {
-        if (!size.textField().getText().isBlank()) {
+        if (!criterion.limitField().textField().getText().isBlank()) {
             targetNote = null;
         }
         commit(() -> ProjectEdits.absorber(key, input()));
@@ -225,13 +231,20 @@ final class GoalStep extends Step {
             targetNote = null;
         }
         load(p.absorber());
+        criterion.show(p.acceptance());
+        selectItem(displayConvention, p.displayConvention());
         ranges.show(p);
-        targetResponse = p.absorber().response();
     }
 
     @Override
     boolean fieldsValid() {
-        boolean ok = check(size) & check(margin);
+        boolean ok = check(margin);
+        if (sizing.getSelectedItem() != SizingForm.MEET_CRITERION) {
+            ok &= check(size);
+        }
+        if (criterion.needsLimit()) {
+            ok &= check(criterion.limitField());
+        }
         List<QuantityField> optional = new ArrayList<>(List.of(strokeLimit, maxMassRatio, fixedDamping, fixedTuning));
         optional.addAll(ranges.fields());
         for (QuantityField f : optional) {
@@ -259,7 +272,7 @@ final class GoalStep extends Step {
         return switch (sizingForm) {
             case MASS_RATIO -> UnitChoices.of(Dimension.RATIO);
             case MASS -> UnitChoices.of(Dimension.MASS);
-            case TARGET -> unitsOf((ResponseKind) response.getSelectedItem());
+            case MEET_CRITERION -> List.of();
         };
     }
 
@@ -286,13 +299,10 @@ final class GoalStep extends Step {
         FormSwitch.attachItems(sizing, size, this::sizeUnits, (from, to, v) -> {
             Structure s = sizingContext.structure();
             DesignResult d = sizingContext.design();
-            if (to == SizingForm.TARGET) {
-                // A target is a round figure a person states: start from what the design reaches,
-                // to three significant figures (not 0.00436614115883 mm).
-                return d != null && d.study().response() == response.getSelectedItem()
-                        ? roundedTo3Figures(d.responseAfter().value()) : Double.NaN;
+            if (to == SizingForm.MEET_CRITERION) {
+                return Double.NaN;
             }
-            if (from == SizingForm.TARGET) {
+            if (from == SizingForm.MEET_CRITERION) {
                 return d == null ? Double.NaN : to == SizingForm.MASS_RATIO ? d.tuning().massRatio() : d.absorber().mass();
             }
             if (s == null) {
@@ -302,13 +312,10 @@ final class GoalStep extends Step {
         }, f -> switch (f) {
             case MASS_RATIO -> "type the mass ratio";
             case MASS -> "type the absorber mass";
-            case TARGET -> "type the largest " + ((ResponseKind) response.getSelectedItem()).label() + " you accept";
+            case MEET_CRITERION -> "nothing to type here: the criterion on the right sets the size, up to the"
+                    + " largest mass ratio below";
         });
-    }
-
-    private static double roundedTo3Figures(double value) {
-        return Double.isFinite(value) && value > 0
-                ? new BigDecimal(value).round(new MathContext(3)).doubleValue() : value;
+        sizing.addActionListener(e -> size.textField().setEnabled(sizing.getSelectedItem() != SizingForm.MEET_CRITERION));
     }
 
     @Override
@@ -334,11 +341,10 @@ final class GoalStep extends Step {
         SizingForm kind = (SizingForm) sizing.getSelectedItem();
         OptionalDouble ratio = kind == SizingForm.MASS_RATIO ? OptionalDouble.of(size.number()) : OptionalDouble.empty();
         QuantityInput mass = kind == SizingForm.MASS ? size.input() : null;
-        QuantityInput target = kind == SizingForm.TARGET ? size.input() : null;
         return new AbsorberInput(ratio, mass, method(), (ResponseKind) response.getSelectedItem(), hangs.isSelected(),
-                margin.number(), target, optional(maxMassRatio),
+                margin.number(), null, optional(maxMassRatio),
                 strokeLimit.textField().getText().isBlank() ? null : strokeLimit.input(),
-                optional(fixedDamping), optional(fixedTuning));
+                optional(fixedDamping), optional(fixedTuning), kind == SizingForm.MEET_CRITERION);
     }
 
     private void load(AbsorberInput a) {
@@ -355,9 +361,10 @@ final class GoalStep extends Step {
             selectItem(sizing, SizingForm.MASS_RATIO);
             showValue(size, a.massRatio().getAsDouble(), Unit.RATIO);
         } else {
-            selectItem(sizing, SizingForm.TARGET);
-            showValue(size, a.target());
+            selectItem(sizing, SizingForm.MEET_CRITERION);
+            showValue(size, null);
         }
+        size.textField().setEnabled(sizing.getSelectedItem() != SizingForm.MEET_CRITERION);
         showValue(margin, a.strokeMargin(), Unit.RATIO);
         showValue(strokeLimit, a.strokeLimit());
         showOptional(maxMassRatio, a.maxMassRatio());
@@ -385,5 +392,10 @@ final class GoalStep extends Step {
     void methodProblem(String text) {
         method.putClientProperty("JComponent.outline", text == null ? null : "error");
         note(text != null ? text : targetNote);
+    }
+
+    /** @param text a problem of the criterion (not of a number field), or null to clear it */
+    void criterionProblem(String text) {
+        criterion.problem(text);
     }
 }

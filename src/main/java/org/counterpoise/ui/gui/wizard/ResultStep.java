@@ -32,6 +32,7 @@ import javax.swing.JTextPane;
 import javax.swing.JToggleButton;
 import javax.swing.table.DefaultTableCellRenderer;
 import javax.swing.table.DefaultTableModel;
+import org.counterpoise.core.criteria.AmplitudeConvention;
 import org.counterpoise.core.design.Cautions;
 import org.counterpoise.core.design.DesignCurves;
 import org.counterpoise.core.design.DesignResult;
@@ -44,6 +45,7 @@ import org.counterpoise.io.chart.ChartFiles;
 import org.counterpoise.io.project.Project;
 import org.counterpoise.io.text.DesignContent;
 import org.counterpoise.io.text.DisplayUnits;
+import org.counterpoise.io.text.QuantityFormat;
 import org.counterpoise.io.text.ReportContent;
 import org.counterpoise.io.text.ReportSection.SectionId;
 import org.counterpoise.io.text.ReportTable;
@@ -78,6 +80,7 @@ final class ResultStep extends Step {
     private final TaskRunner tasks;
     private final SheetStep.Messages messages;
     private final ComparisonPanel comparison = new ComparisonPanel();
+    private final VerdictPanel verdict = new VerdictPanel();
     private final RunUpView runUp;
     private DesignResult result;
     private DesignCurves curves;
@@ -114,7 +117,12 @@ final class ResultStep extends Step {
         notesScroll.setMinimumSize(new Dimension(300, 100));
         // which method is recommended and whether this design is it, beside the design on every tab
         JPanel design = new JPanel(new BorderLayout(0, 4));
-        design.add(comparison.summary(), BorderLayout.NORTH);
+        // the verdict first (with "no absorber is needed" when the bare structure passes), then the line
+        // on the method
+        JPanel above = new JPanel(new BorderLayout());
+        above.add(verdict.component(), BorderLayout.NORTH);
+        above.add(comparison.summary(), BorderLayout.CENTER);
+        design.add(above, BorderLayout.NORTH);
         design.add(tableScroll, BorderLayout.CENTER);
         design.setMinimumSize(new Dimension(300, 160));
         JSplitPane left = new JSplitPane(JSplitPane.VERTICAL_SPLIT, design, notesScroll);
@@ -198,6 +206,11 @@ final class ResultStep extends Step {
         runUp.design(r, r == null ? null : project);
         table.setRowCount(0);
         rowNotes.clear();
+        if (r == null || r.acceptance().isEmpty()) {
+            verdict.none();
+        } else {
+            verdict.show(r.acceptance().get(), this::orderName);
+        }
         if (r == null) {
             comparison.message("Fix the inputs to see the comparison of methods.");
             curves = null;
@@ -306,11 +319,12 @@ final class ResultStep extends Step {
         SystemResponse fitted = new SystemResponse(study.structure(), result.tuning(), study.excitation().kind(),
                 study.excitation().amplitude());
         ResponseKind k = study.response();
-        readout.setText(String.format(Locale.ROOT, "At %.4g Hz:  without %s,  with %s,  stroke %s", hz,
-                pretty(DisplayUnits.format(bare.amplitudeAt(k, w), k.dimension())),
-                pretty(DisplayUnits.format(fitted.amplitudeAt(k, w), k.dimension())),
-                DisplayUnits.format(fitted.amplitudeAt(ResponseKind.STROKE, w),
-                        LENGTH)));
+        // every response value says its convention (the project's display convention)
+        AmplitudeConvention shown = project == null ? AmplitudeConvention.PEAK : project.displayConvention();
+        readout.setText(String.format(Locale.ROOT, "At %.4g Hz (%s):  without %s,  with %s,  stroke %s", hz,
+                shown.label(), pretty(DisplayUnits.format(shown.ofHarmonic(bare.amplitudeAt(k, w)), k.dimension())),
+                pretty(DisplayUnits.format(shown.ofHarmonic(fitted.amplitudeAt(k, w)), k.dimension())),
+                DisplayUnits.format(shown.ofHarmonic(fitted.amplitudeAt(ResponseKind.STROKE, w)), LENGTH)));
     }
 
     String readout() {
@@ -353,6 +367,30 @@ final class ResultStep extends Step {
                 e -> JOptionPane.showMessageDialog(page, "The charts could not be written to " + dir + ": "
                         + e.getMessage(), "Export", JOptionPane.WARNING_MESSAGE),
                 () -> messages.say("The chart export was cancelled."));
+    }
+
+    /**
+     * @param index an order's index in the design's excitation (0 is the design order)
+     * @return it in words, e.g. "the order 2× shaft speed"
+     */
+    private String orderName(int index) {
+        var excitation = result.study().excitation();
+        double factor = excitation.orders().get(index).frequencyFactor();
+        double shaft = project == null ? Double.NaN : shaftSpeed(project);
+        double harmonic = factor * excitation.band().low() / shaft;
+        return Double.isFinite(harmonic) && harmonic > 0
+                ? "the order " + QuantityFormat.number(harmonic, 3) + "× shaft speed"
+                : index == 0 ? "the design order" : "another order";
+    }
+
+    private static double shaftSpeed(Project p) {
+        var d = p.disturbance();
+        return d.isBand() ? d.bandUnit().toSi(d.bandLow()) : d.frequency().unit().toSi(d.frequency().value());
+    }
+
+    /** @return the verdict panel, for tests */
+    VerdictPanel verdict() {
+        return verdict;
     }
 
     DefaultTableModel table() {

@@ -104,6 +104,20 @@ abstract class Step {
         }
     }
 
+    /**
+     * As {@link #commit}, for a pick from a list: one undo step of its own, never merged with the
+     * next pick in the same list (as keystrokes in one field are).
+     * @param build builds the edit
+     */
+    final void commitChoice(Supplier<Edit> build) {
+        if (syncing || document == null) {
+            return;
+        }
+        document.seal();
+        commit(build);
+        document.seal();
+    }
+
     /** @return true while {@link #sync} runs */
     final boolean syncing() {
         return syncing;
