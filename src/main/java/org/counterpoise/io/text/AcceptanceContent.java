@@ -94,7 +94,7 @@ public final class AcceptanceContent {
         String words = CriterionText.of(c);
         rows.add(row(ReportKey.ACCEPTANCE_CRITERION, "criterion", new Words(words, List.of(c.kind().id(), words)),
                 source));
-        rows.add(row(ReportKey.ACCEPTANCE_SOURCE, "source", new Words(source, List.of()), ""));
+        rows.add(row(ReportKey.ACCEPTANCE_SOURCE, "limits taken from", new Words(source, List.of()), ""));
         rows.add(row(ReportKey.ACCEPTANCE_MEASURE, "judged on", new Words(CriterionText.measure(c),
                 List.of(Ids.of(c.quantity()), c.convention().id(), d.siSymbol())), source));
         rows.add(row(ReportKey.ACCEPTANCE_WEIGHTING, "frequency weighting", c.weighting()

@@ -67,7 +67,8 @@ class SheetTest {
                 assertTrue(image.getWidth() > 400 && image.getHeight() > 600);
                 ImageIO.write(image, "png", out.resolve(name + "-page-" + (i + 1) + ".png").toFile());
             }
-            assertTrue(doc.getNumberOfPages() >= 2 && doc.getNumberOfPages() <= 4, "pages " + doc.getNumberOfPages());
+            // the verdict against the preset's criterion adds its table to the summary
+            assertTrue(doc.getNumberOfPages() >= 2 && doc.getNumberOfPages() <= 5, "pages " + doc.getNumberOfPages());
         }
     }
 

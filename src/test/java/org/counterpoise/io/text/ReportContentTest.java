@@ -20,6 +20,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
+import java.util.stream.Collectors;
 import java.util.stream.Stream;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.Designer;
@@ -73,6 +74,13 @@ class ReportContentTest {
             ReportKey.MONTE_CARLO_SEED, ReportKey.MONTE_CARLO_MEAN, ReportKey.MONTE_CARLO_P50_P90,
             ReportKey.MONTE_CARLO_P95_P99, ReportKey.MONTE_CARLO_RANGE, ReportKey.MONTE_CARLO_EXCEEDING);
     private static final ProjectIdentity IDENTITY = new ProjectIdentity("C", "R. Aberg", "Plant  4", "2026-11-30");
+
+    /**
+     * The verdict's rows: the JSON nests them in the object "acceptance" and their figures are the
+     * verdict's own; AcceptanceReportTest checks them against hand-made and real verdicts.
+     */
+    private static final Set<ReportKey> VERDICT_ROWS = Stream.of(ReportKey.values())
+            .filter(k -> k.name().startsWith("ACCEPTANCE")).collect(Collectors.toSet());
 
     static Stream<Named<DesignResult>> designs() throws IOException {
         List<Named<DesignResult>> out = new ArrayList<>();
@@ -295,7 +303,7 @@ class ReportContentTest {
             for (ReportRow row : section.rows()) {
                 assertTrue(seen.add(row.key()), "one row per key: " + row.key());
                 List<Figure> figures = figures(row.value());
-                if (figures.isEmpty()) {
+                if (figures.isEmpty() || VERDICT_ROWS.contains(row.key())) {
                     continue;
                 }
                 assertTrue(core.containsKey(row.key()), row.key() + " shows numbers; name their core source in core()");
@@ -324,11 +332,12 @@ class ReportContentTest {
         String text = DesignReport.render(r, IDENTITY);
         JsonObject json = ResultJson.of(r);
         SheetContent sheet = SheetContent.of(r, "", "2026-11-30", "C", mc.orElse(null), IDENTITY);
-        Set<String> jsonKeysWritten = new HashSet<>(Set.of("name", "warnings", "cautions"));
+        Set<String> jsonKeysWritten = new HashSet<>(Set.of("name", "warnings", "cautions", "acceptance"));
         for (ReportRow row : content.sections().stream().flatMap(s -> s.rows().stream()).toList()) {
             // The text report: one line with the label and the value (two columns for before and after).
             if (row.shown() && !MONTE_CARLO_ROWS.contains(row.key())) {
-                String label = row.symbol().isEmpty() ? row.label() : row.label() + " " + ValueText.ascii(row.symbol());
+                String label = (row.symbol().isEmpty() ? row.label() : row.label() + " " + ValueText.ascii(row.symbol()))
+                        + row.conventionSuffix();
                 List<String> lines = text.lines().filter(l -> l.startsWith("  " + label + " ")).toList();
                 assertFalse(lines.isEmpty(), "text report lacks the row " + label);
                 String line = lines.get(0);
@@ -353,7 +362,8 @@ class ReportContentTest {
             // unbounded or not defined).
             List<String> keys = row.key().jsonKeys();
             jsonKeysWritten.addAll(keys);
-            if (keys.isEmpty() || MONTE_CARLO_ROWS.contains(row.key())) { // the design JSON has no Monte Carlo
+            if (keys.isEmpty() || MONTE_CARLO_ROWS.contains(row.key()) // the design JSON has no Monte Carlo
+                    || VERDICT_ROWS.contains(row.key())) { // nested in "acceptance": AcceptanceReportTest
                 continue;
             }
             if (row.value() instanceof Words w) {

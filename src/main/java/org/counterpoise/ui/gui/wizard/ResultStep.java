@@ -59,8 +59,8 @@ import org.knowm.xchart.XYChart;
 /** Step 4: the absorber to build, and the response before and after. */
 final class ResultStep extends Step {
     /** What to build and what it achieves first; the inputs echoed last. */
-    private static final List<SectionId> ORDER = List.of(SectionId.ABSORBER, SectionId.RESPONSE, SectionId.RMS,
-            SectionId.STROKE_AND_FORCES, SectionId.DESIGN, SectionId.TOLERANCE, SectionId.ALTERNATIVE,
+    private static final List<SectionId> ORDER = List.of(SectionId.ABSORBER, SectionId.ACCEPTANCE, SectionId.RESPONSE,
+            SectionId.RMS, SectionId.STROKE_AND_FORCES, SectionId.DESIGN, SectionId.TOLERANCE, SectionId.ALTERNATIVE,
             SectionId.STRUCTURE, SectionId.DISTURBANCE, SectionId.PROJECT, SectionId.MONTE_CARLO);
     /** Each table row's source and caution, shown under the pointer on its label. */
     private final List<String> rowNotes = new ArrayList<>();
