@@ -89,10 +89,6 @@ final class CriterionWords {
             case GROUP_1_FLEXIBLE -> "group 1, flexible (300 kW to 50 MW)";
             case GROUP_2_RIGID -> "group 2, rigid (15 to 300 kW)";
             case GROUP_2_FLEXIBLE -> "group 2, flexible (15 to 300 kW)";
-            case CLASS_I -> "class I (small, up to 15 kW)";
-            case CLASS_II -> "class II (medium, 15 to 75 kW)";
-            case CLASS_III -> "class III (large, rigid foundation)";
-            case CLASS_IV -> "class IV (large, soft foundation)";
         };
     }
 
