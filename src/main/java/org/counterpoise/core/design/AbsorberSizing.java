@@ -95,6 +95,11 @@ public sealed interface AbsorberSizing {
         return this instanceof ByTarget;
     }
 
+    /** @return true when the design finds the mass ratio (for a target or to meet the criterion) */
+    default boolean findsMassRatio() {
+        return this instanceof ByTarget || this instanceof MeetCriterion;
+    }
+
     /**
      * @param structure the structure (its effective mass at the absorber point)
      * @return the mass ratio mu = m2 / m1 (not for target sizing, whose ratio the design finds)

@@ -6,6 +6,7 @@ import java.util.Objects;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import org.counterpoise.core.criteria.Acceptance;
+import org.counterpoise.core.criteria.Reading;
 import org.counterpoise.core.error.Warning;
 import org.counterpoise.core.model.Absorber;
 import org.counterpoise.core.model.Tuning;
@@ -52,6 +53,8 @@ import org.counterpoise.core.response.ResponsePeak;
  *     it: transient at the project's run-up rate when it states one, else {@code strokeRunUp}
  * @param acceptance the study's criterion judged on the bare structure (before) and with the
  *     absorber (after), over every excitation order; empty when the study has no criterion
+ * @param afterWorstCase for a robust design with a criterion: the verdict after at the worst point
+ *     over the tolerance ranges (the largest utilisation); empty otherwise
  */
 public record DesignResult(DesignStudy study, String methodSource, String methodNote, Tuning tuning, Absorber absorber,
         OptionalDouble staticDeflection, ResponsePeak responseBefore, ResponsePeak responseAfter,
@@ -60,7 +63,7 @@ public record DesignResult(DesignStudy study, String methodSource, String method
         ResponsePeak damperForce, ResponsePeak absorberForce, double[] coupledNaturalFrequencies,
         DetuningAlternative stiffnessDetuning, DetuningAlternative massDetuning, MistuningRange structureTolerance, MistuningRange absorberTolerance,
         List<Warning> warnings, ActiveConstraint activeConstraint, RunUpStroke runUpStroke,
-        Optional<Acceptance> acceptance) {
+        Optional<Acceptance> acceptance, Optional<Reading> afterWorstCase) {
 
     /** The rise of the peak response that defines the tolerated mistuning (a design choice: 10 %). */
     public static final double TOLERANCE_ALLOWANCE = 0.10;
@@ -113,6 +116,48 @@ public record DesignResult(DesignStudy study, String methodSource, String method
                 absorberTolerance, warnings, activeConstraint, runUpStroke, Optional.empty());
     }
 
+    /**
+     * A result without a verdict over the tolerances.
+     * @param study the inputs
+     * @param methodSource source of the method
+     * @param methodNote what the method assumed or found
+     * @param tuning the tuning
+     * @param absorber the absorber
+     * @param staticDeflection spring sag, if it hangs
+     * @param responseBefore response that matters, bare
+     * @param responseAfter response that matters, with the absorber
+     * @param motionBefore motions, bare
+     * @param motionAfter motions, with the absorber
+     * @param strokeInBand stroke in band
+     * @param strokeRunUp stroke over run-up
+     * @param clearance stroke clearance, m
+     * @param springForce spring force in band
+     * @param damperForce damper force in band
+     * @param absorberForce absorber force in band
+     * @param coupledNaturalFrequencies the coupled natural frequencies, rad/s
+     * @param stiffnessDetuning the stiffness alternative
+     * @param massDetuning the mass alternative
+     * @param structureTolerance tolerated structure mistuning
+     * @param absorberTolerance tolerated absorber mistuning
+     * @param warnings non-fatal findings
+     * @param activeConstraint the constraint that holds the optimum back
+     * @param runUpStroke the run-up stroke
+     * @param acceptance the verdict before and after, when the study has a criterion
+     */
+    public DesignResult(DesignStudy study, String methodSource, String methodNote, Tuning tuning, Absorber absorber,
+            OptionalDouble staticDeflection, ResponsePeak responseBefore, ResponsePeak responseAfter,
+            Map<ResponseKind, ResponsePeak> motionBefore, Map<ResponseKind, ResponsePeak> motionAfter,
+            ResponsePeak strokeInBand, ResponsePeak strokeRunUp, double clearance, ResponsePeak springForce,
+            ResponsePeak damperForce, ResponsePeak absorberForce, double[] coupledNaturalFrequencies,
+            DetuningAlternative stiffnessDetuning, DetuningAlternative massDetuning,
+            MistuningRange structureTolerance, MistuningRange absorberTolerance, List<Warning> warnings,
+            ActiveConstraint activeConstraint, RunUpStroke runUpStroke, Optional<Acceptance> acceptance) {
+        this(study, methodSource, methodNote, tuning, absorber, staticDeflection, responseBefore, responseAfter,
+                motionBefore, motionAfter, strokeInBand, strokeRunUp, clearance, springForce, damperForce,
+                absorberForce, coupledNaturalFrequencies, stiffnessDetuning, massDetuning, structureTolerance,
+                absorberTolerance, warnings, activeConstraint, runUpStroke, acceptance, Optional.empty());
+    }
+
     /** Defensive copies. */
     public DesignResult {
         motionBefore = Map.copyOf(motionBefore);
@@ -120,6 +165,7 @@ public record DesignResult(DesignStudy study, String methodSource, String method
         coupledNaturalFrequencies = coupledNaturalFrequencies.clone();
         warnings = List.copyOf(warnings);
         Objects.requireNonNull(acceptance, "acceptance");
+        Objects.requireNonNull(afterWorstCase, "afterWorstCase");
     }
 
     /** @return a copy of the coupled natural frequencies, rad/s */

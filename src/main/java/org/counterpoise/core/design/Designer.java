@@ -130,7 +130,8 @@ public final class Designer {
                 fitted.peakOver(ResponseKind.SPRING_FORCE, band), fitted.peakOver(ResponseKind.DAMPER_FORCE, band),
                 fitted.peakOver(ResponseKind.ABSORBER_FORCE, band), coupled, detuning, massDetuning,
                 structureTolerance, absorberTolerance, warnings, active[0], runUpStroke,
-                study.criterion().map(c -> Assessor.of(c, excitation).acceptance(structure, tuning)));
+                study.criterion().map(c -> Assessor.of(c, excitation).acceptance(structure, tuning)),
+                ToleranceVerdict.worstCase(study, tuning));
     }
 
     private static ClosedForm choose(DesignStudy study, List<Warning> warnings, ActiveConstraint[] active) {
@@ -154,6 +155,9 @@ public final class Designer {
         if (study.sizing() instanceof AbsorberSizing.ByTarget target) {
             return study.method().robust() ? RobustChoice.lightestForTarget(study, target, warnings, active)
                     : lightestForTarget(study, target, warnings, active);
+        }
+        if (study.sizing() instanceof AbsorberSizing.MeetCriterion meet) {
+            return CriterionChoice.lightest(study, meet, warnings, active);
         }
         double mu = study.sizing().massRatioOn(structure);
         return switch (study.method()) {
@@ -237,7 +241,7 @@ public final class Designer {
         return exactPeakResult(study, HInfinityOptimiser.optimise(problem), warnings, active);
     }
 
-    private static ClosedForm exactPeakResult(DesignStudy study, PeakOptimum o, List<Warning> warnings,
+    static ClosedForm exactPeakResult(DesignStudy study, PeakOptimum o, List<Warning> warnings,
             ActiveConstraint[] active) {
         if (!o.converged()) {
             throw new NotFoundException("certified exact-peak optimum", "the search could not confirm that no other"
@@ -255,17 +259,26 @@ public final class Designer {
 
     private static ClosedForm lightestForTarget(DesignStudy study, AbsorberSizing.ByTarget sizing,
             List<Warning> warnings, ActiveConstraint[] active) {
-        Structure s = study.structure();
-        Excitation e = study.excitation();
-        double scale = ResponseScale.of(s, e.kind(), e.amplitude(), study.response());
-        PeakProblem problem = peakProblem(study, sizing.maxMassRatio());
-        MinimumMass.Result r = MinimumMass.find(problem, sizing.target() / scale, sizing.maxMassRatio());
+        MinimumMass.Result r = lightestExactPeak(study, sizing.target(), sizing.maxMassRatio());
         if (!r.reachable()) {
             warnings.add(Warning.of(WarningKind.TARGET_NOT_MET, sizing.maxMassRatio()));
         }
         ClosedForm exact = exactPeakResult(study, r.optimum(), warnings, active);
         return new ClosedForm(exact.tuning(), exact.source(), (r.reachable() ? "lightest absorber that meets the"
                 + " target; " : "target not met; ") + exact.note());
+    }
+
+    /**
+     * @param study a study (its response, band and constraints)
+     * @param target the largest allowed peak of the study's response, SI
+     * @param maxMassRatio the largest mass ratio considered
+     * @return the lightest exact-peak optimum that meets the target, or the one at the largest ratio
+     */
+    static MinimumMass.Result lightestExactPeak(DesignStudy study, double target, double maxMassRatio) {
+        Structure s = study.structure();
+        Excitation e = study.excitation();
+        double scale = ResponseScale.of(s, e.kind(), e.amplitude(), study.response());
+        return MinimumMass.find(peakProblem(study, maxMassRatio), target / scale, maxMassRatio);
     }
 
     private static InvalidInputException noClosedForm(DesignStudy study) {

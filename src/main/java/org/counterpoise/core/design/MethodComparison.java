@@ -262,7 +262,7 @@ public record MethodComparison(List<Candidate> candidates, List<LeftOut> leftOut
 
     /** The study by another method at the same mass, with the constraints when the method takes them. */
     private static Candidate candidate(DesignStudy study, DesignMethod m, double mu) {
-        AbsorberSizing sizing = study.sizing().byTarget() ? AbsorberSizing.ofMassRatio(mu) : study.sizing();
+        AbsorberSizing sizing = study.sizing().findsMassRatio() ? AbsorberSizing.ofMassRatio(mu) : study.sizing();
         DesignStudy constrained;
         try {
             constrained = study.withSizing(sizing, study.constraints()).withMethod(m);

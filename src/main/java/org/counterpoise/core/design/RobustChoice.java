@@ -1,8 +1,11 @@
 package org.counterpoise.core.design;
 
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Locale;
 import java.util.OptionalDouble;
+import java.util.function.DoubleFunction;
 import org.apache.commons.math3.analysis.solvers.BrentSolver;
 import org.apache.commons.math3.exception.MathIllegalArgumentException;
 import org.apache.commons.math3.exception.MathIllegalStateException;
@@ -16,6 +19,7 @@ import org.counterpoise.core.optim.HInfinityOptimiser;
 import org.counterpoise.core.progress.ProgressListener;
 import org.counterpoise.core.response.ResponseKind;
 import org.counterpoise.core.response.SystemResponse;
+import org.counterpoise.core.robust.Mistuning;
 import org.counterpoise.core.robust.RobustCriterion;
 import org.counterpoise.core.robust.RobustLimits;
 import org.counterpoise.core.robust.RobustOptimiser;
@@ -50,10 +54,7 @@ final class RobustChoice {
     }
 
     /**
-     * The lightest absorber whose robust criterion meets the target: the criterion of the robust
-     * optimum falls as the mass ratio grows (checked in the tests), so the mass ratio is found by
-     * Brent's root finder on ln(criterion / target), to {@value #MASS_RATIO_ACCURACY} relative,
-     * on the sufficient side.
+     * The lightest absorber whose robust criterion meets the target ({@link #lightest}).
      *
      * @param study a study with a robust method
      * @param sizing the target and the largest mass ratio
@@ -63,35 +64,65 @@ final class RobustChoice {
      */
     static ClosedForm lightestForTarget(DesignStudy study, AbsorberSizing.ByTarget sizing, List<Warning> warnings,
             ActiveConstraint[] active) {
-        double target = sizing.target();
-        double max = sizing.maxMassRatio();
-        RobustOptimiser.Minimum atMax = minimum(study, max);
-        if (atMax.value() > target) {
-            warnings.add(Warning.of(WarningKind.TARGET_NOT_MET, max));
-            return closedForm(study, atMax, warnings, active, "target not met; ");
+        Lightest found = lightest(x -> minimum(study, x), sizing.target(), sizing.maxMassRatio());
+        if (!found.met()) {
+            warnings.add(Warning.of(WarningKind.TARGET_NOT_MET, sizing.maxMassRatio()));
+            return closedForm(study, found.minimum(), warnings, active, "target not met; ");
+        }
+        return closedForm(study, found.minimum(), warnings, active, "lightest absorber that meets the target; ");
+    }
+
+    /**
+     * The outcome of the search for the lightest sufficient absorber.
+     *
+     * @param minimum the optimum at the mass ratio found (at the largest when none meets the target)
+     * @param met true when it meets the target
+     * @param lightestConsidered true when even the lightest absorber considered meets it
+     */
+    record Lightest(RobustOptimiser.Minimum minimum, boolean met, boolean lightestConsidered) {
+    }
+
+    /**
+     * The lightest absorber whose optimum meets a target: the optimum's value falls as the mass
+     * ratio grows (checked in the tests), so the mass ratio is found by Brent's root finder on
+     * ln(value / target), to {@value #MASS_RATIO_ACCURACY} relative, on the sufficient side; the
+     * lightest considered is min(0.001, largest / 10).
+     *
+     * @param search the optimum for a mass ratio
+     * @param target the largest allowed value, in the optimum's units
+     * @param max the largest mass ratio considered
+     * @return the lightest sufficient optimum, or the one at the largest mass ratio
+     */
+    static Lightest lightest(DoubleFunction<RobustOptimiser.Minimum> search, double target, double max) {
+        // Brent's last trial is usually the mass ratio it returns: each optimum is found once
+        Map<Double, RobustOptimiser.Minimum> found = new HashMap<>();
+        DoubleFunction<RobustOptimiser.Minimum> optimumAt = mu -> found.computeIfAbsent(mu, search::apply);
+        RobustOptimiser.Minimum atMax = optimumAt.apply(max);
+        if (!(atMax.value() <= target)) {
+            return new Lightest(atMax, false, false);
         }
         double lowest = Math.min(1e-3, max / 10);
-        RobustOptimiser.Minimum atLowest = minimum(study, lowest);
+        RobustOptimiser.Minimum atLowest = optimumAt.apply(lowest);
         if (atLowest.value() <= target) {
-            return closedForm(study, atLowest, warnings, active, "lightest absorber that meets the target; ");
+            return new Lightest(atLowest, true, true);
         }
         double mu;
         try {
             mu = new BrentSolver(MASS_RATIO_ACCURACY, 1e-12).solve(200,
-                    x -> Math.log(minimum(study, x).value() / target), lowest, max);
+                    x -> Math.log(optimumAt.apply(x).value() / target), lowest, max);
         } catch (MathIllegalStateException | MathIllegalArgumentException noRoot) {
             mu = max; // the largest mass ratio meets the target: keep it
         }
-        RobustOptimiser.Minimum at = minimum(study, mu);
+        RobustOptimiser.Minimum at = optimumAt.apply(mu);
         // Brent returns a point within its tolerance on either side; step to the sufficient side
         for (int step = 0; step < 8 && at.value() > target && mu < max; step++) {
             mu = Math.min(max, mu * (1 + MASS_RATIO_ACCURACY));
-            at = minimum(study, mu);
+            at = optimumAt.apply(mu);
         }
         if (at.value() > target) {
             at = atMax;
         }
-        return closedForm(study, at, warnings, active, "lightest absorber that meets the target; ");
+        return new Lightest(at, true, false);
     }
 
     /**
@@ -100,10 +131,22 @@ final class RobustChoice {
      * @return the robust optimum for that mass ratio
      */
     static RobustOptimiser.Minimum minimum(DesignStudy study, double mu) {
+        return minimum(study, mu, RobustMeasures.mistuning(study), criterion(study));
+    }
+
+    /**
+     * @param study a study (its constraints and the seeds' response)
+     * @param mu the mass ratio
+     * @param model what a build is judged by
+     * @param criterion what is minimised over the builds
+     * @return the optimum for that mass ratio, with the damping held at the practical floor when the
+     *     free optimum asks for less
+     */
+    static RobustOptimiser.Minimum minimum(DesignStudy study, double mu, Mistuning model, RobustCriterion criterion) {
         RobustLimits limits = limits(study);
         List<Tuning> seeds = seeds(study, mu);
-        RobustOptimiser.Minimum free = RobustOptimiser.minimise(RobustMeasures.mistuning(study), mu, criterion(study),
-                seeds, limits, ProgressListener.NONE);
+        RobustOptimiser.Minimum free = RobustOptimiser.minimise(model, mu, criterion, seeds, limits,
+                ProgressListener.NONE);
         if (limits.fixedDampingRatio().isPresent() || free.tuning().dampingRatio() >= Designer.PRACTICAL_DAMPING_RATIO) {
             return free;
         }
@@ -113,8 +156,7 @@ final class RobustChoice {
         // floor for anything better.
         RobustLimits floor = new RobustLimits(limits.fixedTuningRatio(),
                 OptionalDouble.of(Designer.PRACTICAL_DAMPING_RATIO), limits.runUpStrokeLimit());
-        return RobustOptimiser.minimise(RobustMeasures.mistuning(study), mu, criterion(study), seeds, floor,
-                ProgressListener.NONE);
+        return RobustOptimiser.minimise(model, mu, criterion, seeds, floor, ProgressListener.NONE);
     }
 
     /**
@@ -127,7 +169,7 @@ final class RobustChoice {
                 && t.dampingRatio() == Designer.PRACTICAL_DAMPING_RATIO;
     }
 
-    private static RobustCriterion criterion(DesignStudy study) {
+    static RobustCriterion criterion(DesignStudy study) {
         return study.method() == DesignMethod.ROBUST_P95 ? RobustMeasures.percentileCriterion(study)
                 : RobustMeasures.worstCaseCriterion(study);
     }
@@ -152,6 +194,19 @@ final class RobustChoice {
 
     private static ClosedForm closedForm(DesignStudy study, RobustOptimiser.Minimum best, List<Warning> warnings,
             ActiveConstraint[] active, String sizing) {
+        return closedFormNoted(study, best, warnings, active, sizing + note(study));
+    }
+
+    /**
+     * @param study the study
+     * @param best the optimum found
+     * @param warnings where a warning goes
+     * @param active where the active constraint goes
+     * @param note the method note
+     * @return the design, checked against the stroke limit
+     */
+    static ClosedForm closedFormNoted(DesignStudy study, RobustOptimiser.Minimum best, List<Warning> warnings,
+            ActiveConstraint[] active, String note) {
         DesignConstraints c = study.constraints();
         double stroke = c.strokeLimit().isPresent() ? runUpStroke(study, best.tuning()) : 0;
         if (c.strokeLimit().isPresent() && stroke > c.strokeLimit().getAsDouble() * (1 + 1e-9)) {
@@ -166,7 +221,7 @@ final class RobustChoice {
         active[0] = c.strokeLimit().isPresent() && stroke >= c.strokeLimit().getAsDouble() * (1 - 1e-4)
                 ? ActiveConstraint.STROKE_LIMIT
                 : onDampingFloor(study, best.tuning()) ? ActiveConstraint.PRACTICAL_DAMPING_FLOOR : ActiveConstraint.NONE;
-        return new ClosedForm(best.tuning(), Designer.EXACT_SOURCE, sizing + note(study));
+        return new ClosedForm(best.tuning(), Designer.EXACT_SOURCE, note);
     }
 
     private static double runUpStroke(DesignStudy study, Tuning t) {
@@ -176,7 +231,7 @@ final class RobustChoice {
     }
 
     /** Names the ranges or distributions the criterion used. */
-    private static String note(DesignStudy study) {
+    static String note(DesignStudy study) {
         ToleranceRanges r = study.robustness().ranges();
         String ranges = String.format(Locale.ROOT, "the structure's frequency within +/-%.3g %%, the absorber's within"
                 + " +/-%.3g %% and its damping within +/-%.3g %%", 100 * r.structure(), 100 * r.absorber(),

@@ -16,6 +16,18 @@ public enum WarningKind {
     SINGLE_FREQUENCY_EXACT(WarningParameter.PEAK_BAND),
     /** No absorber up to the largest mass ratio meets the target. */
     TARGET_NOT_MET(WarningParameter.MAX_MASS_RATIO),
+    /**
+     * No absorber up to the largest mass ratio meets the acceptance criterion: the best at that
+     * ratio, its utilisation (as designed for exact-peak, over the tolerances for the robust methods).
+     */
+    CRITERION_NOT_MET(WarningParameter.MAX_MASS_RATIO, WarningParameter.UTILISATION, WarningParameter.METHOD_ID),
+    /** No absorber up to the largest mass ratio gives the criterion's measure a finite bound. */
+    CRITERION_NOT_MET_UNBOUNDED(WarningParameter.MAX_MASS_RATIO),
+    /**
+     * The bare structure already meets the acceptance criterion: no absorber is needed; the design
+     * shown is the lightest considered.
+     */
+    NO_ABSORBER_NEEDED(WarningParameter.UTILISATION, WarningParameter.MASS_RATIO),
     /** The bare structure is undamped and resonant in the band. */
     RESONANT_UNDAMPED,
     /** The absorber makes the response that matters larger. */

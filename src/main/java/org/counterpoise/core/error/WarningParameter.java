@@ -9,6 +9,11 @@ public enum WarningParameter {
     MASS_RATIO(false),
     /** The largest mass ratio considered when sizing for a target (non-dimensional). */
     MAX_MASS_RATIO(false),
+    /**
+     * A criterion's utilisation: the judged value over the limit where that ratio is largest (at
+     * most 1 meets the criterion; non-dimensional).
+     */
+    UTILISATION(false),
     /** The structure's damping ratio zeta1 (non-dimensional). */
     STRUCTURE_DAMPING_RATIO(false),
     /** The lower undamped natural frequency of the structure with the absorber, rad/s. */

@@ -10,6 +10,7 @@ import java.util.Map;
 import java.util.TreeMap;
 import java.util.WeakHashMap;
 import java.util.function.DoubleUnaryOperator;
+import org.counterpoise.core.criteria.AmplitudeConvention;
 import org.counterpoise.core.design.DesignCurves;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.response.ResponseKind;
@@ -90,18 +91,49 @@ public final class ChartFactory {
      */
     public static XYChart response(DesignResult r, DesignCurves curves, boolean logarithmic, ChartTheme theme,
             int width, int height) {
+        return response(r, curves, logarithmic, theme, AmplitudeConvention.PEAK, width, height);
+    }
+
+    /**
+     * @param r the design result
+     * @param curves its curves
+     * @param logarithmic true for a logarithmic response axis
+     * @param theme colours
+     * @param convention the amplitude convention the curves are stated in (the title says it)
+     * @param width pixels
+     * @param height pixels
+     * @return the response before and after, with the forcing band marked; the study's criterion,
+     *     when it has one, as a limit line ({@link LimitLines}) where the chart's quantity can show it
+     */
+    public static XYChart response(DesignResult r, DesignCurves curves, boolean logarithmic, ChartTheme theme,
+            AmplitudeConvention convention, int width, int height) {
         Dimension d = curves.response().dimension();
         Unit unit = DisplayUnits.of(d);
-        XYChart chart = base(width, height, capitalised(curves.response().label()), unit, theme);
+        XYChart chart = base(width, height, capitalised(curves.response().label()) + ", " + convention.label(), unit,
+                theme);
         double[] hz = ChartStyle.inUnit(curves.frequency(), Unit.HERTZ);
-        double[] before = ChartStyle.inUnit(curves.before(), unit);
-        double[] after = ChartStyle.inUnit(curves.after(), unit);
+        double[] before = stated(ChartStyle.inUnit(curves.before(), unit), convention);
+        double[] after = stated(ChartStyle.inUnit(curves.after(), unit), convention);
         ResponseKind kind = curves.response();
-        Curve[] lines = {new Curve("without absorber", before, theme.before(), 1.4f, true, exact(r, false, kind, unit)),
-            new Curve("with absorber", after, theme.after(), 2.2f, false, exact(r, true, kind, unit))};
+        DoubleUnaryOperator exactBefore = exact(r, false, kind, unit);
+        DoubleUnaryOperator exactAfter = exact(r, true, kind, unit);
+        Curve[] lines = {new Curve("without absorber", before, theme.before(), 1.4f, true,
+                hz1 -> convention.ofHarmonic(exactBefore.applyAsDouble(hz1))),
+            new Curve("with absorber", after, theme.after(), 2.2f, false,
+                hz1 -> convention.ofHarmonic(exactAfter.applyAsDouble(hz1)))};
         plot(chart, hz, lines, logarithmic, Double.NaN, resonances(r), theme);
+        r.study().criterion().ifPresent(c -> LimitLines.add(chart, c, kind, convention, unit, theme));
         shadeBand(chart, r, theme);
         return chart;
+    }
+
+    /** Amplitudes of a steady harmonic (peaks) stated in a convention. */
+    private static double[] stated(double[] peaks, AmplitudeConvention convention) {
+        double[] out = new double[peaks.length];
+        for (int i = 0; i < peaks.length; i++) {
+            out[i] = convention.ofHarmonic(peaks[i]);
+        }
+        return out;
     }
 
     /** The stroke chart in the light (print) theme. */

@@ -1,6 +1,8 @@
 package org.counterpoise.io.export;
 
+import com.google.gson.JsonArray;
 import com.google.gson.JsonObject;
+import org.counterpoise.core.criteria.AmplitudeConvention;
 import java.util.List;
 import org.counterpoise.core.units.Dimension;
 import org.counterpoise.core.units.Unit;
@@ -11,9 +13,13 @@ import org.counterpoise.io.text.ReportValue;
 import org.counterpoise.io.text.ReportValue.Change;
 import org.counterpoise.io.text.ReportValue.Count;
 import org.counterpoise.io.text.ReportValue.Factor;
+import org.counterpoise.io.text.ReportValue.Flag;
 import org.counterpoise.io.text.ReportValue.Level;
+import org.counterpoise.io.text.ReportValue.Margin;
+import org.counterpoise.io.text.ReportValue.Names;
 import org.counterpoise.io.text.ReportValue.NotApplicable;
 import org.counterpoise.io.text.ReportValue.Pair;
+import org.counterpoise.io.text.ReportValue.PairKind;
 import org.counterpoise.io.text.ReportValue.PeakAt;
 import org.counterpoise.io.text.ReportValue.Percent;
 import org.counterpoise.io.text.ReportValue.PlusMinus;
@@ -48,9 +54,30 @@ final class ReportJson {
     }
 
     private static void write(JsonObject o, ReportRow row) {
-        List<String> keys = row.key().jsonKeys();
-        ReportValue v = row.value();
-        if (v instanceof Pair p) {
+        write(o, row.key().jsonKeys(), row.value());
+        // Amplitudes shown in another convention than peak: the peak keys stay (programs read them),
+        // the same values in the display convention follow under the keys with its prefix.
+        row.amplitude().filter(a -> a.followsDisplay() && a.convention() != AmplitudeConvention.PEAK)
+                .ifPresent(a -> {
+                    List<String> keys = row.key().jsonKeysIn(a.convention());
+                    ReportValue shown = row.shownValue();
+                    if (shown instanceof Reduction r) {
+                        // the factor is the same in every convention: only the two amplitudes
+                        write(o, keys.subList(0, 2), new Pair(r.before(), r.after(), PairKind.BEFORE_AFTER));
+                    } else {
+                        write(o, keys, shown);
+                    }
+                });
+    }
+
+    private static void write(JsonObject o, List<String> keys, ReportValue v) {
+        if (v instanceof Pair p && p.first() instanceof Margin a && p.second() instanceof Margin b
+                && keys.size() == 4) {
+            write(o, keys.get(0), number(a.ratio()));
+            write(o, keys.get(1), number(b.ratio()));
+            write(o, keys.get(2), number(a.decibels()));
+            write(o, keys.get(3), number(b.decibels()));
+        } else if (v instanceof Pair p) {
             write(o, keys.get(0), p.first());
             write(o, keys.get(1), p.second());
         } else if (v instanceof Reduction r) {
@@ -100,6 +127,14 @@ final class ReportJson {
             JsonNumbers.put(o, key, Double.NaN);
         } else if (v instanceof Words w) {
             o.addProperty(key, w.text());
+        } else if (v instanceof Flag f) {
+            o.addProperty(key, f.value());
+        } else if (v instanceof Names n) {
+            JsonArray a = new JsonArray();
+            n.ids().forEach(a::add);
+            o.add(key, a);
+        } else if (v instanceof Margin m) {
+            JsonNumbers.put(o, key, m.ratio());
         } else if (v instanceof Level l) {
             JsonNumbers.put(o, key, l.value());
         } else if (v instanceof Percent p) {

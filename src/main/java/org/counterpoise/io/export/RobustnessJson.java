@@ -3,6 +3,7 @@ package org.counterpoise.io.export;
 import com.google.gson.JsonArray;
 import com.google.gson.JsonNull;
 import com.google.gson.JsonObject;
+import org.counterpoise.core.criteria.AmplitudeConvention;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.RobustnessResult;
 import org.counterpoise.core.robust.MonteCarloResult;
@@ -20,9 +21,20 @@ public final class RobustnessJson {
      * @return pretty-printed JSON
      */
     public static String toJson(DesignResult design, RobustnessResult r) {
+        return toJson(design, r, AmplitudeConvention.PEAK);
+    }
+
+    /**
+     * @param design the design examined
+     * @param r the study
+     * @param display the convention response values are also stated in (the sensitivity curves
+     *     and the histogram stay peaks, as their keys say)
+     * @return pretty-printed JSON
+     */
+    public static String toJson(DesignResult design, RobustnessResult r, AmplitudeConvention display) {
         JsonObject o = new JsonObject();
         o.addProperty("name", design.study().name());
-        ReportJson.put(o, RobustnessContent.of(design, r));
+        ReportJson.put(o, RobustnessContent.of(design, r).shownIn(display));
         // The curves are series, written from the result; they come before the Monte Carlo
         // summary, which ends with its histogram (the documented key order).
         // Without tolerances the Monte Carlo is not run: "monte_carlo" is null and

@@ -4,6 +4,7 @@ import java.util.List;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import org.counterpoise.core.criteria.AmplitudeConvention;
+import org.counterpoise.core.criteria.Assessor;
 import org.counterpoise.core.criteria.Criterion;
 import org.counterpoise.core.criteria.UserLimit;
 import org.counterpoise.core.design.AbsorberSizing;
@@ -179,16 +180,15 @@ public record Project(String name, String notes, StructureInput structure, Distu
     }
 
     /**
-     * The order that governs the verdict, whose design then serves the others best.
+     * The order that governs the verdict of the bare structure, which the design then serves (the
+     * disturbance's own order when the project names no criterion, since nothing then governs).
      * @param allOrders the excitation with the disturbance's own order as the design order and the
      *     others beside it (their indices are those of {@link Excitation#orders()})
      * @return the index of the governing order in {@code allOrders.orders()}
      */
     private int governingOrder(Excitation allOrders) {
-        // LEAD (slice B): replace this line by slice B's core method that returns the governing
-        // order's index (for toStructure(), allOrders and the criterion, acceptanceCriterion()).
-        // Until it reaches main, the disturbance's own order (index 0) is the governing one.
-        return 0;
+        Optional<Criterion> criterion = withTargetAsAcceptance().acceptanceCriterion();
+        return criterion.isEmpty() ? 0 : Assessor.governingOrder(criterion.get(), toStructure(), allOrders);
     }
 
     /**
@@ -202,13 +202,12 @@ public record Project(String name, String notes, StructureInput structure, Distu
     }
 
     /**
-     * Slice F's switch. False while the Designer cannot size for {@link AbsorberSizing.MeetCriterion}:
-     * a criterion that says what the old {@code absorber.target} said (one limit on
-     * {@code absorber.response}, one order) is then designed as a target ({@link AbsorberSizing.ByTarget},
-     * the same numbers as before format 3), and any other criterion to meet is refused in plain words.
-     * LEAD (slice F): set to true once the Designer handles MeetCriterion.
+     * Slice F's switch, now true: the Designer sizes for {@link AbsorberSizing.MeetCriterion} (any
+     * criterion; a limit that says what the old {@code absorber.target} said gives the target's design
+     * to 1e-9, MeetCriterionEquivalenceTest). When false, such a limit was designed as a target
+     * ({@link AbsorberSizing.ByTarget}) and any other criterion to meet was refused in plain words.
      */
-    static final boolean DESIGNER_MEETS_CRITERION = false;
+    static final boolean DESIGNER_MEETS_CRITERION = true;
 
     /** @return the study the core designs */
     public DesignStudy toStudy() {
@@ -285,6 +284,25 @@ public record Project(String name, String notes, StructureInput structure, Distu
         }
         return withAbsorber(absorber.meetingAcceptance(absorber.maxMassRatio())).withAcceptance(
                 AcceptanceInput.StatedLimit.flat(absorber.response(), AmplitudeConvention.PEAK, target));
+    }
+
+    /**
+     * The inverse of {@link #withTargetAsAcceptance} where it exists: the absorber sized for the
+     * target that the criterion to meet stands for, when the criterion says exactly what a target of
+     * format 2 said (absorber.meet_acceptance with a user limit of one peak value on
+     * {@code absorber.response}). For a front end that shows sizing by a target (the wizard's goal
+     * step, until it shows criteria); such a target is saved back as the same criterion.
+     * @return the absorber with that target, or empty
+     */
+    public Optional<AbsorberInput> absorberWithTarget() {
+        AbsorberInput a = absorber;
+        if (a.meetAcceptance() && acceptance instanceof AcceptanceInput.StatedLimit s && s.value() != null
+                && s.convention() == AmplitudeConvention.PEAK && s.quantity() == a.response()) {
+            return Optional.of(new AbsorberInput(OptionalDouble.empty(), null, a.method(), a.response(),
+                    a.hangsVertically(), a.strokeMargin(), s.value(), a.maxMassRatio(), a.strokeLimit(),
+                    a.fixedDampingRatio(), a.fixedTuningRatio()));
+        }
+        return Optional.empty();
     }
 
     /**

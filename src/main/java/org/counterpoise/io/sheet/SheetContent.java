@@ -3,6 +3,7 @@ package org.counterpoise.io.sheet;
 import java.util.List;
 import java.util.Optional;
 import java.util.Set;
+import org.counterpoise.core.criteria.AmplitudeConvention;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.MethodComparison;
 import org.counterpoise.core.robust.MonteCarloOutcome;
@@ -122,7 +123,24 @@ public record SheetContent(String projectName, String notes, String date, String
      */
     public static SheetContent of(DesignResult r, String notes, String date, String revision,
             MonteCarloOutcome monteCarlo, ProjectIdentity identity, MethodComparison comparison) {
-        return of(DesignContent.of(r, identity, monteCarlo).with(ComparisonContent.of(comparison, r.study())), notes,
-                date, revision);
+        return of(r, notes, date, revision, monteCarlo, identity, comparison, AmplitudeConvention.PEAK);
+    }
+
+    /**
+     * @param r the design result
+     * @param notes the project's notes, or empty
+     * @param date date of issue
+     * @param revision revision mark
+     * @param monteCarlo the design's tolerance Monte Carlo, or why it was not run
+     * @param identity the project's engineer and client or site
+     * @param comparison the comparison of design methods for the design's study
+     * @param convention the convention response values are stated in
+     * @return the sheet content with the comparison's table
+     */
+    public static SheetContent of(DesignResult r, String notes, String date, String revision,
+            MonteCarloOutcome monteCarlo, ProjectIdentity identity, MethodComparison comparison,
+            AmplitudeConvention convention) {
+        return of(DesignContent.of(r, identity, monteCarlo).with(ComparisonContent.of(comparison, r.study()))
+                .shownIn(convention), notes, date, revision);
     }
 }

@@ -13,6 +13,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Set;
 import java.util.function.BiFunction;
+import org.counterpoise.core.criteria.AmplitudeConvention;
 import org.counterpoise.core.design.DesignCurves;
 import org.counterpoise.core.design.DesignDossier;
 import org.counterpoise.core.design.DesignResult;
@@ -23,11 +24,18 @@ import org.counterpoise.io.FileWriteException;
 import org.counterpoise.io.PlainMessages;
 import org.counterpoise.io.chart.ChartFactory;
 import org.counterpoise.io.chart.ChartFiles;
+import org.counterpoise.io.chart.ChartTheme;
 import org.counterpoise.io.export.CurveCsv;
 import org.counterpoise.io.export.ResultJson;
 import org.counterpoise.io.project.ProjectIdentity;
+import org.counterpoise.io.text.DesignContent;
 import org.knowm.xchart.XYChart;
 
+/*
+ * Longer than 400 lines because the all-or-none output set (Outputs) and the checks that guard it
+ * (replaceable targets, spared inputs, folders created and removed again) belong with the writes
+ * they guard; the overloads for the wizard's preview and the display convention add the rest.
+ */
 /**
  * Writes the parameter sheet and the exports of a {@link DesignDossier} (it computes nothing itself)
  * to files through {@link AtomicFiles}: a crash never
@@ -52,7 +60,18 @@ public final class SheetFiles {
      * @return the charts the sheet prints: response (log axis) and stroke
      */
     public static List<XYChart> charts(DesignResult r, DesignCurves curves) {
-        return List.of(ChartFactory.response(r, curves, true, CHART_WIDTH, CHART_HEIGHT),
+        return charts(r, curves, AmplitudeConvention.PEAK);
+    }
+
+    /**
+     * @param r the design
+     * @param curves its curves
+     * @param convention the convention the response is stated in (the stroke stays a peak)
+     * @return the charts the sheet prints: response (log axis, with the criterion's limit when the
+     *     study has one) and stroke
+     */
+    public static List<XYChart> charts(DesignResult r, DesignCurves curves, AmplitudeConvention convention) {
+        return List.of(ChartFactory.response(r, curves, true, ChartTheme.LIGHT, convention, CHART_WIDTH, CHART_HEIGHT),
                 ChartFactory.stroke(r, curves, false, CHART_WIDTH, CHART_HEIGHT));
     }
 
@@ -113,15 +132,33 @@ public final class SheetFiles {
      */
     public static void writeSheet(DesignDossier dossier, String notes, String date, String revision,
             ProjectIdentity identity, List<SheetPanel> panels, OutputStream out) throws IOException {
-        SheetWriter.write(content(dossier, notes, date, revision, identity), charts(dossier.design(), dossier.curves()),
-                panels, out);
+        writeSheet(dossier, notes, date, revision, identity, panels, AmplitudeConvention.PEAK, out);
+    }
+
+    /**
+     * The sheet with further pages, its response values in a convention, as PDF bytes.
+     * @param dossier the design and its analyses
+     * @param notes the project's notes, or empty
+     * @param date date of issue
+     * @param revision revision mark
+     * @param identity the project's engineer and client or site
+     * @param panels further pages after the design's charts
+     * @param convention the convention response values are stated in
+     * @param out where the PDF goes
+     * @throws IOException when the stream cannot be written
+     */
+    public static void writeSheet(DesignDossier dossier, String notes, String date, String revision,
+            ProjectIdentity identity, List<SheetPanel> panels, AmplitudeConvention convention, OutputStream out)
+            throws IOException {
+        SheetWriter.write(content(dossier, notes, date, revision, identity, convention),
+                charts(dossier.design(), dossier.curves(), convention), panels, out);
     }
 
     private static SheetContent content(DesignDossier dossier, String notes, String date, String revision,
-            ProjectIdentity identity) {
+            ProjectIdentity identity, AmplitudeConvention convention) {
         // the dossier's Monte Carlo: computed once for the project state, whoever asked first
         return SheetContent.of(dossier.design(), notes, date, revision, dossier.monteCarlo(ProgressListener.NONE),
-                identity, dossier.comparison(ProgressListener.NONE));
+                identity, dossier.comparison(ProgressListener.NONE), convention);
     }
 
     /**
@@ -150,10 +187,22 @@ public final class SheetFiles {
         private final Map<Path, String> spared = new LinkedHashMap<>();
         private final List<SheetPanel> panels = new ArrayList<>();
         private List<XYChart> charts;
+        private AmplitudeConvention convention = AmplitudeConvention.PEAK;
 
         /** @param dossier the design whose sheet and exports are written, with its analyses */
         public Outputs(DesignDossier dossier) {
             this.dossier = dossier;
+        }
+
+        /**
+         * @param display the convention response values are stated in, on the sheet, its charts
+         *     and result.json (peak unless set)
+         * @return this
+         */
+        public Outputs convention(AmplitudeConvention display) {
+            this.convention = display;
+            this.charts = null;
+            return this;
         }
 
         /**
@@ -181,7 +230,7 @@ public final class SheetFiles {
         public Outputs sheet(Path pdf, String notes, String date, String revision, String option,
                 ProjectIdentity identity) {
             return add(pdf, "sheet", option, out -> SheetWriter.write(
-                    content(dossier, notes, date, revision, identity), charts(), panels, out));
+                    content(dossier, notes, date, revision, identity, convention), charts(), panels, out));
         }
 
         /**
@@ -219,7 +268,8 @@ public final class SheetFiles {
             add(dir.resolve("curves.csv"), "curves.csv", option,
                     out -> out.write(CurveCsv.of(dossier.curves()).getBytes(StandardCharsets.UTF_8)));
             return add(dir.resolve("result.json"), "result.json", option,
-                    out -> out.write(ResultJson.toJson(dossier.design()).getBytes(StandardCharsets.UTF_8)));
+                    out -> out.write(ResultJson.toJson(DesignContent.of(dossier.design()).shownIn(convention))
+                            .getBytes(StandardCharsets.UTF_8)));
         }
 
         /**
@@ -334,7 +384,7 @@ public final class SheetFiles {
 
         private List<XYChart> charts() {
             if (charts == null) {
-                charts = SheetFiles.charts(dossier.design(), dossier.curves());
+                charts = SheetFiles.charts(dossier.design(), dossier.curves(), convention);
             }
             return charts;
         }

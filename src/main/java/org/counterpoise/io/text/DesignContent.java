@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
+import org.counterpoise.core.criteria.AmplitudeConvention;
 import org.counterpoise.core.design.Cautions;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.DesignStudy;
@@ -20,6 +21,7 @@ import org.counterpoise.core.robust.MonteCarloResult;
 import org.counterpoise.core.units.Dimension;
 import org.counterpoise.io.project.Ids;
 import org.counterpoise.io.project.ProjectIdentity;
+import org.counterpoise.io.text.ReportRow.Amplitude;
 import org.counterpoise.io.text.ReportSection.SectionId;
 import org.counterpoise.io.text.ReportValue.Change;
 import org.counterpoise.io.text.ReportValue.Changed;
@@ -77,18 +79,8 @@ public final class DesignContent {
         }
         List<ReportSection> sections = new ArrayList<>(c.sections());
         sections.add(new ReportSection(SectionId.MONTE_CARLO, "Tolerance Monte Carlo of the peak in band",
-                List.of(notRunRow(monteCarlo.notRun().get()))));
+                List.of(MonteCarloRows.notRun(monteCarlo.notRun().get()))));
         return new ReportContent(c.name(), sections, c.warnings(), c.cautions());
-    }
-
-    /**
-     * @param reason why the Monte Carlo was not run
-     * @return the one row that says so; the JSON writes the reason's id (e.g. "no-tolerances")
-     */
-    static ReportRow notRunRow(MonteCarloOutcome.NotRun reason) {
-        return new ReportRow(ReportKey.MONTE_CARLO_NOT_RUN, "not run", "",
-                new Words(notRun(reason), List.of(reason.name().toLowerCase(Locale.ROOT).replace('_', '-'))),
-                "tolerance Monte Carlo", "");
     }
 
     /**
@@ -123,7 +115,8 @@ public final class DesignContent {
         monteCarlo.ifPresent(c::monteCarlo);
         List<ReportContent.Note> warnings = r.warnings().stream()
                 .map(w -> new ReportContent.Note(w.code(), WarningText.of(w))).toList();
-        return new ReportContent(r.study().name(), c.sections, warnings, Cautions.STANDARD);
+        return AcceptanceContent.with(new ReportContent(r.study().name(), c.sections, warnings, Cautions.STANDARD),
+                r.acceptance());
     }
 
     private void project(ProjectIdentity identity) {
@@ -228,6 +221,8 @@ public final class DesignContent {
         add(ReportKey.REDUCTION, "reduction of " + k.label().replace("structure ", ""), "",
                 new Reduction(peak(result.responseBefore(), k.dimension()), peak(result.responseAfter(), k.dimension()),
                         result.reductionFactor(), result.reductionDecibels()), PEAK_SEARCH, "");
+        rows.replaceAll(r -> stated(r, Amplitude.DISPLAY));
+        rows.add(0, ReportContent.conventionRow(AmplitudeConvention.PEAK));
         end(SectionId.RESPONSE, study.excitation().band().isSingle() ? "Structure response at the forcing frequency"
                 : "Structure response, worst case in the band");
     }
@@ -239,10 +234,12 @@ public final class DesignContent {
         add(ReportKey.SPECTRUM, "spectrum", "", new Words("white noise", List.of("white-noise")));
         add(ReportKey.PSD_LEVEL, "PSD level (one-sided)", "", new Level(rms.psdLevel(), 4,
                 study.excitation().kind() == ExcitationKind.FORCE ? "N^2/Hz" : "(m/s^2)^2/Hz"));
-        add(ReportKey.RMS_BEFORE, "rms without absorber", "", quantity(rms.before(), d, diverges), MEAN_SQUARE, "");
-        add(ReportKey.RMS_AFTER, "rms with absorber", "", quantity(rms.after(), d, diverges), MEAN_SQUARE, "");
-        add(ReportKey.RMS_STROKE, "rms absorber stroke", "", quantity(rms.stroke(), Dimension.LENGTH, diverges),
+        add(ReportKey.RMS_BEFORE, "without absorber", "", quantity(rms.before(), d, diverges), MEAN_SQUARE, "");
+        add(ReportKey.RMS_AFTER, "with absorber", "", quantity(rms.after(), d, diverges), MEAN_SQUARE, "");
+        add(ReportKey.RMS_STROKE, "absorber stroke", "", quantity(rms.stroke(), Dimension.LENGTH, diverges),
                 MEAN_SQUARE, "");
+        rows.replaceAll(r -> r.key() == ReportKey.SPECTRUM || r.key() == ReportKey.PSD_LEVEL ? r
+                : stated(r, Amplitude.FIXED_RMS));
         end(SectionId.RMS, "Rms response to the white-noise disturbance");
     }
 
@@ -263,6 +260,8 @@ public final class DesignContent {
                 PEAK_SEARCH, "");
         add(ReportKey.ABSORBER_FORCE, "total absorber force in band", "", peak(result.absorberForce(), Dimension.FORCE),
                 PEAK_SEARCH, "");
+        // peaks stay peaks: a clearance and a fatigue check need the largest excursion and force
+        rows.replaceAll(r -> r.key() == ReportKey.CLEARANCE ? r : stated(r, Amplitude.FIXED_PEAK));
         end(SectionId.STROKE_AND_FORCES, "Stroke and forces");
     }
 
@@ -288,6 +287,7 @@ public final class DesignContent {
         begin();
         add(ReportKey.DETUNING_TARGET, "target (what the absorber achieves)", "",
                 quantity(d.target(), study.response().dimension()));
+        rows.set(0, stated(rows.get(0), Amplitude.DISPLAY));
         // an unbounded target (the design's own peak is unbounded) is no level to compare a structure with
         boolean unbounded = Double.isInfinite(d.target());
         add(ReportKey.STIFFER, "stiffer", "", unbounded ? new NotApplicable()
@@ -303,39 +303,19 @@ public final class DesignContent {
 
     private void monteCarlo(MonteCarloResult mc) {
         begin();
-        rows.addAll(monteCarloRows(mc, study.response().dimension()));
+        rows.addAll(MonteCarloRows.of(mc, study.response().dimension()));
         end(SectionId.MONTE_CARLO, "Tolerance Monte Carlo of the peak in band");
-    }
-
-    /**
-     * The rows of a tolerance Monte Carlo, the same on the sheet and in the robustness study.
-     * @param mc the Monte Carlo
-     * @param d the dimension of the response
-     * @return its rows
-     */
-    static List<ReportRow> monteCarloRows(MonteCarloResult mc, Dimension d) {
-        String source = "seeded Monte Carlo over the project's tolerances";
-        List<ReportRow> out = new ArrayList<>();
-        out.add(new ReportRow(ReportKey.MONTE_CARLO_SAMPLES, "samples", "", new ReportValue.Count(mc.samples()),
-                source, ""));
-        out.add(new ReportRow(ReportKey.MONTE_CARLO_SEED, "seed", "", new ReportValue.Count(mc.seed()), source, ""));
-        out.add(new ReportRow(ReportKey.MONTE_CARLO_MEAN, "mean peak", "", quantity(mc.mean(), d), source, ""));
-        out.add(new ReportRow(ReportKey.MONTE_CARLO_P50_P90, "P50 / P90", "",
-                new Pair(quantity(mc.p50(), d), quantity(mc.p90(), d), PairKind.SIDE_BY_SIDE), source, ""));
-        out.add(new ReportRow(ReportKey.MONTE_CARLO_P95_P99, "P95 / P99", "",
-                new Pair(quantity(mc.p95(), d), quantity(mc.p99(), d), PairKind.SIDE_BY_SIDE), source, ""));
-        out.add(new ReportRow(ReportKey.MONTE_CARLO_RANGE, "range", "",
-                new Pair(quantity(mc.min(), d), quantity(mc.max(), d), PairKind.RANGE), source, ""));
-        out.add(new ReportRow(ReportKey.MONTE_CARLO_EXCEEDING, "probability above the target", "",
-                mc.probabilityExceeding().isEmpty() ? new NotApplicable()
-                        : new Percent(mc.probabilityExceeding().getAsDouble(), 3), source, ""));
-        return out;
     }
 
     /**
      * @param factor new over old stiffness or mass, or NaN
      * @param what stiffness (frequency goes as its square root) or mass (as its inverse square root)
      */
+    /** The row with its values stated as amplitudes in a convention. */
+    static ReportRow stated(ReportRow r, Amplitude a) {
+        return new ReportRow(r.key(), r.label(), r.symbol(), r.value(), r.source(), r.caution(), Optional.of(a));
+    }
+
     private static Change change(double factor, Changed what, double wn, boolean targetIsZero) {
         double power = what == Changed.STIFFNESS ? 0.5 : -0.5;
         return new Change(factor, what, wn * Math.pow(factor, power), targetIsZero);

@@ -71,8 +71,10 @@ public final class DesignReport {
             if (!row.shown()) {
                 continue;
             }
-            String label = row.symbol().isEmpty() ? row.label() : row.label() + " " + ValueText.ascii(row.symbol());
-            if (row.value() instanceof Pair p && p.kind() == PairKind.BEFORE_AFTER) {
+            String label = (row.symbol().isEmpty() ? row.label() : row.label() + " " + ValueText.ascii(row.symbol()))
+                    + row.conventionSuffix();
+            ReportValue value = row.shownValue();
+            if (value instanceof Pair p && p.kind() == PairKind.BEFORE_AFTER) {
                 if (!columns) {
                     out.append(String.format(Locale.ROOT, "  %-" + (LABEL - 2) + "s %-16s %s%n", "", "before",
                             "after"));
@@ -81,7 +83,7 @@ public final class DesignReport {
                 out.append(String.format(Locale.ROOT, "  %-" + (LABEL - 2) + "s %-16s %s%n", label,
                         ValueText.inline(p.first()), ValueText.inline(p.second())));
             } else {
-                row(out, label, ValueText.inline(row.value()));
+                row(out, label, ValueText.inline(value));
             }
         }
     }

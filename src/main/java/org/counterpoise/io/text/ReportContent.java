@@ -1,7 +1,9 @@
 package org.counterpoise.io.text;
 
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
+import org.counterpoise.core.criteria.AmplitudeConvention;
 import org.counterpoise.io.text.ReportSection.SectionId;
 
 /**
@@ -45,6 +47,39 @@ public record ReportContent(String name, List<ReportSection> sections, List<Note
      */
     public ReportContent with(ReportComparison c) {
         return new ReportContent(name, sections, warnings, cautions, Optional.of(c));
+    }
+
+    /**
+     * @param display the amplitude convention the user picked
+     * @return this report with every response value that follows the display convention stated in
+     *     it (stroke and forces stay peaks, the response to white noise stays r.m.s.), and the row
+     *     that names the convention saying so
+     */
+    public ReportContent shownIn(AmplitudeConvention display) {
+        List<ReportSection> shown = new ArrayList<>();
+        for (ReportSection s : sections) {
+            List<ReportRow> rows = new ArrayList<>();
+            for (ReportRow r : s.rows()) {
+                rows.add(r.key() == ReportKey.AMPLITUDE_CONVENTION ? conventionRow(display) : r.shownIn(display));
+            }
+            shown.add(new ReportSection(s.id(), s.title(), rows));
+        }
+        return new ReportContent(name, shown, warnings, cautions, comparison);
+    }
+
+    /**
+     * @param display the convention response values are shown in
+     * @return the row that names it (the JSON's {@code amplitude_convention})
+     */
+    static ReportRow conventionRow(AmplitudeConvention display) {
+        String how = switch (display) {
+            case PEAK -> "peak (amplitude)";
+            case RMS -> "r.m.s. (peak / sqrt 2 for a steady harmonic)";
+            case PEAK_TO_PEAK -> "peak-to-peak (2 x peak for a steady harmonic)";
+        };
+        return new ReportRow(ReportKey.AMPLITUDE_CONVENTION, "response values stated as", "",
+                new ReportValue.Words(how, List.of(display.id())), "chosen for display; stroke and forces stay peaks",
+                "");
     }
 
     /**

@@ -1,6 +1,9 @@
 package org.counterpoise.io.text;
 
+import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
+import org.counterpoise.core.criteria.AmplitudeConvention;
 
 /**
  * The stable identity of every report row and the one table of the design JSON's keys: a row
@@ -27,6 +30,9 @@ public enum ReportKey {
     ABSORBER_FREQUENCY("absorber_frequency_Hz"),
     STATIC_DEFLECTION("absorber_static_deflection_m"),
     RESPONSE("response_quantity", "response_unit"),
+    // The convention the response values are shown in: the JSON keeps them as peaks under the
+    // peak_ keys and, for another convention, adds them under keys with its prefix (jsonKeysIn).
+    AMPLITUDE_CONVENTION("amplitude_convention"),
     REDUCTION("peak_response_before", "peak_response_after", "reduction_factor"),
     DISPLACEMENT_PEAKS("peak_displacement_before_m", "peak_displacement_after_m"),
     VELOCITY_PEAKS("peak_velocity_before_m_per_s", "peak_velocity_after_m_per_s"),
@@ -38,6 +44,26 @@ public enum ReportKey {
     DAMPER_FORCE("peak_damper_force_N"),
     ABSORBER_FORCE("peak_absorber_force_N"),
     COUPLED_FREQUENCIES("coupled_natural_frequencies_Hz"),
+
+    // The verdict against the project's criterion (design JSON): the object "acceptance", or null
+    // under ACCEPTANCE when the project states no criterion. Values in the SI unit under
+    // "acceptance.unit", in the convention under "acceptance.convention".
+    ACCEPTANCE("acceptance"),
+    ACCEPTANCE_NEEDED("acceptance.absorber_needed"),
+    ACCEPTANCE_CRITERION("acceptance.criterion", "acceptance.criterion_text"),
+    ACCEPTANCE_SOURCE("acceptance.source"),
+    ACCEPTANCE_MEASURE("acceptance.quantity", "acceptance.convention", "acceptance.unit"),
+    ACCEPTANCE_WEIGHTING("acceptance.weighting"),
+    ACCEPTANCE_LIMIT("acceptance.limit_before", "acceptance.limit_after"),
+    ACCEPTANCE_VALUE("acceptance.value_before", "acceptance.value_after"),
+    ACCEPTANCE_PASSES("acceptance.passes_before", "acceptance.passes_after"),
+    ACCEPTANCE_MARGIN("acceptance.margin_ratio_before", "acceptance.margin_ratio_after",
+            "acceptance.margin_dB_before", "acceptance.margin_dB_after"),
+    ACCEPTANCE_WORST("acceptance.worst_forcing_frequency_before_Hz", "acceptance.worst_forcing_frequency_after_Hz"),
+    ACCEPTANCE_GOVERNING_ORDER("acceptance.governing_order_before", "acceptance.governing_order_after"),
+    ACCEPTANCE_ZONES("acceptance.zones_before", "acceptance.zones_after"),
+    ACCEPTANCE_OUTSIDE_RANGE("acceptance.outside_range_before", "acceptance.outside_range_after"),
+    ACCEPTANCE_UNBOUNDED("acceptance.unbounded_reason"),
     STIFFER("detuning_stiffer_factor"),
     SOFTER("detuning_softer_factor"),
     LIGHTER("detuning_lighter_factor"),
@@ -118,5 +144,36 @@ public enum ReportKey {
     /** @return the JSON keys the row's value is written under, in order; empty when not in the JSON */
     public List<String> jsonKeys() {
         return jsonKeys;
+    }
+
+    /**
+     * The keys a row's values go under when they are stated in another amplitude convention: the
+     * word "peak" in a key becomes the convention's prefix ({@link AmplitudeConvention#keyPrefix}:
+     * {@code peak_displacement_before_m} to {@code rms_displacement_before_m},
+     * {@code worst_case_peak} to {@code worst_case_rms}); a key without it gets the prefix in front
+     * ({@code target} to {@code rms_target}; {@code monte_carlo.mean} to
+     * {@code monte_carlo.rms_mean}).
+     *
+     * @param convention the convention
+     * @return the keys, in the order of {@link #jsonKeys}
+     */
+    public List<String> jsonKeysIn(AmplitudeConvention convention) {
+        if (convention == AmplitudeConvention.PEAK) {
+            return jsonKeys;
+        }
+        List<String> out = new ArrayList<>();
+        for (String key : jsonKeys) {
+            int dot = key.lastIndexOf('.');
+            String parent = key.substring(0, dot + 1);
+            List<String> words = new ArrayList<>(Arrays.asList(key.substring(dot + 1).split("_")));
+            int peak = words.indexOf("peak");
+            if (peak >= 0) {
+                words.set(peak, convention.keyPrefix());
+            } else {
+                words.add(0, convention.keyPrefix());
+            }
+            out.add(parent + String.join("_", words));
+        }
+        return out;
     }
 }

@@ -29,6 +29,8 @@ public record ReportSection(SectionId id, String title, List<ReportRow> rows) {
     public enum SectionId {
         /** revision, date, engineer, client or site */
         PROJECT,
+        /** the verdict against the project's criterion, first so that "no absorber is needed" comes first */
+        ACCEPTANCE,
         /** the structure's effective values at the absorber point */
         STRUCTURE,
         /** the disturbance */

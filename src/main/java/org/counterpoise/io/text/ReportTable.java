@@ -49,7 +49,7 @@ public final class ReportTable {
             List<Row> rows = new ArrayList<>();
             for (ReportRow row : section.rows()) {
                 if (row.shown() && !leftOut.contains(row.key())) {
-                    ValueText.Cells cells = ValueText.cells(row.value());
+                    ValueText.Cells cells = ValueText.cells(row.shownValue());
                     rows.add(new Row(row.key(), ValueText.capitalised(row.labelWithSymbol()), cells.value(),
                             cells.unit(), cells.textual(), note(row)));
                 }

@@ -47,6 +47,36 @@ public sealed interface ReportValue {
     }
 
     /**
+     * A yes-or-no finding (a verdict): the JSON writes the boolean, the tables and the text report
+     * the words.
+     * @param value the finding
+     * @param text the words shown
+     */
+    record Flag(boolean value, String text) implements ReportValue {
+    }
+
+    /**
+     * The margin of a value under its limit: limit over value, and in decibels.
+     * @param ratio limit over value (0 when the value is unbounded, +infinity when it is zero)
+     * @param decibels 20 log10 of the ratio
+     */
+    record Margin(double ratio, double decibels) implements ReportValue {
+    }
+
+    /**
+     * Several stable names (the zones a value falls in): the JSON writes them as an array of
+     * strings, the tables and the text report the words.
+     * @param ids the names the JSON writes
+     * @param text the words shown
+     */
+    record Names(List<String> ids, String text) implements ReportValue {
+        /** Defensive copy. */
+        public Names {
+            ids = List.copyOf(ids);
+        }
+    }
+
+    /**
      * A number in a unit no {@link Dimension} names (a spectral density): shown and written as is.
      * @param value the value, finite, in {@code unit}
      * @param figures significant figures shown

@@ -2,6 +2,8 @@ package org.counterpoise.io.text;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Set;
+import org.counterpoise.core.criteria.AmplitudeConvention;
 import org.counterpoise.core.design.Cautions;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.RobustnessResult;
@@ -24,6 +26,9 @@ import org.counterpoise.io.text.ReportValue.Words;
 public final class RobustnessContent {
     private static final String WORST_CASE = "worst case over the expected mistuning (corners and interior maxima)";
 
+    private static final Set<ReportKey> AMPLITUDES = Set.of(ReportKey.NOMINAL_PEAK, ReportKey.WORST_CASE_PEAK,
+            ReportKey.ROBUST_WORST_CASES, ReportKey.TARGET);
+
     private RobustnessContent() {
     }
 
@@ -43,12 +48,13 @@ public final class RobustnessContent {
                 + QuantityFormat.number(design.tuning().dampingRatio(), 4), List.of()), ""));
         study.add(row(ReportKey.RESPONSE, "response", "", new Words(k.label() + ", worst in the forcing band",
                 List.of(Ids.of(k), d.siSymbol())), ""));
+        study.add(ReportContent.conventionRow(AmplitudeConvention.PEAK));
         study.addAll(ToleranceRangeRows.of(r.settings().ranges()));
         sections.add(new ReportSection(SectionId.ROBUSTNESS_STUDY, "Study", study));
 
         WorstCase.Point w = r.worstCase();
         List<ReportRow> worst = new ArrayList<>();
-        worst.add(row(ReportKey.NOMINAL_PEAK, "nominal peak", "", DesignContent.quantity(design.responseAfter().value(),
+        worst.add(row(ReportKey.NOMINAL_PEAK, "nominal design", "", DesignContent.quantity(design.responseAfter().value(),
                 d), "exact peak over the band (docs/peak-search.md)"));
         worst.add(row(ReportKey.WORST_CASE_PEAK, "worst case of this design", "", DesignContent.quantity(w.peak(), d),
                 WORST_CASE));
@@ -75,10 +81,14 @@ public final class RobustnessContent {
             worst.add(row(ReportKey.TOLERATED_FOR_TARGET, "structure mistuning within target", "",
                     new Pair(new ReportValue.NotApplicable(), new ReportValue.NotApplicable(), PairKind.RANGE), ""));
         }
+        // the response values follow the display convention; the factors and the robust design's
+        // own figures are no amplitudes
+        worst.replaceAll(row -> AMPLITUDES.contains(row.key()) ? DesignContent.stated(row,
+                ReportRow.Amplitude.DISPLAY) : row);
         sections.add(new ReportSection(SectionId.WORST_CASE, "Worst case and the robust design", worst));
         sections.add(new ReportSection(SectionId.MONTE_CARLO, "Tolerance Monte Carlo of the peak in band",
-                r.monteCarlo().result().map(mc -> DesignContent.monteCarloRows(mc, d))
-                        .orElseGet(() -> List.of(DesignContent.notRunRow(r.monteCarlo().notRun().orElseThrow())))));
+                r.monteCarlo().result().map(mc -> MonteCarloRows.of(mc, d))
+                        .orElseGet(() -> List.of(MonteCarloRows.notRun(r.monteCarlo().notRun().orElseThrow())))));
         return new ReportContent(design.study().name(), sections, List.of(), Cautions.STANDARD);
     }
 

@@ -1,6 +1,7 @@
 package org.counterpoise.io.text;
 
 import java.util.Locale;
+import org.counterpoise.core.criteria.AmplitudeConvention;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.RobustnessResult;
 import org.counterpoise.core.robust.SensitivityCurve;
@@ -21,13 +22,23 @@ public final class RobustnessReport {
      * @return the report
      */
     public static String render(DesignResult design, RobustnessResult r) {
-        ReportContent content = RobustnessContent.of(design, r);
+        return render(design, r, AmplitudeConvention.PEAK);
+    }
+
+    /**
+     * @param design the design examined
+     * @param r its robustness study
+     * @param display the convention response values are stated in
+     * @return the report
+     */
+    public static String render(DesignResult design, RobustnessResult r, AmplitudeConvention display) {
+        ReportContent content = RobustnessContent.of(design, r).shownIn(display);
         Dimension d = design.study().response().dimension();
         StringBuilder out = new StringBuilder();
         out.append("Counterpoise robustness study: ").append(content.name()).append('\n');
         for (ReportSection section : content.sections()) {
             if (section.id() == SectionId.MONTE_CARLO) {
-                sensitivity(out, r, d);
+                sensitivity(out, r, d, display);
             }
             DesignReport.section(out, section);
         }
@@ -38,15 +49,16 @@ public final class RobustnessReport {
         return out.toString();
     }
 
-    private static void sensitivity(StringBuilder out, RobustnessResult r, Dimension d) {
-        out.append("\nSensitivity: worst response in band against structure frequency\n");
+    private static void sensitivity(StringBuilder out, RobustnessResult r, Dimension d, AmplitudeConvention display) {
+        out.append("\nSensitivity: worst response in band (" + display.label() + ") against structure frequency\n");
         out.append(String.format(Locale.ROOT, "  %-12s %-18s %s%n", "structure", "this design", "robust design"));
         SensitivityCurve a = r.structureCurve();
         SensitivityCurve b = r.robustStructureCurve();
         double[] f = a.factors();
         for (int i = 0; i < f.length; i += 5) {
             out.append(String.format(Locale.ROOT, "  %-12s %-18s %s%n", ValueText.signedPercent(f[i], 3),
-                    DisplayUnits.format(a.peaks()[i], d), DisplayUnits.format(b.peaks()[i], d)));
+                    DisplayUnits.format(display.ofHarmonic(a.peaks()[i]), d),
+                    DisplayUnits.format(display.ofHarmonic(b.peaks()[i]), d)));
         }
     }
 }

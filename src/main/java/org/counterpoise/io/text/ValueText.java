@@ -8,7 +8,10 @@ import org.counterpoise.core.units.Unit;
 import org.counterpoise.io.text.ReportValue.Change;
 import org.counterpoise.io.text.ReportValue.Count;
 import org.counterpoise.io.text.ReportValue.Factor;
+import org.counterpoise.io.text.ReportValue.Flag;
 import org.counterpoise.io.text.ReportValue.Level;
+import org.counterpoise.io.text.ReportValue.Margin;
+import org.counterpoise.io.text.ReportValue.Names;
 import org.counterpoise.io.text.ReportValue.NotApplicable;
 import org.counterpoise.io.text.ReportValue.Pair;
 import org.counterpoise.io.text.ReportValue.PairKind;
@@ -60,6 +63,12 @@ public final class ValueText {
             return new Cells("not applicable", "", true);
         } else if (v instanceof Words w) {
             return new Cells(w.text(), "", true);
+        } else if (v instanceof Flag f) {
+            return new Cells(f.text(), "", true);
+        } else if (v instanceof Margin m) {
+            return new Cells(margin(m), "", true);
+        } else if (v instanceof Names n) {
+            return new Cells(n.text(), "", true);
         } else if (v instanceof Level l) {
             return new Cells(QuantityFormat.number(l.value(), l.figures()), l.unit(), false);
         } else if (v instanceof Percent p) {
@@ -101,7 +110,8 @@ public final class ValueText {
         if (p.kind() == PairKind.RANGE) {
             return a.equals(b) ? a : new Cells(a.value() + " to " + b.value(), unit, false);
         }
-        return new Cells(a.value() + "  /  " + b.value(), unit, false);
+        // two phrases (verdicts, zones) read as words, left-aligned; numbers stay in the number column
+        return new Cells(a.value() + "  /  " + b.value(), unit, a.textual() && b.textual());
     }
 
     /**
@@ -118,6 +128,12 @@ public final class ValueText {
             return "not applicable";
         } else if (v instanceof Words w) {
             return w.text();
+        } else if (v instanceof Flag f) {
+            return f.text();
+        } else if (v instanceof Margin m) {
+            return margin(m);
+        } else if (v instanceof Names n) {
+            return n.text();
         } else if (v instanceof Level l) {
             return QuantityFormat.number(l.value(), l.figures()) + " " + l.unit();
         } else if (v instanceof Percent p) {
@@ -204,6 +220,21 @@ public final class ValueText {
         }
         return "factor " + QuantityFormat.number(r.factor(), 3) + " (" + QuantityFormat.number(r.decibels(), 3)
                 + " dB)";
+    }
+
+    /**
+     * @param m a margin
+     * @return e.g. "x1.52 (+3.63 dB)", or words when the value is zero or unbounded
+     */
+    private static String margin(Margin m) {
+        if (m.ratio() == 0) {
+            return "none (the value is unbounded)";
+        }
+        if (Double.isInfinite(m.ratio())) {
+            return "unlimited (the value is zero)";
+        }
+        return "x" + QuantityFormat.number(m.ratio(), 3) + " (" + (m.decibels() > 0 ? "+" : "")
+                + QuantityFormat.number(m.decibels(), 3) + " dB)";
     }
 
     private static String change(Change c, boolean withRpm) {

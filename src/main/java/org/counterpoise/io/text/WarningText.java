@@ -36,6 +36,19 @@ public final class WarningText {
                     + " response at that one frequency choose undamped-single-speed.";
             case TARGET_NOT_MET -> String.format(Locale.ROOT, "No absorber up to a mass ratio of %.3g meets the target;"
                     + " the design shown is the best at that mass ratio.", w.number(WarningParameter.MAX_MASS_RATIO));
+            case CRITERION_NOT_MET -> String.format(Locale.ROOT, "No absorber up to a mass ratio of %.3g meets the"
+                    + " criterion: the best at that mass ratio, shown, reaches %.3g times the limit %s, missing it by"
+                    + " %.2f dB.", w.number(WarningParameter.MAX_MASS_RATIO), w.number(WarningParameter.UTILISATION),
+                    judged(w.token(WarningParameter.METHOD_ID)),
+                    20 * Math.log10(w.number(WarningParameter.UTILISATION)));
+            case CRITERION_NOT_MET_UNBOUNDED -> String.format(Locale.ROOT, "No absorber up to a mass ratio of %.3g"
+                    + " meets the criterion: the response it judges has no finite bound in the band; the design"
+                    + " shown is the best at that mass ratio.", w.number(WarningParameter.MAX_MASS_RATIO));
+            case NO_ABSORBER_NEEDED -> String.format(Locale.ROOT, "The structure already meets the criterion without"
+                    + " an absorber (%.3g times the limit, a margin of %.2f dB): no absorber is needed. The design"
+                    + " shown is the lightest considered, at a mass ratio of %.3g, for comparison.",
+                    w.number(WarningParameter.UTILISATION), -20 * Math.log10(w.number(WarningParameter.UTILISATION)),
+                    w.number(WarningParameter.MASS_RATIO));
             case RESONANT_UNDAMPED -> "The bare structure is undamped and resonant within the forcing band, so its"
                     + " response there is unbounded; the reduction cannot be given as a number.";
             case WORSE_WITH_ABSORBER -> "With this absorber the response that matters is larger than without it: the"
@@ -125,5 +138,14 @@ public final class WarningText {
 
     private static double hertz(double radiansPerSecond) {
         return radiansPerSecond / (2 * Math.PI);
+    }
+
+    /** Where a design to a criterion was judged, by its method's id. */
+    private static String judged(String methodId) {
+        return switch (DesignMethod.byId(methodId).orElse(DesignMethod.EXACT_PEAK)) {
+            case ROBUST_WORST_CASE -> "in the worst case over the tolerances";
+            case ROBUST_P95 -> "in 95 % of builds over the tolerances";
+            default -> "as designed";
+        };
     }
 }

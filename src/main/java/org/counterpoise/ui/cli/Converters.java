@@ -5,6 +5,7 @@ import java.nio.file.Path;
 import java.time.LocalDate;
 import java.time.format.DateTimeParseException;
 import java.util.regex.Pattern;
+import org.counterpoise.core.criteria.AmplitudeConvention;
 import org.counterpoise.io.PlainText;
 import picocli.CommandLine;
 import picocli.CommandLine.ITypeConverter;
@@ -30,7 +31,13 @@ final class Converters {
         cl.registerConverter(Double.class, real).registerConverter(double.class, real)
                 .registerConverter(Integer.class, whole).registerConverter(int.class, whole)
                 .registerConverter(Long.class, wholeLong).registerConverter(long.class, wholeLong)
-                .registerConverter(LocalDate.class, Converters::date).registerConverter(Path.class, Converters::path);
+                .registerConverter(LocalDate.class, Converters::date).registerConverter(Path.class, Converters::path)
+                .registerConverter(AmplitudeConvention.class, Converters::convention);
+    }
+
+    private static AmplitudeConvention convention(String text) {
+        return AmplitudeConvention.byId(text.strip()).orElseThrow(() -> new TypeConversionException(
+                "must be one of " + String.join(", ", AmplitudeConvention.ids())));
     }
 
     /**

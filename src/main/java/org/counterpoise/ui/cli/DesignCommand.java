@@ -3,6 +3,7 @@ package org.counterpoise.ui.cli;
 import java.nio.file.Path;
 import java.util.Optional;
 import java.util.concurrent.Callable;
+import org.counterpoise.core.criteria.AmplitudeConvention;
 import org.counterpoise.core.design.DesignDossier;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.MethodComparison;
@@ -34,6 +35,9 @@ public final class DesignCommand implements Callable<Integer> {
     @Option(names = "--json", description = "print the result as one JSON object with SI units in the key names")
     private boolean json;
 
+    @Option(names = "--convention", paramLabel = "peak|rms|peak-to-peak", description = DisplayConvention.HELP)
+    private AmplitudeConvention convention;
+
     @Override
     public Integer call() {
         LoadedProject loaded = ProjectFiles.read(spec, file);
@@ -41,7 +45,8 @@ public final class DesignCommand implements Callable<Integer> {
         DesignResult result = dossier.design();
         MethodComparison comparison = dossier.comparison(ProgressListener.NONE);
         ReportContent content = DesignContent.of(result, json ? ProjectIdentity.EMPTY : loaded.project().identity(),
-                Optional.empty()).with(ComparisonContent.of(comparison, result.study()));
+                Optional.empty()).with(ComparisonContent.of(comparison, result.study()))
+                .shownIn(DisplayConvention.of(convention, loaded.project()));
         spec.commandLine().getOut().print(PlainText.forTerminal(json ? ResultJson.toJson(content)
                 : DesignReport.render(content)));
         spec.commandLine().getOut().flush();

@@ -2,6 +2,7 @@ package org.counterpoise.ui.cli;
 
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
+import org.counterpoise.core.criteria.AmplitudeConvention;
 import org.counterpoise.core.design.DesignDossier;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.DesignStudy;
@@ -38,6 +39,9 @@ public final class RobustnessCommand implements Callable<Integer> {
     @Option(names = "--json", description = "print one JSON object (SI units)")
     private boolean json;
 
+    @Option(names = "--convention", paramLabel = "peak|rms|peak-to-peak", description = DisplayConvention.HELP)
+    private AmplitudeConvention convention;
+
     @Override
     public Integer call() {
         LoadedProject loaded = ProjectFiles.read(spec, file);
@@ -52,8 +56,9 @@ public final class RobustnessCommand implements Callable<Integer> {
         DesignDossier dossier = DesignDossier.of(study.withRobustness(used));
         DesignResult design = dossier.design();
         RobustnessResult r = dossier.robustness(ProgressListener.NONE);
-        spec.commandLine().getOut().print(PlainText.forTerminal(json ? RobustnessJson.toJson(design, r)
-                : RobustnessReport.render(design, r)));
+        AmplitudeConvention display = DisplayConvention.of(convention, loaded.project());
+        spec.commandLine().getOut().print(PlainText.forTerminal(json ? RobustnessJson.toJson(design, r, display)
+                : RobustnessReport.render(design, r, display)));
         spec.commandLine().getOut().flush();
         return 0;
     }

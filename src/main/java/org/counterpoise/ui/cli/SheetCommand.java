@@ -3,6 +3,7 @@ package org.counterpoise.ui.cli;
 import java.nio.file.Path;
 import java.time.LocalDate;
 import java.util.concurrent.Callable;
+import org.counterpoise.core.criteria.AmplitudeConvention;
 import org.counterpoise.core.design.DesignDossier;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.progress.ProgressListener;
@@ -47,6 +48,9 @@ public final class SheetCommand implements Callable<Integer> {
     @Option(names = "--force", description = "replace files that already exist")
     private boolean force;
 
+    @Option(names = "--convention", paramLabel = "peak|rms|peak-to-peak", description = DisplayConvention.HELP)
+    private AmplitudeConvention convention;
+
     @Override
     public Integer call() {
         if (revision != null && (revision.length() > 20 || !revision.equals(PlainText.escape(revision)))) {
@@ -62,6 +66,7 @@ public final class SheetCommand implements Callable<Integer> {
         String mark = revision != null ? revision : identity.revision().isEmpty() ? "A" : identity.revision();
         // The sheet and every export are one set: all are written, or none and nothing changes.
         SheetFiles.Outputs outputs = new SheetFiles.Outputs(dossier)
+                .convention(DisplayConvention.of(convention, loaded.project()))
                 .sheet(output, loaded.project().notes(), issued, mark, "--output", identity)
                 .sparing(file, "the project file being read")
                 .panel(RunUpPanel.of(loaded.project(), dossier.design(), ProgressListener.NONE));

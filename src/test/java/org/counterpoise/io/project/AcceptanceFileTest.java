@@ -210,6 +210,13 @@ class AcceptanceFileTest {
         assertTrue(absorber.get("meet_acceptance").getAsBoolean());
         assertEquals("user-limit", written.getAsJsonObject("acceptance").get("criterion").getAsString());
         assertEquals(p, roundTrip(p));
+
+        // shown as the target it stands for (the wizard's goal step), it is saved back the same
+        AbsorberInput shown = p.absorberWithTarget().orElseThrow();
+        assertEquals(new QuantityInput(2.0, Unit.METRE_PER_SECOND_SQUARED), shown.target());
+        assertFalse(shown.meetAcceptance());
+        assertEquals(p, p.withAbsorber(shown).withTargetAsAcceptance());
+        assertEquals(Optional.empty(), read(BASE).absorberWithTarget(), "a mass ratio is no target");
     }
 
     @Test
@@ -241,7 +248,12 @@ class AcceptanceFileTest {
                 s.criterion());
         Project saved = roundTrip(typed);
         assertEquals(typed.withTargetAsAcceptance(), saved);
-        assertEquals(s.sizing(), saved.toStudy().sizing(), "saved and reopened, it designs the same");
+        // reopened, the limit is the criterion to meet; a peak limit on the response designs exactly as
+        // the target did (MeetCriterionEquivalenceTest)
+        assertEquals(Project.DESIGNER_MEETS_CRITERION ? new AbsorberSizing.MeetCriterion(
+                AbsorberSizing.DEFAULT_MAX_MASS_RATIO) : s.sizing(), saved.toStudy().sizing());
+        assertEquals(Designer.design(s).tuning(), Designer.design(saved.toStudy()).tuning(),
+                "saved and reopened, it designs the same");
     }
 
     @Test

@@ -97,6 +97,29 @@ class OrdersFileTest {
         assertTrue(ProjectWriter.toJson(governing).contains("\"design_order\": \"governing\""));
     }
 
+    @Test
+    void theGoverningOrderIsTheOneFarthestOverTheCriterionUntreated() {
+        // Independent route, by hand (single-mode receptance X = F / k / |1 - r^2 + 2 i zeta r|, k =
+        // m omega1^2 = 1000 (2 pi 10)^2 = 3.948e6 N/m, zeta 0.02):
+        // 1x unbalance 500 g*mm over 9.33-10.67 Hz passes the 10 Hz resonance: F = m e Omega^2 =
+        // 500e-6 (2 pi 10)^2 = 1.97 N, X = 1.97 / 3.948e6 / 0.04 = 12.5 um.
+        // 6x force 20 N over 56-64 Hz (r = 5.6 to 6.4): X <= 20 / 3.948e6 / (5.6^2 - 1) = 0.17 um,
+        // so the 1x order governs; a 6x force of 200 kN gives 1700 um and governs instead.
+        String governing = BASE.replace(",\n                 \"design_order\": 1", "")
+                .replace("\"response\": \"displacement\"}}", "\"response\": \"displacement\"},"
+                        + " \"acceptance\": {\"criterion\": \"user-limit\", \"quantity\": \"displacement\","
+                        + " \"convention\": \"peak\", \"limit\": {\"value\": 5, \"unit\": \"um\"}}}");
+        assertFalse(governing.contains("design_order"), governing);
+        Excitation small = read(governing).toStudy().excitation();
+        assertEquals(ExcitationKind.UNBALANCE, small.kind(), "the 1x unbalance governs");
+        assertEquals(6.0, small.otherOrders().get(0).frequencyFactor(), 0);
+        Excitation large = read(governing.replace("\"value\": 20, \"unit\": \"N\"", "\"value\": 200, \"unit\": \"kN\""))
+                .toStudy().excitation();
+        assertEquals(ExcitationKind.FORCE, large.kind(), "the 6x force governs");
+        assertEquals(6 * 560 * RPM, large.band().low(), 1e-9);
+        assertEquals(List.of(new ExcitationOrder(ExcitationKind.UNBALANCE, 500e-6, 1.0 / 6)), large.otherOrders());
+    }
+
     /** Each order as (kind, amplitude, lowest forcing frequency rad/s), rounded to 1e-9 relative. */
     private static Set<List<Double>> absolute(Excitation e) {
         Set<List<Double>> out = new HashSet<>();

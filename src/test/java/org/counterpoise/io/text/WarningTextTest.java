@@ -75,4 +75,21 @@ class WarningTextTest {
         assertThrows(NullPointerException.class, () -> new Warning(null, Map.of()));
         assertEquals("NO_DAMPING", Warning.of(WarningKind.NO_DAMPING).code());
     }
+
+    @Test
+    void aMissedCriterionSaysByHowMuchAndWhereItWasJudged() {
+        // 20 log10(2) = 6.02 dB (the definition of the decibel for amplitudes)
+        assertEquals("No absorber up to a mass ratio of 0.250 meets the criterion: the best at that mass ratio,"
+                + " shown, reaches 2.00 times the limit in the worst case over the tolerances, missing it by 6.02 dB.",
+                WarningText.of(Warning.of(WarningKind.CRITERION_NOT_MET, 0.25, 2.0, "robust-worst-case")));
+        assertTrue(WarningText.of(Warning.of(WarningKind.CRITERION_NOT_MET, 0.25, 2.0, "exact-peak"))
+                .contains("limit as designed"));
+        assertTrue(WarningText.of(Warning.of(WarningKind.CRITERION_NOT_MET, 0.25, 2.0, "robust-p95"))
+                .contains("in 95 % of builds"));
+        // a utilisation of 0.5 leaves a margin of 6.02 dB
+        assertEquals("The structure already meets the criterion without an absorber (0.500 times the limit, a"
+                + " margin of 6.02 dB): no absorber is needed. The design shown is the lightest considered, at a"
+                + " mass ratio of 0.00100, for comparison.",
+                WarningText.of(Warning.of(WarningKind.NO_ABSORBER_NEEDED, 0.5, 0.001)));
+    }
 }
