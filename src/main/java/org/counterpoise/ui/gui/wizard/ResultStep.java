@@ -303,7 +303,9 @@ final class ResultStep extends Step {
         DesignResult r = result;
         DesignCurves c = curves;
         boolean log = logAxis.isSelected();
-        responseChart.show(theme -> ChartFactory.response(r, c, log, theme, 640, 300));
+        // in the project's display convention (axis title and values), with the criterion's limit line
+        AmplitudeConvention shown = project == null ? AmplitudeConvention.PEAK : project.displayConvention();
+        responseChart.show(theme -> ChartFactory.response(r, c, log, theme, shown, 640, 300));
         strokeChart.show(theme -> ChartFactory.stroke(r, c, false, theme, 640, 300));
     }
 

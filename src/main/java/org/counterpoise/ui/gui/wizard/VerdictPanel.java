@@ -13,10 +13,10 @@ import javax.swing.JLabel;
 import javax.swing.JPanel;
 import javax.swing.UIManager;
 import org.counterpoise.core.criteria.Acceptance;
-import org.counterpoise.core.criteria.ComfortReaction;
 import org.counterpoise.core.criteria.Criterion;
+import org.counterpoise.core.criteria.CriterionKind;
 import org.counterpoise.core.criteria.Reading;
-import org.counterpoise.core.criteria.SeverityZone;
+import org.counterpoise.io.text.CriterionText;
 import org.counterpoise.io.text.DisplayUnits;
 import org.counterpoise.io.text.QuantityFormat;
 import org.counterpoise.io.text.ValueText;
@@ -108,13 +108,13 @@ final class VerdictPanel {
             headline = "Passes with the absorber: " + value(c, after.value()) + " against a limit of "
                     + value(c, after.limit()) + " (" + margin(after) + ").";
             lines.add("Without the absorber it fails: " + reading(c, before) + ".");
-            zonesAfter(after).ifPresent(lines::add);
+            zonesAfter(c, after).ifPresent(lines::add);
         } else {
             passes = false;
             headline = "Fails even with the absorber: " + value(c, after.value()) + " against a limit of "
                     + value(c, after.limit()) + " (" + excess(after) + ").";
             lines.add("Without the absorber: " + reading(c, before) + ".");
-            zonesAfter(after).ifPresent(lines::add);
+            zonesAfter(c, after).ifPresent(lines::add);
         }
         if (!after.unbounded()) {
             lines.add("Worst with the absorber at " + ValueText.frequency(after.worstFrequency()) + " forcing"
@@ -129,38 +129,22 @@ final class VerdictPanel {
         return new Verdict(headline, passes, lines);
     }
 
-    private static Optional<String> zonesAfter(Reading after) {
+    private static Optional<String> zonesAfter(Criterion c, Reading after) {
         return after.zones().isEmpty() ? Optional.empty()
-                : Optional.of("With the absorber: " + zones(after.zones()) + ".");
+                : Optional.of("With the absorber: " + zones(c, after.zones()) + ".");
+    }
+
+    /** @return the zones (or comfort reactions) in the reports' words */
+    private static String zones(Criterion c, List<String> ids) {
+        return (c.kind() == CriterionKind.MACHINE ? "zone " : "\u201c") + CriterionText.zones(c, ids)
+                + (c.kind() == CriterionKind.MACHINE ? "" : "\u201d");
     }
 
     private static String reading(Criterion c, Reading r) {
         String verdict = r.passes() ? "passes" : "fails";
-        String zones = r.zones().isEmpty() ? "" : ", " + zones(r.zones());
+        String zones = r.zones().isEmpty() ? "" : ", " + zones(c, r.zones());
         return value(c, r.value()) + " against " + value(c, r.limit()) + ", " + verdict
                 + (r.unbounded() ? "" : " (" + (r.passes() ? margin(r) : excess(r)) + ")") + zones;
-    }
-
-    private static String zones(List<String> ids) {
-        List<String> words = new ArrayList<>();
-        for (String id : ids) {
-            Optional<ComfortReaction> reaction = ComfortReaction.byId(id);
-            if (reaction.isPresent()) {
-                words.add("\u201c" + CriterionWords.of(reaction.get()).replaceAll("\\s*\\(.*\\)$", "") + "\u201d");
-            } else {
-                words.add("zone " + id + zoneMeaning(id));
-            }
-        }
-        return String.join(" or ", words);
-    }
-
-    private static String zoneMeaning(String id) {
-        for (SeverityZone z : SeverityZone.values()) {
-            if (z.name().equals(id)) {
-                return " (" + CriterionWords.of(z).substring(3) + ")";
-            }
-        }
-        return "";
     }
 
     /** @return the value with its unit, convention and weighting; never "Infinity" */
