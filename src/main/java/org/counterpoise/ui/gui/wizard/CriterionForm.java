@@ -388,7 +388,7 @@ final class CriterionForm {
     }
 
     private static String html(String text) {
-        return "<html><body style='width: 190pt'>" + text.replace("&", "&amp;").replace("<", "&lt;")
+        return "<html><body style='width: 220pt'>" + text.replace("&", "&amp;").replace("<", "&lt;")
                 + "</body></html>";
     }
 

@@ -40,8 +40,9 @@ final class VerdictPanel {
      * @param headline the first sentence, pass or fail in words
      * @param passes true when the design shown meets the criterion (or none is needed)
      * @param lines the sentences under it
+     * @param criterion what is judged, the limit and its source (under the pointer, and in the table)
      */
-    record Verdict(String headline, boolean passes, List<String> lines) {
+    record Verdict(String headline, boolean passes, List<String> lines, String criterion) {
     }
 
     VerdictPanel() {
@@ -77,6 +78,8 @@ final class VerdictPanel {
         headline.setText(html(shown.headline(), 380));
         details.setForeground(UIManager.getColor("Label.foreground"));
         details.setText(html(String.join("\n", shown.lines()), 380));
+        headline.setToolTipText(html(shown.criterion(), 380));
+        details.setToolTipText(headline.getToolTipText());
         panel.setVisible(true);
     }
 
@@ -125,8 +128,7 @@ final class VerdictPanel {
             lines.add("The worst point lies outside the criterion's frequency range: the limit's end value was"
                     + " used there.");
         }
-        lines.add(CriterionForm.describe(c));
-        return new Verdict(headline, passes, lines);
+        return new Verdict(headline, passes, lines, CriterionForm.describe(c));
     }
 
     private static Optional<String> zonesAfter(Criterion c, Reading after) {
