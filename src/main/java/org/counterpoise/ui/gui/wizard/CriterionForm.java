@@ -397,9 +397,4 @@ final class CriterionForm {
         problem.setText(text == null ? " " : html(text));
         family.putClientProperty("JComponent.outline", text == null ? null : "error");
     }
-
-    /** @return the summary line, for tests */
-    String summary() {
-        return summary.getText();
-    }
 }

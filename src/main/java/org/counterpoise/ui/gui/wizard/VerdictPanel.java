@@ -16,6 +16,10 @@ import org.counterpoise.core.criteria.Acceptance;
 import org.counterpoise.core.criteria.Criterion;
 import org.counterpoise.core.criteria.CriterionKind;
 import org.counterpoise.core.criteria.Reading;
+import org.counterpoise.core.design.DesignResult;
+import org.counterpoise.core.model.Excitation;
+import org.counterpoise.io.project.DisturbanceInput;
+import org.counterpoise.io.project.Project;
 import org.counterpoise.io.text.CriterionText;
 import org.counterpoise.io.text.DisplayUnits;
 import org.counterpoise.io.text.QuantityFormat;
@@ -129,6 +133,27 @@ final class VerdictPanel {
                     + " used there.");
         }
         return new Verdict(headline, passes, lines, CriterionForm.describe(c));
+    }
+
+    /**
+     * @param r a design
+     * @param p the project it was designed from, or null
+     * @return the words for an order by its index in the design's excitation, e.g. "the order 2\u00d7
+     *     shaft speed"
+     */
+    static IntFunction<String> orderNames(DesignResult r, Project p) {
+        return index -> {
+            Excitation excitation = r.study().excitation();
+            double shaft = Double.NaN;
+            if (p != null) {
+                DisturbanceInput d = p.disturbance();
+                shaft = d.isBand() ? d.bandUnit().toSi(d.bandLow()) : d.frequency().unit().toSi(d.frequency().value());
+            }
+            double harmonic = excitation.orders().get(index).frequencyFactor() * excitation.band().low() / shaft;
+            return Double.isFinite(harmonic) && harmonic > 0
+                    ? "the order " + QuantityFormat.number(harmonic, 3) + "\u00d7 shaft speed"
+                    : index == 0 ? "the design order" : "another order";
+        };
     }
 
     private static Optional<String> zonesAfter(Criterion c, Reading after) {
