@@ -36,6 +36,7 @@ import org.counterpoise.io.project.AcceptanceInput.CurvePoint;
 import org.counterpoise.io.project.AcceptanceInput.Published;
 import org.counterpoise.io.project.AcceptanceInput.StatedLimit;
 import org.counterpoise.io.project.Project;
+import org.counterpoise.io.text.CriterionText;
 import org.counterpoise.io.text.DisplayUnits;
 import org.counterpoise.io.text.QuantityFormat;
 import org.counterpoise.io.text.UnitChoices;
@@ -375,19 +376,19 @@ final class CriterionForm {
      * @return one or two sentences: what is judged, the limit, the source and its caution
      */
     static String describe(Criterion c) {
-        String judged = c.convention().label() + " " + c.quantity().label()
-                + c.weighting().map(w -> " weighted " + w.symbol()).orElse("");
+        return "Judged: " + CriterionText.measure(c) + ", " + limitWords(c) + ". Source: " + CriterionText.source(c)
+                + ".";
+    }
+
+    private static String limitWords(Criterion c) {
         LimitCurve l = c.limit();
-        String limitText = l.isFlat() ? DisplayUnits.format(l.at(1.0), c.quantity().dimension())
-                : "a curve from " + QuantityFormat.number(l.lowFrequency(), 3) + " to "
+        return l.isFlat() ? "limit " + QuantityField.pretty(DisplayUnits.format(l.at(1.0), c.quantity().dimension()))
+                : "limit a curve from " + QuantityFormat.number(l.lowFrequency(), 3) + " to "
                         + QuantityFormat.number(l.highFrequency(), 3) + " Hz (" + l.points().size() + " points)";
-        String caution = CriterionWords.caution(c.kind());
-        return "Judged: " + judged + ", limit " + QuantityField.pretty(limitText) + ". Source: " + c.source() + "."
-                + (caution.isEmpty() ? "" : " " + caution);
     }
 
     private static String html(String text) {
-        return "<html><body style='width: 190pt'>" + text.replace("&", "&amp;").replace("<", "&lt;")
+        return "<html><body style='width: 220pt'>" + text.replace("&", "&amp;").replace("<", "&lt;")
                 + "</body></html>";
     }
 
@@ -395,10 +396,5 @@ final class CriterionForm {
     void problem(String text) {
         problem.setText(text == null ? " " : html(text));
         family.putClientProperty("JComponent.outline", text == null ? null : "error");
-    }
-
-    /** @return the summary line, for tests */
-    String summary() {
-        return summary.getText();
     }
 }

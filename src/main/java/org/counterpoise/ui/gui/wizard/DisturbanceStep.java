@@ -33,7 +33,12 @@ import org.counterpoise.ui.gui.field.FormSwitch;
 import org.counterpoise.ui.gui.field.ItemWords;
 import org.counterpoise.ui.gui.field.QuantityField;
 
-/** Step 2: what shakes the structure, and at which speeds. */
+/**
+ * Step 2: what shakes the structure, and at which speeds. Longer than 400 lines because it is the
+ * one view of the disturbance section (kind, spectrum and its PSD units, amplitude or balance grade,
+ * speeds, orders) and keeps their interplay in one place; the other orders and the balance grade
+ * are forms of their own ({@link OrdersForm}, {@link BalanceGradeForm}).
+ */
 final class DisturbanceStep extends Step {
     private static final List<Unit> FREQUENCY = UnitChoices.of(Dimension.FREQUENCY);
     private static final List<Unit> RATIO = UnitChoices.of(Dimension.RATIO);

@@ -79,17 +79,7 @@ final class GoalStep extends Step {
     private final ToleranceRangesForm ranges = new ToleranceRangesForm();
     private final ChartHost massChart = new ChartHost("chart.massRatio");
     private final JComponent page;
-    private SizingContext sizingContext = new SizingContext() {
-        @Override
-        public Structure structure() {
-            return null;
-        }
-
-        @Override
-        public DesignResult design() {
-            return null;
-        }
-    };
+    private SizingContext sizingContext = new SizingContext() { };
 
     GoalStep() {
         sizing.setName("absorber.sizing");
@@ -278,11 +268,15 @@ final class GoalStep extends Step {
 
     /** What converting the size between its forms needs from the rest of the wizard. */
     interface SizingContext {
-        /** @return the structure as entered, or null while it is not valid */
-        Structure structure();
+        /** @return the structure as entered, or null while it is not valid (none until the frame tells) */
+        default Structure structure() {
+            return null;
+        }
 
-        /** @return the design on screen, or null */
-        DesignResult design();
+        /** @return the design on screen, or null (none until the frame tells) */
+        default DesignResult design() {
+            return null;
+        }
     }
 
     /** @param c where the structure and the design shown come from */

@@ -45,7 +45,6 @@ import org.counterpoise.io.chart.ChartFiles;
 import org.counterpoise.io.project.Project;
 import org.counterpoise.io.text.DesignContent;
 import org.counterpoise.io.text.DisplayUnits;
-import org.counterpoise.io.text.QuantityFormat;
 import org.counterpoise.io.text.ReportContent;
 import org.counterpoise.io.text.ReportSection.SectionId;
 import org.counterpoise.io.text.ReportTable;
@@ -209,7 +208,7 @@ final class ResultStep extends Step {
         if (r == null || r.acceptance().isEmpty()) {
             verdict.none();
         } else {
-            verdict.show(r.acceptance().get(), this::orderName);
+            verdict.show(r.acceptance().get(), VerdictPanel.orderNames(r, project));
         }
         if (r == null) {
             comparison.message("Fix the inputs to see the comparison of methods.");
@@ -303,7 +302,9 @@ final class ResultStep extends Step {
         DesignResult r = result;
         DesignCurves c = curves;
         boolean log = logAxis.isSelected();
-        responseChart.show(theme -> ChartFactory.response(r, c, log, theme, 640, 300));
+        // in the project's display convention (axis title and values), with the criterion's limit line
+        AmplitudeConvention shown = project == null ? AmplitudeConvention.PEAK : project.displayConvention();
+        responseChart.show(theme -> ChartFactory.response(r, c, log, theme, shown, 640, 300));
         strokeChart.show(theme -> ChartFactory.stroke(r, c, false, theme, 640, 300));
     }
 
@@ -367,25 +368,6 @@ final class ResultStep extends Step {
                 e -> JOptionPane.showMessageDialog(page, "The charts could not be written to " + dir + ": "
                         + e.getMessage(), "Export", JOptionPane.WARNING_MESSAGE),
                 () -> messages.say("The chart export was cancelled."));
-    }
-
-    /**
-     * @param index an order's index in the design's excitation (0 is the design order)
-     * @return it in words, e.g. "the order 2× shaft speed"
-     */
-    private String orderName(int index) {
-        var excitation = result.study().excitation();
-        double factor = excitation.orders().get(index).frequencyFactor();
-        double shaft = project == null ? Double.NaN : shaftSpeed(project);
-        double harmonic = factor * excitation.band().low() / shaft;
-        return Double.isFinite(harmonic) && harmonic > 0
-                ? "the order " + QuantityFormat.number(harmonic, 3) + "× shaft speed"
-                : index == 0 ? "the design order" : "another order";
-    }
-
-    private static double shaftSpeed(Project p) {
-        var d = p.disturbance();
-        return d.isBand() ? d.bandUnit().toSi(d.bandLow()) : d.frequency().unit().toSi(d.frequency().value());
     }
 
     /** @return the verdict panel, for tests */

@@ -13,10 +13,14 @@ import javax.swing.JLabel;
 import javax.swing.JPanel;
 import javax.swing.UIManager;
 import org.counterpoise.core.criteria.Acceptance;
-import org.counterpoise.core.criteria.ComfortReaction;
 import org.counterpoise.core.criteria.Criterion;
+import org.counterpoise.core.criteria.CriterionKind;
 import org.counterpoise.core.criteria.Reading;
-import org.counterpoise.core.criteria.SeverityZone;
+import org.counterpoise.core.design.DesignResult;
+import org.counterpoise.core.model.Excitation;
+import org.counterpoise.io.project.DisturbanceInput;
+import org.counterpoise.io.project.Project;
+import org.counterpoise.io.text.CriterionText;
 import org.counterpoise.io.text.DisplayUnits;
 import org.counterpoise.io.text.QuantityFormat;
 import org.counterpoise.io.text.ValueText;
@@ -40,8 +44,9 @@ final class VerdictPanel {
      * @param headline the first sentence, pass or fail in words
      * @param passes true when the design shown meets the criterion (or none is needed)
      * @param lines the sentences under it
+     * @param criterion what is judged, the limit and its source (under the pointer, and in the table)
      */
-    record Verdict(String headline, boolean passes, List<String> lines) {
+    record Verdict(String headline, boolean passes, List<String> lines, String criterion) {
     }
 
     VerdictPanel() {
@@ -77,6 +82,8 @@ final class VerdictPanel {
         headline.setText(html(shown.headline(), 380));
         details.setForeground(UIManager.getColor("Label.foreground"));
         details.setText(html(String.join("\n", shown.lines()), 380));
+        headline.setToolTipText(html(shown.criterion(), 380));
+        details.setToolTipText(headline.getToolTipText());
         panel.setVisible(true);
     }
 
@@ -108,13 +115,13 @@ final class VerdictPanel {
             headline = "Passes with the absorber: " + value(c, after.value()) + " against a limit of "
                     + value(c, after.limit()) + " (" + margin(after) + ").";
             lines.add("Without the absorber it fails: " + reading(c, before) + ".");
-            zonesAfter(after).ifPresent(lines::add);
+            zonesAfter(c, after).ifPresent(lines::add);
         } else {
             passes = false;
             headline = "Fails even with the absorber: " + value(c, after.value()) + " against a limit of "
                     + value(c, after.limit()) + " (" + excess(after) + ").";
             lines.add("Without the absorber: " + reading(c, before) + ".");
-            zonesAfter(after).ifPresent(lines::add);
+            zonesAfter(c, after).ifPresent(lines::add);
         }
         if (!after.unbounded()) {
             lines.add("Worst with the absorber at " + ValueText.frequency(after.worstFrequency()) + " forcing"
@@ -125,42 +132,46 @@ final class VerdictPanel {
             lines.add("The worst point lies outside the criterion's frequency range: the limit's end value was"
                     + " used there.");
         }
-        lines.add(CriterionForm.describe(c));
-        return new Verdict(headline, passes, lines);
+        return new Verdict(headline, passes, lines, CriterionForm.describe(c));
     }
 
-    private static Optional<String> zonesAfter(Reading after) {
+    /**
+     * @param r a design
+     * @param p the project it was designed from, or null
+     * @return the words for an order by its index in the design's excitation, e.g. "the order 2\u00d7
+     *     shaft speed"
+     */
+    static IntFunction<String> orderNames(DesignResult r, Project p) {
+        return index -> {
+            Excitation excitation = r.study().excitation();
+            double shaft = Double.NaN;
+            if (p != null) {
+                DisturbanceInput d = p.disturbance();
+                shaft = d.isBand() ? d.bandUnit().toSi(d.bandLow()) : d.frequency().unit().toSi(d.frequency().value());
+            }
+            double harmonic = excitation.orders().get(index).frequencyFactor() * excitation.band().low() / shaft;
+            return Double.isFinite(harmonic) && harmonic > 0
+                    ? "the order " + QuantityFormat.number(harmonic, 3) + "\u00d7 shaft speed"
+                    : index == 0 ? "the design order" : "another order";
+        };
+    }
+
+    private static Optional<String> zonesAfter(Criterion c, Reading after) {
         return after.zones().isEmpty() ? Optional.empty()
-                : Optional.of("With the absorber: " + zones(after.zones()) + ".");
+                : Optional.of("With the absorber: " + zones(c, after.zones()) + ".");
+    }
+
+    /** @return the zones (or comfort reactions) in the reports' words */
+    private static String zones(Criterion c, List<String> ids) {
+        return (c.kind() == CriterionKind.MACHINE ? "zone " : "\u201c") + CriterionText.zones(c, ids)
+                + (c.kind() == CriterionKind.MACHINE ? "" : "\u201d");
     }
 
     private static String reading(Criterion c, Reading r) {
         String verdict = r.passes() ? "passes" : "fails";
-        String zones = r.zones().isEmpty() ? "" : ", " + zones(r.zones());
+        String zones = r.zones().isEmpty() ? "" : ", " + zones(c, r.zones());
         return value(c, r.value()) + " against " + value(c, r.limit()) + ", " + verdict
                 + (r.unbounded() ? "" : " (" + (r.passes() ? margin(r) : excess(r)) + ")") + zones;
-    }
-
-    private static String zones(List<String> ids) {
-        List<String> words = new ArrayList<>();
-        for (String id : ids) {
-            Optional<ComfortReaction> reaction = ComfortReaction.byId(id);
-            if (reaction.isPresent()) {
-                words.add("\u201c" + CriterionWords.of(reaction.get()).replaceAll("\\s*\\(.*\\)$", "") + "\u201d");
-            } else {
-                words.add("zone " + id + zoneMeaning(id));
-            }
-        }
-        return String.join(" or ", words);
-    }
-
-    private static String zoneMeaning(String id) {
-        for (SeverityZone z : SeverityZone.values()) {
-            if (z.name().equals(id)) {
-                return " (" + CriterionWords.of(z).substring(3) + ")";
-            }
-        }
-        return "";
     }
 
     /** @return the value with its unit, convention and weighting; never "Infinity" */
