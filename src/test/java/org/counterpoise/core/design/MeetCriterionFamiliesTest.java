@@ -1,5 +1,6 @@
 package org.counterpoise.core.design;
 
+import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
@@ -16,6 +17,7 @@ import org.counterpoise.core.criteria.HumanComfort;
 import org.counterpoise.core.criteria.LimitCurve;
 import org.counterpoise.core.criteria.MachineClass;
 import org.counterpoise.core.criteria.MachineSeverity;
+import org.counterpoise.core.criteria.Reading;
 import org.counterpoise.core.criteria.RoomUse;
 import org.counterpoise.core.criteria.SeverityZone;
 import org.counterpoise.core.criteria.UserLimit;
@@ -109,6 +111,13 @@ class MeetCriterionFamiliesTest {
         // the worst case over the tolerance ranges (WorstCase, checked against a dense brute force in WorstCaseTest)
         double worst = WorstCase.of(goal.model(), r.absorber(), s.robustness().ranges()).peak() / goal.target();
         assertTrue(worst <= 1 + 1e-9, "the design meets it over the tolerances: " + worst);
+        // the result's verdict after at the worst point over the tolerances is that worst case, read in
+        // full by the verdict engine; it is never better than the nominal verdict after
+        Reading atWorst = r.afterWorstCase().orElseThrow();
+        assertEquals(worst, atWorst.utilisation(), 1e-6 * worst);
+        assertTrue(atWorst.utilisation() >= r.acceptance().orElseThrow().after().utilisation() * (1 - 1e-12));
+        assertTrue(Designer.design(s.withMethod(DesignMethod.EXACT_PEAK)).afterWorstCase().isEmpty(),
+                "exact-peak designs are nominal: no verdict over the tolerances");
         certifyLighter(r, t -> toleranceGridMaximum(a, s.structure(), t, s.robustness().ranges()), 41, 12);
     }
 
