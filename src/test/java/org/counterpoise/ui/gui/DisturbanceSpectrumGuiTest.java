@@ -215,9 +215,9 @@ class DisturbanceSpectrumGuiTest {
         List<String[]> rows = onEdt(frame::resultRows);
         Dimension d = shown.study().response().dimension();
         assertEquals(QuantityFormat.number(DisplayUnits.of(d).fromSi(rms.after()), QuantityFormat.FIGURES),
-                value(rows, "Rms with absorber"));
+                value(rows, "With absorber (r.m.s.)"));
         assertEquals(QuantityFormat.number(DisplayUnits.of(d).fromSi(rms.before()), QuantityFormat.FIGURES),
-                value(rows, "Rms without absorber"));
+                value(rows, "Without absorber (r.m.s.)"));
         assertTrue(rms.after() < rms.before(), "the absorber lowers the rms response");
         String harmonicPeaks = DesignContent.of(shown).section(SectionId.RESPONSE).orElseThrow().title();
         assertTrue(rows.stream().noneMatch(r -> r[0].contains(harmonicPeaks)),

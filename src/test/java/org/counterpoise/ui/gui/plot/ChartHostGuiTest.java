@@ -222,7 +222,7 @@ class ChartHostGuiTest {
             return null;
         });
         String reading = onEdt(() -> wizard.readoutAt(14.0));
-        assertTrue(reading.startsWith("At 14.00 Hz:"), reading);
+        assertTrue(reading.startsWith("At 14.00 Hz (peak):"), reading);
         onEdt(() -> {
             for (Component c : all(wizard.getContentPane())) {
                 if ("result.log".equals(c.getName())) {
