@@ -66,6 +66,15 @@ public final class DesignReport {
      */
     static void section(StringBuilder out, ReportSection section) {
         out.append('\n').append(section.title()).append('\n');
+        // the "before" column is as wide as its longest value plus two spaces (16 at least), so
+        // that a long phrase (a comfort reaction, a margin with its decibels) never runs into "after"
+        int before = 16;
+        for (ReportRow row : section.rows()) {
+            if (row.shown() && row.shownValue() instanceof Pair p && p.kind() == PairKind.BEFORE_AFTER) {
+                before = Math.max(before, ValueText.inline(p.first()).length() + 2);
+            }
+        }
+        String pairLine = "  %-" + (LABEL - 2) + "s %-" + before + "s %s%n";
         boolean columns = false;
         for (ReportRow row : section.rows()) {
             if (!row.shown()) {
@@ -76,12 +85,11 @@ public final class DesignReport {
             ReportValue value = row.shownValue();
             if (value instanceof Pair p && p.kind() == PairKind.BEFORE_AFTER) {
                 if (!columns) {
-                    out.append(String.format(Locale.ROOT, "  %-" + (LABEL - 2) + "s %-16s %s%n", "", "before",
-                            "after"));
+                    out.append(String.format(Locale.ROOT, pairLine, "", "before", "after"));
                     columns = true;
                 }
-                out.append(String.format(Locale.ROOT, "  %-" + (LABEL - 2) + "s %-16s %s%n", label,
-                        ValueText.inline(p.first()), ValueText.inline(p.second())));
+                out.append(String.format(Locale.ROOT, pairLine, label, ValueText.inline(p.first()),
+                        ValueText.inline(p.second())));
             } else {
                 row(out, label, ValueText.inline(value));
             }
