@@ -6,7 +6,6 @@ import java.util.OptionalDouble;
 import org.counterpoise.core.criteria.AmplitudeConvention;
 import org.counterpoise.core.criteria.Assessor;
 import org.counterpoise.core.criteria.Criterion;
-import org.counterpoise.core.criteria.UserLimit;
 import org.counterpoise.core.design.AbsorberSizing;
 import org.counterpoise.core.design.DesignConstraints;
 import org.counterpoise.core.design.DesignMethod;
@@ -201,14 +200,6 @@ public record Project(String name, String notes, StructureInput structure, Distu
                 : OptionalDouble.of(rate.positiveSi("disturbance.run_up_rate.value"));
     }
 
-    /**
-     * Slice F's switch, now true: the Designer sizes for {@link AbsorberSizing.MeetCriterion} (any
-     * criterion; a limit that says what the old {@code absorber.target} said gives the target's design
-     * to 1e-9, MeetCriterionEquivalenceTest). When false, such a limit was designed as a target
-     * ({@link AbsorberSizing.ByTarget}) and any other criterion to meet was refused in plain words.
-     */
-    static final boolean DESIGNER_MEETS_CRITERION = true;
-
     /** @return the study the core designs */
     public DesignStudy toStudy() {
         AbsorberInput a = absorber;
@@ -226,8 +217,9 @@ public record Project(String name, String notes, StructureInput structure, Distu
             sizing = AbsorberSizing.ofTarget(a.target().positiveSi("absorber.target.value"),
                     a.maxMassRatio().orElse(AbsorberSizing.DEFAULT_MAX_MASS_RATIO));
         } else if (a.meetAcceptance()) {
-            sizing = meetSizing(criterion.orElseThrow(() -> InvalidInputException.missing("acceptance",
-                    "absorber.meet_acceptance needs a criterion to meet: give the acceptance object")), excitation);
+            criterion.orElseThrow(() -> InvalidInputException.missing("acceptance",
+                    "absorber.meet_acceptance needs a criterion to meet: give the acceptance object"));
+            sizing = meetSizing();
         } else if (a.massRatio().isPresent()) {
             sizing = AbsorberSizing.ofMassRatio(a.massRatio().getAsDouble());
         } else if (a.mass() != null) {
@@ -244,21 +236,9 @@ public record Project(String name, String notes, StructureInput structure, Distu
                 a.strokeMargin(), constraints, toRobustness(), criterion);
     }
 
-    /** The sizing that meets the criterion (see {@link #DESIGNER_MEETS_CRITERION}). */
-    private AbsorberSizing meetSizing(Criterion criterion, Excitation excitation) {
-        double maxRatio = absorber.maxMassRatio().orElse(AbsorberSizing.DEFAULT_MAX_MASS_RATIO);
-        if (DESIGNER_MEETS_CRITERION) {
-            return new AbsorberSizing.MeetCriterion(maxRatio);
-        }
-        if (criterion instanceof UserLimit u && u.limit().isFlat() && u.quantity() == absorber.response()
-                && excitation.otherOrders().isEmpty()) {
-            // one harmonic: the limit in its convention is this peak (AmplitudeConvention.ofHarmonic)
-            return AbsorberSizing.ofTarget(u.limit().at(u.limit().lowFrequency()) / u.convention().ofHarmonic(1.0),
-                    maxRatio);
-        }
-        throw new InvalidInputException("absorber.meet_acceptance", "true", "this version designs to meet only a"
-                + " user limit of one value on absorber.response (" + Ids.of(absorber.response()) + ") with one"
-                + " order; give absorber.mass_ratio or absorber.mass and read the verdict");
+    /** The sizing that meets the criterion: the lightest absorber up to the largest mass ratio. */
+    private AbsorberSizing meetSizing() {
+        return new AbsorberSizing.MeetCriterion(absorber.maxMassRatio().orElse(AbsorberSizing.DEFAULT_MAX_MASS_RATIO));
     }
 
     /**
