@@ -17,10 +17,15 @@ import org.counterpoise.core.model.DampingConversions;
 import org.counterpoise.core.model.Excitation;
 import org.counterpoise.core.model.Structure;
 import org.counterpoise.core.model.StructureConversions;
+import org.counterpoise.core.realisation.HardwareChoice;
 import org.counterpoise.core.response.ResponseKind;
+import org.counterpoise.io.text.UnitSystem;
 
 /**
- * A project as the user entered it (units and measures kept as typed), and its conversion to the
+ * Longer than 400 lines because format 4 added two sections to a record that also migrates the
+ * older target; the migration moves to its own class with the format-4 reader.
+ *
+ * <p>A project as the user entered it (units and measures kept as typed), and its conversion to the
  * core's SI {@link DesignStudy}. Problems are reported against the project-file field names.
  *
  * @param name project name
@@ -33,10 +38,13 @@ import org.counterpoise.core.response.ResponseKind;
  * @param acceptance the criterion the response is judged against, or null for none (since format 3)
  * @param displayConvention how response values are shown: peak, r.m.s. or peak-to-peak (never null;
  *     peak when not given; since format 3)
+ * @param hardware the hardware choices the design is realised with (never null; the defaults when not
+ *     given; since format 4)
+ * @param displayUnits the unit system outputs are shown in (never null; SI when not given; since format 4)
  */
 public record Project(String name, String notes, StructureInput structure, DisturbanceInput disturbance,
         AbsorberInput absorber, RobustnessInput robustness, ProjectIdentity identity, AcceptanceInput acceptance,
-        AmplitudeConvention displayConvention) {
+        AmplitudeConvention displayConvention, HardwareChoice hardware, UnitSystem displayUnits) {
 
     /** The name of a project that has not been named yet. */
     public static final String UNTITLED = "Untitled";
@@ -50,6 +58,27 @@ public record Project(String name, String notes, StructureInput structure, Distu
         notes = notes == null ? "" : notes;
         identity = identity == null ? ProjectIdentity.EMPTY : identity;
         displayConvention = displayConvention == null ? DEFAULT_DISPLAY_CONVENTION : displayConvention;
+        hardware = hardware == null ? HardwareChoice.DEFAULT : hardware;
+        displayUnits = displayUnits == null ? UnitSystem.SI : displayUnits;
+    }
+
+    /**
+     * A project with the default hardware choices, shown in SI (as format 3 had).
+     * @param name project name
+     * @param notes free text
+     * @param structure the structure as known
+     * @param disturbance the disturbance
+     * @param absorber the designer's choices
+     * @param robustness robustness settings, or null for the defaults
+     * @param identity revision, engineer, client or site and date
+     * @param acceptance the criterion, or null for none
+     * @param displayConvention peak, r.m.s. or peak-to-peak, or null for peak
+     */
+    public Project(String name, String notes, StructureInput structure, DisturbanceInput disturbance,
+            AbsorberInput absorber, RobustnessInput robustness, ProjectIdentity identity, AcceptanceInput acceptance,
+            AmplitudeConvention displayConvention) {
+        this(name, notes, structure, disturbance, absorber, robustness, identity, acceptance, displayConvention,
+                null, null);
     }
 
     /**
@@ -290,7 +319,8 @@ public record Project(String name, String notes, StructureInput structure, Distu
      * @return this project with it
      */
     public Project withStructure(StructureInput s) {
-        return new Project(name, notes, s, disturbance, absorber, robustness, identity, acceptance, displayConvention);
+        return new Project(name, notes, s, disturbance, absorber, robustness, identity, acceptance,
+                displayConvention, hardware, displayUnits);
     }
 
     /**
@@ -298,7 +328,8 @@ public record Project(String name, String notes, StructureInput structure, Distu
      * @return this project with it
      */
     public Project withDisturbance(DisturbanceInput d) {
-        return new Project(name, notes, structure, d, absorber, robustness, identity, acceptance, displayConvention);
+        return new Project(name, notes, structure, d, absorber, robustness, identity, acceptance,
+                displayConvention, hardware, displayUnits);
     }
 
     /**
@@ -306,7 +337,8 @@ public record Project(String name, String notes, StructureInput structure, Distu
      * @return this project with them
      */
     public Project withAbsorber(AbsorberInput a) {
-        return new Project(name, notes, structure, disturbance, a, robustness, identity, acceptance, displayConvention);
+        return new Project(name, notes, structure, disturbance, a, robustness, identity, acceptance,
+                displayConvention, hardware, displayUnits);
     }
 
     /**
@@ -314,7 +346,8 @@ public record Project(String name, String notes, StructureInput structure, Distu
      * @return this project with it
      */
     public Project withRobustness(RobustnessInput r) {
-        return new Project(name, notes, structure, disturbance, absorber, r, identity, acceptance, displayConvention);
+        return new Project(name, notes, structure, disturbance, absorber, r, identity, acceptance,
+                displayConvention, hardware, displayUnits);
     }
 
     /**
@@ -325,7 +358,7 @@ public record Project(String name, String notes, StructureInput structure, Distu
      */
     public Project withDetails(String newName, String newNotes, ProjectIdentity newIdentity) {
         return new Project(newName, newNotes, structure, disturbance, absorber, robustness, newIdentity, acceptance,
-                displayConvention);
+                displayConvention, hardware, displayUnits);
     }
 
     /**
@@ -334,7 +367,7 @@ public record Project(String name, String notes, StructureInput structure, Distu
      */
     public Project withAcceptance(AcceptanceInput criterion) {
         return new Project(name, notes, structure, disturbance, absorber, robustness, identity, criterion,
-                displayConvention);
+                displayConvention, hardware, displayUnits);
     }
 
     /**
@@ -342,7 +375,26 @@ public record Project(String name, String notes, StructureInput structure, Distu
      * @return this project with it
      */
     public Project withDisplayConvention(AmplitudeConvention convention) {
-        return new Project(name, notes, structure, disturbance, absorber, robustness, identity, acceptance, convention);
+        return new Project(name, notes, structure, disturbance, absorber, robustness, identity, acceptance, convention,
+                hardware, displayUnits);
+    }
+
+    /**
+     * @param choice the hardware choices
+     * @return this project with them
+     */
+    public Project withHardware(HardwareChoice choice) {
+        return new Project(name, notes, structure, disturbance, absorber, robustness, identity, acceptance,
+                displayConvention, choice, displayUnits);
+    }
+
+    /**
+     * @param system the unit system outputs are shown in
+     * @return this project with it
+     */
+    public Project withDisplayUnits(UnitSystem system) {
+        return new Project(name, notes, structure, disturbance, absorber, robustness, identity, acceptance,
+                displayConvention, hardware, system);
     }
 
     /** @return the robustness settings in SI (the defaults where the project gives none) */

@@ -1,6 +1,7 @@
 package org.counterpoise.io.project;
 
 import java.time.LocalDate;
+import java.util.List;
 import java.time.format.DateTimeParseException;
 import org.counterpoise.core.error.InvalidInputException;
 
@@ -12,11 +13,26 @@ import org.counterpoise.core.error.InvalidInputException;
  * @param engineer who designed it
  * @param client client or site the absorber is for
  * @param date date of issue as YYYY-MM-DD, or empty
+ * @param documentNumber the document or drawing number of the sheet, or empty (since format 4)
+ * @param history earlier revisions, oldest first (since format 4; never null)
+ * @param signOff prepared, checked and approved (since format 4; never null)
  */
-public record ProjectIdentity(String revision, String engineer, String client, String date) {
+public record ProjectIdentity(String revision, String engineer, String client, String date, String documentNumber,
+        List<Revision> history, SignOff signOff) {
 
     /** No identity given. */
     public static final ProjectIdentity EMPTY = new ProjectIdentity("", "", "", "");
+
+    /**
+     * An identity without document number, history or sign-off (as format 3 had).
+     * @param revision revision mark
+     * @param engineer who designed it
+     * @param client client or site
+     * @param date date of issue, YYYY-MM-DD or empty
+     */
+    public ProjectIdentity(String revision, String engineer, String client, String date) {
+        this(revision, engineer, client, date, "", List.of(), SignOff.BLANK);
+    }
 
     /** Nulls become empty strings; the date must be a calendar date when given. */
     public ProjectIdentity {
@@ -25,6 +41,9 @@ public record ProjectIdentity(String revision, String engineer, String client, S
         client = client == null ? "" : client;
         date = date == null ? "" : date.strip();
         checkDate("date", date);
+        documentNumber = documentNumber == null ? "" : documentNumber.strip();
+        history = history == null ? List.of() : List.copyOf(history);
+        signOff = signOff == null ? SignOff.BLANK : signOff;
     }
 
     /**

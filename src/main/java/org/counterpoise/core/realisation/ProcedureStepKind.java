@@ -1,0 +1,19 @@
+package org.counterpoise.core.realisation;
+
+/** The steps of tuning and commissioning, in order; the words are in io.text. */
+public enum ProcedureStepKind {
+    /** Measure the structure's natural frequency with the absorber locked or not yet fitted. */
+    MEASURE_STRUCTURE,
+    /** Compute the absorber frequency needed from the measured one and the design's tuning ratio. */
+    COMPUTE_ABSORBER_TARGET,
+    /** Tune the absorber alone (tap test or shaker) to the target within the tolerance. */
+    TUNE_ABSORBER,
+    /** Fit the absorber, check the clearances and the fixings. */
+    FIT,
+    /** Measure the response at the running speed and over the band. */
+    MEASURE_RESPONSE,
+    /** Compare with the predicted response table. */
+    COMPARE,
+    /** Adjust by the trim step when the reading is off. */
+    ADJUST
+}

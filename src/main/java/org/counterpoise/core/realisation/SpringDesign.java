@@ -1,0 +1,45 @@
+package org.counterpoise.core.realisation;
+
+import java.util.List;
+
+/**
+ * Helical compression springs that realise the absorber's spring rate, to EN 13906-1, all SI. When
+ * there are several they stand in parallel and share the load equally.
+ *
+ * @param material the wire
+ * @param count springs in parallel (&gt;= 1)
+ * @param wireDiameter d, m, from the stock series
+ * @param meanCoilDiameter D, m
+ * @param activeCoils n (may end in a fraction: quarter coils)
+ * @param totalCoils n_t (active plus the closed, ground ends)
+ * @param freeLength L0, m
+ * @param solidLength Lc, m
+ * @param installedLength the length under the static load, m (the free length when nothing rests on it)
+ * @param ratePerSpring R = G d^4 / (8 D^3 n), N/m
+ * @param totalRate count times the rate per spring, N/m
+ * @param rateDeviation total rate over the design's spring rate, minus one
+ * @param staticLoadPerSpring the steady load on one spring, N
+ * @param dynamicLoadPerSpring the amplitude of the load on one spring at the worst of band and run-up, N
+ * @param serviceCycles load cycles over the service life
+ * @param checks stress, fatigue, buckling, surge and solid-length checks
+ */
+public record SpringDesign(SpringMaterial material, int count, double wireDiameter, double meanCoilDiameter,
+        double activeCoils, double totalCoils, double freeLength, double solidLength, double installedLength,
+        double ratePerSpring, double totalRate, double rateDeviation, double staticLoadPerSpring,
+        double dynamicLoadPerSpring, double serviceCycles, List<DesignCheck> checks) {
+
+    /** Defensive copy. */
+    public SpringDesign {
+        checks = List.copyOf(checks);
+    }
+
+    /** @return the spring index w = D/d */
+    public double springIndex() {
+        return meanCoilDiameter / wireDiameter;
+    }
+
+    /** @return true when every check passes */
+    public boolean passes() {
+        return checks.stream().allMatch(DesignCheck::passes);
+    }
+}

@@ -1,0 +1,35 @@
+package org.counterpoise.core.realisation;
+
+import org.counterpoise.core.units.Dimension;
+
+/**
+ * A number a procedure step gives the technician, SI.
+ *
+ * @param quantity what it is
+ * @param value its value, SI
+ * @param dimension its dimension
+ */
+public record StepFigure(StepQuantity quantity, double value, Dimension dimension) {
+
+    /** What a step's number is; the words are in io.text. */
+    public enum StepQuantity {
+        /** The structure's natural frequency the design expects. */
+        EXPECTED_STRUCTURE_FREQUENCY,
+        /** The design's tuning ratio (absorber over structure frequency). */
+        TUNING_RATIO,
+        /** The absorber frequency to tune to, for the expected structure frequency. */
+        ABSORBER_TARGET_FREQUENCY,
+        /** How far the absorber frequency may be from its target, fraction. */
+        ABSORBER_FREQUENCY_TOLERANCE,
+        /** The clearance to leave around the mass. */
+        CLEARANCE,
+        /** The running speed at which to measure. */
+        RUNNING_FREQUENCY,
+        /** The predicted response at the running speed with the absorber. */
+        PREDICTED_RESPONSE,
+        /** One trim plate's mass. */
+        TRIM_PLATE_MASS,
+        /** Plates per percent of frequency. */
+        PLATES_PER_PERCENT
+    }
+}
