@@ -1,14 +1,12 @@
 package org.counterpoise.core.realisation;
 
 import org.counterpoise.core.design.DesignResult;
-import org.counterpoise.core.robust.MistuningRange;
 
 /**
  * The trim plates that let the absorber be tuned on site to the structure's measured frequency.
  *
- * <p>The structure's natural frequency is uncertain by the project's structure range (robust
- * designs) or by the structure mistuning the design tolerates (any other design; the project's
- * range where that is not defined). The absorber must follow it at the design's tuning ratio f, so
+ * <p>The structure's natural frequency is uncertain by the project's structure range (stated, or
+ * the default; see {@link #structureSpan}). The absorber must follow it at the design's tuning ratio f, so
  * its target frequency runs from f omega_low to f omega_high. At a fixed spring rate k the mass
  * goes as m = k / omega_a^2, so the mass must run from m0 (omega1 / omega_high)^2 to
  * m0 (omega1 / omega_low)^2. Plates of a fraction p of the absorber mass are supplied: enough fitted
@@ -61,17 +59,17 @@ public final class TrimSizing {
     }
 
     /**
+     * The structure's frequency uncertainty is what the project states (or the default range) for
+     * every design method: it is a fact about how well the structure is known. The mistuning a
+     * non-robust design tolerates is not used here: it says how far the structure may be off before
+     * the design suffers (often beyond 30 %), not how far it is expected to be off, and a trim sized
+     * to it would supply plates for frequencies nobody expects.
+     *
      * @param design the design
      * @return {below, above}: how far the structure's frequency may be off, fractions
      */
     static double[] structureSpan(DesignResult design) {
         double stated = design.study().robustness().ranges().structure();
-        MistuningRange tolerated = design.structureTolerance();
-        if (design.study().method().robust() || !tolerated.defined()) {
-            return new double[] {stated, stated};
-        }
-        double below = 1.0 - tolerated.low().orElse(1.0 - tolerated.searchLimit());
-        double above = tolerated.high().orElse(1.0 + tolerated.searchLimit()) - 1.0;
-        return new double[] {Math.max(0.0, below), Math.max(0.0, above)};
+        return new double[] {stated, stated};
     }
 }

@@ -8,6 +8,9 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import org.counterpoise.core.design.DesignResult;
+import org.counterpoise.core.design.RunUpStroke;
+import org.counterpoise.core.error.WarningParameter;
+import org.counterpoise.core.response.ResponsePeak;
 import org.counterpoise.core.error.Warning;
 import org.counterpoise.core.error.WarningKind;
 import org.counterpoise.core.model.FrequencyBand;
@@ -112,6 +115,30 @@ class DamperSizingTest {
         FrequencyBand band = fan.study().excitation().band();
         assertEquals(0.15 * fan.absorber().stiffness() / (0.5 * (band.low() + band.high())), d.coefficient(), 1e-9);
         assertEquals(DamperKind.ELASTOMER_LOSS, d.kind());
+    }
+
+    @Test
+    void aTransientRunUpBeyondTheClearanceFailsTheStrokeCheckWithItsWarning() {
+        DesignResult fan = Presets.fan();
+        // the same design, as if its run-up at a stated rate rang to twice the clearance
+        double rung = 2 * fan.clearance();
+        DesignResult rings = withRunUp(fan, new RunUpStroke(new ResponsePeak(fan.coupledNaturalFrequencies()[0], rung),
+                RunUpStroke.Basis.TRANSIENT));
+        List<Warning> warnings = new ArrayList<>();
+        DesignCheck stroke = DamperSizing.size(rings, HardwareChoice.DEFAULT, warnings).checks().get(0);
+        assertEquals(rung, stroke.demand(), 0.0);
+        assertEquals(2.0, stroke.utilisation(), 1e-15);
+        assertFalse(stroke.passes());
+        assertEquals(List.of(WarningKind.DAMPER_STROKE_OVER_CLEARANCE), warnings.stream().map(Warning::kind).toList());
+        assertEquals(rung, warnings.get(0).number(WarningParameter.DAMPER_STROKE), 0.0);
+    }
+
+    static DesignResult withRunUp(DesignResult d, RunUpStroke runUp) {
+        return new DesignResult(d.study(), d.methodSource(), d.methodNote(), d.tuning(), d.absorber(),
+                d.staticDeflection(), d.responseBefore(), d.responseAfter(), d.motionBefore(), d.motionAfter(),
+                d.strokeInBand(), d.strokeRunUp(), d.clearance(), d.springForce(), d.damperForce(), d.absorberForce(),
+                d.coupledNaturalFrequencies(), d.stiffnessDetuning(), d.massDetuning(), d.structureTolerance(),
+                d.absorberTolerance(), d.warnings(), d.activeConstraint(), runUp, d.acceptance(), d.afterWorstCase());
     }
 
     /** The exact peak relative velocity is never below a dense grid, and a dense grid comes within 1e-4 of it. */
