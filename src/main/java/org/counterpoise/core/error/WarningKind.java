@@ -59,7 +59,17 @@ public enum WarningKind {
             WarningParameter.RUN_UP_BASIS),
     /** The stroke during run-up exceeds the stroke limit. */
     RUN_UP_OVER_STROKE_LIMIT(WarningParameter.RUN_UP_STROKE, WarningParameter.STROKE_LIMIT,
-            WarningParameter.RUN_UP_BASIS);
+            WarningParameter.RUN_UP_BASIS),
+    /** A helical spring's stress exceeds the permissible (EN 13906-1); the utilisation is demand over capacity. */
+    SPRING_OVERSTRESSED(WarningParameter.UTILISATION),
+    /** A helical spring's stress amplitude exceeds its fatigue strength at the mean stress. */
+    SPRING_FATIGUE(WarningParameter.UTILISATION),
+    /** A helical spring's working deflection exceeds its buckling deflection. */
+    SPRING_BUCKLES(WarningParameter.UTILISATION),
+    /** The forcing (with its margin) reaches a helical spring's surge frequency. */
+    SPRING_SURGE(WarningParameter.UTILISATION),
+    /** A helical spring's working compression leaves less than the standard's minimum gaps before solid. */
+    SPRING_GOES_SOLID(WarningParameter.UTILISATION);
 
     private final List<WarningParameter> parameters;
 
