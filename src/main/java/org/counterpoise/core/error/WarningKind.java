@@ -68,7 +68,17 @@ public enum WarningKind {
      * The workshop's mass tolerance leaves no room for the spring rate within the absorber frequency
      * tolerance (the mass alone can move the frequency by as much).
      */
-    MASS_TOLERANCE_TOO_LOOSE(WarningParameter.MASS_TOLERANCE, WarningParameter.FREQUENCY_TOLERANCE);
+    MASS_TOLERANCE_TOO_LOOSE(WarningParameter.MASS_TOLERANCE, WarningParameter.FREQUENCY_TOLERANCE),
+    /** A helical spring's stress exceeds the permissible (EN 13906-1); the utilisation is demand over capacity. */
+    SPRING_OVERSTRESSED(WarningParameter.UTILISATION),
+    /** A helical spring's stress amplitude exceeds its fatigue strength at the mean stress. */
+    SPRING_FATIGUE(WarningParameter.UTILISATION),
+    /** A helical spring's working deflection exceeds its buckling deflection. */
+    SPRING_BUCKLES(WarningParameter.UTILISATION),
+    /** The forcing (with its margin) reaches a helical spring's surge frequency. */
+    SPRING_SURGE(WarningParameter.UTILISATION),
+    /** A helical spring's working compression leaves less than the standard's minimum gaps before solid. */
+    SPRING_GOES_SOLID(WarningParameter.UTILISATION);
 
     private final List<WarningParameter> parameters;
 

@@ -104,7 +104,23 @@ public final class WarningText {
                     + " spring rate: hold the mass closer, or tune the absorber on site with the trim plates.",
                     ValueText.percent(w.number(WarningParameter.MASS_TOLERANCE), 2),
                     ValueText.percent(w.number(WarningParameter.FREQUENCY_TOLERANCE), 2));
+            case SPRING_OVERSTRESSED -> spring(w, "the spring's stress at its largest load (or at solid length) is",
+                    "the permissible stress: it would take a set and the tuning would drift");
+            case SPRING_FATIGUE -> spring(w, "the spring's stress amplitude is", "its fatigue strength at its mean"
+                    + " stress: it would break in service and the mass would fall");
+            case SPRING_BUCKLES -> spring(w, "the spring's working deflection is", "its buckling deflection: guide it"
+                    + " on a rod or in a sleeve");
+            case SPRING_SURGE -> spring(w, "three times the highest forcing frequency is", "the spring's first surge"
+                    + " frequency: its coils would resonate");
+            case SPRING_GOES_SOLID -> spring(w, "the spring's working compression is", "the compression it has before"
+                    + " its coils close: it would strike solid");
         };
+    }
+
+    private static String spring(Warning w, String what, String against) {
+        return String.format(Locale.ROOT, "No helical spring design passes every check: %s %.3g times %s."
+                + " Choose another wire or spring count, or an elastomer element.", what,
+                w.number(WarningParameter.UTILISATION), against);
     }
 
     private static String narrow(String what, Warning w) {
