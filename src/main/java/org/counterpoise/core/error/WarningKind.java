@@ -59,7 +59,14 @@ public enum WarningKind {
             WarningParameter.RUN_UP_BASIS),
     /** The stroke during run-up exceeds the stroke limit. */
     RUN_UP_OVER_STROKE_LIMIT(WarningParameter.RUN_UP_STROKE, WarningParameter.STROKE_LIMIT,
-            WarningParameter.RUN_UP_BASIS);
+            WarningParameter.RUN_UP_BASIS),
+    /**
+     * An elastomer element whose compound loss factor misses the loss factor the hysteretic optimum
+     * needs, so that the peak with the compound's own loss factor exceeds the design's promised peak by
+     * more than the allowance (the utilisation is that peak over the allowed one).
+     */
+    ELASTOMER_LOSS_FACTOR_MISSED(WarningParameter.COMPOUND_LOSS_FACTOR, WarningParameter.LOSS_FACTOR_NEEDED,
+            WarningParameter.UTILISATION);
 
     private final List<WarningParameter> parameters;
 

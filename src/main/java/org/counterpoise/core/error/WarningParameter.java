@@ -38,6 +38,10 @@ public enum WarningParameter {
     STROKE_LIMIT(false),
     /** Which run-up stroke figure (a {@code core.design.RunUpStroke.Basis} name; a token). */
     RUN_UP_BASIS(true),
+    /** The loss factor of the elastomer compound the workshop will use (non-dimensional). */
+    COMPOUND_LOSS_FACTOR(false),
+    /** The loss factor the hysteretic optimum needs (non-dimensional). */
+    LOSS_FACTOR_NEEDED(false),
     /** The design method's id as files and the command line spell it (a token). */
     METHOD_ID(true),
     /** The band the exact-peak design minimises over for one forcing frequency (a {@link PeakBand} name). */

@@ -90,6 +90,15 @@ public final class WarningText {
                     + " exceeds the stroke limit of %s: the absorber will strike its stops at start and stop.",
                     millimetres(w.number(WarningParameter.RUN_UP_STROKE)), runUpBasis(w),
                     millimetres(w.number(WarningParameter.STROKE_LIMIT)));
+            case ELASTOMER_LOSS_FACTOR_MISSED -> String.format(Locale.ROOT, "The elastomer compound's loss factor"
+                    + " of %.3g is %s the %.3g the element needs: its peak response is %.3g times what the design"
+                    + " allows (its promised peak plus %s); choose a compound with a loss factor nearer %.3g at the"
+                    + " working frequency and temperature, or add a damper.",
+                    w.number(WarningParameter.COMPOUND_LOSS_FACTOR),
+                    w.number(WarningParameter.COMPOUND_LOSS_FACTOR) < w.number(WarningParameter.LOSS_FACTOR_NEEDED)
+                            ? "below" : "above", w.number(WarningParameter.LOSS_FACTOR_NEEDED),
+                    w.number(WarningParameter.UTILISATION), ValueText.percent(DesignResult.TOLERANCE_ALLOWANCE, 2),
+                    w.number(WarningParameter.LOSS_FACTOR_NEEDED));
         };
     }
 
