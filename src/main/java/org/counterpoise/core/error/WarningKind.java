@@ -78,7 +78,12 @@ public enum WarningKind {
     /** The forcing (with its margin) reaches a helical spring's surge frequency. */
     SPRING_SURGE(WarningParameter.UTILISATION),
     /** A helical spring's working compression leaves less than the standard's minimum gaps before solid. */
-    SPRING_GOES_SOLID(WarningParameter.UTILISATION);
+    SPRING_GOES_SOLID(WarningParameter.UTILISATION),
+    /**
+     * No helical springs of the chosen wire in stock sizes (up to the most in parallel) give the
+     * absorber's rate at all: the realisation has no spring.
+     */
+    SPRING_RATE_NOT_IN_STOCK(WarningParameter.SPRING_RATE);
 
     private final List<WarningParameter> parameters;
 

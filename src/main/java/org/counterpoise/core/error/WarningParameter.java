@@ -50,6 +50,8 @@ public enum WarningParameter {
     MASS_TOLERANCE(false),
     /** The absorber frequency tolerance, +/- fraction (non-dimensional). */
     FREQUENCY_TOLERANCE(false),
+    /** A spring rate, N/m. */
+    SPRING_RATE(false),
     /** The design method's id as files and the command line spell it (a token). */
     METHOD_ID(true),
     /** The band the exact-peak design minimises over for one forcing frequency (a {@link PeakBand} name). */
