@@ -85,7 +85,12 @@ public enum WarningKind {
      * more than the allowance (the utilisation is that peak over the allowed one).
      */
     ELASTOMER_LOSS_FACTOR_MISSED(WarningParameter.COMPOUND_LOSS_FACTOR, WarningParameter.LOSS_FACTOR_NEEDED,
-            WarningParameter.UTILISATION);
+            WarningParameter.UTILISATION),
+    /**
+     * No helical springs of the chosen wire in stock sizes (up to the most in parallel) give the
+     * absorber's rate at all: the realisation has no spring.
+     */
+    SPRING_RATE_NOT_IN_STOCK(WarningParameter.SPRING_RATE);
 
     private final List<WarningParameter> parameters;
 

@@ -54,6 +54,9 @@ public final class SpringSizing {
      */
     public static final double RATE_DEVIATION_BOUND = 0.0075;
 
+    /** The field {@link #size} names when no stock wire gives the rate at all. */
+    public static final String RATE_FIELD = "spring.rate";
+
     private SpringSizing() {
     }
 
@@ -95,7 +98,7 @@ public final class SpringSizing {
             }
         }
         if (fallback == null) {
-            throw new InvalidInputException("spring.rate", Checks.show(demand.rate()) + " N/m",
+            throw new InvalidInputException(RATE_FIELD, Checks.show(demand.rate()) + " N/m",
                     "a rate that " + counts.get(counts.size() - 1) + " helical springs of "
                             + choice.springMaterial().standard() + " wire in stock sizes can give; choose an"
                             + " elastomer element, or change the absorber");

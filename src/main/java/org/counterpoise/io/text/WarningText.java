@@ -5,6 +5,7 @@ import org.counterpoise.core.design.DesignMethod;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.RunUpStroke;
 import org.counterpoise.core.error.Warning;
+import org.counterpoise.core.realisation.HardwareChoice;
 import org.counterpoise.core.error.WarningParameter;
 import org.counterpoise.core.error.WarningParameter.PeakBand;
 import org.counterpoise.core.units.Unit;
@@ -123,6 +124,10 @@ public final class WarningText {
                             ? "below" : "above", w.number(WarningParameter.LOSS_FACTOR_NEEDED),
                     w.number(WarningParameter.UTILISATION), ValueText.percent(DesignResult.TOLERANCE_ALLOWANCE, 2),
                     w.number(WarningParameter.LOSS_FACTOR_NEEDED));
+            case SPRING_RATE_NOT_IN_STOCK -> String.format(Locale.ROOT, "No helical springs of the chosen wire in"
+                    + " stock sizes, up to %d in parallel, give the spring rate of %s: the part list has no spring;"
+                    + " choose an elastomer element, another wire, or a lighter absorber.", HardwareChoice.MOST_SPRINGS,
+                    QuantityFormat.format(w.number(WarningParameter.SPRING_RATE), Unit.KILONEWTON_PER_METRE));
         };
     }
 

@@ -15,6 +15,8 @@ import java.util.concurrent.Future;
 import java.util.concurrent.atomic.AtomicInteger;
 import org.counterpoise.core.design.DesignDossier;
 import org.counterpoise.core.design.DesignResult;
+import org.counterpoise.core.error.WarningKind;
+import org.counterpoise.core.error.WarningParameter;
 import org.counterpoise.core.realisation.StepFigure.StepQuantity;
 import org.counterpoise.io.project.ProjectReader;
 import org.junit.jupiter.api.Test;
@@ -39,11 +41,54 @@ class RealiserTest {
             assertTrue(!step.figures().isEmpty(), step.kind() + " has no figures");
             step.figures().forEach(f -> assertTrue(Double.isFinite(f.value()), preset + ": " + f));
         }
-        assertEquals(r.damper().checks(), r.checks());
+        assertTrue(r.elastomer().isEmpty());
+        List<DesignCheck> all = new ArrayList<>();
+        // the default choice is helical springs; none only when no stock wire gives the rate, with its warning
+        boolean noSpring = r.warnings().stream().anyMatch(w -> w.kind() == WarningKind.SPRING_RATE_NOT_IN_STOCK);
+        assertEquals(noSpring, r.spring().isEmpty(), preset.toString());
+        r.spring().ifPresent(spring -> {
+            all.addAll(spring.checks());
+            // the springs realise the design's rate (the sizing rounds the coil diameter to a workshop step)
+            assertEquals(d.absorber().stiffness(), spring.totalRate(),
+                    SpringSizing.RATE_DEVIATION_BOUND * d.absorber().stiffness());
+        });
+        all.addAll(r.damper().checks());
+        assertEquals(all, r.checks());
         assertTrue(Double.isFinite(r.damper().peakForce()) && r.damper().peakForce() >= 0, preset.toString());
         assertTrue(r.trim().platesTotal() >= r.trim().platesFitted() && r.trim().platesFitted() >= 0);
         r.predicted().forEach(p -> assertTrue(Double.isFinite(p.before()) && Double.isFinite(p.after())
                 && Double.isFinite(p.stroke()), preset + ": " + p));
+    }
+
+    @Test
+    void aRateNoStockSpringGivesLeavesTheRestOfTheRealisationWithAWarning() {
+        // the compressor frame's absorber asks for about 50 MN/m, beyond 8 springs of the stock wire sizes
+        DesignResult stiff = Presets.design(Path.of("presets", "compressor-frame-speed-band.json"));
+        Realisation r = Realiser.realise(stiff, HardwareChoice.DEFAULT);
+        assertTrue(r.spring().isEmpty());
+        assertEquals(List.of(WarningKind.SPRING_RATE_NOT_IN_STOCK), r.warnings().stream().map(w -> w.kind())
+                .filter(k -> k == WarningKind.SPRING_RATE_NOT_IN_STOCK).toList());
+        assertEquals(stiff.absorber().stiffness(), r.warnings().stream()
+                .filter(w -> w.kind() == WarningKind.SPRING_RATE_NOT_IN_STOCK).findFirst().orElseThrow()
+                .number(WarningParameter.SPRING_RATE), 0.0);
+        assertEquals(7, r.procedure().size());
+        assertEquals(r.damper().checks(), r.checks());
+    }
+
+    @Test
+    void theSpringDemandOfTheFanByHand() {
+        DesignResult fan = Presets.fan(); // hangs vertically: the absorber rests on its springs
+        SpringDemand demand = Realiser.springDemand(fan, HardwareChoice.DEFAULT);
+        assertEquals(fan.absorber().stiffness(), demand.rate(), 0.0);
+        // weight m2 g with standard gravity 9.80665 m/s^2: 90 kg -> 882.60 N
+        assertEquals(90 * 9.80665, demand.staticLoad(), 1e-9);
+        // the run-up stroke (0.5186 mm at 723.4 kN/m = 375.2 N) is worse than the band's spring force (331.9 N)
+        assertEquals(fan.absorber().stiffness() * fan.strokeRunUp().value(), demand.dynamicLoad(), 1e-9);
+        assertTrue(demand.dynamicLoad() > fan.springForce().value());
+        assertEquals(375.2, demand.dynamicLoad(), 0.1);
+        // 50 000 h at the top of the band, 900 rpm = 15 Hz: 50 000 * 3600 * 15 = 2.7e9 cycles
+        assertEquals(fan.study().excitation().band().high(), demand.forcingFrequency(), 0.0);
+        assertEquals(2.7e9, demand.serviceCycles(), 1e-3 * 2.7e9);
     }
 
     @Test
