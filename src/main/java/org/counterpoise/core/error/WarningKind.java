@@ -78,7 +78,9 @@ public enum WarningKind {
     /** The forcing (with its margin) reaches a helical spring's surge frequency. */
     SPRING_SURGE(WarningParameter.UTILISATION),
     /** A helical spring's working compression leaves less than the standard's minimum gaps before solid. */
-    SPRING_GOES_SOLID(WarningParameter.UTILISATION);
+    SPRING_GOES_SOLID(WarningParameter.UTILISATION),
+    /** No helical springs of stock wire give the design's rate: the closest are shown, off by this much. */
+    SPRING_RATE_NOT_MET(WarningParameter.RATE_DEVIATION);
 
     private final List<WarningParameter> parameters;
 

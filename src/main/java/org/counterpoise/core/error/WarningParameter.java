@@ -50,6 +50,8 @@ public enum WarningParameter {
     MASS_TOLERANCE(false),
     /** The absorber frequency tolerance, +/- fraction (non-dimensional). */
     FREQUENCY_TOLERANCE(false),
+    /** The springs' total rate over the rate the design needs, minus one (non-dimensional). */
+    RATE_DEVIATION(false),
     /** The design method's id as files and the command line spell it (a token). */
     METHOD_ID(true),
     /** The band the exact-peak design minimises over for one forcing frequency (a {@link PeakBand} name). */

@@ -114,6 +114,10 @@ public final class WarningText {
                     + " frequency: its coils would resonate");
             case SPRING_GOES_SOLID -> spring(w, "the spring's working compression is", "the compression it has before"
                     + " its coils close: it would strike solid");
+            case SPRING_RATE_NOT_MET -> String.format(Locale.ROOT, "No helical springs of stock wire give the rate the"
+                    + " design needs: the closest, shown, are %s %s; choose an elastomer element or another absorber.",
+                    ValueText.percent(Math.abs(w.number(WarningParameter.RATE_DEVIATION)), 2),
+                    w.number(WarningParameter.RATE_DEVIATION) < 0 ? "too soft" : "too stiff");
         };
     }
 
