@@ -79,6 +79,13 @@ public enum WarningKind {
     SPRING_SURGE(WarningParameter.UTILISATION),
     /** A helical spring's working compression leaves less than the standard's minimum gaps before solid. */
     SPRING_GOES_SOLID(WarningParameter.UTILISATION),
+    /**
+     * An elastomer element whose compound loss factor misses the loss factor the hysteretic optimum
+     * needs, so that the peak with the compound's own loss factor exceeds the design's promised peak by
+     * more than the allowance (the utilisation is that peak over the allowed one).
+     */
+    ELASTOMER_LOSS_FACTOR_MISSED(WarningParameter.COMPOUND_LOSS_FACTOR, WarningParameter.LOSS_FACTOR_NEEDED,
+            WarningParameter.UTILISATION),
     /** No helical springs of stock wire give the design's rate: the closest are shown, off by this much. */
     SPRING_RATE_NOT_MET(WarningParameter.RATE_DEVIATION);
 
