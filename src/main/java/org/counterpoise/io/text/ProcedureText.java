@@ -106,7 +106,7 @@ public final class ProcedureText {
             case CLEARANCE -> "clearance";
             case RUNNING_FREQUENCY -> "running frequency";
             case PREDICTED_RESPONSE -> "predicted response";
-            case PREDICTED_PEAK_IN_BAND -> "predicted peak in band";
+            case PREDICTED_PEAK_IN_BAND -> "predicted peak in the band";
             case TRIM_PLATE_MASS -> "trim plate mass";
             case PLATES_PER_PERCENT -> "plates per percent of frequency";
         };
