@@ -3,19 +3,14 @@ package org.counterpoise.io.sheet;
 import de.rototor.pdfbox.graphics2d.PdfBoxGraphics2D;
 import java.awt.Color;
 import java.io.IOException;
-import java.io.InputStream;
 import java.io.OutputStream;
 import java.util.ArrayList;
-import java.util.HashMap;
 import java.util.List;
-import java.util.Map;
 import org.apache.pdfbox.pdmodel.PDDocument;
 import org.apache.pdfbox.pdmodel.PDPage;
 import org.apache.pdfbox.pdmodel.PDPageContentStream;
 import org.apache.pdfbox.pdmodel.common.PDRectangle;
-import org.apache.pdfbox.pdmodel.font.PDType0Font;
 import org.apache.pdfbox.pdmodel.graphics.form.PDFormXObject;
-import org.apache.pdfbox.pdmodel.graphics.state.RenderingMode;
 import org.apache.pdfbox.util.Matrix;
 import org.counterpoise.io.chart.ChartFactory;
 import org.counterpoise.io.text.ReportTable;
@@ -47,15 +42,16 @@ public final class SheetWriter {
     private static final float BODY = 9.5f;
     private static final float LINE = 12.5f;
     private static final Color INK = new Color(0x1d, 0x23, 0x2b);
-    private static final Color MUTED = new Color(0x6b, 0x72, 0x7c);
-    private static final Color ACCENT = new Color(0x0b, 0x6e, 0x69);
-    private static final Color RULE = new Color(0xd5, 0xd9, 0xde);
-    private static final String FONT_RESOURCE = "/org/apache/pdfbox/resources/ttf/LiberationSans-Regular.ttf";
+    // dark enough to stay readable when printed in black and white
+    private static final Color MUTED = new Color(0x4a, 0x50, 0x58);
+    private static final Color ACCENT = new Color(0x0b, 0x5a, 0x56);
+    private static final Color RULE = new Color(0x9a, 0xa0, 0xa8);
+    /** The lowest baseline of the flowing content, above the title block, points. */
+    private static final float BOTTOM = TitleBlock.BOTTOM + TitleBlock.HEIGHT + 14f;
 
     private final PDDocument document;
-    private final PDType0Font font;
+    private final SheetType type;
     private final SheetContent content;
-    private final Map<Integer, Boolean> printable = new HashMap<>();
     private final List<PDPage> pages = new ArrayList<>();
     private PDPageContentStream stream;
     private float y;
@@ -63,12 +59,7 @@ public final class SheetWriter {
     private SheetWriter(PDDocument document, SheetContent content) throws IOException {
         this.document = document;
         this.content = content;
-        try (InputStream in = SheetWriter.class.getResourceAsStream(FONT_RESOURCE)) {
-            if (in == null) {
-                throw new IOException("the sheet font " + FONT_RESOURCE + " is missing from the PDFBox library");
-            }
-            this.font = PDType0Font.load(document, in);
-        }
+        this.type = new SheetType(document);
     }
 
     /**
@@ -105,8 +96,10 @@ public final class SheetWriter {
         newPage();
         heading(clean(content.projectName()), 17f, INK);
         y -= 8;
-        say("Absorber parameter sheet \u00b7 issued " + content.date() + " \u00b7 revision " + content.revision(), MARGIN,
-                9f, MUTED, false);
+        String document = content.identity().documentNumber().isEmpty() ? ""
+                : " \u00b7 document " + content.identity().documentNumber();
+        say("Absorber parameter sheet" + document + " \u00b7 issued " + content.date() + " \u00b7 revision "
+                + content.revision(), MARGIN, 9f, MUTED, false);
         y -= LINE;
         if (!content.notes().isBlank()) {
             for (String line : wrap(clean(content.notes()), WIDTH - 2 * MARGIN, 8.5f)) {
@@ -114,18 +107,25 @@ public final class SheetWriter {
                 y -= 11;
             }
         }
+        IdentityBlocks.draw(this, content);
         for (ReportTable.Section section : content.sections()) {
             section(section);
+        }
+        if (content.sketch().isPresent()) {
+            SketchFigures sketch = content.sketch().get();
+            float height = ArrangementSketch.height(type, sketch, WIDTH - 2 * MARGIN);
+            ensure(height + 40);
+            title("Arrangement (schematic, not to scale; the figures are)");
+            ArrangementSketch.draw(stream, type, sketch, MARGIN, y, WIDTH - 2 * MARGIN);
+            y -= height + 8;
         }
         if (content.comparison().isPresent()) {
             comparison(content.comparison().get());
         }
         float chartWidth = WIDTH - 2 * MARGIN;
-        float chartHeight = 300f;
-        ensure(chartHeight + 40);
-        y -= 6;
-        heading("Response with and without the absorber", 11.5f, ACCENT);
-        rule();
+        float chartHeight = 290f;
+        ensure(chartHeight + 60);
+        title("Response with and without the absorber");
         charts(charts, chartWidth, chartHeight);
         for (SheetPanel panel : panels) {
             if (!panel.charts().isEmpty()) {
@@ -185,7 +185,9 @@ public final class SheetWriter {
     void cells(List<String> cells, float[] lefts, boolean head) throws IOException {
         ensure(LINE);
         for (int i = 0; i < cells.size() && i < lefts.length; i++) {
-            say(cells.get(i), lefts[i], BODY, head ? ACCENT : i == 0 ? MUTED : INK, head);
+            float right = i + 1 < lefts.length ? lefts[i + 1] - 6 : WIDTH - MARGIN;
+            say(type.fit(cells.get(i), right - lefts[i], BODY), lefts[i], BODY, head ? ACCENT : i == 0 ? MUTED : INK,
+                    head);
         }
         y -= LINE;
     }
@@ -321,24 +323,15 @@ public final class SheetWriter {
     }
 
     private void say(String text, float x, float size, Color color, boolean bold) throws IOException {
-        stream.beginText();
-        stream.setFont(font, size);
-        stream.setNonStrokingColor(color);
-        if (bold) {
-            // Liberation Sans ships in regular weight only: a thin outline makes it semi-bold.
-            stream.setRenderingMode(RenderingMode.FILL_STROKE);
-            stream.setStrokingColor(color);
-            stream.setLineWidth(size * 0.035f);
-        } else {
-            stream.setRenderingMode(RenderingMode.FILL);
-        }
-        stream.newLineAtOffset(x, y);
-        stream.showText(clean(text));
-        stream.endText();
+        type.show(stream, text, x, y, size, color, bold);
     }
 
-    private void ensure(float needed) throws IOException {
-        if (y - needed < MARGIN + 26) {
+    /**
+     * Starts a new page when fewer than {@code needed} points are left above the title block.
+     * @param needed the height the next block takes, points
+     */
+    void ensure(float needed) throws IOException {
+        if (y - needed < BOTTOM) {
             newPage();
         }
     }
@@ -351,70 +344,50 @@ public final class SheetWriter {
         document.addPage(page);
         pages.add(page);
         stream = new PDPageContentStream(document, page);
-        y = HEIGHT - MARGIN;
-        say("Counterpoise \u00b7 absorber parameter sheet", MARGIN, 8f, MUTED, false);
-        String right = clean(content.projectName()) + " \u00b7 rev " + content.revision();
-        say(right, WIDTH - MARGIN - width(right, 8f), 8f, MUTED, false);
-        y -= 18;
+        y = HEIGHT - 40f;
     }
 
+    /** The title block on every page, once the number of pages is known. */
     private void footers() throws IOException {
         int n = pages.size();
         for (int i = 0; i < n; i++) {
             try (PDPageContentStream s = new PDPageContentStream(document, pages.get(i),
                     PDPageContentStream.AppendMode.APPEND, true, true)) {
-                stream = s;
-                y = MARGIN - 14;
-                stream.setStrokingColor(RULE);
-                stream.setLineWidth(0.6f);
-                stream.moveTo(MARGIN, MARGIN);
-                stream.lineTo(WIDTH - MARGIN, MARGIN);
-                stream.stroke();
-                say("Preliminary design aid. Verify by measurement; local codes and licensed engineering practice"
-                        + " govern.", MARGIN, 7.5f, MUTED, false);
-                String page = "page " + (i + 1) + " of " + n;
-                say(page, WIDTH - MARGIN - width(page, 7.5f), 7.5f, MUTED, false);
+                TitleBlock.draw(s, type, content, i + 1, n);
             }
         }
         stream = null;
     }
 
+    /** @return the current page's content stream */
+    PDPageContentStream stream() {
+        return stream;
+    }
+
+    /** @return the sheet's type */
+    SheetType type() {
+        return type;
+    }
+
+    /** @return the baseline of the next line, points from the page's foot */
+    float y() {
+        return y;
+    }
+
+    /** @param points how far to move the next line down */
+    void down(float points) {
+        y -= points;
+    }
+
     private List<String> wrap(String text, float maxWidth, float size) throws IOException {
-        List<String> lines = new ArrayList<>();
-        StringBuilder line = new StringBuilder();
-        for (String word : text.split(" ")) {
-            String candidate = line.length() == 0 ? word : line + " " + word;
-            if (width(candidate, size) > maxWidth && line.length() > 0) {
-                lines.add(line.toString());
-                line = new StringBuilder(word);
-            } else {
-                line = new StringBuilder(candidate);
-            }
-        }
-        if (line.length() > 0) {
-            lines.add(line.toString());
-        }
-        return lines;
+        return type.wrap(text, maxWidth, size);
     }
 
     private float width(String text, float size) throws IOException {
-        return font.getStringWidth(clean(text)) / 1000f * size;
+        return type.width(text, size);
     }
 
-    /** Replaces characters the font cannot show by '?', so a name in any script never breaks the sheet. */
     private String clean(String text) {
-        StringBuilder out = new StringBuilder(text.length());
-        text.codePoints().forEach(cp -> {
-            boolean ok = printable.computeIfAbsent(cp, c -> {
-                try {
-                    font.encode(new String(Character.toChars(c)));
-                    return true;
-                } catch (IllegalArgumentException | IOException e) {
-                    return false;
-                }
-            });
-            out.append(ok ? new String(Character.toChars(cp)) : "?");
-        });
-        return out.toString();
+        return type.clean(text);
     }
 }
