@@ -23,6 +23,8 @@ final class ArrangementSketch {
     private static final float PLATE = 4f;
     private static final int MOST_PLATES_DRAWN = 6;
     private static final float GAP = 8f;
+    /** Drawn length of the far springs of opposed pairs, points. */
+    private static final float OPPOSED = 64f;
     private static final float PAD = 6f;
     private static final float POST = MASS_HALF + 16f;
     private static final float DIMENSION = POST + 18f;
@@ -56,7 +58,7 @@ final class ArrangementSketch {
             pen.hatch(0, -40, springEnd, 40, 5f);
             sideLabel(pen, "k, c", springEnd * 0.5f, -40f);
         } else {
-            springs(pen, f.springCount(), springEnd);
+            springs(pen, f.opposed() ? f.springCount() / 2 : f.springCount(), springEnd, 0);
             damper(pen, f.damperKind(), springEnd);
         }
         float massTop = springEnd + MASS_HEIGHT;
@@ -69,7 +71,14 @@ final class ArrangementSketch {
         if (plates > 0) {
             pen.label("trim", massTop + plates * PLATE + 7, -MASS_HALF + 34, LABEL - 1);
         }
-        stops(pen, springEnd, massTop);
+        stops(pen, springEnd, massTop, f.opposed() ? massTop + plates * PLATE + OPPOSED : 0);
+        if (f.opposed()) {
+            // the other half of each pair, between the mass and a cross-bar on the stop posts
+            float from = massTop + plates * PLATE;
+            springs(pen, f.springCount() / 2, OPPOSED, from);
+            pen.line(from + OPPOSED, -POST, from + OPPOSED, POST, SketchPen.HEAVY * 1.4f);
+            pen.hatch(from + OPPOSED, -POST, from + OPPOSED + 6, POST, 6f);
+        }
         dimensions(pen, f, springEnd, massTop);
         legend(stream, type, f, left, legendTop, width);
     }
@@ -85,7 +94,7 @@ final class ArrangementSketch {
         }
     }
 
-    private static void springs(SketchPen pen, int count, float end) throws IOException {
+    private static void springs(SketchPen pen, int count, float length, float from) throws IOException {
         float[] at = switch (Math.min(count, 4)) {
             case 1 -> new float[] {-40};
             case 2 -> new float[] {-45, 45};
@@ -93,9 +102,9 @@ final class ArrangementSketch {
             default -> new float[] {-50, -28, 28, 50};
         };
         for (float b : at) {
-            pen.spring(0, end, b, 7f, 6);
+            pen.spring(from, from + length, b, 7f, 6);
         }
-        sideLabel(pen, count > 4 ? "k (" + count + " springs)" : "k", end * 0.5f, at[0] - 8f);
+        sideLabel(pen, count > 4 ? "k (" + count + " springs)" : "k", from + length * 0.5f, at[0] - 8f);
     }
 
     private static void damper(SketchPen pen, DamperKind kind, float end) throws IOException {
@@ -119,14 +128,14 @@ final class ArrangementSketch {
     }
 
     /** The stops: a post on each side with a pad facing each face of the mass at the clearance. */
-    private static void stops(SketchPen pen, float massBottom, float massFace) throws IOException {
+    private static void stops(SketchPen pen, float massBottom, float massFace, float postEnd) throws IOException {
         for (int side = -1; side <= 1; side += 2) {
             float post = side * POST;
             float inner = side * (MASS_HALF - 8);
             float outer = side * (MASS_HALF + 4);
             float farPad = massFace + GAP;
             float nearPad = massBottom - GAP;
-            pen.line(0, post, farPad + PAD + 3, post, SketchPen.HEAVY);
+            pen.line(0, post, Math.max(farPad + PAD + 3, postEnd), post, SketchPen.HEAVY);
             pen.box(farPad + PAD, post, farPad + PAD + 3, inner, SketchPen.THIN, true);
             pen.box(farPad, inner, farPad + PAD, outer, SketchPen.THIN, true);
             pen.hatch(farPad, inner, farPad + PAD, outer, 2.5f);
@@ -171,7 +180,7 @@ final class ArrangementSketch {
     }
 
     private static float drawingHeight(SketchFigures f) {
-        return f.vertical() ? 215f : 2 * (DIMENSION + 6) + 40f;
+        return f.vertical() ? 215f + (f.opposed() ? OPPOSED + 10 : 0) : 2 * (DIMENSION + 6) + 40f;
     }
 
     private static float legendHeight(SheetType type, SketchFigures f, float width) throws IOException {

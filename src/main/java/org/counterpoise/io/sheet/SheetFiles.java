@@ -177,8 +177,9 @@ public final class SheetFiles {
     public static void writeSheet(DesignDossier dossier, String notes, String date, String revision,
             ProjectIdentity identity, List<SheetPanel> panels, AmplitudeConvention convention, HardwareChoice hardware,
             UnitSystem units, OutputStream out) throws IOException {
-        SheetWriter.write(content(dossier, notes, date, revision, identity, convention, hardware, units),
-                charts(dossier.design(), dossier.curves(), convention), panels, out);
+        List<XYChart> charts = charts(dossier.design(), dossier.curves(), convention);
+        SheetWriter.write(() -> content(dossier, notes, date, revision, identity, convention, hardware, units),
+                charts, panels, out);
     }
 
     private static SheetContent content(DesignDossier dossier, String notes, String date, String revision,
@@ -282,8 +283,8 @@ public final class SheetFiles {
         public Outputs sheet(Path pdf, String notes, String date, String revision, String option,
                 ProjectIdentity identity) {
             return add(pdf, "sheet", option, out -> SheetWriter.write(
-                    content(dossier, notes, date, revision, identity, convention, hardware, units), charts(), panels,
-                    out));
+                    () -> content(dossier, notes, date, revision, identity, convention, hardware, units), charts(),
+                    panels, out));
         }
 
         /**

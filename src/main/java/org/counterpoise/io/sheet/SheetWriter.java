@@ -3,9 +3,15 @@ package org.counterpoise.io.sheet;
 import de.rototor.pdfbox.graphics2d.PdfBoxGraphics2D;
 import java.awt.Color;
 import java.io.IOException;
+import java.io.InterruptedIOException;
 import java.io.OutputStream;
 import java.util.ArrayList;
+import java.util.IdentityHashMap;
 import java.util.List;
+import java.util.Map;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.FutureTask;
+import java.util.function.Supplier;
 import org.apache.pdfbox.pdmodel.PDDocument;
 import org.apache.pdfbox.pdmodel.PDPage;
 import org.apache.pdfbox.pdmodel.PDPageContentStream;
@@ -36,6 +42,8 @@ public final class SheetWriter {
     /** Page width, points. */
     static final float WIDTH = PDRectangle.A4.getWidth();
     private static final float HEIGHT = PDRectangle.A4.getHeight();
+    private static final float CHART_WIDTH = WIDTH - 2 * MARGIN;
+    private static final float CHART_HEIGHT = 290f;
     private static final float VALUE_RIGHT = 420f;
     private static final float UNIT_LEFT = 426f;
     private static final float TEXT_LEFT = 262f;
@@ -53,13 +61,16 @@ public final class SheetWriter {
     private final SheetType type;
     private final SheetContent content;
     private final List<PDPage> pages = new ArrayList<>();
+    private final Map<XYChart, PDFormXObject> forms;
     private PDPageContentStream stream;
     private float y;
 
-    private SheetWriter(PDDocument document, SheetContent content) throws IOException {
+    private SheetWriter(PDDocument document, SheetType type, SheetContent content,
+            Map<XYChart, PDFormXObject> forms) {
         this.document = document;
         this.content = content;
-        this.type = new SheetType(document);
+        this.type = type;
+        this.forms = forms;
     }
 
     /**
@@ -83,13 +94,70 @@ public final class SheetWriter {
      */
     public static void write(SheetContent content, List<XYChart> charts, List<SheetPanel> panels, OutputStream out)
             throws IOException {
+        write(() -> content, charts, panels, out);
+    }
+
+    /**
+     * Writes the sheet while its content is still being made: the content is made on a thread of
+     * its own (the analyses it prints: Monte Carlo, method comparison, hardware) while this thread
+     * sets up the document, its font and the charts' vector forms (docs/performance.md).
+     * @param content makes the sheet content (any exception it throws is rethrown here as it is)
+     * @param charts the charts to print, in order (each takes half a page)
+     * @param panels further pages, in order
+     * @param out where the PDF goes
+     * @throws IOException when it cannot be written
+     */
+    public static void write(Supplier<SheetContent> content, List<XYChart> charts, List<SheetPanel> panels,
+            OutputStream out) throws IOException {
+        FutureTask<SheetContent> making = new FutureTask<>(content::get);
+        Thread maker = new Thread(making, "sheet-content");
+        maker.setDaemon(true);
+        maker.start();
         try (PDDocument document = new PDDocument()) {
-            document.getDocumentInformation().setTitle("Absorber parameter sheet: " + content.projectName());
+            SheetType type = new SheetType(document);
+            Map<XYChart, PDFormXObject> forms = new IdentityHashMap<>();
+            for (XYChart chart : charts) {
+                forms.put(chart, form(document, chart));
+            }
+            for (SheetPanel panel : panels) {
+                for (XYChart chart : panel.charts()) {
+                    forms.put(chart, form(document, chart));
+                }
+            }
+            SheetContent made = made(making);
+            document.getDocumentInformation().setTitle("Absorber parameter sheet: " + made.projectName());
             document.getDocumentInformation().setCreator("Counterpoise");
-            SheetWriter w = new SheetWriter(document, content);
-            w.layout(charts, panels);
+            new SheetWriter(document, type, made, forms).layout(charts, panels);
             document.save(out);
+        } finally {
+            making.cancel(true);
         }
+    }
+
+    private static SheetContent made(FutureTask<SheetContent> making) throws IOException {
+        try {
+            return making.get();
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new InterruptedIOException("the sheet was interrupted while its content was being made");
+        } catch (ExecutionException e) {
+            Throwable cause = e.getCause();
+            if (cause instanceof RuntimeException runtime) {
+                throw runtime;
+            }
+            if (cause instanceof Error error) {
+                throw error;
+            }
+            throw new IOException(cause);
+        }
+    }
+
+    /** A chart as a vector form of the width and height every chart of the sheet has. */
+    private static PDFormXObject form(PDDocument document, XYChart chart) throws IOException {
+        PdfBoxGraphics2D g = new PdfBoxGraphics2D(document, CHART_WIDTH, CHART_HEIGHT);
+        chart.paint(g, (int) CHART_WIDTH, (int) CHART_HEIGHT);
+        g.dispose();
+        return g.getXFormObject();
     }
 
     private void layout(List<XYChart> charts, List<SheetPanel> panels) throws IOException {
@@ -122,11 +190,9 @@ public final class SheetWriter {
         if (content.comparison().isPresent()) {
             comparison(content.comparison().get());
         }
-        float chartWidth = WIDTH - 2 * MARGIN;
-        float chartHeight = 290f;
-        ensure(chartHeight + 60);
+        ensure(CHART_HEIGHT + 60);
         title("Response with and without the absorber");
-        charts(charts, chartWidth, chartHeight);
+        charts(charts);
         for (SheetPanel panel : panels) {
             if (!panel.charts().isEmpty()) {
                 newPage(); // a page with charts starts on its own; a sentence follows the charts above
@@ -144,12 +210,12 @@ public final class SheetWriter {
     }
 
     /** Draws charts one under the other, each followed by the notes of what it cannot draw. */
-    void charts(List<XYChart> charts, float chartWidth, float chartHeight) throws IOException {
+    void charts(List<XYChart> charts) throws IOException {
         for (XYChart chart : charts) {
             List<String> notes = ChartFactory.notes(chart);
-            ensure(chartHeight + 10 + notes.size() * LINE);
-            drawChart(chart, MARGIN, y - chartHeight, chartWidth, chartHeight);
-            y -= chartHeight + 14;
+            ensure(CHART_HEIGHT + 10 + notes.size() * LINE);
+            drawChart(chart, MARGIN, y - CHART_HEIGHT);
+            y -= CHART_HEIGHT + 14;
             // What the chart cannot draw (an unbounded resonance) is also said in the text.
             for (String note : notes) {
                 say("Note: " + note + "; drawn to the top of the chart.", MARGIN, 8.5f, INK, false);
@@ -311,11 +377,11 @@ public final class SheetWriter {
         y -= LINE - 4;
     }
 
-    private void drawChart(XYChart chart, float x, float bottom, float w, float h) throws IOException {
-        PdfBoxGraphics2D g = new PdfBoxGraphics2D(document, w, h);
-        chart.paint(g, (int) w, (int) h);
-        g.dispose();
-        PDFormXObject form = g.getXFormObject();
+    private void drawChart(XYChart chart, float x, float bottom) throws IOException {
+        PDFormXObject form = forms.get(chart);
+        if (form == null) {
+            form = form(document, chart);
+        }
         stream.saveGraphicsState();
         stream.transform(Matrix.getTranslateInstance(x, bottom));
         stream.drawForm(form);

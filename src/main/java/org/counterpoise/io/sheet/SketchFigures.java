@@ -8,6 +8,7 @@ import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.realisation.DamperKind;
 import org.counterpoise.core.realisation.ProcedureStep;
 import org.counterpoise.core.realisation.Realisation;
+import org.counterpoise.core.realisation.SpringArrangement;
 import org.counterpoise.core.realisation.SpringDesign;
 import org.counterpoise.core.realisation.SpringKind;
 import org.counterpoise.core.realisation.StepFigure;
@@ -24,6 +25,7 @@ import org.counterpoise.io.text.UnitSystem;
  *     sketch stands on the structure; false: the absorber moves sideways on a guide
  * @param springKind helical springs or an elastomer element
  * @param springCount springs in parallel (1 for an elastomer element)
+ * @param opposed true when the springs stand in opposed preloaded pairs, half on each side of the mass
  * @param damperKind how the damping is realised
  * @param mass the absorber mass, as text ("42.0 kg")
  * @param trimFitted trim plates fitted as built (0 when there is no trim plan)
@@ -34,7 +36,8 @@ import org.counterpoise.io.text.UnitSystem;
  * @param freeOverInstalled free length over installed length (1 when not known), for the drawing's proportions
  * @param legend the lines printed under the sketch (what each symbol stands for, with its figures)
  */
-public record SketchFigures(boolean vertical, SpringKind springKind, int springCount, DamperKind damperKind,
+public record SketchFigures(boolean vertical, SpringKind springKind, int springCount, boolean opposed,
+        DamperKind damperKind,
         String mass, int trimFitted, int trimTotal, String clearance, Optional<String> freeLength,
         Optional<String> installedLength, double freeOverInstalled, List<Legend> legend) {
 
@@ -81,7 +84,8 @@ public record SketchFigures(boolean vertical, SpringKind springKind, int springC
             legend.add(new Legend("k", "elastomer element, rate " + rate(r.absorber().stiffness(), units)));
         } else {
             legend.add(new Legend("k", (count == 1 ? "helical compression spring" : count + " helical compression springs"
-                    + " in parallel") + ", total rate " + rate(r.absorber().stiffness(), units)));
+                    + (spring.get().arrangement() == SpringArrangement.OPPOSED_PRELOADED_PAIRS
+                            ? " in opposed preloaded pairs" : " in parallel")) + ", total rate " + rate(r.absorber().stiffness(), units)));
         }
         legend.add(new Legend("c", switch (damperKind) {
             case VISCOUS_DASHPOT -> "viscous dashpot, ";
@@ -95,8 +99,13 @@ public record SketchFigures(boolean vertical, SpringKind springKind, int springC
         if (sag.isPresent()) {
             legend.add(new Legend("", "static deflection under the absorber's weight " + length(sag.getAsDouble(), units)));
         }
+        if (!r.study().hangsVertically()) {
+            legend.add(new Legend("", "the absorber moves along its axis on a guide (not drawn) that carries its"
+                    + " weight"));
+        }
+        boolean opposed = spring.map(s -> s.arrangement() == SpringArrangement.OPPOSED_PRELOADED_PAIRS).orElse(false);
         return new SketchFigures(r.study().hangsVertically(), springKind,
-                springKind == SpringKind.ELASTOMER ? 1 : count, damperKind, mass,
+                springKind == SpringKind.ELASTOMER ? 1 : count, opposed && count >= 2, damperKind, mass,
                 trim.map(TrimPlan::platesFitted).orElse(0), trim.map(TrimPlan::platesTotal).orElse(0),
                 length(clearance, units), free, installed, Double.isFinite(ratio) && ratio > 0 ? ratio : 1.0, legend);
     }

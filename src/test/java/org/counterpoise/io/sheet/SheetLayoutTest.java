@@ -20,9 +20,16 @@ import org.apache.pdfbox.pdmodel.PDPageContentStream;
 import org.apache.pdfbox.pdmodel.common.PDRectangle;
 import org.apache.pdfbox.text.PDFTextStripper;
 import org.apache.pdfbox.text.TextPosition;
+import org.counterpoise.core.criteria.AmplitudeConvention;
 import org.counterpoise.core.design.DesignDossier;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.progress.ProgressListener;
+import org.counterpoise.core.realisation.HardwareChoice;
+import org.counterpoise.core.realisation.Realisation;
+import org.counterpoise.core.realisation.Realiser;
+import org.counterpoise.core.realisation.SpringArrangement;
+import org.counterpoise.core.realisation.SpringDesign;
+import org.counterpoise.core.realisation.SpringMaterial;
 import org.counterpoise.io.project.LoadedProject;
 import org.counterpoise.io.project.ProjectIdentity;
 import org.counterpoise.io.project.ProjectReader;
@@ -62,15 +69,7 @@ class SheetLayoutTest {
         try (PDDocument doc = Loader.loadPDF(pdf.toByteArray())) {
             int pages = doc.getNumberOfPages();
             for (int page = 1; page <= pages; page++) {
-                List<Word> glyphs = words(doc, page);
-                for (int i = 0; i < glyphs.size(); i++) {
-                    Word a = glyphs.get(i);
-                    for (int j = i + 1; j < glyphs.size() && glyphs.get(j).top < a.bottom; j++) {
-                        Word b = glyphs.get(j);
-                        assertTrue(!a.overlaps(b), preset.getFileName() + " page " + page + ": \"" + a.text
-                                + "\" at " + a + " overlaps \"" + b.text + "\" at " + b);
-                    }
-                }
+                assertNoOverlap(doc, page, preset.getFileName().toString());
                 String text = pageText(doc, page);
                 assertTrue(text.contains(page + " of " + pages), "page " + page + " has its number in the title block");
                 assertTrue(text.contains("CP-0042-S") && text.contains("Invented client, test site"),
@@ -115,6 +114,42 @@ class SheetLayoutTest {
     }
 
     @Test
+    void theSketchWithSpringsOverlapsNothing() throws IOException {
+        // springs built by hand (the spring sizing is another part's): seated and opposed pairs,
+        // vertical and horizontal, SI and US customary; the dimensions and the legend must not collide
+        for (String name : List.of("pump-skid-mezzanine", "bench-beside-compressor")) {
+            LoadedProject loaded = ProjectReader.read(Path.of("presets", name + ".json"));
+            DesignDossier dossier = DesignDossier.of(loaded.project().toStudy());
+            DesignResult r = dossier.design();
+            Realisation base = Realiser.realise(r, HardwareChoice.DEFAULT);
+            for (SpringArrangement arrangement : SpringArrangement.values()) {
+                for (UnitSystem units : UnitSystem.values()) {
+                    int count = arrangement == SpringArrangement.SEATED ? 3 : 4;
+                    SpringDesign spring = new SpringDesign(SpringMaterial.EN10270_1_DH, count, 0.006, 0.040, 6.5, 8.5,
+                            0.0912, 0.051, 0.0843, r.absorber().stiffness() / count, r.absorber().stiffness(), 0.0,
+                            120, 60, 1e8, List.of(), arrangement, 0, 0.004, 0.2);
+                    Realisation realisation = new Realisation(base.choice(), Optional.of(spring), Optional.empty(),
+                            base.damper(), base.tolerances(), base.trim(), base.procedure(), base.predicted(),
+                            base.warnings());
+                    SheetContent content = SheetContent.of(r, "", "2026-11-30", "C",
+                            dossier.monteCarlo(ProgressListener.NONE), IDENTITY, dossier.comparison(ProgressListener.NONE),
+                            AmplitudeConvention.PEAK, Optional.of(realisation), units);
+                    SketchFigures sketch = content.sketch().orElseThrow();
+                    assertEquals(arrangement == SpringArrangement.OPPOSED_PRELOADED_PAIRS, sketch.opposed());
+                    assertEquals(SketchFigures.length(0.0912, units), sketch.freeLength().orElseThrow());
+                    ByteArrayOutputStream pdf = new ByteArrayOutputStream();
+                    SheetWriter.write(content, List.of(), pdf);
+                    try (PDDocument doc = Loader.loadPDF(pdf.toByteArray())) {
+                        for (int page = 1; page <= doc.getNumberOfPages(); page++) {
+                            assertNoOverlap(doc, page, name + " " + arrangement + " " + units);
+                        }
+                    }
+                }
+            }
+        }
+    }
+
+    @Test
     void theOverlapCheckSeesAnOverlap() throws IOException {
         // the negative control of the check above: two words printed over each other are found
         ByteArrayOutputStream pdf = new ByteArrayOutputStream();
@@ -142,6 +177,18 @@ class SheetLayoutTest {
             List<Word> apart = glyphs.subList(glyphs.size() - "apart".length(), glyphs.size());
             for (Word a : apart) {
                 assertTrue(glyphs.stream().noneMatch(b -> b != a && a.overlaps(b)), "\"apart\" overlaps nothing");
+            }
+        }
+    }
+
+    private static void assertNoOverlap(PDDocument doc, int page, String what) throws IOException {
+        List<Word> glyphs = words(doc, page);
+        for (int i = 0; i < glyphs.size(); i++) {
+            Word a = glyphs.get(i);
+            for (int j = i + 1; j < glyphs.size() && glyphs.get(j).top < a.bottom; j++) {
+                Word b = glyphs.get(j);
+                assertTrue(!a.overlaps(b), what + " page " + page + ": \"" + a.text + "\" at " + a + " overlaps \""
+                        + b.text + "\" at " + b);
             }
         }
     }
