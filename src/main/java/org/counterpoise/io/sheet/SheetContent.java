@@ -1,6 +1,8 @@
 package org.counterpoise.io.sheet;
 
+import java.util.EnumMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
 import org.counterpoise.core.criteria.AmplitudeConvention;
@@ -12,8 +14,11 @@ import org.counterpoise.core.robust.MonteCarloResult;
 import org.counterpoise.io.project.ProjectIdentity;
 import org.counterpoise.io.text.ComparisonContent;
 import org.counterpoise.io.text.DesignContent;
+import org.counterpoise.io.text.HardwareContent;
 import org.counterpoise.io.text.ReportContent;
 import org.counterpoise.io.text.ReportKey;
+import org.counterpoise.io.text.ReportSection;
+import org.counterpoise.io.text.ReportSection.SectionId;
 import org.counterpoise.io.text.ReportTable;
 import org.counterpoise.io.text.UnitSystem;
 
@@ -35,10 +40,18 @@ import org.counterpoise.io.text.UnitSystem;
  * @param identity the project's identity (document number, client, engineer, revisions, sign-off)
  *     for the title block, the revision history and the sign-off
  * @param sketch what the arrangement sketch draws, when there is a design to draw
+ * @param grids the sections whose rows are records of the same fields (the checks, the predicted
+ *     response), as tables printed in their place
  */
 public record SheetContent(String projectName, String notes, String date, String revision, List<ReportTable.Section> sections,
         List<String> assumptions, List<String> warnings, List<String> cautions, Optional<ReportTable.Grid> comparison,
-        ProjectIdentity identity, Optional<SketchFigures> sketch) {
+        ProjectIdentity identity, Optional<SketchFigures> sketch, Map<SectionId, ReportTable.Grid> grids) {
+
+    /** Immutable copies. */
+    public SheetContent {
+        sections = List.copyOf(sections);
+        grids = Map.copyOf(grids);
+    }
 
     /** The assumptions printed on every sheet. */
     public static final List<String> ASSUMPTIONS = List.of(
@@ -116,8 +129,13 @@ public record SheetContent(String projectName, String notes, String date, String
         // The header prints the date and revision of issue.
         List<ReportTable.Section> sections = ReportTable.of(report, Set.of(ReportKey.REVISION, ReportKey.DATE));
         List<String> warnings = report.warnings().stream().map(ReportContent.Note::text).toList();
+        Map<SectionId, ReportTable.Grid> grids = new EnumMap<>(SectionId.class);
+        for (ReportSection section : report.sections()) {
+            ReportTable.grid(section).ifPresent(g -> grids.put(section.id(), g));
+        }
         return new SheetContent(report.name(), notes, date, revision, sections, ASSUMPTIONS, warnings,
-                report.cautions(), report.comparison().map(ReportTable::comparison), identity, Optional.of(sketch));
+                report.cautions(), report.comparison().map(ReportTable::comparison), identity, Optional.of(sketch),
+                grids);
     }
 
     /**
@@ -169,7 +187,10 @@ public record SheetContent(String projectName, String notes, String date, String
     public static SheetContent of(DesignResult r, String notes, String date, String revision,
             MonteCarloOutcome monteCarlo, ProjectIdentity identity, MethodComparison comparison,
             AmplitudeConvention convention, Optional<Realisation> realisation, UnitSystem units) {
-        return of(DesignContent.of(r, identity, monteCarlo).with(ComparisonContent.of(comparison, r.study()))
-                .shownIn(convention), notes, date, revision, identity, SketchFigures.of(r, realisation, units));
+        ReportContent report = DesignContent.of(r, identity, monteCarlo).with(ComparisonContent.of(comparison, r.study()));
+        if (realisation.isPresent()) {
+            report = HardwareContent.with(report, realisation.get(), r);
+        }
+        return of(report.shownIn(convention), notes, date, revision, identity, SketchFigures.of(r, realisation, units));
     }
 }

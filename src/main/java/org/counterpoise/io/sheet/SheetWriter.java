@@ -19,6 +19,7 @@ import org.apache.pdfbox.pdmodel.common.PDRectangle;
 import org.apache.pdfbox.pdmodel.graphics.form.PDFormXObject;
 import org.apache.pdfbox.util.Matrix;
 import org.counterpoise.io.chart.ChartFactory;
+import org.counterpoise.io.text.ReportSection.SectionId;
 import org.counterpoise.io.text.ReportTable;
 import org.counterpoise.io.text.ValueText;
 import org.knowm.xchart.XYChart;
@@ -259,6 +260,15 @@ public final class SheetWriter {
     }
 
     private void section(ReportTable.Section section) throws IOException {
+        ReportTable.Grid grid = content.grids().get(section.id());
+        if (grid != null) {
+            comparison(grid);
+            return;
+        }
+        if (section.id() == SectionId.PROCEDURE) {
+            steps(section);
+            return;
+        }
         // A short table starts on a new page rather than leave its last rows alone on the next one.
         ensure(LINE * Math.min(3 + section.rows().size(), 14));
         y -= 6;
@@ -266,6 +276,25 @@ public final class SheetWriter {
         rule();
         for (ReportTable.Row row : section.rows()) {
             row(row);
+        }
+        y -= 4;
+    }
+
+    /** The procedure: each step's number, then its sentence wrapped across the page. */
+    private void steps(ReportTable.Section section) throws IOException {
+        ensure(LINE * 6);
+        y -= 6;
+        heading(section.title(), 11.5f, ACCENT);
+        rule();
+        for (ReportTable.Row row : section.rows()) {
+            List<String> lines = wrap(clean(row.value()), WIDTH - 2 * MARGIN - 22, BODY);
+            ensure(LINE * lines.size());
+            say(row.label(), MARGIN, BODY, ACCENT, true);
+            for (String line : lines) {
+                say(line, MARGIN + 22, BODY, INK, false);
+                y -= LINE;
+            }
+            y -= 3;
         }
         y -= 4;
     }
@@ -298,18 +327,38 @@ public final class SheetWriter {
             heading(line, 11.5f, ACCENT);
         }
         rule();
-        int n = grid.headings().size();
-        float[] widths = new float[n];
-        for (int i = 0; i < n; i++) {
-            widths[i] = width(grid.headings().get(i), size);
-            for (List<String> row : grid.cells()) {
-                widths[i] = Math.max(widths[i], width(ValueText.pretty(row.get(i)), size));
-            }
+        float room = WIDTH - 2 * MARGIN;
+        // a column of long words (a check's source) goes under its row, wrapped, not across the page
+        float[] all = columns(grid.headings(), grid.cells(), size);
+        List<Integer> narrow = new ArrayList<>();
+        List<Integer> under = new ArrayList<>();
+        for (int i = 0; i < all.length; i++) {
+            (i > 0 && all[i] > 0.3f * room ? under : narrow).add(i);
         }
-        float gap = n > 1 ? Math.max(4f, (WIDTH - 2 * MARGIN - sum(widths)) / (n - 1)) : 0f;
-        cells(grid.headings(), widths, gap, size, MUTED);
-        for (int r = 0; r < grid.cells().size(); r++) {
-            cells(grid.cells().get(r), widths, gap, size, grid.recommended().get(r) ? ACCENT : INK);
+        List<String> headings = pick(grid.headings(), narrow);
+        List<List<String>> rows = new ArrayList<>();
+        for (List<String> row : grid.cells()) {
+            rows.add(pick(row, narrow));
+        }
+        int n = headings.size();
+        float[] widths = columns(headings, rows, size);
+        if (sum(widths) + 4f * (n - 1) > room) {
+            // a wide table is printed smaller rather than run off the page
+            size = Math.max(5.5f, size * room / (sum(widths) + 4f * (n - 1)));
+            widths = columns(headings, rows, size);
+        }
+        float gap = n > 1 ? Math.max(4f, (room - sum(widths)) / (n - 1)) : 0f;
+        cells(headings, widths, gap, size, MUTED);
+        for (int r = 0; r < rows.size(); r++) {
+            cells(rows.get(r), widths, gap, size, grid.recommended().get(r) ? ACCENT : INK);
+            for (int j : under) {
+                String text = grid.headings().get(j) + ": " + ValueText.pretty(grid.cells().get(r).get(j));
+                for (String line : wrap(clean(text), room - 12, size)) {
+                    ensure(LINE);
+                    say(line, MARGIN + 12, size, MUTED, false);
+                    y -= LINE - 2;
+                }
+            }
         }
         y -= 4;
         for (String sentence : grid.sentences()) {
@@ -334,6 +383,22 @@ public final class SheetWriter {
             x += widths[i] + gap;
         }
         y -= LINE - 1;
+    }
+
+    private float[] columns(List<String> headings, List<List<String>> rows, float size) throws IOException {
+        int n = headings.size();
+        float[] widths = new float[n];
+        for (int i = 0; i < n; i++) {
+            widths[i] = width(headings.get(i), size);
+            for (List<String> row : rows) {
+                widths[i] = Math.max(widths[i], width(ValueText.pretty(row.get(i)), size));
+            }
+        }
+        return widths;
+    }
+
+    private static List<String> pick(List<String> cells, List<Integer> columns) {
+        return columns.stream().map(cells::get).toList();
     }
 
     private static float sum(float[] values) {
