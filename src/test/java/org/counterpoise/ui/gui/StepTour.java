@@ -17,8 +17,8 @@ import org.counterpoise.ui.gui.wizard.WizardFrame;
  * for a person to look at (run it under Xvfb at several screen sizes and scalings):
  * {@code java -Dsun.java2d.uiScale=2 -cp target/counterpoise.jar:target/test-classes
  * org.counterpoise.ui.gui.StepTour target/tour [preset or project file]}; with
- * {@code -Dtour.runup=true} also the result step's Run-up tab ({@code step4-runup.png}), with
- * {@code -Dtour.comparison=true} its comparison of methods ({@code step4-comparison.png}); with
+ * {@code -Dtour.runup=true} also the result step's Run-up tab ({@code step5-runup.png}), with
+ * {@code -Dtour.comparison=true} its comparison of methods ({@code step5-comparison.png}); with
  * {@code -Dtour.criterion=MACHINE} (a family of the goal step's criterion list) that criterion first.
  */
 public final class StepTour {
@@ -66,23 +66,23 @@ public final class StepTour {
         }
         Rectangle screen = GraphicsEnvironment.getLocalGraphicsEnvironment().getDefaultScreenDevice()
                 .getDefaultConfiguration().getBounds();
-        for (int step = 0; step < 6; step++) {
+        for (int step = 0; step < 7; step++) {
             int s = step;
             SwingUtilities.invokeAndWait(() -> frame.get().showStep(s));
-            Thread.sleep(step >= 3 ? 5000 : 2500);
+            Thread.sleep(step >= 4 ? 5000 : 2500);
             if (Boolean.getBoolean("tour.dump")) {
                 SwingUtilities.invokeAndWait(() -> dump(frame.get().getContentPane(), ""));
             }
             BufferedImage image = new Robot().createScreenCapture(screen);
             ImageIO.write(image, "png", out.resolve("step" + (step + 1) + ".png").toFile());
-            if (step == 3 && Boolean.getBoolean("tour.runup")) {
+            if (step == 4 && Boolean.getBoolean("tour.runup")) {
                 // the result step's Run-up tab (computed when shown)
-                photographTab(frame.get(), 1, Long.getLong("tour.runup.wait", 8000), out.resolve("step4-runup.png"));
+                photographTab(frame.get(), 1, Long.getLong("tour.runup.wait", 8000), out.resolve("step5-runup.png"));
             }
-            if (step == 3 && Boolean.getBoolean("tour.comparison")) {
+            if (step == 4 && Boolean.getBoolean("tour.comparison")) {
                 // the result step's comparison of methods (computed with the design, in the background)
                 photographTab(frame.get(), 2, Long.getLong("tour.comparison.wait", 6000),
-                        out.resolve("step4-comparison.png"));
+                        out.resolve("step5-comparison.png"));
             }
         }
         SwingUtilities.invokeAndWait(() -> frame.get().dispose());

@@ -49,14 +49,15 @@ final class DesignRun {
      * @param structure step 1
      * @param disturbance step 2
      * @param goal step 3
-     * @param result step 4
-     * @param robustness step 5
-     * @param sheet step 6
+     * @param hardware step 4
+     * @param result step 5
+     * @param robustness step 6
+     * @param sheet step 7
      */
-    record Steps(StructureStep structure, DisturbanceStep disturbance, GoalStep goal, ResultStep result,
-            RobustnessStep robustness, SheetStep sheet) {
+    record Steps(StructureStep structure, DisturbanceStep disturbance, GoalStep goal, HardwareStep hardware,
+            ResultStep result, RobustnessStep robustness, SheetStep sheet) {
         List<Step> all() {
-            return List.of(structure, disturbance, goal, result, robustness, sheet);
+            return List.of(structure, disturbance, goal, hardware, result, robustness, sheet);
         }
     }
 

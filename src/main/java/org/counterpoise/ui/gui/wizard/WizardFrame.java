@@ -86,11 +86,12 @@ public final class WizardFrame extends JFrame {
         StructureStep structure = new StructureStep();
         DisturbanceStep disturbance = new DisturbanceStep();
         GoalStep goal = new GoalStep();
-        run = new DesignRun(document, new DesignRun.Steps(structure, disturbance, goal, result, robustness, sheet),
-                this::say, this::updateNavigation);
+        HardwareStep hardware = new HardwareStep();
+        DesignRun.Steps all = new DesignRun.Steps(structure, disturbance, goal, hardware, result, robustness, sheet);
+        run = new DesignRun(document, all, this::say, this::updateNavigation);
         holder[0] = run;
         run.use(tasks);
-        steps = List.of(structure, disturbance, goal, result, robustness, sheet);
+        steps = all.all();
         for (Step s : steps) {
             s.attach(document, () -> {
                 run.changed();
