@@ -40,8 +40,8 @@ final class RevisionHistoryTable extends JPanel {
         table.putClientProperty("terminateEditOnFocusLost", Boolean.TRUE);
         table.setSurrendersFocusOnKeystroke(true);
         table.getColumnModel().getColumn(0).setPreferredWidth(40);
-        table.getColumnModel().getColumn(1).setPreferredWidth(110);
-        table.getColumnModel().getColumn(2).setPreferredWidth(260);
+        table.getColumnModel().getColumn(1).setPreferredWidth(140);
+        table.getColumnModel().getColumn(2).setPreferredWidth(230);
         table.getColumnModel().getColumn(3).setPreferredWidth(90);
         table.setToolTipText("Earlier issues of the sheet, oldest first; double-click a cell to edit it");
         JScrollPane scroll = new JScrollPane(table);
