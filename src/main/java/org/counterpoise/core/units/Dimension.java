@@ -23,7 +23,9 @@ public enum Dimension {
     /** pure number. */
     RATIO(""),
     /** rad/s^2: how fast a speed changes (a run-up rate). */
-    ANGULAR_ACCELERATION("rad/s^2");
+    ANGULAR_ACCELERATION("rad/s^2"),
+    /** Pa: a stress (a spring wire's shear stress and its permissible value). */
+    STRESS("Pa");
 
     private final String siSymbol;
 

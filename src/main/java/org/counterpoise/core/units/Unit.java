@@ -39,7 +39,10 @@ public enum Unit {
     /** Shaft speed change per second, the usual way to state a run-up rate. */
     RPM_PER_SECOND("rpm/s", Dimension.ANGULAR_ACCELERATION, 2.0 * Math.PI / 60.0),
     HERTZ_PER_SECOND("Hz/s", Dimension.ANGULAR_ACCELERATION, 2.0 * Math.PI),
-    RADIAN_PER_SECOND_SQUARED("rad/s^2", Dimension.ANGULAR_ACCELERATION, 1.0);
+    RADIAN_PER_SECOND_SQUARED("rad/s^2", Dimension.ANGULAR_ACCELERATION, 1.0),
+    /** N/mm^2, the unit spring standards state stresses in. */
+    MEGAPASCAL("MPa", Dimension.STRESS, 1e6),
+    PASCAL("Pa", Dimension.STRESS, 1.0);
 
     private final String symbol;
     private final Dimension dimension;

@@ -25,6 +25,7 @@ public final class DisplayUnits {
             case UNBALANCE -> Unit.GRAM_MILLIMETRE;
             case RATIO -> Unit.RATIO;
             case ANGULAR_ACCELERATION -> Unit.RPM_PER_SECOND;
+            case STRESS -> Unit.MEGAPASCAL;
         };
     }
 

@@ -33,6 +33,7 @@ public final class UnitChoices {
             case RATIO -> List.of(Unit.RATIO);
             case ANGULAR_ACCELERATION -> List.of(Unit.RPM_PER_SECOND, Unit.HERTZ_PER_SECOND,
                     Unit.RADIAN_PER_SECOND_SQUARED);
+            case STRESS -> List.of(Unit.MEGAPASCAL, Unit.PASCAL);
         };
     }
 }

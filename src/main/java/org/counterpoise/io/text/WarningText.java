@@ -90,7 +90,37 @@ public final class WarningText {
                     + " exceeds the stroke limit of %s: the absorber will strike its stops at start and stop.",
                     millimetres(w.number(WarningParameter.RUN_UP_STROKE)), runUpBasis(w),
                     millimetres(w.number(WarningParameter.STROKE_LIMIT)));
+            case DAMPER_STROKE_OVER_CLEARANCE -> String.format(Locale.ROOT, "The damper sees a stroke of up to %s"
+                    + " in service, more than the clearance of %s it is made to allow: widen the clearance and the"
+                    + " damper's stroke, or slow the run-up.", millimetres(w.number(WarningParameter.DAMPER_STROKE)),
+                    millimetres(w.number(WarningParameter.CLEARANCE)));
+            case EDDY_CURRENT_PLATE_THICK -> String.format(Locale.ROOT, "The eddy-current damper's plate, %s thick,"
+                    + " is thicker than the skin depth of %s at the highest forcing frequency: the damping it gives"
+                    + " falls short of the thin-plate formula; use a thinner plate and a larger pole area.",
+                    millimetres(w.number(WarningParameter.PLATE_THICKNESS)),
+                    millimetres(w.number(WarningParameter.SKIN_DEPTH)));
+            case MASS_TOLERANCE_TOO_LOOSE -> String.format(Locale.ROOT, "A mass tolerance of +/-%s alone moves the"
+                    + " absorber's frequency by as much as its tolerance of +/-%s allows, leaving nothing for the"
+                    + " spring rate: hold the mass closer, or tune the absorber on site with the trim plates.",
+                    ValueText.percent(w.number(WarningParameter.MASS_TOLERANCE), 2),
+                    ValueText.percent(w.number(WarningParameter.FREQUENCY_TOLERANCE), 2));
+            case SPRING_OVERSTRESSED -> spring(w, "the spring's stress at its largest load (or at solid length) is",
+                    "the permissible stress: it would take a set and the tuning would drift");
+            case SPRING_FATIGUE -> spring(w, "the spring's stress amplitude is", "its fatigue strength at its mean"
+                    + " stress: it would break in service and the mass would fall");
+            case SPRING_BUCKLES -> spring(w, "the spring's working deflection is", "its buckling deflection: guide it"
+                    + " on a rod or in a sleeve");
+            case SPRING_SURGE -> spring(w, "three times the highest forcing frequency is", "the spring's first surge"
+                    + " frequency: its coils would resonate");
+            case SPRING_GOES_SOLID -> spring(w, "the spring's working compression is", "the compression it has before"
+                    + " its coils close: it would strike solid");
         };
+    }
+
+    private static String spring(Warning w, String what, String against) {
+        return String.format(Locale.ROOT, "No helical spring design passes every check: %s %.3g times %s."
+                + " Choose another wire or spring count, or an elastomer element.", what,
+                w.number(WarningParameter.UTILISATION), against);
     }
 
     private static String narrow(String what, Warning w) {
