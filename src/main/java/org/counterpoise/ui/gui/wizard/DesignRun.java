@@ -82,6 +82,7 @@ final class DesignRun {
     /** Inputs changed (an edit, or text that is not a number yet): recompute after a pause. */
     void changed() {
         generation++;
+        steps.result().hardware().stale(); // the parts on screen are for the old inputs: gone at once
         if (tasks != null) {
             tasks.cancelStale(); // work for the old inputs stops now, not after the pause
         }
@@ -182,6 +183,7 @@ final class DesignRun {
             shownGeneration = gen;
             steps.result().designedFrom(p);
             steps.result().show(d.design(), d.curves());
+            steps.result().hardware().design(d, p.hardware());
             steps.sheet().show(d, p);
             if (steps.sheet().component().isShowing()) {
                 steps.sheet().shown();

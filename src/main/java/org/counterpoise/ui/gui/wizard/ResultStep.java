@@ -71,6 +71,7 @@ final class ResultStep extends Step {
     private final ComparisonPanel comparison = new ComparisonPanel();
     private final VerdictPanel verdict = new VerdictPanel();
     private final RunUpView runUp;
+    private final RealisationView hardware;
     private DesignResult result;
     private DesignCurves curves;
     private Project project;
@@ -79,6 +80,7 @@ final class ResultStep extends Step {
         this.tasks = tasks;
         this.messages = messages;
         this.runUp = new RunUpView(tasks);
+        this.hardware = new RealisationView(tasks);
         JTable t = rows.table();
         notes.setName("result.notes");
         notes.setEditable(false);
@@ -148,9 +150,11 @@ final class ResultStep extends Step {
         views.addTab("Steady state", right);
         views.addTab("Run-up", runUp.component());
         views.addTab("Comparison of methods", comparison.component());
+        views.addTab("Hardware", hardware.component());
         views.setMnemonicAt(0, 's');
         views.setMnemonicAt(1, 'u');
         views.setMnemonicAt(2, 'm');
+        views.setMnemonicAt(3, 'h');
         JSplitPane split = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, left, views);
         split.setResizeWeight(0.36);
         split.setBorder(null);
@@ -191,6 +195,7 @@ final class ResultStep extends Step {
             verdict.show(r.acceptance().get(), VerdictPanel.orderNames(r, project));
         }
         if (r == null) {
+            hardware.design(null, null);
             comparison.message("Fix the inputs to see the comparison of methods.");
             curves = null;
             writeNotes(List.of());
@@ -329,6 +334,11 @@ final class ResultStep extends Step {
     /** @return the run-up view, for tests */
     RunUpView runUp() {
         return runUp;
+    }
+
+    /** @return the hardware tab (sized after the design; see {@code DesignRun}) */
+    RealisationView hardware() {
+        return hardware;
     }
 
     /** @return the comparison of methods (computed after the design; see {@code DesignRun}) */

@@ -341,6 +341,11 @@ public final class WizardFrame extends JFrame {
         return out;
     }
 
+    /** @return the result step's hardware tab (package tests) */
+    RealisationView hardwareView() {
+        return result.hardware();
+    }
+
     /** @return true when there are unsaved changes */
     public boolean dirty() {
         return document.dirty();

@@ -14,6 +14,9 @@ import javax.swing.JLabel;
 import javax.swing.JTextField;
 import javax.swing.SwingUtilities;
 import org.counterpoise.core.realisation.DamperKind;
+import org.counterpoise.core.realisation.DesignCheck;
+import org.counterpoise.core.realisation.Realisation;
+import org.counterpoise.core.realisation.Realiser;
 import org.counterpoise.core.realisation.HardwareChoice;
 import org.counterpoise.core.realisation.SpringKind;
 import org.counterpoise.ui.gui.Edt;
@@ -107,6 +110,29 @@ class HardwareGuiTest {
         settled("fixed");
         assertEquals(0.02, hardware().trimStepFraction(), 1e-15);
         assertTrue(onEdt(frame::nextEnabled));
+    }
+
+    @Test
+    void theHardwareTabShowsTheChoiceOnScreenAndNeverAnOlderOne() throws Exception {
+        open();
+        Edt.waitFor(() -> Edt.callQuietly(() -> hardware().equals(frame.hardwareView().shownChoice())),
+                "the hardware of the first design");
+        String headline = onEdt(() -> ((JLabel) Edt.find(frame.getContentPane(), "hardware.headline")).getText());
+        Realisation expected = Realiser.realise(onEdt(frame::shownResult), HardwareChoice.DEFAULT);
+        boolean allPass = expected.checks().stream().allMatch(DesignCheck::passes);
+        // pass or fail in words and with a symbol, never by colour alone
+        assertTrue(headline.contains(allPass ? "\u2713 Every check of the parts passes"
+                : "\u2717 Not every check of the parts passes"), headline);
+        HardwareChoice before = hardware();
+        HardwareChoice shownAfterEdit = onEdt(() -> {
+            text("hardware.service_hours").setText("30000");
+            return frame.hardwareView().shownChoice();
+        });
+        assertEquals(null, shownAfterEdit, "the parts of the old choice are gone as soon as the choice changes");
+        assertEquals(30_000, hardware().serviceHours());
+        Edt.waitFor(() -> Edt.callQuietly(() -> hardware().equals(frame.hardwareView().shownChoice())),
+                "the hardware of the new choice");
+        assertFalse(before.equals(onEdt(() -> frame.hardwareView().shownChoice())));
     }
 
     /** The foundation's default plate, named so the undo check reads. */
