@@ -78,7 +78,14 @@ public enum WarningKind {
     /** The forcing (with its margin) reaches a helical spring's surge frequency. */
     SPRING_SURGE(WarningParameter.UTILISATION),
     /** A helical spring's working compression leaves less than the standard's minimum gaps before solid. */
-    SPRING_GOES_SOLID(WarningParameter.UTILISATION);
+    SPRING_GOES_SOLID(WarningParameter.UTILISATION),
+    /**
+     * An elastomer element whose compound loss factor misses the loss factor the hysteretic optimum
+     * needs, so that the peak with the compound's own loss factor exceeds the design's promised peak by
+     * more than the allowance (the utilisation is that peak over the allowed one).
+     */
+    ELASTOMER_LOSS_FACTOR_MISSED(WarningParameter.COMPOUND_LOSS_FACTOR, WarningParameter.LOSS_FACTOR_NEEDED,
+            WarningParameter.UTILISATION);
 
     private final List<WarningParameter> parameters;
 

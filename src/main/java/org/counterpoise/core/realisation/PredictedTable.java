@@ -6,14 +6,15 @@ import java.util.TreeSet;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.model.Excitation;
 import org.counterpoise.core.model.FrequencyBand;
+import org.counterpoise.core.rational.PeakFinder;
 import org.counterpoise.core.response.ResponseKind;
 import org.counterpoise.core.response.SystemResponse;
 
 /**
  * The predicted response a technician compares readings against: about fifteen forcing frequencies
  * from below the band (and below the lower coupled natural frequency) to above it (and above the
- * upper one), always holding the band's ends, the running frequency and the two coupled natural
- * frequencies; at each the study's response without and with the absorber and the absorber's stroke,
+ * upper one), always holding the band's ends, the running frequency, the two coupled natural
+ * frequencies (undamped) and the exact peaks of the response with the absorber (damped); at each the study's response without and with the absorber and the absorber's stroke,
  * from the same transfer functions the design uses. A frequency that falls exactly on an undamped
  * resonance is moved off it by one part in 1e9, as the design's curves do, so every value is finite.
  */
@@ -60,6 +61,13 @@ public final class PredictedTable {
                 DamperSizing.runningFrequency(band), coupled[0], coupled[1]));
         double low = Math.min(0.8 * band.low(), 0.9 * coupled[0]);
         double high = Math.max(1.2 * band.high(), 1.1 * coupled[1]);
+        // the damped peaks with the absorber, where a reading is most sensitive to the tuning
+        SystemResponse fitted = DamperSizing.fitted(design);
+        double omega1 = fitted.system().referenceFrequency();
+        for (double g : PeakFinder.interiorMaxima(fitted.transferFunction(design.study().response()), low / omega1,
+                high / omega1)) {
+            marked.add(g * omega1);
+        }
         TreeSet<Double> all = new TreeSet<>(marked);
         // as many evenly spaced rows as it takes to reach about fifteen in all
         for (int even = ROWS - marked.size(); all.size() < ROWS && even <= 3 * ROWS; even++) {

@@ -114,6 +114,15 @@ public final class WarningText {
                     + " frequency: its coils would resonate");
             case SPRING_GOES_SOLID -> spring(w, "the spring's working compression is", "the compression it has before"
                     + " its coils close: it would strike solid");
+            case ELASTOMER_LOSS_FACTOR_MISSED -> String.format(Locale.ROOT, "The elastomer compound's loss factor"
+                    + " of %.3g is %s the %.3g the element needs: its peak response is %.3g times what the design"
+                    + " allows (its promised peak plus %s); choose a compound with a loss factor nearer %.3g at the"
+                    + " working frequency and temperature, or add a damper.",
+                    w.number(WarningParameter.COMPOUND_LOSS_FACTOR),
+                    w.number(WarningParameter.COMPOUND_LOSS_FACTOR) < w.number(WarningParameter.LOSS_FACTOR_NEEDED)
+                            ? "below" : "above", w.number(WarningParameter.LOSS_FACTOR_NEEDED),
+                    w.number(WarningParameter.UTILISATION), ValueText.percent(DesignResult.TOLERANCE_ALLOWANCE, 2),
+                    w.number(WarningParameter.LOSS_FACTOR_NEEDED));
         };
     }
 

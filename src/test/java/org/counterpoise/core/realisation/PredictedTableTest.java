@@ -38,6 +38,10 @@ class PredictedTableTest {
             assertTrue(rows.stream().anyMatch(r -> Math.abs(r.frequency() - marked) <= 1e-8 * marked),
                     preset + ": no row at " + marked);
         }
+        double peak = d.responseAfter().frequency(); // the exact peak in band, where it is interior to the band
+        if (peak > band.low() * (1 + 1e-9) && peak < band.high() * (1 - 1e-9)) {
+            assertTrue(rows.stream().anyMatch(r -> Math.abs(r.frequency() - peak) <= 1e-6 * peak), preset + ": peak");
+        }
         assertTrue(rows.get(0).frequency() < Math.min(band.low(), coupled[0]));
         assertTrue(rows.get(rows.size() - 1).frequency() > Math.max(band.high(), coupled[1]));
         for (PredictedPoint r : rows) {
