@@ -1,8 +1,10 @@
 package org.counterpoise.ui.gui.wizard;
 
 import java.awt.BorderLayout;
+import java.awt.Color;
 import java.awt.Component;
 import java.awt.Font;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.Set;
@@ -17,15 +19,21 @@ import javax.swing.JPanel;
 import javax.swing.JScrollPane;
 import javax.swing.JTable;
 import javax.swing.JTextArea;
+import javax.swing.table.DefaultTableCellRenderer;
+import javax.swing.table.DefaultTableModel;
 import org.counterpoise.core.design.DesignDossier;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.error.CoreException;
 import org.counterpoise.core.realisation.HardwareChoice;
 import org.counterpoise.core.realisation.Realisation;
 import org.counterpoise.core.realisation.Realiser;
+import org.counterpoise.io.text.HardwareContent;
 import org.counterpoise.io.text.ReportContent;
+import org.counterpoise.io.text.ReportRow;
 import org.counterpoise.io.text.ReportSection;
+import org.counterpoise.io.text.ReportSection.SectionId;
 import org.counterpoise.io.text.ReportTable;
+import org.counterpoise.io.text.ReportValue;
 import org.counterpoise.io.text.WarningText;
 import org.counterpoise.ui.gui.Themes;
 import org.counterpoise.ui.gui.task.TaskRunner;
@@ -87,7 +95,7 @@ final class RealisationView {
         tasks.current(null, progress -> {
             Realisation r = Realiser.realisation(dossier, choice);
             DesignResult d = dossier.design();
-            return new Sized(r, HardwareSections.of(r, d));
+            return new Sized(r, HardwareContent.sections(r, d));
         }, this::show, e -> {
             if (e instanceof CoreException plain) {
                 message("The hardware cannot be sized: " + plain.getMessage());
@@ -135,15 +143,85 @@ final class RealisationView {
     }
 
     private JComponent render(ReportSection section) {
-        ReportRowsTable table = new ReportRowsTable("hardware." + section.id().name().toLowerCase(Locale.ROOT));
-        table.show(List.of(new ReportTable.Section(section.id(), "", rows(section))));
-        table.model().removeRow(0); // the section's title is above the table
-        return withHeader(table.table());
+        if (section.id() == SectionId.PROCEDURE) {
+            List<String> lines = new ArrayList<>();
+            for (ReportTable.Row row : rows(section)) {
+                lines.add(row.label() + ". " + row.value());
+            }
+            JTextArea text = wrapped(String.join("\n", lines));
+            text.setName("hardware.procedure");
+            return text;
+        }
+        return ReportTable.grid(section).<JComponent>map(g -> grid(section, g)).orElseGet(() -> {
+            ReportRowsTable table = new ReportRowsTable("hardware." + section.id().name().toLowerCase(Locale.ROOT));
+            table.show(List.of(new ReportTable.Section(section.id(), "", rows(section))));
+            table.model().removeRow(0); // the section's title is above the table
+            return withHeader(table.table());
+        });
     }
 
     private static List<ReportTable.Row> rows(ReportSection section) {
         ReportContent one = new ReportContent("", List.of(section), List.of(), List.of());
         return ReportTable.of(one, Set.of()).stream().flatMap(s -> s.rows().stream()).toList();
+    }
+
+    /** A grid (checks, predicted table); a column of typed pass-or-fail flags says it with a symbol and colour. */
+    private static JComponent grid(ReportSection section, ReportTable.Grid g) {
+        DefaultTableModel model = new DefaultTableModel(g.headings().toArray(), 0) {
+            @Override
+            public boolean isCellEditable(int row, int column) {
+                return false;
+            }
+        };
+        g.cells().forEach(line -> model.addRow(line.toArray()));
+        JTable table = new JTable(model);
+        table.setName("hardware." + section.id().name().toLowerCase(Locale.ROOT));
+        table.setRowHeight(table.getRowHeight() + 4);
+        table.setDefaultRenderer(Object.class, ReportRowsTable.wholeUnderPointer(JLabel.LEFT));
+        List<Boolean> passes = flags(section);
+        int verdict = flagColumn(section);
+        if (verdict >= 0 && passes.size() == model.getRowCount()) {
+            table.getColumnModel().getColumn(verdict).setCellRenderer(new DefaultTableCellRenderer() {
+                @Override
+                public Component getTableCellRendererComponent(JTable t, Object value, boolean selected,
+                        boolean focus, int row, int column) {
+                    boolean ok = passes.get(t.convertRowIndexToModel(row));
+                    String words = ok ? "\u2713 passes" : "\u2717 FAILS";
+                    JLabel l = (JLabel) super.getTableCellRendererComponent(t, words, selected, focus, row, column);
+                    Color colour = ok ? Themes.passColour() : Themes.problemColour();
+                    l.setForeground(selected ? l.getForeground() : colour);
+                    l.setFont(l.getFont().deriveFont(ok ? Font.PLAIN : Font.BOLD));
+                    return l;
+                }
+            });
+        }
+        return withHeader(table);
+    }
+
+    /** @return each row's typed pass-or-fail flag, in order (empty when the section has none) */
+    private static List<Boolean> flags(ReportSection section) {
+        List<Boolean> out = new ArrayList<>();
+        for (ReportRow row : section.rows()) {
+            if (row.value() instanceof ReportValue.Fields f) {
+                f.fields().stream().filter(x -> x.value() instanceof ReportValue.Flag).findFirst()
+                        .ifPresent(x -> out.add(((ReportValue.Flag) x.value()).value()));
+            }
+        }
+        return out;
+    }
+
+    /** @return the grid column of the flag (fields without a label are not columns), or -1 */
+    private static int flagColumn(ReportSection section) {
+        if (section.rows().isEmpty() || !(section.rows().get(0).value() instanceof ReportValue.Fields f)) {
+            return -1;
+        }
+        List<ReportValue.Field> columns = f.fields().stream().filter(x -> !x.label().isEmpty()).toList();
+        for (int i = 0; i < columns.size(); i++) {
+            if (columns.get(i).value() instanceof ReportValue.Flag) {
+                return i;
+            }
+        }
+        return -1;
     }
 
     private static JComponent withHeader(JTable table) {
