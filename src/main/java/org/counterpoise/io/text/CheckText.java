@@ -35,6 +35,7 @@ public final class CheckText {
             case SPRING_SOLID -> "compression before the coils touch";
             case ELASTOMER_LOSS_FACTOR -> "elastomer loss factor needed against the compound's";
             case DAMPER_STROKE -> "damper stroke needed against its usable stroke";
+            case EDDY_CURRENT_SKIN_DEPTH -> "eddy-current plate thickness against the skin depth";
         };
     }
 

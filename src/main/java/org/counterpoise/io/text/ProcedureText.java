@@ -103,6 +103,7 @@ public final class ProcedureText {
             case CLEARANCE -> "clearance";
             case RUNNING_FREQUENCY -> "running frequency";
             case PREDICTED_RESPONSE -> "predicted response";
+            case PREDICTED_PEAK_IN_BAND -> "predicted peak in the band";
             case TRIM_PLATE_MASS -> "trim plate mass";
             case PLATES_PER_PERCENT -> "plates per percent of frequency";
         };
@@ -121,6 +122,7 @@ public final class ProcedureText {
             case CLEARANCE -> ReportKey.FIGURE_CLEARANCE;
             case RUNNING_FREQUENCY -> ReportKey.FIGURE_RUNNING_FREQUENCY;
             case PREDICTED_RESPONSE -> ReportKey.FIGURE_PREDICTED_RESPONSE;
+            case PREDICTED_PEAK_IN_BAND -> ReportKey.FIGURE_PREDICTED_PEAK_IN_BAND;
             case TRIM_PLATE_MASS -> ReportKey.FIGURE_TRIM_PLATE_MASS;
             case PLATES_PER_PERCENT -> ReportKey.FIGURE_PLATES_PER_PERCENT;
         };

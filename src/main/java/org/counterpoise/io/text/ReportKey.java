@@ -194,6 +194,7 @@ public enum ReportKey {
     FIGURE_CLEARANCE("clearance_m"),
     FIGURE_RUNNING_FREQUENCY("running_frequency_Hz"),
     FIGURE_PREDICTED_RESPONSE("predicted_response"),
+    FIGURE_PREDICTED_PEAK_IN_BAND("predicted_peak_in_band"),
     FIGURE_TRIM_PLATE_MASS("trim_plate_mass_kg"),
     FIGURE_PLATES_PER_PERCENT("plates_per_percent"),
     PREDICTED_POINT("hardware.predicted[]"),
