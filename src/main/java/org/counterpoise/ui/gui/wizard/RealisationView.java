@@ -19,6 +19,7 @@ import javax.swing.JPanel;
 import javax.swing.JScrollPane;
 import javax.swing.JTable;
 import javax.swing.JTextArea;
+import javax.swing.SwingUtilities;
 import javax.swing.table.DefaultTableCellRenderer;
 import javax.swing.table.DefaultTableModel;
 import org.counterpoise.core.design.DesignDossier;
@@ -51,6 +52,7 @@ final class RealisationView {
     private final JLabel headline = new JLabel(" ");
     private final JPanel sections = new JPanel();
     private final JComponent page;
+    private final JScrollPane scroll;
     /** The sections on screen, for tests (empty while none is current). */
     private List<ReportSection> shown = List.of();
     private HardwareChoice shownChoice;
@@ -65,7 +67,7 @@ final class RealisationView {
         sections.setBorder(BorderFactory.createEmptyBorder(0, 8, 8, 8));
         JPanel top = new JPanel(new BorderLayout());
         top.add(sections, BorderLayout.NORTH);
-        JScrollPane scroll = new JScrollPane(top);
+        scroll = new JScrollPane(top);
         scroll.setBorder(null);
         scroll.getVerticalScrollBar().setUnitIncrement(16);
         JPanel p = new JPanel(new BorderLayout());
@@ -140,6 +142,8 @@ final class RealisationView {
         shownChoice = r.choice();
         sections.revalidate();
         sections.repaint();
+        // a new realisation is read from its top (the part list), whatever was scrolled to before
+        SwingUtilities.invokeLater(() -> scroll.getVerticalScrollBar().setValue(0));
     }
 
     private JComponent render(ReportSection section) {
@@ -156,6 +160,10 @@ final class RealisationView {
             ReportRowsTable table = new ReportRowsTable("hardware." + section.id().name().toLowerCase(Locale.ROOT));
             table.show(List.of(new ReportTable.Section(section.id(), "", rows(section))));
             table.model().removeRow(0); // the section's title is above the table
+            // the words of a value (the spring and damper kinds, what the tolerances hold to) get room
+            table.table().getColumnModel().getColumn(0).setPreferredWidth(220);
+            table.table().getColumnModel().getColumn(1).setPreferredWidth(260);
+            table.table().getColumnModel().getColumn(2).setPreferredWidth(50);
             return withHeader(table.table());
         });
     }
@@ -176,6 +184,9 @@ final class RealisationView {
         g.cells().forEach(line -> model.addRow(line.toArray()));
         JTable table = new JTable(model);
         table.setName("hardware." + section.id().name().toLowerCase(Locale.ROOT));
+        if (model.getColumnCount() > 1) {
+            table.getColumnModel().getColumn(0).setPreferredWidth(190); // the check's words, or the frequency
+        }
         table.setRowHeight(table.getRowHeight() + 4);
         table.setDefaultRenderer(Object.class, ReportRowsTable.wholeUnderPointer(JLabel.LEFT));
         List<Boolean> passes = flags(section);
@@ -238,6 +249,7 @@ final class RealisationView {
         area.setWrapStyleWord(true);
         area.setOpaque(false);
         area.setFont(new JLabel().getFont());
+        area.setCaretPosition(0); // the caret at the end would scroll the page to the text's end
         return area;
     }
 

@@ -11,6 +11,7 @@ import java.util.List;
 import java.util.concurrent.Callable;
 import javax.swing.JComboBox;
 import javax.swing.JLabel;
+import javax.swing.JTable;
 import javax.swing.JTextField;
 import javax.swing.SwingUtilities;
 import org.counterpoise.core.realisation.DamperKind;
@@ -123,6 +124,18 @@ class HardwareGuiTest {
         // pass or fail in words and with a symbol, never by colour alone
         assertTrue(headline.contains(allPass ? "\u2713 Every check of the parts passes"
                 : "\u2717 Not every check of the parts passes"), headline);
+        // every check row says its verdict in words with a symbol, as the core's typed check decides
+        List<String> verdicts = onEdt(() -> {
+            JTable checks = (JTable) Edt.find(frame.getContentPane(), "hardware.checks");
+            int column = checks.getColumnModel().getColumnIndex("Verdict");
+            List<String> out = new ArrayList<>();
+            for (int row = 0; row < checks.getRowCount(); row++) {
+                out.add(((JLabel) checks.prepareRenderer(checks.getCellRenderer(row, column), row, column)).getText());
+            }
+            return out;
+        });
+        assertEquals(expected.checks().stream().map(c -> c.passes() ? "\u2713 passes" : "\u2717 FAILS").toList(),
+                verdicts);
         HardwareChoice before = hardware();
         HardwareChoice shownAfterEdit = onEdt(() -> {
             text("hardware.service_hours").setText("30000");
