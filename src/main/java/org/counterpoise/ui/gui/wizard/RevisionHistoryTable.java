@@ -25,7 +25,7 @@ import org.counterpoise.ui.gui.Themes;
  * date is said under the table and nothing is saved until it is one.
  */
 final class RevisionHistoryTable extends JPanel {
-    private static final String[] COLUMNS = {"Rev.", "Date (YYYY-MM-DD)", "What changed", "By"};
+    private static final String[] COLUMNS = {"Rev.", "Date", "What changed", "By"};
     private final DefaultTableModel model = new DefaultTableModel(COLUMNS, 0);
     private final JTable table = new JTable(model);
     private final JLabel problem = new JLabel(" ");
@@ -43,7 +43,7 @@ final class RevisionHistoryTable extends JPanel {
         table.getColumnModel().getColumn(1).setPreferredWidth(140);
         table.getColumnModel().getColumn(2).setPreferredWidth(230);
         table.getColumnModel().getColumn(3).setPreferredWidth(90);
-        table.setToolTipText("Earlier issues of the sheet, oldest first; double-click a cell to edit it");
+        table.setToolTipText("Earlier issues of the sheet, oldest first; dates as YYYY-MM-DD; double-click a cell to edit it");
         JScrollPane scroll = new JScrollPane(table);
         scroll.setPreferredSize(new Dimension(500, 6 * table.getRowHeight() + 28));
         problem.setName("identity.revisions.message");
