@@ -44,7 +44,7 @@ public final class SpringChecks {
             + " (Shigley's Mechanical Engineering Design, 9th ed., 10-9; from memory), at the mean stress of the static"
             + " load and preload; stresses corrected by k (" + CFS + ", clause 7). The endurance limit is used at any"
             + " number of cycles (it is the limit above 10^7, conservative below). Not the standard's own fatigue"
-            + " diagrams (10.3), which were not available";
+            + " diagrams (10.3), which this program does not hold";
 
     private static final String BUCKLING_SOURCE = String.format(Locale.ROOT, "%s, 9.14: the theoretical buckling"
             + " deflection s_K with seating coefficient nu = %.1f (both ends guided and held parallel), against the"
