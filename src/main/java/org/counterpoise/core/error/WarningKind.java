@@ -85,7 +85,9 @@ public enum WarningKind {
      * more than the allowance (the utilisation is that peak over the allowed one).
      */
     ELASTOMER_LOSS_FACTOR_MISSED(WarningParameter.COMPOUND_LOSS_FACTOR, WarningParameter.LOSS_FACTOR_NEEDED,
-            WarningParameter.UTILISATION);
+            WarningParameter.UTILISATION),
+    /** No helical springs of stock wire give the design's rate: the closest are shown, off by this much. */
+    SPRING_RATE_NOT_MET(WarningParameter.RATE_DEVIATION);
 
     private final List<WarningParameter> parameters;
 

@@ -5,6 +5,7 @@ import org.counterpoise.core.design.DesignMethod;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.RunUpStroke;
 import org.counterpoise.core.error.Warning;
+import org.counterpoise.core.realisation.HardwareChoice;
 import org.counterpoise.core.error.WarningParameter;
 import org.counterpoise.core.error.WarningParameter.PeakBand;
 import org.counterpoise.core.units.Unit;
@@ -123,6 +124,10 @@ public final class WarningText {
                             ? "below" : "above", w.number(WarningParameter.LOSS_FACTOR_NEEDED),
                     w.number(WarningParameter.UTILISATION), ValueText.percent(DesignResult.TOLERANCE_ALLOWANCE, 2),
                     w.number(WarningParameter.LOSS_FACTOR_NEEDED));
+            case SPRING_RATE_NOT_MET -> String.format(Locale.ROOT, "No helical springs of stock wire give the rate the"
+                    + " design needs: the closest, shown, are %s %s; choose an elastomer element or another absorber.",
+                    ValueText.percent(Math.abs(w.number(WarningParameter.RATE_DEVIATION)), 2),
+                    w.number(WarningParameter.RATE_DEVIATION) < 0 ? "too soft" : "too stiff");
         };
     }
 

@@ -15,6 +15,9 @@ import java.util.concurrent.Future;
 import java.util.concurrent.atomic.AtomicInteger;
 import org.counterpoise.core.design.DesignDossier;
 import org.counterpoise.core.design.DesignResult;
+import org.counterpoise.core.error.Warning;
+import org.counterpoise.core.error.WarningKind;
+import org.counterpoise.core.error.WarningParameter;
 import org.counterpoise.core.realisation.StepFigure.StepQuantity;
 import org.counterpoise.io.project.ProjectReader;
 import org.junit.jupiter.api.Test;
@@ -39,11 +42,66 @@ class RealiserTest {
             assertTrue(!step.figures().isEmpty(), step.kind() + " has no figures");
             step.figures().forEach(f -> assertTrue(Double.isFinite(f.value()), preset + ": " + f));
         }
-        assertEquals(r.damper().checks(), r.checks());
+        assertTrue(r.elastomer().isEmpty());
+        List<DesignCheck> all = new ArrayList<>();
+        // the default choice is helical springs: always present; off the design's rate only with its warning
+        SpringDesign spring = r.spring().orElseThrow();
+        all.addAll(spring.checks());
+        boolean rateMissed = r.warnings().stream().anyMatch(w -> w.kind() == WarningKind.SPRING_RATE_NOT_MET);
+        // the springs realise the design's rate (the sizing rounds the coil diameter to a workshop step)
+        assertEquals(!rateMissed, Math.abs(spring.totalRate() / d.absorber().stiffness() - 1)
+                <= SpringSizing.RATE_DEVIATION_BOUND, preset.toString());
+        all.addAll(r.damper().checks());
+        assertEquals(all, r.checks());
         assertTrue(Double.isFinite(r.damper().peakForce()) && r.damper().peakForce() >= 0, preset.toString());
         assertTrue(r.trim().platesTotal() >= r.trim().platesFitted() && r.trim().platesFitted() >= 0);
         r.predicted().forEach(p -> assertTrue(Double.isFinite(p.before()) && Double.isFinite(p.after())
                 && Double.isFinite(p.stroke()), preset + ": " + p));
+    }
+
+    @Test
+    void aRateNoStockSpringGivesIsShownAsTheClosestSpringsWithTheirDeviation() {
+        // the compressor frame's absorber asks for about 50 MN/m, beyond 8 springs of the stock wire sizes
+        DesignResult stiff = Presets.design(Path.of("presets", "compressor-frame-speed-band.json"));
+        Realisation r = Realiser.realise(stiff, HardwareChoice.DEFAULT);
+        SpringDesign closest = r.spring().orElseThrow();
+        Warning missed = r.warnings().stream().filter(w -> w.kind() == WarningKind.SPRING_RATE_NOT_MET)
+                .findFirst().orElseThrow();
+        // the warning carries the deviation of the springs shown, total rate over the design's minus one
+        assertEquals(closest.totalRate() / stiff.absorber().stiffness() - 1,
+                missed.number(WarningParameter.RATE_DEVIATION), 1e-12);
+        assertTrue(Math.abs(missed.number(WarningParameter.RATE_DEVIATION)) > SpringSizing.RATE_DEVIATION_BOUND);
+        assertEquals(7, r.procedure().size());
+    }
+
+    @Test
+    void anElastomerChoiceGetsTheElementAndNoSprings() {
+        HardwareChoice rubber = new HardwareChoice(SpringKind.ELASTOMER, SpringMaterial.EN10270_1_DH, 0,
+                DamperKind.ELASTOMER_LOSS, EddyCurrentChoice.DEFAULT, ElastomerChoice.DEFAULT, 50_000, 0.01, 0.01);
+        Realisation r = Realiser.realise(Presets.fan(), rubber);
+        assertTrue(r.spring().isEmpty());
+        ElastomerDesign element = r.elastomer().orElseThrow();
+        assertEquals(element.checks().get(0), r.checks().get(0));
+        // the element's dynamic stiffness is the absorber mass at the hysteretic optimum's frequency squared
+        double omegaA = element.optimum().tuningRatio() * Presets.fan().study().structure().naturalFrequency();
+        assertEquals(Presets.fan().absorber().mass() * omegaA * omegaA, element.dynamicStiffness(),
+                1e-9 * element.dynamicStiffness());
+    }
+
+    @Test
+    void theSpringDemandOfTheFanByHand() {
+        DesignResult fan = Presets.fan(); // hangs vertically: the absorber rests on its springs
+        SpringDemand demand = Realiser.springDemand(fan, HardwareChoice.DEFAULT);
+        assertEquals(fan.absorber().stiffness(), demand.rate(), 0.0);
+        // weight m2 g with standard gravity 9.80665 m/s^2: 90 kg -> 882.60 N
+        assertEquals(90 * 9.80665, demand.staticLoad(), 1e-9);
+        // the run-up stroke (0.5186 mm at 723.4 kN/m = 375.2 N) is worse than the band's spring force (331.9 N)
+        assertEquals(fan.absorber().stiffness() * fan.strokeRunUp().value(), demand.dynamicLoad(), 1e-9);
+        assertTrue(demand.dynamicLoad() > fan.springForce().value());
+        assertEquals(375.2, demand.dynamicLoad(), 0.1);
+        // 50 000 h at the top of the band, 900 rpm = 15 Hz: 50 000 * 3600 * 15 = 2.7e9 cycles
+        assertEquals(fan.study().excitation().band().high(), demand.forcingFrequency(), 0.0);
+        assertEquals(2.7e9, demand.serviceCycles(), 1e-3 * 2.7e9);
     }
 
     @Test
