@@ -119,6 +119,15 @@ public final class WarningText {
                     + " stock sizes, up to %d in parallel, give the spring rate of %s: the part list has no spring;"
                     + " choose an elastomer element, another wire, or a lighter absorber.", HardwareChoice.MOST_SPRINGS,
                     QuantityFormat.format(w.number(WarningParameter.SPRING_RATE), Unit.KILONEWTON_PER_METRE));
+            case ELASTOMER_LOSS_FACTOR_MISSED -> String.format(Locale.ROOT, "The elastomer compound's loss factor"
+                    + " of %.3g is %s the %.3g the element needs: its peak response is %.3g times what the design"
+                    + " allows (its promised peak plus %s); choose a compound with a loss factor nearer %.3g at the"
+                    + " working frequency and temperature, or add a damper.",
+                    w.number(WarningParameter.COMPOUND_LOSS_FACTOR),
+                    w.number(WarningParameter.COMPOUND_LOSS_FACTOR) < w.number(WarningParameter.LOSS_FACTOR_NEEDED)
+                            ? "below" : "above", w.number(WarningParameter.LOSS_FACTOR_NEEDED),
+                    w.number(WarningParameter.UTILISATION), ValueText.percent(DesignResult.TOLERANCE_ALLOWANCE, 2),
+                    w.number(WarningParameter.LOSS_FACTOR_NEEDED));
         };
     }
 
