@@ -80,17 +80,17 @@ public enum WarningKind {
     /** A helical spring's working compression leaves less than the standard's minimum gaps before solid. */
     SPRING_GOES_SOLID(WarningParameter.UTILISATION),
     /**
-     * No helical springs of the chosen wire in stock sizes (up to the most in parallel) give the
-     * absorber's rate at all: the realisation has no spring.
-     */
-    SPRING_RATE_NOT_IN_STOCK(WarningParameter.SPRING_RATE),
-    /**
      * An elastomer element whose compound loss factor misses the loss factor the hysteretic optimum
      * needs, so that the peak with the compound's own loss factor exceeds the design's promised peak by
      * more than the allowance (the utilisation is that peak over the allowed one).
      */
     ELASTOMER_LOSS_FACTOR_MISSED(WarningParameter.COMPOUND_LOSS_FACTOR, WarningParameter.LOSS_FACTOR_NEEDED,
-            WarningParameter.UTILISATION);
+            WarningParameter.UTILISATION),
+    /**
+     * No helical springs of the chosen wire in stock sizes (up to the most in parallel) give the
+     * absorber's rate at all: the realisation has no spring.
+     */
+    SPRING_RATE_NOT_IN_STOCK(WarningParameter.SPRING_RATE);
 
     private final List<WarningParameter> parameters;
 

@@ -50,12 +50,12 @@ public enum WarningParameter {
     MASS_TOLERANCE(false),
     /** The absorber frequency tolerance, +/- fraction (non-dimensional). */
     FREQUENCY_TOLERANCE(false),
-    /** A spring rate, N/m. */
-    SPRING_RATE(false),
     /** The loss factor of the elastomer compound the workshop will use (non-dimensional). */
     COMPOUND_LOSS_FACTOR(false),
     /** The loss factor the hysteretic optimum needs (non-dimensional). */
     LOSS_FACTOR_NEEDED(false),
+    /** A spring rate, N/m. */
+    SPRING_RATE(false),
     /** The design method's id as files and the command line spell it (a token). */
     METHOD_ID(true),
     /** The band the exact-peak design minimises over for one forcing frequency (a {@link PeakBand} name). */

@@ -115,10 +115,6 @@ public final class WarningText {
                     + " frequency: its coils would resonate");
             case SPRING_GOES_SOLID -> spring(w, "the spring's working compression is", "the compression it has before"
                     + " its coils close: it would strike solid");
-            case SPRING_RATE_NOT_IN_STOCK -> String.format(Locale.ROOT, "No helical springs of the chosen wire in"
-                    + " stock sizes, up to %d in parallel, give the spring rate of %s: the part list has no spring;"
-                    + " choose an elastomer element, another wire, or a lighter absorber.", HardwareChoice.MOST_SPRINGS,
-                    QuantityFormat.format(w.number(WarningParameter.SPRING_RATE), Unit.KILONEWTON_PER_METRE));
             case ELASTOMER_LOSS_FACTOR_MISSED -> String.format(Locale.ROOT, "The elastomer compound's loss factor"
                     + " of %.3g is %s the %.3g the element needs: its peak response is %.3g times what the design"
                     + " allows (its promised peak plus %s); choose a compound with a loss factor nearer %.3g at the"
@@ -128,6 +124,10 @@ public final class WarningText {
                             ? "below" : "above", w.number(WarningParameter.LOSS_FACTOR_NEEDED),
                     w.number(WarningParameter.UTILISATION), ValueText.percent(DesignResult.TOLERANCE_ALLOWANCE, 2),
                     w.number(WarningParameter.LOSS_FACTOR_NEEDED));
+            case SPRING_RATE_NOT_IN_STOCK -> String.format(Locale.ROOT, "No helical springs of the chosen wire in"
+                    + " stock sizes, up to %d in parallel, give the spring rate of %s: the part list has no spring;"
+                    + " choose an elastomer element, another wire, or a lighter absorber.", HardwareChoice.MOST_SPRINGS,
+                    QuantityFormat.format(w.number(WarningParameter.SPRING_RATE), Unit.KILONEWTON_PER_METRE));
         };
     }
 
