@@ -86,11 +86,8 @@ public enum WarningKind {
      */
     ELASTOMER_LOSS_FACTOR_MISSED(WarningParameter.COMPOUND_LOSS_FACTOR, WarningParameter.LOSS_FACTOR_NEEDED,
             WarningParameter.UTILISATION),
-    /**
-     * No helical springs of the chosen wire in stock sizes (up to the most in parallel) give the
-     * absorber's rate at all: the realisation has no spring.
-     */
-    SPRING_RATE_NOT_IN_STOCK(WarningParameter.SPRING_RATE);
+    /** No helical springs of stock wire give the design's rate: the closest are shown, off by this much. */
+    SPRING_RATE_NOT_MET(WarningParameter.RATE_DEVIATION);
 
     private final List<WarningParameter> parameters;
 

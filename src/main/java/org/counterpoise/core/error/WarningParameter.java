@@ -54,8 +54,8 @@ public enum WarningParameter {
     COMPOUND_LOSS_FACTOR(false),
     /** The loss factor the hysteretic optimum needs (non-dimensional). */
     LOSS_FACTOR_NEEDED(false),
-    /** A spring rate, N/m. */
-    SPRING_RATE(false),
+    /** The springs' total rate over the rate the design needs, minus one (non-dimensional). */
+    RATE_DEVIATION(false),
     /** The design method's id as files and the command line spell it (a token). */
     METHOD_ID(true),
     /** The band the exact-peak design minimises over for one forcing frequency (a {@link PeakBand} name). */

@@ -11,6 +11,7 @@ import org.apache.commons.math3.optim.nonlinear.scalar.GoalType;
 import org.apache.commons.math3.optim.nonlinear.scalar.ObjectiveFunction;
 import org.apache.commons.math3.optim.nonlinear.scalar.noderiv.NelderMeadSimplex;
 import org.apache.commons.math3.optim.nonlinear.scalar.noderiv.SimplexOptimizer;
+import org.counterpoise.core.error.NotFoundException;
 import org.counterpoise.core.response.HystereticResponse;
 
 /**
@@ -78,6 +79,10 @@ public final class HystereticOptimiser {
                 best.offer(p, lower[0], lower[1], "a point of the global scan", false);
                 break;
             }
+        }
+        if (!Double.isFinite(best.peak)) {
+            throw new NotFoundException("finite peak of an elastomer absorber", "no tuning and loss factor gives the"
+                    + " response a finite peak over this band", "choose a band that excludes zero frequency");
         }
         boolean scanAgrees = scan.isEmpty() || scan.get(0)[2] >= best.peak * (1 - SCAN_TOLERANCE);
         double violation = HystereticCertificate.violation(p, best.f, best.eta);

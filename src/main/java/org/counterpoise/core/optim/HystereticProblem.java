@@ -75,8 +75,8 @@ record HystereticProblem(HystereticResponse response, double gLow, double gHigh,
 
     /** @return ln|H|^2 at g */
     double logSquared(double f, double lossFactor, double g) {
-        double m = response.magnitude(absorber(f, lossFactor), g);
-        return 2 * Math.log(m);
+        double[][] pq = response.squaredMagnitude(f, lossFactor);
+        return Math.log(RatioMaximum.value(pq[0], pq[1], g));
     }
 
     /** @return g d/dg ln|H|^2 at g (zero at an interior peak) */

@@ -56,7 +56,7 @@ public final class RatioMaximum {
         }
         if (high > low) {
             double[] r = RealPolynomials.quotientDerivativeNumerator(pt, qt);
-            for (double t : RealRoots.rootsAndCriticalPoints(r, low, high)) {
+            for (double t : stationaryCandidates(r, low, high, true)) {
                 if (t > low && t < high) {
                     double v = value(pt, qt, t);
                     if (v > best) {
@@ -70,20 +70,49 @@ public final class RatioMaximum {
     }
 
     /**
+     * The roots and critical points of R in [low, high], searched on [low, min(high, 1)] in t and on
+     * [max(low, 1), high] in u = 1/t (the reversed polynomial u^n R(1/u)): both searches then run on
+     * ranges of length at most 1. Searched in t alone up to Cauchy's bound (about 10^9 here, a degree
+     * of 13 and more in g), the derivative cascade lost a resonance at g = 0.91 of a stiff, lossy
+     * absorber; on the two unit ranges it does not.
+     */
+    private static double[] stationaryCandidates(double[] r, double low, double high, boolean withCritical) {
+        double[] near = low >= 1 ? new double[0] : withCritical
+                ? RealRoots.rootsAndCriticalPoints(r, low, Math.min(high, 1.0)) : RealRoots.roots(r, low, Math.min(high, 1.0));
+        double[] far = new double[0];
+        if (high > 1) {
+            double[] reversed = new double[r.length];
+            for (int i = 0; i < r.length; i++) {
+                reversed[i] = r[r.length - 1 - i];
+            }
+            far = withCritical ? RealRoots.rootsAndCriticalPoints(reversed, 1 / high, 1 / Math.max(low, 1.0))
+                    : RealRoots.roots(reversed, 1 / high, 1 / Math.max(low, 1.0));
+            for (int i = 0; i < far.length; i++) {
+                far[i] = far[i] > 0 ? 1 / far[i] : Double.POSITIVE_INFINITY;
+            }
+        }
+        double[] all = Arrays.copyOf(near, near.length + far.length);
+        System.arraycopy(far, 0, all, near.length, far.length);
+        return all;
+    }
+
+    /**
      * @param p P, ascending powers of t
      * @param q Q, ascending powers of t
      * @param low low end of the range
      * @param high high end (may be +infinity)
-     * @return the interior local maxima of P/Q strictly inside the range (roots of R where R falls
-     *     through zero), ascending
+     * @return the interior local maxima of P/Q strictly inside the range (roots of R where P/Q is not
+     *     below its values a relative 1e-6 either side), ascending
      */
     public static double[] interiorMaxima(double[] p, double[] q, double low, double high) {
         double[] r = RealPolynomials.quotientDerivativeNumerator(p, q);
-        double[] roots = RealRoots.roots(r, low, Math.min(high, Double.MAX_VALUE));
-        double[] out = new double[roots.length];
+        double[] candidates = stationaryCandidates(r, low, high, false);
+        Arrays.sort(candidates);
+        double[] out = new double[candidates.length];
         int n = 0;
-        for (double t : roots) {
-            if (t > low && t < high && RealPolynomials.derivativeValue(r, t) < 0) {
+        for (double t : candidates) {
+            boolean fresh = n == 0 || t - out[n - 1] > 1e-12 * t;
+            if (t > low && t < high && fresh && isLocalMaximum(p, q, t)) {
                 out[n++] = t;
             }
         }
@@ -100,6 +129,13 @@ public final class RatioMaximum {
         double qv = RealPolynomials.value(q, t);
         double pv = Math.max(RealPolynomials.value(p, t), 0.0);
         return qv > 0 ? pv / qv : Double.POSITIVE_INFINITY;
+    }
+
+    /** P/Q is at a local maximum at t: not below its values a relative 1e-6 either side. */
+    private static boolean isLocalMaximum(double[] p, double[] q, double t) {
+        double v = value(p, q, t);
+        double h = 1e-6 * t;
+        return v >= value(p, q, t - h) && v >= value(p, q, t + h);
     }
 
     /** Q &gt;= 0 touches zero only at a double root, a root of Q': a pole on the range, or NaN. */

@@ -6,9 +6,7 @@ import java.util.Optional;
 import java.util.function.BiFunction;
 import org.counterpoise.core.design.DesignDossier;
 import org.counterpoise.core.design.DesignResult;
-import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.error.Warning;
-import org.counterpoise.core.error.WarningKind;
 import org.counterpoise.core.response.ResponsePeak;
 import org.counterpoise.core.units.Gravity;
 
@@ -50,24 +48,14 @@ public final class Realiser {
     }
 
     /**
-     * The helical springs, or none when no stock wire gives the rate at all: then the damper, the
-     * tolerances, the trim and the procedure still stand, and a typed warning says why the part list
-     * has no spring. Any other refusal (a chosen count that cannot form opposed pairs) is the user's
-     * input and goes back to them.
+     * The helical springs. When no stock wire gives the rate, the sizing returns the closest springs
+     * and its checks say how far off they are (a typed warning), so the damper, tolerances, trim and
+     * procedure still stand beside them.
      */
     private static Optional<SpringDesign> spring(DesignResult design, HardwareChoice choice, List<Warning> warnings) {
-        SpringDemand demand = springDemand(design, choice);
-        try {
-            SpringDesign s = SpringSizing.size(demand, choice);
-            warnings.addAll(SpringChecks.warnings(s));
-            return Optional.of(s);
-        } catch (InvalidInputException e) {
-            if (!SpringSizing.RATE_FIELD.equals(e.field())) {
-                throw e;
-            }
-            warnings.add(Warning.of(WarningKind.SPRING_RATE_NOT_IN_STOCK, demand.rate()));
-            return Optional.empty();
-        }
+        SpringDesign s = SpringSizing.size(springDemand(design, choice), choice);
+        warnings.addAll(SpringChecks.warnings(s));
+        return Optional.of(s);
     }
 
     /**

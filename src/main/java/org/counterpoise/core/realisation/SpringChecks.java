@@ -103,10 +103,14 @@ public final class SpringChecks {
 
     /**
      * @param spring a spring design
-     * @return one warning for each check it fails, in the order of its checks
+     * @return a warning when its rate misses the demand by more than rounding explains (the rate lies
+     *     beyond stock wire), then one for each check it fails, in the order of its checks
      */
     public static List<Warning> warnings(SpringDesign spring) {
         List<Warning> warnings = new ArrayList<>();
+        if (Math.abs(spring.rateDeviation()) > SpringSizing.RATE_DEVIATION_BOUND) {
+            warnings.add(Warning.of(WarningKind.SPRING_RATE_NOT_MET, spring.rateDeviation()));
+        }
         for (DesignCheck c : spring.checks()) {
             if (!c.passes()) {
                 warnings.add(Warning.of(warningFor(c.kind()), c.utilisation()));

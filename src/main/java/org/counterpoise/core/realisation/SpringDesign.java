@@ -14,11 +14,13 @@ import java.util.List;
  * @param totalCoils n_t (active plus the closed, ground ends)
  * @param freeLength L0, m
  * @param solidLength Lc, m
- * @param installedLength the length under the static load, m (the free length when nothing rests on it)
+ * @param installedLength the length under the static load, m (the free length when nothing rests on it;
+ *     with opposed pairs, the length of the more loaded spring under its preload and static share)
  * @param ratePerSpring R = G d^4 / (8 D^3 n), N/m
  * @param totalRate count times the rate per spring, N/m
  * @param rateDeviation total rate over the design's spring rate, minus one
- * @param staticLoadPerSpring the steady load on one spring, N
+ * @param staticLoadPerSpring the steady load on one spring, N (with opposed pairs, the preload plus the
+ *     static share, on the more loaded spring)
  * @param dynamicLoadPerSpring the amplitude of the load on one spring at the worst of band and run-up, N
  * @param serviceCycles load cycles over the service life
  * @param checks stress, fatigue, buckling, surge and solid-length checks

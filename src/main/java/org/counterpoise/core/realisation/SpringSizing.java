@@ -30,7 +30,11 @@ import org.counterpoise.core.error.InvalidInputException;
  * The count is then even.
  *
  * <p>When no count up to the most springs passes, the design with the least largest utilisation is
- * returned with its failing checks; {@link SpringChecks#warnings} turns them into warnings.
+ * returned with its failing checks; {@link SpringChecks#warnings} turns them into warnings. When
+ * the rate itself lies beyond what stock wire can give within the standard's index range (stiffer
+ * than the most springs of the thickest wire at w = 4 and n = 2, or softer than the fewest of the
+ * thinnest at w = 20 and {@link #MOST_ACTIVE_COILS}), that extreme spring is returned with its
+ * checks and its rate deviation, and the warnings say the rate is not met.
  */
 public final class SpringSizing {
 
@@ -54,9 +58,6 @@ public final class SpringSizing {
      */
     public static final double RATE_DEVIATION_BOUND = 0.0075;
 
-    /** The field {@link #size} names when no stock wire gives the rate at all. */
-    public static final String RATE_FIELD = "spring.rate";
-
     private SpringSizing() {
     }
 
@@ -64,9 +65,8 @@ public final class SpringSizing {
      * @param demand what the absorber asks of its springs (validated)
      * @param choice the hardware choices: the wire and the spring count (0: the fewest that pass)
      * @return the spring design, with its checks
-     * @throws InvalidInputException naming {@code spring.rate} when no stock wire can give the rate
-     *     at all, {@code hardware.spring} when the choice is not a helical spring, and
-     *     {@code hardware.spring_count} when a chosen odd count must form opposed pairs
+     * @throws InvalidInputException naming {@code hardware.spring} when the choice is not a helical
+     *     spring, and {@code hardware.spring_count} when a chosen odd count must form opposed pairs
      */
     public static SpringDesign size(SpringDemand demand, HardwareChoice choice) {
         Checks.present("spring", demand, "a spring rate, loads, forcing frequency and service cycles");
@@ -98,10 +98,7 @@ public final class SpringSizing {
             }
         }
         if (fallback == null) {
-            throw new InvalidInputException(RATE_FIELD, Checks.show(demand.rate()) + " N/m",
-                    "a rate that " + counts.get(counts.size() - 1) + " helical springs of "
-                            + choice.springMaterial().standard() + " wire in stock sizes can give; choose an"
-                            + " elastomer element, or change the absorber");
+            return closestRate(demand, choice.springMaterial(), arrangement, counts);
         }
         return fallback.design();
     }
@@ -160,18 +157,46 @@ public final class SpringSizing {
         return best;
     }
 
+    /**
+     * The spring at the end of the stock range nearest to the rate (in ratio), when no geometry gives
+     * it: the most springs of the thickest wire at the smallest index and fewest coils when the rate
+     * is too high, else the fewest springs of the thinnest wire at the largest index and most coils.
+     */
+    private static SpringDesign closestRate(SpringDemand demand, SpringMaterial material,
+            SpringArrangement arrangement, List<Integer> counts) {
+        double[] stock = material.stockDiameters();
+        double g = material.shearModulus();
+        int most = counts.get(counts.size() - 1);
+        double thick = stock[stock.length - 1];
+        double stiffest = most * CompressionSpringFormulas.rate(g, thick,
+                CompressionSpringFormulas.SMALLEST_INDEX * thick, CompressionSpringFormulas.FEWEST_ACTIVE_COILS);
+        if (demand.rate() >= stiffest) {
+            return build(demand, material, arrangement, most, thick, CompressionSpringFormulas.FEWEST_ACTIVE_COILS,
+                    CompressionSpringFormulas.SMALLEST_INDEX * thick).design();
+        }
+        double thin = stock[0];
+        return build(demand, material, arrangement, counts.get(0), thin, MOST_ACTIVE_COILS,
+                CompressionSpringFormulas.LARGEST_INDEX * thin).design();
+    }
+
     /** One spring geometry with its checks, or null when the rounded index leaves the standard's range. */
     static Candidate evaluate(SpringDemand demand, SpringMaterial material, SpringArrangement arrangement, int count,
             double d, double n) {
-        double g = material.shearModulus();
-        double exactD = CompressionSpringFormulas.meanDiameterForRate(g, d, n, demand.rate() / count);
+        double exactD = CompressionSpringFormulas.meanDiameterForRate(material.shearModulus(), d, n,
+                demand.rate() / count);
         double step = meanDiameterStep(exactD);
         double meanD = Math.rint(exactD / step) * step;
         double index = meanD / d;
         if (index < CompressionSpringFormulas.SMALLEST_INDEX || index > CompressionSpringFormulas.LARGEST_INDEX) {
             return null;
         }
-        double rate = CompressionSpringFormulas.rate(g, d, meanD, n);
+        return build(demand, material, arrangement, count, d, n, meanD);
+    }
+
+    /** The spring of a given geometry with its lengths and checks. */
+    private static Candidate build(SpringDemand demand, SpringMaterial material, SpringArrangement arrangement,
+            int count, double d, double n, double meanD) {
+        double rate = CompressionSpringFormulas.rate(material.shearModulus(), d, meanD, n);
         double amplitude = demand.dynamicLoad() / count;
         double share = demand.staticLoad() / count;
         double preload = arrangement == SpringArrangement.SEATED ? 0.0 : share + (1 + PRELOAD_RESERVE) * amplitude;

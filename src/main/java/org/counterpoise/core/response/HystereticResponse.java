@@ -117,7 +117,11 @@ public final class HystereticResponse {
         double[] p = RealPolynomials.scale(RealPolynomials.add(RealPolynomials.multiply(nr, nr),
                 RealPolynomials.multiply(ni, ni)), s * s);
         double[] q = RealPolynomials.add(RealPolynomials.multiply(dr, dr), RealPolynomials.multiply(di, di));
-        return new double[][] {RealPolynomials.trim(p), RealPolynomials.trim(q)};
+        // common powers of g come only from exact shifts (a drive over s^2 and a response times s^2):
+        // cancel them, as TransferFunction does in s, so that |H| at g = 0 is its limit, not 0/0
+        int common = Math.min(RealPolynomials.lowestPower(p), RealPolynomials.lowestPower(q));
+        return new double[][] {RealPolynomials.trim(RealPolynomials.unshift(p, common)),
+            RealPolynomials.trim(RealPolynomials.unshift(q, common))};
     }
 
     /**
@@ -146,10 +150,13 @@ public final class HystereticResponse {
         }
         double kr = f * f;
         double ki = f * f * eta;
-        double[] n = combine(n0, n1, kr, ki, g);
-        double[] d = combine(d0, d1, kr, ki, g);
-        double[] a1 = evaluate(n1, g);
-        double[] b1 = evaluate(d1, g);
+        // at g = 0 a common factor of g in N and D (a base-acceleration drive) makes the formula 0/0:
+        // take the limit, a ten-millionth of the structure's frequency above zero
+        double at = Math.max(g, 1e-7);
+        double[] n = combine(n0, n1, kr, ki, at);
+        double[] d = combine(d0, d1, kr, ki, at);
+        double[] a1 = evaluate(n1, at);
+        double[] b1 = evaluate(d1, at);
         // w = N1/N - D1/D
         double[] w = subtract(divide(a1, n), divide(b1, d));
         // dK/d(ln f) = 2 K = 2 (kr + i ki); dK/d eta = i f^2

@@ -34,7 +34,7 @@ public final class CheckText {
             case SPRING_SURGE -> "forcing against the spring's surge frequency";
             case SPRING_SOLID -> "compression before the coils touch";
             case ELASTOMER_LOSS_FACTOR -> "elastomer loss factor needed against the compound's";
-            case DAMPER_STROKE -> "damper stroke needed against its usable stroke";
+            case DAMPER_STROKE -> "largest damper stroke against the clearance it must allow";
             case EDDY_CURRENT_SKIN_DEPTH -> "eddy-current plate thickness against the skin depth";
         };
     }
@@ -54,7 +54,8 @@ public final class CheckText {
                 new Field(ReportKey.CHECK_UNIT, "", new Words(jsonUnit(d), List.of())),
                 new Field(ReportKey.CHECK_UTILISATION, "utilisation", new Percent(c.utilisation(), 3)),
                 new Field(ReportKey.CHECK_PASSES, "verdict", new Flag(c.passes(), c.passes() ? "passes" : "FAILS")),
-                new Field(ReportKey.CHECK_SOURCE, "source", new Words(c.source(), List.of())));
+                // the source goes under the table as a sentence (ReportTable.grid), in the JSON as a field
+                new Field(ReportKey.CHECK_SOURCE, "", new Words(c.source(), List.of())));
         return new ReportRow(ReportKey.CHECK, words, "", new Fields("", fields), c.source(), "");
     }
 

@@ -5,13 +5,16 @@ import java.util.EnumSet;
 import java.util.List;
 import java.util.Locale;
 import java.util.Set;
+import org.counterpoise.core.design.DesignDossier;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.realisation.DesignCheck;
 import org.counterpoise.core.realisation.HardwareCaution;
+import org.counterpoise.core.realisation.HardwareChoice;
 import org.counterpoise.core.realisation.PartTolerances;
 import org.counterpoise.core.realisation.PartTolerances.ToleranceBasis;
 import org.counterpoise.core.realisation.PredictedPoint;
 import org.counterpoise.core.realisation.Realisation;
+import org.counterpoise.core.realisation.Realiser;
 import org.counterpoise.core.realisation.TrimPlan;
 import org.counterpoise.core.units.Dimension;
 import org.counterpoise.io.text.ReportSection.SectionId;
@@ -64,6 +67,16 @@ public final class HardwareContent {
         }
         ReportContent out = new ReportContent(content.name(), sections, warnings, cautions);
         return content.comparison().map(out::with).orElse(out);
+    }
+
+    /**
+     * @param content the report of the dossier's design
+     * @param dossier the dossier (its design and its realisation for the choice, each computed once)
+     * @param choice the project's hardware choices ({@code Project.hardware()})
+     * @return the report with the realisation, as {@link #with(ReportContent, Realisation, DesignResult)}
+     */
+    public static ReportContent with(ReportContent content, DesignDossier dossier, HardwareChoice choice) {
+        return with(content, Realiser.realisation(dossier, choice), dossier.design());
     }
 
     /**

@@ -71,17 +71,20 @@ public final class ProcedureText {
                     + clause(step, " (for the expected structure frequency: ", StepQuantity.ABSORBER_TARGET_FREQUENCY,
                             ")") + ".";
             case TUNE_ABSORBER -> "Tune the absorber alone, clamped to a rigid base, by tap test or shaker to that"
-                    + " frequency" + clause(step, " within +/-", StepQuantity.ABSORBER_FREQUENCY_TOLERANCE)
-                    + ", adding or taking off trim plates.";
+                    + " frequency" + clause(step, " (", StepQuantity.ABSORBER_TARGET_FREQUENCY, " for the expected"
+                            + " structure frequency)") + clause(step, " within +/-",
+                                    StepQuantity.ABSORBER_FREQUENCY_TOLERANCE) + ", adding or taking off trim plates.";
             case FIT -> "Fit the absorber with its retention and secondary catch, check"
                     + clause(step, " the clearance of ", StepQuantity.CLEARANCE, " around the mass in every"
                             + " direction,") + " that the stroke stops are in place and that every fixing is"
                     + " tightened and locked.";
             case MEASURE_RESPONSE -> "Run the machine and measure the structure's response at the running speed"
-                    + clause(step, " ", StepQuantity.RUNNING_FREQUENCY) + " and over the whole band.";
+                    + clause(step, " ", StepQuantity.RUNNING_FREQUENCY) + clause(step, " (the design predicts a peak"
+                            + " of ", StepQuantity.PREDICTED_RESPONSE, " there with the absorber)")
+                    + " and over the whole band.";
             case COMPARE -> "Compare the readings with the predicted response table"
-                    + clause(step, "; at the running speed the design predicts ", StepQuantity.PREDICTED_RESPONSE)
-                    + ".";
+                    + clause(step, "; over the band the peak with the absorber should not exceed ",
+                            StepQuantity.PREDICTED_PEAK_IN_BAND) + ".";
             case ADJUST -> "If the readings are off, adjust by the trim step"
                     + clause(step, " (one plate is ", StepQuantity.TRIM_PLATE_MASS, ";")
                     + clause(step, " ", StepQuantity.PLATES_PER_PERCENT, " plates per percent of frequency)")

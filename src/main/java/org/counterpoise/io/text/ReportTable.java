@@ -146,7 +146,10 @@ public final class ReportTable {
                     .map(f -> ValueText.cell(f.value())).toList());
         }
         List<Boolean> none = shown.stream().map(r -> false).toList();
-        return Optional.of(new Grid(section.title(), headings, cells, none, none, List.of()));
+        // the sources are sentences under the table, not a column: they are long
+        List<String> sources = shown.stream().filter(r -> !r.source().isEmpty())
+                .map(r -> ValueText.capitalised(r.label()) + ": " + r.source() + ".").toList();
+        return Optional.of(new Grid(section.title(), headings, cells, none, none, sources));
     }
 
     private static String note(ReportRow row) {

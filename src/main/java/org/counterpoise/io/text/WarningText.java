@@ -124,10 +124,10 @@ public final class WarningText {
                             ? "below" : "above", w.number(WarningParameter.LOSS_FACTOR_NEEDED),
                     w.number(WarningParameter.UTILISATION), ValueText.percent(DesignResult.TOLERANCE_ALLOWANCE, 2),
                     w.number(WarningParameter.LOSS_FACTOR_NEEDED));
-            case SPRING_RATE_NOT_IN_STOCK -> String.format(Locale.ROOT, "No helical springs of the chosen wire in"
-                    + " stock sizes, up to %d in parallel, give the spring rate of %s: the part list has no spring;"
-                    + " choose an elastomer element, another wire, or a lighter absorber.", HardwareChoice.MOST_SPRINGS,
-                    QuantityFormat.format(w.number(WarningParameter.SPRING_RATE), Unit.KILONEWTON_PER_METRE));
+            case SPRING_RATE_NOT_MET -> String.format(Locale.ROOT, "No helical springs of stock wire give the rate the"
+                    + " design needs: the closest, shown, are %s %s; choose an elastomer element or another absorber.",
+                    ValueText.percent(Math.abs(w.number(WarningParameter.RATE_DEVIATION)), 2),
+                    w.number(WarningParameter.RATE_DEVIATION) < 0 ? "too soft" : "too stiff");
         };
     }
 

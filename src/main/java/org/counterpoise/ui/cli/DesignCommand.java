@@ -15,6 +15,7 @@ import org.counterpoise.io.project.ProjectIdentity;
 import org.counterpoise.io.text.ComparisonContent;
 import org.counterpoise.io.text.DesignContent;
 import org.counterpoise.io.text.DesignReport;
+import org.counterpoise.io.text.HardwareContent;
 import org.counterpoise.io.text.ReportContent;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
@@ -44,8 +45,9 @@ public final class DesignCommand implements Callable<Integer> {
         DesignDossier dossier = DesignDossier.of(loaded.project().toStudy());
         DesignResult result = dossier.design();
         MethodComparison comparison = dossier.comparison(ProgressListener.NONE);
-        ReportContent content = DesignContent.of(result, json ? ProjectIdentity.EMPTY : loaded.project().identity(),
-                Optional.empty()).with(ComparisonContent.of(comparison, result.study()))
+        ReportContent designed = DesignContent.of(result, json ? ProjectIdentity.EMPTY : loaded.project().identity(),
+                Optional.empty()).with(ComparisonContent.of(comparison, result.study()));
+        ReportContent content = HardwareContent.with(designed, dossier, loaded.project().hardware())
                 .shownIn(DisplayConvention.of(convention, loaded.project()));
         spec.commandLine().getOut().print(PlainText.forTerminal(json ? ResultJson.toJson(content)
                 : DesignReport.render(content)));

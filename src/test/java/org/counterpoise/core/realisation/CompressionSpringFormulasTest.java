@@ -110,4 +110,29 @@ class CompressionSpringFormulasTest {
         //   = 7850 * 1.263310e-5 = 0.099170 kg
         assertEquals(0.099170, CompressionSpringFormulas.mass(RHO, D_WIRE, D_MEAN, 10), 1e-6);
     }
+
+    @Test
+    void textbookExampleOfAMusicWireSpring() {
+        // Budynas and Nisbett, Shigley's Mechanical Engineering Design, 9th ed., Example 10-1 (from
+        // memory): music wire d = 0.037 in, outside diameter 7/16 in, squared and ground ends with
+        // N_t = 12.5 total coils (N_a = 10.5 active), G = 11.75 Mpsi; the book finds C = 10.82,
+        // K_B = 1.124, S_sy = 0.45 S_ut = 0.45 * 324 = 146 kpsi, the load that stresses the wire to it
+        // F = 6.45 lbf, the rate k = 4.08 lbf/in, its deflection y = 1.58 in and the solid length
+        // L_s = d N_t = 0.4625 in. Worked here in SI through the EN 13906-1 formulas.
+        double inch = 0.0254;
+        double psi = 6894.757;
+        double lbf = 4.4482216;
+        double d = 0.037 * inch;
+        double meanD = (0.4375 - 0.037) * inch;
+        double g = 11.75e6 * psi;
+        assertEquals(10.82, meanD / d, 0.005);
+        assertEquals(1.124, CompressionSpringFormulas.bergstraesser(meanD / d), 0.0005);
+        // F from tau_k = S_sy: the stress formula is linear in F
+        double force = 146e3 * psi / CompressionSpringFormulas.correctedShearStress(1.0, d, meanD);
+        assertEquals(6.45, force / lbf, 0.01);
+        double rate = CompressionSpringFormulas.rate(g, d, meanD, 10.5);
+        assertEquals(4.08, rate / (lbf / inch), 0.01);
+        assertEquals(1.58, force / rate / inch, 0.01);
+        assertEquals(0.4625, CompressionSpringFormulas.solidLength(12.5, d) / inch, 1e-12);
+    }
 }

@@ -175,6 +175,25 @@ class SpringSizingTest {
     }
 
     @Test
+    void aRateBeyondStockWireGivesTheClosestSpringsAndSaysSo() {
+        // 5e7 N/m: eight springs of 20 mm wire at w = 4 and n = 2 give at most
+        // 8 * G d / (8 n w^3) = 8 * 81.5e9 * 0.02 / (8 * 2 * 64) = 8 * 1.5918e6 = 1.2734e7 N/m
+        SpringDesign stiff = SpringSizing.size(new SpringDemand(5e7, 3e4, 1e3, 200, 1e9), HardwareChoice.DEFAULT);
+        assertEquals(8, stiff.count());
+        assertEquals(20e-3, stiff.wireDiameter(), 1e-15);
+        assertEquals(1.2734e7, stiff.totalRate(), 0.0001e7);
+        assertEquals(1.2734e7 / 5e7 - 1, stiff.rateDeviation(), 1e-4);
+        Warning first = SpringChecks.warnings(stiff).get(0);
+        assertEquals(WarningKind.SPRING_RATE_NOT_MET, first.kind());
+        // 5 N/m on one spring: 0.5 mm wire at w = 20 and n = 60 gives G d / (8 n w^3)
+        // = 81.5e9 * 5e-4 / (8 * 60 * 8000) = 10.61 N/m at the softest
+        SpringDesign soft = SpringSizing.size(new SpringDemand(5, 1, 0.1, 10, 1e6), HardwareChoice.DEFAULT);
+        assertEquals(1, soft.count());
+        assertEquals(10.61, soft.totalRate(), 0.01);
+        assertEquals(WarningKind.SPRING_RATE_NOT_MET, SpringChecks.warnings(soft).get(0).kind());
+    }
+
+    @Test
     void badInputIsNamedByItsField() {
         assertField("spring.rate", () -> new SpringDemand(-1, 10, 1, 100, 1e9));
         assertField("spring.rate", () -> new SpringDemand(Double.NaN, 10, 1, 100, 1e9));
@@ -182,9 +201,6 @@ class SpringSizingTest {
         assertField("spring.dynamic_load", () -> new SpringDemand(1e5, 10, Double.POSITIVE_INFINITY, 100, 1e9));
         assertField("spring.forcing_frequency", () -> new SpringDemand(1e5, 10, 1, 0, 1e9));
         assertField("spring.service_cycles", () -> new SpringDemand(1e5, 10, 1, 100, -1));
-        // a rate no stock wire gives: 1e12 N/m
-        assertField("spring.rate", () -> SpringSizing.size(new SpringDemand(1e12, 1e3, 1, 100, 1e9),
-                HardwareChoice.DEFAULT));
         // opposed pairs need an even count
         assertField("hardware.spring_count", () -> SpringSizing.size(new SpringDemand(1e5, 0, 100, 100, 1e9),
                 choice(SpringMaterial.EN10270_1_DH, 3)));
