@@ -11,8 +11,9 @@ import org.counterpoise.core.units.Dimension;
 /**
  * The tuning and commissioning procedure: the steps of {@link ProcedureStepKind} in order, each with
  * the numbers the technician needs (the words are in io.text). The absorber's target follows the
- * MEASURED structure frequency at the design's tuning ratio; the figures give the value for the
- * expected structure frequency.
+ * MEASURED structure frequency at the tuning ratio of the absorber as built (the design's, or the
+ * hysteretic optimum's for an elastomer element); the figures give the value for the expected
+ * structure frequency.
  */
 public final class CommissioningProcedure {
 
@@ -21,18 +22,20 @@ public final class CommissioningProcedure {
 
     /**
      * @param design the design
+     * @param built the absorber as built (its tuning ratio and responses)
      * @param tolerances the part tolerances (the absorber frequency tolerance)
      * @param trim the trim plan
      * @return the steps, in {@link ProcedureStepKind} order
      */
-    public static List<ProcedureStep> of(DesignResult design, PartTolerances tolerances, TrimPlan trim) {
+    static List<ProcedureStep> of(DesignResult design, BuiltAbsorber built, PartTolerances tolerances,
+            TrimPlan trim) {
         double omega1 = design.study().structure().naturalFrequency();
-        double ratio = design.tuning().tuningRatio();
+        double ratio = built.tuningRatio();
         double target = ratio * omega1;
         Excitation e = design.study().excitation();
         double running = DamperSizing.runningFrequency(e.band());
         ResponseKind kind = design.study().response();
-        double predicted = DamperSizing.fitted(design).amplitudeAt(kind, running);
+        double predicted = built.amplitudeAt(kind, running);
         List<ProcedureStep> steps = new ArrayList<>();
         for (ProcedureStepKind step : ProcedureStepKind.values()) {
             List<StepFigure> figures = switch (step) {
@@ -50,7 +53,7 @@ public final class CommissioningProcedure {
                         new StepFigure(StepQuantity.RUNNING_FREQUENCY, running, Dimension.FREQUENCY),
                         new StepFigure(StepQuantity.PREDICTED_RESPONSE, predicted, kind.dimension()));
                 case COMPARE -> List.of(new StepFigure(StepQuantity.PREDICTED_PEAK_IN_BAND,
-                        design.responseAfter().value(), kind.dimension()));
+                        built.peakInBand(kind), kind.dimension()));
                 case ADJUST -> List.of(
                         new StepFigure(StepQuantity.TRIM_PLATE_MASS, trim.plateMass(), Dimension.MASS),
                         new StepFigure(StepQuantity.PLATES_PER_PERCENT, trim.platesPerPercent(), Dimension.RATIO));

@@ -70,10 +70,19 @@ public final class DamperSizing {
      * @param design the design
      * @param choice the hardware choices
      * @param warnings where a failing damper check is reported
-     * @return the damper
+     * @return the damper (for elastomer loss, at the design's spring rate)
      */
     public static DamperDesign size(DesignResult design, HardwareChoice choice, List<Warning> warnings) {
-        double coefficient = coefficient(design, choice);
+        return size(design, choice, BuiltAbsorber.of(design, choice, Optional.empty()), warnings);
+    }
+
+    /**
+     * The damper of the absorber as built. The strokes, velocity and force are the viscous design's
+     * (for an elastomer element they show what its loss must withstand at the design's damping).
+     */
+    static DamperDesign size(DesignResult design, HardwareChoice choice, BuiltAbsorber built,
+            List<Warning> warnings) {
+        double coefficient = coefficient(design, choice, built.springRate());
         double inBand = design.strokeInBand().value();
         ResponsePeak steadyRunUp = design.strokeRunUp();
         double runUp = steadyRunUp.unbounded() ? inBand : steadyRunUp.value();
@@ -103,12 +112,13 @@ public final class DamperSizing {
     /**
      * @param design the design
      * @param choice the hardware choices
+     * @param springRate the rate of the spring or element, N/m
      * @return the damping coefficient the damper gives, N*s/m: the design's, or for elastomer loss the
      *     compound's equivalent at the running frequency, eta k / omega
      */
-    static double coefficient(DesignResult design, HardwareChoice choice) {
+    static double coefficient(DesignResult design, HardwareChoice choice, double springRate) {
         if (choice.damperKind() == DamperKind.ELASTOMER_LOSS) {
-            return choice.elastomer().compoundLossFactor() * design.absorber().stiffness()
+            return choice.elastomer().compoundLossFactor() * springRate
                     / runningFrequency(design.study().excitation().band());
         }
         return design.absorber().damping();

@@ -2,6 +2,7 @@ package org.counterpoise.core.realisation;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 import java.util.TreeSet;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.model.Excitation;
@@ -29,15 +30,23 @@ public final class PredictedTable {
 
     /**
      * @param design the design
-     * @return the rows, by ascending frequency
+     * @return the rows, by ascending frequency, for the viscous design
      */
     public static List<PredictedPoint> of(DesignResult design) {
+        return of(design, BuiltAbsorber.of(design, HardwareChoice.DEFAULT, Optional.empty()));
+    }
+
+    /**
+     * @param design the design
+     * @param fitted the absorber as built
+     * @return the rows, by ascending frequency
+     */
+    static List<PredictedPoint> of(DesignResult design, BuiltAbsorber fitted) {
         Excitation e = design.study().excitation();
         SystemResponse bare = new SystemResponse(design.study().structure(), null, e.kind(), e.amplitude());
-        SystemResponse fitted = DamperSizing.fitted(design);
         ResponseKind kind = design.study().response();
         List<PredictedPoint> rows = new ArrayList<>();
-        for (double w : frequencies(design)) {
+        for (double w : frequencies(design, fitted.hysteretic().isEmpty())) {
             double omega = w;
             if (Double.isInfinite(bare.amplitudeAt(kind, omega)) || Double.isInfinite(fitted.amplitudeAt(kind, omega))
                     || Double.isInfinite(fitted.amplitudeAt(ResponseKind.STROKE, omega))) {
@@ -51,10 +60,11 @@ public final class PredictedTable {
 
     /**
      * @param design the design
+     * @param viscousPeaks whether to mark the exact peaks of the viscous design's response
      * @return the table's frequencies, rad/s, ascending: the marked ones (band ends, running
-     *     frequency, coupled natural frequencies) and evenly spaced ones not too close to them
+     *     frequency, coupled natural frequencies, peaks) and evenly spaced ones not too close to them
      */
-    static double[] frequencies(DesignResult design) {
+    static double[] frequencies(DesignResult design, boolean viscousPeaks) {
         FrequencyBand band = design.study().excitation().band();
         double[] coupled = design.coupledNaturalFrequencies();
         TreeSet<Double> marked = new TreeSet<>(List.of(band.low(), band.high(),
@@ -62,10 +72,11 @@ public final class PredictedTable {
         double low = Math.min(0.8 * band.low(), 0.9 * coupled[0]);
         double high = Math.max(1.2 * band.high(), 1.1 * coupled[1]);
         // the damped peaks with the absorber, where a reading is most sensitive to the tuning
-        SystemResponse fitted = DamperSizing.fitted(design);
-        double omega1 = fitted.system().referenceFrequency();
-        for (double g : PeakFinder.interiorMaxima(fitted.transferFunction(design.study().response()), low / omega1,
-                high / omega1)) {
+        SystemResponse viscous = DamperSizing.fitted(design);
+        double omega1 = viscous.system().referenceFrequency();
+        double[] peaks = viscousPeaks ? PeakFinder.interiorMaxima(viscous.transferFunction(design.study().response()),
+                low / omega1, high / omega1) : new double[0];
+        for (double g : peaks) {
             marked.add(g * omega1);
         }
         TreeSet<Double> all = new TreeSet<>(marked);

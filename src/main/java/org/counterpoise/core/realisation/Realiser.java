@@ -7,14 +7,13 @@ import java.util.function.BiFunction;
 import org.counterpoise.core.design.DesignDossier;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.error.Warning;
-import org.counterpoise.core.error.WarningKind;
 import org.counterpoise.core.response.ResponsePeak;
 import org.counterpoise.core.units.Gravity;
 
 /**
  * The one entry point that turns a design into hardware: {@link DesignResult} and
  * {@link HardwareChoice} in, {@link Realisation} out. The parts are sized by their own classes
- * ({@link SpringSizing} from the {@link #springDemand}, {@link DamperSizing}, {@link ToleranceSizing}, {@link TrimSizing}, {@link CommissioningProcedure},
+ * ({@link SpringSizing} from the {@link #springDemand}, {@link ElastomerSizing}, {@link DamperSizing}, {@link ToleranceSizing}, {@link TrimSizing}, {@link CommissioningProcedure},
  * {@link PredictedTable}); front ends ask {@link #realisation(DesignDossier, HardwareChoice)}, which
  * computes it once per choice per dossier.
  */
@@ -30,11 +29,6 @@ public final class Realiser {
      */
     public static Realisation realise(DesignResult design, HardwareChoice choice) {
         List<Warning> warnings = new ArrayList<>();
-        DamperDesign damper = DamperSizing.size(design, choice, warnings);
-        PartTolerances tolerances = ToleranceSizing.of(design, choice, warnings);
-        TrimPlan trim = TrimSizing.of(design, choice);
-        List<ProcedureStep> procedure = CommissioningProcedure.of(design, tolerances, trim);
-        List<PredictedPoint> predicted = PredictedTable.of(design);
         Optional<SpringDesign> spring = Optional.empty();
         Optional<ElastomerDesign> elastomer = Optional.empty();
         if (choice.springKind() == SpringKind.HELICAL_COMPRESSION) {
@@ -44,6 +38,12 @@ public final class Realiser {
             warnings.addAll(ElastomerSizing.warnings(element, choice));
             elastomer = Optional.of(element);
         }
+        BuiltAbsorber built = BuiltAbsorber.of(design, choice, elastomer);
+        DamperDesign damper = DamperSizing.size(design, choice, built, warnings);
+        PartTolerances tolerances = ToleranceSizing.of(design, choice, warnings);
+        TrimPlan trim = TrimSizing.of(design, choice);
+        List<ProcedureStep> procedure = CommissioningProcedure.of(design, built, tolerances, trim);
+        List<PredictedPoint> predicted = PredictedTable.of(design, built);
         return new Realisation(choice, spring, elastomer, damper, tolerances, trim, procedure, predicted, warnings);
     }
 
