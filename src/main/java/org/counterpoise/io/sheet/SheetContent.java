@@ -14,6 +14,7 @@ import org.counterpoise.io.text.DesignContent;
 import org.counterpoise.io.text.ReportContent;
 import org.counterpoise.io.text.ReportKey;
 import org.counterpoise.io.text.ReportTable;
+import org.counterpoise.io.text.UnitSystem;
 
 /**
  * Everything the parameter sheet prints, as text: the design's {@link ReportContent} as tables
@@ -108,7 +109,7 @@ public record SheetContent(String projectName, String notes, String date, String
         List<ReportTable.Section> sections = ReportTable.of(report, Set.of(ReportKey.REVISION, ReportKey.DATE));
         List<String> warnings = report.warnings().stream().map(ReportContent.Note::text).toList();
         return new SheetContent(report.name(), notes, date, revision, sections, ASSUMPTIONS, warnings,
-                report.cautions(), report.comparison().map(ReportTable::comparison));
+                report.cautions(), report.comparison().map(c -> ReportTable.comparison(c, report.units())));
     }
 
     /**
@@ -140,7 +141,25 @@ public record SheetContent(String projectName, String notes, String date, String
     public static SheetContent of(DesignResult r, String notes, String date, String revision,
             MonteCarloOutcome monteCarlo, ProjectIdentity identity, MethodComparison comparison,
             AmplitudeConvention convention) {
-        return of(DesignContent.of(r, identity, monteCarlo).with(ComparisonContent.of(comparison, r.study()))
+        return of(r, notes, date, revision, monteCarlo, identity, comparison, convention, UnitSystem.SI);
+    }
+
+    /**
+     * @param r the design result
+     * @param notes the project's notes, or empty
+     * @param date date of issue
+     * @param revision revision mark
+     * @param monteCarlo the design's tolerance Monte Carlo, or why it was not run
+     * @param identity the project's engineer and client or site
+     * @param comparison the comparison of design methods for the design's study
+     * @param convention the convention response values are stated in
+     * @param units the unit system quantities are shown in
+     * @return the sheet content with the comparison's table
+     */
+    public static SheetContent of(DesignResult r, String notes, String date, String revision,
+            MonteCarloOutcome monteCarlo, ProjectIdentity identity, MethodComparison comparison,
+            AmplitudeConvention convention, UnitSystem units) {
+        return of(DesignContent.of(r, identity, monteCarlo, units).with(ComparisonContent.of(comparison, r.study()))
                 .shownIn(convention), notes, date, revision);
     }
 }

@@ -29,6 +29,7 @@ import org.counterpoise.io.export.CurveCsv;
 import org.counterpoise.io.export.ResultJson;
 import org.counterpoise.io.project.ProjectIdentity;
 import org.counterpoise.io.text.DesignContent;
+import org.counterpoise.io.text.UnitSystem;
 import org.knowm.xchart.XYChart;
 
 /*
@@ -71,8 +72,20 @@ public final class SheetFiles {
      *     study has one) and stroke
      */
     public static List<XYChart> charts(DesignResult r, DesignCurves curves, AmplitudeConvention convention) {
-        return List.of(ChartFactory.response(r, curves, true, ChartTheme.LIGHT, convention, CHART_WIDTH, CHART_HEIGHT),
-                ChartFactory.stroke(r, curves, false, CHART_WIDTH, CHART_HEIGHT));
+        return charts(r, curves, convention, UnitSystem.SI);
+    }
+
+    /**
+     * @param r the design
+     * @param curves its curves
+     * @param convention the convention the response is stated in (the stroke stays a peak)
+     * @param units the unit system of the charts' vertical axes
+     * @return the charts the sheet prints: response and stroke
+     */
+    public static List<XYChart> charts(DesignResult r, DesignCurves curves, AmplitudeConvention convention,
+            UnitSystem units) {
+        return List.of(ChartFactory.response(r, curves, true, ChartTheme.LIGHT, convention, units, CHART_WIDTH,
+                CHART_HEIGHT), ChartFactory.stroke(r, curves, false, ChartTheme.LIGHT, units, CHART_WIDTH, CHART_HEIGHT));
     }
 
     /**
@@ -150,15 +163,34 @@ public final class SheetFiles {
     public static void writeSheet(DesignDossier dossier, String notes, String date, String revision,
             ProjectIdentity identity, List<SheetPanel> panels, AmplitudeConvention convention, OutputStream out)
             throws IOException {
-        SheetWriter.write(content(dossier, notes, date, revision, identity, convention),
-                charts(dossier.design(), dossier.curves(), convention), panels, out);
+        writeSheet(dossier, notes, date, revision, identity, panels, convention, UnitSystem.SI, out);
+    }
+
+    /**
+     * The sheet with further pages, in a convention and a unit system, as PDF bytes.
+     * @param dossier the design and its analyses
+     * @param notes the project's notes, or empty
+     * @param date date of issue
+     * @param revision revision mark
+     * @param identity the project's engineer and client or site
+     * @param panels further pages after the design's charts
+     * @param convention the convention response values are stated in
+     * @param units the unit system quantities are shown in
+     * @param out where the PDF goes
+     * @throws IOException when the stream cannot be written
+     */
+    public static void writeSheet(DesignDossier dossier, String notes, String date, String revision,
+            ProjectIdentity identity, List<SheetPanel> panels, AmplitudeConvention convention, UnitSystem units,
+            OutputStream out) throws IOException {
+        SheetWriter.write(content(dossier, notes, date, revision, identity, convention, units),
+                charts(dossier.design(), dossier.curves(), convention, units), panels, out);
     }
 
     private static SheetContent content(DesignDossier dossier, String notes, String date, String revision,
-            ProjectIdentity identity, AmplitudeConvention convention) {
+            ProjectIdentity identity, AmplitudeConvention convention, UnitSystem units) {
         // the dossier's Monte Carlo: computed once for the project state, whoever asked first
         return SheetContent.of(dossier.design(), notes, date, revision, dossier.monteCarlo(ProgressListener.NONE),
-                identity, dossier.comparison(ProgressListener.NONE), convention);
+                identity, dossier.comparison(ProgressListener.NONE), convention, units);
     }
 
     /**
@@ -188,6 +220,7 @@ public final class SheetFiles {
         private final List<SheetPanel> panels = new ArrayList<>();
         private List<XYChart> charts;
         private AmplitudeConvention convention = AmplitudeConvention.PEAK;
+        private UnitSystem units = UnitSystem.SI;
 
         /** @param dossier the design whose sheet and exports are written, with its analyses */
         public Outputs(DesignDossier dossier) {
@@ -201,6 +234,17 @@ public final class SheetFiles {
          */
         public Outputs convention(AmplitudeConvention display) {
             this.convention = display;
+            this.charts = null;
+            return this;
+        }
+
+        /**
+         * @param system the unit system quantities are shown in on the sheet and its charts (SI unless
+         *     set; result.json keeps its SI keys)
+         * @return this
+         */
+        public Outputs units(UnitSystem system) {
+            this.units = system;
             this.charts = null;
             return this;
         }
@@ -230,7 +274,7 @@ public final class SheetFiles {
         public Outputs sheet(Path pdf, String notes, String date, String revision, String option,
                 ProjectIdentity identity) {
             return add(pdf, "sheet", option, out -> SheetWriter.write(
-                    content(dossier, notes, date, revision, identity, convention), charts(), panels, out));
+                    content(dossier, notes, date, revision, identity, convention, units), charts(), panels, out));
         }
 
         /**
@@ -384,7 +428,7 @@ public final class SheetFiles {
 
         private List<XYChart> charts() {
             if (charts == null) {
-                charts = SheetFiles.charts(dossier.design(), dossier.curves(), convention);
+                charts = SheetFiles.charts(dossier.design(), dossier.curves(), convention, units);
             }
             return charts;
         }

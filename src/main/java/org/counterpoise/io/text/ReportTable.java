@@ -49,7 +49,7 @@ public final class ReportTable {
             List<Row> rows = new ArrayList<>();
             for (ReportRow row : section.rows()) {
                 if (row.shown() && !leftOut.contains(row.key())) {
-                    ValueText.Cells cells = ValueText.cells(row.shownValue());
+                    ValueText.Cells cells = ValueText.cells(row.shownValue(), content.units());
                     rows.add(new Row(row.key(), ValueText.capitalised(row.labelWithSymbol()), cells.value(),
                             cells.unit(), cells.textual(), note(row)));
                 }
@@ -85,9 +85,18 @@ public final class ReportTable {
 
     /**
      * @param c the comparison
-     * @return its table: the tabled columns, the method cell marked "(recommended)" and "(chosen)"
+     * @return its table in SI
      */
     public static Grid comparison(ReportComparison c) {
+        return comparison(c, UnitSystem.SI);
+    }
+
+    /**
+     * @param c the comparison
+     * @param units the unit system its quantities are shown in
+     * @return its table: the tabled columns, the method cell marked "(recommended)" and "(chosen)"
+     */
+    public static Grid comparison(ReportComparison c, UnitSystem units) {
         List<String> headings = new ArrayList<>();
         for (ReportComparison.Column col : c.columns()) {
             if (col.tabled()) {
@@ -101,7 +110,7 @@ public final class ReportTable {
                 if (!c.columns().get(i).tabled()) {
                     continue;
                 }
-                String cell = ValueText.inline(line.cells().get(i));
+                String cell = ValueText.inline(line.cells().get(i), units);
                 if (c.columns().get(i).key() == ReportKey.METHOD) {
                     List<String> marks = new ArrayList<>();
                     if (line.recommended()) {

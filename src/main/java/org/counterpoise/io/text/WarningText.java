@@ -7,7 +7,7 @@ import org.counterpoise.core.design.RunUpStroke;
 import org.counterpoise.core.error.Warning;
 import org.counterpoise.core.error.WarningParameter;
 import org.counterpoise.core.error.WarningParameter.PeakBand;
-import org.counterpoise.core.units.Unit;
+import org.counterpoise.core.units.Dimension;
 
 /**
  * The one place a {@link Warning} becomes English words. Every front end (text report, JSON,
@@ -21,9 +21,18 @@ public final class WarningText {
 
     /**
      * @param w the warning
-     * @return its sentence, never with NaN or Infinity (the core refuses non-finite values)
+     * @return its sentence in SI
      */
     public static String of(Warning w) {
+        return of(w, UnitSystem.SI);
+    }
+
+    /**
+     * @param w the warning
+     * @param units the unit system lengths are stated in
+     * @return its sentence, never with NaN or Infinity (the core refuses non-finite values)
+     */
+    public static String of(Warning w, UnitSystem units) {
         return switch (w.kind()) {
             case DAMPED_STRUCTURE -> String.format(Locale.ROOT, "The %s closed form assumes an undamped structure;"
                     + " with the structure's damping ratio of %.3g the tuning is close to, but not exactly, the"
@@ -83,13 +92,13 @@ public final class WarningText {
                     w.number(WarningParameter.PRACTICAL_DAMPING_RATIO));
             case RUN_UP_STROKE_LARGE -> String.format(Locale.ROOT, "The absorber stroke during run-up, %s (%s), is"
                     + " %.3g times the stroke in the band, %s: leave the clearance for it, or pass the start-up"
-                    + " resonance faster.", millimetres(w.number(WarningParameter.RUN_UP_STROKE)),
+                    + " resonance faster.", length(w.number(WarningParameter.RUN_UP_STROKE), units),
                     runUpBasis(w), w.number(WarningParameter.RUN_UP_STROKE) / w.number(WarningParameter.IN_BAND_STROKE),
-                    millimetres(w.number(WarningParameter.IN_BAND_STROKE)));
+                    length(w.number(WarningParameter.IN_BAND_STROKE), units));
             case RUN_UP_OVER_STROKE_LIMIT -> String.format(Locale.ROOT, "The absorber stroke during run-up, %s (%s),"
                     + " exceeds the stroke limit of %s: the absorber will strike its stops at start and stop.",
-                    millimetres(w.number(WarningParameter.RUN_UP_STROKE)), runUpBasis(w),
-                    millimetres(w.number(WarningParameter.STROKE_LIMIT)));
+                    length(w.number(WarningParameter.RUN_UP_STROKE), units), runUpBasis(w),
+                    length(w.number(WarningParameter.STROKE_LIMIT), units));
         };
     }
 
@@ -122,8 +131,8 @@ public final class WarningText {
         };
     }
 
-    private static String millimetres(double metres) {
-        return QuantityFormat.format(metres, Unit.MILLIMETRE);
+    private static String length(double metres, UnitSystem units) {
+        return DisplayUnits.format(metres, Dimension.LENGTH, units);
     }
 
     private static String over(PeakBand band) {
