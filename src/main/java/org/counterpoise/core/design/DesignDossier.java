@@ -3,6 +3,7 @@ package org.counterpoise.core.design;
 import java.util.LinkedHashMap;
 import java.util.Map;
 import java.util.concurrent.locks.ReentrantLock;
+import java.util.function.Function;
 import java.util.function.Supplier;
 import org.counterpoise.core.error.CoreException;
 import org.counterpoise.core.error.Messages;
@@ -31,6 +32,17 @@ public final class DesignDossier {
     private final Part<MonteCarloOutcome> monteCarlo = new Part<>("the Monte Carlo run");
     private final Part<RobustnessResult> robustness = new Part<>("the robustness study");
     private final Part<MethodComparison> comparison = new Part<>("the comparison of methods");
+    /** Parts a higher core layer derives from the design, by key; the most recent {@link #DERIVED_KEPT}. */
+    private final Map<Object, Part<Object>> derived = new LinkedHashMap<>(8, 0.75f, true) {
+        private static final long serialVersionUID = 1L;
+
+        @Override
+        protected boolean removeEldestEntry(Map.Entry<Object, Part<Object>> eldest) {
+            return size() > DERIVED_KEPT;
+        }
+    };
+    /** Derived parts kept per dossier (a few hardware choices tried back and forth). */
+    private static final int DERIVED_KEPT = 8;
 
     /**
      * The analyses a dossier runs. The core's own are {@link #CORE}; tests substitute counting ones
@@ -159,6 +171,28 @@ public final class DesignDossier {
     public MethodComparison comparison(ProgressListener listener) {
         DesignResult d = design();
         return comparison.get(() -> computations.comparison(d, listener));
+    }
+
+    /**
+     * A part that a higher core layer derives from the design, computed once per key and kept like the
+     * dossier's own parts (for the last few keys). core.realisation keeps its realisation per hardware
+     * choice here ({@code Realiser.realisation(dossier, choice)}): it sits above core.design, so the
+     * dossier cannot name it.
+     *
+     * @param <T> the part's type
+     * @param key what the part is for, compared by value; a record type of the caller's own, so two
+     *     callers never share a key
+     * @param type the part's type
+     * @param compute derives it from the design (on the asking thread, at most once per key at a time)
+     * @return the part
+     */
+    public <T> T derived(Object key, Class<T> type, Function<DesignResult, T> compute) {
+        DesignResult d = design();
+        Part<Object> part;
+        synchronized (derived) {
+            part = derived.computeIfAbsent(key, k -> new Part<>("a part derived from the design"));
+        }
+        return type.cast(part.get(() -> compute.apply(d)));
     }
 
     /** One part: computed once under its lock; a failure keeps nothing. */

@@ -190,8 +190,14 @@ public final class Designer {
     static final String EXACT_SOURCE = "exact optimum computed by Counterpoise (docs/optimiser.md),"
             + " checked against Nishihara and Asami (2002), Crandall and Mark (1963) and Warburton (1982)";
 
-    /** The non-dimensional problem of a study; one forcing frequency is treated as all frequencies. */
-    static PeakProblem peakProblem(DesignStudy study, double mu) {
+    /**
+     * The non-dimensional problem of a study; one forcing frequency is treated as all frequencies.
+     * @param study the study
+     * @param mu the mass ratio
+     * @return the problem the exact-peak design solves (public for the hardware realisation, which
+     *     optimises other absorber models over the same band)
+     */
+    public static PeakProblem peakProblem(DesignStudy study, double mu) {
         Structure s = study.structure();
         FrequencyBand band = study.excitation().band();
         double omega1 = s.naturalFrequency();

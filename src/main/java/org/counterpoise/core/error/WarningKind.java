@@ -59,7 +59,35 @@ public enum WarningKind {
             WarningParameter.RUN_UP_BASIS),
     /** The stroke during run-up exceeds the stroke limit. */
     RUN_UP_OVER_STROKE_LIMIT(WarningParameter.RUN_UP_STROKE, WarningParameter.STROKE_LIMIT,
-            WarningParameter.RUN_UP_BASIS);
+            WarningParameter.RUN_UP_BASIS),
+    /** The largest stroke the damper sees in service exceeds the clearance it is made to allow. */
+    DAMPER_STROKE_OVER_CLEARANCE(WarningParameter.DAMPER_STROKE, WarningParameter.CLEARANCE),
+    /** An eddy-current damper's plate is thicker than the skin depth at the highest forcing frequency. */
+    EDDY_CURRENT_PLATE_THICK(WarningParameter.PLATE_THICKNESS, WarningParameter.SKIN_DEPTH),
+    /**
+     * The workshop's mass tolerance leaves no room for the spring rate within the absorber frequency
+     * tolerance (the mass alone can move the frequency by as much).
+     */
+    MASS_TOLERANCE_TOO_LOOSE(WarningParameter.MASS_TOLERANCE, WarningParameter.FREQUENCY_TOLERANCE),
+    /** A helical spring's stress exceeds the permissible (EN 13906-1); the utilisation is demand over capacity. */
+    SPRING_OVERSTRESSED(WarningParameter.UTILISATION),
+    /** A helical spring's stress amplitude exceeds its fatigue strength at the mean stress. */
+    SPRING_FATIGUE(WarningParameter.UTILISATION),
+    /** A helical spring's working deflection exceeds its buckling deflection. */
+    SPRING_BUCKLES(WarningParameter.UTILISATION),
+    /** The forcing (with its margin) reaches a helical spring's surge frequency. */
+    SPRING_SURGE(WarningParameter.UTILISATION),
+    /** A helical spring's working compression leaves less than the standard's minimum gaps before solid. */
+    SPRING_GOES_SOLID(WarningParameter.UTILISATION),
+    /**
+     * An elastomer element whose compound loss factor misses the loss factor the hysteretic optimum
+     * needs, so that the peak with the compound's own loss factor exceeds the design's promised peak by
+     * more than the allowance (the utilisation is that peak over the allowed one).
+     */
+    ELASTOMER_LOSS_FACTOR_MISSED(WarningParameter.COMPOUND_LOSS_FACTOR, WarningParameter.LOSS_FACTOR_NEEDED,
+            WarningParameter.UTILISATION),
+    /** No helical springs of stock wire give the design's rate: the closest are shown, off by this much. */
+    SPRING_RATE_NOT_MET(WarningParameter.RATE_DEVIATION);
 
     private final List<WarningParameter> parameters;
 

@@ -38,6 +38,24 @@ public enum WarningParameter {
     STROKE_LIMIT(false),
     /** Which run-up stroke figure (a {@code core.design.RunUpStroke.Basis} name; a token). */
     RUN_UP_BASIS(true),
+    /** The largest stroke a damper sees in service, m. */
+    DAMPER_STROKE(false),
+    /** The stroke clearance, m. */
+    CLEARANCE(false),
+    /** A conducting plate's thickness, m. */
+    PLATE_THICKNESS(false),
+    /** An electromagnetic skin depth, m. */
+    SKIN_DEPTH(false),
+    /** The absorber mass tolerance, +/- fraction (non-dimensional). */
+    MASS_TOLERANCE(false),
+    /** The absorber frequency tolerance, +/- fraction (non-dimensional). */
+    FREQUENCY_TOLERANCE(false),
+    /** The loss factor of the elastomer compound the workshop will use (non-dimensional). */
+    COMPOUND_LOSS_FACTOR(false),
+    /** The loss factor the hysteretic optimum needs (non-dimensional). */
+    LOSS_FACTOR_NEEDED(false),
+    /** The springs' total rate over the rate the design needs, minus one (non-dimensional). */
+    RATE_DEVIATION(false),
     /** The design method's id as files and the command line spell it (a token). */
     METHOD_ID(true),
     /** The band the exact-peak design minimises over for one forcing frequency (a {@link PeakBand} name). */

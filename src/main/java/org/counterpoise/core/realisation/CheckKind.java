@@ -18,7 +18,9 @@ public enum CheckKind {
     /** The loss factor the design needs against the compound's. */
     ELASTOMER_LOSS_FACTOR("elastomer-loss-factor"),
     /** The stroke the damper must allow against its usable stroke. */
-    DAMPER_STROKE("damper-stroke");
+    DAMPER_STROKE("damper-stroke"),
+    /** An eddy-current damper's plate thickness against the skin depth at the highest forcing frequency. */
+    EDDY_CURRENT_SKIN_DEPTH("eddy-current-skin-depth");
 
     private final String id;
 

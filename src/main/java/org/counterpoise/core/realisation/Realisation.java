@@ -8,7 +8,8 @@ import org.counterpoise.core.error.Warning;
 /**
  * The design turned into hardware: what the part list, the procedure and the checks of the report,
  * the JSON and the sheet show. Exactly one of {@code spring} and {@code elastomer} is present, as
- * the choice's spring kind says.
+ * the choice's spring kind says (when no stock wire gives the rate, the closest springs with the
+ * warning {@code SPRING_RATE_NOT_MET}).
  *
  * @param choice the hardware choices it was made for
  * @param spring the helical springs (with {@link SpringKind#HELICAL_COMPRESSION})

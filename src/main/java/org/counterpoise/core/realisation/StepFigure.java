@@ -27,6 +27,8 @@ public record StepFigure(StepQuantity quantity, double value, Dimension dimensio
         RUNNING_FREQUENCY,
         /** The predicted response at the running speed with the absorber. */
         PREDICTED_RESPONSE,
+        /** The predicted largest response over the band with the absorber. */
+        PREDICTED_PEAK_IN_BAND,
         /** One trim plate's mass. */
         TRIM_PLATE_MASS,
         /** Plates per percent of frequency. */

@@ -41,6 +41,11 @@ public final class AbsorberAffineResponse {
         return (nr * nr + ni * ni) / (dr * dr + di * di);
     }
 
+    /** @return {N0, N1, D0, D1}, ascending powers of s (the arrays themselves: callers in this package copy) */
+    double[][] polynomials() {
+        return new double[][] {n0, n1, d0, d1};
+    }
+
     /** Re a(i g) = a0 - a2 g^2 + a4 g^4 - ... */
     private static double real(double[] a, double g) {
         double x = -g * g;

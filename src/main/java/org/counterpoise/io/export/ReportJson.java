@@ -9,10 +9,13 @@ import org.counterpoise.core.units.Unit;
 import org.counterpoise.io.text.ReportContent;
 import org.counterpoise.io.text.ReportKey;
 import org.counterpoise.io.text.ReportRow;
+import org.counterpoise.io.text.ReportSection;
 import org.counterpoise.io.text.ReportValue;
 import org.counterpoise.io.text.ReportValue.Change;
 import org.counterpoise.io.text.ReportValue.Count;
 import org.counterpoise.io.text.ReportValue.Factor;
+import org.counterpoise.io.text.ReportValue.Field;
+import org.counterpoise.io.text.ReportValue.Fields;
 import org.counterpoise.io.text.ReportValue.Flag;
 import org.counterpoise.io.text.ReportValue.Level;
 import org.counterpoise.io.text.ReportValue.Margin;
@@ -47,8 +50,30 @@ final class ReportJson {
      */
     static void put(JsonObject o, ReportContent content) {
         for (ReportKey key : ReportKey.values()) {
-            if (!key.jsonKeys().isEmpty()) {
+            if (key.array()) {
+                array(o, key, content);
+            } else if (!key.jsonKeys().isEmpty()) {
                 content.row(key).ifPresent(row -> write(o, row));
+            }
+        }
+    }
+
+    /** Every row with an array key, in report order, as one element of the array its key names. */
+    private static void array(JsonObject o, ReportKey key, ReportContent content) {
+        String path = key.jsonKeys().get(0);
+        path = path.substring(0, path.length() - 2);
+        JsonArray elements = null;
+        for (ReportSection section : content.sections()) {
+            for (ReportRow row : section.rows()) {
+                if (row.key() == key) {
+                    if (elements == null) {
+                        elements = new JsonArray();
+                        parent(o, path).add(leaf(path), elements);
+                    }
+                    JsonObject element = new JsonObject();
+                    write(element, "element", row.value());
+                    elements.add(element.get("element"));
+                }
             }
         }
     }
@@ -108,18 +133,15 @@ final class ReportJson {
      * @param v the value, in the JSON's units
      */
     static void write(JsonObject root, String path, ReportValue v) {
-        int dot = path.indexOf('.');
-        JsonObject o = root;
-        String key = path;
-        if (dot > 0) {
-            String parent = path.substring(0, dot);
-            if (!root.has(parent)) {
-                root.add(parent, new JsonObject());
+        JsonObject o = parent(root, path);
+        String key = leaf(path);
+        if (v instanceof Fields f) {
+            JsonObject fields = new JsonObject();
+            for (Field field : f.fields()) {
+                write(fields, field.key().jsonKeys(), field.value());
             }
-            o = root.getAsJsonObject(parent);
-            key = path.substring(dot + 1);
-        }
-        if (v instanceof Quantity q) {
+            o.add(key, fields);
+        } else if (v instanceof Quantity q) {
             JsonNumbers.put(o, key, json(q.si(), q.dimension()));
         } else if (v instanceof Unbounded) {
             JsonNumbers.put(o, key, Double.POSITIVE_INFINITY);
@@ -152,6 +174,23 @@ final class ReportJson {
         } else {
             throw new IllegalStateException("bug: no JSON form for " + v + " under " + key);
         }
+    }
+
+    /** The object a path's last key goes in ({@code a.b.c}: c in b in a), made when missing. */
+    private static JsonObject parent(JsonObject root, String path) {
+        JsonObject o = root;
+        String[] parts = path.split("\\.");
+        for (int i = 0; i < parts.length - 1; i++) {
+            if (!o.has(parts[i]) || !o.get(parts[i]).isJsonObject()) {
+                o.add(parts[i], new JsonObject());
+            }
+            o = o.getAsJsonObject(parts[i]);
+        }
+        return o;
+    }
+
+    private static String leaf(String path) {
+        return path.substring(path.lastIndexOf('.') + 1);
     }
 
     /** The JSON's units: frequencies in Hz (the keys say _Hz), everything else in SI. */

@@ -1,18 +1,24 @@
 package org.counterpoise.io.sheet;
 
+import java.util.EnumMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
 import org.counterpoise.core.criteria.AmplitudeConvention;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.MethodComparison;
+import org.counterpoise.core.realisation.Realisation;
 import org.counterpoise.core.robust.MonteCarloOutcome;
 import org.counterpoise.core.robust.MonteCarloResult;
 import org.counterpoise.io.project.ProjectIdentity;
 import org.counterpoise.io.text.ComparisonContent;
 import org.counterpoise.io.text.DesignContent;
+import org.counterpoise.io.text.HardwareContent;
 import org.counterpoise.io.text.ReportContent;
 import org.counterpoise.io.text.ReportKey;
+import org.counterpoise.io.text.ReportSection;
+import org.counterpoise.io.text.ReportSection.SectionId;
 import org.counterpoise.io.text.ReportTable;
 import org.counterpoise.io.text.UnitSystem;
 
@@ -31,9 +37,21 @@ import org.counterpoise.io.text.UnitSystem;
  * @param warnings the design's warnings
  * @param cautions the standard cautions
  * @param comparison the comparison of design methods as a table, when one was computed
+ * @param identity the project's identity (document number, client, engineer, revisions, sign-off)
+ *     for the title block, the revision history and the sign-off
+ * @param sketch what the arrangement sketch draws, when there is a design to draw
+ * @param grids the sections whose rows are records of the same fields (the checks, the predicted
+ *     response), as tables printed in their place
  */
 public record SheetContent(String projectName, String notes, String date, String revision, List<ReportTable.Section> sections,
-        List<String> assumptions, List<String> warnings, List<String> cautions, Optional<ReportTable.Grid> comparison) {
+        List<String> assumptions, List<String> warnings, List<String> cautions, Optional<ReportTable.Grid> comparison,
+        ProjectIdentity identity, Optional<SketchFigures> sketch, Map<SectionId, ReportTable.Grid> grids) {
+
+    /** Immutable copies. */
+    public SheetContent {
+        sections = List.copyOf(sections);
+        grids = Map.copyOf(grids);
+    }
 
     /** The assumptions printed on every sheet. */
     public static final List<String> ASSUMPTIONS = List.of(
@@ -96,20 +114,29 @@ public record SheetContent(String projectName, String notes, String date, String
      */
     public static SheetContent of(DesignResult r, String notes, String date, String revision,
             MonteCarloOutcome monteCarlo, ProjectIdentity identity) {
-        return of(DesignContent.of(r, identity, monteCarlo), notes, date, revision);
+        return of(DesignContent.of(r, identity, monteCarlo), notes, date, revision, identity,
+                SketchFigures.of(r, Optional.empty(), UnitSystem.SI));
     }
 
     private static SheetContent of(DesignResult r, String notes, String date, String revision,
             Optional<MonteCarloResult> monteCarlo, ProjectIdentity identity) {
-        return of(DesignContent.of(r, identity, monteCarlo), notes, date, revision);
+        return of(DesignContent.of(r, identity, monteCarlo), notes, date, revision, identity,
+                SketchFigures.of(r, Optional.empty(), UnitSystem.SI));
     }
 
-    private static SheetContent of(ReportContent report, String notes, String date, String revision) {
+    private static SheetContent of(ReportContent report, String notes, String date, String revision,
+            ProjectIdentity identity, SketchFigures sketch) {
         // The header prints the date and revision of issue.
         List<ReportTable.Section> sections = ReportTable.of(report, Set.of(ReportKey.REVISION, ReportKey.DATE));
         List<String> warnings = report.warnings().stream().map(ReportContent.Note::text).toList();
+        Map<SectionId, ReportTable.Grid> grids = new EnumMap<>(SectionId.class);
+        for (ReportSection section : report.sections()) {
+            ReportTable.grid(section, report.units()).ifPresent(g -> grids.put(section.id(), g));
+        }
         return new SheetContent(report.name(), notes, date, revision, sections, ASSUMPTIONS, warnings,
-                report.cautions(), report.comparison().map(c -> ReportTable.comparison(c, report.units())));
+                report.cautions(), report.comparison().map(c -> ReportTable.comparison(c, report.units())), identity,
+                Optional.of(sketch),
+                grids);
     }
 
     /**
@@ -141,7 +168,8 @@ public record SheetContent(String projectName, String notes, String date, String
     public static SheetContent of(DesignResult r, String notes, String date, String revision,
             MonteCarloOutcome monteCarlo, ProjectIdentity identity, MethodComparison comparison,
             AmplitudeConvention convention) {
-        return of(r, notes, date, revision, monteCarlo, identity, comparison, convention, UnitSystem.SI);
+        return of(r, notes, date, revision, monteCarlo, identity, comparison, convention, Optional.empty(),
+                UnitSystem.SI);
     }
 
     /**
@@ -150,16 +178,21 @@ public record SheetContent(String projectName, String notes, String date, String
      * @param date date of issue
      * @param revision revision mark
      * @param monteCarlo the design's tolerance Monte Carlo, or why it was not run
-     * @param identity the project's engineer and client or site
+     * @param identity the project's identity
      * @param comparison the comparison of design methods for the design's study
      * @param convention the convention response values are stated in
-     * @param units the unit system quantities are shown in
-     * @return the sheet content with the comparison's table
+     * @param realisation the design's hardware, when made
+     * @param units the unit system of the tables, the warnings and the sketch's dimensions
+     * @return the sheet content with the comparison's table and the arrangement sketch
      */
     public static SheetContent of(DesignResult r, String notes, String date, String revision,
             MonteCarloOutcome monteCarlo, ProjectIdentity identity, MethodComparison comparison,
-            AmplitudeConvention convention, UnitSystem units) {
-        return of(DesignContent.of(r, identity, monteCarlo, units).with(ComparisonContent.of(comparison, r.study()))
-                .shownIn(convention), notes, date, revision);
+            AmplitudeConvention convention, Optional<Realisation> realisation, UnitSystem units) {
+        ReportContent report = DesignContent.of(r, identity, monteCarlo, units)
+                .with(ComparisonContent.of(comparison, r.study()));
+        if (realisation.isPresent()) {
+            report = HardwareContent.with(report, realisation.get(), r);
+        }
+        return of(report.shownIn(convention), notes, date, revision, identity, SketchFigures.of(r, realisation, units));
     }
 }

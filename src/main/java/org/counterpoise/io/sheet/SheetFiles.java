@@ -10,6 +10,7 @@ import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.LinkedHashSet;
 import java.util.List;
+import java.util.Optional;
 import java.util.Map;
 import java.util.Set;
 import java.util.function.BiFunction;
@@ -17,8 +18,12 @@ import org.counterpoise.core.criteria.AmplitudeConvention;
 import org.counterpoise.core.design.DesignCurves;
 import org.counterpoise.core.design.DesignDossier;
 import org.counterpoise.core.design.DesignResult;
+import org.counterpoise.core.error.CoreException;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.progress.ProgressListener;
+import org.counterpoise.core.realisation.HardwareChoice;
+import org.counterpoise.core.realisation.Realisation;
+import org.counterpoise.core.realisation.Realiser;
 import org.counterpoise.io.AtomicFiles;
 import org.counterpoise.io.FileWriteException;
 import org.counterpoise.io.PlainMessages;
@@ -163,34 +168,48 @@ public final class SheetFiles {
     public static void writeSheet(DesignDossier dossier, String notes, String date, String revision,
             ProjectIdentity identity, List<SheetPanel> panels, AmplitudeConvention convention, OutputStream out)
             throws IOException {
-        writeSheet(dossier, notes, date, revision, identity, panels, convention, UnitSystem.SI, out);
+        writeSheet(dossier, notes, date, revision, identity, panels, convention, HardwareChoice.DEFAULT,
+                UnitSystem.SI, out);
     }
 
     /**
-     * The sheet with further pages, in a convention and a unit system, as PDF bytes.
+     * The sheet with its hardware, as PDF bytes (the wizard's preview).
      * @param dossier the design and its analyses
      * @param notes the project's notes, or empty
      * @param date date of issue
      * @param revision revision mark
-     * @param identity the project's engineer and client or site
+     * @param identity the project's identity
      * @param panels further pages after the design's charts
      * @param convention the convention response values are stated in
-     * @param units the unit system quantities are shown in
+     * @param hardware the project's hardware choices (the realisation the sketch and part list show)
+     * @param units the project's display units
      * @param out where the PDF goes
      * @throws IOException when the stream cannot be written
      */
     public static void writeSheet(DesignDossier dossier, String notes, String date, String revision,
-            ProjectIdentity identity, List<SheetPanel> panels, AmplitudeConvention convention, UnitSystem units,
-            OutputStream out) throws IOException {
-        SheetWriter.write(content(dossier, notes, date, revision, identity, convention, units),
-                charts(dossier.design(), dossier.curves(), convention, units), panels, out);
+            ProjectIdentity identity, List<SheetPanel> panels, AmplitudeConvention convention, HardwareChoice hardware,
+            UnitSystem units, OutputStream out) throws IOException {
+        List<XYChart> charts = charts(dossier.design(), dossier.curves(), convention, units);
+        SheetWriter.write(() -> content(dossier, notes, date, revision, identity, convention, hardware, units),
+                charts, panels, out);
     }
 
     private static SheetContent content(DesignDossier dossier, String notes, String date, String revision,
-            ProjectIdentity identity, AmplitudeConvention convention, UnitSystem units) {
-        // the dossier's Monte Carlo: computed once for the project state, whoever asked first
+            ProjectIdentity identity, AmplitudeConvention convention, HardwareChoice hardware, UnitSystem units) {
+        // the dossier's Monte Carlo, comparison and realisation: computed once for the project
+        // state, whoever asked first
         return SheetContent.of(dossier.design(), notes, date, revision, dossier.monteCarlo(ProgressListener.NONE),
-                identity, dossier.comparison(ProgressListener.NONE), convention, units);
+                identity, dossier.comparison(ProgressListener.NONE), convention, realisation(dossier, hardware),
+                units);
+    }
+
+    /** The realisation, or none when the hardware cannot be sized for this design (the report says why). */
+    private static Optional<Realisation> realisation(DesignDossier dossier, HardwareChoice hardware) {
+        try {
+            return Optional.of(Realiser.realisation(dossier, hardware));
+        } catch (CoreException unrealisable) {
+            return Optional.empty();
+        }
     }
 
     /**
@@ -220,6 +239,7 @@ public final class SheetFiles {
         private final List<SheetPanel> panels = new ArrayList<>();
         private List<XYChart> charts;
         private AmplitudeConvention convention = AmplitudeConvention.PEAK;
+        private HardwareChoice hardware = HardwareChoice.DEFAULT;
         private UnitSystem units = UnitSystem.SI;
 
         /** @param dossier the design whose sheet and exports are written, with its analyses */
@@ -239,12 +259,14 @@ public final class SheetFiles {
         }
 
         /**
-         * @param system the unit system quantities are shown in on the sheet and its charts (SI unless
-         *     set; result.json keeps its SI keys)
+         * @param choice the project's hardware choices (what the sheet's sketch and part list show;
+         *     {@link HardwareChoice#DEFAULT} unless set)
+         * @param display the project's display units (SI unless set)
          * @return this
          */
-        public Outputs units(UnitSystem system) {
-            this.units = system;
+        public Outputs hardware(HardwareChoice choice, UnitSystem display) {
+            this.hardware = choice;
+            this.units = display;
             this.charts = null;
             return this;
         }
@@ -274,7 +296,8 @@ public final class SheetFiles {
         public Outputs sheet(Path pdf, String notes, String date, String revision, String option,
                 ProjectIdentity identity) {
             return add(pdf, "sheet", option, out -> SheetWriter.write(
-                    content(dossier, notes, date, revision, identity, convention, units), charts(), panels, out));
+                    () -> content(dossier, notes, date, revision, identity, convention, hardware, units), charts(),
+                    panels, out));
         }
 
         /**

@@ -29,6 +29,6 @@ final class SheetPanels {
                 head = row.stream().allMatch(String::isEmpty);
             }
         }
-        w.charts(panel.charts(), (SheetWriter.WIDTH - 2 * SheetWriter.MARGIN), 290f);
+        w.charts(panel.charts());
     }
 }

@@ -3,21 +3,23 @@ package org.counterpoise.io.sheet;
 import de.rototor.pdfbox.graphics2d.PdfBoxGraphics2D;
 import java.awt.Color;
 import java.io.IOException;
-import java.io.InputStream;
+import java.io.InterruptedIOException;
 import java.io.OutputStream;
 import java.util.ArrayList;
-import java.util.HashMap;
+import java.util.IdentityHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.FutureTask;
+import java.util.function.Supplier;
 import org.apache.pdfbox.pdmodel.PDDocument;
 import org.apache.pdfbox.pdmodel.PDPage;
 import org.apache.pdfbox.pdmodel.PDPageContentStream;
 import org.apache.pdfbox.pdmodel.common.PDRectangle;
-import org.apache.pdfbox.pdmodel.font.PDType0Font;
 import org.apache.pdfbox.pdmodel.graphics.form.PDFormXObject;
-import org.apache.pdfbox.pdmodel.graphics.state.RenderingMode;
 import org.apache.pdfbox.util.Matrix;
 import org.counterpoise.io.chart.ChartFactory;
+import org.counterpoise.io.text.ReportSection.SectionId;
 import org.counterpoise.io.text.ReportTable;
 import org.counterpoise.io.text.ValueText;
 import org.knowm.xchart.XYChart;
@@ -41,34 +43,35 @@ public final class SheetWriter {
     /** Page width, points. */
     static final float WIDTH = PDRectangle.A4.getWidth();
     private static final float HEIGHT = PDRectangle.A4.getHeight();
+    private static final float CHART_WIDTH = WIDTH - 2 * MARGIN;
+    private static final float CHART_HEIGHT = 290f;
     private static final float VALUE_RIGHT = 420f;
     private static final float UNIT_LEFT = 426f;
     private static final float TEXT_LEFT = 262f;
     private static final float BODY = 9.5f;
     private static final float LINE = 12.5f;
     private static final Color INK = new Color(0x1d, 0x23, 0x2b);
-    private static final Color MUTED = new Color(0x6b, 0x72, 0x7c);
-    private static final Color ACCENT = new Color(0x0b, 0x6e, 0x69);
-    private static final Color RULE = new Color(0xd5, 0xd9, 0xde);
-    private static final String FONT_RESOURCE = "/org/apache/pdfbox/resources/ttf/LiberationSans-Regular.ttf";
+    // dark enough to stay readable when printed in black and white
+    private static final Color MUTED = new Color(0x4a, 0x50, 0x58);
+    private static final Color ACCENT = new Color(0x0b, 0x5a, 0x56);
+    private static final Color RULE = new Color(0x9a, 0xa0, 0xa8);
+    /** The lowest baseline of the flowing content, above the title block, points. */
+    private static final float BOTTOM = TitleBlock.BOTTOM + TitleBlock.HEIGHT + 14f;
 
     private final PDDocument document;
-    private final PDType0Font font;
+    private final SheetType type;
     private final SheetContent content;
-    private final Map<Integer, Boolean> printable = new HashMap<>();
     private final List<PDPage> pages = new ArrayList<>();
+    private final Map<XYChart, PDFormXObject> forms;
     private PDPageContentStream stream;
     private float y;
 
-    private SheetWriter(PDDocument document, SheetContent content) throws IOException {
+    private SheetWriter(PDDocument document, SheetType type, SheetContent content,
+            Map<XYChart, PDFormXObject> forms) {
         this.document = document;
         this.content = content;
-        try (InputStream in = SheetWriter.class.getResourceAsStream(FONT_RESOURCE)) {
-            if (in == null) {
-                throw new IOException("the sheet font " + FONT_RESOURCE + " is missing from the PDFBox library");
-            }
-            this.font = PDType0Font.load(document, in);
-        }
+        this.type = type;
+        this.forms = forms;
     }
 
     /**
@@ -92,21 +95,80 @@ public final class SheetWriter {
      */
     public static void write(SheetContent content, List<XYChart> charts, List<SheetPanel> panels, OutputStream out)
             throws IOException {
+        write(() -> content, charts, panels, out);
+    }
+
+    /**
+     * Writes the sheet while its content is still being made: the content is made on a thread of
+     * its own (the analyses it prints: Monte Carlo, method comparison, hardware) while this thread
+     * sets up the document, its font and the charts' vector forms (docs/performance.md).
+     * @param content makes the sheet content (any exception it throws is rethrown here as it is)
+     * @param charts the charts to print, in order (each takes half a page)
+     * @param panels further pages, in order
+     * @param out where the PDF goes
+     * @throws IOException when it cannot be written
+     */
+    public static void write(Supplier<SheetContent> content, List<XYChart> charts, List<SheetPanel> panels,
+            OutputStream out) throws IOException {
+        FutureTask<SheetContent> making = new FutureTask<>(content::get);
+        Thread maker = new Thread(making, "sheet-content");
+        maker.setDaemon(true);
+        maker.start();
         try (PDDocument document = new PDDocument()) {
-            document.getDocumentInformation().setTitle("Absorber parameter sheet: " + content.projectName());
+            SheetType type = new SheetType(document);
+            Map<XYChart, PDFormXObject> forms = new IdentityHashMap<>();
+            for (XYChart chart : charts) {
+                forms.put(chart, form(document, chart));
+            }
+            for (SheetPanel panel : panels) {
+                for (XYChart chart : panel.charts()) {
+                    forms.put(chart, form(document, chart));
+                }
+            }
+            SheetContent made = made(making);
+            document.getDocumentInformation().setTitle("Absorber parameter sheet: " + made.projectName());
             document.getDocumentInformation().setCreator("Counterpoise");
-            SheetWriter w = new SheetWriter(document, content);
-            w.layout(charts, panels);
+            new SheetWriter(document, type, made, forms).layout(charts, panels);
             document.save(out);
+        } finally {
+            making.cancel(true);
         }
+    }
+
+    private static SheetContent made(FutureTask<SheetContent> making) throws IOException {
+        try {
+            return making.get();
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new InterruptedIOException("the sheet was interrupted while its content was being made");
+        } catch (ExecutionException e) {
+            Throwable cause = e.getCause();
+            if (cause instanceof RuntimeException runtime) {
+                throw runtime;
+            }
+            if (cause instanceof Error error) {
+                throw error;
+            }
+            throw new IOException(cause);
+        }
+    }
+
+    /** A chart as a vector form of the width and height every chart of the sheet has. */
+    private static PDFormXObject form(PDDocument document, XYChart chart) throws IOException {
+        PdfBoxGraphics2D g = new PdfBoxGraphics2D(document, CHART_WIDTH, CHART_HEIGHT);
+        chart.paint(g, (int) CHART_WIDTH, (int) CHART_HEIGHT);
+        g.dispose();
+        return g.getXFormObject();
     }
 
     private void layout(List<XYChart> charts, List<SheetPanel> panels) throws IOException {
         newPage();
         heading(clean(content.projectName()), 17f, INK);
         y -= 8;
-        say("Absorber parameter sheet \u00b7 issued " + content.date() + " \u00b7 revision " + content.revision(), MARGIN,
-                9f, MUTED, false);
+        String document = content.identity().documentNumber().isEmpty() ? ""
+                : " \u00b7 document " + content.identity().documentNumber();
+        say("Absorber parameter sheet" + document + " \u00b7 issued " + content.date() + " \u00b7 revision "
+                + content.revision(), MARGIN, 9f, MUTED, false);
         y -= LINE;
         if (!content.notes().isBlank()) {
             for (String line : wrap(clean(content.notes()), WIDTH - 2 * MARGIN, 8.5f)) {
@@ -114,19 +176,24 @@ public final class SheetWriter {
                 y -= 11;
             }
         }
+        IdentityBlocks.draw(this, content);
         for (ReportTable.Section section : content.sections()) {
             section(section);
+        }
+        if (content.sketch().isPresent()) {
+            SketchFigures sketch = content.sketch().get();
+            float height = ArrangementSketch.height(type, sketch, WIDTH - 2 * MARGIN);
+            ensure(height + 40);
+            title("Arrangement (schematic, not to scale; the figures are)");
+            ArrangementSketch.draw(stream, type, sketch, MARGIN, y, WIDTH - 2 * MARGIN);
+            y -= height + 8;
         }
         if (content.comparison().isPresent()) {
             comparison(content.comparison().get());
         }
-        float chartWidth = WIDTH - 2 * MARGIN;
-        float chartHeight = 300f;
-        ensure(chartHeight + 40);
-        y -= 6;
-        heading("Response with and without the absorber", 11.5f, ACCENT);
-        rule();
-        charts(charts, chartWidth, chartHeight);
+        ensure(CHART_HEIGHT + 60);
+        title("Response with and without the absorber");
+        charts(charts);
         for (SheetPanel panel : panels) {
             if (!panel.charts().isEmpty()) {
                 newPage(); // a page with charts starts on its own; a sentence follows the charts above
@@ -144,12 +211,12 @@ public final class SheetWriter {
     }
 
     /** Draws charts one under the other, each followed by the notes of what it cannot draw. */
-    void charts(List<XYChart> charts, float chartWidth, float chartHeight) throws IOException {
+    void charts(List<XYChart> charts) throws IOException {
         for (XYChart chart : charts) {
             List<String> notes = ChartFactory.notes(chart);
-            ensure(chartHeight + 10 + notes.size() * LINE);
-            drawChart(chart, MARGIN, y - chartHeight, chartWidth, chartHeight);
-            y -= chartHeight + 14;
+            ensure(CHART_HEIGHT + 10 + notes.size() * LINE);
+            drawChart(chart, MARGIN, y - CHART_HEIGHT);
+            y -= CHART_HEIGHT + 14;
             // What the chart cannot draw (an unbounded resonance) is also said in the text.
             for (String note : notes) {
                 say("Note: " + note + "; drawn to the top of the chart.", MARGIN, 8.5f, INK, false);
@@ -185,12 +252,23 @@ public final class SheetWriter {
     void cells(List<String> cells, float[] lefts, boolean head) throws IOException {
         ensure(LINE);
         for (int i = 0; i < cells.size() && i < lefts.length; i++) {
-            say(cells.get(i), lefts[i], BODY, head ? ACCENT : i == 0 ? MUTED : INK, head);
+            float right = i + 1 < lefts.length ? lefts[i + 1] - 6 : WIDTH - MARGIN;
+            say(type.fit(cells.get(i), right - lefts[i], BODY), lefts[i], BODY, head ? ACCENT : i == 0 ? MUTED : INK,
+                    head);
         }
         y -= LINE;
     }
 
     private void section(ReportTable.Section section) throws IOException {
+        ReportTable.Grid grid = content.grids().get(section.id());
+        if (grid != null) {
+            comparison(grid);
+            return;
+        }
+        if (section.id() == SectionId.PROCEDURE) {
+            steps(section);
+            return;
+        }
         // A short table starts on a new page rather than leave its last rows alone on the next one.
         ensure(LINE * Math.min(3 + section.rows().size(), 14));
         y -= 6;
@@ -198,6 +276,25 @@ public final class SheetWriter {
         rule();
         for (ReportTable.Row row : section.rows()) {
             row(row);
+        }
+        y -= 4;
+    }
+
+    /** The procedure: each step's number, then its sentence wrapped across the page. */
+    private void steps(ReportTable.Section section) throws IOException {
+        ensure(LINE * 6);
+        y -= 6;
+        heading(section.title(), 11.5f, ACCENT);
+        rule();
+        for (ReportTable.Row row : section.rows()) {
+            List<String> lines = wrap(clean(row.value()), WIDTH - 2 * MARGIN - 22, BODY);
+            ensure(LINE * lines.size());
+            say(row.label(), MARGIN, BODY, ACCENT, true);
+            for (String line : lines) {
+                say(line, MARGIN + 22, BODY, INK, false);
+                y -= LINE;
+            }
+            y -= 3;
         }
         y -= 4;
     }
@@ -230,18 +327,38 @@ public final class SheetWriter {
             heading(line, 11.5f, ACCENT);
         }
         rule();
-        int n = grid.headings().size();
-        float[] widths = new float[n];
-        for (int i = 0; i < n; i++) {
-            widths[i] = width(grid.headings().get(i), size);
-            for (List<String> row : grid.cells()) {
-                widths[i] = Math.max(widths[i], width(ValueText.pretty(row.get(i)), size));
-            }
+        float room = WIDTH - 2 * MARGIN;
+        // a column of long words (a check's source) goes under its row, wrapped, not across the page
+        float[] all = columns(grid.headings(), grid.cells(), size);
+        List<Integer> narrow = new ArrayList<>();
+        List<Integer> under = new ArrayList<>();
+        for (int i = 0; i < all.length; i++) {
+            (i > 0 && all[i] > 0.3f * room ? under : narrow).add(i);
         }
-        float gap = n > 1 ? Math.max(4f, (WIDTH - 2 * MARGIN - sum(widths)) / (n - 1)) : 0f;
-        cells(grid.headings(), widths, gap, size, MUTED);
-        for (int r = 0; r < grid.cells().size(); r++) {
-            cells(grid.cells().get(r), widths, gap, size, grid.recommended().get(r) ? ACCENT : INK);
+        List<String> headings = pick(grid.headings(), narrow);
+        List<List<String>> rows = new ArrayList<>();
+        for (List<String> row : grid.cells()) {
+            rows.add(pick(row, narrow));
+        }
+        int n = headings.size();
+        float[] widths = columns(headings, rows, size);
+        if (sum(widths) + 4f * (n - 1) > room) {
+            // a wide table is printed smaller rather than run off the page
+            size = Math.max(5.5f, size * room / (sum(widths) + 4f * (n - 1)));
+            widths = columns(headings, rows, size);
+        }
+        float gap = n > 1 ? Math.max(4f, (room - sum(widths)) / (n - 1)) : 0f;
+        cells(headings, widths, gap, size, MUTED);
+        for (int r = 0; r < rows.size(); r++) {
+            cells(rows.get(r), widths, gap, size, grid.recommended().get(r) ? ACCENT : INK);
+            for (int j : under) {
+                String text = grid.headings().get(j) + ": " + ValueText.pretty(grid.cells().get(r).get(j));
+                for (String line : wrap(clean(text), room - 12, size)) {
+                    ensure(LINE);
+                    say(line, MARGIN + 12, size, MUTED, false);
+                    y -= LINE - 2;
+                }
+            }
         }
         y -= 4;
         for (String sentence : grid.sentences()) {
@@ -266,6 +383,22 @@ public final class SheetWriter {
             x += widths[i] + gap;
         }
         y -= LINE - 1;
+    }
+
+    private float[] columns(List<String> headings, List<List<String>> rows, float size) throws IOException {
+        int n = headings.size();
+        float[] widths = new float[n];
+        for (int i = 0; i < n; i++) {
+            widths[i] = width(headings.get(i), size);
+            for (List<String> row : rows) {
+                widths[i] = Math.max(widths[i], width(ValueText.pretty(row.get(i)), size));
+            }
+        }
+        return widths;
+    }
+
+    private static List<String> pick(List<String> cells, List<Integer> columns) {
+        return columns.stream().map(cells::get).toList();
     }
 
     private static float sum(float[] values) {
@@ -309,11 +442,11 @@ public final class SheetWriter {
         y -= LINE - 4;
     }
 
-    private void drawChart(XYChart chart, float x, float bottom, float w, float h) throws IOException {
-        PdfBoxGraphics2D g = new PdfBoxGraphics2D(document, w, h);
-        chart.paint(g, (int) w, (int) h);
-        g.dispose();
-        PDFormXObject form = g.getXFormObject();
+    private void drawChart(XYChart chart, float x, float bottom) throws IOException {
+        PDFormXObject form = forms.get(chart);
+        if (form == null) {
+            form = form(document, chart);
+        }
         stream.saveGraphicsState();
         stream.transform(Matrix.getTranslateInstance(x, bottom));
         stream.drawForm(form);
@@ -321,24 +454,15 @@ public final class SheetWriter {
     }
 
     private void say(String text, float x, float size, Color color, boolean bold) throws IOException {
-        stream.beginText();
-        stream.setFont(font, size);
-        stream.setNonStrokingColor(color);
-        if (bold) {
-            // Liberation Sans ships in regular weight only: a thin outline makes it semi-bold.
-            stream.setRenderingMode(RenderingMode.FILL_STROKE);
-            stream.setStrokingColor(color);
-            stream.setLineWidth(size * 0.035f);
-        } else {
-            stream.setRenderingMode(RenderingMode.FILL);
-        }
-        stream.newLineAtOffset(x, y);
-        stream.showText(clean(text));
-        stream.endText();
+        type.show(stream, text, x, y, size, color, bold);
     }
 
-    private void ensure(float needed) throws IOException {
-        if (y - needed < MARGIN + 26) {
+    /**
+     * Starts a new page when fewer than {@code needed} points are left above the title block.
+     * @param needed the height the next block takes, points
+     */
+    void ensure(float needed) throws IOException {
+        if (y - needed < BOTTOM) {
             newPage();
         }
     }
@@ -351,70 +475,50 @@ public final class SheetWriter {
         document.addPage(page);
         pages.add(page);
         stream = new PDPageContentStream(document, page);
-        y = HEIGHT - MARGIN;
-        say("Counterpoise \u00b7 absorber parameter sheet", MARGIN, 8f, MUTED, false);
-        String right = clean(content.projectName()) + " \u00b7 rev " + content.revision();
-        say(right, WIDTH - MARGIN - width(right, 8f), 8f, MUTED, false);
-        y -= 18;
+        y = HEIGHT - 40f;
     }
 
+    /** The title block on every page, once the number of pages is known. */
     private void footers() throws IOException {
         int n = pages.size();
         for (int i = 0; i < n; i++) {
             try (PDPageContentStream s = new PDPageContentStream(document, pages.get(i),
                     PDPageContentStream.AppendMode.APPEND, true, true)) {
-                stream = s;
-                y = MARGIN - 14;
-                stream.setStrokingColor(RULE);
-                stream.setLineWidth(0.6f);
-                stream.moveTo(MARGIN, MARGIN);
-                stream.lineTo(WIDTH - MARGIN, MARGIN);
-                stream.stroke();
-                say("Preliminary design aid. Verify by measurement; local codes and licensed engineering practice"
-                        + " govern.", MARGIN, 7.5f, MUTED, false);
-                String page = "page " + (i + 1) + " of " + n;
-                say(page, WIDTH - MARGIN - width(page, 7.5f), 7.5f, MUTED, false);
+                TitleBlock.draw(s, type, content, i + 1, n);
             }
         }
         stream = null;
     }
 
+    /** @return the current page's content stream */
+    PDPageContentStream stream() {
+        return stream;
+    }
+
+    /** @return the sheet's type */
+    SheetType type() {
+        return type;
+    }
+
+    /** @return the baseline of the next line, points from the page's foot */
+    float y() {
+        return y;
+    }
+
+    /** @param points how far to move the next line down */
+    void down(float points) {
+        y -= points;
+    }
+
     private List<String> wrap(String text, float maxWidth, float size) throws IOException {
-        List<String> lines = new ArrayList<>();
-        StringBuilder line = new StringBuilder();
-        for (String word : text.split(" ")) {
-            String candidate = line.length() == 0 ? word : line + " " + word;
-            if (width(candidate, size) > maxWidth && line.length() > 0) {
-                lines.add(line.toString());
-                line = new StringBuilder(word);
-            } else {
-                line = new StringBuilder(candidate);
-            }
-        }
-        if (line.length() > 0) {
-            lines.add(line.toString());
-        }
-        return lines;
+        return type.wrap(text, maxWidth, size);
     }
 
     private float width(String text, float size) throws IOException {
-        return font.getStringWidth(clean(text)) / 1000f * size;
+        return type.width(text, size);
     }
 
-    /** Replaces characters the font cannot show by '?', so a name in any script never breaks the sheet. */
     private String clean(String text) {
-        StringBuilder out = new StringBuilder(text.length());
-        text.codePoints().forEach(cp -> {
-            boolean ok = printable.computeIfAbsent(cp, c -> {
-                try {
-                    font.encode(new String(Character.toChars(c)));
-                    return true;
-                } catch (IllegalArgumentException | IOException e) {
-                    return false;
-                }
-            });
-            out.append(ok ? new String(Character.toChars(cp)) : "?");
-        });
-        return out.toString();
+        return type.clean(text);
     }
 }

@@ -31,7 +31,7 @@ public final class DesignReport {
      * @return the report, lines ending in '\n'
      */
     public static String render(DesignResult r, ProjectIdentity identity) {
-        return render(DesignContent.of(r, identity, Optional.empty(), UnitSystem.SI));
+        return render(DesignContent.of(r, identity, Optional.empty()));
     }
 
     /**
@@ -42,7 +42,8 @@ public final class DesignReport {
         StringBuilder out = new StringBuilder();
         out.append("Counterpoise absorber design: ").append(content.name()).append('\n');
         for (ReportSection section : content.sections()) {
-            section(out, section, content.units());
+            ReportTable.grid(section, content.units()).ifPresentOrElse(g -> comparison(out, g),
+                    () -> section(out, section, content.units()));
         }
         content.comparison().ifPresent(c -> comparison(out, ReportTable.comparison(c, content.units())));
         if (!content.warnings().isEmpty()) {
@@ -84,7 +85,10 @@ public final class DesignReport {
             String label = (row.symbol().isEmpty() ? row.label() : row.label() + " " + ValueText.ascii(row.symbol()))
                     + row.conventionSuffix();
             ReportValue value = row.shownValue();
-            if (value instanceof Pair p && p.kind() == PairKind.BEFORE_AFTER) {
+            if (value instanceof ReportValue.Fields f && !f.text().isEmpty()) {
+                // a step of a procedure: its number, then the sentence wrapped under it
+                wrapped(out, "  " + row.label() + ". ", f.text());
+            } else if (value instanceof Pair p && p.kind() == PairKind.BEFORE_AFTER) {
                 if (!columns) {
                     out.append(String.format(Locale.ROOT, pairLine, "", "before", "after"));
                     columns = true;
@@ -143,11 +147,16 @@ public final class DesignReport {
     }
 
     static void bullet(StringBuilder out, String text) {
-        StringBuilder line = new StringBuilder("  - ");
+        wrapped(out, "  - ", text);
+    }
+
+    /** The text after its lead ("  - ", "  3. "), wrapped at 98 characters, continued under its first word. */
+    private static void wrapped(StringBuilder out, String lead, String text) {
+        StringBuilder line = new StringBuilder(lead);
         for (String word : text.split(" ")) {
             if (line.length() + word.length() > 98) {
                 out.append(line.toString().stripTrailing()).append('\n');
-                line = new StringBuilder("    ");
+                line = new StringBuilder(" ".repeat(lead.length()));
             }
             line.append(word).append(' ');
         }

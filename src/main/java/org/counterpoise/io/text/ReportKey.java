@@ -120,6 +120,89 @@ public enum ReportKey {
     COMPARISON_LEFT_OUT("comparison_left_out"),
     LEFT_OUT_REASON("reason"),
 
+    // The hardware that realises the design (design JSON): the object "hardware" (docs/cli.md), SI
+    // throughout, frequencies in Hz. A key ending in [] is an array: every row with that key is one
+    // element, an object with the keys of its fields (the field keys below, listed after their array).
+    // "hardware.spring" is null with an elastomer element, "hardware.elastomer" null with springs.
+    HARDWARE_KINDS("hardware.spring_kind", "hardware.damper_kind"),
+    HARDWARE_ABSORBER_MASS("hardware.absorber_mass_kg"),
+    HARDWARE_MASS_TOLERANCE("hardware.absorber_mass_tolerance"),
+    SPRING_NONE("hardware.spring"),
+    SPRING_COUNT("hardware.spring.count"),
+    SPRING_MATERIAL("hardware.spring.material", "hardware.spring.standard"),
+    SPRING_WIRE_DIAMETER("hardware.spring.wire_diameter_m"),
+    SPRING_MEAN_COIL_DIAMETER("hardware.spring.mean_coil_diameter_m"),
+    SPRING_INDEX("hardware.spring.spring_index"),
+    SPRING_COILS("hardware.spring.active_coils", "hardware.spring.total_coils"),
+    SPRING_FREE_LENGTH("hardware.spring.free_length_m"),
+    SPRING_SOLID_LENGTH("hardware.spring.solid_length_m"),
+    SPRING_INSTALLED_LENGTH("hardware.spring.installed_length_m"),
+    SPRING_RATE_PER_SPRING("hardware.spring.rate_per_spring_N_per_m"),
+    SPRING_TOTAL_RATE("hardware.spring.total_rate_N_per_m"),
+    SPRING_RATE_DEVIATION("hardware.spring.rate_deviation"),
+    SPRING_LOADS("hardware.spring.static_load_per_spring_N", "hardware.spring.dynamic_load_per_spring_N"),
+    SPRING_CYCLES("hardware.spring.service_cycles"),
+    ELASTOMER_NONE("hardware.elastomer"),
+    ELASTOMER_STIFFNESS("hardware.elastomer.dynamic_stiffness_N_per_m", "hardware.elastomer.static_stiffness_N_per_m"),
+    ELASTOMER_RATIO("hardware.elastomer.dynamic_to_static_ratio"),
+    ELASTOMER_LOSS_FACTOR("hardware.elastomer.loss_factor_needed", "hardware.elastomer.compound_loss_factor"),
+    HYSTERETIC_OPTIMUM("hardware.elastomer.hysteretic_tuning_ratio", "hardware.elastomer.hysteretic_loss_factor"),
+    VISCOUS_DESIGN("hardware.elastomer.viscous_tuning_ratio", "hardware.elastomer.viscous_damping_ratio"),
+    HYSTERETIC_PEAKS("hardware.elastomer.hysteretic_peak_response", "hardware.elastomer.viscous_peak_response"),
+    HYSTERETIC_PUBLISHED("hardware.elastomer.published_tuning_ratio", "hardware.elastomer.published_loss_factor"),
+    HYSTERETIC_PUBLISHED_SOURCE("hardware.elastomer.published_source"),
+    DAMPER_KIND("hardware.damper.kind"),
+    DAMPER_COEFFICIENT("hardware.damper.coefficient_Ns_per_m"),
+    DAMPER_STROKE("hardware.damper.stroke_m", "hardware.damper.run_up_stroke_m"),
+    DAMPER_PEAK_VELOCITY("hardware.damper.peak_velocity_m_per_s"),
+    DAMPER_PEAK_FORCE("hardware.damper.peak_force_N"),
+    EDDY_CURRENT_NONE("hardware.damper.eddy_current"),
+    EDDY_CURRENT_CONDUCTOR("hardware.damper.eddy_current.conductor"),
+    EDDY_CURRENT_PLATE_THICKNESS("hardware.damper.eddy_current.plate_thickness_m"),
+    EDDY_CURRENT_FLUX_DENSITY("hardware.damper.eddy_current.flux_density_T"),
+    EDDY_CURRENT_POLE_AREA("hardware.damper.eddy_current.pole_area_m2"),
+    EDDY_CURRENT_EDGE_FACTOR("hardware.damper.eddy_current.edge_factor"),
+    EDDY_CURRENT_COEFFICIENT("hardware.damper.eddy_current.coefficient_Ns_per_m"),
+    EDDY_CURRENT_SOURCE("hardware.damper.eddy_current.source"),
+    CHECK("hardware.checks[]"),
+    CHECK_KIND("kind"),
+    CHECK_DEMAND("demand"),
+    CHECK_CAPACITY("capacity"),
+    CHECK_UNIT("unit"),
+    CHECK_UTILISATION("utilisation"),
+    CHECK_PASSES("passes"),
+    CHECK_SOURCE("source"),
+    PART_TOLERANCE_MASS("hardware.tolerances.mass"),
+    PART_TOLERANCE_SPRING_RATE("hardware.tolerances.spring_rate"),
+    PART_TOLERANCE_DAMPING("hardware.tolerances.damping"),
+    PART_TOLERANCE_ABSORBER_FREQUENCY("hardware.tolerances.absorber_frequency"),
+    PART_TOLERANCE_BASIS("hardware.tolerances.basis"),
+    TRIM_PLATE_MASS("hardware.trim.plate_mass_kg"),
+    TRIM_PLATES("hardware.trim.plates_fitted", "hardware.trim.plates_total"),
+    TRIM_PERCENT_PER_PLATE("hardware.trim.percent_per_plate"),
+    TRIM_PLATES_PER_PERCENT("hardware.trim.plates_per_percent"),
+    TRIM_RANGE("hardware.trim.structure_frequency_low_Hz", "hardware.trim.structure_frequency_high_Hz"),
+    PROCEDURE_STEP("hardware.procedure[]"),
+    STEP_NUMBER("number"),
+    STEP_KIND("step"),
+    STEP_TEXT("text"),
+    STEP_FIGURES("figures"),
+    FIGURE_EXPECTED_STRUCTURE_FREQUENCY("expected_structure_frequency_Hz"),
+    FIGURE_TUNING_RATIO("tuning_ratio"),
+    FIGURE_ABSORBER_TARGET_FREQUENCY("absorber_target_frequency_Hz"),
+    FIGURE_ABSORBER_FREQUENCY_TOLERANCE("absorber_frequency_tolerance"),
+    FIGURE_CLEARANCE("clearance_m"),
+    FIGURE_RUNNING_FREQUENCY("running_frequency_Hz"),
+    FIGURE_PREDICTED_RESPONSE("predicted_response"),
+    FIGURE_PREDICTED_PEAK_IN_BAND("predicted_peak_in_band"),
+    FIGURE_TRIM_PLATE_MASS("trim_plate_mass_kg"),
+    FIGURE_PLATES_PER_PERCENT("plates_per_percent"),
+    PREDICTED_POINT("hardware.predicted[]"),
+    PREDICTED_FREQUENCY("frequency_Hz"),
+    PREDICTED_BEFORE("before"),
+    PREDICTED_AFTER("after"),
+    PREDICTED_STROKE("stroke_m"),
+
     // Rows not in the design JSON.
     REVISION,
     DATE,
@@ -139,6 +222,11 @@ public enum ReportKey {
 
     ReportKey(String... jsonKeys) {
         this.jsonKeys = List.of(jsonKeys);
+    }
+
+    /** @return true when every row with this key is one element of the JSON array its key names */
+    public boolean array() {
+        return jsonKeys.size() == 1 && jsonKeys.get(0).endsWith("[]");
     }
 
     /** @return the JSON keys the row's value is written under, in order; empty when not in the JSON */

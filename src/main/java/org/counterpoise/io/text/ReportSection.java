@@ -51,6 +51,18 @@ public record ReportSection(SectionId id, String title, List<ReportRow> rows) {
         ALTERNATIVE,
         /** the tolerance Monte Carlo of the peak in band */
         MONTE_CARLO,
+        /** the parts that realise the design: spring or elastomer element, damper, mass */
+        PART_LIST,
+        /** the checks of the parts, one row per check (a grid: {@link ReportTable#grid}) */
+        CHECKS,
+        /** the tolerance each part must be made to */
+        PART_TOLERANCES,
+        /** the trim plates that adjust the absorber on site */
+        TRIM,
+        /** the tuning and commissioning procedure, one numbered step per row */
+        PROCEDURE,
+        /** the predicted response a technician compares readings against (a grid) */
+        PREDICTED,
         /** what a robustness study examines: the design, the response, the expected mistuning */
         ROBUSTNESS_STUDY,
         /** the worst case of the design, and the robust design at the same mass */

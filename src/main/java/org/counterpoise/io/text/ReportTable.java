@@ -2,6 +2,7 @@ package org.counterpoise.io.text;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 import java.util.Set;
 import org.counterpoise.io.text.ReportSection.SectionId;
 
@@ -131,6 +132,42 @@ public final class ReportTable {
         sentences.addAll(c.notes());
         return new Grid(c.title(), headings, cells, c.lines().stream().map(ReportComparison.Line::recommended).toList(),
                 c.lines().stream().map(ReportComparison.Line::chosen).toList(), sentences);
+    }
+
+    /**
+     * A section whose rows are records of the same fields (the checks, the predicted response) as
+     * one table: a column per field, a line per row, each cell with its unit.
+     * @param section a section
+     * @return its grid, or empty when its rows are not such records
+     */
+    public static Optional<Grid> grid(ReportSection section) {
+        return grid(section, UnitSystem.SI);
+    }
+
+    /**
+     * @param section a section
+     * @param units the unit system its quantities are shown in
+     * @return its grid, or empty when its rows are not such records
+     */
+    public static Optional<Grid> grid(ReportSection section, UnitSystem units) {
+        List<ReportRow> shown = section.rows().stream().filter(ReportRow::shown).toList();
+        if (shown.isEmpty() || !shown.stream().allMatch(r -> r.value() instanceof ReportValue.Fields f
+                && f.text().isEmpty())) {
+            return Optional.empty();
+        }
+        // a field without a label is for the JSON only (the unit of a check's figures)
+        List<String> headings = ((ReportValue.Fields) shown.get(0).value()).fields().stream()
+                .filter(f -> !f.label().isEmpty()).map(f -> ValueText.capitalised(f.label())).toList();
+        List<List<String>> cells = new ArrayList<>();
+        for (ReportRow row : shown) {
+            cells.add(((ReportValue.Fields) row.value()).fields().stream().filter(f -> !f.label().isEmpty())
+                    .map(f -> ValueText.cell(f.value(), units)).toList());
+        }
+        List<Boolean> none = shown.stream().map(r -> false).toList();
+        // the sources are sentences under the table, not a column: they are long
+        List<String> sources = shown.stream().filter(r -> !r.source().isEmpty())
+                .map(r -> ValueText.capitalised(r.label()) + ": " + r.source() + ".").toList();
+        return Optional.of(new Grid(section.title(), headings, cells, none, none, sources));
     }
 
     private static String note(ReportRow row) {

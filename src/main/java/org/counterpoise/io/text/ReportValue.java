@@ -208,6 +208,30 @@ public sealed interface ReportValue {
     }
 
     /**
+     * A small record of named values: one element of a JSON array (a check, a procedure step, a row
+     * of the predicted response), or a nested object (a step's figures). The JSON writes each field
+     * under its key's JSON keys; tables show the fields as columns ({@link ReportTable#grid}); the
+     * text report shows {@code text} when it is not empty, else the fields one after another.
+     * @param text the words shown for the whole (a procedure step's sentence), or empty
+     * @param fields the fields in order
+     */
+    record Fields(String text, List<Field> fields) implements ReportValue {
+        /** Defensive copy. */
+        public Fields {
+            fields = List.copyOf(fields);
+        }
+    }
+
+    /**
+     * One named value of {@link Fields}.
+     * @param key its JSON key (the first of the key's JSON keys; several for a {@link Pair})
+     * @param label the column heading, lower case, with the unit left to the value
+     * @param value the value, typed, SI
+     */
+    record Field(ReportKey key, String label, ReportValue value) {
+    }
+
+    /**
      * A peak and the frequency it occurs at (the text report names the frequency).
      * @param peak a {@link Quantity} or {@link Unbounded}
      * @param frequency where, rad/s (ignored when unbounded)

@@ -8,6 +8,7 @@ import org.counterpoise.core.units.Unit;
 import org.counterpoise.io.text.ReportValue.Change;
 import org.counterpoise.io.text.ReportValue.Count;
 import org.counterpoise.io.text.ReportValue.Factor;
+import org.counterpoise.io.text.ReportValue.Fields;
 import org.counterpoise.io.text.ReportValue.Flag;
 import org.counterpoise.io.text.ReportValue.Level;
 import org.counterpoise.io.text.ReportValue.Margin;
@@ -102,6 +103,8 @@ public final class ValueText {
             return new Cells(change(c, false), "", true);
         } else if (v instanceof PeakAt p) {
             return cells(p.peak(), system);
+        } else if (v instanceof Fields f) {
+            return new Cells(inline(f, system), "", true);
         }
         throw new IllegalStateException("bug: no table cells for " + v);
     }
@@ -176,8 +179,30 @@ public final class ValueText {
         } else if (v instanceof PeakAt p) {
             return p.peak() instanceof Quantity ? inline(p.peak(), system) + " at " + frequency(p.frequency())
                     : inline(p.peak(), system);
+        } else if (v instanceof Fields f) {
+            return !f.text().isEmpty() ? f.text() : f.fields().stream().filter(x -> !x.label().isEmpty())
+                    .map(x -> x.label() + " " + cell(x.value(), system)).collect(Collectors.joining(", "));
         }
         throw new IllegalStateException("bug: no words for " + v);
+    }
+
+    /**
+     * @param v a value
+     * @return its table cell with the unit after the number ("14.20 Hz", "412.0 N"), for a column
+     *     of a grid ({@link ReportTable#grid})
+     */
+    public static String cell(ReportValue v) {
+        return cell(v, UnitSystem.SI);
+    }
+
+    /**
+     * @param v a value
+     * @param system the unit system quantities are shown in
+     * @return its table cell with the unit after the number
+     */
+    public static String cell(ReportValue v, UnitSystem system) {
+        Cells c = cells(v, system);
+        return c.unit().isEmpty() ? c.value() : c.value() + " " + c.unit();
     }
 
     private static String inlinePair(Pair p, UnitSystem system) {

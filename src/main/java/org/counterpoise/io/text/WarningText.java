@@ -5,6 +5,7 @@ import org.counterpoise.core.design.DesignMethod;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.RunUpStroke;
 import org.counterpoise.core.error.Warning;
+import org.counterpoise.core.realisation.HardwareChoice;
 import org.counterpoise.core.error.WarningParameter;
 import org.counterpoise.core.error.WarningParameter.PeakBand;
 import org.counterpoise.core.units.Dimension;
@@ -99,7 +100,50 @@ public final class WarningText {
                     + " exceeds the stroke limit of %s: the absorber will strike its stops at start and stop.",
                     length(w.number(WarningParameter.RUN_UP_STROKE), units), runUpBasis(w),
                     length(w.number(WarningParameter.STROKE_LIMIT), units));
+            case DAMPER_STROKE_OVER_CLEARANCE -> String.format(Locale.ROOT, "The damper sees a stroke of up to %s"
+                    + " in service, more than the clearance of %s it is made to allow: widen the clearance and the"
+                    + " damper's stroke, or slow the run-up.", length(w.number(WarningParameter.DAMPER_STROKE), units),
+                    length(w.number(WarningParameter.CLEARANCE), units));
+            case EDDY_CURRENT_PLATE_THICK -> String.format(Locale.ROOT, "The eddy-current damper's plate, %s thick,"
+                    + " is thicker than the skin depth of %s at the highest forcing frequency: the damping it gives"
+                    + " falls short of the thin-plate formula; use a thinner plate and a larger pole area.",
+                    length(w.number(WarningParameter.PLATE_THICKNESS), units),
+                    length(w.number(WarningParameter.SKIN_DEPTH), units));
+            case MASS_TOLERANCE_TOO_LOOSE -> String.format(Locale.ROOT, "A mass tolerance of +/-%s alone moves the"
+                    + " absorber's frequency by as much as its tolerance of +/-%s allows, leaving nothing for the"
+                    + " spring rate: hold the mass closer, or tune the absorber on site with the trim plates.",
+                    ValueText.percent(w.number(WarningParameter.MASS_TOLERANCE), 2),
+                    ValueText.percent(w.number(WarningParameter.FREQUENCY_TOLERANCE), 2));
+            case SPRING_OVERSTRESSED -> spring(w, "the spring's stress at its largest load (or at solid length) is",
+                    "the permissible stress: it would take a set and the tuning would drift");
+            case SPRING_FATIGUE -> spring(w, "the spring's stress amplitude is", "its fatigue strength at its mean"
+                    + " stress: it would break in service and the mass would fall");
+            case SPRING_BUCKLES -> spring(w, "the spring's working deflection is", "its buckling deflection: guide it"
+                    + " on a rod or in a sleeve");
+            case SPRING_SURGE -> spring(w, "three times the highest forcing frequency is", "the spring's first surge"
+                    + " frequency: its coils would resonate");
+            case SPRING_GOES_SOLID -> spring(w, "the spring's working compression is", "the compression it has before"
+                    + " its coils close: it would strike solid");
+            case ELASTOMER_LOSS_FACTOR_MISSED -> String.format(Locale.ROOT, "The elastomer compound's loss factor"
+                    + " of %.3g is %s the %.3g the element needs: its peak response is %.3g times what the design"
+                    + " allows (its promised peak plus %s); choose a compound with a loss factor nearer %.3g at the"
+                    + " working frequency and temperature, or add a damper.",
+                    w.number(WarningParameter.COMPOUND_LOSS_FACTOR),
+                    w.number(WarningParameter.COMPOUND_LOSS_FACTOR) < w.number(WarningParameter.LOSS_FACTOR_NEEDED)
+                            ? "below" : "above", w.number(WarningParameter.LOSS_FACTOR_NEEDED),
+                    w.number(WarningParameter.UTILISATION), ValueText.percent(DesignResult.TOLERANCE_ALLOWANCE, 2),
+                    w.number(WarningParameter.LOSS_FACTOR_NEEDED));
+            case SPRING_RATE_NOT_MET -> String.format(Locale.ROOT, "No helical springs of stock wire give the rate the"
+                    + " design needs: the closest, shown, are %s %s; choose an elastomer element or another absorber.",
+                    ValueText.percent(Math.abs(w.number(WarningParameter.RATE_DEVIATION)), 2),
+                    w.number(WarningParameter.RATE_DEVIATION) < 0 ? "too soft" : "too stiff");
         };
+    }
+
+    private static String spring(Warning w, String what, String against) {
+        return String.format(Locale.ROOT, "No helical spring design passes every check: %s %.3g times %s."
+                + " Choose another wire or spring count, or an elastomer element.", what,
+                w.number(WarningParameter.UTILISATION), against);
     }
 
     private static String narrow(String what, Warning w) {

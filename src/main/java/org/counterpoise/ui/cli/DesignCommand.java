@@ -15,6 +15,7 @@ import org.counterpoise.io.project.ProjectIdentity;
 import org.counterpoise.io.text.ComparisonContent;
 import org.counterpoise.io.text.DesignContent;
 import org.counterpoise.io.text.DesignReport;
+import org.counterpoise.io.text.HardwareContent;
 import org.counterpoise.io.text.ReportContent;
 import org.counterpoise.io.text.UnitSystem;
 import picocli.CommandLine.Command;
@@ -50,8 +51,9 @@ public final class DesignCommand implements Callable<Integer> {
         MethodComparison comparison = dossier.comparison(ProgressListener.NONE);
         // the JSON is SI whatever the display: its keys name SI units, its words follow them
         UnitSystem shown = json ? UnitSystem.SI : DisplayUnitSystem.of(units, loaded.project());
-        ReportContent content = DesignContent.of(result, json ? ProjectIdentity.EMPTY : loaded.project().identity(),
-                Optional.empty(), shown).with(ComparisonContent.of(comparison, result.study()))
+        ReportContent designed = DesignContent.of(result, json ? ProjectIdentity.EMPTY : loaded.project().identity(),
+                Optional.empty(), shown).with(ComparisonContent.of(comparison, result.study()));
+        ReportContent content = HardwareContent.with(designed, dossier, loaded.project().hardware())
                 .shownIn(DisplayConvention.of(convention, loaded.project()));
         spec.commandLine().getOut().print(PlainText.forTerminal(json ? ResultJson.toJson(content)
                 : DesignReport.render(content)));

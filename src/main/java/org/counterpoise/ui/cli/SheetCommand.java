@@ -71,7 +71,7 @@ public final class SheetCommand implements Callable<Integer> {
         // The sheet and every export are one set: all are written, or none and nothing changes.
         SheetFiles.Outputs outputs = new SheetFiles.Outputs(dossier)
                 .convention(DisplayConvention.of(convention, loaded.project()))
-                .units(DisplayUnitSystem.of(units, loaded.project()))
+                .hardware(loaded.project().hardware(), DisplayUnitSystem.of(units, loaded.project()))
                 .sheet(output, loaded.project().notes(), issued, mark, "--output", identity)
                 .sparing(file, "the project file being read")
                 .panel(RunUpPanel.of(loaded.project().withDisplayUnits(DisplayUnitSystem.of(units, loaded.project())),

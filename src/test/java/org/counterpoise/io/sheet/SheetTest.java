@@ -56,7 +56,7 @@ class SheetTest {
                     printed(r.springForce().value(), Unit.NEWTON) + " N",
                     printed(r.absorber().naturalFrequency(), Unit.HERTZ) + " Hz",
                     QuantityFormat.number(r.tuning().massRatio(), 4),
-                    "revision B", "2026-12-02", "page 1 of", "Retain the absorber mass fail-safe",
+                    "revision B", "2026-12-02", "1 of", "Retain the absorber mass fail-safe",
                     "Local codes, standards and licensed engineering practice govern")) {
                 assertTrue(text.contains(expected), "sheet lacks \"" + expected + "\"");
             }
@@ -68,7 +68,7 @@ class SheetTest {
                 ImageIO.write(image, "png", out.resolve(name + "-page-" + (i + 1) + ".png").toFile());
             }
             // the verdict against the preset's criterion adds its table to the summary
-            assertTrue(doc.getNumberOfPages() >= 2 && doc.getNumberOfPages() <= 5, "pages " + doc.getNumberOfPages());
+            assertTrue(doc.getNumberOfPages() >= 2 && doc.getNumberOfPages() <= 8, "pages " + doc.getNumberOfPages());
         }
     }
 

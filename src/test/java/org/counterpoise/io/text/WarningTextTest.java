@@ -92,4 +92,12 @@ class WarningTextTest {
                 + " mass ratio of 0.00100, for comparison.",
                 WarningText.of(Warning.of(WarningKind.NO_ABSORBER_NEEDED, 0.5, 0.001)));
     }
+
+    @Test
+    void aFailingSpringSaysWhichCheckAndByHowMuch() {
+        assertEquals("No helical spring design passes every check: the spring's stress amplitude is 1.25 times its"
+                + " fatigue strength at its mean stress: it would break in service and the mass would fall. Choose"
+                + " another wire or spring count, or an elastomer element.",
+                WarningText.of(Warning.of(WarningKind.SPRING_FATIGUE, 1.25)));
+    }
 }

@@ -22,12 +22,15 @@ import javax.swing.filechooser.FileNameExtensionFilter;
 import org.apache.pdfbox.Loader;
 import org.apache.pdfbox.pdmodel.PDDocument;
 import org.apache.pdfbox.rendering.PDFRenderer;
+import org.counterpoise.core.criteria.AmplitudeConvention;
 import org.counterpoise.core.design.DesignDossier;
+import org.counterpoise.core.realisation.HardwareChoice;
 import org.counterpoise.io.project.Project;
 import org.counterpoise.io.project.ProjectIdentity;
 import org.counterpoise.io.sheet.RunUpPanel;
 import org.counterpoise.io.sheet.SheetFiles;
 import org.counterpoise.io.sheet.SheetPanel;
+import org.counterpoise.io.text.UnitSystem;
 import org.counterpoise.ui.gui.task.TaskRunner;
 
 /**
@@ -121,11 +124,14 @@ final class SheetStep extends Step {
         String date = issued();
         String revision = revision("draft");
         ProjectIdentity identity = project.identity();
+        HardwareChoice hardware = project.hardware();
+        UnitSystem units = project.displayUnits();
         preview.setText("drawing the preview\u2026");
         tasks.current(null, progress -> {
             d.monteCarlo(progress); // the dossier's run, shared with the robustness step: made once
             ByteArrayOutputStream pdf = new ByteArrayOutputStream();
-            SheetFiles.writeSheet(d, notes, date, revision, identity, pdf);
+            SheetFiles.writeSheet(d, notes, date, revision, identity, List.of(), AmplitudeConvention.PEAK,
+                    hardware, units, pdf);
             try (PDDocument doc = Loader.loadPDF(pdf.toByteArray())) {
                 return new PDFRenderer(doc).renderImageWithDPI(0, 80);
             }
@@ -176,7 +182,8 @@ final class SheetStep extends Step {
             progress.phase("run-up");
             SheetPanel runUp = RunUpPanel.of(p, d.design(), progress); // as `sheet` prints it (the preview is page 1)
             progress.phase("drawing");
-            new SheetFiles.Outputs(d).panel(runUp).sheet(file, notes, date, revision, "sheet file", identity)
+            new SheetFiles.Outputs(d).panel(runUp).hardware(p.hardware(), p.displayUnits())
+                    .sheet(file, notes, date, revision, "sheet file", identity)
                     .write(true);
             return file;
         }, f -> messages.say("Saved the sheet to " + f + "."),

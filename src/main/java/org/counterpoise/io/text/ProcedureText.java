@@ -1,0 +1,152 @@
+package org.counterpoise.io.text;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.Optional;
+import org.counterpoise.core.realisation.ProcedureStep;
+import org.counterpoise.core.realisation.ProcedureStepKind;
+import org.counterpoise.core.realisation.StepFigure;
+import org.counterpoise.core.realisation.StepFigure.StepQuantity;
+import org.counterpoise.core.units.Dimension;
+import org.counterpoise.io.text.ReportValue.Count;
+import org.counterpoise.io.text.ReportValue.Field;
+import org.counterpoise.io.text.ReportValue.Fields;
+import org.counterpoise.io.text.ReportValue.Percent;
+import org.counterpoise.io.text.ReportValue.Quantity;
+import org.counterpoise.io.text.ReportValue.Words;
+
+/**
+ * The tuning and commissioning procedure in words a technician follows: one sentence per
+ * {@link ProcedureStepKind}, with the step's {@link StepFigure}s in the display units, numbered in
+ * order; and the figures as the JSON's {@code figures} object of each step (keys per
+ * {@link StepQuantity} in {@link ReportKey}). A figure a step does not carry leaves its clause out.
+ */
+public final class ProcedureText {
+    private ProcedureText() {
+    }
+
+    /**
+     * @param steps the procedure, in order
+     * @return one row per step: label the step's number, value its record whose text is the sentence
+     */
+    static List<ReportRow> rows(List<ProcedureStep> steps) {
+        List<ReportRow> rows = new ArrayList<>();
+        for (int i = 0; i < steps.size(); i++) {
+            ProcedureStep step = steps.get(i);
+            String sentence = sentence(step);
+            List<Field> figures = new ArrayList<>();
+            for (StepFigure f : step.figures()) {
+                figures.add(new Field(key(f.quantity()), label(f.quantity()), value(f)));
+            }
+            List<Field> fields = List.of(new Field(ReportKey.STEP_NUMBER, "step", new Count(i + 1)),
+                    new Field(ReportKey.STEP_KIND, "kind", new Words(id(step.kind()), List.of())),
+                    new Field(ReportKey.STEP_TEXT, "what to do", new Words(sentence, List.of())),
+                    new Field(ReportKey.STEP_FIGURES, "figures", new Fields("", figures)));
+            rows.add(new ReportRow(ReportKey.PROCEDURE_STEP, Integer.toString(i + 1), "", new Fields(sentence, fields),
+                    "", ""));
+        }
+        return rows;
+    }
+
+    /**
+     * @param kind a step
+     * @return its identifier in the JSON ("measure-structure")
+     */
+    public static String id(ProcedureStepKind kind) {
+        return kind.name().toLowerCase(Locale.ROOT).replace('_', '-');
+    }
+
+    /**
+     * @param step a step with its figures
+     * @return what the technician does, one sentence
+     */
+    public static String sentence(ProcedureStep step) {
+        return switch (step.kind()) {
+            case MEASURE_STRUCTURE -> "Measure the structure's natural frequency with the absorber locked or not yet"
+                    + " fitted (tap test, run-down or shaker)" + clause(step, "; the design expects ",
+                            StepQuantity.EXPECTED_STRUCTURE_FREQUENCY) + ".";
+            case COMPUTE_ABSORBER_TARGET -> "Compute the absorber frequency to tune to: the measured structure"
+                    + " frequency times the tuning ratio" + clause(step, " ", StepQuantity.TUNING_RATIO)
+                    + clause(step, " (for the expected structure frequency: ", StepQuantity.ABSORBER_TARGET_FREQUENCY,
+                            ")") + ".";
+            case TUNE_ABSORBER -> "Tune the absorber alone, clamped to a rigid base, by tap test or shaker to that"
+                    + " frequency" + clause(step, " (", StepQuantity.ABSORBER_TARGET_FREQUENCY, " for the expected"
+                            + " structure frequency)") + clause(step, " within +/-",
+                                    StepQuantity.ABSORBER_FREQUENCY_TOLERANCE) + ", adding or taking off trim plates.";
+            case FIT -> "Fit the absorber with its retention and secondary catch, check"
+                    + clause(step, " the clearance of ", StepQuantity.CLEARANCE, " around the mass in every"
+                            + " direction,") + " that the stroke stops are in place and that every fixing is"
+                    + " tightened and locked.";
+            case MEASURE_RESPONSE -> "Run the machine and measure the structure's response at the running speed"
+                    + clause(step, " ", StepQuantity.RUNNING_FREQUENCY) + clause(step, " (the design predicts a peak"
+                            + " of ", StepQuantity.PREDICTED_RESPONSE, " there with the absorber)")
+                    + " and over the whole band.";
+            case COMPARE -> "Compare the readings with the predicted response table"
+                    + clause(step, "; over the band the peak with the absorber should not exceed ",
+                            StepQuantity.PREDICTED_PEAK_IN_BAND) + ".";
+            case ADJUST -> "If the readings are off, adjust by the trim step"
+                    + clause(step, " (one plate is ", StepQuantity.TRIM_PLATE_MASS, ";")
+                    + clause(step, " ", StepQuantity.PLATES_PER_PERCENT, " plates per percent of frequency)")
+                    + ": add plates to lower the absorber frequency, take them off to raise it, then tune and measure"
+                    + " again.";
+        };
+    }
+
+    /**
+     * @param q a step's number
+     * @return its words, lower case
+     */
+    static String label(StepQuantity q) {
+        return switch (q) {
+            case EXPECTED_STRUCTURE_FREQUENCY -> "expected structure frequency";
+            case TUNING_RATIO -> "tuning ratio";
+            case ABSORBER_TARGET_FREQUENCY -> "absorber target frequency";
+            case ABSORBER_FREQUENCY_TOLERANCE -> "absorber frequency tolerance, +/-";
+            case CLEARANCE -> "clearance";
+            case RUNNING_FREQUENCY -> "running frequency";
+            case PREDICTED_RESPONSE -> "predicted response";
+            case PREDICTED_PEAK_IN_BAND -> "predicted peak in the band";
+            case TRIM_PLATE_MASS -> "trim plate mass";
+            case PLATES_PER_PERCENT -> "plates per percent of frequency";
+        };
+    }
+
+    /**
+     * @param q a step's number
+     * @return its key in the step's {@code figures} object
+     */
+    static ReportKey key(StepQuantity q) {
+        return switch (q) {
+            case EXPECTED_STRUCTURE_FREQUENCY -> ReportKey.FIGURE_EXPECTED_STRUCTURE_FREQUENCY;
+            case TUNING_RATIO -> ReportKey.FIGURE_TUNING_RATIO;
+            case ABSORBER_TARGET_FREQUENCY -> ReportKey.FIGURE_ABSORBER_TARGET_FREQUENCY;
+            case ABSORBER_FREQUENCY_TOLERANCE -> ReportKey.FIGURE_ABSORBER_FREQUENCY_TOLERANCE;
+            case CLEARANCE -> ReportKey.FIGURE_CLEARANCE;
+            case RUNNING_FREQUENCY -> ReportKey.FIGURE_RUNNING_FREQUENCY;
+            case PREDICTED_RESPONSE -> ReportKey.FIGURE_PREDICTED_RESPONSE;
+            case PREDICTED_PEAK_IN_BAND -> ReportKey.FIGURE_PREDICTED_PEAK_IN_BAND;
+            case TRIM_PLATE_MASS -> ReportKey.FIGURE_TRIM_PLATE_MASS;
+            case PLATES_PER_PERCENT -> ReportKey.FIGURE_PLATES_PER_PERCENT;
+        };
+    }
+
+    /** A figure's value: a tolerance as a percentage, everything else a quantity of its dimension. */
+    private static ReportValue value(StepFigure f) {
+        if (f.quantity() == StepQuantity.ABSORBER_FREQUENCY_TOLERANCE) {
+            return new Percent(f.value(), 2);
+        }
+        return f.dimension() == Dimension.RATIO ? new Quantity(f.value(), Dimension.RATIO, 4)
+                : DesignContent.quantity(f.value(), f.dimension());
+    }
+
+    private static String clause(ProcedureStep step, String before, StepQuantity q) {
+        return clause(step, before, q, "");
+    }
+
+    /** The figure in words between its words before and after, or nothing when the step does not carry it. */
+    private static String clause(ProcedureStep step, String before, StepQuantity q, String after) {
+        Optional<StepFigure> f = step.figures().stream().filter(x -> x.quantity() == q).findFirst();
+        return f.map(x -> before + ValueText.inline(value(x)) + after).orElse("");
+    }
+}
