@@ -55,7 +55,7 @@ public final class HardwareContent {
     public static ReportContent with(ReportContent content, Realisation r, DesignResult d) {
         List<ReportSection> sections = new ArrayList<>(content.sections().stream()
                 .filter(s -> !SECTIONS.contains(s.id())).toList());
-        sections.addAll(sections(r, d));
+        sections.addAll(sections(r, d, content.units()));
         List<ReportContent.Note> warnings = new ArrayList<>(content.warnings());
         r.warnings().forEach(w -> warnings.add(new ReportContent.Note(w.code(), WarningText.of(w, content.units()))));
         List<String> cautions = new ArrayList<>(content.cautions());
@@ -84,9 +84,19 @@ public final class HardwareContent {
     /**
      * @param r a realisation
      * @param d the design it realises
-     * @return its sections, in print order
+     * @return its sections, in print order, in SI
      */
     public static List<ReportSection> sections(Realisation r, DesignResult d) {
+        return sections(r, d, UnitSystem.SI);
+    }
+
+    /**
+     * @param r a realisation
+     * @param d the design it realises
+     * @param units the unit system the procedure's sentences state their figures in
+     * @return its sections, in print order
+     */
+    public static List<ReportSection> sections(Realisation r, DesignResult d, UnitSystem units) {
         List<ReportSection> out = new ArrayList<>();
         out.add(new ReportSection(SectionId.PART_LIST, "Part list", PartListRows.of(r, d)));
         List<ReportRow> checks = new ArrayList<>();
@@ -98,7 +108,7 @@ public final class HardwareContent {
                 : "Checks of the parts (demand against capacity): NOT ALL PASS", checks));
         out.add(new ReportSection(SectionId.PART_TOLERANCES, "Tolerances the parts must hold", tolerances(r.tolerances())));
         out.add(new ReportSection(SectionId.TRIM, "Trim on site", trim(r.trim())));
-        out.add(new ReportSection(SectionId.PROCEDURE, "Tuning and commissioning", ProcedureText.rows(r.procedure())));
+        out.add(new ReportSection(SectionId.PROCEDURE, "Tuning and commissioning", ProcedureText.rows(r.procedure(), units)));
         out.add(new ReportSection(SectionId.PREDICTED, "Predicted response to compare readings with (peak)",
                 predicted(r.predicted(), d.study().response().dimension())));
         return out;

@@ -9,6 +9,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import org.counterpoise.core.criteria.AmplitudeConvention;
@@ -16,6 +17,7 @@ import org.counterpoise.core.design.DesignDossier;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.Designer;
 import org.counterpoise.core.progress.ProgressListener;
+import org.counterpoise.core.realisation.Realiser;
 import org.counterpoise.io.project.Project;
 import org.counterpoise.io.project.ProjectReader;
 import org.counterpoise.io.sheet.SheetContent;
@@ -91,7 +93,8 @@ class UsCustomaryReportTest {
         DesignDossier dossier = DesignDossier.of(pump.toStudy());
         SheetContent sheet = SheetContent.of(dossier.design(), "", "2026-12-03", "A",
                 dossier.monteCarlo(ProgressListener.NONE), pump.identity(), dossier.comparison(ProgressListener.NONE),
-                AmplitudeConvention.PEAK, UnitSystem.US_CUSTOMARY);
+                AmplitudeConvention.PEAK, Optional.of(Realiser.realisation(dossier, pump.hardware())),
+                UnitSystem.US_CUSTOMARY);
         for (ReportTable.Section section : sheet.sections()) {
             for (ReportTable.Row row : section.rows()) {
                 assertNoMetricUnit("sheet row " + row.label(), row.value() + " " + row.unit());
