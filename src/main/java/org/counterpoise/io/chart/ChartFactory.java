@@ -18,6 +18,7 @@ import org.counterpoise.core.response.SystemResponse;
 import org.counterpoise.core.units.Dimension;
 import org.counterpoise.core.units.Unit;
 import org.counterpoise.io.text.DisplayUnits;
+import org.counterpoise.io.text.UnitSystem;
 import org.counterpoise.io.text.QuantityFormat;
 import org.counterpoise.io.text.ValueText;
 import org.knowm.xchart.AnnotationLine;
@@ -80,18 +81,16 @@ public final class ChartFactory {
         return response(r, curves, logarithmic, ChartTheme.LIGHT, width, height);
     }
 
-    /**
-     * @param r the design result
-     * @param curves its curves
-     * @param logarithmic true for a logarithmic response axis
-     * @param theme colours
-     * @param width pixels
-     * @param height pixels
-     * @return the response before and after, with the forcing band marked
-     */
+    /** The response chart as peaks in SI (the arguments as below). */
     public static XYChart response(DesignResult r, DesignCurves curves, boolean logarithmic, ChartTheme theme,
             int width, int height) {
         return response(r, curves, logarithmic, theme, AmplitudeConvention.PEAK, width, height);
+    }
+
+    /** The response chart in SI (the arguments as below). */
+    public static XYChart response(DesignResult r, DesignCurves curves, boolean logarithmic, ChartTheme theme,
+            AmplitudeConvention convention, int width, int height) {
+        return response(r, curves, logarithmic, theme, convention, UnitSystem.SI, width, height);
     }
 
     /**
@@ -100,15 +99,16 @@ public final class ChartFactory {
      * @param logarithmic true for a logarithmic response axis
      * @param theme colours
      * @param convention the amplitude convention the curves are stated in (the title says it)
+     * @param units the unit system of the response axis
      * @param width pixels
      * @param height pixels
      * @return the response before and after, with the forcing band marked; the study's criterion,
      *     when it has one, as a limit line ({@link LimitLines}) where the chart's quantity can show it
      */
     public static XYChart response(DesignResult r, DesignCurves curves, boolean logarithmic, ChartTheme theme,
-            AmplitudeConvention convention, int width, int height) {
+            AmplitudeConvention convention, UnitSystem units, int width, int height) {
         Dimension d = curves.response().dimension();
-        Unit unit = DisplayUnits.of(d);
+        Unit unit = DisplayUnits.of(d, units);
         XYChart chart = base(width, height, capitalised(curves.response().label()) + ", " + convention.label(), unit,
                 theme);
         double[] hz = ChartStyle.inUnit(curves.frequency(), Unit.HERTZ);
@@ -141,18 +141,25 @@ public final class ChartFactory {
         return stroke(r, curves, logarithmic, ChartTheme.LIGHT, width, height);
     }
 
+    /** The stroke chart in SI (the arguments as below). */
+    public static XYChart stroke(DesignResult r, DesignCurves curves, boolean logarithmic, ChartTheme theme,
+            int width, int height) {
+        return stroke(r, curves, logarithmic, theme, UnitSystem.SI, width, height);
+    }
+
     /**
      * @param r the design result
      * @param curves its curves
      * @param logarithmic true for a logarithmic axis
      * @param theme colours
+     * @param units the unit system of the stroke axis
      * @param width pixels
      * @param height pixels
      * @return the absorber stroke against frequency, with the clearance marked
      */
     public static XYChart stroke(DesignResult r, DesignCurves curves, boolean logarithmic, ChartTheme theme,
-            int width, int height) {
-        Unit unit = DisplayUnits.of(Dimension.LENGTH);
+            UnitSystem units, int width, int height) {
+        Unit unit = DisplayUnits.of(Dimension.LENGTH, units);
         XYChart chart = base(width, height, "Absorber stroke", unit, theme);
         double[] hz = ChartStyle.inUnit(curves.frequency(), Unit.HERTZ);
         double[] stroke = ChartStyle.inUnit(curves.stroke(), unit);

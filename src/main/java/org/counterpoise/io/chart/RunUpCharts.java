@@ -15,6 +15,7 @@ import org.counterpoise.core.runup.SteadyCurves;
 import org.counterpoise.core.units.Unit;
 import org.counterpoise.io.project.DisturbanceInput;
 import org.counterpoise.io.text.DisplayUnits;
+import org.counterpoise.io.text.UnitSystem;
 import org.counterpoise.io.text.QuantityFormat;
 import org.counterpoise.io.text.RunUpReport;
 import org.knowm.xchart.AnnotationLine;
@@ -52,15 +53,32 @@ public final class RunUpCharts {
      */
     public static XYChart structure(RunUpStudy.Result result, Unit speedUnit, ChartTheme theme, int width,
             int height) {
+        return structure(result, speedUnit, UnitSystem.SI, theme, width, height);
+    }
+
+    /**
+     * The envelope of the structure's response, with and without the absorber, and the steady state.
+     * @param result the computed run-up
+     * @param speedUnit the unit of the shaft speed axis (rpm or Hz)
+     * @param units the unit system of the response axis
+     * @param theme colours
+     * @param width pixels
+     * @param height pixels
+     * @return the chart
+     */
+    public static XYChart structure(RunUpStudy.Result result, Unit speedUnit, UnitSystem units, ChartTheme theme,
+            int width, int height) {
         ResponseKind k = result.study().structureQuantity();
         RunUpReportData d = result.data();
+        Unit y = DisplayUnits.of(k.dimension(), units);
         List<Line> lines = List.of(
                 envelope(d, d.comparison().withoutAbsorber(), k, "without absorber, " + direction(d), theme.before(),
-                        speedUnit),
-                envelope(d, d.comparison().withAbsorber(), k, "with absorber, " + direction(d), theme.after(), speedUnit),
-                steady(d, result.steady(), false, k, "without absorber, steady state", theme.before(), speedUnit),
-                steady(d, result.steady(), true, k, "with absorber, steady state", theme.after(), speedUnit));
-        return chart(capitalised(RunUpReport.label(k)) + " during the " + direction(d), k, lines, speedUnit, theme,
+                        speedUnit, y),
+                envelope(d, d.comparison().withAbsorber(), k, "with absorber, " + direction(d), theme.after(), speedUnit,
+                        y),
+                steady(d, result.steady(), false, k, "without absorber, steady state", theme.before(), speedUnit, y),
+                steady(d, result.steady(), true, k, "with absorber, steady state", theme.after(), speedUnit, y));
+        return chart(capitalised(RunUpReport.label(k)) + " during the " + direction(d), k, lines, speedUnit, y, theme,
                 width, height, band(result, speedUnit));
     }
 
@@ -74,13 +92,30 @@ public final class RunUpCharts {
      * @return the chart
      */
     public static XYChart stroke(RunUpStudy.Result result, Unit speedUnit, ChartTheme theme, int width, int height) {
+        return stroke(result, speedUnit, UnitSystem.SI, theme, width, height);
+    }
+
+    /**
+     * The envelope of the absorber stroke and its steady state.
+     * @param result the computed run-up
+     * @param speedUnit the unit of the shaft speed axis (rpm or Hz)
+     * @param units the unit system of the stroke axis
+     * @param theme colours
+     * @param width pixels
+     * @param height pixels
+     * @return the chart
+     */
+    public static XYChart stroke(RunUpStudy.Result result, Unit speedUnit, UnitSystem units, ChartTheme theme,
+            int width, int height) {
         RunUpReportData d = result.data();
+        Unit y = DisplayUnits.of(ResponseKind.STROKE.dimension(), units);
         List<Line> lines = List.of(
                 envelope(d, d.comparison().withAbsorber(), ResponseKind.STROKE, "stroke, " + direction(d), theme.stroke(),
-                        speedUnit),
-                steady(d, result.steady(), true, ResponseKind.STROKE, "stroke, steady state", theme.stroke(), speedUnit));
-        return chart("Absorber stroke during the " + direction(d), ResponseKind.STROKE, lines, speedUnit, theme, width,
-                height, band(result, speedUnit));
+                        speedUnit, y),
+                steady(d, result.steady(), true, ResponseKind.STROKE, "stroke, steady state", theme.stroke(), speedUnit,
+                        y));
+        return chart("Absorber stroke during the " + direction(d), ResponseKind.STROKE, lines, speedUnit, y, theme,
+                width, height, band(result, speedUnit));
     }
 
     /**
@@ -100,16 +135,14 @@ public final class RunUpCharts {
     }
 
     private static Line envelope(RunUpReportData d, RunUpResult r, ResponseKind k, String name, Color color,
-            Unit speedUnit) {
+            Unit speedUnit, Unit y) {
         Envelope e = r.envelope();
-        return new Line(name, shaft(d, e.speed(), speedUnit), ChartStyle.inUnit(e.of(k), DisplayUnits.of(k.dimension())),
-                color, false);
+        return new Line(name, shaft(d, e.speed(), speedUnit), ChartStyle.inUnit(e.of(k), y), color, false);
     }
 
     private static Line steady(RunUpReportData d, SteadyCurves s, boolean withAbsorber, ResponseKind k, String name,
-            Color color, Unit speedUnit) {
-        return new Line(name, shaft(d, s.speed(), speedUnit),
-                ChartStyle.inUnit(s.of(withAbsorber, k), DisplayUnits.of(k.dimension())), color, true);
+            Color color, Unit speedUnit, Unit y) {
+        return new Line(name, shaft(d, s.speed(), speedUnit), ChartStyle.inUnit(s.of(withAbsorber, k), y), color, true);
     }
 
     /** Forcing frequencies (rad/s) as shaft speeds in the unit of the axis. */
@@ -128,9 +161,8 @@ public final class RunUpCharts {
             speedUnit.fromSi(result.data().shaftSpeed(b.high()))};
     }
 
-    private static XYChart chart(String title, ResponseKind k, List<Line> lines, Unit speedUnit, ChartTheme theme,
-            int width, int height, double[] band) {
-        Unit unit = DisplayUnits.of(k.dimension());
+    private static XYChart chart(String title, ResponseKind k, List<Line> lines, Unit speedUnit, Unit unit,
+            ChartTheme theme, int width, int height, double[] band) {
         XYChart c = new XYChartBuilder().width(width).height(height).title(title)
                 .xAxisTitle("Shaft speed (" + ChartFactory.pretty(speedUnit.symbol()) + ")")
                 .yAxisTitle(capitalised(RunUpReport.label(k)) + " (" + ChartFactory.pretty(unit.symbol()) + ")")

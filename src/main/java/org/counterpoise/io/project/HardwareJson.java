@@ -2,6 +2,7 @@ package org.counterpoise.io.project;
 
 import com.google.gson.JsonObject;
 import java.util.OptionalDouble;
+import org.counterpoise.core.error.Checks;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.realisation.Conductor;
 import org.counterpoise.core.realisation.DamperKind;
@@ -116,8 +117,16 @@ final class HardwareJson {
         double value = q.number("value");
         Unit unit = JsonFields.unit(q, "unit", Dimension.RATIO);
         q.finish();
-        return unit.toSi(value);
+        double share = unit.toSi(value);
+        if (share != 0 && Math.abs(share) < SMALLEST_SHARE) {
+            throw new InvalidInputException(q.pathOf("value"), Checks.show(value) + " " + unit.symbol(),
+                    "0, or a share of at least 1e-7 % (a smaller one is no tolerance a workshop can hold)");
+        }
+        return share;
     }
+
+    /** The smallest non-zero share read, 1e-9 (1e-7 %): far below any tolerance held (common practice). */
+    private static final double SMALLEST_SHARE = 1e-9;
 
     /** Hours as typed in hours are kept exactly; another unit of time is converted. */
     private static double hours(QuantityInput q) {

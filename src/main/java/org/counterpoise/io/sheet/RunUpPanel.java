@@ -17,6 +17,7 @@ import org.counterpoise.io.chart.RunUpCharts;
 import org.counterpoise.io.project.Project;
 import org.counterpoise.io.text.QuantityFormat;
 import org.counterpoise.io.text.RunUpReport;
+import org.counterpoise.io.text.UnitSystem;
 
 /**
  * The sheet's run-up page. When the project states a run-up rate ({@code disturbance.run_up_rate}),
@@ -67,15 +68,25 @@ public final class RunUpPanel {
         } catch (InvalidInputException e) {
             return note("The run-up was not computed for disturbance.run_up_rate: " + e.problem());
         }
-        return of(result, RunUpCharts.speedUnit(project.disturbance()));
+        return of(result, RunUpCharts.speedUnit(project.disturbance()), project.displayUnits());
     }
 
     /**
      * @param result a computed run-up
      * @param speedUnit the unit of shaft speeds
-     * @return the page with the peak table and the charts
+     * @return the page with the peak table and the charts, in SI
      */
     public static SheetPanel of(RunUpStudy.Result result, Unit speedUnit) {
+        return of(result, speedUnit, UnitSystem.SI);
+    }
+
+    /**
+     * @param result a computed run-up
+     * @param speedUnit the unit of shaft speeds
+     * @param units the unit system of the peaks and the charts' response axes
+     * @return the page with the peak table and the charts
+     */
+    public static SheetPanel of(RunUpStudy.Result result, Unit speedUnit, UnitSystem units) {
         RunUpReportData d = result.data();
         RunUpComparison c = d.comparison();
         var ramp = c.withAbsorber().ramp();
@@ -91,19 +102,19 @@ public final class RunUpPanel {
         List<List<String>> table = new ArrayList<>();
         table.add(List.of("peak during the " + what, "with absorber", "without absorber"));
         for (ResponseKind k : RunUpReportData.QUANTITIES) {
-            table.add(List.of(RunUpReport.label(k), RunUpReport.transientPeak(d, c.withAbsorber(), k, speedUnit),
-                    RunUpReport.transientPeak(d, c.withoutAbsorber(), k, speedUnit)));
+            table.add(List.of(RunUpReport.label(k), RunUpReport.transientPeak(d, c.withAbsorber(), k, speedUnit, units),
+                    RunUpReport.transientPeak(d, c.withoutAbsorber(), k, speedUnit, units)));
         }
         table.add(List.of("", "", ""));
         table.add(List.of("steady state, for comparison", "with absorber", "without absorber"));
         for (ResponseKind k : RunUpReportData.QUANTITIES) {
             table.add(List.of(RunUpReport.label(k),
-                    RunUpReport.steadyPeak(d, c.steadyWithAbsorber(), k, speedUnit),
-                    RunUpReport.steadyPeak(d, c.steadyWithoutAbsorber(), k, speedUnit)));
+                    RunUpReport.steadyPeak(d, c.steadyWithAbsorber(), k, speedUnit, units),
+                    RunUpReport.steadyPeak(d, c.steadyWithoutAbsorber(), k, speedUnit, units)));
         }
         return new SheetPanel(TITLE, sentences, table, List.of(
-                RunUpCharts.structure(result, speedUnit, ChartTheme.LIGHT, CHART_WIDTH, CHART_HEIGHT),
-                RunUpCharts.stroke(result, speedUnit, ChartTheme.LIGHT, CHART_WIDTH, CHART_HEIGHT)));
+                RunUpCharts.structure(result, speedUnit, units, ChartTheme.LIGHT, CHART_WIDTH, CHART_HEIGHT),
+                RunUpCharts.stroke(result, speedUnit, units, ChartTheme.LIGHT, CHART_WIDTH, CHART_HEIGHT)));
     }
 
     private static SheetPanel note(String sentence) {

@@ -131,10 +131,11 @@ public record SheetContent(String projectName, String notes, String date, String
         List<String> warnings = report.warnings().stream().map(ReportContent.Note::text).toList();
         Map<SectionId, ReportTable.Grid> grids = new EnumMap<>(SectionId.class);
         for (ReportSection section : report.sections()) {
-            ReportTable.grid(section).ifPresent(g -> grids.put(section.id(), g));
+            ReportTable.grid(section, report.units()).ifPresent(g -> grids.put(section.id(), g));
         }
         return new SheetContent(report.name(), notes, date, revision, sections, ASSUMPTIONS, warnings,
-                report.cautions(), report.comparison().map(ReportTable::comparison), identity, Optional.of(sketch),
+                report.cautions(), report.comparison().map(c -> ReportTable.comparison(c, report.units())), identity,
+                Optional.of(sketch),
                 grids);
     }
 
@@ -181,13 +182,14 @@ public record SheetContent(String projectName, String notes, String date, String
      * @param comparison the comparison of design methods for the design's study
      * @param convention the convention response values are stated in
      * @param realisation the design's hardware, when made
-     * @param units the display units of the sketch's dimensions
+     * @param units the unit system of the tables, the warnings and the sketch's dimensions
      * @return the sheet content with the comparison's table and the arrangement sketch
      */
     public static SheetContent of(DesignResult r, String notes, String date, String revision,
             MonteCarloOutcome monteCarlo, ProjectIdentity identity, MethodComparison comparison,
             AmplitudeConvention convention, Optional<Realisation> realisation, UnitSystem units) {
-        ReportContent report = DesignContent.of(r, identity, monteCarlo).with(ComparisonContent.of(comparison, r.study()));
+        ReportContent report = DesignContent.of(r, identity, monteCarlo, units)
+                .with(ComparisonContent.of(comparison, r.study()));
         if (realisation.isPresent()) {
             report = HardwareContent.with(report, realisation.get(), r);
         }

@@ -77,8 +77,20 @@ public final class SheetFiles {
      *     study has one) and stroke
      */
     public static List<XYChart> charts(DesignResult r, DesignCurves curves, AmplitudeConvention convention) {
-        return List.of(ChartFactory.response(r, curves, true, ChartTheme.LIGHT, convention, CHART_WIDTH, CHART_HEIGHT),
-                ChartFactory.stroke(r, curves, false, CHART_WIDTH, CHART_HEIGHT));
+        return charts(r, curves, convention, UnitSystem.SI);
+    }
+
+    /**
+     * @param r the design
+     * @param curves its curves
+     * @param convention the convention the response is stated in (the stroke stays a peak)
+     * @param units the unit system of the charts' vertical axes
+     * @return the charts the sheet prints: response and stroke
+     */
+    public static List<XYChart> charts(DesignResult r, DesignCurves curves, AmplitudeConvention convention,
+            UnitSystem units) {
+        return List.of(ChartFactory.response(r, curves, true, ChartTheme.LIGHT, convention, units, CHART_WIDTH,
+                CHART_HEIGHT), ChartFactory.stroke(r, curves, false, ChartTheme.LIGHT, units, CHART_WIDTH, CHART_HEIGHT));
     }
 
     /**
@@ -177,7 +189,7 @@ public final class SheetFiles {
     public static void writeSheet(DesignDossier dossier, String notes, String date, String revision,
             ProjectIdentity identity, List<SheetPanel> panels, AmplitudeConvention convention, HardwareChoice hardware,
             UnitSystem units, OutputStream out) throws IOException {
-        List<XYChart> charts = charts(dossier.design(), dossier.curves(), convention);
+        List<XYChart> charts = charts(dossier.design(), dossier.curves(), convention, units);
         SheetWriter.write(() -> content(dossier, notes, date, revision, identity, convention, hardware, units),
                 charts, panels, out);
     }
@@ -255,6 +267,7 @@ public final class SheetFiles {
         public Outputs hardware(HardwareChoice choice, UnitSystem display) {
             this.hardware = choice;
             this.units = display;
+            this.charts = null;
             return this;
         }
 
@@ -438,7 +451,7 @@ public final class SheetFiles {
 
         private List<XYChart> charts() {
             if (charts == null) {
-                charts = SheetFiles.charts(dossier.design(), dossier.curves(), convention);
+                charts = SheetFiles.charts(dossier.design(), dossier.curves(), convention, units);
             }
             return charts;
         }

@@ -56,7 +56,7 @@ public final class AcceptanceContent {
         }
         if (acceptance.isPresent()) {
             int at = sections.isEmpty() || sections.get(0).id() != SectionId.PROJECT ? 0 : 1;
-            sections.add(at, section(acceptance.get()));
+            sections.add(at, section(acceptance.get(), content.units()));
         } else {
             int design = -1;
             for (int i = 0; i < sections.size(); i++) {
@@ -73,7 +73,7 @@ public final class AcceptanceContent {
             sections.set(design, new ReportSection(d.id(), d.title(), rows));
         }
         return new ReportContent(content.name(), sections, content.warnings(), content.cautions(),
-                content.comparison());
+                content.comparison(), content.units());
     }
 
     /**
@@ -81,6 +81,15 @@ public final class AcceptanceContent {
      * @return its section
      */
     public static ReportSection section(Acceptance a) {
+        return section(a, UnitSystem.SI);
+    }
+
+    /**
+     * @param a a verdict
+     * @param units the unit system the criterion's limit is stated in
+     * @return its section
+     */
+    public static ReportSection section(Acceptance a, UnitSystem units) {
         Criterion c = a.criterion();
         Reading before = a.before();
         Reading after = a.after();
@@ -91,7 +100,7 @@ public final class AcceptanceContent {
         rows.add(row(ReportKey.ACCEPTANCE_NEEDED, "absorber needed", new Flag(a.absorberNeeded(), a.absorberNeeded()
                 ? "yes: without it the structure exceeds the limit"
                 : "no: the structure already meets the criterion without an absorber"), source));
-        String words = CriterionText.of(c);
+        String words = CriterionText.of(c, units);
         rows.add(row(ReportKey.ACCEPTANCE_CRITERION, "criterion", new Words(words, List.of(c.kind().id(), words)),
                 source));
         rows.add(row(ReportKey.ACCEPTANCE_SOURCE, "limits taken from", new Words(source, List.of()), ""));

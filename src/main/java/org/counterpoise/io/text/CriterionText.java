@@ -52,10 +52,19 @@ public final class CriterionText {
      *     rigid support, zone B accepted (unrestricted long-term operation)"
      */
     public static String of(Criterion c) {
+        return of(c, UnitSystem.SI);
+    }
+
+    /**
+     * @param c a criterion
+     * @param units the unit system its limits are stated in
+     * @return the criterion in words
+     */
+    public static String of(Criterion c, UnitSystem units) {
         String detail;
         if (c instanceof UserLimit u) {
             detail = u.convention().label() + " " + u.quantity().label() + " " + limit(u.limit(),
-                    u.quantity().dimension());
+                    u.quantity().dimension(), units);
         } else if (c instanceof HumanComfort h) {
             detail = "weighted r.m.s. acceleration, " + h.axisWeighting().symbol()
                     + (h.axisWeighting() == FrequencyWeighting.WK ? " (vertical)" : " (horizontal)") + ", up to \""
@@ -67,7 +76,8 @@ public final class CriterionText {
             detail = machine(m.machine()) + ", zone " + m.acceptable() + " accepted (" + zone(m.acceptable()) + ")";
         } else if (c instanceof EquipmentVibration e) {
             detail = curve(e.curve()) + " curve, "
-                    + DisplayUnits.format(e.curve().curve().at(e.curve().curve().lowFrequency()), Dimension.VELOCITY)
+                    + DisplayUnits.format(e.curve().curve().at(e.curve().curve().lowFrequency()), Dimension.VELOCITY,
+                            units)
                     + " r.m.s. in one-third-octave bands";
         } else {
             throw new IllegalStateException("bug: no words for " + c);
@@ -175,9 +185,9 @@ public final class CriterionText {
         return c.id().toUpperCase(Locale.ROOT);
     }
 
-    private static String limit(LimitCurve curve, Dimension d) {
+    private static String limit(LimitCurve curve, Dimension d, UnitSystem units) {
         if (curve.isFlat()) {
-            return "at most " + DisplayUnits.format(curve.at(curve.lowFrequency()), d);
+            return "at most " + DisplayUnits.format(curve.at(curve.lowFrequency()), d, units);
         }
         return "under a curve of " + curve.points().size() + " points from "
                 + QuantityFormat.number(curve.lowFrequency(), 4) + " to " + QuantityFormat.number(curve.highFrequency(), 4)

@@ -73,14 +73,26 @@ public final class DesignContent {
      * @return the report
      */
     public static ReportContent of(DesignResult r, ProjectIdentity identity, MonteCarloOutcome monteCarlo) {
-        ReportContent c = of(r, identity, monteCarlo.result());
+        return of(r, identity, monteCarlo, UnitSystem.SI);
+    }
+
+    /**
+     * @param r a design
+     * @param identity revision, date, engineer and client or site (each row only when given)
+     * @param monteCarlo a tolerance Monte Carlo of the design, when one was run
+     * @param units the unit system the report is shown in
+     * @return the report
+     */
+    public static ReportContent of(DesignResult r, ProjectIdentity identity, MonteCarloOutcome monteCarlo,
+            UnitSystem units) {
+        ReportContent c = of(r, identity, monteCarlo.result(), units);
         if (monteCarlo.notRun().isEmpty()) {
             return c;
         }
         List<ReportSection> sections = new ArrayList<>(c.sections());
         sections.add(new ReportSection(SectionId.MONTE_CARLO, "Tolerance Monte Carlo of the peak in band",
                 List.of(MonteCarloRows.notRun(monteCarlo.notRun().get()))));
-        return new ReportContent(c.name(), sections, c.warnings(), c.cautions());
+        return new ReportContent(c.name(), sections, c.warnings(), c.cautions(), c.comparison(), units);
     }
 
     /**
@@ -101,6 +113,18 @@ public final class DesignContent {
      * @return the report
      */
     public static ReportContent of(DesignResult r, ProjectIdentity identity, Optional<MonteCarloResult> monteCarlo) {
+        return of(r, identity, monteCarlo, UnitSystem.SI);
+    }
+
+    /**
+     * @param r a design
+     * @param identity revision, date, engineer and client or site (each row only when given)
+     * @param monteCarlo a tolerance Monte Carlo of the design, when one was run
+     * @param units the unit system the report is shown in (the warnings are worded in it)
+     * @return the report
+     */
+    public static ReportContent of(DesignResult r, ProjectIdentity identity, Optional<MonteCarloResult> monteCarlo,
+            UnitSystem units) {
         DesignContent c = new DesignContent(r);
         c.project(identity);
         c.structure();
@@ -114,9 +138,9 @@ public final class DesignContent {
         c.alternative();
         monteCarlo.ifPresent(c::monteCarlo);
         List<ReportContent.Note> warnings = r.warnings().stream()
-                .map(w -> new ReportContent.Note(w.code(), WarningText.of(w))).toList();
-        return AcceptanceContent.with(new ReportContent(r.study().name(), c.sections, warnings, Cautions.STANDARD),
-                r.acceptance());
+                .map(w -> new ReportContent.Note(w.code(), WarningText.of(w, units))).toList();
+        return AcceptanceContent.with(new ReportContent(r.study().name(), c.sections, warnings, Cautions.STANDARD,
+                Optional.empty(), units), r.acceptance());
     }
 
     private void project(ProjectIdentity identity) {

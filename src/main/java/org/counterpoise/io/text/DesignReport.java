@@ -42,9 +42,10 @@ public final class DesignReport {
         StringBuilder out = new StringBuilder();
         out.append("Counterpoise absorber design: ").append(content.name()).append('\n');
         for (ReportSection section : content.sections()) {
-            ReportTable.grid(section).ifPresentOrElse(g -> comparison(out, g), () -> section(out, section));
+            ReportTable.grid(section, content.units()).ifPresentOrElse(g -> comparison(out, g),
+                    () -> section(out, section, content.units()));
         }
-        content.comparison().ifPresent(c -> comparison(out, ReportTable.comparison(c)));
+        content.comparison().ifPresent(c -> comparison(out, ReportTable.comparison(c, content.units())));
         if (!content.warnings().isEmpty()) {
             out.append("\nWarnings\n");
             for (ReportContent.Note warning : content.warnings()) {
@@ -63,15 +64,16 @@ public final class DesignReport {
      * columns for values before and after).
      * @param out the report being written
      * @param section the section
+     * @param units the unit system its quantities are shown in
      */
-    static void section(StringBuilder out, ReportSection section) {
+    static void section(StringBuilder out, ReportSection section, UnitSystem units) {
         out.append('\n').append(section.title()).append('\n');
         // the "before" column is as wide as its longest value plus two spaces (16 at least), so
         // that a long phrase (a comfort reaction, a margin with its decibels) never runs into "after"
         int before = 16;
         for (ReportRow row : section.rows()) {
             if (row.shown() && row.shownValue() instanceof Pair p && p.kind() == PairKind.BEFORE_AFTER) {
-                before = Math.max(before, ValueText.inline(p.first()).length() + 2);
+                before = Math.max(before, ValueText.inline(p.first(), units).length() + 2);
             }
         }
         String pairLine = "  %-" + (LABEL - 2) + "s %-" + before + "s %s%n";
@@ -91,10 +93,10 @@ public final class DesignReport {
                     out.append(String.format(Locale.ROOT, pairLine, "", "before", "after"));
                     columns = true;
                 }
-                out.append(String.format(Locale.ROOT, pairLine, label, ValueText.inline(p.first()),
-                        ValueText.inline(p.second())));
+                out.append(String.format(Locale.ROOT, pairLine, label, ValueText.inline(p.first(), units),
+                        ValueText.inline(p.second(), units)));
             } else {
-                row(out, label, ValueText.inline(value));
+                row(out, label, ValueText.inline(value, units));
             }
         }
     }

@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.EnumSet;
 import java.util.List;
 import java.util.Locale;
+import java.util.Optional;
 import java.util.Set;
 import org.counterpoise.core.design.DesignDossier;
 import org.counterpoise.core.design.DesignResult;
@@ -54,9 +55,9 @@ public final class HardwareContent {
     public static ReportContent with(ReportContent content, Realisation r, DesignResult d) {
         List<ReportSection> sections = new ArrayList<>(content.sections().stream()
                 .filter(s -> !SECTIONS.contains(s.id())).toList());
-        sections.addAll(sections(r, d));
+        sections.addAll(sections(r, d, content.units()));
         List<ReportContent.Note> warnings = new ArrayList<>(content.warnings());
-        r.warnings().forEach(w -> warnings.add(new ReportContent.Note(w.code(), WarningText.of(w))));
+        r.warnings().forEach(w -> warnings.add(new ReportContent.Note(w.code(), WarningText.of(w, content.units()))));
         List<String> cautions = new ArrayList<>(content.cautions());
         int at = Math.max(0, cautions.size() - 1);
         for (HardwareCaution c : HardwareCaution.of(r.choice())) {
@@ -65,7 +66,8 @@ public final class HardwareContent {
                 cautions.add(at++, words);
             }
         }
-        ReportContent out = new ReportContent(content.name(), sections, warnings, cautions);
+        ReportContent out = new ReportContent(content.name(), sections, warnings, cautions, Optional.empty(),
+                content.units());
         return content.comparison().map(out::with).orElse(out);
     }
 
@@ -82,9 +84,19 @@ public final class HardwareContent {
     /**
      * @param r a realisation
      * @param d the design it realises
-     * @return its sections, in print order
+     * @return its sections, in print order, in SI
      */
     public static List<ReportSection> sections(Realisation r, DesignResult d) {
+        return sections(r, d, UnitSystem.SI);
+    }
+
+    /**
+     * @param r a realisation
+     * @param d the design it realises
+     * @param units the unit system the procedure's sentences state their figures in
+     * @return its sections, in print order
+     */
+    public static List<ReportSection> sections(Realisation r, DesignResult d, UnitSystem units) {
         List<ReportSection> out = new ArrayList<>();
         out.add(new ReportSection(SectionId.PART_LIST, "Part list", PartListRows.of(r, d)));
         List<ReportRow> checks = new ArrayList<>();
@@ -96,7 +108,7 @@ public final class HardwareContent {
                 : "Checks of the parts (demand against capacity): NOT ALL PASS", checks));
         out.add(new ReportSection(SectionId.PART_TOLERANCES, "Tolerances the parts must hold", tolerances(r.tolerances())));
         out.add(new ReportSection(SectionId.TRIM, "Trim on site", trim(r.trim())));
-        out.add(new ReportSection(SectionId.PROCEDURE, "Tuning and commissioning", ProcedureText.rows(r.procedure())));
+        out.add(new ReportSection(SectionId.PROCEDURE, "Tuning and commissioning", ProcedureText.rows(r.procedure(), units)));
         out.add(new ReportSection(SectionId.PREDICTED, "Predicted response to compare readings with (peak)",
                 predicted(r.predicted(), d.study().response().dimension())));
         return out;

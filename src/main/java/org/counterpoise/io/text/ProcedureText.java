@@ -28,13 +28,14 @@ public final class ProcedureText {
 
     /**
      * @param steps the procedure, in order
+     * @param units the unit system the sentences state their figures in
      * @return one row per step: label the step's number, value its record whose text is the sentence
      */
-    static List<ReportRow> rows(List<ProcedureStep> steps) {
+    static List<ReportRow> rows(List<ProcedureStep> steps, UnitSystem units) {
         List<ReportRow> rows = new ArrayList<>();
         for (int i = 0; i < steps.size(); i++) {
             ProcedureStep step = steps.get(i);
-            String sentence = sentence(step);
+            String sentence = sentence(step, units);
             List<Field> figures = new ArrayList<>();
             for (StepFigure f : step.figures()) {
                 figures.add(new Field(key(f.quantity()), label(f.quantity()), value(f)));
@@ -59,35 +60,44 @@ public final class ProcedureText {
 
     /**
      * @param step a step with its figures
-     * @return what the technician does, one sentence
+     * @return what the technician does, one sentence, in SI
      */
     public static String sentence(ProcedureStep step) {
+        return sentence(step, UnitSystem.SI);
+    }
+
+    /**
+     * @param step a step with its figures
+     * @param units the unit system its figures are stated in
+     * @return what the technician does, one sentence
+     */
+    public static String sentence(ProcedureStep step, UnitSystem units) {
         return switch (step.kind()) {
             case MEASURE_STRUCTURE -> "Measure the structure's natural frequency with the absorber locked or not yet"
-                    + " fitted (tap test, run-down or shaker)" + clause(step, "; the design expects ",
+                    + " fitted (tap test, run-down or shaker)" + clause(units, step, "; the design expects ",
                             StepQuantity.EXPECTED_STRUCTURE_FREQUENCY) + ".";
             case COMPUTE_ABSORBER_TARGET -> "Compute the absorber frequency to tune to: the measured structure"
-                    + " frequency times the tuning ratio" + clause(step, " ", StepQuantity.TUNING_RATIO)
-                    + clause(step, " (for the expected structure frequency: ", StepQuantity.ABSORBER_TARGET_FREQUENCY,
+                    + " frequency times the tuning ratio" + clause(units, step, " ", StepQuantity.TUNING_RATIO)
+                    + clause(units, step, " (for the expected structure frequency: ", StepQuantity.ABSORBER_TARGET_FREQUENCY,
                             ")") + ".";
             case TUNE_ABSORBER -> "Tune the absorber alone, clamped to a rigid base, by tap test or shaker to that"
-                    + " frequency" + clause(step, " (", StepQuantity.ABSORBER_TARGET_FREQUENCY, " for the expected"
-                            + " structure frequency)") + clause(step, " within +/-",
+                    + " frequency" + clause(units, step, " (", StepQuantity.ABSORBER_TARGET_FREQUENCY, " for the expected"
+                            + " structure frequency)") + clause(units, step, " within +/-",
                                     StepQuantity.ABSORBER_FREQUENCY_TOLERANCE) + ", adding or taking off trim plates.";
             case FIT -> "Fit the absorber with its retention and secondary catch, check"
-                    + clause(step, " the clearance of ", StepQuantity.CLEARANCE, " around the mass in every"
+                    + clause(units, step, " the clearance of ", StepQuantity.CLEARANCE, " around the mass in every"
                             + " direction,") + " that the stroke stops are in place and that every fixing is"
                     + " tightened and locked.";
             case MEASURE_RESPONSE -> "Run the machine and measure the structure's response at the running speed"
-                    + clause(step, " ", StepQuantity.RUNNING_FREQUENCY) + clause(step, " (the design predicts a peak"
+                    + clause(units, step, " ", StepQuantity.RUNNING_FREQUENCY) + clause(units, step, " (the design predicts a peak"
                             + " of ", StepQuantity.PREDICTED_RESPONSE, " there with the absorber)")
                     + " and over the whole band.";
             case COMPARE -> "Compare the readings with the predicted response table"
-                    + clause(step, "; over the band the peak with the absorber should not exceed ",
+                    + clause(units, step, "; over the band the peak with the absorber should not exceed ",
                             StepQuantity.PREDICTED_PEAK_IN_BAND) + ".";
             case ADJUST -> "If the readings are off, adjust by the trim step"
-                    + clause(step, " (one plate is ", StepQuantity.TRIM_PLATE_MASS, ";")
-                    + clause(step, " ", StepQuantity.PLATES_PER_PERCENT, " plates per percent of frequency)")
+                    + clause(units, step, " (one plate is ", StepQuantity.TRIM_PLATE_MASS, ";")
+                    + clause(units, step, " ", StepQuantity.PLATES_PER_PERCENT, " plates per percent of frequency)")
                     + ": add plates to lower the absorber frequency, take them off to raise it, then tune and measure"
                     + " again.";
         };
@@ -140,13 +150,14 @@ public final class ProcedureText {
                 : DesignContent.quantity(f.value(), f.dimension());
     }
 
-    private static String clause(ProcedureStep step, String before, StepQuantity q) {
-        return clause(step, before, q, "");
+    private static String clause(UnitSystem units, ProcedureStep step, String before, StepQuantity q) {
+        return clause(units, step, before, q, "");
     }
 
     /** The figure in words between its words before and after, or nothing when the step does not carry it. */
-    private static String clause(ProcedureStep step, String before, StepQuantity q, String after) {
+    private static String clause(UnitSystem units, ProcedureStep step, String before, StepQuantity q,
+            String after) {
         Optional<StepFigure> f = step.figures().stream().filter(x -> x.quantity() == q).findFirst();
-        return f.map(x -> before + ValueText.inline(value(x)) + after).orElse("");
+        return f.map(x -> before + ValueText.inline(value(x), units) + after).orElse("");
     }
 }

@@ -18,9 +18,24 @@ import org.counterpoise.io.text.ReportSection.SectionId;
  * @param warnings the design's warnings, in words, with their stable codes
  * @param cautions the standing cautions
  * @param comparison the comparison of design methods, when one was computed
+ * @param units the unit system every renderer shows the quantities in (the sections hold SI values;
+ *     the warnings were worded in this system when the content was built)
  */
 public record ReportContent(String name, List<ReportSection> sections, List<Note> warnings, List<String> cautions,
-        Optional<ReportComparison> comparison) {
+        Optional<ReportComparison> comparison, UnitSystem units) {
+
+    /**
+     * A report shown in SI.
+     * @param name the project name
+     * @param sections sections in print order
+     * @param warnings the warnings
+     * @param cautions the cautions
+     * @param comparison the comparison of methods, when one was computed
+     */
+    public ReportContent(String name, List<ReportSection> sections, List<Note> warnings, List<String> cautions,
+            Optional<ReportComparison> comparison) {
+        this(name, sections, warnings, cautions, comparison, UnitSystem.SI);
+    }
 
     /**
      * A report without a comparison of methods.
@@ -39,6 +54,16 @@ public record ReportContent(String name, List<ReportSection> sections, List<Note
         warnings = List.copyOf(warnings);
         cautions = List.copyOf(cautions);
         comparison = comparison == null ? Optional.empty() : comparison;
+        units = units == null ? UnitSystem.SI : units;
+    }
+
+    /**
+     * @param system the unit system to show the quantities in
+     * @return this report shown in it (warnings keep the words they were built with: build them in the
+     *     same system with the {@code DesignContent.of} that takes the unit system)
+     */
+    public ReportContent in(UnitSystem system) {
+        return new ReportContent(name, sections, warnings, cautions, comparison, system);
     }
 
     /**
@@ -46,7 +71,7 @@ public record ReportContent(String name, List<ReportSection> sections, List<Note
      * @return this report with it
      */
     public ReportContent with(ReportComparison c) {
-        return new ReportContent(name, sections, warnings, cautions, Optional.of(c));
+        return new ReportContent(name, sections, warnings, cautions, Optional.of(c), units);
     }
 
     /**
@@ -64,7 +89,7 @@ public record ReportContent(String name, List<ReportSection> sections, List<Note
             }
             shown.add(new ReportSection(s.id(), s.title(), rows));
         }
-        return new ReportContent(name, shown, warnings, cautions, comparison);
+        return new ReportContent(name, shown, warnings, cautions, comparison, units);
     }
 
     /**

@@ -50,7 +50,7 @@ public final class ReportTable {
             List<Row> rows = new ArrayList<>();
             for (ReportRow row : section.rows()) {
                 if (row.shown() && !leftOut.contains(row.key())) {
-                    ValueText.Cells cells = ValueText.cells(row.shownValue());
+                    ValueText.Cells cells = ValueText.cells(row.shownValue(), content.units());
                     rows.add(new Row(row.key(), ValueText.capitalised(row.labelWithSymbol()), cells.value(),
                             cells.unit(), cells.textual(), note(row)));
                 }
@@ -86,9 +86,18 @@ public final class ReportTable {
 
     /**
      * @param c the comparison
-     * @return its table: the tabled columns, the method cell marked "(recommended)" and "(chosen)"
+     * @return its table in SI
      */
     public static Grid comparison(ReportComparison c) {
+        return comparison(c, UnitSystem.SI);
+    }
+
+    /**
+     * @param c the comparison
+     * @param units the unit system its quantities are shown in
+     * @return its table: the tabled columns, the method cell marked "(recommended)" and "(chosen)"
+     */
+    public static Grid comparison(ReportComparison c, UnitSystem units) {
         List<String> headings = new ArrayList<>();
         for (ReportComparison.Column col : c.columns()) {
             if (col.tabled()) {
@@ -102,7 +111,7 @@ public final class ReportTable {
                 if (!c.columns().get(i).tabled()) {
                     continue;
                 }
-                String cell = ValueText.inline(line.cells().get(i));
+                String cell = ValueText.inline(line.cells().get(i), units);
                 if (c.columns().get(i).key() == ReportKey.METHOD) {
                     List<String> marks = new ArrayList<>();
                     if (line.recommended()) {
@@ -132,6 +141,15 @@ public final class ReportTable {
      * @return its grid, or empty when its rows are not such records
      */
     public static Optional<Grid> grid(ReportSection section) {
+        return grid(section, UnitSystem.SI);
+    }
+
+    /**
+     * @param section a section
+     * @param units the unit system its quantities are shown in
+     * @return its grid, or empty when its rows are not such records
+     */
+    public static Optional<Grid> grid(ReportSection section, UnitSystem units) {
         List<ReportRow> shown = section.rows().stream().filter(ReportRow::shown).toList();
         if (shown.isEmpty() || !shown.stream().allMatch(r -> r.value() instanceof ReportValue.Fields f
                 && f.text().isEmpty())) {
@@ -143,7 +161,7 @@ public final class ReportTable {
         List<List<String>> cells = new ArrayList<>();
         for (ReportRow row : shown) {
             cells.add(((ReportValue.Fields) row.value()).fields().stream().filter(f -> !f.label().isEmpty())
-                    .map(f -> ValueText.cell(f.value())).toList());
+                    .map(f -> ValueText.cell(f.value(), units)).toList());
         }
         List<Boolean> none = shown.stream().map(r -> false).toList();
         // the sources are sentences under the table, not a column: they are long

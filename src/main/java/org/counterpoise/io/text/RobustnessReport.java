@@ -32,15 +32,27 @@ public final class RobustnessReport {
      * @return the report
      */
     public static String render(DesignResult design, RobustnessResult r, AmplitudeConvention display) {
-        ReportContent content = RobustnessContent.of(design, r).shownIn(display);
+        return render(design, r, display, UnitSystem.SI);
+    }
+
+    /**
+     * @param design the design examined
+     * @param r its robustness study
+     * @param display the convention response values are stated in
+     * @param units the unit system quantities are shown in
+     * @return the report
+     */
+    public static String render(DesignResult design, RobustnessResult r, AmplitudeConvention display,
+            UnitSystem units) {
+        ReportContent content = RobustnessContent.of(design, r).shownIn(display).in(units);
         Dimension d = design.study().response().dimension();
         StringBuilder out = new StringBuilder();
         out.append("Counterpoise robustness study: ").append(content.name()).append('\n');
         for (ReportSection section : content.sections()) {
             if (section.id() == SectionId.MONTE_CARLO) {
-                sensitivity(out, r, d, display);
+                sensitivity(out, r, d, display, units);
             }
-            DesignReport.section(out, section);
+            DesignReport.section(out, section, units);
         }
         out.append("\nCautions\n");
         for (String c : content.cautions()) {
@@ -49,7 +61,8 @@ public final class RobustnessReport {
         return out.toString();
     }
 
-    private static void sensitivity(StringBuilder out, RobustnessResult r, Dimension d, AmplitudeConvention display) {
+    private static void sensitivity(StringBuilder out, RobustnessResult r, Dimension d, AmplitudeConvention display,
+            UnitSystem units) {
         out.append("\nSensitivity: worst response in band (" + display.label() + ") against structure frequency\n");
         out.append(String.format(Locale.ROOT, "  %-12s %-18s %s%n", "structure", "this design", "robust design"));
         SensitivityCurve a = r.structureCurve();
@@ -57,8 +70,8 @@ public final class RobustnessReport {
         double[] f = a.factors();
         for (int i = 0; i < f.length; i += 5) {
             out.append(String.format(Locale.ROOT, "  %-12s %-18s %s%n", ValueText.signedPercent(f[i], 3),
-                    DisplayUnits.format(display.ofHarmonic(a.peaks()[i]), d),
-                    DisplayUnits.format(display.ofHarmonic(b.peaks()[i]), d)));
+                    DisplayUnits.format(display.ofHarmonic(a.peaks()[i]), d, units),
+                    DisplayUnits.format(display.ofHarmonic(b.peaks()[i]), d, units)));
         }
     }
 }

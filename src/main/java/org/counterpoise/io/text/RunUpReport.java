@@ -20,9 +20,18 @@ public final class RunUpReport {
 
     /**
      * @param d the study
-     * @return the report, lines ending in '\n'
+     * @return the report in SI, lines ending in '\n'
      */
     public static String render(RunUpReportData d) {
+        return render(d, UnitSystem.SI);
+    }
+
+    /**
+     * @param d the study
+     * @param units the unit system the peaks are shown in
+     * @return the report, lines ending in '\n'
+     */
+    public static String render(RunUpReportData d, UnitSystem units) {
         StringBuilder out = new StringBuilder();
         String what = d.runDown() ? "run-down" : "run-up";
         out.append("Counterpoise ").append(what).append(" through resonance: ").append(d.name()).append('\n');
@@ -41,15 +50,15 @@ public final class RunUpReport {
         out.append('\n');
         header(out, "Peaks during the " + what);
         for (ResponseKind k : RunUpReportData.QUANTITIES) {
-            columns(out, label(k), transientPeak(d, d.comparison().withAbsorber(), k),
-                    transientPeak(d, d.comparison().withoutAbsorber(), k));
+            columns(out, label(k), transientPeak(d, d.comparison().withAbsorber(), k, Unit.REV_PER_MINUTE, units),
+                    transientPeak(d, d.comparison().withoutAbsorber(), k, Unit.REV_PER_MINUTE, units));
         }
 
         out.append('\n');
         header(out, "Steady state over the same speeds");
         for (ResponseKind k : RunUpReportData.QUANTITIES) {
-            columns(out, label(k), steadyPeak(d, d.comparison().steadyWithAbsorber(), k),
-                    steadyPeak(d, d.comparison().steadyWithoutAbsorber(), k));
+            columns(out, label(k), steadyPeak(d, d.comparison().steadyWithAbsorber(), k, Unit.REV_PER_MINUTE, units),
+                    steadyPeak(d, d.comparison().steadyWithoutAbsorber(), k, Unit.REV_PER_MINUTE, units));
         }
 
         out.append("\nNotes\n");
@@ -61,12 +70,27 @@ public final class RunUpReport {
         return out.toString();
     }
 
-    private static String transientPeak(RunUpReportData d, RunUpResult r, ResponseKind k) {
-        return transientPeak(d, r, k, Unit.REV_PER_MINUTE);
+    /**
+     * @param d the study
+     * @param r one run (with or without the absorber)
+     * @param k a reported quantity
+     * @param speedUnit the unit of the shaft speed
+     * @return "value at speed" in SI, or "-" when the run does not have the quantity
+     */
+    public static String transientPeak(RunUpReportData d, RunUpResult r, ResponseKind k, Unit speedUnit) {
+        return transientPeak(d, r, k, speedUnit, UnitSystem.SI);
     }
 
-    private static String steadyPeak(RunUpReportData d, Map<ResponseKind, ResponsePeak> peaks, ResponseKind k) {
-        return steadyPeak(d, peaks, k, Unit.REV_PER_MINUTE);
+    /**
+     * @param d the study
+     * @param peaks the steady-state peaks of one side
+     * @param k a reported quantity
+     * @param speedUnit the unit of the shaft speed
+     * @return "value at speed" in SI, "unbounded (undamped resonance)", or "-"
+     */
+    public static String steadyPeak(RunUpReportData d, Map<ResponseKind, ResponsePeak> peaks, ResponseKind k,
+            Unit speedUnit) {
+        return steadyPeak(d, peaks, k, speedUnit, UnitSystem.SI);
     }
 
     /**
@@ -74,10 +98,12 @@ public final class RunUpReport {
      * @param r one run (with or without the absorber)
      * @param k a reported quantity
      * @param speedUnit the unit of the shaft speed
+     * @param units the unit system the value is shown in
      * @return "value at speed", or "-" when the run does not have the quantity
      */
-    public static String transientPeak(RunUpReportData d, RunUpResult r, ResponseKind k, Unit speedUnit) {
-        return r.peak(k).map(p -> value(p.value(), k) + " at "
+    public static String transientPeak(RunUpReportData d, RunUpResult r, ResponseKind k, Unit speedUnit,
+            UnitSystem units) {
+        return r.peak(k).map(p -> DisplayUnits.format(p.value(), k.dimension(), units) + " at "
                 + QuantityFormat.format(d.shaftSpeed(p.speed()), speedUnit)).orElse("-");
     }
 
@@ -86,10 +112,11 @@ public final class RunUpReport {
      * @param peaks the steady-state peaks of one side
      * @param k a reported quantity
      * @param speedUnit the unit of the shaft speed
+     * @param units the unit system the value is shown in
      * @return "value at speed", "unbounded (undamped resonance)", or "-" when the side does not have it
      */
     public static String steadyPeak(RunUpReportData d, Map<ResponseKind, ResponsePeak> peaks, ResponseKind k,
-            Unit speedUnit) {
+            Unit speedUnit, UnitSystem units) {
         ResponsePeak p = peaks.get(k);
         if (p == null) {
             return "-";
@@ -97,11 +124,8 @@ public final class RunUpReport {
         if (p.unbounded()) {
             return "unbounded (undamped resonance)";
         }
-        return value(p.value(), k) + " at " + QuantityFormat.format(d.shaftSpeed(p.frequency()), speedUnit);
-    }
-
-    private static String value(double v, ResponseKind k) {
-        return DisplayUnits.format(v, k.dimension());
+        return DisplayUnits.format(p.value(), k.dimension(), units) + " at "
+                + QuantityFormat.format(d.shaftSpeed(p.frequency()), speedUnit);
     }
 
     /**

@@ -52,11 +52,20 @@ public final class ValueText {
 
     /**
      * @param v a value
-     * @return its table cells
+     * @return its table cells in SI
      */
     public static Cells cells(ReportValue v) {
+        return cells(v, UnitSystem.SI);
+    }
+
+    /**
+     * @param v a value
+     * @param system the unit system quantities are shown in
+     * @return its table cells
+     */
+    public static Cells cells(ReportValue v, UnitSystem system) {
         if (v instanceof Quantity q) {
-            Unit unit = DisplayUnits.of(q.dimension());
+            Unit unit = DisplayUnits.of(q.dimension(), system);
             return new Cells(QuantityFormat.number(unit.fromSi(q.si()), q.figures()), unit.symbol(), false);
         } else if (v instanceof Unbounded) {
             return new Cells("unbounded", "", true);
@@ -77,9 +86,9 @@ public final class ValueText {
         } else if (v instanceof PlusMinus p) {
             return new Cells(plusMinus(p), "", true);
         } else if (v instanceof Pair p) {
-            return pairCells(p);
+            return pairCells(p, system);
         } else if (v instanceof Series s) {
-            Unit unit = DisplayUnits.of(s.dimension());
+            Unit unit = DisplayUnits.of(s.dimension(), system);
             return new Cells(s.si().stream().map(x -> QuantityFormat.number(unit.fromSi(x), QuantityFormat.FIGURES))
                     .collect(Collectors.joining(" and ")), unit.symbol(), false);
         } else if (v instanceof Tolerance t) {
@@ -93,9 +102,9 @@ public final class ValueText {
         } else if (v instanceof Change c) {
             return new Cells(change(c, false), "", true);
         } else if (v instanceof PeakAt p) {
-            return cells(p.peak());
+            return cells(p.peak(), system);
         } else if (v instanceof Fields f) {
-            return new Cells(inline(f), "", true);
+            return new Cells(inline(f, system), "", true);
         }
         throw new IllegalStateException("bug: no table cells for " + v);
     }
@@ -106,9 +115,9 @@ public final class ValueText {
                 + (p.stated() ? "" : " (default: " + ToleranceRangeRows.DEFAULT_SOURCE + ")");
     }
 
-    private static Cells pairCells(Pair p) {
-        Cells a = cells(p.first());
-        Cells b = cells(p.second());
+    private static Cells pairCells(Pair p, UnitSystem system) {
+        Cells a = cells(p.first(), system);
+        Cells b = cells(p.second(), system);
         String unit = a.unit().isEmpty() ? b.unit() : a.unit();
         if (p.kind() == PairKind.RANGE) {
             return a.equals(b) ? a : new Cells(a.value() + " to " + b.value(), unit, false);
@@ -119,11 +128,20 @@ public final class ValueText {
 
     /**
      * @param v a value
-     * @return the value as one phrase of the text report, e.g. "23.50 Hz (1410 rpm)"
+     * @return the value as one phrase of the text report in SI, e.g. "23.50 Hz (1410 rpm)"
      */
     public static String inline(ReportValue v) {
+        return inline(v, UnitSystem.SI);
+    }
+
+    /**
+     * @param v a value
+     * @param system the unit system quantities are shown in
+     * @return the value as one phrase of the text report, e.g. "23.50 Hz (1410 rpm)"
+     */
+    public static String inline(ReportValue v, UnitSystem system) {
         if (v instanceof Quantity q) {
-            return quantity(q.si(), q.dimension(), q.figures()) + (q.dimension() == Dimension.FREQUENCY
+            return quantity(q.si(), q.dimension(), q.figures(), system) + (q.dimension() == Dimension.FREQUENCY
                     ? " (" + QuantityFormat.format(q.si(), Unit.REV_PER_MINUTE) + ")" : "");
         } else if (v instanceof Unbounded u) {
             return u.why().isEmpty() ? "unbounded" : "unbounded (" + u.why() + ")";
@@ -144,9 +162,9 @@ public final class ValueText {
         } else if (v instanceof PlusMinus p) {
             return plusMinus(p);
         } else if (v instanceof Pair p) {
-            return inlinePair(p);
+            return inlinePair(p, system);
         } else if (v instanceof Series s) {
-            return s.si().stream().map(x -> quantity(x, s.dimension(), QuantityFormat.FIGURES))
+            return s.si().stream().map(x -> quantity(x, s.dimension(), QuantityFormat.FIGURES, system))
                     .collect(Collectors.joining(" and "));
         } else if (v instanceof Tolerance t) {
             return tolerance(t);
@@ -159,11 +177,11 @@ public final class ValueText {
         } else if (v instanceof Change c) {
             return change(c, true);
         } else if (v instanceof PeakAt p) {
-            return p.peak() instanceof Quantity ? inline(p.peak()) + " at " + frequency(p.frequency())
-                    : inline(p.peak());
+            return p.peak() instanceof Quantity ? inline(p.peak(), system) + " at " + frequency(p.frequency())
+                    : inline(p.peak(), system);
         } else if (v instanceof Fields f) {
             return !f.text().isEmpty() ? f.text() : f.fields().stream().filter(x -> !x.label().isEmpty())
-                    .map(x -> x.label() + " " + cell(x.value())).collect(Collectors.joining(", "));
+                    .map(x -> x.label() + " " + cell(x.value(), system)).collect(Collectors.joining(", "));
         }
         throw new IllegalStateException("bug: no words for " + v);
     }
@@ -174,16 +192,25 @@ public final class ValueText {
      *     of a grid ({@link ReportTable#grid})
      */
     public static String cell(ReportValue v) {
-        Cells c = cells(v);
+        return cell(v, UnitSystem.SI);
+    }
+
+    /**
+     * @param v a value
+     * @param system the unit system quantities are shown in
+     * @return its table cell with the unit after the number
+     */
+    public static String cell(ReportValue v, UnitSystem system) {
+        Cells c = cells(v, system);
         return c.unit().isEmpty() ? c.value() : c.value() + " " + c.unit();
     }
 
-    private static String inlinePair(Pair p) {
+    private static String inlinePair(Pair p, UnitSystem system) {
         if (p.kind() == PairKind.RANGE && p.first() instanceof Quantity a && p.second() instanceof Quantity b) {
             if (a.equals(b)) {
-                return inline(a);
+                return inline(a, system);
             }
-            Unit unit = DisplayUnits.of(a.dimension());
+            Unit unit = DisplayUnits.of(a.dimension(), system);
             String range = QuantityFormat.number(unit.fromSi(a.si()), a.figures()) + " to "
                     + QuantityFormat.format(b.si(), unit);
             if (a.dimension() == Dimension.FREQUENCY) {
@@ -192,11 +219,11 @@ public final class ValueText {
             }
             return range;
         }
-        return inline(p.first()) + (p.kind() == PairKind.RANGE ? " to " : " / ") + inline(p.second());
+        return inline(p.first(), system) + (p.kind() == PairKind.RANGE ? " to " : " / ") + inline(p.second(), system);
     }
 
-    private static String quantity(double si, Dimension dimension, int figures) {
-        Unit unit = DisplayUnits.of(dimension);
+    private static String quantity(double si, Dimension dimension, int figures, UnitSystem system) {
+        Unit unit = DisplayUnits.of(dimension, system);
         String number = QuantityFormat.number(unit.fromSi(si), figures);
         return unit.symbol().isEmpty() ? number : number + " " + unit.symbol();
     }
@@ -264,8 +291,8 @@ public final class ValueText {
             return "no change needed";
         }
         return signedPercent(c.factor(), 3) + " " + c.what().word() + " (natural frequency "
-                + (withRpm ? frequency(c.naturalFrequency()) : DisplayUnits.format(c.naturalFrequency(),
-                        Dimension.FREQUENCY)) + ")";
+                + (withRpm ? frequency(c.naturalFrequency()) : QuantityFormat.format(c.naturalFrequency(),
+                        Unit.HERTZ)) + ")";
     }
 
     /**
@@ -273,7 +300,8 @@ public final class ValueText {
      * @return e.g. "23.50 Hz (1410 rpm)"
      */
     public static String frequency(double omega) {
-        return inline(new Quantity(omega, Dimension.FREQUENCY, QuantityFormat.FIGURES));
+        // Hz and rpm in both unit systems
+        return inline(new Quantity(omega, Dimension.FREQUENCY, QuantityFormat.FIGURES), UnitSystem.SI);
     }
 
     /**

@@ -8,7 +8,7 @@ import org.counterpoise.core.error.Warning;
 import org.counterpoise.core.realisation.HardwareChoice;
 import org.counterpoise.core.error.WarningParameter;
 import org.counterpoise.core.error.WarningParameter.PeakBand;
-import org.counterpoise.core.units.Unit;
+import org.counterpoise.core.units.Dimension;
 
 /**
  * The one place a {@link Warning} becomes English words. Every front end (text report, JSON,
@@ -22,9 +22,18 @@ public final class WarningText {
 
     /**
      * @param w the warning
-     * @return its sentence, never with NaN or Infinity (the core refuses non-finite values)
+     * @return its sentence in SI
      */
     public static String of(Warning w) {
+        return of(w, UnitSystem.SI);
+    }
+
+    /**
+     * @param w the warning
+     * @param units the unit system lengths are stated in
+     * @return its sentence, never with NaN or Infinity (the core refuses non-finite values)
+     */
+    public static String of(Warning w, UnitSystem units) {
         return switch (w.kind()) {
             case DAMPED_STRUCTURE -> String.format(Locale.ROOT, "The %s closed form assumes an undamped structure;"
                     + " with the structure's damping ratio of %.3g the tuning is close to, but not exactly, the"
@@ -84,22 +93,22 @@ public final class WarningText {
                     w.number(WarningParameter.PRACTICAL_DAMPING_RATIO));
             case RUN_UP_STROKE_LARGE -> String.format(Locale.ROOT, "The absorber stroke during run-up, %s (%s), is"
                     + " %.3g times the stroke in the band, %s: leave the clearance for it, or pass the start-up"
-                    + " resonance faster.", millimetres(w.number(WarningParameter.RUN_UP_STROKE)),
+                    + " resonance faster.", length(w.number(WarningParameter.RUN_UP_STROKE), units),
                     runUpBasis(w), w.number(WarningParameter.RUN_UP_STROKE) / w.number(WarningParameter.IN_BAND_STROKE),
-                    millimetres(w.number(WarningParameter.IN_BAND_STROKE)));
+                    length(w.number(WarningParameter.IN_BAND_STROKE), units));
             case RUN_UP_OVER_STROKE_LIMIT -> String.format(Locale.ROOT, "The absorber stroke during run-up, %s (%s),"
                     + " exceeds the stroke limit of %s: the absorber will strike its stops at start and stop.",
-                    millimetres(w.number(WarningParameter.RUN_UP_STROKE)), runUpBasis(w),
-                    millimetres(w.number(WarningParameter.STROKE_LIMIT)));
+                    length(w.number(WarningParameter.RUN_UP_STROKE), units), runUpBasis(w),
+                    length(w.number(WarningParameter.STROKE_LIMIT), units));
             case DAMPER_STROKE_OVER_CLEARANCE -> String.format(Locale.ROOT, "The damper sees a stroke of up to %s"
                     + " in service, more than the clearance of %s it is made to allow: widen the clearance and the"
-                    + " damper's stroke, or slow the run-up.", millimetres(w.number(WarningParameter.DAMPER_STROKE)),
-                    millimetres(w.number(WarningParameter.CLEARANCE)));
+                    + " damper's stroke, or slow the run-up.", length(w.number(WarningParameter.DAMPER_STROKE), units),
+                    length(w.number(WarningParameter.CLEARANCE), units));
             case EDDY_CURRENT_PLATE_THICK -> String.format(Locale.ROOT, "The eddy-current damper's plate, %s thick,"
                     + " is thicker than the skin depth of %s at the highest forcing frequency: the damping it gives"
                     + " falls short of the thin-plate formula; use a thinner plate and a larger pole area.",
-                    millimetres(w.number(WarningParameter.PLATE_THICKNESS)),
-                    millimetres(w.number(WarningParameter.SKIN_DEPTH)));
+                    length(w.number(WarningParameter.PLATE_THICKNESS), units),
+                    length(w.number(WarningParameter.SKIN_DEPTH), units));
             case MASS_TOLERANCE_TOO_LOOSE -> String.format(Locale.ROOT, "A mass tolerance of +/-%s alone moves the"
                     + " absorber's frequency by as much as its tolerance of +/-%s allows, leaving nothing for the"
                     + " spring rate: hold the mass closer, or tune the absorber on site with the trim plates.",
@@ -166,8 +175,8 @@ public final class WarningText {
         };
     }
 
-    private static String millimetres(double metres) {
-        return QuantityFormat.format(metres, Unit.MILLIMETRE);
+    private static String length(double metres, UnitSystem units) {
+        return DisplayUnits.format(metres, Dimension.LENGTH, units);
     }
 
     private static String over(PeakBand band) {

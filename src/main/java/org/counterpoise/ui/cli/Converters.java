@@ -4,9 +4,11 @@ import java.nio.file.InvalidPathException;
 import java.nio.file.Path;
 import java.time.LocalDate;
 import java.time.format.DateTimeParseException;
+import java.util.Locale;
 import java.util.regex.Pattern;
 import org.counterpoise.core.criteria.AmplitudeConvention;
 import org.counterpoise.io.PlainText;
+import org.counterpoise.io.text.UnitSystem;
 import picocli.CommandLine;
 import picocli.CommandLine.ITypeConverter;
 import picocli.CommandLine.TypeConversionException;
@@ -32,7 +34,18 @@ final class Converters {
                 .registerConverter(Integer.class, whole).registerConverter(int.class, whole)
                 .registerConverter(Long.class, wholeLong).registerConverter(long.class, wholeLong)
                 .registerConverter(LocalDate.class, Converters::date).registerConverter(Path.class, Converters::path)
-                .registerConverter(AmplitudeConvention.class, Converters::convention);
+                .registerConverter(AmplitudeConvention.class, Converters::convention)
+                .registerConverter(UnitSystem.class, Converters::unitSystem);
+    }
+
+    private static UnitSystem unitSystem(String text) {
+        String wanted = text.strip().toLowerCase(Locale.ROOT);
+        for (UnitSystem s : UnitSystem.values()) {
+            if (s.id().equals(wanted)) {
+                return s;
+            }
+        }
+        throw new TypeConversionException("must be si or us");
     }
 
     private static AmplitudeConvention convention(String text) {

@@ -17,6 +17,7 @@ import org.counterpoise.io.text.DesignContent;
 import org.counterpoise.io.text.DesignReport;
 import org.counterpoise.io.text.HardwareContent;
 import org.counterpoise.io.text.ReportContent;
+import org.counterpoise.io.text.UnitSystem;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
@@ -39,14 +40,19 @@ public final class DesignCommand implements Callable<Integer> {
     @Option(names = "--convention", paramLabel = "peak|rms|peak-to-peak", description = DisplayConvention.HELP)
     private AmplitudeConvention convention;
 
+    @Option(names = "--units", paramLabel = "si|us", description = DisplayUnitSystem.HELP)
+    private UnitSystem units;
+
     @Override
     public Integer call() {
         LoadedProject loaded = ProjectFiles.read(spec, file);
         DesignDossier dossier = DesignDossier.of(loaded.project().toStudy());
         DesignResult result = dossier.design();
         MethodComparison comparison = dossier.comparison(ProgressListener.NONE);
+        // the JSON is SI whatever the display: its keys name SI units, its words follow them
+        UnitSystem shown = json ? UnitSystem.SI : DisplayUnitSystem.of(units, loaded.project());
         ReportContent designed = DesignContent.of(result, json ? ProjectIdentity.EMPTY : loaded.project().identity(),
-                Optional.empty()).with(ComparisonContent.of(comparison, result.study()));
+                Optional.empty(), shown).with(ComparisonContent.of(comparison, result.study()));
         ReportContent content = HardwareContent.with(designed, dossier, loaded.project().hardware())
                 .shownIn(DisplayConvention.of(convention, loaded.project()));
         spec.commandLine().getOut().print(PlainText.forTerminal(json ? ResultJson.toJson(content)

@@ -12,6 +12,7 @@ import org.counterpoise.core.error.Checks;
 import org.counterpoise.core.progress.ProgressListener;
 import org.counterpoise.io.PlainText;
 import org.counterpoise.io.export.RobustnessJson;
+import org.counterpoise.io.text.UnitSystem;
 import org.counterpoise.io.project.LoadedProject;
 import org.counterpoise.io.text.RobustnessReport;
 import picocli.CommandLine.Command;
@@ -42,6 +43,9 @@ public final class RobustnessCommand implements Callable<Integer> {
     @Option(names = "--convention", paramLabel = "peak|rms|peak-to-peak", description = DisplayConvention.HELP)
     private AmplitudeConvention convention;
 
+    @Option(names = "--units", paramLabel = "si|us", description = DisplayUnitSystem.HELP)
+    private UnitSystem units;
+
     @Override
     public Integer call() {
         LoadedProject loaded = ProjectFiles.read(spec, file);
@@ -58,7 +62,7 @@ public final class RobustnessCommand implements Callable<Integer> {
         RobustnessResult r = dossier.robustness(ProgressListener.NONE);
         AmplitudeConvention display = DisplayConvention.of(convention, loaded.project());
         spec.commandLine().getOut().print(PlainText.forTerminal(json ? RobustnessJson.toJson(design, r, display)
-                : RobustnessReport.render(design, r, display)));
+                : RobustnessReport.render(design, r, display, DisplayUnitSystem.of(units, loaded.project()))));
         spec.commandLine().getOut().flush();
         return 0;
     }

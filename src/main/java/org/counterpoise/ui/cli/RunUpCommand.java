@@ -21,6 +21,7 @@ import org.counterpoise.io.sheet.SheetFiles;
 import org.counterpoise.io.sheet.SheetPanel;
 import org.counterpoise.io.text.QuantityFormat;
 import org.counterpoise.io.text.RunUpReport;
+import org.counterpoise.io.text.UnitSystem;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
@@ -64,6 +65,9 @@ public final class RunUpCommand implements Callable<Integer> {
     @Option(names = "--force", description = "replace chart files that already exist")
     private boolean force;
 
+    @Option(names = "--units", paramLabel = "si|us", description = DisplayUnitSystem.HELP)
+    private UnitSystem units;
+
     @Override
     public Integer call() {
         LoadedProject loaded = ProjectFiles.read(spec, file);
@@ -94,10 +98,11 @@ public final class RunUpCommand implements Callable<Integer> {
         }
         RunUpReportData data = result.data();
         var out = spec.commandLine().getOut();
-        out.print(json ? RunUpJson.toJson(data) : RunUpReport.render(data));
+        UnitSystem shown = DisplayUnitSystem.of(units, project);
+        out.print(json ? RunUpJson.toJson(data) : RunUpReport.render(data, shown));
         if (plotsDir != null) {
             Unit speedUnit = RunUpCharts.speedUnit(project.disturbance());
-            SheetPanel panel = RunUpPanel.of(result, speedUnit);
+            SheetPanel panel = RunUpPanel.of(result, speedUnit, shown);
             SheetFiles.Outputs outputs = new SheetFiles.Outputs(dossier).sparing(file, "the project file being read");
             for (int i = 0; i < SheetFiles.RUN_UP_CHARTS.size(); i++) {
                 outputs.chart(plotsDir, SheetFiles.RUN_UP_CHARTS.get(i), "--plots", panel.charts().get(i));

@@ -11,6 +11,7 @@ import org.counterpoise.io.PlainText;
 import org.counterpoise.io.project.LoadedProject;
 import org.counterpoise.io.sheet.RunUpPanel;
 import org.counterpoise.io.sheet.SheetFiles;
+import org.counterpoise.io.text.UnitSystem;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
@@ -51,6 +52,9 @@ public final class SheetCommand implements Callable<Integer> {
     @Option(names = "--convention", paramLabel = "peak|rms|peak-to-peak", description = DisplayConvention.HELP)
     private AmplitudeConvention convention;
 
+    @Option(names = "--units", paramLabel = "si|us", description = DisplayUnitSystem.HELP)
+    private UnitSystem units;
+
     @Override
     public Integer call() {
         if (revision != null && (revision.length() > 20 || !revision.equals(PlainText.escape(revision)))) {
@@ -67,10 +71,11 @@ public final class SheetCommand implements Callable<Integer> {
         // The sheet and every export are one set: all are written, or none and nothing changes.
         SheetFiles.Outputs outputs = new SheetFiles.Outputs(dossier)
                 .convention(DisplayConvention.of(convention, loaded.project()))
-                .hardware(loaded.project().hardware(), loaded.project().displayUnits())
+                .hardware(loaded.project().hardware(), DisplayUnitSystem.of(units, loaded.project()))
                 .sheet(output, loaded.project().notes(), issued, mark, "--output", identity)
                 .sparing(file, "the project file being read")
-                .panel(RunUpPanel.of(loaded.project(), dossier.design(), ProgressListener.NONE));
+                .panel(RunUpPanel.of(loaded.project().withDisplayUnits(DisplayUnitSystem.of(units, loaded.project())),
+                        dossier.design(), ProgressListener.NONE));
         if (csvDir != null) {
             outputs.data(csvDir, "--csv");
         }
