@@ -219,7 +219,7 @@ class HardwareReportTest {
                     text += row.value() + row.unit();
                 }
             }
-            for (String bad : List.of("NaN", "Infinity", "not available")) {
+            for (String bad : List.of("NaN", "Infinity", " not available\n", "not available /", "/ not available")) {
                 assertFalse(text.contains(bad), bad + " in " + text);
             }
         }

@@ -99,7 +99,8 @@ class DesignHardwareTest {
             for (ReportTable.Section s : ReportTable.of(c, Set.of())) {
                 s.rows().forEach(row -> all.append(row.value()).append(row.unit()).append('\n'));
             }
-            for (String bad : List.of("NaN", "Infinity", "not available")) {
+            for (String bad : List.of("NaN", "Infinity", "\nnot available", " not available\n", "not available /",
+                    "/ not available")) {
                 assertFalse(all.toString().contains(bad), preset + " " + choice.damperKind() + ": " + bad);
             }
             JsonObject hw = JsonParser.parseString(json).getAsJsonObject().getAsJsonObject("hardware");
