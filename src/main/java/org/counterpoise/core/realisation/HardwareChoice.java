@@ -27,6 +27,15 @@ public record HardwareChoice(SpringKind springKind, SpringMaterial springMateria
     /** The most helical springs in parallel the spring design proposes. */
     public static final int MOST_SPRINGS = 8;
 
+    /** The widest mass tolerance accepted, as a fraction (+/- 20 %: beyond it the trim cannot tune). */
+    public static final double LARGEST_MASS_TOLERANCE = 0.2;
+
+    /** The smallest trim step accepted, as a fraction of the absorber mass (0.01 %). */
+    public static final double SMALLEST_TRIM_STEP = 1e-4;
+
+    /** The largest trim step accepted, as a fraction of the absorber mass (20 %). */
+    public static final double LARGEST_TRIM_STEP = 0.2;
+
     /**
      * Helical springs of grade DH wire (the standard's grade for dynamic duty), a viscous dashpot,
      * 50 000 running hours, mass held to +/- 1 %, trim plates of 1 % of the mass (design choices).
@@ -44,8 +53,8 @@ public record HardwareChoice(SpringKind springKind, SpringMaterial springMateria
         Checks.present("hardware.elastomer", elastomer, "a dynamic-to-static ratio and loss factor");
         Checks.inRange("hardware.spring_count", springCount, 0, MOST_SPRINGS);
         Checks.inRange("hardware.service_hours", serviceHours, 1.0, 1e7);
-        Checks.inRange("hardware.mass_tolerance", massTolerance, 0.0, 0.2);
-        Checks.inRange("hardware.trim_step", trimStepFraction, 1e-4, 0.2);
+        Checks.inRange("hardware.mass_tolerance", massTolerance, 0.0, LARGEST_MASS_TOLERANCE);
+        Checks.inRange("hardware.trim_step", trimStepFraction, SMALLEST_TRIM_STEP, LARGEST_TRIM_STEP);
         boolean elastomerSpring = springKind == SpringKind.ELASTOMER;
         boolean elastomerLoss = damperKind == DamperKind.ELASTOMER_LOSS;
         if (elastomerSpring != elastomerLoss) {

@@ -24,8 +24,12 @@ public enum Dimension {
     RATIO(""),
     /** rad/s^2: how fast a speed changes (a run-up rate). */
     ANGULAR_ACCELERATION("rad/s^2"),
-    /** Pa: a stress (a spring wire's shear stress and its permissible value). */
-    STRESS("Pa");
+    /** Pa: a spring's shear stress, a wire's tensile strength. */
+    STRESS("Pa"),
+    /** T: the magnetic flux density across an eddy-current damper's gap. */
+    FLUX_DENSITY("T"),
+    /** s: a duration (an absorber's service life is stated in hours). */
+    TIME("s");
 
     private final String siSymbol;
 

@@ -40,6 +40,12 @@ public enum PhysicalRange {
      * slowest warm-up) to 10^5 rad/s^2 (about 10^6 rpm/s, far beyond a motor's direct-on-line start).
      */
     ANGULAR_ACCELERATION(Dimension.ANGULAR_ACCELERATION, 1e-4, 1e5),
+    /** From 1 Pa to 10^11 Pa (100 GPa, beyond any wire's tensile strength of about 2 to 3 GPa). */
+    STRESS(Dimension.STRESS, 1.0, 1e11),
+    /** From 1 uT (far below any magnet gap) to 100 T (beyond the strongest laboratory magnets). */
+    FLUX_DENSITY(Dimension.FLUX_DENSITY, 1e-6, 100),
+    /** From 1 s to 10^12 s (about 30 000 years, beyond any service life). */
+    TIME(Dimension.TIME, 1.0, 1e12),
     /** mu = m2/m1: below 10^-5 no absorber does anything measurable; above 10 it is no longer an add-on. */
     MASS_RATIO(Dimension.RATIO, 1e-5, 10),
     /** Order of the disturbing harmonic of the running speed: half-order whirl up to a blade-pass order of 1000. */

@@ -163,7 +163,7 @@ final class AcceptanceJson {
      * A choice from a list by its id: case, surrounding spaces and underscores for dashes do not
      * matter (as for every id in a project file).
      */
-    private static <E> E choice(JsonFields o, String key, E[] values, Function<E, String> id) {
+    static <E> E choice(JsonFields o, String key, E[] values, Function<E, String> id) {
         String text = o.text(key);
         String wanted = normal(text);
         return Arrays.stream(values).filter(v -> normal(id.apply(v)).equals(wanted)).findFirst()

@@ -22,10 +22,7 @@ import org.counterpoise.core.response.ResponseKind;
 import org.counterpoise.io.text.UnitSystem;
 
 /**
- * Longer than 400 lines because format 4 added two sections to a record that also migrates the
- * older target; the migration moves to its own class with the format-4 reader.
- *
- * <p>A project as the user entered it (units and measures kept as typed), and its conversion to the
+ * A project as the user entered it (units and measures kept as typed), and its conversion to the
  * core's SI {@link DesignStudy}. Problems are reported against the project-file field names.
  *
  * @param name project name
@@ -112,13 +109,13 @@ public record Project(String name, String notes, StructureInput structure, Distu
 
     /**
      * The project-file format version this build writes. Version 2 (issue 12) changed the meaning of
-     * an absent {@code absorber.method}: recommended ({@link DesignMethod#RECOMMENDED}) instead of
-     * equal-peak; version-1 files are read as they always meant ({@link #defaultMethod}). Version 3
-     * (issue 13) added the acceptance criterion, the rotor's other orders, the balance grade and the
-     * display convention, and replaced {@code absorber.target} by a criterion to meet; a target of
-     * an older file is read as the criterion it means ({@link #withTargetAsAcceptance}).
+     * an absent {@code absorber.method}; version 3 (issue 13) added the acceptance criterion, the
+     * rotor's other orders, the balance grade and the display convention, and replaced
+     * {@code absorber.target} by a criterion to meet; version 4 (issue 14) added the hardware choices,
+     * the display unit system, the document number, the revision history and the sign-off. How older
+     * files are read: {@link FormatMigration}.
      */
-    public static final int FORMAT_VERSION = 3;
+    public static final int FORMAT_VERSION = 4;
 
     /** The oldest project-file format version this build reads (and migrates on load). */
     public static final int OLDEST_FORMAT_VERSION = 1;
@@ -126,9 +123,10 @@ public record Project(String name, String notes, StructureInput structure, Distu
     /**
      * @param formatVersion the file's format version ({@link #OLDEST_FORMAT_VERSION} to {@link #FORMAT_VERSION})
      * @return the method a file of that version means when it gives no {@code absorber.method}
+     * @see FormatMigration#defaultMethod
      */
     public static DesignMethod defaultMethod(int formatVersion) {
-        return formatVersion < 2 ? DesignMethod.EQUAL_PEAK : DesignMethod.RECOMMENDED;
+        return FormatMigration.defaultMethod(formatVersion);
     }
 
     /** Response kinds a design may reduce (those of the structure). */
@@ -279,39 +277,19 @@ public record Project(String name, String notes, StructureInput structure, Distu
     }
 
     /**
-     * The project with a target of older files (and of a wizard that does not yet know criteria) in
-     * the form of format 3: the target becomes the criterion it means, a user limit on
-     * {@code absorber.response} stated as a peak, flat at the target, and the absorber is sized to
-     * meet it up to the same largest mass ratio. A criterion the project had is replaced, since the
-     * target is what the absorber was sized for. The one place this migration is written.
-     * @return this project in that form (itself when it has no target)
+     * @return this project with a target of an older file as the criterion it means
+     * @see FormatMigration#targetAsAcceptance
      */
     public Project withTargetAsAcceptance() {
-        QuantityInput target = absorber.target();
-        if (target == null) {
-            return this;
-        }
-        return withAbsorber(absorber.meetingAcceptance(absorber.maxMassRatio())).withAcceptance(
-                AcceptanceInput.StatedLimit.flat(absorber.response(), AmplitudeConvention.PEAK, target));
+        return FormatMigration.targetAsAcceptance(this);
     }
 
     /**
-     * The inverse of {@link #withTargetAsAcceptance} where it exists: the absorber sized for the
-     * target that the criterion to meet stands for, when the criterion says exactly what a target of
-     * format 2 said (absorber.meet_acceptance with a user limit of one peak value on
-     * {@code absorber.response}). For a front end that shows sizing by a target (the wizard's goal
-     * step, until it shows criteria); such a target is saved back as the same criterion.
-     * @return the absorber with that target, or empty
+     * @return the absorber with the target the criterion to meet stands for, or empty
+     * @see FormatMigration#absorberWithTarget
      */
     public Optional<AbsorberInput> absorberWithTarget() {
-        AbsorberInput a = absorber;
-        if (a.meetAcceptance() && acceptance instanceof AcceptanceInput.StatedLimit s && s.value() != null
-                && s.convention() == AmplitudeConvention.PEAK && s.quantity() == a.response()) {
-            return Optional.of(new AbsorberInput(OptionalDouble.empty(), null, a.method(), a.response(),
-                    a.hangsVertically(), a.strokeMargin(), s.value(), a.maxMassRatio(), a.strokeLimit(),
-                    a.fixedDampingRatio(), a.fixedTuningRatio()));
-        }
-        return Optional.empty();
+        return FormatMigration.absorberWithTarget(this);
     }
 
     /**

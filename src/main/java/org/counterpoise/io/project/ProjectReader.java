@@ -12,6 +12,7 @@ import org.counterpoise.core.design.DesignStudy;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.model.ExcitationKind;
 import org.counterpoise.core.model.Spectrum;
+import org.counterpoise.core.realisation.HardwareChoice;
 import org.counterpoise.core.robust.ToleranceRanges.FrequencyBasis;
 import org.counterpoise.core.robust.ToleranceRanges.Range;
 import org.counterpoise.core.units.SpectralDensityUnit;
@@ -22,6 +23,7 @@ import org.counterpoise.core.units.Unit;
 import org.counterpoise.io.PlainMessages;
 import org.counterpoise.io.PlainText;
 import org.counterpoise.io.TextFiles;
+import org.counterpoise.io.text.UnitSystem;
 
 /**
  * Reads a project file (format described in docs/project-file.md). Every problem becomes an
@@ -76,8 +78,7 @@ public final class ProjectReader {
         int version = formatVersion(top);
         String name = top.text("name", "Untitled");
         String notes = top.text("notes", "");
-        ProjectIdentity identity = new ProjectIdentity(top.text("revision", ""), top.text("engineer", ""),
-                top.text("client", ""), top.text("date", ""));
+        ProjectIdentity identity = IdentityJson.read(top);
         StructureInput structure = structure(top.object("structure"));
         DisturbanceInput disturbance = disturbance(top.object("disturbance"));
         AbsorberInput absorber = absorber(top.object("absorber"), version);
@@ -89,6 +90,9 @@ public final class ProjectReader {
         AmplitudeConvention convention = AmplitudeConvention.byId(conventionText).orElseThrow(() ->
                 new InvalidInputException(DISPLAY_CONVENTION, "\"" + PlainText.quote(conventionText) + "\"",
                         "one of " + String.join(", ", AmplitudeConvention.ids())));
+        HardwareChoice hardware = HardwareJson.read(top.optionalObject(HardwareJson.KEY));
+        UnitSystem units = top.has(DISPLAY_UNITS) ? AcceptanceJson.choice(top, DISPLAY_UNITS, UnitSystem.values(),
+                UnitSystem::id) : UnitSystem.SI;
         top.finish();
         if (acceptance != null && absorber.target() != null) {
             throw new InvalidInputException("absorber.target", "given with acceptance",
@@ -96,8 +100,11 @@ public final class ProjectReader {
         }
         // a target of a format-1 or 2 file becomes the criterion it means (the one migration rule)
         return new LoadedProject(new Project(name, notes, structure, disturbance, absorber, robustness,
-                identity, acceptance, convention).withTargetAsAcceptance(), unknown);
+                identity, acceptance, convention, hardware, units).withTargetAsAcceptance(), unknown);
     }
+
+    /** The top-level key of {@link Project#displayUnits()} (since format 4). */
+    static final String DISPLAY_UNITS = "display_units";
 
     /** The top-level key of {@link Project#displayConvention()}. */
     static final String DISPLAY_CONVENTION = "display_convention";
@@ -288,14 +295,14 @@ public final class ProjectReader {
     /**
      * @param a the absorber object
      * @param version the file's format version: an absent method means what that version said
-     *     ({@link Project#defaultMethod})
+     *     ({@link FormatMigration#defaultMethod})
      */
     private static AbsorberInput absorber(JsonFields a, int version) {
         OptionalDouble ratio = a.has("mass_ratio") ? OptionalDouble.of(
                 PhysicalRange.MASS_RATIO.check(a.pathOf("mass_ratio"), a.number("mass_ratio"), null))
                 : OptionalDouble.empty();
         QuantityInput mass = a.optionalQuantity("mass", Dimension.MASS);
-        String methodText = a.text("method", Project.defaultMethod(version).id());
+        String methodText = a.text("method", FormatMigration.defaultMethod(version).id());
         DesignMethod method = DesignMethod.byId(methodText).orElseThrow(() -> new InvalidInputException(
                 a.pathOf("method"), "\"" + PlainText.quote(methodText) + "\"", "one of " + DesignMethod.ids()));
         String responseText = a.text("response", Ids.of(ResponseKind.DISPLACEMENT));

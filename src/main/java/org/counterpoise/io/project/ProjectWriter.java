@@ -28,11 +28,7 @@ public final class ProjectWriter {
         if (!project.notes().isEmpty()) {
             root.addProperty("notes", project.notes());
         }
-        ProjectIdentity id = project.identity();
-        putText(root, "revision", id.revision());
-        putText(root, "engineer", id.engineer());
-        putText(root, "client", id.client());
-        putText(root, "date", id.date());
+        IdentityJson.write(root, project.identity());
         root.add("structure", structure(project.structure()));
         root.add("disturbance", disturbance(project.disturbance()));
         root.add("absorber", absorber(project.absorber()));
@@ -43,6 +39,8 @@ public final class ProjectWriter {
             root.add(AcceptanceJson.KEY, AcceptanceJson.write(project.acceptance()));
         }
         root.addProperty(ProjectReader.DISPLAY_CONVENTION, project.displayConvention().id());
+        root.addProperty(ProjectReader.DISPLAY_UNITS, project.displayUnits().id());
+        root.add(HardwareJson.KEY, HardwareJson.write(project.hardware(), project.displayUnits()));
         return new GsonBuilder().setPrettyPrinting().disableHtmlEscaping().create().toJson(root) + "\n";
     }
 
@@ -164,12 +162,6 @@ public final class ProjectWriter {
             o.add("tolerances", t);
         }
         return o;
-    }
-
-    private static void putText(JsonObject o, String key, String text) {
-        if (!text.isEmpty()) {
-            o.addProperty(key, text);
-        }
     }
 
     private static void putNumber(JsonObject o, String key, double v) {

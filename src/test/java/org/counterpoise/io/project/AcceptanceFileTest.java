@@ -144,7 +144,7 @@ class AcceptanceFileTest {
         "\"user-limit\"|\"strict\"|acceptance.criterion: \"strict\" is not allowed; one of user-limit, human-comfort, building, machine, equipment",
         "\"quantity\": \"velocity\"|\"quantity\": \"stroke\"|acceptance.quantity: \"stroke\" is not allowed; one of displacement, velocity, acceleration, relative-displacement, transmitted-force",
         "\"convention\": \"rms\"|\"convention\": \"average\"|acceptance.convention: \"average\" is not allowed; one of peak, rms, peak-to-peak",
-        "\"unit\": \"mm/s\"|\"unit\": \"mm\"|acceptance.limit.unit: \"mm\" is not allowed; allowed units: m/s, mm/s",
+        "\"unit\": \"mm/s\"|\"unit\": \"mm\"|acceptance.limit.unit: \"mm\" is not allowed; allowed units: m/s, mm/s, in/s",
         "\"value\": 2.8|\"value\": -2.8|acceptance.limit.value: -2.8 mm/s is not allowed; must be a finite number greater than 0",
         "\"limit\": {\"value\": 2.8, \"unit\": \"mm/s\"}|\"limit_curve\": []|acceptance.limit_curve: an empty list is not allowed; at least one point {\"frequency\": ..., \"limit\": ...}",
         "\"limit\": {\"value\": 2.8, \"unit\": \"mm/s\"}|\"limit_curve\": 3|acceptance.limit_curve: 3 is not allowed; must be a list [ {...}, {...} ]",
@@ -152,7 +152,7 @@ class AcceptanceFileTest {
         "\"display_convention\": \"rms\"|\"display_convention\": \"mean\"|display_convention: \"mean\" is not allowed; one of peak, rms, peak-to-peak",
         "\"mass_ratio\": 0.05|\"mass_ratio\": 0.05, \"meet_acceptance\": true|absorber: 2 sizes given is not allowed; give one of absorber.mass_ratio, absorber.mass and absorber.meet_acceptance",
         "\"mass_ratio\": 0.05|\"meet_acceptance\": \"yes\"|absorber.meet_acceptance: \"yes\" is not allowed; must be true or false",
-        "\"format_version\": 3|\"format_version\": 4|format_version: 4 is not allowed; this file was written by a newer Counterpoise; this version of Counterpoise reads format_version 1 to 3",
+        "\"format_version\": 3|\"format_version\": 5|format_version: 5 is not allowed; this file was written by a newer Counterpoise; this version of Counterpoise reads format_version 1 to 4",
     })
     void badValuesAreRefusedNamingTheFieldWhatIsWrongAndWhatIsAllowed(String from, String to, String message) {
         String text = BASE.replaceFirst(Pattern.quote(from), Matcher.quoteReplacement(to));
@@ -202,7 +202,7 @@ class AcceptanceFileTest {
         assertEquals(new AbsorberSizing.MeetCriterion(0.2), s.sizing());
 
         JsonObject written = JsonParser.parseString(ProjectWriter.toJson(p)).getAsJsonObject();
-        assertEquals(3, written.get("format_version").getAsInt());
+        assertEquals(Project.FORMAT_VERSION, written.get("format_version").getAsInt());
         JsonObject absorber = written.getAsJsonObject("absorber");
         assertFalse(absorber.has("target"), "format 3 has no absorber.target");
         assertTrue(absorber.get("meet_acceptance").getAsBoolean());

@@ -167,7 +167,7 @@ class OrdersFileTest {
         "\"kind\": \"force\"|\"kind\": \"wind\"|disturbance.orders[0].kind: \"wind\" is not allowed; one of force, unbalance, base-displacement, base-acceleration",
         "\"kind\": \"force\", \"amplitude\": {\"value\": 20, \"unit\": \"N\"}|\"kind\": \"force\"|disturbance.orders[0].amplitude: missing; expected an object { ... }",
         "\"kind\": \"force\", \"amplitude\": {\"value\": 20, \"unit\": \"N\"}|\"kind\": \"force\", \"balance_grade\": {}|disturbance.orders[0].balance_grade: given with kind \"force\" is not allowed; a balance grade gives an unbalance: use it with kind unbalance, or give disturbance.orders[0].amplitude",
-        "\"kind\": \"force\"|\"kind\": \"unbalance\"|disturbance.orders[0].amplitude.unit: \"N\" is not allowed; allowed units: kg*m, g*mm",
+        "\"kind\": \"force\"|\"kind\": \"unbalance\"|disturbance.orders[0].amplitude.unit: \"N\" is not allowed; allowed units: kg*m, g*mm, oz*in",
         "\"orders\": [|\"orders\": [3, |disturbance.orders[0]: 3 is not allowed; must be an object { ... }",
         "\"value\": 500, \"unit\": \"g*mm\"}|\"value\": 500, \"unit\": \"g*mm\"}, \"balance_grade\": {}|disturbance.balance_grade: given with disturbance.amplitude is not allowed; give either the unbalance (amplitude) or the balance grade it comes from, not both",
         "\"amplitude\": {\"value\": 500, \"unit\": \"g*mm\"}|\"balance_grade\": {\"grade\": {\"value\": 0, \"unit\": \"mm/s\"}, \"rotor_mass\": {\"value\": 40, \"unit\": \"kg\"}, \"max_speed\": {\"value\": 600, \"unit\": \"rpm\"}}|disturbance.balance_grade.grade.value: 0 mm/s is not allowed; must be a finite number greater than 0",

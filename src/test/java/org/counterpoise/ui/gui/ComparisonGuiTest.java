@@ -55,9 +55,10 @@ class ComparisonGuiTest {
         settled("first design");
         JTable table = onEdt(() -> (JTable) Edt.find(frame.getContentPane(), "result.comparison"));
         JTextArea line = onEdt(() -> (JTextArea) Edt.find(frame.getContentPane(), "result.recommendation"));
-        // the comparison is a tab of the result step of its own, beside the steady state and the run-up
+        // the comparison is a tab of the result step of its own, beside the steady state, the run-up and
+        // the hardware
         JTabbedPane views = onEdt(() -> (JTabbedPane) Edt.find(frame.getContentPane(), "result.views"));
-        assertEquals(3, onEdt(views::getTabCount));
+        assertEquals(4, onEdt(views::getTabCount));
         assertTrue(onEdt(() -> SwingUtilities.isDescendingFrom(table, views.getComponentAt(2))));
         assertTrue(onEdt(() -> !SwingUtilities.isDescendingFrom(line, views)), "the line beside the design is on"
                 + " every tab");

@@ -269,7 +269,7 @@ class FieldsAndLayoutGuiTest {
                 frame.validate();
                 return null;
             });
-            for (int step = 0; step < 6; step++) {
+            for (int step = 0; step < 7; step++) {
                 int index = step;
                 onEdt(() -> {
                     frame.showStep(index);
@@ -281,7 +281,7 @@ class FieldsAndLayoutGuiTest {
                         + ": " + unreachable);
             }
             onEdt(() -> {
-                frame.showStep(3);
+                frame.showStep(4);
                 return null;
             });
             JTextPane notes = (JTextPane) find("result.notes");

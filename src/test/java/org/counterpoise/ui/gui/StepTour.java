@@ -17,9 +17,12 @@ import org.counterpoise.ui.gui.wizard.WizardFrame;
  * for a person to look at (run it under Xvfb at several screen sizes and scalings):
  * {@code java -Dsun.java2d.uiScale=2 -cp target/counterpoise.jar:target/test-classes
  * org.counterpoise.ui.gui.StepTour target/tour [preset or project file]}; with
- * {@code -Dtour.runup=true} also the result step's Run-up tab ({@code step4-runup.png}), with
- * {@code -Dtour.comparison=true} its comparison of methods ({@code step4-comparison.png}); with
- * {@code -Dtour.criterion=MACHINE} (a family of the goal step's criterion list) that criterion first.
+ * {@code -Dtour.runup=true} also the result step's Run-up tab ({@code step5-runup.png}), with
+ * {@code -Dtour.comparison=true} its comparison of methods ({@code step5-comparison.png}); with
+ * {@code -Dtour.criterion=MACHINE} (a family of the goal step's criterion list) that criterion first;
+ * with {@code -Dtour.hardware=true} the result step's Hardware tab ({@code step5-hardware.png}); with
+ * {@code -Dtour.units=us} every value in US customary units; {@code -Dtour.details=true} also
+ * photographs the project details window ({@code details.png}).
  */
 public final class StepTour {
     private StepTour() {
@@ -64,25 +67,42 @@ public final class StepTour {
             Thread.sleep(1500);
             waitSettled(frame.get());
         }
+        if ("us".equals(System.getProperty("tour.units"))) {
+            SwingUtilities.invokeAndWait(() -> ((javax.swing.JComboBox<?>) find(frame.get().getContentPane(),
+                    "display.units")).setSelectedIndex(1));
+            Thread.sleep(1500);
+            waitSettled(frame.get());
+        }
         Rectangle screen = GraphicsEnvironment.getLocalGraphicsEnvironment().getDefaultScreenDevice()
                 .getDefaultConfiguration().getBounds();
-        for (int step = 0; step < 6; step++) {
+        if (Boolean.getBoolean("tour.details")) {
+            SwingUtilities.invokeAndWait(() -> frame.get().showProjectDetails());
+            Thread.sleep(1500);
+            ImageIO.write(new Robot().createScreenCapture(screen), "png", out.resolve("details.png").toFile());
+            SwingUtilities.invokeAndWait(() -> java.util.Arrays.stream(java.awt.Window.getWindows())
+                    .filter(w -> "project.dialog".equals(w.getName())).forEach(w -> w.setVisible(false)));
+        }
+        for (int step = 0; step < 7; step++) {
             int s = step;
             SwingUtilities.invokeAndWait(() -> frame.get().showStep(s));
-            Thread.sleep(step >= 3 ? 5000 : 2500);
+            Thread.sleep(step >= 4 ? 5000 : 2500);
             if (Boolean.getBoolean("tour.dump")) {
                 SwingUtilities.invokeAndWait(() -> dump(frame.get().getContentPane(), ""));
             }
             BufferedImage image = new Robot().createScreenCapture(screen);
             ImageIO.write(image, "png", out.resolve("step" + (step + 1) + ".png").toFile());
-            if (step == 3 && Boolean.getBoolean("tour.runup")) {
+            if (step == 4 && Boolean.getBoolean("tour.runup")) {
                 // the result step's Run-up tab (computed when shown)
-                photographTab(frame.get(), 1, Long.getLong("tour.runup.wait", 8000), out.resolve("step4-runup.png"));
+                photographTab(frame.get(), 1, Long.getLong("tour.runup.wait", 8000), out.resolve("step5-runup.png"));
             }
-            if (step == 3 && Boolean.getBoolean("tour.comparison")) {
+            if (step == 4 && Boolean.getBoolean("tour.hardware")) {
+                // the result step's realisation (computed after the design, in the background)
+                photographTab(frame.get(), 3, Long.getLong("tour.hardware.wait", 5000), out.resolve("step5-hardware.png"));
+            }
+            if (step == 4 && Boolean.getBoolean("tour.comparison")) {
                 // the result step's comparison of methods (computed with the design, in the background)
                 photographTab(frame.get(), 2, Long.getLong("tour.comparison.wait", 6000),
-                        out.resolve("step4-comparison.png"));
+                        out.resolve("step5-comparison.png"));
             }
         }
         SwingUtilities.invokeAndWait(() -> frame.get().dispose());

@@ -110,7 +110,7 @@ class WizardGuiTest {
         }
         assertTrue(rows.get(0)[0].endsWith(tables.stream().filter(t -> t.id() == SectionId.ABSORBER).findFirst()
                 .orElseThrow().title()), "the absorber to build comes first: " + rows.get(0)[0]);
-        String[] names = {"1-structure", "2-disturbance", "3-goal", "4-result", "5-robustness", "6-sheet"};
+        String[] names = {"1-structure", "2-disturbance", "3-goal", "4-hardware", "5-result", "6-robustness", "7-sheet"};
         for (int i = 0; i < names.length; i++) {
             int step = i;
             STEP.set("step " + step);
@@ -118,10 +118,10 @@ class WizardGuiTest {
                 frame.showStep(step);
                 return null;
             });
-            if (i == 4) {
+            if (i == 5) {
                 waitFor(() -> onEdtQuietly(() -> frame.robustnessSummary().contains("Worst case")), "robustness");
             }
-            if (i == 5) {
+            if (i == 6) {
                 waitFor(() -> onEdtQuietly(frame::sheetPreviewShown), "sheet preview");
             }
             screenshot(names[i]);
@@ -305,7 +305,7 @@ class WizardGuiTest {
                 onEdt(frame::statusText));
         assertEquals(null, onEdt(() -> frame.document().project().robustness().target()));
         onEdt(() -> {
-            frame.showStep(4);
+            frame.showStep(5);
             return null;
         });
         waitFor(() -> onEdtQuietly(() -> frame.settled() && frame.robustnessSummary().contains("Worst case")),
@@ -468,7 +468,7 @@ class WizardGuiTest {
         assertFalse(onEdt(() -> java.util.Arrays.stream(java.awt.Window.getWindows())
                 .anyMatch(w -> w instanceof javax.swing.JDialog && w.isShowing())), "no chart save dialog");
         // Every step: click in the middle of the page (a chart, a table or a field), then Ctrl+S.
-        for (int step = 0; step < 6; step++) {
+        for (int step = 0; step < 7; step++) {
             int index = step;
             Files.delete(file);
             onEdt(() -> {

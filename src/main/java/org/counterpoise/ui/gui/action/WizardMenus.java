@@ -1,6 +1,7 @@
 package org.counterpoise.ui.gui.action;
 
 import java.awt.event.KeyEvent;
+import java.util.List;
 import java.util.function.Consumer;
 import javax.swing.JFrame;
 import javax.swing.JMenu;
@@ -22,10 +23,11 @@ public final class WizardMenus {
      * @param details opens the project details
      * @param preset opens an invented scenario by its preset name
      * @param quit closes the window (asking about unsaved changes)
+     * @param unitSystems the View menu's choice of unit system, one item per system
      * @return the menu bar
      */
     public static JMenuBar build(JFrame frame, FileActions files, EditActions edits, Runnable details,
-            Consumer<String> preset, Runnable quit) {
+            Consumer<String> preset, Runnable quit, List<JMenuItem> unitSystems) {
         JMenuBar bar = new JMenuBar();
         JMenu fileMenu = new JMenu("File");
         fileMenu.setMnemonic('f');
@@ -54,6 +56,8 @@ public final class WizardMenus {
         view.setMnemonic('v');
         view.add(new JMenuItem(Actions.of("Light theme", KeyEvent.VK_L, null, e -> Themes.apply(false, frame))));
         view.add(new JMenuItem(Actions.of("Dark theme", KeyEvent.VK_D, null, e -> Themes.apply(true, frame))));
+        view.addSeparator();
+        unitSystems.forEach(view::add);
         JMenu help = new JMenu("Help");
         help.setMnemonic('h');
         help.add(new JMenuItem(Actions.of("About Counterpoise", KeyEvent.VK_A, null, e -> JOptionPane.showMessageDialog(

@@ -2,6 +2,7 @@ package org.counterpoise.ui.gui.document;
 
 import org.counterpoise.core.criteria.AmplitudeConvention;
 import org.counterpoise.core.design.DesignMethod;
+import org.counterpoise.core.realisation.HardwareChoice;
 import org.counterpoise.core.response.ResponseKind;
 import org.counterpoise.io.project.AbsorberInput;
 import org.counterpoise.io.project.AcceptanceInput;
@@ -12,6 +13,7 @@ import org.counterpoise.io.project.QuantityInput;
 import org.counterpoise.io.project.RobustnessInput;
 import org.counterpoise.io.project.StructureInput;
 import org.counterpoise.io.text.QuantityFormat;
+import org.counterpoise.io.text.UnitSystem;
 
 /**
  * The edits the wizard's views make, one per section of the project, and the rule that keeps a
@@ -112,6 +114,24 @@ public final class ProjectEdits {
      */
     public static Edit displayConvention(String key, AmplitudeConvention convention) {
         return new Edit(key, "display convention", p -> p.withDisplayConvention(convention));
+    }
+
+    /**
+     * @param key the field edited
+     * @param choice the hardware choices as now shown
+     * @return the edit
+     */
+    public static Edit hardware(String key, HardwareChoice choice) {
+        return new Edit(key, "hardware", p -> p.withHardware(choice));
+    }
+
+    /**
+     * @param key the control used
+     * @param system the unit system every value is shown in
+     * @return the edit
+     */
+    public static Edit displayUnits(String key, UnitSystem system) {
+        return new Edit(key, "unit system", p -> p.withDisplayUnits(system));
     }
 
     /**

@@ -49,14 +49,15 @@ final class DesignRun {
      * @param structure step 1
      * @param disturbance step 2
      * @param goal step 3
-     * @param result step 4
-     * @param robustness step 5
-     * @param sheet step 6
+     * @param hardware step 4
+     * @param result step 5
+     * @param robustness step 6
+     * @param sheet step 7
      */
-    record Steps(StructureStep structure, DisturbanceStep disturbance, GoalStep goal, ResultStep result,
-            RobustnessStep robustness, SheetStep sheet) {
+    record Steps(StructureStep structure, DisturbanceStep disturbance, GoalStep goal, HardwareStep hardware,
+            ResultStep result, RobustnessStep robustness, SheetStep sheet) {
         List<Step> all() {
-            return List.of(structure, disturbance, goal, result, robustness, sheet);
+            return List.of(structure, disturbance, goal, hardware, result, robustness, sheet);
         }
     }
 
@@ -81,6 +82,7 @@ final class DesignRun {
     /** Inputs changed (an edit, or text that is not a number yet): recompute after a pause. */
     void changed() {
         generation++;
+        steps.result().hardware().stale(); // the parts on screen are for the old inputs: gone at once
         if (tasks != null) {
             tasks.cancelStale(); // work for the old inputs stops now, not after the pause
         }
@@ -181,6 +183,7 @@ final class DesignRun {
             shownGeneration = gen;
             steps.result().designedFrom(p);
             steps.result().show(d.design(), d.curves());
+            steps.result().hardware().design(d, p.hardware());
             steps.sheet().show(d, p);
             if (steps.sheet().component().isShowing()) {
                 steps.sheet().shown();

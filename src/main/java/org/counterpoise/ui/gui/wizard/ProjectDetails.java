@@ -1,6 +1,7 @@
 package org.counterpoise.ui.gui.wizard;
 
 import java.awt.BorderLayout;
+import java.awt.Font;
 import java.awt.GridBagConstraints;
 import java.awt.GridBagLayout;
 import java.awt.Insets;
@@ -18,6 +19,8 @@ import javax.swing.text.JTextComponent;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.io.project.Project;
 import org.counterpoise.io.project.ProjectIdentity;
+import org.counterpoise.io.project.Revision;
+import org.counterpoise.io.project.SignOff;
 import org.counterpoise.ui.gui.Themes;
 import org.counterpoise.ui.gui.document.DesignDocument;
 import org.counterpoise.ui.gui.document.ProjectEdits;
@@ -29,12 +32,15 @@ import org.counterpoise.ui.gui.document.ProjectEdits;
 final class ProjectDetails extends JPanel {
     private final DesignDocument document;
     private final JTextField name = text("project.name", 28);
+    private final JTextField documentNumber = text("project.document_number", 16);
     private final JTextField revision = text("project.revision", 6);
     private final JTextField date = text("project.date", 10);
     private final JTextField engineer = text("project.engineer", 28);
     private final JTextField client = text("project.client", 28);
     private final JTextArea notes = new JTextArea(6, 40);
     private final JLabel dateProblem = new JLabel(" ");
+    private final RevisionHistoryTable history = new RevisionHistoryTable(this::listEdited);
+    private final SignOffForm signOff = new SignOffForm(this::edited);
     private boolean syncing;
     /** The component whose typing makes the edit being applied (never re-set while it notifies). */
     private String editing;
@@ -51,6 +57,7 @@ final class ProjectDetails extends JPanel {
         form.setBorder(BorderFactory.createEmptyBorder(10, 12, 10, 12));
         int row = 0;
         row = row(form, row, "Project name", 'n', name, "Printed as the title of the report and the sheet");
+        row = row(form, row, "Document number", 'u', documentNumber, "The sheet's document or drawing number");
         row = row(form, row, "Revision", 'r', revision, "Revision mark of this issue, e.g. B");
         row = row(form, row, "Date of issue", 'd', date, "YYYY-MM-DD; empty to print the day the sheet is made");
         GridBagConstraints mc = at(1, row++);
@@ -61,8 +68,20 @@ final class ProjectDetails extends JPanel {
         GridBagConstraints filler = at(0, row);
         filler.weighty = 1;
         form.add(new JLabel(), filler);
+        // the sheet's title block beside the project: its earlier issues and who signs this one
+        JPanel sheet = new JPanel(new BorderLayout(0, 6));
+        sheet.setBorder(BorderFactory.createEmptyBorder(10, 6, 10, 12));
+        JPanel historyPanel = new JPanel(new BorderLayout(0, 2));
+        historyPanel.add(heading("Revision history (oldest first)"), BorderLayout.NORTH);
+        historyPanel.add(history, BorderLayout.CENTER);
+        JPanel signOffPanel = new JPanel(new BorderLayout(0, 2));
+        signOffPanel.add(heading("Sign-off of this issue"), BorderLayout.NORTH);
+        signOffPanel.add(signOff, BorderLayout.CENTER);
+        sheet.add(historyPanel, BorderLayout.CENTER);
+        sheet.add(signOffPanel, BorderLayout.SOUTH);
         add(form, BorderLayout.CENTER);
-        for (JTextComponent c : List.of(name, revision, date, engineer, client, notes)) {
+        add(sheet, BorderLayout.EAST);
+        for (JTextComponent c : List.of(name, documentNumber, revision, date, engineer, client, notes)) {
             c.getDocument().addDocumentListener(new DocumentListener() {
                 @Override
                 public void insertUpdate(DocumentEvent e) {
@@ -80,6 +99,12 @@ final class ProjectDetails extends JPanel {
                 }
             });
         }
+    }
+
+    private static JLabel heading(String text) {
+        JLabel l = new JLabel(text);
+        l.setFont(l.getFont().deriveFont(Font.BOLD));
+        return l;
     }
 
     private static JTextField text(String id, int columns) {
@@ -120,9 +145,9 @@ final class ProjectDetails extends JPanel {
         if (syncing) {
             return;
         }
-        ProjectIdentity identity;
+        boolean dateOk = true;
         try {
-            identity = new ProjectIdentity(revision.getText(), engineer.getText(), client.getText(), date.getText());
+            ProjectIdentity.checkDate("date", date.getText().strip());
             dateProblem.setText(" ");
             date.putClientProperty("JComponent.outline", null);
         } catch (InvalidInputException e) {
@@ -130,7 +155,20 @@ final class ProjectDetails extends JPanel {
             dateProblem.setForeground(Themes.problemColour());
             dateProblem.setText("<html><div style='width:240pt'>" + escapeHtml(e.problem()) + "</div></html>");
             date.putClientProperty("JComponent.outline", "error");
-            return; // a half-typed date is kept on screen, not saved
+            dateOk = false;
+        }
+        ProjectIdentity identity;
+        try {
+            // each part says its own bad date where it is shown
+            List<Revision> revisions = history.revisions();
+            SignOff signatures = signOff.signOff();
+            if (!dateOk) {
+                return; // a half-typed date is kept on screen, not saved
+            }
+            identity = new ProjectIdentity(revision.getText(), engineer.getText(), client.getText(), date.getText(),
+                    documentNumber.getText(), revisions, signatures);
+        } catch (InvalidInputException e) {
+            return;
         }
         editing = key;
         try {
@@ -138,6 +176,13 @@ final class ProjectDetails extends JPanel {
         } finally {
             editing = null;
         }
+    }
+
+    /** A row added or removed, or a cell of the history edited: one undo step of its own. */
+    private void listEdited(String key) {
+        document.seal();
+        edited(key);
+        document.seal();
     }
 
     /** @param p the project to show (only what differs is touched) */
@@ -148,18 +193,21 @@ final class ProjectDetails extends JPanel {
     private void show(Project p, boolean all) {
         syncing = true;
         try {
-            for (JTextComponent c : List.of(name, notes, revision, engineer, client, date)) {
+            for (JTextComponent c : List.of(name, notes, documentNumber, revision, engineer, client, date)) {
                 if (all || !c.getName().equals(editing)) {
                     set(c, switch (c.getName()) {
                         case "project.name" -> p.name();
                         case "project.notes" -> p.notes();
                         case "project.revision" -> p.identity().revision();
+                        case "project.document_number" -> p.identity().documentNumber();
                         case "project.engineer" -> p.identity().engineer();
                         case "project.client" -> p.identity().client();
                         default -> all || " ".equals(dateProblem.getText()) ? p.identity().date() : c.getText();
                     });
                 }
             }
+            history.show(p.identity().history(), all);
+            signOff.show(p.identity().signOff(), all, editing);
         } finally {
             syncing = false;
         }

@@ -10,7 +10,6 @@ import javax.swing.text.SimpleAttributeSet;
 import javax.swing.text.StyleConstants;
 import javax.swing.text.StyledDocument;
 import java.awt.BorderLayout;
-import java.awt.Component;
 import java.awt.FlowLayout;
 import java.awt.GridLayout;
 import java.nio.file.Path;
@@ -30,7 +29,6 @@ import javax.swing.JTabbedPane;
 import javax.swing.JTable;
 import javax.swing.JTextPane;
 import javax.swing.JToggleButton;
-import javax.swing.table.DefaultTableCellRenderer;
 import javax.swing.table.DefaultTableModel;
 import org.counterpoise.core.criteria.AmplitudeConvention;
 import org.counterpoise.core.design.Cautions;
@@ -48,7 +46,6 @@ import org.counterpoise.io.text.DisplayUnits;
 import org.counterpoise.io.text.ReportContent;
 import org.counterpoise.io.text.ReportSection.SectionId;
 import org.counterpoise.io.text.ReportTable;
-import org.counterpoise.io.text.ValueText;
 import org.counterpoise.ui.gui.Themes;
 import org.counterpoise.ui.gui.field.QuantityField;
 import org.counterpoise.ui.gui.plot.ChartHost;
@@ -61,14 +58,7 @@ final class ResultStep extends Step {
     private static final List<SectionId> ORDER = List.of(SectionId.ABSORBER, SectionId.ACCEPTANCE, SectionId.RESPONSE,
             SectionId.RMS, SectionId.STROKE_AND_FORCES, SectionId.DESIGN, SectionId.TOLERANCE, SectionId.ALTERNATIVE,
             SectionId.STRUCTURE, SectionId.DISTURBANCE, SectionId.PROJECT, SectionId.MONTE_CARLO);
-    /** Each table row's source and caution, shown under the pointer on its label. */
-    private final List<String> rowNotes = new ArrayList<>();
-    private final DefaultTableModel table = new DefaultTableModel(new String[] {"Quantity", "Value", "Unit"}, 0) {
-        @Override
-        public boolean isCellEditable(int row, int column) {
-            return false;
-        }
-    };
+    private final ReportRowsTable rows = new ReportRowsTable("result.table");
     private final ChartHost responseChart = new ChartHost("chart.response");
     private final ChartHost strokeChart = new ChartHost("chart.stroke");
     private final JToggleButton logAxis = new JToggleButton("Log axis", true);
@@ -81,6 +71,7 @@ final class ResultStep extends Step {
     private final ComparisonPanel comparison = new ComparisonPanel();
     private final VerdictPanel verdict = new VerdictPanel();
     private final RunUpView runUp;
+    private final RealisationView hardware;
     private DesignResult result;
     private DesignCurves curves;
     private Project project;
@@ -89,16 +80,8 @@ final class ResultStep extends Step {
         this.tasks = tasks;
         this.messages = messages;
         this.runUp = new RunUpView(tasks);
-        JTable t = new JTable(table);
-        t.setName("result.table");
-        t.setRowHeight(t.getRowHeight() + 4);
-        t.getColumnModel().getColumn(0).setPreferredWidth(230);
-        t.getColumnModel().getColumn(1).setPreferredWidth(150);
-        t.getColumnModel().getColumn(2).setPreferredWidth(60);
-        // A cell too narrow for its text still shows it whole under the pointer.
-        t.setDefaultRenderer(Object.class, wholeUnderPointer(JLabel.LEFT));
-        t.getColumnModel().getColumn(0).setCellRenderer(labelWithNote());
-        t.getColumnModel().getColumn(1).setCellRenderer(wholeUnderPointer(JLabel.RIGHT));
+        this.hardware = new RealisationView(tasks);
+        JTable t = rows.table();
         notes.setName("result.notes");
         notes.setEditable(false);
         notes.setOpaque(false);
@@ -167,9 +150,11 @@ final class ResultStep extends Step {
         views.addTab("Steady state", right);
         views.addTab("Run-up", runUp.component());
         views.addTab("Comparison of methods", comparison.component());
+        views.addTab("Hardware", hardware.component());
         views.setMnemonicAt(0, 's');
         views.setMnemonicAt(1, 'u');
         views.setMnemonicAt(2, 'm');
+        views.setMnemonicAt(3, 'h');
         JSplitPane split = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, left, views);
         split.setResizeWeight(0.36);
         split.setBorder(null);
@@ -203,14 +188,14 @@ final class ResultStep extends Step {
     void show(DesignResult r, DesignCurves c) {
         result = r;
         runUp.design(r, r == null ? null : project);
-        table.setRowCount(0);
-        rowNotes.clear();
+        rows.clear();
         if (r == null || r.acceptance().isEmpty()) {
             verdict.none();
         } else {
             verdict.show(r.acceptance().get(), VerdictPanel.orderNames(r, project));
         }
         if (r == null) {
+            hardware.design(null, null);
             comparison.message("Fix the inputs to see the comparison of methods.");
             curves = null;
             writeNotes(List.of());
@@ -226,47 +211,9 @@ final class ResultStep extends Step {
             sections.removeIf(sec -> sec.id() == SectionId.RESPONSE);
         }
         sections.sort(Comparator.comparingInt(sec -> ORDER.indexOf(sec.id())));
-        rowNotes.clear();
-        for (ReportTable.Section section : sections) {
-            table.addRow(new Object[] {"\u2014 " + section.title(), "", ""});
-            rowNotes.add("");
-            for (ReportTable.Row row : section.rows()) {
-                table.addRow(new Object[] {row.label(), row.value(), ValueText.pretty(row.unit())});
-                rowNotes.add(row.note());
-            }
-        }
+        rows.show(sections);
         writeNotes(content.warnings().stream().map(ReportContent.Note::text).toList());
         redraw();
-    }
-
-    private static DefaultTableCellRenderer wholeUnderPointer(int alignment) {
-        DefaultTableCellRenderer r = new DefaultTableCellRenderer() {
-            @Override
-            public Component getTableCellRendererComponent(JTable table, Object value, boolean selected,
-                    boolean focus, int row, int column) {
-                JLabel l = (JLabel) super.getTableCellRendererComponent(table, value, selected, focus, row, column);
-                l.setToolTipText(value == null || value.toString().isEmpty() ? null : value.toString());
-                return l;
-            }
-        };
-        r.setHorizontalAlignment(alignment);
-        return r;
-    }
-
-    /** The label cell: under the pointer, the row's source and caution (or the whole label when it has none). */
-    private DefaultTableCellRenderer labelWithNote() {
-        return new DefaultTableCellRenderer() {
-            @Override
-            public Component getTableCellRendererComponent(JTable table, Object value, boolean selected,
-                    boolean focus, int row, int column) {
-                JLabel l = (JLabel) super.getTableCellRendererComponent(table, value, selected, focus, row, column);
-                int model = table.convertRowIndexToModel(row);
-                String note = model < rowNotes.size() ? rowNotes.get(model) : "";
-                String text = value == null ? "" : value.toString();
-                l.setToolTipText(!note.isEmpty() ? text + ": " + note : text.isEmpty() ? null : text);
-                return l;
-            }
-        };
     }
 
     /** Writes the design's warnings (first, in the problem colour) and the standing cautions, wrapped. */
@@ -376,7 +323,7 @@ final class ResultStep extends Step {
     }
 
     DefaultTableModel table() {
-        return table;
+        return rows.model();
     }
 
     /** @param p the project the next result shown is designed from (its run-up rate, order, speed unit) */
@@ -387,6 +334,11 @@ final class ResultStep extends Step {
     /** @return the run-up view, for tests */
     RunUpView runUp() {
         return runUp;
+    }
+
+    /** @return the hardware tab (sized after the design; see {@code DesignRun}) */
+    RealisationView hardware() {
+        return hardware;
     }
 
     /** @return the comparison of methods (computed after the design; see {@code DesignRun}) */

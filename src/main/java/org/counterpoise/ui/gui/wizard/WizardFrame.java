@@ -65,6 +65,7 @@ public final class WizardFrame extends JFrame {
     private final EditActions edits = new EditActions(document);
     private final ProjectDetails details = new ProjectDetails(document);
     private final ProjectDetailsDialog detailsDialog;
+    private final UnitSystemControl units = new UnitSystemControl(document);
     private int current;
 
     /** Builds the window with a new, untitled project. */
@@ -86,11 +87,12 @@ public final class WizardFrame extends JFrame {
         StructureStep structure = new StructureStep();
         DisturbanceStep disturbance = new DisturbanceStep();
         GoalStep goal = new GoalStep();
-        run = new DesignRun(document, new DesignRun.Steps(structure, disturbance, goal, result, robustness, sheet),
-                this::say, this::updateNavigation);
+        HardwareStep hardware = new HardwareStep();
+        DesignRun.Steps all = new DesignRun.Steps(structure, disturbance, goal, hardware, result, robustness, sheet);
+        run = new DesignRun(document, all, this::say, this::updateNavigation);
         holder[0] = run;
         run.use(tasks);
-        steps = List.of(structure, disturbance, goal, result, robustness, sheet);
+        steps = all.all();
         for (Step s : steps) {
             s.attach(document, () -> {
                 run.changed();
@@ -103,7 +105,8 @@ public final class WizardFrame extends JFrame {
         detailsDialog = new ProjectDetailsDialog(this, details, files, edits);
         setContentPane(layoutRoot());
         setJMenuBar(WizardMenus.build(this, files, edits, this::showDetails,
-                name -> files.whenDiscarded(() -> load(Presets.load(name), null)), this::closeRequested));
+                name -> files.whenDiscarded(() -> load(Presets.load(name), null)), this::closeRequested,
+                units.menuItems()));
         files.bind(getRootPane());
         edits.bind(getRootPane());
         goal.sizingContext(new GoalStep.SizingContext() {
@@ -154,6 +157,7 @@ public final class WizardFrame extends JFrame {
         header.setBorder(BorderFactory.createEmptyBorder(10, 14, 0, 10));
         header.add(projectName, BorderLayout.NORTH);
         header.add(project, BorderLayout.WEST);
+        header.add(units.component(), BorderLayout.SOUTH);
         JPanel west = new JPanel(new BorderLayout());
         west.add(header, BorderLayout.NORTH);
         west.add(stepList, BorderLayout.CENTER);
@@ -174,6 +178,7 @@ public final class WizardFrame extends JFrame {
         for (Step s : steps) {
             s.sync(change.project(), change.kind());
         }
+        units.show(change.project());
         if (reload) {
             details.load(change.project());
         } else {
@@ -334,6 +339,11 @@ public final class WizardFrame extends JFrame {
                 String.valueOf(t.getValueAt(i, 2))});
         }
         return out;
+    }
+
+    /** @return the result step's hardware tab (package tests) */
+    RealisationView hardwareView() {
+        return result.hardware();
     }
 
     /** @return true when there are unsaved changes */

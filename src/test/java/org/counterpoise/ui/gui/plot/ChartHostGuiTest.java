@@ -91,7 +91,7 @@ class ChartHostGuiTest {
         });
         waitFor(() -> onEdtQuietly(() -> wizard.settled() && wizard.shownResult() != null), "first design");
         // Visit every step so every chart has been shown (the goal step's mass-ratio chart included).
-        for (int step = 0; step < 6; step++) {
+        for (int step = 0; step < 7; step++) {
             int s = step;
             onEdt(() -> {
                 wizard.showStep(s);
@@ -218,7 +218,7 @@ class ChartHostGuiTest {
         });
         waitFor(() -> onEdtQuietly(() -> wizard.settled() && wizard.shownResult() != null), "first design");
         onEdt(() -> {
-            wizard.showStep(3);
+            wizard.showStep(4);
             return null;
         });
         String reading = onEdt(() -> wizard.readoutAt(14.0));
