@@ -69,7 +69,8 @@ final class ArrangementSketch {
             pen.box(massTop + i * PLATE, -MASS_HALF + 14, massTop + (i + 1) * PLATE, MASS_HALF - 14, SketchPen.THIN, true);
         }
         if (plates > 0) {
-            pen.label("trim", massTop + plates * PLATE + 7, -MASS_HALF + 34, LABEL - 1);
+            // beside the stack, on the side the far springs of an opposed pair leave free
+            pen.label("trim", massTop + plates * PLATE + 7, f.opposed() ? 0 : -MASS_HALF + 34, LABEL - 1);
         }
         stops(pen, springEnd, massTop, f.opposed() ? massTop + plates * PLATE + OPPOSED : 0);
         if (f.opposed()) {

@@ -26,16 +26,17 @@ import org.knowm.xchart.XYChart;
 
 /*
  * Longer than 400 lines because it is the one place that knows the sheet's page state (the
- * content stream, the current height, page breaks, the embedded font): every block (tables, the
- * comparison grid, charts, further pages) draws through it; what a further page holds is built
- * outside (SheetPanel, SheetPanels).
+ * content stream, the current height, page breaks): every block (tables, grids, the procedure,
+ * charts, further pages) draws through it; what draws on its own is outside (SheetType,
+ * TitleBlock, IdentityBlocks, ArrangementSketch, SheetPanels). The grids and the procedure are
+ * the next candidates to move out.
  */
 /**
  * Lays out a {@link SheetContent} and the design's charts on A4 pages with PDFBox: tables with
  * labels on the left, numbers right-aligned in one column and units in the next; the charts as
- * vector graphics through the pdfbox-graphics2d bridge; a header and a footer with the cautions
- * line and "page n of N" on every page. The text font is Liberation Sans, shipped inside PDFBox,
- * embedded as a subset so that Greek letters print.
+ * vector graphics through the pdfbox-graphics2d bridge; the revision history, the sign-off and
+ * the arrangement sketch; a title block with "page k of n" on every page. The type is
+ * {@link SheetType}'s.
  */
 public final class SheetWriter {
     /** Left and right margin, points (also the further pages' layout, {@link SheetPanels}). */

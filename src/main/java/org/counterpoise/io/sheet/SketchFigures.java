@@ -13,8 +13,12 @@ import org.counterpoise.core.realisation.SpringDesign;
 import org.counterpoise.core.realisation.SpringKind;
 import org.counterpoise.core.realisation.StepFigure;
 import org.counterpoise.core.realisation.TrimPlan;
+import org.counterpoise.core.units.Dimension;
+import org.counterpoise.core.units.Unit;
+import org.counterpoise.io.text.DisplayUnits;
 import org.counterpoise.io.text.QuantityFormat;
 import org.counterpoise.io.text.UnitSystem;
+import org.counterpoise.io.text.ValueText;
 
 /**
  * What the arrangement sketch draws, taken from the design and its hardware, with every dimension
@@ -40,11 +44,6 @@ public record SketchFigures(boolean vertical, SpringKind springKind, int springC
         DamperKind damperKind,
         String mass, int trimFitted, int trimTotal, String clearance, Optional<String> freeLength,
         Optional<String> installedLength, double freeOverInstalled, List<Legend> legend) {
-
-    /** Kilograms per pound: 1 lb = 0.453 592 37 kg exactly (international avoirdupois pound, 1959). */
-    private static final double KG_PER_POUND = 0.45359237;
-    /** 1 in = 25.4 mm exactly (international inch, 1959). */
-    private static final double METRE_PER_INCH = 0.0254;
 
     /**
      * One line of the legend.
@@ -124,29 +123,27 @@ public record SketchFigures(boolean vertical, SpringKind springKind, int springC
     /**
      * @param metres a length, m
      * @param units the display units
-     * @return it in mm or in
+     * @return it in the display unit of lengths (mm or in), three figures
      */
     static String length(double metres, UnitSystem units) {
-        return units == UnitSystem.US_CUSTOMARY ? QuantityFormat.number(metres / METRE_PER_INCH, 3) + " in"
-                : QuantityFormat.number(metres * 1e3, 3) + " mm";
+        return shown(metres, Dimension.LENGTH, units);
     }
 
     private static String mass(double kg, UnitSystem units) {
-        return units == UnitSystem.US_CUSTOMARY ? QuantityFormat.number(kg / KG_PER_POUND, 3) + " lb"
-                : QuantityFormat.number(kg, 3) + " kg";
+        return shown(kg, Dimension.MASS, units);
     }
 
     private static String rate(double newtonPerMetre, UnitSystem units) {
-        // lbf/in: 1 lbf = 4.448 221 615 260 5 N (pound-force from the pound and standard gravity)
-        return units == UnitSystem.US_CUSTOMARY
-                ? QuantityFormat.number(newtonPerMetre * METRE_PER_INCH / (KG_PER_POUND * 9.80665), 3) + " lbf/in"
-                : QuantityFormat.number(newtonPerMetre / 1e3, 3) + " N/mm";
+        return shown(newtonPerMetre, Dimension.STIFFNESS, units);
     }
 
     private static String damping(double newtonSecondPerMetre, UnitSystem units) {
-        return units == UnitSystem.US_CUSTOMARY
-                ? QuantityFormat.number(newtonSecondPerMetre * METRE_PER_INCH / (KG_PER_POUND * 9.80665), 3)
-                        + " lbf·s/in"
-                : QuantityFormat.number(newtonSecondPerMetre, 3) + " N·s/m";
+        return shown(newtonSecondPerMetre, Dimension.DAMPING_COEFFICIENT, units);
+    }
+
+    /** A value in the display unit of its dimension (the one table, {@link DisplayUnits}), three figures. */
+    private static String shown(double si, Dimension dimension, UnitSystem units) {
+        Unit unit = DisplayUnits.of(dimension, units);
+        return QuantityFormat.number(unit.fromSi(si), 3) + " " + ValueText.pretty(unit.symbol());
     }
 }
