@@ -18,6 +18,7 @@ import org.counterpoise.core.response.SystemResponse;
 import org.counterpoise.core.units.Dimension;
 import org.counterpoise.core.units.Unit;
 import org.counterpoise.io.text.DisplayUnits;
+import org.counterpoise.io.text.UnitSystem;
 import org.counterpoise.io.text.QuantityFormat;
 import org.counterpoise.io.text.ValueText;
 import org.knowm.xchart.AnnotationLine;
@@ -30,6 +31,10 @@ import org.knowm.xchart.style.AxesChartStyler;
 import org.knowm.xchart.style.Styler;
 import org.knowm.xchart.style.markers.SeriesMarkers;
 
+/*
+ * Longer than 400 lines because the unit-system forms of response and stroke sit beside the SI ones
+ * the sheet still calls; the SI forms go when every caller passes a system.
+ */
 /**
  * Builds the response and stroke charts of a design as XChart data, to be painted on any
  * Graphics2D: the wizard's panels, PNG and SVG files and the PDF sheet all use these, and every
@@ -107,8 +112,26 @@ public final class ChartFactory {
      */
     public static XYChart response(DesignResult r, DesignCurves curves, boolean logarithmic, ChartTheme theme,
             AmplitudeConvention convention, int width, int height) {
+        return response(r, curves, logarithmic, theme, convention, UnitSystem.SI, width, height);
+    }
+
+    /**
+     * As {@link #response(DesignResult, DesignCurves, boolean, ChartTheme, AmplitudeConvention, int, int)},
+     * with the response axis in a unit system's display unit (the frequency axis stays in Hz).
+     * @param r the design result
+     * @param curves its curves
+     * @param logarithmic true for a logarithmic response axis
+     * @param theme colours
+     * @param convention the amplitude convention the curves are stated in
+     * @param system the unit system of the response axis
+     * @param width pixels
+     * @param height pixels
+     * @return the chart
+     */
+    public static XYChart response(DesignResult r, DesignCurves curves, boolean logarithmic, ChartTheme theme,
+            AmplitudeConvention convention, UnitSystem system, int width, int height) {
         Dimension d = curves.response().dimension();
-        Unit unit = DisplayUnits.of(d);
+        Unit unit = DisplayUnits.of(d, system);
         XYChart chart = base(width, height, capitalised(curves.response().label()) + ", " + convention.label(), unit,
                 theme);
         double[] hz = ChartStyle.inUnit(curves.frequency(), Unit.HERTZ);
@@ -152,7 +175,24 @@ public final class ChartFactory {
      */
     public static XYChart stroke(DesignResult r, DesignCurves curves, boolean logarithmic, ChartTheme theme,
             int width, int height) {
-        Unit unit = DisplayUnits.of(Dimension.LENGTH);
+        return stroke(r, curves, logarithmic, theme, UnitSystem.SI, width, height);
+    }
+
+    /**
+     * As {@link #stroke(DesignResult, DesignCurves, boolean, ChartTheme, int, int)}, with the stroke axis
+     * in a unit system's display length (mm or in).
+     * @param r the design result
+     * @param curves its curves
+     * @param logarithmic true for a logarithmic axis
+     * @param theme colours
+     * @param system the unit system of the stroke axis
+     * @param width pixels
+     * @param height pixels
+     * @return the chart
+     */
+    public static XYChart stroke(DesignResult r, DesignCurves curves, boolean logarithmic, ChartTheme theme,
+            UnitSystem system, int width, int height) {
+        Unit unit = DisplayUnits.of(Dimension.LENGTH, system);
         XYChart chart = base(width, height, "Absorber stroke", unit, theme);
         double[] hz = ChartStyle.inUnit(curves.frequency(), Unit.HERTZ);
         double[] stroke = ChartStyle.inUnit(curves.stroke(), unit);
