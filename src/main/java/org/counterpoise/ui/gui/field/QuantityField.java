@@ -7,6 +7,7 @@ import java.awt.Dimension;
 import java.awt.FlowLayout;
 import java.awt.event.HierarchyBoundsAdapter;
 import java.awt.event.HierarchyEvent;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.function.BiConsumer;
@@ -26,6 +27,7 @@ import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.units.Unit;
 import org.counterpoise.io.project.QuantityInput;
 import org.counterpoise.io.text.TypedNumbers;
+import org.counterpoise.io.text.UnitSystem;
 import org.counterpoise.io.text.ValueText;
 import org.counterpoise.ui.gui.Themes;
 
@@ -56,6 +58,8 @@ public final class QuantityField extends JPanel {
     /** Counts values shown from a project (not typed), so remembered values of other forms can be forgotten. */
     private int shownValues;
     private boolean quiet;
+    /** The unit system whose units a standard list offers first (see {@link #unitSystem}). */
+    private UnitSystem system = UnitSystem.SI;
 
     /**
      * @param fieldId the project-file field this edits, e.g. "structure.mass"
@@ -137,17 +141,44 @@ public final class QuantityField extends JPanel {
         unitListener = listener;
     }
 
-    /** @param choices new units to offer (the first is selected; the number is not converted) */
+    /**
+     * @param choices new units to offer (the first is selected; the number is not converted); a
+     *     dimension's standard list (io.text.UnitChoices) is offered in the field's unit system
+     */
     public void setUnits(List<Unit> choices) {
         boolean wasQuiet = quiet;
         quiet = true;
         try {
-            units.setModel(new DefaultComboBoxModel<>(choices.toArray(new Unit[0])));
+            units.setModel(new DefaultComboBoxModel<>(SystemUnits.inSystem(choices, system).toArray(new Unit[0])));
         } finally {
             quiet = wasQuiet;
         }
         shownUnit = unit();
         units.setVisible(!choices.isEmpty() && !choices.get(0).symbol().isEmpty());
+    }
+
+    /**
+     * @param shown the unit system: a standard unit list offers its units first, an empty field selects
+     *     its display unit, a number keeps its unit (never reinterpreted); fires no change
+     */
+    public void unitSystem(UnitSystem shown) {
+        if (shown == system) {
+            return;
+        }
+        system = shown;
+        List<Unit> now = new ArrayList<>();
+        for (int i = 0; i < units.getItemCount(); i++) {
+            now.add(units.getItemAt(i));
+        }
+        List<Unit> offered = SystemUnits.inSystem(now, shown);
+        Unit kept = unit();
+        quietly(() -> {
+            units.setModel(new DefaultComboBoxModel<>(offered.toArray(new Unit[0])));
+            if (!text.getText().isBlank() && kept != null) {
+                units.setSelectedItem(kept);
+            }
+            shownUnit = unit();
+        });
     }
 
     /** @return the field id */

@@ -22,6 +22,7 @@ import org.counterpoise.core.realisation.SpringMaterial;
 import org.counterpoise.core.units.Dimension;
 import org.counterpoise.core.units.Unit;
 import org.counterpoise.io.project.Project;
+import org.counterpoise.io.text.DisplayUnits;
 import org.counterpoise.io.text.UnitChoices;
 import org.counterpoise.io.text.UnitSystem;
 import org.counterpoise.ui.gui.document.ProjectEdits;
@@ -45,7 +46,8 @@ final class HardwareStep extends Step {
     private final JComboBox<DamperKind> damper = new JComboBox<>();
     private final JComboBox<Conductor> conductor = new JComboBox<>(Conductor.values());
     private final QuantityField flux = new QuantityField("hardware.eddy_current.flux_density",
-            "Magnetic flux density across the gap, tesla (permanent-magnet gaps give about 0.3 to 1 T)", List.of());
+            "Magnetic flux density across the gap (permanent-magnet gaps give about 0.3 to 1 T)",
+            UnitChoices.of(Dimension.FLUX_DENSITY));
     private final QuantityField plate = new QuantityField("hardware.eddy_current.plate_thickness",
             "Thickness of the conducting plate that moves through the gap", UnitChoices.of(Dimension.LENGTH));
     private final QuantityField ratio = new QuantityField("hardware.elastomer.dynamic_to_static_ratio",
@@ -97,7 +99,7 @@ final class HardwareStep extends Step {
         form.row("Damping by", 'd', damper, "How the damping coefficient is realised");
         eddyLabels = List.of(
                 form.row("Plate", 'c', conductor, "Plate material and its conductivity at 20 \u00b0C"),
-                form.row("Flux density in the gap (T)", 'x', flux, "Tesla; the damper's pole area follows from it"),
+                form.row("Flux density in the gap", 'x', flux, "The damper's pole area follows from it"),
                 form.row("Plate thickness", 'k', plate, "The conducting plate's thickness"));
         form.heading("Workshop and site");
         form.row("Service life (running hours)", 'h', hours, "Hours the spring must last under the forcing");
@@ -190,7 +192,8 @@ final class HardwareStep extends Step {
     HardwareChoice choice() {
         SpringKind kind = (SpringKind) spring.getSelectedItem();
         DamperKind d = kind == SpringKind.ELASTOMER ? DamperKind.ELASTOMER_LOSS : helicalDamper;
-        EddyCurrentChoice eddy = new EddyCurrentChoice((Conductor) conductor.getSelectedItem(), flux.number(),
+        EddyCurrentChoice eddy = new EddyCurrentChoice((Conductor) conductor.getSelectedItem(),
+                flux.unit().toSi(flux.number()),
                 inRange(plate, EddyCurrentChoice.THINNEST_PLATE, EddyCurrentChoice.THICKEST_PLATE));
         ElastomerChoice elastomer = new ElastomerChoice(ratio.number(), loss.number());
         return new HardwareChoice(kind, (SpringMaterial) material.getSelectedItem(), (Integer) count.getSelectedItem(),
@@ -237,7 +240,7 @@ final class HardwareStep extends Step {
         } finally {
             rebuilding = false;
         }
-        showValue(flux, h.eddyCurrent().fluxDensity(), null);
+        showInUnit(flux, h.eddyCurrent().fluxDensity(), displayed(Dimension.FLUX_DENSITY, p.displayUnits()));
         showInUnit(plate, h.eddyCurrent().plateThickness(), displayed(Dimension.LENGTH, p.displayUnits()));
         showValue(ratio, h.elastomer().dynamicToStaticRatio(), Unit.RATIO);
         showValue(loss, h.elastomer().compoundLossFactor(), Unit.RATIO);
@@ -257,7 +260,7 @@ final class HardwareStep extends Step {
 
     /** @return the unit a new value of the dimension is shown in, in the project's unit system */
     private static Unit displayed(Dimension dimension, UnitSystem system) {
-        return UnitChoices.of(dimension).get(0);
+        return DisplayUnits.of(dimension, system);
     }
 
     @Override

@@ -46,6 +46,7 @@ import org.counterpoise.io.text.DisplayUnits;
 import org.counterpoise.io.text.ReportContent;
 import org.counterpoise.io.text.ReportSection.SectionId;
 import org.counterpoise.io.text.ReportTable;
+import org.counterpoise.io.text.UnitSystem;
 import org.counterpoise.ui.gui.Themes;
 import org.counterpoise.ui.gui.field.QuantityField;
 import org.counterpoise.ui.gui.plot.ChartHost;
@@ -251,8 +252,9 @@ final class ResultStep extends Step {
         boolean log = logAxis.isSelected();
         // in the project's display convention (axis title and values), with the criterion's limit line
         AmplitudeConvention shown = project == null ? AmplitudeConvention.PEAK : project.displayConvention();
-        responseChart.show(theme -> ChartFactory.response(r, c, log, theme, shown, 640, 300));
-        strokeChart.show(theme -> ChartFactory.stroke(r, c, false, theme, 640, 300));
+        UnitSystem system = project == null ? UnitSystem.SI : project.displayUnits();
+        responseChart.show(theme -> ChartFactory.response(r, c, log, theme, shown, system, 640, 300));
+        strokeChart.show(theme -> ChartFactory.stroke(r, c, false, theme, system, 640, 300));
     }
 
     /** Shows the exact values at a frequency (Hz) under the pointer. */
@@ -269,10 +271,11 @@ final class ResultStep extends Step {
         ResponseKind k = study.response();
         // every response value says its convention (the project's display convention)
         AmplitudeConvention shown = project == null ? AmplitudeConvention.PEAK : project.displayConvention();
+        UnitSystem system = project == null ? UnitSystem.SI : project.displayUnits();
         readout.setText(String.format(Locale.ROOT, "At %.4g Hz (%s):  without %s,  with %s,  stroke %s", hz,
-                shown.label(), pretty(DisplayUnits.format(shown.ofHarmonic(bare.amplitudeAt(k, w)), k.dimension())),
-                pretty(DisplayUnits.format(shown.ofHarmonic(fitted.amplitudeAt(k, w)), k.dimension())),
-                DisplayUnits.format(shown.ofHarmonic(fitted.amplitudeAt(ResponseKind.STROKE, w)), LENGTH)));
+                shown.label(), pretty(DisplayUnits.format(shown.ofHarmonic(bare.amplitudeAt(k, w)), k.dimension(), system)),
+                pretty(DisplayUnits.format(shown.ofHarmonic(fitted.amplitudeAt(k, w)), k.dimension(), system)),
+                DisplayUnits.format(shown.ofHarmonic(fitted.amplitudeAt(ResponseKind.STROKE, w)), LENGTH, system)));
     }
 
     String readout() {

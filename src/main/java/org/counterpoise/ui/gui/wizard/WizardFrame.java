@@ -2,6 +2,8 @@ package org.counterpoise.ui.gui.wizard;
 
 import java.awt.BorderLayout;
 import java.awt.CardLayout;
+import java.awt.Component;
+import java.awt.Container;
 import java.awt.Dimension;
 import java.awt.FlowLayout;
 import java.awt.Font;
@@ -11,6 +13,7 @@ import java.awt.event.WindowEvent;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.function.Consumer;
 import javax.swing.Action;
 import javax.swing.BorderFactory;
 import javax.swing.JButton;
@@ -24,6 +27,7 @@ import org.counterpoise.core.model.Structure;
 import org.counterpoise.io.preset.Presets;
 import org.counterpoise.io.project.LoadedProject;
 import org.counterpoise.io.project.Project;
+import org.counterpoise.io.text.UnitSystem;
 import org.counterpoise.ui.gui.Themes;
 import org.counterpoise.ui.gui.action.Actions;
 import org.counterpoise.ui.gui.action.EditActions;
@@ -31,6 +35,7 @@ import org.counterpoise.ui.gui.action.FileActions;
 import org.counterpoise.ui.gui.action.WizardMenus;
 import org.counterpoise.ui.gui.document.DesignDocument;
 import org.counterpoise.ui.gui.document.DocumentChange;
+import org.counterpoise.ui.gui.field.QuantityField;
 import org.counterpoise.ui.gui.field.ScrollingPage;
 import org.counterpoise.ui.gui.session.WindowPlacement;
 import org.counterpoise.ui.gui.task.TaskBar;
@@ -67,6 +72,7 @@ public final class WizardFrame extends JFrame {
     private final ProjectDetailsDialog detailsDialog;
     private final UnitSystemControl units = new UnitSystemControl(document);
     private int current;
+    private UnitSystem shownSystem = UnitSystem.SI;
 
     /** Builds the window with a new, untitled project. */
     public WizardFrame() {
@@ -179,6 +185,7 @@ public final class WizardFrame extends JFrame {
             s.sync(change.project(), change.kind());
         }
         units.show(change.project());
+        showUnitSystem(change.project().displayUnits());
         if (reload) {
             details.load(change.project());
         } else {
@@ -196,6 +203,25 @@ public final class WizardFrame extends JFrame {
                 run.recompute();
             } else {
                 run.changed();
+            }
+        }
+    }
+
+    /** Every quantity field of every step offers the system's units first (a number keeps its unit). */
+    private void showUnitSystem(UnitSystem system) {
+        if (system == shownSystem) {
+            return;
+        }
+        shownSystem = system;
+        forEachField(center, f -> f.unitSystem(system));
+    }
+
+    private static void forEachField(Container root, Consumer<QuantityField> action) {
+        for (Component c : root.getComponents()) {
+            if (c instanceof QuantityField f) {
+                action.accept(f);
+            } else if (c instanceof Container sub) {
+                forEachField(sub, action);
             }
         }
     }

@@ -20,6 +20,13 @@ import net.jqwik.api.constraints.Size;
 import net.jqwik.api.statistics.Statistics;
 import net.jqwik.api.statistics.StatisticsReport;
 import org.counterpoise.core.design.DesignMethod;
+import org.counterpoise.core.realisation.Conductor;
+import org.counterpoise.core.realisation.DamperKind;
+import org.counterpoise.core.realisation.EddyCurrentChoice;
+import org.counterpoise.core.realisation.ElastomerChoice;
+import org.counterpoise.core.realisation.HardwareChoice;
+import org.counterpoise.core.realisation.SpringKind;
+import org.counterpoise.core.realisation.SpringMaterial;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.model.ExcitationKind;
 import org.counterpoise.core.response.ResponseKind;
@@ -32,8 +39,12 @@ import org.counterpoise.io.project.ProjectIdentity;
 import org.counterpoise.io.project.ProjectReader;
 import org.counterpoise.io.project.ProjectWriter;
 import org.counterpoise.io.project.QuantityInput;
+import org.counterpoise.io.project.Revision;
 import org.counterpoise.io.project.RobustnessInput;
+import org.counterpoise.io.project.SignOff;
+import org.counterpoise.io.project.Signature;
 import org.counterpoise.io.project.StructureInput;
+import org.counterpoise.io.text.UnitSystem;
 import org.counterpoise.ui.cli.Cli;
 import org.counterpoise.ui.gui.action.FileActions;
 
@@ -116,7 +127,8 @@ class DesignDocumentPropertyTest {
 
     @Provide
     Arbitrary<List<Edit>> edits() {
-        return Arbitraries.oneOf(structure(), disturbance(), spectrum(), absorber(), robustness(), identity()).list();
+        return Arbitraries.oneOf(structure(), disturbance(), spectrum(), absorber(), robustness(), identity(),
+                hardware(), units()).list();
     }
 
     /**
@@ -249,7 +261,34 @@ class DesignDocumentPropertyTest {
         Arbitrary<String> text = Arbitraries.oneOf(Arbitraries.just(""), Arbitraries.strings().ofMaxLength(30),
                 Arbitraries.of("Bj\u00f8rk \"quoted\" \\ slash", "line one\nline two", "\u00e9t\u00e9 \u2013 site 4"));
         Arbitrary<String> date = Arbitraries.of("", "2026-12-03", "2024-02-29");
-        return Combinators.combine(text, text, text, text, date).as((name, notes, eng, client, d) ->
-                ProjectEdits.identity("project.name", name.strip(), notes, new ProjectIdentity("B", eng, client, d)));
+        Arbitrary<List<Revision>> history = Combinators.combine(text, date, text).as((what, d, by) ->
+                new Revision("A", d, what, by)).list().ofMaxSize(3);
+        Arbitrary<SignOff> signOff = Combinators.combine(text, date, text).as((a, d, b) ->
+                new SignOff(new Signature(a, d), Signature.BLANK, new Signature(b, "")));
+        return Combinators.combine(text, text, text, text, date, text, history, signOff).as(
+                (name, notes, eng, client, d, number, revisions, signed) -> ProjectEdits.identity("project.name",
+                        name.strip(), notes, new ProjectIdentity("B", eng, client, d, number, revisions, signed)));
+    }
+
+    /** The hardware step's edits: every spring and damper pair its lists offer, and the numbers in range. */
+    private Arbitrary<Edit> hardware() {
+        Arbitrary<Boolean> elastomer = Arbitraries.of(true, false);
+        Arbitrary<DamperKind> helicalDamper = Arbitraries.of(DamperKind.VISCOUS_DASHPOT, DamperKind.EDDY_CURRENT);
+        Arbitrary<SpringMaterial> material = Arbitraries.of(SpringMaterial.values());
+        Arbitrary<Integer> count = Arbitraries.integers().between(0, HardwareChoice.MOST_SPRINGS);
+        Arbitrary<EddyCurrentChoice> eddy = Combinators.combine(Arbitraries.of(Conductor.values()),
+                Arbitraries.of(0.3, 0.5, 1.0), Arbitraries.of(0.002, 0.005, 0.01)).as(EddyCurrentChoice::new);
+        Arbitrary<ElastomerChoice> compound = Combinators.combine(Arbitraries.of(1.1, 1.4, 2.0),
+                Arbitraries.of(0.05, 0.1, 0.3)).as(ElastomerChoice::new);
+        Arbitrary<Double> hours = Arbitraries.of(1000.0, 50_000.0, 200_000.0);
+        Arbitrary<Double> fraction = Arbitraries.of(0.005, 0.01, 0.02);
+        return Combinators.combine(elastomer, helicalDamper, material, count, eddy, compound, hours, fraction).as(
+                (e, d, m, n, ec, el, h, f) -> ProjectEdits.hardware("hardware.spring", new HardwareChoice(
+                        e ? SpringKind.ELASTOMER : SpringKind.HELICAL_COMPRESSION, m, n,
+                        e ? DamperKind.ELASTOMER_LOSS : d, ec, el, h, f, f)));
+    }
+
+    private Arbitrary<Edit> units() {
+        return Arbitraries.of(UnitSystem.values()).map(u -> ProjectEdits.displayUnits("display.units", u));
     }
 }
