@@ -32,7 +32,10 @@ import org.knowm.xchart.style.Styler;
 import org.knowm.xchart.style.markers.SeriesMarkers;
 
 /**
- * Builds the response and stroke charts of a design as XChart data, to be painted on any
+ * Longer than 400 lines because every design chart now takes the display unit system; the response and
+ * stroke charts are the next to move into a class of their own.
+ *
+ * <p>Builds the response and stroke charts of a design as XChart data, to be painted on any
  * Graphics2D: the wizard's panels, PNG and SVG files and the PDF sheet all use these, and every
  * chart of the package keeps its notes here. The look they share is {@link ChartStyle}; the
  * mass-ratio chart is {@link MassRatioCharts}. Frequencies in Hz, responses in the
