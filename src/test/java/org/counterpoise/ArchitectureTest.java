@@ -41,7 +41,7 @@ class ArchitectureTest {
             Map.entry("error", 0),
             Map.entry("rational", 1), Map.entry("units", 1), Map.entry("progress", 1),
             Map.entry("model", 2),
-            Map.entry("system", 3),
+            Map.entry("system", 3), Map.entry("identify", 3),
             Map.entry("response", 4),
             Map.entry("tuning", 5), Map.entry("remedy", 5), Map.entry("runup", 5), Map.entry("robust", 5),
             Map.entry("criteria", 5),
