@@ -183,7 +183,7 @@ final class DesignRun {
             shownGeneration = gen;
             steps.result().designedFrom(p);
             steps.result().show(d.design(), d.curves());
-            steps.result().hardware().design(d, p.hardware());
+            steps.result().hardware().design(d, p.hardware(), p.displayUnits());
             steps.sheet().show(d, p);
             if (steps.sheet().component().isShowing()) {
                 steps.sheet().shown();

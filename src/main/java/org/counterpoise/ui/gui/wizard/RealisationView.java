@@ -7,6 +7,7 @@ import java.awt.Font;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import java.util.Optional;
 import java.util.Set;
 import java.util.logging.Level;
 import java.util.logging.Logger;
@@ -25,9 +26,11 @@ import javax.swing.table.DefaultTableModel;
 import org.counterpoise.core.design.DesignDossier;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.error.CoreException;
+import org.counterpoise.core.realisation.HardwareCaution;
 import org.counterpoise.core.realisation.HardwareChoice;
 import org.counterpoise.core.realisation.Realisation;
 import org.counterpoise.core.realisation.Realiser;
+import org.counterpoise.io.text.CautionText;
 import org.counterpoise.io.text.HardwareContent;
 import org.counterpoise.io.text.ReportContent;
 import org.counterpoise.io.text.ReportRow;
@@ -35,6 +38,7 @@ import org.counterpoise.io.text.ReportSection;
 import org.counterpoise.io.text.ReportSection.SectionId;
 import org.counterpoise.io.text.ReportTable;
 import org.counterpoise.io.text.ReportValue;
+import org.counterpoise.io.text.UnitSystem;
 import org.counterpoise.io.text.WarningText;
 import org.counterpoise.ui.gui.Themes;
 import org.counterpoise.ui.gui.task.TaskRunner;
@@ -87,8 +91,9 @@ final class RealisationView {
      * for the choices it was designed with.
      * @param dossier the design's dossier, or null while no design is valid
      * @param choice the project's hardware choices
+     * @param units the project's display unit system (the tables, warnings and procedure are shown in it)
      */
-    void design(DesignDossier dossier, HardwareChoice choice) {
+    void design(DesignDossier dossier, HardwareChoice choice, UnitSystem units) {
         if (dossier == null) {
             message("Fix the inputs to see the hardware.");
             return;
@@ -97,7 +102,7 @@ final class RealisationView {
         tasks.current(null, progress -> {
             Realisation r = Realiser.realisation(dossier, choice);
             DesignResult d = dossier.design();
-            return new Sized(r, HardwareContent.sections(r, d));
+            return new Sized(r, HardwareContent.sections(r, d, units), units);
         }, this::show, e -> {
             if (e instanceof CoreException plain) {
                 message("The hardware cannot be sized: " + plain.getMessage());
@@ -109,7 +114,7 @@ final class RealisationView {
     }
 
     /** A realisation and its report sections, made off the event thread. */
-    private record Sized(Realisation realisation, List<ReportSection> sections) {
+    private record Sized(Realisation realisation, List<ReportSection> sections, UnitSystem units) {
     }
 
     private void message(String text) {
@@ -129,15 +134,20 @@ final class RealisationView {
         headline.setForeground(all ? Themes.passColour() : Themes.problemColour());
         sections.removeAll();
         if (!r.warnings().isEmpty()) {
-            JTextArea warnings = wrapped(String.join("\n", r.warnings().stream().map(w -> "\u2022 " + WarningText.of(w))
+            JTextArea warnings = wrapped(String.join("\n", r.warnings().stream().map(w -> "\u2022 " + WarningText.of(w, sized.units()))
                     .toList()));
             warnings.setName("hardware.warnings");
             warnings.setForeground(Themes.problemColour());
             add("Warnings", warnings);
         }
         for (ReportSection section : sized.sections()) {
-            add(section.title(), render(section));
+            add(section.title(), render(section, sized.units()));
         }
+        // the cautions this hardware carries (the standing ones are under the result's notes)
+        JTextArea cautions = wrapped(String.join("\n", HardwareCaution.of(r.choice()).stream()
+                .map(c -> "\u2022 " + CautionText.of(c)).toList()));
+        cautions.setName("hardware.cautions");
+        add("Cautions for this hardware", cautions);
         shown = sized.sections();
         shownChoice = r.choice();
         sections.revalidate();
@@ -146,19 +156,19 @@ final class RealisationView {
         SwingUtilities.invokeLater(() -> scroll.getVerticalScrollBar().setValue(0));
     }
 
-    private JComponent render(ReportSection section) {
+    private JComponent render(ReportSection section, UnitSystem units) {
         if (section.id() == SectionId.PROCEDURE) {
             List<String> lines = new ArrayList<>();
-            for (ReportTable.Row row : rows(section)) {
+            for (ReportTable.Row row : rows(section, units)) {
                 lines.add(row.label() + ". " + row.value());
             }
             JTextArea text = wrapped(String.join("\n", lines));
             text.setName("hardware.procedure");
             return text;
         }
-        return ReportTable.grid(section).<JComponent>map(g -> grid(section, g)).orElseGet(() -> {
+        return ReportTable.grid(section, units).<JComponent>map(g -> grid(section, g)).orElseGet(() -> {
             ReportRowsTable table = new ReportRowsTable("hardware." + section.id().name().toLowerCase(Locale.ROOT));
-            table.show(List.of(new ReportTable.Section(section.id(), "", rows(section))));
+            table.show(List.of(new ReportTable.Section(section.id(), "", rows(section, units))));
             table.model().removeRow(0); // the section's title is above the table
             // the words of a value (the spring and damper kinds, what the tolerances hold to) get room
             table.table().getColumnModel().getColumn(0).setPreferredWidth(220);
@@ -168,8 +178,8 @@ final class RealisationView {
         });
     }
 
-    private static List<ReportTable.Row> rows(ReportSection section) {
-        ReportContent one = new ReportContent("", List.of(section), List.of(), List.of());
+    private static List<ReportTable.Row> rows(ReportSection section, UnitSystem units) {
+        ReportContent one = new ReportContent("", List.of(section), List.of(), List.of(), Optional.empty(), units);
         return ReportTable.of(one, Set.of()).stream().flatMap(s -> s.rows().stream()).toList();
     }
 

@@ -4,6 +4,7 @@ import static org.counterpoise.core.units.Dimension.LENGTH;
 
 import java.awt.Dimension;
 import java.util.Locale;
+import java.util.Optional;
 import javax.swing.BorderFactory;
 import javax.swing.text.BadLocationException;
 import javax.swing.text.SimpleAttributeSet;
@@ -41,6 +42,7 @@ import org.counterpoise.io.AtomicFiles;
 import org.counterpoise.io.chart.ChartFactory;
 import org.counterpoise.io.chart.ChartFiles;
 import org.counterpoise.io.project.Project;
+import org.counterpoise.io.project.ProjectIdentity;
 import org.counterpoise.io.text.DesignContent;
 import org.counterpoise.io.text.DisplayUnits;
 import org.counterpoise.io.text.ReportContent;
@@ -196,7 +198,7 @@ final class ResultStep extends Step {
             verdict.show(r.acceptance().get(), VerdictPanel.orderNames(r, project));
         }
         if (r == null) {
-            hardware.design(null, null);
+            hardware.design(null, null, UnitSystem.SI);
             comparison.message("Fix the inputs to see the comparison of methods.");
             curves = null;
             writeNotes(List.of());
@@ -205,7 +207,9 @@ final class ResultStep extends Step {
             return;
         }
         curves = c;
-        ReportContent content = DesignContent.of(r);
+        // the project's unit system, as the charts and the readout use (the report's sections hold SI)
+        ReportContent content = DesignContent.of(r, ProjectIdentity.EMPTY, Optional.empty(),
+                project == null ? UnitSystem.SI : project.displayUnits());
         List<ReportTable.Section> sections = new ArrayList<>(ReportTable.of(content, Set.of()));
         if (r.rms().isPresent()) {
             // Under white noise the design is judged by rms values: they stand in for the harmonic peaks.

@@ -12,14 +12,17 @@ import java.util.concurrent.Callable;
 import javax.swing.JComboBox;
 import javax.swing.JLabel;
 import javax.swing.JTable;
+import javax.swing.JTextArea;
 import javax.swing.JTextField;
 import javax.swing.SwingUtilities;
 import org.counterpoise.core.realisation.DamperKind;
 import org.counterpoise.core.realisation.DesignCheck;
+import org.counterpoise.core.realisation.HardwareCaution;
+import org.counterpoise.core.realisation.HardwareChoice;
 import org.counterpoise.core.realisation.Realisation;
 import org.counterpoise.core.realisation.Realiser;
-import org.counterpoise.core.realisation.HardwareChoice;
 import org.counterpoise.core.realisation.SpringKind;
+import org.counterpoise.io.text.CautionText;
 import org.counterpoise.ui.gui.Edt;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeAll;
@@ -138,6 +141,13 @@ class HardwareGuiTest {
         });
         assertEquals(expected.checks().stream().map(c -> c.passes() ? "\u2713 passes" : "\u2717 FAILS").toList(),
                 verdicts);
+        // the cautions of this hardware (a spring that breaks, a damper that leaks or a magnet that traps
+        // fingers) are on the tab beside its parts, each once
+        String cautions = onEdt(() -> ((JTextArea) Edt.find(frame.getContentPane(), "hardware.cautions")).getText());
+        for (HardwareCaution c : HardwareCaution.of(hardware())) {
+            assertTrue(cautions.contains(CautionText.of(c)), c + " in " + cautions);
+        }
+        assertFalse(cautions.isBlank());
         HardwareChoice before = hardware();
         HardwareChoice shownAfterEdit = onEdt(() -> {
             text("hardware.service_hours").setText("30000");

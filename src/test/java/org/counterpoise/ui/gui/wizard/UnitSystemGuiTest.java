@@ -1,6 +1,7 @@
 package org.counterpoise.ui.gui.wizard;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -60,6 +61,13 @@ class UnitSystemGuiTest {
         for (int i = 0; i < mm.length; i++) {
             assertEquals(mm[i] / MM_PER_INCH, inches[i], 1e-12 * Math.abs(mm[i]), "point " + i);
         }
+        // the result table speaks the same system: mass in lb, lengths in in, no SI unit left
+        Edt.waitFor(() -> Edt.callQuietly(() -> units(frame.resultRows()).contains("lb")), "the result table in lb");
+        List<String> usUnits = units(frame.resultRows());
+        for (String si : List.of("kg", "mm", "m", "N/m", "N", "N s/m", "m/s", "m/s^2")) {
+            assertFalse(usUnits.contains(si), "SI unit " + si + " in the US result table: " + usUnits);
+        }
+        assertTrue(usUnits.contains("lbf/in"), "the stiffness in lbf/in: " + usUnits);
         String inTitle = onEdt(() -> stroke().chart().getYAxisTitle());
         assertTrue(inTitle.contains("(in)"), inTitle);
         String readout = onEdt(() -> frame.readoutAt(14.0));
@@ -78,6 +86,12 @@ class UnitSystemGuiTest {
         }
         assertEquals(Unit.MILLIMETRE, onEdt(() -> ((JComboBox<?>) find("absorber.stroke_limit.unit")).getSelectedItem()));
         assertTrue(onEdt(() -> ((JComboBox<?>) find("display.units")).getSelectedItem() == UnitSystem.SI));
+        Edt.waitFor(() -> Edt.callQuietly(() -> units(frame.resultRows()).contains("kg")), "the result table in kg again");
+    }
+
+    /** @return the unit column of the result table's rows */
+    private static List<String> units(List<String[]> rows) {
+        return rows.stream().map(r -> r[2].strip()).toList();
     }
 
     private double[] strokeData() throws Exception {
