@@ -87,7 +87,13 @@ public enum WarningKind {
     ELASTOMER_LOSS_FACTOR_MISSED(WarningParameter.COMPOUND_LOSS_FACTOR, WarningParameter.LOSS_FACTOR_NEEDED,
             WarningParameter.UTILISATION),
     /** No helical springs of stock wire give the design's rate: the closest are shown, off by this much. */
-    SPRING_RATE_NOT_MET(WarningParameter.RATE_DEVIATION);
+    SPRING_RATE_NOT_MET(WarningParameter.RATE_DEVIATION),
+    /**
+     * The project asked for an odd number of helical springs, but the absorber's static load is
+     * smaller than its dynamic load, so its springs stand in opposed preloaded pairs: the sizing used
+     * the next even count (the parameter), which the part list shows.
+     */
+    SPRING_COUNT_MADE_EVEN(WarningParameter.SPRING_COUNT);
 
     private final List<WarningParameter> parameters;
 

@@ -56,6 +56,8 @@ public enum WarningParameter {
     LOSS_FACTOR_NEEDED(false),
     /** The springs' total rate over the rate the design needs, minus one (non-dimensional). */
     RATE_DEVIATION(false),
+    /** A number of springs in parallel (a count). */
+    SPRING_COUNT(false),
     /** The design method's id as files and the command line spell it (a token). */
     METHOD_ID(true),
     /** The band the exact-peak design minimises over for one forcing frequency (a {@link PeakBand} name). */

@@ -54,7 +54,7 @@ public final class Realiser {
      */
     private static Optional<SpringDesign> spring(DesignResult design, HardwareChoice choice, List<Warning> warnings) {
         SpringDesign s = SpringSizing.size(springDemand(design, choice), choice);
-        warnings.addAll(SpringChecks.warnings(s));
+        warnings.addAll(SpringChecks.warnings(s, choice));
         return Optional.of(s);
     }
 

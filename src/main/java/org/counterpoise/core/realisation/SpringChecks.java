@@ -107,7 +107,20 @@ public final class SpringChecks {
      *     beyond stock wire), then one for each check it fails, in the order of its checks
      */
     public static List<Warning> warnings(SpringDesign spring) {
+        return warnings(spring, HardwareChoice.DEFAULT);
+    }
+
+    /**
+     * @param spring a spring design
+     * @param choice the hardware choices it was sized for
+     * @return as {@link #warnings(SpringDesign)}, first a warning when the count asked for was odd and
+     *     the springs had to stand in opposed pairs, so one more was sized
+     */
+    public static List<Warning> warnings(SpringDesign spring, HardwareChoice choice) {
         List<Warning> warnings = new ArrayList<>();
+        if (choice.springCount() > 0 && spring.count() != choice.springCount()) {
+            warnings.add(Warning.of(WarningKind.SPRING_COUNT_MADE_EVEN, (double) spring.count()));
+        }
         if (Math.abs(spring.rateDeviation()) > SpringSizing.RATE_DEVIATION_BOUND) {
             warnings.add(Warning.of(WarningKind.SPRING_RATE_NOT_MET, spring.rateDeviation()));
         }

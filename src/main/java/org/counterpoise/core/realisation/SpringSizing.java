@@ -66,7 +66,8 @@ public final class SpringSizing {
      * @param choice the hardware choices: the wire and the spring count (0: the fewest that pass)
      * @return the spring design, with its checks
      * @throws InvalidInputException naming {@code hardware.spring} when the choice is not a helical
-     *     spring, and {@code hardware.spring_count} when a chosen odd count must form opposed pairs
+     *     spring. A chosen odd count that must form opposed pairs is sized as the next even count
+     *     ({@link SpringChecks#warnings(SpringDesign, HardwareChoice)} says so).
      */
     public static SpringDesign size(SpringDemand demand, HardwareChoice choice) {
         Checks.present("spring", demand, "a spring rate, loads, forcing frequency and service cycles");
@@ -123,12 +124,8 @@ public final class SpringSizing {
     private static List<Integer> counts(SpringArrangement arrangement, int chosen) {
         boolean pairs = arrangement == SpringArrangement.OPPOSED_PRELOADED_PAIRS;
         if (chosen > 0) {
-            if (pairs && chosen % 2 != 0) {
-                throw new InvalidInputException("hardware.spring_count", Integer.toString(chosen),
-                        "an even number of springs, or 0 to choose: the static load is smaller than the dynamic"
-                                + " load, so the springs must stand in opposed preloaded pairs");
-            }
-            return List.of(chosen);
+            // opposed pairs need an even count: the next one up (HardwareChoice.MOST_SPRINGS is even)
+            return List.of(pairs && chosen % 2 != 0 ? chosen + 1 : chosen);
         }
         List<Integer> counts = new ArrayList<>();
         for (int c = pairs ? 2 : 1; c <= HardwareChoice.MOST_SPRINGS; c += pairs ? 2 : 1) {

@@ -137,6 +137,11 @@ public final class WarningText {
                     + " design needs: the closest, shown, are %s %s; choose an elastomer element or another absorber.",
                     ValueText.percent(Math.abs(w.number(WarningParameter.RATE_DEVIATION)), 2),
                     w.number(WarningParameter.RATE_DEVIATION) < 0 ? "too soft" : "too stiff");
+            case SPRING_COUNT_MADE_EVEN -> String.format(Locale.ROOT, "The absorber's weight is smaller than its"
+                    + " dynamic spring force, so its springs stand in opposed preloaded pairs and their number must"
+                    + " be even: %d springs were sized instead of the %d asked for (hardware.spring_count).",
+                    Math.round(w.number(WarningParameter.SPRING_COUNT)),
+                    Math.round(w.number(WarningParameter.SPRING_COUNT)) - 1);
         };
     }
 

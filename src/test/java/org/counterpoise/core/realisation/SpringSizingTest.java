@@ -10,6 +10,7 @@ import java.util.List;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.error.Warning;
 import org.counterpoise.core.error.WarningKind;
+import org.counterpoise.core.error.WarningParameter;
 import org.junit.jupiter.api.Test;
 
 /**
@@ -201,9 +202,28 @@ class SpringSizingTest {
         assertField("spring.dynamic_load", () -> new SpringDemand(1e5, 10, Double.POSITIVE_INFINITY, 100, 1e9));
         assertField("spring.forcing_frequency", () -> new SpringDemand(1e5, 10, 1, 0, 1e9));
         assertField("spring.service_cycles", () -> new SpringDemand(1e5, 10, 1, 100, -1));
-        // opposed pairs need an even count
-        assertField("hardware.spring_count", () -> SpringSizing.size(new SpringDemand(1e5, 0, 100, 100, 1e9),
-                choice(SpringMaterial.EN10270_1_DH, 3)));
+    }
+
+    @Test
+    void anOddCountForOpposedPairsIsSizedAsTheNextEvenOneAndSaysSo() {
+        // no static load: the springs stand in opposed preloaded pairs (common practice: a spring
+        // that unloads in each cycle rattles and wears its seats), so 3 asked becomes 4 sized
+        SpringDemand horizontal = new SpringDemand(1e5, 0, 100, 100, 1e9);
+        HardwareChoice three = choice(SpringMaterial.EN10270_1_DH, 3);
+        SpringDesign s = SpringSizing.size(horizontal, three);
+        assertEquals(4, s.count());
+        assertEquals(SpringArrangement.OPPOSED_PRELOADED_PAIRS, SpringSizing.arrangementFor(horizontal));
+        Warning first = SpringChecks.warnings(s, three).get(0);
+        assertEquals(WarningKind.SPRING_COUNT_MADE_EVEN, first.kind());
+        assertEquals(4.0, first.number(WarningParameter.SPRING_COUNT));
+        // an even count asked for, or the automatic choice, is used as it is and draws no such warning
+        SpringDesign four = SpringSizing.size(horizontal, choice(SpringMaterial.EN10270_1_DH, 4));
+        assertEquals(4, four.count());
+        assertTrue(SpringChecks.warnings(four, choice(SpringMaterial.EN10270_1_DH, 4)).stream()
+                .noneMatch(w -> w.kind() == WarningKind.SPRING_COUNT_MADE_EVEN));
+        // a seated absorber (weight well above the dynamic force) keeps an odd count of 3
+        SpringDesign seated = SpringSizing.size(new SpringDemand(1e5, 1000, 100, 100, 1e9), three);
+        assertEquals(3, seated.count());
     }
 
     private static void assertField(String field, Runnable r) {

@@ -91,7 +91,7 @@ final class HardwareStep extends Step {
         materialLabel = form.row("Wire", 'w', material, "Spring wire to EN 10270 (shear modulus and strength from"
                 + " the standard)");
         countLabel = form.row("Springs in parallel", 'p', count, "Several springs share the load where one would be"
-                + " too stiff or too stressed");
+                + " too stiff or too stressed; springs in opposed pairs take the next even count");
         elastomerLabels = List.of(
                 form.row("Dynamic-to-static ratio", 'y', ratio, "Rises with frequency, falls with temperature"),
                 form.row("Compound loss factor \u03b7", 'l', loss, "Compared with the loss factor the design needs"));
