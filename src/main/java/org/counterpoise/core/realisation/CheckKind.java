@@ -5,6 +5,11 @@ package org.counterpoise.core.realisation;
  * spring, elastomer and damper designs add the kinds they check; the words are in io.text.
  */
 public enum CheckKind {
+    /**
+     * The springs' total rate off the design's (|total / design - 1|) against the tolerance the spring
+     * rate must hold: fails when no stock spring gives the rate.
+     */
+    SPRING_RATE("spring-rate"),
     /** Corrected shear stress at the largest working load against the permissible static stress. */
     SPRING_STATIC_STRESS("spring-static-stress"),
     /** Alternating stress against the fatigue strength at the service cycles and the mean stress. */

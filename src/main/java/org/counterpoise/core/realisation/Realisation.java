@@ -32,10 +32,16 @@ public record Realisation(HardwareChoice choice, Optional<SpringDesign> spring, 
         warnings = List.copyOf(warnings);
     }
 
-    /** @return every check of the spring or elastomer and the damper, in that order */
+    /**
+     * @return every check of the spring or elastomer and the damper, in that order; the springs' first
+     *     check is their rate against the tolerance the spring rate must hold
+     */
     public List<DesignCheck> checks() {
         List<DesignCheck> all = new ArrayList<>();
-        spring.ifPresent(s -> all.addAll(s.checks()));
+        spring.ifPresent(s -> {
+            all.add(SpringChecks.rate(s, tolerances));
+            all.addAll(s.checks());
+        });
         elastomer.ifPresent(e -> all.addAll(e.checks()));
         all.addAll(damper.checks());
         return List.copyOf(all);

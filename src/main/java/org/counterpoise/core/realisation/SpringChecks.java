@@ -58,6 +58,9 @@ public final class SpringChecks {
     private static final String SOLID_SOURCE = CFS + ", 9.9 and 9.10: the compression available down to Lc + Sa"
             + " (closed and ground ends, Lc = n_t d; Sa = (0.0015 D^2/d + 0.1 d) n, times 1.5 under dynamic load)";
 
+    private static final String RATE_SOURCE = "R = G d^4 / (8 D^3 n) per spring (" + CFS + ", 9.1), summed over"
+            + " the springs, against the rate tolerance of the part tolerances (the robust design's ranges)";
+
     private SpringChecks() {
     }
 
@@ -99,6 +102,18 @@ public final class SpringChecks {
         DesignCheck solid = new DesignCheck(CheckKind.SPRING_SOLID, deflection, toSolid - spring.gapSum(),
                 Dimension.LENGTH, SOLID_SOURCE);
         return List.of(stress, fatigue, buckle, surgeCheck, solid);
+    }
+
+    /**
+     * @param spring a spring design
+     * @param tolerances the tolerances the parts must hold
+     * @return the springs' total rate off the design's rate, |R_total / k2 - 1|, against the tolerance
+     *     the spring rate must hold (a spring outside it mistunes the absorber beyond what the design
+     *     was shown to survive)
+     */
+    public static DesignCheck rate(SpringDesign spring, PartTolerances tolerances) {
+        return new DesignCheck(CheckKind.SPRING_RATE, Math.abs(spring.rateDeviation()), tolerances.springRate(),
+                Dimension.RATIO, RATE_SOURCE);
     }
 
     /**

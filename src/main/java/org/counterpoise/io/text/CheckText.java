@@ -28,6 +28,7 @@ public final class CheckText {
      */
     public static String of(CheckKind kind) {
         return switch (kind) {
+            case SPRING_RATE -> "springs' total rate off the design's, against the rate tolerance";
             case SPRING_STATIC_STRESS -> "spring stress at the largest load";
             case SPRING_FATIGUE -> "spring fatigue at the service cycles";
             case SPRING_BUCKLING -> "spring buckling at the working deflection";

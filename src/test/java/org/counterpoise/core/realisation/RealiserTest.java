@@ -1,6 +1,7 @@
 package org.counterpoise.core.realisation;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotSame;
 import static org.junit.jupiter.api.Assertions.assertSame;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -46,6 +47,13 @@ class RealiserTest {
         List<DesignCheck> all = new ArrayList<>();
         // the default choice is helical springs: always present; off the design's rate only with its warning
         SpringDesign spring = r.spring().orElseThrow();
+        // first the total rate against the rate tolerance: |sum of G d^4/(8 D^3 n)| over k2 - 1, by hand
+        DesignCheck rate = r.checks().get(0);
+        assertEquals(CheckKind.SPRING_RATE, rate.kind());
+        assertEquals(Math.abs(spring.count() * spring.ratePerSpring() / d.absorber().stiffness() - 1), rate.demand(),
+                1e-12, preset.toString());
+        assertEquals(r.tolerances().springRate(), rate.capacity());
+        all.add(rate);
         all.addAll(spring.checks());
         boolean rateMissed = r.warnings().stream().anyMatch(w -> w.kind() == WarningKind.SPRING_RATE_NOT_MET);
         // the springs realise the design's rate (the sizing rounds the coil diameter to a workshop step)
@@ -71,6 +79,10 @@ class RealiserTest {
         assertEquals(closest.totalRate() / stiff.absorber().stiffness() - 1,
                 missed.number(WarningParameter.RATE_DEVIATION), 1e-12);
         assertTrue(Math.abs(missed.number(WarningParameter.RATE_DEVIATION)) > SpringSizing.RATE_DEVIATION_BOUND);
+        // and the part list does not say "all pass": the rate check fails (0.87 off against a 5 % tolerance)
+        DesignCheck rate = r.checks().get(0);
+        assertEquals(CheckKind.SPRING_RATE, rate.kind());
+        assertFalse(rate.passes(), rate.toString());
         assertEquals(7, r.procedure().size());
     }
 

@@ -71,13 +71,15 @@ class HardwareReportTest {
         ReportSection checks = c.section(SectionId.CHECKS).orElseThrow();
         ReportTable.Grid grid = ReportTable.grid(checks).orElseThrow();
         assertEquals(List.of("Check", "Demand", "Capacity", "Utilisation", "Verdict"), grid.headings());
-        assertEquals(3, grid.cells().size());
+        assertEquals(4, grid.cells().size());
+        // the realisation's first spring check is the springs' total rate against the 2 % rate tolerance
+        assertEquals("springs' total rate off the design's, against the rate tolerance", grid.cells().get(0).get(0));
         // surge: 18 Hz against 150 Hz, 12.0 %; solid: 30 mm against 25 mm, 120 %, fails
         assertEquals(List.of("forcing against the spring's surge frequency", "18.00 Hz", "150.0 Hz", "12.0 %",
-                "passes"), grid.cells().get(0));
+                "passes"), grid.cells().get(1));
         assertEquals(List.of("compression before the coils touch", "30.00 mm", "25.00 mm", "120 %", "FAILS"),
-                grid.cells().get(1));
-        assertEquals("Compression before the coils touch: EN 13906-1:2013, solid length.", grid.sentences().get(1));
+                grid.cells().get(2));
+        assertEquals("Compression before the coils touch: EN 13906-1:2013, solid length.", grid.sentences().get(2));
         assertTrue(checks.title().contains("NOT ALL PASS"));
     }
 
@@ -110,7 +112,12 @@ class HardwareReportTest {
 
         JsonArray checks = hw.getAsJsonArray("checks");
         assertEquals(r.checks().size(), checks.size());
-        JsonObject surge = checks.get(0).getAsJsonObject();
+        JsonObject rate = checks.get(0).getAsJsonObject();
+        assertEquals("spring-rate", rate.get("kind").getAsString());
+        assertEquals(Math.abs(s.rateDeviation()), rate.get("demand").getAsDouble(), 1e-15);
+        assertEquals(0.02, rate.get("capacity").getAsDouble(), 1e-15);
+        assertEquals(Math.abs(s.rateDeviation()) <= 0.02, rate.get("passes").getAsBoolean());
+        JsonObject surge = checks.get(1).getAsJsonObject();
         assertEquals("spring-surge", surge.get("kind").getAsString());
         // frequencies in Hz: 2 pi 18 rad/s = 18 Hz
         assertEquals(18.0, surge.get("demand").getAsDouble(), 1e-12);
@@ -118,7 +125,7 @@ class HardwareReportTest {
         assertEquals("Hz", surge.get("unit").getAsString());
         assertEquals(0.12, surge.get("utilisation").getAsDouble(), 1e-12);
         assertTrue(surge.get("passes").getAsBoolean());
-        JsonObject solid = checks.get(1).getAsJsonObject();
+        JsonObject solid = checks.get(2).getAsJsonObject();
         assertEquals(0.030, solid.get("demand").getAsDouble());
         assertEquals("m", solid.get("unit").getAsString());
         assertFalse(solid.get("passes").getAsBoolean());
