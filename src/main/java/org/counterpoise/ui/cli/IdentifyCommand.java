@@ -1,0 +1,323 @@
+package org.counterpoise.ui.cli;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.Optional;
+import java.util.concurrent.Callable;
+import java.util.function.Supplier;
+import org.counterpoise.core.error.InvalidInputException;
+import org.counterpoise.core.identify.AddedMass;
+import org.counterpoise.core.identify.CircleFit;
+import org.counterpoise.core.identify.FrfKind;
+import org.counterpoise.core.identify.HalfPowerPeak;
+import org.counterpoise.core.identify.IdentifiedMode;
+import org.counterpoise.core.identify.LogDecrement;
+import org.counterpoise.core.identify.MeasuredFrf;
+import org.counterpoise.core.identify.ModalFit;
+import org.counterpoise.core.identify.ModalModel;
+import org.counterpoise.core.identify.RationalFraction;
+import org.counterpoise.core.units.Unit;
+import org.counterpoise.io.AtomicFiles;
+import org.counterpoise.io.FileWriteException;
+import org.counterpoise.io.PlainText;
+import org.counterpoise.io.chart.ChartFiles;
+import org.counterpoise.io.chart.IdentificationCharts;
+import org.counterpoise.io.measurement.DecayCsv;
+import org.counterpoise.io.measurement.FrfCsv;
+import org.counterpoise.io.measurement.FrfUnit;
+import org.counterpoise.io.measurement.Identification;
+import org.counterpoise.io.measurement.IdentificationJson;
+import org.counterpoise.io.measurement.IdentificationReport;
+import org.counterpoise.io.measurement.StructureFromMeasurement;
+import org.counterpoise.io.text.QuantityFormat;
+import org.knowm.xchart.XYChart;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+/**
+ * {@code identify FILE.csv}: the structure's modes from a measured FRF, a free decay
+ * ({@code --decay}) or two natural frequencies around an added mass ({@code --added-mass}).
+ */
+@Command(name = "identify", mixinStandardHelpOptions = true,
+        description = {"Identify the structure's mode (natural frequency, damping ratio, modal mass at the point)"
+            + " from a measured frequency response (CSV), a free decay (--decay) or two natural frequencies"
+            + " around a known added mass (--added-mass); report the values with their uncertainties (or JSON"
+            + " with --json), draw measured and fitted curves, and put the chosen mode into a project file."
+            + " See docs/identify.md."})
+public final class IdentifyCommand implements Callable<Integer> {
+    private static final int CHART_WIDTH = 800;
+    private static final int CHART_HEIGHT = 500;
+
+    @Spec
+    private CommandSpec spec;
+
+    @Parameters(index = "0", arity = "0..1", paramLabel = "FILE",
+            description = "measurement (CSV): frequency_Hz with real,imag or magnitude,phase_deg (and coherence);"
+                    + " with --decay: time_s and the response")
+    private Path file;
+
+    @Option(names = "--kind", paramLabel = "receptance|mobility|accelerance",
+            description = "what the FRF measures per force (default: accelerance, as an impact test with an"
+                    + " accelerometer gives)")
+    private String kind;
+
+    @Option(names = "--units", paramLabel = "RESPONSE/FORCE",
+            description = "unit of the FRF's values, e.g. m/N, mm/s/N, g/N, m/s^2/N, in/lbf, in/s/lbf, g/lbf"
+                    + " (default: the SI unit of the kind)")
+    private String units;
+
+    @Option(names = "--band", paramLabel = "LO:HI", description = "fit only the lines from LO to HI Hz")
+    private String band;
+
+    @Option(names = "--modes", paramLabel = "N", description = "number of modes in the band, 1 to 4 (default 1)")
+    private int modes = 1;
+
+    @Option(names = "--no-residuals", description = "fit no residual terms for the modes outside the band")
+    private boolean noResiduals;
+
+    @Option(names = "--decay", description = "FILE is a free-decay record: logarithmic decrement")
+    private boolean decay;
+
+    @Option(names = "--cycles", paramLabel = "N", description = "with --decay: cycles to use (default: all found)")
+    private int cycles;
+
+    @Option(names = "--added-mass", paramLabel = "KG", description = "mass added at the point, kg (with --frequencies)")
+    private Double addedMass;
+
+    @Option(names = "--frequencies", paramLabel = "F1,F2",
+            description = "natural frequencies in Hz without and with the added mass")
+    private String frequencies;
+
+    @Option(names = "--json", description = "print the result as one JSON object with SI units in the key names")
+    private boolean json;
+
+    @Option(names = "--plot", paramLabel = "FILE.png|FILE.svg",
+            description = "draw measured and fitted magnitude into FILE and phase into FILE-phase (same type)")
+    private Path plot;
+
+    @Option(names = "--force", description = "replace chart files that already exist")
+    private boolean force;
+
+    @Option(names = "--write-structure", paramLabel = "PROJECT.json",
+            description = "put the identified mode into the structure section of this project file")
+    private Path project;
+
+    @Option(names = "--mode", paramLabel = "K", description = "with --write-structure: which mode, 1 = lowest (default 1)")
+    private int mode = 1;
+
+    @Override
+    public Integer call() throws IOException {
+        Identification result = identify();
+        PrintWriter out = spec.commandLine().getOut();
+        List<String> notes = new ArrayList<>();
+        if (plot != null) {
+            notes.addAll(writePlots(result));
+        }
+        if (project != null) {
+            notes.add(writeStructure(result));
+        }
+        out.print(json ? IdentificationJson.toJson(result) : IdentificationReport.render(result));
+        if (!json) { // with --json, stdout stays one JSON object
+            notes.forEach(out::println);
+        }
+        out.flush();
+        return 0;
+    }
+
+    private Identification identify() {
+        if (addedMass != null || frequencies != null) {
+            return addedMass();
+        }
+        if (file == null) {
+            throw InvalidInputException.missing("FILE", "a measurement file (CSV), or --added-mass with --frequencies");
+        }
+        if (decay) {
+            double[][] tx = DecayCsv.read(file);
+            try {
+                return new Identification.Decay(file.toString(), LogDecrement.of(tx[0], tx[1], cycles));
+            } catch (InvalidInputException e) {
+                throw e.field().equals("cycles") ? e.renamed("--cycles") : e.renamed(file + " (" + e.field() + ")");
+            }
+        }
+        FrfKind k = kind();
+        FrfUnit unit = units == null ? FrfUnit.si(k) : FrfUnit.parse(units, k, "--units");
+        MeasuredFrf all = FrfCsv.read(file, unit);
+        if (modes < 1 || modes > RationalFraction.MAX_MODES) {
+            throw new InvalidInputException("--modes", Integer.toString(modes), "1 to " + RationalFraction.MAX_MODES);
+        }
+        try {
+            MeasuredFrf fitted = band == null ? all : band(all);
+            ModalModel model = ModalFit.fit(fitted, modes, !noResiduals);
+            Optional<IdentifiedMode> halfPower = Optional.empty();
+            Optional<CircleFit> circle = Optional.empty();
+            if (modes == 1) { // the classical estimates, as a check beside the fit
+                halfPower = optional(() -> HalfPowerPeak.estimate(fitted));
+                circle = optional(() -> CircleFit.fit(fitted));
+            }
+            return new Identification.Frf(file.toString(), unit, fitted, model, halfPower, circle);
+        } catch (InvalidInputException e) {
+            throw switch (e.field()) {
+                case "modes" -> e.renamed("--modes");
+                case "band" -> e.renamed(band == null ? "--band (the whole file)" : "--band");
+                default -> e;
+            };
+        }
+    }
+
+    private static <T> Optional<T> optional(Supplier<T> estimate) {
+        try {
+            return Optional.of(estimate.get());
+        } catch (InvalidInputException e) {
+            return Optional.empty(); // the fit itself is reported; a check that cannot be made is left out
+        }
+    }
+
+    private FrfKind kind() {
+        if (kind == null) {
+            return FrfKind.ACCELERANCE;
+        }
+        for (FrfKind k : FrfKind.values()) {
+            if (k.id().equals(kind.strip().toLowerCase(Locale.ROOT))) {
+                return k;
+            }
+        }
+        throw new InvalidInputException("--kind", Converters.shown(kind), "receptance, mobility or accelerance");
+    }
+
+    private MeasuredFrf band(MeasuredFrf all) {
+        String[] parts = band.split(":", -1);
+        double[] hz = new double[2];
+        try {
+            if (parts.length != 2) {
+                throw new NumberFormatException();
+            }
+            hz[0] = Converters.real(parts[0]);
+            hz[1] = Converters.real(parts[1]);
+        } catch (RuntimeException e) {
+            throw new InvalidInputException("--band", Converters.shown(band), "LO:HI in Hz, such as 15:35");
+        }
+        if (!(hz[0] >= 0 && hz[1] > hz[0])) {
+            throw new InvalidInputException("--band", Converters.shown(band), "LO:HI in Hz with 0 <= LO < HI");
+        }
+        return all.within(Unit.HERTZ.toSi(hz[0]), Unit.HERTZ.toSi(hz[1]));
+    }
+
+    private Identification addedMass() {
+        if (addedMass == null || frequencies == null) {
+            throw InvalidInputException.missing(addedMass == null ? "--added-mass" : "--frequencies",
+                    "both --added-mass KG and --frequencies F1,F2 (Hz, without and with the mass)");
+        }
+        String[] parts = frequencies.split(",", -1);
+        if (parts.length != 2) {
+            throw new InvalidInputException("--frequencies", Converters.shown(frequencies),
+                    "two natural frequencies in Hz, F1,F2, without and then with the added mass");
+        }
+        double[] f = new double[2];
+        for (int i = 0; i < 2; i++) {
+            try {
+                f[i] = Converters.real(parts[i]);
+            } catch (RuntimeException e) {
+                throw new InvalidInputException("--frequencies", Converters.shown(frequencies),
+                        "two numbers in Hz separated by a comma, such as 23.1,21.4");
+            }
+        }
+        try {
+            AddedMass a = AddedMass.of(Unit.HERTZ.toSi(f[0]), Unit.HERTZ.toSi(f[1]), addedMass);
+            return new Identification.Added(addedMass, Unit.HERTZ.toSi(f[1]), a);
+        } catch (InvalidInputException e) {
+            throw e.field().equals("added_mass") ? e.renamed("--added-mass") : e.renamed("--frequencies");
+        }
+    }
+
+    private List<String> writePlots(Identification result) {
+        if (!(result instanceof Identification.Frf f)) {
+            throw new InvalidInputException("--plot", plot.toString(), "a plot of an FRF fit (not with --decay or"
+                    + " --added-mass)");
+        }
+        String name = plot.getFileName() == null ? "" : plot.getFileName().toString();
+        String lower = name.toLowerCase(Locale.ROOT);
+        boolean svg = lower.endsWith(".svg");
+        if (!svg && !lower.endsWith(".png")) {
+            throw new InvalidInputException("--plot", PlainText.escape(plot.toString()), "a file name ending in .png or .svg");
+        }
+        String stem = name.substring(0, name.length() - 4);
+        Path phase = plot.resolveSibling(stem + "-phase" + name.substring(name.length() - 4));
+        List<XYChart> charts = List.of(
+                IdentificationCharts.magnitude(f.fitted(), f.model(), f.unit(), CHART_WIDTH, CHART_HEIGHT),
+                IdentificationCharts.phase(f.fitted(), f.model(), f.unit(), CHART_WIDTH, CHART_HEIGHT));
+        List<Path> targets = List.of(plot, phase);
+        List<AtomicFiles.Entry> entries = new ArrayList<>();
+        for (int i = 0; i < 2; i++) {
+            Path target = targets.get(i);
+            XYChart chart = charts.get(i);
+            if (file != null && Files.exists(target) && sameFile(target, file)) {
+                throw new InvalidInputException("--plot", PlainText.escape(target.toString()),
+                        "a file other than the measurement being read");
+            }
+            if (!force && Files.exists(target)) {
+                throw new InvalidInputException("--plot", PlainText.escape(target.toString()),
+                        "a file that does not exist yet, or --force to replace it");
+            }
+            entries.add(new AtomicFiles.Entry(target, out -> {
+                if (svg) {
+                    ChartFiles.svg(chart, out);
+                } else {
+                    ChartFiles.png(chart, out);
+                }
+            }));
+        }
+        try {
+            AtomicFiles.writeAll(entries);
+        } catch (FileWriteException e) {
+            throw new InvalidInputException("--plot", PlainText.escape(e.path().toString()), e.problem());
+        }
+        return targets.stream().map(p -> "wrote " + PlainText.escape(p.toString())).toList();
+    }
+
+    private static boolean sameFile(Path a, Path b) {
+        try {
+            return Files.isSameFile(a, b);
+        } catch (IOException e) {
+            return false;
+        }
+    }
+
+    private String writeStructure(Identification result) throws IOException {
+        List<IdentifiedMode> found = result instanceof Identification.Frf f ? f.model().modes() : List.of();
+        if (found.isEmpty()) {
+            throw new InvalidInputException("--write-structure", PlainText.escape(project.toString()),
+                    "an FRF fit, which gives the modal mass (a decay gives none; with --added-mass the damping is"
+                            + " unknown)");
+        }
+        if (mode < 1 || mode > found.size()) {
+            throw new InvalidInputException("--mode", Integer.toString(mode), "1 to " + found.size()
+                    + " (the modes identified, lowest first)");
+        }
+        IdentifiedMode chosen = found.get(mode - 1);
+        try {
+            StructureFromMeasurement.structure(chosen);
+        } catch (InvalidInputException e) {
+            throw new InvalidInputException("--mode", Integer.toString(mode), "a mode with a positive modal mass and"
+                    + " damping below 99 %; this one has " + e.field() + " " + e.value()
+                    + " (is the FRF a driving-point measurement?)");
+        }
+        try {
+            for (String unknown : StructureFromMeasurement.write(project, chosen).unknownFields()) {
+                spec.commandLine().getErr().println("note: " + PlainText.escape(project.toString()) + ": field "
+                        + PlainText.quote(unknown) + " is not part of the project format and was not kept");
+            }
+        } catch (FileWriteException e) {
+            throw new InvalidInputException("--write-structure", PlainText.escape(e.path().toString()), e.problem());
+        }
+        return "wrote mode " + mode + " (" + QuantityFormat.format(chosen.naturalFrequency(), Unit.HERTZ)
+                + ") into the structure section of " + PlainText.escape(project.toString());
+    }
+}
