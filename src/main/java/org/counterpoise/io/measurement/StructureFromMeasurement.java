@@ -2,10 +2,13 @@ package org.counterpoise.io.measurement;
 
 import java.io.IOException;
 import java.nio.file.Path;
+import java.time.LocalDate;
+import java.util.OptionalDouble;
 import org.counterpoise.core.identify.IdentifiedMode;
 import org.counterpoise.core.units.Unit;
 import org.counterpoise.io.project.DampingInput;
 import org.counterpoise.io.project.LoadedProject;
+import org.counterpoise.io.project.MeasuredSource;
 import org.counterpoise.io.project.Project;
 import org.counterpoise.io.project.ProjectReader;
 import org.counterpoise.io.project.ProjectWriter;
@@ -34,14 +37,45 @@ public final class StructureFromMeasurement {
     }
 
     /**
+     * @param fit the FRF fit the mode came from
+     * @param mode the identified mode
+     * @param day the day of the fit
+     * @return the structure section it makes, saying where it came from (structure.measured)
+     */
+    public static StructureInput structure(Identification.Frf fit, IdentifiedMode mode, LocalDate day) {
+        return structure(mode).withMeasured(source(fit, mode, day));
+    }
+
+    /**
+     * @param fit the FRF fit the mode came from
+     * @param mode the identified mode
+     * @param day the day of the fit
+     * @return where the structure's data came from: method, file name, day, residual, uncertainties
+     */
+    public static MeasuredSource source(Identification.Frf fit, IdentifiedMode mode, LocalDate day) {
+        Path name = Path.of(fit.source()).getFileName();
+        return new MeasuredSource(fit.method(), name == null ? fit.source() : name.toString(), day.toString(),
+                OptionalDouble.of(fit.model().normalisedResidual()),
+                mode.naturalFrequencySd().isPresent()
+                        ? new QuantityInput(Unit.HERTZ.fromSi(mode.naturalFrequencySd().getAsDouble()), Unit.HERTZ)
+                        : null,
+                mode.dampingRatioSd(),
+                mode.modalMassSd().isPresent() ? new QuantityInput(mode.modalMassSd().getAsDouble(), Unit.KILOGRAM)
+                        : null);
+    }
+
+    /**
      * @param project the project file, read and then replaced
+     * @param fit the FRF fit the mode came from
      * @param mode the mode to put in
+     * @param day the day of the fit
      * @return the project as written
      * @throws IOException when the file cannot be written
      */
-    public static LoadedProject write(Path project, IdentifiedMode mode) throws IOException {
+    public static LoadedProject write(Path project, Identification.Frf fit, IdentifiedMode mode, LocalDate day)
+            throws IOException {
         LoadedProject loaded = ProjectReader.read(project);
-        Project updated = loaded.project().withStructure(structure(mode));
+        Project updated = loaded.project().withStructure(structure(fit, mode, day));
         ProjectWriter.save(updated, project);
         return new LoadedProject(updated, loaded.unknownFields());
     }

@@ -82,7 +82,7 @@ public final class MeasuredSourceContent {
      * @param id an identification method's id as the project file names it
      * @return the method in words (an id this version does not know is shown as written)
      */
-    static String methodWords(String id) {
+    public static String methodWords(String id) {
         return switch (id) {
             case "least_squares" -> "least-squares fit of the FRF (rational-fraction start)";
             case "rational_fraction" -> "rational-fraction polynomial fit of the FRF";
