@@ -1,6 +1,9 @@
 package org.counterpoise.io.measurement;
 
 import java.io.IOException;
+import java.math.BigDecimal;
+import java.math.MathContext;
+import java.math.RoundingMode;
 import java.nio.file.Path;
 import java.time.LocalDate;
 import java.util.OptionalDouble;
@@ -26,14 +29,25 @@ public final class StructureFromMeasurement {
     }
 
     /**
+     * Significant figures the values are written with: a relative rounding of at most 5e-5, well inside
+     * what any measurement gives (a fit's standard uncertainties are 1e-4 relative and more), and short
+     * enough to read in the project file and the wizard's fields.
+     */
+    static final int FIGURES = 5;
+
+    /**
      * @param mode the identified mode
-     * @return the structure section it makes
+     * @return the structure section it makes, each value to {@link #FIGURES} significant figures
      */
     public static StructureInput structure(IdentifiedMode mode) {
         mode.toStructure(); // refuses a negative mass or a damping a design cannot take, in plain words
-        return new StructureInput(new QuantityInput(mode.modalMass(), Unit.KILOGRAM), null, null,
-                new QuantityInput(Unit.HERTZ.fromSi(mode.naturalFrequency()), Unit.HERTZ), null,
-                DampingInput.ratio(mode.dampingRatio()), 1.0);
+        return new StructureInput(new QuantityInput(rounded(mode.modalMass()), Unit.KILOGRAM), null, null,
+                new QuantityInput(rounded(Unit.HERTZ.fromSi(mode.naturalFrequency())), Unit.HERTZ), null,
+                DampingInput.ratio(rounded(mode.dampingRatio())), 1.0);
+    }
+
+    private static double rounded(double v) {
+        return new BigDecimal(v).round(new MathContext(FIGURES, RoundingMode.HALF_EVEN)).doubleValue();
     }
 
     /**

@@ -210,9 +210,10 @@ final class StructureStep extends Step {
     void showProject(Project p, boolean loaded) {
         load(p.structure());
         MeasuredSource m = p.structure().measured();
-        measuredNote.setText(m == null ? "typed (not from a measurement)" : "measurement: "
-                + MeasuredSourceContent.methodWords(m.method()) + (m.file().isEmpty() ? "" : ", " + m.file())
-                + (m.date().isEmpty() ? "" : ", fitted " + m.date()) + " (typing a value here replaces it)");
+        measuredNote.setText(m == null ? "typed (not from a measurement)" : "measured: "
+                + (m.file().isEmpty() ? "" : m.file() + ", ") + (m.date().isEmpty() ? "" : m.date() + ", ")
+                + "typing a value replaces it");
+        measuredNote.setToolTipText(m == null ? null : MeasuredSourceContent.methodWords(m.method()));
     }
 
     @Override
