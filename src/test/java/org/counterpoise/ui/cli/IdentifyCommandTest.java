@@ -154,6 +154,27 @@ class IdentifyCommandTest {
     }
 
     @Test
+    void semicolonsDecimalCommasAndAZeroHertzLineAreRead(@TempDir Path dir) throws Exception {
+        // the shipped floor file rewritten as a spreadsheet in a decimal-comma locale would save it,
+        // with a 0 Hz line in front: the same fit (ImpactTestPresetTest's floor)
+        StringBuilder b = new StringBuilder("frequency_Hz;real;imag;coherence\n0;0;0;0\n");
+        for (String line : Files.readAllLines(Path.of(FLOOR))) {
+            if (!line.startsWith("#") && !line.startsWith("frequency")) {
+                b.append(line.replace(',', ';').replace('.', ',')).append('\n');
+            }
+        }
+        Path file = dir.resolve("comma.csv");
+        Files.writeString(file, b.toString());
+        Run comma = CliTest.run("identify", file.toString(), "--json");
+        Run plain = CliTest.run("identify", FLOOR, "--json");
+        assertEquals(0, comma.code(), comma.err());
+        JsonObject a = strict(comma.out());
+        JsonObject p = strict(plain.out());
+        assertEquals(p.get("lines").getAsInt(), a.get("lines").getAsInt());
+        assertEquals(p.getAsJsonArray("modes").toString(), a.getAsJsonArray("modes").toString());
+    }
+
+    @Test
     void magnitudeAndPhaseInUsUnitsReadAsTheSameFrf(@TempDir Path dir) throws Exception {
         // a receptance of 1e-6 m/N at phase -90 degrees, written in in/lbf: 1e-6 / 0.0254 * 4.4482216152605
         double inPerLbf = 1e-6 / 0.0254 * 4.4482216152605;
