@@ -79,7 +79,7 @@ class IdentifyCommandTest {
     @Test
     void theChosenModeGoesIntoTheProjectKeepingTheRest(@TempDir Path dir) throws Exception {
         Path project = dir.resolve("floor.json");
-        Files.copy(Path.of("presets/pump-skid-mezzanine.json"), project);
+        Files.copy(Path.of("presets/pump-skid-mezzanine.json"), project); // no robustness section
         Project before = ProjectReader.read(project).project();
         Run r = CliTest.run("identify", FLOOR, "--write-structure", project.toString(), "--mode", "1");
         assertEquals(0, r.code(), r.err());
@@ -89,7 +89,30 @@ class IdentifyCommandTest {
         assertEquals(before.name(), after.name());
         assertEquals(23.0, after.toStructure().naturalFrequency() / (2 * Math.PI), 0.02);
         assertEquals(4200.0, after.toStructure().modalMass(), 150.0);
+        // the fit's standard uncertainties become normal tolerances of the structure (percent):
+        // mass u_m, stiffness k = m omega^2 by first-order propagation sqrt(u_m^2 + (2 u_w)^2)
+        IdentifiedMode core = ModalFit.fit(FrfCsv.read(Path.of(FLOOR), FrfUnit.si(FrfKind.ACCELERANCE)), 1, true)
+                .modes().get(0);
+        double um = core.modalMassSd().orElseThrow() / core.modalMass();
+        double uw = core.naturalFrequencySd().orElseThrow() / core.naturalFrequency();
+        assertEquals("normal", after.robustness().structureMass().distribution());
+        assertEquals(100 * um, after.robustness().structureMass().percent(), 1e-3 * 100 * um);
+        assertEquals(100 * Math.hypot(um, 2 * uw), after.robustness().structureStiffness().percent(),
+                1e-3 * 100 * Math.hypot(um, 2 * uw));
         assertEquals(0, CliTest.run("design", project.toString()).code(), "the written project designs");
+        assertEquals(0, CliTest.run("robustness", project.toString(), "--samples", "200").code(),
+                "and its tolerances run");
+    }
+
+    @Test
+    void tolerancesTheUserTypedAreKept(@TempDir Path dir) throws Exception {
+        Path project = dir.resolve("fan.json");
+        Files.copy(Path.of("presets/rooftop-fan-platform.json"), project); // states both structure tolerances
+        Project before = ProjectReader.read(project).project();
+        assertEquals(0, CliTest.run("identify", FLOOR, "--write-structure", project.toString()).code());
+        Project after = ProjectReader.read(project).project();
+        assertEquals(before.robustness(), after.robustness());
+        assertEquals(4200.0, after.toStructure().modalMass(), 150.0);
     }
 
     @Test
