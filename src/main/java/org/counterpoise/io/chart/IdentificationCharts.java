@@ -6,6 +6,7 @@ import org.counterpoise.core.identify.MeasuredFrf;
 import org.counterpoise.core.identify.ModalModel;
 import org.counterpoise.core.units.Unit;
 import org.counterpoise.io.measurement.FrfUnit;
+import org.counterpoise.io.text.ValueText;
 import org.knowm.xchart.XYChart;
 import org.knowm.xchart.XYChartBuilder;
 import org.knowm.xchart.XYSeries;
@@ -52,7 +53,7 @@ public final class IdentificationCharts {
         XYChart c = new XYChartBuilder().width(width).height(height)
                 .title((magnitude ? "Magnitude" : "Phase") + " of the " + kind + ", measured and fitted")
                 .xAxisTitle("Frequency (Hz)")
-                .yAxisTitle(magnitude ? capitalised(kind) + " (" + ChartFactory.pretty(unit.symbol()) + ")"
+                .yAxisTitle(magnitude ? ValueText.capitalised(kind) + " (" + ChartFactory.pretty(unit.symbol()) + ")"
                         : "Phase (degrees)")
                 .build();
         ChartStyle.houseStyle(c.getStyler(), ChartTheme.LIGHT);
@@ -98,9 +99,5 @@ public final class IdentificationCharts {
 
     private static double shown(Complex si, FrfUnit unit, boolean magnitude) {
         return magnitude ? si.abs() / unit.toSi() : Math.toDegrees(si.getArgument());
-    }
-
-    private static String capitalised(String s) {
-        return Character.toUpperCase(s.charAt(0)) + s.substring(1);
     }
 }

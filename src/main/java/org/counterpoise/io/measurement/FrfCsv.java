@@ -11,7 +11,7 @@ import org.counterpoise.core.units.Unit;
  * by the start of their name, any case: frequency in Hz ("freq...", else the first column); either
  * real and imaginary parts ("re...", "im...") or magnitude and phase in degrees ("mag..." or
  * "abs...", "phase..."); optionally the coherence ("coh...", 0 to 1). Values are in the
- * {@link FrfUnit} given.
+ * {@link FrfUnit} given. A first line at 0 Hz, as spectrum exports have, is left out.
  */
 public final class FrfCsv {
     private FrfCsv() {
@@ -36,20 +36,24 @@ public final class FrfCsv {
             throw new InvalidInputException(t.file() + ", header", String.join(",", t.header()),
                     "columns frequency_Hz and either real,imag or magnitude,phase_deg (optionally coherence)");
         }
-        int n = t.rows().size();
+        // the 0 Hz line that spectrum exports begin with carries no FRF (no motion at zero frequency): left out
+        int first = t.rows().get(0)[frequency] == 0.0 ? 1 : 0;
+        int n = t.rows().size() - first;
         double[] omega = new double[n];
         double[] real = new double[n];
         double[] imaginary = new double[n];
         double[] coherence = new double[coh >= 0 ? n : 0];
         double scale = unit.toSi();
         for (int i = 0; i < n; i++) {
-            double[] row = t.rows().get(i);
+            int line = i + first;
+            double[] row = t.rows().get(line);
             double f = row[frequency];
             if (!(f > 0)) {
-                throw new InvalidInputException(t.where(i, frequency), Checks.show(f), "a frequency in Hz above 0");
+                throw new InvalidInputException(t.where(line, frequency), Checks.show(f),
+                        "a frequency in Hz above 0 (a 0 Hz line is read only as the first line, and left out)");
             }
-            if (i > 0 && !(f * 2.0 * Math.PI > omega[i - 1])) {
-                throw new InvalidInputException(t.where(i, frequency), Checks.show(f),
+            if (i > 0 && !(Unit.HERTZ.toSi(f) > omega[i - 1])) {
+                throw new InvalidInputException(t.where(line, frequency), Checks.show(f),
                         "frequencies increasing from line to line, each once");
             }
             omega[i] = Unit.HERTZ.toSi(f);
@@ -58,7 +62,7 @@ public final class FrfCsv {
                 imaginary[i] = row[im] * scale;
             } else {
                 if (row[mag] < 0) {
-                    throw new InvalidInputException(t.where(i, mag), Checks.show(row[mag]), "a magnitude of 0 or more");
+                    throw new InvalidInputException(t.where(line, mag), Checks.show(row[mag]), "a magnitude of 0 or more");
                 }
                 double radians = Math.toRadians(row[phase]);
                 real[i] = row[mag] * Math.cos(radians) * scale;
@@ -66,7 +70,7 @@ public final class FrfCsv {
             }
             if (coh >= 0) {
                 if (!(row[coh] >= 0 && row[coh] <= 1)) {
-                    throw new InvalidInputException(t.where(i, coh), Checks.show(row[coh]), "a coherence from 0 to 1");
+                    throw new InvalidInputException(t.where(line, coh), Checks.show(row[coh]), "a coherence from 0 to 1");
                 }
                 coherence[i] = row[coh];
             }

@@ -11,7 +11,8 @@ import org.counterpoise.io.TextFiles;
 /**
  * A measurement file as a table of numbers: lines starting with '#' and blank lines are comments;
  * the first other line is the header; columns are separated by commas, or by semicolons or tabs
- * (then a decimal comma is accepted too). Every refusal names the file, the line and the column.
+ * (then a decimal comma is accepted too); double quotes around a cell are dropped. Every refusal
+ * names the file, the line and the column.
  *
  * @param file how the user named the file
  * @param header the column names as written
@@ -39,7 +40,7 @@ record MeasurementTable(String file, List<String> header, List<double[]> rows, L
             if (header == null) {
                 separator = line.contains(";") ? ";" : line.contains("\t") ? "\t" : ",";
                 decimalComma = !separator.equals(",");
-                header = List.of(line.split(separator, -1)).stream().map(String::strip).toList();
+                header = List.of(line.split(separator, -1)).stream().map(MeasurementTable::unquoted).toList();
                 continue;
             }
             String[] cells = line.split(separator, -1);
@@ -49,7 +50,7 @@ record MeasurementTable(String file, List<String> header, List<double[]> rows, L
             }
             double[] row = new double[cells.length];
             for (int c = 0; c < cells.length; c++) {
-                row[c] = number(cells[c].strip(), decimalComma, file + ", line " + (i + 1) + ", column " + (c + 1)
+                row[c] = number(unquoted(cells[c]), decimalComma, file + ", line " + (i + 1) + ", column " + (c + 1)
                         + " (" + PlainText.quote(header.get(c)) + ")");
             }
             rows.add(row);
@@ -60,6 +61,12 @@ record MeasurementTable(String file, List<String> header, List<double[]> rows, L
                     "a header line naming the columns, then one line of numbers per sample");
         }
         return new MeasurementTable(file, header, rows, numbers);
+    }
+
+    /** A cell without its surrounding blanks and the double quotes spreadsheets put around text. */
+    private static String unquoted(String cell) {
+        String s = cell.strip();
+        return s.length() >= 2 && s.startsWith("\"") && s.endsWith("\"") ? s.substring(1, s.length() - 1).strip() : s;
     }
 
     private static double number(String cell, boolean decimalComma, String where) {

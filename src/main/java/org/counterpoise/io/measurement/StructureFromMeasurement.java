@@ -6,8 +6,10 @@ import java.math.MathContext;
 import java.math.RoundingMode;
 import java.nio.file.Path;
 import java.time.LocalDate;
+import java.util.Locale;
 import java.util.OptionalDouble;
 import org.counterpoise.core.identify.IdentifiedMode;
+import org.counterpoise.core.robust.Tolerance;
 import org.counterpoise.core.units.Unit;
 import org.counterpoise.io.project.DampingInput;
 import org.counterpoise.io.project.LoadedProject;
@@ -16,13 +18,15 @@ import org.counterpoise.io.project.Project;
 import org.counterpoise.io.project.ProjectReader;
 import org.counterpoise.io.project.ProjectWriter;
 import org.counterpoise.io.project.QuantityInput;
+import org.counterpoise.io.project.RobustnessInput;
 import org.counterpoise.io.project.StructureInput;
 
 /**
  * Puts an identified mode into a project file's structure section: modal mass (kg), natural
  * frequency (Hz) and damping ratio, with the mode shape value 1 (the modal mass is the one at the
- * measured point, which is taken to be the absorber's). Everything else in the project is kept;
- * the file is replaced atomically ({@link ProjectWriter}).
+ * measured point, which is taken to be the absorber's), and the fit's uncertainties as the
+ * structure's mass and stiffness tolerances where the project states none. Everything else in the project is kept; the file is
+ * replaced atomically ({@link ProjectWriter}).
  */
 public final class StructureFromMeasurement {
     private StructureFromMeasurement() {
@@ -79,6 +83,42 @@ public final class StructureFromMeasurement {
     }
 
     /**
+     * The fit's standard uncertainties as the structure's tolerances (normal distributions, standard
+     * deviation in percent), so that the Monte Carlo and the robust designs carry them: the modal
+     * mass's as it is, the stiffness k = m omega_n^2 as sqrt(u_m^2 + (2 u_omega)^2) in relative
+     * terms (first-order propagation, the correlation of m and omega_n left out; common practice).
+     * Only where the project states no tolerance of its own: one the user typed (which may
+     * include what the fit cannot know, such as a model error) is kept. A mode without
+     * uncertainties changes nothing; the rest of the robustness section is kept, and a project
+     * without one gets one with the defaults (seed 1).
+     * @param project the project
+     * @param mode the identified mode
+     * @return the project with the structure's tolerances from the fit
+     */
+    public static Project withUncertainties(Project project, IdentifiedMode mode) {
+        if (mode.modalMassSd().isEmpty() || mode.naturalFrequencySd().isEmpty()) {
+            return project;
+        }
+        double mass = mode.modalMassSd().getAsDouble() / mode.modalMass();
+        double frequency = mode.naturalFrequencySd().getAsDouble() / mode.naturalFrequency();
+        double stiffness = Math.hypot(mass, 2.0 * frequency);
+        String normal = RobustnessInput.ToleranceInput.token(Tolerance.Distribution.NORMAL);
+        RobustnessInput r = project.robustness() != null ? project.robustness()
+                : new RobustnessInput(RobustnessInput.Ranges.NONE, null, 0, 1L, null, null, null, null, null);
+        return project.withRobustness(new RobustnessInput(r.ranges(), r.target(), r.samples(), r.seed(),
+                r.structureMass() != null ? r.structureMass()
+                        : new RobustnessInput.ToleranceInput(normal, percent(mass), null),
+                r.structureStiffness() != null ? r.structureStiffness()
+                        : new RobustnessInput.ToleranceInput(normal, percent(stiffness), null), r.absorberMass(),
+                r.absorberStiffness(), r.absorberDamping()));
+    }
+
+    /** A relative uncertainty in percent, to 4 significant figures (the file keeps what is shown). */
+    private static double percent(double relative) {
+        return Double.parseDouble(String.format(Locale.ROOT, "%.4g", 100.0 * relative));
+    }
+
+    /**
      * @param project the project file, read and then replaced
      * @param fit the FRF fit the mode came from
      * @param mode the mode to put in
@@ -89,7 +129,7 @@ public final class StructureFromMeasurement {
     public static LoadedProject write(Path project, Identification.Frf fit, IdentifiedMode mode, LocalDate day)
             throws IOException {
         LoadedProject loaded = ProjectReader.read(project);
-        Project updated = loaded.project().withStructure(structure(fit, mode, day));
+        Project updated = withUncertainties(loaded.project().withStructure(structure(fit, mode, day)), mode);
         ProjectWriter.save(updated, project);
         return new LoadedProject(updated, loaded.unknownFields());
     }

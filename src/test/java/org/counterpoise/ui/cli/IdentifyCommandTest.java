@@ -81,7 +81,7 @@ class IdentifyCommandTest {
     @Test
     void theChosenModeGoesIntoTheProjectKeepingTheRest(@TempDir Path dir) throws Exception {
         Path project = dir.resolve("floor.json");
-        Files.copy(Path.of("presets/pump-skid-mezzanine.json"), project);
+        Files.copy(Path.of("presets/pump-skid-mezzanine.json"), project); // no robustness section
         Project before = ProjectReader.read(project).project();
         Run r = CliTest.run("identify", FLOOR, "--write-structure", project.toString(), "--mode", "1");
         assertEquals(0, r.code(), r.err());
@@ -101,6 +101,29 @@ class IdentifyCommandTest {
         CliTest.Run designed = CliTest.run("design", project.toString());
         assertEquals(0, designed.code(), "the written project designs");
         assertTrue(designed.out().contains("structure data from a measurement"), designed.out());
+        // the fit's standard uncertainties become normal tolerances of the structure (percent):
+        // mass u_m, stiffness k = m omega^2 by first-order propagation sqrt(u_m^2 + (2 u_w)^2)
+        IdentifiedMode core = ModalFit.fit(FrfCsv.read(Path.of(FLOOR), FrfUnit.si(FrfKind.ACCELERANCE)), 1, true)
+                .modes().get(0);
+        double um = core.modalMassSd().orElseThrow() / core.modalMass();
+        double uw = core.naturalFrequencySd().orElseThrow() / core.naturalFrequency();
+        assertEquals("normal", after.robustness().structureMass().distribution());
+        assertEquals(100 * um, after.robustness().structureMass().percent(), 1e-3 * 100 * um);
+        assertEquals(100 * Math.hypot(um, 2 * uw), after.robustness().structureStiffness().percent(),
+                1e-3 * 100 * Math.hypot(um, 2 * uw));
+        assertEquals(0, CliTest.run("robustness", project.toString(), "--samples", "200").code(),
+                "and its tolerances run");
+    }
+
+    @Test
+    void tolerancesTheUserTypedAreKept(@TempDir Path dir) throws Exception {
+        Path project = dir.resolve("fan.json");
+        Files.copy(Path.of("presets/rooftop-fan-platform.json"), project); // states both structure tolerances
+        Project before = ProjectReader.read(project).project();
+        assertEquals(0, CliTest.run("identify", FLOOR, "--write-structure", project.toString()).code());
+        Project after = ProjectReader.read(project).project();
+        assertEquals(before.robustness(), after.robustness());
+        assertEquals(4200.0, after.toStructure().modalMass(), 150.0);
     }
 
     @Test
@@ -162,6 +185,27 @@ class IdentifyCommandTest {
         Run m = CliTest.run("identify", FLOOR, "--modes", "7");
         assertEquals(Cli.BAD_INPUT, m.code());
         assertTrue(m.err().contains("--modes"), m.err());
+    }
+
+    @Test
+    void semicolonsDecimalCommasAndAZeroHertzLineAreRead(@TempDir Path dir) throws Exception {
+        // the shipped floor file rewritten as a spreadsheet in a decimal-comma locale would save it,
+        // with a 0 Hz line in front: the same fit (ImpactTestPresetTest's floor)
+        StringBuilder b = new StringBuilder("frequency_Hz;real;imag;coherence\n0;0;0;0\n");
+        for (String line : Files.readAllLines(Path.of(FLOOR))) {
+            if (!line.startsWith("#") && !line.startsWith("frequency")) {
+                b.append(line.replace(',', ';').replace('.', ',')).append('\n');
+            }
+        }
+        Path file = dir.resolve("comma.csv");
+        Files.writeString(file, b.toString());
+        Run comma = CliTest.run("identify", file.toString(), "--json");
+        Run plain = CliTest.run("identify", FLOOR, "--json");
+        assertEquals(0, comma.code(), comma.err());
+        JsonObject a = strict(comma.out());
+        JsonObject p = strict(plain.out());
+        assertEquals(p.get("lines").getAsInt(), a.get("lines").getAsInt());
+        assertEquals(p.getAsJsonArray("modes").toString(), a.getAsJsonArray("modes").toString());
     }
 
     @Test
