@@ -15,6 +15,8 @@ import java.util.Arrays;
  */
 public final class RealRoots {
     private static final int MAX_ITERATIONS = 200;
+    /** Enough halvings to take any finite bracket of doubles down to a few ulps. */
+    private static final int BISECTIONS = 2100;
 
     private RealRoots() {
     }
@@ -111,7 +113,22 @@ public final class RealRoots {
             }
             x = next;
         }
-        return x;
+        // Newton from far outside (a bracket up to Cauchy's bound, a high degree) can shrink the
+        // bracket by only a factor (d - 1)/d per step and run out of steps far from the root; the
+        // bracket is still valid, so finish by bisection, which halves it every step.
+        for (int i = 0; i < BISECTIONS && hi - lo > 2 * Math.ulp(Math.max(Math.abs(lo), Math.abs(hi))); i++) {
+            double mid = 0.5 * (lo + hi);
+            double fm = RealPolynomials.value(p, mid);
+            if (fm == 0.0) {
+                return mid;
+            }
+            if ((fm < 0) == riseFromLo) {
+                lo = mid;
+            } else {
+                hi = mid;
+            }
+        }
+        return 0.5 * (lo + hi);
     }
 
     private static double[] derivative(double[] p) {

@@ -57,6 +57,37 @@ public final class AbsorberSensitivity {
         return out;
     }
 
+    /**
+     * H_pq at one frequency from the factored form (G_pq + Z Delta) / (1 + Z G_aa), each modal and
+     * absorber term evaluated on its own: no expanded polynomial, so no loss of digits at sharp or
+     * flat peaks (the check of the expanded transfer function's value near an optimum).
+     *
+     * @param system the system
+     * @param forcePoint where the force acts
+     * @param responsePoint where the displacement is taken
+     * @param g frequency ratio omega / omega_ref
+     * @return H_pq(i g), times k_ref
+     */
+    public static Complex value(ModalSystem system, String forcePoint, String responsePoint, double g) {
+        Complex s = new Complex(0, g);
+        Complex gpq = receptance(system, responsePoint, forcePoint, s);
+        if (system.absorbers().isEmpty()) {
+            return gpq;
+        }
+        String a = system.absorbers().get(0).point();
+        Complex gaa = receptance(system, a, a, s);
+        Complex delta = gpq.multiply(gaa).subtract(receptance(system, responsePoint, a, s)
+                .multiply(receptance(system, a, forcePoint, s)));
+        Complex s2 = s.multiply(s);
+        Complex z = Complex.ZERO;
+        for (int j = 0; j < system.absorbers().size(); j++) {
+            double[] b = system.spring(j);
+            Complex k = new Complex(b[0], b[1] * g);
+            z = z.add(s2.multiply(k).multiply(system.massRatio(j)).divide(s2.add(k)));
+        }
+        return gpq.add(z.multiply(delta)).divide(Complex.ONE.add(z.multiply(gaa)));
+    }
+
     /** G_pq(s) = sum_r phi_r(p) phi_r(q) / kappa_r(s), times k_ref. */
     private static Complex receptance(ModalSystem system, String p, String q, Complex s) {
         Complex out = Complex.ZERO;

@@ -93,6 +93,26 @@ public final class OptimumCommand implements Callable<Integer> {
             description = "CSV of cases: columns mass_ratio and structure_damping_ratio (others optional)")
     private Path cases;
 
+    @Option(names = "--absorbers", paramLabel = "N",
+            description = "several absorbers of equal mass sharing the mass ratio, on the structure's one mode"
+                    + " (force to displacement, peak objective; default 1)")
+    private Integer absorbers;
+
+    @Option(names = "--tuning", paramLabel = "uniform|individual",
+            description = "with --absorbers: frequencies spread uniformly with one damping ratio, or each absorber"
+                    + " tuned and damped on its own (default uniform)")
+    private String tuning;
+
+    @Option(names = "--second-mode", paramLabel = "RATIO",
+            description = "with --absorbers: a second mode at RATIO times the first (same modal mass and damping),"
+                    + " to report the spillover")
+    private Double secondMode;
+
+    @Option(names = "--second-mode-shape", paramLabel = "PHI", defaultValue = "1",
+            description = "the second mode's shape value at the absorbers' point, the first's being 1 (default"
+                    + " ${DEFAULT-VALUE})")
+    private double secondModeShape;
+
     @Option(names = "--json", description = "print a JSON array of objects")
     private boolean json;
 
@@ -117,6 +137,9 @@ public final class OptimumCommand implements Callable<Integer> {
             case "variance" -> true;
             default -> throw new InvalidInputException("--objective", objective, "peak or variance");
         };
+        if (absorbers != null || tuning != null || secondMode != null) {
+            return AbsorberSetRun.run(this, spec.commandLine().getOut());
+        }
         List<PeakProblem> problems = cases == null ? fromOptions() : fromCases(cases);
         PrintWriter out = spec.commandLine().getOut();
         OptimumTable.Streamed table = new OptimumTable.Streamed(json ? OptimumTable.Format.JSON
@@ -159,6 +182,18 @@ public final class OptimumCommand implements Callable<Integer> {
         } catch (InvalidInputException refused) {
             return refused;
         }
+    }
+
+    /** @return the options as typed, for {@link AbsorberSetRun} */
+    Options options() {
+        return new Options(massRatio, structureDamping, excitation, response, objective, band, fixedDamping, fixedTuning,
+                strokeLimit, cases, absorbers, tuning, secondMode, secondModeShape, json, csv);
+    }
+
+    /** The options of one run, as typed. */
+    record Options(String massRatio, String structureDamping, String excitation, String response, String objective,
+            String band, Double fixedDamping, Double fixedTuning, Double strokeLimit, Path cases, Integer absorbers,
+            String tuning, Double secondMode, double secondModeShape, boolean json, boolean csv) {
     }
 
     private static final Map<String, String> OPTIONS = Map.of("mass ratio", "--mass-ratio", "structure damping",
@@ -274,7 +309,7 @@ public final class OptimumCommand implements Callable<Integer> {
                 new InvalidInputException(field, PlainText.quote(text), "one of " + Ids.list(RESPONSES.toArray(new ResponseKind[0]))));
     }
 
-    private static double[] parseBand(String text) {
+    static double[] parseBand(String text) {
         if (text == null) {
             return new double[] {0.0, Double.POSITIVE_INFINITY};
         }

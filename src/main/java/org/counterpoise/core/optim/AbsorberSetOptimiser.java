@@ -1,0 +1,122 @@
+package org.counterpoise.core.optim;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+import org.counterpoise.core.model.ExcitationKind;
+import org.counterpoise.core.model.Tuning;
+import org.counterpoise.core.response.ResponseKind;
+
+/**
+ * The exact H-infinity optimum of several absorbers of equal mass on one mode: the tunings and
+ * dampings that minimise the peak of |X k1 / F| over the band, with a uniform spread (three
+ * variables) or each absorber tuned and damped on its own (2n variables).
+ *
+ * <p>Method. The peak is the largest of finitely many smooth functions of the variables: the
+ * interior maxima of |H|^2 (found exactly by the polynomial peak search on the exact rational H of
+ * {@code ModalSystem}) and the band ends. From each seed, sequential linear programming in a trust
+ * region ({@link MinimaxTrustRegion}) approaches a minimax point; Newton's method on its first-order
+ * conditions ({@link MinimaxKkt}) then makes the active maxima equal to round-off. Seeds: for the
+ * uniform spread, the certified single-absorber optimum of the same total mass ({@link
+ * HInfinityOptimiser}; Den Hartog's equal-peak design when the structure is undamped and the band
+ * open) split into n equal absorbers, unspread and spread by sqrt(mu) / 2 and sqrt(mu) with less damping, and the
+ * two best points of the coarse scan; for individual tuning, the uniform optimum and the two best
+ * scan points (a scan point whose peak is 20 % above a result already found is not pursued). The
+ * lowest result is certified ({@link AbsorberSetCertificate}): the active maxima
+ * are equal to 1e-9, the first-order conditions hold, no point of the coarse global scan is lower
+ * and no small random move lowers the peak. A scan point that is lower restarts the search from it
+ * (at most twice).
+ */
+public final class AbsorberSetOptimiser {
+    private static final double[] ACTIVE_TOLERANCES = {1e-8, 1e-6, 1e-4, 1e-3, 1e-2};
+    private static final int MAX_RESTARTS = 2;
+    private static final double SEED_CUTOFF = 1.2;
+
+    private AbsorberSetOptimiser() {
+    }
+
+    /**
+     * @param problem the problem
+     * @return the optimum with its certificate
+     */
+    public static AbsorberSetOptimum optimise(AbsorberSetProblem problem) {
+        EvaluationCounter counter = new EvaluationCounter();
+        AbsorberSetVariables v = new AbsorberSetVariables(problem);
+        List<double[]> scan = AbsorberSetScan.scan(v, counter);
+        List<double[]> seeds = seeds(v, scan, counter);
+        int structured = seeds.size() - Math.min(2, scan.size()); // the closed-form seeds are always pursued
+        double[] best = null;
+        double bestPeak = Double.POSITIVE_INFINITY;
+        AbsorberSetCertificate certificate = null;
+        for (int restart = 0; restart <= MAX_RESTARTS; restart++) {
+            for (int i = 0; i < seeds.size(); i++) {
+                double[] seed = seeds.get(i);
+                if (i >= structured && v.peak(seed) > SEED_CUTOFF * bestPeak) {
+                    continue; // as for one absorber: a seed far above an optimum already found is not pursued
+                }
+                double[] p = localOptimum(v, seed, counter);
+                double peak = v.peak(p);
+                counter.add(1);
+                if (peak < bestPeak) {
+                    best = p;
+                    bestPeak = peak;
+                }
+            }
+            certificate = AbsorberSetCheck.certify(v, best, bestPeak, scan, counter);
+            double[] lowest = scan.get(0);
+            if (lowest[lowest.length - 1] >= bestPeak * (1 - AbsorberSetCertificate.NOT_BEATEN)) {
+                break;
+            }
+            seeds = List.of(Arrays.copyOf(lowest, lowest.length - 1));
+        }
+        return new AbsorberSetOptimum(problem, v.design(best), bestPeak, certificate, counter.count());
+    }
+
+    /** Trust-region linear programming, then Newton on the optimality conditions of the active set. */
+    private static double[] localOptimum(AbsorberSetVariables v, double[] seed, EvaluationCounter counter) {
+        double[] p = MinimaxTrustRegion.minimise(v, seed, counter);
+        double peak = v.peak(p);
+        for (double tolerance : ACTIVE_TOLERANCES) {
+            double[] q = MinimaxKkt.polish(v, p, tolerance, counter);
+            if (q != null) {
+                double qPeak = v.peak(q);
+                counter.add(1);
+                if (qPeak <= peak * (1 + 1e-12)) {
+                    return q; // the first active set whose conditions are solved without raising the peak
+                }
+            }
+        }
+        return p;
+    }
+
+    private static List<double[]> seeds(AbsorberSetVariables v, List<double[]> scan, EvaluationCounter counter) {
+        AbsorberSetProblem problem = v.problem();
+        List<double[]> seeds = new ArrayList<>();
+        if (problem.tuning() == AbsorberSetTuning.UNIFORM) {
+            PeakOptimum single = HInfinityOptimiser.optimise(PeakProblem.free(ExcitationKind.FORCE,
+                    ResponseKind.DISPLACEMENT, problem.massRatio(), problem.structureDamping(), problem.bandLow(),
+                    problem.bandHigh()));
+            Tuning t = single.tuning();
+            counter.add(single.evaluations());
+            double zeta = Math.max(t.dampingRatio(), 2 * AbsorberSetProblem.MIN_DAMPING);
+            seeds.add(v.point(t.tuningRatio(), 0.0, zeta));
+            if (problem.count() > 1) {
+                // Spread seeds scale with sqrt(mu), as the coupled frequencies of one absorber do
+                // (reference sheet, section 3: Omega^2 = 1 + mu/2 -/+ sqrt(mu + mu^2/4)); the
+                // unspread design is symmetric in the spread, so it cannot leave it by itself.
+                double root = Math.sqrt(problem.massRatio());
+                seeds.add(v.point(t.tuningRatio(), Math.min(AbsorberSetProblem.MAX_SPREAD, 0.5 * root), zeta / 2));
+                seeds.add(v.point(t.tuningRatio(), Math.min(AbsorberSetProblem.MAX_SPREAD, root), zeta / 3));
+            }
+        } else {
+            AbsorberSetOptimum uniform = AbsorberSetOptimiser.optimise(problem.with(AbsorberSetTuning.UNIFORM));
+            counter.add(uniform.evaluations());
+            seeds.add(v.individualPoint(uniform.design()));
+            return seeds; // the scan's random points are far coarser; one that beats the result restarts it
+        }
+        for (int i = 0; i < Math.min(2, scan.size()); i++) {
+            seeds.add(Arrays.copyOf(scan.get(i), scan.get(i).length - 1));
+        }
+        return seeds;
+    }
+}
