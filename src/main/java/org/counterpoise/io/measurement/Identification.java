@@ -1,11 +1,15 @@
 package org.counterpoise.io.measurement;
 
 import java.util.Optional;
+import java.util.function.Supplier;
+import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.identify.AddedMass;
 import org.counterpoise.core.identify.CircleFit;
+import org.counterpoise.core.identify.HalfPowerPeak;
 import org.counterpoise.core.identify.IdentifiedMode;
 import org.counterpoise.core.identify.LogDecrement;
 import org.counterpoise.core.identify.MeasuredFrf;
+import org.counterpoise.core.identify.ModalFit;
 import org.counterpoise.core.identify.ModalModel;
 
 /** What one identification found, from an FRF, a free decay or an added mass; rendered by JSON, text and charts. */
@@ -31,6 +35,37 @@ public sealed interface Identification {
         @Override
         public String method() {
             return model.method().id();
+        }
+
+        /**
+         * Fits the lines given: the least-squares model and, for one mode, the classical half-power
+         * and circle-fit estimates beside it as a check (left out when they cannot be made). The one
+         * route of the command line and the wizard.
+         * @param source the file as the user named it
+         * @param unit the kind and unit of the values read
+         * @param fitted the measured lines within the band to fit
+         * @param modes the number of modes in the band
+         * @param residuals whether to fit residual terms for the modes outside the band
+         * @return the identification
+         * @throws InvalidInputException (fields "modes", "band") when the lines do not give that many modes
+         */
+        public static Frf fit(String source, FrfUnit unit, MeasuredFrf fitted, int modes, boolean residuals) {
+            ModalModel model = ModalFit.fit(fitted, modes, residuals);
+            Optional<IdentifiedMode> halfPower = Optional.empty();
+            Optional<CircleFit> circle = Optional.empty();
+            if (modes == 1) {
+                halfPower = optional(() -> HalfPowerPeak.estimate(fitted));
+                circle = optional(() -> CircleFit.fit(fitted));
+            }
+            return new Frf(source, unit, fitted, model, halfPower, circle);
+        }
+
+        private static <T> Optional<T> optional(Supplier<T> estimate) {
+            try {
+                return Optional.of(estimate.get());
+            } catch (InvalidInputException e) {
+                return Optional.empty(); // the fit itself is reported; a check that cannot be made is left out
+            }
         }
     }
 

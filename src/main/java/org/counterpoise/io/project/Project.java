@@ -112,10 +112,12 @@ public record Project(String name, String notes, StructureInput structure, Distu
      * an absent {@code absorber.method}; version 3 (issue 13) added the acceptance criterion, the
      * rotor's other orders, the balance grade and the display convention, and replaced
      * {@code absorber.target} by a criterion to meet; version 4 (issue 14) added the hardware choices,
-     * the display unit system, the document number, the revision history and the sign-off. How older
+     * the display unit system, the document number, the revision history and the sign-off; version 5
+     * (issue 15) added {@code structure.measured}, where the structure's data came from when they were
+     * identified from a measurement (an older file has none: its structure was typed). How older
      * files are read: {@link FormatMigration}.
      */
-    public static final int FORMAT_VERSION = 4;
+    public static final int FORMAT_VERSION = 5;
 
     /** The oldest project-file format version this build reads (and migrates on load). */
     public static final int OLDEST_FORMAT_VERSION = 1;

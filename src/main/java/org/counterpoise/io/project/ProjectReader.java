@@ -219,8 +219,10 @@ public final class ProjectReader {
             d.finish();
         }
         double phi = s.number("mode_shape_at_absorber", 1.0);
+        JsonFields m = s.optionalObject(MeasuredSource.KEY);
+        MeasuredSource measured = m == null ? null : MeasuredSource.read(m);
         s.finish();
-        return new StructureInput(mass, weight, stiffness, frequency, deflection, damping, phi);
+        return new StructureInput(mass, weight, stiffness, frequency, deflection, damping, phi, measured);
     }
 
     private static DisturbanceInput disturbance(JsonFields d) {

@@ -81,6 +81,25 @@ public final class ProjectWriter {
             o.add("damping", d);
         }
         o.addProperty("mode_shape_at_absorber", s.modeShapeAtAbsorber());
+        if (s.measured() != null) {
+            o.add(MeasuredSource.KEY, measured(s.measured()));
+        }
+        return o;
+    }
+
+    private static JsonObject measured(MeasuredSource m) {
+        JsonObject o = new JsonObject();
+        o.addProperty("method", m.method());
+        if (!m.file().isEmpty()) {
+            o.addProperty("file", m.file());
+        }
+        if (!m.date().isEmpty()) {
+            o.addProperty("date", m.date());
+        }
+        putNumber(o, "normalised_residual", m.normalisedResidual());
+        put(o, "natural_frequency_sd", m.naturalFrequencySd());
+        putNumber(o, "damping_ratio_sd", m.dampingRatioSd());
+        put(o, "modal_mass_sd", m.modalMassSd());
         return o;
     }
 

@@ -11,10 +11,12 @@ import org.counterpoise.core.design.MethodComparison;
 import org.counterpoise.core.realisation.Realisation;
 import org.counterpoise.core.robust.MonteCarloOutcome;
 import org.counterpoise.core.robust.MonteCarloResult;
+import org.counterpoise.io.project.MeasuredSource;
 import org.counterpoise.io.project.ProjectIdentity;
 import org.counterpoise.io.text.ComparisonContent;
 import org.counterpoise.io.text.DesignContent;
 import org.counterpoise.io.text.HardwareContent;
+import org.counterpoise.io.text.MeasuredSourceContent;
 import org.counterpoise.io.text.ReportContent;
 import org.counterpoise.io.text.ReportKey;
 import org.counterpoise.io.text.ReportSection;
@@ -169,7 +171,7 @@ public record SheetContent(String projectName, String notes, String date, String
             MonteCarloOutcome monteCarlo, ProjectIdentity identity, MethodComparison comparison,
             AmplitudeConvention convention) {
         return of(r, notes, date, revision, monteCarlo, identity, comparison, convention, Optional.empty(),
-                UnitSystem.SI);
+                UnitSystem.SI, null);
     }
 
     /**
@@ -183,13 +185,15 @@ public record SheetContent(String projectName, String notes, String date, String
      * @param convention the convention response values are stated in
      * @param realisation the design's hardware, when made
      * @param units the unit system of the tables, the warnings and the sketch's dimensions
+     * @param measured where the structure's data came from when measured, or null when typed
      * @return the sheet content with the comparison's table and the arrangement sketch
      */
     public static SheetContent of(DesignResult r, String notes, String date, String revision,
             MonteCarloOutcome monteCarlo, ProjectIdentity identity, MethodComparison comparison,
-            AmplitudeConvention convention, Optional<Realisation> realisation, UnitSystem units) {
-        ReportContent report = DesignContent.of(r, identity, monteCarlo, units)
-                .with(ComparisonContent.of(comparison, r.study()));
+            AmplitudeConvention convention, Optional<Realisation> realisation, UnitSystem units,
+            MeasuredSource measured) {
+        ReportContent report = MeasuredSourceContent.with(DesignContent.of(r, identity, monteCarlo, units)
+                .with(ComparisonContent.of(comparison, r.study())), measured);
         if (realisation.isPresent()) {
             report = HardwareContent.with(report, realisation.get(), r);
         }

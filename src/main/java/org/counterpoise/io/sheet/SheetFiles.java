@@ -32,6 +32,7 @@ import org.counterpoise.io.chart.ChartFiles;
 import org.counterpoise.io.chart.ChartTheme;
 import org.counterpoise.io.export.CurveCsv;
 import org.counterpoise.io.export.ResultJson;
+import org.counterpoise.io.project.MeasuredSource;
 import org.counterpoise.io.project.ProjectIdentity;
 import org.counterpoise.io.text.DesignContent;
 import org.counterpoise.io.text.UnitSystem;
@@ -169,7 +170,7 @@ public final class SheetFiles {
             ProjectIdentity identity, List<SheetPanel> panels, AmplitudeConvention convention, OutputStream out)
             throws IOException {
         writeSheet(dossier, notes, date, revision, identity, panels, convention, HardwareChoice.DEFAULT,
-                UnitSystem.SI, out);
+                UnitSystem.SI, null, out);
     }
 
     /**
@@ -183,24 +184,26 @@ public final class SheetFiles {
      * @param convention the convention response values are stated in
      * @param hardware the project's hardware choices (the realisation the sketch and part list show)
      * @param units the project's display units
+     * @param measured where the structure's data came from when measured, or null when typed
      * @param out where the PDF goes
      * @throws IOException when the stream cannot be written
      */
     public static void writeSheet(DesignDossier dossier, String notes, String date, String revision,
             ProjectIdentity identity, List<SheetPanel> panels, AmplitudeConvention convention, HardwareChoice hardware,
-            UnitSystem units, OutputStream out) throws IOException {
+            UnitSystem units, MeasuredSource measured, OutputStream out) throws IOException {
         List<XYChart> charts = charts(dossier.design(), dossier.curves(), convention, units);
-        SheetWriter.write(() -> content(dossier, notes, date, revision, identity, convention, hardware, units),
-                charts, panels, out);
+        SheetWriter.write(() -> content(dossier, notes, date, revision, identity, convention, hardware, units,
+                measured), charts, panels, out);
     }
 
     private static SheetContent content(DesignDossier dossier, String notes, String date, String revision,
-            ProjectIdentity identity, AmplitudeConvention convention, HardwareChoice hardware, UnitSystem units) {
+            ProjectIdentity identity, AmplitudeConvention convention, HardwareChoice hardware, UnitSystem units,
+            MeasuredSource measured) {
         // the dossier's Monte Carlo, comparison and realisation: computed once for the project
         // state, whoever asked first
         return SheetContent.of(dossier.design(), notes, date, revision, dossier.monteCarlo(ProgressListener.NONE),
                 identity, dossier.comparison(ProgressListener.NONE), convention, realisation(dossier, hardware),
-                units);
+                units, measured);
     }
 
     /** The realisation, or none when the hardware cannot be sized for this design (the report says why). */
@@ -241,6 +244,7 @@ public final class SheetFiles {
         private AmplitudeConvention convention = AmplitudeConvention.PEAK;
         private HardwareChoice hardware = HardwareChoice.DEFAULT;
         private UnitSystem units = UnitSystem.SI;
+        private MeasuredSource measured;
 
         /** @param dossier the design whose sheet and exports are written, with its analyses */
         public Outputs(DesignDossier dossier) {
@@ -272,6 +276,15 @@ public final class SheetFiles {
         }
 
         /**
+         * @param source where the structure's data came from when measured, or null when typed
+         * @return this
+         */
+        public Outputs measured(MeasuredSource source) {
+            this.measured = source;
+            return this;
+        }
+
+        /**
          * The sheet without project identity lines.
          * @param pdf the PDF
          * @param notes the project's notes, or empty
@@ -296,7 +309,8 @@ public final class SheetFiles {
         public Outputs sheet(Path pdf, String notes, String date, String revision, String option,
                 ProjectIdentity identity) {
             return add(pdf, "sheet", option, out -> SheetWriter.write(
-                    () -> content(dossier, notes, date, revision, identity, convention, hardware, units), charts(),
+                    () -> content(dossier, notes, date, revision, identity, convention, hardware, units, measured),
+                    charts(),
                     panels, out));
         }
 

@@ -49,8 +49,8 @@ public final class CheckText {
         Dimension d = c.dimension();
         List<Field> fields = List.of(
                 new Field(ReportKey.CHECK_KIND, "check", new Words(words, List.of(c.kind().id()))),
-                new Field(ReportKey.CHECK_DEMAND, "demand", new Quantity(c.demand(), d, QuantityFormat.FIGURES)),
-                new Field(ReportKey.CHECK_CAPACITY, "capacity", new Quantity(c.capacity(), d, QuantityFormat.FIGURES)),
+                new Field(ReportKey.CHECK_DEMAND, "demand", amount(c, c.demand())),
+                new Field(ReportKey.CHECK_CAPACITY, "capacity", amount(c, c.capacity())),
                 // the unit of demand and capacity in the JSON; tables show each value with its unit
                 new Field(ReportKey.CHECK_UNIT, "", new Words(jsonUnit(d), List.of())),
                 new Field(ReportKey.CHECK_UTILISATION, "utilisation", new Percent(c.utilisation(), 3)),
@@ -58,6 +58,18 @@ public final class CheckText {
                 // the source goes under the table as a sentence (ReportTable.grid), in the JSON as a field
                 new Field(ReportKey.CHECK_SOURCE, "", new Words(c.source(), List.of())));
         return new ReportRow(ReportKey.CHECK, words, "", new Fields("", fields), c.source(), "");
+    }
+
+    /**
+     * A check's demand or capacity as shown: a deviation from the design (the springs' rate off the
+     * design's) reads as a percentage, every other value in its dimension's units; the JSON writes the
+     * same SI number either way.
+     */
+    private static ReportValue amount(DesignCheck c, double value) {
+        return switch (c.kind()) {
+            case SPRING_RATE -> new Percent(value, 3);
+            default -> new Quantity(value, c.dimension(), QuantityFormat.FIGURES);
+        };
     }
 
     /** The unit the JSON writes a dimension's values in: Hz for frequencies, else SI. */

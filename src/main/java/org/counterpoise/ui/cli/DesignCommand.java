@@ -16,6 +16,7 @@ import org.counterpoise.io.text.ComparisonContent;
 import org.counterpoise.io.text.DesignContent;
 import org.counterpoise.io.text.DesignReport;
 import org.counterpoise.io.text.HardwareContent;
+import org.counterpoise.io.text.MeasuredSourceContent;
 import org.counterpoise.io.text.ReportContent;
 import org.counterpoise.io.text.UnitSystem;
 import picocli.CommandLine.Command;
@@ -53,7 +54,8 @@ public final class DesignCommand implements Callable<Integer> {
         UnitSystem shown = json ? UnitSystem.SI : DisplayUnitSystem.of(units, loaded.project());
         ReportContent designed = DesignContent.of(result, json ? ProjectIdentity.EMPTY : loaded.project().identity(),
                 Optional.empty(), shown).with(ComparisonContent.of(comparison, result.study()));
-        ReportContent content = HardwareContent.with(designed, dossier, loaded.project().hardware())
+        ReportContent content = HardwareContent.with(MeasuredSourceContent.with(designed,
+                loaded.project().structure().measured()), dossier, loaded.project().hardware())
                 .shownIn(DisplayConvention.of(convention, loaded.project()));
         spec.commandLine().getOut().print(PlainText.forTerminal(json ? ResultJson.toJson(content)
                 : DesignReport.render(content)));

@@ -4,22 +4,17 @@ import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
-import java.util.Optional;
 import java.util.concurrent.Callable;
-import java.util.function.Supplier;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.identify.AddedMass;
-import org.counterpoise.core.identify.CircleFit;
 import org.counterpoise.core.identify.FrfKind;
-import org.counterpoise.core.identify.HalfPowerPeak;
 import org.counterpoise.core.identify.IdentifiedMode;
 import org.counterpoise.core.identify.LogDecrement;
 import org.counterpoise.core.identify.MeasuredFrf;
-import org.counterpoise.core.identify.ModalFit;
-import org.counterpoise.core.identify.ModalModel;
 import org.counterpoise.core.identify.RationalFraction;
 import org.counterpoise.core.units.Unit;
 import org.counterpoise.io.AtomicFiles;
@@ -159,28 +154,13 @@ public final class IdentifyCommand implements Callable<Integer> {
         }
         try {
             MeasuredFrf fitted = band == null ? all : band(all);
-            ModalModel model = ModalFit.fit(fitted, modes, !noResiduals);
-            Optional<IdentifiedMode> halfPower = Optional.empty();
-            Optional<CircleFit> circle = Optional.empty();
-            if (modes == 1) { // the classical estimates, as a check beside the fit
-                halfPower = optional(() -> HalfPowerPeak.estimate(fitted));
-                circle = optional(() -> CircleFit.fit(fitted));
-            }
-            return new Identification.Frf(file.toString(), unit, fitted, model, halfPower, circle);
+            return Identification.Frf.fit(file.toString(), unit, fitted, modes, !noResiduals);
         } catch (InvalidInputException e) {
             throw switch (e.field()) {
                 case "modes" -> e.renamed("--modes");
                 case "band" -> e.renamed(band == null ? "--band (the whole file)" : "--band");
                 default -> e;
             };
-        }
-    }
-
-    private static <T> Optional<T> optional(Supplier<T> estimate) {
-        try {
-            return Optional.of(estimate.get());
-        } catch (InvalidInputException e) {
-            return Optional.empty(); // the fit itself is reported; a check that cannot be made is left out
         }
     }
 
@@ -295,12 +275,12 @@ public final class IdentifyCommand implements Callable<Integer> {
     }
 
     private String writeStructure(Identification result) throws IOException {
-        List<IdentifiedMode> found = result instanceof Identification.Frf f ? f.model().modes() : List.of();
-        if (found.isEmpty()) {
+        if (!(result instanceof Identification.Frf fit) || fit.model().modes().isEmpty()) {
             throw new InvalidInputException("--write-structure", PlainText.escape(project.toString()),
                     "an FRF fit, which gives the modal mass (a decay gives none; with --added-mass the damping is"
                             + " unknown)");
         }
+        List<IdentifiedMode> found = fit.model().modes();
         if (mode < 1 || mode > found.size()) {
             throw new InvalidInputException("--mode", Integer.toString(mode), "1 to " + found.size()
                     + " (the modes identified, lowest first)");
@@ -314,7 +294,8 @@ public final class IdentifyCommand implements Callable<Integer> {
                     + " (is the FRF a driving-point measurement?)");
         }
         try {
-            for (String unknown : StructureFromMeasurement.write(project, chosen).unknownFields()) {
+            LocalDate today = LocalDate.now();
+            for (String unknown : StructureFromMeasurement.write(project, fit, chosen, today).unknownFields()) {
                 spec.commandLine().getErr().println("note: " + PlainText.escape(project.toString()) + ": field "
                         + PlainText.quote(unknown) + " is not part of the project format and was not kept");
             }

@@ -72,6 +72,7 @@ public final class SheetCommand implements Callable<Integer> {
         SheetFiles.Outputs outputs = new SheetFiles.Outputs(dossier)
                 .convention(DisplayConvention.of(convention, loaded.project()))
                 .hardware(loaded.project().hardware(), DisplayUnitSystem.of(units, loaded.project()))
+                .measured(loaded.project().structure().measured())
                 .sheet(output, loaded.project().notes(), issued, mark, "--output", identity)
                 .sparing(file, "the project file being read")
                 .panel(RunUpPanel.of(loaded.project().withDisplayUnits(DisplayUnitSystem.of(units, loaded.project())),

@@ -191,7 +191,7 @@ class HardwareFileTest {
                 DamperKind.EDDY_CURRENT, new EddyCurrentChoice(Conductor.COPPER, 0.4, 0.006), ElastomerChoice.DEFAULT,
                 30_000, 0.01, 0.02);
         JsonObject o = JsonParser.parseString(ProjectWriter.toJson(FAN.withHardware(h))).getAsJsonObject();
-        assertEquals(4, o.get("format_version").getAsInt());
+        assertEquals(Project.FORMAT_VERSION, o.get("format_version").getAsInt());
         assertEquals("si", o.get("display_units").getAsString());
         JsonObject hw = o.getAsJsonObject("hardware");
         assertEquals("en10270-1-sh", hw.get("spring_material").getAsString());

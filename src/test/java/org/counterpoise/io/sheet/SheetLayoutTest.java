@@ -133,7 +133,7 @@ class SheetLayoutTest {
                             base.warnings());
                     SheetContent content = SheetContent.of(r, "", "2026-11-30", "C",
                             dossier.monteCarlo(ProgressListener.NONE), IDENTITY, dossier.comparison(ProgressListener.NONE),
-                            AmplitudeConvention.PEAK, Optional.of(realisation), units);
+                            AmplitudeConvention.PEAK, Optional.of(realisation), units, null);
                     SketchFigures sketch = content.sketch().orElseThrow();
                     assertEquals(arrangement == SpringArrangement.OPPOSED_PRELOADED_PAIRS, sketch.opposed());
                     assertEquals(SketchFigures.length(0.0912, units), sketch.freeLength().orElseThrow());

@@ -74,6 +74,8 @@ class HardwareReportTest {
         assertEquals(4, grid.cells().size());
         // the realisation's first spring check is the springs' total rate against the 2 % rate tolerance
         assertEquals("springs' total rate off the design's, against the rate tolerance", grid.cells().get(0).get(0));
+        // a deviation reads as a percentage: the 2 % rate tolerance of the hand-made tolerances
+        assertEquals("2.00 %", grid.cells().get(0).get(2));
         // surge: 18 Hz against 150 Hz, 12.0 %; solid: 30 mm against 25 mm, 120 %, fails
         assertEquals(List.of("forcing against the spring's surge frequency", "18.00 Hz", "150.0 Hz", "12.0 %",
                 "passes"), grid.cells().get(1));

@@ -10,12 +10,14 @@ import com.google.gson.stream.JsonReader;
 import java.io.StringReader;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.time.LocalDate;
 import java.util.Locale;
 import org.counterpoise.core.identify.FrfKind;
 import org.counterpoise.core.identify.IdentifiedMode;
 import org.counterpoise.core.identify.ModalFit;
 import org.counterpoise.io.measurement.FrfCsv;
 import org.counterpoise.io.measurement.FrfUnit;
+import org.counterpoise.io.project.MeasuredSource;
 import org.counterpoise.io.project.Project;
 import org.counterpoise.io.project.ProjectReader;
 import org.counterpoise.ui.cli.CliTest.Run;
@@ -89,6 +91,16 @@ class IdentifyCommandTest {
         assertEquals(before.name(), after.name());
         assertEquals(23.0, after.toStructure().naturalFrequency() / (2 * Math.PI), 0.02);
         assertEquals(4200.0, after.toStructure().modalMass(), 150.0);
+        // the structure says where it came from (format 5, structure.measured)
+        MeasuredSource source = after.structure().measured();
+        assertEquals("least_squares", source.method());
+        assertEquals(Path.of(FLOOR).getFileName().toString(), source.file());
+        assertEquals(LocalDate.now().toString(), source.date());
+        assertTrue(source.normalisedResidual().getAsDouble() < 0.1, "the demo file's fit is close");
+        assertTrue(source.modalMassSd().si() > 0 && source.naturalFrequencySd().si() > 0);
+        CliTest.Run designed = CliTest.run("design", project.toString());
+        assertEquals(0, designed.code(), "the written project designs");
+        assertTrue(designed.out().contains("structure data from a measurement"), designed.out());
         // the fit's standard uncertainties become normal tolerances of the structure (percent):
         // mass u_m, stiffness k = m omega^2 by first-order propagation sqrt(u_m^2 + (2 u_w)^2)
         IdentifiedMode core = ModalFit.fit(FrfCsv.read(Path.of(FLOOR), FrfUnit.si(FrfKind.ACCELERANCE)), 1, true)
@@ -99,7 +111,6 @@ class IdentifyCommandTest {
         assertEquals(100 * um, after.robustness().structureMass().percent(), 1e-3 * 100 * um);
         assertEquals(100 * Math.hypot(um, 2 * uw), after.robustness().structureStiffness().percent(),
                 1e-3 * 100 * Math.hypot(um, 2 * uw));
-        assertEquals(0, CliTest.run("design", project.toString()).code(), "the written project designs");
         assertEquals(0, CliTest.run("robustness", project.toString(), "--samples", "200").code(),
                 "and its tolerances run");
     }

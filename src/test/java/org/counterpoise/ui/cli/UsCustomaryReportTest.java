@@ -94,7 +94,7 @@ class UsCustomaryReportTest {
         SheetContent sheet = SheetContent.of(dossier.design(), "", "2026-12-03", "A",
                 dossier.monteCarlo(ProgressListener.NONE), pump.identity(), dossier.comparison(ProgressListener.NONE),
                 AmplitudeConvention.PEAK, Optional.of(Realiser.realisation(dossier, pump.hardware())),
-                UnitSystem.US_CUSTOMARY);
+                UnitSystem.US_CUSTOMARY, null);
         for (ReportTable.Section section : sheet.sections()) {
             for (ReportTable.Row row : section.rows()) {
                 assertNoMetricUnit("sheet row " + row.label(), row.value() + " " + row.unit());

@@ -44,6 +44,7 @@ import org.counterpoise.io.chart.ChartFiles;
 import org.counterpoise.io.project.Project;
 import org.counterpoise.io.project.ProjectIdentity;
 import org.counterpoise.io.text.DesignContent;
+import org.counterpoise.io.text.MeasuredSourceContent;
 import org.counterpoise.io.text.DisplayUnits;
 import org.counterpoise.io.text.ReportContent;
 import org.counterpoise.io.text.ReportSection.SectionId;
@@ -208,8 +209,9 @@ final class ResultStep extends Step {
         }
         curves = c;
         // the project's unit system, as the charts and the readout use (the report's sections hold SI)
-        ReportContent content = DesignContent.of(r, ProjectIdentity.EMPTY, Optional.empty(),
-                project == null ? UnitSystem.SI : project.displayUnits());
+        ReportContent content = MeasuredSourceContent.with(DesignContent.of(r, ProjectIdentity.EMPTY, Optional.empty(),
+                project == null ? UnitSystem.SI : project.displayUnits()),
+                project == null ? null : project.structure().measured());
         List<ReportTable.Section> sections = new ArrayList<>(ReportTable.of(content, Set.of()));
         if (r.rms().isPresent()) {
             // Under white noise the design is judged by rms values: they stand in for the harmonic peaks.

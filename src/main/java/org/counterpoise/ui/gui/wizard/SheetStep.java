@@ -25,6 +25,7 @@ import org.apache.pdfbox.rendering.PDFRenderer;
 import org.counterpoise.core.criteria.AmplitudeConvention;
 import org.counterpoise.core.design.DesignDossier;
 import org.counterpoise.core.realisation.HardwareChoice;
+import org.counterpoise.io.project.MeasuredSource;
 import org.counterpoise.io.project.Project;
 import org.counterpoise.io.project.ProjectIdentity;
 import org.counterpoise.io.sheet.RunUpPanel;
@@ -126,12 +127,13 @@ final class SheetStep extends Step {
         ProjectIdentity identity = project.identity();
         HardwareChoice hardware = project.hardware();
         UnitSystem units = project.displayUnits();
+        MeasuredSource measured = project.structure().measured();
         preview.setText("drawing the preview\u2026");
         tasks.current(null, progress -> {
             d.monteCarlo(progress); // the dossier's run, shared with the robustness step: made once
             ByteArrayOutputStream pdf = new ByteArrayOutputStream();
             SheetFiles.writeSheet(d, notes, date, revision, identity, List.of(), AmplitudeConvention.PEAK,
-                    hardware, units, pdf);
+                    hardware, units, measured, pdf);
             try (PDDocument doc = Loader.loadPDF(pdf.toByteArray())) {
                 return new PDFRenderer(doc).renderImageWithDPI(0, 80);
             }
@@ -183,6 +185,7 @@ final class SheetStep extends Step {
             SheetPanel runUp = RunUpPanel.of(p, d.design(), progress); // as `sheet` prints it (the preview is page 1)
             progress.phase("drawing");
             new SheetFiles.Outputs(d).panel(runUp).hardware(p.hardware(), p.displayUnits())
+                    .measured(p.structure().measured())
                     .sheet(file, notes, date, revision, "sheet file", identity)
                     .write(true);
             return file;

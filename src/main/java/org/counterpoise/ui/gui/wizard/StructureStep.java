@@ -1,23 +1,31 @@
 package org.counterpoise.ui.gui.wizard;
 
 import java.awt.BorderLayout;
+import java.time.LocalDate;
 import java.util.List;
+import javax.swing.JButton;
 import javax.swing.JComboBox;
 import javax.swing.JComponent;
 import javax.swing.JLabel;
 import javax.swing.JPanel;
 import javax.swing.JScrollPane;
+import org.counterpoise.core.error.InvalidInputException;
+import org.counterpoise.core.identify.IdentifiedMode;
 import org.counterpoise.core.model.DampingConversions;
 import org.counterpoise.core.model.Structure;
 import org.counterpoise.core.model.StructureConversions;
 import org.counterpoise.core.units.Dimension;
 import org.counterpoise.core.units.Gravity;
 import org.counterpoise.core.units.Unit;
+import org.counterpoise.io.measurement.Identification;
+import org.counterpoise.io.measurement.StructureFromMeasurement;
 import org.counterpoise.io.project.DampingInput;
+import org.counterpoise.io.project.MeasuredSource;
 import org.counterpoise.io.project.Project;
 import org.counterpoise.io.project.QuantityInput;
 import org.counterpoise.io.project.StructureInput;
 import org.counterpoise.io.text.DisplayUnits;
+import org.counterpoise.io.text.MeasuredSourceContent;
 import org.counterpoise.io.text.QuantityFormat;
 import org.counterpoise.io.text.UnitChoices;
 import org.counterpoise.ui.gui.document.ProjectEdits;
@@ -53,7 +61,10 @@ final class StructureStep extends Step {
     private final JLabel derivedStiffness = derived("derived.stiffness");
     private final JLabel derivedFrequency = derived("derived.frequency");
     private final JLabel derivedDamping = derived("derived.damping");
+    private final JLabel measuredNote = derived("structure.measured");
+    private final JButton fromMeasurement = new JButton("From a measured response\u2026");
     private final JComponent page;
+    private MeasurementDialog measurement;
 
     StructureStep() {
         massForm.setName("structure.massForm");
@@ -61,6 +72,10 @@ final class StructureStep extends Step {
         dampingForm.setName("structure.dampingForm");
         Form form = new Form();
         form.heading("The structure, at the point where the absorber will sit");
+        fromMeasurement.setName("structure.fromMeasurement");
+        form.row("Measured?", 'f', fromMeasurement,
+                "Fit the mode to a measured frequency response (CSV) and take its mass, frequency and damping");
+        form.derived("Data from", measuredNote);
         form.row("Given as", 'g', massForm, "Mass, or weight under standard gravity");
         form.row("Value", 'm', mass, "Modal mass or weight");
         form.row("Stiffness given as", 's', stiffnessForm, "How the stiffness is known");
@@ -103,6 +118,25 @@ final class StructureStep extends Step {
             f.onChange(() -> edited(f.fieldId()));
         }
         convertOnFormChange();
+        fromMeasurement.addActionListener(e -> {
+            if (measurement == null) {
+                measurement = new MeasurementDialog(page, this::useMeasured);
+            }
+            measurement.show();
+        });
+    }
+
+    /**
+     * Takes a mode fitted to a measurement as the structure: modal mass, natural frequency and damping
+     * ratio, mode shape 1 (the measured point is the absorber's), as one undoable edit.
+     * @param fit the fit it came from (its file, method and quality go into structure.measured)
+     * @param mode the mode chosen
+     * @throws InvalidInputException when the mode cannot be a structure (a mass not above zero, a
+     *     damping a design does not take), in plain words
+     */
+    private void useMeasured(Identification.Frf fit, IdentifiedMode mode) {
+        StructureInput s = StructureFromMeasurement.structure(fit, mode, LocalDate.now());
+        commitChoice(() -> ProjectEdits.structure("structure.measured", s));
     }
 
     /**
@@ -175,6 +209,11 @@ final class StructureStep extends Step {
     @Override
     void showProject(Project p, boolean loaded) {
         load(p.structure());
+        MeasuredSource m = p.structure().measured();
+        measuredNote.setText(m == null ? "typed (not from a measurement)" : "measured: "
+                + (m.file().isEmpty() ? "" : m.file() + ", ") + (m.date().isEmpty() ? "" : m.date() + ", ")
+                + "typing a value replaces it");
+        measuredNote.setToolTipText(m == null ? null : MeasuredSourceContent.methodWords(m.method()));
     }
 
     @Override

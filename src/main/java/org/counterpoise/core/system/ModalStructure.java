@@ -1,0 +1,71 @@
+package org.counterpoise.core.system;
+
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import org.counterpoise.core.error.Checks;
+import org.counterpoise.core.error.InvalidInputException;
+
+/**
+ * A structure described by its modes (natural frequency, damping ratio, modal mass and mode-shape
+ * values at named points), the structure alone, before any absorber. Every mode names the same
+ * points. Modes are kept in ascending natural frequency. SI units.
+ *
+ * @param modes the modes (at least one), each with the same point names
+ */
+public record ModalStructure(List<Mode> modes) {
+
+    /** Validates the structure. */
+    public ModalStructure {
+        Checks.present("modes", modes, "at least one mode");
+        if (modes.isEmpty()) {
+            throw new InvalidInputException("modes", "none", "at least one mode");
+        }
+        Set<String> points = modes.get(0).shape().keySet();
+        for (int r = 1; r < modes.size(); r++) {
+            if (!modes.get(r).shape().keySet().equals(points)) {
+                throw new InvalidInputException("mode " + (r + 1) + " shape", String.valueOf(modes.get(r).shape().keySet()),
+                        "the same named points as mode 1: " + points);
+            }
+        }
+        List<Mode> sorted = new ArrayList<>(modes);
+        sorted.sort(Comparator.comparingDouble(Mode::naturalFrequency));
+        modes = List.copyOf(sorted);
+    }
+
+    /**
+     * One mode seen at one point: the single-mode structure of the rest of the program.
+     *
+     * @param point the point's name
+     * @param frequency natural frequency, rad/s
+     * @param dampingRatio damping ratio
+     * @param modalMass modal mass at that point (shape value 1), kg
+     * @return the structure
+     */
+    public static ModalStructure singleMode(String point, double frequency, double dampingRatio, double modalMass) {
+        return new ModalStructure(List.of(new Mode(frequency, dampingRatio, modalMass, Map.of(point, 1.0))));
+    }
+
+    /** @return the named points */
+    public Set<String> points() {
+        return modes.get(0).shape().keySet();
+    }
+
+    /** @return the number of modes */
+    public int size() {
+        return modes.size();
+    }
+
+    /**
+     * @param point a point's name
+     * @return the point, when the structure has it
+     */
+    public String requirePoint(String point) {
+        if (!points().contains(point)) {
+            throw new InvalidInputException("point", String.valueOf(point), "one of the structure's named points " + points());
+        }
+        return point;
+    }
+}
