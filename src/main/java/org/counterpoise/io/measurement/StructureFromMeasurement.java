@@ -6,6 +6,7 @@ import java.math.MathContext;
 import java.math.RoundingMode;
 import java.nio.file.Path;
 import java.time.LocalDate;
+import java.util.Locale;
 import java.util.OptionalDouble;
 import org.counterpoise.core.identify.IdentifiedMode;
 import org.counterpoise.core.robust.Tolerance;
@@ -112,9 +113,9 @@ public final class StructureFromMeasurement {
                 r.absorberStiffness(), r.absorberDamping()));
     }
 
-    /** A relative uncertainty in percent, rounded as the structure's values are. */
+    /** A relative uncertainty in percent, to 4 significant figures (the file keeps what is shown). */
     private static double percent(double relative) {
-        return rounded(100.0 * relative);
+        return Double.parseDouble(String.format(Locale.ROOT, "%.4g", 100.0 * relative));
     }
 
     /**

@@ -2,8 +2,10 @@ package org.counterpoise.ui.gui.document;
 
 import org.counterpoise.core.criteria.AmplitudeConvention;
 import org.counterpoise.core.design.DesignMethod;
+import org.counterpoise.core.identify.IdentifiedMode;
 import org.counterpoise.core.realisation.HardwareChoice;
 import org.counterpoise.core.response.ResponseKind;
+import org.counterpoise.io.measurement.StructureFromMeasurement;
 import org.counterpoise.io.project.AbsorberInput;
 import org.counterpoise.io.project.AcceptanceInput;
 import org.counterpoise.io.project.DisturbanceInput;
@@ -31,6 +33,17 @@ public final class ProjectEdits {
      */
     public static Edit structure(String key, StructureInput s) {
         return new Edit(key, "structure", p -> p.withStructure(s));
+    }
+
+    /**
+     * @param s the structure section made from an identified mode (saying where it came from)
+     * @param mode the mode, whose standard uncertainties become the structure's tolerances where the
+     *     project states none ({@link StructureFromMeasurement#withUncertainties})
+     * @return the edit, one undo step
+     */
+    public static Edit measuredStructure(StructureInput s, IdentifiedMode mode) {
+        return new Edit("structure.measured", "structure from a measurement",
+                p -> StructureFromMeasurement.withUncertainties(p.withStructure(s), mode));
     }
 
     /**

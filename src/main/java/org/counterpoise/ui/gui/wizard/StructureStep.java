@@ -128,7 +128,8 @@ final class StructureStep extends Step {
 
     /**
      * Takes a mode fitted to a measurement as the structure: modal mass, natural frequency and damping
-     * ratio, mode shape 1 (the measured point is the absorber's), as one undoable edit.
+     * ratio, mode shape 1 (the measured point is the absorber's), and the fit's uncertainties as the
+     * structure's tolerances where the project states none, as one undoable edit.
      * @param fit the fit it came from (its file, method and quality go into structure.measured)
      * @param mode the mode chosen
      * @throws InvalidInputException when the mode cannot be a structure (a mass not above zero, a
@@ -136,7 +137,7 @@ final class StructureStep extends Step {
      */
     private void useMeasured(Identification.Frf fit, IdentifiedMode mode) {
         StructureInput s = StructureFromMeasurement.structure(fit, mode, LocalDate.now());
-        commitChoice(() -> ProjectEdits.structure("structure.measured", s));
+        commitChoice(() -> ProjectEdits.measuredStructure(s, mode));
     }
 
     /**

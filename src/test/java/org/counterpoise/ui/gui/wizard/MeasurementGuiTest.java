@@ -17,6 +17,7 @@ import javax.swing.RootPaneContainer;
 import javax.swing.SwingUtilities;
 import org.counterpoise.core.model.Structure;
 import org.counterpoise.io.project.MeasuredSource;
+import org.counterpoise.io.project.RobustnessInput;
 import org.counterpoise.ui.gui.Edt;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeAll;
@@ -49,6 +50,7 @@ class MeasurementGuiTest {
     void aMeasuredModeBecomesTheStructureAndUndoTakesItBack() throws Exception {
         open();
         Structure before = onEdt(() -> frame.document().project().toStructure());
+        RobustnessInput robustnessBefore = onEdt(() -> frame.document().project().robustness());
         JDialog dialog = openDialog();
         onEdt(() -> {
             ((JTextField) find(dialog, "measurement.file")).setText(DEMO);
@@ -72,6 +74,13 @@ class MeasurementGuiTest {
         MeasuredSource source = onEdt(() -> frame.document().project().structure().measured());
         assertNotNull(source, "the structure says it was measured");
         assertEquals("impact-test-floor-frf.csv", source.file());
+        // the fit's uncertainties become the structure's tolerances unless the project states its own
+        RobustnessInput tolerances = onEdt(() -> frame.document().project().robustness());
+        if (robustnessBefore != null && robustnessBefore.structureMass() != null) {
+            assertEquals(robustnessBefore.structureMass(), tolerances.structureMass(), "the user's tolerance kept");
+        } else {
+            assertEquals("normal", tolerances.structureMass().distribution(), "the fit's uncertainty");
+        }
         String note = onEdt(() -> ((JLabel) find(frame, "structure.measured")).getText());
         assertTrue(note.contains("impact-test-floor-frf.csv"), note);
         settled("the design of the measured structure");
@@ -79,6 +88,7 @@ class MeasurementGuiTest {
         onEdt(() -> frame.document().undo());
         assertEquals(before, onEdt(() -> frame.document().project().toStructure()), "one undo step");
         assertNull(onEdt(() -> frame.document().project().structure().measured()));
+        assertEquals(robustnessBefore, onEdt(() -> frame.document().project().robustness()), "tolerances too");
     }
 
     @Test
