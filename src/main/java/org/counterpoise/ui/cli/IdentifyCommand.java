@@ -129,6 +129,10 @@ public final class IdentifyCommand implements Callable<Integer> {
 
     private Identification identify() {
         if (addedMass != null || frequencies != null) {
+            if (file != null) {
+                throw new InvalidInputException("FILE", PlainText.escape(file.toString()),
+                        "no measurement file with --added-mass and --frequencies (they are the whole input)");
+            }
             return addedMass();
         }
         if (file == null) {
