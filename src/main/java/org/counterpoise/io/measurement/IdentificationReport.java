@@ -5,8 +5,10 @@ import java.util.OptionalDouble;
 import org.counterpoise.core.identify.FitWarning;
 import org.counterpoise.core.identify.IdentifiedMode;
 import org.counterpoise.core.identify.ModalModel;
+import org.counterpoise.core.units.Dimension;
 import org.counterpoise.core.units.Unit;
 import org.counterpoise.io.PlainText;
+import org.counterpoise.io.text.DisplayUnits;
 import org.counterpoise.io.text.QuantityFormat;
 
 /** An identification as plain text for the terminal, with the usual cautions. */
@@ -50,7 +52,7 @@ public final class IdentificationReport {
                         ? " +/- " + percent(m.dampingRatioSd().getAsDouble()) : "");
                 line(b, "modal mass at the point", QuantityFormat.format(m.modalMass(), Unit.KILOGRAM),
                         sd(m.modalMassSd(), Unit.KILOGRAM));
-                line(b, "modal stiffness", QuantityFormat.format(m.modalStiffness(), Unit.NEWTON_PER_METRE), "");
+                line(b, "modal stiffness", DisplayUnits.format(m.modalStiffness(), Dimension.STIFFNESS), "");
             }
             ModalModel model = f.model();
             b.append("Fit quality\n");
