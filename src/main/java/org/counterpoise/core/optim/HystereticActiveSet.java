@@ -1,9 +1,6 @@
 package org.counterpoise.core.optim;
 
 import java.util.List;
-import org.apache.commons.math3.linear.Array2DRowRealMatrix;
-import org.apache.commons.math3.linear.ArrayRealVector;
-import org.apache.commons.math3.linear.LUDecomposition;
 import org.apache.commons.math3.linear.RealVector;
 
 /**
@@ -66,25 +63,8 @@ final class HystereticActiveSet {
             if (iteration >= 12 && norm > 1e-3) {
                 return null;
             }
-            double[][] jacobian = new double[u.length][];
-            for (int j = 0; j < u.length; j++) {
-                double h = JACOBIAN_STEP * Math.max(Math.abs(u[j]), 1e-3);
-                double[] shifted = u.clone();
-                shifted[j] += h;
-                double[] r = residual(shifted);
-                if (r == null) {
-                    return null;
-                }
-                jacobian[j] = new double[r.length];
-                for (int i = 0; i < r.length; i++) {
-                    jacobian[j][i] = (r[i] - residual[i]) / h;
-                }
-            }
-            RealVector step;
-            try {
-                step = new LUDecomposition(new Array2DRowRealMatrix(jacobian).transpose(), 1e-300).getSolver()
-                        .solve(new ArrayRealVector(residual).mapMultiply(-1));
-            } catch (RuntimeException singular) {
+            RealVector step = ForwardDifferenceNewton.step(this::residual, u, residual, JACOBIAN_STEP);
+            if (step == null) {
                 return null;
             }
             double alpha = 1.0;
