@@ -141,7 +141,7 @@ final class ActiveSetNewton {
         if (residual == null) {
             return null;
         }
-        double norm = norm(residual);
+        double norm = ForwardDifferenceNewton.norm(residual);
         for (int iteration = 0; iteration < MAX_ITERATIONS; iteration++) {
             if (norm < 1e-13) {
                 return solution(u);
@@ -153,29 +153,16 @@ final class ActiveSetNewton {
             if (step == null) {
                 return null;
             }
-            double alpha = 1.0;
-            boolean improved = false;
-            for (int halving = 0; halving < 30; halving++) {
-                double[] trial = u.clone();
-                for (int j = 0; j < u.length; j++) {
-                    trial[j] += alpha * step.getEntry(j);
-                }
-                double[] r = residual(trial);
-                if (r != null && norm(r) < norm) {
-                    u = trial;
-                    residual = r;
-                    double stepSize = alpha * step.getNorm();
-                    norm = norm(r);
-                    improved = true;
-                    if (stepSize < 1e-14 * (1 + new ArrayRealVector(u).getNorm())) {
-                        return norm < 1e-8 ? solution(u) : null;
-                    }
-                    break;
-                }
-                alpha *= 0.5;
-            }
-            if (!improved) {
+            ForwardDifferenceNewton.Accepted accepted = ForwardDifferenceNewton.backtrack(this::residual, u, step, norm);
+            if (accepted == null) {
                 return norm < 1e-9 ? solution(u) : null;
+            }
+            u = accepted.u();
+            residual = accepted.residual();
+            double stepSize = accepted.alpha() * step.getNorm();
+            norm = ForwardDifferenceNewton.norm(residual);
+            if (stepSize < 1e-14 * (1 + new ArrayRealVector(u).getNorm())) {
+                return norm < 1e-8 ? solution(u) : null;
             }
         }
         return norm < 1e-9 ? solution(u) : null;
@@ -314,13 +301,5 @@ final class ActiveSetNewton {
     private TransferFunction build(double f, double zeta) {
         evaluations++;
         return problem.transferFunction(f, zeta);
-    }
-
-    private static double norm(double[] v) {
-        double s = 0;
-        for (double c : v) {
-            s += c * c;
-        }
-        return Math.sqrt(s);
     }
 }

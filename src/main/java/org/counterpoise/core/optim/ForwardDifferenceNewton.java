@@ -9,7 +9,9 @@ import org.apache.commons.math3.linear.RealVector;
 /**
  * The Newton step of the active-set solvers ({@link ActiveSetNewton}, {@link HystereticActiveSet},
  * {@link MinimaxKkt}): the Jacobian of the residual by forward differences (step h_j = relative
- * step times max(|u_j|, 1e-3)), then -J^-1 r by Commons Math's LU decomposition.
+ * step times max(|u_j|, 1e-3)), then -J^-1 r by Commons Math's LU decomposition, and the
+ * backtracking that keeps the first of the steps 1, 1/2, 1/4 ... (30 halvings) that lowers the
+ * residual's norm.
  */
 final class ForwardDifferenceNewton {
     private ForwardDifferenceNewton() {
@@ -43,5 +45,51 @@ final class ForwardDifferenceNewton {
         } catch (RuntimeException singular) {
             return null;
         }
+    }
+
+    /**
+     * A step kept by {@link #backtrack}.
+     *
+     * @param u the new unknowns
+     * @param residual the residual there
+     * @param alpha the fraction of the Newton step taken
+     */
+    record Accepted(double[] u, double[] residual, double alpha) {
+    }
+
+    /**
+     * @param residual the residual of the system, null outside its domain
+     * @param u the unknowns
+     * @param step the Newton step
+     * @param norm the residual's norm at u
+     * @return the first trial u + alpha step, alpha = 1, 1/2, ... (30 halvings), whose residual norm
+     *     is below {@code norm}; null when none is
+     */
+    static Accepted backtrack(Function<double[], double[]> residual, double[] u, RealVector step, double norm) {
+        double alpha = 1.0;
+        for (int halving = 0; halving < 30; halving++) {
+            double[] trial = u.clone();
+            for (int j = 0; j < u.length; j++) {
+                trial[j] += alpha * step.getEntry(j);
+            }
+            double[] r = residual.apply(trial);
+            if (r != null && norm(r) < norm) {
+                return new Accepted(trial, r, alpha);
+            }
+            alpha *= 0.5;
+        }
+        return null;
+    }
+
+    /**
+     * @param v a vector
+     * @return its Euclidean norm
+     */
+    static double norm(double[] v) {
+        double s = 0;
+        for (double c : v) {
+            s += c * c;
+        }
+        return Math.sqrt(s);
     }
 }

@@ -135,7 +135,7 @@ final class MinimaxKkt {
         if (residual == null) {
             return null;
         }
-        double norm = norm(residual);
+        double norm = ForwardDifferenceNewton.norm(residual);
         for (int iteration = 0; iteration < MAX_ITERATIONS; iteration++) {
             if (norm < 1e-12) {
                 return point(u);
@@ -147,23 +147,12 @@ final class MinimaxKkt {
             if (step == null) {
                 return null;
             }
-            double alpha = 1.0;
-            boolean improved = false;
-            for (int halving = 0; halving < 30 && !improved; halving++) {
-                double[] trial = u.clone();
-                for (int j = 0; j < u.length; j++) {
-                    trial[j] += alpha * step.getEntry(j);
-                }
-                double[] r = residual(trial, counter);
-                if (r != null && norm(r) < norm) {
-                    u = trial;
-                    residual = r;
-                    norm = norm(r);
-                    improved = true;
-                }
-                alpha *= 0.5;
-            }
-            if (!improved) {
+            ForwardDifferenceNewton.Accepted accepted = ForwardDifferenceNewton.backtrack(x -> residual(x, counter), u, step, norm);
+            if (accepted != null) {
+                u = accepted.u();
+                residual = accepted.residual();
+                norm = ForwardDifferenceNewton.norm(residual);
+            } else {
                 return norm < ROUND_OFF ? point(u) : null;
             }
         }
@@ -222,13 +211,5 @@ final class MinimaxKkt {
             c += active[j][1] > 0 ? 1 : 0;
         }
         return c;
-    }
-
-    private static double norm(double[] r) {
-        double s = 0;
-        for (double c : r) {
-            s += c * c;
-        }
-        return Math.sqrt(s);
     }
 }
