@@ -44,7 +44,9 @@ public final class AbsorberSetOptimiser {
         AbsorberSetVariables v = new AbsorberSetVariables(problem);
         List<double[]> scan = AbsorberSetScan.scan(v, counter);
         List<double[]> seeds = seeds(v, scan, counter);
-        int structured = seeds.size() - Math.min(2, scan.size()); // the closed-form seeds are always pursued
+        // the closed-form seeds are always pursued; the scan's two best (uniform only) only when promising
+        int structured = problem.tuning() == AbsorberSetTuning.UNIFORM ? seeds.size() - Math.min(2, scan.size())
+                : seeds.size();
         double[] best = null;
         double bestPeak = Double.POSITIVE_INFINITY;
         AbsorberSetCertificate certificate = null;

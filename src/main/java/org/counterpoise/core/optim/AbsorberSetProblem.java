@@ -42,13 +42,7 @@ public record AbsorberSetProblem(int count, double massRatio, double structureDa
         }
         Checks.inOpenRange("mass ratio", massRatio, 0.0, 10.0);
         Checks.inRange("structure damping", structureDamping, 0.0, 0.99);
-        if (!(bandLow >= 0) || Double.isInfinite(bandLow)) {
-            throw new InvalidInputException("band", Checks.show(bandLow), "the low end must be a finite number of 0 or more");
-        }
-        if (!(bandHigh > bandLow)) {
-            throw new InvalidInputException("band", Checks.show(bandLow) + ":" + Checks.show(bandHigh),
-                    "the high end must be greater than the low end (an empty band has no peak)");
-        }
+        PeakProblem.checkBand(bandLow, bandHigh);
         Checks.present("tuning", tuning, "uniform or individual");
     }
 

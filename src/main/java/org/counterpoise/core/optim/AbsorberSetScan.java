@@ -16,8 +16,8 @@ import java.util.Random;
  * then taken again from the refined maxima before it is compared with an optimum.
  */
 final class AbsorberSetScan {
-    static final int TUNINGS = 24;
-    static final int DAMPINGS = 10;
+    static final int TUNINGS = 20;
+    static final int DAMPINGS = 8;
     /** Spreads of the uniform scan, in units of sqrt(mu) (capped at the box's largest spread). */
     static final double[] SPREADS = {0.0, 0.25, 0.5, 1.0, 2.0, 4.0};
     static final int RANDOM_POINTS = 512;

@@ -2,9 +2,7 @@ package org.counterpoise.core.optim;
 
 import java.util.Arrays;
 import java.util.List;
-import org.apache.commons.math3.linear.Array2DRowRealMatrix;
 import org.apache.commons.math3.linear.ArrayRealVector;
-import org.apache.commons.math3.linear.LUDecomposition;
 import org.apache.commons.math3.linear.RealVector;
 import org.counterpoise.core.rational.TransferFunction;
 import org.counterpoise.core.response.TuningSensitivity;
@@ -143,7 +141,7 @@ final class ActiveSetNewton {
         if (residual == null) {
             return null;
         }
-        double norm = norm(residual);
+        double norm = ForwardDifferenceNewton.norm(residual);
         for (int iteration = 0; iteration < MAX_ITERATIONS; iteration++) {
             if (norm < 1e-13) {
                 return solution(u);
@@ -151,50 +149,20 @@ final class ActiveSetNewton {
             if (iteration >= 12 && norm > 1e-3) {
                 return null; // far from converging: this active set is not the one
             }
-            double[][] jacobian = new double[u.length][];
-            for (int j = 0; j < u.length; j++) {
-                double h = JACOBIAN_STEP * Math.max(Math.abs(u[j]), 1e-3);
-                double[] shifted = u.clone();
-                shifted[j] += h;
-                double[] r = residual(shifted);
-                if (r == null) {
-                    return null;
-                }
-                jacobian[j] = new double[r.length];
-                for (int i = 0; i < r.length; i++) {
-                    jacobian[j][i] = (r[i] - residual[i]) / h;
-                }
-            }
-            RealVector step;
-            try {
-                step = new LUDecomposition(new Array2DRowRealMatrix(jacobian).transpose(), 1e-300).getSolver()
-                        .solve(new ArrayRealVector(residual).mapMultiply(-1));
-            } catch (RuntimeException singular) {
+            RealVector step = ForwardDifferenceNewton.step(this::residual, u, residual, JACOBIAN_STEP);
+            if (step == null) {
                 return null;
             }
-            double alpha = 1.0;
-            boolean improved = false;
-            for (int halving = 0; halving < 30; halving++) {
-                double[] trial = u.clone();
-                for (int j = 0; j < u.length; j++) {
-                    trial[j] += alpha * step.getEntry(j);
-                }
-                double[] r = residual(trial);
-                if (r != null && norm(r) < norm) {
-                    u = trial;
-                    residual = r;
-                    double stepSize = alpha * step.getNorm();
-                    norm = norm(r);
-                    improved = true;
-                    if (stepSize < 1e-14 * (1 + new ArrayRealVector(u).getNorm())) {
-                        return norm < 1e-8 ? solution(u) : null;
-                    }
-                    break;
-                }
-                alpha *= 0.5;
-            }
-            if (!improved) {
+            ForwardDifferenceNewton.Accepted accepted = ForwardDifferenceNewton.backtrack(this::residual, u, step, norm);
+            if (accepted == null) {
                 return norm < 1e-9 ? solution(u) : null;
+            }
+            u = accepted.u();
+            residual = accepted.residual();
+            double stepSize = accepted.alpha() * step.getNorm();
+            norm = ForwardDifferenceNewton.norm(residual);
+            if (stepSize < 1e-14 * (1 + new ArrayRealVector(u).getNorm())) {
+                return norm < 1e-8 ? solution(u) : null;
             }
         }
         return norm < 1e-9 ? solution(u) : null;
@@ -333,13 +301,5 @@ final class ActiveSetNewton {
     private TransferFunction build(double f, double zeta) {
         evaluations++;
         return problem.transferFunction(f, zeta);
-    }
-
-    private static double norm(double[] v) {
-        double s = 0;
-        for (double c : v) {
-            s += c * c;
-        }
-        return Math.sqrt(s);
     }
 }

@@ -22,22 +22,23 @@ import org.counterpoise.core.rational.TransferFunction;
  * absorbers on a light structure the expanded |H|^2 = P(x)/Q(x) loses every digit of R between
  * close modes: R is computed as about 1e-12 with no sign change where |H| has a peak (a case in
  * the tests: the polynomial peak 8.6791, a dense sweep 8.7036). So each maximum is bracketed from
- * three sources and refined by Brent's method on the factored ln|H|^2 (every modal and absorber term
- * evaluated on its own, well conditioned):
+ * three sources and refined once by Brent's method (to 1e-11 in ln x) on the factored ln|H|^2 (every modal
+ * and absorber term evaluated on its own, well conditioned):
  * <ol>
- *   <li>the system's poles (the roots of the denominator in s, by Laguerre's method, Commons
- *       Math): a pole of natural frequency w_n and damping ratio zeta gives the bracket
- *       [w_n (1 - 5 zeta), w_n (1 + 5 zeta)] (widened by 1e-3), where its resonance peak lies;</li>
  *   <li>a sweep of {@value #SWEEP} frequencies log-spaced from half the lowest to twice the highest
  *       natural frequency: each sampled local maximum brackets one between its neighbours;</li>
- *   <li>the real roots of R where R falls through zero (the polynomial route, when it is right).</li>
+ *   <li>where the sweep found none, the system's poles (the roots of the denominator in s, by
+ *       Laguerre's method, Commons Math): a pole of natural frequency w_n and damping ratio zeta
+ *       gives the bracket [w_n (1 - 5 zeta), w_n (1 + 5 zeta)] (widened by 1e-3), where a resonance
+ *       too narrow for the sweep lies;</li>
+ *   <li>where neither did, the real roots of R where R falls through zero (the polynomial route).</li>
  * </ol>
  * A refined point counts as a maximum only when it is higher than both its neighbours at a relative
  * frequency step of 1e-6; maxima closer than 1e-6 (relative) are one. Checked against dense sweeps of
  * the dense matrix solve in the tests.
  */
 final class FactoredPeaks {
-    static final int SWEEP = 400;
+    static final int SWEEP = 240;
 
     private FactoredPeaks() {
     }
@@ -50,7 +51,7 @@ final class FactoredPeaks {
      * @return {x, 1, ln|H|^2} for each interior maximum, ascending in x
      */
     static List<double[]> maxima(TransferFunction h, DoubleUnaryOperator logMagnitudeSquared, double low, double high) {
-        List<double[]> brackets = new ArrayList<>();
+        List<double[]> poleBrackets = new ArrayList<>();
         double lowest = Double.POSITIVE_INFINITY;
         double highest = 0;
         for (Complex pole : poles(h.denominator())) {
@@ -60,10 +61,13 @@ final class FactoredPeaks {
             }
             double zeta = Math.max(0.0, -pole.getReal() / wn);
             double width = 5 * zeta + 1e-3;
-            brackets.add(new double[] {sq(wn * Math.max(0.05, 1 - width)), sq(wn * (1 + width))});
+            poleBrackets.add(new double[] {sq(wn * Math.max(0.05, 1 - width)), sq(wn * (1 + width))});
             lowest = Math.min(lowest, wn);
             highest = Math.max(highest, wn);
         }
+        // The sweep brackets every maximum wider than its spacing (0.6 % in frequency); a pole or a
+        // root of R adds a bracket only where the sweep found none, so each maximum is refined once.
+        List<double[]> brackets = new ArrayList<>();
         if (highest > 0) {
             double a = Math.log(0.5 * lowest);
             double b = Math.log(2 * highest);
@@ -75,16 +79,19 @@ final class FactoredPeaks {
             }
             for (int i = 1; i + 1 < SWEEP; i++) {
                 if (value[i] >= value[i - 1] && value[i] >= value[i + 1]) {
-                    brackets.add(new double[] {x[i - 1], x[i + 1]});
+                    brackets.add(new double[] {x[i - 1], x[i + 1], x[i]});
                 }
             }
+        }
+        for (double[] b : poleBrackets) {
+            addUnlessCovered(brackets, b[0], b[1]);
         }
         double[] r = RealPolynomials.quotientDerivativeNumerator(h.magnitudeNumeratorInX(), h.magnitudeDenominatorInX());
         double[] roots = RealRoots.roots(r, low, Math.min(high, Double.MAX_VALUE));
         for (int i = 0; i < roots.length; i++) {
             if (RealPolynomials.derivativeValue(r, roots[i]) < 0) {
-                brackets.add(new double[] {i > 0 ? roots[i - 1] : roots[i] / 2, i + 1 < roots.length ? roots[i + 1]
-                        : 2 * roots[i] + 1});
+                addUnlessCovered(brackets, i > 0 ? roots[i - 1] : roots[i] / 2,
+                        i + 1 < roots.length ? roots[i + 1] : 2 * roots[i] + 1);
             }
         }
         List<double[]> out = new ArrayList<>();
@@ -94,7 +101,7 @@ final class FactoredPeaks {
             if (!(b > a) || !(a > 0)) {
                 continue;
             }
-            double t = new BrentOptimizer(1e-13, 1e-300).optimize(new MaxEval(400),
+            double t = new BrentOptimizer(1e-11, 1e-300).optimize(new MaxEval(400),
                     new UnivariateObjectiveFunction(u -> logMagnitudeSquared.applyAsDouble(Math.exp(u))), GoalType.MAXIMIZE,
                     new SearchInterval(Math.log(a), Math.log(b))).getPoint();
             double xm = Math.exp(t);
@@ -117,6 +124,17 @@ final class FactoredPeaks {
             }
         }
         return distinct;
+    }
+
+    /** Adds the bracket [a, b] unless a bracket already found contains a maximum inside it. */
+    private static void addUnlessCovered(List<double[]> brackets, double a, double b) {
+        for (double[] k : brackets) {
+            double inside = k.length > 2 ? k[2] : 0.5 * (k[0] + k[1]);
+            if (inside >= a && inside <= b) {
+                return;
+            }
+        }
+        brackets.add(new double[] {a, b});
     }
 
     private static double sq(double v) {

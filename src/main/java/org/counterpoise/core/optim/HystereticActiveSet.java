@@ -1,9 +1,6 @@
 package org.counterpoise.core.optim;
 
 import java.util.List;
-import org.apache.commons.math3.linear.Array2DRowRealMatrix;
-import org.apache.commons.math3.linear.ArrayRealVector;
-import org.apache.commons.math3.linear.LUDecomposition;
 import org.apache.commons.math3.linear.RealVector;
 
 /**
@@ -61,49 +58,21 @@ final class HystereticActiveSet {
         if (residual == null) {
             return null;
         }
-        double norm = norm(residual);
+        double norm = ForwardDifferenceNewton.norm(residual);
         for (int iteration = 0; iteration < MAX_ITERATIONS && norm >= 1e-13; iteration++) {
             if (iteration >= 12 && norm > 1e-3) {
                 return null;
             }
-            double[][] jacobian = new double[u.length][];
-            for (int j = 0; j < u.length; j++) {
-                double h = JACOBIAN_STEP * Math.max(Math.abs(u[j]), 1e-3);
-                double[] shifted = u.clone();
-                shifted[j] += h;
-                double[] r = residual(shifted);
-                if (r == null) {
-                    return null;
-                }
-                jacobian[j] = new double[r.length];
-                for (int i = 0; i < r.length; i++) {
-                    jacobian[j][i] = (r[i] - residual[i]) / h;
-                }
-            }
-            RealVector step;
-            try {
-                step = new LUDecomposition(new Array2DRowRealMatrix(jacobian).transpose(), 1e-300).getSolver()
-                        .solve(new ArrayRealVector(residual).mapMultiply(-1));
-            } catch (RuntimeException singular) {
+            RealVector step = ForwardDifferenceNewton.step(this::residual, u, residual, JACOBIAN_STEP);
+            if (step == null) {
                 return null;
             }
-            double alpha = 1.0;
-            boolean improved = false;
-            for (int halving = 0; halving < 30 && !improved; halving++) {
-                double[] trial = u.clone();
-                for (int j = 0; j < u.length; j++) {
-                    trial[j] += alpha * step.getEntry(j);
-                }
-                double[] r = residual(trial);
-                if (r != null && norm(r) < norm) {
-                    u = trial;
-                    residual = r;
-                    norm = norm(r);
-                    improved = true;
-                }
-                alpha *= 0.5;
-            }
-            if (!improved) {
+            ForwardDifferenceNewton.Accepted accepted = ForwardDifferenceNewton.backtrack(this::residual, u, step, norm);
+            if (accepted != null) {
+                u = accepted.u();
+                residual = accepted.residual();
+                norm = ForwardDifferenceNewton.norm(residual);
+            } else {
                 break;
             }
         }
@@ -182,13 +151,5 @@ final class HystereticActiveSet {
             out[m++] = scale > 0 ? (g0[0] * g1[1] - g0[1] * g1[0]) / scale : 0.0;
         }
         return out;
-    }
-
-    private static double norm(double[] v) {
-        double s = 0;
-        for (double c : v) {
-            s += c * c;
-        }
-        return Math.sqrt(s);
     }
 }

@@ -258,7 +258,7 @@ final class MinimaxCertificate {
      * Euclidean projection onto the probability simplex (sort-based; Held, Wolfe and Crowder 1974),
      * in place; {@code sorted} is scratch space of the same length.
      */
-    private static void projectOntoSimplex(double[] y, double[] sorted) {
+    static void projectOntoSimplex(double[] y, double[] sorted) {
         System.arraycopy(y, 0, sorted, 0, y.length);
         Arrays.sort(sorted);
         double cumulative = 0;

@@ -3,9 +3,6 @@ package org.counterpoise.core.optim;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
-import org.apache.commons.math3.linear.Array2DRowRealMatrix;
-import org.apache.commons.math3.linear.ArrayRealVector;
-import org.apache.commons.math3.linear.LUDecomposition;
 import org.apache.commons.math3.linear.RealVector;
 
 /**
@@ -138,7 +135,7 @@ final class MinimaxKkt {
         if (residual == null) {
             return null;
         }
-        double norm = norm(residual);
+        double norm = ForwardDifferenceNewton.norm(residual);
         for (int iteration = 0; iteration < MAX_ITERATIONS; iteration++) {
             if (norm < 1e-12) {
                 return point(u);
@@ -146,44 +143,16 @@ final class MinimaxKkt {
             if (iteration >= 15 && norm > 1e-3) {
                 return null;
             }
-            double[][] jacobian = new double[u.length][];
-            for (int j = 0; j < u.length; j++) {
-                double h = JACOBIAN_STEP * Math.max(Math.abs(u[j]), 1e-3);
-                double[] shifted = u.clone();
-                shifted[j] += h;
-                double[] r = residual(shifted, counter);
-                if (r == null) {
-                    return null;
-                }
-                jacobian[j] = new double[r.length];
-                for (int i = 0; i < r.length; i++) {
-                    jacobian[j][i] = (r[i] - residual[i]) / h;
-                }
-            }
-            RealVector step;
-            try {
-                step = new LUDecomposition(new Array2DRowRealMatrix(jacobian).transpose(), 1e-300).getSolver()
-                        .solve(new ArrayRealVector(residual).mapMultiply(-1));
-            } catch (RuntimeException singular) {
+            RealVector step = ForwardDifferenceNewton.step(x -> residual(x, counter), u, residual, JACOBIAN_STEP);
+            if (step == null) {
                 return null;
             }
-            double alpha = 1.0;
-            boolean improved = false;
-            for (int halving = 0; halving < 30 && !improved; halving++) {
-                double[] trial = u.clone();
-                for (int j = 0; j < u.length; j++) {
-                    trial[j] += alpha * step.getEntry(j);
-                }
-                double[] r = residual(trial, counter);
-                if (r != null && norm(r) < norm) {
-                    u = trial;
-                    residual = r;
-                    norm = norm(r);
-                    improved = true;
-                }
-                alpha *= 0.5;
-            }
-            if (!improved) {
+            ForwardDifferenceNewton.Accepted accepted = ForwardDifferenceNewton.backtrack(x -> residual(x, counter), u, step, norm);
+            if (accepted != null) {
+                u = accepted.u();
+                residual = accepted.residual();
+                norm = ForwardDifferenceNewton.norm(residual);
+            } else {
                 return norm < ROUND_OFF ? point(u) : null;
             }
         }
@@ -242,13 +211,5 @@ final class MinimaxKkt {
             c += active[j][1] > 0 ? 1 : 0;
         }
         return c;
-    }
-
-    private static double norm(double[] r) {
-        double s = 0;
-        for (double c : r) {
-            s += c * c;
-        }
-        return Math.sqrt(s);
     }
 }

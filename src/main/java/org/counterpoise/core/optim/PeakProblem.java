@@ -58,13 +58,7 @@ public record PeakProblem(ExcitationKind excitation, ResponseKind response, doub
         Checks.present("response", response, "a response kind");
         Checks.inOpenRange("mass ratio", massRatio, 0.0, 10.0);
         Checks.inRange("structure damping", structureDamping, 0.0, 0.99);
-        if (!(bandLow >= 0) || Double.isInfinite(bandLow)) {
-            throw new InvalidInputException("band", Checks.show(bandLow), "the low end must be a finite number of 0 or more");
-        }
-        if (!(bandHigh > bandLow)) {
-            throw new InvalidInputException("band", Checks.show(bandLow) + ":" + Checks.show(bandHigh),
-                    "the high end must be greater than the low end (an empty band has no peak)");
-        }
+        checkBand(bandLow, bandHigh);
         if (!Double.isNaN(fixedTuning)) {
             Checks.inOpenRange("fixed tuning ratio", fixedTuning, 0.0, 100.0);
         }
@@ -83,6 +77,22 @@ public record PeakProblem(ExcitationKind excitation, ResponseKind response, doub
                     "the absorber's own stroke or force has no minimum-peak design: it falls towards zero as the"
                             + " absorber damping grows and the absorber locks; use a response of the structure"
                             + " and limit the stroke instead");
+        }
+    }
+
+    /**
+     * The one check of a band of frequency ratios, for every non-dimensional problem.
+     *
+     * @param bandLow lowest g
+     * @param bandHigh highest g
+     */
+    static void checkBand(double bandLow, double bandHigh) {
+        if (!(bandLow >= 0) || Double.isInfinite(bandLow)) {
+            throw new InvalidInputException("band", Checks.show(bandLow), "the low end must be a finite number of 0 or more");
+        }
+        if (!(bandHigh > bandLow)) {
+            throw new InvalidInputException("band", Checks.show(bandLow) + ":" + Checks.show(bandHigh),
+                    "the high end must be greater than the low end (an empty band has no peak)");
         }
     }
 

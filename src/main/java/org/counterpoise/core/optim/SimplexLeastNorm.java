@@ -6,7 +6,8 @@ import java.util.Arrays;
  * The convex combination of a few vectors with the least Euclidean norm: min |sum lambda_i g_i|
  * over lambda_i &gt;= 0, sum lambda_i = 1, by projected gradient descent on the simplex (a small
  * convex quadratic problem; the projection is that of Duchi et al. 2008, "Efficient projections
- * onto the l1-ball for learning in high dimensions", ICML, algorithm 1).
+ * onto the l1-ball for learning in high dimensions", ICML, algorithm 1; the projection of
+ * {@link MinimaxCertificate}).
  */
 final class SimplexLeastNorm {
     private static final int STEPS = 4000;
@@ -32,6 +33,7 @@ final class SimplexLeastNorm {
             return lambda;
         }
         double step = 1.0 / lipschitz;
+        double[] scratch = new double[k];
         for (int it = 0; it < STEPS; it++) {
             double[] r = combination(g, lambda);
             double[] next = new double[k];
@@ -42,7 +44,8 @@ final class SimplexLeastNorm {
                 }
                 next[i] = lambda[i] - step * dot;
             }
-            lambda = project(next);
+            MinimaxCertificate.projectOntoSimplex(next, scratch);
+            lambda = next;
         }
         return lambda;
     }
@@ -56,24 +59,5 @@ final class SimplexLeastNorm {
             }
         }
         return r;
-    }
-
-    private static double[] project(double[] y) {
-        double[] sorted = y.clone();
-        Arrays.sort(sorted);
-        double cumulative = 0;
-        double theta = 0;
-        for (int i = sorted.length - 1, count = 1; i >= 0; i--, count++) {
-            cumulative += sorted[i];
-            double candidate = (cumulative - 1) / count;
-            if (sorted[i] - candidate > 0) {
-                theta = candidate;
-            }
-        }
-        double[] out = new double[y.length];
-        for (int i = 0; i < y.length; i++) {
-            out[i] = Math.max(y[i] - theta, 0);
-        }
-        return out;
     }
 }

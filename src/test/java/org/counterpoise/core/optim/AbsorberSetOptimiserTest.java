@@ -22,6 +22,7 @@ import org.counterpoise.core.model.ExcitationKind;
 import org.counterpoise.core.response.ResponseKind;
 import org.counterpoise.core.system.Mode;
 import org.counterpoise.core.system.PointAbsorber;
+import org.counterpoise.testing.DenseSweep;
 import org.counterpoise.testing.ModalDirectSolve;
 import org.junit.jupiter.api.Test;
 
@@ -154,29 +155,6 @@ class AbsorberSetOptimiserTest {
             Complex h = ModalDirectSolve.solve(modes, absorbers, "s", "s", g)[0];
             return h.abs();
         };
-        int samples = 6000;
-        double best = 0;
-        double at = 0;
-        for (int i = 1; i <= samples; i++) {
-            double g = 0.5 + 1.0 * i / samples;
-            double m = magnitude.applyAsDouble(g);
-            if (m > best) {
-                best = m;
-                at = g;
-            }
-        }
-        double a = at - 1.0 / samples;
-        double b = at + 1.0 / samples;
-        double ratio = (Math.sqrt(5) - 1) / 2;
-        for (int i = 0; i < 80; i++) {
-            double c = b - ratio * (b - a);
-            double d = a + ratio * (b - a);
-            if (magnitude.applyAsDouble(c) > magnitude.applyAsDouble(d)) {
-                b = d;
-            } else {
-                a = c;
-            }
-        }
-        return Math.max(best, magnitude.applyAsDouble(0.5 * (a + b)));
+        return DenseSweep.maximum(magnitude, 0.5, 1.5, 6000);
     }
 }

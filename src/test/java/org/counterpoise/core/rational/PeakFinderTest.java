@@ -8,6 +8,7 @@ import org.counterpoise.core.model.ExcitationKind;
 import org.counterpoise.core.model.Tuning;
 import org.counterpoise.core.response.ResponseKind;
 import org.counterpoise.core.response.TransferFunctions;
+import org.counterpoise.testing.DenseSweep;
 import org.junit.jupiter.api.Test;
 
 /** The exact peak search against an independent brute force: a dense grid refined by golden section. */
@@ -64,29 +65,6 @@ class PeakFinderTest {
     }
 
     static double bruteForce(TransferFunction h, double lo, double hi) {
-        int n = 20000;
-        double bestG = lo;
-        double best = h.magnitude(lo);
-        for (int i = 1; i <= n; i++) {
-            double g = lo + (hi - lo) * i / n;
-            double v = h.magnitude(g);
-            if (v > best) {
-                best = v;
-                bestG = g;
-            }
-        }
-        double a = Math.max(lo, bestG - (hi - lo) / n);
-        double b = Math.min(hi, bestG + (hi - lo) / n);
-        double phi = (Math.sqrt(5) - 1) / 2;
-        for (int i = 0; i < 200; i++) {
-            double c = b - phi * (b - a);
-            double d = a + phi * (b - a);
-            if (h.magnitude(c) > h.magnitude(d)) {
-                b = d;
-            } else {
-                a = c;
-            }
-        }
-        return Math.max(best, h.magnitude(0.5 * (a + b)));
+        return DenseSweep.maximum(h::magnitude, lo, hi, 20000);
     }
 }

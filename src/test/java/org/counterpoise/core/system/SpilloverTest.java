@@ -5,12 +5,13 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
 import java.util.Map;
+import org.counterpoise.testing.DenseSweep;
 import org.counterpoise.testing.ModalDirectSolve;
 import org.junit.jupiter.api.Test;
 
 /**
  * Spillover of an absorber tuned to mode 1 of an invented two-mode structure, against dense sweeps of
- * the dense matrix solve ({@link ModalDirectSolve}) refined by golden section in each mode's
+ * the dense matrix solve ({@link ModalDirectSolve}) refined by golden section ({@link DenseSweep}) in each mode's
  * neighbourhood (an independent route).
  */
 class SpilloverTest {
@@ -36,30 +37,6 @@ class SpilloverTest {
     }
 
     private static double sweep(List<Mode> modes, List<PointAbsorber> absorbers, double low, double high) {
-        int n = 20_000;
-        double best = 0;
-        double at = low;
-        for (int i = 0; i <= n; i++) {
-            double w = low + (high - low) * i / n;
-            double v = ModalDirectSolve.solve(modes, absorbers, "a", "a", w)[0].abs();
-            if (v > best) {
-                best = v;
-                at = w;
-            }
-        }
-        double a = Math.max(low, at - (high - low) / n);
-        double b = Math.min(high, at + (high - low) / n);
-        double r = (Math.sqrt(5) - 1) / 2;
-        for (int i = 0; i < 100; i++) {
-            double c = b - r * (b - a);
-            double d = a + r * (b - a);
-            if (ModalDirectSolve.solve(modes, absorbers, "a", "a", c)[0].abs()
-                    > ModalDirectSolve.solve(modes, absorbers, "a", "a", d)[0].abs()) {
-                b = d;
-            } else {
-                a = c;
-            }
-        }
-        return Math.max(best, ModalDirectSolve.solve(modes, absorbers, "a", "a", 0.5 * (a + b))[0].abs());
+        return DenseSweep.maximum(w -> ModalDirectSolve.solve(modes, absorbers, "a", "a", w)[0].abs(), low, high, 20_000);
     }
 }
