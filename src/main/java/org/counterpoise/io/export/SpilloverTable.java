@@ -60,12 +60,17 @@ public final class SpilloverTable {
                     + " absorbers (the absorbers designed on mode 1 alone)%n", r.ratio(), r.shape()));
             out.append(String.format(Locale.ROOT, "%-5s %-14s %-14s %-22s %s%n", MODE, LOW, HIGH, BEFORE, AFTER));
             for (Spillover.ModePeak m : r.spillover().modes()) {
-                out.append(String.format(Locale.ROOT, "%-5d %-14s %-14s %-22s %s%n", m.mode() + 1, csvNumber(m.low()),
-                        csvNumber(m.high()), number(m.before()), number(m.after())));
+                out.append(String.format(Locale.ROOT, "%-5d %-14s %-14s %-22s %s%n", m.mode() + 1, bandEdge(m.low()),
+                        bandEdge(m.high()), number(m.before()), number(m.after())));
             }
             out.append('\n');
         }
         return out.toString();
+    }
+
+    /** A band edge as the text table shows it: 6 significant figures, "open" for the band's open top. */
+    private static String bandEdge(double v) {
+        return Double.isInfinite(v) ? "open" : String.format(Locale.ROOT, "%.6g", v);
     }
 
     /** A finite peak, or "unbounded" for an infinite one. */
