@@ -20,14 +20,21 @@ import static org.counterpoise.io.measurement.IdentificationKey.LOG_DECREMENT;
 import static org.counterpoise.io.measurement.IdentificationKey.LOG_DECREMENT_SD;
 import static org.counterpoise.io.measurement.IdentificationKey.LOWER_INVERSE_MASS;
 import static org.counterpoise.io.measurement.IdentificationKey.MASS;
+import static org.counterpoise.io.measurement.IdentificationKey.MASS_AT_TRANSFER_POINT;
+import static org.counterpoise.io.measurement.IdentificationKey.MASS_AT_TRANSFER_POINT_SD;
 import static org.counterpoise.io.measurement.IdentificationKey.MASS_SD;
 import static org.counterpoise.io.measurement.IdentificationKey.METHOD;
+import static org.counterpoise.io.measurement.IdentificationKey.MODE;
 import static org.counterpoise.io.measurement.IdentificationKey.MODES;
 import static org.counterpoise.io.measurement.IdentificationKey.NORMALISED_RESIDUAL;
 import static org.counterpoise.io.measurement.IdentificationKey.RESIDUALS;
+import static org.counterpoise.io.measurement.IdentificationKey.SHAPE_RATIO;
+import static org.counterpoise.io.measurement.IdentificationKey.SHAPE_RATIO_SD;
 import static org.counterpoise.io.measurement.IdentificationKey.SOURCE;
 import static org.counterpoise.io.measurement.IdentificationKey.START_ESTIMATES;
 import static org.counterpoise.io.measurement.IdentificationKey.STIFFNESS;
+import static org.counterpoise.io.measurement.IdentificationKey.TRANSFER;
+import static org.counterpoise.io.measurement.IdentificationKey.TRANSFER_FREQUENCY;
 import static org.counterpoise.io.measurement.IdentificationKey.UPPER_COMPLIANCE;
 import static org.counterpoise.io.measurement.IdentificationKey.WARNINGS;
 
@@ -40,6 +47,7 @@ import org.counterpoise.core.identify.FitWarning;
 import org.counterpoise.core.identify.IdentifiedMode;
 import org.counterpoise.core.identify.MeasuredFrf;
 import org.counterpoise.core.identify.ModalModel;
+import org.counterpoise.core.identify.ModeShapeRatio;
 import org.counterpoise.core.units.Unit;
 import org.counterpoise.io.export.JsonNumbers;
 
@@ -53,6 +61,33 @@ public final class IdentificationJson {
      * @return pretty-printed JSON with a final line break
      */
     public static String toJson(Identification identification) {
+        return JsonNumbers.write(object(identification));
+    }
+
+    /**
+     * @param identification a driving-point FRF fit
+     * @param transferFile the transfer FRF's file as the user named it
+     * @param mode the mode compared, 1 = lowest
+     * @param shape the mode shape at the transfer point relative to the driving point
+     * @return the identification's JSON with a {@code transfer} object: file, mode, shape ratio and
+     *     its uncertainty, the transfer fit's frequency, the modal mass at the transfer point
+     */
+    public static String toJson(Identification identification, String transferFile, int mode, ModeShapeRatio shape) {
+        JsonObject o = object(identification);
+        JsonObject t = new JsonObject();
+        t.addProperty(SOURCE.key(), transferFile);
+        t.addProperty(MODE.key(), mode);
+        JsonNumbers.put(t, SHAPE_RATIO.key(), shape.ratio());
+        shape.ratioSd().ifPresent(sd -> JsonNumbers.put(t, SHAPE_RATIO_SD.key(), sd));
+        JsonNumbers.put(t, TRANSFER_FREQUENCY.key(), hz(shape.transfer().naturalFrequency()));
+        IdentifiedMode at = shape.atTransferPoint();
+        JsonNumbers.put(t, MASS_AT_TRANSFER_POINT.key(), at.modalMass());
+        at.modalMassSd().ifPresent(sd -> JsonNumbers.put(t, MASS_AT_TRANSFER_POINT_SD.key(), sd));
+        o.add(TRANSFER.key(), t);
+        return JsonNumbers.write(o);
+    }
+
+    private static JsonObject object(Identification identification) {
         JsonObject o = new JsonObject();
         o.addProperty(METHOD.key(), identification.method());
         o.addProperty(SOURCE.key(), identification.source());
@@ -121,7 +156,7 @@ public final class IdentificationJson {
             JsonNumbers.put(o, ADDED_MASS.key(), a.addedMass());
             JsonNumbers.put(o, FREQUENCY_WITH_ADDED_MASS.key(), hz(a.frequencyAfter()));
         }
-        return JsonNumbers.write(o);
+        return o;
     }
 
     private static JsonObject mode(IdentifiedMode m) {

@@ -31,7 +31,14 @@ enum IdentificationKey {
     LOG_DECREMENT_SD("log_decrement_sd"),
     CYCLES("cycles"),
     ADDED_MASS("added_mass_kg"),
-    FREQUENCY_WITH_ADDED_MASS("frequency_with_added_mass_Hz");
+    FREQUENCY_WITH_ADDED_MASS("frequency_with_added_mass_Hz"),
+    TRANSFER("transfer"),
+    MODE("mode"),
+    SHAPE_RATIO("shape_ratio"),
+    SHAPE_RATIO_SD("shape_ratio_sd"),
+    TRANSFER_FREQUENCY("transfer_frequency_Hz"),
+    MASS_AT_TRANSFER_POINT("modal_mass_at_transfer_point_kg"),
+    MASS_AT_TRANSFER_POINT_SD("modal_mass_at_transfer_point_kg_sd");
 
     private final String key;
 

@@ -5,6 +5,7 @@ import java.util.OptionalDouble;
 import org.counterpoise.core.identify.FitWarning;
 import org.counterpoise.core.identify.IdentifiedMode;
 import org.counterpoise.core.identify.ModalModel;
+import org.counterpoise.core.identify.ModeShapeRatio;
 import org.counterpoise.core.units.Dimension;
 import org.counterpoise.core.units.Unit;
 import org.counterpoise.io.PlainText;
@@ -103,6 +104,24 @@ public final class IdentificationReport {
             case LOW_COHERENCE -> "the mean coherence is below " + FitWarning.LOW_COHERENCE_LIMIT
                     + ": noise, leakage or a non-linear structure; repeat or average the measurement";
         };
+    }
+
+    /**
+     * @param transferFile the transfer FRF's file as the user named it
+     * @param mode the mode compared, 1 = lowest
+     * @param shape the mode shape at the transfer point relative to the driving point
+     * @return the text section on the transfer point
+     */
+    public static String transfer(String transferFile, int mode, ModeShapeRatio shape) {
+        StringBuilder b = new StringBuilder("Transfer point (").append(PlainText.escape(transferFile)).append("), mode ")
+                .append(mode).append('\n');
+        line(b, "shape ratio phi_A/phi_P", QuantityFormat.number(shape.ratio(), 4),
+                shape.ratioSd().isPresent() ? " +/- " + QuantityFormat.number(shape.ratioSd().getAsDouble(), 2) : "");
+        line(b, "frequency in the transfer", QuantityFormat.format(shape.transfer().naturalFrequency(), Unit.HERTZ), "");
+        IdentifiedMode at = shape.atTransferPoint();
+        line(b, "modal mass at that point", QuantityFormat.format(at.modalMass(), Unit.KILOGRAM),
+                sd(at.modalMassSd(), Unit.KILOGRAM));
+        return b.toString();
     }
 
     private static void line(StringBuilder b, String label, String value, String extra) {

@@ -73,13 +73,8 @@ public final class StructureFromMeasurement {
     public static MeasuredSource source(Identification.Frf fit, IdentifiedMode mode, LocalDate day) {
         Path name = Path.of(fit.source()).getFileName();
         return new MeasuredSource(fit.method(), name == null ? fit.source() : name.toString(), day.toString(),
-                OptionalDouble.of(fit.model().normalisedResidual()),
-                mode.naturalFrequencySd().isPresent()
-                        ? new QuantityInput(Unit.HERTZ.fromSi(mode.naturalFrequencySd().getAsDouble()), Unit.HERTZ)
-                        : null,
-                mode.dampingRatioSd(),
-                mode.modalMassSd().isPresent() ? new QuantityInput(mode.modalMassSd().getAsDouble(), Unit.KILOGRAM)
-                        : null);
+                OptionalDouble.of(fit.model().normalisedResidual()), mode.naturalFrequencySd(), mode.dampingRatioSd(),
+                mode.modalMassSd());
     }
 
     /**

@@ -2,7 +2,6 @@ package org.counterpoise.io.project;
 
 import java.util.OptionalDouble;
 import org.counterpoise.core.error.InvalidInputException;
-import org.counterpoise.core.units.Dimension;
 
 /**
  * Where a structure's data came from when they were identified from a measurement (since format 5):
@@ -15,12 +14,12 @@ import org.counterpoise.core.units.Dimension;
  * @param file the measurement file's name as the user gave it (no folder), or empty
  * @param date the day of the fit, YYYY-MM-DD, or empty
  * @param normalisedResidual the fit's normalised residual (0 is a perfect fit), when the method gives one
- * @param naturalFrequencySd the standard uncertainty of the natural frequency, or null
+ * @param naturalFrequencySd the standard uncertainty of the natural frequency, rad/s, when given
  * @param dampingRatioSd the standard uncertainty of the damping ratio, when given
- * @param modalMassSd the standard uncertainty of the modal mass, or null
+ * @param modalMassSd the standard uncertainty of the modal mass, kg, when given
  */
 public record MeasuredSource(String method, String file, String date, OptionalDouble normalisedResidual,
-        QuantityInput naturalFrequencySd, OptionalDouble dampingRatioSd, QuantityInput modalMassSd) {
+        OptionalDouble naturalFrequencySd, OptionalDouble dampingRatioSd, OptionalDouble modalMassSd) {
 
     /** Nulls become empty; the date must be a calendar date when given. */
     public MeasuredSource {
@@ -29,26 +28,38 @@ public record MeasuredSource(String method, String file, String date, OptionalDo
         date = date == null ? "" : date.strip();
         ProjectIdentity.checkDate("structure.measured.date", date);
         normalisedResidual = normalisedResidual == null ? OptionalDouble.empty() : normalisedResidual;
+        naturalFrequencySd = naturalFrequencySd == null ? OptionalDouble.empty() : naturalFrequencySd;
         dampingRatioSd = dampingRatioSd == null ? OptionalDouble.empty() : dampingRatioSd;
+        modalMassSd = modalMassSd == null ? OptionalDouble.empty() : modalMassSd;
     }
 
     /** The key of this section under {@code structure} in a project file. */
     static final String KEY = "measured";
+    /**
+     * The keys of the uncertainties: plain numbers in the unit their name says, not quantities with
+     * units, since an uncertainty may be far smaller than any plausible frequency or mass (an exact
+     * fit gives 1e-12 Hz) and must still read back.
+     */
+    static final String FREQUENCY_SD_HZ = "natural_frequency_sd_Hz";
+    static final String DAMPING_SD = "damping_ratio_sd";
+    static final String MASS_SD_KG = "modal_mass_sd_kg";
+    static final String RESIDUAL = "normalised_residual";
 
     /**
      * @param m the section's fields
      * @return the source they give
      */
     static MeasuredSource read(JsonFields m) {
+        OptionalDouble hz = optional(m, FREQUENCY_SD_HZ);
         MeasuredSource s = new MeasuredSource(m.text("method"), m.text("file", ""), m.text("date", ""),
-                m.has("normalised_residual") ? OptionalDouble.of(nonNegative(m, "normalised_residual"))
-                        : OptionalDouble.empty(),
-                m.optionalQuantity("natural_frequency_sd", Dimension.FREQUENCY),
-                m.has("damping_ratio_sd") ? OptionalDouble.of(nonNegative(m, "damping_ratio_sd"))
-                        : OptionalDouble.empty(),
-                m.optionalQuantity("modal_mass_sd", Dimension.MASS));
+                optional(m, RESIDUAL), hz.isPresent() ? OptionalDouble.of(2.0 * Math.PI * hz.getAsDouble())
+                        : hz, optional(m, DAMPING_SD), optional(m, MASS_SD_KG));
         m.finish();
         return s;
+    }
+
+    private static OptionalDouble optional(JsonFields m, String key) {
+        return m.has(key) ? OptionalDouble.of(nonNegative(m, key)) : OptionalDouble.empty();
     }
 
     private static double nonNegative(JsonFields m, String key) {

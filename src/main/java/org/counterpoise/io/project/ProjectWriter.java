@@ -96,10 +96,10 @@ public final class ProjectWriter {
         if (!m.date().isEmpty()) {
             o.addProperty("date", m.date());
         }
-        putNumber(o, "normalised_residual", m.normalisedResidual());
-        put(o, "natural_frequency_sd", m.naturalFrequencySd());
-        putNumber(o, "damping_ratio_sd", m.dampingRatioSd());
-        put(o, "modal_mass_sd", m.modalMassSd());
+        putNumber(o, MeasuredSource.RESIDUAL, m.normalisedResidual());
+        m.naturalFrequencySd().ifPresent(sd -> o.addProperty(MeasuredSource.FREQUENCY_SD_HZ, sd / (2.0 * Math.PI)));
+        putNumber(o, MeasuredSource.DAMPING_SD, m.dampingRatioSd());
+        putNumber(o, MeasuredSource.MASS_SD_KG, m.modalMassSd());
         return o;
     }
 

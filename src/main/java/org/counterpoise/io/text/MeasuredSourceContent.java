@@ -63,16 +63,12 @@ public final class MeasuredSourceContent {
         }
         m.normalisedResidual().ifPresent(r -> fields.add(new Field(ReportKey.MEASURED_RESIDUAL,
                 "normalised residual", new Percent(r, 2))));
-        if (m.naturalFrequencySd() != null) {
-            fields.add(new Field(ReportKey.MEASURED_FREQUENCY_SD, "natural frequency \u00b1",
-                    new Quantity(m.naturalFrequencySd().si(), Dimension.FREQUENCY, 2)));
-        }
+        m.naturalFrequencySd().ifPresent(sd -> fields.add(new Field(ReportKey.MEASURED_FREQUENCY_SD,
+                "natural frequency \u00b1", new Quantity(sd, Dimension.FREQUENCY, 2))));
         m.dampingRatioSd().ifPresent(sd -> fields.add(new Field(ReportKey.MEASURED_DAMPING_SD,
                 "damping ratio \u00b1", new Quantity(sd, Dimension.RATIO, 2))));
-        if (m.modalMassSd() != null) {
-            fields.add(new Field(ReportKey.MEASURED_MASS_SD, "modal mass \u00b1",
-                    new Quantity(m.modalMassSd().si(), Dimension.MASS, 2)));
-        }
+        m.modalMassSd().ifPresent(sd -> fields.add(new Field(ReportKey.MEASURED_MASS_SD, "modal mass \u00b1",
+                new Quantity(sd, Dimension.MASS, 2))));
         return new ReportRow(ReportKey.STRUCTURE_MEASURED, "structure data from a measurement", "",
                 new Fields("", fields), "project file, structure.measured (uncertainties: one standard deviation"
                         + " from the fit)", CAUTION);

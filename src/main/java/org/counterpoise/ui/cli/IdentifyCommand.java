@@ -15,6 +15,7 @@ import org.counterpoise.core.identify.FrfKind;
 import org.counterpoise.core.identify.IdentifiedMode;
 import org.counterpoise.core.identify.LogDecrement;
 import org.counterpoise.core.identify.MeasuredFrf;
+import org.counterpoise.core.identify.ModeShapeRatio;
 import org.counterpoise.core.identify.RationalFraction;
 import org.counterpoise.core.units.Unit;
 import org.counterpoise.io.AtomicFiles;
@@ -108,18 +109,31 @@ public final class IdentifyCommand implements Callable<Integer> {
     @Option(names = "--mode", paramLabel = "K", description = "with --write-structure: which mode, 1 = lowest (default 1)")
     private int mode = 1;
 
+    @Option(names = "--transfer", paramLabel = "FILE.csv",
+            description = "a transfer FRF between the measured point and the absorber's point (same kind, units,"
+                    + " band and modes): the mode shape there relative to the measured point; --write-structure"
+                    + " then writes the mode as the absorber's point sees it")
+    private Path transfer;
+
     @Override
     public Integer call() throws IOException {
         Identification result = identify();
+        ModeShapeRatio shape = transfer == null ? null : shapeAtTransferPoint(result);
         PrintWriter out = spec.commandLine().getOut();
         List<String> notes = new ArrayList<>();
         if (plot != null) {
             notes.addAll(writePlots(result));
         }
         if (project != null) {
-            notes.add(writeStructure(result));
+            notes.add(writeStructure(result, shape));
         }
-        out.print(json ? IdentificationJson.toJson(result) : IdentificationReport.render(result));
+        if (shape == null) {
+            out.print(json ? IdentificationJson.toJson(result) : IdentificationReport.render(result));
+        } else {
+            String name = PlainText.escape(transfer.toString());
+            out.print(json ? IdentificationJson.toJson(result, transfer.toString(), mode, shape)
+                    : IdentificationReport.render(result) + IdentificationReport.transfer(name, mode, shape));
+        }
         if (!json) { // with --json, stdout stays one JSON object
             notes.forEach(out::println);
         }
@@ -274,7 +288,30 @@ public final class IdentifyCommand implements Callable<Integer> {
         }
     }
 
-    private String writeStructure(Identification result) throws IOException {
+    /** Fits the transfer FRF as the driving point's and matches the chosen mode (--mode) in it. */
+    private ModeShapeRatio shapeAtTransferPoint(Identification result) {
+        if (!(result instanceof Identification.Frf fit) || fit.model().modes().isEmpty()) {
+            throw new InvalidInputException("--transfer", PlainText.escape(transfer.toString()),
+                    "a driving-point FRF file beside it (not --decay or --added-mass)");
+        }
+        List<IdentifiedMode> found = fit.model().modes();
+        if (mode < 1 || mode > found.size()) {
+            throw new InvalidInputException("--mode", Integer.toString(mode), "1 to " + found.size()
+                    + " (the modes identified, lowest first)");
+        }
+        MeasuredFrf all = FrfCsv.read(transfer, fit.unit());
+        try {
+            MeasuredFrf lines = band == null ? all : band(all);
+            Identification.Frf other = Identification.Frf.fit(transfer.toString(), fit.unit(), lines, modes,
+                    !noResiduals);
+            return ModeShapeRatio.of(found.get(mode - 1), other.model().modes());
+        } catch (InvalidInputException e) {
+            throw e.field().equals("transfer FRF") ? e.renamed("--transfer") : e.renamed("--transfer ("
+                    + e.field() + ")");
+        }
+    }
+
+    private String writeStructure(Identification result, ModeShapeRatio shape) throws IOException {
         if (!(result instanceof Identification.Frf fit) || fit.model().modes().isEmpty()) {
             throw new InvalidInputException("--write-structure", PlainText.escape(project.toString()),
                     "an FRF fit, which gives the modal mass (a decay gives none; with --added-mass the damping is"
@@ -285,7 +322,8 @@ public final class IdentifyCommand implements Callable<Integer> {
             throw new InvalidInputException("--mode", Integer.toString(mode), "1 to " + found.size()
                     + " (the modes identified, lowest first)");
         }
-        IdentifiedMode chosen = found.get(mode - 1);
+        // with a transfer FRF, the mode as the absorber's point sees it (its modal mass there)
+        IdentifiedMode chosen = shape == null ? found.get(mode - 1) : shape.atTransferPoint();
         try {
             StructureFromMeasurement.structure(chosen);
         } catch (InvalidInputException e) {
