@@ -36,6 +36,7 @@ import org.counterpoise.core.identify.FrfKind;
 import org.counterpoise.core.identify.IdentifiedMode;
 import org.counterpoise.core.identify.MeasuredFrf;
 import org.counterpoise.core.identify.ModalModel;
+import org.counterpoise.core.identify.ModeShapeRatio;
 import org.counterpoise.core.units.Unit;
 import org.counterpoise.io.chart.IdentificationCharts;
 import org.counterpoise.io.measurement.FrfCsv;
@@ -62,6 +63,7 @@ final class MeasurementDialog {
     private final Component owner;
     private final BiConsumer<Identification.Frf, IdentifiedMode> use;
     private final JTextField file = named(new JTextField(28), "measurement.file");
+    private final JTextField transferFile = named(new JTextField(28), "measurement.transfer");
     private final JComboBox<String> kind = new JComboBox<>(KINDS);
     private final JTextField unit = named(new JTextField(FrfUnit.si(FrfKind.ACCELERANCE).symbol(), 10),
             "measurement.unit");
@@ -74,7 +76,7 @@ final class MeasurementDialog {
     private final JLabel status = new JLabel(" ");
     private final ChartHost chart = new ChartHost("measurement.chart");
     private final DefaultTableModel rows = new DefaultTableModel(new Object[] {"Mode", "Natural frequency",
-        "Damping ratio", "Modal mass"}, 0) {
+        "Damping ratio", "Modal mass", "At the absorber's point"}, 0) {
         @Override
         public boolean isCellEditable(int row, int column) {
             return false;
@@ -84,7 +86,7 @@ final class MeasurementDialog {
     private JDialog dialog;
     /** The number of the newest fit; a fit that ends with another number is stale. Event thread only. */
     private long fitNumber;
-    private Identification.Frf shown;
+    private Fitted shown;
 
     /**
      * @param owner the window it belongs to
@@ -117,7 +119,9 @@ final class MeasurementDialog {
         table.setSelectionMode(ListSelectionModel.SINGLE_SELECTION);
         accept.setEnabled(false);
         JButton choose = named(new JButton("Choose\u2026"), "measurement.choose");
-        choose.addActionListener(e -> chooseFile());
+        choose.addActionListener(e -> chooseFile(file));
+        JButton chooseTransfer = named(new JButton("Choose\u2026"), "measurement.chooseTransfer");
+        chooseTransfer.addActionListener(e -> chooseFile(transferFile));
         kind.addActionListener(e -> {
             unit.setText(FrfUnit.si(kindChosen()).symbol());
             inputsChanged();
@@ -141,7 +145,7 @@ final class MeasurementDialog {
                 inputsChanged();
             }
         };
-        for (JTextField f : List.of(file, unit, bandLow, bandHigh)) {
+        for (JTextField f : List.of(file, transferFile, unit, bandLow, bandHigh)) {
             f.getDocument().addDocumentListener(typed);
         }
         modes.addChangeListener(e -> inputsChanged());
@@ -153,6 +157,11 @@ final class MeasurementDialog {
         fileRow.add(choose, BorderLayout.EAST);
         inputs.add(new JLabel("FRF file (.csv: frequency in Hz, real and imaginary or magnitude and phase)"));
         inputs.add(fileRow);
+        JPanel transferRow = new JPanel(new BorderLayout(4, 0));
+        transferRow.add(transferFile, BorderLayout.CENTER);
+        transferRow.add(chooseTransfer, BorderLayout.EAST);
+        inputs.add(new JLabel("Transfer FRF to the absorber's point (optional, when it is not the measured one)"));
+        inputs.add(transferRow);
         inputs.add(new JLabel("What was measured"));
         inputs.add(kind);
         inputs.add(new JLabel("Unit of the values (response/force, e.g. m/N, mm/s/N, g/lbf)"));
@@ -207,11 +216,11 @@ final class MeasurementDialog {
         return d;
     }
 
-    private void chooseFile() {
+    private void chooseFile(JTextField into) {
         JFileChooser chooser = new JFileChooser();
         chooser.setFileFilter(new FileNameExtensionFilter("Measured FRF (.csv, .txt)", "csv", "txt"));
         if (chooser.showOpenDialog(dialog) == JFileChooser.APPROVE_OPTION) {
-            file.setText(chooser.getSelectedFile().getPath());
+            into.setText(chooser.getSelectedFile().getPath());
             startFit();
         }
     }
@@ -228,21 +237,35 @@ final class MeasurementDialog {
     }
 
     /** What a fit needs, read on the event thread; parsed and checked on the worker. */
-    private record FitInputs(String file, FrfKind kind, String unit, String low, String high, int modes,
-            boolean residuals) {
+    private record FitInputs(String file, String transfer, FrfKind kind, String unit, String low, String high,
+            int modes, boolean residuals) {
+    }
+
+    /**
+     * The driving-point fit, and the modes of the transfer FRF's fit (empty without one).
+     * @param driving the driving-point fit
+     * @param transferModes the modes fitted to the transfer FRF, or empty
+     */
+    record Fitted(Identification.Frf driving, List<IdentifiedMode> transferModes) {
+        /** @return mode i as the absorber's point sees it (the driving point's mode without a transfer FRF) */
+        IdentifiedMode atAbsorber(int i) {
+            IdentifiedMode m = driving.model().modes().get(i);
+            return transferModes.isEmpty() ? m : ModeShapeRatio.of(m, transferModes).atTransferPoint();
+        }
     }
 
 
     private void startFit() {
         long number = ++fitNumber;
-        FitInputs in = new FitInputs(file.getText().strip(), kindChosen(), unit.getText().strip(),
+        FitInputs in = new FitInputs(file.getText().strip(), transferFile.getText().strip(), kindChosen(),
+                unit.getText().strip(),
                 bandLow.getText().strip(), bandHigh.getText().strip(), (Integer) modes.getValue(),
                 residuals.isSelected());
         status.setText("Fitting\u2026");
         fit.setEnabled(false);
-        new SwingWorker<Identification.Frf, Void>() {
+        new SwingWorker<Fitted, Void>() {
             @Override
-            protected Identification.Frf doInBackground() {
+            protected Fitted doInBackground() {
                 return fitted(in);
             }
 
@@ -253,9 +276,9 @@ final class MeasurementDialog {
                     return; // the inputs changed while it ran: a newer fit or none stands
                 }
                 try {
-                    Identification.Frf f = get();
+                    Fitted f = get();
                     showModel(f);
-                    status.setText(quality(f.model()));
+                    status.setText(quality(f.driving().model()));
                 } catch (ExecutionException e) {
                     showModel(null);
                     status.setText(e.getCause() instanceof CoreException c ? c.getMessage()
@@ -268,19 +291,29 @@ final class MeasurementDialog {
     }
 
     /** Reads, cuts to the band and fits; every problem is an InvalidInputException in plain words. */
-    static Identification.Frf fitted(FitInputs in) {
+    static Fitted fitted(FitInputs in) {
         if (in.file().isEmpty()) {
             throw InvalidInputException.missing("FRF file", "a CSV file (.csv) of the measured FRF");
         }
         FrfUnit u = FrfUnit.parse(in.unit(), in.kind(), "unit of the values");
-        MeasuredFrf all = FrfCsv.read(Path.of(in.file()), u);
-        MeasuredFrf band = all;
-        if (!in.low().isEmpty() || !in.high().isEmpty()) {
-            double lo = in.low().isEmpty() ? 0 : hertz(in.low(), "band from");
-            double hi = in.high().isEmpty() ? Double.MAX_VALUE : hertz(in.high(), "band to");
-            band = all.within(Unit.HERTZ.toSi(lo), hi == Double.MAX_VALUE ? hi : Unit.HERTZ.toSi(hi));
+        Identification.Frf driving = Identification.Frf.fit(Path.of(in.file()).toString(), u,
+                band(FrfCsv.read(Path.of(in.file()), u), in), in.modes(), in.residuals());
+        if (in.transfer().isEmpty()) {
+            return new Fitted(driving, List.of());
         }
-        return Identification.Frf.fit(Path.of(in.file()).toString(), u, band, in.modes(), in.residuals());
+        // the transfer FRF is fitted as the driving point's: same unit, band, modes and residual terms
+        Identification.Frf transfer = Identification.Frf.fit(in.transfer(), u,
+                band(FrfCsv.read(Path.of(in.transfer()), u), in), in.modes(), in.residuals());
+        return new Fitted(driving, transfer.model().modes());
+    }
+
+    private static MeasuredFrf band(MeasuredFrf all, FitInputs in) {
+        if (in.low().isEmpty() && in.high().isEmpty()) {
+            return all;
+        }
+        double lo = in.low().isEmpty() ? 0 : hertz(in.low(), "band from");
+        double hi = in.high().isEmpty() ? Double.MAX_VALUE : hertz(in.high(), "band to");
+        return all.within(Unit.HERTZ.toSi(lo), hi == Double.MAX_VALUE ? hi : Unit.HERTZ.toSi(hi));
     }
 
     private static double hertz(String text, String field) {
@@ -302,14 +335,15 @@ final class MeasurementDialog {
                 + QuantityFormat.number(100 * m.normalisedResidual(), 3) + " %" + coherence + ".";
     }
 
-    private void showModel(Identification.Frf f) {
+    private void showModel(Fitted fitted) {
         rows.setRowCount(0);
         accept.setEnabled(false);
-        shown = f;
-        if (f == null) {
+        shown = fitted;
+        if (fitted == null) {
             chart.message("No fit for the inputs shown.");
             return;
         }
+        Identification.Frf f = fitted.driving();
         chart.show(IdentificationCharts.magnitude(f.fitted(), f.model(), f.unit(), 640, 300));
         List<IdentifiedMode> found = f.model().modes();
         for (int i = 0; i < found.size(); i++) {
@@ -318,10 +352,23 @@ final class MeasurementDialog {
                 withSd(Unit.HERTZ.fromSi(m.naturalFrequency()), m.naturalFrequencySd().isPresent()
                         ? Unit.HERTZ.fromSi(m.naturalFrequencySd().getAsDouble()) : Double.NaN, "Hz"),
                 withSd(m.dampingRatio(), m.dampingRatioSd().orElse(Double.NaN), ""),
-                withSd(m.modalMass(), m.modalMassSd().orElse(Double.NaN), "kg")});
+                withSd(m.modalMass(), m.modalMassSd().orElse(Double.NaN), "kg"), atAbsorber(fitted, i)});
         }
         if (!found.isEmpty()) {
             table.setRowSelectionInterval(0, 0);
+        }
+    }
+
+    /** The modal mass the absorber's point sees, from the transfer FRF; the refusal in words when it has no such mode. */
+    private static String atAbsorber(Fitted fitted, int i) {
+        if (fitted.transferModes().isEmpty()) {
+            return "the measured point";
+        }
+        try {
+            IdentifiedMode at = fitted.atAbsorber(i);
+            return withSd(at.modalMass(), at.modalMassSd().orElse(Double.NaN), "kg");
+        } catch (InvalidInputException e) {
+            return "no such mode in the transfer FRF";
         }
     }
 
@@ -333,11 +380,11 @@ final class MeasurementDialog {
 
     private void acceptSelected() {
         int row = table.getSelectedRow();
-        if (shown == null || row < 0 || row >= shown.model().modes().size()) {
+        if (shown == null || row < 0 || row >= shown.driving().model().modes().size()) {
             return;
         }
         try {
-            use.accept(shown, shown.model().modes().get(row));
+            use.accept(shown.driving(), shown.atAbsorber(row));
             dialog.setVisible(false);
         } catch (InvalidInputException e) {
             status.setText(e.getMessage());

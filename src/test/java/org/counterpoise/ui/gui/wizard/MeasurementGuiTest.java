@@ -7,6 +7,10 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.awt.Component;
 import java.awt.Window;
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Locale;
 import java.util.concurrent.Callable;
 import javax.swing.AbstractButton;
 import javax.swing.JDialog;
@@ -15,13 +19,18 @@ import javax.swing.JTable;
 import javax.swing.JTextField;
 import javax.swing.RootPaneContainer;
 import javax.swing.SwingUtilities;
+import org.counterpoise.core.identify.FrfKind;
+import org.counterpoise.core.identify.MeasuredFrf;
 import org.counterpoise.core.model.Structure;
 import org.counterpoise.io.project.MeasuredSource;
 import org.counterpoise.io.project.RobustnessInput;
+import org.counterpoise.testing.SyntheticFrf;
+import org.counterpoise.testing.SyntheticFrf.Mode;
 import org.counterpoise.ui.gui.Edt;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
 
 /**
  * The structure from a measurement, in a real window (issue 15): the invented impact-test file is
@@ -89,6 +98,41 @@ class MeasurementGuiTest {
         assertEquals(before, onEdt(() -> frame.document().project().toStructure()), "one undo step");
         assertNull(onEdt(() -> frame.document().project().structure().measured()));
         assertEquals(robustnessBefore, onEdt(() -> frame.document().project().robustness()), "tolerances too");
+    }
+
+    @Test
+    void aTransferFrfGivesTheMassTheAbsorbersPointSees(@TempDir Path dir) throws Exception {
+        // a mode of generalised mass 4200 kg with shape 1 at the measured point and 0.6 at the absorber's:
+        // modal constants phi_j phi_k / M (Ewins 2000, Modal Testing, 2nd ed., sec. 2.6), so the absorber's
+        // point sees 4200 / 0.36 = 11 666.7 kg, written to 5 significant figures: 11 667 kg (by hand)
+        Path driving = csv(dir, "driving.csv", SyntheticFrf.of(FrfKind.ACCELERANCE, 15, 31, 161, 0.0, 1,
+                new Mode(23.0, 0.02, 4200.0)));
+        Path transfer = csv(dir, "transfer.csv", SyntheticFrf.of(FrfKind.ACCELERANCE, 15, 31, 161, 0.0, 2,
+                new Mode(23.0, 0.02, 4200.0 / 0.6)));
+        open();
+        JDialog dialog = openDialog();
+        onEdt(() -> {
+            ((JTextField) find(dialog, "measurement.file")).setText(driving.toString());
+            ((JTextField) find(dialog, "measurement.transfer")).setText(transfer.toString());
+            ((AbstractButton) find(dialog, "measurement.fit")).doClick();
+            return null;
+        });
+        JTable table = (JTable) find(dialog, "measurement.modesTable");
+        Edt.waitFor(() -> Edt.callQuietly(() -> table.getRowCount() == 1), "the two fits");
+        onEdt(() -> {
+            ((AbstractButton) find(dialog, "measurement.accept")).doClick();
+            return null;
+        });
+        assertEquals(11667.0, onEdt(() -> frame.document().project().toStructure().effectiveMass()), 1e-9);
+    }
+
+    private static Path csv(Path dir, String name, MeasuredFrf frf) throws IOException {
+        StringBuilder b = new StringBuilder("frequency_Hz,real,imag\n");
+        for (int i = 0; i < frf.size(); i++) {
+            b.append(String.format(Locale.ROOT, "%.6f,%.9e,%.9e%n", frf.omega()[i] / (2 * Math.PI), frf.real()[i],
+                    frf.imaginary()[i]));
+        }
+        return Files.writeString(dir.resolve(name), b.toString());
     }
 
     @Test
