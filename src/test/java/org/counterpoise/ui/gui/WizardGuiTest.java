@@ -508,8 +508,8 @@ class WizardGuiTest {
             return null;
         });
         javax.swing.JDialog dialog = onEdt(() -> (javax.swing.JDialog) java.util.Arrays.stream(
-                java.awt.Window.getWindows()).filter(w -> "project.dialog".equals(w.getName())).findFirst()
-                .orElseThrow());
+                java.awt.Window.getWindows()).filter(w -> "project.dialog".equals(w.getName())
+                        && w.getOwner() == frame && w.isShowing()).findFirst().orElseThrow()); // not an earlier frame's
         java.util.Map<String, javax.swing.text.JTextComponent> fields = new java.util.HashMap<>();
         for (String id : List.of("project.name", "project.revision", "project.date", "project.engineer",
                 "project.client", "project.notes")) {

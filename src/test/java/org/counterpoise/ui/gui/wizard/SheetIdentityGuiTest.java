@@ -143,8 +143,10 @@ class SheetIdentityGuiTest {
         Edt.waitFor(() -> Edt.callQuietly(() -> frame.settled() && frame.shownResult() != null), "first design");
         dialog = onEdt(() -> {
             frame.showProjectDetails();
-            return (JDialog) Arrays.stream(Window.getWindows()).filter(w -> "project.dialog".equals(w.getName()))
-                    .findFirst().orElseThrow();
+            // this frame's own dialog: Window.getWindows() still lists the disposed dialogs of earlier
+            // tests' frames until they are collected, and typing into one of those edits another document
+            return (JDialog) Arrays.stream(Window.getWindows()).filter(w -> "project.dialog".equals(w.getName())
+                    && w.getOwner() == frame && w.isShowing()).findFirst().orElseThrow();
         });
     }
 
