@@ -47,7 +47,8 @@ class ArchitectureTest {
             Map.entry("criteria", 5),
             Map.entry("optim", 6),
             Map.entry("design", 7),
-            Map.entry("realisation", 8));
+            Map.entry("realisation", 8),
+            Map.entry("commission", 9));
 
     /** The only things core code may import (the numerical core is pure: java.* and Commons Math). */
     private static final List<String> CORE_MAY_IMPORT = List.of("java.", "org.apache.commons.math3.", CORE);

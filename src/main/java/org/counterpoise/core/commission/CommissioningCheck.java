@@ -1,0 +1,98 @@
+package org.counterpoise.core.commission;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.apache.commons.math3.complex.Complex;
+import org.counterpoise.core.design.DesignResult;
+import org.counterpoise.core.identify.MeasuredFrf;
+import org.counterpoise.core.model.Structure;
+import org.counterpoise.core.model.Tuning;
+import org.counterpoise.core.realisation.PredictedPoint;
+import org.counterpoise.core.realisation.Realisation;
+
+/**
+ * The commissioning check: the frequency response measured at the absorber's point with the
+ * absorber fitted, against the design's prediction and against the absorber as built (fitted to
+ * the measurement, {@link AsBuiltFit}), with the trim that brings it to the design
+ * ({@link TrimCorrection}).
+ *
+ * @param built the absorber as built
+ * @param trim what to do about it
+ * @param rows the measured response beside the predicted at the predicted table's frequencies that
+ *     lie inside the measurement, magnitudes of the measured FRF kind, SI
+ * @param measuredPeakFrequency the frequency of the largest measured line, rad/s
+ * @param measuredPeak its magnitude
+ * @param designPeakFrequency the frequency of the largest magnitude the design predicts at the measured lines, rad/s
+ * @param designPeak that magnitude
+ */
+public record CommissioningCheck(AsBuiltAbsorber built, TrimCorrection trim, List<Row> rows,
+        double measuredPeakFrequency, double measuredPeak, double designPeakFrequency, double designPeak) {
+
+    /** Copies the rows. */
+    public CommissioningCheck {
+        rows = List.copyOf(rows);
+    }
+
+    /**
+     * One frequency of the comparison.
+     *
+     * @param frequency rad/s
+     * @param measured the measured magnitude (linear between the two nearest lines)
+     * @param design the design's predicted magnitude
+     * @param asBuilt the magnitude of the model with the absorber as built
+     */
+    public record Row(double frequency, double measured, double design, double asBuilt) {
+    }
+
+    /**
+     * @param design the design
+     * @param realisation its hardware (the trim plan and part tolerances)
+     * @param measured the driving-point FRF at the absorber's point with the absorber fitted
+     * @param freeStructure whether to fit the structure's natural frequency too
+     * @return the check
+     */
+    public static CommissioningCheck of(DesignResult design, Realisation realisation, MeasuredFrf measured,
+            boolean freeStructure) {
+        Structure structure = design.study().structure();
+        Tuning tuning = design.tuning();
+        AsBuiltAbsorber built = AsBuiltFit.fit(structure, tuning, measured, freeStructure);
+        TrimCorrection trim = TrimCorrection.of(built, tuning.tuningRatio(), tuning.dampingRatio(),
+                design.absorber().mass(), realisation.trim(), realisation.tolerances());
+        Structure asMeasured = AsBuiltFit.withFrequency(structure, built.structureFrequency());
+        Tuning asBuilt = new Tuning(built.massRatio(), built.tuningRatio(), built.dampingRatio());
+        double[] w = measured.omega();
+        Complex[] predicted = AsBuiltFit.predicted(structure, tuning, w, measured.kind());
+        int measuredAt = 0;
+        int designAt = 0;
+        for (int i = 0; i < w.length; i++) {
+            measuredAt = measured.value(i).abs() > measured.value(measuredAt).abs() ? i : measuredAt;
+            designAt = predicted[i].abs() > predicted[designAt].abs() ? i : designAt;
+        }
+        List<Row> rows = new ArrayList<>();
+        for (PredictedPoint p : realisation.predicted()) {
+            double f = p.frequency();
+            if (f < w[0] || f > w[w.length - 1]) {
+                continue;
+            }
+            double[] at = {f};
+            rows.add(new Row(f, interpolated(measured, f),
+                    AsBuiltFit.predicted(structure, tuning, at, measured.kind())[0].abs(),
+                    AsBuiltFit.predicted(asMeasured, asBuilt, at, measured.kind())[0].abs()));
+        }
+        return new CommissioningCheck(built, trim, rows, w[measuredAt], measured.value(measuredAt).abs(), w[designAt],
+                predicted[designAt].abs());
+    }
+
+    /** The measured magnitude at f, linear between the lines on either side. */
+    static double interpolated(MeasuredFrf measured, double f) {
+        double[] w = measured.omega();
+        int i = 1;
+        while (i < w.length - 1 && w[i] < f) {
+            i++;
+        }
+        double a = measured.value(i - 1).abs();
+        double b = measured.value(i).abs();
+        double t = (f - w[i - 1]) / (w[i] - w[i - 1]);
+        return a + Math.max(0.0, Math.min(1.0, t)) * (b - a);
+    }
+}

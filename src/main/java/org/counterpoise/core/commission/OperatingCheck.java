@@ -1,0 +1,96 @@
+package org.counterpoise.core.commission;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.OptionalDouble;
+import org.counterpoise.core.design.DesignResult;
+import org.counterpoise.core.error.InvalidInputException;
+import org.counterpoise.core.model.Excitation;
+import org.counterpoise.core.model.FrequencyBand;
+import org.counterpoise.core.response.ResponsePeak;
+import org.counterpoise.core.response.SystemResponse;
+
+/**
+ * The model against an operating measurement: the response at running speed that the site shows
+ * against the one the design's model predicts for the project's disturbance, with or without the
+ * absorber. The model is linear, so their ratio is the ratio of the disturbance the site shows to
+ * the project's, and everything the disturbance drives (the absorber's stroke, its forces) scales
+ * by it. That is the check that matters before the absorber is built: a disturbance larger than
+ * assumed uses up the stroke clearance.
+ *
+ * <p>The line compared is the largest within {@link #WINDOW} of the running frequency (or at least
+ * 1.5 line spacings, for coarse spectra); without a stated running frequency, the largest line in
+ * the band widened by the same fraction. The limits are common practice, no source.
+ */
+public final class OperatingCheck {
+    /** Half-width of the window searched about the running frequency, fraction of it. */
+    static final double WINDOW = 0.03;
+    /** The window is at least this many line spacings wide each side. */
+    static final double WINDOW_LINES = 1.5;
+
+    private OperatingCheck() {
+    }
+
+    /**
+     * @param design the design
+     * @param spectrum the operating spectrum at the absorber's point
+     * @param running the running (forcing) frequency, rad/s; empty: the largest line in the band
+     * @param withAbsorber whether the absorber was fitted when the spectrum was measured
+     * @return the comparison
+     */
+    public static OperatingComparison of(DesignResult design, OperatingSpectrum spectrum, OptionalDouble running,
+            boolean withAbsorber) {
+        FrequencyBand band = design.study().excitation().band();
+        double halfLines = WINDOW_LINES * spectrum.lineSpacing();
+        int line;
+        double centre;
+        if (running.isPresent()) {
+            centre = running.getAsDouble();
+            double half = Math.max(WINDOW * centre, halfLines);
+            line = spectrum.largestBetween(centre - half, centre + half);
+        } else {
+            line = spectrum.largestBetween(Math.min(band.low() * (1 - WINDOW), band.low() - halfLines),
+                    Math.max(band.high() * (1 + WINDOW), band.high() + halfLines));
+            centre = line < 0 ? band.centre() : spectrum.omega()[line];
+        }
+        if (line < 0) {
+            throw new InvalidInputException("spectrum", "no line near the running speed",
+                    "a spectrum with lines at and about the running frequency (" + (running.isPresent()
+                            ? "the one given" : "the project's band") + ")");
+        }
+        double omega = spectrum.omega()[line];
+        Excitation e = design.study().excitation();
+        SystemResponse model = new SystemResponse(design.study().structure(), withAbsorber ? design.tuning() : null,
+                e.kind(), e.amplitude());
+        double predicted = model.amplitudeAt(spectrum.kind(), omega);
+        double measured = spectrum.amplitude()[line];
+        if (!(predicted > 0) || Double.isInfinite(predicted) || !(measured > 0)) {
+            throw new InvalidInputException("spectrum", "amplitude " + (measured > 0 ? "predicted unbounded" : "zero")
+                    + " at the line compared", "a line with a response at running speed, off an undamped resonance");
+        }
+        double ratio = measured / predicted;
+        List<CommissioningWarning> warnings = new ArrayList<>();
+        if (ratio > CommissioningWarning.DISAGREEMENT_FACTOR || ratio < 1 / CommissioningWarning.DISAGREEMENT_FACTOR) {
+            warnings.add(CommissioningWarning.OPERATING_DISAGREES);
+        }
+        int largest = spectrum.largestBetween(0.0, Double.MAX_VALUE);
+        if (largest != line && spectrum.amplitude()[largest] > CommissioningWarning.OTHER_LINE_FACTOR * measured) {
+            warnings.add(CommissioningWarning.OTHER_LINE_DOMINATES);
+        }
+        double strokeDesign = largestStroke(design);
+        double strokeImplied = strokeDesign * ratio;
+        if (strokeImplied > design.clearance()) {
+            warnings.add(CommissioningWarning.STROKE_BEYOND_CLEARANCE);
+        }
+        return new OperatingComparison(centre, omega, spectrum.kind(), measured, predicted, ratio, e.amplitude() * ratio,
+                strokeDesign, strokeImplied, design.clearance(), withAbsorber, warnings,
+                spectrum.omega()[largest], spectrum.amplitude()[largest]);
+    }
+
+    /** The larger of the stroke in band and over the run-up (the band's when the run-up's is unbounded). */
+    private static double largestStroke(DesignResult design) {
+        ResponsePeak runUp = design.strokeRunUp();
+        double band = design.strokeInBand().value();
+        return runUp.unbounded() ? band : Math.max(band, runUp.value());
+    }
+}

@@ -1,0 +1,76 @@
+package org.counterpoise.core.commission;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.counterpoise.core.realisation.PartTolerances;
+import org.counterpoise.core.realisation.TrimPlan;
+
+/**
+ * What to do on site once the absorber as built is known: how far its frequency and damping are
+ * from what the structure needs, and how many trim plates to add (positive) or take off (negative).
+ *
+ * <p>The target is the design's tuning ratio f times the structure's natural frequency, the one
+ * measured (when the fit freed it) or the design's. At a fixed spring rate omega_a = sqrt(k / m)
+ * (any vibration text, e.g. Den Hartog 1956, Mechanical Vibrations, 4th ed., ch. 1), so the mass
+ * that gives the target is m (omega_built / omega_target)^2; the plates are that mass change over
+ * one plate's mass, rounded to the nearest whole plate. No trim is called for while the frequency
+ * is inside its part tolerance.
+ *
+ * @param targetFrequency the absorber frequency the structure needs, rad/s
+ * @param frequencyOff (omega_built / omega_target - 1), fraction
+ * @param frequencyTolerance the part tolerance on the absorber's frequency, fraction
+ * @param platesToAdd plates to add (negative: to take off); 0 when inside the tolerance
+ * @param frequencyOffAfter what remains of the frequency error after that trim, fraction
+ * @param dampingOff (zeta_built / zeta_design - 1), fraction (0 for an undamped design)
+ * @param dampingTolerance the part tolerance on the damping, fraction
+ * @param warnings what calls for more than trim plates
+ */
+public record TrimCorrection(double targetFrequency, double frequencyOff, double frequencyTolerance, int platesToAdd,
+        double frequencyOffAfter, double dampingOff, double dampingTolerance, List<CommissioningWarning> warnings) {
+
+    /** Copies the warnings. */
+    public TrimCorrection {
+        warnings = List.copyOf(warnings);
+    }
+
+    /** @return whether the absorber's frequency is inside its part tolerance as built */
+    public boolean frequencyInTolerance() {
+        return Math.abs(frequencyOff) <= frequencyTolerance;
+    }
+
+    /**
+     * @param built the absorber as built
+     * @param designTuningRatio the design's tuning ratio f
+     * @param designDampingRatio the design's absorber damping ratio
+     * @param absorberMass the absorber mass as built (with its fitted plates), kg
+     * @param trim the trim plan supplied with the absorber
+     * @param tolerances the part tolerances
+     * @return what to do
+     */
+    public static TrimCorrection of(AsBuiltAbsorber built, double designTuningRatio, double designDampingRatio,
+            double absorberMass, TrimPlan trim, PartTolerances tolerances) {
+        double target = designTuningRatio * built.structureFrequency();
+        double off = built.absorberFrequency() / target - 1.0;
+        List<CommissioningWarning> warnings = new ArrayList<>();
+        int plates = 0;
+        double after = off;
+        if (Math.abs(off) > tolerances.absorberFrequency()) {
+            double ratio = built.absorberFrequency() / target;
+            double needed = absorberMass * ratio * ratio - absorberMass;
+            plates = (int) Math.round(needed / trim.plateMass());
+            int spare = trim.platesTotal() - trim.platesFitted();
+            if (plates > spare || -plates > trim.platesFitted()) {
+                warnings.add(CommissioningWarning.BEYOND_TRIM_RANGE);
+                plates = Math.max(-trim.platesFitted(), Math.min(spare, plates));
+            }
+            after = built.absorberFrequency() * Math.sqrt(absorberMass / (absorberMass + plates * trim.plateMass()))
+                    / target - 1.0;
+        }
+        double dampingOff = designDampingRatio > 0 ? built.dampingRatio() / designDampingRatio - 1.0 : 0.0;
+        if (designDampingRatio > 0 && Math.abs(dampingOff) > tolerances.damping()) {
+            warnings.add(CommissioningWarning.DAMPING_OUT_OF_TOLERANCE);
+        }
+        return new TrimCorrection(target, off, tolerances.absorberFrequency(), plates, after, dampingOff,
+                tolerances.damping(), warnings);
+    }
+}
