@@ -13,13 +13,14 @@ import org.counterpoise.core.realisation.TrimPlan;
  * measured (when the fit freed it) or the design's. At a fixed spring rate omega_a = sqrt(k / m)
  * (any vibration text, e.g. Den Hartog 1956, Mechanical Vibrations, 4th ed., ch. 1), so the mass
  * that gives the target is m (omega_built / omega_target)^2; the plates are that mass change over
- * one plate's mass, rounded to the nearest whole plate. No trim is called for while the frequency
- * is inside its part tolerance.
+ * one plate's mass, rounded to the nearest whole plate. The plates are given inside the part
+ * tolerance too (the trim is cheap and brings the response nearer the design's); whether the
+ * absorber as built is inside its tolerance is reported beside them.
  *
  * @param targetFrequency the absorber frequency the structure needs, rad/s
  * @param frequencyOff (omega_built / omega_target - 1), fraction
  * @param frequencyTolerance the part tolerance on the absorber's frequency, fraction
- * @param platesToAdd plates to add (negative: to take off); 0 when inside the tolerance
+ * @param platesToAdd plates to add (negative: to take off), the nearest whole number
  * @param frequencyOffAfter what remains of the frequency error after that trim, fraction
  * @param dampingOff (zeta_built / zeta_design - 1), fraction (0 for an undamped design)
  * @param dampingTolerance the part tolerance on the damping, fraction
@@ -52,20 +53,19 @@ public record TrimCorrection(double targetFrequency, double frequencyOff, double
         double target = designTuningRatio * built.structureFrequency();
         double off = built.absorberFrequency() / target - 1.0;
         List<CommissioningWarning> warnings = new ArrayList<>();
-        int plates = 0;
-        double after = off;
-        if (Math.abs(off) > tolerances.absorberFrequency()) {
-            double ratio = built.absorberFrequency() / target;
-            double needed = absorberMass * ratio * ratio - absorberMass;
-            plates = (int) Math.round(needed / trim.plateMass());
-            int spare = trim.platesTotal() - trim.platesFitted();
-            if (plates > spare || -plates > trim.platesFitted()) {
+        double ratio = built.absorberFrequency() / target;
+        double needed = absorberMass * ratio * ratio - absorberMass;
+        int plates = (int) Math.round(needed / trim.plateMass());
+        int spare = trim.platesTotal() - trim.platesFitted();
+        if (plates > spare || -plates > trim.platesFitted()) {
+            // short of plates only matters when the absorber is out of its tolerance
+            if (Math.abs(off) > tolerances.absorberFrequency()) {
                 warnings.add(CommissioningWarning.BEYOND_TRIM_RANGE);
-                plates = Math.max(-trim.platesFitted(), Math.min(spare, plates));
             }
-            after = built.absorberFrequency() * Math.sqrt(absorberMass / (absorberMass + plates * trim.plateMass()))
-                    / target - 1.0;
+            plates = Math.max(-trim.platesFitted(), Math.min(spare, plates));
         }
+        double after = built.absorberFrequency()
+                * Math.sqrt(absorberMass / (absorberMass + plates * trim.plateMass())) / target - 1.0;
         double dampingOff = designDampingRatio > 0 ? built.dampingRatio() / designDampingRatio - 1.0 : 0.0;
         if (designDampingRatio > 0 && Math.abs(dampingOff) > tolerances.damping()) {
             warnings.add(CommissioningWarning.DAMPING_OUT_OF_TOLERANCE);

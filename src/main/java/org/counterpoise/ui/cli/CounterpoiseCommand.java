@@ -9,7 +9,7 @@ import picocli.CommandLine.Spec;
         description = {"Design assistant for dynamic vibration absorbers (tuned mass dampers).",
             "A preliminary design aid: verify by measurement; local codes and licensed practice govern."},
         subcommands = {DesignCommand.class, OptimumCommand.class, RobustnessCommand.class, SheetCommand.class,
-            RunUpCommand.class, IdentifyCommand.class})
+            RunUpCommand.class, IdentifyCommand.class, SiteCheckCommand.class})
 public final class CounterpoiseCommand implements Runnable {
     @Spec
     private CommandSpec spec;

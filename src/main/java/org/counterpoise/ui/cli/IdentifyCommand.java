@@ -160,14 +160,14 @@ public final class IdentifyCommand implements Callable<Integer> {
                 throw e.field().equals("cycles") ? e.renamed("--cycles") : e.renamed(file + " (" + e.field() + ")");
             }
         }
-        FrfKind k = kind();
+        FrfKind k = FrfOptions.kind("--kind", kind);
         FrfUnit unit = units == null ? FrfUnit.si(k) : FrfUnit.parse(units, k, "--units");
         MeasuredFrf all = FrfCsv.read(file, unit);
         if (modes < 1 || modes > RationalFraction.MAX_MODES) {
             throw new InvalidInputException("--modes", Integer.toString(modes), "1 to " + RationalFraction.MAX_MODES);
         }
         try {
-            MeasuredFrf fitted = band == null ? all : band(all);
+            MeasuredFrf fitted = band == null ? all : FrfOptions.band("--band", band, all);
             return Identification.Frf.fit(file.toString(), unit, fitted, modes, !noResiduals);
         } catch (InvalidInputException e) {
             throw switch (e.field()) {
@@ -176,36 +176,6 @@ public final class IdentifyCommand implements Callable<Integer> {
                 default -> e;
             };
         }
-    }
-
-    private FrfKind kind() {
-        if (kind == null) {
-            return FrfKind.ACCELERANCE;
-        }
-        for (FrfKind k : FrfKind.values()) {
-            if (k.id().equals(kind.strip().toLowerCase(Locale.ROOT))) {
-                return k;
-            }
-        }
-        throw new InvalidInputException("--kind", Converters.shown(kind), "receptance, mobility or accelerance");
-    }
-
-    private MeasuredFrf band(MeasuredFrf all) {
-        String[] parts = band.split(":", -1);
-        double[] hz = new double[2];
-        try {
-            if (parts.length != 2) {
-                throw new NumberFormatException();
-            }
-            hz[0] = Converters.real(parts[0]);
-            hz[1] = Converters.real(parts[1]);
-        } catch (RuntimeException e) {
-            throw new InvalidInputException("--band", Converters.shown(band), "LO:HI in Hz, such as 15:35");
-        }
-        if (!(hz[0] >= 0 && hz[1] > hz[0])) {
-            throw new InvalidInputException("--band", Converters.shown(band), "LO:HI in Hz with 0 <= LO < HI");
-        }
-        return all.within(Unit.HERTZ.toSi(hz[0]), Unit.HERTZ.toSi(hz[1]));
     }
 
     private Identification addedMass() {
@@ -301,7 +271,7 @@ public final class IdentifyCommand implements Callable<Integer> {
         }
         MeasuredFrf all = FrfCsv.read(transfer, fit.unit());
         try {
-            MeasuredFrf lines = band == null ? all : band(all);
+            MeasuredFrf lines = band == null ? all : FrfOptions.band("--band", band, all);
             Identification.Frf other = Identification.Frf.fit(transfer.toString(), fit.unit(), lines, modes,
                     !noResiduals);
             return ModeShapeRatio.of(found.get(mode - 1), other.model().modes());

@@ -9,6 +9,7 @@ import org.counterpoise.core.identify.FrfKind;
 import org.counterpoise.core.identify.MeasuredFrf;
 import org.counterpoise.core.model.Structure;
 import org.counterpoise.core.model.Tuning;
+import org.counterpoise.testing.TwoMassReference;
 import org.junit.jupiter.api.Test;
 
 /**

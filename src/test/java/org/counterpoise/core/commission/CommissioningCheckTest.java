@@ -12,6 +12,7 @@ import org.counterpoise.core.model.Structure;
 import org.counterpoise.core.realisation.HardwareChoice;
 import org.counterpoise.core.realisation.Realisation;
 import org.counterpoise.core.realisation.Realiser;
+import org.counterpoise.testing.TwoMassReference;
 import org.junit.jupiter.api.Test;
 
 /**

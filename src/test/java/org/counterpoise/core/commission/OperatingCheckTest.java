@@ -14,6 +14,7 @@ import org.counterpoise.core.model.Absorber;
 import org.counterpoise.core.model.Structure;
 import org.counterpoise.core.response.ResponseKind;
 import org.counterpoise.io.project.ProjectReader;
+import org.counterpoise.testing.TwoMassReference;
 import org.junit.jupiter.api.Test;
 
 /**

@@ -1,0 +1,143 @@
+package org.counterpoise.ui.cli;
+
+import java.nio.file.Path;
+import java.util.Optional;
+import java.util.OptionalDouble;
+import java.util.concurrent.Callable;
+import org.counterpoise.core.commission.CommissioningCheck;
+import org.counterpoise.core.commission.OperatingCheck;
+import org.counterpoise.core.commission.OperatingSpectrum;
+import org.counterpoise.core.criteria.AmplitudeConvention;
+import org.counterpoise.core.design.DesignDossier;
+import org.counterpoise.core.design.DesignResult;
+import org.counterpoise.core.error.Checks;
+import org.counterpoise.core.error.InvalidInputException;
+import org.counterpoise.core.identify.FrfKind;
+import org.counterpoise.core.identify.MeasuredFrf;
+import org.counterpoise.core.realisation.Realisation;
+import org.counterpoise.core.realisation.Realiser;
+import org.counterpoise.core.units.Unit;
+import org.counterpoise.io.PlainText;
+import org.counterpoise.io.commission.SiteCheck;
+import org.counterpoise.io.commission.SiteCheckJson;
+import org.counterpoise.io.commission.SiteCheckReport;
+import org.counterpoise.io.measurement.FrfCsv;
+import org.counterpoise.io.measurement.FrfUnit;
+import org.counterpoise.io.measurement.SpectrumCsv;
+import org.counterpoise.io.project.LoadedProject;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+/**
+ * {@code site-check PROJECT}: the project's design against what is measured on site: an operating
+ * spectrum at running speed ({@code --operating}) and the frequency response with the absorber
+ * fitted ({@code --fitted-frf}), with the absorber as built and the trim that brings it to the design.
+ */
+@Command(name = "site-check", mixinStandardHelpOptions = true,
+        description = {"Check a project's design against site measurements at the absorber's point: an operating"
+            + " spectrum at running speed against the model's prediction (--operating), and the frequency response"
+            + " measured with the absorber fitted against the design, with the absorber as built and the trim plates"
+            + " that bring it to the design (--fitted-frf). See docs/identify.md."})
+public final class SiteCheckCommand implements Callable<Integer> {
+    @Spec
+    private CommandSpec spec;
+
+    @Parameters(index = "0", paramLabel = "PROJECT", description = "project file (JSON, see docs/project-file.md)")
+    private Path file;
+
+    @Option(names = "--operating", paramLabel = "FILE.csv",
+            description = "operating spectrum at the absorber's point: frequency_Hz, amplitude")
+    private Path operating;
+
+    @Option(names = "--spectrum-units", paramLabel = "UNIT",
+            description = "unit of the spectrum's amplitudes; it says the quantity: displacement (um, mm, in, mil),"
+                    + " velocity (mm/s, in/s) or acceleration (m/s^2, g) (default mm/s)")
+    private String spectrumUnits = "mm/s";
+
+    @Option(names = "--convention", paramLabel = "peak|rms|peak-to-peak",
+            description = "how the spectrum's amplitudes are stated (default rms, as vibration meters read)")
+    private AmplitudeConvention convention = AmplitudeConvention.RMS;
+
+    @Option(names = "--running-frequency", paramLabel = "HZ",
+            description = "the running (forcing) frequency, Hz (default: the largest line in the project's band)")
+    private Double running;
+
+    @Option(names = "--with-absorber", description = "the spectrum was measured with the absorber fitted")
+    private boolean withAbsorber;
+
+    @Option(names = "--fitted-frf", paramLabel = "FILE.csv",
+            description = "driving-point FRF at the absorber's point with the absorber fitted (as identify reads)")
+    private Path fittedFrf;
+
+    @Option(names = "--kind", paramLabel = "receptance|mobility|accelerance",
+            description = "what the FRF measures per force (default accelerance)")
+    private String kind;
+
+    @Option(names = "--frf-units", paramLabel = "RESPONSE/FORCE",
+            description = "unit of the FRF's values, e.g. m/N, mm/s/N, g/N, m/s^2/N, in/lbf (default: SI of the kind)")
+    private String frfUnits;
+
+    @Option(names = "--band", paramLabel = "LO:HI", description = "use only the FRF's lines from LO to HI Hz")
+    private String band;
+
+    @Option(names = "--free-structure",
+            description = "fit the structure's natural frequency too (when it was not measured with the absorber locked)")
+    private boolean freeStructure;
+
+    @Option(names = "--json", description = "print the result as one JSON object with SI units in the key names")
+    private boolean json;
+
+    @Override
+    public Integer call() {
+        if (operating == null && fittedFrf == null) {
+            throw InvalidInputException.missing("--operating or --fitted-frf",
+                    "an operating spectrum (--operating FILE.csv), a response with the absorber fitted"
+                            + " (--fitted-frf FILE.csv), or both");
+        }
+        LoadedProject loaded = ProjectFiles.read(spec, file);
+        DesignDossier dossier = DesignDossier.of(loaded.project().toStudy());
+        DesignResult design = dossier.design();
+        Realisation realisation = Realiser.realisation(dossier, loaded.project().hardware());
+        Optional<SiteCheck.Operating> op = operating == null ? Optional.empty() : Optional.of(operating(design));
+        Optional<SiteCheck.Fitted> fitted = fittedFrf == null ? Optional.empty()
+                : Optional.of(fitted(design, realisation));
+        SiteCheck check = new SiteCheck(loaded.project().name(), design, op, fitted, realisation.trim(),
+                loaded.project().displayUnits());
+        spec.commandLine().getOut().print(PlainText.forTerminal(json ? SiteCheckJson.toJson(check)
+                : SiteCheckReport.render(check)));
+        spec.commandLine().getOut().flush();
+        return 0;
+    }
+
+    private SiteCheck.Operating operating(DesignResult design) {
+        Unit unit = SpectrumCsv.unit(spectrumUnits, "--spectrum-units");
+        OperatingSpectrum spectrum = SpectrumCsv.read(operating, unit, convention);
+        OptionalDouble at = OptionalDouble.empty();
+        if (running != null) {
+            Checks.positive("--running-frequency", running);
+            at = OptionalDouble.of(Unit.HERTZ.toSi(running));
+        }
+        try {
+            return new SiteCheck.Operating(operating.toString(), unit, convention, running != null,
+                    OperatingCheck.of(design, spectrum, at, withAbsorber));
+        } catch (InvalidInputException e) {
+            throw e.renamed(operating + " (" + e.field() + ")");
+        }
+    }
+
+    private SiteCheck.Fitted fitted(DesignResult design, Realisation realisation) {
+        FrfKind k = FrfOptions.kind("--kind", kind);
+        FrfUnit unit = frfUnits == null ? FrfUnit.si(k) : FrfUnit.parse(frfUnits, k, "--frf-units");
+        MeasuredFrf all = FrfCsv.read(fittedFrf, unit);
+        MeasuredFrf lines = band == null ? all : FrfOptions.band("--band", band, all);
+        try {
+            return new SiteCheck.Fitted(fittedFrf.toString(), unit,
+                    CommissioningCheck.of(design, realisation, lines, freeStructure));
+        } catch (InvalidInputException e) {
+            throw e.renamed(fittedFrf + " (" + e.field() + ")");
+        }
+    }
+}

@@ -1,0 +1,93 @@
+package org.counterpoise.ui.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import com.google.gson.JsonObject;
+import com.google.gson.JsonParser;
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import org.counterpoise.ui.cli.CliTest.Run;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * {@code site-check} on the pump-skid preset and its two invented site files (SitePresetTest made
+ * them: a pump line 1.35 times the model's, an absorber built 5 % stiff): the JSON carries what was
+ * put in; bad input gets plain refusals.
+ */
+class SiteCheckCommandTest {
+    private static final String PUMP = "presets/pump-skid-mezzanine.json";
+    private static final String SPECTRUM = "presets/pump-skid-operating-spectrum.csv";
+    private static final String FITTED = "presets/pump-skid-fitted-frf.csv";
+
+    @Test
+    void jsonCarriesTheOperatingRatioAndTheAbsorberAsBuilt() {
+        Run r = CliTest.run("site-check", PUMP, "--operating", SPECTRUM, "--fitted-frf", FITTED, "--json");
+        assertEquals(0, r.code(), r.err());
+        JsonObject o = JsonParser.parseString(r.out()).getAsJsonObject();
+        JsonObject op = o.getAsJsonObject("operating");
+        assertEquals(1.35, op.get("measured_over_predicted").getAsDouble(), 1e-4);
+        assertEquals(810, op.get("disturbance_amplitude_site_SI").getAsDouble(), 0.1);
+        assertEquals(600, op.get("disturbance_amplitude_SI").getAsDouble(), 1e-9);
+        assertEquals(24.75, op.get("line_frequency_Hz").getAsDouble(), 1e-12);
+        assertFalse(op.get("running_frequency_given").getAsBoolean());
+        JsonObject f = o.getAsJsonObject("fitted_absorber");
+        double design = f.get("design_absorber_frequency_Hz").getAsDouble();
+        // a spring 5 % stiff: sqrt(1.05) = 1.0247 times the design's frequency
+        assertEquals(Math.sqrt(1.05) * design, f.get("absorber_frequency_Hz").getAsDouble(), 1e-3 * design);
+        assertEquals(0.014, f.get("damping_ratio").getAsDouble(), 0.0014);
+        JsonObject trim = f.getAsJsonObject("trim");
+        assertTrue(trim.get("frequency_in_tolerance").getAsBoolean());
+        assertTrue(trim.get("plates_to_add").getAsInt() > 0);
+        assertTrue(f.getAsJsonArray("rows").size() >= 5);
+    }
+
+    @Test
+    void theTextNamesTheTrimAndTheCautions() {
+        Run r = CliTest.run("site-check", PUMP, "--fitted-frf", FITTED);
+        assertEquals(0, r.code(), r.err());
+        assertTrue(r.out().contains("add 5 plates of 1.500 kg"), r.out());
+        assertTrue(r.out().contains("licensed engineering practice"), r.out());
+        assertFalse(r.out().contains("NaN") || r.out().contains("Infinity"), r.out());
+    }
+
+    @Test
+    void aRunningFrequencyGivenInPeakUnitsOfAnotherQuantityIsRead(@TempDir Path dir) throws IOException {
+        // acceleration in g as peaks: the line compared is the one nearest the running frequency given
+        Path file = dir.resolve("acc.csv");
+        Files.writeString(file, "frequency_Hz;amplitude\n20;0,001\n24,75;0,05\n30;0,002\n");
+        Run r = CliTest.run("site-check", PUMP, "--operating", file.toString(), "--spectrum-units", "g",
+                "--convention", "peak", "--running-frequency", "24.67", "--json");
+        assertEquals(0, r.code(), r.err());
+        JsonObject op = JsonParser.parseString(r.out()).getAsJsonObject().getAsJsonObject("operating");
+        assertEquals("acceleration", op.get("quantity").getAsString());
+        assertEquals(0.05 * 9.80665, op.get("measured_peak_SI").getAsDouble(), 1e-12);
+        assertTrue(op.get("running_frequency_given").getAsBoolean());
+    }
+
+    @Test
+    void badInputIsRefusedPlainly(@TempDir Path dir) throws IOException {
+        Run none = CliTest.run("site-check", PUMP);
+        assertEquals(Cli.BAD_INPUT, none.code());
+        assertTrue(none.err().contains("--operating or --fitted-frf"), none.err());
+        Run unit = CliTest.run("site-check", PUMP, "--operating", SPECTRUM, "--spectrum-units", "N");
+        assertEquals(Cli.BAD_INPUT, unit.code());
+        assertTrue(unit.err().contains("--spectrum-units") && unit.err().contains("velocity"), unit.err());
+        Path far = dir.resolve("far.csv");
+        Files.writeString(far, "frequency_Hz,amplitude\n1,0.1\n2,0.1\n3,0.1\n");
+        Run away = CliTest.run("site-check", PUMP, "--operating", far.toString());
+        assertEquals(Cli.BAD_INPUT, away.code());
+        assertTrue(away.err().contains("far.csv") && away.err().contains("running"), away.err());
+        Path broken = dir.resolve("broken.csv");
+        Files.writeString(broken, "frequency_Hz,amplitude\n1,0.1\n2,x\n3,0.1\n");
+        Run cell = CliTest.run("site-check", PUMP, "--operating", broken.toString());
+        assertEquals(Cli.BAD_INPUT, cell.code());
+        assertTrue(cell.err().contains("line 3"), cell.err());
+        for (Run run : new Run[] {none, unit, away, cell}) {
+            assertFalse(run.err().contains("Exception") || run.err().contains("\tat "), run.err());
+        }
+    }
+}
