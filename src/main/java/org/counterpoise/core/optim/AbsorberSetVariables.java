@@ -7,6 +7,7 @@ import org.counterpoise.core.rational.RealPolynomials;
 import org.counterpoise.core.rational.RealRoots;
 import org.counterpoise.core.rational.TransferFunction;
 import org.counterpoise.core.system.AbsorberSensitivity;
+import org.counterpoise.core.system.FactoredPeaks;
 
 /**
  * The design variables of several absorbers on one mode, as the minimax solvers see them: a point p

@@ -68,4 +68,43 @@ public record ModalStructure(List<Mode> modes) {
         }
         return point;
     }
+
+    /**
+     * The mode an absorber at a point should be fitted to for a band of forcing frequencies: of the
+     * modes that move the point, the one nearest the band in ratio of frequencies (0 inside it);
+     * between modes equally near (several inside the band) the one with the highest resonance peak
+     * at the point, phi(a)^2 / (2 zeta m omega_n^2) (an undamped mode first, then the lower).
+     *
+     * @param point the absorber's point
+     * @param low low end of the band, rad/s
+     * @param high high end of the band, rad/s
+     * @return the index of that mode, from 0 in ascending natural frequency
+     */
+    public int nearestMode(String point, double low, double high) {
+        requirePoint(point);
+        int best = -1;
+        double bestDistance = Double.POSITIVE_INFINITY;
+        double bestPeak = 0;
+        for (int r = 0; r < modes.size(); r++) {
+            Mode m = modes.get(r);
+            double phi = m.shapeAt(point);
+            if (phi == 0.0) {
+                continue;
+            }
+            double w = m.naturalFrequency();
+            double distance = w < low ? Math.log(low / w) : w > high ? Math.log(w / high) : 0.0;
+            double peak = m.dampingRatio() == 0.0 ? Double.POSITIVE_INFINITY
+                    : phi * phi / (2 * m.dampingRatio() * m.modalMass() * w * w);
+            if (distance < bestDistance || distance == bestDistance && peak > bestPeak) {
+                best = r;
+                bestDistance = distance;
+                bestPeak = peak;
+            }
+        }
+        if (best < 0) {
+            throw new InvalidInputException("absorber point", point, "a point that some mode moves (every mode-shape"
+                    + " value there is 0)");
+        }
+        return best;
+    }
 }

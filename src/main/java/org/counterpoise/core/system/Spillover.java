@@ -2,15 +2,14 @@ package org.counterpoise.core.system;
 
 import java.util.ArrayList;
 import java.util.List;
-import org.counterpoise.core.rational.PeakFinder;
-import org.counterpoise.core.rational.TransferFunction;
 
 /**
  * Spillover: what absorbers fitted for one mode do to every mode of the structure. For each mode r
  * the peak of the receptance |H_pq| is taken over its own neighbourhood, the frequencies between the
  * geometric means of its natural frequency and its neighbours' (from zero below the first mode, to
  * infinity above the last), without and with the absorbers; exact peaks of the rational transfer
- * functions of {@link ModalSystem} ({@link PeakFinder}). An absorber tuned to mode 1 splits it and
+ * functions of {@link ModalSystem}, located by {@link ModalPeak} (the factored route, which holds for
+ * three or more light absorbers, where the polynomial search on the expanded |H|^2 loses digits). An absorber tuned to mode 1 splits it and
  * usually lowers the response near mode 2 slightly, but a mass added where mode 2 moves more can
  * also shift mode 2 down into the band: that is what the figures show.
  *
@@ -42,19 +41,15 @@ public record Spillover(List<ModePeak> modes) {
      * @return the peak near every mode before and after
      */
     public static Spillover of(ModalSystem system, String forcePoint, String responsePoint) {
-        TransferFunction after = system.transferFunction(forcePoint, responsePoint);
-        TransferFunction before = system.bare().transferFunction(forcePoint, responsePoint);
         List<Mode> modes = system.structure().modes();
-        double w = system.referenceFrequency();
-        double k = system.referenceStiffness();
         List<ModePeak> out = new ArrayList<>();
         for (int r = 0; r < modes.size(); r++) {
             double wr = modes.get(r).naturalFrequency();
             double low = r == 0 ? 0.0 : Math.sqrt(wr * modes.get(r - 1).naturalFrequency());
             double high = r + 1 == modes.size() ? Double.POSITIVE_INFINITY
                     : Math.sqrt(wr * modes.get(r + 1).naturalFrequency());
-            out.add(new ModePeak(r, low, high, PeakFinder.over(before, low / w, high / w).magnitude() / k,
-                    PeakFinder.over(after, low / w, high / w).magnitude() / k));
+            out.add(new ModePeak(r, low, high, ModalPeak.over(system.bare(), forcePoint, responsePoint, low, high),
+                    ModalPeak.over(system, forcePoint, responsePoint, low, high)));
         }
         return new Spillover(out);
     }

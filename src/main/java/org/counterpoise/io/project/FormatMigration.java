@@ -12,7 +12,10 @@ import org.counterpoise.core.design.DesignMethod;
  * <li>format 1: an absent {@code absorber.method} meant equal-peak ({@link #defaultMethod});</li>
  * <li>formats 1 and 2: {@code absorber.target} is the criterion it means ({@link #targetAsAcceptance});</li>
  * <li>formats 1 to 3: no hardware, display units, document number, revision history or sign-off: the
- *     defaults ({@code HardwareChoice.DEFAULT}, SI, empty), which the reader gives for absent keys.</li>
+ *     defaults ({@code HardwareChoice.DEFAULT}, SI, empty), which the reader gives for absent keys;</li>
+ * <li>formats 1 to 5: one mode and one absorber: no {@code structure.modes} and no {@code absorbers}
+ *     ({@link Project#modes()} and {@link Project#absorbers()} null), which the reader gives for absent
+ *     keys, so such a file designs exactly as before ({@link #isOneModeOneAbsorber}).</li>
  * </ul>
  */
 public final class FormatMigration {
@@ -65,5 +68,14 @@ public final class FormatMigration {
                     a.fixedDampingRatio(), a.fixedTuningRatio()));
         }
         return Optional.empty();
+    }
+
+    /**
+     * @param p a project
+     * @return true when it is a project of one mode and one absorber, as every file of formats 1 to 5
+     *     is: it designs exactly as those formats did, with no section on several absorbers
+     */
+    public static boolean isOneModeOneAbsorber(Project p) {
+        return p.modes() == null && p.absorbers() == null;
     }
 }

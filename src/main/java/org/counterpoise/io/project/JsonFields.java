@@ -5,7 +5,9 @@ import com.google.gson.JsonObject;
 import com.google.gson.JsonPrimitive;
 import java.util.ArrayList;
 import java.util.LinkedHashSet;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Set;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.units.Dimension;
@@ -72,6 +74,20 @@ final class JsonFields {
                 throw new InvalidInputException(itemPath, describe(item), "must be an object { ... }");
             }
             out.add(new JsonFields(item.getAsJsonObject(), itemPath, unknown));
+        }
+        return out;
+    }
+
+    /**
+     * An object whose every value is a number, such as {@code {"midspan": 1.0, "edge": 0.4}}; each
+     * key is a name the user chose. An absent key is an error.
+     * @return the names and numbers, in the order written
+     */
+    Map<String, Double> numberMap(String key) {
+        JsonFields o = object(key);
+        Map<String, Double> out = new LinkedHashMap<>();
+        for (String name : o.object.keySet()) {
+            out.put(name, o.number(name));
         }
         return out;
     }

@@ -11,12 +11,9 @@ import org.counterpoise.core.design.DesignConstraints;
 import org.counterpoise.core.design.DesignMethod;
 import org.counterpoise.core.design.RobustnessSettings;
 import org.counterpoise.core.design.DesignStudy;
-import org.counterpoise.core.error.Checks;
 import org.counterpoise.core.error.InvalidInputException;
-import org.counterpoise.core.model.DampingConversions;
 import org.counterpoise.core.model.Excitation;
 import org.counterpoise.core.model.Structure;
-import org.counterpoise.core.model.StructureConversions;
 import org.counterpoise.core.realisation.HardwareChoice;
 import org.counterpoise.core.response.ResponseKind;
 import org.counterpoise.io.text.UnitSystem;
@@ -38,10 +35,15 @@ import org.counterpoise.io.text.UnitSystem;
  * @param hardware the hardware choices the design is realised with (never null; the defaults when not
  *     given; since format 4)
  * @param displayUnits the unit system outputs are shown in (never null; SI when not given; since format 4)
+ * @param modes the structure as several modes with named points, or null for the single mode of
+ *     {@code structure} (since format 6)
+ * @param absorbers how many absorbers share the mass, their tuning rule and point, or null for one
+ *     absorber (since format 6)
  */
 public record Project(String name, String notes, StructureInput structure, DisturbanceInput disturbance,
         AbsorberInput absorber, RobustnessInput robustness, ProjectIdentity identity, AcceptanceInput acceptance,
-        AmplitudeConvention displayConvention, HardwareChoice hardware, UnitSystem displayUnits) {
+        AmplitudeConvention displayConvention, HardwareChoice hardware, UnitSystem displayUnits, ModesInput modes,
+        AbsorbersInput absorbers) {
 
     /** The name of a project that has not been named yet. */
     public static final String UNTITLED = "Untitled";
@@ -57,6 +59,27 @@ public record Project(String name, String notes, StructureInput structure, Distu
         displayConvention = displayConvention == null ? DEFAULT_DISPLAY_CONVENTION : displayConvention;
         hardware = hardware == null ? HardwareChoice.DEFAULT : hardware;
         displayUnits = displayUnits == null ? UnitSystem.SI : displayUnits;
+    }
+
+    /**
+     * A project of one mode and one absorber (as format 5 had).
+     * @param name project name
+     * @param notes free text
+     * @param structure the structure as known
+     * @param disturbance the disturbance
+     * @param absorber the designer's choices
+     * @param robustness robustness settings, or null for the defaults
+     * @param identity revision, engineer, client or site and date
+     * @param acceptance the criterion, or null for none
+     * @param displayConvention peak, r.m.s. or peak-to-peak, or null for peak
+     * @param hardware the hardware choices, or null for the defaults
+     * @param displayUnits the unit system outputs are shown in, or null for SI
+     */
+    public Project(String name, String notes, StructureInput structure, DisturbanceInput disturbance,
+            AbsorberInput absorber, RobustnessInput robustness, ProjectIdentity identity, AcceptanceInput acceptance,
+            AmplitudeConvention displayConvention, HardwareChoice hardware, UnitSystem displayUnits) {
+        this(name, notes, structure, disturbance, absorber, robustness, identity, acceptance, displayConvention,
+                hardware, displayUnits, null, null);
     }
 
     /**
@@ -114,10 +137,12 @@ public record Project(String name, String notes, StructureInput structure, Distu
      * {@code absorber.target} by a criterion to meet; version 4 (issue 14) added the hardware choices,
      * the display unit system, the document number, the revision history and the sign-off; version 5
      * (issue 15) added {@code structure.measured}, where the structure's data came from when they were
-     * identified from a measurement (an older file has none: its structure was typed). How older
-     * files are read: {@link FormatMigration}.
+     * identified from a measurement (an older file has none: its structure was typed); version 6
+     * (issue 16) added {@code structure.modes} with named points and {@code absorbers} (several
+     * absorbers sharing the mass; an older file has one mode and one absorber). How older files are
+     * read: {@link FormatMigration}.
      */
-    public static final int FORMAT_VERSION = 5;
+    public static final int FORMAT_VERSION = 6;
 
     /** The oldest project-file format version this build reads (and migrates on load). */
     public static final int OLDEST_FORMAT_VERSION = 1;
@@ -136,61 +161,12 @@ public record Project(String name, String notes, StructureInput structure, Distu
             ResponseKind.VELOCITY, ResponseKind.ACCELERATION, ResponseKind.RELATIVE_DISPLACEMENT,
             ResponseKind.TRANSMITTED_FORCE);
 
-    /** @return the structure in SI */
+    /**
+     * @return the structure in SI: the single mode as given, or, for a structure of several modes
+     *     ({@code structure.modes}), the mode the absorbers are fitted to, seen at their point
+     */
     public Structure toStructure() {
-        StructureInput s = structure;
-        if (s.mass() != null && s.weight() != null) {
-            throw new InvalidInputException("structure.weight", "given with structure.mass",
-                    "give either structure.mass or structure.weight, not both");
-        }
-        // No mixed double/null conditional here: unboxing its null result was a NullPointerException
-        // for the documented form "stiffness and natural frequency without a mass".
-        boolean massGiven = s.mass() != null || s.weight() != null;
-        double mass = s.mass() != null ? s.mass().positiveSi("structure.mass.value")
-                : s.weight() != null ? StructureConversions.massFromWeight(s.weight().si("structure.weight.value")) : Double.NaN;
-        int stiffnessForms = count(s.stiffness(), s.naturalFrequency(), s.staticDeflection());
-        double stiffness;
-        if (!massGiven) {
-            if (s.staticDeflection() != null) {
-                throw new InvalidInputException("structure.static_deflection", "given without a mass",
-                        "a static deflection needs structure.mass or structure.weight beside it");
-            }
-            if (s.stiffness() == null || s.naturalFrequency() == null) {
-                throw InvalidInputException.missing("structure.mass",
-                        "give structure.mass or structure.weight, or both structure.stiffness and"
-                                + " structure.natural_frequency");
-            }
-            stiffness = s.stiffness().positiveSi("structure.stiffness.value");
-            mass = StructureConversions.massFromFrequency(stiffness,
-                    s.naturalFrequency().positiveSi("structure.natural_frequency.value"));
-        } else if (stiffnessForms != 1) {
-            throw new InvalidInputException("structure", stiffnessForms + " stiffness entries",
-                    "with a mass or weight give exactly one of structure.stiffness, structure.natural_frequency"
-                            + " and structure.static_deflection");
-        } else if (s.stiffness() != null) {
-            stiffness = s.stiffness().positiveSi("structure.stiffness.value");
-        } else if (s.naturalFrequency() != null) {
-            stiffness = StructureConversions.stiffnessFromFrequency(mass,
-                    s.naturalFrequency().positiveSi("structure.natural_frequency.value"));
-        } else {
-            stiffness = StructureConversions.stiffnessFromStaticDeflection(mass,
-                    s.staticDeflection().positiveSi("structure.static_deflection.value"));
-        }
-        double zeta = dampingRatio(s.damping(), Math.sqrt(stiffness / mass));
-        return new Structure(mass, stiffness, zeta, s.modeShapeAtAbsorber());
-    }
-
-    private static double dampingRatio(DampingInput d, double omega) {
-        if (d == null) {
-            return 0.0;
-        }
-        return switch (d.measure()) {
-            case RATIO -> Checks.inRange("structure.damping.ratio", d.value(), 0.0, 0.99);
-            case LOSS_FACTOR -> DampingConversions.fromLossFactor(d.value());
-            case Q_FACTOR -> DampingConversions.fromQualityFactor(d.value());
-            case HALF_POWER_BANDWIDTH -> DampingConversions.fromHalfPowerBandwidth(
-                    d.bandwidth().si("structure.damping.half_power_bandwidth.value"), omega);
-        };
+        return modes == null ? structure.toStructure() : SeveralModes.targetStructure(this);
     }
 
     /**
@@ -257,6 +233,7 @@ public record Project(String name, String notes, StructureInput structure, Distu
             throw InvalidInputException.missing("absorber.mass_ratio",
                     "give absorber.mass_ratio, absorber.mass or absorber.meet_acceptance");
         }
+        SeveralModes.check(this);
         DesignConstraints constraints = new DesignConstraints(
                 a.strokeLimit() == null ? OptionalDouble.empty()
                         : OptionalDouble.of(a.strokeLimit().positiveSi("absorber.stroke_limit.value")),
@@ -300,7 +277,7 @@ public record Project(String name, String notes, StructureInput structure, Distu
      */
     public Project withStructure(StructureInput s) {
         return new Project(name, notes, s, disturbance, absorber, robustness, identity, acceptance,
-                displayConvention, hardware, displayUnits);
+                displayConvention, hardware, displayUnits, modes, absorbers);
     }
 
     /**
@@ -309,7 +286,7 @@ public record Project(String name, String notes, StructureInput structure, Distu
      */
     public Project withDisturbance(DisturbanceInput d) {
         return new Project(name, notes, structure, d, absorber, robustness, identity, acceptance,
-                displayConvention, hardware, displayUnits);
+                displayConvention, hardware, displayUnits, modes, absorbers);
     }
 
     /**
@@ -318,7 +295,7 @@ public record Project(String name, String notes, StructureInput structure, Distu
      */
     public Project withAbsorber(AbsorberInput a) {
         return new Project(name, notes, structure, disturbance, a, robustness, identity, acceptance,
-                displayConvention, hardware, displayUnits);
+                displayConvention, hardware, displayUnits, modes, absorbers);
     }
 
     /**
@@ -327,7 +304,7 @@ public record Project(String name, String notes, StructureInput structure, Distu
      */
     public Project withRobustness(RobustnessInput r) {
         return new Project(name, notes, structure, disturbance, absorber, r, identity, acceptance,
-                displayConvention, hardware, displayUnits);
+                displayConvention, hardware, displayUnits, modes, absorbers);
     }
 
     /**
@@ -338,7 +315,7 @@ public record Project(String name, String notes, StructureInput structure, Distu
      */
     public Project withDetails(String newName, String newNotes, ProjectIdentity newIdentity) {
         return new Project(newName, newNotes, structure, disturbance, absorber, robustness, newIdentity, acceptance,
-                displayConvention, hardware, displayUnits);
+                displayConvention, hardware, displayUnits, modes, absorbers);
     }
 
     /**
@@ -347,7 +324,7 @@ public record Project(String name, String notes, StructureInput structure, Distu
      */
     public Project withAcceptance(AcceptanceInput criterion) {
         return new Project(name, notes, structure, disturbance, absorber, robustness, identity, criterion,
-                displayConvention, hardware, displayUnits);
+                displayConvention, hardware, displayUnits, modes, absorbers);
     }
 
     /**
@@ -356,7 +333,7 @@ public record Project(String name, String notes, StructureInput structure, Distu
      */
     public Project withDisplayConvention(AmplitudeConvention convention) {
         return new Project(name, notes, structure, disturbance, absorber, robustness, identity, acceptance, convention,
-                hardware, displayUnits);
+                hardware, displayUnits, modes, absorbers);
     }
 
     /**
@@ -365,7 +342,7 @@ public record Project(String name, String notes, StructureInput structure, Distu
      */
     public Project withHardware(HardwareChoice choice) {
         return new Project(name, notes, structure, disturbance, absorber, robustness, identity, acceptance,
-                displayConvention, choice, displayUnits);
+                displayConvention, choice, displayUnits, modes, absorbers);
     }
 
     /**
@@ -374,21 +351,21 @@ public record Project(String name, String notes, StructureInput structure, Distu
      */
     public Project withDisplayUnits(UnitSystem system) {
         return new Project(name, notes, structure, disturbance, absorber, robustness, identity, acceptance,
-                displayConvention, hardware, system);
+                displayConvention, hardware, system, modes, absorbers);
+    }
+
+    /**
+     * @param newModes the structure's modes with named points, or null for the single mode
+     * @param newAbsorbers the number, tuning rule and point of the absorbers, or null for one
+     * @return this project with them
+     */
+    public Project withSeveral(ModesInput newModes, AbsorbersInput newAbsorbers) {
+        return new Project(name, notes, structure, disturbance, absorber, robustness, identity, acceptance,
+                displayConvention, hardware, displayUnits, newModes, newAbsorbers);
     }
 
     /** @return the robustness settings in SI (the defaults where the project gives none) */
     public RobustnessSettings toRobustness() {
         return robustness == null ? RobustnessSettings.DEFAULT : robustness.toSettings();
-    }
-
-    private static int count(Object... entries) {
-        int n = 0;
-        for (Object e : entries) {
-            if (e != null) {
-                n++;
-            }
-        }
-        return n;
     }
 }

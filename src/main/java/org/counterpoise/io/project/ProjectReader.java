@@ -79,7 +79,10 @@ public final class ProjectReader {
         String name = top.text("name", "Untitled");
         String notes = top.text("notes", "");
         ProjectIdentity identity = IdentityJson.read(top);
-        StructureInput structure = structure(top.object("structure"));
+        JsonFields structureFields = top.object("structure");
+        ModesInput modes = ModesJson.read(structureFields);
+        StructureInput structure = modes == null ? structure(structureFields)
+                : new StructureInput(null, null, null, null, null, null, 1.0);
         DisturbanceInput disturbance = disturbance(top.object("disturbance"));
         AbsorberInput absorber = absorber(top.object("absorber"), version);
         JsonFields robust = top.optionalObject("robustness");
@@ -91,6 +94,7 @@ public final class ProjectReader {
                 new InvalidInputException(DISPLAY_CONVENTION, "\"" + PlainText.quote(conventionText) + "\"",
                         "one of " + String.join(", ", AmplitudeConvention.ids())));
         HardwareChoice hardware = HardwareJson.read(top.optionalObject(HardwareJson.KEY));
+        AbsorbersInput absorbers = ModesJson.readAbsorbers(top.optionalObject(ModesJson.ABSORBERS));
         UnitSystem units = top.has(DISPLAY_UNITS) ? AcceptanceJson.choice(top, DISPLAY_UNITS, UnitSystem.values(),
                 UnitSystem::id) : UnitSystem.SI;
         top.finish();
@@ -100,7 +104,7 @@ public final class ProjectReader {
         }
         // a target of a format-1 or 2 file becomes the criterion it means (the one migration rule)
         return new LoadedProject(new Project(name, notes, structure, disturbance, absorber, robustness,
-                identity, acceptance, convention, hardware, units).withTargetAsAcceptance(), unknown);
+                identity, acceptance, convention, hardware, units, modes, absorbers).withTargetAsAcceptance(), unknown);
     }
 
     /** The top-level key of {@link Project#displayUnits()} (since format 4). */
@@ -200,24 +204,7 @@ public final class ProjectReader {
         QuantityInput stiffness = s.optionalQuantity("stiffness", Dimension.STIFFNESS);
         QuantityInput frequency = s.optionalQuantity("natural_frequency", Dimension.FREQUENCY);
         QuantityInput deflection = s.optionalQuantity("static_deflection", Dimension.LENGTH);
-        DampingInput damping = null;
-        JsonFields d = s.optionalObject("damping");
-        if (d != null) {
-            int given = 0;
-            for (DampingInput.Measure m : DampingInput.Measure.values()) {
-                if (d.has(m.key())) {
-                    given++;
-                    damping = m == DampingInput.Measure.HALF_POWER_BANDWIDTH
-                            ? new DampingInput(m, Double.NaN, d.quantity(m.key(), Dimension.FREQUENCY))
-                            : new DampingInput(m, d.number(m.key()), null);
-                }
-            }
-            if (given != 1) {
-                throw new InvalidInputException("structure.damping", given + " measures",
-                        "give exactly one of ratio, loss_factor, q_factor, half_power_bandwidth");
-            }
-            d.finish();
-        }
+        DampingInput damping = ModesJson.damping(s);
         double phi = s.number("mode_shape_at_absorber", 1.0);
         JsonFields m = s.optionalObject(MeasuredSource.KEY);
         MeasuredSource measured = m == null ? null : MeasuredSource.read(m);

@@ -29,9 +29,16 @@ public final class ProjectWriter {
             root.addProperty("notes", project.notes());
         }
         IdentityJson.write(root, project.identity());
-        root.add("structure", structure(project.structure()));
+        JsonObject structure = project.modes() == null ? structure(project.structure()) : new JsonObject();
+        if (project.modes() != null) {
+            ModesJson.write(structure, project.modes());
+        }
+        root.add("structure", structure);
         root.add("disturbance", disturbance(project.disturbance()));
         root.add("absorber", absorber(project.absorber()));
+        if (project.absorbers() != null) {
+            root.add(ModesJson.ABSORBERS, ModesJson.write(project.absorbers()));
+        }
         if (project.robustness() != null) {
             root.add("robustness", robustness(project.robustness()));
         }
@@ -72,19 +79,27 @@ public final class ProjectWriter {
         put(o, "natural_frequency", s.naturalFrequency());
         put(o, "static_deflection", s.staticDeflection());
         if (s.damping() != null) {
-            JsonObject d = new JsonObject();
-            if (s.damping().measure() == DampingInput.Measure.HALF_POWER_BANDWIDTH) {
-                d.add(s.damping().measure().key(), quantity(s.damping().bandwidth()));
-            } else {
-                d.addProperty(s.damping().measure().key(), s.damping().value());
-            }
-            o.add("damping", d);
+            o.add("damping", damping(s.damping()));
         }
         o.addProperty("mode_shape_at_absorber", s.modeShapeAtAbsorber());
         if (s.measured() != null) {
             o.add(MeasuredSource.KEY, measured(s.measured()));
         }
         return o;
+    }
+
+    /**
+     * @param damping a damping in its measure
+     * @return its {@code damping} object
+     */
+    static JsonObject damping(DampingInput damping) {
+        JsonObject d = new JsonObject();
+        if (damping.measure() == DampingInput.Measure.HALF_POWER_BANDWIDTH) {
+            d.add(damping.measure().key(), quantity(damping.bandwidth()));
+        } else {
+            d.addProperty(damping.measure().key(), damping.value());
+        }
+        return d;
     }
 
     private static JsonObject measured(MeasuredSource m) {

@@ -1,5 +1,9 @@
 package org.counterpoise.io.project;
 
+import org.counterpoise.core.error.InvalidInputException;
+import org.counterpoise.core.model.Structure;
+import org.counterpoise.core.model.StructureConversions;
+
 /**
  * The structure as the user knows it. Exactly one of mass and weight; exactly one of stiffness,
  * natural frequency and static deflection (or stiffness plus natural frequency without a mass).
@@ -42,5 +46,59 @@ public record StructureInput(QuantityInput mass, QuantityInput weight, QuantityI
     public StructureInput withMeasured(MeasuredSource source) {
         return new StructureInput(mass, weight, stiffness, naturalFrequency, staticDeflection, damping,
                 modeShapeAtAbsorber, source);
+    }
+
+    /** @return the single mode in SI, as given */
+    public Structure toStructure() {
+        StructureInput s = this;
+        if (s.mass() != null && s.weight() != null) {
+            throw new InvalidInputException("structure.weight", "given with structure.mass",
+                    "give either structure.mass or structure.weight, not both");
+        }
+        // No mixed double/null conditional here: unboxing its null result was a NullPointerException
+        // for the documented form "stiffness and natural frequency without a mass".
+        boolean massGiven = s.mass() != null || s.weight() != null;
+        double mass = s.mass() != null ? s.mass().positiveSi("structure.mass.value")
+                : s.weight() != null ? StructureConversions.massFromWeight(s.weight().si("structure.weight.value")) : Double.NaN;
+        int stiffnessForms = count(s.stiffness(), s.naturalFrequency(), s.staticDeflection());
+        double stiffness;
+        if (!massGiven) {
+            if (s.staticDeflection() != null) {
+                throw new InvalidInputException("structure.static_deflection", "given without a mass",
+                        "a static deflection needs structure.mass or structure.weight beside it");
+            }
+            if (s.stiffness() == null || s.naturalFrequency() == null) {
+                throw InvalidInputException.missing("structure.mass",
+                        "give structure.mass or structure.weight, or both structure.stiffness and"
+                                + " structure.natural_frequency");
+            }
+            stiffness = s.stiffness().positiveSi("structure.stiffness.value");
+            mass = StructureConversions.massFromFrequency(stiffness,
+                    s.naturalFrequency().positiveSi("structure.natural_frequency.value"));
+        } else if (stiffnessForms != 1) {
+            throw new InvalidInputException("structure", stiffnessForms + " stiffness entries",
+                    "with a mass or weight give exactly one of structure.stiffness, structure.natural_frequency"
+                            + " and structure.static_deflection");
+        } else if (s.stiffness() != null) {
+            stiffness = s.stiffness().positiveSi("structure.stiffness.value");
+        } else if (s.naturalFrequency() != null) {
+            stiffness = StructureConversions.stiffnessFromFrequency(mass,
+                    s.naturalFrequency().positiveSi("structure.natural_frequency.value"));
+        } else {
+            stiffness = StructureConversions.stiffnessFromStaticDeflection(mass,
+                    s.staticDeflection().positiveSi("structure.static_deflection.value"));
+        }
+        double zeta = DampingInput.ratioOf(s.damping(), "structure.damping", Math.sqrt(stiffness / mass));
+        return new Structure(mass, stiffness, zeta, s.modeShapeAtAbsorber());
+    }
+
+    private static int count(Object... entries) {
+        int n = 0;
+        for (Object e : entries) {
+            if (e != null) {
+                n++;
+            }
+        }
+        return n;
     }
 }

@@ -212,6 +212,32 @@ public enum ReportKey {
     PREDICTED_AFTER("after"),
     PREDICTED_STROKE("stroke_m"),
 
+    // Several modes and several absorbers (design JSON, format 6): the object "several_absorbers",
+    // SI, frequencies in Hz, peaks as displacement amplitudes at the response point. Arrays: one
+    // element per absorber (the keys after SEVERAL_ABSORBER) and per mode (after SEVERAL_MODE).
+    SEVERAL_COUNT("several_absorbers.count"),
+    SEVERAL_TUNING("several_absorbers.tuning"),
+    SEVERAL_POINTS("several_absorbers.excitation_point", "several_absorbers.response_point",
+            "several_absorbers.absorber_point"),
+    SEVERAL_TARGET_MODE("several_absorbers.target_mode"),
+    SEVERAL_TARGET_FREQUENCY("several_absorbers.target_mode_frequency_Hz"),
+    SEVERAL_EFFECTIVE_MASS("several_absorbers.target_mode_effective_mass_kg"),
+    SEVERAL_TOTAL_MASS("several_absorbers.total_mass_kg"),
+    SEVERAL_ABSORBER("several_absorbers.absorbers[]"),
+    ITEM_MASS("mass_kg"),
+    ITEM_STIFFNESS("stiffness_N_per_m"),
+    ITEM_DAMPING("damping_Ns_per_m"),
+    ITEM_FREQUENCY("frequency_Hz"),
+    ITEM_DAMPING_RATIO("damping_ratio"),
+    SEVERAL_PEAKS("several_absorbers.peak_displacement_before_m", "several_absorbers.peak_displacement_after_m"),
+    SEVERAL_MODE("several_absorbers.modes[]"),
+    ITEM_NAME("name"),
+    ITEM_NATURAL_FREQUENCY("natural_frequency_Hz"),
+    ITEM_PEAKS("peak_displacement_before_m", "peak_displacement_after_m"),
+    SEVERAL_SINGLE_PEAK("several_absorbers.single_absorber_peak_displacement_m"),
+    SEVERAL_GAIN("several_absorbers.gain"),
+    SEVERAL_CERTIFIED("several_absorbers.certified"),
+
     // Rows not in the design JSON.
     REVISION,
     DATE,

@@ -45,6 +45,8 @@ public record ReportSection(SectionId id, String title, List<ReportRow> rows) {
         RMS,
         /** absorber stroke and forces */
         STROKE_AND_FORCES,
+        /** several absorbers, several modes: each absorber, the whole structure's peaks, the gain of the split */
+        SEVERAL_ABSORBERS,
         /** how far structure and absorber may be mistuned */
         TOLERANCE,
         /** a change of the structure that would do as well */

@@ -7,17 +7,21 @@ import org.counterpoise.core.criteria.AmplitudeConvention;
 import org.counterpoise.core.design.DesignDossier;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.MethodComparison;
+import org.counterpoise.core.design.SeveralAbsorbers;
+import org.counterpoise.core.design.SeveralAbsorbersDesigner;
 import org.counterpoise.core.progress.ProgressListener;
 import org.counterpoise.io.PlainText;
 import org.counterpoise.io.export.ResultJson;
 import org.counterpoise.io.project.LoadedProject;
 import org.counterpoise.io.project.ProjectIdentity;
+import org.counterpoise.io.project.SeveralModes;
 import org.counterpoise.io.text.ComparisonContent;
 import org.counterpoise.io.text.DesignContent;
 import org.counterpoise.io.text.DesignReport;
 import org.counterpoise.io.text.HardwareContent;
 import org.counterpoise.io.text.MeasuredSourceContent;
 import org.counterpoise.io.text.ReportContent;
+import org.counterpoise.io.text.SeveralAbsorbersContent;
 import org.counterpoise.io.text.UnitSystem;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
@@ -54,8 +58,12 @@ public final class DesignCommand implements Callable<Integer> {
         UnitSystem shown = json ? UnitSystem.SI : DisplayUnitSystem.of(units, loaded.project());
         ReportContent designed = DesignContent.of(result, json ? ProjectIdentity.EMPTY : loaded.project().identity(),
                 Optional.empty(), shown).with(ComparisonContent.of(comparison, result.study()));
-        ReportContent content = HardwareContent.with(MeasuredSourceContent.with(designed,
-                loaded.project().structure().measured()), dossier, loaded.project().hardware())
+        ReportContent withHardware = HardwareContent.with(MeasuredSourceContent.with(designed,
+                loaded.project().structure().measured()), dossier, loaded.project().hardware());
+        // several modes or absorbers (format 6): their own section; a project of one of each has none
+        Optional<SeveralAbsorbers> several = SeveralModes.layout(loaded.project())
+                .map(layout -> SeveralAbsorbersDesigner.design(result, layout));
+        ReportContent content = several.map(d -> SeveralAbsorbersContent.with(withHardware, d)).orElse(withHardware)
                 .shownIn(DisplayConvention.of(convention, loaded.project()));
         spec.commandLine().getOut().print(PlainText.forTerminal(json ? ResultJson.toJson(content)
                 : DesignReport.render(content)));

@@ -70,7 +70,7 @@ public final class RunUpCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        LoadedProject loaded = ProjectFiles.read(spec, file);
+        LoadedProject loaded = ProjectFiles.readForOneAbsorber(spec, file, "the run-up");
         Project project = loaded.project();
         DesignDossier dossier = DesignDossier.of(project.toStudy());
         DesignResult design = dossier.design();

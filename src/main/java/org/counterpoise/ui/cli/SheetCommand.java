@@ -61,7 +61,7 @@ public final class SheetCommand implements Callable<Integer> {
             throw new InvalidInputException("--revision", "\"" + PlainText.quote(revision) + "\"",
                     "a short mark of at most 20 characters without control characters, such as A or 2b");
         }
-        LoadedProject loaded = ProjectFiles.read(spec, file);
+        LoadedProject loaded = ProjectFiles.readForOneAbsorber(spec, file, "the sheet");
         DesignDossier dossier = DesignDossier.of(loaded.project().toStudy());
         dossier.design(); // a design that cannot be made is reported before any file is touched
         var identity = loaded.project().identity();

@@ -1,4 +1,4 @@
-package org.counterpoise.core.optim;
+package org.counterpoise.core.system;
 
 import java.util.ArrayList;
 import java.util.Comparator;
@@ -16,7 +16,8 @@ import org.counterpoise.core.rational.RealRoots;
 import org.counterpoise.core.rational.TransferFunction;
 
 /**
- * The interior maxima of |H|^2 over a band for several absorbers on one mode, located robustly.
+ * The interior maxima of |H|^2 over a band for several absorbers (on one mode, or on a structure of
+ * several modes: {@link ModalPeak}), located robustly.
  *
  * <p>Why not the roots of R = P'Q - PQ' alone ({@code PeakFinder})? With three lightly damped
  * absorbers on a light structure the expanded |H|^2 = P(x)/Q(x) loses every digit of R between
@@ -37,8 +38,8 @@ import org.counterpoise.core.rational.TransferFunction;
  * frequency step of 1e-6; maxima closer than 1e-6 (relative) are one. Checked against dense sweeps of
  * the dense matrix solve in the tests.
  */
-final class FactoredPeaks {
-    static final int SWEEP = 240;
+public final class FactoredPeaks {
+    public static final int SWEEP = 240;
 
     private FactoredPeaks() {
     }
@@ -50,7 +51,7 @@ final class FactoredPeaks {
      * @param high high end of the band in x (may be +infinity)
      * @return {x, 1, ln|H|^2} for each interior maximum, ascending in x
      */
-    static List<double[]> maxima(TransferFunction h, DoubleUnaryOperator logMagnitudeSquared, double low, double high) {
+    public static List<double[]> maxima(TransferFunction h, DoubleUnaryOperator logMagnitudeSquared, double low, double high) {
         List<double[]> poleBrackets = new ArrayList<>();
         double lowest = Double.POSITIVE_INFINITY;
         double highest = 0;

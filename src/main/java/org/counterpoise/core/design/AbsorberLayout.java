@@ -1,0 +1,73 @@
+package org.counterpoise.core.design;
+
+import java.util.List;
+import java.util.OptionalInt;
+import org.counterpoise.core.error.Checks;
+import org.counterpoise.core.error.InvalidInputException;
+import org.counterpoise.core.model.FrequencyBand;
+import org.counterpoise.core.optim.AbsorberSetOptimiser;
+import org.counterpoise.core.optim.AbsorberSetProblem;
+import org.counterpoise.core.optim.AbsorberSetTuning;
+import org.counterpoise.core.system.ModalStructure;
+
+/**
+ * A structure of one or several modes with several absorbers at one of its points: what a project
+ * file of format 6 adds to the single-mode study ({@code structure.modes}, {@code absorbers}). The
+ * absorbers share the study's total mass equally and are fitted to one mode, the target; the force
+ * acts at one point and the displacement is judged at another. SI units.
+ *
+ * @param structure the modes, in ascending natural frequency
+ * @param modeNames one name per mode, in the same order
+ * @param excitationPoint where the force acts
+ * @param responsePoint where the displacement is judged
+ * @param absorberPoint where every absorber sits
+ * @param targetMode the index of the mode the absorbers are fitted to, or empty for the mode nearest
+ *     the band ({@link ModalStructure#nearestMode})
+ * @param count how many absorbers (1 to {@link AbsorberSetProblem#MAX_COUNT})
+ * @param tuning uniform spread or individual tuning of the absorbers ({@link AbsorberSetOptimiser})
+ */
+public record AbsorberLayout(ModalStructure structure, List<String> modeNames, String excitationPoint,
+        String responsePoint, String absorberPoint, OptionalInt targetMode, int count, AbsorberSetTuning tuning) {
+
+    /** Validates the layout; a message names the field. */
+    public AbsorberLayout {
+        Checks.present("structure", structure, "a structure of at least one mode");
+        modeNames = List.copyOf(modeNames);
+        if (modeNames.size() != structure.size()) {
+            throw new IllegalArgumentException("bug: one name per mode");
+        }
+        structure.requirePoint(excitationPoint);
+        structure.requirePoint(responsePoint);
+        structure.requirePoint(absorberPoint);
+        Checks.present("tuning", tuning, "uniform or individual");
+        if (count < 1 || count > AbsorberSetProblem.MAX_COUNT) {
+            throw new InvalidInputException("absorber count", Integer.toString(count),
+                    "a whole number from 1 to " + AbsorberSetProblem.MAX_COUNT);
+        }
+        if (targetMode.isPresent() && (targetMode.getAsInt() < 0 || targetMode.getAsInt() >= structure.size())) {
+            throw new IllegalArgumentException("bug: no mode " + targetMode.getAsInt());
+        }
+    }
+
+    /**
+     * @param band the forcing band
+     * @return the index of the mode the absorbers are fitted to
+     */
+    public int target(FrequencyBand band) {
+        return targetMode.orElseGet(() -> structure.nearestMode(absorberPoint, band.low(), band.high()));
+    }
+
+    /**
+     * @param band the forcing band
+     * @return the target mode's modal mass as seen at the absorbers' point, m_r / phi_r(a)^2, kg
+     */
+    public double effectiveMass(FrequencyBand band) {
+        int r = target(band);
+        double phi = structure.modes().get(r).shapeAt(absorberPoint);
+        if (phi == 0.0) {
+            throw new InvalidInputException("target mode", modeNames.get(r),
+                    "a mode that moves the absorbers' point " + absorberPoint + " (its mode-shape value there is 0)");
+        }
+        return structure.modes().get(r).modalMass() / (phi * phi);
+    }
+}

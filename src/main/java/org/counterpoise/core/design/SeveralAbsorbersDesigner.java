@@ -1,0 +1,112 @@
+package org.counterpoise.core.design;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.Optional;
+import org.counterpoise.core.error.InvalidInputException;
+import org.counterpoise.core.model.Absorber;
+import org.counterpoise.core.model.Excitation;
+import org.counterpoise.core.model.ExcitationKind;
+import org.counterpoise.core.model.FrequencyBand;
+import org.counterpoise.core.optim.AbsorberSetDesign;
+import org.counterpoise.core.optim.AbsorberSetOptimiser;
+import org.counterpoise.core.optim.AbsorberSetOptimum;
+import org.counterpoise.core.optim.AbsorberSetProblem;
+import org.counterpoise.core.optim.AbsorberSetTuning;
+import org.counterpoise.core.response.ResponseKind;
+import org.counterpoise.core.system.Mode;
+import org.counterpoise.core.system.ModalPeak;
+import org.counterpoise.core.system.ModalSystem;
+import org.counterpoise.core.system.PointAbsorber;
+import org.counterpoise.core.system.Spillover;
+
+/**
+ * Designs several absorbers on a structure of one or several modes (orchestration only):
+ * <ol>
+ *   <li>the target mode (named, or the one nearest the band) is seen at the absorbers' point as one
+ *       mode of modal mass m_r / phi_r(a)^2, natural frequency omega_r and damping ratio zeta_r: the
+ *       study's single-mode structure;</li>
+ *   <li>one absorber: the study's own design (any method); n absorbers: the exact least peak of n
+ *       absorbers of equal mass on that mode over the band ({@link AbsorberSetOptimiser}: uniform spread
+ *       or individual tuning), with mu = total mass / (m_r / phi_r(a)^2) and the band in ratios
+ *       g = omega / omega_r; the non-dimensional tunings go back to SI as omega_j = f_j omega_r,
+ *       k_j = m_j omega_j^2, c_j = 2 zeta_j m_j omega_j;</li>
+ *   <li>the absorbers are put on the whole structure ({@link ModalSystem}) and its exact response is
+ *       taken: the peak over the band at the response point before and after ({@link ModalPeak}),
+ *       each mode's peak near its own frequency (spillover, {@link Spillover}) and, for n &gt; 1, the
+ *       same with the least-peak single absorber of the same total mass (the gain of the split).</li>
+ * </ol>
+ * The absorbers are designed for force to displacement over a band; other excitations or responses
+ * are refused with a plain message.
+ */
+public final class SeveralAbsorbersDesigner {
+    private SeveralAbsorbersDesigner() {
+    }
+
+    /**
+     * @param design the study's design on the target mode (its structure is that mode at the absorbers'
+     *     point; its absorber's mass is the total)
+     * @param layout the structure of several modes, its points, the number and tuning of the absorbers
+     * @return the absorbers and the whole structure's response
+     */
+    public static SeveralAbsorbers design(DesignResult design, AbsorberLayout layout) {
+        DesignStudy study = design.study();
+        Excitation excitation = study.excitation();
+        if (excitation.kind() != ExcitationKind.FORCE || study.response() != ResponseKind.DISPLACEMENT) {
+            throw new InvalidInputException("absorbers", "with " + excitation.kind().name().toLowerCase(Locale.ROOT)
+                    + " and " + study.response().name().toLowerCase(Locale.ROOT),
+                    "several absorbers and several modes are designed for a force (disturbance.kind force) and"
+                            + " the displacement (absorber.response displacement)");
+        }
+        FrequencyBand band = excitation.band();
+        int r = layout.target(band);
+        Mode mode = layout.structure().modes().get(r);
+        double wr = mode.naturalFrequency();
+        double effectiveMass = layout.effectiveMass(band);
+        Absorber total = design.absorber();
+        List<PointAbsorber> absorbers;
+        Optional<PointAbsorber> single = Optional.empty();
+        boolean certified = true;
+        if (layout.count() == 1) {
+            absorbers = List.of(new PointAbsorber(layout.absorberPoint(), total.mass(), total.stiffness(), total.damping()));
+        } else {
+            if (band.isSingle()) {
+                throw new InvalidInputException("absorbers.count", Integer.toString(layout.count()),
+                        "1 for one forcing frequency: several absorbers share a band (disturbance.band)");
+            }
+            AbsorberSetProblem problem = new AbsorberSetProblem(layout.count(), total.mass() / effectiveMass,
+                    mode.dampingRatio(), band.low() / wr, band.high() / wr, layout.tuning());
+            AbsorberSetOptimum set = AbsorberSetOptimiser.optimise(problem);
+            absorbers = inSi(set.design(), effectiveMass, wr, layout.absorberPoint());
+            certified = set.certificate().certified();
+            AbsorberSetOptimum one = AbsorberSetOptimiser.optimise(new AbsorberSetProblem(1, problem.massRatio(),
+                    problem.structureDamping(), problem.bandLow(), problem.bandHigh(), AbsorberSetTuning.UNIFORM));
+            single = Optional.of(inSi(one.design(), effectiveMass, wr, layout.absorberPoint()).get(0));
+        }
+        double force = excitation.amplitude();
+        ModalSystem after = ModalSystem.of(layout.structure(), absorbers);
+        List<SeveralAbsorbers.ModePeak> modes = new ArrayList<>();
+        for (Spillover.ModePeak p : Spillover.of(after, layout.excitationPoint(), layout.responsePoint()).modes()) {
+            modes.add(new SeveralAbsorbers.ModePeak(p.mode(), force * p.before(), force * p.after()));
+        }
+        Optional<SeveralAbsorbers.SingleAbsorber> compared = single.map(a -> new SeveralAbsorbers.SingleAbsorber(a,
+                force * peak(ModalSystem.of(layout.structure(), List.of(a)), layout, band)));
+        return new SeveralAbsorbers(layout, r, effectiveMass, band, force, absorbers,
+                force * peak(after.bare(), layout, band), force * peak(after, layout, band), modes, compared, certified);
+    }
+
+    private static double peak(ModalSystem system, AbsorberLayout layout, FrequencyBand band) {
+        return ModalPeak.over(system, layout.excitationPoint(), layout.responsePoint(), band.low(), band.high());
+    }
+
+    /** mu_j, f_j, zeta_j on a mode (omega_r, effective mass) to SI absorbers. */
+    private static List<PointAbsorber> inSi(AbsorberSetDesign d, double effectiveMass, double wr, String point) {
+        List<PointAbsorber> out = new ArrayList<>();
+        for (int j = 0; j < d.count(); j++) {
+            out.add(PointAbsorber.tuned(point, d.massRatios().get(j) * effectiveMass, d.tuningRatios().get(j) * wr,
+                    d.dampingRatios().get(j)));
+        }
+        return out;
+    }
+}

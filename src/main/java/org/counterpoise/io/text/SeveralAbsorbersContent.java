@@ -1,0 +1,148 @@
+package org.counterpoise.io.text;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import org.counterpoise.core.design.SeveralAbsorbers;
+import org.counterpoise.core.optim.AbsorberSetTuning;
+import org.counterpoise.core.system.Mode;
+import org.counterpoise.core.system.PointAbsorber;
+import org.counterpoise.core.units.Dimension;
+import org.counterpoise.io.text.ReportSection.SectionId;
+import org.counterpoise.io.text.ReportValue.Count;
+import org.counterpoise.io.text.ReportValue.Field;
+import org.counterpoise.io.text.ReportValue.Fields;
+import org.counterpoise.io.text.ReportValue.Flag;
+import org.counterpoise.io.text.ReportValue.Pair;
+import org.counterpoise.io.text.ReportValue.PairKind;
+import org.counterpoise.io.text.ReportValue.Words;
+
+/**
+ * The section on several absorbers and several modes (a project of format 6 with
+ * {@code structure.modes} or {@code absorbers}): each absorber's parts and tuning, the peak over the
+ * band at the response point before and after, each mode's peak before and after (spillover) and the
+ * gain over one absorber of the same total mass; with the cautions that say which other sections do
+ * not yet take several absorbers or modes.
+ */
+public final class SeveralAbsorbersContent {
+    /** Where the other sections stand when the absorber mass is split. */
+    static final String ONE_ABSORBER_SECTIONS = "several absorbers: the sections other than \"Several absorbers and"
+            + " modes\" (the absorber, stroke and forces, tolerance, method comparison, hardware) are for one absorber"
+            + " of the total mass on the target mode; robustness, the sheet and the wizard do not yet take several"
+            + " absorbers";
+    /** Where the other sections stand for a structure of several modes. */
+    static final String TARGET_MODE_SECTIONS = "several modes: the sections other than \"Several absorbers and modes\""
+            + " see the target mode alone, at the absorbers' point; the other modes and points are in that section only";
+    /** A split designed for the nominal peak whatever the method. */
+    static final String NOMINAL_SPLIT = "the split absorbers are tuned for the least nominal peak over the band"
+            + " (H-infinity), not for the project's robust method: mistune them on site with care";
+    /** An optimum of the split that failed its certificate. */
+    static final String NOT_CERTIFIED = "the optimum of the split absorbers' tunings could not be certified"
+            + " (docs/several-modes.md): treat their tunings as a good design, not the best";
+
+    private SeveralAbsorbersContent() {
+    }
+
+    /**
+     * @param content a design's report
+     * @param d the several absorbers designed for the same project
+     * @return the report with the section after the response (or at the end) and the cautions
+     */
+    public static ReportContent with(ReportContent content, SeveralAbsorbers d) {
+        ReportSection section = new ReportSection(SectionId.SEVERAL_ABSORBERS, "Several absorbers and modes", rows(d));
+        List<ReportSection> sections = new ArrayList<>();
+        boolean placed = false;
+        for (ReportSection s : content.sections()) {
+            sections.add(s);
+            if (s.id() == SectionId.RESPONSE) {
+                sections.add(section);
+                placed = true;
+            }
+        }
+        if (!placed) {
+            sections.add(section);
+        }
+        List<String> cautions = new ArrayList<>(content.cautions());
+        if (d.absorbers().size() > 1) {
+            cautions.add(ONE_ABSORBER_SECTIONS);
+            cautions.add(NOMINAL_SPLIT);
+        }
+        if (d.layout().structure().size() > 1) {
+            cautions.add(TARGET_MODE_SECTIONS);
+        }
+        if (!d.certified()) {
+            cautions.add(NOT_CERTIFIED);
+        }
+        return new ReportContent(content.name(), sections, content.warnings(), cautions, content.comparison(),
+                content.units());
+    }
+
+    private static List<ReportRow> rows(SeveralAbsorbers d) {
+        String source = "exact response of the structure's modes with the absorbers (docs/several-modes.md)";
+        List<ReportRow> rows = new ArrayList<>();
+        int n = d.absorbers().size();
+        AbsorberSetTuning tuning = d.layout().tuning();
+        String tuningId = tuning.name().toLowerCase(Locale.ROOT);
+        rows.add(row(ReportKey.SEVERAL_COUNT, "absorbers, equal masses", new Count(n), ""));
+        rows.add(row(ReportKey.SEVERAL_TUNING, "tuning", new Words(n == 1 ? "one absorber, the design above"
+                : tuning == AbsorberSetTuning.UNIFORM ? "uniform spread, one damping ratio (Xu and Igusa 1992)"
+                : "each absorber its own tuning and damping (Zuo and Nayfeh 2005)", List.of(tuningId)), ""));
+        rows.add(row(ReportKey.SEVERAL_POINTS, "force at, response at, absorbers at", new Words(
+                d.layout().excitationPoint() + ", " + d.layout().responsePoint() + ", " + d.layout().absorberPoint(),
+                List.of(d.layout().excitationPoint(), d.layout().responsePoint(), d.layout().absorberPoint())), ""));
+        Mode target = d.layout().structure().modes().get(d.targetMode());
+        String targetName = d.layout().modeNames().get(d.targetMode());
+        rows.add(row(ReportKey.SEVERAL_TARGET_MODE, "fitted to mode", new Words(targetName, List.of(targetName)),
+                d.layout().targetMode().isPresent() ? "absorbers.target_mode" : "the mode nearest the band"));
+        rows.add(row(ReportKey.SEVERAL_TARGET_FREQUENCY, "its natural frequency",
+                DesignContent.quantity(target.naturalFrequency(), Dimension.FREQUENCY), ""));
+        rows.add(row(ReportKey.SEVERAL_EFFECTIVE_MASS, "its modal mass at the absorbers' point",
+                DesignContent.quantity(d.effectiveMass(), Dimension.MASS), "m_r / phi_r(a)^2"));
+        rows.add(row(ReportKey.SEVERAL_TOTAL_MASS, "total absorber mass", DesignContent.quantity(d.totalMass(),
+                Dimension.MASS), ""));
+        for (int j = 0; j < n; j++) {
+            PointAbsorber a = d.absorbers().get(j);
+            double w = a.frequency();
+            List<Field> fields = List.of(
+                    new Field(ReportKey.ITEM_MASS, "mass", DesignContent.quantity(a.mass(), Dimension.MASS)),
+                    new Field(ReportKey.ITEM_STIFFNESS, "stiffness", DesignContent.quantity(a.stiffness(),
+                            Dimension.STIFFNESS)),
+                    new Field(ReportKey.ITEM_DAMPING, "damping", DesignContent.quantity(a.damping(),
+                            Dimension.DAMPING_COEFFICIENT)),
+                    new Field(ReportKey.ITEM_FREQUENCY, "own frequency", DesignContent.quantity(w, Dimension.FREQUENCY)),
+                    new Field(ReportKey.ITEM_DAMPING_RATIO, "damping ratio", DesignContent.quantity(
+                            a.damping() / (2 * a.mass() * w), Dimension.RATIO)));
+            rows.add(row(ReportKey.SEVERAL_ABSORBER, "absorber " + (j + 1), new Fields("", fields), source));
+        }
+        rows.add(row(ReportKey.SEVERAL_PEAKS, "peak displacement over the band", new Pair(
+                DesignContent.quantity(d.peakBefore(), Dimension.LENGTH),
+                DesignContent.quantity(d.peakAfter(), Dimension.LENGTH), PairKind.BEFORE_AFTER), source));
+        for (SeveralAbsorbers.ModePeak p : d.modes()) {
+            String name = d.layout().modeNames().get(p.mode());
+            Mode m = d.layout().structure().modes().get(p.mode());
+            List<Field> fields = List.of(
+                    new Field(ReportKey.ITEM_NAME, "", new Words(name, List.of())),
+                    new Field(ReportKey.ITEM_NATURAL_FREQUENCY, "at", DesignContent.quantity(m.naturalFrequency(),
+                            Dimension.FREQUENCY)),
+                    new Field(ReportKey.ITEM_PEAKS, "peak before, after", new Pair(
+                            DesignContent.quantity(p.before(), Dimension.LENGTH),
+                            DesignContent.quantity(p.after(), Dimension.LENGTH), PairKind.BEFORE_AFTER)));
+            rows.add(row(ReportKey.SEVERAL_MODE, "near mode " + name, new Fields("", fields),
+                    "each mode's neighbourhood: between the geometric means of its natural frequency and its"
+                            + " neighbours' (spillover)"));
+        }
+        d.single().ifPresent(s -> {
+            rows.add(row(ReportKey.SEVERAL_SINGLE_PEAK, "one absorber of the same total mass: peak",
+                    DesignContent.quantity(s.peak(), Dimension.LENGTH), "least peak over the band on the target mode"));
+            rows.add(row(ReportKey.SEVERAL_GAIN, "gain of the split (one absorber's peak / this peak)",
+                    DesignContent.quantity(d.gain().orElseThrow(), Dimension.RATIO), ""));
+        });
+        rows.add(row(ReportKey.SEVERAL_CERTIFIED, "optimum certified", new Flag(d.certified(),
+                d.certified() ? "yes" : "NO"), n == 1 ? "the design above" : "docs/several-modes.md, the certificate"));
+        return rows;
+    }
+
+    private static ReportRow row(ReportKey key, String label, ReportValue value, String source) {
+        return new ReportRow(key, label, "", value, source, "");
+    }
+}
