@@ -61,7 +61,7 @@ public final class Cli {
         if (args.length != 1 || args[0].startsWith("-") || args[0].isBlank()) {
             return false;
         }
-        if (new CommandLine(new CounterpoiseCommand()).getSubcommands().containsKey(args[0])) {
+        if (CounterpoiseCommand.names().contains(args[0])) {
             return false;
         }
         if (args[0].toLowerCase(Locale.ROOT).endsWith(".json")) {
@@ -75,7 +75,7 @@ public final class Cli {
     }
 
     private static int execute(String[] args, PrintWriter out, PrintWriter err) {
-        CommandLine cl = new CommandLine(new CounterpoiseCommand());
+        CommandLine cl = CounterpoiseCommand.commandLine(args);
         Converters.register(cl);
         cl.setOut(out);
         cl.setErr(err);
