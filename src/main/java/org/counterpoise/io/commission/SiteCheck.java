@@ -5,6 +5,7 @@ import org.counterpoise.core.commission.CommissioningCheck;
 import org.counterpoise.core.commission.OperatingComparison;
 import org.counterpoise.core.criteria.AmplitudeConvention;
 import org.counterpoise.core.design.DesignResult;
+import org.counterpoise.core.identify.MeasuredFrf;
 import org.counterpoise.core.realisation.TrimPlan;
 import org.counterpoise.core.units.Unit;
 import org.counterpoise.io.measurement.FrfUnit;
@@ -38,8 +39,9 @@ public record SiteCheck(String project, DesignResult design, Optional<Operating>
     /**
      * @param file the FRF file as the user named it
      * @param unit the kind and unit of its values
+     * @param lines the lines used
      * @param check the check
      */
-    public record Fitted(String file, FrfUnit unit, CommissioningCheck check) {
+    public record Fitted(String file, FrfUnit unit, MeasuredFrf lines, CommissioningCheck check) {
     }
 }

@@ -94,7 +94,7 @@ public final class SiteCheckReport {
         line(b, "trim", t.platesToAdd() == 0 ? "none: no whole plate (" + mass + " each) brings it nearer"
                 : (t.platesToAdd() > 0 ? "add " : "take off ") + Math.abs(t.platesToAdd()) + " plate"
                         + (Math.abs(t.platesToAdd()) == 1 ? "" : "s") + " of " + mass + " (frequency then "
-                        + signedPercent(t.frequencyOffAfter()) + (t.frequencyInTolerance() ? "; optional" : "") + ")");
+                        + signedPercent(t.frequencyOffAfter()) + (t.frequencyInTolerance() ? "; worth doing inside the tolerance too" : "") + ")");
         List<CommissioningWarning> all = new ArrayList<>(a.warnings());
         all.addAll(t.warnings());
         all.forEach(w -> b.append("Warning: ").append(words(w)).append('\n'));

@@ -7,7 +7,6 @@ import java.nio.file.Path;
 import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import java.util.concurrent.Callable;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.identify.AddedMass;
@@ -18,10 +17,8 @@ import org.counterpoise.core.identify.MeasuredFrf;
 import org.counterpoise.core.identify.ModeShapeRatio;
 import org.counterpoise.core.identify.RationalFraction;
 import org.counterpoise.core.units.Unit;
-import org.counterpoise.io.AtomicFiles;
 import org.counterpoise.io.FileWriteException;
 import org.counterpoise.io.PlainText;
-import org.counterpoise.io.chart.ChartFiles;
 import org.counterpoise.io.chart.IdentificationCharts;
 import org.counterpoise.io.measurement.DecayCsv;
 import org.counterpoise.io.measurement.FrfCsv;
@@ -210,52 +207,12 @@ public final class IdentifyCommand implements Callable<Integer> {
             throw new InvalidInputException("--plot", plot.toString(), "a plot of an FRF fit (not with --decay or"
                     + " --added-mass)");
         }
-        String name = plot.getFileName() == null ? "" : plot.getFileName().toString();
-        String lower = name.toLowerCase(Locale.ROOT);
-        boolean svg = lower.endsWith(".svg");
-        if (!svg && !lower.endsWith(".png")) {
-            throw new InvalidInputException("--plot", PlainText.escape(plot.toString()), "a file name ending in .png or .svg");
-        }
-        String stem = name.substring(0, name.length() - 4);
-        Path phase = plot.resolveSibling(stem + "-phase" + name.substring(name.length() - 4));
+        PlotFiles.svg("--plot", plot);
         List<XYChart> charts = List.of(
                 IdentificationCharts.magnitude(f.fitted(), f.model(), f.unit(), CHART_WIDTH, CHART_HEIGHT),
                 IdentificationCharts.phase(f.fitted(), f.model(), f.unit(), CHART_WIDTH, CHART_HEIGHT));
-        List<Path> targets = List.of(plot, phase);
-        List<AtomicFiles.Entry> entries = new ArrayList<>();
-        for (int i = 0; i < 2; i++) {
-            Path target = targets.get(i);
-            XYChart chart = charts.get(i);
-            if (file != null && Files.exists(target) && sameFile(target, file)) {
-                throw new InvalidInputException("--plot", PlainText.escape(target.toString()),
-                        "a file other than the measurement being read");
-            }
-            if (!force && Files.exists(target)) {
-                throw new InvalidInputException("--plot", PlainText.escape(target.toString()),
-                        "a file that does not exist yet, or --force to replace it");
-            }
-            entries.add(new AtomicFiles.Entry(target, out -> {
-                if (svg) {
-                    ChartFiles.svg(chart, out);
-                } else {
-                    ChartFiles.png(chart, out);
-                }
-            }));
-        }
-        try {
-            AtomicFiles.writeAll(entries);
-        } catch (FileWriteException e) {
-            throw new InvalidInputException("--plot", PlainText.escape(e.path().toString()), e.problem());
-        }
-        return targets.stream().map(p -> "wrote " + PlainText.escape(p.toString())).toList();
-    }
-
-    private static boolean sameFile(Path a, Path b) {
-        try {
-            return Files.isSameFile(a, b);
-        } catch (IOException e) {
-            return false;
-        }
+        return PlotFiles.write("--plot", List.of(plot, PlotFiles.sibling(plot, "-phase")), charts, force,
+                List.of(file));
     }
 
     /** Fits the transfer FRF as the driving point's and matches the chosen mode (--mode) in it. */

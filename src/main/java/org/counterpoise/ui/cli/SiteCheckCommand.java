@@ -1,6 +1,8 @@
 package org.counterpoise.ui.cli;
 
+import java.io.PrintWriter;
 import java.nio.file.Path;
+import java.util.List;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.concurrent.Callable;
@@ -18,6 +20,7 @@ import org.counterpoise.core.realisation.Realisation;
 import org.counterpoise.core.realisation.Realiser;
 import org.counterpoise.core.units.Unit;
 import org.counterpoise.io.PlainText;
+import org.counterpoise.io.chart.SiteCheckCharts;
 import org.counterpoise.io.commission.SiteCheck;
 import org.counterpoise.io.commission.SiteCheckJson;
 import org.counterpoise.io.commission.SiteCheckReport;
@@ -42,6 +45,9 @@ import picocli.CommandLine.Spec;
             + " measured with the absorber fitted against the design, with the absorber as built and the trim plates"
             + " that bring it to the design (--fitted-frf). See docs/identify.md."})
 public final class SiteCheckCommand implements Callable<Integer> {
+    private static final int CHART_WIDTH = 800;
+    private static final int CHART_HEIGHT = 500;
+
     @Spec
     private CommandSpec spec;
 
@@ -90,8 +96,22 @@ public final class SiteCheckCommand implements Callable<Integer> {
     @Option(names = "--json", description = "print the result as one JSON object with SI units in the key names")
     private boolean json;
 
+    @Option(names = "--plot", paramLabel = "FILE.png|FILE.svg",
+            description = "with --fitted-frf: draw the measured magnitude with the design's and the as-built model's")
+    private Path plot;
+
+    @Option(names = "--force", description = "replace a chart file that already exists")
+    private boolean force;
+
     @Override
     public Integer call() {
+        if (plot != null) {
+            PlotFiles.svg("--plot", plot);
+            if (fittedFrf == null) {
+                throw new InvalidInputException("--plot", PlainText.escape(plot.toString()),
+                        "a chart of the response with the absorber fitted: give --fitted-frf too");
+            }
+        }
         if (operating == null && fittedFrf == null) {
             throw InvalidInputException.missing("--operating or --fitted-frf",
                     "an operating spectrum (--operating FILE.csv), a response with the absorber fitted"
@@ -106,9 +126,17 @@ public final class SiteCheckCommand implements Callable<Integer> {
                 : Optional.of(fitted(design, realisation));
         SiteCheck check = new SiteCheck(loaded.project().name(), design, op, fitted, realisation.trim(),
                 loaded.project().displayUnits());
-        spec.commandLine().getOut().print(PlainText.forTerminal(json ? SiteCheckJson.toJson(check)
-                : SiteCheckReport.render(check)));
-        spec.commandLine().getOut().flush();
+        List<String> wrote = plot == null ? List.of() : PlotFiles.write("--plot", List.of(plot),
+                List.of(SiteCheckCharts.magnitude(fitted.get().lines(), design.study().structure(), design.tuning(),
+                        fitted.get().check().built(), fitted.get().unit(), CHART_WIDTH, CHART_HEIGHT)),
+                force, List.of(fittedFrf, file));
+        PrintWriter out = spec.commandLine().getOut();
+        out.print(PlainText.forTerminal(json ? SiteCheckJson.toJson(check) : SiteCheckReport.render(check)));
+        // with --json the standard output is the JSON alone; what was written goes to standard error
+        PrintWriter notes = json ? spec.commandLine().getErr() : out;
+        wrote.forEach(notes::println);
+        out.flush();
+        notes.flush();
         return 0;
     }
 
@@ -134,7 +162,7 @@ public final class SiteCheckCommand implements Callable<Integer> {
         MeasuredFrf all = FrfCsv.read(fittedFrf, unit);
         MeasuredFrf lines = band == null ? all : FrfOptions.band("--band", band, all);
         try {
-            return new SiteCheck.Fitted(fittedFrf.toString(), unit,
+            return new SiteCheck.Fitted(fittedFrf.toString(), unit, lines,
                     CommissioningCheck.of(design, realisation, lines, freeStructure));
         } catch (InvalidInputException e) {
             throw e.renamed(fittedFrf + " (" + e.field() + ")");

@@ -69,6 +69,23 @@ class SiteCheckCommandTest {
     }
 
     @Test
+    void thePlotIsWrittenAndNeverOverTheMeasurement(@TempDir Path dir) throws IOException {
+        Path png = dir.resolve("check.png");
+        Run r = CliTest.run("site-check", PUMP, "--fitted-frf", FITTED, "--plot", png.toString());
+        assertEquals(0, r.code(), r.err());
+        assertTrue(r.out().contains("wrote " + png), r.out());
+        byte[] head = Files.readAllBytes(png);
+        assertEquals((byte) 0x89, head[0]);
+        assertEquals('P', head[1]);
+        Run again = CliTest.run("site-check", PUMP, "--fitted-frf", FITTED, "--plot", png.toString());
+        assertEquals(Cli.BAD_INPUT, again.code());
+        assertTrue(again.err().contains("--force"), again.err());
+        Run noFrf = CliTest.run("site-check", PUMP, "--operating", SPECTRUM, "--plot", dir.resolve("o.png").toString());
+        assertEquals(Cli.BAD_INPUT, noFrf.code());
+        assertTrue(noFrf.err().contains("--fitted-frf"), noFrf.err());
+    }
+
+    @Test
     void badInputIsRefusedPlainly(@TempDir Path dir) throws IOException {
         Run none = CliTest.run("site-check", PUMP);
         assertEquals(Cli.BAD_INPUT, none.code());
