@@ -6,16 +6,12 @@ import java.util.List;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.concurrent.Callable;
-import org.counterpoise.core.commission.CommissioningCheck;
-import org.counterpoise.core.commission.OperatingCheck;
-import org.counterpoise.core.commission.OperatingSpectrum;
 import org.counterpoise.core.criteria.AmplitudeConvention;
 import org.counterpoise.core.design.DesignDossier;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.error.Checks;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.identify.FrfKind;
-import org.counterpoise.core.identify.MeasuredFrf;
 import org.counterpoise.core.realisation.Realisation;
 import org.counterpoise.core.realisation.Realiser;
 import org.counterpoise.core.units.Unit;
@@ -24,7 +20,7 @@ import org.counterpoise.io.chart.SiteCheckCharts;
 import org.counterpoise.io.commission.SiteCheck;
 import org.counterpoise.io.commission.SiteCheckJson;
 import org.counterpoise.io.commission.SiteCheckReport;
-import org.counterpoise.io.measurement.FrfCsv;
+import org.counterpoise.io.commission.SiteCheckRun;
 import org.counterpoise.io.measurement.FrfUnit;
 import org.counterpoise.io.measurement.SpectrumCsv;
 import org.counterpoise.io.project.LoadedProject;
@@ -121,11 +117,26 @@ public final class SiteCheckCommand implements Callable<Integer> {
         DesignDossier dossier = DesignDossier.of(loaded.project().toStudy());
         DesignResult design = dossier.design();
         Realisation realisation = Realiser.realisation(dossier, loaded.project().hardware());
-        Optional<SiteCheck.Operating> op = operating == null ? Optional.empty() : Optional.of(operating(design));
-        Optional<SiteCheck.Fitted> fitted = fittedFrf == null ? Optional.empty()
-                : Optional.of(fitted(design, realisation));
-        SiteCheck check = new SiteCheck(loaded.project().name(), design, op, fitted, realisation.trim(),
-                loaded.project().displayUnits());
+        Optional<SiteCheckRun.OperatingInput> op = Optional.empty();
+        if (operating != null) {
+            OptionalDouble at = OptionalDouble.empty();
+            if (running != null) {
+                Checks.positive("--running-frequency", running);
+                at = OptionalDouble.of(Unit.HERTZ.toSi(running));
+            }
+            op = Optional.of(new SiteCheckRun.OperatingInput(operating, SpectrumCsv.unit(spectrumUnits,
+                    "--spectrum-units"), convention, at, withAbsorber));
+        }
+        Optional<SiteCheckRun.FittedInput> fit = Optional.empty();
+        if (fittedFrf != null) {
+            FrfKind k = FrfOptions.kind("--kind", kind);
+            FrfUnit unit = frfUnits == null ? FrfUnit.si(k) : FrfUnit.parse(frfUnits, k, "--frf-units");
+            fit = Optional.of(new SiteCheckRun.FittedInput(fittedFrf, unit,
+                    all -> band == null ? all : FrfOptions.band("--band", band, all), freeStructure));
+        }
+        SiteCheck check = SiteCheckRun.run(loaded.project().name(), design, realisation,
+                loaded.project().displayUnits(), op, fit);
+        Optional<SiteCheck.Fitted> fitted = check.fitted();
         List<String> wrote = plot == null ? List.of() : PlotFiles.write("--plot", List.of(plot),
                 List.of(SiteCheckCharts.magnitude(fitted.get().lines(), design.study().structure(), design.tuning(),
                         fitted.get().check().built(), fitted.get().unit(), CHART_WIDTH, CHART_HEIGHT)),
@@ -138,34 +149,5 @@ public final class SiteCheckCommand implements Callable<Integer> {
         out.flush();
         notes.flush();
         return 0;
-    }
-
-    private SiteCheck.Operating operating(DesignResult design) {
-        Unit unit = SpectrumCsv.unit(spectrumUnits, "--spectrum-units");
-        OperatingSpectrum spectrum = SpectrumCsv.read(operating, unit, convention);
-        OptionalDouble at = OptionalDouble.empty();
-        if (running != null) {
-            Checks.positive("--running-frequency", running);
-            at = OptionalDouble.of(Unit.HERTZ.toSi(running));
-        }
-        try {
-            return new SiteCheck.Operating(operating.toString(), unit, convention, running != null,
-                    OperatingCheck.of(design, spectrum, at, withAbsorber));
-        } catch (InvalidInputException e) {
-            throw e.renamed(operating + " (" + e.field() + ")");
-        }
-    }
-
-    private SiteCheck.Fitted fitted(DesignResult design, Realisation realisation) {
-        FrfKind k = FrfOptions.kind("--kind", kind);
-        FrfUnit unit = frfUnits == null ? FrfUnit.si(k) : FrfUnit.parse(frfUnits, k, "--frf-units");
-        MeasuredFrf all = FrfCsv.read(fittedFrf, unit);
-        MeasuredFrf lines = band == null ? all : FrfOptions.band("--band", band, all);
-        try {
-            return new SiteCheck.Fitted(fittedFrf.toString(), unit, lines,
-                    CommissioningCheck.of(design, realisation, lines, freeStructure));
-        } catch (InvalidInputException e) {
-            throw e.renamed(fittedFrf + " (" + e.field() + ")");
-        }
     }
 }
