@@ -3,6 +3,7 @@ package org.counterpoise.ui.gui.wizard;
 import java.awt.BorderLayout;
 import java.awt.Color;
 import java.awt.Component;
+import java.awt.FlowLayout;
 import java.awt.Font;
 import java.util.ArrayList;
 import java.util.List;
@@ -14,6 +15,7 @@ import java.util.logging.Logger;
 import javax.swing.BorderFactory;
 import javax.swing.Box;
 import javax.swing.BoxLayout;
+import javax.swing.JButton;
 import javax.swing.JComponent;
 import javax.swing.JLabel;
 import javax.swing.JPanel;
@@ -60,9 +62,15 @@ final class RealisationView {
     /** The sections on screen, for tests (empty while none is current). */
     private List<ReportSection> shown = List.of();
     private HardwareChoice shownChoice;
+    private final JButton siteCheck = new JButton("Check on site\u2026");
+    private final SiteCheckDialog siteDialog;
 
     RealisationView(TaskRunner tasks) {
         this.tasks = tasks;
+        siteCheck.setName("hardware.siteCheck");
+        siteCheck.setToolTipText("Compare an operating spectrum and the response measured with the absorber fitted"
+                + " with this design: the absorber as built and the trim plates");
+        siteCheck.setEnabled(false);
         headline.setName("hardware.headline");
         headline.setFont(headline.getFont().deriveFont(Font.BOLD, headline.getFont().getSize2D() + 1f));
         headline.setBorder(BorderFactory.createEmptyBorder(6, 8, 6, 8));
@@ -74,10 +82,17 @@ final class RealisationView {
         scroll = new JScrollPane(top);
         scroll.setBorder(null);
         scroll.getVerticalScrollBar().setUnitIncrement(16);
+        JPanel head = new JPanel(new BorderLayout());
+        head.add(headline, BorderLayout.CENTER);
+        JPanel action = new JPanel(new FlowLayout(FlowLayout.RIGHT, 8, 4));
+        action.add(siteCheck);
+        head.add(action, BorderLayout.EAST);
         JPanel p = new JPanel(new BorderLayout());
-        p.add(headline, BorderLayout.NORTH);
+        p.add(head, BorderLayout.NORTH);
         p.add(scroll, BorderLayout.CENTER);
         page = p;
+        siteDialog = new SiteCheckDialog(p, tasks);
+        siteCheck.addActionListener(e -> siteDialog.show());
         message("Fix the inputs to see the hardware.");
     }
 
@@ -102,7 +117,7 @@ final class RealisationView {
         tasks.current(null, progress -> {
             Realisation r = Realiser.realisation(dossier, choice);
             DesignResult d = dossier.design();
-            return new Sized(r, HardwareContent.sections(r, d, units), units);
+            return new Sized(r, HardwareContent.sections(r, d, units), units, d);
         }, this::show, e -> {
             if (e instanceof CoreException plain) {
                 message("The hardware cannot be sized: " + plain.getMessage());
@@ -114,12 +129,14 @@ final class RealisationView {
     }
 
     /** A realisation and its report sections, made off the event thread. */
-    private record Sized(Realisation realisation, List<ReportSection> sections, UnitSystem units) {
+    private record Sized(Realisation realisation, List<ReportSection> sections, UnitSystem units, DesignResult design) {
     }
 
     private void message(String text) {
         shown = List.of();
         shownChoice = null;
+        siteCheck.setEnabled(false);
+        siteDialog.basis(null);
         sections.removeAll();
         headline.setForeground(null);
         headline.setText(text);
@@ -150,6 +167,8 @@ final class RealisationView {
         add("Cautions for this hardware", cautions);
         shown = sized.sections();
         shownChoice = r.choice();
+        siteCheck.setEnabled(true);
+        siteDialog.basis(new SiteCheckDialog.Basis(sized.design().study().name(), sized.design(), r, sized.units()));
         sections.revalidate();
         sections.repaint();
         // a new realisation is read from its top (the part list), whatever was scrolled to before
@@ -277,6 +296,11 @@ final class RealisationView {
     /** @return the sections shown (empty while none is current), for tests */
     List<ReportSection> shown() {
         return shown;
+    }
+
+    /** @return the site-check window, for tests */
+    SiteCheckDialog siteDialog() {
+        return siteDialog;
     }
 
     /** @return the choices the realisation on screen was sized for, or null while none is current */
