@@ -144,7 +144,7 @@ public final class SiteCheckReport {
     }
 
     private static void line(StringBuilder b, String label, String value) {
-        b.append("  ").append(String.format("%-34s", label)).append(value).append('\n');
+        b.append("  ").append(String.format("%-36s", label)).append(value).append('\n');
     }
 
     private static String percent(double ratio) {

@@ -12,12 +12,14 @@ import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.function.UnaryOperator;
 import javax.swing.BorderFactory;
+import javax.swing.DefaultListCellRenderer;
 import javax.swing.JButton;
 import javax.swing.JCheckBox;
 import javax.swing.JComboBox;
 import javax.swing.JDialog;
 import javax.swing.JFileChooser;
 import javax.swing.JLabel;
+import javax.swing.JList;
 import javax.swing.JPanel;
 import javax.swing.JScrollPane;
 import javax.swing.JSplitPane;
@@ -73,6 +75,17 @@ final class SiteCheckDialog {
     private final JTextField spectrumFile = named(new JTextField(28), "siteCheck.spectrumFile");
     private final JTextField spectrumUnit = named(new JTextField("mm/s", 8), "siteCheck.spectrumUnit");
     private final JComboBox<AmplitudeConvention> convention = new JComboBox<>(AmplitudeConvention.values());
+    {
+        // the convention's own words (peak, r.m.s., peak-to-peak), not its constant's name
+        convention.setRenderer(new DefaultListCellRenderer() {
+            @Override
+            public Component getListCellRendererComponent(JList<?> list, Object value, int index, boolean selected,
+                    boolean focus) {
+                return super.getListCellRendererComponent(list, value instanceof AmplitudeConvention c ? c.label()
+                        : value, index, selected, focus);
+            }
+        });
+    }
     private final JTextField running = named(new JTextField(6), "siteCheck.running");
     private final JCheckBox withAbsorber = named(new JCheckBox("Measured with the absorber fitted"),
             "siteCheck.withAbsorber");
@@ -321,6 +334,9 @@ final class SiteCheckDialog {
         } else {
             chart.message("Give the response with the absorber fitted to see it against the design.");
         }
+        // the split pane holding the chart lays itself out again only when told (seen under Xvfb)
+        dialog.getContentPane().validate();
+        dialog.repaint();
     }
 
     private static <T extends Component> T named(T c, String name) {
