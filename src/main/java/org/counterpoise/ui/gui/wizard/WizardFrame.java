@@ -25,6 +25,7 @@ import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.model.Structure;
 import org.counterpoise.io.preset.Presets;
+import org.counterpoise.io.project.FormatMigration;
 import org.counterpoise.io.project.LoadedProject;
 import org.counterpoise.io.project.Project;
 import org.counterpoise.io.text.UnitSystem;
@@ -241,6 +242,10 @@ public final class WizardFrame extends JFrame {
         document.load(loaded.project(), from);
         if (!loaded.unknownFields().isEmpty()) {
             say("Note: fields not used from the file: " + String.join(", ", loaded.unknownFields()));
+        }
+        if (!FormatMigration.isOneModeOneAbsorber(loaded.project())) {
+            say("Note: this project has several modes or absorbers; the wizard designs one absorber of the total"
+                    + " mass on the target mode alone. 'design' on the command line reports the several absorbers.");
         }
     }
 
