@@ -66,7 +66,7 @@ class SeveralAbsorbersOutputTest {
                 1e-12 * core.peakAfter());
         assertEquals(core.gain().orElseThrow(), s.get("gain").getAsDouble(), 1e-12);
         assertTrue(s.get("certified").getAsBoolean());
-        assertTrue(root.get("cautions").toString().contains("several modes: the sections other than"), json.out());
+        assertTrue(root.get("cautions").toString().contains("Several modes: the sections other than"), json.out());
 
         CliTest.Run text = CliTest.run("design", GALLERY);
         assertEquals(0, text.code(), text.err());
