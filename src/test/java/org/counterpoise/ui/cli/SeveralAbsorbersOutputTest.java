@@ -7,6 +7,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import com.google.gson.JsonArray;
 import com.google.gson.JsonObject;
 import com.google.gson.JsonParser;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import org.counterpoise.core.design.Designer;
 import org.counterpoise.core.design.SeveralAbsorbers;
@@ -16,6 +17,7 @@ import org.counterpoise.io.project.Project;
 import org.counterpoise.io.project.ProjectReader;
 import org.counterpoise.io.project.SeveralModes;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
 
 /**
  * A project of several modes and absorbers (format 6) on the command line: the text report's section,
@@ -80,6 +82,29 @@ class SeveralAbsorbersOutputTest {
         CliTest.Run json = CliTest.run("design", "--json", "presets/pump-skid-mezzanine.json");
         assertEquals(0, json.code(), json.err());
         assertFalse(JsonParser.parseString(json.out()).getAsJsonObject().has("several_absorbers"));
+    }
+
+    @Test
+    void aBadFieldExitsTwoWithOnePlainLine(@TempDir Path dir) throws Exception {
+        Path bad = dir.resolve("bad point.json");
+        Files.writeString(bad, Files.readString(Path.of(GALLERY)).replace("\"response_point\": \"midspan\"",
+                "\"response_point\": \"desk\""));
+        CliTest.Run r = CliTest.run("design", bad.toString());
+        assertEquals(2, r.code());
+        assertEquals("error: structure.response_point: \"desk\" is not allowed; one of the points the modes name:"
+                + " display, midspan", r.err().strip());
+    }
+
+    @Test
+    void aMeasuredModeIsNotWrittenBesideSeveralModes(@TempDir Path dir) throws Exception {
+        Path project = dir.resolve("gallery.json");
+        Files.copy(Path.of(GALLERY), project);
+        String before = Files.readString(project);
+        CliTest.Run r = CliTest.run("identify", "presets/impact-test-floor-frf.csv", "--write-structure",
+                project.toString());
+        assertEquals(2, r.code(), r.out());
+        assertTrue(r.err().contains("gives structure.modes"), r.err());
+        assertEquals(before, Files.readString(project), "the project is left as it was");
     }
 
     @Test
