@@ -30,6 +30,9 @@ public final class SeveralAbsorbersContent {
             + " modes\" (the absorber, stroke and forces, tolerance, method comparison, hardware) are for one absorber"
             + " of the total mass on the target mode; robustness, the sheet and the wizard do not yet take several"
             + " absorbers.";
+    /** What a front end that takes one absorber on one mode (sheet, robustness, run-up, wizard) says of such a project. */
+    public static final String ONE_ABSORBER_ONLY = "This project has several modes or absorbers: what follows is for"
+            + " one absorber of the total mass on the target mode alone; 'design' reports the several absorbers.";
     /** Where the other sections stand for a structure of several modes. */
     static final String TARGET_MODE_SECTIONS = "Several modes: the sections other than \"Several absorbers and modes\""
             + " see the target mode alone, at the absorbers' point; the other modes and points are in that section only.";

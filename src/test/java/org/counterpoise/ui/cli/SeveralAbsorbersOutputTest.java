@@ -9,6 +9,9 @@ import com.google.gson.JsonObject;
 import com.google.gson.JsonParser;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import org.apache.pdfbox.Loader;
+import org.apache.pdfbox.pdmodel.PDDocument;
+import org.apache.pdfbox.text.PDFTextStripper;
 import org.counterpoise.core.design.Designer;
 import org.counterpoise.core.design.SeveralAbsorbers;
 import org.counterpoise.core.design.SeveralAbsorbersDesigner;
@@ -16,6 +19,7 @@ import org.counterpoise.core.system.PointAbsorber;
 import org.counterpoise.io.project.Project;
 import org.counterpoise.io.project.ProjectReader;
 import org.counterpoise.io.project.SeveralModes;
+import org.counterpoise.io.text.SeveralAbsorbersContent;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -108,10 +112,16 @@ class SeveralAbsorbersOutputTest {
     }
 
     @Test
-    void commandsThatTakeOneAbsorberSaySo() {
+    void commandsThatTakeOneAbsorberSaySo(@TempDir Path dir) throws Exception {
         CliTest.Run robustness = CliTest.run("robustness", "--json", "presets/split-mass-test-rig.json");
         assertEquals(0, robustness.code(), robustness.err());
-        assertTrue(robustness.err().contains("takes one absorber of the total mass on the target mode alone"),
-                robustness.err());
+        assertTrue(robustness.err().contains(SeveralAbsorbersContent.ONE_ABSORBER_ONLY), robustness.err());
+        Path pdf = dir.resolve("sheet.pdf");
+        CliTest.Run sheet = CliTest.run("sheet", "presets/split-mass-test-rig.json", "-o", pdf.toString());
+        assertEquals(0, sheet.code(), sheet.err());
+        try (PDDocument doc = Loader.loadPDF(Files.readAllBytes(pdf))) {
+            String text = new PDFTextStripper().getText(doc).replaceAll("\\s+", " ");
+            assertTrue(text.contains("This project has several modes or absorbers"), text);
+        }
     }
 }

@@ -28,6 +28,7 @@ import org.counterpoise.io.preset.Presets;
 import org.counterpoise.io.project.FormatMigration;
 import org.counterpoise.io.project.LoadedProject;
 import org.counterpoise.io.project.Project;
+import org.counterpoise.io.text.SeveralAbsorbersContent;
 import org.counterpoise.io.text.UnitSystem;
 import org.counterpoise.ui.gui.Themes;
 import org.counterpoise.ui.gui.action.Actions;
@@ -244,8 +245,7 @@ public final class WizardFrame extends JFrame {
             say("Note: fields not used from the file: " + String.join(", ", loaded.unknownFields()));
         }
         if (!FormatMigration.isOneModeOneAbsorber(loaded.project())) {
-            say("Note: this project has several modes or absorbers; the wizard designs one absorber of the total"
-                    + " mass on the target mode alone. 'design' on the command line reports the several absorbers.");
+            say("Note: " + SeveralAbsorbersContent.ONE_ABSORBER_ONLY);
         }
     }
 
