@@ -8,9 +8,11 @@ import java.nio.file.Path;
 import java.time.LocalDate;
 import java.util.Locale;
 import java.util.OptionalDouble;
+import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.identify.IdentifiedMode;
 import org.counterpoise.core.robust.Tolerance;
 import org.counterpoise.core.units.Unit;
+import org.counterpoise.io.PlainText;
 import org.counterpoise.io.project.DampingInput;
 import org.counterpoise.io.project.LoadedProject;
 import org.counterpoise.io.project.MeasuredSource;
@@ -124,6 +126,12 @@ public final class StructureFromMeasurement {
     public static LoadedProject write(Path project, Identification.Frf fit, IdentifiedMode mode, LocalDate day)
             throws IOException {
         LoadedProject loaded = ProjectReader.read(project);
+        if (loaded.project().modes() != null) {
+            // the identified mode would stand beside the modes and be left unused: refused, not ignored
+            throw new InvalidInputException("--write-structure", PlainText.escape(project.toString()),
+                    "a project whose structure is one mode: this one gives structure.modes (several modes), which"
+                            + " a measured mode does not replace; write to a project of one mode");
+        }
         Project updated = withUncertainties(loaded.project().withStructure(structure(fit, mode, day)), mode);
         ProjectWriter.save(updated, project);
         return new LoadedProject(updated, loaded.unknownFields());

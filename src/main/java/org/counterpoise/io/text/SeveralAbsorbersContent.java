@@ -26,19 +26,23 @@ import org.counterpoise.io.text.ReportValue.Words;
  */
 public final class SeveralAbsorbersContent {
     /** Where the other sections stand when the absorber mass is split. */
-    static final String ONE_ABSORBER_SECTIONS = "several absorbers: the sections other than \"Several absorbers and"
+    static final String ONE_ABSORBER_SECTIONS = "Several absorbers: the sections other than \"Several absorbers and"
             + " modes\" (the absorber, stroke and forces, tolerance, method comparison, hardware) are for one absorber"
             + " of the total mass on the target mode; robustness, the sheet and the wizard do not yet take several"
-            + " absorbers";
+            + " absorbers.";
+    /** What a front end that takes one absorber on one mode (sheet, robustness, run-up, wizard) says of such a project. */
+    public static final String ONE_ABSORBER_ONLY = "This project has several modes or absorbers: what follows is for"
+            + " one absorber of the total mass on the target mode alone; 'design' reports the several absorbers.";
     /** Where the other sections stand for a structure of several modes. */
-    static final String TARGET_MODE_SECTIONS = "several modes: the sections other than \"Several absorbers and modes\""
-            + " see the target mode alone, at the absorbers' point; the other modes and points are in that section only";
+    static final String TARGET_MODE_SECTIONS = "Several modes: the sections other than \"Several absorbers and modes\""
+            + " see the target mode alone, at the absorbers' point; the other modes and points are in that section only.";
     /** A split designed for the nominal peak whatever the method. */
-    static final String NOMINAL_SPLIT = "the split absorbers are tuned for the least nominal peak over the band"
-            + " (H-infinity), not for the project's robust method: mistune them on site with care";
+    static final String NOMINAL_SPLIT = "The split absorbers are tuned for the least nominal peak over the band"
+            + " (H-infinity), not for the project's method: their tolerance to mistuning is not computed, so check their"
+            + " tuning on site with care.";
     /** An optimum of the split that failed its certificate. */
-    static final String NOT_CERTIFIED = "the optimum of the split absorbers' tunings could not be certified"
-            + " (docs/several-modes.md): treat their tunings as a good design, not the best";
+    static final String NOT_CERTIFIED = "The optimum of the split absorbers' tunings could not be certified"
+            + " (docs/several-modes.md): treat their tunings as a good design, not the best.";
 
     private SeveralAbsorbersContent() {
     }

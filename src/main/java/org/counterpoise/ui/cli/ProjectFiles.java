@@ -6,6 +6,7 @@ import org.counterpoise.io.project.FormatMigration;
 import org.counterpoise.io.project.LoadedProject;
 import org.counterpoise.io.project.ProjectReader;
 import org.counterpoise.io.project.SeveralModes;
+import org.counterpoise.io.text.SeveralAbsorbersContent;
 import picocli.CommandLine.Model.CommandSpec;
 
 /** Reading a project file for a command: fields the format does not know are noted on standard error. */
@@ -28,16 +29,14 @@ final class ProjectFiles {
      * target mode, and a note on standard error says so instead of leaving them out silently.
      * @param spec the command
      * @param file the project file
-     * @param command what the command makes, in words ("the robustness study")
      * @return the project
      */
-    static LoadedProject readForOneAbsorber(CommandSpec spec, Path file, String command) {
+    static LoadedProject readForOneAbsorber(CommandSpec spec, Path file) {
         LoadedProject loaded = read(spec, file);
         if (!FormatMigration.isOneModeOneAbsorber(loaded.project())) {
             SeveralModes.layout(loaded.project());
-            spec.commandLine().getErr().println("note: " + PlainText.escape(file.toString()) + ": " + command
-                    + " takes one absorber of the total mass on the target mode alone; the several absorbers and"
-                    + " modes of this project are designed and reported by 'design' only");
+            spec.commandLine().getErr().println("note: " + PlainText.escape(file.toString()) + ": "
+                    + SeveralAbsorbersContent.ONE_ABSORBER_ONLY);
         }
         return loaded;
     }

@@ -48,7 +48,7 @@ public final class RobustnessCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        LoadedProject loaded = ProjectFiles.readForOneAbsorber(spec, file, "the robustness study");
+        LoadedProject loaded = ProjectFiles.readForOneAbsorber(spec, file);
         DesignStudy study = loaded.project().toStudy();
         RobustnessSettings s = study.robustness();
         if (samples != null) {

@@ -70,7 +70,7 @@ public final class RunUpCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        LoadedProject loaded = ProjectFiles.readForOneAbsorber(spec, file, "the run-up");
+        LoadedProject loaded = ProjectFiles.readForOneAbsorber(spec, file);
         Project project = loaded.project();
         DesignDossier dossier = DesignDossier.of(project.toStudy());
         DesignResult design = dossier.design();

@@ -8,9 +8,12 @@ import org.counterpoise.core.design.DesignDossier;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.progress.ProgressListener;
 import org.counterpoise.io.PlainText;
+import org.counterpoise.io.project.FormatMigration;
 import org.counterpoise.io.project.LoadedProject;
+import org.counterpoise.io.project.Project;
 import org.counterpoise.io.sheet.RunUpPanel;
 import org.counterpoise.io.sheet.SheetFiles;
+import org.counterpoise.io.text.SeveralAbsorbersContent;
 import org.counterpoise.io.text.UnitSystem;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
@@ -61,7 +64,7 @@ public final class SheetCommand implements Callable<Integer> {
             throw new InvalidInputException("--revision", "\"" + PlainText.quote(revision) + "\"",
                     "a short mark of at most 20 characters without control characters, such as A or 2b");
         }
-        LoadedProject loaded = ProjectFiles.readForOneAbsorber(spec, file, "the sheet");
+        LoadedProject loaded = ProjectFiles.readForOneAbsorber(spec, file);
         DesignDossier dossier = DesignDossier.of(loaded.project().toStudy());
         dossier.design(); // a design that cannot be made is reported before any file is touched
         var identity = loaded.project().identity();
@@ -73,7 +76,7 @@ public final class SheetCommand implements Callable<Integer> {
                 .convention(DisplayConvention.of(convention, loaded.project()))
                 .hardware(loaded.project().hardware(), DisplayUnitSystem.of(units, loaded.project()))
                 .measured(loaded.project().structure().measured())
-                .sheet(output, loaded.project().notes(), issued, mark, "--output", identity)
+                .sheet(output, notesOnTheSheet(loaded.project()), issued, mark, "--output", identity)
                 .sparing(file, "the project file being read")
                 .panel(RunUpPanel.of(loaded.project().withDisplayUnits(DisplayUnitSystem.of(units, loaded.project())),
                         dossier.design(), ProgressListener.NONE));
@@ -89,5 +92,14 @@ public final class SheetCommand implements Callable<Integer> {
         }
         out.flush();
         return 0;
+    }
+
+    /** The project's notes, and for several modes or absorbers what the sheet does not show. */
+    private static String notesOnTheSheet(Project p) {
+        if (FormatMigration.isOneModeOneAbsorber(p)) {
+            return p.notes();
+        }
+        return p.notes().isEmpty() ? SeveralAbsorbersContent.ONE_ABSORBER_ONLY
+                : p.notes() + "\n" + SeveralAbsorbersContent.ONE_ABSORBER_ONLY;
     }
 }

@@ -65,6 +65,8 @@ final class StructureStep extends Step {
     private final JButton fromMeasurement = new JButton("From a measured response\u2026");
     private final JComponent page;
     private MeasurementDialog measurement;
+    /** True when the project gives its structure as several modes, which this step does not edit yet. */
+    private boolean severalModes;
 
     StructureStep() {
         massForm.setName("structure.massForm");
@@ -209,6 +211,18 @@ final class StructureStep extends Step {
 
     @Override
     void showProject(Project p, boolean loaded) {
+        severalModes = p.modes() != null;
+        for (JComponent c : List.of(massForm, mass.textField(), stiffnessForm, stiffness.textField(), dampingForm,
+                damping.textField(), modeShape.textField(), fromMeasurement)) {
+            c.setEnabled(!severalModes);
+        }
+        if (severalModes) {
+            // the modes are kept as the file gives them; the design uses the target mode (derived below)
+            measuredNote.setText("several modes (structure.modes in the file): not edited here; the design"
+                    + " uses the target mode at the absorbers' point, derived below");
+            measuredNote.setToolTipText(null);
+            return;
+        }
         load(p.structure());
         MeasuredSource m = p.structure().measured();
         measuredNote.setText(m == null ? "typed (not from a measurement)" : "measured: "
@@ -219,6 +233,9 @@ final class StructureStep extends Step {
 
     @Override
     boolean fieldsValid() {
+        if (severalModes) {
+            return true;
+        }
         boolean ok = true;
         for (QuantityField f : List.of(mass, stiffness, damping, modeShape)) {
             ok &= check(f);

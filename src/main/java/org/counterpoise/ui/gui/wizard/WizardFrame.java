@@ -25,8 +25,10 @@ import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.model.Structure;
 import org.counterpoise.io.preset.Presets;
+import org.counterpoise.io.project.FormatMigration;
 import org.counterpoise.io.project.LoadedProject;
 import org.counterpoise.io.project.Project;
+import org.counterpoise.io.text.SeveralAbsorbersContent;
 import org.counterpoise.io.text.UnitSystem;
 import org.counterpoise.ui.gui.Themes;
 import org.counterpoise.ui.gui.action.Actions;
@@ -241,6 +243,9 @@ public final class WizardFrame extends JFrame {
         document.load(loaded.project(), from);
         if (!loaded.unknownFields().isEmpty()) {
             say("Note: fields not used from the file: " + String.join(", ", loaded.unknownFields()));
+        }
+        if (!FormatMigration.isOneModeOneAbsorber(loaded.project())) {
+            say("Note: " + SeveralAbsorbersContent.ONE_ABSORBER_ONLY);
         }
     }
 
