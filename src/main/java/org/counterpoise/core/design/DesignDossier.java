@@ -90,12 +90,15 @@ public final class DesignDossier {
         }
 
         /**
-         * @param design a design
+         * @param study a study
+         * @param design its design, asked on the calling thread while the other methods' designs
+         *     run ({@link MethodComparison#of(DesignStudy, Supplier, ProgressListener)})
          * @param listener progress and cancellation
-         * @return the comparison of the design methods for its study
+         * @return the comparison of the design methods for the study
          */
-        default MethodComparison comparison(DesignResult design, ProgressListener listener) {
-            return MethodComparison.of(design, listener);
+        default MethodComparison comparison(DesignStudy study, Supplier<DesignResult> design,
+                ProgressListener listener) {
+            return MethodComparison.of(study, design, listener);
         }
     }
 
@@ -165,12 +168,13 @@ public final class DesignDossier {
     /**
      * @param listener progress and cancellation, for this request
      * @return the comparison of the design methods (computed on first request; it designs the study
-     *     by every method, so it is not for the event thread)
-     * @throws CoreException with key {@link Messages#CANCELLED} when cancelled; nothing is kept
+     *     by every method, so it is not for the event thread). Asked before the design, it makes the
+     *     design meanwhile (kept as the dossier's design), beside the other methods' designs.
+     * @throws CoreException with key {@link Messages#CANCELLED} when cancelled; nothing is kept; the
+     *     design's own failures as {@link #design()} throws them
      */
     public MethodComparison comparison(ProgressListener listener) {
-        DesignResult d = design();
-        return comparison.get(() -> computations.comparison(d, listener));
+        return comparison.get(() -> computations.comparison(study, this::design, listener));
     }
 
     /**

@@ -3,19 +3,13 @@ package org.counterpoise.core.design;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
-import java.util.concurrent.atomic.AtomicInteger;
-import java.util.concurrent.ExecutionException;
-import java.util.concurrent.ExecutorService;
-import java.util.concurrent.Executors;
-import java.util.concurrent.Future;
+import java.util.OptionalDouble;
+import java.util.function.Supplier;
 import org.counterpoise.core.error.CoreException;
 import org.counterpoise.core.error.InvalidInputException;
-import org.counterpoise.core.error.Messages;
-import org.counterpoise.core.error.NotFoundException;
 import org.counterpoise.core.model.Tuning;
 import org.counterpoise.core.progress.ProgressListener;
 import org.counterpoise.core.response.ResponsePeak;
-import org.counterpoise.core.tuning.ClosedForms;
 
 /**
  * The design methods side by side for one study: each candidate is the study designed by that
@@ -51,13 +45,6 @@ public record MethodComparison(List<Candidate> candidates, List<LeftOut> leftOut
     /** The methods compared, in the order shown: the one list. */
     public static final List<DesignMethod> COMPARED = List.of(DesignMethod.EQUAL_PEAK, DesignMethod.EXACT_PEAK,
             DesignMethod.ROBUST_WORST_CASE, DesignMethod.ROBUST_P95, DesignMethod.UNDAMPED_SINGLE_SPEED);
-
-    /** Threads that design the candidates (daemons, so they never hold the program open). */
-    private static final ExecutorService CANDIDATE_THREADS = Executors.newCachedThreadPool(r -> {
-        Thread t = new Thread(r, "method-comparison");
-        t.setDaemon(true);
-        return t;
-    });
 
     /** Relative difference of worst cases taken as a tie (the recommended method then wins the tie). */
     static final double TIE = 1e-9;
@@ -141,10 +128,27 @@ public record MethodComparison(List<Candidate> candidates, List<LeftOut> leftOut
      * @throws CoreException with key CANCELLED when cancelled
      */
     public static MethodComparison of(DesignResult chosen, ProgressListener listener) {
-        DesignStudy study = chosen.study();
+        return of(chosen.study(), () -> chosen, listener);
+    }
+
+    /**
+     * The comparison, with the chosen design made on the calling thread meanwhile. The candidates
+     * need only the mass ratio of the chosen design; when the study fixes it (a mass or a mass
+     * ratio, not a target) they start on their own threads at once, beside the chosen design,
+     * instead of after it. Either way the comparison is the one {@link #of(DesignResult,
+     * ProgressListener)} gives for that design.
+     *
+     * @param study the study
+     * @param chosen its design by its own method (asked once, on the calling thread)
+     * @param listener progress (one share per method) and cancellation between methods
+     * @return the comparison
+     * @throws CoreException with key CANCELLED when cancelled; the design's own failures as it throws them
+     */
+    public static MethodComparison of(DesignStudy study, Supplier<DesignResult> chosen, ProgressListener listener) {
         DesignMethod method = study.method();
         List<LeftOut> leftOut = new ArrayList<>();
         if (study.excitation().spectrum().isWhiteNoise()) {
+            chosen.get();
             COMPARED.forEach(m -> leftOut.add(new LeftOut(m, LeftOutReason.WHITE_NOISE)));
             return new MethodComparison(List.of(), leftOut, method, RecommendationReason.WHITE_NOISE, method);
         }
@@ -152,44 +156,34 @@ public record MethodComparison(List<Candidate> candidates, List<LeftOut> leftOut
         if (!methods.contains(method)) {
             methods.add(method);
         }
-        double mu = chosen.tuning().massRatio();
         listener.checkCancelled("the comparison of methods");
         listener.progress(0.0);
-        // The candidates are independent designs: each on a thread of its own, gathered in the
-        // order of the methods, so the output is the sequential one. Plain threads, not the common
-        // pool: a pool thread that waits on its own inner parallel work may help by running a whole
-        // other design, which would keep this one waiting. Every design is a pure function of its
-        // study (its own parallel parts write into slots), so no figure depends on the threads.
-        Thread caller = Thread.currentThread();
-        ProgressListener shared = sharedBy(listener, caller);
-        AtomicInteger done = new AtomicInteger();
-        List<Future<Outcome>> futures = new ArrayList<>();
-        for (DesignMethod m : methods) {
-            futures.add(CANDIDATE_THREADS.submit(() -> {
-                Outcome o = outcome(chosen, m, mu, shared);
-                shared.progress((double) done.incrementAndGet() / methods.size());
-                return o;
-            }));
-        }
-        List<Outcome> outcomes = new ArrayList<>();
+        OptionalDouble fixed = fixedMassRatio(study);
+        ComparisonCandidates early = fixed.isPresent() ? ComparisonCandidates.start(study, methods, fixed.getAsDouble(), listener) : null;
+        DesignResult design;
         try {
-            for (Future<Outcome> f : futures) {
-                outcomes.add(f.get());
+            design = chosen.get();
+        } catch (RuntimeException | Error e) {
+            if (early != null) {
+                early.drop();
             }
-        } catch (InterruptedException e) {
-            futures.forEach(f -> f.cancel(true));
-            Thread.currentThread().interrupt();
-            throw new CoreException(Messages.CANCELLED, "the comparison of methods");
-        } catch (ExecutionException e) {
-            // outcome() returns every exception as a value; only an Error gets here
-            if (e.getCause() instanceof Error error) {
-                throw error;
-            }
-            throw new IllegalStateException(e.getCause());
+            throw e;
         }
+        double mu = design.tuning().massRatio();
+        ComparisonCandidates others = early;
+        if (others == null || Double.compare(others.massRatio(), mu) != 0) {
+            // a study sized for a target (or, never expected, a design at another mass ratio than
+            // its study's): the candidates start now, at the mass the design found
+            if (others != null) {
+                others.drop();
+            }
+            others = ComparisonCandidates.start(study, methods, mu, listener);
+        }
+        List<ComparisonCandidates.Outcome> outcomes = others.gather(ComparisonCandidates.chosenOutcome(design,
+                others.shared()));
         List<Candidate> candidates = new ArrayList<>();
         for (int i = 0; i < methods.size(); i++) {
-            Outcome o = outcomes.get(i);
+            ComparisonCandidates.Outcome o = outcomes.get(i);
             if (o.failure() != null) {
                 throw o.failure();
             }
@@ -203,75 +197,16 @@ public record MethodComparison(List<Candidate> candidates, List<LeftOut> leftOut
                 RecommendationReason.LEAST_WORST_CASE, method);
     }
 
-    /**
-     * What one method gave: its candidate, or why it was left out, or the exception to rethrow on
-     * the caller's thread (a cancellation), so no exception crosses the pool's threads re-wrapped.
-     */
-    private record Outcome(Optional<Candidate> candidate, Optional<LeftOutReason> reason, RuntimeException failure) {
-    }
-
-    private static Outcome outcome(DesignResult chosen, DesignMethod m, double mu, ProgressListener listener) {
-        DesignStudy study = chosen.study();
+    /** The mass ratio the study fixes before any design (as {@link Designer} takes it), if it does. */
+    private static OptionalDouble fixedMassRatio(DesignStudy study) {
+        if (study.sizing().findsMassRatio()) {
+            return OptionalDouble.empty();
+        }
         try {
-            listener.checkCancelled("the comparison of methods");
-            if (m == study.method()) {
-                return new Outcome(Optional.of(Candidate.of(chosen, true)), Optional.empty(), null);
-            }
-            Optional<LeftOutReason> why = notApplicable(study, m, mu);
-            if (why.isPresent()) {
-                return new Outcome(Optional.empty(), why, null);
-            }
-            return new Outcome(Optional.of(candidate(study, m, mu)), Optional.empty(), null);
-        } catch (NotFoundException e) {
-            return new Outcome(Optional.empty(), Optional.of(LeftOutReason.NO_CERTIFIED_OPTIMUM), null);
+            return OptionalDouble.of(study.sizing().massRatioOn(study.structure()));
         } catch (InvalidInputException e) {
-            return new Outcome(Optional.empty(), Optional.of(LeftOutReason.NOT_FOR_THIS_STUDY), null);
-        } catch (RuntimeException e) {
-            return new Outcome(Optional.empty(), Optional.empty(), e);
+            return OptionalDouble.empty(); // the design refuses it, with this message, on the calling thread
         }
-    }
-
-    /**
-     * The listener as the pool's threads ask it: cancelled also when the calling thread is
-     * interrupted (a front end dropping a stale job interrupts the caller, not the pool).
-     */
-    private static ProgressListener sharedBy(ProgressListener listener, Thread caller) {
-        return new ProgressListener() {
-            @Override
-            public void progress(double fraction) {
-                listener.progress(fraction);
-            }
-
-            @Override
-            public boolean cancelled() {
-                return listener.cancelled() || caller.isInterrupted();
-            }
-        };
-    }
-
-    private static Optional<LeftOutReason> notApplicable(DesignStudy study, DesignMethod m, double mu) {
-        if (m == DesignMethod.EQUAL_PEAK
-                && ClosedForms.equalPeak(study.excitation().kind(), study.response(), mu).isEmpty()) {
-            return Optional.of(LeftOutReason.NO_CLOSED_FORM);
-        }
-        if (m == DesignMethod.UNDAMPED_SINGLE_SPEED && !study.excitation().band().isSingle()) {
-            return Optional.of(LeftOutReason.NOT_ONE_SPEED);
-        }
-        return Optional.empty();
-    }
-
-    /** The study by another method at the same mass, with the constraints when the method takes them. */
-    private static Candidate candidate(DesignStudy study, DesignMethod m, double mu) {
-        AbsorberSizing sizing = study.sizing().findsMassRatio() ? AbsorberSizing.ofMassRatio(mu) : study.sizing();
-        DesignStudy constrained;
-        try {
-            constrained = study.withSizing(sizing, study.constraints()).withMethod(m);
-        } catch (InvalidInputException e) {
-            // the method does not take the constraints: compared without them, and said so
-            return Candidate.of(Designer.design(study.withSizing(sizing, DesignConstraints.NONE).withMethod(m)),
-                    !study.constraints().any());
-        }
-        return Candidate.of(Designer.design(constrained), true);
     }
 
     /**

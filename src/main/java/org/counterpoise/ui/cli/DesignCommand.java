@@ -52,8 +52,9 @@ public final class DesignCommand implements Callable<Integer> {
     public Integer call() {
         LoadedProject loaded = ProjectFiles.read(spec, file);
         DesignDossier dossier = DesignDossier.of(loaded.project().toStudy());
-        DesignResult result = dossier.design();
+        // the comparison first: it makes the design on this thread while the other methods' run
         MethodComparison comparison = dossier.comparison(ProgressListener.NONE);
+        DesignResult result = dossier.design();
         // the JSON is SI whatever the display: its keys name SI units, its words follow them
         UnitSystem shown = json ? UnitSystem.SI : DisplayUnitSystem.of(units, loaded.project());
         ReportContent designed = DesignContent.of(result, json ? ProjectIdentity.EMPTY : loaded.project().identity(),

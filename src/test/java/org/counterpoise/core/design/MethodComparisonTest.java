@@ -8,6 +8,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.util.List;
 import java.util.OptionalDouble;
 import java.util.concurrent.atomic.AtomicInteger;
+import java.util.function.Supplier;
 import org.counterpoise.core.design.MethodComparison.Candidate;
 import org.counterpoise.core.design.MethodComparison.LeftOutReason;
 import org.counterpoise.core.error.CoreException;
@@ -202,9 +203,10 @@ class MethodComparisonTest {
         AtomicInteger runs = new AtomicInteger();
         DesignDossier.Computations counting = new DesignDossier.Computations() {
             @Override
-            public MethodComparison comparison(DesignResult design, ProgressListener listener) {
+            public MethodComparison comparison(DesignStudy study, Supplier<DesignResult> design,
+                    ProgressListener listener) {
                 runs.incrementAndGet();
-                return DesignDossier.Computations.super.comparison(design, listener);
+                return DesignDossier.Computations.super.comparison(study, design, listener);
             }
         };
         DesignStudy s = study(DAMPED, BAND, DesignMethod.EQUAL_PEAK, AbsorberSizing.ofMassRatio(0.04));
