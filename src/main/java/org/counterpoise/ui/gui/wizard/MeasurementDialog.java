@@ -210,7 +210,10 @@ final class MeasurementDialog {
         content.add(results, BorderLayout.CENTER);
         content.add(south, BorderLayout.SOUTH);
         d.setContentPane(content);
-        chart.message("Choose a file and press Fit.");
+        // a file dropped on the window is the driving-point FRF, fitted at once; on its own field, the transfer FRF
+        FileDrop.install(file, this::startFit, content);
+        FileDrop.install(transferFile, this::startFit);
+        chart.message("Choose a file (or drop one here) and press Fit.");
         d.pack();
         d.setLocationRelativeTo(owner);
         return d;
@@ -253,7 +256,6 @@ final class MeasurementDialog {
             return transferModes.isEmpty() ? m : ModeShapeRatio.of(m, transferModes).atTransferPoint();
         }
     }
-
 
     private void startFit() {
         long number = ++fitNumber;

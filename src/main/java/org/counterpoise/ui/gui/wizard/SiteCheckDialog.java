@@ -222,7 +222,9 @@ final class SiteCheckDialog {
         content.add(results, BorderLayout.CENTER);
         content.add(south, BorderLayout.SOUTH);
         d.setContentPane(content);
-        chart.message("Choose one file or both, and press Check.");
+        FileDrop.install(spectrumFile, () -> { });
+        FileDrop.install(frfFile, () -> { });
+        chart.message("Choose one file or both (or drop each on its field), and press Check.");
         check.setEnabled(basis != null);
         d.pack();
         d.setLocationRelativeTo(owner);

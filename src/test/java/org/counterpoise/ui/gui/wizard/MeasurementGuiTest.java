@@ -7,18 +7,24 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.awt.Component;
 import java.awt.Window;
+import java.awt.datatransfer.DataFlavor;
+import java.awt.datatransfer.Transferable;
+import java.io.File;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 import javax.swing.AbstractButton;
+import javax.swing.JComponent;
 import javax.swing.JDialog;
 import javax.swing.JLabel;
 import javax.swing.JTable;
 import javax.swing.JTextField;
 import javax.swing.RootPaneContainer;
 import javax.swing.SwingUtilities;
+import javax.swing.TransferHandler;
 import org.counterpoise.core.identify.FrfKind;
 import org.counterpoise.core.identify.MeasuredFrf;
 import org.counterpoise.core.model.Structure;
@@ -133,6 +139,37 @@ class MeasurementGuiTest {
                     frf.imaginary()[i]));
         }
         return Files.writeString(dir.resolve(name), b.toString());
+    }
+
+    @Test
+    void aFileDroppedOnTheWindowIsFitted() throws Exception {
+        open();
+        JDialog dialog = openDialog();
+        File demo = new File(DEMO);
+        boolean taken = onEdt(() -> {
+            JComponent content = (JComponent) dialog.getContentPane();
+            return content.getTransferHandler().importData(new TransferHandler.TransferSupport(content,
+                    new Transferable() {
+                        @Override
+                        public DataFlavor[] getTransferDataFlavors() {
+                            return new DataFlavor[] {DataFlavor.javaFileListFlavor};
+                        }
+
+                        @Override
+                        public boolean isDataFlavorSupported(DataFlavor flavor) {
+                            return DataFlavor.javaFileListFlavor.equals(flavor);
+                        }
+
+                        @Override
+                        public Object getTransferData(DataFlavor flavor) {
+                            return List.of(demo);
+                        }
+                    }));
+        });
+        assertTrue(taken, "the window takes a dropped file");
+        assertEquals(demo.getPath(), onEdt(() -> ((JTextField) find(dialog, "measurement.file")).getText()));
+        JTable table = (JTable) find(dialog, "measurement.modesTable");
+        Edt.waitFor(() -> Edt.callQuietly(() -> table.getRowCount() == 1), "the fit of the dropped file");
     }
 
     @Test
