@@ -23,6 +23,7 @@ import org.counterpoise.io.commission.SiteCheckReport;
 import org.counterpoise.io.commission.SiteCheckRun;
 import org.counterpoise.io.measurement.FrfUnit;
 import org.counterpoise.io.measurement.SpectrumCsv;
+import org.counterpoise.io.project.FormatMigration;
 import org.counterpoise.io.project.LoadedProject;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
@@ -114,6 +115,11 @@ public final class SiteCheckCommand implements Callable<Integer> {
                             + " (--fitted-frf FILE.csv), or both");
         }
         LoadedProject loaded = ProjectFiles.read(spec, file);
+        if (!FormatMigration.isOneModeOneAbsorber(loaded.project())) {
+            throw new InvalidInputException(PlainText.escape(file.toString()), "several modes or absorbers",
+                    "a project of one absorber on one mode: the site check fits one absorber's response (the"
+                            + " several-absorber design is in 'design', docs/several-modes.md)");
+        }
         DesignDossier dossier = DesignDossier.of(loaded.project().toStudy());
         DesignResult design = dossier.design();
         Realisation realisation = Realiser.realisation(dossier, loaded.project().hardware());

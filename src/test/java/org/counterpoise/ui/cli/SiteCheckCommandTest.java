@@ -103,7 +103,11 @@ class SiteCheckCommandTest {
         Run cell = CliTest.run("site-check", PUMP, "--operating", broken.toString());
         assertEquals(Cli.BAD_INPUT, cell.code());
         assertTrue(cell.err().contains("line 3"), cell.err());
-        for (Run run : new Run[] {none, unit, away, cell}) {
+        // the site check fits one absorber: a split mass budget is refused, not checked as one absorber
+        Run split = CliTest.run("site-check", "presets/split-mass-test-rig.json", "--fitted-frf", FITTED);
+        assertEquals(Cli.BAD_INPUT, split.code());
+        assertTrue(split.err().contains("several modes or absorbers"), split.err());
+        for (Run run : new Run[] {none, unit, away, cell, split}) {
             assertFalse(run.err().contains("Exception") || run.err().contains("\tat "), run.err());
         }
     }

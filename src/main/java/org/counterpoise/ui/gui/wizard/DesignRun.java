@@ -16,6 +16,7 @@ import org.counterpoise.core.design.RobustnessResult;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.error.NotFoundException;
 import org.counterpoise.core.model.Structure;
+import org.counterpoise.io.project.FormatMigration;
 import org.counterpoise.io.project.Project;
 import org.counterpoise.ui.gui.document.DesignDocument;
 import org.counterpoise.ui.gui.task.TaskRunner;
@@ -183,7 +184,8 @@ final class DesignRun {
             shownGeneration = gen;
             steps.result().designedFrom(p);
             steps.result().show(d.design(), d.curves());
-            steps.result().hardware().design(d, p.hardware(), p.displayUnits());
+            steps.result().hardware().design(d, p.hardware(), p.displayUnits(),
+                    FormatMigration.isOneModeOneAbsorber(p));
             steps.sheet().show(d, p);
             if (steps.sheet().component().isShowing()) {
                 steps.sheet().shown();

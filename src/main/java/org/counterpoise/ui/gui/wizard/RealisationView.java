@@ -64,12 +64,14 @@ final class RealisationView {
     private HardwareChoice shownChoice;
     private final JButton siteCheck = new JButton("Check on site\u2026");
     private final SiteCheckDialog siteDialog;
+    private boolean siteCheckable = true;
+    private static final String SITE_CHECK_TIP = "Compare an operating spectrum and the response measured with the"
+            + " absorber fitted with this design: the absorber as built and the trim plates";
 
     RealisationView(TaskRunner tasks) {
         this.tasks = tasks;
         siteCheck.setName("hardware.siteCheck");
-        siteCheck.setToolTipText("Compare an operating spectrum and the response measured with the absorber fitted"
-                + " with this design: the absorber as built and the trim plates");
+        siteCheck.setToolTipText(SITE_CHECK_TIP);
         siteCheck.setEnabled(false);
         headline.setName("hardware.headline");
         headline.setFont(headline.getFont().deriveFont(Font.BOLD, headline.getFont().getSize2D() + 1f));
@@ -109,6 +111,21 @@ final class RealisationView {
      * @param units the project's display unit system (the tables, warnings and procedure are shown in it)
      */
     void design(DesignDossier dossier, HardwareChoice choice, UnitSystem units) {
+        design(dossier, choice, units, true);
+    }
+
+    /**
+     * As {@link #design(DesignDossier, HardwareChoice, UnitSystem)}, saying whether the project is one
+     * absorber on one mode: the site check fits one absorber's response, so it is offered only then.
+     * @param dossier the design's dossier, or null while no design is valid
+     * @param choice the project's hardware choices
+     * @param units the project's display unit system
+     * @param oneAbsorber whether the project is one absorber on one mode
+     */
+    void design(DesignDossier dossier, HardwareChoice choice, UnitSystem units, boolean oneAbsorber) {
+        siteCheckable = oneAbsorber;
+        siteCheck.setToolTipText(oneAbsorber ? SITE_CHECK_TIP : "The site check fits one absorber on one mode;"
+                + " this project has several modes or absorbers");
         if (dossier == null) {
             message("Fix the inputs to see the hardware.");
             return;
@@ -167,8 +184,8 @@ final class RealisationView {
         add("Cautions for this hardware", cautions);
         shown = sized.sections();
         shownChoice = r.choice();
-        siteCheck.setEnabled(true);
-        siteDialog.basis(new SiteCheckDialog.Basis(sized.design().study().name(), sized.design(), r, sized.units()));
+        siteCheck.setEnabled(siteCheckable);
+        siteDialog.basis(!siteCheckable ? null : new SiteCheckDialog.Basis(sized.design().study().name(), sized.design(), r, sized.units()));
         sections.revalidate();
         sections.repaint();
         // a new realisation is read from its top (the part list), whatever was scrolled to before
