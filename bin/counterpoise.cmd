@@ -1,7 +1,8 @@
 @echo off
 rem Counterpoise launcher for Windows: runs counterpoise.jar (beside this file, or else the one
 rem mvn package builds in ..\target) with the JVM options for a short run; see the POSIX script
-rem "counterpoise" beside it and docs/cli.md. The wizard (no arguments) keeps the JVM defaults.
+rem "counterpoise" beside it and docs/cli.md. The wizard (no argument, or one .json project file)
+rem keeps the JVM defaults.
 rem COUNTERPOISE_JAVA_OPTIONS adds options of your own; JAVA_HOME picks the Java to run.
 setlocal
 set "JAR=%~dp0counterpoise.jar"
@@ -14,5 +15,6 @@ set "JAVA=java"
 if defined JAVA_HOME set "JAVA=%JAVA_HOME%\bin\java"
 set "QUICK=-XX:TieredStopAtLevel=1 -XX:+UseSerialGC -Xshare:auto"
 if "%~1"=="" set "QUICK=-Xshare:auto"
+if "%~2"=="" if /i "%~x1"==".json" set "QUICK=-Xshare:auto"
 "%JAVA%" %QUICK% %COUNTERPOISE_JAVA_OPTIONS% -jar "%JAR%" %*
 exit /b %ERRORLEVEL%

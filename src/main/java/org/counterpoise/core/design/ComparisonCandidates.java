@@ -80,7 +80,10 @@ final class ComparisonCandidates {
         return o;
     }
 
-    /** Stops the candidates at their next check; their outcomes are never read. */
+    /**
+     * Drops the candidates: one not yet started is skipped (it asks the listener first), one
+     * running finishes its design (a design takes no listener); their outcomes are never read.
+     */
     void drop() {
         dropped.set(true);
     }

@@ -159,7 +159,8 @@ public record MethodComparison(List<Candidate> candidates, List<LeftOut> leftOut
         listener.checkCancelled("the comparison of methods");
         listener.progress(0.0);
         OptionalDouble fixed = fixedMassRatio(study);
-        ComparisonCandidates early = fixed.isPresent() ? ComparisonCandidates.start(study, methods, fixed.getAsDouble(), listener) : null;
+        ComparisonCandidates early = fixed.isPresent()
+                ? ComparisonCandidates.start(study, methods, fixed.getAsDouble(), listener) : null;
         DesignResult design;
         try {
             design = chosen.get();

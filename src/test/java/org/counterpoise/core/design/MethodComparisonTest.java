@@ -2,6 +2,7 @@ package org.counterpoise.core.design;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertSame;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -12,6 +13,7 @@ import java.util.function.Supplier;
 import org.counterpoise.core.design.MethodComparison.Candidate;
 import org.counterpoise.core.design.MethodComparison.LeftOutReason;
 import org.counterpoise.core.error.CoreException;
+import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.error.Messages;
 import org.counterpoise.core.model.Absorber;
 import org.counterpoise.core.model.Excitation;
@@ -196,6 +198,28 @@ class MethodComparisonTest {
         assertEquals(MethodComparison.RecommendationReason.WHITE_NOISE, c.why());
         assertEquals(DesignMethod.EXACT_VARIANCE, c.recommended());
         assertTrue(c.leftOut().stream().allMatch(l -> l.reason() == LeftOutReason.WHITE_NOISE));
+    }
+
+    @Test
+    void candidatesStartedBesideTheDesignGiveTheComparisonMadeAfterIt() {
+        // Every candidate is a pure function of its study: started before the design is made (the
+        // study fixes the mass ratio) or after it (a target, at the mass the design found), the
+        // comparison is, record for record, the one made from the finished design.
+        DesignStudy fixed = study(DAMPED, BAND, DesignMethod.EXACT_PEAK, AbsorberSizing.ofMassRatio(0.04));
+        DesignResult design = Designer.design(fixed);
+        assertEquals(MethodComparison.of(design, ProgressListener.NONE),
+                MethodComparison.of(fixed, () -> Designer.design(fixed), ProgressListener.NONE));
+        DesignStudy target = study(DAMPED, BAND, DesignMethod.EXACT_PEAK,
+                AbsorberSizing.ofTarget(1.2 * design.responseAfter().value(), 0.25));
+        assertEquals(compare(target),
+                MethodComparison.of(target, () -> Designer.design(target), ProgressListener.NONE));
+        // a design that cannot be made: its own refusal reaches the caller, whatever the candidates do
+        InvalidInputException refused = new InvalidInputException("absorber.stroke_limit", "0.001", "cannot be met");
+        InvalidInputException thrown = assertThrows(InvalidInputException.class,
+                () -> MethodComparison.of(fixed, () -> {
+                    throw refused;
+                }, ProgressListener.NONE));
+        assertSame(refused, thrown);
     }
 
     @Test
