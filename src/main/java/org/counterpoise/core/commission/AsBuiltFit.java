@@ -88,7 +88,12 @@ public final class AsBuiltFit {
         double omega1 = structure.naturalFrequency();
         double omegaA = design.tuningRatio() * omega1;
         double zeta = Math.max(design.dampingRatio(), SMALLEST_START_DAMPING);
-        double[] start = f.scan(omegaA, zeta, omega1, freeStructure);
+        double[] start;
+        try {
+            start = f.scan(omegaA, zeta, omega1, freeStructure);
+        } catch (InvalidInputException e) {
+            throw notFitted();
+        }
         return f.polish(start, omegaA, freeStructure);
     }
 
@@ -131,7 +136,8 @@ public final class AsBuiltFit {
             optimum = new LevenbergMarquardtOptimizer().optimize(new LeastSquaresBuilder()
                     .model(p -> valueAndJacobian(p, start, parameters))
                     .target(target).start(new double[parameters]).maxEvaluations(2000).maxIterations(500).build());
-        } catch (MathIllegalStateException e) {
+        } catch (MathIllegalStateException | InvalidInputException e) {
+            // the search ran off (no convergence, or to a frequency or damping no absorber has): no fit
             throw notFitted();
         }
         double[] p = optimum.getPoint().toArray();
@@ -258,7 +264,8 @@ public final class AsBuiltFit {
     }
 
     private static InvalidInputException notFitted() {
-        return new InvalidInputException("fitted-absorber FRF", "no fit found",
-                "a driving-point response at the absorber's point, measured with the absorber fitted, over its two peaks");
+        return InvalidInputException.unusable("fitted-absorber FRF", "matches no model of the structure with one absorber",
+                "a driving-point response at the absorber's point with the absorber fitted, over both its peaks, with"
+                        + " frequencies in Hz and the FRF kind and unit stated as measured");
     }
 }

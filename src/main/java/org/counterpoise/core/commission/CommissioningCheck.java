@@ -2,8 +2,10 @@ package org.counterpoise.core.commission;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.OptionalDouble;
 import org.apache.commons.math3.complex.Complex;
 import org.counterpoise.core.design.DesignResult;
+import org.counterpoise.core.error.Checks;
 import org.counterpoise.core.identify.MeasuredFrf;
 import org.counterpoise.core.model.Structure;
 import org.counterpoise.core.model.Tuning;
@@ -24,9 +26,12 @@ import org.counterpoise.core.realisation.Realisation;
  * @param measuredPeak its magnitude
  * @param designPeakFrequency the frequency of the largest magnitude the design predicts at the measured lines, rad/s
  * @param designPeak that magnitude
+ * @param response the response that matters over the band: as designed, as built, after the trim
+ * @param absorberMass the absorber mass the check holds (weighed, or the design's), kg
  */
 public record CommissioningCheck(AsBuiltAbsorber built, TrimCorrection trim, List<Row> rows,
-        double measuredPeakFrequency, double measuredPeak, double designPeakFrequency, double designPeak) {
+        double measuredPeakFrequency, double measuredPeak, double designPeakFrequency, double designPeak,
+        BuiltResponse response, double absorberMass) {
 
     /** Copies the rows. */
     public CommissioningCheck {
@@ -49,15 +54,19 @@ public record CommissioningCheck(AsBuiltAbsorber built, TrimCorrection trim, Lis
      * @param realisation its hardware (the trim plan and part tolerances)
      * @param measured the driving-point FRF at the absorber's point with the absorber fitted
      * @param freeStructure whether to fit the structure's natural frequency too
+     * @param weighed the absorber's mass as weighed with its fitted plates, kg; empty: the design's
      * @return the check
      */
     public static CommissioningCheck of(DesignResult design, Realisation realisation, MeasuredFrf measured,
-            boolean freeStructure) {
+            boolean freeStructure, OptionalDouble weighed) {
         Structure structure = design.study().structure();
         Tuning tuning = design.tuning();
-        AsBuiltAbsorber built = AsBuiltFit.fit(structure, tuning, measured, freeStructure);
+        double mass = weighed.orElse(design.absorber().mass());
+        Checks.positive("absorber mass as weighed", mass);
+        Tuning held = new Tuning(mass / structure.effectiveMass(), tuning.tuningRatio(), tuning.dampingRatio());
+        AsBuiltAbsorber built = AsBuiltFit.fit(structure, held, measured, freeStructure);
         TrimCorrection trim = TrimCorrection.of(built, tuning.tuningRatio(), tuning.dampingRatio(),
-                design.absorber().mass(), realisation.trim(), realisation.tolerances());
+                mass, realisation.trim(), realisation.tolerances());
         Structure asMeasured = AsBuiltFit.withFrequency(structure, built.structureFrequency());
         Tuning asBuilt = new Tuning(built.massRatio(), built.tuningRatio(), built.dampingRatio());
         double[] w = measured.omega();
@@ -80,7 +89,8 @@ public record CommissioningCheck(AsBuiltAbsorber built, TrimCorrection trim, Lis
                     AsBuiltFit.predicted(asMeasured, asBuilt, at, measured.kind())[0].abs()));
         }
         return new CommissioningCheck(built, trim, rows, w[measuredAt], measured.value(measuredAt).abs(), w[designAt],
-                predicted[designAt].abs());
+                predicted[designAt].abs(), BuiltResponse.of(design, built, trim, mass, realisation.trim().plateMass()),
+                mass);
     }
 
     /** The measured magnitude at f, linear between the lines on either side. */

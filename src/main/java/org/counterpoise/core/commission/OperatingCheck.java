@@ -20,7 +20,11 @@ import org.counterpoise.core.response.SystemResponse;
  *
  * <p>The line compared is the largest within {@link #WINDOW} of the running frequency (or at least
  * 1.5 line spacings, for coarse spectra); without a stated running frequency, the largest line in
- * the band widened by the same fraction. The limits are common practice, no source.
+ * the band widened by the same fraction. The limits are common practice, no source. The model is
+ * evaluated at the running frequency (stated, or the project's single speed): an analyser shows a
+ * tone between two lines on the nearer one, at that line's frequency but with the tone's amplitude
+ * (with an amplitude-true window), and the response near resonance changes fast with frequency.
+ * Only over a band without a stated speed is the line's frequency taken as the running frequency.
  */
 public final class OperatingCheck {
     /** Half-width of the window searched about the running frequency, fraction of it. */
@@ -58,7 +62,8 @@ public final class OperatingCheck {
                     "a spectrum with lines at and about the running frequency (" + (running.isPresent()
                             ? "the one given" : "the project's band") + ")");
         }
-        double omega = spectrum.omega()[line];
+        // the model at the running frequency: stated, the project's one speed, or else the line's
+        double omega = running.isPresent() ? centre : band.low() == band.high() ? band.low() : spectrum.omega()[line];
         Excitation e = design.study().excitation();
         SystemResponse model = new SystemResponse(design.study().structure(), withAbsorber ? design.tuning() : null,
                 e.kind(), e.amplitude());
@@ -82,7 +87,8 @@ public final class OperatingCheck {
         if (strokeImplied > design.clearance()) {
             warnings.add(CommissioningWarning.STROKE_BEYOND_CLEARANCE);
         }
-        return new OperatingComparison(centre, omega, spectrum.kind(), measured, predicted, ratio, e.amplitude() * ratio,
+        return new OperatingComparison(omega, spectrum.omega()[line], spectrum.kind(), measured, predicted, ratio,
+                e.amplitude() * ratio,
                 strokeDesign, strokeImplied, design.clearance(), withAbsorber, warnings,
                 spectrum.omega()[largest], spectrum.amplitude()[largest]);
     }

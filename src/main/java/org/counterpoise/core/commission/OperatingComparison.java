@@ -6,11 +6,12 @@ import org.counterpoise.core.response.ResponseKind;
 /**
  * An operating measurement against the model's prediction, SI, amplitudes as peaks.
  *
- * @param runningFrequency the running frequency searched about (given, or the line found in the band), rad/s
+ * @param runningFrequency the running frequency the model is evaluated at (stated, the project's single
+ *     speed, or over a band the line found), rad/s
  * @param lineFrequency the frequency of the line compared, rad/s
  * @param kind the quantity compared
  * @param measured the measured amplitude at that line
- * @param predicted the model's amplitude there for the project's disturbance
+ * @param predicted the model's amplitude at the running frequency for the project's disturbance
  * @param ratio measured over predicted: the disturbance the site shows over the project's
  * @param impliedDriveAmplitude the project's disturbance amplitude times the ratio (its SI unit)
  * @param designStroke the design's largest stroke (band or run-up), m

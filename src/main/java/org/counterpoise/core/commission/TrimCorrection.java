@@ -20,13 +20,16 @@ import org.counterpoise.core.realisation.TrimPlan;
  * @param targetFrequency the absorber frequency the structure needs, rad/s
  * @param frequencyOff (omega_built / omega_target - 1), fraction
  * @param frequencyTolerance the part tolerance on the absorber's frequency, fraction
- * @param platesToAdd plates to add (negative: to take off), the nearest whole number
+ * @param advised whether plates are advised at all: not when the fit of the absorber as built is poor
+ *     (its frequency, and so the plates, could be wrong in size and sign)
+ * @param platesToAdd plates to add (negative: to take off), the nearest whole number; 0 when not advised
  * @param frequencyOffAfter what remains of the frequency error after that trim, fraction
  * @param dampingOff (zeta_built / zeta_design - 1), fraction (0 for an undamped design)
  * @param dampingTolerance the part tolerance on the damping, fraction
  * @param warnings what calls for more than trim plates
  */
-public record TrimCorrection(double targetFrequency, double frequencyOff, double frequencyTolerance, int platesToAdd,
+public record TrimCorrection(double targetFrequency, double frequencyOff, double frequencyTolerance, boolean advised,
+        int platesToAdd,
         double frequencyOffAfter, double dampingOff, double dampingTolerance, List<CommissioningWarning> warnings) {
 
     /** Copies the warnings. */
@@ -53,24 +56,27 @@ public record TrimCorrection(double targetFrequency, double frequencyOff, double
         double target = designTuningRatio * built.structureFrequency();
         double off = built.absorberFrequency() / target - 1.0;
         List<CommissioningWarning> warnings = new ArrayList<>();
+        if (built.warnings().contains(CommissioningWarning.POOR_FIT)) {
+            return new TrimCorrection(target, off, tolerances.absorberFrequency(), false, 0, off, 0.0,
+                    tolerances.damping(), warnings);
+        }
         double ratio = built.absorberFrequency() / target;
         double needed = absorberMass * ratio * ratio - absorberMass;
         int plates = (int) Math.round(needed / trim.plateMass());
         int spare = trim.platesTotal() - trim.platesFitted();
-        if (plates > spare || -plates > trim.platesFitted()) {
-            // short of plates only matters when the absorber is out of its tolerance
-            if (Math.abs(off) > tolerances.absorberFrequency()) {
-                warnings.add(CommissioningWarning.BEYOND_TRIM_RANGE);
-            }
-            plates = Math.max(-trim.platesFitted(), Math.min(spare, plates));
-        }
+        boolean shortOfPlates = plates > spare || -plates > trim.platesFitted();
+        plates = Math.max(-trim.platesFitted(), Math.min(spare, plates));
         double after = built.absorberFrequency()
                 * Math.sqrt(absorberMass / (absorberMass + plates * trim.plateMass())) / target - 1.0;
+        // short of plates matters only when even all of them leave the absorber outside its tolerance
+        if (shortOfPlates && Math.abs(after) > tolerances.absorberFrequency()) {
+            warnings.add(CommissioningWarning.BEYOND_TRIM_RANGE);
+        }
         double dampingOff = designDampingRatio > 0 ? built.dampingRatio() / designDampingRatio - 1.0 : 0.0;
         if (designDampingRatio > 0 && Math.abs(dampingOff) > tolerances.damping()) {
             warnings.add(CommissioningWarning.DAMPING_OUT_OF_TOLERANCE);
         }
-        return new TrimCorrection(target, off, tolerances.absorberFrequency(), plates, after, dampingOff,
+        return new TrimCorrection(target, off, tolerances.absorberFrequency(), true, plates, after, dampingOff,
                 tolerances.damping(), warnings);
     }
 }

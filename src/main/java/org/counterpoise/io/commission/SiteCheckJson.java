@@ -93,12 +93,25 @@ public final class SiteCheckJson {
         JsonNumbers.put(trim, FREQUENCY_OFF.key(), t.frequencyOff());
         JsonNumbers.put(trim, FREQUENCY_TOLERANCE.key(), t.frequencyTolerance());
         trim.addProperty(IN_TOLERANCE.key(), t.frequencyInTolerance());
-        trim.addProperty(PLATES_TO_ADD.key(), t.platesToAdd());
+        trim.addProperty(ADVISED.key(), t.advised());
+        if (t.advised()) {
+            trim.addProperty(PLATES_TO_ADD.key(), t.platesToAdd());
+        } else {
+            trim.add(PLATES_TO_ADD.key(), JsonNull.INSTANCE);
+        }
         JsonNumbers.put(trim, PLATE_MASS.key(), plateMass);
         JsonNumbers.put(trim, FREQUENCY_OFF_AFTER.key(), t.frequencyOffAfter());
         JsonNumbers.put(trim, DAMPING_OFF.key(), t.dampingOff());
         JsonNumbers.put(trim, DAMPING_TOLERANCE.key(), t.dampingTolerance());
         o.add(TRIM.key(), trim);
+        JsonNumbers.put(o, ABSORBER_MASS.key(), c.absorberMass());
+        JsonObject peak = new JsonObject();
+        peak.addProperty(RESPONSE.key(), c.response().kind().name().toLowerCase(Locale.ROOT));
+        JsonNumbers.put(peak, DESIGN.key(), c.response().design());
+        JsonNumbers.put(peak, AS_BUILT.key(), c.response().asBuilt());
+        JsonNumbers.put(peak, AFTER_TRIM.key(), c.response().afterTrim());
+        peak.addProperty(TRIM_REQUIRED.key(), c.response().trimRequired());
+        o.add(BAND_PEAK.key(), peak);
         JsonNumbers.put(o, MEASURED_PEAK_FREQUENCY.key(), hz(c.measuredPeakFrequency()));
         JsonNumbers.put(o, MEASURED_PEAK_FRF.key(), c.measuredPeak());
         JsonNumbers.put(o, DESIGN_PEAK_FREQUENCY.key(), hz(c.designPeakFrequency()));

@@ -52,7 +52,13 @@ enum SiteCheckKey {
     MEASURED_PEAK_FREQUENCY("measured_peak_frequency_Hz"),
     MEASURED_PEAK_FRF("measured_peak_SI"),
     DESIGN_PEAK_FREQUENCY("design_peak_frequency_Hz"),
-    DESIGN_PEAK_FRF("design_peak_SI");
+    DESIGN_PEAK_FRF("design_peak_SI"),
+    ADVISED("advised"),
+    BAND_PEAK("band_peak"),
+    RESPONSE("response"),
+    AFTER_TRIM("after_trim_SI"),
+    TRIM_REQUIRED("trim_required"),
+    ABSORBER_MASS("absorber_mass_kg");
 
     private final String key;
 

@@ -3,11 +3,14 @@ package org.counterpoise.io.commission;
 import java.util.ArrayList;
 import java.util.List;
 import org.counterpoise.core.commission.AsBuiltAbsorber;
+import org.counterpoise.core.commission.BuiltResponse;
 import org.counterpoise.core.commission.CommissioningCheck;
 import org.counterpoise.core.commission.CommissioningWarning;
 import org.counterpoise.core.commission.OperatingComparison;
 import org.counterpoise.core.commission.TrimCorrection;
 import org.counterpoise.core.design.DesignResult;
+import org.counterpoise.core.model.FrequencyBand;
+import org.counterpoise.core.realisation.TrimPlan;
 import org.counterpoise.core.units.Dimension;
 import org.counterpoise.core.units.Unit;
 import org.counterpoise.io.PlainText;
@@ -18,14 +21,21 @@ import org.counterpoise.io.text.UnitSystem;
 /** A site check as plain text for the terminal, with the usual cautions. */
 public final class SiteCheckReport {
     /** What every site check says after its numbers. */
-    static final List<String> CAUTIONS = List.of(
-            "The comparison holds at the absorber's point, on the model's one mode; a spectrum or response measured"
-                    + " elsewhere, or a second mode near the band, is not compared by it.",
-            "Lock the absorber or take it off before measuring the structure alone; tune, fit and measure with the"
-                    + " machine stopped and isolated, the absorber mass secured against falling.",
-            "A disturbance larger than the project's scales the absorber's stroke and forces with it: redesign"
-                    + " with the site's disturbance before running the machine.",
-            "These are site checks for design; follow local codes and licensed engineering practice.");
+    static final String SCOPE = "The comparison holds at the absorber's point, on the model's one mode; a spectrum or"
+            + " response measured elsewhere, or a second mode near the band, is not compared by it.";
+    /** Said with an operating spectrum. */
+    static final String RUNNING = "Measure the operating spectrum with the machine at its normal duty, from outside"
+            + " guards and clear of moving parts.";
+    /** Said when the site shows more disturbance than the project. */
+    static final String LARGER = "A disturbance larger than the project's scales the absorber's stroke and forces with"
+            + " it: design again with the site's disturbance before running the machine with the absorber.";
+    /** Said with a response measured with the absorber fitted. */
+    static final String STOPPED = "Tune, fit and tap-test the absorber with the machine stopped and isolated, the"
+            + " absorber mass secured against falling; the uncertainties shown are the data's scatter about the model"
+            + " (one standard deviation), not errors of the model.";
+    /** Said always, last. */
+    static final String PRACTICE = "These are site checks for design; follow local codes and licensed engineering"
+            + " practice.";
 
     private SiteCheckReport() {
     }
@@ -37,12 +47,29 @@ public final class SiteCheckReport {
     public static String render(SiteCheck check) {
         StringBuilder b = new StringBuilder("Site check of ").append(PlainText.escape(check.project())).append('\n');
         check.operating().ifPresent(o -> operating(b, o, check.design(), check.units()));
-        check.fitted().ifPresent(f -> fitted(b, f, check.design(), check.plan().plateMass(), check.units()));
+        check.fitted().ifPresent(f -> fitted(b, f, check.design(), check.plan(), check.units()));
         b.append("Cautions\n");
-        for (String c : CAUTIONS) {
+        for (String c : cautions(check)) {
             b.append("  - ").append(c).append('\n');
         }
         return b.toString();
+    }
+
+    /**
+     * @param check the site check
+     * @return the cautions that go with what was measured
+     */
+    static List<String> cautions(SiteCheck check) {
+        List<String> out = new ArrayList<>(List.of(SCOPE));
+        check.operating().ifPresent(o -> {
+            out.add(RUNNING);
+            if (o.comparison().ratio() > 1) {
+                out.add(LARGER);
+            }
+        });
+        check.fitted().ifPresent(f -> out.add(STOPPED));
+        out.add(PRACTICE);
+        return out;
     }
 
     private static void operating(StringBuilder b, SiteCheck.Operating o, DesignResult design, UnitSystem units) {
@@ -50,8 +77,9 @@ public final class SiteCheckReport {
         b.append("Operating response (").append(PlainText.escape(o.file())).append(", ").append(c.kind().label())
                 .append(", ").append(o.convention().label()).append(c.withAbsorber() ? ", absorber fitted" : ", no absorber")
                 .append(")\n");
-        line(b, o.runningGiven() ? "running frequency" : "running frequency (from the band)",
-                QuantityFormat.format(c.runningFrequency(), Unit.HERTZ));
+        FrequencyBand band = design.study().excitation().band();
+        line(b, "running frequency", QuantityFormat.format(c.runningFrequency(), Unit.HERTZ) + (o.runningGiven()
+                ? " (as given)" : band.low() == band.high() ? " (the project's speed)" : " (the line found in the band)"));
         line(b, "line compared", QuantityFormat.format(c.lineFrequency(), Unit.HERTZ));
         line(b, "measured", amplitude(c.measured(), o));
         line(b, c.withAbsorber() ? "predicted (with the absorber)" : "predicted (bare structure)",
@@ -60,7 +88,7 @@ public final class SiteCheckReport {
         Dimension drive = design.study().excitation().kind().amplitudeDimension();
         line(b, "disturbance the site shows", DisplayUnits.format(c.impliedDriveAmplitude(), drive, units)
                 + " (project: " + DisplayUnits.format(c.impliedDriveAmplitude() / c.ratio(), drive, units) + ")");
-        line(b, "absorber stroke", DisplayUnits.format(c.impliedStroke(), Dimension.LENGTH, units) + " (design "
+        line(b, "stroke, band or run-up", DisplayUnits.format(c.impliedStroke(), Dimension.LENGTH, units) + " (design "
                 + DisplayUnits.format(c.designStroke(), Dimension.LENGTH, units) + ", clearance "
                 + DisplayUnits.format(c.clearance(), Dimension.LENGTH, units) + ")");
         if (c.warnings().contains(CommissioningWarning.OTHER_LINE_DOMINATES)) {
@@ -70,13 +98,18 @@ public final class SiteCheckReport {
         c.warnings().forEach(w -> b.append("Warning: ").append(words(w)).append('\n'));
     }
 
-    private static void fitted(StringBuilder b, SiteCheck.Fitted f, DesignResult design, double plateMass,
+    private static void fitted(StringBuilder b, SiteCheck.Fitted f, DesignResult design, TrimPlan plan,
             UnitSystem units) {
+        double plateMass = plan.plateMass();
         CommissioningCheck c = f.check();
         AsBuiltAbsorber a = c.built();
         TrimCorrection t = c.trim();
         b.append("Absorber as built (").append(PlainText.escape(f.file())).append(", ").append(f.unit().kind().id())
                 .append(" in ").append(f.unit().symbol()).append(", ").append(a.lines()).append(" lines)\n");
+        if (c.absorberMass() != design.absorber().mass()) {
+            line(b, "absorber mass (as weighed)", DisplayUnits.format(c.absorberMass(), Dimension.MASS, units)
+                    + " (design " + DisplayUnits.format(design.absorber().mass(), Dimension.MASS, units) + ")");
+        }
         line(b, "absorber frequency", QuantityFormat.format(a.absorberFrequency(), Unit.HERTZ) + " +/- "
                 + QuantityFormat.format(a.absorberFrequencySd(), Unit.HERTZ) + " (needed "
                 + QuantityFormat.format(t.targetFrequency(), Unit.HERTZ) + ": " + signedPercent(t.frequencyOff()) + ")");
@@ -90,11 +123,28 @@ public final class SiteCheckReport {
         line(b, "part tolerances", "frequency +/- " + percent(t.frequencyTolerance()) + ", damping +/- "
                 + percent(t.dampingTolerance()));
         String mass = DisplayUnits.format(plateMass, Dimension.MASS, units);
-        line(b, "frequency as built", t.frequencyInTolerance() ? "inside its tolerance" : "OUTSIDE its tolerance");
-        line(b, "trim", t.platesToAdd() == 0 ? "none: no whole plate (" + mass + " each) brings it nearer"
-                : (t.platesToAdd() > 0 ? "add " : "take off ") + Math.abs(t.platesToAdd()) + " plate"
-                        + (Math.abs(t.platesToAdd()) == 1 ? "" : "s") + " of " + mass + " (frequency then "
-                        + signedPercent(t.frequencyOffAfter()) + (t.frequencyInTolerance() ? "; worth doing inside the tolerance too" : "") + ")");
+        BuiltResponse peak = c.response();
+        Dimension shown = peak.kind().dimension();
+        line(b, "peak over the band", peak.kind().label() + ": design "
+                + DisplayUnits.format(peak.design(), shown, units) + ", as built "
+                + DisplayUnits.format(peak.asBuilt(), shown, units) + " (" + signedPercent(peak.asBuilt()
+                / peak.design() - 1) + ")" + (t.advised() && t.platesToAdd() != 0 ? ", after the trim "
+                + DisplayUnits.format(peak.afterTrim(), shown, units) : ""));
+        if (!t.advised()) {
+            line(b, "trim", "none advised: the fit is poor, so the absorber's frequency is not known (see below)");
+        } else {
+            line(b, "frequency as built", t.frequencyInTolerance() ? "inside its part tolerance"
+                    : "OUTSIDE its part tolerance");
+            String why = peak.trimRequired() ? "; REQUIRED: the response as built is more than "
+                    + percent(DesignResult.TOLERANCE_ALLOWANCE) + " above the design's"
+                    : "; optional: the response is within " + percent(DesignResult.TOLERANCE_ALLOWANCE)
+                    + " of the design's";
+            int n = Math.abs(t.platesToAdd());
+            line(b, "trim", t.platesToAdd() == 0 ? "none: no whole plate (" + mass + " each) brings it nearer" + why
+                    : (t.platesToAdd() > 0 ? "add " : "take off ") + n + " plate" + (n == 1 ? "" : "s") + " of " + mass
+                            + (t.platesToAdd() < 0 && n == plan.platesFitted() ? " (all of them)" : "")
+                            + " (frequency then " + signedPercent(t.frequencyOffAfter()) + why + ")");
+        }
         List<CommissioningWarning> all = new ArrayList<>(a.warnings());
         all.addAll(t.warnings());
         all.forEach(w -> b.append("Warning: ").append(words(w)).append('\n'));
@@ -152,6 +202,7 @@ public final class SiteCheckReport {
     }
 
     private static String signedPercent(double ratio) {
-        return (ratio > 0 ? "+" : "") + percent(ratio);
+        // below half a part in a million it is round-off of an exact fit: shown as nothing at all
+        return Math.abs(ratio) < 5e-7 ? "0 %" : (ratio > 0 ? "+" : "") + percent(ratio);
     }
 }

@@ -42,8 +42,10 @@ public final class SiteCheckRun {
      * @param unit the kind and unit of its values
      * @param lines which of its lines to use (the identity for all)
      * @param freeStructure whether to fit the structure's natural frequency too
+     * @param weighed the absorber mass as weighed with its fitted plates, kg, or empty for the design's
      */
-    public record FittedInput(Path file, FrfUnit unit, UnaryOperator<MeasuredFrf> lines, boolean freeStructure) {
+    public record FittedInput(Path file, FrfUnit unit, UnaryOperator<MeasuredFrf> lines, boolean freeStructure,
+            OptionalDouble weighed) {
     }
 
     /**
@@ -81,7 +83,7 @@ public final class SiteCheckRun {
         MeasuredFrf lines = in.lines().apply(FrfCsv.read(in.file(), in.unit()));
         try {
             return new SiteCheck.Fitted(in.file().toString(), in.unit(), lines,
-                    CommissioningCheck.of(design, realisation, lines, in.freeStructure()));
+                    CommissioningCheck.of(design, realisation, lines, in.freeStructure(), in.weighed()));
         } catch (InvalidInputException e) {
             throw e.renamed(in.file() + " (" + e.field() + ")");
         }

@@ -90,6 +90,10 @@ public final class SiteCheckCommand implements Callable<Integer> {
             description = "fit the structure's natural frequency too (when it was not measured with the absorber locked)")
     private boolean freeStructure;
 
+    @Option(names = "--absorber-mass", paramLabel = "KG",
+            description = "the absorber's mass as weighed with its fitted plates, kg (default: the design's)")
+    private Double absorberMass;
+
     @Option(names = "--json", description = "print the result as one JSON object with SI units in the key names")
     private boolean json;
 
@@ -99,6 +103,14 @@ public final class SiteCheckCommand implements Callable<Integer> {
 
     @Option(names = "--force", description = "replace a chart file that already exists")
     private boolean force;
+
+    private OptionalDouble weighed() {
+        if (absorberMass == null) {
+            return OptionalDouble.empty();
+        }
+        Checks.positive("--absorber-mass", absorberMass);
+        return OptionalDouble.of(absorberMass);
+    }
 
     @Override
     public Integer call() {
@@ -138,7 +150,7 @@ public final class SiteCheckCommand implements Callable<Integer> {
             FrfKind k = FrfOptions.kind("--kind", kind);
             FrfUnit unit = frfUnits == null ? FrfUnit.si(k) : FrfUnit.parse(frfUnits, k, "--frf-units");
             fit = Optional.of(new SiteCheckRun.FittedInput(fittedFrf, unit,
-                    all -> band == null ? all : FrfOptions.band("--band", band, all), freeStructure));
+                    all -> band == null ? all : FrfOptions.band("--band", band, all), freeStructure, weighed()));
         }
         SiteCheck check = SiteCheckRun.run(loaded.project().name(), design, realisation,
                 loaded.project().displayUnits(), op, fit);

@@ -25,6 +25,17 @@ class TrimCorrectionTest {
     }
 
     @Test
+    void aPoorFitGetsNoTrimAdvice() {
+        // a fit that misses the data may have the frequency wrong in size and sign: no plates, no damper advice
+        AsBuiltAbsorber poor = new AsBuiltAbsorber(1.05 * 95, 0.01, 0.3, 0.001, 100.0, OptionalDouble.empty(), 0.05,
+                0.2, 200, List.of(CommissioningWarning.POOR_FIT));
+        TrimCorrection t = TrimCorrection.of(poor, 0.95, 0.1, 100, PLAN, TOLERANCES);
+        assertTrue(!t.advised());
+        assertEquals(0, t.platesToAdd());
+        assertEquals(List.of(), t.warnings());
+    }
+
+    @Test
     void twoPercentHighTakesFourPlatesOn() {
         // target 0.95 * 100 = 95 rad/s; built at 96.9 = 2 % high: 100 (1.02)^2 - 100 = 4.04 kg, 4 plates
         TrimCorrection t = TrimCorrection.of(built(96.9, 0.1), 0.95, 0.1, 100, PLAN, TOLERANCES);
@@ -39,13 +50,15 @@ class TrimCorrectionTest {
 
     @Test
     void threePercentLowTakesPlatesOffAndSixPercentHighRunsOutOfPlates() {
-        // 3 % low: 100 (0.97)^2 - 100 = -5.91 kg: 6 plates off, but only 5 are fitted
+        // 3 % low: 100 (0.97)^2 - 100 = -5.91 kg: 6 plates off, but only 5 are fitted; all 5 off leave it
+        // 0.97 sqrt(100 / 95) - 1 = -0.48 % off, inside the 1 % tolerance: no warning
         TrimCorrection low = TrimCorrection.of(built(0.97 * 95, 0.1), 0.95, 0.1, 100, PLAN, TOLERANCES);
         assertEquals(-5, low.platesToAdd());
-        assertEquals(List.of(CommissioningWarning.BEYOND_TRIM_RANGE), low.warnings());
+        assertEquals(0.97 * Math.sqrt(100.0 / 95.0) - 1, low.frequencyOffAfter(), 1e-12);
+        assertEquals(List.of(), low.warnings());
         // 2 % low: -3.96 kg: 4 plates off, inside the range
         assertEquals(-4, TrimCorrection.of(built(0.98 * 95, 0.1), 0.95, 0.1, 100, PLAN, TOLERANCES).platesToAdd());
-        // 6 % high: 12.36 kg, 12 plates, 5 spare
+        // 6 % high: 12.36 kg, 12 plates, 5 spare; with all 5 it is still 1.06 sqrt(100 / 105) - 1 = +3.4 % off
         TrimCorrection high = TrimCorrection.of(built(1.06 * 95, 0.1), 0.95, 0.1, 100, PLAN, TOLERANCES);
         assertEquals(5, high.platesToAdd());
         assertTrue(high.warnings().contains(CommissioningWarning.BEYOND_TRIM_RANGE));

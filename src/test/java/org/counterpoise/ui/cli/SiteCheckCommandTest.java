@@ -9,6 +9,14 @@ import com.google.gson.JsonParser;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.Locale;
+import org.apache.commons.math3.complex.Complex;
+import org.counterpoise.core.design.DesignResult;
+import org.counterpoise.core.design.Designer;
+import org.counterpoise.core.model.Absorber;
+import org.counterpoise.core.model.Structure;
+import org.counterpoise.io.project.ProjectReader;
+import org.counterpoise.testing.TwoMassReference;
 import org.counterpoise.ui.cli.CliTest.Run;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -43,6 +51,48 @@ class SiteCheckCommandTest {
         assertTrue(trim.get("frequency_in_tolerance").getAsBoolean());
         assertTrue(trim.get("plates_to_add").getAsInt() > 0);
         assertTrue(f.getAsJsonArray("rows").size() >= 5);
+        // inside the part tolerance, yet the band peak as built far above the design's: the trim is required
+        JsonObject peak = f.getAsJsonObject("band_peak");
+        assertTrue(peak.get("trim_required").getAsBoolean());
+        assertTrue(peak.get("as_built_SI").getAsDouble() > 1.1 * peak.get("design_SI").getAsDouble());
+        assertTrue(peak.get("after_trim_SI").getAsDouble() < peak.get("as_built_SI").getAsDouble());
+        assertEquals(150.0, f.get("absorber_mass_kg").getAsDouble(), 1e-9);
+    }
+
+    @Test
+    void aPoorFitGivesNoPlates(@TempDir Path dir) throws IOException {
+        // the pump skid's structure 6 % stiffer than the project says, its absorber as designed: held at the
+        // project's structure, no one-absorber model matches well, so no plates are advised (their size and
+        // sign would be wrong); the response comes from the equations of motion solved directly
+        DesignResult d = Designer.design(ProjectReader.readStudy(Path.of(PUMP)));
+        Structure s = d.study().structure();
+        Absorber a = d.absorber();
+        StringBuilder csv = new StringBuilder("frequency_Hz,real,imag\n");
+        for (int i = 0; i <= 200; i++) {
+            double hz = 17 + 0.08 * i;
+            Complex h = TwoMassReference.accelerance(s.effectiveMass(), 1.1236 * s.effectiveStiffness(),
+                    s.effectiveDampingCoefficient(), a.mass(), a.stiffness(), a.damping(), 2 * Math.PI * hz);
+            csv.append(String.format(Locale.ROOT, "%.4f,%.6e,%.6e%n", hz, h.getReal(), h.getImaginary()));
+        }
+        Path file = Files.writeString(dir.resolve("stiff.csv"), csv.toString());
+        Run r = CliTest.run("site-check", PUMP, "--fitted-frf", file.toString(), "--json");
+        assertEquals(0, r.code(), r.err());
+        JsonObject f = JsonParser.parseString(r.out()).getAsJsonObject().getAsJsonObject("fitted_absorber");
+        assertTrue(f.getAsJsonArray("warnings").toString().contains("POOR_FIT"), f.toString());
+        assertFalse(f.getAsJsonObject("trim").get("advised").getAsBoolean());
+        assertTrue(f.getAsJsonObject("trim").get("plates_to_add").isJsonNull());
+        Run text = CliTest.run("site-check", PUMP, "--fitted-frf", file.toString());
+        assertTrue(text.out().contains("none advised: the fit is poor"), text.out());
+        // with the structure's frequency freed the fit is good again and finds the absorber as designed
+        Run freed = CliTest.run("site-check", PUMP, "--fitted-frf", file.toString(), "--free-structure", "--json");
+        JsonObject g = JsonParser.parseString(freed.out()).getAsJsonObject().getAsJsonObject("fitted_absorber");
+        // the file holds 7 significant figures: 1e-3 Hz (4e-5 relative) is what is asked
+        assertEquals(1.06 * s.naturalFrequency() / (2 * Math.PI), g.get("structure_frequency_Hz").getAsDouble(), 1e-3);
+        assertTrue(g.getAsJsonObject("trim").get("advised").getAsBoolean());
+        // a unit that makes the values 9.8 times too large matches no model at all: a plain refusal
+        Run units = CliTest.run("site-check", PUMP, "--fitted-frf", FITTED, "--frf-units", "g/N");
+        assertEquals(Cli.BAD_INPUT, units.code());
+        assertTrue(units.err().contains("matches no model"), units.err());
     }
 
     @Test

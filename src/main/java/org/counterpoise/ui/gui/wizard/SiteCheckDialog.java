@@ -95,6 +95,7 @@ final class SiteCheckDialog {
             "siteCheck.frfUnit");
     private final JCheckBox freeStructure = named(new JCheckBox("Fit the structure's frequency too"),
             "siteCheck.freeStructure");
+    private final JTextField weighed = named(new JTextField(8), "siteCheck.weighed");
     private final JButton check = named(new JButton("Check"), "siteCheck.check");
     private final JLabel status = named(new JLabel(" "), "siteCheck.status");
     private final ChartHost chart = new ChartHost("siteCheck.chart");
@@ -164,7 +165,7 @@ final class SiteCheckDialog {
                 inputsChanged("Inputs changed: press Check.");
             }
         };
-        for (JTextField f : List.of(spectrumFile, spectrumUnit, running, frfFile, frfUnit)) {
+        for (JTextField f : List.of(spectrumFile, spectrumUnit, running, frfFile, frfUnit, weighed)) {
             f.getDocument().addDocumentListener(typed);
         }
         for (JCheckBox b : List.of(withAbsorber, freeStructure)) {
@@ -190,6 +191,8 @@ final class SiteCheckDialog {
         kindRow.add(kind);
         kindRow.add(frfUnit);
         inputs.add(kindRow);
+        inputs.add(new JLabel("Absorber mass as weighed with its plates, kg (empty: the design's)"));
+        inputs.add(weighed);
         inputs.add(freeStructure);
         JPanel checkRow = new JPanel(new FlowLayout(FlowLayout.LEFT, 4, 0));
         checkRow.add(check);
@@ -255,7 +258,7 @@ final class SiteCheckDialog {
 
     /** What a check needs, read on the event thread; parsed and checked on the worker. */
     record Inputs(String spectrumFile, String spectrumUnit, AmplitudeConvention convention, String running,
-            boolean withAbsorber, String frfFile, FrfKind kind, String frfUnit, boolean freeStructure) {
+            boolean withAbsorber, String frfFile, FrfKind kind, String frfUnit, boolean freeStructure, String weighed) {
     }
 
     private void startCheck() {
@@ -267,7 +270,7 @@ final class SiteCheckDialog {
         Inputs in = new Inputs(spectrumFile.getText().strip(), spectrumUnit.getText().strip(),
                 (AmplitudeConvention) convention.getSelectedItem(), running.getText().strip(), withAbsorber.isSelected(),
                 frfFile.getText().strip(), FrfKind.values()[kind.getSelectedIndex()], frfUnit.getText().strip(),
-                freeStructure.isSelected());
+                freeStructure.isSelected(), weighed.getText().strip());
         status.setText("Checking\u2026");
         check.setEnabled(false);
         tasks.current(null, progress -> checked(in, against), result -> {
@@ -290,8 +293,8 @@ final class SiteCheckDialog {
     static SiteCheck checked(Inputs in, Basis basis) {
         Optional<SiteCheckRun.OperatingInput> op = Optional.empty();
         if (!in.spectrumFile().isEmpty()) {
-            OptionalDouble at = in.running().isEmpty() ? OptionalDouble.empty()
-                    : OptionalDouble.of(Unit.HERTZ.toSi(hertz(in.running())));
+            OptionalDouble at = in.running().isEmpty() ? OptionalDouble.empty() : OptionalDouble.of(Unit.HERTZ.toSi(
+                    positive(in.running(), "running frequency", "a frequency in Hz above 0, or empty")));
             op = Optional.of(new SiteCheckRun.OperatingInput(Path.of(in.spectrumFile()),
                     SpectrumCsv.unit(in.spectrumUnit(), "unit of the amplitudes"), in.convention(), at,
                     in.withAbsorber()));
@@ -300,12 +303,13 @@ final class SiteCheckDialog {
         if (!in.frfFile().isEmpty()) {
             fitted = Optional.of(new SiteCheckRun.FittedInput(Path.of(in.frfFile()),
                     FrfUnit.parse(in.frfUnit(), in.kind(), "unit of the values"), UnaryOperator.identity(),
-                    in.freeStructure()));
+                    in.freeStructure(), in.weighed().isEmpty() ? OptionalDouble.empty()
+                            : OptionalDouble.of(positive(in.weighed(), "absorber mass as weighed", "a mass in kg above 0, or empty"))));
         }
         return SiteCheckRun.run(basis.project(), basis.design(), basis.realisation(), basis.units(), op, fitted);
     }
 
-    private static double hertz(String text) {
+    private static double positive(String text, String field, String allowed) {
         try {
             double v = Double.parseDouble(text.replace(',', '.'));
             if (v > 0 && Double.isFinite(v)) {
@@ -314,7 +318,7 @@ final class SiteCheckDialog {
         } catch (NumberFormatException e) {
             // falls through to the plain message
         }
-        throw new InvalidInputException("running frequency", text, "a frequency in Hz above 0, or empty");
+        throw new InvalidInputException(field, text, allowed);
     }
 
     private void show(SiteCheck result) {
