@@ -76,7 +76,8 @@ public final class FrfCsv {
             }
         }
         if (n < MeasuredFrf.MINIMUM_POINTS) {
-            throw InvalidInputException.unusable(t.file(), "holds " + n + " data lines",
+            throw InvalidInputException.unusable(t.file(), "holds " + n + " data line" + (n == 1 ? "" : "s")
+                    + (first == 1 ? " besides its 0 Hz line (left out: no motion at zero frequency)" : ""),
                     "at least " + MeasuredFrf.MINIMUM_POINTS + " frequency lines");
         }
         return new MeasuredFrf(omega, real, imaginary, coherence, unit.kind());

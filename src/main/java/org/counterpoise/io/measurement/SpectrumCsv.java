@@ -81,7 +81,8 @@ public final class SpectrumCsv {
             peak[i] = unit.toSi(row[amplitude]) * toPeak;
         }
         if (n < OperatingSpectrum.MINIMUM_LINES) {
-            throw InvalidInputException.unusable(t.file(), "holds " + n + " data lines",
+            throw InvalidInputException.unusable(t.file(), "holds " + n + " data line" + (n == 1 ? "" : "s")
+                    + (first == 1 ? " besides its 0 Hz line (left out: no motion at zero frequency)" : ""),
                     "at least " + OperatingSpectrum.MINIMUM_LINES + " frequency lines");
         }
         return new OperatingSpectrum(omega, peak, kind);
