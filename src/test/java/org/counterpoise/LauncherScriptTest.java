@@ -19,7 +19,7 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
 /**
- * bin/counterpoise (docs/cli.md, "The launcher") as a shell runs it: it finds the jar beside itself,
+ * src/main/scripts/counterpoise (copied beside the jar as target/counterpoise; docs/cli.md, "The launcher") as a shell runs it: it finds the jar beside itself,
  * passes the arguments and the exit code through, and gives the JVM its options for a short run
  * plus the user's own. The jar here is a stand-in whose manifest starts {@link Main} on the test
  * class path (the real jar is built after the tests).
@@ -60,7 +60,7 @@ class LauncherScriptTest {
     @Test
     void passesArgumentsExitCodeAndTheShortRunOptions() throws Exception {
         assumeTrue(Files.isExecutable(Path.of("/bin/sh")), "no POSIX shell on this machine");
-        Files.copy(Path.of("bin", "counterpoise"), folder.resolve("counterpoise"));
+        Files.copy(Path.of("src", "main", "scripts", "counterpoise"), folder.resolve("counterpoise"));
         standInJar();
 
         Result version = run(Map.of("COUNTERPOISE_JAVA_OPTIONS", "-XX:+PrintCommandLineFlags"), "--version");
