@@ -131,9 +131,10 @@ public final class SeveralAbsorbersContent {
                     new Field(ReportKey.ITEM_PEAKS, "peak before, after", new Pair(
                             DesignContent.quantity(p.before(), Dimension.LENGTH),
                             DesignContent.quantity(p.after(), Dimension.LENGTH), PairKind.BEFORE_AFTER)));
-            rows.add(row(ReportKey.SEVERAL_MODE, "near mode " + name, new Fields("", fields),
-                    "each mode's neighbourhood: between the geometric means of its natural frequency and its"
-                            + " neighbours' (spillover)"));
+            rows.add(row(ReportKey.SEVERAL_MODE, "near mode " + name + ", any speed", new Fields("", fields),
+                    "the largest response at any frequency of each mode's neighbourhood (between the geometric means"
+                            + " of its natural frequency and its neighbours'), in the band or not: a run-up passes"
+                            + " through it (spillover)"));
         }
         d.single().ifPresent(s -> {
             rows.add(row(ReportKey.SEVERAL_SINGLE_PEAK, "one absorber of the same total mass: peak",
