@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
 import org.apache.commons.math3.analysis.solvers.LaguerreSolver;
+import org.apache.commons.math3.exception.TooManyEvaluationsException;
 import org.apache.commons.math3.complex.Complex;
 import org.apache.commons.math3.linear.Array2DRowRealMatrix;
 import org.apache.commons.math3.linear.ArrayRealVector;
@@ -31,6 +32,9 @@ public final class RationalFraction {
 
     private RationalFraction() {
     }
+
+    /** Laguerre steps allowed for all the roots together (a few dozen per root suffice when it converges). */
+    static final int ROOT_STEPS = 100_000;
 
     /**
      * @param measured the measurement, any kind (converted to receptance)
@@ -90,7 +94,13 @@ public final class RationalFraction {
             den[j] = c.getEntry(numerator + 1 + j);
         }
         den[denominator] = 1.0;
-        Complex[] roots = new LaguerreSolver(1e-14).solveAllComplex(den, 0.0);
+        Complex[] roots;
+        try {
+            // bounded: the two-argument form allows unlimited steps and may never return
+            roots = new LaguerreSolver(1e-14).solveAllComplex(den, 0.0, ROOT_STEPS);
+        } catch (TooManyEvaluationsException e) {
+            roots = new Complex[0]; // no modes found: refused below in plain words
+        }
         List<IdentifiedMode> found = new ArrayList<>();
         for (Complex root : roots) {
             if (root.getImaginary() > 0 && root.getReal() < 0) {
