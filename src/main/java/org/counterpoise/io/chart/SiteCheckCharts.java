@@ -74,7 +74,7 @@ public final class SiteCheckCharts {
         d.setLineStyle(new BasicStroke(1.6f));
         XYSeries b = c.addSeries("as built (fitted)", fm, asBuilt);
         b.setMarker(SeriesMarkers.NONE);
-        b.setLineColor(ChartTheme.LIGHT.before());
+        b.setLineColor(ChartTheme.LIGHT.alternative());
         b.setLineStyle(new BasicStroke(1.6f));
         c.getStyler().setMarkerSize(4);
         double low = Double.POSITIVE_INFINITY;

@@ -111,21 +111,23 @@ public final class SiteCheckReport {
                     + " (design " + DisplayUnits.format(design.absorber().mass(), Dimension.MASS, units) + ")");
         }
         line(b, "absorber frequency", QuantityFormat.format(a.absorberFrequency(), Unit.HERTZ) + " +/- "
-                + QuantityFormat.format(a.absorberFrequencySd(), Unit.HERTZ) + " (needed "
+                + QuantityFormat.number(Unit.HERTZ.fromSi(a.absorberFrequencySd()), 2) + " Hz (needed "
                 + QuantityFormat.format(t.targetFrequency(), Unit.HERTZ) + ": " + signedPercent(t.frequencyOff()) + ")");
-        line(b, "damping ratio", percent(a.dampingRatio()) + " +/- " + percent(a.dampingRatioSd()) + " (design "
+        line(b, "damping ratio", percent(a.dampingRatio()) + " +/- " + QuantityFormat.number(100 * a.dampingRatioSd(), 2)
+                + " % (design "
                 + percent(design.tuning().dampingRatio())
-                + (design.tuning().dampingRatio() > 0 ? ": " + signedPercent(t.dampingOff()) : "") + ")");
+                + (design.tuning().dampingRatio() > 0 ? "; relative change " + signedPercent(t.dampingOff()) : "") + ")");
         line(b, a.structureFrequencySd().isPresent() ? "structure frequency (fitted)" : "structure frequency (design)",
                 QuantityFormat.format(a.structureFrequency(), Unit.HERTZ) + (a.structureFrequencySd().isPresent()
-                        ? " +/- " + QuantityFormat.format(a.structureFrequencySd().getAsDouble(), Unit.HERTZ) : ""));
+                        ? " +/- " + QuantityFormat.number(Unit.HERTZ.fromSi(a.structureFrequencySd().getAsDouble()), 2)
+                        + " Hz" : ""));
         line(b, "normalised residual", QuantityFormat.number(a.normalisedResidual(), 3));
         line(b, "part tolerances", "frequency +/- " + percent(t.frequencyTolerance()) + ", damping +/- "
                 + percent(t.dampingTolerance()));
         String mass = DisplayUnits.format(plateMass, Dimension.MASS, units);
         BuiltResponse peak = c.response();
         Dimension shown = peak.kind().dimension();
-        line(b, "peak over the band", peak.kind().label() + ": design "
+        line(b, "peak over the band (amplitude)", peak.kind().label() + ": design "
                 + DisplayUnits.format(peak.design(), shown, units) + ", as built "
                 + DisplayUnits.format(peak.asBuilt(), shown, units) + " (" + signedPercent(peak.asBuilt()
                 / peak.design() - 1) + ")" + (t.advised() && t.platesToAdd() != 0 ? ", after the trim "
@@ -197,8 +199,9 @@ public final class SiteCheckReport {
         b.append("  ").append(String.format("%-36s", label)).append(value).append('\n');
     }
 
+    /** Three significant figures: a site reading is no better (the design's own numbers keep four). */
     private static String percent(double ratio) {
-        return QuantityFormat.format(ratio, Unit.PERCENT);
+        return QuantityFormat.number(100 * ratio, 3) + " %";
     }
 
     private static String signedPercent(double ratio) {

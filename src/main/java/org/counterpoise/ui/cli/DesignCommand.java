@@ -66,8 +66,12 @@ public final class DesignCommand implements Callable<Integer> {
                 .map(layout -> SeveralAbsorbersDesigner.design(result, layout));
         ReportContent content = several.map(d -> SeveralAbsorbersContent.with(withHardware, d)).orElse(withHardware)
                 .shownIn(DisplayConvention.of(convention, loaded.project()));
+        // the report's other sections are for one absorber of the total mass: said first, not only in the cautions
+        String first = several.isPresent() && !json ? "Note: this project has several modes or absorbers. The"
+                + " absorbers to build are in \"Several absorbers and modes\"; the other sections (absorber, parts,"
+                + " checks, procedure) are for one absorber of the total mass on the target mode alone.\n\n" : "";
         spec.commandLine().getOut().print(PlainText.forTerminal(json ? ResultJson.toJson(content)
-                : DesignReport.render(content)));
+                : first + DesignReport.render(content)));
         spec.commandLine().getOut().flush();
         return 0;
     }

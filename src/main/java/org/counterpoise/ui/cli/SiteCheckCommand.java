@@ -56,8 +56,8 @@ public final class SiteCheckCommand implements Callable<Integer> {
     private Path operating;
 
     @Option(names = "--spectrum-units", paramLabel = "UNIT",
-            description = "unit of the spectrum's amplitudes; it says the quantity: displacement (um, mm, in, mil),"
-                    + " velocity (mm/s, in/s) or acceleration (m/s^2, g) (default mm/s)")
+            description = "unit of the spectrum's amplitudes; it says the quantity: displacement (um, mm, m, in, mil),"
+                    + " velocity (mm/s, m/s, in/s) or acceleration (m/s^2, g) (default mm/s)")
     private String spectrumUnits = "mm/s";
 
     @Option(names = "--convention", paramLabel = "peak|rms|peak-to-peak",
