@@ -11,6 +11,7 @@ import java.util.OptionalDouble;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.identify.IdentifiedMode;
 import org.counterpoise.core.robust.Tolerance;
+import org.counterpoise.core.robust.ToleranceRanges.FrequencyBasis;
 import org.counterpoise.core.units.Unit;
 import org.counterpoise.io.PlainText;
 import org.counterpoise.io.project.DampingInput;
@@ -93,16 +94,20 @@ public final class StructureFromMeasurement {
      * @return the project with the structure's tolerances from the fit
      */
     public static Project withUncertainties(Project project, IdentifiedMode mode) {
+        RobustnessInput r = project.robustness() != null ? project.robustness()
+                : new RobustnessInput(RobustnessInput.Ranges.NONE, null, 0, 1L, null, null, null, null, null);
+        // the structure's frequency is now a measured one: said so where the project did not say how it was found
+        RobustnessInput.Ranges ranges = r.ranges().basis() != FrequencyBasis.NOT_STATED ? r.ranges()
+                : new RobustnessInput.Ranges(r.ranges().structurePercent(), r.ranges().absorberPercent(),
+                        r.ranges().dampingPercent(), FrequencyBasis.MEASURED);
         if (mode.modalMassSd().isEmpty() || mode.naturalFrequencySd().isEmpty()) {
-            return project;
+            return project.withRobustness(r.withRanges(ranges));
         }
         double mass = mode.modalMassSd().getAsDouble() / mode.modalMass();
         double frequency = mode.naturalFrequencySd().getAsDouble() / mode.naturalFrequency();
         double stiffness = Math.hypot(mass, 2.0 * frequency);
         String normal = RobustnessInput.ToleranceInput.token(Tolerance.Distribution.NORMAL);
-        RobustnessInput r = project.robustness() != null ? project.robustness()
-                : new RobustnessInput(RobustnessInput.Ranges.NONE, null, 0, 1L, null, null, null, null, null);
-        return project.withRobustness(new RobustnessInput(r.ranges(), r.target(), r.samples(), r.seed(),
+        return project.withRobustness(new RobustnessInput(ranges, r.target(), r.samples(), r.seed(),
                 r.structureMass() != null ? r.structureMass()
                         : new RobustnessInput.ToleranceInput(normal, percent(mass), null),
                 r.structureStiffness() != null ? r.structureStiffness()

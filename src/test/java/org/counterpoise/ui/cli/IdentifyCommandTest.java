@@ -19,6 +19,8 @@ import org.counterpoise.io.measurement.FrfCsv;
 import org.counterpoise.io.measurement.FrfUnit;
 import org.counterpoise.io.project.MeasuredSource;
 import org.counterpoise.io.project.Project;
+import org.counterpoise.io.project.RobustnessInput;
+import org.counterpoise.core.robust.ToleranceRanges.FrequencyBasis;
 import org.counterpoise.io.project.ProjectReader;
 import org.counterpoise.ui.cli.CliTest.Run;
 import org.junit.jupiter.api.Test;
@@ -122,7 +124,10 @@ class IdentifyCommandTest {
         Project before = ProjectReader.read(project).project();
         assertEquals(0, CliTest.run("identify", FLOOR, "--write-structure", project.toString()).code());
         Project after = ProjectReader.read(project).project();
-        assertEquals(before.robustness(), after.robustness());
+        // the tolerances and ranges typed are kept; how the frequency was found, not stated before, is now "measured"
+        assertEquals(before.robustness().withRanges(new RobustnessInput.Ranges(
+                before.robustness().ranges().structurePercent(), before.robustness().ranges().absorberPercent(),
+                before.robustness().ranges().dampingPercent(), FrequencyBasis.MEASURED)), after.robustness());
         assertEquals(4200.0, after.toStructure().modalMass(), 150.0);
     }
 
