@@ -153,9 +153,9 @@ public final class WarningText {
 
     private static String narrow(String what, Warning w) {
         return String.format(Locale.ROOT, "The design keeps its peak in band within %s of nominal only while %s"
-                + " stays within %s to %s, narrower than the tolerance range of +/-%s (stated, or the default when"
+                + " %s, narrower than the tolerance range of +/-%s (stated, or the default when"
                 + " none is stated): %s", ValueText.percent(DesignResult.TOLERANCE_ALLOWANCE, 2), what,
-                change(w.number(WarningParameter.TOLERATED_LOW)), change(w.number(WarningParameter.TOLERATED_HIGH)),
+                tolerated(w.number(WarningParameter.TOLERATED_LOW), w.number(WarningParameter.TOLERATED_HIGH)),
                 ValueText.percent(w.number(WarningParameter.STATED_RANGE), 2),
                 DesignMethod.byId(w.token(WarningParameter.METHOD_ID)).filter(DesignMethod::robust).isPresent()
                         ? "this design already has the least worst case over the ranges for its mass (see the comparison"
@@ -164,11 +164,27 @@ public final class WarningText {
                         : "as built it may perform much worse than computed; robust-worst-case holds over the range.");
     }
 
-    /** A signed change, "beyond" at the search limit (the range was not closed there). */
-    private static String change(double fraction) {
-        String sign = fraction < 0 ? "-" : "+";
-        String at = ValueText.percent(Math.abs(fraction), 2);
-        return Math.abs(fraction) >= DesignResult.TOLERANCE_SEARCH - 1e-12 ? "beyond " + sign + at : sign + at;
+    /**
+     * The tolerated range in words. It always holds nominal (low &lt;= 0 &lt;= high); an end at the
+     * search limit was not closed there, so that side is said as "any change up to the limit".
+     */
+    private static String tolerated(double low, double high) {
+        String searched = ValueText.percent(DesignResult.TOLERANCE_SEARCH, 2);
+        boolean lowOpen = Math.abs(low) >= DesignResult.TOLERANCE_SEARCH - 1e-12;
+        boolean highOpen = Math.abs(high) >= DesignResult.TOLERANCE_SEARCH - 1e-12;
+        if (lowOpen && !highOpen) {
+            return "is at most " + ValueText.percent(high, 2) + " above nominal (any fall, to the " + searched
+                    + " searched, is tolerated)";
+        }
+        if (highOpen && !lowOpen) {
+            return "is at most " + ValueText.percent(-low, 2) + " below nominal (any rise, to the " + searched
+                    + " searched, is tolerated)";
+        }
+        return "stays within " + signed(low) + " to " + signed(high);
+    }
+
+    private static String signed(double fraction) {
+        return (fraction < 0 ? "-" : "+") + ValueText.percent(Math.abs(fraction), 2);
     }
 
     private static String runUpBasis(Warning w) {
