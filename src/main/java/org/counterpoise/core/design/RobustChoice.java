@@ -139,24 +139,13 @@ final class RobustChoice {
      * @param mu the mass ratio
      * @param model what a build is judged by
      * @param criterion what is minimised over the builds
-     * @return the optimum for that mass ratio, with the damping held at the practical floor when the
-     *     free optimum asks for less
+     * @return the optimum for that mass ratio with the damping at or above the practical floor
      */
     static RobustOptimiser.Minimum minimum(DesignStudy study, double mu, Mistuning model, RobustCriterion criterion) {
-        RobustLimits limits = limits(study);
-        List<Tuning> seeds = seeds(study, mu);
-        RobustOptimiser.Minimum free = RobustOptimiser.minimise(model, mu, criterion, seeds, limits,
-                ProgressListener.NONE);
-        if (limits.fixedDampingRatio().isPresent() || free.tuning().dampingRatio() >= Designer.PRACTICAL_DAMPING_RATIO) {
-            return free;
-        }
-        // The free optimum asks for less damping than any damper gives (typically a notch at one
-        // speed): a design nobody can build to. Re-optimised with the damping ratio held at that
-        // floor, i.e. on the boundary of the buildable region; the tests scan the region above the
-        // floor for anything better.
-        RobustLimits floor = new RobustLimits(limits.fixedTuningRatio(),
-                OptionalDouble.of(Designer.PRACTICAL_DAMPING_RATIO), limits.runUpStrokeLimit());
-        return RobustOptimiser.minimise(model, mu, criterion, seeds, floor, ProgressListener.NONE);
+        // A free optimum below the damping any damper gives (typically a notch at one speed) is a
+        // design nobody can build: the search keeps the damping at or above that floor
+        return RobustOptimiser.minimiseAboveFloor(model, mu, criterion, seeds(study, mu), limits(study),
+                Designer.PRACTICAL_DAMPING_RATIO, ProgressListener.NONE);
     }
 
     /**

@@ -71,8 +71,11 @@ public final class RobustnessAnalysis {
         double aRange = settings.absorberRange();
         double curveRange = Math.max(Math.max(sRange, aRange), 0.05);
         listener.checkCancelled(WHAT);
-        RobustDesign robust = RobustOptimiser.optimise(m, design.tuning().massRatio(), settings.ranges(),
-                seeds(design.tuning()), RobustLimits.NONE, listener.part(0.0, 0.7));
+        // the damping floor of the robust design methods (RobustChoice): less damping than any damper
+        // gives is not offered, unless the design itself has less (an undamped absorber chosen as such)
+        double dampingFloor = Math.min(Designer.PRACTICAL_DAMPING_RATIO, design.tuning().dampingRatio());
+        RobustDesign robust = RobustOptimiser.optimiseAboveFloor(m, design.tuning().massRatio(), settings.ranges(),
+                seeds(design.tuning()), RobustLimits.NONE, dampingFloor, listener.part(0.0, 0.7));
         Absorber robustAbsorber = Absorber.of(study.structure(), robust.tuning());
         listener.checkCancelled(WHAT);
         Optional<MistuningRange> forTarget = settings.target().isPresent()

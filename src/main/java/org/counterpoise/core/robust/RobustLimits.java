@@ -15,21 +15,51 @@ import org.counterpoise.core.response.SystemResponse;
  * @param fixedTuningRatio f held fixed, when given
  * @param fixedDampingRatio zeta_a held fixed, when given
  * @param runUpStrokeLimit largest allowed run-up stroke of the nominal design, m, when given
+ * @param dampingFloor the least damping ratio a free damping may take (0: none; the search box's own
+ *     lower end, 1e-5, still holds)
  */
 public record RobustLimits(OptionalDouble fixedTuningRatio, OptionalDouble fixedDampingRatio,
-        OptionalDouble runUpStrokeLimit) {
+        OptionalDouble runUpStrokeLimit, double dampingFloor) {
 
     /** Nothing fixed, no stroke limit. */
     public static final RobustLimits NONE = new RobustLimits(OptionalDouble.empty(), OptionalDouble.empty(),
             OptionalDouble.empty());
 
     /**
+     * Limits without a damping floor.
+     *
+     * @param fixedTuningRatio f held fixed, when given
+     * @param fixedDampingRatio zeta_a held fixed, when given
+     * @param runUpStrokeLimit largest allowed run-up stroke of the nominal design, m, when given
+     */
+    public RobustLimits(OptionalDouble fixedTuningRatio, OptionalDouble fixedDampingRatio,
+            OptionalDouble runUpStrokeLimit) {
+        this(fixedTuningRatio, fixedDampingRatio, runUpStrokeLimit, 0.0);
+    }
+
+    /**
+     * @param floor the least damping ratio
+     * @return the same limits with the damping held at the floor
+     */
+    public RobustLimits dampingHeldAt(double floor) {
+        return new RobustLimits(fixedTuningRatio, OptionalDouble.of(floor), runUpStrokeLimit, 0.0);
+    }
+
+    /**
+     * @param floor the least damping ratio
+     * @return the same limits with the damping free at or above the floor
+     */
+    public RobustLimits dampingAtLeast(double floor) {
+        return new RobustLimits(fixedTuningRatio, fixedDampingRatio, runUpStrokeLimit, floor);
+    }
+
+    /**
      * @param t a tuning
-     * @return the same with the fixed tuning and damping ratios put in
+     * @return the same with the fixed tuning and damping ratios put in, and the damping raised to the floor
      */
     Tuning apply(Tuning t) {
         return new Tuning(t.massRatio(), fixedTuningRatio.orElse(t.tuningRatio()),
-                fixedDampingRatio.orElse(t.dampingRatio()));
+                fixedDampingRatio.orElse(Math.max(dampingFloor, t.dampingRatio())));
     }
 
     /**

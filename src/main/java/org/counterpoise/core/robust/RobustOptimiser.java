@@ -5,6 +5,7 @@ import java.util.Arrays;
 import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Set;
+import java.util.function.DoubleUnaryOperator;
 import java.util.function.Function;
 import java.util.function.ToDoubleFunction;
 import java.util.stream.IntStream;
@@ -98,6 +99,63 @@ public final class RobustOptimiser {
         Minimum best = minimise(m, massRatio, RobustCriterion.worstCase(m, ranges), seeds, limits, listener);
         return new RobustDesign(best.tuning(), best.evaluation().worstPoint().orElseThrow(),
                 m.peak(Absorber.of(m.structure(), best.tuning()), 1, 1), best.evaluations(), best.converged());
+    }
+
+    /**
+     * The least worst case over the three tolerance ranges with the damping ratio at or above a floor
+     * (see {@link #minimiseAboveFloor}).
+     *
+     * @param m the mistuning model (nominal structure, disturbance, response)
+     * @param massRatio mu
+     * @param ranges structure frequency, absorber frequency and absorber damping ranges
+     * @param seeds starting tunings (their mass ratio is replaced by mu)
+     * @param limits what the design may not change
+     * @param dampingFloor the least damping ratio a buildable damper gives
+     * @param listener progress and cancellation
+     * @return the robust design
+     * @throws CoreException with key {@link Messages#CANCELLED} when cancelled
+     */
+    public static RobustDesign optimiseAboveFloor(Mistuning m, double massRatio, ToleranceRanges ranges,
+            List<Tuning> seeds, RobustLimits limits, double dampingFloor, ProgressListener listener) {
+        Minimum best = minimiseAboveFloor(m, massRatio, RobustCriterion.worstCase(m, ranges), seeds, limits,
+                dampingFloor, listener);
+        return new RobustDesign(best.tuning(), best.evaluation().worstPoint().orElseThrow(),
+                m.peak(Absorber.of(m.structure(), best.tuning()), 1, 1), best.evaluations(), best.converged());
+    }
+
+    /**
+     * The robust optimum with a free damping ratio kept at or above a floor. The free optimum when it
+     * needs no less; otherwise the better of the optimum held on the floor (the boundary, where a
+     * problem convex near the free optimum has its constrained optimum) and the search over the whole
+     * region above the floor seeded with it (the worst case is not convex: a design well above the
+     * floor can beat every design on it). The second is taken only when lower by more than 1e-6
+     * relative, so a boundary optimum is reported exactly on the floor.
+     *
+     * @param m the mistuning model
+     * @param massRatio mu
+     * @param criterion what to minimise
+     * @param seeds starting tunings (their mass ratio is replaced by mu)
+     * @param limits what the design may not change
+     * @param dampingFloor the least damping ratio a buildable damper gives
+     * @param listener progress and cancellation
+     * @return the best design found at or above the floor (the fixed damping when the limits give one)
+     */
+    public static Minimum minimiseAboveFloor(Mistuning m, double massRatio, RobustCriterion criterion,
+            List<Tuning> seeds, RobustLimits limits, double dampingFloor, ProgressListener listener) {
+        Minimum free = minimise(m, massRatio, criterion, seeds, limits, listener.part(0.0, 0.6));
+        if (limits.fixedDampingRatio().isPresent() || free.tuning().dampingRatio() >= dampingFloor) {
+            return free;
+        }
+        Minimum held = minimise(m, massRatio, criterion, seeds, limits.dampingHeldAt(dampingFloor),
+                listener.part(0.6, 0.8));
+        List<Tuning> aboveSeeds = new ArrayList<>(seeds);
+        aboveSeeds.add(held.tuning());
+        Minimum above = minimise(m, massRatio, criterion, aboveSeeds, limits.dampingAtLeast(dampingFloor),
+                listener.part(0.8, 1.0));
+        boolean aboveAllowed = limits.strokeUse(m, above.tuning()) <= 1;
+        boolean heldAllowed = limits.strokeUse(m, held.tuning()) <= 1;
+        boolean takeAbove = aboveAllowed && (!heldAllowed || above.value() < held.value() * (1 - 1e-6));
+        return takeAbove ? above : held;
     }
 
     /**
@@ -228,11 +286,16 @@ public final class RobustOptimiser {
             return start;
         }
         double mu = start.massRatio();
+        // With a damping floor the damping coordinate is w, zeta_a = floor exp(w^2): every w is at or
+        // above the floor and the floor itself (w = 0) is an ordinary point of the simplex, where a
+        // wall in ln zeta_a would stall it. Without one, the coordinate is ln zeta_a.
+        double floor = limits.dampingFloor();
+        DoubleUnaryOperator dampingOf = floor > 0 ? w -> floor * Math.exp(w * w) : Math::exp;
         // null outside the search box (f in 0.05 to 20, zeta_a in 1e-5 to 4), which ranks last
         Function<double[], Tuning> tuningOf = v -> {
             int i = 0;
             double f = tuningFree ? Math.exp(v[i++]) : start.tuningRatio();
-            double zeta = dampingFree ? Math.exp(v[i]) : start.dampingRatio();
+            double zeta = dampingFree ? dampingOf.applyAsDouble(v[i]) : start.dampingRatio();
             boolean inBox = (!tuningFree || f > 0.05 && f < 20) && (!dampingFree || zeta > 1e-5 && zeta < 4);
             return inBox ? new Tuning(mu, f, zeta) : null;
         };
@@ -250,7 +313,8 @@ public final class RobustOptimiser {
         }
         if (dampingFree) {
             steps[i] = 0.25 * reach;
-            x[i] = Math.log(Math.max(start.dampingRatio(), 1e-3));
+            x[i] = floor > 0 ? Math.sqrt(Math.log(Math.max(start.dampingRatio(), floor) / floor))
+                    : Math.log(Math.max(start.dampingRatio(), 1e-3));
         }
         double value = fn.getObjectiveFunction().value(x);
         Tuning best = start;

@@ -4,8 +4,10 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Set;
 import org.counterpoise.core.criteria.AmplitudeConvention;
+import org.counterpoise.core.optim.ActiveConstraint;
 import org.counterpoise.core.design.Cautions;
 import org.counterpoise.core.design.DesignResult;
+import org.counterpoise.core.design.Designer;
 import org.counterpoise.core.design.RobustnessResult;
 import org.counterpoise.core.response.ResponseKind;
 import org.counterpoise.core.robust.WorstCase;
@@ -64,8 +66,11 @@ public final class RobustnessContent {
         String robust = "least worst case at the same mass";
         worst.add(row(ReportKey.ROBUST_TUNING_RATIO, "robust design: tuning ratio", "f",
                 DesignContent.quantity(r.robust().tuning().tuningRatio(), Dimension.RATIO), robust));
+        // the search holds a free damping at or above the practical floor (RobustnessAnalysis)
+        boolean onFloor = r.robust().tuning().dampingRatio() == Designer.PRACTICAL_DAMPING_RATIO;
         worst.add(row(ReportKey.ROBUST_ABSORBER_DAMPING_RATIO, "robust design: damping ratio", "\u03b6a",
-                DesignContent.quantity(r.robust().tuning().dampingRatio(), Dimension.RATIO), robust));
+                DesignContent.quantity(r.robust().tuning().dampingRatio(), Dimension.RATIO), onFloor
+                        ? robust + "; " + MethodNoteText.words(ActiveConstraint.PRACTICAL_DAMPING_FLOOR) : robust));
         worst.add(row(ReportKey.ROBUST_ABSORBER_STIFFNESS, "robust design: spring rate", "",
                 DesignContent.quantity(r.robustAbsorber().stiffness(), Dimension.STIFFNESS), robust));
         worst.add(row(ReportKey.ROBUST_ABSORBER_DAMPING, "robust design: damping", "",

@@ -91,12 +91,17 @@ class RobustOptimiserTest {
      * so only the others get the full worst case.
      */
     private static double globalScanMinimum(Case c, ToleranceRanges ranges, RobustDesign r, double best) {
+        return globalScanMinimum(c, ranges, best, 0.005);
+    }
+
+    /** The same scan with the damping ratio from zetaLow to 100 zetaLow (at most 2). */
+    private static double globalScanMinimum(Case c, ToleranceRanges ranges, double best, double zetaLow) {
         Mistuning m = c.mistuning();
         List<VariedBuild> corners = RobustCriterion.worstCase(m, ranges).initialBuilds();
         double least = Double.POSITIVE_INFINITY;
         for (int i = 0; i <= 40; i++) {
             for (int j = 0; j <= 20; j++) {
-                Tuning t = new Tuning(c.mu, 0.75 + 0.5 * i / 40, 0.005 * Math.pow(100, j / 20.0));
+                Tuning t = new Tuning(c.mu, 0.75 + 0.5 * i / 40, zetaLow * Math.pow(Math.min(100, 2 / zetaLow), j / 20.0));
                 Absorber a = Absorber.of(c.structure(), t);
                 double bound = 0;
                 for (VariedBuild b : corners) {
@@ -106,6 +111,37 @@ class RobustOptimiserTest {
             }
         }
         return least;
+    }
+
+    @Test
+    void aDampingFloorIsNeverCrossedAndNothingAboveItIsBetter() {
+        // The floor is a lower bound, not a fixed value: the worst case is not convex in (f, zeta_a),
+        // so a design well above the floor may beat every design on it. Checked from outside: a
+        // coarse scan of the region above the floor with the full worst case, and every seed
+        // raised to the floor (the region's own points).
+        ToleranceRanges ranges = ToleranceRanges.DEFAULT;
+        for (Case c : CASES) {
+            Mistuning m = c.mistuning();
+            List<Tuning> seeds = List.of(c.nominal().tuning(), DenHartogEqualPeak.tuning(c.mu));
+            double free = robust(c, ranges, RobustLimits.NONE).tuning().dampingRatio();
+            for (double floor : new double[] {0.5 * free, 2 * free, 5 * free}) {
+                RobustDesign r = RobustOptimiser.optimiseAboveFloor(m, c.mu, ranges, seeds, RobustLimits.NONE, floor,
+                        ProgressListener.NONE);
+                double best = r.worstCase().peak();
+                assertTrue(r.tuning().dampingRatio() >= floor, c + " floor " + floor + " " + r);
+                assertEquals(worst(c, ranges, r.tuning()), best, 1e-12 * best);
+                for (Tuning seed : seeds) {
+                    Tuning raised = new Tuning(c.mu, seed.tuningRatio(), Math.max(floor, seed.dampingRatio()));
+                    assertTrue(best <= worst(c, ranges, raised) * (1 + 1e-12), c + " seed " + raised);
+                }
+                assertTrue(globalScanMinimum(c, ranges, best, floor) >= best * (1 - TOLERANCE),
+                        c + " floor " + floor + ": scan beats " + best);
+                if (floor < free) {
+                    // a floor below the free optimum changes nothing
+                    assertEquals(free, r.tuning().dampingRatio(), 0.0, c.toString());
+                }
+            }
+        }
     }
 
     @Test
