@@ -1,0 +1,198 @@
+package org.counterpoise.core.commission;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import java.util.OptionalInt;
+import java.util.Random;
+import org.apache.commons.math3.complex.Complex;
+import org.counterpoise.core.design.AbsorberLayout;
+import org.counterpoise.core.design.AbsorberSizing;
+import org.counterpoise.core.design.DesignMethod;
+import org.counterpoise.core.design.DesignStudy;
+import org.counterpoise.core.design.Designer;
+import org.counterpoise.core.design.SeveralAbsorbers;
+import org.counterpoise.core.design.SeveralAbsorbersDesigner;
+import org.counterpoise.core.error.InvalidInputException;
+import org.counterpoise.core.identify.FrfKind;
+import org.counterpoise.core.identify.MeasuredFrf;
+import org.counterpoise.core.model.Excitation;
+import org.counterpoise.core.model.ExcitationKind;
+import org.counterpoise.core.model.FrequencyBand;
+import org.counterpoise.core.model.Structure;
+import org.counterpoise.core.optim.AbsorberSetTuning;
+import org.counterpoise.core.response.ResponseKind;
+import org.counterpoise.core.system.ModalStructure;
+import org.counterpoise.core.system.Mode;
+import org.counterpoise.core.system.PointAbsorber;
+import org.counterpoise.testing.DenseSweep;
+import org.counterpoise.testing.ModalDirectSolve;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+
+/**
+ * The site check of several absorbers at one point. The "measured" responses are made by an
+ * independent route, the equations of motion of the modes and absorbers solved as a dense complex
+ * system by Commons Math's LU decomposition ({@link ModalDirectSolve}); the peaks are checked
+ * against dense sweeps of that solve refined by golden section ({@link DenseSweep}). The structure
+ * is invented: a floor with two close modes (11 % apart) and two individually tuned absorbers.
+ */
+class SetCommissioningTest {
+    private static final double HZ = 2 * Math.PI;
+    private static final ModalStructure FLOOR = new ModalStructure(List.of(
+            new Mode(8.2 * HZ, 0.015, 18000, Map.of("display", 0.8, "midspan", 1.0)),
+            new Mode(9.1 * HZ, 0.015, 15000, Map.of("display", 1.0, "midspan", 0.45))));
+    private static final FrequencyBand BAND = new FrequencyBand(460 * HZ / 60, 540 * HZ / 60);
+    private static SeveralAbsorbers design;
+
+    @BeforeAll
+    static void designTheFloor() {
+        AbsorberLayout layout = new AbsorberLayout(FLOOR, List.of("bending", "twisting"), "display", "midspan",
+                "midspan", OptionalInt.empty(), 2, AbsorberSetTuning.INDIVIDUAL);
+        Mode target = FLOOR.modes().get(layout.target(BAND));
+        double mass = layout.effectiveMass(BAND);
+        Structure single = new Structure(mass, mass * target.naturalFrequency() * target.naturalFrequency(),
+                target.dampingRatio(), 1.0);
+        DesignStudy study = new DesignStudy("invented floor", single, new Excitation(ExcitationKind.FORCE, 400, BAND),
+                ResponseKind.DISPLACEMENT, AbsorberSizing.ofMass(900), DesignMethod.EXACT_PEAK, false, 1.5);
+        design = SeveralAbsorbersDesigner.design(Designer.design(study), layout);
+    }
+
+    /** The absorbers as built: each design absorber with its frequency and damping ratio scaled. */
+    private static List<PointAbsorber> built(double[] frequencyFactor, double[] dampingFactor) {
+        List<PointAbsorber> out = new ArrayList<>();
+        for (int j = 0; j < design.absorbers().size(); j++) {
+            PointAbsorber d = design.absorbers().get(j);
+            double zeta = d.damping() / (2 * d.mass() * d.frequency());
+            out.add(PointAbsorber.tuned(d.point(), d.mass(), d.frequency() * frequencyFactor[j],
+                    zeta * dampingFactor[j]));
+        }
+        return out;
+    }
+
+    /** Driving-point accelerance at midspan from 6 to 12 Hz, 241 lines, by the dense solve; noise relative to the largest. */
+    private static MeasuredFrf measured(ModalStructure structure, List<PointAbsorber> absorbers, double noise, long seed) {
+        int lines = 241;
+        double[] w = new double[lines];
+        double[] re = new double[lines];
+        double[] im = new double[lines];
+        Random random = new Random(seed);
+        double largest = 0;
+        Complex[] a = new Complex[lines];
+        for (int i = 0; i < lines; i++) {
+            w[i] = (6.0 + 6.0 * i / (lines - 1)) * HZ;
+            Complex receptance = ModalDirectSolve.solve(structure.modes(), absorbers, "midspan", "midspan", w[i])[0];
+            a[i] = receptance.multiply(-w[i] * w[i]);
+            largest = Math.max(largest, a[i].abs());
+        }
+        for (int i = 0; i < lines; i++) {
+            re[i] = a[i].getReal() + noise * largest * random.nextGaussian();
+            im[i] = a[i].getImaginary() + noise * largest * random.nextGaussian();
+        }
+        return new MeasuredFrf(w, re, im, new double[0], FrfKind.ACCELERANCE);
+    }
+
+    @Test
+    void eachAbsorberAsBuiltIsFoundFromTheWholeStructuresResponse() {
+        double[] f = {1.03, 0.96};
+        double[] z = {1.3, 0.8};
+        SetCommissioning check = SetCommissioning.of(design, measured(FLOOR, built(f, z), 0, 1), false, List.of());
+        for (int j = 0; j < 2; j++) {
+            PointAbsorber d = design.absorbers().get(j);
+            AsBuiltSet.Built b = check.built().absorbers().get(j);
+            assertEquals(d.frequency() * f[j], b.frequency(), 1e-6 * d.frequency(), "frequency of absorber " + j);
+            double zeta = d.damping() / (2 * d.mass() * d.frequency());
+            assertEquals(zeta * z[j], b.dampingRatio(), 1e-5 * zeta, "damping of absorber " + j);
+            assertEquals(f[j] - 1, check.corrections().get(j).frequencyOff(), 1e-6);
+            // a trim of mass m (r^2 - 1) brings sqrt(k / m') to the target (omega = sqrt(k / m), Den Hartog 1956, ch. 1)
+            double k = d.mass() * b.frequency() * b.frequency();
+            assertEquals(d.frequency(), Math.sqrt(k / (d.mass() + check.corrections().get(j).massToAdd())),
+                    1e-9 * d.frequency());
+        }
+        assertTrue(check.built().normalisedResidual() < 1e-6, "exact data fit to round-off");
+        assertTrue(check.built().warnings().isEmpty(), check.built().warnings().toString());
+    }
+
+    @Test
+    void thePeaksAsBuiltAndAfterTrimEqualADenseSweepOfTheDirectSolve() {
+        List<PointAbsorber> asBuilt = built(new double[] {1.05, 0.97}, new double[] {1.2, 1.1});
+        SetCommissioning check = SetCommissioning.of(design, measured(FLOOR, asBuilt, 0, 2), false, List.of());
+        double sweep = 400 * DenseSweep.maximum(w -> ModalDirectSolve.solve(FLOOR.modes(), asBuilt, "display",
+                "midspan", w)[0].abs(), BAND.low(), BAND.high(), 20_000);
+        assertEquals(sweep, check.asBuiltPeak(), 1e-6 * sweep);
+        List<PointAbsorber> trimmed = new ArrayList<>();
+        for (int j = 0; j < 2; j++) {
+            PointAbsorber b = asBuilt.get(j);
+            trimmed.add(new PointAbsorber(b.point(), b.mass() + check.corrections().get(j).massToAdd(), b.stiffness(),
+                    b.damping()));
+        }
+        double afterSweep = 400 * DenseSweep.maximum(w -> ModalDirectSolve.solve(FLOOR.modes(), trimmed, "display",
+                "midspan", w)[0].abs(), BAND.low(), BAND.high(), 20_000);
+        assertEquals(afterSweep, check.afterTrimPeak(), 1e-6 * afterSweep);
+        assertTrue(check.afterTrimPeak() < check.asBuiltPeak(), "trimming the masses brings the peak down");
+        assertEquals(design.peakAfter(), check.designPeak(), 0.0);
+    }
+
+    @Test
+    void aFreedModeFrequencyIsFoundAndTheTargetsFollowIt() {
+        ModalStructure shifted = AsBuiltSetFit.withModeFrequency(FLOOR, design.targetMode(),
+                FLOOR.modes().get(design.targetMode()).naturalFrequency() * 0.97);
+        double[] f = {0.97 * 1.02, 0.97 * 0.99};
+        SetCommissioning check = SetCommissioning.of(design, measured(shifted, built(f, new double[] {1, 1}), 0, 3),
+                true, List.of());
+        double mode = FLOOR.modes().get(design.targetMode()).naturalFrequency();
+        assertEquals(0.97 * mode, check.built().targetModeFrequency(), 1e-6 * mode);
+        assertTrue(check.built().targetModeFrequencySd().isPresent());
+        assertEquals(0.02, check.corrections().get(0).frequencyOff(), 1e-5);
+        assertEquals(-0.01, check.corrections().get(1).frequencyOff(), 1e-5);
+    }
+
+    @Test
+    void noisyDataGiveValuesWithinTheirUncertainty() {
+        double[] f = {1.02, 0.98};
+        double[] z = {1.0, 1.0};
+        AsBuiltSet built = SetCommissioning.of(design, measured(FLOOR, built(f, z), 0.01, 4), false, List.of()).built();
+        for (int j = 0; j < 2; j++) {
+            PointAbsorber d = design.absorbers().get(j);
+            AsBuiltSet.Built b = built.absorbers().get(j);
+            assertTrue(b.frequencySd() > 0);
+            assertEquals(d.frequency() * f[j], b.frequency(), 4 * b.frequencySd(), "within 4 standard deviations");
+            double zeta = d.damping() / (2 * d.mass() * d.frequency());
+            assertEquals(zeta, b.dampingRatio(), 4 * b.dampingRatioSd());
+        }
+        assertFalse(built.warnings().contains(CommissioningWarning.POOR_FIT));
+    }
+
+    @Test
+    void aResponseNoModelMatchesIsCalledPoorOrRefusedInPlainWords() {
+        Random random = new Random(5);
+        double[] w = new double[60];
+        double[] re = new double[60];
+        double[] im = new double[60];
+        for (int i = 0; i < w.length; i++) {
+            w[i] = (6 + 0.1 * i) * HZ;
+            re[i] = random.nextGaussian();
+            im[i] = random.nextGaussian();
+        }
+        MeasuredFrf noise = new MeasuredFrf(w, re, im, new double[0], FrfKind.ACCELERANCE);
+        try {
+            SetCommissioning check = SetCommissioning.of(design, noise, false, List.of());
+            assertTrue(check.built().warnings().contains(CommissioningWarning.POOR_FIT));
+            assertEquals(0.0, check.corrections().get(0).massToAdd(), "no trim advised on a poor fit");
+        } catch (InvalidInputException e) {
+            assertTrue(e.getMessage().contains("fitted-absorber FRF"), e.getMessage());
+        }
+    }
+
+    @Test
+    void weighedMassesMustBeOnePerAbsorber() {
+        InvalidInputException e = assertThrows(InvalidInputException.class, () -> SetCommissioning.of(design,
+                measured(FLOOR, design.absorbers(), 0, 6), false, List.of(450.0)));
+        assertEquals("absorber masses as weighed", e.field());
+    }
+}
