@@ -129,13 +129,13 @@ public final class SiteCheckJson {
         return o;
     }
 
-    private static JsonArray warnings(List<CommissioningWarning> warnings) {
+    static JsonArray warnings(List<CommissioningWarning> warnings) {
         JsonArray a = new JsonArray();
         warnings.forEach(w -> a.add(w.name()));
         return a;
     }
 
-    private static double hz(double omega) {
+    static double hz(double omega) {
         return Unit.HERTZ.fromSi(omega);
     }
 }

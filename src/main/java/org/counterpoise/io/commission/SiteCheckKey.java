@@ -58,7 +58,13 @@ enum SiteCheckKey {
     RESPONSE("response"),
     AFTER_TRIM("after_trim_SI"),
     TRIM_REQUIRED("trim_required"),
-    ABSORBER_MASS("absorber_mass_kg");
+    ABSORBER_MASS("absorber_mass_kg"),
+    FITTED_SET("fitted_absorbers"),
+    ABSORBERS("absorbers"),
+    MASS_TO_ADD("mass_to_add_kg"),
+    TARGET_MODE("target_mode"),
+    TARGET_MODE_FREQUENCY("target_mode_frequency_Hz"),
+    TARGET_MODE_FREQUENCY_SD("target_mode_frequency_Hz_sd");
 
     private final String key;
 

@@ -195,16 +195,16 @@ public final class SiteCheckReport {
         return QuantityFormat.format(o.convention().ofHarmonic(peak), o.unit()) + " " + o.convention().label();
     }
 
-    private static void line(StringBuilder b, String label, String value) {
+    static void line(StringBuilder b, String label, String value) {
         b.append("  ").append(String.format("%-36s", label)).append(value).append('\n');
     }
 
     /** Three significant figures: a site reading is no better (the design's own numbers keep four). */
-    private static String percent(double ratio) {
+    static String percent(double ratio) {
         return QuantityFormat.number(100 * ratio, 3) + " %";
     }
 
-    private static String signedPercent(double ratio) {
+    static String signedPercent(double ratio) {
         // below half a part in a million it is round-off of an exact fit: shown as nothing at all
         return Math.abs(ratio) < 5e-7 ? "0 %" : (ratio > 0 ? "+" : "") + percent(ratio);
     }

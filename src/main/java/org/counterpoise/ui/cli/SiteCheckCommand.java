@@ -7,8 +7,11 @@ import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.concurrent.Callable;
 import org.counterpoise.core.criteria.AmplitudeConvention;
+import org.counterpoise.core.design.AbsorberLayout;
 import org.counterpoise.core.design.DesignDossier;
 import org.counterpoise.core.design.DesignResult;
+import org.counterpoise.core.design.SeveralAbsorbers;
+import org.counterpoise.core.design.SeveralAbsorbersDesigner;
 import org.counterpoise.core.error.Checks;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.identify.FrfKind;
@@ -17,14 +20,17 @@ import org.counterpoise.core.realisation.Realiser;
 import org.counterpoise.core.units.Unit;
 import org.counterpoise.io.PlainText;
 import org.counterpoise.io.chart.SiteCheckCharts;
+import org.counterpoise.io.commission.SetSiteCheck;
+import org.counterpoise.io.commission.SetSiteCheckJson;
+import org.counterpoise.io.commission.SetSiteCheckReport;
 import org.counterpoise.io.commission.SiteCheck;
 import org.counterpoise.io.commission.SiteCheckJson;
 import org.counterpoise.io.commission.SiteCheckReport;
 import org.counterpoise.io.commission.SiteCheckRun;
 import org.counterpoise.io.measurement.FrfUnit;
 import org.counterpoise.io.measurement.SpectrumCsv;
-import org.counterpoise.io.project.FormatMigration;
 import org.counterpoise.io.project.LoadedProject;
+import org.counterpoise.io.project.SeveralModes;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
@@ -90,9 +96,10 @@ public final class SiteCheckCommand implements Callable<Integer> {
             description = "fit the structure's natural frequency too (when it was not measured with the absorber locked)")
     private boolean freeStructure;
 
-    @Option(names = "--absorber-mass", paramLabel = "KG",
-            description = "the absorber's mass as weighed with its fitted plates, kg (default: the design's)")
-    private Double absorberMass;
+    @Option(names = "--absorber-mass", paramLabel = "KG[,KG...]", split = ",",
+            description = "the absorber's mass as weighed with its fitted plates, kg (default: the design's); for"
+                    + " several absorbers one mass per absorber, in the design's order, separated by commas")
+    private List<Double> absorberMass;
 
     @Option(names = "--json", description = "print the result as one JSON object with SI units in the key names")
     private boolean json;
@@ -104,12 +111,18 @@ public final class SiteCheckCommand implements Callable<Integer> {
     @Option(names = "--force", description = "replace a chart file that already exists")
     private boolean force;
 
-    private OptionalDouble weighed() {
+    private List<Double> weighed(int absorbers) {
         if (absorberMass == null) {
-            return OptionalDouble.empty();
+            return List.of();
         }
-        Checks.positive("--absorber-mass", absorberMass);
-        return OptionalDouble.of(absorberMass);
+        if (absorberMass.size() != absorbers) {
+            throw new InvalidInputException("--absorber-mass", absorberMass.size() + (absorberMass.size() == 1
+                    ? " mass" : " masses"),
+                    absorbers == 1 ? "one mass, kg" : absorbers + " masses, kg, one per absorber in the design's order,"
+                            + " separated by commas");
+        }
+        absorberMass.forEach(m -> Checks.positive("--absorber-mass", m));
+        return List.copyOf(absorberMass);
     }
 
     @Override
@@ -127,13 +140,12 @@ public final class SiteCheckCommand implements Callable<Integer> {
                             + " (--fitted-frf FILE.csv), or both");
         }
         LoadedProject loaded = ProjectFiles.read(spec, file);
-        if (!FormatMigration.isOneModeOneAbsorber(loaded.project())) {
-            throw new InvalidInputException(PlainText.escape(file.toString()), "several modes or absorbers",
-                    "a project of one absorber on one mode: the site check fits one absorber's response (the"
-                            + " several-absorber design is in 'design', docs/several-modes.md)");
-        }
         DesignDossier dossier = DesignDossier.of(loaded.project().toStudy());
         DesignResult design = dossier.design();
+        Optional<AbsorberLayout> layout = SeveralModes.layout(loaded.project());
+        if (layout.isPresent()) {
+            return several(loaded, SeveralAbsorbersDesigner.design(design, layout.get()));
+        }
         Realisation realisation = Realiser.realisation(dossier, loaded.project().hardware());
         Optional<SiteCheckRun.OperatingInput> op = Optional.empty();
         if (operating != null) {
@@ -150,7 +162,8 @@ public final class SiteCheckCommand implements Callable<Integer> {
             FrfKind k = FrfOptions.kind("--kind", kind);
             FrfUnit unit = frfUnits == null ? FrfUnit.si(k) : FrfUnit.parse(frfUnits, k, "--frf-units");
             fit = Optional.of(new SiteCheckRun.FittedInput(fittedFrf, unit,
-                    all -> band == null ? all : FrfOptions.band("--band", band, all), freeStructure, weighed()));
+                    all -> band == null ? all : FrfOptions.band("--band", band, all), freeStructure,
+                    weighed(1).stream().mapToDouble(Double::doubleValue).findFirst()));
         }
         SiteCheck check = SiteCheckRun.run(loaded.project().name(), design, realisation,
                 loaded.project().displayUnits(), op, fit);
@@ -166,6 +179,28 @@ public final class SiteCheckCommand implements Callable<Integer> {
         wrote.forEach(notes::println);
         out.flush();
         notes.flush();
+        return 0;
+    }
+
+    /** Several modes or absorbers (format 6): the response with them fitted, each absorber as built. */
+    private Integer several(LoadedProject loaded, SeveralAbsorbers design) {
+        if (operating != null) {
+            throw new InvalidInputException("--operating", PlainText.escape(operating.toString()),
+                    "for a project of one absorber on one mode: the operating check of several absorbers is not made"
+                            + " yet; check them with the response measured with all of them fitted (--fitted-frf)");
+        }
+        if (plot != null) {
+            throw new InvalidInputException("--plot", PlainText.escape(plot.toString()),
+                    "for a project of one absorber on one mode: the chart of several absorbers is not drawn yet");
+        }
+        FrfKind k = FrfOptions.kind("--kind", kind);
+        FrfUnit unit = frfUnits == null ? FrfUnit.si(k) : FrfUnit.parse(frfUnits, k, "--frf-units");
+        SetSiteCheck check = SetSiteCheck.run(loaded.project().name(), design, fittedFrf, unit,
+                all -> band == null ? all : FrfOptions.band("--band", band, all), freeStructure,
+                weighed(design.absorbers().size()), loaded.project().displayUnits());
+        PrintWriter out = spec.commandLine().getOut();
+        out.print(PlainText.forTerminal(json ? SetSiteCheckJson.toJson(check) : SetSiteCheckReport.render(check)));
+        out.flush();
         return 0;
     }
 }

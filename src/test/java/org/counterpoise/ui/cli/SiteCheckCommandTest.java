@@ -153,11 +153,45 @@ class SiteCheckCommandTest {
         Run cell = CliTest.run("site-check", PUMP, "--operating", broken.toString());
         assertEquals(Cli.BAD_INPUT, cell.code());
         assertTrue(cell.err().contains("line 3"), cell.err());
-        // the site check fits one absorber: a split mass budget is refused, not checked as one absorber
-        Run split = CliTest.run("site-check", "presets/split-mass-test-rig.json", "--fitted-frf", FITTED);
+        // several absorbers: the operating check is not made for them, and says so instead of checking one absorber
+        Run split = CliTest.run("site-check", "presets/split-mass-test-rig.json", "--operating", SPECTRUM);
         assertEquals(Cli.BAD_INPUT, split.code());
-        assertTrue(split.err().contains("several modes or absorbers"), split.err());
+        assertTrue(split.err().contains("--operating") && split.err().contains("several absorbers"), split.err());
         for (Run run : new Run[] {none, unit, away, cell, split}) {
+            assertFalse(run.err().contains("Exception") || run.err().contains("\tat "), run.err());
+        }
+    }
+
+    @Test
+    void severalAbsorbersAreEachFoundAsBuiltWithTheirTrims() {
+        // the gallery floor's invented file (GallerySitePresetTest): absorber 1 on a spring 4 % stiff, absorber 2 3 % soft
+        String gallery = "presets/gallery-floor-two-modes.json";
+        Run r = CliTest.run("site-check", gallery, "--fitted-frf", "presets/gallery-floor-fitted-frf.csv", "--json");
+        assertEquals(0, r.code(), r.err());
+        JsonObject o = JsonParser.parseString(r.out()).getAsJsonObject();
+        assertTrue(o.get("fitted_absorber").isJsonNull());
+        JsonObject set = o.getAsJsonObject("fitted_absorbers");
+        assertEquals("bending", set.get("target_mode").getAsString());
+        double[] spring = {1.04, 0.97};
+        for (int j = 0; j < 2; j++) {
+            JsonObject a = set.getAsJsonArray("absorbers").get(j).getAsJsonObject();
+            double design = a.get("design_absorber_frequency_Hz").getAsDouble();
+            assertEquals(Math.sqrt(spring[j]) * design, a.get("absorber_frequency_Hz").getAsDouble(), 1e-3 * design);
+            assertEquals(spring[j] > 1, a.get("mass_to_add_kg").getAsDouble() > 0);
+        }
+        assertTrue(set.getAsJsonObject("band_peak").get("trim_required").getAsBoolean());
+        Run text = CliTest.run("site-check", gallery, "--fitted-frf", "presets/gallery-floor-fitted-frf.csv");
+        assertTrue(text.out().contains("absorber 1: trim") && text.out().contains("add "), text.out());
+        Run wrongCount = CliTest.run("site-check", gallery, "--fitted-frf", "presets/gallery-floor-fitted-frf.csv",
+                "--absorber-mass", "450");
+        assertEquals(Cli.BAD_INPUT, wrongCount.code());
+        assertTrue(wrongCount.err().contains("--absorber-mass") && wrongCount.err().contains("2 masses"),
+                wrongCount.err());
+        Run plot = CliTest.run("site-check", gallery, "--fitted-frf", "presets/gallery-floor-fitted-frf.csv",
+                "--plot", "target/never.png");
+        assertEquals(Cli.BAD_INPUT, plot.code());
+        assertTrue(plot.err().contains("--plot"), plot.err());
+        for (Run run : new Run[] {r, text, wrongCount, plot}) {
             assertFalse(run.err().contains("Exception") || run.err().contains("\tat "), run.err());
         }
     }

@@ -1,0 +1,110 @@
+package org.counterpoise.io.commission;
+
+import static org.counterpoise.io.commission.SiteCheckJson.hz;
+import static org.counterpoise.io.commission.SiteCheckKey.ABSORBERS;
+import static org.counterpoise.io.commission.SiteCheckKey.ABSORBER_FREQUENCY;
+import static org.counterpoise.io.commission.SiteCheckKey.ABSORBER_FREQUENCY_SD;
+import static org.counterpoise.io.commission.SiteCheckKey.ABSORBER_MASS;
+import static org.counterpoise.io.commission.SiteCheckKey.ADVISED;
+import static org.counterpoise.io.commission.SiteCheckKey.AFTER_TRIM;
+import static org.counterpoise.io.commission.SiteCheckKey.AS_BUILT;
+import static org.counterpoise.io.commission.SiteCheckKey.BAND_PEAK;
+import static org.counterpoise.io.commission.SiteCheckKey.DAMPING;
+import static org.counterpoise.io.commission.SiteCheckKey.DAMPING_OFF;
+import static org.counterpoise.io.commission.SiteCheckKey.DAMPING_SD;
+import static org.counterpoise.io.commission.SiteCheckKey.DESIGN;
+import static org.counterpoise.io.commission.SiteCheckKey.DESIGN_ABSORBER_FREQUENCY;
+import static org.counterpoise.io.commission.SiteCheckKey.DESIGN_DAMPING;
+import static org.counterpoise.io.commission.SiteCheckKey.FITTED;
+import static org.counterpoise.io.commission.SiteCheckKey.FITTED_SET;
+import static org.counterpoise.io.commission.SiteCheckKey.FREQUENCY_OFF;
+import static org.counterpoise.io.commission.SiteCheckKey.FRF_KIND;
+import static org.counterpoise.io.commission.SiteCheckKey.LINES;
+import static org.counterpoise.io.commission.SiteCheckKey.MASS_TO_ADD;
+import static org.counterpoise.io.commission.SiteCheckKey.NORMALISED_RESIDUAL;
+import static org.counterpoise.io.commission.SiteCheckKey.OPERATING;
+import static org.counterpoise.io.commission.SiteCheckKey.PROJECT;
+import static org.counterpoise.io.commission.SiteCheckKey.RESPONSE;
+import static org.counterpoise.io.commission.SiteCheckKey.SOURCE;
+import static org.counterpoise.io.commission.SiteCheckKey.TARGET_FREQUENCY;
+import static org.counterpoise.io.commission.SiteCheckKey.TARGET_MODE;
+import static org.counterpoise.io.commission.SiteCheckKey.TARGET_MODE_FREQUENCY;
+import static org.counterpoise.io.commission.SiteCheckKey.TARGET_MODE_FREQUENCY_SD;
+import static org.counterpoise.io.commission.SiteCheckKey.TRIM_REQUIRED;
+import static org.counterpoise.io.commission.SiteCheckKey.WARNINGS;
+
+import com.google.gson.JsonArray;
+import com.google.gson.JsonNull;
+import com.google.gson.JsonObject;
+import org.counterpoise.core.commission.AsBuiltSet;
+import org.counterpoise.core.commission.CommissioningWarning;
+import org.counterpoise.core.commission.SetCommissioning;
+import org.counterpoise.io.export.JsonNumbers;
+
+/**
+ * The site check of several absorbers as one JSON object; SI units, frequencies in Hz. The single
+ * absorber's {@code fitted_absorber} is null and {@code fitted_absorbers} holds one entry per
+ * absorber (docs/cli.md, site-check).
+ */
+public final class SetSiteCheckJson {
+    private SetSiteCheckJson() {
+    }
+
+    /**
+     * @param check the site check
+     * @return pretty-printed JSON with a final line break
+     */
+    public static String toJson(SetSiteCheck check) {
+        SetCommissioning c = check.check();
+        AsBuiltSet built = c.built();
+        JsonObject o = new JsonObject();
+        o.addProperty(PROJECT.key(), check.project());
+        o.add(OPERATING.key(), JsonNull.INSTANCE);
+        o.add(FITTED.key(), JsonNull.INSTANCE);
+        JsonObject set = new JsonObject();
+        set.addProperty(SOURCE.key(), check.file());
+        set.addProperty(FRF_KIND.key(), check.unit().kind().id());
+        set.addProperty(LINES.key(), built.lines());
+        set.addProperty(TARGET_MODE.key(), check.design().layout().modeNames().get(built.targetMode()));
+        JsonNumbers.put(set, TARGET_MODE_FREQUENCY.key(), hz(built.targetModeFrequency()));
+        if (built.targetModeFrequencySd().isPresent()) {
+            JsonNumbers.put(set, TARGET_MODE_FREQUENCY_SD.key(), hz(built.targetModeFrequencySd().getAsDouble()));
+        }
+        JsonNumbers.put(set, NORMALISED_RESIDUAL.key(), built.normalisedResidual());
+        set.add(WARNINGS.key(), SiteCheckJson.warnings(built.warnings()));
+        boolean advised = !built.warnings().contains(CommissioningWarning.POOR_FIT);
+        set.addProperty(ADVISED.key(), advised);
+        JsonArray absorbers = new JsonArray();
+        for (int j = 0; j < built.absorbers().size(); j++) {
+            AsBuiltSet.Built a = built.absorbers().get(j);
+            SetCommissioning.Correction k = c.corrections().get(j);
+            JsonObject one = new JsonObject();
+            JsonNumbers.put(one, ABSORBER_MASS.key(), a.mass());
+            JsonNumbers.put(one, ABSORBER_FREQUENCY.key(), hz(a.frequency()));
+            JsonNumbers.put(one, ABSORBER_FREQUENCY_SD.key(), hz(a.frequencySd()));
+            JsonNumbers.put(one, DESIGN_ABSORBER_FREQUENCY.key(), hz(k.designFrequency()));
+            JsonNumbers.put(one, TARGET_FREQUENCY.key(), hz(k.targetFrequency()));
+            JsonNumbers.put(one, FREQUENCY_OFF.key(), k.frequencyOff());
+            JsonNumbers.put(one, DAMPING.key(), a.dampingRatio());
+            JsonNumbers.put(one, DAMPING_SD.key(), a.dampingRatioSd());
+            JsonNumbers.put(one, DESIGN_DAMPING.key(), k.designDampingRatio());
+            JsonNumbers.put(one, DAMPING_OFF.key(), k.dampingOff());
+            if (advised) {
+                JsonNumbers.put(one, MASS_TO_ADD.key(), k.massToAdd());
+            } else {
+                one.add(MASS_TO_ADD.key(), JsonNull.INSTANCE);
+            }
+            absorbers.add(one);
+        }
+        set.add(ABSORBERS.key(), absorbers);
+        JsonObject peak = new JsonObject();
+        peak.addProperty(RESPONSE.key(), "displacement");
+        JsonNumbers.put(peak, DESIGN.key(), c.designPeak());
+        JsonNumbers.put(peak, AS_BUILT.key(), c.asBuiltPeak());
+        JsonNumbers.put(peak, AFTER_TRIM.key(), c.afterTrimPeak());
+        peak.addProperty(TRIM_REQUIRED.key(), c.trimRequired());
+        set.add(BAND_PEAK.key(), peak);
+        o.add(FITTED_SET.key(), set);
+        return JsonNumbers.write(o);
+    }
+}

@@ -1,0 +1,90 @@
+package org.counterpoise.io.commission;
+
+import static org.counterpoise.io.commission.SiteCheckReport.line;
+import static org.counterpoise.io.commission.SiteCheckReport.percent;
+import static org.counterpoise.io.commission.SiteCheckReport.signedPercent;
+
+import java.util.List;
+import org.counterpoise.core.commission.AsBuiltSet;
+import org.counterpoise.core.commission.CommissioningWarning;
+import org.counterpoise.core.commission.SetCommissioning;
+import org.counterpoise.core.design.DesignResult;
+import org.counterpoise.core.units.Dimension;
+import org.counterpoise.core.units.Unit;
+import org.counterpoise.io.PlainText;
+import org.counterpoise.io.text.DisplayUnits;
+import org.counterpoise.io.text.QuantityFormat;
+import org.counterpoise.io.text.UnitSystem;
+
+/** The site check of several absorbers as plain text for the terminal, with the usual cautions. */
+public final class SetSiteCheckReport {
+    /** What the check of several absorbers covers. */
+    static final String SCOPE = "The fit holds at the absorbers' point, on the project's modes with their masses,"
+            + " shapes and damping; absorbers of equal mass are told apart only by their order of frequency, so"
+            + " mark each absorber before the test and check the trim on the one that was measured as lowest or"
+            + " highest.";
+
+    private SetSiteCheckReport() {
+    }
+
+    /**
+     * @param check the site check
+     * @return the report
+     */
+    public static String render(SetSiteCheck check) {
+        SetCommissioning c = check.check();
+        AsBuiltSet built = c.built();
+        UnitSystem units = check.units();
+        StringBuilder b = new StringBuilder("Site check of ").append(PlainText.escape(check.project())).append('\n');
+        String mode = check.design().layout().modeNames().get(built.targetMode());
+        b.append("Absorbers as built (").append(PlainText.escape(check.file())).append(", ")
+                .append(check.unit().kind().id()).append(" in ").append(check.unit().symbol()).append(", ")
+                .append(built.lines()).append(" lines; ").append(built.absorbers().size()).append(" absorbers at ")
+                .append(PlainText.escape(check.design().layout().absorberPoint())).append(" on the mode ")
+                .append(PlainText.escape(mode)).append(")\n");
+        line(b, built.targetModeFrequencySd().isPresent() ? "mode frequency (fitted)" : "mode frequency (design)",
+                QuantityFormat.format(built.targetModeFrequency(), Unit.HERTZ)
+                        + built.targetModeFrequencySd().stream().mapToObj(sd -> " +/- "
+                        + QuantityFormat.number(Unit.HERTZ.fromSi(sd), 2) + " Hz").findFirst().orElse(""));
+        line(b, "normalised residual", QuantityFormat.number(built.normalisedResidual(), 3));
+        boolean advised = !built.warnings().contains(CommissioningWarning.POOR_FIT);
+        for (int j = 0; j < built.absorbers().size(); j++) {
+            AsBuiltSet.Built a = built.absorbers().get(j);
+            SetCommissioning.Correction k = c.corrections().get(j);
+            String name = "absorber " + (j + 1);
+            line(b, name + ": mass", DisplayUnits.format(a.mass(), Dimension.MASS, units)
+                    + (a.mass() != check.design().absorbers().get(j).mass() ? " (as weighed)" : " (design)"));
+            line(b, name + ": frequency", QuantityFormat.format(a.frequency(), Unit.HERTZ) + " +/- "
+                    + QuantityFormat.number(Unit.HERTZ.fromSi(a.frequencySd()), 2) + " Hz (needed "
+                    + QuantityFormat.format(k.targetFrequency(), Unit.HERTZ) + ": " + signedPercent(k.frequencyOff())
+                    + ")");
+            line(b, name + ": damping ratio", percent(a.dampingRatio()) + " +/- "
+                    + QuantityFormat.number(100 * a.dampingRatioSd(), 2) + " % (design " + percent(k.designDampingRatio())
+                    + (k.designDampingRatio() > 0 ? "; relative change " + signedPercent(k.dampingOff()) : "") + ")");
+            if (advised) {
+                double m = k.massToAdd();
+                line(b, name + ": trim", Math.abs(m) < 5e-7 * a.mass() ? "none"
+                        : (m > 0 ? "add " : "take off ") + DisplayUnits.format(Math.abs(m), Dimension.MASS, units)
+                                + " of trim mass (spring and damper kept)");
+            }
+        }
+        Dimension length = Dimension.LENGTH;
+        line(b, "peak over the band (amplitude)", "displacement at "
+                + PlainText.escape(check.design().layout().responsePoint()) + ": design "
+                + DisplayUnits.format(c.designPeak(), length, units) + ", as built "
+                + DisplayUnits.format(c.asBuiltPeak(), length, units) + " ("
+                + signedPercent(c.asBuiltPeak() / c.designPeak() - 1) + ")"
+                + (advised ? ", after the trims " + DisplayUnits.format(c.afterTrimPeak(), length, units) : ""));
+        line(b, "trim", !advised ? "none advised: the fit is poor, so the absorbers' frequencies are not known"
+                : c.trimRequired() ? "REQUIRED: the response as built is more than "
+                        + percent(DesignResult.TOLERANCE_ALLOWANCE) + " above the design's"
+                        : "optional: the response is within " + percent(DesignResult.TOLERANCE_ALLOWANCE)
+                                + " of the design's");
+        built.warnings().forEach(w -> b.append("Warning: ").append(SiteCheckReport.words(w)).append('\n'));
+        b.append("Cautions\n");
+        for (String caution : List.of(SCOPE, SiteCheckReport.STOPPED, SiteCheckReport.PRACTICE)) {
+            b.append("  - ").append(caution).append('\n');
+        }
+        return b.toString();
+    }
+}
