@@ -8,12 +8,8 @@ import org.apache.commons.math3.exception.MathIllegalStateException;
 import org.apache.commons.math3.fitting.leastsquares.LeastSquaresBuilder;
 import org.apache.commons.math3.fitting.leastsquares.LeastSquaresOptimizer;
 import org.apache.commons.math3.fitting.leastsquares.LevenbergMarquardtOptimizer;
-import org.apache.commons.math3.linear.Array2DRowRealMatrix;
-import org.apache.commons.math3.linear.ArrayRealVector;
 import org.apache.commons.math3.linear.RealMatrix;
-import org.apache.commons.math3.linear.RealVector;
 import org.apache.commons.math3.linear.SingularMatrixException;
-import org.apache.commons.math3.util.Pair;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.identify.FrfKind;
 import org.counterpoise.core.identify.MeasuredFrf;
@@ -54,26 +50,17 @@ public final class AsBuiltFit {
     /** Fitted frequencies beyond these multiples of the design's are reported as at the search's edge. */
     static final double EDGE_LOW = 0.55;
     static final double EDGE_HIGH = 1.8;
-    private static final double DIFFERENCE_STEP = 1e-6;
 
     private final Structure structure;
     private final double massRatio;
     private final MeasuredFrf measured;
-    private final double scale;
+    private final FrfResiduals residuals;
 
     private AsBuiltFit(Structure structure, double massRatio, MeasuredFrf measured) {
         this.structure = structure;
         this.massRatio = massRatio;
         this.measured = measured;
-        double largest = 0.0;
-        for (int i = 0; i < measured.size(); i++) {
-            largest = Math.max(largest, measured.value(i).abs());
-        }
-        if (!(largest > 0)) {
-            throw new InvalidInputException("fitted-absorber FRF", "all values zero",
-                    "a measured response with the absorber fitted");
-        }
-        this.scale = largest;
+        this.residuals = new FrfResiduals(measured, "the absorber");
     }
 
     /**
@@ -126,15 +113,12 @@ public final class AsBuiltFit {
         if (2 * n <= parameters) {
             throw new InvalidInputException("fitted-absorber FRF", n + " lines", "more lines than parameters fitted");
         }
-        double[] target = new double[2 * n];
-        for (int i = 0; i < n; i++) {
-            target[2 * i] = measured.real()[i] / scale;
-            target[2 * i + 1] = measured.imaginary()[i] / scale;
-        }
+        double[] target = residuals.target();
         LeastSquaresOptimizer.Optimum optimum;
         try {
             optimum = new LevenbergMarquardtOptimizer().optimize(new LeastSquaresBuilder()
-                    .model(p -> valueAndJacobian(p, start, parameters))
+                    .model(p -> FrfResiduals.valueAndJacobian(q -> residuals.scaled(model(values(q, start))),
+                            p.toArray()))
                     .target(target).start(new double[parameters]).maxEvaluations(2000).maxIterations(500).build());
         } catch (MathIllegalStateException | InvalidInputException e) {
             // the search ran off (no convergence, or to a frequency or damping no absorber has): no fit
@@ -175,52 +159,17 @@ public final class AsBuiltFit {
             p.length > 2 ? start[2] * Math.exp(p[2]) : start[2]};
     }
 
-    private Pair<RealVector, RealMatrix> valueAndJacobian(RealVector point, double[] start, int parameters) {
-        double[] p = point.toArray();
-        double[] value = scaledModel(values(p, start));
-        double[][] jacobian = new double[value.length][parameters];
-        for (int k = 0; k < parameters; k++) {
-            double[] up = p.clone();
-            double[] down = p.clone();
-            up[k] += DIFFERENCE_STEP;
-            down[k] -= DIFFERENCE_STEP;
-            double[] vu = scaledModel(values(up, start));
-            double[] vd = scaledModel(values(down, start));
-            for (int r = 0; r < value.length; r++) {
-                jacobian[r][k] = (vu[r] - vd[r]) / (2 * DIFFERENCE_STEP);
-            }
-        }
-        return new Pair<>(new ArrayRealVector(value, false), new Array2DRowRealMatrix(jacobian, false));
-    }
-
-    /** The model at every line, real and imaginary parts interleaved, over the measured scale. */
-    private double[] scaledModel(double[] x) {
-        Complex[] h = model(x[0], x[1], x[2]);
-        double[] out = new double[2 * h.length];
-        for (int i = 0; i < h.length; i++) {
-            out[2 * i] = h[i].getReal() / scale;
-            out[2 * i + 1] = h[i].getImaginary() / scale;
-        }
-        return out;
-    }
-
     private double cost(double omegaA, double zeta, double omega1) {
-        Complex[] h = model(omegaA, zeta, omega1);
-        double sum = 0.0;
-        for (int i = 0; i < h.length; i++) {
-            double dr = h[i].getReal() - measured.real()[i];
-            double di = h[i].getImaginary() - measured.imaginary()[i];
-            sum += dr * dr + di * di;
-        }
-        return sum;
+        return residuals.cost(model(omegaA, zeta, omega1));
     }
 
     private double normalisedResidual(double omegaA, double zeta, double omega1) {
-        double den = 0.0;
-        for (int i = 0; i < measured.size(); i++) {
-            den += Math.pow(measured.value(i).abs(), 2);
-        }
-        return Math.sqrt(cost(omegaA, zeta, omega1) / den);
+        return residuals.normalisedResidual(model(omegaA, zeta, omega1));
+    }
+
+    /** The model for {omega_a, zeta_a, omega_1}. */
+    private Complex[] model(double[] x) {
+        return model(x[0], x[1], x[2]);
     }
 
     /**

@@ -10,12 +10,8 @@ import org.apache.commons.math3.exception.MathIllegalStateException;
 import org.apache.commons.math3.fitting.leastsquares.LeastSquaresBuilder;
 import org.apache.commons.math3.fitting.leastsquares.LeastSquaresOptimizer;
 import org.apache.commons.math3.fitting.leastsquares.LevenbergMarquardtOptimizer;
-import org.apache.commons.math3.linear.Array2DRowRealMatrix;
-import org.apache.commons.math3.linear.ArrayRealVector;
 import org.apache.commons.math3.linear.RealMatrix;
-import org.apache.commons.math3.linear.RealVector;
 import org.apache.commons.math3.linear.SingularMatrixException;
-import org.apache.commons.math3.util.Pair;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.identify.FrfKind;
 import org.counterpoise.core.identify.MeasuredFrf;
@@ -53,22 +49,14 @@ public final class AsBuiltSetFit {
     private final int targetMode;
     private final List<PointAbsorber> design;
     private final MeasuredFrf measured;
-    private final double scale;
+    private final FrfResiduals residuals;
 
     private AsBuiltSetFit(ModalStructure structure, int targetMode, List<PointAbsorber> design, MeasuredFrf measured) {
         this.structure = structure;
         this.targetMode = targetMode;
         this.design = List.copyOf(design);
         this.measured = measured;
-        double largest = 0.0;
-        for (int i = 0; i < measured.size(); i++) {
-            largest = Math.max(largest, measured.value(i).abs());
-        }
-        if (!(largest > 0)) {
-            throw new InvalidInputException("fitted-absorber FRF", "all values zero",
-                    "a measured response with the absorbers fitted");
-        }
-        this.scale = largest;
+        this.residuals = new FrfResiduals(measured, "the absorbers");
     }
 
     /**
@@ -125,16 +113,13 @@ public final class AsBuiltSetFit {
 
     private AsBuiltSet polish(double[] start, int parameters) {
         int lines = measured.size();
-        double[] target = new double[2 * lines];
-        for (int i = 0; i < lines; i++) {
-            target[2 * i] = measured.real()[i] / scale;
-            target[2 * i + 1] = measured.imaginary()[i] / scale;
-        }
+        double[] target = residuals.target();
         LeastSquaresOptimizer.Optimum optimum;
         RealMatrix cov;
         try {
             optimum = new LevenbergMarquardtOptimizer().optimize(new LeastSquaresBuilder()
-                    .model(this::valueAndJacobian).target(target).start(start)
+                    .model(p -> FrfResiduals.valueAndJacobian(q -> residuals.scaled(model(q)), p.toArray()))
+                    .target(target).start(start)
                     .maxEvaluations(4000).maxIterations(1000).build());
             cov = optimum.getCovariances(1e-14);
         } catch (MathIllegalStateException | SingularMatrixException | InvalidInputException e) {
@@ -161,7 +146,7 @@ public final class AsBuiltSetFit {
                 warnings.add(CommissioningWarning.FREQUENCY_AT_SEARCH_EDGE);
             }
         }
-        double residual = Math.sqrt(cost(p) / sumOfSquares());
+        double residual = residuals.normalisedResidual(model(p));
         if (!Double.isFinite(residual)) {
             throw notFitted();
         }
@@ -184,50 +169,8 @@ public final class AsBuiltSetFit {
         return Math.sqrt(Math.max(0.0, cov.getEntry(p, p) * s2));
     }
 
-    private double sumOfSquares() {
-        double sum = 0.0;
-        for (int i = 0; i < measured.size(); i++) {
-            sum += Math.pow(measured.value(i).abs(), 2);
-        }
-        return sum;
-    }
-
     private double cost(double[] p) {
-        Complex[] h = model(p);
-        double sum = 0.0;
-        for (int i = 0; i < h.length; i++) {
-            double dr = h[i].getReal() - measured.real()[i];
-            double di = h[i].getImaginary() - measured.imaginary()[i];
-            sum += dr * dr + di * di;
-        }
-        return sum;
-    }
-
-    private Pair<RealVector, RealMatrix> valueAndJacobian(RealVector point) {
-        double[] p = point.toArray();
-        double[] value = scaled(model(p));
-        double[][] jacobian = new double[value.length][p.length];
-        for (int k = 0; k < p.length; k++) {
-            double[] up = p.clone();
-            double[] down = p.clone();
-            up[k] += DIFFERENCE_STEP;
-            down[k] -= DIFFERENCE_STEP;
-            double[] vu = scaled(model(up));
-            double[] vd = scaled(model(down));
-            for (int r = 0; r < value.length; r++) {
-                jacobian[r][k] = (vu[r] - vd[r]) / (2 * DIFFERENCE_STEP);
-            }
-        }
-        return new Pair<>(new ArrayRealVector(value, false), new Array2DRowRealMatrix(jacobian, false));
-    }
-
-    private double[] scaled(Complex[] h) {
-        double[] out = new double[2 * h.length];
-        for (int i = 0; i < h.length; i++) {
-            out[2 * i] = h[i].getReal() / scale;
-            out[2 * i + 1] = h[i].getImaginary() / scale;
-        }
-        return out;
+        return residuals.cost(model(p));
     }
 
     /** The model at every measured line for the logarithmic parameters p. */
