@@ -7,7 +7,6 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Map;
 import java.util.OptionalInt;
 import java.util.Random;
 import org.apache.commons.math3.complex.Complex;
@@ -31,6 +30,7 @@ import org.counterpoise.core.system.ModalStructure;
 import org.counterpoise.core.system.Mode;
 import org.counterpoise.core.system.PointAbsorber;
 import org.counterpoise.testing.DenseSweep;
+import org.counterpoise.testing.InventedFloor;
 import org.counterpoise.testing.ModalDirectSolve;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
@@ -44,10 +44,8 @@ import org.junit.jupiter.api.Test;
  */
 class SetCommissioningTest {
     private static final double HZ = 2 * Math.PI;
-    private static final ModalStructure FLOOR = new ModalStructure(List.of(
-            new Mode(8.2 * HZ, 0.015, 18000, Map.of("display", 0.8, "midspan", 1.0)),
-            new Mode(9.1 * HZ, 0.015, 15000, Map.of("display", 1.0, "midspan", 0.45))));
-    private static final FrequencyBand BAND = new FrequencyBand(460 * HZ / 60, 540 * HZ / 60);
+    private static final ModalStructure FLOOR = InventedFloor.MODES;
+    private static final FrequencyBand BAND = InventedFloor.BAND;
     private static SeveralAbsorbers design;
 
     @BeforeAll

@@ -23,6 +23,7 @@ import org.counterpoise.core.system.ModalStructure;
 import org.counterpoise.core.system.ModalSystem;
 import org.counterpoise.core.system.PointAbsorber;
 import org.counterpoise.testing.DenseSweep;
+import org.counterpoise.testing.InventedFloor;
 import org.counterpoise.testing.ModalDirectSolve;
 import org.junit.jupiter.api.Test;
 
@@ -35,10 +36,8 @@ import org.junit.jupiter.api.Test;
 class SeveralAbsorbersDesignerTest {
     private static final double HZ = 2 * Math.PI;
     /** Two close modes (11 % apart) and three named points: an invented floor. */
-    private static final ModalStructure FLOOR = new ModalStructure(List.of(
-            new Mode(8.2 * HZ, 0.015, 18000, Map.of("display", 0.8, "midspan", 1.0)),
-            new Mode(9.1 * HZ, 0.015, 15000, Map.of("display", 1.0, "midspan", 0.45))));
-    private static final FrequencyBand BAND = new FrequencyBand(460 * HZ / 60, 540 * HZ / 60);
+    private static final ModalStructure FLOOR = InventedFloor.MODES;
+    private static final FrequencyBand BAND = InventedFloor.BAND;
 
     private static SeveralAbsorbers design(ModalStructure structure, String force, String response, String at,
             int count, AbsorberSetTuning tuning, double totalMass, FrequencyBand band, double amplitude) {
