@@ -193,4 +193,43 @@ class SetCommissioningTest {
                 measured(FLOOR, design.absorbers(), 0, 6), false, List.of(450.0)));
         assertEquals("absorber masses as weighed", e.field());
     }
+
+    @Test
+    void threeUniformlySpreadAbsorbersOnOneModeWithTheModeOffAreEachFound() {
+        // an invented rig: one mode of 1200 kg at 31 Hz, 1 % damping, three absorbers of 20 kg over 26 to 36 Hz
+        ModalStructure rig = ModalStructure.singleMode("rig", 31 * HZ, 0.01, 1200);
+        FrequencyBand band = new FrequencyBand(26 * HZ, 36 * HZ);
+        AbsorberLayout layout = new AbsorberLayout(rig, List.of("rig mode"), "rig", "rig", "rig", OptionalInt.empty(),
+                3, AbsorberSetTuning.UNIFORM);
+        Structure single = new Structure(1200, 1200 * 31 * HZ * 31 * HZ, 0.01, 1.0);
+        DesignStudy study = new DesignStudy("invented rig", single, new Excitation(ExcitationKind.FORCE, 250, band),
+                ResponseKind.DISPLACEMENT, AbsorberSizing.ofMass(60), DesignMethod.EXACT_PEAK, false, 1.5);
+        SeveralAbsorbers set = SeveralAbsorbersDesigner.design(Designer.design(study), layout);
+        double[] f = {1.03, 0.98, 1.01};
+        ModalStructure off = AsBuiltSetFit.withModeFrequency(rig, 0, 31 * HZ * 1.04);
+        List<PointAbsorber> built = new ArrayList<>();
+        for (int j = 0; j < 3; j++) {
+            PointAbsorber d = set.absorbers().get(j);
+            built.add(new PointAbsorber("rig", d.mass(), d.stiffness() * f[j] * f[j], d.damping() * 0.8));
+        }
+        int lines = 321;
+        double[] w = new double[lines];
+        double[] re = new double[lines];
+        double[] im = new double[lines];
+        for (int i = 0; i < lines; i++) {
+            w[i] = (20 + 20.0 * i / (lines - 1)) * HZ;
+            Complex h = ModalDirectSolve.solve(off.modes(), built, "rig", "rig", w[i])[0].multiply(-w[i] * w[i]);
+            re[i] = h.getReal();
+            im[i] = h.getImaginary();
+        }
+        SetCommissioning check = SetCommissioning.of(set, new MeasuredFrf(w, re, im, new double[0],
+                FrfKind.ACCELERANCE), true, List.of());
+        assertEquals(31 * HZ * 1.04, check.built().targetModeFrequency(), 1e-6 * 31 * HZ);
+        for (int j = 0; j < 3; j++) {
+            PointAbsorber d = set.absorbers().get(j);
+            assertEquals(d.frequency() * f[j], check.built().absorbers().get(j).frequency(), 1e-6 * d.frequency());
+            // the targets follow the mode: each absorber's design frequency times 1.04
+            assertEquals(f[j] / 1.04 - 1, check.corrections().get(j).frequencyOff(), 1e-6);
+        }
+    }
 }
