@@ -21,7 +21,7 @@ final class AbsorberSetCheck {
     private AbsorberSetCheck() {
     }
 
-    static AbsorberSetCertificate certify(AbsorberSetVariables v, double[] p, double peak, List<double[]> scan,
+    static AbsorberSetCertificate certify(MinimaxVariables v, double[] p, double peak, List<double[]> scan,
             EvaluationCounter counter) {
         counter.add(1);
         List<double[]> gradients = new ArrayList<>();
@@ -47,7 +47,7 @@ final class AbsorberSetCheck {
                 least, certified);
     }
 
-    private static double stationarity(AbsorberSetVariables v, double[] p, List<double[]> gradients) {
+    private static double stationarity(MinimaxVariables v, double[] p, List<double[]> gradients) {
         if (gradients.isEmpty()) {
             return Double.POSITIVE_INFINITY;
         }
@@ -96,7 +96,7 @@ final class AbsorberSetCheck {
     }
 
     /** @return the least relative change of the peak over seeded random small moves inside the box */
-    private static double perturbationLeast(AbsorberSetVariables v, double[] p, double peak, EvaluationCounter counter) {
+    private static double perturbationLeast(MinimaxVariables v, double[] p, double peak, EvaluationCounter counter) {
         Random random = new Random(SEED);
         double[] lo = v.lower();
         double[] hi = v.upper();

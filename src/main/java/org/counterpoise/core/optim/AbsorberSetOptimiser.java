@@ -15,7 +15,7 @@ import org.counterpoise.core.response.ResponseKind;
  * <p>Method. The peak is the largest of finitely many smooth functions of the variables: the
  * interior maxima of |H|^2 (found exactly by the polynomial peak search on the exact rational H of
  * {@code ModalSystem}) and the band ends. From each seed, sequential linear programming in a trust
- * region ({@link MinimaxTrustRegion}) approaches a minimax point; Newton's method on its first-order
+ * region ({@link MinimaxTrustRegion}, in {@link MinimaxSearch}) approaches a minimax point; Newton's method on its first-order
  * conditions ({@link MinimaxKkt}) then makes the active maxima equal to round-off. Seeds: for the
  * uniform spread, the certified single-absorber optimum of the same total mass ({@link
  * HInfinityOptimiser}; Den Hartog's equal-peak design when the structure is undamped and the band
@@ -28,10 +28,6 @@ import org.counterpoise.core.response.ResponseKind;
  * (at most twice).
  */
 public final class AbsorberSetOptimiser {
-    private static final double[] ACTIVE_TOLERANCES = {1e-8, 1e-6, 1e-4, 1e-3, 1e-2};
-    private static final int MAX_RESTARTS = 2;
-    private static final double SEED_CUTOFF = 1.2;
-
     private AbsorberSetOptimiser() {
     }
 
@@ -47,48 +43,9 @@ public final class AbsorberSetOptimiser {
         // the closed-form seeds are always pursued; the scan's two best (uniform only) only when promising
         int structured = problem.tuning() == AbsorberSetTuning.UNIFORM ? seeds.size() - Math.min(2, scan.size())
                 : seeds.size();
-        double[] best = null;
-        double bestPeak = Double.POSITIVE_INFINITY;
-        AbsorberSetCertificate certificate = null;
-        for (int restart = 0; restart <= MAX_RESTARTS; restart++) {
-            for (int i = 0; i < seeds.size(); i++) {
-                double[] seed = seeds.get(i);
-                if (i >= structured && v.peak(seed) > SEED_CUTOFF * bestPeak) {
-                    continue; // as for one absorber: a seed far above an optimum already found is not pursued
-                }
-                double[] p = localOptimum(v, seed, counter);
-                double peak = v.peak(p);
-                counter.add(1);
-                if (peak < bestPeak) {
-                    best = p;
-                    bestPeak = peak;
-                }
-            }
-            certificate = AbsorberSetCheck.certify(v, best, bestPeak, scan, counter);
-            double[] lowest = scan.get(0);
-            if (lowest[lowest.length - 1] >= bestPeak * (1 - AbsorberSetCertificate.NOT_BEATEN)) {
-                break;
-            }
-            seeds = List.of(Arrays.copyOf(lowest, lowest.length - 1));
-        }
-        return new AbsorberSetOptimum(problem, v.design(best), bestPeak, certificate, counter.count());
-    }
-
-    /** Trust-region linear programming, then Newton on the optimality conditions of the active set. */
-    private static double[] localOptimum(AbsorberSetVariables v, double[] seed, EvaluationCounter counter) {
-        double[] p = MinimaxTrustRegion.minimise(v, seed, counter);
-        double peak = v.peak(p);
-        for (double tolerance : ACTIVE_TOLERANCES) {
-            double[] q = MinimaxKkt.polish(v, p, tolerance, counter);
-            if (q != null) {
-                double qPeak = v.peak(q);
-                counter.add(1);
-                if (qPeak <= peak * (1 + 1e-12)) {
-                    return q; // the first active set whose conditions are solved without raising the peak
-                }
-            }
-        }
-        return p;
+        MinimaxSearch.Result result = MinimaxSearch.run(v, seeds, structured, scan, counter);
+        return new AbsorberSetOptimum(problem, v.design(result.point()), result.peak(), result.certificate(),
+                counter.count());
     }
 
     private static List<double[]> seeds(AbsorberSetVariables v, List<double[]> scan, EvaluationCounter counter) {

@@ -50,15 +50,39 @@ final class AbsorberSetScan {
                 }
             }
         } else {
-            Random random = new Random(SEED);
-            for (int i = 0; i < RANDOM_POINTS; i++) {
-                double[] p = new double[lo.length];
-                for (int k = 0; k < p.length; k++) {
-                    p[k] = lo[k] + (hi[k] - lo[k]) * random.nextDouble();
-                }
-                points.add(p);
-            }
+            points.addAll(random(v));
         }
+        return evaluate(v, points, counter);
+    }
+
+    /**
+     * @param v the variables
+     * @return {@value #RANDOM_POINTS} points drawn (seeded) uniformly in the box of the variables
+     *     (log-uniformly in each tuning and damping, as the variables are logarithms)
+     */
+    static List<double[]> random(MinimaxVariables v) {
+        double[] lo = v.lower();
+        double[] hi = v.upper();
+        List<double[]> points = new ArrayList<>();
+        Random random = new Random(SEED);
+        for (int i = 0; i < RANDOM_POINTS; i++) {
+            double[] p = new double[lo.length];
+            for (int k = 0; k < p.length; k++) {
+                p[k] = lo[k] + (hi[k] - lo[k]) * random.nextDouble();
+            }
+            points.add(p);
+        }
+        return points;
+    }
+
+    /**
+     * @param v the variables
+     * @param points the scan's points
+     * @param counter counts transfer functions built
+     * @return {p..., peak} for every point, lowest peak first; the lowest peak taken again on the
+     *     factored route
+     */
+    static List<double[]> evaluate(MinimaxVariables v, List<double[]> points, EvaluationCounter counter) {
         List<double[]> out = new ArrayList<>();
         for (double[] p : points) {
             double[] row = new double[p.length + 1];

@@ -1,13 +1,8 @@
 package org.counterpoise.core.optim;
 
-import java.util.ArrayList;
-import java.util.List;
-import org.counterpoise.core.rational.PeakFinder;
-import org.counterpoise.core.rational.RealPolynomials;
-import org.counterpoise.core.rational.RealRoots;
+import java.util.function.DoubleUnaryOperator;
 import org.counterpoise.core.rational.TransferFunction;
 import org.counterpoise.core.system.AbsorberSensitivity;
-import org.counterpoise.core.system.FactoredPeaks;
 
 /**
  * The design variables of several absorbers on one mode, as the minimax solvers see them: a point p
@@ -20,7 +15,7 @@ import org.counterpoise.core.system.FactoredPeaks;
  * </ul>
  * Logarithms keep the variables dimensionless and of order one, and the damping above zero.
  */
-final class AbsorberSetVariables {
+final class AbsorberSetVariables implements MinimaxVariables {
     private final AbsorberSetProblem problem;
     private final int n;
     private final boolean uniform;
@@ -35,11 +30,13 @@ final class AbsorberSetVariables {
         return problem;
     }
 
-    int dimension() {
+    @Override
+    public int dimension() {
         return uniform ? (n == 1 ? 2 : 3) : 2 * n;
     }
 
-    double[] lower() {
+    @Override
+    public double[] lower() {
         double[] out = new double[dimension()];
         for (int k = 0; k < out.length; k++) {
             out[k] = isSpread(k) ? 0.0 : isDamping(k) ? Math.log(AbsorberSetProblem.MIN_DAMPING)
@@ -48,7 +45,8 @@ final class AbsorberSetVariables {
         return out;
     }
 
-    double[] upper() {
+    @Override
+    public double[] upper() {
         double[] out = new double[dimension()];
         for (int k = 0; k < out.length; k++) {
             out[k] = isSpread(k) ? AbsorberSetProblem.MAX_SPREAD : isDamping(k) ? Math.log(AbsorberSetProblem.MAX_DAMPING)
@@ -115,7 +113,8 @@ final class AbsorberSetVariables {
         return p;
     }
 
-    TransferFunction transferFunction(double[] p) {
+    @Override
+    public TransferFunction transferFunction(double[] p) {
         return problem.transferFunction(design(p));
     }
 
@@ -124,7 +123,8 @@ final class AbsorberSetVariables {
      * @param x squared frequency ratio of a maximum
      * @return d ln|H|^2 / dp at frozen x
      */
-    double[] gradient(double[] p, double x) {
+    @Override
+    public double[] gradient(double[] p, double x) {
         AbsorberSetDesign d = design(p);
         double[][] g = AbsorberSensitivity.gradient(problem.system(d), AbsorberSetProblem.POINT,
                 AbsorberSetProblem.POINT, Math.sqrt(x));
@@ -145,14 +145,23 @@ final class AbsorberSetVariables {
         return out;
     }
 
-    /**
-     * @param p the point
-     * @param x squared frequency ratio
-     * @return ln|H|^2 from the factored form, well conditioned (see {@link #logMagnitudeSquared(double[], double[], double, double)})
-     */
-    double logMagnitudeSquared(double[] p, double x) {
+    @Override
+    public DoubleUnaryOperator logMagnitudeSquared(double[] p) {
         AbsorberSetDesign d = design(p);
-        return logMagnitudeSquared(tunings(d), dampings(d), x, problem.structureDamping());
+        double[] f = tunings(d);
+        double[] z = dampings(d);
+        double zeta1 = problem.structureDamping();
+        return x -> logMagnitudeSquared(f, z, x, zeta1);
+    }
+
+    @Override
+    public double bandLow() {
+        return problem.bandLow();
+    }
+
+    @Override
+    public double bandHigh() {
+        return problem.bandHigh();
     }
 
     /**
@@ -186,92 +195,5 @@ final class AbsorberSetVariables {
 
     private static double[] dampings(AbsorberSetDesign d) {
         return d.dampingRatios().stream().mapToDouble(Double::doubleValue).toArray();
-    }
-
-    /**
-     * @param p the point
-     * @param x squared frequency ratio (&gt; 0)
-     * @return x d/dx ln|H|^2 (zero at an interior maximum), by central differences in ln x of the
-     *     factored form (step 1e-5: truncation about 1e-10, round-off about 1e-11)
-     */
-    double slope(double[] p, double x) {
-        AbsorberSetDesign d = design(p);
-        double[] f = tunings(d);
-        double[] z = dampings(d);
-        double h = 1e-5;
-        double zeta1 = problem.structureDamping();
-        return (logMagnitudeSquared(f, z, x * Math.exp(h), zeta1) - logMagnitudeSquared(f, z, x * Math.exp(-h), zeta1))
-                / (2 * h);
-    }
-
-    /**
-     * @param p the point
-     * @return the peak over the band from the expanded polynomials alone (for the coarse scan)
-     */
-    double polynomialPeak(double[] p) {
-        return PeakFinder.over(transferFunction(p), problem.bandLow(), problem.bandHigh()).magnitude();
-    }
-
-    /**
-     * The exact peak over the band: the largest of {@link #maxima}.
-     *
-     * @param p the point
-     * @return max |H| over the band
-     */
-    double peak(double[] p) {
-        return Math.exp(MinimaxTrustRegion.level(maxima(p)) / 2);
-    }
-
-    /**
-     * The smooth pieces of the peak: every interior local maximum of |H|^2 in the band and the band's
-     * finite ends, the maxima located by {@link FactoredPeaks} (brackets from the poles, a sweep and
-     * the polynomial roots, each refined by Brent's method on the factored ln|H|^2; the expanded
-     * polynomials alone lose digits at flat or close peaks) and their values from the factored form.
-     *
-     * @param p the point
-     * @return {x = g^2, 1 for interior or 0 for a band end, ln|H|^2}
-     */
-    List<double[]> maxima(double[] p) {
-        return pieces(p, false);
-    }
-
-    /**
-     * The maxima and, with {@code shoulders}, also every root of R' in the band (where a peak is
-     * about to be born from a shoulder as the design moves): each is |H|^2 at a frozen frequency, a
-     * lower bound of the peak, so adding them to a linear model of the peak only makes it truer. Without them the trust
-     * region collapses where a new peak rises that the model cannot see (three individually tuned
-     * absorbers on a light structure do this).
-     *
-     * @param p the point
-     * @param shoulders true to add the shoulders (marked 2 in the second column)
-     * @return {x, 1 interior maximum / 0 band end / 2 shoulder, ln|H|^2}
-     */
-    List<double[]> pieces(double[] p, boolean shoulders) {
-        AbsorberSetDesign d = design(p);
-        TransferFunction h = problem.transferFunction(d);
-        double[] f = tunings(d);
-        double[] z = dampings(d);
-        double zeta1 = problem.structureDamping();
-        double low = problem.bandLow() * problem.bandLow();
-        double high = problem.bandHigh() * problem.bandHigh();
-        List<double[]> out = new ArrayList<>(FactoredPeaks.maxima(h, x -> logMagnitudeSquared(f, z, x, zeta1), low, high));
-        double[] r = RealPolynomials.quotientDerivativeNumerator(h.magnitudeNumeratorInX(), h.magnitudeDenominatorInX());
-        if (shoulders) {
-            double[] dr = new double[Math.max(1, r.length - 1)];
-            for (int i = 1; i < r.length; i++) {
-                dr[i - 1] = i * r[i];
-            }
-            for (double x : RealRoots.roots(dr, low, Math.min(high, Double.MAX_VALUE))) {
-                if (x > low && x < high) {
-                    out.add(new double[] {x, 2, logMagnitudeSquared(f, z, x, zeta1)});
-                }
-            }
-        }
-        // the low end always (at zero frequency the static response, which no absorber changes)
-        out.add(new double[] {low, 0, logMagnitudeSquared(f, z, low, zeta1)});
-        if (Double.isFinite(high)) {
-            out.add(new double[] {high, 0, logMagnitudeSquared(f, z, high, zeta1)});
-        }
-        return out;
     }
 }

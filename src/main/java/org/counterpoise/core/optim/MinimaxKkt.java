@@ -28,12 +28,12 @@ final class MinimaxKkt {
      */
     private static final double ROUND_OFF = 1e-6;
 
-    private final AbsorberSetVariables v;
+    private final MinimaxVariables v;
     private final double[] base;
     private final boolean[] free;
     private final double[][] active;
 
-    private MinimaxKkt(AbsorberSetVariables v, double[] base, boolean[] free, double[][] active) {
+    private MinimaxKkt(MinimaxVariables v, double[] base, boolean[] free, double[][] active) {
         this.v = v;
         this.base = base;
         this.free = free;
@@ -47,7 +47,7 @@ final class MinimaxKkt {
      * @param counter counts transfer functions built
      * @return the solved point, or null when Newton did not converge for this active set
      */
-    static double[] polish(AbsorberSetVariables v, double[] p, double tolerance, EvaluationCounter counter) {
+    static double[] polish(MinimaxVariables v, double[] p, double tolerance, EvaluationCounter counter) {
         double[] lo = v.lower();
         double[] hi = v.upper();
         boolean[] free = new boolean[p.length];

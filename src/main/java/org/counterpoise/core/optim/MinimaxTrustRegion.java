@@ -18,7 +18,7 @@ import org.apache.commons.math3.optim.nonlinear.scalar.GoalType;
  * in a trust region (Madsen 1975, "An algorithm for minimax solution of overdetermined systems of
  * non-linear equations", J. Inst. Math. Appl. 16, 321-328): at p, each maximum h_i is replaced by
  * its linearisation v_i + g_i . delta (exact gradients at the frozen frequency; shoulders where a
- * peak may be born join as further frozen-frequency pieces, see {@link AbsorberSetVariables#pieces}),
+ * peak may be born join as further frozen-frequency pieces, see {@link MinimaxVariables#pieces}),
  * the linear program
  * min t subject to v_i + g_i . delta &lt;= F + t, |delta_k| &lt;= r and the box is solved by Commons
  * Math's simplex method, and the step is kept when the true peak falls by at least 1 % of the
@@ -38,7 +38,7 @@ final class MinimaxTrustRegion {
      * @param counter counts transfer functions built
      * @return the point reached
      */
-    static double[] minimise(AbsorberSetVariables v, double[] start, EvaluationCounter counter) {
+    static double[] minimise(MinimaxVariables v, double[] start, EvaluationCounter counter) {
         double[] lo = v.lower();
         double[] hi = v.upper();
         double[] p = start.clone();
@@ -93,7 +93,7 @@ final class MinimaxTrustRegion {
     }
 
     /** @return {delta_1 .. delta_d, t} of the linear program, or null when it could not be solved */
-    private static double[] linearStep(AbsorberSetVariables v, double[] p, List<double[]> maxima, double level,
+    private static double[] linearStep(MinimaxVariables v, double[] p, List<double[]> maxima, double level,
             double radius, double[] lo, double[] hi) {
         int d = p.length;
         List<LinearConstraint> constraints = new ArrayList<>();

@@ -88,10 +88,7 @@ public final class AbsorberSetTable {
                     o.problem().structureDamping(), band(o)));
             out.append(String.format(Locale.ROOT, "peak %.12g (one absorber of the same total mass: %.12g)%n", o.peak(),
                     row.singlePeak()));
-            out.append(c.certified() ? String.format(Locale.ROOT, "certified: %d equal peaks (to %.1e), first-order"
-                    + " conditions to %.1e, none of %d scanned designs and %d small moves lower%n", c.activePeaks(),
-                    c.activeSpread(), c.stationarity(), c.scanPoints(), c.perturbations())
-                    : "NOT FOUND: no certified optimum (the numbers are the best point seen, not an optimum)\n");
+            out.append(certificateText(c));
             out.append(String.format(Locale.ROOT, "%-9s %-12s %-14s %s%n", ABSORBER, ABSORBER_MASS_RATIO, TUNING_RATIO,
                     DAMPING_RATIO));
             AbsorberSetDesign d = o.design();
@@ -103,9 +100,27 @@ public final class AbsorberSetTable {
         return out.toString();
     }
 
+    /**
+     * @param c a certificate
+     * @return its line of the text output
+     */
+    static String certificateText(AbsorberSetCertificate c) {
+        return c.certified() ? String.format(Locale.ROOT, "certified: %d equal peaks (to %.1e), first-order"
+                + " conditions to %.1e, none of %d scanned designs and %d small moves lower%n", c.activePeaks(),
+                c.activeSpread(), c.stationarity(), c.scanPoints(), c.perturbations())
+                : "NOT FOUND: no certified optimum (the numbers are the best point seen, not an optimum)\n";
+    }
+
     private static String band(AbsorberSetOptimum o) {
-        double lo = o.problem().bandLow();
-        double hi = o.problem().bandHigh();
+        return band(o.problem().bandLow(), o.problem().bandHigh());
+    }
+
+    /**
+     * @param lo the band's low end, frequency ratio
+     * @param hi its high end (+infinity: open)
+     * @return the band in words
+     */
+    static String band(double lo, double hi) {
         if (lo == 0 && Double.isInfinite(hi)) {
             return "all frequencies";
         }
@@ -161,19 +176,28 @@ public final class AbsorberSetTable {
                 absorbers.add(a);
             }
             object.add(ABSORBER, absorbers);
-            AbsorberSetCertificate c = o.certificate();
-            JsonObject cert = new JsonObject();
-            cert.addProperty(ACTIVE_PEAKS, c.activePeaks());
-            JsonNumbers.put(cert, ACTIVE_SPREAD, c.activeSpread());
-            JsonNumbers.put(cert, STATIONARITY, c.stationarity());
-            cert.addProperty(SCAN_POINTS, c.scanPoints());
-            JsonNumbers.put(cert, SCAN_BEST, c.scanBest());
-            cert.addProperty(PERTURBATIONS, c.perturbations());
-            JsonNumbers.put(cert, PERTURBATION_LEAST, c.perturbationLeast());
-            object.add(CERTIFICATE, cert);
-            object.addProperty(CONVERGED, c.certified());
-            object.addProperty(STATUS, c.certified() ? "certified" : "not found");
+            certify(object, o.certificate());
             return object;
         }
+    }
+
+    /**
+     * Adds a certificate's object and the status keys.
+     *
+     * @param object the case's JSON object
+     * @param c its certificate
+     */
+    static void certify(JsonObject object, AbsorberSetCertificate c) {
+        JsonObject cert = new JsonObject();
+        cert.addProperty(ACTIVE_PEAKS, c.activePeaks());
+        JsonNumbers.put(cert, ACTIVE_SPREAD, c.activeSpread());
+        JsonNumbers.put(cert, STATIONARITY, c.stationarity());
+        cert.addProperty(SCAN_POINTS, c.scanPoints());
+        JsonNumbers.put(cert, SCAN_BEST, c.scanBest());
+        cert.addProperty(PERTURBATIONS, c.perturbations());
+        JsonNumbers.put(cert, PERTURBATION_LEAST, c.perturbationLeast());
+        object.add(CERTIFICATE, cert);
+        object.addProperty(CONVERGED, c.certified());
+        object.addProperty(STATUS, c.certified() ? "certified" : "not found");
     }
 }

@@ -5,6 +5,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import org.counterpoise.core.error.Checks;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.model.ExcitationKind;
 import org.counterpoise.core.optim.AbsorberSetOptimiser;
@@ -42,28 +43,21 @@ final class AbsorberSetRun {
         if (o.json() && o.csv()) {
             throw new InvalidInputException("--json", "given with --csv", "choose one output format");
         }
-        refuseUnless(o.objective().equals("peak"), "--objective", o.objective(), "peak (several absorbers are designed"
-                + " for the least peak only)");
-        refuseUnless(o.excitation().equals("force"), "--excitation", o.excitation(), "force (several absorbers are"
-                + " designed for force to displacement)");
-        refuseUnless(o.response().equals("displacement"), "--response", o.response(), "displacement (several absorbers"
-                + " are designed for force to displacement)");
-        refuseUnless(o.fixedDamping() == null && o.fixedTuning() == null && o.strokeLimit() == null && o.cases() == null,
-                "--absorbers", String.valueOf(o.absorbers()), "no --fixed-damping, --fixed-tuning, --stroke-limit or"
-                        + " --cases with several absorbers");
+        refuseOtherProblems(o);
+        if (o.onePerMode()) {
+            return JointAbsorberRun.run(o, out);
+        }
+        if (o.secondModeMass() != null) {
+            throw new InvalidInputException("--second-mode-mass", Checks.show(o.secondModeMass()),
+                    "only with --one-per-mode (the spillover of absorbers on mode 1 takes a second mode of the first's"
+                            + " modal mass)");
+        }
         int n = o.absorbers() == null ? 1 : o.absorbers();
         AbsorberSetTuning tuning = parseTuning(o.tuning());
-        if (o.massRatio() == null) {
-            throw InvalidInputException.missing("--mass-ratio", "give a value such as 0.05 or a range LO:HI:N");
-        }
+        double[][] grid = grid(o);
+        double[] mus = grid[0];
+        double[] zetas = grid[1];
         double[] g = OptimumCommand.parseBand(o.band());
-        double[] mus = OptimumCommand.range("--mass-ratio", o.massRatio());
-        double[] zetas = OptimumCommand.range("--structure-damping", o.structureDamping());
-        if ((long) mus.length * zetas.length > MAX_CASES) {
-            throw new InvalidInputException("--mass-ratio", mus.length + " values times --structure-damping "
-                    + zetas.length + " values", "at most " + MAX_CASES + " cases with several absorbers (each takes up"
-                    + " to about a second)");
-        }
         if (o.secondMode() != null && !(o.secondMode() > 1 && o.secondMode() <= 100)) {
             throw new InvalidInputException("--second-mode", PlainText.quote(String.valueOf(o.secondMode())),
                     "a ratio of the second natural frequency to the first, above 1 and at most 100");
@@ -98,6 +92,43 @@ final class AbsorberSetRun {
                 format));
         out.flush();
         return 0;
+    }
+
+    /**
+     * Refuses, by name, the options the optimisers of several absorbers do not take: they solve force
+     * to displacement, least peak, with no fixed variable, stroke limit or file of cases.
+     *
+     * @param o the options as typed
+     */
+    static void refuseOtherProblems(OptimumCommand.Options o) {
+        refuseUnless(o.objective().equals("peak"), "--objective", o.objective(), "peak (several absorbers are designed"
+                + " for the least peak only)");
+        refuseUnless(o.excitation().equals("force"), "--excitation", o.excitation(), "force (several absorbers are"
+                + " designed for force to displacement)");
+        refuseUnless(o.response().equals("displacement"), "--response", o.response(), "displacement (several absorbers"
+                + " are designed for force to displacement)");
+        refuseUnless(o.fixedDamping() == null && o.fixedTuning() == null && o.strokeLimit() == null && o.cases() == null,
+                "--absorbers", String.valueOf(o.absorbers()), "no --fixed-damping, --fixed-tuning, --stroke-limit or"
+                        + " --cases with several absorbers");
+    }
+
+    /**
+     * @param o the options as typed
+     * @return the mass ratios and structure damping ratios asked for, {mus, zetas}, at most
+     *     {@value #MAX_CASES} cases together
+     */
+    static double[][] grid(OptimumCommand.Options o) {
+        if (o.massRatio() == null) {
+            throw InvalidInputException.missing("--mass-ratio", "give a value such as 0.05 or a range LO:HI:N");
+        }
+        double[] mus = OptimumCommand.range("--mass-ratio", o.massRatio());
+        double[] zetas = OptimumCommand.range("--structure-damping", o.structureDamping());
+        if ((long) mus.length * zetas.length > MAX_CASES) {
+            throw new InvalidInputException("--mass-ratio", mus.length + " values times --structure-damping "
+                    + zetas.length + " values", "at most " + MAX_CASES + " cases with several absorbers (each takes up"
+                    + " to about a second)");
+        }
+        return new double[][] {mus, zetas};
     }
 
     /** Most cases in one run with several absorbers: each takes a few hundred milliseconds. */

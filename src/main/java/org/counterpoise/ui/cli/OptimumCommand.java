@@ -113,6 +113,16 @@ public final class OptimumCommand implements Callable<Integer> {
                     + " ${DEFAULT-VALUE})")
     private double secondModeShape;
 
+    @Option(names = "--second-mode-mass", paramLabel = "M",
+            description = "with --one-per-mode: the second mode's modal mass over the first's (default 1)")
+    private Double secondModeMass;
+
+    @Option(names = "--one-per-mode",
+            description = "with --second-mode: one absorber on each of the two modes, at the same point, tuned and"
+                    + " damped jointly for the least peak of the two-mode structure; beside it the sequential design"
+                    + " (each absorber designed on its own mode alone)")
+    private boolean onePerMode;
+
     @Option(names = "--json", description = "print a JSON array of objects")
     private boolean json;
 
@@ -137,7 +147,7 @@ public final class OptimumCommand implements Callable<Integer> {
             case "variance" -> true;
             default -> throw new InvalidInputException("--objective", objective, "peak or variance");
         };
-        if (absorbers != null || tuning != null || secondMode != null) {
+        if (absorbers != null || tuning != null || secondMode != null || secondModeMass != null || onePerMode) {
             return AbsorberSetRun.run(this, spec.commandLine().getOut());
         }
         List<PeakProblem> problems = cases == null ? fromOptions() : fromCases(cases);
@@ -187,13 +197,14 @@ public final class OptimumCommand implements Callable<Integer> {
     /** @return the options as typed, for {@link AbsorberSetRun} */
     Options options() {
         return new Options(massRatio, structureDamping, excitation, response, objective, band, fixedDamping, fixedTuning,
-                strokeLimit, cases, absorbers, tuning, secondMode, secondModeShape, json, csv);
+                strokeLimit, cases, absorbers, tuning, secondMode, secondModeShape, secondModeMass, onePerMode, json, csv);
     }
 
     /** The options of one run, as typed. */
     record Options(String massRatio, String structureDamping, String excitation, String response, String objective,
             String band, Double fixedDamping, Double fixedTuning, Double strokeLimit, Path cases, Integer absorbers,
-            String tuning, Double secondMode, double secondModeShape, boolean json, boolean csv) {
+            String tuning, Double secondMode, double secondModeShape, Double secondModeMass, boolean onePerMode,
+            boolean json, boolean csv) {
     }
 
     private static final Map<String, String> OPTIONS = Map.of("mass ratio", "--mass-ratio", "structure damping",
