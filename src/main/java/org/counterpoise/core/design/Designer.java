@@ -74,13 +74,35 @@ public final class Designer {
      * @return the design and every figure a report shows
      */
     public static DesignResult design(DesignStudy study) {
-        Structure structure = study.structure();
-        Excitation excitation = study.excitation();
-        FrequencyBand band = excitation.band();
         List<Warning> warnings = new ArrayList<>();
         // the constraint that holds an exact-peak optimum back, set where the optimum is found
         ActiveConstraint[] active = {ActiveConstraint.NONE};
         ClosedForm chosen = choose(study, warnings, active);
+        return built(study, chosen, warnings, active[0]);
+    }
+
+    /**
+     * The design of a study whose tuning is already chosen elsewhere (one absorber of a set, tuned
+     * with the others by {@link SeveralAbsorbersDesigner}), with every figure a single design has:
+     * the responses, strokes, forces and tolerated mistuning of that absorber alone on the study's
+     * structure, so that its parts are sized by the same realisation code as any design. The
+     * study's sizing and method are not used to choose the tuning.
+     *
+     * @param study the inputs (structure, disturbance, response, clearance margin)
+     * @param tuning the absorber's mass ratio, tuning ratio and damping ratio on the study's structure
+     * @param source where the tuning comes from
+     * @param note what the tuning is
+     * @return the design of that absorber alone
+     */
+    public static DesignResult ofTuning(DesignStudy study, Tuning tuning, String source, String note) {
+        return built(study, new ClosedForm(tuning, source, note), new ArrayList<>(), ActiveConstraint.NONE);
+    }
+
+    private static DesignResult built(DesignStudy study, ClosedForm chosen, List<Warning> warnings,
+            ActiveConstraint active) {
+        Structure structure = study.structure();
+        Excitation excitation = study.excitation();
+        FrequencyBand band = excitation.band();
         Tuning tuning = chosen.tuning();
         double mu = tuning.massRatio();
         Absorber absorber = Absorber.of(structure, tuning);
@@ -129,7 +151,7 @@ public final class Designer {
                 motionAfter, strokeInBand, strokeRunUp, clearance,
                 fitted.peakOver(ResponseKind.SPRING_FORCE, band), fitted.peakOver(ResponseKind.DAMPER_FORCE, band),
                 fitted.peakOver(ResponseKind.ABSORBER_FORCE, band), coupled, detuning, massDetuning,
-                structureTolerance, absorberTolerance, warnings, active[0], runUpStroke,
+                structureTolerance, absorberTolerance, warnings, active, runUpStroke,
                 study.criterion().map(c -> Assessor.of(c, excitation).acceptance(structure, tuning)),
                 ToleranceVerdict.worstCase(study, tuning));
     }

@@ -61,6 +61,20 @@ public final class ToleratedMistuning {
     }
 
     /**
+     * The same search for any mistuning whose peak a function gives: one absorber of a set mistuned
+     * alone, the set's peak over the band on the whole structure (docs/several-modes.md).
+     * @param peakAtFactor the peak, SI, with the mistuned frequency at a factor of its nominal
+     * @param allowance allowed rise of the peak (fraction, &gt; 0)
+     * @param searchLimit largest detuning searched each side (fraction, 0 to 0.9)
+     * @param bare the peak without absorbers, SI (the reference when the nominal response is cancelled)
+     * @return the tolerated factors
+     */
+    public static MistuningRange ofPeak(DoubleUnaryOperator peakAtFactor, double allowance, double searchLimit,
+            double bare) {
+        return search(peakAtFactor, allowance, searchLimit, bare);
+    }
+
+    /**
      * The structure detuning range within which the peak stays at or below an absolute target.
      * @param m the mistuning model
      * @param absorber the absorber

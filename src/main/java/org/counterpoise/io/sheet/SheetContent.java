@@ -1,18 +1,23 @@
 package org.counterpoise.io.sheet;
 
+import java.util.ArrayList;
 import java.util.EnumMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
 import org.counterpoise.core.criteria.AmplitudeConvention;
+import org.counterpoise.core.design.AbsorbersToBuild;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.MethodComparison;
+import org.counterpoise.core.design.SeveralAbsorbers;
+import org.counterpoise.core.realisation.HardwareChoice;
 import org.counterpoise.core.realisation.Realisation;
 import org.counterpoise.core.robust.MonteCarloOutcome;
 import org.counterpoise.core.robust.MonteCarloResult;
 import org.counterpoise.io.project.MeasuredSource;
 import org.counterpoise.io.project.ProjectIdentity;
+import org.counterpoise.io.text.AbsorbersToBuildContent;
 import org.counterpoise.io.text.ComparisonContent;
 import org.counterpoise.io.text.DesignContent;
 import org.counterpoise.io.text.HardwareContent;
@@ -22,6 +27,7 @@ import org.counterpoise.io.text.ReportKey;
 import org.counterpoise.io.text.ReportSection;
 import org.counterpoise.io.text.ReportSection.SectionId;
 import org.counterpoise.io.text.ReportTable;
+import org.counterpoise.io.text.SeveralAbsorbersContent;
 import org.counterpoise.io.text.UnitSystem;
 
 /**
@@ -44,15 +50,21 @@ import org.counterpoise.io.text.UnitSystem;
  * @param sketch what the arrangement sketch draws, when there is a design to draw
  * @param grids the sections whose rows are records of the same fields (the checks, the predicted
  *     response), as tables printed in their place
+ * @param toBuild for several absorbers: the table of every absorber to build and each one's own parts,
+ *     printed first; empty otherwise
+ * @param singleMark what the titles of the sections, the sketch and the charts that still describe one
+ *     absorber of the total mass add to say so; empty when the design is the absorber to build
  */
 public record SheetContent(String projectName, String notes, String date, String revision, List<ReportTable.Section> sections,
         List<String> assumptions, List<String> warnings, List<String> cautions, Optional<ReportTable.Grid> comparison,
-        ProjectIdentity identity, Optional<SketchFigures> sketch, Map<SectionId, ReportTable.Grid> grids) {
+        ProjectIdentity identity, Optional<SketchFigures> sketch, Map<SectionId, ReportTable.Grid> grids,
+        List<SheetBlock> toBuild, String singleMark) {
 
     /** Immutable copies. */
     public SheetContent {
         sections = List.copyOf(sections);
         grids = Map.copyOf(grids);
+        toBuild = List.copyOf(toBuild);
     }
 
     /** The assumptions printed on every sheet. */
@@ -128,17 +140,25 @@ public record SheetContent(String projectName, String notes, String date, String
 
     private static SheetContent of(ReportContent report, String notes, String date, String revision,
             ProjectIdentity identity, SketchFigures sketch) {
+        return of(report, notes, date, revision, identity, sketch, List.of(), List.of(), "");
+    }
+
+    private static SheetContent of(ReportContent report, String notes, String date, String revision,
+            ProjectIdentity identity, SketchFigures sketch, List<SheetBlock> toBuild, List<String> moreWarnings,
+            String singleMark) {
         // The header prints the date and revision of issue.
         List<ReportTable.Section> sections = ReportTable.of(report, Set.of(ReportKey.REVISION, ReportKey.DATE));
-        List<String> warnings = report.warnings().stream().map(ReportContent.Note::text).toList();
+        List<String> warnings = new ArrayList<>(report.warnings().stream().map(ReportContent.Note::text).toList());
+        warnings.addAll(moreWarnings);
         Map<SectionId, ReportTable.Grid> grids = new EnumMap<>(SectionId.class);
         for (ReportSection section : report.sections()) {
             ReportTable.grid(section, report.units()).ifPresent(g -> grids.put(section.id(), g));
         }
+        Optional<ReportTable.Grid> comparison = report.comparison().map(c -> ReportTable.comparison(c, report.units()))
+                .map(g -> new ReportTable.Grid(g.title() + singleMark, g.headings(), g.cells(), g.recommended(),
+                        g.chosen(), g.sentences()));
         return new SheetContent(report.name(), notes, date, revision, sections, ASSUMPTIONS, warnings,
-                report.cautions(), report.comparison().map(c -> ReportTable.comparison(c, report.units())), identity,
-                Optional.of(sketch),
-                grids);
+                report.cautions(), comparison, identity, Optional.of(sketch), grids, toBuild, singleMark);
     }
 
     /**
@@ -192,11 +212,49 @@ public record SheetContent(String projectName, String notes, String date, String
             MonteCarloOutcome monteCarlo, ProjectIdentity identity, MethodComparison comparison,
             AmplitudeConvention convention, Optional<Realisation> realisation, UnitSystem units,
             MeasuredSource measured) {
+        return of(report(r, monteCarlo, identity, comparison, realisation, units, measured).shownIn(convention), notes,
+                date, revision, identity, SketchFigures.of(r, realisation, units));
+    }
+
+    /**
+     * The sheet of a project with several modes or absorbers: the design's sheet with the section on
+     * the whole structure, and for several absorbers first every absorber to build with its own
+     * parts; the sections, sketch and charts of one absorber of the total mass say so in their title.
+     *
+     * @param r the design result (the target mode at the absorbers' point, one absorber of the total mass)
+     * @param notes the project's notes, or empty
+     * @param date date of issue
+     * @param revision revision mark
+     * @param monteCarlo the design's tolerance Monte Carlo, or why it was not run
+     * @param identity the project's identity
+     * @param comparison the comparison of design methods for the design's study
+     * @param convention the convention response values are stated in
+     * @param realisation the design's hardware, when made
+     * @param units the unit system
+     * @param measured where the structure's data came from when measured, or null when typed
+     * @param several the several absorbers designed for the same project
+     * @param hardware the project's hardware choices (each absorber's parts)
+     * @return the sheet content
+     */
+    public static SheetContent of(DesignResult r, String notes, String date, String revision,
+            MonteCarloOutcome monteCarlo, ProjectIdentity identity, MethodComparison comparison,
+            AmplitudeConvention convention, Optional<Realisation> realisation, UnitSystem units,
+            MeasuredSource measured, SeveralAbsorbers several, HardwareChoice hardware) {
+        ReportContent report = SeveralAbsorbersContent.with(report(r, monteCarlo, identity, comparison, realisation,
+                units, measured), several);
+        SketchFigures sketch = SketchFigures.of(r, realisation, units);
+        if (several.absorbers().size() == 1) {
+            return of(report.shownIn(convention), notes, date, revision, identity, sketch);
+        }
+        SeveralAbsorbersSheet build = SeveralAbsorbersSheet.of(AbsorbersToBuild.of(r, several), hardware, units);
+        return of(SeveralAbsorbersSheet.marked(report).shownIn(convention), notes, date, revision, identity, sketch,
+                build.blocks(), build.warnings(), AbsorbersToBuildContent.SINGLE_MARK);
+    }
+
+    private static ReportContent report(DesignResult r, MonteCarloOutcome monteCarlo, ProjectIdentity identity,
+            MethodComparison comparison, Optional<Realisation> realisation, UnitSystem units, MeasuredSource measured) {
         ReportContent report = MeasuredSourceContent.with(DesignContent.of(r, identity, monteCarlo, units)
                 .with(ComparisonContent.of(comparison, r.study())), measured);
-        if (realisation.isPresent()) {
-            report = HardwareContent.with(report, realisation.get(), r);
-        }
-        return of(report.shownIn(convention), notes, date, revision, identity, SketchFigures.of(r, realisation, units));
+        return realisation.map(value -> HardwareContent.with(report, value, r)).orElse(report);
     }
 }

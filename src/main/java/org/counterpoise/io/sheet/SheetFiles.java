@@ -15,9 +15,12 @@ import java.util.Map;
 import java.util.Set;
 import java.util.function.BiFunction;
 import org.counterpoise.core.criteria.AmplitudeConvention;
+import org.counterpoise.core.design.AbsorberLayout;
 import org.counterpoise.core.design.DesignCurves;
 import org.counterpoise.core.design.DesignDossier;
 import org.counterpoise.core.design.DesignResult;
+import org.counterpoise.core.design.SeveralAbsorbers;
+import org.counterpoise.core.design.SeveralAbsorbersDesigner;
 import org.counterpoise.core.error.CoreException;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.progress.ProgressListener;
@@ -193,14 +196,20 @@ public final class SheetFiles {
             UnitSystem units, MeasuredSource measured, OutputStream out) throws IOException {
         List<XYChart> charts = charts(dossier.design(), dossier.curves(), convention, units);
         SheetWriter.write(() -> content(dossier, notes, date, revision, identity, convention, hardware, units,
-                measured), charts, panels, out);
+                measured, Optional.empty()), charts, panels, out);
     }
 
     private static SheetContent content(DesignDossier dossier, String notes, String date, String revision,
             ProjectIdentity identity, AmplitudeConvention convention, HardwareChoice hardware, UnitSystem units,
-            MeasuredSource measured) {
+            MeasuredSource measured, Optional<AbsorberLayout> layout) {
         // the dossier's Monte Carlo, comparison and realisation: computed once for the project
         // state, whoever asked first
+        if (layout.isPresent()) {
+            SeveralAbsorbers several = SeveralAbsorbersDesigner.design(dossier.design(), layout.get());
+            return SheetContent.of(dossier.design(), notes, date, revision, dossier.monteCarlo(ProgressListener.NONE),
+                    identity, dossier.comparison(ProgressListener.NONE), convention, realisation(dossier, hardware),
+                    units, measured, several, hardware);
+        }
         return SheetContent.of(dossier.design(), notes, date, revision, dossier.monteCarlo(ProgressListener.NONE),
                 identity, dossier.comparison(ProgressListener.NONE), convention, realisation(dossier, hardware),
                 units, measured);
@@ -245,6 +254,7 @@ public final class SheetFiles {
         private HardwareChoice hardware = HardwareChoice.DEFAULT;
         private UnitSystem units = UnitSystem.SI;
         private MeasuredSource measured;
+        private Optional<AbsorberLayout> layout = Optional.empty();
 
         /** @param dossier the design whose sheet and exports are written, with its analyses */
         public Outputs(DesignDossier dossier) {
@@ -285,6 +295,16 @@ public final class SheetFiles {
         }
 
         /**
+         * @param several the project's modes and absorbers (format 6), or empty for one mode and one
+         *     absorber: the sheet then lists every absorber to build with its own parts
+         * @return this
+         */
+        public Outputs absorbers(Optional<AbsorberLayout> several) {
+            this.layout = several;
+            return this;
+        }
+
+        /**
          * The sheet without project identity lines.
          * @param pdf the PDF
          * @param notes the project's notes, or empty
@@ -309,7 +329,8 @@ public final class SheetFiles {
         public Outputs sheet(Path pdf, String notes, String date, String revision, String option,
                 ProjectIdentity identity) {
             return add(pdf, "sheet", option, out -> SheetWriter.write(
-                    () -> content(dossier, notes, date, revision, identity, convention, hardware, units, measured),
+                    () -> content(dossier, notes, date, revision, identity, convention, hardware, units, measured,
+                            layout),
                     charts(),
                     panels, out));
         }

@@ -178,14 +178,20 @@ public final class SheetWriter {
             }
         }
         IdentityBlocks.draw(this, content);
+        for (SheetBlock block : content.toBuild()) {
+            block(block);
+        }
+        if (!content.toBuild().isEmpty()) {
+            newPage(); // the one absorber of the total mass, for comparison, after the absorbers to build
+        }
         for (ReportTable.Section section : content.sections()) {
-            section(section);
+            section(section, content.grids());
         }
         if (content.sketch().isPresent()) {
             SketchFigures sketch = content.sketch().get();
             float height = ArrangementSketch.height(type, sketch, WIDTH - 2 * MARGIN);
             ensure(height + 40);
-            title("Arrangement (schematic, not to scale; the figures are)");
+            title("Arrangement (schematic, not to scale; the figures are)" + content.singleMark());
             ArrangementSketch.draw(stream, type, sketch, MARGIN, y, WIDTH - 2 * MARGIN);
             y -= height + 8;
         }
@@ -193,7 +199,7 @@ public final class SheetWriter {
             comparison(content.comparison().get());
         }
         ensure(CHART_HEIGHT + 60);
-        title("Response with and without the absorber");
+        title("Response with and without the absorber" + content.singleMark());
         charts(charts);
         for (SheetPanel panel : panels) {
             if (!panel.charts().isEmpty()) {
@@ -260,8 +266,23 @@ public final class SheetWriter {
         y -= LINE;
     }
 
-    private void section(ReportTable.Section section) throws IOException {
-        ReportTable.Grid grid = content.grids().get(section.id());
+    /** A block of tables under its own heading, on a fresh page when it has one. */
+    private void block(SheetBlock block) throws IOException {
+        if (!block.title().isEmpty()) {
+            newPage();
+            heading(clean(block.title()), 13f, INK);
+            y -= 4;
+            for (String sentence : block.sentences()) {
+                paragraph(sentence);
+            }
+        }
+        for (ReportTable.Section section : block.sections()) {
+            section(section, block.grids());
+        }
+    }
+
+    private void section(ReportTable.Section section, Map<SectionId, ReportTable.Grid> grids) throws IOException {
+        ReportTable.Grid grid = grids.get(section.id());
         if (grid != null) {
             comparison(grid);
             return;
@@ -302,7 +323,7 @@ public final class SheetWriter {
 
     private void row(ReportTable.Row row) throws IOException {
         if (row.textual()) {
-            List<String> lines = wrap(clean(row.value()), WIDTH - MARGIN - TEXT_LEFT, BODY);
+            List<String> lines = wrap(clean(ValueText.pretty(row.value())), WIDTH - MARGIN - TEXT_LEFT, BODY);
             ensure(LINE * lines.size());
             say(row.label(), MARGIN, BODY, MUTED, false);
             for (String line : lines) {

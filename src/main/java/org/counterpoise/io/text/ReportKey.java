@@ -251,7 +251,11 @@ public enum ReportKey {
     RESPONSE_PEAKS,
     TOLERATED_SPRING_RATE,
     DETUNING_TARGET,
-    ROBUSTNESS_DESIGN;
+    ROBUSTNESS_DESIGN,
+    /** one absorber of a set on the sheet's "absorbers to build" (a record of the ITEM_ fields and these two) */
+    BUILD_ABSORBER,
+    ITEM_POINT,
+    ITEM_TOLERANCE_IN_SET;
 
     private final List<String> jsonKeys;
 

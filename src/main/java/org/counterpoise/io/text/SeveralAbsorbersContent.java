@@ -28,8 +28,17 @@ public final class SeveralAbsorbersContent {
     /** Where the other sections stand when the absorber mass is split. */
     static final String ONE_ABSORBER_SECTIONS = "Several absorbers: the sections other than \"Several absorbers and"
             + " modes\" (the absorber, stroke and forces, tolerance, method comparison, hardware) are for one absorber"
-            + " of the total mass on the target mode; robustness, the sheet and the wizard do not yet take several"
-            + " absorbers.";
+            + " of the total mass on the target mode; the sheet lists every absorber to build with its own parts,"
+            + " tolerance and tuning step; robustness and the wizard do not yet take several absorbers.";
+    /** What the sheet of a project with several absorbers says first. */
+    public static final String SHEET_SEVERAL_ABSORBERS = "This project has several absorbers: every absorber to build,"
+            + " with its own parts, tolerance and tuning step, is under \"" + AbsorbersToBuildContent.TITLE + "\" and on"
+            + " the pages after it. The sections marked \"" + AbsorbersToBuildContent.SINGLE_MARK.strip() + "\" are"
+            + " for one absorber of the total mass on the target mode alone; \"Several absorbers and modes\" gives the"
+            + " whole structure's response.";
+    /** What the sheet of a project with several modes and one absorber says first. */
+    public static final String SHEET_SEVERAL_MODES = "This project has several modes: the absorber is designed on the"
+            + " target mode alone, at its point; \"Several absorbers and modes\" gives the whole structure's response.";
     /** What a front end that takes one absorber on one mode (sheet, robustness, run-up, wizard) says of such a project. */
     public static final String ONE_ABSORBER_ONLY = "This project has several modes or absorbers: what follows is for"
             + " one absorber of the total mass on the target mode alone; 'design' reports the several absorbers.";
@@ -38,8 +47,9 @@ public final class SeveralAbsorbersContent {
             + " see the target mode alone, at the absorbers' point; the other modes and points are in that section only.";
     /** A split designed for the nominal peak whatever the method. */
     static final String NOMINAL_SPLIT = "The split absorbers are tuned for the least nominal peak over the band"
-            + " (H-infinity), not for the project's method: their tolerance to mistuning is not computed, so check their"
-            + " tuning on site with care.";
+            + " (H-infinity), not for the project's method; the sheet gives each absorber's tolerance on its own"
+            + " frequency within the set, and no robust design of the set is made, so check their tuning on site with"
+            + " care.";
     /** An optimum of the split that failed its certificate. */
     static final String NOT_CERTIFIED = "The optimum of the split absorbers' tunings could not be certified"
             + " (docs/several-modes.md): treat their tunings as a good design, not the best.";

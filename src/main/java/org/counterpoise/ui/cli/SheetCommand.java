@@ -2,15 +2,17 @@ package org.counterpoise.ui.cli;
 
 import java.nio.file.Path;
 import java.time.LocalDate;
+import java.util.Optional;
 import java.util.concurrent.Callable;
 import org.counterpoise.core.criteria.AmplitudeConvention;
+import org.counterpoise.core.design.AbsorberLayout;
 import org.counterpoise.core.design.DesignDossier;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.progress.ProgressListener;
 import org.counterpoise.io.PlainText;
-import org.counterpoise.io.project.FormatMigration;
 import org.counterpoise.io.project.LoadedProject;
 import org.counterpoise.io.project.Project;
+import org.counterpoise.io.project.SeveralModes;
 import org.counterpoise.io.sheet.RunUpPanel;
 import org.counterpoise.io.sheet.SheetFiles;
 import org.counterpoise.io.text.SeveralAbsorbersContent;
@@ -64,7 +66,9 @@ public final class SheetCommand implements Callable<Integer> {
             throw new InvalidInputException("--revision", "\"" + PlainText.quote(revision) + "\"",
                     "a short mark of at most 20 characters without control characters, such as A or 2b");
         }
-        LoadedProject loaded = ProjectFiles.readForOneAbsorber(spec, file);
+        LoadedProject loaded = ProjectFiles.read(spec, file);
+        // several modes or absorbers (format 6): the sheet lists every absorber to build
+        Optional<AbsorberLayout> layout = SeveralModes.layout(loaded.project());
         DesignDossier dossier = DesignDossier.of(loaded.project().toStudy());
         dossier.design(); // a design that cannot be made is reported before any file is touched
         var identity = loaded.project().identity();
@@ -76,7 +80,8 @@ public final class SheetCommand implements Callable<Integer> {
                 .convention(DisplayConvention.of(convention, loaded.project()))
                 .hardware(loaded.project().hardware(), DisplayUnitSystem.of(units, loaded.project()))
                 .measured(loaded.project().structure().measured())
-                .sheet(output, notesOnTheSheet(loaded.project()), issued, mark, "--output", identity)
+                .absorbers(layout)
+                .sheet(output, notesOnTheSheet(loaded.project(), layout), issued, mark, "--output", identity)
                 .sparing(file, "the project file being read")
                 .panel(RunUpPanel.of(loaded.project().withDisplayUnits(DisplayUnitSystem.of(units, loaded.project())),
                         dossier.design(), ProgressListener.NONE));
@@ -94,12 +99,13 @@ public final class SheetCommand implements Callable<Integer> {
         return 0;
     }
 
-    /** The project's notes, and for several modes or absorbers what the sheet does not show. */
-    private static String notesOnTheSheet(Project p) {
-        if (FormatMigration.isOneModeOneAbsorber(p)) {
+    /** The project's notes, and for several modes or absorbers where the sheet shows them. */
+    private static String notesOnTheSheet(Project p, Optional<AbsorberLayout> layout) {
+        if (layout.isEmpty()) {
             return p.notes();
         }
-        return p.notes().isEmpty() ? SeveralAbsorbersContent.ONE_ABSORBER_ONLY
-                : p.notes() + "\n" + SeveralAbsorbersContent.ONE_ABSORBER_ONLY;
+        String note = layout.get().count() > 1 ? SeveralAbsorbersContent.SHEET_SEVERAL_ABSORBERS
+                : SeveralAbsorbersContent.SHEET_SEVERAL_MODES;
+        return p.notes().isEmpty() ? note : p.notes() + " " + note;
     }
 }

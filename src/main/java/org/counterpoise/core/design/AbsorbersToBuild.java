@@ -1,0 +1,113 @@
+package org.counterpoise.core.design;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+import org.counterpoise.core.model.Structure;
+import org.counterpoise.core.model.Tuning;
+import org.counterpoise.core.robust.MistuningRange;
+import org.counterpoise.core.robust.ToleratedMistuning;
+import org.counterpoise.core.system.ModalPeak;
+import org.counterpoise.core.system.ModalSystem;
+import org.counterpoise.core.system.PointAbsorber;
+
+/**
+ * Each absorber of a set as a workshop builds it (the sheet's "absorbers to build"):
+ * <ul>
+ *   <li>its own single design: the absorber of its own mass, tuning and damping alone on the target
+ *       mode at the absorbers' point ({@link Designer#ofTuning}), whose strokes, spring force and
+ *       clearance size its parts with the same realisation code as any design;</li>
+ *   <li>its tolerance within the set: the factors on that absorber's own frequency, the others held,
+ *       at which the set's peak over the band at the response point of the whole structure rises by
+ *       {@link DesignResult#TOLERANCE_ALLOWANCE} (its spring rate off, its damper kept, as
+ *       {@link ToleratedMistuning#ofAbsorber} does for one absorber), searched to
+ *       {@link DesignResult#TOLERANCE_SEARCH} each side on the exact peak ({@link ModalPeak}).
+ *       This tolerance, not the one of the absorber alone, is the one its parts must hold.</li>
+ * </ul>
+ *
+ * @param set the several absorbers and the whole structure's response
+ * @param absorbers each absorber to build, in the set's order
+ */
+public record AbsorbersToBuild(SeveralAbsorbers set, List<Built> absorbers) {
+
+    /** Where the tuning of each absorber's own design comes from. */
+    static final String SOURCE = "tuned with the other absorbers of its set for the least peak over the band"
+            + " (docs/several-modes.md)";
+
+    /** Copies the list. */
+    public AbsorbersToBuild {
+        absorbers = List.copyOf(absorbers);
+    }
+
+    /**
+     * One absorber of the set.
+     *
+     * @param absorber its mass, spring and damper at its point
+     * @param design its own design: this absorber alone on the target mode, with the tolerance within
+     *     the set as its absorber tolerance (what its parts are sized from)
+     * @param toleranceInSet the tolerated factors on its own frequency within the set
+     */
+    public record Built(PointAbsorber absorber, DesignResult design, MistuningRange toleranceInSet) {
+    }
+
+    /**
+     * @param design the study's design on the target mode (its structure is that mode at the absorbers'
+     *     point)
+     * @param set the several absorbers designed for the same study
+     * @return every absorber to build with its own design and tolerance within the set
+     */
+    public static AbsorbersToBuild of(DesignResult design, SeveralAbsorbers set) {
+        DesignStudy study = design.study().withCriterion(Optional.empty());
+        Structure structure = study.structure();
+        List<Built> out = new ArrayList<>();
+        for (int j = 0; j < set.absorbers().size(); j++) {
+            PointAbsorber a = set.absorbers().get(j);
+            MistuningRange tolerance = toleranceInSet(set, j);
+            double w = a.frequency();
+            // mu_j = m_j / (effective mass of the mode at the point), f_j = omega_j / omega_r,
+            // zeta_j = c_j / (2 m_j omega_j): the absorber's own figures on the single-mode structure
+            Tuning tuning = new Tuning(a.mass() / structure.effectiveMass(), w / structure.naturalFrequency(),
+                    a.damping() / (2 * a.mass() * w));
+            DesignResult own = withAbsorberTolerance(Designer.ofTuning(study, tuning, SOURCE,
+                    "absorber " + (j + 1) + " of " + set.absorbers().size()), tolerance);
+            out.add(new Built(a, own, tolerance));
+        }
+        return new AbsorbersToBuild(set, out);
+    }
+
+    /**
+     * @param set the absorbers
+     * @param j the absorber mistuned
+     * @return the factors on absorber j's own frequency (k_j by the factor squared, c_j kept) within
+     *     which the set's peak over the band rises at most by the allowance
+     */
+    static MistuningRange toleranceInSet(SeveralAbsorbers set, int j) {
+        AbsorberLayout layout = set.layout();
+        double force = set.forceAmplitude();
+        return ToleratedMistuning.ofPeak(factor -> force * ModalPeak.over(ModalSystem.of(layout.structure(),
+                mistuned(set.absorbers(), j, factor)), layout.excitationPoint(), layout.responsePoint(),
+                set.band().low(), set.band().high()), DesignResult.TOLERANCE_ALLOWANCE,
+                DesignResult.TOLERANCE_SEARCH, set.peakBefore());
+    }
+
+    /**
+     * @param absorbers the set
+     * @param j the absorber mistuned
+     * @param factor the factor on its own frequency
+     * @return the set with absorber j's spring rate times factor squared, its mass and damper kept
+     */
+    public static List<PointAbsorber> mistuned(List<PointAbsorber> absorbers, int j, double factor) {
+        List<PointAbsorber> out = new ArrayList<>(absorbers);
+        PointAbsorber a = absorbers.get(j);
+        out.set(j, new PointAbsorber(a.point(), a.mass(), a.stiffness() * factor * factor, a.damping()));
+        return out;
+    }
+
+    private static DesignResult withAbsorberTolerance(DesignResult d, MistuningRange tolerance) {
+        return new DesignResult(d.study(), d.methodSource(), d.methodNote(), d.tuning(), d.absorber(),
+                d.staticDeflection(), d.responseBefore(), d.responseAfter(), d.motionBefore(), d.motionAfter(),
+                d.strokeInBand(), d.strokeRunUp(), d.clearance(), d.springForce(), d.damperForce(), d.absorberForce(),
+                d.coupledNaturalFrequencies(), d.stiffnessDetuning(), d.massDetuning(), d.structureTolerance(),
+                tolerance, d.warnings(), d.activeConstraint(), d.runUpStroke(), d.acceptance(), d.afterWorstCase());
+    }
+}

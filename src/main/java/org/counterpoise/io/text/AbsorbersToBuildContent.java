@@ -1,0 +1,144 @@
+package org.counterpoise.io.text;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.Optional;
+import java.util.Set;
+import org.counterpoise.core.design.AbsorbersToBuild;
+import org.counterpoise.core.design.DesignResult;
+import org.counterpoise.core.realisation.ProcedureStep;
+import org.counterpoise.core.realisation.ProcedureStepKind;
+import org.counterpoise.core.realisation.Realisation;
+import org.counterpoise.core.system.PointAbsorber;
+import org.counterpoise.core.units.Dimension;
+import org.counterpoise.io.text.ReportSection.SectionId;
+import org.counterpoise.io.text.ReportValue.Field;
+import org.counterpoise.io.text.ReportValue.Fields;
+import org.counterpoise.io.text.ReportValue.Tolerance;
+import org.counterpoise.io.text.ReportValue.Words;
+
+/**
+ * What the sheet prints of a set of several absorbers ({@link AbsorbersToBuild}): the table of
+ * every absorber to build (mass, own frequency, spring rate, damping coefficient and ratio, point,
+ * tolerance on its own frequency within the set), and for each absorber its own parts, checks, part
+ * tolerances, trim and tuning steps, from the realisation of its own design.
+ */
+public final class AbsorbersToBuildContent {
+    /** The title of the table of absorbers. */
+    public static final String TITLE = "Absorbers to build";
+    /** The mark of a section that still describes one absorber of the total mass. */
+    public static final String SINGLE_MARK = " (one absorber of the total mass, for comparison)";
+    /** The steps of the procedure that tune one absorber of the set (the others are done for the set). */
+    private static final Set<ProcedureStepKind> OWN_STEPS = Set.of(ProcedureStepKind.COMPUTE_ABSORBER_TARGET,
+            ProcedureStepKind.TUNE_ABSORBER);
+
+    private AbsorbersToBuildContent() {
+    }
+
+    /**
+     * One absorber's own pages.
+     *
+     * @param title its heading
+     * @param sentences what its parts are sized from, one sentence each
+     * @param sections its parts, checks, part tolerances, trim and tuning steps (empty when its
+     *     hardware could not be sized: the sentences say why)
+     */
+    public record Absorber(String title, List<String> sentences, List<ReportSection> sections) {
+        /** Copies the lists. */
+        public Absorber {
+            sentences = List.copyOf(sentences);
+            sections = List.copyOf(sections);
+        }
+    }
+
+    /**
+     * @param b the absorbers to build
+     * @return the table of them, one row (a record of the same fields) per absorber
+     */
+    public static ReportSection table(AbsorbersToBuild b) {
+        List<ReportRow> rows = new ArrayList<>();
+        int n = b.absorbers().size();
+        for (int j = 0; j < n; j++) {
+            AbsorbersToBuild.Built built = b.absorbers().get(j);
+            PointAbsorber a = built.absorber();
+            double w = a.frequency();
+            List<Field> fields = List.of(
+                    new Field(ReportKey.ITEM_NAME, "absorber", new Words((j + 1) + " of " + n, List.of())),
+                    new Field(ReportKey.ITEM_MASS, "mass", DesignContent.quantity(a.mass(), Dimension.MASS)),
+                    new Field(ReportKey.ITEM_FREQUENCY, "own frequency", DesignContent.quantity(w, Dimension.FREQUENCY)),
+                    new Field(ReportKey.ITEM_STIFFNESS, "spring rate", DesignContent.quantity(a.stiffness(),
+                            Dimension.STIFFNESS)),
+                    new Field(ReportKey.ITEM_DAMPING, "damping coefficient", DesignContent.quantity(a.damping(),
+                            Dimension.DAMPING_COEFFICIENT)),
+                    new Field(ReportKey.ITEM_DAMPING_RATIO, "damping ratio", DesignContent.quantity(
+                            a.damping() / (2 * a.mass() * w), Dimension.RATIO)),
+                    new Field(ReportKey.ITEM_POINT, "point", new Words(a.point(), List.of(a.point()))),
+                    new Field(ReportKey.ITEM_TOLERANCE_IN_SET, "own frequency may be off",
+                            new Tolerance(built.toleranceInSet(), 1)));
+            rows.add(new ReportRow(ReportKey.BUILD_ABSORBER, "absorber " + (j + 1), "", new Fields("", fields),
+                    "", ""));
+        }
+        return new ReportSection(SectionId.SEVERAL_ABSORBERS, TITLE, rows);
+    }
+
+    /**
+     * @param b the absorbers to build
+     * @return the sentences under the table: what the figures are and where the tolerance comes from
+     */
+    public static List<String> sentences(AbsorbersToBuild b) {
+        String tuned = b.set().layout().tuning().name().toLowerCase(Locale.ROOT);
+        return List.of("Build every absorber of this table: " + b.absorbers().size() + " absorbers of equal mass at "
+                        + b.set().layout().absorberPoint() + ", tuned together (" + tuned + " tuning) for the least peak"
+                        + " over the band at the response point of the whole structure (docs/several-modes.md).",
+                "Own frequency may be off: how far that absorber's own frequency may be from its value, the others as"
+                        + " built, before the set's peak over the band rises by "
+                        + ValueText.percent(DesignResult.TOLERANCE_ALLOWANCE, 2) + " (its spring rate off, its damper"
+                        + " kept; exact peak of the whole structure, searched to "
+                        + ValueText.percent(DesignResult.TOLERANCE_SEARCH, 2) + " each side). Its parts are made to"
+                        + " this tolerance.",
+                "Each absorber's parts follow on its own pages, sized from that absorber's own figures.");
+    }
+
+    /**
+     * @param b the absorbers to build
+     * @param j the absorber
+     * @param realisation its hardware, or empty when it could not be sized
+     * @param units the unit system
+     * @return its pages
+     */
+    public static Absorber absorber(AbsorbersToBuild b, int j, Optional<Realisation> realisation, UnitSystem units) {
+        AbsorbersToBuild.Built built = b.absorbers().get(j);
+        int n = b.absorbers().size();
+        List<String> sentences = new ArrayList<>();
+        sentences.add("The parts of absorber " + (j + 1) + " are sized from that absorber's own figures: its mass "
+                + ValueText.inline(DesignContent.quantity(built.absorber().mass(), Dimension.MASS), units)
+                + ", its own frequency and damping as tabled, its strokes and spring force as if it worked alone on the"
+                + " target mode at its point (the clearance is " + ValueText.inline(DesignContent.quantity(
+                        built.design().clearance(), Dimension.LENGTH), units)
+                + "), and the tolerance on its own frequency within the set.");
+        List<ReportSection> sections = new ArrayList<>();
+        if (realisation.isEmpty()) {
+            sentences.add("Its hardware could not be sized with the project's hardware choices; see the warnings.");
+        } else {
+            String which = "Absorber " + (j + 1) + " of " + n + " \u00b7 ";
+            for (ReportSection s : HardwareContent.sections(realisation.get(), built.design(), units)) {
+                switch (s.id()) {
+                    case PART_LIST, CHECKS, PART_TOLERANCES, TRIM -> sections.add(
+                            new ReportSection(s.id(), which + s.title(), s.rows()));
+                    case PROCEDURE -> sections.add(new ReportSection(s.id(), which + "Its own tuning",
+                            tuningSteps(realisation.get(), units)));
+                    default -> {
+                        // the predicted response is the set's, not this absorber's alone
+                    }
+                }
+            }
+        }
+        return new Absorber("Absorber " + (j + 1) + " of " + n + ": its own parts", sentences, sections);
+    }
+
+    private static List<ReportRow> tuningSteps(Realisation r, UnitSystem units) {
+        List<ProcedureStep> own = r.procedure().stream().filter(s -> OWN_STEPS.contains(s.kind())).toList();
+        return ProcedureText.rows(own, units);
+    }
+}
