@@ -1,9 +1,7 @@
 package org.counterpoise.core.commission;
 
 import java.util.ArrayList;
-import java.util.HashMap;
 import java.util.List;
-import java.util.Map;
 import java.util.OptionalDouble;
 import org.apache.commons.math3.complex.Complex;
 import org.apache.commons.math3.exception.MathIllegalStateException;
@@ -18,7 +16,6 @@ import org.counterpoise.core.identify.MeasuredFrf;
 import org.counterpoise.core.system.AbsorberSensitivity;
 import org.counterpoise.core.system.ModalStructure;
 import org.counterpoise.core.system.ModalSystem;
-import org.counterpoise.core.system.Mode;
 import org.counterpoise.core.system.PointAbsorber;
 
 /**
@@ -186,7 +183,7 @@ public final class AsBuiltSetFit {
             }
             absorbers.add(PointAbsorber.tuned(d.point(), d.mass(), frequency, zeta));
         }
-        ModalStructure modes = p.length > 2 * n ? withModeFrequency(structure, targetMode,
+        ModalStructure modes = p.length > 2 * n ? structure.withFrequency(targetMode,
                 structure.modes().get(targetMode).naturalFrequency() * Math.exp(p[2 * n])) : structure;
         return predicted(modes, absorbers, measured.omega(), measured.kind());
     }
@@ -209,20 +206,6 @@ public final class AsBuiltSetFit {
             out[i] = FrfKind.RECEPTANCE.convert(h.multiply(perUnit), omega[i], kind);
         }
         return out;
-    }
-
-    /**
-     * @param structure the modes
-     * @param mode the index of one mode
-     * @param frequency its new natural frequency, rad/s
-     * @return the same modes with that one's frequency changed (mass, damping ratio and shape kept)
-     */
-    public static ModalStructure withModeFrequency(ModalStructure structure, int mode, double frequency) {
-        List<Mode> modes = new ArrayList<>(structure.modes());
-        Mode m = modes.get(mode);
-        Map<String, Double> shape = new HashMap<>(m.shape());
-        modes.set(mode, new Mode(frequency, m.dampingRatio(), m.modalMass(), shape));
-        return new ModalStructure(modes);
     }
 
     private static InvalidInputException notFitted() {

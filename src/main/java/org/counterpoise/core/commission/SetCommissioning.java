@@ -91,7 +91,7 @@ public record SetCommissioning(AsBuiltSet built, List<Correction> corrections, d
         AsBuiltSet built = AsBuiltSetFit.fit(structure, target, held, measured, freeStructure);
         double modeScale = built.targetModeFrequency() / structure.modes().get(target).naturalFrequency();
         ModalStructure asMeasured = modeScale == 1.0 ? structure
-                : AsBuiltSetFit.withModeFrequency(structure, target, built.targetModeFrequency());
+                : structure.withFrequency(target, built.targetModeFrequency());
         boolean advised = !built.warnings().contains(CommissioningWarning.POOR_FIT);
         List<Correction> corrections = new ArrayList<>();
         List<PointAbsorber> asBuilt = new ArrayList<>();

@@ -3,6 +3,7 @@ package org.counterpoise.core.design;
 import java.util.List;
 import java.util.Optional;
 import org.counterpoise.core.model.FrequencyBand;
+import org.counterpoise.core.robust.MistuningRange;
 import org.counterpoise.core.system.PointAbsorber;
 
 /**
@@ -22,12 +23,16 @@ import org.counterpoise.core.system.PointAbsorber;
  *     structure's order
  * @param single one absorber of the same total mass, least peak over the band on the target mode,
  *     and its peak on the whole structure; empty for one absorber
+ * @param structureTolerance the factors on the target mode's natural frequency (its stiffness by the
+ *     square, its mass, damping and shape kept) within which the peak over the band stays within
+ *     {@link DesignResult#TOLERANCE_ALLOWANCE} of {@code peakAfter} (searched to
+ *     {@link DesignResult#TOLERANCE_SEARCH} each side)
  * @param certified true when the optimum of the absorbers' tunings is certified (docs/several-modes.md;
  *     true for one absorber, designed by the study's own method)
  */
 public record SeveralAbsorbers(AbsorberLayout layout, int targetMode, double effectiveMass, FrequencyBand band,
         double forceAmplitude, List<PointAbsorber> absorbers, double peakBefore, double peakAfter,
-        List<ModePeak> modes, Optional<SingleAbsorber> single, boolean certified) {
+        List<ModePeak> modes, Optional<SingleAbsorber> single, boolean certified, MistuningRange structureTolerance) {
 
     /** Copies the lists. */
     public SeveralAbsorbers {
@@ -51,8 +56,9 @@ public record SeveralAbsorbers(AbsorberLayout layout, int targetMode, double eff
      *
      * @param absorber its mass, spring and damper
      * @param peak the peak over the band at the response point with it, m
+     * @param structureTolerance its tolerance to the target mode's frequency, as the set's
      */
-    public record SingleAbsorber(PointAbsorber absorber, double peak) {
+    public record SingleAbsorber(PointAbsorber absorber, double peak, MistuningRange structureTolerance) {
     }
 
     /** @return the total mass of the absorbers, kg */

@@ -15,6 +15,8 @@ import org.counterpoise.core.optim.AbsorberSetOptimum;
 import org.counterpoise.core.optim.AbsorberSetProblem;
 import org.counterpoise.core.optim.AbsorberSetTuning;
 import org.counterpoise.core.response.ResponseKind;
+import org.counterpoise.core.robust.MistuningRange;
+import org.counterpoise.core.robust.ToleratedMistuning;
 import org.counterpoise.core.system.Mode;
 import org.counterpoise.core.system.ModalPeak;
 import org.counterpoise.core.system.ModalSystem;
@@ -90,10 +92,27 @@ public final class SeveralAbsorbersDesigner {
         for (Spillover.ModePeak p : Spillover.of(after, layout.excitationPoint(), layout.responsePoint()).modes()) {
             modes.add(new SeveralAbsorbers.ModePeak(p.mode(), force * p.before(), force * p.after()));
         }
+        double bare = force * peak(after.bare(), layout, band);
         Optional<SeveralAbsorbers.SingleAbsorber> compared = single.map(a -> new SeveralAbsorbers.SingleAbsorber(a,
-                force * peak(ModalSystem.of(layout.structure(), List.of(a)), layout, band)));
-        return new SeveralAbsorbers(layout, r, effectiveMass, band, force, absorbers,
-                force * peak(after.bare(), layout, band), force * peak(after, layout, band), modes, compared, certified);
+                force * peak(ModalSystem.of(layout.structure(), List.of(a)), layout, band),
+                structureTolerance(layout, r, List.of(a), band, force, bare)));
+        return new SeveralAbsorbers(layout, r, effectiveMass, band, force, absorbers, bare,
+                force * peak(after, layout, band), modes, compared, certified,
+                structureTolerance(layout, r, absorbers, band, force, bare));
+    }
+
+    /**
+     * How far the target mode's natural frequency may be off (its stiffness by the square; mass,
+     * damping and shape kept; the other modes as they are) before the peak over the band rises by
+     * the allowance: the same search as a single design's ({@link ToleratedMistuning}), on the exact
+     * peak of the whole structure. Several absorbers spread over a band are chosen for this.
+     */
+    private static MistuningRange structureTolerance(AbsorberLayout layout, int mode, List<PointAbsorber> absorbers,
+            FrequencyBand band, double force, double bare) {
+        double wr = layout.structure().modes().get(mode).naturalFrequency();
+        return ToleratedMistuning.ofPeak(factor -> force * peak(ModalSystem.of(factor == 1.0 ? layout.structure()
+                : layout.structure().withFrequency(mode, factor * wr), absorbers), layout, band),
+                DesignResult.TOLERANCE_ALLOWANCE, DesignResult.TOLERANCE_SEARCH, bare);
     }
 
     private static double peak(ModalSystem system, AbsorberLayout layout, FrequencyBand band) {

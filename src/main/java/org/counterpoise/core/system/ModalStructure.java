@@ -53,6 +53,22 @@ public record ModalStructure(List<Mode> modes) {
         return modes.get(0).shape().keySet();
     }
 
+    /**
+     * One mode's natural frequency changed, as a structure whose stiffness, contents or supports are
+     * not as assumed: its stiffness by the square of the change, its modal mass, damping ratio and
+     * shape kept (the single-mode structure's mistuning, {@code Structure.withFrequencyScaledBy}).
+     *
+     * @param mode the index of the mode
+     * @param frequency its natural frequency, rad/s
+     * @return the structure with that mode so changed (modes in ascending frequency again)
+     */
+    public ModalStructure withFrequency(int mode, double frequency) {
+        List<Mode> changed = new ArrayList<>(modes);
+        Mode m = changed.get(mode);
+        changed.set(mode, new Mode(frequency, m.dampingRatio(), m.modalMass(), m.shape()));
+        return new ModalStructure(changed);
+    }
+
     /** @return the number of modes */
     public int size() {
         return modes.size();

@@ -236,6 +236,12 @@ public enum ReportKey {
     ITEM_PEAKS("peak_displacement_before_m", "peak_displacement_after_m"),
     SEVERAL_SINGLE_PEAK("several_absorbers.single_absorber_peak_displacement_m"),
     SEVERAL_GAIN("several_absorbers.gain"),
+    SEVERAL_STRUCTURE_TOLERANCE("several_absorbers.tolerated_structure_frequency_factor_low",
+            "several_absorbers.tolerated_structure_frequency_factor_high",
+            "several_absorbers.tolerated_structure_frequency_basis"),
+    SEVERAL_SINGLE_STRUCTURE_TOLERANCE("several_absorbers.single_absorber_tolerated_structure_frequency_factor_low",
+            "several_absorbers.single_absorber_tolerated_structure_frequency_factor_high",
+            "several_absorbers.single_absorber_tolerated_structure_frequency_basis"),
     SEVERAL_CERTIFIED("several_absorbers.certified"),
 
     // Rows not in the design JSON.

@@ -3,6 +3,7 @@ package org.counterpoise.io.text;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.SeveralAbsorbers;
 import org.counterpoise.core.optim.AbsorberSetTuning;
 import org.counterpoise.core.system.Mode;
@@ -15,6 +16,7 @@ import org.counterpoise.io.text.ReportValue.Fields;
 import org.counterpoise.io.text.ReportValue.Flag;
 import org.counterpoise.io.text.ReportValue.Pair;
 import org.counterpoise.io.text.ReportValue.PairKind;
+import org.counterpoise.io.text.ReportValue.Tolerance;
 import org.counterpoise.io.text.ReportValue.Words;
 
 /**
@@ -152,6 +154,13 @@ public final class SeveralAbsorbersContent {
             rows.add(row(ReportKey.SEVERAL_GAIN, "gain of the split (one absorber's peak / this peak)",
                     DesignContent.quantity(d.gain().orElseThrow(), Dimension.RATIO), ""));
         });
+        String tolerance = "peak over the band within " + ValueText.percent(DesignResult.TOLERANCE_ALLOWANCE, 2)
+                + " of its nominal, the mode's stiffness off, searched to "
+                + ValueText.percent(DesignResult.TOLERANCE_SEARCH, 2) + " each side (exact peak of the whole structure)";
+        rows.add(row(ReportKey.SEVERAL_STRUCTURE_TOLERANCE, "mode " + targetName + " frequency may be off by",
+                new Tolerance(d.structureTolerance(), 1), tolerance));
+        d.single().ifPresent(s -> rows.add(row(ReportKey.SEVERAL_SINGLE_STRUCTURE_TOLERANCE,
+                "the same, one absorber of the same total mass", new Tolerance(s.structureTolerance(), 1), tolerance)));
         rows.add(row(ReportKey.SEVERAL_CERTIFIED, "optimum certified", new Flag(d.certified(),
                 d.certified() ? "yes" : "NO"), n == 1 ? "the design above" : "docs/several-modes.md, the certificate"));
         return rows;

@@ -138,7 +138,7 @@ class SetCommissioningTest {
 
     @Test
     void aFreedModeFrequencyIsFoundAndTheTargetsFollowIt() {
-        ModalStructure shifted = AsBuiltSetFit.withModeFrequency(FLOOR, design.targetMode(),
+        ModalStructure shifted = FLOOR.withFrequency(design.targetMode(),
                 FLOOR.modes().get(design.targetMode()).naturalFrequency() * 0.97);
         double[] f = {0.97 * 1.02, 0.97 * 0.99};
         SetCommissioning check = SetCommissioning.of(design, measured(shifted, built(f, new double[] {1, 1}), 0, 3),
@@ -206,7 +206,7 @@ class SetCommissioningTest {
                 ResponseKind.DISPLACEMENT, AbsorberSizing.ofMass(60), DesignMethod.EXACT_PEAK, false, 1.5);
         SeveralAbsorbers set = SeveralAbsorbersDesigner.design(Designer.design(study), layout);
         double[] f = {1.03, 0.98, 1.01};
-        ModalStructure off = AsBuiltSetFit.withModeFrequency(rig, 0, 31 * HZ * 1.04);
+        ModalStructure off = rig.withFrequency(0, 31 * HZ * 1.04);
         List<PointAbsorber> built = new ArrayList<>();
         for (int j = 0; j < 3; j++) {
             PointAbsorber d = set.absorbers().get(j);
