@@ -1,5 +1,6 @@
 package org.counterpoise.core.system;
 
+import java.util.Arrays;
 import java.util.List;
 import org.apache.commons.math3.complex.Complex;
 import org.apache.commons.math3.complex.ComplexField;
@@ -33,33 +34,36 @@ public final class AbsorberSensitivity {
      * @return for each absorber j: {d ln|H|^2 / d ln f_j, d ln|H|^2 / d zeta_j}
      */
     public static double[][] gradient(ModalSystem system, String forcePoint, String responsePoint, double g) {
-        if (system.absorberPoints().size() > 1) {
-            throw new IllegalArgumentException("bug: the gradient is for absorbers at one point");
-        }
         List<PointAbsorber> absorbers = system.absorbers();
-        String a = absorbers.get(0).point();
         Complex s = new Complex(0, g);
-        Complex gpq = receptance(system, responsePoint, forcePoint, s);
-        Complex gaa = receptance(system, a, a, s);
-        Complex delta = gpq.multiply(gaa).subtract(receptance(system, responsePoint, a, s)
-                .multiply(receptance(system, a, forcePoint, s)));
-        Complex s2 = s.multiply(s);
-        Complex[] k = new Complex[absorbers.size()];
-        Complex z = Complex.ZERO;
-        for (int j = 0; j < k.length; j++) {
-            double[] b = system.spring(j);
-            k[j] = new Complex(b[0], b[1] * g);
-            z = z.add(s2.multiply(k[j]).multiply(system.massRatio(j)).divide(s2.add(k[j])));
+        Complex[] dLogH = new Complex[absorbers.size()];
+        if (system.absorberPoints().size() > 1) {
+            // dH_pq / dZ_a = -H_pa H_aq, the receptances of the modified structure (differentiate the
+            // Woodbury form; for one point it is the expression below)
+            Complex h = value(system, forcePoint, responsePoint, g);
+            for (int j = 0; j < dLogH.length; j++) {
+                String a = absorbers.get(j).point();
+                dLogH[j] = value(system, a, responsePoint, g).multiply(value(system, forcePoint, a, g)).divide(h).negate();
+            }
+        } else {
+            String a = absorbers.get(0).point();
+            Complex gpq = receptance(system, responsePoint, forcePoint, s);
+            Complex gaa = receptance(system, a, a, s);
+            Complex delta = gpq.multiply(gaa).subtract(receptance(system, responsePoint, a, s)
+                    .multiply(receptance(system, a, forcePoint, s)));
+            Complex z = pointStiffness(system, a, s);
+            Arrays.fill(dLogH, delta.divide(gpq.add(z.multiply(delta))).subtract(gaa.divide(Complex.ONE.add(
+                    z.multiply(gaa)))));
         }
-        Complex dLogH = delta.divide(gpq.add(z.multiply(delta))).subtract(gaa.divide(Complex.ONE.add(z.multiply(gaa))));
-        double[][] out = new double[k.length][2];
-        for (int j = 0; j < k.length; j++) {
+        Complex s2 = s.multiply(s);
+        double[][] out = new double[absorbers.size()][2];
+        for (int j = 0; j < out.length; j++) {
             double[] b = system.spring(j);
             double f = Math.sqrt(b[0]);
             double zeta = f > 0 ? b[1] / (2 * f) : 0.0;
-            Complex sum = s2.add(k[j]);
+            Complex sum = s2.add(new Complex(b[0], b[1] * g));
             Complex dz = s2.multiply(s2).multiply(system.massRatio(j)).divide(sum.multiply(sum));
-            Complex common = dLogH.multiply(dz);
+            Complex common = dLogH[j].multiply(dz);
             out[j][0] = 2 * common.multiply(new Complex(2 * f * f, 2 * zeta * f * g)).getReal();
             out[j][1] = 2 * common.multiply(new Complex(0, 2 * f * g)).getReal();
         }

@@ -101,6 +101,50 @@ class SeveralPointsTest {
         assertEquals(sweep, peak, 1e-9 * sweep);
     }
 
+    /**
+     * The exact gradient for absorbers at two points (dH_pq / dZ_a = -H_pa H_aq) against central
+     * differences of ln |H|^2 of the dense solve at the same frequency.
+     */
+    @Test
+    void theGradientAtSeveralPointsMatchesFiniteDifferencesOfTheDenseSolve() {
+        List<Mode> modes = randomModes(new Random(7));
+        double[] f = {0.95, 1.9, 1.1};
+        double[] zeta = {0.08, 0.05, 0.1};
+        String[] at = {"a", "b", "b"};
+        for (double g : new double[] {0.8, 1.0, 1.7, 2.3}) {
+            double[][] grad = AbsorberSensitivity.gradient(twoPoints(modes, f, zeta, at), "c", "a", g);
+            for (int j = 0; j < 3; j++) {
+                double h = 1e-6;
+                double[] fp = f.clone();
+                double[] fm = f.clone();
+                fp[j] *= Math.exp(h);
+                fm[j] *= Math.exp(-h);
+                double df = (logMagnitude(modes, fp, zeta, at, g) - logMagnitude(modes, fm, zeta, at, g)) / (2 * h);
+                assertEquals(df, grad[j][0], 1e-6 * (1 + Math.abs(df)), "d/d ln f_" + j + " at g " + g);
+                double[] zp = zeta.clone();
+                double[] zm = zeta.clone();
+                zp[j] += h;
+                zm[j] -= h;
+                double dz = (logMagnitude(modes, f, zp, at, g) - logMagnitude(modes, f, zm, at, g)) / (2 * h);
+                assertEquals(dz, grad[j][1], 1e-6 * (1 + Math.abs(dz)), "d/d zeta_" + j + " at g " + g);
+            }
+        }
+    }
+
+    private static ModalSystem twoPoints(List<Mode> modes, double[] f, double[] zeta, String[] at) {
+        List<PointAbsorber> absorbers = new ArrayList<>();
+        for (int j = 0; j < f.length; j++) {
+            absorbers.add(PointAbsorber.tuned(at[j], 0.03, f[j], zeta[j]));
+        }
+        return ModalSystem.of(new ModalStructure(modes), absorbers);
+    }
+
+    private static double logMagnitude(List<Mode> modes, double[] f, double[] zeta, String[] at, double g) {
+        ModalSystem system = twoPoints(modes, f, zeta, at);
+        double w = g * system.referenceFrequency();
+        return Math.log(Math.pow(ModalDirectSolve.solve(modes, system.absorbers(), "c", "a", w)[0].abs(), 2));
+    }
+
     private static List<Mode> randomModes(Random random) {
         List<Mode> modes = new ArrayList<>();
         double w = 1.0;
