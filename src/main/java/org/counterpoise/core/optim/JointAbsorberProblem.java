@@ -14,8 +14,9 @@ import org.counterpoise.core.system.Mode;
 import org.counterpoise.core.system.PointAbsorber;
 
 /**
- * One absorber per mode on a structure of two modes, non-dimensional, all at one point where the
- * force acts and the displacement is taken: mode 1 has omega1 = 1, modal mass 1 and shape value 1
+ * One absorber per mode on a structure of two modes, non-dimensional, the force acting and the
+ * displacement taken at the first point, where the absorbers sit too unless a second point is
+ * given (then each sits where its mode's shape value is larger in size): mode 1 has omega1 = 1, modal mass 1 and shape value 1
  * there; mode 2 has omega2 = R, modal mass M and shape value phi there; both the damping ratio
  * zeta. The peak of the receptance X k1 / F over the band of frequency ratios g = omega / omega1 is
  * minimised (H-infinity) by the two absorbers' tunings and dampings together.
