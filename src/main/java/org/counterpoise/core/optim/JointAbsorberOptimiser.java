@@ -56,7 +56,8 @@ public final class JointAbsorberOptimiser {
      * is the absorber's own, unchanged). Absorber 1's mode carries absorber 2's mass as a rigid mass
      * at the point (absorber 2 is tuned far above mode 1 and moves with the point there: the usual
      * practice of adding attached masses to the modal mass, common practice with no single source):
-     * modal mass 1 + mu_2, frequency 1 / sqrt(1 + mu_2), damping ratio zeta / sqrt(1 + mu_2) (the same
+     * modal mass 1 + mu_2 (mu_2 times (phi_1(a_2) / phi_1(a_1))^2 when the absorbers sit at different
+     * points), frequency 1 / sqrt(1 + mu_2), damping ratio zeta / sqrt(1 + mu_2) (the same
      * damper). Absorber 2's mode is taken bare: absorber 1, tuned far below it, is isolated there.
      *
      * @param problem the problem
@@ -67,7 +68,9 @@ public final class JointAbsorberOptimiser {
         double[] f = new double[JointAbsorberProblem.MODES];
         double[] z = new double[JointAbsorberProblem.MODES];
         for (int j = 0; j < f.length; j++) {
-            double carried = j == 0 ? problem.absorberMassRatio(1) : 0.0;
+            // absorber 2's mass adds m_a2 phi_1(a_2)^2 to mode 1's modal mass, seen at absorber 1's point
+            double carried = j == 0 ? problem.absorberMassRatio(1) * square(problem.shape(0, problem.absorberPoint(1))
+                    / problem.shape(0, problem.absorberPoint(0))) : 0.0;
             double seen = problem.seenMass(j) + carried;
             double frequency = problem.modeFrequency(j) * Math.sqrt(problem.seenMass(j) / seen);
             double damping = problem.structureDamping() * Math.sqrt(problem.seenMass(j) / seen);
@@ -116,5 +119,9 @@ public final class JointAbsorberOptimiser {
             }
         }
         return q;
+    }
+
+    private static double square(double v) {
+        return v * v;
     }
 }

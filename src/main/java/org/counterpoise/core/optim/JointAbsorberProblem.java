@@ -3,6 +3,8 @@ package org.counterpoise.core.optim;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
+import java.util.TreeMap;
 import org.counterpoise.core.error.Checks;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.system.ModalPeak;
@@ -12,8 +14,9 @@ import org.counterpoise.core.system.Mode;
 import org.counterpoise.core.system.PointAbsorber;
 
 /**
- * One absorber per mode on a structure of two modes, non-dimensional, all at one point where the
- * force acts and the displacement is taken: mode 1 has omega1 = 1, modal mass 1 and shape value 1
+ * One absorber per mode on a structure of two modes, non-dimensional, the force acting and the
+ * displacement taken at the first point, where the absorbers sit too unless a second point is
+ * given (then each sits where its mode's shape value is larger in size): mode 1 has omega1 = 1, modal mass 1 and shape value 1
  * there; mode 2 has omega2 = R, modal mass M and shape value phi there; both the damping ratio
  * zeta. The peak of the receptance X k1 / F over the band of frequency ratios g = omega / omega1 is
  * minimised (H-infinity) by the two absorbers' tunings and dampings together.
@@ -30,15 +33,53 @@ import org.counterpoise.core.system.PointAbsorber;
  * @param secondModeShape phi, mode 2's shape value at the point, mode 1's being 1 (non-zero)
  * @param bandLow lowest g (&gt;= 0)
  * @param bandHigh highest g (+infinity for all frequencies)
+ * @param otherPoint a second point of the structure with both modes' shape values there, where an
+ *     absorber sits when its mode's shape value is larger there in size (each absorber at the point
+ *     where its mode moves most); the force and the displacement stay at the first point
  */
 public record JointAbsorberProblem(double massRatio, double structureDamping, double secondModeRatio,
-        double secondModeMass, double secondModeShape, double bandLow, double bandHigh) {
+        double secondModeMass, double secondModeShape, double bandLow, double bandHigh, Optional<OtherPoint> otherPoint) {
     /** Highest ratio of the two natural frequencies taken (as for the spillover of {@code optimum}). */
     public static final double MAX_MODE_RATIO = 100.0;
     /** The number of modes, and of absorbers: one per mode. */
     public static final int MODES = 2;
-    /** The structure's one point: where the force acts, the displacement is taken and the absorbers sit. */
-    static final String POINT = "structure";
+    /** The structure's first point: where the force acts, the displacement is taken and the absorbers sit by default. */
+    public static final String POINT = "structure";
+    /** The second point, when given. */
+    public static final String OTHER_POINT = "second point";
+
+    /**
+     * A second point of the structure.
+     *
+     * @param firstModeShape mode 1's shape value there (mode 1's being 1 at the first point)
+     * @param secondModeShape mode 2's shape value there
+     */
+    public record OtherPoint(double firstModeShape, double secondModeShape) {
+        /** Validates the shape values. */
+        public OtherPoint {
+            if (!Double.isFinite(firstModeShape) || !Double.isFinite(secondModeShape)) {
+                throw new InvalidInputException("second point shapes", Checks.show(firstModeShape) + ":"
+                        + Checks.show(secondModeShape), "two finite numbers, mode 1's and mode 2's shape values there");
+            }
+        }
+    }
+
+    /**
+     * The problem with every absorber at the first point.
+     *
+     * @param massRatio total mu
+     * @param structureDamping zeta of both modes
+     * @param secondModeRatio R
+     * @param secondModeMass M
+     * @param secondModeShape phi
+     * @param bandLow lowest g
+     * @param bandHigh highest g
+     */
+    public JointAbsorberProblem(double massRatio, double structureDamping, double secondModeRatio,
+            double secondModeMass, double secondModeShape, double bandLow, double bandHigh) {
+        this(massRatio, structureDamping, secondModeRatio, secondModeMass, secondModeShape, bandLow, bandHigh,
+                Optional.empty());
+    }
 
     /** Validates the problem; each message names the quantity a user sets. */
     public JointAbsorberProblem {
@@ -54,6 +95,29 @@ public record JointAbsorberProblem(double massRatio, double structureDamping, do
                     "a finite number other than 0 (an absorber for mode 2 where mode 2 does not move does nothing)");
         }
         PeakProblem.checkBand(bandLow, bandHigh);
+        Checks.present("second point", otherPoint, "a second point or none");
+    }
+
+    /**
+     * @param mode 0 or 1
+     * @param point {@link #POINT} or {@link #OTHER_POINT}
+     * @return the mode's shape value there
+     */
+    public double shape(int mode, String point) {
+        if (point.equals(POINT)) {
+            return mode == 0 ? 1.0 : secondModeShape;
+        }
+        OtherPoint other = otherPoint.orElseThrow();
+        return mode == 0 ? other.firstModeShape() : other.secondModeShape();
+    }
+
+    /**
+     * @param absorber 0 or 1 (the absorber of that mode)
+     * @return its point: the first, or the second where its mode's shape value is larger in size
+     */
+    public String absorberPoint(int absorber) {
+        return otherPoint.isPresent() && Math.abs(shape(absorber, OTHER_POINT)) > Math.abs(shape(absorber, POINT))
+                ? OTHER_POINT : POINT;
     }
 
     /**
@@ -66,10 +130,11 @@ public record JointAbsorberProblem(double massRatio, double structureDamping, do
 
     /**
      * @param mode 0 or 1
-     * @return its modal mass as seen at the point, m_r / phi_r^2, over m1
+     * @return its modal mass as seen at its absorber's point, m_r / phi_r^2, over m1
      */
     public double seenMass(int mode) {
-        return mode == 0 ? 1.0 : secondModeMass / (secondModeShape * secondModeShape);
+        double phi = shape(mode, absorberPoint(mode));
+        return (mode == 0 ? 1.0 : secondModeMass) / (phi * phi);
     }
 
     /**
@@ -87,8 +152,16 @@ public record JointAbsorberProblem(double massRatio, double structureDamping, do
 
     /** @return the two-mode structure, on the scales omega_ref = omega1 = 1, k_ref = m1 omega1^2 = 1 */
     public ModalStructure structure() {
-        return new ModalStructure(List.of(new Mode(1.0, structureDamping, 1.0, Map.of(POINT, 1.0)),
-                new Mode(secondModeRatio, structureDamping, secondModeMass, Map.of(POINT, secondModeShape))));
+        List<Mode> modes = new ArrayList<>();
+        for (int r = 0; r < MODES; r++) {
+            Map<String, Double> shapes = new TreeMap<>();
+            shapes.put(POINT, shape(r, POINT));
+            if (otherPoint.isPresent()) {
+                shapes.put(OTHER_POINT, shape(r, OTHER_POINT));
+            }
+            modes.add(new Mode(modeFrequency(r), structureDamping, r == 0 ? 1.0 : secondModeMass, shapes));
+        }
+        return new ModalStructure(modes);
     }
 
     /**
@@ -115,7 +188,7 @@ public record JointAbsorberProblem(double massRatio, double structureDamping, do
     public ModalSystem system(AbsorberSetDesign design) {
         List<PointAbsorber> absorbers = new ArrayList<>();
         for (int j = 0; j < design.count(); j++) {
-            absorbers.add(PointAbsorber.tuned(POINT, design.massRatios().get(j), design.tuningRatios().get(j),
+            absorbers.add(PointAbsorber.tuned(absorberPoint(j), design.massRatios().get(j), design.tuningRatios().get(j),
                     design.dampingRatios().get(j)));
         }
         return ModalSystem.of(structure(), absorbers);

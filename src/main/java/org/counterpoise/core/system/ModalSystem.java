@@ -1,5 +1,6 @@
 package org.counterpoise.core.system;
 
+import java.util.ArrayList;
 import java.util.List;
 import org.counterpoise.core.error.Checks;
 import org.counterpoise.core.error.InvalidInputException;
@@ -34,11 +35,12 @@ import org.counterpoise.core.rational.TransferFunction;
  * (s^2 + K) / Delta). The absorber's stroke follows from y_j - x_a = -s^2 x_a / (s^2 + K_j) and
  * M_aq = 0: stroke_j = -s^2 (B / b_j) n_aq / (B D + A n_aa), b_j = s^2 + K_j.
  *
- * <p>Absorbers at several different points need a matrix of such changes; this class refuses them
- * with a plain message (a limit stated in docs/several-modes.md). SI units; immutable.
+ * <p>Absorbers at several different points are a rank-k change, k the number of points: the same
+ * identity with a k x k matrix, in {@link PointModifications}; with one point the route above is
+ * taken unchanged. SI units; immutable.
  *
  * @param structure the modal structure
- * @param absorbers the absorbers (may be empty), all at one point
+ * @param absorbers the absorbers (may be empty), at one or several points
  * @param referenceFrequency omega_ref, rad/s (&gt; 0)
  * @param referenceStiffness k_ref, N/m (&gt; 0): transfer functions give receptance times k_ref
  */
@@ -54,17 +56,12 @@ public record ModalSystem(ModalStructure structure, List<PointAbsorber> absorber
         absorbers = List.copyOf(absorbers);
         for (int j = 0; j < absorbers.size(); j++) {
             structure.requirePoint(absorbers.get(j).point());
-            if (!absorbers.get(j).point().equals(absorbers.get(0).point())) {
-                throw new InvalidInputException("absorber " + (j + 1) + " point", absorbers.get(j).point(),
-                        "the point of absorber 1 (" + absorbers.get(0).point() + "): the exact route takes absorbers"
-                                + " at one point of the structure");
-            }
         }
     }
 
     /**
      * @param structure the structure
-     * @param absorbers the absorbers, all at one point
+     * @param absorbers the absorbers
      * @return the system scaled by its lowest mode: omega_ref = omega_1, k_ref = m_1 omega_1^2
      */
     public static ModalSystem of(ModalStructure structure, List<PointAbsorber> absorbers) {
@@ -91,10 +88,14 @@ public record ModalSystem(ModalStructure structure, List<PointAbsorber> absorber
         if (absorbers.isEmpty()) {
             return nonZero(sumOverModes(responsePoint, forcePoint), den, responsePoint);
         }
-        String a = absorbers.get(0).point();
-        double[] b = absorberDenominator();
+        List<String> points = absorberPoints();
+        if (points.size() > 1) {
+            return nonZero(new PointModifications(this, points).numerator(responsePoint, forcePoint), den, responsePoint);
+        }
+        String a = points.get(0);
+        double[] b = absorberDenominator(a, -1);
         double[] num = RealPolynomials.add(RealPolynomials.multiply(b, sumOverModes(responsePoint, forcePoint)),
-                RealPolynomials.multiply(absorberNumerator(), minor(responsePoint, forcePoint, a)));
+                RealPolynomials.multiply(absorberNumerator(a), minor(responsePoint, forcePoint, a)));
         return nonZero(num, den, responsePoint);
     }
 
@@ -109,13 +110,12 @@ public record ModalSystem(ModalStructure structure, List<PointAbsorber> absorber
             throw new InvalidInputException("absorber", String.valueOf(absorber + 1),
                     "a number from 1 to " + absorbers.size());
         }
-        String a = absorbers.get(0).point();
-        double[] others = {1.0};
-        for (int j = 0; j < absorbers.size(); j++) {
-            if (j != absorber) {
-                others = RealPolynomials.multiply(others, spring(j));
-            }
+        List<String> points = absorberPoints();
+        String a = absorbers.get(absorber).point();
+        if (points.size() > 1) {
+            return nonZero(new PointModifications(this, points).strokeNumerator(forcePoint, absorber), denominator(), a);
         }
+        double[] others = absorberDenominator(a, absorber);
         double[] num = RealPolynomials.scale(RealPolynomials.shift(RealPolynomials.multiply(others,
                 sumOverModes(a, forcePoint)), 2), -1.0);
         return nonZero(num, denominator(), a);
@@ -132,9 +132,24 @@ public record ModalSystem(ModalStructure structure, List<PointAbsorber> absorber
         if (absorbers.isEmpty()) {
             return d;
         }
-        String a = absorbers.get(0).point();
-        return RealPolynomials.add(RealPolynomials.multiply(absorberDenominator(), d),
-                RealPolynomials.multiply(absorberNumerator(), sumOverModes(a, a)));
+        List<String> points = absorberPoints();
+        if (points.size() > 1) {
+            return new PointModifications(this, points).denominator();
+        }
+        String a = points.get(0);
+        return RealPolynomials.add(RealPolynomials.multiply(absorberDenominator(a, -1), d),
+                RealPolynomials.multiply(absorberNumerator(a), sumOverModes(a, a)));
+    }
+
+    /** @return the distinct points of the absorbers, in the order they first appear */
+    public List<String> absorberPoints() {
+        List<String> out = new ArrayList<>();
+        for (PointAbsorber ab : absorbers) {
+            if (!out.contains(ab.point())) {
+                out.add(ab.point());
+            }
+        }
+        return out;
     }
 
     private TransferFunction nonZero(double[] num, double[] den, String responsePoint) {
@@ -207,23 +222,37 @@ public record ModalSystem(ModalStructure structure, List<PointAbsorber> absorber
         return absorbers.get(j).mass() * referenceFrequency * referenceFrequency / referenceStiffness;
     }
 
-    /** B = prod_j b_j. */
-    private double[] absorberDenominator() {
+    /**
+     * B_a = prod_j b_j over the absorbers at point a (all of them for one point), leaving out one.
+     *
+     * @param a the point
+     * @param without the absorber left out (-1: none)
+     */
+    double[] absorberDenominator(String a, int without) {
         double[] out = {1.0};
         for (int j = 0; j < absorbers.size(); j++) {
-            out = RealPolynomials.multiply(out, spring(j));
+            if (j != without && absorbers.get(j).point().equals(a)) {
+                out = RealPolynomials.multiply(out, spring(j));
+            }
         }
         return out;
     }
 
-    /** A = sum_j a_j prod_(i != j) b_i, a_j = mu_j s^2 K_j. */
-    private double[] absorberNumerator() {
+    /**
+     * A_a = sum_j a_j prod_(i != j) b_i over the absorbers at point a, a_j = mu_j s^2 K_j.
+     *
+     * @param a the point
+     */
+    double[] absorberNumerator(String a) {
         double[] out = {0.0};
         for (int j = 0; j < absorbers.size(); j++) {
+            if (!absorbers.get(j).point().equals(a)) {
+                continue;
+            }
             double[] b = spring(j);
             double[] term = RealPolynomials.scale(RealPolynomials.shift(new double[] {b[0], b[1]}, 2), massRatio(j));
             for (int i = 0; i < absorbers.size(); i++) {
-                if (i != j) {
+                if (i != j && absorbers.get(i).point().equals(a)) {
                     term = RealPolynomials.multiply(term, spring(i));
                 }
             }

@@ -24,6 +24,7 @@ public final class JointAbsorberTable {
     static final String OWN_TUNING_RATIO = "own_tuning_ratio";
     static final String SEQUENTIAL_TUNING_RATIO = "sequential_tuning_ratio";
     static final String SEQUENTIAL_DAMPING_RATIO = "sequential_damping_ratio";
+    static final String POINT = "point";
 
     private JointAbsorberTable() {
     }
@@ -49,10 +50,13 @@ public final class JointAbsorberTable {
                     + " structure damping ratio %.6g (both modes), %s%n", p.massRatio(), p.structureDamping(),
                     AbsorberSetTable.band(p.bandLow(), p.bandHigh())));
             out.append(String.format(Locale.ROOT, "second mode at %.6g times the first, modal mass %.6g times the"
-                    + " first's, shape %.6g at the absorbers (the first's 1)%n", p.secondModeRatio(), p.secondModeMass(),
+                    + " first's, shape %.6g at the first point, where the force acts and the displacement is taken (mode 1's 1)%n", p.secondModeRatio(), p.secondModeMass(),
                     p.secondModeShape()));
+            p.otherPoint().ifPresent(other -> out.append(String.format(Locale.ROOT, "second point: shape values %.6g"
+                    + " (mode 1) and %.6g (mode 2); absorber 1 at the %s, absorber 2 at the %s%n", other.firstModeShape(),
+                    other.secondModeShape(), pointWord(p.absorberPoint(0)), pointWord(p.absorberPoint(1)))));
             out.append(String.format(Locale.ROOT, "mass split: each absorber the same mass ratio %.6g on its own mode"
-                    + " (modal mass seen at the absorbers, m/phi^2)%n", p.ownMassRatio()));
+                    + " (modal mass seen at its point, m/phi^2)%n", p.ownMassRatio()));
             out.append(String.format(Locale.ROOT, "peak %.12g jointly (sequential, each absorber designed on its mode"
                     + " alone: %.12g; gain %.6g)%n", o.peak(), o.sequentialPeak(), o.gain()));
             out.append(AbsorberSetTable.certificateText(o.certificate()));
@@ -120,6 +124,7 @@ public final class JointAbsorberTable {
             for (int j = 0; j < o.design().count(); j++) {
                 JsonObject a = new JsonObject();
                 a.addProperty(SpilloverTable.MODE, j + 1);
+                a.addProperty(POINT, pointWord(p.absorberPoint(j)).replace(' ', '_'));
                 JsonNumbers.put(a, AbsorberSetTable.ABSORBER_MASS_RATIO, o.design().massRatios().get(j));
                 JsonNumbers.put(a, OWN_MASS_RATIO, p.ownMassRatio());
                 JsonNumbers.put(a, AbsorberSetTable.TUNING_RATIO, o.design().tuningRatios().get(j));
@@ -134,5 +139,10 @@ public final class JointAbsorberTable {
             array.add(object);
         }
         return JsonNumbers.write(array);
+    }
+
+    /** @return "first point" (the force's, where the displacement is taken) or "second point" */
+    private static String pointWord(String point) {
+        return point.equals(JointAbsorberProblem.OTHER_POINT) ? "second point" : "first point";
     }
 }

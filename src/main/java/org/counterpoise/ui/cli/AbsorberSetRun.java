@@ -47,6 +47,9 @@ final class AbsorberSetRun {
         if (o.onePerMode()) {
             return JointAbsorberRun.run(o, out);
         }
+        if (o.secondPoint() != null) {
+            throw new InvalidInputException("--second-point", PlainText.quote(o.secondPoint()), "only with --one-per-mode");
+        }
         if (o.secondModeMass() != null) {
             throw new InvalidInputException("--second-mode-mass", Checks.show(o.secondModeMass()),
                     "only with --one-per-mode (the spillover of absorbers on mode 1 takes a second mode of the first's"

@@ -4,6 +4,7 @@ import java.io.PrintWriter;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.optim.JointAbsorberOptimiser;
 import org.counterpoise.core.optim.JointAbsorberOptimum;
@@ -12,6 +13,7 @@ import org.counterpoise.core.units.PhysicalRange;
 import org.counterpoise.io.PlainText;
 import org.counterpoise.io.export.JointAbsorberTable;
 import org.counterpoise.io.export.OptimumTable;
+import picocli.CommandLine;
 
 /**
  * {@code optimum --second-mode R --one-per-mode [--second-mode-mass M] [--second-mode-shape PHI]}:
@@ -43,13 +45,15 @@ final class JointAbsorberRun {
         double[][] grid = AbsorberSetRun.grid(o);
         double[] g = OptimumCommand.parseBand(o.band());
         double mass = o.secondModeMass() == null ? 1.0 : o.secondModeMass();
+        Optional<JointAbsorberProblem.OtherPoint> other = o.secondPoint() == null ? Optional.empty()
+                : Optional.of(otherPoint(o.secondPoint()));
         List<JointAbsorberOptimum> rows = new ArrayList<>();
         for (double mu : grid[0]) {
             PhysicalRange.MASS_RATIO.check("--mass-ratio", mu, null);
             for (double z : grid[1]) {
                 JointAbsorberProblem problem;
                 try {
-                    problem = new JointAbsorberProblem(mu, z, o.secondMode(), mass, o.secondModeShape(), g[0], g[1]);
+                    problem = new JointAbsorberProblem(mu, z, o.secondMode(), mass, o.secondModeShape(), g[0], g[1], other);
                 } catch (InvalidInputException bad) {
                     throw bad.renamed(FIELDS.getOrDefault(bad.field(), bad.field()));
                 }
@@ -60,5 +64,21 @@ final class JointAbsorberRun {
                 : o.csv() ? OptimumTable.Format.CSV : OptimumTable.Format.TEXT));
         out.flush();
         return 0;
+    }
+
+    /** @return the second point's shape values from PHI1:PHI2 */
+    private static JointAbsorberProblem.OtherPoint otherPoint(String text) {
+        String[] parts = text.split(":", -1);
+        if (parts.length != 2) {
+            throw new InvalidInputException("--second-point", PlainText.quote(text), "PHI1:PHI2, mode 1's and mode 2's"
+                    + " shape values at the second point, such as 0.5:1");
+        }
+        try {
+            return new JointAbsorberProblem.OtherPoint(Converters.real(parts[0]), Converters.real(parts[1]));
+        } catch (CommandLine.TypeConversionException e) {
+            throw new InvalidInputException("--second-point", PlainText.quote(text), e.getMessage());
+        } catch (InvalidInputException bad) {
+            throw bad.renamed("--second-point");
+        }
     }
 }

@@ -117,6 +117,11 @@ public final class OptimumCommand implements Callable<Integer> {
             description = "with --one-per-mode: the second mode's modal mass over the first's (default 1)")
     private Double secondModeMass;
 
+    @Option(names = "--second-point", paramLabel = "PHI1:PHI2",
+            description = "with --one-per-mode: mode 1's and mode 2's shape values at a second point; each absorber"
+                    + " sits where its mode's shape value is largest in size (force and displacement stay at the first)")
+    private String secondPoint;
+
     @Option(names = "--one-per-mode",
             description = "with --second-mode: one absorber on each of the two modes, at the same point, tuned and"
                     + " damped jointly for the least peak of the two-mode structure; beside it the sequential design"
@@ -147,7 +152,8 @@ public final class OptimumCommand implements Callable<Integer> {
             case "variance" -> true;
             default -> throw new InvalidInputException("--objective", objective, "peak or variance");
         };
-        if (absorbers != null || tuning != null || secondMode != null || secondModeMass != null || onePerMode) {
+        if (absorbers != null || tuning != null || secondMode != null || secondModeMass != null || secondPoint != null
+                || onePerMode) {
             return AbsorberSetRun.run(this, spec.commandLine().getOut());
         }
         List<PeakProblem> problems = cases == null ? fromOptions() : fromCases(cases);
@@ -197,14 +203,15 @@ public final class OptimumCommand implements Callable<Integer> {
     /** @return the options as typed, for {@link AbsorberSetRun} */
     Options options() {
         return new Options(massRatio, structureDamping, excitation, response, objective, band, fixedDamping, fixedTuning,
-                strokeLimit, cases, absorbers, tuning, secondMode, secondModeShape, secondModeMass, onePerMode, json, csv);
+                strokeLimit, cases, absorbers, tuning, secondMode, secondModeShape, secondModeMass, secondPoint, onePerMode,
+                json, csv);
     }
 
     /** The options of one run, as typed. */
     record Options(String massRatio, String structureDamping, String excitation, String response, String objective,
             String band, Double fixedDamping, Double fixedTuning, Double strokeLimit, Path cases, Integer absorbers,
-            String tuning, Double secondMode, double secondModeShape, Double secondModeMass, boolean onePerMode,
-            boolean json, boolean csv) {
+            String tuning, Double secondMode, double secondModeShape, Double secondModeMass, String secondPoint,
+            boolean onePerMode, boolean json, boolean csv) {
     }
 
     private static final Map<String, String> OPTIONS = Map.of("mass ratio", "--mass-ratio", "structure damping",

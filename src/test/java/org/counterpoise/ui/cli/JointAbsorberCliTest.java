@@ -7,6 +7,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import com.google.gson.JsonArray;
 import com.google.gson.JsonObject;
 import com.google.gson.JsonParser;
+import java.util.Optional;
 import org.counterpoise.core.optim.JointAbsorberOptimiser;
 import org.counterpoise.core.optim.JointAbsorberOptimum;
 import org.counterpoise.core.optim.JointAbsorberProblem;
@@ -49,6 +50,20 @@ class JointAbsorberCliTest {
     }
 
     @Test
+    void aSecondPointTakesTheAbsorberOfTheModeThatMovesItMost() {
+        CliTest.Run json = CliTest.run("optimum", "--mass-ratio", "0.05", "--structure-damping", "0.01", "--second-mode",
+                "2.5", "--second-mode-shape", "0.3", "--second-point", "0.5:1", "--one-per-mode", "--json");
+        assertEquals(0, json.code(), json.err());
+        JsonObject o = JsonParser.parseString(json.out()).getAsJsonArray().get(0).getAsJsonObject();
+        JointAbsorberOptimum core = JointAbsorberOptimiser.optimise(new JointAbsorberProblem(0.05, 0.01, 2.5, 1.0, 0.3,
+                0.0, Double.POSITIVE_INFINITY, Optional.of(new JointAbsorberProblem.OtherPoint(0.5, 1.0))));
+        assertEquals(core.peak(), o.get("peak").getAsDouble(), 0.0);
+        JsonArray absorbers = o.getAsJsonArray("absorber");
+        assertEquals("first_point", absorbers.get(0).getAsJsonObject().get("point").getAsString());
+        assertEquals("second_point", absorbers.get(1).getAsJsonObject().get("point").getAsString());
+    }
+
+    @Test
     void badInputIsRefusedInPlainWords() {
         String[][] cases = {
             {"--second-mode", "1", "--one-per-mode"},
@@ -58,9 +73,12 @@ class JointAbsorberCliTest {
             {"--second-mode", "2", "--second-mode-mass", "2"},
             {"--second-mode", "2", "--one-per-mode", "--absorbers", "3"},
             {"--second-mode", "2", "--one-per-mode", "--tuning", "uniform"},
+            {"--second-mode", "2", "--one-per-mode", "--second-point", "1"},
+            {"--second-mode", "2", "--one-per-mode", "--second-point", "1:x"},
+            {"--second-mode", "2", "--second-point", "1:2"},
         };
         String[] fields = {"--second-mode", "--second-mode", "--second-mode-shape", "--second-mode-mass",
-            "--second-mode-mass", "--absorbers", "--tuning"};
+            "--second-mode-mass", "--absorbers", "--tuning", "--second-point", "--second-point", "--second-point"};
         for (int i = 0; i < cases.length; i++) {
             String[] args = new String[cases[i].length + 3];
             args[0] = "optimum";
