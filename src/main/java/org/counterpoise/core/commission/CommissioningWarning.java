@@ -7,7 +7,7 @@ package org.counterpoise.core.commission;
 public enum CommissioningWarning {
     /** The fitted model misses more than {@link #POOR_FIT_LIMIT} of the measured response. */
     POOR_FIT,
-    /** The fitted absorber frequency sits at the edge of the range searched (below 0.5 or above 2 times the design). */
+    /** A fitted absorber frequency came out far from its design's (below 0.55 or above 1.8 times it). */
     FREQUENCY_AT_SEARCH_EDGE,
     /** The trim needed is more than the plates supplied can give: the spring (or the mass) is off. */
     BEYOND_TRIM_RANGE,
@@ -18,7 +18,14 @@ public enum CommissioningWarning {
     /** With the disturbance the site shows, the absorber's stroke would use up its clearance. */
     STROKE_BEYOND_CLEARANCE,
     /** The spectrum's largest line lies away from the running speed and is more than {@link #OTHER_LINE_FACTOR} times the line at it. */
-    OTHER_LINE_DOMINATES;
+    OTHER_LINE_DOMINATES,
+    /** A fitted natural frequency of the structure lies more than {@link #STRUCTURE_FAR} from the design's. */
+    STRUCTURE_FREQUENCY_FAR,
+    /** Trimming the absorbers to their targets would not lower the peak over the band: no trim is advised. */
+    TRIM_DOES_NOT_HELP;
+
+    /** A fitted structure frequency further than this fraction from the design's is doubted. */
+    public static final double STRUCTURE_FAR = 0.15;
 
     /** Normalised residual above which the as-built fit is called poor (as for a modal fit). */
     public static final double POOR_FIT_LIMIT = 0.1;

@@ -1,10 +1,12 @@
 package org.counterpoise.core.commission;
 
 import java.util.ArrayList;
+import java.util.Comparator;
 import java.util.List;
 import org.counterpoise.core.design.AbsorberLayout;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.SeveralAbsorbers;
+import org.counterpoise.core.design.SeveralAbsorbersDesigner;
 import org.counterpoise.core.error.Checks;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.identify.MeasuredFrf;
@@ -15,33 +17,41 @@ import org.counterpoise.core.system.ModalSystem;
 import org.counterpoise.core.system.PointAbsorber;
 
 /**
- * The commissioning of several absorbers at one point: each absorber as built against its design,
- * the mass that brings each to its frequency, and what the whole structure does with them as built
- * and after that trim.
+ * The commissioning of several absorbers at one point: each absorber as built against what the
+ * structure as measured needs, the mass that brings each to its frequency, and what the whole
+ * structure does with them as built and after that trim.
  *
- * <p>Each absorber's target frequency is its design's, scaled with the target mode when the fit freed
- * that mode's frequency (the absorbers follow the structure, as the design's tuning ratios ask). At a
+ * <p>Each absorber's target frequency is its design's; when the fit freed the target mode's
+ * frequency, the set is designed again for the mode as measured (same band, masses and tuning rule,
+ * {@link SeveralAbsorbersDesigner#retuned}), since the band, not the mode, sets a set's tunings. At a
  * fixed spring rate omega = sqrt(k / m) (any vibration text, e.g. Den Hartog 1956, Mechanical
  * Vibrations, 4th ed., ch. 1), so the mass that gives the target is m (omega_built / omega_target)^2;
- * the damper stays, so after the trim zeta = c / (2 m' omega_target). The peaks are the exact peaks
- * over the band of the displacement at the response point per the project's force
- * ({@link ModalPeak}), on the structure as measured. The trim is called required when the peak as
- * built exceeds the design's by more than {@link DesignResult#TOLERANCE_ALLOWANCE}, the allowance
- * that the single absorber's check uses.
+ * the damper stays, so after the trim zeta = c / (2 m' omega_target). Absorbers of equal mass that
+ * swap frequencies fit equally well, so the fitted ones are paired with the design's in order of
+ * frequency. The peaks are the exact peaks over the band of the displacement at the response point
+ * per the project's force ({@link ModalPeak}), on the structure as measured. The trim is advised
+ * only when the fit is good and the trims lower that peak ({@link CommissioningWarning#TRIM_DOES_NOT_HELP}
+ * otherwise); it is called required when the peak as built exceeds the design's by more than
+ * {@link DesignResult#TOLERANCE_ALLOWANCE}, the allowance that the single absorber's check uses.
  *
- * @param built the absorbers as built
+ * @param built the absorbers as built (paired with the design's in order of frequency)
  * @param corrections one per absorber, in the design's order
+ * @param warnings the fit's warnings and those of the trims, in declaration order
+ * @param advised whether trims are advised: a good fit whose trims lower the peak
  * @param designPeak the peak over the band with the absorbers as designed, m
- * @param asBuiltPeak the peak with the absorbers as built, on the structure as measured, m
- * @param afterTrimPeak the peak after every absorber's mass is trimmed as advised, m
- * @param trimRequired whether the peak as built exceeds the design's by more than the allowance
+ * @param asBuiltPeak the peak with the absorbers as built, on the structure as measured, m (doubtful when the
+ *     fit is poor)
+ * @param afterTrimPeak the peak after every absorber's mass is trimmed to its target, m
+ * @param trimRequired whether the peak as built exceeds the design's by more than the allowance (meaningful
+ *     only when advised)
  */
-public record SetCommissioning(AsBuiltSet built, List<Correction> corrections, double designPeak,
-        double asBuiltPeak, double afterTrimPeak, boolean trimRequired) {
+public record SetCommissioning(AsBuiltSet built, List<Correction> corrections, List<CommissioningWarning> warnings,
+        boolean advised, double designPeak, double asBuiltPeak, double afterTrimPeak, boolean trimRequired) {
 
-    /** Copies the list. */
+    /** Copies the lists. */
     public SetCommissioning {
         corrections = List.copyOf(corrections);
+        warnings = List.copyOf(warnings);
     }
 
     /**
@@ -51,13 +61,16 @@ public record SetCommissioning(AsBuiltSet built, List<Correction> corrections, d
      * @param targetFrequency the frequency the structure as measured needs, rad/s
      * @param frequencyOff omega_built / omega_target - 1
      * @param massToAdd the mass that brings it to the target at its spring rate, kg (negative: to take off);
-     *     0 when the fit is poor (its frequency could be wrong in size and sign)
+     *     0 when no trim is advised
      * @param designDampingRatio its design's damping ratio
      * @param dampingOff zeta_built / zeta_design - 1 (0 for an undamped design)
      */
     public record Correction(double designFrequency, double targetFrequency, double frequencyOff, double massToAdd,
             double designDampingRatio, double dampingOff) {
     }
+
+    /** Weighed masses further than this factor from the design's are refused: another absorber needs a design. */
+    static final double WEIGHED_FACTOR = 2.0;
 
     /**
      * @param design the several absorbers as designed
@@ -69,52 +82,102 @@ public record SetCommissioning(AsBuiltSet built, List<Correction> corrections, d
     public static SetCommissioning of(SeveralAbsorbers design, MeasuredFrf measured, boolean freeStructure,
             List<Double> weighed) {
         List<PointAbsorber> designed = design.absorbers();
-        if (!weighed.isEmpty() && weighed.size() != designed.size()) {
+        List<PointAbsorber> held = held(designed, weighed);
+        AbsorberLayout layout = design.layout();
+        ModalStructure structure = layout.structure();
+        int target = design.targetMode();
+        AsBuiltSet built = pairedByFrequency(AsBuiltSetFit.fit(structure, target, held, measured, freeStructure),
+                designed);
+        double designMode = structure.modes().get(target).naturalFrequency();
+        ModalStructure asMeasured = built.targetModeFrequency() == designMode ? structure
+                : structure.withFrequency(target, built.targetModeFrequency());
+        List<PointAbsorber> targets = SeveralAbsorbersDesigner.retuned(design, built.targetModeFrequency());
+        List<CommissioningWarning> warnings = new ArrayList<>(built.warnings());
+        if (Math.abs(built.targetModeFrequency() / designMode - 1) > CommissioningWarning.STRUCTURE_FAR) {
+            warnings.add(CommissioningWarning.STRUCTURE_FREQUENCY_FAR);
+        }
+        List<PointAbsorber> asBuilt = new ArrayList<>();
+        List<PointAbsorber> trimmed = new ArrayList<>();
+        double[] massToAdd = new double[designed.size()];
+        for (int j = 0; j < designed.size(); j++) {
+            AsBuiltSet.Built b = built.absorbers().get(j);
+            double ratio = b.frequency() / targets.get(j).frequency();
+            massToAdd[j] = b.mass() * (ratio * ratio - 1.0);
+            PointAbsorber now = PointAbsorber.tuned(designed.get(j).point(), b.mass(), b.frequency(), b.dampingRatio());
+            asBuilt.add(now);
+            trimmed.add(new PointAbsorber(now.point(), b.mass() + massToAdd[j], now.stiffness(), now.damping()));
+        }
+        FrequencyBand band = design.band();
+        double force = design.forceAmplitude();
+        double asBuiltPeak = force * peak(asMeasured, asBuilt, layout, band);
+        double afterTrim = force * peak(asMeasured, trimmed, layout, band);
+        boolean advised = !warnings.contains(CommissioningWarning.POOR_FIT);
+        if (advised && afterTrim > asBuiltPeak) {
+            warnings.add(CommissioningWarning.TRIM_DOES_NOT_HELP);
+            advised = false;
+        }
+        List<Correction> corrections = new ArrayList<>();
+        for (int j = 0; j < designed.size(); j++) {
+            PointAbsorber d = designed.get(j);
+            AsBuiltSet.Built b = built.absorbers().get(j);
+            double designZeta = d.damping() / (2 * d.mass() * d.frequency());
+            double targetFrequency = targets.get(j).frequency();
+            corrections.add(new Correction(d.frequency(), targetFrequency, b.frequency() / targetFrequency - 1.0,
+                    advised ? massToAdd[j] : 0.0, designZeta,
+                    designZeta > 0 ? b.dampingRatio() / designZeta - 1.0 : 0.0));
+        }
+        return new SetCommissioning(built, corrections, warnings, advised, design.peakAfter(), asBuiltPeak,
+                advised ? afterTrim : asBuiltPeak, asBuiltPeak > design.peakAfter() * (1 + DesignResult.TOLERANCE_ALLOWANCE));
+    }
+
+    /** The masses the fit holds: the design's, or each as weighed (within a factor of 2 of its design's). */
+    private static List<PointAbsorber> held(List<PointAbsorber> designed, List<Double> weighed) {
+        if (weighed.isEmpty()) {
+            return designed;
+        }
+        if (weighed.size() != designed.size()) {
             throw new InvalidInputException("absorber masses as weighed", weighed.size() + " values",
                     designed.size() + " masses, one per absorber in the design's order, or none for the design's");
         }
         List<PointAbsorber> held = new ArrayList<>();
         for (int j = 0; j < designed.size(); j++) {
             PointAbsorber d = designed.get(j);
-            if (weighed.isEmpty()) {
-                held.add(d);
-            } else {
-                double m = Checks.positive("absorber " + (j + 1) + " mass as weighed", weighed.get(j));
-                // weighed with its plates on the spring and damper as built: the design's frequency and
-                // damping ratio start the fit, its mass is the scale's
-                held.add(PointAbsorber.tuned(d.point(), m, d.frequency(), d.damping() / (2 * d.mass() * d.frequency())));
+            double m = Checks.positive("absorber " + (j + 1) + " mass as weighed", weighed.get(j));
+            if (m > WEIGHED_FACTOR * d.mass() || m < d.mass() / WEIGHED_FACTOR) {
+                throw new InvalidInputException("absorber " + (j + 1) + " mass as weighed", Checks.show(m) + " kg",
+                        "within half to twice the design's " + Checks.show(d.mass()) + " kg (a different absorber"
+                                + " needs a new design)");
             }
+            // weighed with its plates, on its spring and damper as built: the design's frequency and damping
+            // ratio start the fit, its mass is the scale's
+            held.add(PointAbsorber.tuned(d.point(), m, d.frequency(), d.damping() / (2 * d.mass() * d.frequency())));
         }
-        AbsorberLayout layout = design.layout();
-        ModalStructure structure = layout.structure();
-        int target = design.targetMode();
-        AsBuiltSet built = AsBuiltSetFit.fit(structure, target, held, measured, freeStructure);
-        double modeScale = built.targetModeFrequency() / structure.modes().get(target).naturalFrequency();
-        ModalStructure asMeasured = modeScale == 1.0 ? structure
-                : structure.withFrequency(target, built.targetModeFrequency());
-        boolean advised = !built.warnings().contains(CommissioningWarning.POOR_FIT);
-        List<Correction> corrections = new ArrayList<>();
-        List<PointAbsorber> asBuilt = new ArrayList<>();
-        List<PointAbsorber> trimmed = new ArrayList<>();
+        return held;
+    }
+
+    /**
+     * Absorbers of equal mass are told apart by nothing but their frequencies: the fitted ones are put
+     * in the order of the design's frequencies (the lowest fitted with the lowest designed).
+     */
+    private static AsBuiltSet pairedByFrequency(AsBuiltSet fitted, List<PointAbsorber> designed) {
+        List<AsBuiltSet.Built> b = fitted.absorbers();
+        double m = b.get(0).mass();
+        if (b.stream().anyMatch(x -> Math.abs(x.mass() - m) > 1e-9 * m)) {
+            return fitted;
+        }
+        List<AsBuiltSet.Built> byFrequency = new ArrayList<>(b);
+        byFrequency.sort(Comparator.comparingDouble(AsBuiltSet.Built::frequency));
+        List<Integer> designOrder = new ArrayList<>();
         for (int j = 0; j < designed.size(); j++) {
-            PointAbsorber d = designed.get(j);
-            AsBuiltSet.Built b = built.absorbers().get(j);
-            double targetFrequency = d.frequency() * modeScale;
-            double ratio = b.frequency() / targetFrequency;
-            double massToAdd = advised ? b.mass() * (ratio * ratio - 1.0) : 0.0;
-            double designZeta = d.damping() / (2 * d.mass() * d.frequency());
-            corrections.add(new Correction(d.frequency(), targetFrequency, ratio - 1.0, massToAdd, designZeta,
-                    designZeta > 0 ? b.dampingRatio() / designZeta - 1.0 : 0.0));
-            PointAbsorber now = PointAbsorber.tuned(d.point(), b.mass(), b.frequency(), b.dampingRatio());
-            asBuilt.add(now);
-            trimmed.add(new PointAbsorber(d.point(), b.mass() + massToAdd, now.stiffness(), now.damping()));
+            designOrder.add(j);
         }
-        FrequencyBand band = design.band();
-        double force = design.forceAmplitude();
-        double asBuiltPeak = force * peak(asMeasured, asBuilt, layout, band);
-        double afterTrim = advised ? force * peak(asMeasured, trimmed, layout, band) : asBuiltPeak;
-        return new SetCommissioning(built, corrections, design.peakAfter(), asBuiltPeak, afterTrim,
-                asBuiltPeak > design.peakAfter() * (1 + DesignResult.TOLERANCE_ALLOWANCE));
+        designOrder.sort(Comparator.comparingDouble(j -> designed.get(j).frequency()));
+        AsBuiltSet.Built[] paired = new AsBuiltSet.Built[b.size()];
+        for (int rank = 0; rank < b.size(); rank++) {
+            paired[designOrder.get(rank)] = byFrequency.get(rank);
+        }
+        return new AsBuiltSet(List.of(paired), fitted.targetMode(), fitted.targetModeFrequency(),
+                fitted.targetModeFrequencySd(), fitted.normalisedResidual(), fitted.lines(), fitted.warnings());
     }
 
     private static double peak(ModalStructure structure, List<PointAbsorber> absorbers, AbsorberLayout layout,

@@ -115,6 +115,38 @@ public final class SeveralAbsorbersDesigner {
                 DesignResult.TOLERANCE_ALLOWANCE, DesignResult.TOLERANCE_SEARCH, bare);
     }
 
+    /**
+     * The absorbers the same set would be if designed for the structure as measured, its target mode
+     * at another natural frequency (its modal mass, damping and shape kept): what each absorber as
+     * built should be trimmed to. Several absorbers are designed again for the same band, masses and
+     * tuning rule (the band, not the mode, sets their tunings: on the gallery floor a mode 3 % low
+     * moves them by 0.4 %, where scaling them with the mode would move them 3 % and raise the peak);
+     * one absorber keeps the design's tuning ratio, as the single absorber's site check does.
+     *
+     * @param set the absorbers as designed
+     * @param targetModeFrequency the target mode's natural frequency as measured, rad/s
+     * @return the absorbers as they should be, in the set's order
+     */
+    public static List<PointAbsorber> retuned(SeveralAbsorbers set, double targetModeFrequency) {
+        double wr = set.layout().structure().modes().get(set.targetMode()).naturalFrequency();
+        List<PointAbsorber> designed = set.absorbers();
+        if (targetModeFrequency == wr) {
+            return designed;
+        }
+        if (designed.size() == 1) {
+            PointAbsorber a = designed.get(0);
+            double zeta = a.damping() / (2 * a.mass() * a.frequency());
+            return List.of(PointAbsorber.tuned(a.point(), a.mass(), a.frequency() * targetModeFrequency / wr, zeta));
+        }
+        Mode mode = set.layout().structure().modes().get(set.targetMode());
+        FrequencyBand band = set.band();
+        AbsorberSetProblem problem = new AbsorberSetProblem(designed.size(), set.totalMass() / set.effectiveMass(),
+                mode.dampingRatio(), band.low() / targetModeFrequency, band.high() / targetModeFrequency,
+                set.layout().tuning());
+        return inSi(AbsorberSetOptimiser.optimise(problem).design(), set.effectiveMass(), targetModeFrequency,
+                set.layout().absorberPoint());
+    }
+
     private static double peak(ModalSystem system, AbsorberLayout layout, FrequencyBand band) {
         return ModalPeak.over(system, layout.excitationPoint(), layout.responsePoint(), band.low(), band.high());
     }

@@ -20,10 +20,11 @@ import org.counterpoise.io.text.UnitSystem;
  * @param file the FRF file
  * @param unit its kind and unit
  * @param check the absorbers as built and what to do
+ * @param weighed whether the masses were given as weighed (else the design's)
  * @param units the display unit system
  */
 public record SetSiteCheck(String project, SeveralAbsorbers design, String file, FrfUnit unit, SetCommissioning check,
-        UnitSystem units) {
+        boolean weighed, UnitSystem units) {
 
     /**
      * Reads the file and runs the check; a refusal names the file.
@@ -43,7 +44,7 @@ public record SetSiteCheck(String project, SeveralAbsorbers design, String file,
         MeasuredFrf measured = lines.apply(FrfCsv.read(file, unit));
         try {
             return new SetSiteCheck(project, design, file.toString(), unit,
-                    SetCommissioning.of(design, measured, freeStructure, weighed), units);
+                    SetCommissioning.of(design, measured, freeStructure, weighed), !weighed.isEmpty(), units);
         } catch (InvalidInputException e) {
             throw e.renamed(file + " (" + e.field() + ")");
         }

@@ -71,8 +71,8 @@ public final class SetSiteCheckJson {
             JsonNumbers.put(set, TARGET_MODE_FREQUENCY_SD.key(), hz(built.targetModeFrequencySd().getAsDouble()));
         }
         JsonNumbers.put(set, NORMALISED_RESIDUAL.key(), built.normalisedResidual());
-        set.add(WARNINGS.key(), SiteCheckJson.warnings(built.warnings()));
-        boolean advised = !built.warnings().contains(CommissioningWarning.POOR_FIT);
+        set.add(WARNINGS.key(), SiteCheckJson.warnings(c.warnings()));
+        boolean advised = c.advised();
         set.addProperty(ADVISED.key(), advised);
         JsonArray absorbers = new JsonArray();
         for (int j = 0; j < built.absorbers().size(); j++) {
@@ -101,8 +101,13 @@ public final class SetSiteCheckJson {
         peak.addProperty(RESPONSE.key(), "displacement");
         JsonNumbers.put(peak, DESIGN.key(), c.designPeak());
         JsonNumbers.put(peak, AS_BUILT.key(), c.asBuiltPeak());
-        JsonNumbers.put(peak, AFTER_TRIM.key(), c.afterTrimPeak());
-        peak.addProperty(TRIM_REQUIRED.key(), c.trimRequired());
+        if (advised) {
+            JsonNumbers.put(peak, AFTER_TRIM.key(), c.afterTrimPeak());
+            peak.addProperty(TRIM_REQUIRED.key(), c.trimRequired());
+        } else {
+            peak.add(AFTER_TRIM.key(), JsonNull.INSTANCE);
+            peak.add(TRIM_REQUIRED.key(), JsonNull.INSTANCE);
+        }
         set.add(BAND_PEAK.key(), peak);
         o.add(FITTED_SET.key(), set);
         return JsonNumbers.write(o);

@@ -20,9 +20,14 @@ import org.counterpoise.io.text.UnitSystem;
 public final class SetSiteCheckReport {
     /** What the check of several absorbers covers. */
     static final String SCOPE = "The fit holds at the absorbers' point, on the project's modes with their masses,"
-            + " shapes and damping; absorbers of equal mass are told apart only by their order of frequency, so"
-            + " mark each absorber before the test and check the trim on the one that was measured as lowest or"
-            + " highest.";
+            + " shapes and damping. Absorbers of equal mass are told apart only by their frequencies, so they are"
+            + " paired with the design's in order of frequency (the lowest measured with the lowest designed): mark"
+            + " each absorber and tap-test it alone to confirm which is which before trimming it.";
+
+    /** Said with a response measured with the absorbers fitted. */
+    static final String STOPPED = "Tune, fit and tap-test each absorber with the machine stopped and isolated, every"
+            + " absorber mass secured against falling; the uncertainties shown are the data's scatter about the model"
+            + " (one standard deviation), not errors of the model.";
 
     private SetSiteCheckReport() {
     }
@@ -47,13 +52,14 @@ public final class SetSiteCheckReport {
                         + built.targetModeFrequencySd().stream().mapToObj(sd -> " +/- "
                         + QuantityFormat.number(Unit.HERTZ.fromSi(sd), 2) + " Hz").findFirst().orElse(""));
         line(b, "normalised residual", QuantityFormat.number(built.normalisedResidual(), 3));
-        boolean advised = !built.warnings().contains(CommissioningWarning.POOR_FIT);
+        boolean advised = c.advised();
+        boolean poor = c.warnings().contains(CommissioningWarning.POOR_FIT);
         for (int j = 0; j < built.absorbers().size(); j++) {
             AsBuiltSet.Built a = built.absorbers().get(j);
             SetCommissioning.Correction k = c.corrections().get(j);
             String name = "absorber " + (j + 1);
             line(b, name + ": mass", DisplayUnits.format(a.mass(), Dimension.MASS, units)
-                    + (a.mass() != check.design().absorbers().get(j).mass() ? " (as weighed)" : " (design)"));
+                    + (check.weighed() ? " (as weighed)" : " (design)"));
             line(b, name + ": frequency", QuantityFormat.format(a.frequency(), Unit.HERTZ) + " +/- "
                     + QuantityFormat.number(Unit.HERTZ.fromSi(a.frequencySd()), 2) + " Hz (needed "
                     + QuantityFormat.format(k.targetFrequency(), Unit.HERTZ) + ": " + signedPercent(k.frequencyOff())
@@ -73,16 +79,19 @@ public final class SetSiteCheckReport {
                 + PlainText.escape(check.design().layout().responsePoint()) + ": design "
                 + DisplayUnits.format(c.designPeak(), length, units) + ", as built "
                 + DisplayUnits.format(c.asBuiltPeak(), length, units) + " ("
-                + signedPercent(c.asBuiltPeak() / c.designPeak() - 1) + ")"
+                + signedPercent(c.asBuiltPeak() / c.designPeak() - 1) + (poor ? "; from a poor fit, not to be relied on"
+                        : "") + ")"
                 + (advised ? ", after the trims " + DisplayUnits.format(c.afterTrimPeak(), length, units) : ""));
-        line(b, "trim", !advised ? "none advised: the fit is poor, so the absorbers' frequencies are not known"
+        line(b, "trim", poor ? "none advised: the fit is poor, so the absorbers' frequencies are not known"
+                : !advised ? "none advised: trimming to the frequencies needed would not lower the peak (see below)"
                 : c.trimRequired() ? "REQUIRED: the response as built is more than "
                         + percent(DesignResult.TOLERANCE_ALLOWANCE) + " above the design's"
                         : "optional: the response is within " + percent(DesignResult.TOLERANCE_ALLOWANCE)
                                 + " of the design's");
-        built.warnings().forEach(w -> b.append("Warning: ").append(SiteCheckReport.words(w)).append('\n'));
+        boolean freed = built.targetModeFrequencySd().isPresent();
+        c.warnings().forEach(w -> b.append("Warning: ").append(SiteCheckReport.words(w, freed)).append('\n'));
         b.append("Cautions\n");
-        for (String caution : List.of(SCOPE, SiteCheckReport.STOPPED, SiteCheckReport.PRACTICE)) {
+        for (String caution : List.of(SCOPE, STOPPED, SiteCheckReport.PRACTICE)) {
             b.append("  - ").append(caution).append('\n');
         }
         return b.toString();

@@ -149,7 +149,7 @@ public final class SiteCheckReport {
         }
         List<CommissioningWarning> all = new ArrayList<>(a.warnings());
         all.addAll(t.warnings());
-        all.forEach(w -> b.append("Warning: ").append(words(w)).append('\n'));
+        all.forEach(w -> b.append("Warning: ").append(words(w, a.structureFrequencySd().isPresent())).append('\n'));
         double toUnit = f.unit().toSi();
         b.append("Measured against predicted (").append(f.unit().kind().id()).append(", ").append(f.unit().symbol())
                 .append(")\n");
@@ -170,11 +170,22 @@ public final class SiteCheckReport {
      * @return its words, the one place they are written
      */
     public static String words(CommissioningWarning w) {
+        return words(w, false);
+    }
+
+    /**
+     * @param w a warning
+     * @param structureFreed whether the fit freed the structure's frequency (a poor fit then has other causes)
+     * @return its words, the one place they are written
+     */
+    public static String words(CommissioningWarning w, boolean structureFreed) {
         return switch (w) {
             case POOR_FIT -> "the model misses more than " + Math.round(CommissioningWarning.POOR_FIT_LIMIT * 100)
-                    + " % of the measured response: the structure's frequency may differ from the design's"
-                    + " (try --free-structure), or the response was not measured at the absorber's point";
-            case FREQUENCY_AT_SEARCH_EDGE -> "the absorber's frequency came out far from the design's (below half or"
+                    + " % of the measured response" + (structureFreed ? " even with the structure's frequency fitted:"
+                    + " the response was not measured at the absorbers' point, its kind or units are not as stated, or"
+                    + " the structure is not as the project describes" : ": the structure's frequency may differ from"
+                    + " the design's (try --free-structure), or the response was not measured at the absorber's point");
+            case FREQUENCY_AT_SEARCH_EDGE -> "an absorber's frequency came out far from its design's (below 0.55 or"
                     + " above 1.8 times): check that the absorber moves freely and the FRF kind and units";
             case BEYOND_TRIM_RANGE -> "the trim plates supplied cannot bring the absorber to its frequency: the"
                     + " spring rate or the mass is off; change the springs or the mass, then measure again";
@@ -188,6 +199,11 @@ public final class SiteCheckReport {
             case OTHER_LINE_DOMINATES -> "the spectrum's largest line is not at the running speed and is more than "
                     + QuantityFormat.number(CommissioningWarning.OTHER_LINE_FACTOR, 2)
                     + " times the line there: another source may govern, which this absorber does not treat";
+            case STRUCTURE_FREQUENCY_FAR -> "the structure's natural frequency came out more than "
+                    + Math.round(CommissioningWarning.STRUCTURE_FAR * 100) + " % from the design's: check that the"
+                    + " response was measured at the absorbers' point, the FRF kind and units, and the project's modes";
+            case TRIM_DOES_NOT_HELP -> "trimming the absorbers to the frequencies the structure needs would not lower"
+                    + " the peak over the band: no trim is advised; the structure as measured may need a new design";
         };
     }
 

@@ -49,6 +49,11 @@ final class FrfOptions {
         if (!(hz[0] >= 0 && hz[1] > hz[0])) {
             throw new InvalidInputException(option, Converters.shown(band), "LO:HI in Hz with 0 <= LO < HI");
         }
-        return all.within(Unit.HERTZ.toSi(hz[0]), Unit.HERTZ.toSi(hz[1]));
+        try {
+            return all.within(Unit.HERTZ.toSi(hz[0]), Unit.HERTZ.toSi(hz[1]));
+        } catch (InvalidInputException e) {
+            // too few lines left: said of the option that chose them
+            throw e.renamed(option);
+        }
     }
 }

@@ -96,7 +96,7 @@ public final class SiteCheckCommand implements Callable<Integer> {
             description = "fit the structure's natural frequency too (when it was not measured with the absorber locked)")
     private boolean freeStructure;
 
-    @Option(names = "--absorber-mass", paramLabel = "KG[,KG...]", split = ",",
+    @Option(names = "--absorber-mass", paramLabel = "KG", split = ",",
             description = "the absorber's mass as weighed with its fitted plates, kg (default: the design's); for"
                     + " several absorbers one mass per absorber, in the design's order, separated by commas")
     private List<Double> absorberMass;

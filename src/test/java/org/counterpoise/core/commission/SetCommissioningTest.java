@@ -137,17 +137,51 @@ class SetCommissioningTest {
     }
 
     @Test
-    void aFreedModeFrequencyIsFoundAndTheTargetsFollowIt() {
-        ModalStructure shifted = FLOOR.withFrequency(design.targetMode(),
-                FLOOR.modes().get(design.targetMode()).naturalFrequency() * 0.97);
-        double[] f = {0.97 * 1.02, 0.97 * 0.99};
-        SetCommissioning check = SetCommissioning.of(design, measured(shifted, built(f, new double[] {1, 1}), 0, 3),
-                true, List.of());
+    void aFreedModeFrequencyIsFoundAndTheTargetsAreTheSetDesignedForIt() {
         double mode = FLOOR.modes().get(design.targetMode()).naturalFrequency();
+        ModalStructure shifted = FLOOR.withFrequency(design.targetMode(), mode * 0.97);
+        // the set designed again for the mode as measured (same band, masses and rule): the band sets the tunings
+        List<PointAbsorber> needed = SeveralAbsorbersDesigner.retuned(design, 0.97 * mode);
+        double[] off = {1.02, 0.99};
+        List<PointAbsorber> asBuilt = new ArrayList<>();
+        for (int j = 0; j < 2; j++) {
+            PointAbsorber n = needed.get(j);
+            asBuilt.add(PointAbsorber.tuned(n.point(), n.mass(), n.frequency() * off[j], 0.03));
+        }
+        SetCommissioning check = SetCommissioning.of(design, measured(shifted, asBuilt, 0, 3), true, List.of());
         assertEquals(0.97 * mode, check.built().targetModeFrequency(), 1e-6 * mode);
         assertTrue(check.built().targetModeFrequencySd().isPresent());
         assertEquals(0.02, check.corrections().get(0).frequencyOff(), 1e-5);
         assertEquals(-0.01, check.corrections().get(1).frequencyOff(), 1e-5);
+        assertTrue(check.afterTrimPeak() <= check.asBuiltPeak(), "a trim advised lowers the peak");
+    }
+
+    @Test
+    void absorbersBuiltAsDesignedOnAModeThatMovedAreNeverTrimmedIntoAHigherPeak() {
+        double mode = FLOOR.modes().get(design.targetMode()).naturalFrequency();
+        for (double factor : new double[] {0.95, 0.97, 1.03}) {
+            ModalStructure shifted = FLOOR.withFrequency(design.targetMode(), mode * factor);
+            SetCommissioning check = SetCommissioning.of(design, measured(shifted, design.absorbers(), 0, 7), true,
+                    List.of());
+            assertTrue(check.afterTrimPeak() <= check.asBuiltPeak() * (1 + 1e-12), "factor " + factor + ": "
+                    + check.afterTrimPeak() + " after against " + check.asBuiltPeak() + " as built");
+        }
+    }
+
+    @Test
+    void absorbersWhoseFrequenciesCrossedArePairedWithTheDesignInOrderOfFrequency() {
+        // absorber 1 built 12 % high and absorber 2 7 % low: the one now lower is reported as absorber 1
+        double[] f = {1.12, 0.93};
+        SetCommissioning check = SetCommissioning.of(design, measured(FLOOR, built(f, new double[] {1, 1}), 0, 8),
+                false, List.of());
+        double first = check.built().absorbers().get(0).frequency();
+        double second = check.built().absorbers().get(1).frequency();
+        assertTrue(first < second, first + " then " + second);
+        List<Double> expected = new ArrayList<>(List.of(design.absorbers().get(0).frequency() * f[0],
+                design.absorbers().get(1).frequency() * f[1]));
+        expected.sort(Double::compare);
+        assertEquals(expected.get(0), first, 1e-6 * first);
+        assertEquals(expected.get(1), second, 1e-6 * second);
     }
 
     @Test
@@ -188,10 +222,13 @@ class SetCommissioningTest {
     }
 
     @Test
-    void weighedMassesMustBeOnePerAbsorber() {
+    void weighedMassesMustBeOnePerAbsorberAndNearTheDesigns() {
         InvalidInputException e = assertThrows(InvalidInputException.class, () -> SetCommissioning.of(design,
                 measured(FLOOR, design.absorbers(), 0, 6), false, List.of(450.0)));
         assertEquals("absorber masses as weighed", e.field());
+        InvalidInputException far = assertThrows(InvalidInputException.class, () -> SetCommissioning.of(design,
+                measured(FLOOR, design.absorbers(), 0, 6), false, List.of(0.001, 450.0)));
+        assertEquals("absorber 1 mass as weighed", far.field());
     }
 
     @Test
@@ -228,8 +265,9 @@ class SetCommissioningTest {
         for (int j = 0; j < 3; j++) {
             PointAbsorber d = set.absorbers().get(j);
             assertEquals(d.frequency() * f[j], check.built().absorbers().get(j).frequency(), 1e-6 * d.frequency());
-            // the targets follow the mode: each absorber's design frequency times 1.04
-            assertEquals(f[j] / 1.04 - 1, check.corrections().get(j).frequencyOff(), 1e-6);
+            // the targets are the set designed again for the mode as measured
+            double target = SeveralAbsorbersDesigner.retuned(set, 31 * HZ * 1.04).get(j).frequency();
+            assertEquals(d.frequency() * f[j] / target - 1, check.corrections().get(j).frequencyOff(), 1e-6);
         }
     }
 }
