@@ -51,6 +51,11 @@ public record BuiltResponse(ResponseKind kind, double design, double asBuilt, do
                 asBuilt > designed * (1 + DesignResult.TOLERANCE_ALLOWANCE));
     }
 
+    /** @return the same responses with no trim made: after it, as built; not required */
+    BuiltResponse withoutTrim() {
+        return new BuiltResponse(kind, design, asBuilt, asBuilt, trimRequired);
+    }
+
     private static double peak(Structure structure, Tuning tuning, DesignResult design) {
         Excitation e = design.study().excitation();
         return new SystemResponse(structure, tuning, e.kind(), e.amplitude())

@@ -4,8 +4,11 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.OptionalDouble;
 import org.apache.commons.math3.complex.Complex;
+import org.counterpoise.core.design.AbsorberSizing;
 import org.counterpoise.core.design.DesignResult;
+import org.counterpoise.core.design.Designer;
 import org.counterpoise.core.error.Checks;
+import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.identify.MeasuredFrf;
 import org.counterpoise.core.model.Structure;
 import org.counterpoise.core.model.Tuning;
@@ -17,6 +20,14 @@ import org.counterpoise.core.realisation.Realisation;
  * absorber fitted, against the design's prediction and against the absorber as built (fitted to
  * the measurement, {@link AsBuiltFit}), with the trim that brings it to the design
  * ({@link TrimCorrection}).
+ *
+ * <p>The absorber frequency the structure needs is the design's; when the fit freed the structure's
+ * frequency, it is the design the project's method makes for the structure as measured, with the
+ * absorber's mass as built ({@link #targetTuningRatio}). Scaling the design's tuning ratio with the
+ * structure is right only for a design over all frequencies: at one speed, or over a band, the
+ * forcing sets the tuning, and a trim scaled with a structure 5 % off raised the peak 5 to 6 times on
+ * every shipped preset with one speed (a check of this program's own, 5 Dec 2026). A trim that would
+ * not lower the peak is never advised ({@link CommissioningWarning#TRIM_DOES_NOT_HELP}).
  *
  * @param built the absorber as built
  * @param trim what to do about it
@@ -65,8 +76,13 @@ public record CommissioningCheck(AsBuiltAbsorber built, TrimCorrection trim, Lis
         Checks.positive("absorber mass as weighed", mass);
         Tuning held = new Tuning(mass / structure.effectiveMass(), tuning.tuningRatio(), tuning.dampingRatio());
         AsBuiltAbsorber built = AsBuiltFit.fit(structure, held, measured, freeStructure);
-        TrimCorrection trim = TrimCorrection.of(built, tuning.tuningRatio(), tuning.dampingRatio(),
+        TrimCorrection trim = TrimCorrection.of(built, targetTuningRatio(design, built, mass), tuning.dampingRatio(),
                 mass, realisation.trim(), realisation.tolerances());
+        BuiltResponse response = BuiltResponse.of(design, built, trim, mass, realisation.trim().plateMass());
+        if (trim.advised() && trim.platesToAdd() != 0 && response.afterTrim() > response.asBuilt()) {
+            trim = trim.notHelping();
+            response = response.withoutTrim();
+        }
         Structure asMeasured = AsBuiltFit.withFrequency(structure, built.structureFrequency());
         Tuning asBuilt = new Tuning(built.massRatio(), built.tuningRatio(), built.dampingRatio());
         double[] w = measured.omega();
@@ -89,8 +105,31 @@ public record CommissioningCheck(AsBuiltAbsorber built, TrimCorrection trim, Lis
                     AsBuiltFit.predicted(asMeasured, asBuilt, at, measured.kind())[0].abs()));
         }
         return new CommissioningCheck(built, trim, rows, w[measuredAt], measured.value(measuredAt).abs(), w[designAt],
-                predicted[designAt].abs(), BuiltResponse.of(design, built, trim, mass, realisation.trim().plateMass()),
-                mass);
+                predicted[designAt].abs(), response, mass);
+    }
+
+    /**
+     * @param design the design
+     * @param built the absorber as built, on the structure as fitted
+     * @param mass the absorber's mass as built, kg
+     * @return the tuning ratio, on the structure as fitted, of the absorber frequency it needs: the
+     *     design's when the structure was held; else that of the design the project's method makes for
+     *     the structure as measured, with this mass (the design's ratio if that design is refused)
+     */
+    static double targetTuningRatio(DesignResult design, AsBuiltAbsorber built, double mass) {
+        Structure structure = design.study().structure();
+        if (built.structureFrequencySd().isEmpty() || built.structureFrequency() == structure.naturalFrequency()) {
+            return design.tuning().tuningRatio();
+        }
+        Structure measured = AsBuiltFit.withFrequency(structure, built.structureFrequency());
+        try {
+            DesignResult again = Designer.design(design.study().withStructure(measured)
+                    .withSizing(AbsorberSizing.ofMass(mass), design.study().constraints()));
+            return again.absorber().naturalFrequency() / built.structureFrequency();
+        } catch (InvalidInputException e) {
+            // a constraint the measured structure cannot meet: the design's own tuning ratio, as before
+            return design.tuning().tuningRatio();
+        }
     }
 
     /** The measured magnitude at f, linear between the lines on either side. */

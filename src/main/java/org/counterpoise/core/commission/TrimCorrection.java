@@ -37,6 +37,17 @@ public record TrimCorrection(double targetFrequency, double frequencyOff, double
         warnings = List.copyOf(warnings);
     }
 
+    /**
+     * @return the same finding with no plates advised, since they would not lower the peak
+     *     ({@link CommissioningWarning#TRIM_DOES_NOT_HELP} added)
+     */
+    TrimCorrection notHelping() {
+        List<CommissioningWarning> more = new ArrayList<>(warnings);
+        more.add(CommissioningWarning.TRIM_DOES_NOT_HELP);
+        return new TrimCorrection(targetFrequency, frequencyOff, frequencyTolerance, false, 0, frequencyOff,
+                dampingOff, dampingTolerance, more);
+    }
+
     /** @return whether the absorber's frequency is inside its part tolerance as built */
     public boolean frequencyInTolerance() {
         return Math.abs(frequencyOff) <= frequencyTolerance;

@@ -172,6 +172,15 @@ public record DesignStudy(String name, Structure structure, Excitation excitatio
     }
 
     /**
+     * @param other another structure (the one measured on site, say)
+     * @return this study on it
+     */
+    public DesignStudy withStructure(Structure other) {
+        return new DesignStudy(name, other, excitation, response, sizing, method, hangsVertically, strokeMargin,
+                constraints, robustness, criterion);
+    }
+
+    /**
      * @param judgedAgainst the criterion (empty for none)
      * @return this study with it
      */

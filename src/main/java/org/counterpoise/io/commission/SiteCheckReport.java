@@ -132,7 +132,9 @@ public final class SiteCheckReport {
                 + DisplayUnits.format(peak.asBuilt(), shown, units) + " (" + signedPercent(peak.asBuilt()
                 / peak.design() - 1) + ")" + (t.advised() && t.platesToAdd() != 0 ? ", after the trim "
                 + DisplayUnits.format(peak.afterTrim(), shown, units) : ""));
-        if (!t.advised()) {
+        if (t.warnings().contains(CommissioningWarning.TRIM_DOES_NOT_HELP)) {
+            line(b, "trim", "none advised: trimming to the frequency needed would not lower the peak (see below)");
+        } else if (!t.advised()) {
             line(b, "trim", "none advised: the fit is poor, so the absorber's frequency is not known (see below)");
         } else {
             line(b, "frequency as built", t.frequencyInTolerance() ? "inside its part tolerance"
@@ -142,7 +144,10 @@ public final class SiteCheckReport {
                     : "; optional: the response is within " + percent(DesignResult.TOLERANCE_ALLOWANCE)
                     + " of the design's";
             int n = Math.abs(t.platesToAdd());
-            line(b, "trim", t.platesToAdd() == 0 ? "none: no whole plate (" + mass + " each) brings it nearer" + why
+            String noPlate = peak.trimRequired() ? "; the response as built is more than "
+                    + percent(DesignResult.TOLERANCE_ALLOWANCE) + " above the design's, and no trim brings it back:"
+                    + " the structure differs from the design's; design again for it" : why;
+            line(b, "trim", t.platesToAdd() == 0 ? "none: no whole plate (" + mass + " each) brings it nearer" + noPlate
                     : (t.platesToAdd() > 0 ? "add " : "take off ") + n + " plate" + (n == 1 ? "" : "s") + " of " + mass
                             + (t.platesToAdd() < 0 && n == plan.platesFitted() ? " (all of them)" : "")
                             + " (frequency then " + signedPercent(t.frequencyOffAfter()) + why + ")");
