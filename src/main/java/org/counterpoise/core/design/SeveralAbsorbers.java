@@ -2,7 +2,10 @@ package org.counterpoise.core.design;
 
 import java.util.List;
 import java.util.Optional;
+import java.util.function.DoubleUnaryOperator;
 import org.counterpoise.core.model.FrequencyBand;
+import org.counterpoise.core.rational.TransferFunction;
+import org.counterpoise.core.system.ModalSystem;
 import org.counterpoise.core.system.PointAbsorber;
 
 /**
@@ -53,6 +56,22 @@ public record SeveralAbsorbers(AbsorberLayout layout, int targetMode, double eff
      * @param peak the peak over the band at the response point with it, m
      */
     public record SingleAbsorber(PointAbsorber absorber, double peak) {
+    }
+
+    /**
+     * The displacement amplitude at the response point per the force at the excitation point, of the
+     * whole structure (every mode), from its exact transfer function ({@link ModalSystem}).
+     *
+     * @param withAbsorbers true with the absorbers, false the bare structure
+     * @return the amplitude, m, at an angular frequency, rad/s
+     */
+    public DoubleUnaryOperator response(boolean withAbsorbers) {
+        ModalSystem with = ModalSystem.of(layout.structure(), absorbers);
+        ModalSystem system = withAbsorbers ? with : with.bare();
+        TransferFunction h = system.transferFunction(layout.excitationPoint(), layout.responsePoint());
+        double scale = system.responseScale(layout.excitationPoint(), forceAmplitude, layout.responsePoint());
+        double reference = system.referenceFrequency();
+        return omega -> scale * h.magnitude(omega / reference);
     }
 
     /** @return the total mass of the absorbers, kg */

@@ -112,7 +112,7 @@ class SeveralAbsorbersOutputTest {
     }
 
     @Test
-    void commandsThatTakeOneAbsorberSaySo(@TempDir Path dir) throws Exception {
+    void robustnessSaysItTakesOneAbsorberAndTheSheetListsThemAll(@TempDir Path dir) throws Exception {
         CliTest.Run robustness = CliTest.run("robustness", "--json", "presets/split-mass-test-rig.json");
         assertEquals(0, robustness.code(), robustness.err());
         assertTrue(robustness.err().contains(SeveralAbsorbersContent.ONE_ABSORBER_ONLY), robustness.err());
@@ -121,7 +121,8 @@ class SeveralAbsorbersOutputTest {
         assertEquals(0, sheet.code(), sheet.err());
         try (PDDocument doc = Loader.loadPDF(Files.readAllBytes(pdf))) {
             String text = new PDFTextStripper().getText(doc).replaceAll("\\s+", " ");
-            assertTrue(text.contains("This project has several modes or absorbers"), text);
+            assertTrue(text.contains("This project has several absorbers: every absorber to build"), text);
+            assertTrue(text.contains("Absorber 3 of 3: its own parts"), text);
         }
     }
 }
