@@ -9,11 +9,16 @@ import java.awt.Robot;
 import java.awt.image.BufferedImage;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.List;
 import java.util.concurrent.Callable;
+import java.util.concurrent.CopyOnWriteArrayList;
 import javax.imageio.ImageIO;
 import javax.swing.JLabel;
 import javax.swing.JTabbedPane;
 import javax.swing.JTable;
+import org.apache.pdfbox.Loader;
+import org.apache.pdfbox.pdmodel.PDDocument;
+import org.apache.pdfbox.text.PDFTextStripper;
 import org.counterpoise.core.design.AbsorbersToBuild;
 import org.counterpoise.core.design.DesignDossier;
 import org.counterpoise.core.design.DesignResult;
@@ -23,12 +28,14 @@ import org.counterpoise.core.system.PointAbsorber;
 import org.counterpoise.core.units.Unit;
 import org.counterpoise.io.preset.Presets;
 import org.counterpoise.io.project.LoadedProject;
+import org.counterpoise.io.project.Project;
 import org.counterpoise.io.project.ProjectReader;
 import org.counterpoise.io.project.SeveralModes;
 import org.counterpoise.io.text.QuantityFormat;
 import org.counterpoise.io.text.ValueText;
 import org.counterpoise.ui.gui.Edt;
 import org.counterpoise.ui.gui.plot.ChartHost;
+import org.counterpoise.ui.gui.task.TaskRunner;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
@@ -154,6 +161,28 @@ class SeveralAbsorbersGuiTest {
                     "result.several.summary")).getText()) + " / " + onEdt(frame::statusText), e);
         }
         assertEquals(first, row(absorbers, 0));
+    }
+
+    @Test
+    void theSheetSavedFromTheWizardListsEveryAbsorberToBuild(@TempDir Path dir) throws Exception {
+        Project project = ProjectReader.read(Path.of("presets", "split-mass-test-rig.json")).project();
+        TaskRunner tasks = new TaskRunner(() -> 0L, null);
+        List<String> said = new CopyOnWriteArrayList<>();
+        Path pdf = dir.resolve("rig.pdf");
+        SheetStep sheet = Edt.call(() -> new SheetStep(tasks, said::add));
+        Edt.call(() -> {
+            sheet.show(DesignDossier.of(project.toStudy()), project);
+            sheet.writeSheet(pdf);
+            return null;
+        });
+        Edt.waitFor(() -> said.stream().anyMatch(m -> m.startsWith("Saved the sheet")), "the saved sheet: " + said);
+        try (PDDocument doc = Loader.loadPDF(pdf.toFile())) {
+            String text = new PDFTextStripper().getText(doc).replaceAll("\\s+", " ");
+            for (String e : List.of("Absorbers to build", "Absorber 1 of 3: its own parts",
+                    "Absorber 3 of 3: its own parts", "This project has several absorbers: every absorber to build")) {
+                assertTrue(text.contains(e), "the wizard's sheet lacks " + e);
+            }
+        }
     }
 
     private void load(LoadedProject p) throws Exception {
