@@ -2,8 +2,11 @@ package org.counterpoise.core.design;
 
 import java.util.List;
 import java.util.Optional;
+import java.util.function.DoubleUnaryOperator;
 import org.counterpoise.core.model.FrequencyBand;
 import org.counterpoise.core.robust.MistuningRange;
+import org.counterpoise.core.system.AbsorberSensitivity;
+import org.counterpoise.core.system.ModalSystem;
 import org.counterpoise.core.system.PointAbsorber;
 
 /**
@@ -59,6 +62,25 @@ public record SeveralAbsorbers(AbsorberLayout layout, int targetMode, double eff
      * @param structureTolerance its tolerance to the target mode's frequency, as the set's
      */
     public record SingleAbsorber(PointAbsorber absorber, double peak, MistuningRange structureTolerance) {
+    }
+
+    /**
+     * The displacement amplitude at the response point per the force at the excitation point, of the
+     * whole structure (every mode), from its factored form, each modal and absorber term evaluated on its
+     * own ({@link AbsorberSensitivity#value}; the expanded transfer function of {@link ModalSystem} loses
+     * digits between close peaks of several light absorbers, docs/several-modes.md).
+     *
+     * @param withAbsorbers true with the absorbers, false the bare structure
+     * @return the amplitude, m, at an angular frequency, rad/s
+     */
+    public DoubleUnaryOperator response(boolean withAbsorbers) {
+        ModalSystem with = ModalSystem.of(layout.structure(), absorbers);
+        ModalSystem system = withAbsorbers ? with : with.bare();
+        String force = layout.excitationPoint();
+        String at = layout.responsePoint();
+        double scale = system.responseScale(force, forceAmplitude, at);
+        double reference = system.referenceFrequency();
+        return omega -> scale * AbsorberSensitivity.value(system, force, at, omega / reference).abs();
     }
 
     /** @return the total mass of the absorbers, kg */

@@ -38,6 +38,7 @@ import org.counterpoise.io.export.ResultJson;
 import org.counterpoise.io.project.MeasuredSource;
 import org.counterpoise.io.project.ProjectIdentity;
 import org.counterpoise.io.text.DesignContent;
+import org.counterpoise.io.text.SeveralAbsorbersContent;
 import org.counterpoise.io.text.UnitSystem;
 import org.knowm.xchart.XYChart;
 
@@ -194,9 +195,33 @@ public final class SheetFiles {
     public static void writeSheet(DesignDossier dossier, String notes, String date, String revision,
             ProjectIdentity identity, List<SheetPanel> panels, AmplitudeConvention convention, HardwareChoice hardware,
             UnitSystem units, MeasuredSource measured, OutputStream out) throws IOException {
+        writeSheet(dossier, notes, date, revision, identity, panels, convention, hardware, units, measured,
+                Optional.empty(), out);
+    }
+
+    /**
+     * The sheet of a project with several modes or absorbers, as PDF bytes (the wizard's preview).
+     * @param dossier the design and its analyses
+     * @param notes the project's notes, or empty
+     * @param date date of issue
+     * @param revision revision mark
+     * @param identity the project's identity
+     * @param panels further pages after the design's charts
+     * @param convention the convention response values are stated in
+     * @param hardware the project's hardware choices
+     * @param units the project's display units
+     * @param measured where the structure's data came from when measured, or null when typed
+     * @param layout the project's modes and absorbers, or empty for one of each
+     * @param out where the PDF goes
+     * @throws IOException when the stream cannot be written
+     */
+    public static void writeSheet(DesignDossier dossier, String notes, String date, String revision,
+            ProjectIdentity identity, List<SheetPanel> panels, AmplitudeConvention convention, HardwareChoice hardware,
+            UnitSystem units, MeasuredSource measured, Optional<AbsorberLayout> layout, OutputStream out)
+            throws IOException {
         List<XYChart> charts = charts(dossier.design(), dossier.curves(), convention, units);
         SheetWriter.write(() -> content(dossier, notes, date, revision, identity, convention, hardware, units,
-                measured, Optional.empty()), charts, panels, out);
+                measured, layout), charts, panels, out);
     }
 
     private static SheetContent content(DesignDossier dossier, String notes, String date, String revision,
@@ -206,7 +231,11 @@ public final class SheetFiles {
         // state, whoever asked first
         if (layout.isPresent()) {
             SeveralAbsorbers several = SeveralAbsorbersDesigner.design(dossier.design(), layout.get());
-            return SheetContent.of(dossier.design(), notes, date, revision, dossier.monteCarlo(ProgressListener.NONE),
+            // where the several absorbers are, said first, after the project's notes
+            String note = layout.get().count() > 1 ? SeveralAbsorbersContent.SHEET_SEVERAL_ABSORBERS
+                    : SeveralAbsorbersContent.SHEET_SEVERAL_MODES;
+            return SheetContent.of(dossier.design(), notes.isBlank() ? note : notes + " " + note, date, revision,
+                    dossier.monteCarlo(ProgressListener.NONE),
                     identity, dossier.comparison(ProgressListener.NONE), convention, realisation(dossier, hardware),
                     units, measured, several, hardware);
         }

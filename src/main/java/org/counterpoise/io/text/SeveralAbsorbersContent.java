@@ -31,7 +31,12 @@ public final class SeveralAbsorbersContent {
     static final String ONE_ABSORBER_SECTIONS = "Several absorbers: the sections other than \"Several absorbers and"
             + " modes\" (the absorber, stroke and forces, tolerance, method comparison, hardware) are for one absorber"
             + " of the total mass on the target mode; the sheet lists every absorber to build with its own parts,"
-            + " tolerance and tuning step; robustness and the wizard do not yet take several absorbers.";
+            + " tolerance and tuning step, and the wizard shows them on the result step; robustness does not yet take"
+            + " several absorbers.";
+    /** What the wizard says when it opens a project with several modes or absorbers. */
+    public static final String IN_THE_WIZARD = "This project has several modes or absorbers: the result step's tab"
+            + " \"Several absorbers\" shows each absorber and the whole structure's response; the other steps and"
+            + " tabs are for one absorber of the total mass on the target mode alone; the modes are edited in the file.";
     /** What the sheet of a project with several absorbers says first. */
     public static final String SHEET_SEVERAL_ABSORBERS = "This project has several absorbers: every absorber to build,"
             + " with its own parts, tolerance and tuning step, is under \"" + AbsorbersToBuildContent.TITLE + "\" and on"

@@ -11,11 +11,9 @@ import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.progress.ProgressListener;
 import org.counterpoise.io.PlainText;
 import org.counterpoise.io.project.LoadedProject;
-import org.counterpoise.io.project.Project;
 import org.counterpoise.io.project.SeveralModes;
 import org.counterpoise.io.sheet.RunUpPanel;
 import org.counterpoise.io.sheet.SheetFiles;
-import org.counterpoise.io.text.SeveralAbsorbersContent;
 import org.counterpoise.io.text.UnitSystem;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
@@ -81,7 +79,7 @@ public final class SheetCommand implements Callable<Integer> {
                 .hardware(loaded.project().hardware(), DisplayUnitSystem.of(units, loaded.project()))
                 .measured(loaded.project().structure().measured())
                 .absorbers(layout)
-                .sheet(output, notesOnTheSheet(loaded.project(), layout), issued, mark, "--output", identity)
+                .sheet(output, loaded.project().notes(), issued, mark, "--output", identity)
                 .sparing(file, "the project file being read")
                 .panel(RunUpPanel.of(loaded.project().withDisplayUnits(DisplayUnitSystem.of(units, loaded.project())),
                         dossier.design(), ProgressListener.NONE));
@@ -97,15 +95,5 @@ public final class SheetCommand implements Callable<Integer> {
         }
         out.flush();
         return 0;
-    }
-
-    /** The project's notes, and for several modes or absorbers where the sheet shows them. */
-    private static String notesOnTheSheet(Project p, Optional<AbsorberLayout> layout) {
-        if (layout.isEmpty()) {
-            return p.notes();
-        }
-        String note = layout.get().count() > 1 ? SeveralAbsorbersContent.SHEET_SEVERAL_ABSORBERS
-                : SeveralAbsorbersContent.SHEET_SEVERAL_MODES;
-        return p.notes().isEmpty() ? note : p.notes() + " " + note;
     }
 }

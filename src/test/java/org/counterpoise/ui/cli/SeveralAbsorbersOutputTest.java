@@ -112,7 +112,7 @@ class SeveralAbsorbersOutputTest {
     }
 
     @Test
-    void commandsThatTakeOneAbsorberSaySo(@TempDir Path dir) throws Exception {
+    void robustnessSaysItTakesOneAbsorberAndTheSheetListsThemAll(@TempDir Path dir) throws Exception {
         CliTest.Run robustness = CliTest.run("robustness", "--json", "presets/split-mass-test-rig.json");
         assertEquals(0, robustness.code(), robustness.err());
         assertTrue(robustness.err().contains(SeveralAbsorbersContent.ONE_ABSORBER_ONLY), robustness.err());
@@ -122,6 +122,7 @@ class SeveralAbsorbersOutputTest {
         try (PDDocument doc = Loader.loadPDF(Files.readAllBytes(pdf))) {
             String text = new PDFTextStripper().getText(doc).replaceAll("\\s+", " ");
             assertTrue(text.contains("This project has several absorbers: every absorber to build"), text);
+            assertTrue(text.contains("Absorber 3 of 3: its own parts"), text);
         }
     }
 }

@@ -58,7 +58,7 @@ class ComparisonGuiTest {
         // the comparison is a tab of the result step of its own, beside the steady state, the run-up and
         // the hardware
         JTabbedPane views = onEdt(() -> (JTabbedPane) Edt.find(frame.getContentPane(), "result.views"));
-        assertEquals(4, onEdt(views::getTabCount));
+        assertEquals(5, onEdt(views::getTabCount));
         assertTrue(onEdt(() -> SwingUtilities.isDescendingFrom(table, views.getComponentAt(2))));
         assertTrue(onEdt(() -> !SwingUtilities.isDescendingFrom(line, views)), "the line beside the design is on"
                 + " every tab");

@@ -1,24 +1,31 @@
 package org.counterpoise.ui.gui.wizard;
 
 import java.util.List;
+import java.util.Optional;
 import java.util.function.Consumer;
 import java.util.logging.Level;
 import java.util.logging.Logger;
 import javax.swing.Timer;
+import org.counterpoise.core.design.AbsorberLayout;
 import org.counterpoise.core.design.AchievablePeak;
 import org.counterpoise.core.design.DesignDossier;
-import org.counterpoise.io.text.ComparisonContent;
-import org.counterpoise.io.text.ReportComparison;
 import org.counterpoise.core.design.DesignMethod;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.DesignStudy;
 import org.counterpoise.core.design.RobustnessResult;
+import org.counterpoise.core.error.CoreException;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.error.NotFoundException;
 import org.counterpoise.core.model.Structure;
+import org.counterpoise.io.chart.ChartTheme;
 import org.counterpoise.io.project.FormatMigration;
 import org.counterpoise.io.project.Project;
+import org.counterpoise.io.project.SeveralModes;
+import org.counterpoise.io.text.ComparisonContent;
+import org.counterpoise.io.text.ReportComparison;
+import org.counterpoise.io.text.UnitSystem;
 import org.counterpoise.ui.gui.document.DesignDocument;
+import org.counterpoise.ui.gui.plot.ChartHost;
 import org.counterpoise.ui.gui.task.TaskRunner;
 
 /**
@@ -84,6 +91,7 @@ final class DesignRun {
     void changed() {
         generation++;
         steps.result().hardware().stale(); // the parts on screen are for the old inputs: gone at once
+        steps.result().several().stale();
         if (tasks != null) {
             tasks.cancelStale(); // work for the old inputs stops now, not after the pause
         }
@@ -147,6 +155,7 @@ final class DesignRun {
         shown = null;
         shownGeneration = gen;
         steps.result().show(null, null);
+        steps.result().several().failed("Fix the inputs to see the absorbers.");
         steps.robustness().show(null, null);
         steps.sheet().show(null, document.project());
         steps.goal().massChart().message("Fix the inputs to see the curve.");
@@ -191,6 +200,7 @@ final class DesignRun {
                 steps.sheet().shown();
             }
             navigation.run();
+            startSeveral(d, p);
             startComparison(d);
             startRobustness(d);
             startMassChart(study, d.design());
@@ -208,6 +218,38 @@ final class DesignRun {
             status.accept("The design could not be computed for these inputs; please report this case.");
         }
         navigation.run();
+    }
+
+    /**
+     * Several modes or absorbers (format 6): the absorbers on the whole structure, their tolerances within
+     * the set and the response curves, off the event thread (an optimiser and exact peak searches);
+     * dropped if the state changed.
+     */
+    private void startSeveral(DesignDossier dossier, Project p) {
+        SeveralAbsorbersView view = steps.result().several();
+        Optional<AbsorberLayout> layout;
+        try {
+            layout = SeveralModes.layout(p);
+        } catch (InvalidInputException bad) {
+            view.failed(bad.getMessage());
+            return;
+        }
+        if (layout.isEmpty()) {
+            view.none();
+            return;
+        }
+        UnitSystem units = p.displayUnits();
+        ChartTheme theme = ChartHost.currentTheme();
+        view.computing();
+        tasks.current("Several absorbers", progress -> SeveralAbsorbersView.Shown.of(dossier.design(), layout.get(),
+                units, theme), view::show, e -> {
+                    if (e instanceof CoreException plain) {
+                        view.failed(plain.getMessage());
+                    } else {
+                        Logger.getLogger("counterpoise").log(Level.WARNING, "several absorbers failed", e);
+                        view.failed("The several absorbers could not be computed for these inputs.");
+                    }
+                });
     }
 
     /**

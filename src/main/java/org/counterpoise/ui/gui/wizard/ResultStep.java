@@ -76,6 +76,7 @@ final class ResultStep extends Step {
     private final VerdictPanel verdict = new VerdictPanel();
     private final RunUpView runUp;
     private final RealisationView hardware;
+    private final SeveralAbsorbersView several = new SeveralAbsorbersView();
     private DesignResult result;
     private DesignCurves curves;
     private Project project;
@@ -155,14 +156,21 @@ final class ResultStep extends Step {
         views.addTab("Run-up", runUp.component());
         views.addTab("Comparison of methods", comparison.component());
         views.addTab("Hardware", hardware.component());
+        views.addTab("Several absorbers", several.component());
         views.setMnemonicAt(0, 's');
         views.setMnemonicAt(1, 'u');
         views.setMnemonicAt(2, 'm');
         views.setMnemonicAt(3, 'h');
+        views.setMnemonicAt(4, 'a');
         JSplitPane split = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, left, views);
         split.setResizeWeight(0.36);
         split.setBorder(null);
         page = split;
+    }
+
+    /** @return the tab of several modes or absorbers */
+    SeveralAbsorbersView several() {
+        return several;
     }
 
     @Override

@@ -27,6 +27,7 @@ import org.counterpoise.core.design.DesignDossier;
 import org.counterpoise.core.realisation.HardwareChoice;
 import org.counterpoise.io.project.MeasuredSource;
 import org.counterpoise.io.project.Project;
+import org.counterpoise.io.project.SeveralModes;
 import org.counterpoise.io.project.ProjectIdentity;
 import org.counterpoise.io.sheet.RunUpPanel;
 import org.counterpoise.io.sheet.SheetFiles;
@@ -128,12 +129,13 @@ final class SheetStep extends Step {
         HardwareChoice hardware = project.hardware();
         UnitSystem units = project.displayUnits();
         MeasuredSource measured = project.structure().measured();
+        Project p = project;
         preview.setText("drawing the preview\u2026");
         tasks.current(null, progress -> {
             d.monteCarlo(progress); // the dossier's run, shared with the robustness step: made once
             ByteArrayOutputStream pdf = new ByteArrayOutputStream();
             SheetFiles.writeSheet(d, notes, date, revision, identity, List.of(), AmplitudeConvention.PEAK,
-                    hardware, units, measured, pdf);
+                    hardware, units, measured, SeveralModes.layout(p), pdf);
             try (PDDocument doc = Loader.loadPDF(pdf.toByteArray())) {
                 return new PDFRenderer(doc).renderImageWithDPI(0, 80);
             }
@@ -185,7 +187,7 @@ final class SheetStep extends Step {
             SheetPanel runUp = RunUpPanel.of(p, d.design(), progress); // as `sheet` prints it (the preview is page 1)
             progress.phase("drawing");
             new SheetFiles.Outputs(d).panel(runUp).hardware(p.hardware(), p.displayUnits())
-                    .measured(p.structure().measured())
+                    .measured(p.structure().measured()).absorbers(SeveralModes.layout(p))
                     .sheet(file, notes, date, revision, "sheet file", identity)
                     .write(true);
             return file;

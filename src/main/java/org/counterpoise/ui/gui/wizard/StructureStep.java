@@ -67,6 +67,8 @@ final class StructureStep extends Step {
     private MeasurementDialog measurement;
     /** True when the project gives its structure as several modes, which this step does not edit yet. */
     private boolean severalModes;
+    /** The modes, read-only, when the project gives several. */
+    private final ModesTable modes = new ModesTable();
 
     StructureStep() {
         massForm.setName("structure.massForm");
@@ -91,8 +93,9 @@ final class StructureStep extends Step {
         form.derived("Natural frequency", derivedFrequency);
         form.derived("Damping ratio", derivedDamping);
         form.end();
-        JPanel holder = new JPanel(new BorderLayout());
+        JPanel holder = new JPanel(new BorderLayout(0, 8));
         holder.add(form);
+        holder.add(modes.component(), BorderLayout.SOUTH);
         page = new JScrollPane(holder);
         ((JScrollPane) page).setBorder(null);
         own("structure.mass", mass);
@@ -212,6 +215,7 @@ final class StructureStep extends Step {
     @Override
     void showProject(Project p, boolean loaded) {
         severalModes = p.modes() != null;
+        modes.show(p);
         for (JComponent c : List.of(massForm, mass.textField(), stiffnessForm, stiffness.textField(), dampingForm,
                 damping.textField(), modeShape.textField(), fromMeasurement)) {
             c.setEnabled(!severalModes);
@@ -229,6 +233,11 @@ final class StructureStep extends Step {
                 + (m.file().isEmpty() ? "" : m.file() + ", ") + (m.date().isEmpty() ? "" : m.date() + ", ")
                 + "typing a value replaces it");
         measuredNote.setToolTipText(m == null ? null : MeasuredSourceContent.methodWords(m.method()));
+    }
+
+    /** @return the modes table's rows as shown (tests) */
+    List<List<String>> modeRows() {
+        return modes.rows();
     }
 
     @Override

@@ -245,7 +245,7 @@ public final class WizardFrame extends JFrame {
             say("Note: fields not used from the file: " + String.join(", ", loaded.unknownFields()));
         }
         if (!FormatMigration.isOneModeOneAbsorber(loaded.project())) {
-            say("Note: " + SeveralAbsorbersContent.ONE_ABSORBER_ONLY);
+            say("Note: " + SeveralAbsorbersContent.IN_THE_WIZARD);
         }
     }
 

@@ -99,9 +99,10 @@ class ChartHostGuiTest {
             });
         }
         waitFor(() -> onEdtQuietly(() -> !charts(wizard).isEmpty()
-                // the run-up tab draws only when it is opened and the project gives a rate (RunUpViewGuiTest)
+                // the run-up tab draws only when it is opened and the project gives a rate (RunUpViewGuiTest);
+                // the several-absorbers tab only for a project of several (SeveralAbsorbersGuiTest)
                 && charts(wizard).stream().allMatch(h -> h.shownChart() != null || h.getName().equals("chart.map")
-                        || h.getName().startsWith("runup."))),
+                        || h.getName().startsWith("runup.") || h.getName().equals("chart.several"))),
                 "charts shown");
         onEdt(() -> {
             int menuKey = Toolkit.getDefaultToolkit().getMenuShortcutKeyMaskEx();

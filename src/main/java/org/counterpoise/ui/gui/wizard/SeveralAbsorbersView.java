@@ -1,0 +1,160 @@
+package org.counterpoise.ui.gui.wizard;
+
+import java.awt.BorderLayout;
+import java.util.ArrayList;
+import java.util.List;
+import javax.swing.BorderFactory;
+import javax.swing.JLabel;
+import javax.swing.JPanel;
+import javax.swing.JScrollPane;
+import javax.swing.JSplitPane;
+import javax.swing.JTable;
+import javax.swing.table.DefaultTableModel;
+import org.counterpoise.core.design.AbsorberLayout;
+import org.counterpoise.core.design.AbsorbersToBuild;
+import org.counterpoise.core.design.DesignResult;
+import org.counterpoise.core.design.SeveralAbsorbers;
+import org.counterpoise.core.design.SeveralAbsorbersDesigner;
+import org.counterpoise.core.units.Dimension;
+import org.counterpoise.io.chart.ChartTheme;
+import org.counterpoise.io.chart.SeveralAbsorbersCharts;
+import org.counterpoise.io.text.AbsorbersToBuildContent;
+import org.counterpoise.io.text.DisplayUnits;
+import org.counterpoise.io.text.ReportTable;
+import org.counterpoise.io.text.UnitSystem;
+import org.counterpoise.io.text.ValueText;
+import org.counterpoise.ui.gui.plot.ChartHost;
+import org.knowm.xchart.XYChart;
+
+/**
+ * The result step's tab for a project with several modes or absorbers: each absorber to build (a
+ * table, the rows of the sheet's "Absorbers to build") and the response of the whole structure at its
+ * response point without and with them (a chart). It shows only what it is given: the design run
+ * computes {@link Shown} off the event thread, and one for an older state never reaches it.
+ */
+final class SeveralAbsorbersView {
+    /** Said when the project has one mode and one absorber. */
+    static final String NONE = "This project has one mode and one absorber: the design is on the Steady state tab.";
+    private final DefaultTableModel model = new DefaultTableModel() {
+        @Override
+        public boolean isCellEditable(int row, int column) {
+            return false;
+        }
+    };
+    private final JTable table = new JTable(model);
+    private final JLabel summary = new JLabel(NONE);
+    private final ChartHost chart = new ChartHost("chart.several");
+    private final JPanel panel = new JPanel(new BorderLayout(0, 6));
+    /** True unless the tab says the project has one mode and one absorber. */
+    private boolean showing;
+
+    /**
+     * What the tab shows, computed off the event thread.
+     *
+     * @param build the absorbers to build with their tolerance within the set
+     * @param table their table in the display units
+     * @param summary the peaks over the band before and after, in words
+     * @param chart the response before and after
+     */
+    record Shown(AbsorbersToBuild build, ReportTable.Grid table, String summary,
+            XYChart chart) {
+        /**
+         * @param design the design on the target mode
+         * @param layout the project's modes and absorbers
+         * @param units the display units
+         * @param theme the chart's colours
+         * @return the tab's content (several seconds at most: off the event thread)
+         */
+        static Shown of(DesignResult design, AbsorberLayout layout, UnitSystem units,
+                ChartTheme theme) {
+            SeveralAbsorbers set = SeveralAbsorbersDesigner.design(design, layout);
+            AbsorbersToBuild build = AbsorbersToBuild.of(design, set);
+            ReportTable.Grid grid = ReportTable.grid(AbsorbersToBuildContent.table(build), units).orElseThrow();
+            String words = set.absorbers().size() + (set.absorbers().size() == 1 ? " absorber" : " absorbers")
+                    + " at " + layout.absorberPoint() + "; peak displacement over the band at "
+                    + layout.responsePoint() + ": " + DisplayUnits.format(set.peakBefore(), Dimension.LENGTH, units)
+                    + " without, " + DisplayUnits.format(set.peakAfter(), Dimension.LENGTH, units) + " with them"
+                    + set.gain().map(g -> " (one absorber of the same total mass: "
+                            + DisplayUnits.format(set.single().orElseThrow().peak(), Dimension.LENGTH, units) + ")")
+                            .orElse("") + ".";
+            return new Shown(build, grid, words, SeveralAbsorbersCharts.response(set, units, theme, 640, 380));
+        }
+    }
+
+    SeveralAbsorbersView() {
+        table.setName("result.several");
+        table.setAutoResizeMode(JTable.AUTO_RESIZE_ALL_COLUMNS);
+        summary.setName("result.several.summary");
+        summary.setBorder(BorderFactory.createEmptyBorder(4, 4, 4, 4));
+        JScrollPane scroll = new JScrollPane(table);
+        JSplitPane split = new JSplitPane(JSplitPane.VERTICAL_SPLIT, scroll, chart);
+        split.setResizeWeight(0.3);
+        split.setBorder(null);
+        panel.add(summary, BorderLayout.NORTH);
+        panel.add(split, BorderLayout.CENTER);
+        none();
+    }
+
+    JPanel component() {
+        return panel;
+    }
+
+    /** The project has one mode and one absorber. */
+    void none() {
+        showing = false;
+        clear(NONE);
+        chart.message(NONE);
+    }
+
+    /** The inputs changed: what is on screen is for the old inputs, gone at once (kept only when it says none). */
+    void stale() {
+        if (showing) {
+            computing();
+        }
+    }
+
+    /** The inputs changed, or the absorbers are being computed: nothing old stays on screen. */
+    void computing() {
+        showing = true;
+        clear("Designing the absorbers on the whole structure\u2026");
+        chart.message(" ");
+    }
+
+    /** @param why what went wrong, in plain words */
+    void failed(String why) {
+        showing = true;
+        clear(why);
+        chart.message(" ");
+    }
+
+    /** @param s the new content */
+    void show(Shown s) {
+        showing = true;
+        model.setRowCount(0);
+        model.setColumnIdentifiers(s.table().headings().toArray());
+        for (List<String> row : s.table().cells()) {
+            model.addRow(row.stream().map(ValueText::pretty).toArray());
+        }
+        // wrapped to the tab's width: the sentence is longer than the table is wide
+        summary.setText("<html>" + s.summary().replace("&", "&amp;").replace("<", "&lt;") + "</html>");
+        chart.show(s.chart());
+    }
+
+    /** @return the table's rows as shown (tests) */
+    List<List<String>> rows() {
+        List<List<String>> out = new ArrayList<>();
+        for (int r = 0; r < model.getRowCount(); r++) {
+            List<String> row = new ArrayList<>();
+            for (int c = 0; c < model.getColumnCount(); c++) {
+                row.add(String.valueOf(model.getValueAt(r, c)));
+            }
+            out.add(row);
+        }
+        return out;
+    }
+
+    private void clear(String words) {
+        model.setRowCount(0);
+        summary.setText(words);
+    }
+}
