@@ -68,8 +68,8 @@ public record AbsorbersToBuild(SeveralAbsorbers set, List<Built> absorbers) {
             // zeta_j = c_j / (2 m_j omega_j): the absorber's own figures on the single-mode structure
             Tuning tuning = new Tuning(a.mass() / structure.effectiveMass(), w / structure.naturalFrequency(),
                     a.damping() / (2 * a.mass() * w));
-            DesignResult own = withAbsorberTolerance(Designer.ofTuning(study, tuning, SOURCE,
-                    "absorber " + (j + 1) + " of " + set.absorbers().size()), tolerance);
+            DesignResult own = withTolerances(Designer.ofTuning(study, tuning, SOURCE,
+                    "absorber " + (j + 1) + " of " + set.absorbers().size()), set.structureTolerance(), tolerance);
             out.add(new Built(a, own, tolerance));
         }
         return new AbsorbersToBuild(set, out);
@@ -103,11 +103,15 @@ public record AbsorbersToBuild(SeveralAbsorbers set, List<Built> absorbers) {
         return out;
     }
 
-    private static DesignResult withAbsorberTolerance(DesignResult d, MistuningRange tolerance) {
+    /**
+     * The absorber's own design with the set's tolerances: the structure's (the set's peak, so its tuning
+     * step keeps its frequency over the range the set holds) and its own frequency's within the set.
+     */
+    private static DesignResult withTolerances(DesignResult d, MistuningRange structure, MistuningRange tolerance) {
         return new DesignResult(d.study(), d.methodSource(), d.methodNote(), d.tuning(), d.absorber(),
                 d.staticDeflection(), d.responseBefore(), d.responseAfter(), d.motionBefore(), d.motionAfter(),
                 d.strokeInBand(), d.strokeRunUp(), d.clearance(), d.springForce(), d.damperForce(), d.absorberForce(),
-                d.coupledNaturalFrequencies(), d.stiffnessDetuning(), d.massDetuning(), d.structureTolerance(),
+                d.coupledNaturalFrequencies(), d.stiffnessDetuning(), d.massDetuning(), structure,
                 tolerance, d.warnings(), d.activeConstraint(), d.runUpStroke(), d.acceptance(), d.afterWorstCase());
     }
 }

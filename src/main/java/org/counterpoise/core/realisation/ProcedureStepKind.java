@@ -4,7 +4,7 @@ package org.counterpoise.core.realisation;
 public enum ProcedureStepKind {
     /** Measure the structure's natural frequency with the absorber locked or not yet fitted. */
     MEASURE_STRUCTURE,
-    /** Compute the absorber frequency needed from the measured one and the design's tuning ratio. */
+    /** Check the measured structure frequency against the range the design holds; the absorber keeps its design frequency. */
     COMPUTE_ABSORBER_TARGET,
     /** Tune the absorber alone (tap test or shaker) to the target within the tolerance. */
     TUNE_ABSORBER,

@@ -15,9 +15,11 @@ public record StepFigure(StepQuantity quantity, double value, Dimension dimensio
     public enum StepQuantity {
         /** The structure's natural frequency the design expects. */
         EXPECTED_STRUCTURE_FREQUENCY,
-        /** The design's tuning ratio (absorber over structure frequency). */
-        TUNING_RATIO,
-        /** The absorber frequency to tune to, for the expected structure frequency. */
+        /** The lowest structure frequency the design holds (its peak in band within the allowance). */
+        STRUCTURE_RANGE_LOW,
+        /** The highest structure frequency the design holds. */
+        STRUCTURE_RANGE_HIGH,
+        /** The absorber frequency to tune to. */
         ABSORBER_TARGET_FREQUENCY,
         /** How far the absorber frequency may be from its target, fraction. */
         ABSORBER_FREQUENCY_TOLERANCE,

@@ -76,13 +76,16 @@ public final class ProcedureText {
             case MEASURE_STRUCTURE -> "Measure the structure's natural frequency with the absorber locked or not yet"
                     + " fitted (tap test, run-down or shaker)" + clause(units, step, "; the design expects ",
                             StepQuantity.EXPECTED_STRUCTURE_FREQUENCY) + ".";
-            case COMPUTE_ABSORBER_TARGET -> "Compute the absorber frequency to tune to: the measured structure"
-                    + " frequency times the tuning ratio" + clause(units, step, " ", StepQuantity.TUNING_RATIO)
-                    + clause(units, step, " (for the expected structure frequency: ", StepQuantity.ABSORBER_TARGET_FREQUENCY,
-                            ")") + ".";
+            case COMPUTE_ABSORBER_TARGET -> "Check the measured structure frequency against the range the design holds"
+                    + clause(units, step, " (", StepQuantity.STRUCTURE_RANGE_LOW, " to")
+                    + clause(units, step, " ", StepQuantity.STRUCTURE_RANGE_HIGH, ")") + ": inside it, keep the"
+                    + " absorber frequency of the design" + clause(units, step, ", ", StepQuantity.ABSORBER_TARGET_FREQUENCY)
+                    + ", whatever the structure measured (the forcing sets it: do not scale it with the structure);"
+                    + " outside it, do not tune: design again with the measured frequency (or run site-check with"
+                    + " --free-structure).";
             case TUNE_ABSORBER -> "Tune the absorber alone, clamped to a rigid base, by tap test or shaker to that"
-                    + " frequency" + clause(units, step, " (", StepQuantity.ABSORBER_TARGET_FREQUENCY, " for the expected"
-                            + " structure frequency)") + clause(units, step, " within +/-",
+                    + " frequency" + clause(units, step, " (", StepQuantity.ABSORBER_TARGET_FREQUENCY, ")")
+                    + clause(units, step, " within +/-",
                                     StepQuantity.ABSORBER_FREQUENCY_TOLERANCE) + ", adding or taking off trim plates.";
             case FIT -> "Fit the absorber with its retention and secondary catch, check"
                     + clause(units, step, " the clearance of ", StepQuantity.CLEARANCE, " around the mass in every"
@@ -110,7 +113,8 @@ public final class ProcedureText {
     static String label(StepQuantity q) {
         return switch (q) {
             case EXPECTED_STRUCTURE_FREQUENCY -> "expected structure frequency";
-            case TUNING_RATIO -> "tuning ratio";
+            case STRUCTURE_RANGE_LOW -> "lowest structure frequency the design holds";
+            case STRUCTURE_RANGE_HIGH -> "highest structure frequency the design holds";
             case ABSORBER_TARGET_FREQUENCY -> "absorber target frequency";
             case ABSORBER_FREQUENCY_TOLERANCE -> "absorber frequency tolerance, +/-";
             case CLEARANCE -> "clearance";
@@ -129,7 +133,8 @@ public final class ProcedureText {
     static ReportKey key(StepQuantity q) {
         return switch (q) {
             case EXPECTED_STRUCTURE_FREQUENCY -> ReportKey.FIGURE_EXPECTED_STRUCTURE_FREQUENCY;
-            case TUNING_RATIO -> ReportKey.FIGURE_TUNING_RATIO;
+            case STRUCTURE_RANGE_LOW -> ReportKey.FIGURE_STRUCTURE_RANGE_LOW;
+            case STRUCTURE_RANGE_HIGH -> ReportKey.FIGURE_STRUCTURE_RANGE_HIGH;
             case ABSORBER_TARGET_FREQUENCY -> ReportKey.FIGURE_ABSORBER_TARGET_FREQUENCY;
             case ABSORBER_FREQUENCY_TOLERANCE -> ReportKey.FIGURE_ABSORBER_FREQUENCY_TOLERANCE;
             case CLEARANCE -> ReportKey.FIGURE_CLEARANCE;

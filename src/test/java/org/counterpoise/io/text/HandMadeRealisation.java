@@ -101,7 +101,7 @@ final class HandMadeRealisation {
         return new TrimPlan(0.95 * wn, 1.05 * wn, 0.01 * d.absorber().mass(), 5, 10, 0.5, 2.0);
     }
 
-    /** The design's own figures: expected structure frequency, tuning ratio, and their product. */
+    /** The design's own figures: expected structure frequency, a range of +/-5 % about it, the absorber frequency. */
     static List<ProcedureStep> procedure(DesignResult d) {
         double wn = d.study().structure().naturalFrequency();
         double f = d.tuning().tuningRatio();
@@ -109,7 +109,8 @@ final class HandMadeRealisation {
                 new ProcedureStep(ProcedureStepKind.MEASURE_STRUCTURE, List.of(new StepFigure(
                         StepQuantity.EXPECTED_STRUCTURE_FREQUENCY, wn, Dimension.FREQUENCY))),
                 new ProcedureStep(ProcedureStepKind.COMPUTE_ABSORBER_TARGET, List.of(
-                        new StepFigure(StepQuantity.TUNING_RATIO, f, Dimension.RATIO),
+                        new StepFigure(StepQuantity.STRUCTURE_RANGE_LOW, 0.95 * wn, Dimension.FREQUENCY),
+                        new StepFigure(StepQuantity.STRUCTURE_RANGE_HIGH, 1.05 * wn, Dimension.FREQUENCY),
                         new StepFigure(StepQuantity.ABSORBER_TARGET_FREQUENCY, f * wn, Dimension.FREQUENCY))),
                 new ProcedureStep(ProcedureStepKind.TUNE_ABSORBER, List.of(new StepFigure(
                         StepQuantity.ABSORBER_FREQUENCY_TOLERANCE, 0.015, Dimension.RATIO))),

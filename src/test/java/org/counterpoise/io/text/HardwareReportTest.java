@@ -159,7 +159,7 @@ class HardwareReportTest {
     }
 
     @Test
-    void procedureIsNumberedAndItsTargetIsTheTuningRatioTimesTheExpectedFrequency() {
+    void procedureIsNumberedAndItsTargetIsTheDesignFrequencyOverTheRangeTheDesignHolds() {
         Realisation r = HandMadeRealisation.helical(DESIGN);
         ReportContent c = content(r);
         JsonArray steps = JsonParser.parseString(ResultJson.toJson(c)).getAsJsonObject()
@@ -169,17 +169,20 @@ class HardwareReportTest {
         assertEquals(2, compute.get("number").getAsInt());
         assertEquals("compute-absorber-target", compute.get("step").getAsString());
         JsonObject figures = compute.getAsJsonObject("figures");
-        double f = figures.get("tuning_ratio").getAsDouble();
+        double f = DESIGN.tuning().tuningRatio();
         double expected = steps.get(0).getAsJsonObject().getAsJsonObject("figures")
                 .get("expected_structure_frequency_Hz").getAsDouble();
-        // independent arithmetic: the target is f times the expected structure frequency
+        // independent arithmetic: the target is f times the expected structure frequency, kept over the range
         assertEquals(f * expected, figures.get("absorber_target_frequency_Hz").getAsDouble(), 1e-9 * expected);
-        assertEquals(DESIGN.tuning().tuningRatio(), f);
+        assertEquals(0.95 * expected, figures.get("structure_frequency_low_Hz").getAsDouble(), 1e-9 * expected);
+        assertEquals(1.05 * expected, figures.get("structure_frequency_high_Hz").getAsDouble(), 1e-9 * expected);
 
         String text = DesignReport.render(c);
         assertTrue(text.contains("\nTuning and commissioning\n  1. Measure the structure's natural frequency"), text);
         String targetHz = QuantityFormat.number(f * expected, 4) + " Hz";
-        assertTrue(text.contains("  2. Compute the absorber frequency to tune to"), text);
+        assertTrue(text.contains("  2. Check the measured structure frequency against the range the design holds"),
+                text);
+        assertTrue(text.replaceAll("\\s+", " ").contains("do not scale it with the structure"), text);
         assertTrue(text.contains(targetHz), "the target " + targetHz + " is printed");
         assertTrue(text.contains("within +/-1.5 %"), text);
         assertTrue(text.contains("  7. If the readings are off"), text);

@@ -55,7 +55,7 @@ class DesignHardwareTest {
 
     @ParameterizedTest(name = "{0}")
     @MethodSource("presets")
-    void jsonHasTheHardwareAndTheTargetIsTheTuningRatioTimesTheStructureFrequency(String preset) {
+    void jsonHasTheHardwareAndTheTargetIsTheDesignFrequencyOverTheStructuresTolerance(String preset) {
         CliTest.Run r = CliTest.run("design", "--json", Path.of("presets", preset).toString());
         assertEquals(0, r.code(), r.err());
         JsonObject o = JsonParser.parseString(r.out()).getAsJsonObject();
@@ -84,9 +84,15 @@ class DesignHardwareTest {
         // an elastomer element is tuned to the hysteretic optimum's ratio, a spring to the design's
         double f = elastomer ? hw.getAsJsonObject("elastomer").get("hysteretic_tuning_ratio").getAsDouble()
                 : o.get("tuning_ratio").getAsDouble();
-        assertEquals(f, compute.getAsJsonObject("figures").get("tuning_ratio").getAsDouble());
-        assertEquals(f * expectedHz, compute.getAsJsonObject("figures").get("absorber_target_frequency_Hz")
-                .getAsDouble(), 1e-9 * expectedHz);
+        JsonObject figures = compute.getAsJsonObject("figures");
+        assertEquals(f * expectedHz, figures.get("absorber_target_frequency_Hz").getAsDouble(), 1e-9 * expectedHz);
+        // the range the design holds: its tolerated structure factors (an end beyond the 30 % searched at 30 %)
+        double low = o.get("tolerated_structure_frequency_factor_low").isJsonNull() ? 0.7
+                : o.get("tolerated_structure_frequency_factor_low").getAsDouble();
+        double high = o.get("tolerated_structure_frequency_factor_high").isJsonNull() ? 1.3
+                : o.get("tolerated_structure_frequency_factor_high").getAsDouble();
+        assertEquals(low * expectedHz, figures.get("structure_frequency_low_Hz").getAsDouble(), 1e-9 * expectedHz);
+        assertEquals(high * expectedHz, figures.get("structure_frequency_high_Hz").getAsDouble(), 1e-9 * expectedHz);
         // and the text says the same target in Hz
         CliTest.Run text = CliTest.run("design", Path.of("presets", preset).toString());
         assertTrue(text.out().contains("\nTuning and commissioning\n  1. Measure"), text.out());
