@@ -15,6 +15,7 @@ import javax.swing.JPanel;
 import javax.swing.JScrollPane;
 import javax.swing.JTable;
 import javax.swing.table.DefaultTableModel;
+import javax.swing.table.TableModel;
 import org.counterpoise.core.design.AbsorberLayout;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.system.Mode;
@@ -98,6 +99,14 @@ final class ModesTable {
 
     /** @return the rows as shown (tests) */
     List<List<String>> rows() {
+        return shownRows(model);
+    }
+
+    /**
+     * @param model a table's model
+     * @return its cells as shown, row by row (what the tests compare)
+     */
+    static List<List<String>> shownRows(TableModel model) {
         List<List<String>> out = new ArrayList<>();
         for (int r = 0; r < model.getRowCount(); r++) {
             List<String> row = new ArrayList<>();

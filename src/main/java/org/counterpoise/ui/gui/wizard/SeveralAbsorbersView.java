@@ -1,7 +1,6 @@
 package org.counterpoise.ui.gui.wizard;
 
 import java.awt.BorderLayout;
-import java.util.ArrayList;
 import java.util.List;
 import javax.swing.BorderFactory;
 import javax.swing.JLabel;
@@ -142,15 +141,7 @@ final class SeveralAbsorbersView {
 
     /** @return the table's rows as shown (tests) */
     List<List<String>> rows() {
-        List<List<String>> out = new ArrayList<>();
-        for (int r = 0; r < model.getRowCount(); r++) {
-            List<String> row = new ArrayList<>();
-            for (int c = 0; c < model.getColumnCount(); c++) {
-                row.add(String.valueOf(model.getValueAt(r, c)));
-            }
-            out.add(row);
-        }
-        return out;
+        return ModesTable.shownRows(model);
     }
 
     private void clear(String words) {
