@@ -190,7 +190,7 @@ public enum ReportKey {
     TRIM_PLATES("hardware.trim.plates_fitted", "hardware.trim.plates_total"),
     TRIM_PERCENT_PER_PLATE("hardware.trim.percent_per_plate"),
     TRIM_PLATES_PER_PERCENT("hardware.trim.plates_per_percent"),
-    TRIM_RANGE("hardware.trim.structure_frequency_low_Hz", "hardware.trim.structure_frequency_high_Hz"),
+    TRIM_RANGE("hardware.trim.absorber_frequency_low_Hz", "hardware.trim.absorber_frequency_high_Hz"),
     PROCEDURE_STEP("hardware.procedure[]"),
     STEP_NUMBER("number"),
     STEP_KIND("step"),
