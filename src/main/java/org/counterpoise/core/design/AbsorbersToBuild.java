@@ -7,6 +7,8 @@ import org.counterpoise.core.model.Structure;
 import org.counterpoise.core.model.Tuning;
 import org.counterpoise.core.robust.MistuningRange;
 import org.counterpoise.core.robust.ToleratedMistuning;
+import org.counterpoise.core.response.ResponsePeak;
+import org.counterpoise.core.system.AbsorberPeak;
 import org.counterpoise.core.system.ModalPeak;
 import org.counterpoise.core.system.ModalSystem;
 import org.counterpoise.core.system.PointAbsorber;
@@ -14,9 +16,14 @@ import org.counterpoise.core.system.PointAbsorber;
 /**
  * Each absorber of a set as a workshop builds it (the sheet's "absorbers to build"):
  * <ul>
- *   <li>its own single design: the absorber of its own mass, tuning and damping alone on the target
- *       mode at the absorbers' point ({@link Designer#ofTuning}), whose strokes, spring force and
- *       clearance size its parts with the same realisation code as any design;</li>
+ *   <li>its own single design: the absorber of its own mass, tuning and damping on the target mode at
+ *       the absorbers' point ({@link Designer#ofTuning}), whose parts are sized with the same
+ *       realisation code as any design, with the strokes, forces and clearance it has WITHIN THE SET
+ *       on the whole structure ({@link AbsorberPeak}: its stroke in the band and from rest to the
+ *       top of the band, its spring's, damper's and total force in the band). Its figures alone on
+ *       the mode would misstate them: in a set each absorber works at its own part of the band and
+ *       the others change the motion of the point. A transient run-up stroke (a project with a
+ *       run-up rate) stays the absorber's alone: the set's run-up is not integrated;</li>
  *   <li>its tolerance within the set: the factors on that absorber's own frequency, the others held,
  *       at which the set's peak over the band at the response point of the whole structure rises by
  *       {@link DesignResult#TOLERANCE_ALLOWANCE} (its spring rate off, its damper kept, as
@@ -68,8 +75,8 @@ public record AbsorbersToBuild(SeveralAbsorbers set, List<Built> absorbers) {
             // zeta_j = c_j / (2 m_j omega_j): the absorber's own figures on the single-mode structure
             Tuning tuning = new Tuning(a.mass() / structure.effectiveMass(), w / structure.naturalFrequency(),
                     a.damping() / (2 * a.mass() * w));
-            DesignResult own = withTolerances(Designer.ofTuning(study, tuning, SOURCE,
-                    "absorber " + (j + 1) + " of " + set.absorbers().size()), set.structureTolerance(), tolerance);
+            DesignResult own = inSet(Designer.ofTuning(study, tuning, SOURCE,
+                    "absorber " + (j + 1) + " of " + set.absorbers().size()), set, j, tolerance);
             out.add(new Built(a, own, tolerance));
         }
         return new AbsorbersToBuild(set, out);
@@ -104,14 +111,34 @@ public record AbsorbersToBuild(SeveralAbsorbers set, List<Built> absorbers) {
     }
 
     /**
-     * The absorber's own design with the set's tolerances: the structure's (the set's peak, so its tuning
-     * step keeps its frequency over the range the set holds) and its own frequency's within the set.
+     * The absorber's own design with what it has within the set: the set's structure tolerance (so its
+     * tuning step keeps its frequency over the range the set holds), its own frequency's tolerance within
+     * the set, and its strokes, forces and clearance on the whole structure with the other absorbers.
      */
-    private static DesignResult withTolerances(DesignResult d, MistuningRange structure, MistuningRange tolerance) {
+    private static DesignResult inSet(DesignResult d, SeveralAbsorbers set, int j, MistuningRange tolerance) {
+        AbsorberLayout layout = set.layout();
+        ModalSystem system = ModalSystem.of(layout.structure(), set.absorbers());
+        double low = set.band().low();
+        double high = set.band().high();
+        ResponsePeak strokeInBand = peak(system, layout, set, j, AbsorberPeak.Quantity.STROKE, low, high);
+        ResponsePeak strokeRunUp = peak(system, layout, set, j, AbsorberPeak.Quantity.STROKE, 0.0, high);
+        double clearance = d.study().strokeMargin() * (strokeRunUp.unbounded() ? strokeInBand.value()
+                : Math.max(strokeRunUp.value(), strokeInBand.value()));
+        RunUpStroke runUp = d.runUpStroke().basis() == RunUpStroke.Basis.TRANSIENT ? d.runUpStroke()
+                : new RunUpStroke(strokeRunUp, d.runUpStroke().basis());
         return new DesignResult(d.study(), d.methodSource(), d.methodNote(), d.tuning(), d.absorber(),
                 d.staticDeflection(), d.responseBefore(), d.responseAfter(), d.motionBefore(), d.motionAfter(),
-                d.strokeInBand(), d.strokeRunUp(), d.clearance(), d.springForce(), d.damperForce(), d.absorberForce(),
-                d.coupledNaturalFrequencies(), d.stiffnessDetuning(), d.massDetuning(), structure,
-                tolerance, d.warnings(), d.activeConstraint(), d.runUpStroke(), d.acceptance(), d.afterWorstCase());
+                strokeInBand, strokeRunUp, clearance,
+                peak(system, layout, set, j, AbsorberPeak.Quantity.SPRING_FORCE, low, high),
+                peak(system, layout, set, j, AbsorberPeak.Quantity.DAMPER_FORCE, low, high),
+                peak(system, layout, set, j, AbsorberPeak.Quantity.ABSORBER_FORCE, low, high),
+                d.coupledNaturalFrequencies(), d.stiffnessDetuning(), d.massDetuning(), set.structureTolerance(),
+                tolerance, d.warnings(), d.activeConstraint(), runUp, d.acceptance(), d.afterWorstCase());
+    }
+
+    private static ResponsePeak peak(ModalSystem system, AbsorberLayout layout, SeveralAbsorbers set, int j,
+            AbsorberPeak.Quantity quantity, double low, double high) {
+        AbsorberPeak p = AbsorberPeak.over(system, layout.excitationPoint(), j, quantity, low, high);
+        return new ResponsePeak(p.frequency(), p.unbounded() ? Double.POSITIVE_INFINITY : set.forceAmplitude() * p.value());
     }
 }
