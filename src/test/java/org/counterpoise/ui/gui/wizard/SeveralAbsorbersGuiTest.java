@@ -16,6 +16,7 @@ import javax.imageio.ImageIO;
 import javax.swing.JLabel;
 import javax.swing.JTabbedPane;
 import javax.swing.JTable;
+import javax.swing.JTextField;
 import org.apache.pdfbox.Loader;
 import org.apache.pdfbox.pdmodel.PDDocument;
 import org.apache.pdfbox.text.PDFTextStripper;
@@ -127,6 +128,13 @@ class SeveralAbsorbersGuiTest {
         assertEquals("twisting", onEdt(() -> modes.getValueAt(1, 0)));
         assertTrue(String.valueOf(onEdt(() -> modes.getValueAt(1, 1))).contains("9.100"), "9.1 Hz");
         assertTrue(onEdt(() -> !modes.isCellEditable(0, 1)));
+        // the greyed single-mode fields show the target mode at the absorbers' point (the bending mode,
+        // 18 t with shape value 1 at mid-span: 18 000 kg at 8.2 Hz), not a project shown before
+        String massShown = onEdt(() -> ((JTextField) Edt.find(frame.getContentPane(), "structure.mass")).getText());
+        String frequencyShown = onEdt(() -> ((JTextField) Edt.find(frame.getContentPane(), "structure.stiffness"))
+                .getText());
+        assertEquals(18000.0, Double.parseDouble(massShown.replace(",", "").replace(" ", "")), 1e-6, massShown);
+        assertEquals(8.2, Double.parseDouble(frequencyShown.replace(",", "").replace(" ", "")), 1e-9, frequencyShown);
         onEdt(() -> {
             frame.showStep(0);
             return null;
