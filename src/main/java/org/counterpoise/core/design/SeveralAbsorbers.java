@@ -2,11 +2,14 @@ package org.counterpoise.core.design;
 
 import java.util.List;
 import java.util.Optional;
+import java.util.function.DoubleFunction;
 import java.util.function.DoubleUnaryOperator;
+import org.apache.commons.math3.complex.Complex;
 import org.counterpoise.core.model.FrequencyBand;
 import org.counterpoise.core.robust.MistuningRange;
 import org.counterpoise.core.system.AbsorberSensitivity;
 import org.counterpoise.core.system.ModalSystem;
+import org.counterpoise.core.system.ModeContributions;
 import org.counterpoise.core.system.PointAbsorber;
 
 /**
@@ -74,13 +77,45 @@ public record SeveralAbsorbers(AbsorberLayout layout, int targetMode, double eff
      * @return the amplitude, m, at an angular frequency, rad/s
      */
     public DoubleUnaryOperator response(boolean withAbsorbers) {
+        return response(withAbsorbers, layout.responsePoint());
+    }
+
+    /**
+     * The displacement amplitude at a named point of the structure under the design's force.
+     *
+     * @param withAbsorbers true with the absorbers, false the bare structure
+     * @param point a named point of the structure
+     * @return the amplitude, m, at an angular frequency, rad/s
+     */
+    public DoubleUnaryOperator response(boolean withAbsorbers, String point) {
         ModalSystem with = ModalSystem.of(layout.structure(), absorbers);
         ModalSystem system = withAbsorbers ? with : with.bare();
         String force = layout.excitationPoint();
-        String at = layout.responsePoint();
-        double scale = system.responseScale(force, forceAmplitude, at);
+        system.structure().requirePoint(point);
+        double scale = system.responseScale(force, forceAmplitude, point);
         double reference = system.referenceFrequency();
-        return omega -> scale * AbsorberSensitivity.value(system, force, at, omega / reference).abs();
+        return omega -> scale * AbsorberSensitivity.value(system, force, point, omega / reference).abs();
+    }
+
+    /**
+     * Each mode's part of the displacement at a named point with the absorbers on
+     * ({@link ModeContributions}): which mode a peak belongs to, and what the absorbers left of each.
+     *
+     * @param point a named point of the structure
+     * @return the amplitudes of phi_r(p) q_r, m, one per mode, at an angular frequency, rad/s
+     */
+    public DoubleFunction<double[]> modeParts(String point) {
+        ModalSystem system = ModalSystem.of(layout.structure(), absorbers);
+        String force = layout.excitationPoint();
+        system.structure().requirePoint(point);
+        return omega -> {
+            Complex[] parts = ModeContributions.at(system, force, point, omega);
+            double[] out = new double[parts.length];
+            for (int r = 0; r < parts.length; r++) {
+                out[r] = forceAmplitude * parts[r].abs();
+            }
+            return out;
+        };
     }
 
     /** @return the total mass of the absorbers, kg */

@@ -13,6 +13,7 @@ import java.util.List;
 import java.util.concurrent.Callable;
 import java.util.concurrent.CopyOnWriteArrayList;
 import javax.imageio.ImageIO;
+import javax.swing.JComboBox;
 import javax.swing.JLabel;
 import javax.swing.JTabbedPane;
 import javax.swing.JTable;
@@ -111,6 +112,19 @@ class SeveralAbsorbersGuiTest {
         }
         assertTrue(sampled <= set.peakAfter() * (1 + 1e-9) && sampled > 0.97 * set.peakAfter(),
                 sampled + " against " + set.peakAfter());
+        // every named point has its chart, the response point first; choosing one shows its chart at once
+        @SuppressWarnings("unchecked")
+        JComboBox<String> point = onEdt(() -> (JComboBox<String>) Edt.find(frame.getContentPane(), "result.several.point"));
+        assertEquals(List.of("midspan", "display"), onEdt(() -> List.of(point.getItemAt(0), point.getItemAt(1))));
+        assertEquals(2, onEdt(point::getItemCount));
+        assertNotNull(chart.getSeriesMap().get("mode bending, its part with absorbers"));
+        onEdt(() -> {
+            point.setSelectedItem("display");
+            return null;
+        });
+        String title = onEdt(() -> ((ChartHost) Edt.find(frame.getContentPane(), "chart.several")).chart()
+                .getYAxisTitle());
+        assertTrue(title.contains("display"), title);
         String summary = onEdt(() -> ((JLabel) Edt.find(frame.getContentPane(), "result.several.summary")).getText());
         assertTrue(summary.contains("peak displacement over the band"), summary);
         onEdt(() -> {
