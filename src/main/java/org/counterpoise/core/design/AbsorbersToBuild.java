@@ -22,8 +22,9 @@ import org.counterpoise.core.system.PointAbsorber;
  *       on the whole structure ({@link AbsorberPeak}: its stroke in the band and from rest to the
  *       top of the band, its spring's, damper's and total force in the band). Its figures alone on
  *       the mode would misstate them: in a set each absorber works at its own part of the band and
- *       the others change the motion of the point. A transient run-up stroke (a project with a
- *       run-up rate) stays the absorber's alone: the set's run-up is not integrated;</li>
+ *       the others change the motion of the point; also the largest velocity across its damper within
+ *       the set. A transient run-up stroke (a project with a run-up rate) stays the absorber's alone:
+ *       the set's run-up is not integrated, and the clearance holds it too;</li>
  *   <li>its tolerance within the set: the factors on that absorber's own frequency, the others held,
  *       at which the set's peak over the band at the response point of the whole structure rises by
  *       {@link DesignResult#TOLERANCE_ALLOWANCE} (its spring rate off, its damper kept, as
@@ -53,8 +54,11 @@ public record AbsorbersToBuild(SeveralAbsorbers set, List<Built> absorbers) {
      * @param design its own design: this absorber alone on the target mode, with the tolerance within
      *     the set as its absorber tolerance (what its parts are sized from)
      * @param toleranceInSet the tolerated factors on its own frequency within the set
+     * @param damperVelocity the largest relative velocity across its damper within the set, over the band
+     *     and from rest to the top of the band, m/s (+infinity when unbounded)
      */
-    public record Built(PointAbsorber absorber, DesignResult design, MistuningRange toleranceInSet) {
+    public record Built(PointAbsorber absorber, DesignResult design, MistuningRange toleranceInSet,
+            double damperVelocity) {
     }
 
     /**
@@ -77,7 +81,7 @@ public record AbsorbersToBuild(SeveralAbsorbers set, List<Built> absorbers) {
                     a.damping() / (2 * a.mass() * w));
             DesignResult own = inSet(Designer.ofTuning(study, tuning, SOURCE,
                     "absorber " + (j + 1) + " of " + set.absorbers().size()), set, j, tolerance);
-            out.add(new Built(a, own, tolerance));
+            out.add(new Built(a, own, tolerance, damperVelocity(set, j)));
         }
         return new AbsorbersToBuild(set, out);
     }
@@ -126,6 +130,11 @@ public record AbsorbersToBuild(SeveralAbsorbers set, List<Built> absorbers) {
                 : Math.max(strokeRunUp.value(), strokeInBand.value()));
         RunUpStroke runUp = d.runUpStroke().basis() == RunUpStroke.Basis.TRANSIENT ? d.runUpStroke()
                 : new RunUpStroke(strokeRunUp, d.runUpStroke().basis());
+        if (runUp.basis() == RunUpStroke.Basis.TRANSIENT && !runUp.peak().unbounded()) {
+            // the transient run-up stroke is the absorber's alone (the set's run-up is not integrated); the
+            // spring and the stroke check use it, so the clearance must hold it too
+            clearance = Math.max(clearance, d.study().strokeMargin() * runUp.peak().value());
+        }
         return new DesignResult(d.study(), d.methodSource(), d.methodNote(), d.tuning(), d.absorber(),
                 d.staticDeflection(), d.responseBefore(), d.responseAfter(), d.motionBefore(), d.motionAfter(),
                 strokeInBand, strokeRunUp, clearance,
@@ -134,6 +143,16 @@ public record AbsorbersToBuild(SeveralAbsorbers set, List<Built> absorbers) {
                 peak(system, layout, set, j, AbsorberPeak.Quantity.ABSORBER_FORCE, low, high),
                 d.coupledNaturalFrequencies(), d.stiffnessDetuning(), d.massDetuning(), set.structureTolerance(),
                 tolerance, d.warnings(), d.activeConstraint(), runUp, d.acceptance(), d.afterWorstCase());
+    }
+
+    /** The largest relative velocity across absorber j's damper within the set, band and run-up, m/s. */
+    private static double damperVelocity(SeveralAbsorbers set, int j) {
+        AbsorberLayout layout = set.layout();
+        ModalSystem system = ModalSystem.of(layout.structure(), set.absorbers());
+        double inBand = peak(system, layout, set, j, AbsorberPeak.Quantity.VELOCITY, set.band().low(),
+                set.band().high()).value();
+        double fromRest = peak(system, layout, set, j, AbsorberPeak.Quantity.VELOCITY, 0.0, set.band().high()).value();
+        return Double.isFinite(fromRest) ? Math.max(inBand, fromRest) : inBand;
     }
 
     private static ResponsePeak peak(ModalSystem system, AbsorberLayout layout, SeveralAbsorbers set, int j,

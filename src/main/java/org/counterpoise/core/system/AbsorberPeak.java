@@ -9,7 +9,8 @@ import org.counterpoise.core.rational.TransferFunction;
 
 /**
  * The exact peak over a band of what one absorber of a {@link ModalSystem} does while it works with
- * the others: its stroke, its spring's force, its damper's force or the two together, per unit
+ * the others: its stroke, the velocity across its damper, its spring's force, its damper's force or the
+ * two together, per unit
  * harmonic force at a point of the structure.
  *
  * <p>The absorber j (mass m, spring k, damper c) at point a moves as y = x_a (k + i c omega) /
@@ -25,7 +26,8 @@ import org.counterpoise.core.rational.TransferFunction;
  * interior maxima, and the band's finite ends count too.
  *
  * @param frequency where the peak is, rad/s (0 when it lies at the low end 0)
- * @param value the peak per unit force: m/N for the stroke, N/N for a force (+infinity when unbounded)
+ * @param value the peak per unit force: m/N for the stroke, m/(s N) for the velocity, N/N for a force
+ *     (+infinity when unbounded)
  */
 public record AbsorberPeak(double frequency, double value) {
 
@@ -33,6 +35,8 @@ public record AbsorberPeak(double frequency, double value) {
     public enum Quantity {
         /** The stroke, absorber mass displacement minus the point's. */
         STROKE,
+        /** The relative velocity across the damper, omega times the stroke. */
+        VELOCITY,
         /** The force in the spring, k times the stroke. */
         SPRING_FORCE,
         /** The force in the damper, c omega times the stroke. */
@@ -94,6 +98,7 @@ public record AbsorberPeak(double frequency, double value) {
     private static double[] weight(PointAbsorber a, Quantity quantity, double omegaRef) {
         return switch (quantity) {
             case STROKE -> new double[] {1.0};
+            case VELOCITY -> new double[] {0.0, omegaRef};
             case SPRING_FORCE -> new double[] {a.stiffness()};
             case DAMPER_FORCE -> new double[] {0.0, a.damping() * omegaRef};
             case ABSORBER_FORCE -> new double[] {a.stiffness(), a.damping() * omegaRef};
@@ -110,6 +115,7 @@ public record AbsorberPeak(double frequency, double value) {
         Complex stroke = xa.multiply(inertia).divide(dynamic);
         double factor = switch (quantity) {
             case STROKE -> 1.0;
+            case VELOCITY -> omega;
             case SPRING_FORCE -> a.stiffness();
             case DAMPER_FORCE -> a.damping() * omega;
             case ABSORBER_FORCE -> Math.hypot(a.stiffness(), a.damping() * omega);

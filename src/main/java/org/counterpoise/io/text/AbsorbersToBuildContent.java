@@ -114,13 +114,13 @@ public final class AbsorbersToBuildContent {
         List<String> sentences = new ArrayList<>();
         sentences.add("The parts of absorber " + (j + 1) + " are sized from that absorber's own figures: its mass "
                 + ValueText.inline(DesignContent.quantity(built.absorber().mass(), Dimension.MASS), units)
-                + ", its own frequency and damping as tabled, its strokes and spring and damper forces as it works"
-                + " within the set on the whole structure (the clearance is " + ValueText.inline(DesignContent.quantity(
-                        built.design().clearance(), Dimension.LENGTH), units)
-                + "), and the tolerance on its own frequency within the set. Its damper's velocity"
+                + ", its own frequency and damping as tabled, its strokes, spring force and damper velocity as it"
+                + " works within the set on the whole structure (the clearance is " + ValueText.inline(
+                        DesignContent.quantity(built.design().clearance(), Dimension.LENGTH), units)
+                + "), and the tolerance on its own frequency within the set."
                 + (built.design().runUpStroke().basis() == RunUpStroke.Basis.TRANSIENT
-                        ? " and its run-up stroke are" : " is")
-                + " taken as if it worked alone on the target mode (not computed within the set yet).");
+                        ? " Its run-up stroke is taken as if it worked alone on the target mode (the set's run-up is"
+                                + " not computed), and the clearance holds it." : ""));
         List<ReportSection> sections = new ArrayList<>();
         if (realisation.isEmpty()) {
             sentences.add("Its hardware could not be sized with the project's hardware choices; see the warnings.");

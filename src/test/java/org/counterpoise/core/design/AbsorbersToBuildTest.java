@@ -12,6 +12,8 @@ import org.counterpoise.core.model.ExcitationKind;
 import org.counterpoise.core.model.FrequencyBand;
 import org.counterpoise.core.model.Structure;
 import org.counterpoise.core.optim.AbsorberSetTuning;
+import org.counterpoise.core.realisation.HardwareChoice;
+import org.counterpoise.core.realisation.Realiser;
 import org.counterpoise.core.response.ResponseKind;
 import org.counterpoise.core.robust.MistuningRange;
 import org.counterpoise.core.system.Mode;
@@ -110,6 +112,11 @@ class AbsorbersToBuildTest {
                 assertEquals(fromRest, own.strokeRunUp().value(), 1e-7 * fromRest, "stroke from rest, absorber " + j);
                 assertEquals(spring, own.springForce().value(), 1e-7 * spring, "spring force, absorber " + j);
                 assertEquals(1.5 * Math.max(inBand, fromRest), own.clearance(), 1e-7 * own.clearance());
+                // the velocity across its damper: omega times the stroke, band and from rest
+                double velocity = DenseSweep.maximum(w -> w * stroke.applyAsDouble(w), 0.0, set.band().high(), 20_000);
+                assertEquals(velocity, build.absorbers().get(j).damperVelocity(), 1e-7 * velocity, "velocity " + j);
+                assertEquals(build.absorbers().get(j).damperVelocity(), Realiser.realise(own, HardwareChoice.DEFAULT,
+                        build.absorbers().get(j).damperVelocity()).damper().peakVelocity(), 0.0);
             }
         }
     }

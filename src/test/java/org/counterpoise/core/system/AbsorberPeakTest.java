@@ -99,6 +99,7 @@ class AbsorberPeakTest {
             Complex stroke = ModalDirectSolve.solve(modes, absorbers, force, force, w)[1 + j];
             double factor = switch (q) {
                 case STROKE -> 1.0;
+                case VELOCITY -> w;
                 case SPRING_FORCE -> a.stiffness();
                 case DAMPER_FORCE -> a.damping() * w;
                 case ABSORBER_FORCE -> Math.hypot(a.stiffness(), a.damping() * w);
