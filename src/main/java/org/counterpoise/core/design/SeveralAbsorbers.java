@@ -24,8 +24,9 @@ import org.counterpoise.core.system.PointAbsorber;
  * @param peakAfter the peak over the band with the absorbers
  * @param modes each mode's peak near its own frequency, before and after (spillover), in the
  *     structure's order
- * @param single one absorber of the same total mass, least peak over the band on the target mode,
- *     and its peak on the whole structure; empty for one absorber
+ * @param single one absorber of the same total mass, least peak over the band on the target mode
+ *     (least worst case over the ranges when the set is, {@code robust}), and its peak on the whole
+ *     structure; empty for one absorber
  * @param structureTolerance the factors on the target mode's natural frequency (its stiffness by the
  *     square, its mass, damping and shape kept) within which the peak over the band stays within
  *     {@link DesignResult#TOLERANCE_ALLOWANCE} of {@code peakAfter} (searched to
