@@ -27,18 +27,22 @@ import org.counterpoise.core.system.PointAbsorber;
  * @param peakAfter the peak over the band with the absorbers
  * @param modes each mode's peak near its own frequency, before and after (spillover), in the
  *     structure's order
- * @param single one absorber of the same total mass, least peak over the band on the target mode,
- *     and its peak on the whole structure; empty for one absorber
+ * @param single one absorber of the same total mass, least peak over the band on the target mode
+ *     (least worst case over the ranges when the set is, {@code robust}), and its peak on the whole
+ *     structure; empty for one absorber
  * @param structureTolerance the factors on the target mode's natural frequency (its stiffness by the
  *     square, its mass, damping and shape kept) within which the peak over the band stays within
  *     {@link DesignResult#TOLERANCE_ALLOWANCE} of {@code peakAfter} (searched to
  *     {@link DesignResult#TOLERANCE_SEARCH} each side)
  * @param certified true when the optimum of the absorbers' tunings is certified (docs/several-modes.md;
  *     true for one absorber, designed by the study's own method)
+ * @param robust for several absorbers designed by {@code robust-worst-case}: the ranges and the
+ *     figures of this set, the least-peak set and one absorber over them; empty otherwise
  */
 public record SeveralAbsorbers(AbsorberLayout layout, int targetMode, double effectiveMass, FrequencyBand band,
         double forceAmplitude, List<PointAbsorber> absorbers, double peakBefore, double peakAfter,
-        List<ModePeak> modes, Optional<SingleAbsorber> single, boolean certified, MistuningRange structureTolerance) {
+        List<ModePeak> modes, Optional<SingleAbsorber> single, boolean certified, MistuningRange structureTolerance,
+        Optional<RobustSet> robust) {
 
     /** Copies the lists. */
     public SeveralAbsorbers {
@@ -65,6 +69,34 @@ public record SeveralAbsorbers(AbsorberLayout layout, int targetMode, double eff
      * @param structureTolerance its tolerance to the target mode's frequency, as the set's
      */
     public record SingleAbsorber(PointAbsorber absorber, double peak, MistuningRange structureTolerance) {
+    }
+
+    /**
+     * The set designed for the least worst-case peak (method {@code robust-worst-case}) and what it
+     * is compared with, each on the whole structure over the same ranges.
+     *
+     * @param structureRange the target mode's natural frequency may be off by +/- this fraction
+     * @param absorberRange every absorber's natural frequency may be off by +/- this fraction, all
+     *     by the same factor (one spring batch)
+     * @param dampingFloor no absorber's damping ratio is below this
+     * @param set this set (the absorbers above)
+     * @param leastPeakSet the same absorbers tuned for the least nominal peak
+     * @param single one absorber of the same total mass, designed for the least worst case too (the
+     *     {@link SeveralAbsorbers#single} absorber)
+     */
+    public record RobustSet(double structureRange, double absorberRange, double dampingFloor, Figures set,
+            Figures leastPeakSet, Figures single) {
+    }
+
+    /**
+     * A design's figures over the ranges, on the whole structure.
+     *
+     * @param nominalPeak the peak displacement over the band, structure and absorbers as designed, m
+     * @param worstPeak the largest peak over the band and the ranges, m
+     * @param structureTolerance how far the target mode's frequency may be off, as
+     *     {@link SeveralAbsorbers#structureTolerance}
+     */
+    public record Figures(double nominalPeak, double worstPeak, MistuningRange structureTolerance) {
     }
 
     /**
