@@ -2,6 +2,7 @@ package org.counterpoise.core.design;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 import java.util.Optional;
 import org.counterpoise.core.model.Structure;
 import org.counterpoise.core.model.Tuning;
@@ -38,9 +39,18 @@ import org.counterpoise.core.system.PointAbsorber;
  */
 public record AbsorbersToBuild(SeveralAbsorbers set, List<Built> absorbers) {
 
-    /** Where the tuning of each absorber's own design comes from. */
-    static final String SOURCE = "tuned with the other absorbers of its set for the least peak over the band"
-            + " (docs/several-modes.md)";
+    /**
+     * What the set was tuned for, in words (the source of each absorber's tuning, and the sheet's).
+     *
+     * @param set the set
+     * @return "the least peak over the band", or for a robust set the least worst peak over its ranges
+     */
+    public static String goal(SeveralAbsorbers set) {
+        return set.robust().map(r -> String.format(Locale.ROOT, "the least worst peak over the band with the"
+                + " structure's frequency within +/-%.3g %%%s", 100 * r.structureRange(), r.absorberRange() > 0
+                        ? String.format(Locale.ROOT, " and every absorber's within +/-%.3g %% together",
+                                100 * r.absorberRange()) : "")).orElse("the least peak over the band");
+    }
 
     /** Copies the list. */
     public AbsorbersToBuild {
@@ -79,7 +89,8 @@ public record AbsorbersToBuild(SeveralAbsorbers set, List<Built> absorbers) {
             // zeta_j = c_j / (2 m_j omega_j): the absorber's own figures on the single-mode structure
             Tuning tuning = new Tuning(a.mass() / structure.effectiveMass(), w / structure.naturalFrequency(),
                     a.damping() / (2 * a.mass() * w));
-            DesignResult own = inSet(Designer.ofTuning(study, tuning, SOURCE,
+            DesignResult own = inSet(Designer.ofTuning(study, tuning, "tuned with the other absorbers of its set for "
+                    + goal(set) + " (docs/several-modes.md)",
                     "absorber " + (j + 1) + " of " + set.absorbers().size()), set, j, tolerance);
             out.add(new Built(a, own, tolerance, damperVelocity(set, j)));
         }

@@ -90,8 +90,9 @@ public final class AbsorbersToBuildContent {
     public static List<String> sentences(AbsorbersToBuild b) {
         String tuned = b.set().layout().tuning().name().toLowerCase(Locale.ROOT);
         return List.of("Build every absorber of this table: " + b.absorbers().size() + " absorbers of equal mass at "
-                        + b.set().layout().absorberPoint() + ", tuned together (" + tuned + " tuning) for the least peak"
-                        + " over the band at the response point of the whole structure (docs/several-modes.md).",
+                        + b.set().layout().absorberPoint() + ", tuned together (" + tuned + " tuning) on the whole"
+                        + " structure, at its response point, for " + AbsorbersToBuild.goal(b.set())
+                        + " (docs/several-modes.md).",
                 "Own frequency may be off: how far that absorber's own frequency may be from its value, the others as"
                         + " built, before the set's peak over the band rises by "
                         + ValueText.percent(DesignResult.TOLERANCE_ALLOWANCE, 2) + " (its spring rate off, its damper"
