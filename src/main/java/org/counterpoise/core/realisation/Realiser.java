@@ -53,7 +53,7 @@ public final class Realiser {
         BuiltAbsorber built = BuiltAbsorber.of(design, choice, elastomer);
         DamperDesign damper = DamperSizing.size(design, choice, built, damperVelocity, warnings);
         PartTolerances tolerances = ToleranceSizing.of(design, choice, warnings);
-        TrimPlan trim = TrimSizing.of(design, choice);
+        TrimPlan trim = TrimSizing.of(design, choice, built, tolerances);
         List<ProcedureStep> procedure = CommissioningProcedure.of(design, built, tolerances, trim);
         List<PredictedPoint> predicted = PredictedTable.of(design, built);
         return new Realisation(choice, spring, elastomer, damper, tolerances, trim, procedure, predicted, warnings);

@@ -11,7 +11,9 @@ import org.counterpoise.core.design.DesignResult;
  * absorber frequency moves about as the structure's, and the structure's natural frequency is
  * uncertain by the project's structure range s (stated, or the default; see {@link #structureSpan}),
  * so the plates are sized to move the absorber frequency omega_a by the same fractions: from
- * omega_a (1 - s) to omega_a (1 + s). At a fixed spring rate k the mass goes as m = k / omega_a^2, so
+ * omega_a (1 - s) to omega_a (1 + s), and at least by the absorber frequency's part tolerance (a
+ * built absorber anywhere within it can be brought back). omega_a is the frequency the absorber is
+ * tuned to on site ({@link BuiltAbsorber#tuningRatio}: an elastomer element's own optimum). At a fixed spring rate k the mass goes as m = k / omega_a^2, so
  * the mass must run from m0 / (1 + s)^2 to m0 / (1 - s)^2. Plates of a fraction p of the absorber
  * mass are supplied: enough fitted as built to take off down to the lightest mass, and enough spare
  * to add up to the heaviest; the built absorber (with its fitted plates) has the design mass m0. The
@@ -31,13 +33,21 @@ public final class TrimSizing {
     /**
      * @param design the design
      * @param choice the hardware choices (the trim step)
+     * @param built the absorber as built (its frequency as tuned on site: an elastomer element's is its
+     *     own optimum, not the viscous design's)
+     * @param tolerances the parts' tolerances (the plates cover at least the absorber frequency's)
      * @return the trim plan
      */
-    public static TrimPlan of(DesignResult design, HardwareChoice choice) {
+    static TrimPlan of(DesignResult design, HardwareChoice choice, BuiltAbsorber built, PartTolerances tolerances) {
         double[] span = structureSpan(design);
-        return plan(design.absorber().naturalFrequency(), span[0], span[1], design.absorber().mass(),
-                choice.trimStepFraction());
+        double below = Math.max(span[0], tolerances.absorberFrequency());
+        double above = Math.max(span[1], tolerances.absorberFrequency());
+        return plan(built.tuningRatio() * design.study().structure().naturalFrequency(), Math.min(below, MOST_BELOW),
+                above, design.absorber().mass(), choice.trimStepFraction());
     }
+
+    /** The plates never take the absorber's frequency down by this much or more (its mass would grow fourfold). */
+    private static final double MOST_BELOW = 0.5;
 
     /**
      * @param omegaA the absorber's natural frequency as designed, rad/s

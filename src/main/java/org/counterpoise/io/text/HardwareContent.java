@@ -157,8 +157,8 @@ public final class HardwareContent {
                 row(ReportKey.TRIM_RANGE, "absorber frequencies the plates reach", new Pair(DesignContent.quantity(
                         t.absorberFrequencyLow(), Dimension.FREQUENCY), DesignContent.quantity(t.absorberFrequencyHigh(),
                                 Dimension.FREQUENCY), PairKind.RANGE), "spring rate fixed, frequency ~ 1/sqrt(mass)",
-                        "sized for the structure's stated frequency range: for a new design if the structure is"
-                                + " measured outside the range this design holds"));
+                        "sized to move it by the structure's stated frequency range (at least by its own"
+                                + " frequency tolerance); beyond that, new parts may be needed"));
     }
 
     private static List<ReportRow> predicted(List<PredictedPoint> points, Dimension response) {

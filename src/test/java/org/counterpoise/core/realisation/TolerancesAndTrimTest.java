@@ -111,7 +111,7 @@ class TolerancesAndTrimTest {
     @Test
     void theFanTrimMovesItsAbsorberOverItsStatedStructureRange() {
         DesignResult fan = Presets.fan(); // robust: structure range +/-10 % as stated in the preset
-        TrimPlan p = TrimSizing.of(fan, HardwareChoice.DEFAULT);
+        TrimPlan p = Realiser.realise(fan, HardwareChoice.DEFAULT).trim();
         double omegaA = fan.absorber().naturalFrequency();
         double s = fan.study().robustness().ranges().structure();
         assertTrue(p.absorberFrequencyLow() <= omegaA * (1 - s) * (1 + 1e-12));
@@ -124,6 +124,27 @@ class TolerancesAndTrimTest {
         assertEquals(Math.sqrt(k / (m0 - p.platesFitted() * p.plateMass())), p.absorberFrequencyHigh(), 1e-9 * omegaA);
         assertTrue(m0 - (p.platesFitted() - 1) * p.plateMass() > k / Math.pow(omegaA * (1 + s), 2),
                 "no plate more than needed");
+    }
+
+    /**
+     * An elastomer element is tuned on site to its own optimum, not the viscous design's frequency: the
+     * plates' reach is centred on the frequency the procedure tunes it to (the "tune the absorber"
+     * step's target), and covers at least the absorber frequency's part tolerance.
+     */
+    @Test
+    void anElastomerAbsorbersPlatesReachAroundTheFrequencyItIsTunedTo() {
+        DesignResult fan = Presets.fan();
+        HardwareChoice elastomer = new HardwareChoice(SpringKind.ELASTOMER, SpringMaterial.EN10270_1_DH, 0,
+                DamperKind.ELASTOMER_LOSS, EddyCurrentChoice.DEFAULT, new ElastomerChoice(1.4, 0.15), 50_000, 0.01, 0.01);
+        Realisation r = Realiser.realise(fan, elastomer);
+        double target = r.procedure().stream().flatMap(step -> step.figures().stream())
+                .filter(f -> f.quantity() == StepFigure.StepQuantity.ABSORBER_TARGET_FREQUENCY).findFirst().orElseThrow()
+                .value();
+        assertTrue(Math.abs(target / fan.absorber().naturalFrequency() - 1) > 1e-3, "the two frequencies differ here");
+        double s = Math.max(fan.study().robustness().ranges().structure(), r.tolerances().absorberFrequency());
+        assertTrue(r.trim().absorberFrequencyLow() <= target * (1 - s) * (1 + 1e-12), "low " + r.trim());
+        assertTrue(r.trim().absorberFrequencyHigh() >= target * (1 + s) * (1 - 1e-12), "high " + r.trim());
+        assertTrue(r.trim().absorberFrequencyLow() > target * (1 - s) * (1 - 0.02), "not far below");
     }
 
     static HardwareChoice withTolerances(double mass, double trim) {
