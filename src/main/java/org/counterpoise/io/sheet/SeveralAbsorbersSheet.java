@@ -12,6 +12,7 @@ import org.counterpoise.core.error.CoreException;
 import org.counterpoise.core.realisation.HardwareChoice;
 import org.counterpoise.core.realisation.Realisation;
 import org.counterpoise.core.realisation.Realiser;
+import org.counterpoise.core.realisation.SpringKind;
 import org.counterpoise.io.text.AbsorbersToBuildContent;
 import org.counterpoise.io.text.ReportContent;
 import org.counterpoise.io.text.ReportSection;
@@ -56,11 +57,13 @@ record SeveralAbsorbersSheet(List<SheetBlock> blocks, List<String> warnings) {
                         AbsorbersToBuildContent.sentences(b)))));
         List<String> warnings = new ArrayList<>();
         for (int j = 0; j < b.absorbers().size(); j++) {
-            Optional<Realisation> realisation = realisation(b.absorbers().get(j), hardware);
+            Sized sized = realisation(b.absorbers().get(j), hardware);
+            Optional<Realisation> realisation = sized.realisation();
             int number = j + 1;
             realisation.ifPresent(r -> r.warnings().forEach(w -> warnings.add("Absorber " + number + ": "
                     + WarningText.of(w, units))));
-            AbsorbersToBuildContent.Absorber own = AbsorbersToBuildContent.absorber(b, j, realisation, units);
+            AbsorbersToBuildContent.Absorber own = AbsorbersToBuildContent.absorber(b, j, realisation, sized.whyNot(),
+                    units);
             List<ReportTable.Section> sections = new ArrayList<>();
             Map<SectionId, ReportTable.Grid> grids = new EnumMap<>(SectionId.class);
             for (ReportSection s : own.sections()) {
@@ -90,12 +93,26 @@ record SeveralAbsorbersSheet(List<SheetBlock> blocks, List<String> warnings) {
         return ReportTable.of(one, Set.of()).get(0);
     }
 
-    /** Its hardware, or none when it cannot be sized for this absorber (a sentence on its page says so). */
-    private static Optional<Realisation> realisation(AbsorbersToBuild.Built built, HardwareChoice hardware) {
+    /** An absorber's hardware, or why it has none (a sentence for its page). */
+    private record Sized(Optional<Realisation> realisation, String whyNot) {
+    }
+
+    /**
+     * Its hardware, or none when it cannot be sized for this absorber. An elastomer element is not sized
+     * for an absorber of a set: the element's own optimum (of the absorber alone on the mode) would
+     * replace the tuning the set needs.
+     */
+    private static Sized realisation(AbsorbersToBuild.Built built, HardwareChoice hardware) {
+        if (hardware.springKind() == SpringKind.ELASTOMER) {
+            return new Sized(Optional.empty(), "An elastomer element is not sized for an absorber of a set: its"
+                    + " own optimum tuning, that of the absorber alone, would replace the tuning the set needs."
+                    + " Choose helical springs and a damper for a set.");
+        }
         try {
-            return Optional.of(Realiser.realise(built.design(), hardware, built.damperVelocity()));
+            return new Sized(Optional.of(Realiser.realise(built.design(), hardware, built.damperVelocity())), "");
         } catch (CoreException unrealisable) {
-            return Optional.empty();
+            return new Sized(Optional.empty(), "Its hardware could not be sized with the project's hardware"
+                    + " choices: " + unrealisable.getMessage());
         }
     }
 }

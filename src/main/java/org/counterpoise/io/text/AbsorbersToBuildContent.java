@@ -106,10 +106,12 @@ public final class AbsorbersToBuildContent {
      * @param b the absorbers to build
      * @param j the absorber
      * @param realisation its hardware, or empty when it could not be sized
+     * @param whyNot why it could not be sized, a sentence (used when realisation is empty)
      * @param units the unit system
      * @return its pages
      */
-    public static Absorber absorber(AbsorbersToBuild b, int j, Optional<Realisation> realisation, UnitSystem units) {
+    public static Absorber absorber(AbsorbersToBuild b, int j, Optional<Realisation> realisation, String whyNot,
+            UnitSystem units) {
         AbsorbersToBuild.Built built = b.absorbers().get(j);
         int n = b.absorbers().size();
         List<String> sentences = new ArrayList<>();
@@ -124,7 +126,8 @@ public final class AbsorbersToBuildContent {
                                 + " not computed), and the clearance holds it." : ""));
         List<ReportSection> sections = new ArrayList<>();
         if (realisation.isEmpty()) {
-            sentences.add("Its hardware could not be sized with the project's hardware choices; see the warnings.");
+            sentences.add(whyNot.isBlank() ? "Its hardware could not be sized with the project's hardware choices."
+                    : whyNot);
         } else {
             String which = "Absorber " + (j + 1) + " of " + n + " \u00b7 ";
             for (ReportSection s : HardwareContent.sections(realisation.get(), built.design(), units)) {

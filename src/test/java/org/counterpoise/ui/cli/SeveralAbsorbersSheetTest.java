@@ -4,6 +4,8 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import com.google.gson.JsonObject;
+import com.google.gson.JsonParser;
 import java.awt.image.BufferedImage;
 import java.io.IOException;
 import java.io.PrintWriter;
@@ -29,6 +31,8 @@ import org.counterpoise.io.project.ProjectReader;
 import org.counterpoise.io.project.SeveralModes;
 import org.counterpoise.io.text.QuantityFormat;
 import org.counterpoise.io.text.ValueText;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;
 
@@ -98,5 +102,30 @@ class SeveralAbsorbersSheetTest {
 
     private static String printed(double si, Unit unit) {
         return QuantityFormat.number(unit.fromSi(si), QuantityFormat.FIGURES);
+    }
+
+    /**
+     * With elastomer hardware the set's absorbers get no parts (an element's own optimum would replace the
+     * set's tuning) and each absorber's page says so in plain words; the sheet is still written.
+     */
+    @Test
+    void anElastomerSetSaysWhyItsAbsorbersHaveNoParts(@TempDir Path dir) throws IOException {
+        String json = Files.readString(Path.of("presets", "split-mass-test-rig.json"));
+        JsonObject o = JsonParser.parseString(json).getAsJsonObject();
+        o.add("hardware", JsonParser.parseString("{\"spring\": \"elastomer\", \"spring_count\": 0,"
+                + " \"damper\": \"elastomer-loss\", \"elastomer\": {\"dynamic_to_static_ratio\": 1.3,"
+                + " \"loss_factor\": 0.2}}"));
+        Path project = dir.resolve("rig-elastomer.json");
+        Files.writeString(project, o.toString());
+        Path pdf = dir.resolve("rig-elastomer.pdf");
+        StringWriter err = new StringWriter();
+        int code = Cli.run(new String[] {"sheet", project.toString(), "-o", pdf.toString(), "--force"},
+                new PrintWriter(new StringWriter()), new PrintWriter(err));
+        assertEquals(0, code, err.toString());
+        try (PDDocument doc = Loader.loadPDF(pdf.toFile())) {
+            String flowing = new PDFTextStripper().getText(doc).replace('\u00a0', ' ').replaceAll("\\s+", " ");
+            assertTrue(flowing.contains("An elastomer element is not sized for an absorber of a set"), flowing);
+            assertFalse(flowing.contains("Absorber 1 of 3 \u00b7 Part list"), "no parts for an elastomer set");
+        }
     }
 }
