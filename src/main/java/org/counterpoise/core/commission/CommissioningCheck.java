@@ -8,12 +8,13 @@ import org.counterpoise.core.design.AbsorberSizing;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.Designer;
 import org.counterpoise.core.error.Checks;
-import org.counterpoise.core.error.InvalidInputException;
+import org.counterpoise.core.error.CoreException;
 import org.counterpoise.core.identify.MeasuredFrf;
 import org.counterpoise.core.model.Structure;
 import org.counterpoise.core.model.Tuning;
 import org.counterpoise.core.realisation.PredictedPoint;
 import org.counterpoise.core.realisation.Realisation;
+import org.counterpoise.core.realisation.Realiser;
 
 /**
  * The commissioning check: the frequency response measured at the absorber's point with the
@@ -76,7 +77,8 @@ public record CommissioningCheck(AsBuiltAbsorber built, TrimCorrection trim, Lis
         Checks.positive("absorber mass as weighed", mass);
         Tuning held = new Tuning(mass / structure.effectiveMass(), tuning.tuningRatio(), tuning.dampingRatio());
         AsBuiltAbsorber built = AsBuiltFit.fit(structure, held, measured, freeStructure);
-        TrimCorrection trim = TrimCorrection.of(built, targetTuningRatio(design, built, mass), tuning.dampingRatio(),
+        TrimCorrection trim = TrimCorrection.of(built, targetTuningRatio(design, realisation, built, mass),
+                tuning.dampingRatio(),
                 mass, realisation.trim(), realisation.tolerances());
         BuiltResponse response = BuiltResponse.of(design, built, trim, mass, realisation.trim().plateMass());
         if (trim.advised() && trim.platesToAdd() != 0 && response.afterTrim() > response.asBuilt()) {
@@ -110,26 +112,38 @@ public record CommissioningCheck(AsBuiltAbsorber built, TrimCorrection trim, Lis
 
     /**
      * @param design the design
+     * @param realisation its hardware: an elastomer element is tuned to its own optimum (the hysteretic
+     *     absorber's, as the sheet's procedure says), not the viscous design's
      * @param built the absorber as built, on the structure as fitted
      * @param mass the absorber's mass as built, kg
      * @return the tuning ratio, on the structure as fitted, of the absorber frequency it needs: the
-     *     design's when the structure was held; else that of the design the project's method makes for
-     *     the structure as measured, with this mass (the design's ratio if that design is refused)
+     *     design's (or its element's) when the structure was held; else that of the design the project's
+     *     method makes for the structure as measured, with this mass, realised with the same hardware
+     *     (the design's ratio if that design is refused)
      */
-    static double targetTuningRatio(DesignResult design, AsBuiltAbsorber built, double mass) {
+    static double targetTuningRatio(DesignResult design, Realisation realisation, AsBuiltAbsorber built,
+            double mass) {
         Structure structure = design.study().structure();
         if (built.structureFrequencySd().isEmpty() || built.structureFrequency() == structure.naturalFrequency()) {
-            return design.tuning().tuningRatio();
+            return ownTuningRatio(design, realisation);
         }
         Structure measured = AsBuiltFit.withFrequency(structure, built.structureFrequency());
         try {
             DesignResult again = Designer.design(design.study().withStructure(measured)
                     .withSizing(AbsorberSizing.ofMass(mass), design.study().constraints()));
+            if (realisation.elastomer().isPresent()) {
+                return ownTuningRatio(again, Realiser.realise(again, realisation.choice()));
+            }
             return again.absorber().naturalFrequency() / built.structureFrequency();
-        } catch (InvalidInputException e) {
+        } catch (CoreException e) {
             // a constraint the measured structure cannot meet: the design's own tuning ratio, as before
-            return design.tuning().tuningRatio();
+            return ownTuningRatio(design, realisation);
         }
+    }
+
+    /** The ratio the absorber is tuned to: the element's own optimum for an elastomer, else the design's. */
+    private static double ownTuningRatio(DesignResult design, Realisation realisation) {
+        return realisation.elastomer().map(e -> e.optimum().tuningRatio()).orElse(design.tuning().tuningRatio());
     }
 
     /** The measured magnitude at f, linear between the lines on either side. */
