@@ -61,6 +61,10 @@ public final class SeveralAbsorbersDesigner {
                     "several absorbers and several modes are designed for a force (disturbance.kind force) and"
                             + " the displacement (absorber.response displacement)");
         }
+        if (layout.joint().isPresent()) {
+            throw new InvalidInputException("absorbers.arrangement", "\"one-per-mode\"", "\"one-mode\": the design of"
+                    + " one absorber per mode in a project is not made yet (optimum --one-per-mode designs it)");
+        }
         FrequencyBand band = excitation.band();
         int r = layout.target(band);
         Mode mode = layout.structure().modes().get(r);
