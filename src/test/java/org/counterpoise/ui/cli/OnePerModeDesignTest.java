@@ -6,6 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import com.google.gson.JsonArray;
 import com.google.gson.JsonObject;
 import com.google.gson.JsonParser;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -19,6 +20,7 @@ import org.counterpoise.io.project.SeveralModes;
 import org.counterpoise.testing.DenseSweep;
 import org.counterpoise.testing.ModalDirectSolve;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
 
 /**
  * {@code design} of one absorber per mode, designed jointly (format 7), on the invented preset
@@ -72,6 +74,44 @@ class OnePerModeDesignTest {
         assertEquals(0, text.code(), text.err());
         assertTrue(text.out().contains("gain of the joint design"), text.out());
         assertTrue(text.out().contains("One absorber per mode: the sections other than"), text.out());
+    }
+
+    /**
+     * Modes 2.5 apart of equal modal mass, everything at one point (an invented case): the joint design
+     * puts the upper mode's absorber at the edge of its neighbourhood, as `optimum --one-per-mode` does
+     * for R = 2.5 (docs/several-modes.md), and the report says so; site-check refuses the project plainly.
+     */
+    @Test
+    void anAbsorberAtItsNeighbourhoodsEdgeIsSaidAndSiteCheckRefuses(@TempDir Path dir) throws Exception {
+        Path file = dir.resolve("close.json");
+        Files.writeString(file, """
+                {"format_version": 7, "name": "Invented two-mode beam",
+                 "structure": {"modes": [{"name": "first", "natural_frequency": {"value": 4, "unit": "Hz"},
+                                          "damping": {"ratio": 0.01}, "modal_mass": {"value": 1000, "unit": "kg"},
+                                          "mode_shape": {"p": 1.0}},
+                                         {"name": "second", "natural_frequency": {"value": 10, "unit": "Hz"},
+                                          "damping": {"ratio": 0.01}, "modal_mass": {"value": 1000, "unit": "kg"},
+                                          "mode_shape": {"p": 1.0}}],
+                               "excitation_point": "p", "response_point": "p"},
+                 "disturbance": {"kind": "force", "amplitude": {"value": 100, "unit": "N"},
+                                 "band": {"low": 1, "high": 25, "unit": "Hz"}},
+                 "absorber": {"mass_ratio": 0.05, "method": "exact-peak"},
+                 "absorbers": {"arrangement": "one-per-mode", "modes": ["first", "second"]}}
+                """);
+        CliTest.Run run = CliTest.run("design", "--json", file.toString());
+        assertEquals(0, run.code(), run.err());
+        JsonObject root = JsonParser.parseString(run.out()).getAsJsonObject();
+        JsonObject second = root.getAsJsonObject("several_absorbers").getAsJsonArray("absorbers").get(1)
+                .getAsJsonObject();
+        assertTrue(second.get("point_chosen").getAsBoolean());
+        // sqrt(4 * 10) Hz: the geometric mean of the two natural frequencies
+        assertEquals(Math.sqrt(40), second.get("frequency_Hz").getAsDouble(), 1e-9);
+        assertTrue(root.get("cautions").toString().contains("absorber 2 (mode second) is tuned to the edge"), run.out());
+        CliTest.Run check = CliTest.run("site-check", file.toString(), "--fitted-frf",
+                "presets/gallery-floor-fitted-frf.csv");
+        assertEquals(2, check.code());
+        assertEquals("error: absorbers.arrangement: \"one-per-mode\" is not allowed; absorbers all on one mode for"
+                + " site-check: one absorber per mode is not yet checked against a measurement", check.err().strip());
     }
 
     private static List<PointAbsorber> absorbers(JsonArray list) {
