@@ -141,6 +141,9 @@ public final class SeveralModes {
     private static void checkDisturbance(Project p, AbsorbersInput a) {
         DisturbanceInput d = p.disturbance();
         String what = p.modes() != null ? "with structure.modes" : "with absorbers.count " + a.count();
+        if (a.onePerMode()) {
+            what = "with one absorber per mode";
+        }
         if (d.kind() != ExcitationKind.FORCE) {
             throw new InvalidInputException("disturbance.kind", "\"" + Ids.of(d.kind()) + "\"",
                     "\"force\" " + what + " (several modes and absorbers are designed for a force acting at a point)");
@@ -153,6 +156,11 @@ public final class SeveralModes {
             throw new InvalidInputException(d.spectrum() != null ? "disturbance.spectrum" : "disturbance.orders",
                     "given " + what, "one harmonic order without a spectrum: several modes and absorbers take one"
                             + " harmonic force over a band or at one frequency");
+        }
+        if (a.onePerMode() && !d.isBand()) {
+            throw new InvalidInputException("disturbance.frequency", "one forcing frequency with absorbers.arrangement \""
+                    + Ids.of(a.arrangement()) + "\"", "a band of forcing frequencies (disturbance.band): one absorber"
+                            + " per mode is designed for the least peak over a band");
         }
         if (a.count() > 1 && !d.isBand()) {
             throw new InvalidInputException(ModesJson.ABSORBERS + "." + ModesJson.COUNT, Integer.toString(a.count()),

@@ -173,6 +173,15 @@ class OnePerModeFileTest {
                 + " allowed"), e.getMessage());
     }
 
+    @Test
+    void oneForcingFrequencyIsRefusedNamingIt() {
+        String text = V7.replace("\"band\": {\"low\": 6, \"high\": 25, \"unit\": \"Hz\"}",
+                "\"frequency\": {\"value\": 9, \"unit\": \"Hz\"}").replace("ABSORBERS", "");
+        InvalidInputException e = assertThrows(InvalidInputException.class, () -> SeveralModes.layout(read(text)));
+        assertTrue(e.getMessage().startsWith("disturbance.frequency: one forcing frequency with absorbers.arrangement"
+                + " \"one-per-mode\" is not allowed; a band of forcing frequencies"), e.getMessage());
+    }
+
     /** A reader of format 6 refuses this file with its plain message; this reader refuses format 8 the same way. */
     @Test
     void aNewerFileIsRefusedPlainly() {
