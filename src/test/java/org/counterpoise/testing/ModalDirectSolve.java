@@ -30,6 +30,31 @@ public final class ModalDirectSolve {
      */
     public static Complex[] solve(List<Mode> modes, List<PointAbsorber> absorbers, String forcePoint,
             String responsePoint, double w) {
+        FieldVector<Complex> u = coordinates(modes, absorbers, forcePoint, w);
+        Complex[] out = new Complex[1 + absorbers.size()];
+        out[0] = displacement(modes, u, responsePoint);
+        for (int j = 0; j < absorbers.size(); j++) {
+            out[1 + j] = u.getEntry(modes.size() + j).subtract(displacement(modes, u, absorbers.get(j).point()));
+        }
+        return out;
+    }
+
+    /**
+     * @return each mode's part phi_r(p) q_r of the displacement at responsePoint per unit force at
+     *     forcePoint, at angular frequency w (SI)
+     */
+    public static Complex[] modeParts(List<Mode> modes, List<PointAbsorber> absorbers, String forcePoint,
+            String responsePoint, double w) {
+        FieldVector<Complex> u = coordinates(modes, absorbers, forcePoint, w);
+        Complex[] out = new Complex[modes.size()];
+        for (int i = 0; i < modes.size(); i++) {
+            out[i] = u.getEntry(i).multiply(modes.get(i).shapeAt(responsePoint));
+        }
+        return out;
+    }
+
+    private static FieldVector<Complex> coordinates(List<Mode> modes, List<PointAbsorber> absorbers, String forcePoint,
+            double w) {
         int r = modes.size();
         int n = r + absorbers.size();
         FieldMatrix<Complex> z = new Array2DRowFieldMatrix<>(ComplexField.getInstance(), n, n);
@@ -63,13 +88,7 @@ public final class ModalDirectSolve {
         for (int i = 0; i < n; i++) {
             force[i] = i < r ? new Complex(modes.get(i).shapeAt(forcePoint)) : Complex.ZERO;
         }
-        FieldVector<Complex> u = new FieldLUDecomposition<>(z).getSolver().solve(new ArrayFieldVector<>(force));
-        Complex[] out = new Complex[1 + absorbers.size()];
-        out[0] = displacement(modes, u, responsePoint);
-        for (int j = 0; j < absorbers.size(); j++) {
-            out[1 + j] = u.getEntry(r + j).subtract(displacement(modes, u, absorbers.get(j).point()));
-        }
-        return out;
+        return new FieldLUDecomposition<>(z).getSolver().solve(new ArrayFieldVector<>(force));
     }
 
     private static Complex displacement(List<Mode> modes, FieldVector<Complex> u, String point) {

@@ -2,11 +2,14 @@ package org.counterpoise.core.design;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 import java.util.Optional;
 import org.counterpoise.core.model.Structure;
 import org.counterpoise.core.model.Tuning;
 import org.counterpoise.core.robust.MistuningRange;
 import org.counterpoise.core.robust.ToleratedMistuning;
+import org.counterpoise.core.response.ResponsePeak;
+import org.counterpoise.core.system.AbsorberPeak;
 import org.counterpoise.core.system.ModalPeak;
 import org.counterpoise.core.system.ModalSystem;
 import org.counterpoise.core.system.PointAbsorber;
@@ -14,9 +17,15 @@ import org.counterpoise.core.system.PointAbsorber;
 /**
  * Each absorber of a set as a workshop builds it (the sheet's "absorbers to build"):
  * <ul>
- *   <li>its own single design: the absorber of its own mass, tuning and damping alone on the target
- *       mode at the absorbers' point ({@link Designer#ofTuning}), whose strokes, spring force and
- *       clearance size its parts with the same realisation code as any design;</li>
+ *   <li>its own single design: the absorber of its own mass, tuning and damping on the target mode at
+ *       the absorbers' point ({@link Designer#ofTuning}), whose parts are sized with the same
+ *       realisation code as any design, with the strokes, forces and clearance it has WITHIN THE SET
+ *       on the whole structure ({@link AbsorberPeak}: its stroke in the band and from rest to the
+ *       top of the band, its spring's, damper's and total force in the band). Its figures alone on
+ *       the mode would misstate them: in a set each absorber works at its own part of the band and
+ *       the others change the motion of the point; also the largest velocity across its damper within
+ *       the set. A transient run-up stroke (a project with a run-up rate) stays the absorber's alone:
+ *       the set's run-up is not integrated, and the clearance holds it too;</li>
  *   <li>its tolerance within the set: the factors on that absorber's own frequency, the others held,
  *       at which the set's peak over the band at the response point of the whole structure rises by
  *       {@link DesignResult#TOLERANCE_ALLOWANCE} (its spring rate off, its damper kept, as
@@ -30,9 +39,18 @@ import org.counterpoise.core.system.PointAbsorber;
  */
 public record AbsorbersToBuild(SeveralAbsorbers set, List<Built> absorbers) {
 
-    /** Where the tuning of each absorber's own design comes from. */
-    static final String SOURCE = "tuned with the other absorbers of its set for the least peak over the band"
-            + " (docs/several-modes.md)";
+    /**
+     * What the set was tuned for, in words (the source of each absorber's tuning, and the sheet's).
+     *
+     * @param set the set
+     * @return "the least peak over the band", or for a robust set the least worst peak over its ranges
+     */
+    public static String goal(SeveralAbsorbers set) {
+        return set.robust().map(r -> String.format(Locale.ROOT, "the least worst peak over the band with the"
+                + " structure's frequency within +/-%.3g %%%s", 100 * r.structureRange(), r.absorberRange() > 0
+                        ? String.format(Locale.ROOT, " and every absorber's within +/-%.3g %% together",
+                                100 * r.absorberRange()) : "")).orElse("the least peak over the band");
+    }
 
     /** Copies the list. */
     public AbsorbersToBuild {
@@ -46,8 +64,11 @@ public record AbsorbersToBuild(SeveralAbsorbers set, List<Built> absorbers) {
      * @param design its own design: this absorber alone on the target mode, with the tolerance within
      *     the set as its absorber tolerance (what its parts are sized from)
      * @param toleranceInSet the tolerated factors on its own frequency within the set
+     * @param damperVelocity the largest relative velocity across its damper within the set, over the band
+     *     and from rest to the top of the band, m/s (+infinity when unbounded)
      */
-    public record Built(PointAbsorber absorber, DesignResult design, MistuningRange toleranceInSet) {
+    public record Built(PointAbsorber absorber, DesignResult design, MistuningRange toleranceInSet,
+            double damperVelocity) {
     }
 
     /**
@@ -68,9 +89,10 @@ public record AbsorbersToBuild(SeveralAbsorbers set, List<Built> absorbers) {
             // zeta_j = c_j / (2 m_j omega_j): the absorber's own figures on the single-mode structure
             Tuning tuning = new Tuning(a.mass() / structure.effectiveMass(), w / structure.naturalFrequency(),
                     a.damping() / (2 * a.mass() * w));
-            DesignResult own = withTolerances(Designer.ofTuning(study, tuning, SOURCE,
-                    "absorber " + (j + 1) + " of " + set.absorbers().size()), set.structureTolerance(), tolerance);
-            out.add(new Built(a, own, tolerance));
+            DesignResult own = inSet(Designer.ofTuning(study, tuning, "tuned with the other absorbers of its set for "
+                    + goal(set) + " (docs/several-modes.md)",
+                    "absorber " + (j + 1) + " of " + set.absorbers().size()), set, j, tolerance);
+            out.add(new Built(a, own, tolerance, damperVelocity(set, j)));
         }
         return new AbsorbersToBuild(set, out);
     }
@@ -104,14 +126,49 @@ public record AbsorbersToBuild(SeveralAbsorbers set, List<Built> absorbers) {
     }
 
     /**
-     * The absorber's own design with the set's tolerances: the structure's (the set's peak, so its tuning
-     * step keeps its frequency over the range the set holds) and its own frequency's within the set.
+     * The absorber's own design with what it has within the set: the set's structure tolerance (so its
+     * tuning step keeps its frequency over the range the set holds), its own frequency's tolerance within
+     * the set, and its strokes, forces and clearance on the whole structure with the other absorbers.
      */
-    private static DesignResult withTolerances(DesignResult d, MistuningRange structure, MistuningRange tolerance) {
+    private static DesignResult inSet(DesignResult d, SeveralAbsorbers set, int j, MistuningRange tolerance) {
+        AbsorberLayout layout = set.layout();
+        ModalSystem system = ModalSystem.of(layout.structure(), set.absorbers());
+        double low = set.band().low();
+        double high = set.band().high();
+        ResponsePeak strokeInBand = peak(system, layout, set, j, AbsorberPeak.Quantity.STROKE, low, high);
+        ResponsePeak strokeRunUp = peak(system, layout, set, j, AbsorberPeak.Quantity.STROKE, 0.0, high);
+        double clearance = d.study().strokeMargin() * (strokeRunUp.unbounded() ? strokeInBand.value()
+                : Math.max(strokeRunUp.value(), strokeInBand.value()));
+        RunUpStroke runUp = d.runUpStroke().basis() == RunUpStroke.Basis.TRANSIENT ? d.runUpStroke()
+                : new RunUpStroke(strokeRunUp, d.runUpStroke().basis());
+        if (runUp.basis() == RunUpStroke.Basis.TRANSIENT && !runUp.peak().unbounded()) {
+            // the transient run-up stroke is the absorber's alone (the set's run-up is not integrated); the
+            // spring and the stroke check use it, so the clearance must hold it too
+            clearance = Math.max(clearance, d.study().strokeMargin() * runUp.peak().value());
+        }
         return new DesignResult(d.study(), d.methodSource(), d.methodNote(), d.tuning(), d.absorber(),
                 d.staticDeflection(), d.responseBefore(), d.responseAfter(), d.motionBefore(), d.motionAfter(),
-                d.strokeInBand(), d.strokeRunUp(), d.clearance(), d.springForce(), d.damperForce(), d.absorberForce(),
-                d.coupledNaturalFrequencies(), d.stiffnessDetuning(), d.massDetuning(), structure,
-                tolerance, d.warnings(), d.activeConstraint(), d.runUpStroke(), d.acceptance(), d.afterWorstCase());
+                strokeInBand, strokeRunUp, clearance,
+                peak(system, layout, set, j, AbsorberPeak.Quantity.SPRING_FORCE, low, high),
+                peak(system, layout, set, j, AbsorberPeak.Quantity.DAMPER_FORCE, low, high),
+                peak(system, layout, set, j, AbsorberPeak.Quantity.ABSORBER_FORCE, low, high),
+                d.coupledNaturalFrequencies(), d.stiffnessDetuning(), d.massDetuning(), set.structureTolerance(),
+                tolerance, d.warnings(), d.activeConstraint(), runUp, d.acceptance(), d.afterWorstCase());
+    }
+
+    /** The largest relative velocity across absorber j's damper within the set, band and run-up, m/s. */
+    private static double damperVelocity(SeveralAbsorbers set, int j) {
+        AbsorberLayout layout = set.layout();
+        ModalSystem system = ModalSystem.of(layout.structure(), set.absorbers());
+        double inBand = peak(system, layout, set, j, AbsorberPeak.Quantity.VELOCITY, set.band().low(),
+                set.band().high()).value();
+        double fromRest = peak(system, layout, set, j, AbsorberPeak.Quantity.VELOCITY, 0.0, set.band().high()).value();
+        return Double.isFinite(fromRest) ? Math.max(inBand, fromRest) : inBand;
+    }
+
+    private static ResponsePeak peak(ModalSystem system, AbsorberLayout layout, SeveralAbsorbers set, int j,
+            AbsorberPeak.Quantity quantity, double low, double high) {
+        AbsorberPeak p = AbsorberPeak.over(system, layout.excitationPoint(), j, quantity, low, high);
+        return new ResponsePeak(p.frequency(), p.unbounded() ? Double.POSITIVE_INFINITY : set.forceAmplitude() * p.value());
     }
 }

@@ -53,7 +53,7 @@ final class JointAbsorbersDesigner {
         int r = layout.target(band);
         return new SeveralAbsorbers(layout, r, layout.effectiveMass(band), band, force, absorbers, bare,
                 force * peak(after, layout, band), modes, Optional.empty(), result.certificate().certified(),
-                SeveralAbsorbersDesigner.structureTolerance(layout, r, absorbers, band, force, bare),
+                SeveralAbsorbersDesigner.structureTolerance(layout, r, absorbers, band, force, bare), Optional.empty(),
                 Optional.of(new SeveralAbsorbers.Sequential(inSi(result.sequentialDesign(), joint.points()),
                         force * result.sequentialPeak())));
     }

@@ -2,11 +2,14 @@ package org.counterpoise.core.design;
 
 import java.util.List;
 import java.util.Optional;
+import java.util.function.DoubleFunction;
 import java.util.function.DoubleUnaryOperator;
+import org.apache.commons.math3.complex.Complex;
 import org.counterpoise.core.model.FrequencyBand;
 import org.counterpoise.core.robust.MistuningRange;
 import org.counterpoise.core.system.AbsorberSensitivity;
 import org.counterpoise.core.system.ModalSystem;
+import org.counterpoise.core.system.ModeContributions;
 import org.counterpoise.core.system.PointAbsorber;
 
 /**
@@ -24,8 +27,9 @@ import org.counterpoise.core.system.PointAbsorber;
  * @param peakAfter the peak over the band with the absorbers
  * @param modes each mode's peak near its own frequency, before and after (spillover), in the
  *     structure's order
- * @param single one absorber of the same total mass, least peak over the band on the target mode,
- *     and its peak on the whole structure; empty for one absorber
+ * @param single one absorber of the same total mass, least peak over the band on the target mode
+ *     (least worst case over the ranges when the set is, {@code robust}), and its peak on the whole
+ *     structure; empty for one absorber
  * @param structureTolerance the factors on the target mode's natural frequency (its stiffness by the
  *     square, its mass, damping and shape kept) within which the peak over the band stays within
  *     {@link DesignResult#TOLERANCE_ALLOWANCE} of {@code peakAfter} (searched to
@@ -33,13 +37,15 @@ import org.counterpoise.core.system.PointAbsorber;
  * @param certified true when the optimum of the absorbers' tunings is certified (docs/several-modes.md;
  *     true for one absorber, designed by the study's own method); when false, {@code absorbers} is the
  *     best design seen
+ * @param robust for several absorbers designed by {@code robust-worst-case}: the ranges and the
+ *     figures of this set, the least-peak set and one absorber over them; empty otherwise
  * @param joint with one absorber per mode ({@link AbsorberLayout#joint}): the sequential design beside
  *     the joint one; else empty
  */
 public record SeveralAbsorbers(AbsorberLayout layout, int targetMode, double effectiveMass, FrequencyBand band,
         double forceAmplitude, List<PointAbsorber> absorbers, double peakBefore, double peakAfter,
         List<ModePeak> modes, Optional<SingleAbsorber> single, boolean certified, MistuningRange structureTolerance,
-        Optional<Sequential> joint) {
+        Optional<RobustSet> robust, Optional<Sequential> joint) {
 
     /** Copies the lists. */
     public SeveralAbsorbers {
@@ -62,12 +68,14 @@ public record SeveralAbsorbers(AbsorberLayout layout, int targetMode, double eff
      * @param single one absorber of the same total mass, or empty
      * @param certified true when certified
      * @param structureTolerance the tolerance to the target mode's frequency
+     * @param robust the robust set's figures, or empty
      */
     public SeveralAbsorbers(AbsorberLayout layout, int targetMode, double effectiveMass, FrequencyBand band,
             double forceAmplitude, List<PointAbsorber> absorbers, double peakBefore, double peakAfter,
-            List<ModePeak> modes, Optional<SingleAbsorber> single, boolean certified, MistuningRange structureTolerance) {
+            List<ModePeak> modes, Optional<SingleAbsorber> single, boolean certified, MistuningRange structureTolerance,
+            Optional<RobustSet> robust) {
         this(layout, targetMode, effectiveMass, band, forceAmplitude, absorbers, peakBefore, peakAfter, modes, single,
-                certified, structureTolerance, Optional.empty());
+                certified, structureTolerance, robust, Optional.empty());
     }
 
     /**
@@ -111,6 +119,34 @@ public record SeveralAbsorbers(AbsorberLayout layout, int targetMode, double eff
     }
 
     /**
+     * The set designed for the least worst-case peak (method {@code robust-worst-case}) and what it
+     * is compared with, each on the whole structure over the same ranges.
+     *
+     * @param structureRange the target mode's natural frequency may be off by +/- this fraction
+     * @param absorberRange every absorber's natural frequency may be off by +/- this fraction, all
+     *     by the same factor (one spring batch)
+     * @param dampingFloor no absorber's damping ratio is below this
+     * @param set this set (the absorbers above)
+     * @param leastPeakSet the same absorbers tuned for the least nominal peak
+     * @param single one absorber of the same total mass, designed for the least worst case too (the
+     *     {@link SeveralAbsorbers#single} absorber)
+     */
+    public record RobustSet(double structureRange, double absorberRange, double dampingFloor, Figures set,
+            Figures leastPeakSet, Figures single) {
+    }
+
+    /**
+     * A design's figures over the ranges, on the whole structure.
+     *
+     * @param nominalPeak the peak displacement over the band, structure and absorbers as designed, m
+     * @param worstPeak the largest peak over the band and the ranges, m
+     * @param structureTolerance how far the target mode's frequency may be off, as
+     *     {@link SeveralAbsorbers#structureTolerance}
+     */
+    public record Figures(double nominalPeak, double worstPeak, MistuningRange structureTolerance) {
+    }
+
+    /**
      * The displacement amplitude at the response point per the force at the excitation point, of the
      * whole structure (every mode), from its factored form, each modal and absorber term evaluated on its
      * own ({@link AbsorberSensitivity#value}; the expanded transfer function of {@link ModalSystem} loses
@@ -120,13 +156,45 @@ public record SeveralAbsorbers(AbsorberLayout layout, int targetMode, double eff
      * @return the amplitude, m, at an angular frequency, rad/s
      */
     public DoubleUnaryOperator response(boolean withAbsorbers) {
+        return response(withAbsorbers, layout.responsePoint());
+    }
+
+    /**
+     * The displacement amplitude at a named point of the structure under the design's force.
+     *
+     * @param withAbsorbers true with the absorbers, false the bare structure
+     * @param point a named point of the structure
+     * @return the amplitude, m, at an angular frequency, rad/s
+     */
+    public DoubleUnaryOperator response(boolean withAbsorbers, String point) {
         ModalSystem with = ModalSystem.of(layout.structure(), absorbers);
         ModalSystem system = withAbsorbers ? with : with.bare();
         String force = layout.excitationPoint();
-        String at = layout.responsePoint();
-        double scale = system.responseScale(force, forceAmplitude, at);
+        system.structure().requirePoint(point);
+        double scale = system.responseScale(force, forceAmplitude, point);
         double reference = system.referenceFrequency();
-        return omega -> scale * AbsorberSensitivity.value(system, force, at, omega / reference).abs();
+        return omega -> scale * AbsorberSensitivity.value(system, force, point, omega / reference).abs();
+    }
+
+    /**
+     * Each mode's part of the displacement at a named point with the absorbers on
+     * ({@link ModeContributions}): which mode a peak belongs to, and what the absorbers left of each.
+     *
+     * @param point a named point of the structure
+     * @return the amplitudes of phi_r(p) q_r, m, one per mode, at an angular frequency, rad/s
+     */
+    public DoubleFunction<double[]> modeParts(String point) {
+        ModalSystem system = ModalSystem.of(layout.structure(), absorbers);
+        String force = layout.excitationPoint();
+        system.structure().requirePoint(point);
+        return omega -> {
+            Complex[] parts = ModeContributions.at(system, force, point, omega);
+            double[] out = new double[parts.length];
+            for (int r = 0; r < parts.length; r++) {
+                out[r] = forceAmplitude * parts[r].abs();
+            }
+            return out;
+        };
     }
 
     /** @return the total mass of the absorbers, kg */

@@ -14,9 +14,14 @@ import org.counterpoise.core.optim.AbsorberSetOptimiser;
 import org.counterpoise.core.optim.AbsorberSetOptimum;
 import org.counterpoise.core.optim.AbsorberSetProblem;
 import org.counterpoise.core.optim.AbsorberSetTuning;
+import org.counterpoise.core.optim.RobustSetOptimiser;
+import org.counterpoise.core.optim.RobustSetOptimum;
+import org.counterpoise.core.optim.RobustSetProblem;
 import org.counterpoise.core.response.ResponseKind;
 import org.counterpoise.core.robust.MistuningRange;
+import org.counterpoise.core.robust.ToleranceRanges;
 import org.counterpoise.core.robust.ToleratedMistuning;
+import org.counterpoise.core.robust.WorstCase;
 import org.counterpoise.core.system.Mode;
 import org.counterpoise.core.system.ModalPeak;
 import org.counterpoise.core.system.ModalSystem;
@@ -31,7 +36,10 @@ import org.counterpoise.core.system.Spillover;
  *       study's single-mode structure;</li>
  *   <li>one absorber: the study's own design (any method); n absorbers: the exact least peak of n
  *       absorbers of equal mass on that mode over the band ({@link AbsorberSetOptimiser}: uniform spread
- *       or individual tuning), with mu = total mass / (m_r / phi_r(a)^2) and the band in ratios
+ *       or individual tuning), or with the method {@code robust-worst-case} the least worst peak over
+ *       the project's structure and absorber frequency ranges ({@link RobustSetOptimiser}, damping
+ *       ratios at least {@link Designer#PRACTICAL_DAMPING_RATIO}; the one absorber compared is then
+ *       designed the same way), with mu = total mass / (m_r / phi_r(a)^2) and the band in ratios
  *       g = omega / omega_r; the non-dimensional tunings go back to SI as omega_j = f_j omega_r,
  *       k_j = m_j omega_j^2, c_j = 2 zeta_j m_j omega_j;</li>
  *   <li>the absorbers are put on the whole structure ({@link ModalSystem}) and its exact response is
@@ -73,6 +81,7 @@ public final class SeveralAbsorbersDesigner {
         Absorber total = design.absorber();
         List<PointAbsorber> absorbers;
         Optional<PointAbsorber> single = Optional.empty();
+        List<PointAbsorber> leastPeakSet = List.of();
         boolean certified = true;
         if (layout.count() == 1) {
             absorbers = List.of(new PointAbsorber(layout.absorberPoint(), total.mass(), total.stiffness(), total.damping()));
@@ -83,12 +92,23 @@ public final class SeveralAbsorbersDesigner {
             }
             AbsorberSetProblem problem = new AbsorberSetProblem(layout.count(), total.mass() / effectiveMass,
                     mode.dampingRatio(), band.low() / wr, band.high() / wr, layout.tuning());
-            AbsorberSetOptimum set = AbsorberSetOptimiser.optimise(problem);
-            absorbers = inSi(set.design(), effectiveMass, wr, layout.absorberPoint());
-            certified = set.certificate().certified();
-            AbsorberSetOptimum one = AbsorberSetOptimiser.optimise(new AbsorberSetProblem(1, problem.massRatio(),
-                    problem.structureDamping(), problem.bandLow(), problem.bandHigh(), AbsorberSetTuning.UNIFORM));
-            single = Optional.of(inSi(one.design(), effectiveMass, wr, layout.absorberPoint()).get(0));
+            AbsorberSetProblem oneProblem = new AbsorberSetProblem(1, problem.massRatio(), problem.structureDamping(),
+                    problem.bandLow(), problem.bandHigh(), AbsorberSetTuning.UNIFORM);
+            if (study.method() == DesignMethod.ROBUST_WORST_CASE) {
+                ToleranceRanges ranges = study.robustness().ranges();
+                RobustSetOptimum set = RobustSetOptimiser.optimise(robust(problem, ranges));
+                absorbers = inSi(set.design(), effectiveMass, wr, layout.absorberPoint());
+                leastPeakSet = inSi(set.leastPeak().design(), effectiveMass, wr, layout.absorberPoint());
+                certified = set.certified();
+                RobustSetOptimum one = RobustSetOptimiser.optimise(robust(oneProblem, ranges));
+                single = Optional.of(inSi(one.design(), effectiveMass, wr, layout.absorberPoint()).get(0));
+            } else {
+                AbsorberSetOptimum set = AbsorberSetOptimiser.optimise(problem);
+                absorbers = inSi(set.design(), effectiveMass, wr, layout.absorberPoint());
+                certified = set.certificate().certified();
+                AbsorberSetOptimum one = AbsorberSetOptimiser.optimise(oneProblem);
+                single = Optional.of(inSi(one.design(), effectiveMass, wr, layout.absorberPoint()).get(0));
+            }
         }
         double force = excitation.amplitude();
         ModalSystem after = ModalSystem.of(layout.structure(), absorbers);
@@ -100,9 +120,52 @@ public final class SeveralAbsorbersDesigner {
         Optional<SeveralAbsorbers.SingleAbsorber> compared = single.map(a -> new SeveralAbsorbers.SingleAbsorber(a,
                 force * peak(ModalSystem.of(layout.structure(), List.of(a)), layout, band),
                 structureTolerance(layout, r, List.of(a), band, force, bare)));
-        return new SeveralAbsorbers(layout, r, effectiveMass, band, force, absorbers, bare,
-                force * peak(after, layout, band), modes, compared, certified,
-                structureTolerance(layout, r, absorbers, band, force, bare));
+        double peakAfter = force * peak(after, layout, band);
+        MistuningRange tolerance = structureTolerance(layout, r, absorbers, band, force, bare);
+        Optional<SeveralAbsorbers.RobustSet> robust = Optional.empty();
+        if (!leastPeakSet.isEmpty()) {
+            ToleranceRanges ranges = study.robustness().ranges();
+            SeveralAbsorbers.SingleAbsorber one = compared.orElseThrow();
+            robust = Optional.of(new SeveralAbsorbers.RobustSet(ranges.structure(), ranges.absorber(),
+                    Designer.PRACTICAL_DAMPING_RATIO,
+                    new SeveralAbsorbers.Figures(peakAfter, worstPeak(layout, r, absorbers, band, force, ranges), tolerance),
+                    figures(layout, r, leastPeakSet, band, force, bare, ranges),
+                    new SeveralAbsorbers.Figures(one.peak(), worstPeak(layout, r, List.of(one.absorber()), band, force,
+                            ranges), one.structureTolerance())));
+        }
+        return new SeveralAbsorbers(layout, r, effectiveMass, band, force, absorbers, bare, peakAfter, modes, compared,
+                certified, tolerance, robust);
+    }
+
+    /** The robust problem of the set on the target mode: the project's two frequency ranges, the practical damping floor. */
+    private static RobustSetProblem robust(AbsorberSetProblem problem, ToleranceRanges ranges) {
+        return new RobustSetProblem(problem, ranges.structure(), ranges.absorber(), Designer.PRACTICAL_DAMPING_RATIO);
+    }
+
+    private static SeveralAbsorbers.Figures figures(AbsorberLayout layout, int mode, List<PointAbsorber> absorbers,
+            FrequencyBand band, double force, double bare, ToleranceRanges ranges) {
+        return new SeveralAbsorbers.Figures(force * peak(ModalSystem.of(layout.structure(), absorbers), layout, band),
+                worstPeak(layout, mode, absorbers, band, force, ranges),
+                structureTolerance(layout, mode, absorbers, band, force, bare));
+    }
+
+    /**
+     * The worst peak over the band of the whole structure with the target mode's natural frequency
+     * anywhere in its range (stiffness by the square; mass, damping and shape kept) and every
+     * absorber's natural frequency off by one common factor in its range (spring rates by the
+     * square, masses and dampers kept): the search of {@link WorstCase#over}.
+     */
+    private static double worstPeak(AbsorberLayout layout, int mode, List<PointAbsorber> absorbers, FrequencyBand band,
+            double force, ToleranceRanges ranges) {
+        double wr = layout.structure().modes().get(mode).naturalFrequency();
+        return WorstCase.over((s, a) -> {
+            List<PointAbsorber> built = new ArrayList<>();
+            for (PointAbsorber b : absorbers) {
+                built.add(a == 1.0 ? b : new PointAbsorber(b.point(), b.mass(), b.stiffness() * a * a, b.damping()));
+            }
+            return force * peak(ModalSystem.of(s == 1.0 ? layout.structure()
+                    : layout.structure().withFrequency(mode, s * wr), built), layout, band);
+        }, ranges.structure(), ranges.absorber()).peak();
     }
 
     /**

@@ -30,7 +30,7 @@ final class AbsorberSetCheck {
         for (double[] m : v.maxima(p)) {
             double value = Math.exp(m[2] / 2);
             if (value >= peak * (1 - ACTIVE)) {
-                gradients.add(v.gradient(p, m[0]));
+                gradients.add(v.gradient(p, MinimaxVariables.scenario(m), m[0]));
                 largest = Math.max(largest, value);
                 smallest = Math.min(smallest, value);
             }

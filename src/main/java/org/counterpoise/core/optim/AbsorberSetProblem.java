@@ -88,12 +88,24 @@ public record AbsorberSetProblem(int count, double massRatio, double structureDa
      * @return the structure (omega1 = 1, m1 = 1) with them, on the scales omega_ref = 1, k_ref = 1
      */
     public ModalSystem system(AbsorberSetDesign design) {
+        return system(design, 1.0);
+    }
+
+    /**
+     * @param design the absorbers
+     * @param structureFactor the structure's natural frequency over nominal (stiffness by its square;
+     *     modal mass and damping ratio kept)
+     * @return the structure so varied with them, on the nominal scales omega_ref = 1, k_ref = 1
+     */
+    ModalSystem system(AbsorberSetDesign design, double structureFactor) {
         List<PointAbsorber> absorbers = new ArrayList<>();
         for (int j = 0; j < design.count(); j++) {
             absorbers.add(PointAbsorber.tuned(POINT, design.massRatios().get(j), design.tuningRatios().get(j),
                     design.dampingRatios().get(j)));
         }
-        return ModalSystem.of(ModalStructure.singleMode(POINT, 1.0, structureDamping, 1.0), absorbers);
+        // the nominal scales whatever the factor (ModalSystem.of would scale by the varied mode)
+        return new ModalSystem(ModalStructure.singleMode(POINT, structureFactor, structureDamping, 1.0), absorbers,
+                1.0, 1.0);
     }
 
     /**

@@ -32,9 +32,20 @@ final class AbsorberSetScan {
      * @return {p..., peak} for every scan point, lowest peak first
      */
     static List<double[]> scan(AbsorberSetVariables v, EvaluationCounter counter) {
+        return scan(v, v, counter);
+    }
+
+    /**
+     * @param v the variables (the layout of the points)
+     * @param judge what each point's peak is taken on, and whose box the scan covers (the same
+     *     variables, or a robust problem's several scenarios above a damping floor)
+     * @param counter counts transfer functions built
+     * @return {p..., peak} for every scan point, lowest peak first
+     */
+    static List<double[]> scan(AbsorberSetVariables v, MinimaxVariables judge, EvaluationCounter counter) {
         List<double[]> points = new ArrayList<>();
-        double[] lo = v.lower();
-        double[] hi = v.upper();
+        double[] lo = judge.lower();
+        double[] hi = judge.upper();
         if (v.problem().tuning() == AbsorberSetTuning.UNIFORM) {
             double[] spreads = v.problem().count() == 1 ? new double[] {0.0} : SPREADS.clone();
             for (int i = 0; i < spreads.length; i++) {
@@ -50,9 +61,9 @@ final class AbsorberSetScan {
                 }
             }
         } else {
-            points.addAll(random(v));
+            points.addAll(random(judge));
         }
-        return evaluate(v, points, counter);
+        return evaluate(judge, points, counter);
     }
 
     /**

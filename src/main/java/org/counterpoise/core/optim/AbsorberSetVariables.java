@@ -14,16 +14,36 @@ import org.counterpoise.core.system.AbsorberSensitivity;
  *   <li>individual: p = (ln f_1 .. ln f_n, ln zeta_1 .. ln zeta_n).</li>
  * </ul>
  * Logarithms keep the variables dimensionless and of order one, and the damping above zero.
+ *
+ * <p>The point may be judged on a build off nominal (a scenario of {@link RobustSetVariables}): the
+ * structure's natural frequency times a factor sigma (its stiffness by sigma^2; modal mass and
+ * damping ratio kept; the response still per F / k1 of the nominal structure, so a stiffer
+ * structure's smaller deflection counts) and every absorber's natural frequency times a common
+ * factor alpha (one spring batch: spring rates by alpha^2, masses and dampers kept, so each damping
+ * ratio becomes zeta_j / alpha). The variables stay those of the design as drawn.
  */
 final class AbsorberSetVariables implements MinimaxVariables {
     private final AbsorberSetProblem problem;
     private final int n;
     private final boolean uniform;
+    private final double structureFactor;
+    private final double absorberFactor;
 
     AbsorberSetVariables(AbsorberSetProblem problem) {
+        this(problem, 1.0, 1.0);
+    }
+
+    /**
+     * @param problem the problem
+     * @param structureFactor sigma, the structure's natural frequency over nominal
+     * @param absorberFactor alpha, every absorber's natural frequency over nominal
+     */
+    AbsorberSetVariables(AbsorberSetProblem problem, double structureFactor, double absorberFactor) {
         this.problem = problem;
         this.n = problem.count();
         this.uniform = problem.tuning() == AbsorberSetTuning.UNIFORM;
+        this.structureFactor = structureFactor;
+        this.absorberFactor = absorberFactor;
     }
 
     AbsorberSetProblem problem() {
@@ -59,7 +79,8 @@ final class AbsorberSetVariables implements MinimaxVariables {
         return uniform && n > 1 && k == 1;
     }
 
-    private boolean isDamping(int k) {
+    /** @return true when variable k is a (log) damping ratio */
+    boolean isDamping(int k) {
         return uniform ? k == dimension() - 1 : k >= n;
     }
 
@@ -113,9 +134,27 @@ final class AbsorberSetVariables implements MinimaxVariables {
         return p;
     }
 
+    /**
+     * @param d the design as drawn
+     * @return the absorbers as built in this scenario (tunings times alpha, damping ratios over alpha)
+     */
+    AbsorberSetDesign built(AbsorberSetDesign d) {
+        if (absorberFactor == 1.0) {
+            return d;
+        }
+        double[] f = new double[n];
+        double[] z = new double[n];
+        for (int j = 0; j < n; j++) {
+            f[j] = d.tuningRatios().get(j) * absorberFactor;
+            z[j] = d.dampingRatios().get(j) / absorberFactor;
+        }
+        return problem.design(f, z);
+    }
+
     @Override
     public TransferFunction transferFunction(double[] p) {
-        return problem.transferFunction(design(p));
+        return problem.system(built(design(p)), structureFactor).transferFunction(AbsorberSetProblem.POINT,
+                AbsorberSetProblem.POINT);
     }
 
     /**
@@ -125,8 +164,10 @@ final class AbsorberSetVariables implements MinimaxVariables {
      */
     @Override
     public double[] gradient(double[] p, double x) {
-        AbsorberSetDesign d = design(p);
-        double[][] g = AbsorberSensitivity.gradient(problem.system(d), AbsorberSetProblem.POINT,
+        // built: d ln f_j (as built) = d ln f_j (as drawn), and d ln zeta_j likewise, so the chain
+        // rule only takes each damping ratio as built
+        AbsorberSetDesign d = built(design(p));
+        double[][] g = AbsorberSensitivity.gradient(problem.system(d, structureFactor), AbsorberSetProblem.POINT,
                 AbsorberSetProblem.POINT, Math.sqrt(x));
         double[] out = new double[dimension()];
         for (int j = 0; j < n; j++) {
@@ -147,7 +188,7 @@ final class AbsorberSetVariables implements MinimaxVariables {
 
     @Override
     public DoubleUnaryOperator logMagnitudeSquared(double[] p) {
-        AbsorberSetDesign d = design(p);
+        AbsorberSetDesign d = built(design(p));
         double[] f = tunings(d);
         double[] z = dampings(d);
         double zeta1 = problem.structureDamping();
@@ -165,7 +206,7 @@ final class AbsorberSetVariables implements MinimaxVariables {
     }
 
     /**
-     * ln|H|^2 at s = i g, x = g^2, of H = 1 / (s^2 + 2 zeta1 s + 1 + sum_j mu_j s^2 K_j / (s^2 + K_j)),
+     * ln|H|^2 at s = i g, x = g^2, of H = 1 / (s^2 + 2 zeta1 sigma s + sigma^2 + sum_j mu_j s^2 K_j / (s^2 + K_j)),
      * K_j = f_j^2 + 2 zeta_j f_j s (the factored form of {@code ModalSystem}'s H for one mode,
      * {@link AbsorberSensitivity#value}, in primitive complex arithmetic: each term on its own, no
      * expanded polynomial).
@@ -173,8 +214,9 @@ final class AbsorberSetVariables implements MinimaxVariables {
     private double logMagnitudeSquared(double[] f, double[] zeta, double x, double zeta1) {
         double g = Math.sqrt(x);
         double mu = problem.massRatio() / problem.count();
-        double re = 1 - x;
-        double im = 2 * zeta1 * g;
+        double sigma = structureFactor;
+        double re = sigma * sigma - x;
+        double im = 2 * zeta1 * sigma * g;
         for (int j = 0; j < f.length; j++) {
             double kr = f[j] * f[j];
             double ki = 2 * zeta[j] * f[j] * g;

@@ -79,7 +79,7 @@ final class MinimaxKkt {
         int k = active.length;
         double[][] g = new double[k][];
         for (int i = 0; i < k; i++) {
-            g[i] = freePart(v.gradient(base, active[i][0]));
+            g[i] = freePart(v.gradient(base, MinimaxVariables.scenario(active[i]), active[i][0]));
         }
         double[] lambda = SimplexLeastNorm.weights(g);
         List<Double> u = new ArrayList<>();
@@ -183,17 +183,18 @@ final class MinimaxKkt {
             if (!(x >= 0)) {
                 return null;
             }
-            double value = v.logMagnitudeSquared(p, x);
+            int scenario = MinimaxVariables.scenario(active[i]);
+            double value = v.logMagnitudeSquared(p, scenario, x);
             if (!Double.isFinite(value)) {
                 return null;
             }
             if (active[i][1] > 0) {
-                out[e++] = v.slope(p, x);
+                out[e++] = v.slope(p, scenario, x);
             }
             out[e++] = value - t;
             double lambda = u[lambdaStart + i];
             lambdaSum += lambda;
-            double[] g = freePart(v.gradient(p, x));
+            double[] g = freePart(v.gradient(p, scenario, x));
             for (int j = 0; j < n; j++) {
                 combination[j] += lambda * g[j];
             }

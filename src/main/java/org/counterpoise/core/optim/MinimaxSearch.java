@@ -67,7 +67,7 @@ final class MinimaxSearch {
     }
 
     /** Trust-region linear programming, then Newton on the optimality conditions of the active set. */
-    private static double[] localOptimum(MinimaxVariables v, double[] seed, EvaluationCounter counter) {
+    static double[] localOptimum(MinimaxVariables v, double[] seed, EvaluationCounter counter) {
         double[] p = MinimaxTrustRegion.minimise(v, seed, counter);
         double peak = v.peak(p);
         for (double tolerance : ACTIVE_TOLERANCES) {

@@ -98,7 +98,7 @@ final class MinimaxTrustRegion {
         int d = p.length;
         List<LinearConstraint> constraints = new ArrayList<>();
         for (double[] m : maxima) {
-            double[] g = v.gradient(p, m[0]);
+            double[] g = v.gradient(p, MinimaxVariables.scenario(m), m[0]);
             double[] row = new double[d + 1];
             for (int k = 0; k < d; k++) {
                 if (!Double.isFinite(g[k])) {

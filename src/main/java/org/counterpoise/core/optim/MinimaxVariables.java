@@ -64,6 +64,48 @@ interface MinimaxVariables {
     }
 
     /**
+     * Which transfer function a piece of the peak belongs to: its fourth column when it has one
+     * (variables judged over several scenarios, {@link RobustSetVariables}), else 0 (one transfer
+     * function).
+     *
+     * @param piece {x, kind, ln|H|^2[, scenario]}
+     * @return the scenario's index
+     */
+    static int scenario(double[] piece) {
+        return piece.length > 3 ? (int) piece[3] : 0;
+    }
+
+    /**
+     * @param p the point
+     * @param scenario which transfer function ({@link #scenario(double[])}); one alone by default
+     * @param x squared frequency ratio
+     * @return ln|H|^2 of that scenario from the factored form
+     */
+    default double logMagnitudeSquared(double[] p, int scenario, double x) {
+        return logMagnitudeSquared(p, x);
+    }
+
+    /**
+     * @param p the point
+     * @param scenario which transfer function; one alone by default
+     * @param x squared frequency ratio (&gt; 0)
+     * @return x d/dx ln|H|^2 of that scenario
+     */
+    default double slope(double[] p, int scenario, double x) {
+        return slope(p, x);
+    }
+
+    /**
+     * @param p the point
+     * @param scenario which transfer function; one alone by default
+     * @param x squared frequency ratio of a maximum
+     * @return d ln|H|^2 / dp of that scenario at frozen x
+     */
+    default double[] gradient(double[] p, int scenario, double x) {
+        return gradient(p, x);
+    }
+
+    /**
      * @param p the point
      * @param x squared frequency ratio (&gt; 0)
      * @return x d/dx ln|H|^2 (zero at an interior maximum), by central differences in ln x of the

@@ -73,20 +73,19 @@ public final class DamperSizing {
      * @return the damper (for elastomer loss, at the design's spring rate)
      */
     public static DamperDesign size(DesignResult design, HardwareChoice choice, List<Warning> warnings) {
-        return size(design, choice, BuiltAbsorber.of(design, choice, Optional.empty()), warnings);
+        return size(design, choice, BuiltAbsorber.of(design, choice, Optional.empty()), peakVelocity(design), warnings);
     }
 
     /**
      * The damper of the absorber as built. The strokes, velocity and force are the viscous design's
      * (for an elastomer element they show what its loss must withstand at the design's damping).
      */
-    static DamperDesign size(DesignResult design, HardwareChoice choice, BuiltAbsorber built,
+    static DamperDesign size(DesignResult design, HardwareChoice choice, BuiltAbsorber built, double velocity,
             List<Warning> warnings) {
         double coefficient = coefficient(design, choice, built.springRate());
         double inBand = design.strokeInBand().value();
         ResponsePeak steadyRunUp = design.strokeRunUp();
         double runUp = steadyRunUp.unbounded() ? inBand : steadyRunUp.value();
-        double velocity = peakVelocity(design);
         List<DesignCheck> checks = new ArrayList<>();
         DesignCheck stroke = strokeCheck(design);
         checks.add(stroke);

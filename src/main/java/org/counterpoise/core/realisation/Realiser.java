@@ -28,6 +28,18 @@ public final class Realiser {
      * @return the design turned into hardware
      */
     public static Realisation realise(DesignResult design, HardwareChoice choice) {
+        return realise(design, choice, DamperSizing.peakVelocity(design));
+    }
+
+    /**
+     * @param design the design
+     * @param choice the hardware choices
+     * @param damperVelocity the largest relative velocity across the damper, band and run-up, m/s: the
+     *     design's own ({@link DamperSizing#peakVelocity}), or, for one absorber of a set, the one it has
+     *     within the set
+     * @return the design turned into hardware
+     */
+    public static Realisation realise(DesignResult design, HardwareChoice choice, double damperVelocity) {
         List<Warning> warnings = new ArrayList<>();
         Optional<SpringDesign> spring = Optional.empty();
         Optional<ElastomerDesign> elastomer = Optional.empty();
@@ -39,7 +51,7 @@ public final class Realiser {
             elastomer = Optional.of(element);
         }
         BuiltAbsorber built = BuiltAbsorber.of(design, choice, elastomer);
-        DamperDesign damper = DamperSizing.size(design, choice, built, warnings);
+        DamperDesign damper = DamperSizing.size(design, choice, built, damperVelocity, warnings);
         PartTolerances tolerances = ToleranceSizing.of(design, choice, warnings);
         TrimPlan trim = TrimSizing.of(design, choice);
         List<ProcedureStep> procedure = CommissioningProcedure.of(design, built, tolerances, trim);

@@ -102,7 +102,24 @@ public final class WorstCase {
     /** The worst case over the frequency ranges with the damping coefficient scaled by c. */
     private static Point atDamping(Mistuning m, Absorber absorber, double structureRange, double absorberRange,
             double c) {
-        DoubleBinaryOperator peak = (s, a) -> m.peak(absorber, s, a, c);
+        return over((s, a) -> m.peak(absorber, s, a, c), structureRange, absorberRange, c);
+    }
+
+    /**
+     * The same search over the two frequency factors for any peak function (several absorbers on
+     * one mode share it: the structure's factor and one common factor of the absorbers'): a grid
+     * and Brent refinement of every local maximum, as described above.
+     *
+     * @param peak the peak response over the band at (structure factor, absorber factor)
+     * @param structureRange ds, fraction (0 for none)
+     * @param absorberRange da, fraction (0 for none)
+     * @return the worst case (damping factor 1)
+     */
+    public static Point over(DoubleBinaryOperator peak, double structureRange, double absorberRange) {
+        return over(peak, structureRange, absorberRange, 1.0);
+    }
+
+    private static Point over(DoubleBinaryOperator peak, double structureRange, double absorberRange, double c) {
         if (structureRange == 0 && absorberRange == 0) {
             return new Point(1, 1, c, peak.applyAsDouble(1, 1));
         }

@@ -6,6 +6,9 @@ import java.util.List;
 import java.util.function.DoubleUnaryOperator;
 import org.apache.commons.math3.analysis.solvers.LaguerreSolver;
 import org.apache.commons.math3.complex.Complex;
+import org.apache.commons.math3.linear.Array2DRowRealMatrix;
+import org.apache.commons.math3.linear.EigenDecomposition;
+import org.apache.commons.math3.linear.RealMatrix;
 import org.apache.commons.math3.optim.MaxEval;
 import org.apache.commons.math3.optim.nonlinear.scalar.GoalType;
 import org.apache.commons.math3.optim.univariate.BrentOptimizer;
@@ -69,6 +72,11 @@ public final class FactoredPeaks {
         // The sweep brackets every maximum wider than its spacing (0.6 % in frequency); a pole or a
         // root of R adds a bracket only where the sweep found none, so each maximum is refined once.
         List<double[]> brackets = new ArrayList<>();
+        if (!(highest > 0) && high < Double.POSITIVE_INFINITY && high > 0) {
+            // no pole found at all: sweep the band itself (x = g^2, so its square roots)
+            lowest = Math.sqrt(Math.max(low, 1e-6 * high)) * 2;
+            highest = Math.sqrt(high) / 2;
+        }
         if (highest > 0) {
             double a = Math.log(0.5 * lowest);
             double b = Math.log(2 * highest);
@@ -150,11 +158,47 @@ public final class FactoredPeaks {
      */
     static final int POLE_STEPS = 100_000;
 
-    private static Complex[] poles(double[] denominator) {
+    /**
+     * The roots of the denominator: Laguerre's method, or where it does not converge to the accuracy
+     * asked (clustered poles of four or more light absorbers: a degree-12 denominator in the tests),
+     * the eigenvalues of its companion matrix (Commons Math's eigen-decomposition of a real
+     * non-symmetric matrix; Golub and Van Loan 2013, <i>Matrix Computations</i>, 4th ed., section
+     * 7.4.6): accurate enough for what the poles are used for, the sweep's range and the brackets.
+     * Until 5 Dec 2026 a failure left no poles, so no sweep either, and two maxima could share one
+     * wide bracket of the polynomial route, where Brent's method kept the lower.
+     */
+    static Complex[] poles(double[] denominator) {
         try {
             return new LaguerreSolver(1e-14, 1e-14).solveAllComplex(denominator, 1.0, POLE_STEPS);
         } catch (RuntimeException noConvergence) {
-            return new Complex[0]; // the sweep and the polynomial roots still bracket the maxima
+            return companionEigenvalues(denominator);
+        }
+    }
+
+    private static Complex[] companionEigenvalues(double[] coefficients) {
+        int n = coefficients.length - 1;
+        while (n > 0 && coefficients[n] == 0.0) {
+            n--;
+        }
+        if (n < 1) {
+            return new Complex[0];
+        }
+        RealMatrix companion = new Array2DRowRealMatrix(n, n);
+        for (int i = 1; i < n; i++) {
+            companion.setEntry(i, i - 1, 1.0);
+        }
+        for (int i = 0; i < n; i++) {
+            companion.setEntry(i, n - 1, -coefficients[i] / coefficients[n]);
+        }
+        try {
+            EigenDecomposition eigen = new EigenDecomposition(companion);
+            Complex[] roots = new Complex[n];
+            for (int i = 0; i < n; i++) {
+                roots[i] = new Complex(eigen.getRealEigenvalue(i), eigen.getImagEigenvalue(i));
+            }
+            return roots;
+        } catch (RuntimeException noConvergence) {
+            return new Complex[0]; // the band's sweep and the polynomial roots still bracket the maxima
         }
     }
 }

@@ -1,5 +1,7 @@
 package org.counterpoise.io.chart;
 
+import java.awt.BasicStroke;
+import java.util.function.DoubleFunction;
 import java.util.function.DoubleUnaryOperator;
 import org.counterpoise.core.design.SeveralAbsorbers;
 import org.counterpoise.core.system.Mode;
@@ -13,10 +15,11 @@ import org.knowm.xchart.XYSeries;
 import org.knowm.xchart.style.markers.SeriesMarkers;
 
 /**
- * The response of the whole structure at its response point without and with several absorbers
- * (every mode, the absorbers at their point), on a logarithmic axis, over the band and the modes
- * around it, in the house style of {@link ChartStyle}. The values come from
- * {@link SeveralAbsorbers#response}; nothing is designed here.
+ * The response of the whole structure at a named point without and with several absorbers (every
+ * mode, the absorbers at their point), and each mode's part of it with the absorbers (dashed), on a
+ * logarithmic axis, over the band and the modes around it, in the house style of {@link ChartStyle}.
+ * The values come from {@link SeveralAbsorbers#response} and {@link SeveralAbsorbers#modeParts};
+ * nothing is designed here.
  */
 public final class SeveralAbsorbersCharts {
     /** Points of each curve. */
@@ -25,15 +28,33 @@ public final class SeveralAbsorbersCharts {
     private SeveralAbsorbersCharts() {
     }
 
+    /** Dash patterns of the modes' parts, in turn. */
+    private static final float[][] DASHES = {{6f, 4f}, {2f, 3f}, {9f, 3f, 2f, 3f}, {12f, 5f}};
+
     /**
      * @param set the absorbers and the structure
      * @param units the display units of the vertical axis
      * @param theme colours
      * @param width pixels
      * @param height pixels
-     * @return the chart: displacement before and after against frequency in Hz, the band shaded by its edges
+     * @return the chart at the design's response point
      */
     public static XYChart response(SeveralAbsorbers set, UnitSystem units, ChartTheme theme, int width, int height) {
+        return response(set, set.layout().responsePoint(), units, theme, width, height);
+    }
+
+    /**
+     * @param set the absorbers and the structure
+     * @param point a named point of the structure
+     * @param units the display units of the vertical axis
+     * @param theme colours
+     * @param width pixels
+     * @param height pixels
+     * @return the chart: displacement before and after and each mode's part after, against frequency in
+     *     Hz, the band marked by its edges
+     */
+    public static XYChart response(SeveralAbsorbers set, String point, UnitSystem units, ChartTheme theme, int width,
+            int height) {
         Unit length = DisplayUnits.of(Dimension.LENGTH, units);
         double low = set.band().low();
         double high = set.band().high();
@@ -44,14 +65,17 @@ public final class SeveralAbsorbersCharts {
         low *= 0.7;
         high *= 1.3;
         XYChart c = new XYChartBuilder().width(width).height(height).xAxisTitle("Frequency (Hz)")
-                .yAxisTitle("Displacement at " + set.layout().responsePoint() + " (" + ChartFactory.pretty(
+                .yAxisTitle("Displacement at " + point + " (" + ChartFactory.pretty(
                         length.symbol()) + ")").build();
         ChartStyle.houseStyle(c.getStyler(), theme);
         double[] hz = new double[POINTS + 1];
         double[] before = new double[POINTS + 1];
         double[] after = new double[POINTS + 1];
-        DoubleUnaryOperator bare = set.response(false);
-        DoubleUnaryOperator fitted = set.response(true);
+        DoubleUnaryOperator bare = set.response(false, point);
+        DoubleUnaryOperator fitted = set.response(true, point);
+        int modes = set.layout().structure().size();
+        double[][] parts = new double[modes][POINTS + 1];
+        DoubleFunction<double[]> modeParts = set.modeParts(point);
         double smallest = Double.POSITIVE_INFINITY;
         double largest = 0;
         for (int i = 0; i <= POINTS; i++) {
@@ -59,6 +83,10 @@ public final class SeveralAbsorbersCharts {
             hz[i] = Unit.HERTZ.fromSi(w);
             before[i] = length.fromSi(bare.applyAsDouble(w));
             after[i] = length.fromSi(fitted.applyAsDouble(w));
+            double[] part = modes > 1 ? modeParts.apply(w) : new double[0];
+            for (int r = 0; r < part.length; r++) {
+                parts[r][i] = length.fromSi(part[r]);
+            }
             for (double v : new double[] {before[i], after[i]}) {
                 if (v > 0 && Double.isFinite(v)) {
                     smallest = Math.min(smallest, v);
@@ -72,6 +100,10 @@ public final class SeveralAbsorbersCharts {
         for (int i = 0; i <= POINTS; i++) {
             before[i] = Math.min(Math.max(before[i], smallest), largest);
             after[i] = Math.min(Math.max(after[i], smallest), largest);
+            for (int r = 0; r < modes && modes > 1; r++) {
+                // a part far below the curves is clipped to the axis' floor (drawn along it)
+                parts[r][i] = Math.min(Math.max(parts[r][i], smallest), largest);
+            }
         }
         ChartStyle.logAxis(c.getStyler(), false, smallest / 1.3, largest * 1.3);
         XYSeries b = c.addSeries("without absorbers", hz, before);
@@ -80,6 +112,14 @@ public final class SeveralAbsorbersCharts {
         XYSeries a = c.addSeries("with " + set.absorbers().size() + " absorbers", hz, after);
         a.setLineColor(theme.after());
         a.setMarker(SeriesMarkers.NONE);
+        for (int r = 0; r < modes && modes > 1; r++) {
+            XYSeries m = c.addSeries("mode " + set.layout().modeNames().get(r) + ", its part with absorbers", hz,
+                    parts[r]);
+            m.setLineColor(theme.after());
+            m.setMarker(SeriesMarkers.NONE);
+            m.setLineStyle(new BasicStroke(1.2f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_ROUND, 10f,
+                    DASHES[r % DASHES.length], 0f));
+        }
         double[] edge = {smallest / 1.3, largest * 1.3};
         double[] edges = set.band().isSingle() ? new double[] {set.band().low()}
                 : new double[] {set.band().low(), set.band().high()};

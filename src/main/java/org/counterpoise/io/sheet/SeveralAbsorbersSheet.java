@@ -93,7 +93,7 @@ record SeveralAbsorbersSheet(List<SheetBlock> blocks, List<String> warnings) {
     /** Its hardware, or none when it cannot be sized for this absorber (a sentence on its page says so). */
     private static Optional<Realisation> realisation(AbsorbersToBuild.Built built, HardwareChoice hardware) {
         try {
-            return Optional.of(Realiser.realise(built.design(), hardware));
+            return Optional.of(Realiser.realise(built.design(), hardware, built.damperVelocity()));
         } catch (CoreException unrealisable) {
             return Optional.empty();
         }

@@ -6,6 +6,7 @@ import java.util.Locale;
 import java.util.Optional;
 import java.util.Set;
 import org.counterpoise.core.design.AbsorbersToBuild;
+import org.counterpoise.core.design.RunUpStroke;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.realisation.ProcedureStep;
 import org.counterpoise.core.realisation.ProcedureStepKind;
@@ -89,8 +90,9 @@ public final class AbsorbersToBuildContent {
     public static List<String> sentences(AbsorbersToBuild b) {
         String tuned = b.set().layout().tuning().name().toLowerCase(Locale.ROOT);
         return List.of("Build every absorber of this table: " + b.absorbers().size() + " absorbers of equal mass at "
-                        + b.set().layout().absorberPoint() + ", tuned together (" + tuned + " tuning) for the least peak"
-                        + " over the band at the response point of the whole structure (docs/several-modes.md).",
+                        + b.set().layout().absorberPoint() + ", tuned together (" + tuned + " tuning) on the whole"
+                        + " structure, at its response point, for " + AbsorbersToBuild.goal(b.set())
+                        + " (docs/several-modes.md).",
                 "Own frequency may be off: how far that absorber's own frequency may be from its value, the others as"
                         + " built, before the set's peak over the band rises by "
                         + ValueText.percent(DesignResult.TOLERANCE_ALLOWANCE, 2) + " (its spring rate off, its damper"
@@ -113,10 +115,13 @@ public final class AbsorbersToBuildContent {
         List<String> sentences = new ArrayList<>();
         sentences.add("The parts of absorber " + (j + 1) + " are sized from that absorber's own figures: its mass "
                 + ValueText.inline(DesignContent.quantity(built.absorber().mass(), Dimension.MASS), units)
-                + ", its own frequency and damping as tabled, its strokes and spring force as if it worked alone on the"
-                + " target mode at its point (the clearance is " + ValueText.inline(DesignContent.quantity(
-                        built.design().clearance(), Dimension.LENGTH), units)
-                + "), and the tolerance on its own frequency within the set.");
+                + ", its own frequency and damping as tabled, its strokes, spring force and damper velocity as it"
+                + " works within the set on the whole structure (the clearance is " + ValueText.inline(
+                        DesignContent.quantity(built.design().clearance(), Dimension.LENGTH), units)
+                + "), and the tolerance on its own frequency within the set."
+                + (built.design().runUpStroke().basis() == RunUpStroke.Basis.TRANSIENT
+                        ? " Its run-up stroke is taken as if it worked alone on the target mode (the set's run-up is"
+                                + " not computed), and the clearance holds it." : ""));
         List<ReportSection> sections = new ArrayList<>();
         if (realisation.isEmpty()) {
             sentences.add("Its hardware could not be sized with the project's hardware choices; see the warnings.");

@@ -148,15 +148,17 @@ public final class HardwareContent {
                 row(ReportKey.TRIM_PLATE_MASS, "one trim plate", DesignContent.quantity(t.plateMass(), Dimension.MASS),
                         "", ""),
                 row(ReportKey.TRIM_PLATES, "plates fitted as built / supplied", new Pair(new Count(t.platesFitted()),
-                        new Count(t.platesTotal()), PairKind.SIDE_BY_SIDE), "", "from none to all fitted covers the"
-                                + " range below"),
+                        new Count(t.platesTotal()), PairKind.SIDE_BY_SIDE), "", "all fitted to none fitted reaches"
+                                + " the range below"),
                 row(ReportKey.TRIM_PERCENT_PER_PLATE, "absorber frequency change per plate",
                         new Level(t.percentPerPlate(), 3, "%"), "half the mass change, frequency ~ 1/sqrt(mass)", ""),
                 row(ReportKey.TRIM_PLATES_PER_PERCENT, "plates per percent of frequency",
                         new Quantity(t.platesPerPercent(), Dimension.RATIO, 3), "", ""),
-                row(ReportKey.TRIM_RANGE, "structure frequency range covered", new Pair(DesignContent.quantity(
-                        t.structureFrequencyLow(), Dimension.FREQUENCY), DesignContent.quantity(t.structureFrequencyHigh(),
-                                Dimension.FREQUENCY), PairKind.RANGE), "", ""));
+                row(ReportKey.TRIM_RANGE, "absorber frequencies the plates reach", new Pair(DesignContent.quantity(
+                        t.absorberFrequencyLow(), Dimension.FREQUENCY), DesignContent.quantity(t.absorberFrequencyHigh(),
+                                Dimension.FREQUENCY), PairKind.RANGE), "spring rate fixed, frequency ~ 1/sqrt(mass)",
+                        "sized for the structure's stated frequency range: for a new design if the structure is"
+                                + " measured outside the range this design holds"));
     }
 
     private static List<ReportRow> predicted(List<PredictedPoint> points, Dimension response) {

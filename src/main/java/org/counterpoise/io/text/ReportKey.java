@@ -190,7 +190,7 @@ public enum ReportKey {
     TRIM_PLATES("hardware.trim.plates_fitted", "hardware.trim.plates_total"),
     TRIM_PERCENT_PER_PLATE("hardware.trim.percent_per_plate"),
     TRIM_PLATES_PER_PERCENT("hardware.trim.plates_per_percent"),
-    TRIM_RANGE("hardware.trim.structure_frequency_low_Hz", "hardware.trim.structure_frequency_high_Hz"),
+    TRIM_RANGE("hardware.trim.absorber_frequency_low_Hz", "hardware.trim.absorber_frequency_high_Hz"),
     PROCEDURE_STEP("hardware.procedure[]"),
     STEP_NUMBER("number"),
     STEP_KIND("step"),
@@ -243,6 +243,18 @@ public enum ReportKey {
     SEVERAL_SINGLE_STRUCTURE_TOLERANCE("several_absorbers.single_absorber_tolerated_structure_frequency_factor_low",
             "several_absorbers.single_absorber_tolerated_structure_frequency_factor_high",
             "several_absorbers.single_absorber_tolerated_structure_frequency_basis"),
+    // a set designed by robust-worst-case: what it was designed for and its figures over the ranges
+    // beside the least-peak set and one absorber (one element of "compared" each)
+    SEVERAL_DESIGNED_FOR("several_absorbers.designed_for"),
+    SEVERAL_ROBUST_RANGES("several_absorbers.robust_structure_frequency_range",
+            "several_absorbers.robust_absorber_frequency_range"),
+    SEVERAL_ROBUST_DAMPING_FLOOR("several_absorbers.robust_damping_ratio_floor"),
+    SEVERAL_COMPARED("several_absorbers.compared[]"),
+    ITEM_DESIGN("design"),
+    ITEM_NOMINAL_PEAK("nominal_peak_displacement_m"),
+    ITEM_WORST_PEAK("worst_peak_displacement_m"),
+    ITEM_STRUCTURE_TOLERANCE("tolerated_structure_frequency_factor_low", "tolerated_structure_frequency_factor_high",
+            "tolerated_structure_frequency_basis"),
     SEVERAL_CERTIFIED("several_absorbers.certified"),
     // One absorber per mode, designed jointly (format 7): the absorbers[] elements add their mode and
     // point; the sequential design (each absorber on its own mode alone) beside the joint one.

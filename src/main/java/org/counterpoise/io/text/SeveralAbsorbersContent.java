@@ -16,6 +16,7 @@ import org.counterpoise.io.text.ReportValue.Fields;
 import org.counterpoise.io.text.ReportValue.Flag;
 import org.counterpoise.io.text.ReportValue.Pair;
 import org.counterpoise.io.text.ReportValue.PairKind;
+import org.counterpoise.io.text.ReportValue.Percent;
 import org.counterpoise.io.text.ReportValue.Tolerance;
 import org.counterpoise.io.text.ReportValue.Words;
 
@@ -57,6 +58,12 @@ public final class SeveralAbsorbersContent {
             + " (H-infinity), not for the project's method; the sheet gives each absorber's tolerance on its own"
             + " frequency within the set, and no robust design of the set is made, so check their tuning on site with"
             + " care.";
+    /** A split designed for the least worst case (method robust-worst-case). */
+    static final String ROBUST_SPLIT = "The split absorbers are designed for the least worst peak over the band with"
+            + " the target mode's frequency anywhere in its range and all absorbers' frequencies off together (one"
+            + " spring batch), on the target mode alone; each absorber's own scatter and the damping range are not in"
+            + " that worst case (the sheet gives each absorber's tolerance on its own frequency within the set): check"
+            + " their tuning on site with care.";
     /** An optimum of the split that failed its certificate. */
     static final String NOT_CERTIFIED = "The optimum of the split absorbers' tunings could not be certified"
             + " (docs/several-modes.md): treat their tunings as a good design, not the best.";
@@ -96,7 +103,7 @@ public final class SeveralAbsorbersContent {
         }
         if (d.absorbers().size() > 1) {
             cautions.add(ONE_ABSORBER_SECTIONS);
-            cautions.add(NOMINAL_SPLIT);
+            cautions.add(d.robust().isPresent() ? ROBUST_SPLIT : NOMINAL_SPLIT);
         }
         if (d.layout().structure().size() > 1) {
             cautions.add(TARGET_MODE_SECTIONS);
@@ -167,7 +174,9 @@ public final class SeveralAbsorbersContent {
         }
         d.single().ifPresent(s -> {
             rows.add(row(ReportKey.SEVERAL_SINGLE_PEAK, "one absorber of the same total mass: peak",
-                    DesignContent.quantity(s.peak(), Dimension.LENGTH), "least peak over the band on the target mode"));
+                    DesignContent.quantity(s.peak(), Dimension.LENGTH), d.robust().isPresent()
+                            ? "least worst peak over the ranges on the target mode (as the split)"
+                            : "least peak over the band on the target mode"));
             rows.add(row(ReportKey.SEVERAL_GAIN, "gain of the split (one absorber's peak / this peak)",
                     DesignContent.quantity(d.gain().orElseThrow(), Dimension.RATIO), ""));
         });
@@ -178,6 +187,7 @@ public final class SeveralAbsorbersContent {
                 new Tolerance(d.structureTolerance(), 1), tolerance));
         d.single().ifPresent(s -> rows.add(row(ReportKey.SEVERAL_SINGLE_STRUCTURE_TOLERANCE,
                 "the same, one absorber of the same total mass", new Tolerance(s.structureTolerance(), 1), tolerance)));
+        d.robust().ifPresent(r -> robustRows(rows, r, targetName));
         rows.add(row(ReportKey.SEVERAL_CERTIFIED, "optimum certified", new Flag(d.certified(),
                 d.certified() ? "yes" : "NO"), n == 1 ? "the design above" : "docs/several-modes.md, the certificate"));
         if (joint) {
@@ -198,6 +208,37 @@ public final class SeveralAbsorbersContent {
                 new Field(ReportKey.ITEM_FREQUENCY, "own frequency", DesignContent.quantity(w, Dimension.FREQUENCY)),
                 new Field(ReportKey.ITEM_DAMPING_RATIO, "damping ratio", DesignContent.quantity(
                         a.damping() / (2 * a.mass() * w), Dimension.RATIO)));
+    }
+
+    /** What a set designed by robust-worst-case was designed for, and its figures beside the others'. */
+    private static void robustRows(List<ReportRow> rows, SeveralAbsorbers.RobustSet r, String targetName) {
+        String source = "exact response of the structure's modes with the absorbers (docs/several-modes.md)";
+        rows.add(row(ReportKey.SEVERAL_DESIGNED_FOR, "split designed for", new Words("the least worst peak over the"
+                + " band (robust-worst-case), on mode " + targetName + " alone", List.of("robust-worst-case")),
+                "docs/several-modes.md, robust design of the set"));
+        rows.add(row(ReportKey.SEVERAL_ROBUST_RANGES, "mode " + targetName + " frequency, all absorbers' frequencies"
+                + " together: within +/-", new Pair(new Percent(r.structureRange(), 2), new Percent(r.absorberRange(), 2),
+                PairKind.SIDE_BY_SIDE), "robustness ranges of the project; the absorbers by one common factor"
+                + " (one spring batch)"));
+        rows.add(row(ReportKey.SEVERAL_ROBUST_DAMPING_FLOOR, "least damping ratio of every absorber",
+                DesignContent.quantity(r.dampingFloor(), Dimension.RATIO), "the practical damping floor"
+                + " (docs/robustness.md)"));
+        rows.add(compared(r.set(), "this set", "robust_set", source));
+        rows.add(compared(r.leastPeakSet(), "the same absorbers tuned for the least nominal peak", "least_peak_set",
+                source));
+        rows.add(compared(r.single(), "one absorber of the same total mass, least worst peak", "one_absorber", source));
+    }
+
+    private static ReportRow compared(SeveralAbsorbers.Figures f, String label, String id, String source) {
+        List<Field> fields = List.of(
+                new Field(ReportKey.ITEM_DESIGN, "", new Words(label, List.of(id))),
+                new Field(ReportKey.ITEM_NOMINAL_PEAK, "nominal peak", DesignContent.quantity(f.nominalPeak(),
+                        Dimension.LENGTH)),
+                new Field(ReportKey.ITEM_WORST_PEAK, "worst peak over the ranges", DesignContent.quantity(f.worstPeak(),
+                        Dimension.LENGTH)),
+                new Field(ReportKey.ITEM_STRUCTURE_TOLERANCE, "mode frequency may be off by",
+                        new Tolerance(f.structureTolerance(), 1)));
+        return row(ReportKey.SEVERAL_COMPARED, label, new Fields("", fields), source);
     }
 
     static ReportRow row(ReportKey key, String label, ReportValue value, String source) {

@@ -44,6 +44,9 @@ final class AbsorberSetRun {
             throw new InvalidInputException("--json", "given with --csv", "choose one output format");
         }
         refuseOtherProblems(o);
+        if (o.structureRange() != null || o.absorberRange() != null) {
+            return RobustSetRun.run(o, out);
+        }
         if (o.onePerMode()) {
             return JointAbsorberRun.run(o, out);
         }
@@ -137,7 +140,7 @@ final class AbsorberSetRun {
     /** Most cases in one run with several absorbers: each takes a few hundred milliseconds. */
     static final int MAX_CASES = 400;
 
-    private static final Map<String, String> FIELDS = Map.of("absorber count", "--absorbers", "mass ratio",
+    static final Map<String, String> FIELDS = Map.of("absorber count", "--absorbers", "mass ratio",
             "--mass-ratio", "structure damping", "--structure-damping", "band", "--band");
 
     /**
@@ -157,7 +160,7 @@ final class AbsorberSetRun {
         return new ModalSystem(structure, absorbers, 1.0, 1.0);
     }
 
-    private static AbsorberSetTuning parseTuning(String text) {
+    static AbsorberSetTuning parseTuning(String text) {
         if (text == null) {
             return AbsorberSetTuning.UNIFORM;
         }

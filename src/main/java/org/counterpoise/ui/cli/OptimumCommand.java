@@ -128,6 +128,16 @@ public final class OptimumCommand implements Callable<Integer> {
                     + " (each absorber designed on its own mode alone)")
     private boolean onePerMode;
 
+    @Option(names = "--structure-range", paramLabel = "S",
+            description = "with --absorbers: design the set for the least worst peak with the structure's natural"
+                    + " frequency anywhere within +/-S (a fraction, 0 to 0.5) of nominal; every damping ratio at least 1 %")
+    private Double structureRange;
+
+    @Option(names = "--absorber-range", paramLabel = "A",
+            description = "with --structure-range: and all absorbers' natural frequencies off together by up to +/-A"
+                    + " (a fraction, 0 to 0.5; one spring batch; default 0)")
+    private Double absorberRange;
+
     @Option(names = "--json", description = "print a JSON array of objects")
     private boolean json;
 
@@ -153,7 +163,7 @@ public final class OptimumCommand implements Callable<Integer> {
             default -> throw new InvalidInputException("--objective", objective, "peak or variance");
         };
         if (absorbers != null || tuning != null || secondMode != null || secondModeMass != null || secondPoint != null
-                || onePerMode) {
+                || onePerMode || structureRange != null || absorberRange != null) {
             return AbsorberSetRun.run(this, spec.commandLine().getOut());
         }
         List<PeakProblem> problems = cases == null ? fromOptions() : fromCases(cases);
@@ -204,14 +214,14 @@ public final class OptimumCommand implements Callable<Integer> {
     Options options() {
         return new Options(massRatio, structureDamping, excitation, response, objective, band, fixedDamping, fixedTuning,
                 strokeLimit, cases, absorbers, tuning, secondMode, secondModeShape, secondModeMass, secondPoint, onePerMode,
-                json, csv);
+                structureRange, absorberRange, json, csv);
     }
 
     /** The options of one run, as typed. */
     record Options(String massRatio, String structureDamping, String excitation, String response, String objective,
             String band, Double fixedDamping, Double fixedTuning, Double strokeLimit, Path cases, Integer absorbers,
             String tuning, Double secondMode, double secondModeShape, Double secondModeMass, String secondPoint,
-            boolean onePerMode, boolean json, boolean csv) {
+            boolean onePerMode, Double structureRange, Double absorberRange, boolean json, boolean csv) {
     }
 
     private static final Map<String, String> OPTIONS = Map.of("mass ratio", "--mass-ratio", "structure damping",

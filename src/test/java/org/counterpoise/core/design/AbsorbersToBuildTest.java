@@ -6,11 +6,14 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.util.List;
 import java.util.Map;
 import java.util.OptionalInt;
+import java.util.function.DoubleUnaryOperator;
 import org.counterpoise.core.model.Excitation;
 import org.counterpoise.core.model.ExcitationKind;
 import org.counterpoise.core.model.FrequencyBand;
 import org.counterpoise.core.model.Structure;
 import org.counterpoise.core.optim.AbsorberSetTuning;
+import org.counterpoise.core.realisation.HardwareChoice;
+import org.counterpoise.core.realisation.Realiser;
 import org.counterpoise.core.response.ResponseKind;
 import org.counterpoise.core.robust.MistuningRange;
 import org.counterpoise.core.system.Mode;
@@ -81,6 +84,41 @@ class AbsorbersToBuildTest {
     @Test
     void theRigsAbsorbersToleranceWithinTheSetMatchesADenseSolve() {
         check(rig());
+    }
+
+    /**
+     * Each absorber's stroke in the band and from rest to the top of the band, and its spring force in
+     * the band, are the ones it has within the set: the dense solve's stroke of that absorber with the
+     * others on the structure, swept and refined, to 1e-7; its clearance is the stroke margin times the
+     * larger stroke. (They differ from the absorber's figures alone on the mode: docs/several-modes.md.)
+     */
+    @Test
+    void eachAbsorbersStrokeAndSpringForceAreItsOwnWithinTheSet() {
+        for (Designed designed : List.of(floor(), rig())) {
+            SeveralAbsorbers set = designed.set();
+            AbsorberLayout l = set.layout();
+            AbsorbersToBuild build = AbsorbersToBuild.of(designed.single(), set);
+            for (int j = 0; j < set.absorbers().size(); j++) {
+                int index = j;
+                PointAbsorber a = set.absorbers().get(j);
+                DesignResult own = build.absorbers().get(j).design();
+                DoubleUnaryOperator stroke = w -> set.forceAmplitude() * ModalDirectSolve.solve(
+                        l.structure().modes(), set.absorbers(), l.excitationPoint(), l.responsePoint(), w)[1 + index].abs();
+                double inBand = DenseSweep.maximum(stroke, set.band().low(), set.band().high(), 20_000);
+                double fromRest = DenseSweep.maximum(stroke, 0.0, set.band().high(), 20_000);
+                double spring = DenseSweep.maximum(w -> a.stiffness() * stroke.applyAsDouble(w), set.band().low(),
+                        set.band().high(), 20_000);
+                assertEquals(inBand, own.strokeInBand().value(), 1e-7 * inBand, "stroke in band, absorber " + j);
+                assertEquals(fromRest, own.strokeRunUp().value(), 1e-7 * fromRest, "stroke from rest, absorber " + j);
+                assertEquals(spring, own.springForce().value(), 1e-7 * spring, "spring force, absorber " + j);
+                assertEquals(1.5 * Math.max(inBand, fromRest), own.clearance(), 1e-7 * own.clearance());
+                // the velocity across its damper: omega times the stroke, band and from rest
+                double velocity = DenseSweep.maximum(w -> w * stroke.applyAsDouble(w), 0.0, set.band().high(), 20_000);
+                assertEquals(velocity, build.absorbers().get(j).damperVelocity(), 1e-7 * velocity, "velocity " + j);
+                assertEquals(build.absorbers().get(j).damperVelocity(), Realiser.realise(own, HardwareChoice.DEFAULT,
+                        build.absorbers().get(j).damperVelocity()).damper().peakVelocity(), 0.0);
+            }
+        }
     }
 
     private static void check(Designed designed) {

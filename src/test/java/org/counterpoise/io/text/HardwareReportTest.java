@@ -144,8 +144,8 @@ class HardwareReportTest {
         assertEquals(5, trim.get("plates_fitted").getAsInt());
         assertEquals(10, trim.get("plates_total").getAsInt());
         assertEquals(0.5, trim.get("percent_per_plate").getAsDouble());
-        assertEquals(r.trim().structureFrequencyHigh() / (2 * Math.PI),
-                trim.get("structure_frequency_high_Hz").getAsDouble(), 1e-12);
+        assertEquals(r.trim().absorberFrequencyHigh() / (2 * Math.PI),
+                trim.get("absorber_frequency_high_Hz").getAsDouble(), 1e-12);
 
         JsonArray predicted = hw.getAsJsonArray("predicted");
         assertEquals(3, predicted.size());

@@ -30,7 +30,7 @@ class JointAbsorbersContentTest {
         assertTrue(found.certified());
         SeveralAbsorbers notFound = new SeveralAbsorbers(found.layout(), found.targetMode(), found.effectiveMass(),
                 found.band(), found.forceAmplitude(), found.absorbers(), found.peakBefore(), found.peakAfter(),
-                found.modes(), found.single(), false, found.structureTolerance(), found.joint());
+                found.modes(), found.single(), false, found.structureTolerance(), found.robust(), found.joint());
         ReportContent content = SeveralAbsorbersContent.with(DesignContent.of(design), notFound);
         ReportRow status = content.row(ReportKey.SEVERAL_STATUS).orElseThrow();
         assertEquals("not found: the best design seen is shown", ValueText.inline(status.value()));

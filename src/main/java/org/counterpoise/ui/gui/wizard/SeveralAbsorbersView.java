@@ -1,8 +1,15 @@
 package org.counterpoise.ui.gui.wizard;
 
 import java.awt.BorderLayout;
+import java.awt.FlowLayout;
+import java.util.Collections;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
+import java.util.TreeSet;
 import javax.swing.BorderFactory;
+import javax.swing.DefaultComboBoxModel;
+import javax.swing.JComboBox;
 import javax.swing.JLabel;
 import javax.swing.JPanel;
 import javax.swing.JScrollPane;
@@ -28,9 +35,11 @@ import org.knowm.xchart.XYChart;
 
 /**
  * The result step's tab for a project with several modes or absorbers: each absorber to build (a
- * table, the rows of the sheet's "Absorbers to build") and the response of the whole structure at its
- * response point without and with them (a chart). It shows only what it is given: the design run
- * computes {@link Shown} off the event thread, and one for an older state never reaches it.
+ * table, the rows of the sheet's "Absorbers to build") and the response of the whole structure
+ * without and with them, with each mode's part, at the response point or any other named point (a
+ * chart per point, chosen in a list). It shows only what it is given: the design run computes
+ * {@link Shown} off the event thread (every point's chart, so a choice only swaps them), and one for
+ * an older state never reaches it.
  */
 final class SeveralAbsorbersView {
     /** Said when the project has one mode and one absorber. */
@@ -44,6 +53,9 @@ final class SeveralAbsorbersView {
     private final JTable table = new JTable(model);
     private final JLabel summary = new JLabel(NONE);
     private final ChartHost chart = new ChartHost("chart.several");
+    private final JComboBox<String> point = new JComboBox<>();
+    /** The charts of what is shown, by point; empty when nothing is. */
+    private Map<String, XYChart> charts = Map.of();
     private final JPanel panel = new JPanel(new BorderLayout(0, 6));
     /** True unless the tab says the project has one mode and one absorber. */
     private boolean showing;
@@ -54,10 +66,21 @@ final class SeveralAbsorbersView {
      * @param build the absorbers to build with their tolerance within the set
      * @param table their table in the display units
      * @param summary the peaks over the band before and after, in words
-     * @param chart the response before and after
+     * @param charts the response before and after and each mode's part, by point: the response point
+     *     first, then the structure's other named points in alphabetical order
      */
     record Shown(AbsorbersToBuild build, ReportTable.Grid table, String summary,
-            XYChart chart) {
+            Map<String, XYChart> charts) {
+        /** Copies the charts, keeping their order. */
+        Shown {
+            charts = Collections.unmodifiableMap(new LinkedHashMap<>(charts));
+        }
+
+        /** @return the chart at the response point */
+        XYChart chart() {
+            return charts.values().iterator().next();
+        }
+
         /**
          * @param design the design on the target mode
          * @param layout the project's modes and absorbers
@@ -80,7 +103,12 @@ final class SeveralAbsorbersView {
                             + DisplayUnits.format(set.single().orElseThrow().peak(), Dimension.LENGTH, units) + ")")
                             .orElse("") + set.joint().map(q -> " (each absorber designed on its own mode alone: "
                             + DisplayUnits.format(q.peak(), Dimension.LENGTH, units) + ")").orElse("") + ".";
-            return new Shown(build, grid, words, SeveralAbsorbersCharts.response(set, units, theme, 640, 380));
+            Map<String, XYChart> charts = new LinkedHashMap<>();
+            charts.put(layout.responsePoint(), SeveralAbsorbersCharts.response(set, units, theme, 640, 380));
+            for (String other : new TreeSet<>(layout.structure().points())) {
+                charts.putIfAbsent(other, SeveralAbsorbersCharts.response(set, other, units, theme, 640, 380));
+            }
+            return new Shown(build, grid, words, charts);
         }
     }
 
@@ -90,7 +118,22 @@ final class SeveralAbsorbersView {
         summary.setName("result.several.summary");
         summary.setBorder(BorderFactory.createEmptyBorder(4, 4, 4, 4));
         JScrollPane scroll = new JScrollPane(table);
-        JSplitPane split = new JSplitPane(JSplitPane.VERTICAL_SPLIT, scroll, chart);
+        point.setName("result.several.point");
+        point.addActionListener(e -> {
+            XYChart c = charts.get((String) point.getSelectedItem());
+            if (c != null) {
+                chart.show(c);
+            }
+        });
+        JPanel chartPanel = new JPanel(new BorderLayout(0, 4));
+        JPanel choice = new JPanel(new FlowLayout(FlowLayout.LEFT, 6, 0));
+        JLabel label = new JLabel("Displacement at");
+        label.setLabelFor(point);
+        choice.add(label);
+        choice.add(point);
+        chartPanel.add(choice, BorderLayout.NORTH);
+        chartPanel.add(chart, BorderLayout.CENTER);
+        JSplitPane split = new JSplitPane(JSplitPane.VERTICAL_SPLIT, scroll, chartPanel);
         split.setResizeWeight(0.3);
         split.setBorder(null);
         panel.add(summary, BorderLayout.NORTH);
@@ -140,6 +183,9 @@ final class SeveralAbsorbersView {
         }
         // wrapped to the tab's width: the sentence is longer than the table is wide
         summary.setText("<html>" + s.summary().replace("&", "&amp;").replace("<", "&lt;") + "</html>");
+        charts = s.charts();
+        point.setModel(new DefaultComboBoxModel<>(charts.keySet().toArray(new String[0])));
+        point.setEnabled(true);
         chart.show(s.chart());
     }
 
@@ -151,5 +197,8 @@ final class SeveralAbsorbersView {
     private void clear(String words) {
         model.setRowCount(0);
         summary.setText(words);
+        charts = Map.of();
+        point.setModel(new DefaultComboBoxModel<>());
+        point.setEnabled(false);
     }
 }

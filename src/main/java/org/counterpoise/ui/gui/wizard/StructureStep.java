@@ -221,9 +221,10 @@ final class StructureStep extends Step {
             c.setEnabled(!severalModes);
         }
         if (severalModes) {
-            // the modes are kept as the file gives them; the design uses the target mode (derived below)
-            measuredNote.setText("several modes (structure.modes in the file): not edited here; the design"
-                    + " uses the target mode at the absorbers' point, derived below");
+            // the modes are kept as the file gives them; the greyed fields show the target mode at the
+            // absorbers' point, the single mode the design uses (never the fields of a project shown before)
+            showTargetMode(p);
+            measuredNote.setText("several modes in the file, not edited here; shown: the target mode the design uses");
             measuredNote.setToolTipText(null);
             return;
         }
@@ -233,6 +234,29 @@ final class StructureStep extends Step {
                 + (m.file().isEmpty() ? "" : m.file() + ", ") + (m.date().isEmpty() ? "" : m.date() + ", ")
                 + "typing a value replaces it");
         measuredNote.setToolTipText(m == null ? null : MeasuredSourceContent.methodWords(m.method()));
+    }
+
+    /**
+     * Shows the target mode as a single mode (effective modal mass m_r / phi_r(a)^2, its natural
+     * frequency, its damping ratio, shape value 1), or empty fields when the file's modes do not give one.
+     */
+    private void showTargetMode(Project p) {
+        Structure target;
+        try {
+            target = p.toStructure();
+        } catch (InvalidInputException e) {
+            for (QuantityField f : List.of(mass, stiffness, damping, modeShape)) {
+                showValue(f, null);
+            }
+            return;
+        }
+        select(massForm, 0);
+        showValue(mass, target.modalMass(), Unit.KILOGRAM);
+        select(stiffnessForm, 1);
+        showValue(stiffness, Unit.HERTZ.fromSi(target.naturalFrequency()), Unit.HERTZ);
+        select(dampingForm, DampingInput.Measure.RATIO.ordinal());
+        showValue(damping, target.dampingRatio(), Unit.RATIO);
+        showValue(modeShape, 1.0, Unit.RATIO);
     }
 
     /** @return the modes table's rows as shown (tests) */

@@ -13,9 +13,11 @@ import java.util.List;
 import java.util.concurrent.Callable;
 import java.util.concurrent.CopyOnWriteArrayList;
 import javax.imageio.ImageIO;
+import javax.swing.JComboBox;
 import javax.swing.JLabel;
 import javax.swing.JTabbedPane;
 import javax.swing.JTable;
+import javax.swing.JTextField;
 import org.apache.pdfbox.Loader;
 import org.apache.pdfbox.pdmodel.PDDocument;
 import org.apache.pdfbox.text.PDFTextStripper;
@@ -113,6 +115,19 @@ class SeveralAbsorbersGuiTest {
         }
         assertTrue(sampled <= set.peakAfter() * (1 + 1e-9) && sampled > 0.97 * set.peakAfter(),
                 sampled + " against " + set.peakAfter());
+        // every named point has its chart, the response point first; choosing one shows its chart at once
+        @SuppressWarnings("unchecked")
+        JComboBox<String> point = onEdt(() -> (JComboBox<String>) Edt.find(frame.getContentPane(), "result.several.point"));
+        assertEquals(List.of("midspan", "display"), onEdt(() -> List.of(point.getItemAt(0), point.getItemAt(1))));
+        assertEquals(2, onEdt(point::getItemCount));
+        assertNotNull(chart.getSeriesMap().get("mode bending, its part with absorbers"));
+        onEdt(() -> {
+            point.setSelectedItem("display");
+            return null;
+        });
+        String title = onEdt(() -> ((ChartHost) Edt.find(frame.getContentPane(), "chart.several")).chart()
+                .getYAxisTitle());
+        assertTrue(title.contains("display"), title);
         String summary = onEdt(() -> ((JLabel) Edt.find(frame.getContentPane(), "result.several.summary")).getText());
         assertTrue(summary.contains("peak displacement over the band"), summary);
         onEdt(() -> {
@@ -130,6 +145,13 @@ class SeveralAbsorbersGuiTest {
         assertEquals("twisting", onEdt(() -> modes.getValueAt(1, 0)));
         assertTrue(String.valueOf(onEdt(() -> modes.getValueAt(1, 1))).contains("9.100"), "9.1 Hz");
         assertTrue(onEdt(() -> !modes.isCellEditable(0, 1)));
+        // the greyed single-mode fields show the target mode at the absorbers' point (the bending mode,
+        // 18 t with shape value 1 at mid-span: 18 000 kg at 8.2 Hz), not a project shown before
+        String massShown = onEdt(() -> ((JTextField) Edt.find(frame.getContentPane(), "structure.mass")).getText());
+        String frequencyShown = onEdt(() -> ((JTextField) Edt.find(frame.getContentPane(), "structure.stiffness"))
+                .getText());
+        assertEquals(18000.0, Double.parseDouble(massShown.replace(",", "").replace(" ", "")), 1e-6, massShown);
+        assertEquals(8.2, Double.parseDouble(frequencyShown.replace(",", "").replace(" ", "")), 1e-9, frequencyShown);
         onEdt(() -> {
             frame.showStep(0);
             return null;

@@ -1,0 +1,195 @@
+package org.counterpoise.core.optim;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.counterpoise.core.robust.WorstCase;
+
+/**
+ * The least worst-case peak of several absorbers of equal mass on one mode
+ * ({@link RobustSetProblem}): the structure's natural frequency anywhere in its range, the absorbers'
+ * off together by a common factor, every damping ratio at or above the floor.
+ *
+ * <p>Method: exchange (outer approximation, the usual method for semi-infinite minimax problems,
+ * Hettich and Kortanek 1993, SIAM Review 35, section 7; the single absorber's robust design does the
+ * same, {@code RobustOptimiser}). Over any finite set of builds the largest peak is at most the
+ * worst case, for every design. So: (1) start with the nominal build and the corners of the ranges;
+ * (2) minimise the largest peak over the set: every build's exact maxima are further smooth pieces
+ * of one minimax ({@link RobustSetVariables}), solved by the machinery of the nominal problem
+ * (trust-region linear programming and Newton on the first-order conditions, {@link MinimaxSearch});
+ * (3) find the design's worst case over the continuum of the ranges (a grid and Brent's method on
+ * the exact peak, {@link WorstCase#over}); (4) when it exceeds the set's largest peak by more than
+ * {@value #GAP} (relative), add that build and go back to (2) from the design found. When the gap
+ * closes, the minimax over the final set is certified as the nominal problem's is (equal active
+ * peaks, first-order conditions, the coarse scan of the variables judged over every build of the
+ * set, random moves), and the design's worst case is within {@value #GAP} of a lower bound on the
+ * robust optimum (for the local optimum found; the scan covers the whole box).
+ *
+ * <p>Seeds: the certified least-nominal-peak set (its damping raised to the floor), and for the
+ * uniform spread the same with twice the damping and half again the spread (a robust design spends
+ * more on both); for individual tuning, the robust uniform optimum and the least-peak individual set.
+ */
+public final class RobustSetOptimiser {
+    /** The exchange stops when the worst case is within this (relative) of the set's largest peak. */
+    public static final double GAP = 1e-6;
+    private static final int MAX_EXCHANGES = 30;
+    /** Builds closer than this fraction of the ranges are one build moved (see {@link #exchange}). */
+    private static final double NEAR = 0.05;
+
+    private RobustSetOptimiser() {
+    }
+
+    /**
+     * @param problem the problem
+     * @return the robust set, its worst case, its nominal peak and the evidence
+     */
+    public static RobustSetOptimum optimise(RobustSetProblem problem) {
+        EvaluationCounter counter = new EvaluationCounter();
+        AbsorberSetProblem set = problem.set();
+        AbsorberSetOptimum leastPeak = AbsorberSetOptimiser.optimise(set);
+        counter.add(leastPeak.evaluations());
+        AbsorberSetVariables layout = new AbsorberSetVariables(set);
+        List<double[]> scenarios = initialBuilds(problem);
+        int fixed = scenarios.size();
+        RobustSetVariables v = new RobustSetVariables(set, scenarios, problem.dampingFloor());
+        double[] p = null;
+        double best = Double.POSITIVE_INFINITY;
+        for (double[] seed : seeds(problem, layout, leastPeak, counter)) {
+            double[] q = MinimaxSearch.localOptimum(v, clamp(v, seed), counter);
+            double peak = v.peak(q);
+            if (peak < best) {
+                p = q;
+                best = peak;
+            }
+        }
+        WorstCase.Point worst = null;
+        AbsorberSetCertificate certificate = null;
+        boolean converged = false;
+        for (int exchange = 0; exchange < MAX_EXCHANGES && !converged; exchange++) {
+            worst = worstCase(problem, layout, p);
+            if (worst.peak() <= v.peak(p) * (1 + GAP)) {
+                // the gap is closed: certify the minimax over this set (a lower scan point restarts it)
+                MinimaxSearch.Result r = MinimaxSearch.run(v, List.of(p), 1, AbsorberSetScan.scan(layout, v, counter),
+                        counter);
+                p = r.point();
+                certificate = r.certificate();
+                worst = worstCase(problem, layout, p);
+                converged = worst.peak() <= r.peak() * (1 + GAP);
+                if (converged) {
+                    break;
+                }
+            }
+            exchange(problem, scenarios, fixed, new double[] {worst.structureFactor(), worst.absorberFactor()});
+            v = new RobustSetVariables(set, scenarios, problem.dampingFloor());
+            p = MinimaxSearch.localOptimum(v, p, counter);
+            certificate = null;
+        }
+        if (certificate == null) {
+            certificate = AbsorberSetCheck.certify(v, p, v.peak(p), AbsorberSetScan.scan(layout, v, counter), counter);
+            worst = worstCase(problem, layout, p);
+        }
+        return new RobustSetOptimum(problem, layout.design(p), worst.peak(), worst.structureFactor(),
+                worst.absorberFactor(), layout.peak(p), scenarios.size(), converged, certificate, leastPeak,
+                counter.count());
+    }
+
+    /**
+     * The worst case of any design of the problem's absorbers over its ranges (the same search the
+     * optimiser uses), for comparing designs: the least-peak set or one absorber of the same mass.
+     *
+     * @param problem the ranges, structure and band (the design's count replaces the problem's)
+     * @param design the absorbers as drawn
+     * @return the worst peak of |X k1 / F| and where it occurs
+     */
+    public static WorstCase.Point worstCase(RobustSetProblem problem, AbsorberSetDesign design) {
+        AbsorberSetProblem s = problem.set();
+        AbsorberSetProblem individual = new AbsorberSetProblem(design.count(),
+                design.massRatios().stream().mapToDouble(Double::doubleValue).sum(), s.structureDamping(), s.bandLow(),
+                s.bandHigh(), AbsorberSetTuning.INDIVIDUAL);
+        AbsorberSetVariables layout = new AbsorberSetVariables(individual);
+        return worstCase(problem, layout, layout.individualPoint(design));
+    }
+
+    private static WorstCase.Point worstCase(RobustSetProblem problem, AbsorberSetVariables layout, double[] p) {
+        AbsorberSetProblem set = layout.problem();
+        return WorstCase.over((s, a) -> new AbsorberSetVariables(set, s, a).peak(p), problem.structureRange(),
+                problem.absorberRange());
+    }
+
+    /**
+     * Adds the worst build found, or moves an earlier worst build (not the nominal one or a corner)
+     * that lies within {@value #NEAR} of the ranges of it: an interior worst case moves a little as the
+     * design moves, and two builds a hair apart make the same peak twice, which leaves the
+     * first-order conditions of the minimax singular (Newton then stops short of equal peaks).
+     * The exchange of Remez's algorithm does the same with its reference points.
+     */
+    private static void exchange(RobustSetProblem problem, List<double[]> scenarios, int fixed, double[] worst) {
+        for (int k = fixed; k < scenarios.size(); k++) {
+            double[] b = scenarios.get(k);
+            double ds = problem.structureRange() > 0 ? Math.abs(b[0] - worst[0]) / problem.structureRange() : 0.0;
+            double da = problem.absorberRange() > 0 ? Math.abs(b[1] - worst[1]) / problem.absorberRange() : 0.0;
+            if (Math.max(ds, da) <= NEAR) {
+                scenarios.set(k, worst);
+                return;
+            }
+        }
+        scenarios.add(worst);
+    }
+
+    /** The nominal build first, then the corners of the ranges. */
+    private static List<double[]> initialBuilds(RobustSetProblem problem) {
+        List<double[]> builds = new ArrayList<>();
+        builds.add(new double[] {1.0, 1.0});
+        double s = problem.structureRange();
+        double a = problem.absorberRange();
+        for (double sf : s > 0 ? new double[] {1 - s, 1 + s} : new double[] {1.0}) {
+            for (double af : a > 0 ? new double[] {1 - a, 1 + a} : new double[] {1.0}) {
+                if (sf != 1.0 || af != 1.0) {
+                    builds.add(new double[] {sf, af});
+                }
+            }
+        }
+        return builds;
+    }
+
+    private static List<double[]> seeds(RobustSetProblem problem, AbsorberSetVariables layout,
+            AbsorberSetOptimum leastPeak, EvaluationCounter counter) {
+        AbsorberSetProblem set = problem.set();
+        List<double[]> seeds = new ArrayList<>();
+        if (set.tuning() == AbsorberSetTuning.UNIFORM) {
+            double[] p = uniformPoint(layout, leastPeak.design());
+            seeds.add(p);
+            double[] wider = p.clone();
+            wider[wider.length - 1] += Math.log(2);
+            if (set.count() > 1) {
+                wider[1] = Math.min(AbsorberSetProblem.MAX_SPREAD, 1.5 * wider[1]);
+            }
+            seeds.add(wider);
+        } else {
+            RobustSetOptimum uniform = optimise(new RobustSetProblem(set.with(AbsorberSetTuning.UNIFORM),
+                    problem.structureRange(), problem.absorberRange(), problem.dampingFloor()));
+            counter.add(uniform.evaluations());
+            seeds.add(layout.individualPoint(uniform.design()));
+            seeds.add(layout.individualPoint(leastPeak.design()));
+        }
+        return seeds;
+    }
+
+    /** The uniform point of a uniform design: centre, spread and damping read back. */
+    private static double[] uniformPoint(AbsorberSetVariables layout, AbsorberSetDesign d) {
+        int n = d.count();
+        double low = d.tuningRatios().get(0);
+        double high = d.tuningRatios().get(n - 1);
+        double centre = (low + high) / 2;
+        return layout.point(centre, n == 1 ? 0.0 : (high - low) / centre, d.dampingRatios().get(0));
+    }
+
+    private static double[] clamp(MinimaxVariables v, double[] p) {
+        double[] lo = v.lower();
+        double[] hi = v.upper();
+        double[] q = p.clone();
+        for (int k = 0; k < q.length; k++) {
+            q[k] = Math.min(hi[k], Math.max(lo[k], q[k]));
+        }
+        return q;
+    }
+}
