@@ -1,6 +1,7 @@
 package org.counterpoise.core.design;
 
 import java.util.List;
+import java.util.Optional;
 import java.util.OptionalInt;
 import org.counterpoise.core.error.Checks;
 import org.counterpoise.core.error.InvalidInputException;
@@ -25,9 +26,13 @@ import org.counterpoise.core.system.ModalStructure;
  *     the band ({@link ModalStructure#nearestMode})
  * @param count how many absorbers (1 to {@link AbsorberSetProblem#MAX_COUNT})
  * @param tuning uniform spread or individual tuning of the absorbers ({@link AbsorberSetOptimiser})
+ * @param joint one absorber per mode on two modes, designed jointly (then {@code count} is 2, the
+ *     target mode is one of the two and {@code absorberPoint} its absorber's point: what the
+ *     single-mode sections take); empty when every absorber is on the target mode
  */
 public record AbsorberLayout(ModalStructure structure, List<String> modeNames, String excitationPoint,
-        String responsePoint, String absorberPoint, OptionalInt targetMode, int count, AbsorberSetTuning tuning) {
+        String responsePoint, String absorberPoint, OptionalInt targetMode, int count, AbsorberSetTuning tuning,
+        Optional<JointArrangement> joint) {
 
     /** Validates the layout; a message names the field. */
     public AbsorberLayout {
@@ -47,6 +52,32 @@ public record AbsorberLayout(ModalStructure structure, List<String> modeNames, S
         if (targetMode.isPresent() && (targetMode.getAsInt() < 0 || targetMode.getAsInt() >= structure.size())) {
             throw new IllegalArgumentException("bug: no mode " + targetMode.getAsInt());
         }
+        Checks.present("joint", joint, "an arrangement of one absorber per mode, or none");
+        joint.ifPresent(j -> {
+            j.points().forEach(structure::requirePoint);
+            if (j.modes().get(j.modes().size() - 1) >= structure.size() || count != j.modes().size()
+                    || targetMode.isEmpty() || !j.modes().contains(targetMode.getAsInt())) {
+                throw new IllegalArgumentException("bug: one absorber on each of two modes of the structure, one the target");
+            }
+        });
+    }
+
+    /**
+     * Every absorber on one mode (format 6).
+     *
+     * @param structure the modes
+     * @param modeNames their names
+     * @param excitationPoint where the force acts
+     * @param responsePoint where the displacement is judged
+     * @param absorberPoint where every absorber sits
+     * @param targetMode their mode, or empty for the one nearest the band
+     * @param count how many absorbers
+     * @param tuning uniform spread or individual tuning
+     */
+    public AbsorberLayout(ModalStructure structure, List<String> modeNames, String excitationPoint,
+            String responsePoint, String absorberPoint, OptionalInt targetMode, int count, AbsorberSetTuning tuning) {
+        this(structure, modeNames, excitationPoint, responsePoint, absorberPoint, targetMode, count, tuning,
+                Optional.empty());
     }
 
     /**

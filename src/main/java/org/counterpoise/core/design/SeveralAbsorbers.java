@@ -35,19 +35,66 @@ import org.counterpoise.core.system.PointAbsorber;
  *     {@link DesignResult#TOLERANCE_ALLOWANCE} of {@code peakAfter} (searched to
  *     {@link DesignResult#TOLERANCE_SEARCH} each side)
  * @param certified true when the optimum of the absorbers' tunings is certified (docs/several-modes.md;
- *     true for one absorber, designed by the study's own method)
+ *     true for one absorber, designed by the study's own method); when false, {@code absorbers} is the
+ *     best design seen
  * @param robust for several absorbers designed by {@code robust-worst-case}: the ranges and the
  *     figures of this set, the least-peak set and one absorber over them; empty otherwise
+ * @param joint with one absorber per mode ({@link AbsorberLayout#joint}): the sequential design beside
+ *     the joint one; else empty
  */
 public record SeveralAbsorbers(AbsorberLayout layout, int targetMode, double effectiveMass, FrequencyBand band,
         double forceAmplitude, List<PointAbsorber> absorbers, double peakBefore, double peakAfter,
         List<ModePeak> modes, Optional<SingleAbsorber> single, boolean certified, MistuningRange structureTolerance,
-        Optional<RobustSet> robust) {
+        Optional<RobustSet> robust, Optional<Sequential> joint) {
 
     /** Copies the lists. */
     public SeveralAbsorbers {
         absorbers = List.copyOf(absorbers);
         modes = List.copyOf(modes);
+    }
+
+    /**
+     * Absorbers all on the target mode (no sequential design to compare).
+     *
+     * @param layout the structure and absorbers
+     * @param targetMode the target mode's index
+     * @param effectiveMass its modal mass at the absorbers' point, kg
+     * @param band the forcing band, rad/s
+     * @param forceAmplitude the force, N
+     * @param absorbers each absorber
+     * @param peakBefore the peak over the band without absorbers, m
+     * @param peakAfter the peak with them, m
+     * @param modes each mode's peak
+     * @param single one absorber of the same total mass, or empty
+     * @param certified true when certified
+     * @param structureTolerance the tolerance to the target mode's frequency
+     * @param robust the robust set's figures, or empty
+     */
+    public SeveralAbsorbers(AbsorberLayout layout, int targetMode, double effectiveMass, FrequencyBand band,
+            double forceAmplitude, List<PointAbsorber> absorbers, double peakBefore, double peakAfter,
+            List<ModePeak> modes, Optional<SingleAbsorber> single, boolean certified, MistuningRange structureTolerance,
+            Optional<RobustSet> robust) {
+        this(layout, targetMode, effectiveMass, band, forceAmplitude, absorbers, peakBefore, peakAfter, modes, single,
+                certified, structureTolerance, robust, Optional.empty());
+    }
+
+    /**
+     * One absorber per mode designed in sequence, each on its own mode alone (the usual practice), for
+     * comparison with the joint design (docs/several-modes.md).
+     *
+     * @param absorbers the two absorbers, in the order of {@link JointArrangement#modes}
+     * @param peak the peak over the band at the response point with them, m
+     */
+    public record Sequential(List<PointAbsorber> absorbers, double peak) {
+        /** Copies the list. */
+        public Sequential {
+            absorbers = List.copyOf(absorbers);
+        }
+    }
+
+    /** @return the sequential design's peak over the joint one's (at least 1), with one absorber per mode */
+    public Optional<Double> jointGain() {
+        return joint.map(s -> s.peak() / peakAfter);
     }
 
     /**

@@ -47,8 +47,9 @@ import org.counterpoise.core.system.Spillover;
  *       each mode's peak near its own frequency (spillover, {@link Spillover}) and, for n &gt; 1, the
  *       same with the least-peak single absorber of the same total mass (the gain of the split).</li>
  * </ol>
- * The absorbers are designed for force to displacement over a band; other excitations or responses
- * are refused with a plain message.
+ * One absorber per mode on two modes ({@link AbsorberLayout#joint}) is designed jointly instead
+ * ({@link JointAbsorbersDesigner}). The absorbers are designed for force to displacement over a band;
+ * other excitations or responses are refused with a plain message.
  */
 public final class SeveralAbsorbersDesigner {
     private SeveralAbsorbersDesigner() {
@@ -68,6 +69,9 @@ public final class SeveralAbsorbersDesigner {
                     + " and " + study.response().name().toLowerCase(Locale.ROOT),
                     "several absorbers and several modes are designed for a force (disturbance.kind force) and"
                             + " the displacement (absorber.response displacement)");
+        }
+        if (layout.joint().isPresent()) {
+            return JointAbsorbersDesigner.design(design, layout);
         }
         FrequencyBand band = excitation.band();
         int r = layout.target(band);
@@ -170,7 +174,7 @@ public final class SeveralAbsorbersDesigner {
      * the allowance: the same search as a single design's ({@link ToleratedMistuning}), on the exact
      * peak of the whole structure. Several absorbers spread over a band are chosen for this.
      */
-    private static MistuningRange structureTolerance(AbsorberLayout layout, int mode, List<PointAbsorber> absorbers,
+    static MistuningRange structureTolerance(AbsorberLayout layout, int mode, List<PointAbsorber> absorbers,
             FrequencyBand band, double force, double bare) {
         double wr = layout.structure().modes().get(mode).naturalFrequency();
         return ToleratedMistuning.ofPeak(factor -> force * peak(ModalSystem.of(factor == 1.0 ? layout.structure()
@@ -191,6 +195,10 @@ public final class SeveralAbsorbersDesigner {
      * @return the absorbers as they should be, in the set's order
      */
     public static List<PointAbsorber> retuned(SeveralAbsorbers set, double targetModeFrequency) {
+        if (set.layout().joint().isPresent()) {
+            throw new InvalidInputException("absorbers.arrangement", "\"one-per-mode\"", "absorbers all on one"
+                    + " mode: the absorbers of one per mode are not yet designed again for a measured structure");
+        }
         double wr = set.layout().structure().modes().get(set.targetMode()).naturalFrequency();
         List<PointAbsorber> designed = set.absorbers();
         if (targetModeFrequency == wr) {

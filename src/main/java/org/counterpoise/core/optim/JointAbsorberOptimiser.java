@@ -7,9 +7,10 @@ import org.counterpoise.core.model.ExcitationKind;
 import org.counterpoise.core.response.ResponseKind;
 
 /**
- * One absorber per mode of a two-mode structure, both at one point, their tunings and dampings
- * designed JOINTLY for the least peak of the whole structure's receptance over the band
- * ({@link JointAbsorberProblem}).
+ * One absorber on each of two modes of a structure, their tunings and dampings designed JOINTLY for
+ * the least peak of the whole structure's receptance over the band ({@link JointAbsorberProblem},
+ * non-dimensional, two modes; {@link JointAbsorberSetup}, the general form: each mode its own
+ * damping, any number of modes, the force, the response and each absorber at its own point).
  *
  * <p>Method: the minimax machinery of several absorbers on one mode ({@link MinimaxSearch}:
  * trust-region linear programming, Newton on the first-order minimax conditions, the certificate of
@@ -30,9 +31,19 @@ public final class JointAbsorberOptimiser {
      * @return the joint optimum with its certificate, and the sequential design
      */
     public static JointAbsorberOptimum optimise(JointAbsorberProblem problem) {
+        JointAbsorberResult r = optimise(problem.setup());
+        return new JointAbsorberOptimum(problem, r.design(), r.peak(), r.certificate(), r.sequentialDesign(),
+                r.sequentialPeak(), r.evaluations());
+    }
+
+    /**
+     * @param setup one absorber on each of two modes of a structure, in any consistent units
+     * @return the joint optimum with its certificate, and the sequential design, in the setup's units
+     */
+    public static JointAbsorberResult optimise(JointAbsorberSetup setup) {
         EvaluationCounter counter = new EvaluationCounter();
-        JointAbsorberVariables v = new JointAbsorberVariables(problem);
-        AbsorberSetDesign sequential = sequential(problem, counter);
+        JointAbsorberVariables v = new JointAbsorberVariables(setup);
+        AbsorberSetDesign sequential = sequential(setup, counter);
         List<double[]> scan = AbsorberSetScan.evaluate(v, AbsorberSetScan.random(v), counter);
         List<double[]> seeds = List.of(v.point(sequential), Arrays.copyOf(scan.get(0), v.dimension()),
                 Arrays.copyOf(scan.get(1), v.dimension()));
@@ -45,8 +56,8 @@ public final class JointAbsorberOptimiser {
                 result = jumped;
             }
         }
-        return new JointAbsorberOptimum(problem, v.design(result.point()), result.peak(), result.certificate(),
-                sequential, problem.peak(sequential), counter.count());
+        return new JointAbsorberResult(setup, v.design(result.point()), result.peak() / v.referenceStiffness(),
+                result.certificate(), sequential, setup.peak(sequential), counter.count());
     }
 
     /**
@@ -59,23 +70,24 @@ public final class JointAbsorberOptimiser {
      * modal mass 1 + mu_2 (mu_2 times (phi_1(a_2) / phi_1(a_1))^2 when the absorbers sit at different
      * points), frequency 1 / sqrt(1 + mu_2), damping ratio zeta / sqrt(1 + mu_2) (the same
      * damper). Absorber 2's mode is taken bare: absorber 1, tuned far below it, is isolated there.
+     * Each mode with its own damping ratio; in the setup's units (f_j is then absorber j's own frequency).
      *
      * @param problem the problem
      * @param counter counts the work
      * @return the two absorbers
      */
-    static AbsorberSetDesign sequential(JointAbsorberProblem problem, EvaluationCounter counter) {
+    static AbsorberSetDesign sequential(JointAbsorberSetup problem, EvaluationCounter counter) {
         double[] f = new double[JointAbsorberProblem.MODES];
         double[] z = new double[JointAbsorberProblem.MODES];
         for (int j = 0; j < f.length; j++) {
             // absorber 2's mass adds m_a2 phi_1(a_2)^2 to mode 1's modal mass, seen at absorber 1's point
-            double carried = j == 0 ? problem.absorberMassRatio(1) * square(problem.shape(0, problem.absorberPoint(1))
-                    / problem.shape(0, problem.absorberPoint(0))) : 0.0;
+            double carried = j == 0 ? problem.absorberMass(1) * square(problem.shape(0, problem.absorberPoints().get(1))
+                    / problem.shape(0, problem.absorberPoints().get(0))) : 0.0;
             double seen = problem.seenMass(j) + carried;
-            double frequency = problem.modeFrequency(j) * Math.sqrt(problem.seenMass(j) / seen);
-            double damping = problem.structureDamping() * Math.sqrt(problem.seenMass(j) / seen);
+            double frequency = problem.mode(j).naturalFrequency() * Math.sqrt(problem.seenMass(j) / seen);
+            double damping = problem.mode(j).dampingRatio() * Math.sqrt(problem.seenMass(j) / seen);
             PeakOptimum own = HInfinityOptimiser.optimise(PeakProblem.allFrequencies(ExcitationKind.FORCE,
-                    ResponseKind.DISPLACEMENT, problem.absorberMassRatio(j) / seen, damping));
+                    ResponseKind.DISPLACEMENT, problem.absorberMass(j) / seen, damping));
             counter.add(own.evaluations());
             f[j] = own.tuning().tuningRatio() * frequency;
             z[j] = own.tuning().dampingRatio();

@@ -7,11 +7,9 @@ import java.util.Optional;
 import java.util.TreeMap;
 import org.counterpoise.core.error.Checks;
 import org.counterpoise.core.error.InvalidInputException;
-import org.counterpoise.core.system.ModalPeak;
 import org.counterpoise.core.system.ModalStructure;
 import org.counterpoise.core.system.ModalSystem;
 import org.counterpoise.core.system.Mode;
-import org.counterpoise.core.system.PointAbsorber;
 
 /**
  * One absorber per mode on a structure of two modes, non-dimensional, the force acting and the
@@ -133,8 +131,7 @@ public record JointAbsorberProblem(double massRatio, double structureDamping, do
      * @return its modal mass as seen at its absorber's point, m_r / phi_r^2, over m1
      */
     public double seenMass(int mode) {
-        double phi = shape(mode, absorberPoint(mode));
-        return (mode == 0 ? 1.0 : secondModeMass) / (phi * phi);
+        return setup().seenMass(mode);
     }
 
     /**
@@ -142,12 +139,21 @@ public record JointAbsorberProblem(double massRatio, double structureDamping, do
      * @return its mass over m1, by the rule of equal mass ratios on each absorber's own mode
      */
     public double absorberMassRatio(int absorber) {
-        return massRatio * seenMass(absorber) / (seenMass(0) + seenMass(1));
+        return setup().absorberMass(absorber);
     }
 
     /** @return each absorber's mass over the modal mass of its own mode seen at the point (the same for both) */
     public double ownMassRatio() {
-        return massRatio / (seenMass(0) + seenMass(1));
+        return setup().ownMassRatio();
+    }
+
+    /**
+     * @return the same problem in the general form: the two-mode structure on the scales omega1 = 1
+     *     and m1 = 1, the force and the displacement at the first point, the absorbers at theirs
+     */
+    public JointAbsorberSetup setup() {
+        return new JointAbsorberSetup(structure(), List.of(0, 1), List.of(absorberPoint(0), absorberPoint(1)), POINT,
+                POINT, massRatio, bandLow, bandHigh);
     }
 
     /** @return the two-mode structure, on the scales omega_ref = omega1 = 1, k_ref = m1 omega1^2 = 1 */
@@ -170,28 +176,15 @@ public record JointAbsorberProblem(double massRatio, double structureDamping, do
      * @return the design with the masses of the split rule
      */
     public AbsorberSetDesign design(double[] tuningRatios, double[] dampingRatios) {
-        List<Double> mu = new ArrayList<>();
-        List<Double> f = new ArrayList<>();
-        List<Double> z = new ArrayList<>();
-        for (int j = 0; j < MODES; j++) {
-            mu.add(absorberMassRatio(j));
-            f.add(tuningRatios[j]);
-            z.add(dampingRatios[j]);
-        }
-        return new AbsorberSetDesign(mu, f, z);
+        return setup().design(tuningRatios, dampingRatios);
     }
 
     /**
      * @param design the two absorbers
-     * @return the structure with them at its point (X k1 / F is its transfer function)
+     * @return the structure with them at their points (X k1 / F is its transfer function)
      */
     public ModalSystem system(AbsorberSetDesign design) {
-        List<PointAbsorber> absorbers = new ArrayList<>();
-        for (int j = 0; j < design.count(); j++) {
-            absorbers.add(PointAbsorber.tuned(absorberPoint(j), design.massRatios().get(j), design.tuningRatios().get(j),
-                    design.dampingRatios().get(j)));
-        }
-        return ModalSystem.of(structure(), absorbers);
+        return setup().system(design);
     }
 
     /**
@@ -199,6 +192,6 @@ public record JointAbsorberProblem(double massRatio, double structureDamping, do
      * @return the exact peak of |X k1 / F| over the band, the whole two-mode structure seen
      */
     public double peak(AbsorberSetDesign design) {
-        return ModalPeak.over(system(design), POINT, POINT, bandLow, bandHigh);
+        return setup().peak(design);
     }
 }

@@ -4,23 +4,29 @@ import java.util.function.DoubleUnaryOperator;
 import org.counterpoise.core.rational.TransferFunction;
 import org.counterpoise.core.system.AbsorberSensitivity;
 import org.counterpoise.core.system.ModalSystem;
+import org.counterpoise.core.system.Mode;
 
 /**
- * The variables of one absorber per mode designed jointly: p = (ln f_1, ln f_2, ln zeta_1,
- * ln zeta_2), f_j = omega_j / omega1. Box: each absorber's tuning within its own mode's
- * neighbourhood, so that it stays that mode's absorber: absorber 1 from 0.05 to sqrt(R), absorber 2
- * from sqrt(R) to 5 R (the geometric mean of the two natural frequencies divides them, as in
- * {@code Spillover}; the outer ends are the single absorber's box, docs/optimiser.md, on that mode);
+ * The variables of one absorber per mode designed jointly ({@link JointAbsorberSetup}): p = (ln f_1,
+ * ln f_2, ln zeta_1, ln zeta_2), f_j absorber j's own frequency in the setup's unit (omega_j / omega1
+ * for {@link JointAbsorberProblem}). Box: each absorber's tuning within its own mode's
+ * neighbourhood, so that it stays that mode's absorber: absorber 1 from 0.05 omega_a to
+ * sqrt(omega_a omega_b), absorber 2 from there to 5 omega_b, omega_a &lt; omega_b the two designed modes'
+ * natural frequencies (0.05 to sqrt(R) and sqrt(R) to 5 R for {@link JointAbsorberProblem}; the
+ * geometric mean divides them, as in {@code Spillover}; the outer ends are the single absorber's box,
+ * docs/optimiser.md, on that mode; another mode of the structure may lie inside a box: it is just there);
  * each damping ratio within [1e-4, 4]. ln|H|^2 comes from the factored form of {@link AbsorberSensitivity#value} (each
  * modal and absorber term on its own) and its gradient from {@link AbsorberSensitivity#gradient}.
  */
 final class JointAbsorberVariables implements MinimaxVariables {
     private static final int N = JointAbsorberProblem.MODES;
-    private static final String POINT = JointAbsorberProblem.POINT;
-    private final JointAbsorberProblem problem;
+    private final JointAbsorberSetup problem;
+    /** The transfer functions' frequency scale: the structure's lowest natural frequency (ModalSystem.of). */
+    private final double reference;
 
-    JointAbsorberVariables(JointAbsorberProblem problem) {
+    JointAbsorberVariables(JointAbsorberSetup problem) {
         this.problem = problem;
+        this.reference = problem.structure().modes().get(0).naturalFrequency();
     }
 
     @Override
@@ -31,7 +37,7 @@ final class JointAbsorberVariables implements MinimaxVariables {
     @Override
     public double[] lower() {
         double[] out = new double[2 * N];
-        out[0] = Math.log(AbsorberSetProblem.MIN_TUNING);
+        out[0] = Math.log(AbsorberSetProblem.MIN_TUNING * modeFrequency(0));
         out[1] = Math.log(boundary());
         out[N] = Math.log(AbsorberSetProblem.MIN_DAMPING);
         out[N + 1] = out[N];
@@ -42,25 +48,35 @@ final class JointAbsorberVariables implements MinimaxVariables {
     public double[] upper() {
         double[] out = new double[2 * N];
         out[0] = Math.log(boundary());
-        out[1] = Math.log(AbsorberSetProblem.MAX_TUNING * problem.secondModeRatio());
+        out[1] = Math.log(AbsorberSetProblem.MAX_TUNING * modeFrequency(1));
         out[N] = Math.log(AbsorberSetProblem.MAX_DAMPING);
         out[N + 1] = out[N];
         return out;
     }
 
-    /** sqrt(omega1 omega2) / omega1: where mode 1's neighbourhood ends and mode 2's begins (as in Spillover). */
+    /** sqrt(omega_a omega_b): where the lower designed mode's neighbourhood ends and the upper's begins (as in Spillover). */
     private double boundary() {
-        return Math.sqrt(problem.secondModeRatio());
+        return Math.sqrt(modeFrequency(0) * modeFrequency(1));
+    }
+
+    private double modeFrequency(int j) {
+        return problem.mode(j).naturalFrequency();
     }
 
     @Override
     public double bandLow() {
-        return problem.bandLow();
+        return problem.bandLow() / reference;
     }
 
     @Override
     public double bandHigh() {
-        return problem.bandHigh();
+        return problem.bandHigh() / reference;
+    }
+
+    /** @return the transfer functions' stiffness scale: |H| of the variables times it is the setup's receptance */
+    double referenceStiffness() {
+        Mode first = problem.structure().modes().get(0);
+        return first.modalMass() * reference * reference; // as ModalSystem.of
     }
 
     AbsorberSetDesign design(double[] p) {
@@ -85,19 +101,22 @@ final class JointAbsorberVariables implements MinimaxVariables {
 
     @Override
     public TransferFunction transferFunction(double[] p) {
-        return problem.system(design(p)).transferFunction(POINT, POINT);
+        return problem.system(design(p)).transferFunction(problem.excitationPoint(), problem.responsePoint());
     }
 
     @Override
     public DoubleUnaryOperator logMagnitudeSquared(double[] p) {
         ModalSystem system = problem.system(design(p));
-        return x -> 2 * Math.log(AbsorberSensitivity.value(system, POINT, POINT, Math.sqrt(x)).abs());
+        String force = problem.excitationPoint();
+        String at = problem.responsePoint();
+        return x -> 2 * Math.log(AbsorberSensitivity.value(system, force, at, Math.sqrt(x)).abs());
     }
 
     @Override
     public double[] gradient(double[] p, double x) {
         AbsorberSetDesign d = design(p);
-        double[][] g = AbsorberSensitivity.gradient(problem.system(d), POINT, POINT, Math.sqrt(x));
+        double[][] g = AbsorberSensitivity.gradient(problem.system(d), problem.excitationPoint(), problem.responsePoint(),
+                Math.sqrt(x));
         double[] out = new double[2 * N];
         for (int j = 0; j < N; j++) {
             out[j] = g[j][0];

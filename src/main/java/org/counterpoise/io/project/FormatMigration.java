@@ -15,7 +15,9 @@ import org.counterpoise.core.design.DesignMethod;
  *     defaults ({@code HardwareChoice.DEFAULT}, SI, empty), which the reader gives for absent keys;</li>
  * <li>formats 1 to 5: one mode and one absorber: no {@code structure.modes} and no {@code absorbers}
  *     ({@link Project#modes()} and {@link Project#absorbers()} null), which the reader gives for absent
- *     keys, so such a file designs exactly as before ({@link #isOneModeOneAbsorber}).</li>
+ *     keys, so such a file designs exactly as before ({@link #isOneModeOneAbsorber});</li>
+ * <li>formats 1 to 6: every absorber on one mode: no {@code absorbers.arrangement}, {@code modes} or
+ *     {@code points}, which the reader gives for absent keys ({@link AbsorberArrangement#ONE_MODE}): nothing to add.</li>
  * </ul>
  */
 public final class FormatMigration {

@@ -92,6 +92,23 @@ final class JsonFields {
         return out;
     }
 
+    /**
+     * A list of texts, such as {@code ["bending", "twisting"]}, each checked as {@link #text} is. An
+     * absent key is an error.
+     * @return the texts, in the order written
+     */
+    List<String> textList(String key) {
+        JsonElement e = require(key, "a list of texts [\"...\", \"...\"]");
+        if (!e.isJsonArray()) {
+            throw new InvalidInputException(pathOf(key), describe(e), "must be a list of texts [\"...\", \"...\"]");
+        }
+        List<String> out = new ArrayList<>();
+        for (JsonElement item : e.getAsJsonArray()) {
+            out.add(checkedText(pathOf(key) + "[" + out.size() + "]", item));
+        }
+        return out;
+    }
+
     /** @return true when the key holds a text in quotes */
     boolean isText(String key) {
         return has(key) && object.get(key).isJsonPrimitive() && object.get(key).getAsJsonPrimitive().isString();
@@ -118,15 +135,18 @@ final class JsonFields {
     }
 
     String text(String key) {
-        JsonElement e = require(key, "a text in quotes");
+        return checkedText(pathOf(key), require(key, "a text in quotes"));
+    }
+
+    private static String checkedText(String path, JsonElement e) {
         if (!e.isJsonPrimitive() || !e.getAsJsonPrimitive().isString()) {
-            throw new InvalidInputException(pathOf(key), describe(e), "must be a text in quotes");
+            throw new InvalidInputException(path, describe(e), "must be a text in quotes");
         }
         String text = e.getAsString();
         for (int i = 0; i < text.length(); i++) {
             char c = text.charAt(i);
             if (c < 0x20 && c != '\n' && c != '\t' && c != '\r' || c >= 0x7f && c <= 0x9f) {
-                throw new InvalidInputException(pathOf(key), describe(e), "a text without control characters"
+                throw new InvalidInputException(path, describe(e), "a text without control characters"
                         + " (line breaks and tabs are allowed)");
             }
         }

@@ -8,6 +8,7 @@ import java.util.Map;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.optim.AbsorberSetProblem;
 import org.counterpoise.core.optim.AbsorberSetTuning;
+import org.counterpoise.core.optim.JointAbsorberProblem;
 import org.counterpoise.core.units.Dimension;
 import org.counterpoise.io.PlainText;
 
@@ -31,6 +32,12 @@ final class ModesJson {
     static final String TUNING = "tuning";
     static final String POINT = "point";
     static final String TARGET_MODE = "target_mode";
+    /** Since format 7: {@code one-mode} (the default) or {@code one-per-mode}. */
+    static final String ARRANGEMENT = "arrangement";
+    /** Since format 7, with one absorber per mode: the two modes' names. */
+    static final String ARRANGED_MODES = "modes";
+    /** Since format 7, with one absorber per mode: each absorber's point. */
+    static final String POINTS = "points";
 
     /** The keys of the single mode, which a structure of several modes gives per mode instead. */
     private static final List<String> SINGLE_MODE_KEYS = List.of("mass", "weight", "stiffness", NATURAL_FREQUENCY,
@@ -118,6 +125,20 @@ final class ModesJson {
         if (a == null) {
             return null;
         }
+        String arrangementText = a.text(ARRANGEMENT, Ids.of(AbsorberArrangement.ONE_MODE));
+        AbsorberArrangement arrangement = Ids.parse(AbsorberArrangement.class, arrangementText).orElseThrow(() ->
+                new InvalidInputException(a.pathOf(ARRANGEMENT), "\"" + PlainText.quote(arrangementText) + "\"",
+                        "one of " + Ids.list(AbsorberArrangement.values())));
+        if (arrangement == AbsorberArrangement.ONE_PER_MODE) {
+            return readOnePerMode(a);
+        }
+        for (String key : List.of(ARRANGED_MODES, POINTS)) {
+            if (a.has(key)) {
+                throw new InvalidInputException(a.pathOf(key), "given with all absorbers on one mode",
+                        "leave it out, or give \"" + ARRANGEMENT + "\": \"" + Ids.of(AbsorberArrangement.ONE_PER_MODE)
+                                + "\" (one absorber on each of two modes)");
+            }
+        }
         double count = a.number(COUNT);
         if (count != Math.rint(count) || count < 1 || count > AbsorberSetProblem.MAX_COUNT) {
             throw new InvalidInputException(a.pathOf(COUNT), a.shown(COUNT),
@@ -131,6 +152,35 @@ final class ModesJson {
         String target = a.has(TARGET_MODE) ? a.text(TARGET_MODE) : null;
         a.finish();
         return new AbsorbersInput((int) count, tuning, point, target);
+    }
+
+    /** One absorber on each of two named modes: two absorbers, each its own tuning (since format 7). */
+    private static AbsorbersInput readOnePerMode(JsonFields a) {
+        int n = JointAbsorberProblem.MODES;
+        if (a.has(COUNT) && a.number(COUNT) != n) {
+            throw new InvalidInputException(a.pathOf(COUNT), a.shown(COUNT), n + " with one absorber per mode"
+                    + " (one absorber on each of the two modes of " + a.pathOf(ARRANGED_MODES) + "), or leave it out");
+        }
+        if (a.has(TUNING)) {
+            throw new InvalidInputException(a.pathOf(TUNING), a.shown(TUNING), "leave it out with one absorber per mode:"
+                    + " each absorber gets its own frequency and damping, chosen together");
+        }
+        List<String> modes = a.textList(ARRANGED_MODES);
+        if (modes.size() != n || modes.get(0).equals(modes.get(1))) {
+            throw new InvalidInputException(a.pathOf(ARRANGED_MODES), modes.size() + " names " + PlainText.quote(
+                    String.join(", ", modes)), "the names of exactly two different modes of structure.modes,"
+                            + " e.g. [\"bending\", \"twisting\"] (one absorber per mode)");
+        }
+        List<String> points = a.has(POINTS) ? a.textList(POINTS) : List.of();
+        if (a.has(POINTS) && points.size() != n) {
+            throw new InvalidInputException(a.pathOf(POINTS), points.size() + " points", "two named points, one per"
+                    + " mode in the order of " + a.pathOf(ARRANGED_MODES) + " (or leave it out)");
+        }
+        String point = a.has(POINT) ? a.text(POINT) : null;
+        String target = a.has(TARGET_MODE) ? a.text(TARGET_MODE) : null;
+        a.finish();
+        return new AbsorbersInput(n, AbsorberSetTuning.INDIVIDUAL, point, target, AbsorberArrangement.ONE_PER_MODE,
+                modes, points);
     }
 
     /**
@@ -163,8 +213,16 @@ final class ModesJson {
      */
     static JsonObject write(AbsorbersInput a) {
         JsonObject o = new JsonObject();
-        o.addProperty(COUNT, a.count());
-        o.addProperty(TUNING, Ids.of(a.tuning()));
+        if (a.onePerMode()) {
+            o.addProperty(ARRANGEMENT, Ids.of(a.arrangement()));
+            o.add(ARRANGED_MODES, texts(a.modes()));
+            if (!a.points().isEmpty()) {
+                o.add(POINTS, texts(a.points()));
+            }
+        } else {
+            o.addProperty(COUNT, a.count());
+            o.addProperty(TUNING, Ids.of(a.tuning()));
+        }
         if (a.point() != null) {
             o.addProperty(POINT, a.point());
         }
@@ -172,5 +230,11 @@ final class ModesJson {
             o.addProperty(TARGET_MODE, a.targetMode());
         }
         return o;
+    }
+
+    private static JsonArray texts(List<String> texts) {
+        JsonArray out = new JsonArray();
+        texts.forEach(out::add);
+        return out;
     }
 }

@@ -139,10 +139,12 @@ public record Project(String name, String notes, StructureInput structure, Distu
      * (issue 15) added {@code structure.measured}, where the structure's data came from when they were
      * identified from a measurement (an older file has none: its structure was typed); version 6
      * (issue 16) added {@code structure.modes} with named points and {@code absorbers} (several
-     * absorbers sharing the mass; an older file has one mode and one absorber). How older files are
-     * read: {@link FormatMigration}.
+     * absorbers sharing the mass; an older file has one mode and one absorber); version 7 (issue 16)
+     * added {@code absorbers.arrangement} with one absorber per mode, designed jointly, and its
+     * {@code modes} and {@code points} (an older file has every absorber on one mode). How older files
+     * are read: {@link FormatMigration}.
      */
-    public static final int FORMAT_VERSION = 6;
+    public static final int FORMAT_VERSION = 7;
 
     /** The oldest project-file format version this build reads (and migrates on load). */
     public static final int OLDEST_FORMAT_VERSION = 1;

@@ -46,6 +46,12 @@ public final class SeveralModes {
         AbsorbersInput a = p.absorbers() == null ? new AbsorbersInput(1, AbsorberSetTuning.UNIFORM, null, null)
                 : p.absorbers();
         checkDisturbance(p, a);
+        if (a.onePerMode() && p.modes() == null) {
+            throw new InvalidInputException(ModesJson.ABSORBERS + "." + ModesJson.ARRANGEMENT, "\""
+                    + Ids.of(a.arrangement()) + "\" without structure.modes", "\"" + Ids.of(AbsorberArrangement.ONE_MODE)
+                    + "\" for a structure of one mode; one absorber per mode needs the structure as its modes"
+                    + " (structure.modes)");
+        }
         if (p.modes() == null) {
             if (a.point() != null || a.targetMode() != null) {
                 String key = a.point() != null ? ModesJson.POINT : ModesJson.TARGET_MODE;
@@ -77,6 +83,9 @@ public final class SeveralModes {
         String points = PlainText.quote(String.join(", ", given.get(0).modeShape().keySet()));
         point("structure." + ModesJson.EXCITATION_POINT, modes.excitationPoint(), structure, points);
         point("structure." + ModesJson.RESPONSE_POINT, modes.responsePoint(), structure, points);
+        if (a.onePerMode()) {
+            return Optional.of(OnePerMode.layout(a, structure, names, modes, points));
+        }
         if (a.point() == null) {
             throw InvalidInputException.missing(ModesJson.ABSORBERS + "." + ModesJson.POINT,
                     "a structure of several modes needs the point the absorbers sit at: one of " + points);
@@ -132,6 +141,9 @@ public final class SeveralModes {
     private static void checkDisturbance(Project p, AbsorbersInput a) {
         DisturbanceInput d = p.disturbance();
         String what = p.modes() != null ? "with structure.modes" : "with absorbers.count " + a.count();
+        if (a.onePerMode()) {
+            what = "with one absorber per mode";
+        }
         if (d.kind() != ExcitationKind.FORCE) {
             throw new InvalidInputException("disturbance.kind", "\"" + Ids.of(d.kind()) + "\"",
                     "\"force\" " + what + " (several modes and absorbers are designed for a force acting at a point)");
@@ -144,6 +156,11 @@ public final class SeveralModes {
             throw new InvalidInputException(d.spectrum() != null ? "disturbance.spectrum" : "disturbance.orders",
                     "given " + what, "one harmonic order without a spectrum: several modes and absorbers take one"
                             + " harmonic force over a band or at one frequency");
+        }
+        if (a.onePerMode() && !d.isBand()) {
+            throw new InvalidInputException("disturbance.frequency", "one forcing frequency with absorbers.arrangement \""
+                    + Ids.of(a.arrangement()) + "\"", "a band of forcing frequencies (disturbance.band): one absorber"
+                            + " per mode is designed for the least peak over a band");
         }
         if (a.count() > 1 && !d.isBand()) {
             throw new InvalidInputException(ModesJson.ABSORBERS + "." + ModesJson.COUNT, Integer.toString(a.count()),
@@ -179,7 +196,7 @@ public final class SeveralModes {
         return new Mode(w, zeta, mass, shape);
     }
 
-    private static void point(String field, String name, ModalStructure structure, String points) {
+    static void point(String field, String name, ModalStructure structure, String points) {
         if (!structure.points().contains(name)) {
             throw new InvalidInputException(field, "\"" + PlainText.quote(name) + "\"",
                     "one of the points the modes name: " + points);

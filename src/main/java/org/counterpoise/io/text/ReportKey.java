@@ -256,6 +256,15 @@ public enum ReportKey {
     ITEM_STRUCTURE_TOLERANCE("tolerated_structure_frequency_factor_low", "tolerated_structure_frequency_factor_high",
             "tolerated_structure_frequency_basis"),
     SEVERAL_CERTIFIED("several_absorbers.certified"),
+    // One absorber per mode, designed jointly (format 7): the absorbers[] elements add their mode and
+    // point; the sequential design (each absorber on its own mode alone) beside the joint one.
+    ITEM_MODE("mode"),
+    ITEM_AT_POINT("point"),
+    ITEM_POINT_CHOSEN("point_chosen"),
+    SEVERAL_SEQUENTIAL_ABSORBER("several_absorbers.sequential_absorbers[]"),
+    SEVERAL_SEQUENTIAL_PEAK("several_absorbers.sequential_peak_displacement_m"),
+    SEVERAL_JOINT_GAIN("several_absorbers.joint_gain"),
+    SEVERAL_STATUS("several_absorbers.status"),
 
     // Rows not in the design JSON.
     REVISION,

@@ -91,6 +91,16 @@ public final class SeveralAbsorbersContent {
             sections.add(section);
         }
         List<String> cautions = new ArrayList<>(content.cautions());
+        if (d.joint().isPresent()) {
+            cautions.add(JointAbsorbersContent.sectionsCaution(d));
+            cautions.addAll(JointAbsorbersContent.edgeCautions(d));
+            cautions.add(NOMINAL_SPLIT);
+            if (!d.certified()) {
+                cautions.add(JointAbsorbersContent.NOT_FOUND);
+            }
+            return new ReportContent(content.name(), sections, content.warnings(), cautions, content.comparison(),
+                    content.units());
+        }
         if (d.absorbers().size() > 1) {
             cautions.add(ONE_ABSORBER_SECTIONS);
             cautions.add(d.robust().isPresent() ? ROBUST_SPLIT : NOMINAL_SPLIT);
@@ -111,40 +121,42 @@ public final class SeveralAbsorbersContent {
         int n = d.absorbers().size();
         AbsorberSetTuning tuning = d.layout().tuning();
         String tuningId = tuning.name().toLowerCase(Locale.ROOT);
-        rows.add(row(ReportKey.SEVERAL_COUNT, "absorbers, equal masses", new Count(n), ""));
-        rows.add(row(ReportKey.SEVERAL_TUNING, "tuning", new Words(n == 1 ? "one absorber, the design above"
+        boolean joint = d.joint().isPresent();
+        rows.add(row(ReportKey.SEVERAL_COUNT, joint ? "absorbers, one per mode" : "absorbers, equal masses",
+                new Count(n), ""));
+        rows.add(row(ReportKey.SEVERAL_TUNING, "tuning", joint ? JointAbsorbersContent.TUNING
+                : new Words(n == 1 ? "one absorber, the design above"
                 : tuning == AbsorberSetTuning.UNIFORM ? "uniform spread, one damping ratio (Xu and Igusa 1992)"
                 : "each absorber its own tuning and damping (Zuo and Nayfeh 2005)", List.of(tuningId)), ""));
-        rows.add(row(ReportKey.SEVERAL_POINTS, "force at, response at, absorbers at", new Words(
+        rows.add(row(ReportKey.SEVERAL_POINTS, joint ? "force at, response at, the target mode's absorber at"
+                : "force at, response at, absorbers at", new Words(
                 d.layout().excitationPoint() + ", " + d.layout().responsePoint() + ", " + d.layout().absorberPoint(),
                 List.of(d.layout().excitationPoint(), d.layout().responsePoint(), d.layout().absorberPoint())), ""));
         Mode target = d.layout().structure().modes().get(d.targetMode());
         String targetName = d.layout().modeNames().get(d.targetMode());
-        rows.add(row(ReportKey.SEVERAL_TARGET_MODE, "fitted to mode", new Words(targetName, List.of(targetName)),
-                d.layout().targetMode().isPresent() ? "absorbers.target_mode" : "the mode nearest the band"));
+        rows.add(row(ReportKey.SEVERAL_TARGET_MODE, joint ? "the single-mode sections take mode" : "fitted to mode",
+                new Words(targetName, List.of(targetName)), joint ? "absorbers.target_mode, or the first of absorbers.modes"
+                        : d.layout().targetMode().isPresent() ? "absorbers.target_mode" : "the mode nearest the band"));
         rows.add(row(ReportKey.SEVERAL_TARGET_FREQUENCY, "its natural frequency",
                 DesignContent.quantity(target.naturalFrequency(), Dimension.FREQUENCY), ""));
-        rows.add(row(ReportKey.SEVERAL_EFFECTIVE_MASS, "its modal mass at the absorbers' point",
+        rows.add(row(ReportKey.SEVERAL_EFFECTIVE_MASS, joint ? "its modal mass at its absorber's point"
+                : "its modal mass at the absorbers' point",
                 DesignContent.quantity(d.effectiveMass(), Dimension.MASS), "m_r / phi_r(a)^2"));
         rows.add(row(ReportKey.SEVERAL_TOTAL_MASS, "total absorber mass", DesignContent.quantity(d.totalMass(),
                 Dimension.MASS), ""));
         for (int j = 0; j < n; j++) {
-            PointAbsorber a = d.absorbers().get(j);
-            double w = a.frequency();
-            List<Field> fields = List.of(
-                    new Field(ReportKey.ITEM_MASS, "mass", DesignContent.quantity(a.mass(), Dimension.MASS)),
-                    new Field(ReportKey.ITEM_STIFFNESS, "stiffness", DesignContent.quantity(a.stiffness(),
-                            Dimension.STIFFNESS)),
-                    new Field(ReportKey.ITEM_DAMPING, "damping", DesignContent.quantity(a.damping(),
-                            Dimension.DAMPING_COEFFICIENT)),
-                    new Field(ReportKey.ITEM_FREQUENCY, "own frequency", DesignContent.quantity(w, Dimension.FREQUENCY)),
-                    new Field(ReportKey.ITEM_DAMPING_RATIO, "damping ratio", DesignContent.quantity(
-                            a.damping() / (2 * a.mass() * w), Dimension.RATIO)));
-            rows.add(row(ReportKey.SEVERAL_ABSORBER, "absorber " + (j + 1), new Fields("", fields), source));
+            List<Field> fields = new ArrayList<>(joint ? JointAbsorbersContent.modeAndPoint(d, j) : List.of());
+            fields.addAll(absorberFields(d.absorbers().get(j)));
+            rows.add(row(ReportKey.SEVERAL_ABSORBER, "absorber " + (j + 1), new Fields("", fields), joint
+                    ? "designed jointly, the whole structure seen (docs/several-modes.md)" : source));
         }
-        rows.add(row(ReportKey.SEVERAL_PEAKS, "peak displacement over the band", new Pair(
+        rows.add(row(ReportKey.SEVERAL_PEAKS, joint ? "peak displacement over the band (jointly designed)"
+                : "peak displacement over the band", new Pair(
                 DesignContent.quantity(d.peakBefore(), Dimension.LENGTH),
                 DesignContent.quantity(d.peakAfter(), Dimension.LENGTH), PairKind.BEFORE_AFTER), source));
+        if (joint) {
+            rows.addAll(JointAbsorbersContent.sequentialRows(d));
+        }
         for (SeveralAbsorbers.ModePeak p : d.modes()) {
             String name = d.layout().modeNames().get(p.mode());
             Mode m = d.layout().structure().modes().get(p.mode());
@@ -178,7 +190,24 @@ public final class SeveralAbsorbersContent {
         d.robust().ifPresent(r -> robustRows(rows, r, targetName));
         rows.add(row(ReportKey.SEVERAL_CERTIFIED, "optimum certified", new Flag(d.certified(),
                 d.certified() ? "yes" : "NO"), n == 1 ? "the design above" : "docs/several-modes.md, the certificate"));
+        if (joint) {
+            rows.add(JointAbsorbersContent.status(d));
+        }
         return rows;
+    }
+
+    /** An absorber's mass, spring, damper, own frequency and damping ratio, as fields of its row. */
+    static List<Field> absorberFields(PointAbsorber a) {
+        double w = a.frequency();
+        return List.of(
+                new Field(ReportKey.ITEM_MASS, "mass", DesignContent.quantity(a.mass(), Dimension.MASS)),
+                new Field(ReportKey.ITEM_STIFFNESS, "stiffness", DesignContent.quantity(a.stiffness(),
+                        Dimension.STIFFNESS)),
+                new Field(ReportKey.ITEM_DAMPING, "damping", DesignContent.quantity(a.damping(),
+                        Dimension.DAMPING_COEFFICIENT)),
+                new Field(ReportKey.ITEM_FREQUENCY, "own frequency", DesignContent.quantity(w, Dimension.FREQUENCY)),
+                new Field(ReportKey.ITEM_DAMPING_RATIO, "damping ratio", DesignContent.quantity(
+                        a.damping() / (2 * a.mass() * w), Dimension.RATIO)));
     }
 
     /** What a set designed by robust-worst-case was designed for, and its figures beside the others'. */
@@ -212,7 +241,7 @@ public final class SeveralAbsorbersContent {
         return row(ReportKey.SEVERAL_COMPARED, label, new Fields("", fields), source);
     }
 
-    private static ReportRow row(ReportKey key, String label, ReportValue value, String source) {
+    static ReportRow row(ReportKey key, String label, ReportValue value, String source) {
         return new ReportRow(key, label, "", value, source, "");
     }
 }

@@ -143,6 +143,10 @@ public final class SiteCheckCommand implements Callable<Integer> {
         DesignDossier dossier = DesignDossier.of(loaded.project().toStudy());
         DesignResult design = dossier.design();
         Optional<AbsorberLayout> layout = SeveralModes.layout(loaded.project());
+        if (layout.isPresent() && layout.get().joint().isPresent()) {
+            throw new InvalidInputException("absorbers.arrangement", "\"one-per-mode\"", "absorbers all on one"
+                    + " mode for site-check: one absorber per mode is not yet checked against a measurement");
+        }
         if (layout.isPresent()) {
             return several(loaded, SeveralAbsorbersDesigner.design(design, layout.get()));
         }

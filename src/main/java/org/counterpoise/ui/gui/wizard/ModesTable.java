@@ -93,8 +93,10 @@ final class ModesTable {
                     ? QuantityFormat.number(m.shapeAt(point), QuantityFormat.FIGURES) : "\u2013"));
             model.addRow(row.toArray());
         }
-        points.setText("Force at " + l.excitationPoint() + ", response at " + l.responsePoint() + ", absorbers at "
-                + l.absorberPoint() + ".");
+        points.setText("Force at " + l.excitationPoint() + ", response at " + l.responsePoint() + ", " + l.joint()
+                .map(j -> "one absorber per mode: " + l.modeNames().get(j.modes().get(0)) + " at " + j.points().get(0)
+                        + ", " + l.modeNames().get(j.modes().get(1)) + " at " + j.points().get(1))
+                .orElse("absorbers at " + l.absorberPoint()) + ".");
     }
 
     /** @return the rows as shown (tests) */

@@ -21,6 +21,7 @@ import org.counterpoise.core.design.AbsorbersToBuild;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.SeveralAbsorbers;
 import org.counterpoise.core.design.SeveralAbsorbersDesigner;
+import org.counterpoise.core.system.PointAbsorber;
 import org.counterpoise.core.units.Dimension;
 import org.counterpoise.io.chart.ChartTheme;
 import org.counterpoise.io.chart.SeveralAbsorbersCharts;
@@ -92,13 +93,16 @@ final class SeveralAbsorbersView {
             SeveralAbsorbers set = SeveralAbsorbersDesigner.design(design, layout);
             AbsorbersToBuild build = AbsorbersToBuild.of(design, set);
             ReportTable.Grid grid = ReportTable.grid(AbsorbersToBuildContent.table(build), units).orElseThrow();
+            String where = set.joint().isPresent() ? ", one per mode, designed jointly, at " + String.join(" and ",
+                    set.absorbers().stream().map(PointAbsorber::point).toList()) : " at " + layout.absorberPoint();
             String words = set.absorbers().size() + (set.absorbers().size() == 1 ? " absorber" : " absorbers")
-                    + " at " + layout.absorberPoint() + "; peak displacement over the band at "
+                    + where + "; peak displacement over the band at "
                     + layout.responsePoint() + ": " + DisplayUnits.format(set.peakBefore(), Dimension.LENGTH, units)
                     + " without, " + DisplayUnits.format(set.peakAfter(), Dimension.LENGTH, units) + " with them"
                     + set.gain().map(g -> " (one absorber of the same total mass: "
                             + DisplayUnits.format(set.single().orElseThrow().peak(), Dimension.LENGTH, units) + ")")
-                            .orElse("") + ".";
+                            .orElse("") + set.joint().map(q -> " (each absorber designed on its own mode alone: "
+                            + DisplayUnits.format(q.peak(), Dimension.LENGTH, units) + ")").orElse("") + ".";
             Map<String, XYChart> charts = new LinkedHashMap<>();
             charts.put(layout.responsePoint(), SeveralAbsorbersCharts.response(set, units, theme, 640, 380));
             for (String other : new TreeSet<>(layout.structure().points())) {

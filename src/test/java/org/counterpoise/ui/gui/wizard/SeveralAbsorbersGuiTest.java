@@ -27,13 +27,16 @@ import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.SeveralAbsorbers;
 import org.counterpoise.core.design.SeveralAbsorbersDesigner;
 import org.counterpoise.core.system.PointAbsorber;
+import org.counterpoise.core.units.Dimension;
 import org.counterpoise.core.units.Unit;
 import org.counterpoise.io.preset.Presets;
 import org.counterpoise.io.project.LoadedProject;
 import org.counterpoise.io.project.Project;
 import org.counterpoise.io.project.ProjectReader;
 import org.counterpoise.io.project.SeveralModes;
+import org.counterpoise.io.text.DisplayUnits;
 import org.counterpoise.io.text.QuantityFormat;
+import org.counterpoise.io.text.UnitSystem;
 import org.counterpoise.io.text.ValueText;
 import org.counterpoise.ui.gui.Edt;
 import org.counterpoise.ui.gui.plot.ChartHost;
@@ -205,6 +208,30 @@ class SeveralAbsorbersGuiTest {
                 assertTrue(text.contains(e), "the wizard's sheet lacks " + e);
             }
         }
+    }
+
+    /** One absorber per mode (format 7, the invented frame): the tab names each absorber's point and the sequential peak. */
+    @Test
+    void oneAbsorberPerModeIsShownWithEachPointAndTheSequentialPeak() throws Exception {
+        frame = onEdt(() -> {
+            WizardFrame f = new WizardFrame();
+            f.setSize(1400, 880);
+            f.setVisible(true);
+            return f;
+        });
+        settled("first design");
+        LoadedProject project = Presets.load("frame-bending-and-twisting.json");
+        load(project);
+        SeveralAbsorbers set = SeveralAbsorbersDesigner.design(DesignDossier.of(project.project().toStudy()).design(),
+                SeveralModes.layout(project.project()).orElseThrow());
+        JTable absorbers = onEdt(() -> (JTable) Edt.find(frame.getContentPane(), "result.several"));
+        Edt.waitFor(() -> Edt.callQuietly(() -> absorbers.getRowCount() == 2), "the two absorbers");
+        assertTrue(row(absorbers, 0).contains("midspan"), row(absorbers, 0));
+        assertTrue(row(absorbers, 1).contains("corner"), row(absorbers, 1));
+        String summary = onEdt(() -> ((JLabel) Edt.find(frame.getContentPane(), "result.several.summary")).getText());
+        assertTrue(summary.contains("one per mode, designed jointly, at midspan and corner"), summary);
+        assertTrue(summary.contains(DisplayUnits.format(set.joint().orElseThrow().peak(), Dimension.LENGTH,
+                UnitSystem.SI)), summary);
     }
 
     private void load(LoadedProject p) throws Exception {

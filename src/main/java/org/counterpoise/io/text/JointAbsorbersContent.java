@@ -1,0 +1,117 @@
+package org.counterpoise.io.text;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.counterpoise.core.design.JointArrangement;
+import org.counterpoise.core.design.SeveralAbsorbers;
+import org.counterpoise.core.system.PointAbsorber;
+import org.counterpoise.core.units.Dimension;
+import org.counterpoise.io.text.ReportValue.Field;
+import org.counterpoise.io.text.ReportValue.Fields;
+import org.counterpoise.io.text.ReportValue.Flag;
+import org.counterpoise.io.text.ReportValue.Words;
+
+/**
+ * The rows and cautions of the section "Several absorbers and modes" that only one absorber per mode,
+ * designed jointly, has (a project of format 7 with {@code "arrangement": "one-per-mode"}): each
+ * absorber's mode and point, the sequential design beside the joint one and the gain, and the
+ * certificate's status; {@link SeveralAbsorbersContent} places them.
+ */
+final class JointAbsorbersContent {
+    /** The tuning row's value. */
+    static final Words TUNING = new Words("one absorber per mode, designed jointly: each its own tuning and damping,"
+            + " chosen together for the least peak of the whole structure", List.of("one-per-mode"));
+    /** A joint optimum that failed its certificate. */
+    static final String NOT_FOUND = "One absorber per mode: the joint optimum was not found (its certificate failed,"
+            + " docs/several-modes.md); the absorbers shown are the best design seen, never worse than the"
+            + " sequential design: treat them as a good design, not the best.";
+    private static final String SOURCE = "each absorber the certified least peak on its own mode alone, as seen at"
+            + " its point (the usual practice; docs/several-modes.md)";
+
+    private JointAbsorbersContent() {
+    }
+
+    /**
+     * @param d one absorber per mode
+     * @return the caution on what the single-mode sections of the report (and the sheet) take
+     */
+    static String sectionsCaution(SeveralAbsorbers d) {
+        String target = d.layout().modeNames().get(d.targetMode());
+        return "One absorber per mode: the sections other than \"Several absorbers and modes\" (the absorber, stroke"
+                + " and forces, tolerance, method comparison, hardware, procedure) are for one absorber of the total"
+                + " mass on mode " + target + " alone, at " + d.layout().absorberPoint() + "; the other modes and the"
+                + " second absorber are in that section only. The sheet lists both absorbers to build, each at its"
+                + " own point, but its words on the set were written for absorbers on one mode (equal masses at one"
+                + " point): take each absorber's mass, point and tuning from its table or this section.";
+    }
+
+    /**
+     * @param d one absorber per mode
+     * @return a caution for each absorber whose tuning ended at the edge of its mode's neighbourhood
+     */
+    static List<String> edgeCautions(SeveralAbsorbers d) {
+        JointArrangement j = d.layout().joint().orElseThrow();
+        double lower = d.layout().structure().modes().get(j.modes().get(0)).naturalFrequency();
+        double upper = d.layout().structure().modes().get(j.modes().get(1)).naturalFrequency();
+        double edge = Math.sqrt(lower * upper);
+        List<String> out = new ArrayList<>();
+        for (int a = 0; a < d.absorbers().size(); a++) {
+            if (Math.abs(d.absorbers().get(a).frequency() / edge - 1) < 1e-9) {
+                out.add("One absorber per mode: absorber " + (a + 1) + " (mode " + modeName(d, a) + ") is tuned to the"
+                        + " edge of its mode's neighbourhood (" + ValueText.frequency(edge) + ", the geometric mean of the"
+                        + " two modes' natural frequencies): the joint design would rather move it further, toward"
+                        + " the other mode, where it would serve that mode instead (docs/several-modes.md).");
+            }
+        }
+        return out;
+    }
+
+    /**
+     * @param d one absorber per mode
+     * @param a the absorber's index
+     * @return its mode, its point and whether the program chose the point, as fields of its row
+     */
+    static List<Field> modeAndPoint(SeveralAbsorbers d, int a) {
+        JointArrangement j = d.layout().joint().orElseThrow();
+        boolean chosen = j.pointsChosen().get(a);
+        return List.of(new Field(ReportKey.ITEM_MODE, "mode", new Words(modeName(d, a), List.of())),
+                new Field(ReportKey.ITEM_AT_POINT, "at", new Words(j.points().get(a), List.of())),
+                new Field(ReportKey.ITEM_POINT_CHOSEN, "point", new Flag(chosen, chosen
+                        ? "chosen: the mode's largest shape value" : "given")));
+    }
+
+    /**
+     * @param d one absorber per mode
+     * @return the sequential design's absorbers, its peak and the gain of the joint design
+     */
+    static List<ReportRow> sequentialRows(SeveralAbsorbers d) {
+        SeveralAbsorbers.Sequential s = d.joint().orElseThrow();
+        List<ReportRow> rows = new ArrayList<>();
+        for (int a = 0; a < s.absorbers().size(); a++) {
+            PointAbsorber absorber = s.absorbers().get(a);
+            List<Field> fields = new ArrayList<>(modeAndPoint(d, a));
+            fields.addAll(SeveralAbsorbersContent.absorberFields(absorber));
+            rows.add(SeveralAbsorbersContent.row(ReportKey.SEVERAL_SEQUENTIAL_ABSORBER, "sequential absorber " + (a + 1),
+                    new Fields("", fields), SOURCE));
+        }
+        rows.add(SeveralAbsorbersContent.row(ReportKey.SEVERAL_SEQUENTIAL_PEAK, "peak over the band, sequential design",
+                DesignContent.quantity(s.peak(), Dimension.LENGTH), SOURCE));
+        rows.add(SeveralAbsorbersContent.row(ReportKey.SEVERAL_JOINT_GAIN, "gain of the joint design (sequential peak"
+                + " / joint peak)", DesignContent.quantity(d.jointGain().orElseThrow(), Dimension.RATIO), ""));
+        return rows;
+    }
+
+    /**
+     * @param d one absorber per mode
+     * @return the certificate's status in words: certified, or not found with the best design seen
+     */
+    static ReportRow status(SeveralAbsorbers d) {
+        return SeveralAbsorbersContent.row(ReportKey.SEVERAL_STATUS, "joint optimum", new Words(d.certified()
+                ? "certified" : "not found: the best design seen is shown", List.of(d.certified() ? "certified"
+                        : "not found")), "docs/several-modes.md, the certificate");
+    }
+
+    private static String modeName(SeveralAbsorbers d, int a) {
+        return d.layout().modeNames().get(d.layout().joint().orElseThrow().modes().get(a));
+    }
+}
