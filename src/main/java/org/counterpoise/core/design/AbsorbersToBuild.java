@@ -12,13 +12,14 @@ import org.counterpoise.core.response.ResponsePeak;
 import org.counterpoise.core.system.AbsorberPeak;
 import org.counterpoise.core.system.ModalPeak;
 import org.counterpoise.core.system.ModalSystem;
+import org.counterpoise.core.system.Mode;
 import org.counterpoise.core.system.PointAbsorber;
 
 /**
  * Each absorber of a set as a workshop builds it (the sheet's "absorbers to build"):
  * <ul>
  *   <li>its own single design: the absorber of its own mass, tuning and damping on the target mode at
- *       the absorbers' point ({@link Designer#ofTuning}), whose parts are sized with the same
+ *       the absorbers' point (with one absorber per mode, on its own mode at its own point: {@link #ownMode}) ({@link Designer#ofTuning}), whose parts are sized with the same
  *       realisation code as any design, with the strokes, forces and clearance it has WITHIN THE SET
  *       on the whole structure ({@link AbsorberPeak}: its stroke in the band and from rest to the
  *       top of the band, its spring's, damper's and total force in the band). Its figures alone on
@@ -61,7 +62,7 @@ public record AbsorbersToBuild(SeveralAbsorbers set, List<Built> absorbers) {
      * One absorber of the set.
      *
      * @param absorber its mass, spring and damper at its point
-     * @param design its own design: this absorber alone on the target mode, with the tolerance within
+     * @param design its own design: this absorber alone on the target mode (or its own mode), with the tolerance within
      *     the set as its absorber tolerance (what its parts are sized from)
      * @param toleranceInSet the tolerated factors on its own frequency within the set
      * @param damperVelocity the largest relative velocity across its damper within the set, over the band
@@ -78,11 +79,12 @@ public record AbsorbersToBuild(SeveralAbsorbers set, List<Built> absorbers) {
      * @return every absorber to build with its own design and tolerance within the set
      */
     public static AbsorbersToBuild of(DesignResult design, SeveralAbsorbers set) {
-        DesignStudy study = design.study().withCriterion(Optional.empty());
-        Structure structure = study.structure();
+        DesignStudy targetStudy = design.study().withCriterion(Optional.empty());
         List<Built> out = new ArrayList<>();
         for (int j = 0; j < set.absorbers().size(); j++) {
             PointAbsorber a = set.absorbers().get(j);
+            DesignStudy study = ownMode(set.layout(), j).map(targetStudy::withStructure).orElse(targetStudy);
+            Structure structure = study.structure();
             MistuningRange tolerance = toleranceInSet(set, j);
             double w = a.frequency();
             // mu_j = m_j / (effective mass of the mode at the point), f_j = omega_j / omega_r,
@@ -95,6 +97,24 @@ public record AbsorbersToBuild(SeveralAbsorbers set, List<Built> absorbers) {
             out.add(new Built(a, own, tolerance, damperVelocity(set, j)));
         }
         return new AbsorbersToBuild(set, out);
+    }
+
+    /**
+     * @param layout the set's layout
+     * @param j an absorber
+     * @return with one absorber per mode, absorber j's own mode as seen at its own point (effective mass
+     *     m_r / phi_r(p)^2, the mode's frequency and damping: the single-mode reduction of {@link Structure}),
+     *     so that its own design, tuning ratio and procedure refer to the mode it is tuned to; empty when
+     *     every absorber sits on the target mode
+     */
+    static Optional<Structure> ownMode(AbsorberLayout layout, int j) {
+        return layout.joint().map(joint -> {
+            Mode mode = layout.structure().modes().get(joint.modes().get(j));
+            double shape = mode.shapeAt(joint.points().get(j));
+            double mass = mode.modalMass() / (shape * shape);
+            double w = mode.naturalFrequency();
+            return new Structure(mass, mass * w * w, mode.dampingRatio(), 1.0);
+        });
     }
 
     /**
@@ -152,8 +172,19 @@ public record AbsorbersToBuild(SeveralAbsorbers set, List<Built> absorbers) {
                 peak(system, layout, set, j, AbsorberPeak.Quantity.SPRING_FORCE, low, high),
                 peak(system, layout, set, j, AbsorberPeak.Quantity.DAMPER_FORCE, low, high),
                 peak(system, layout, set, j, AbsorberPeak.Quantity.ABSORBER_FORCE, low, high),
-                d.coupledNaturalFrequencies(), d.stiffnessDetuning(), d.massDetuning(), set.structureTolerance(),
+                d.coupledNaturalFrequencies(), d.stiffnessDetuning(), d.massDetuning(), structureTolerance(set, j),
                 tolerance, d.warnings(), d.activeConstraint(), runUp, d.acceptance(), d.afterWorstCase());
+    }
+
+    /**
+     * The range of its mode's natural frequency the set holds, for absorber j's procedure: the target
+     * mode's (the set's) when every absorber is on it; with one absorber per mode, that absorber's own
+     * mode's, found by the same search on the whole structure ({@link SeveralAbsorbersDesigner#structureTolerance}).
+     */
+    private static MistuningRange structureTolerance(SeveralAbsorbers set, int j) {
+        return set.layout().joint().map(joint -> SeveralAbsorbersDesigner.structureTolerance(set.layout(),
+                joint.modes().get(j), set.absorbers(), set.band(), set.forceAmplitude(), set.peakBefore()))
+                .orElse(set.structureTolerance());
     }
 
     /** The largest relative velocity across absorber j's damper within the set, band and run-up, m/s. */

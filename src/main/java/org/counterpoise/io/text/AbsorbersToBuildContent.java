@@ -5,7 +5,9 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
 import java.util.Set;
+import org.counterpoise.core.design.AbsorberLayout;
 import org.counterpoise.core.design.AbsorbersToBuild;
+import org.counterpoise.core.design.JointArrangement;
 import org.counterpoise.core.design.RunUpStroke;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.realisation.ProcedureStep;
@@ -88,11 +90,8 @@ public final class AbsorbersToBuildContent {
      * @return the sentences under the table: what the figures are and where the tolerance comes from
      */
     public static List<String> sentences(AbsorbersToBuild b) {
-        String tuned = b.set().layout().tuning().name().toLowerCase(Locale.ROOT);
-        return List.of("Build every absorber of this table: " + b.absorbers().size() + " absorbers of equal mass at "
-                        + b.set().layout().absorberPoint() + ", tuned together (" + tuned + " tuning) on the whole"
-                        + " structure, at its response point, for " + AbsorbersToBuild.goal(b.set())
-                        + " (docs/several-modes.md).",
+        return List.of("Build every absorber of this table: " + arrangement(b) + " on the whole structure, at its"
+                        + " response point, for " + AbsorbersToBuild.goal(b.set()) + " (docs/several-modes.md).",
                 "Own frequency may be off: how far that absorber's own frequency may be from its value, the others as"
                         + " built, before the set's peak over the band rises by "
                         + ValueText.percent(DesignResult.TOLERANCE_ALLOWANCE, 2) + " (its spring rate off, its damper"
@@ -100,6 +99,23 @@ public final class AbsorbersToBuildContent {
                         + ValueText.percent(DesignResult.TOLERANCE_SEARCH, 2) + " each side). Its parts are made to"
                         + " this tolerance.",
                 "Each absorber's parts follow on its own pages, sized from that absorber's own figures.");
+    }
+
+    /** How the set is arranged, in words: equal masses on one mode, or one absorber per mode with its point. */
+    private static String arrangement(AbsorbersToBuild b) {
+        AbsorberLayout layout = b.set().layout();
+        if (layout.joint().isPresent()) {
+            JointArrangement joint = layout.joint().get();
+            List<String> each = new ArrayList<>();
+            for (int a = 0; a < joint.modes().size(); a++) {
+                each.add("absorber " + (a + 1) + " on mode " + layout.modeNames().get(joint.modes().get(a)) + " at "
+                        + joint.points().get(a));
+            }
+            return "one absorber per mode (" + String.join(", ", each) + "), each with its own mass, tuning and"
+                    + " damping, designed together";
+        }
+        return b.absorbers().size() + " absorbers of equal mass at " + layout.absorberPoint() + ", tuned together ("
+                + layout.tuning().name().toLowerCase(Locale.ROOT) + " tuning)";
     }
 
     /**
@@ -122,8 +138,14 @@ public final class AbsorbersToBuildContent {
                         DesignContent.quantity(built.design().clearance(), Dimension.LENGTH), units)
                 + "), and the tolerance on its own frequency within the set."
                 + (built.design().runUpStroke().basis() == RunUpStroke.Basis.TRANSIENT
-                        ? " Its run-up stroke is taken as if it worked alone on the target mode (the set's run-up is"
+                        ? " Its run-up stroke is taken as if it worked alone on its mode (the set's run-up is"
                                 + " not computed), and the clearance holds it." : ""));
+        AbsorberLayout layout = b.set().layout();
+        layout.joint().ifPresent(joint -> sentences.add("Absorber " + (j + 1) + " is tuned to mode "
+                + layout.modeNames().get(joint.modes().get(j)) + " at " + joint.points().get(j) + ": in its tuning"
+                + " below, \"the structure\" is that mode, "
+                + ValueText.inline(DesignContent.quantity(built.design().study().structure().naturalFrequency(),
+                        Dimension.FREQUENCY), units) + " as designed; measure that mode's natural frequency."));
         List<ReportSection> sections = new ArrayList<>();
         if (realisation.isEmpty()) {
             sentences.add(whyNot.isBlank() ? "Its hardware could not be sized with the project's hardware choices."

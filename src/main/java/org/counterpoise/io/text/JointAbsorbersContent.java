@@ -40,9 +40,9 @@ final class JointAbsorbersContent {
         return "One absorber per mode: the sections other than \"Several absorbers and modes\" (the absorber, stroke"
                 + " and forces, tolerance, method comparison, hardware, procedure) are for one absorber of the total"
                 + " mass on mode " + target + " alone, at " + d.layout().absorberPoint() + "; the other modes and the"
-                + " second absorber are in that section only. The sheet lists both absorbers to build, each at its"
-                + " own point, but its words on the set were written for absorbers on one mode (equal masses at one"
-                + " point): take each absorber's mass, point and tuning from its table or this section.";
+                + " second absorber are in that section only. The sheet lists both absorbers to build, each with its"
+                + " parts and tuning procedure on its own mode at its own point, and its strokes and forces as it works"
+                + " with the other on the whole structure.";
     }
 
     /**

@@ -3,8 +3,10 @@ package org.counterpoise.core.design;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import java.util.OptionalInt;
 import java.util.function.DoubleUnaryOperator;
 import org.counterpoise.core.model.Excitation;
@@ -117,6 +119,64 @@ class AbsorbersToBuildTest {
                 assertEquals(velocity, build.absorbers().get(j).damperVelocity(), 1e-7 * velocity, "velocity " + j);
                 assertEquals(build.absorbers().get(j).damperVelocity(), Realiser.realise(own, HardwareChoice.DEFAULT,
                         build.absorbers().get(j).damperVelocity()).damper().peakVelocity(), 0.0);
+            }
+        }
+    }
+
+    /**
+     * One absorber per mode (an invented frame: bending at 9 Hz seen at mid-span, twisting at 15 Hz seen
+     * at the corner, a third mode at 34 Hz): each absorber's own design sits on its own mode at its own
+     * point, the single-mode reduction m_r / phi_r(p)^2 (Den Hartog 1956, Mechanical Vibrations, 4th ed.,
+     * 3.3), so that its procedure's structure frequency is that mode's; and the range of that mode's
+     * frequency its procedure states ends where the dense solve of the whole structure, that mode's
+     * stiffness scaled, gives 1.1 times the nominal peak over the band.
+     */
+    @Test
+    void oneAbsorberPerModeIsBuiltOnItsOwnModeWithThatModesRange() {
+        ModalStructure frame = new ModalStructure(List.of(
+                new Mode(9.0 * HZ, 0.02, 2000, Map.of("midspan", 1.0, "corner", 0.6)),
+                new Mode(15.0 * HZ, 0.015, 700, Map.of("midspan", 0.15, "corner", 0.9)),
+                new Mode(34.0 * HZ, 0.02, 2500, Map.of("midspan", 0.25, "corner", 0.3))));
+        AbsorberLayout layout = new AbsorberLayout(frame, List.of("bending", "twisting", "sway"), "corner", "corner",
+                "midspan", OptionalInt.of(0), 2, AbsorberSetTuning.INDIVIDUAL, Optional.of(new JointArrangement(
+                        List.of(0, 1), List.of("midspan", "corner"), List.of(false, false))));
+        FrequencyBand band = new FrequencyBand(450 * HZ / 60, 1050 * HZ / 60);
+        Mode bending = frame.modes().get(0);
+        Structure one = new Structure(2000, 2000 * bending.naturalFrequency() * bending.naturalFrequency(), 0.02, 1.0);
+        DesignStudy study = new DesignStudy("invented", one, new Excitation(ExcitationKind.FORCE, 300, band),
+                ResponseKind.DISPLACEMENT, AbsorberSizing.ofMass(120), DesignMethod.EXACT_PEAK, false, 1.5);
+        DesignResult single = Designer.design(study);
+        SeveralAbsorbers set = SeveralAbsorbersDesigner.design(single, layout);
+        assertTrue(set.joint().isPresent(), "designed as one absorber per mode");
+        AbsorbersToBuild build = AbsorbersToBuild.of(single, set);
+        double nominal = densePeak(set, set.absorbers(), 20_000);
+        double limit = (1 + DesignResult.TOLERANCE_ALLOWANCE) * nominal;
+        String[] points = {"midspan", "corner"};
+        for (int j = 0; j < 2; j++) {
+            Mode mode = frame.modes().get(j);
+            DesignResult own = build.absorbers().get(j).design();
+            double shape = mode.shapeAt(points[j]);
+            assertEquals(mode.naturalFrequency(), own.study().structure().naturalFrequency(), 1e-9 * mode.naturalFrequency());
+            assertEquals(mode.modalMass() / (shape * shape), own.study().structure().effectiveMass(), 1e-9 * 2000);
+            assertEquals(set.absorbers().get(j).stiffness(), own.absorber().stiffness(), 1e-9 * own.absorber().stiffness());
+            MistuningRange range = own.structureTolerance();
+            assertTrue(range.low().isPresent() || range.high().isPresent(), "absorber " + j + ": " + range);
+            int index = j;
+            // an end beyond the search (+/-30 %) is absent: there the peak is still under the limit
+            double low = range.low().orElse(1 - DesignResult.TOLERANCE_SEARCH);
+            double high = range.high().orElse(1 + DesignResult.TOLERANCE_SEARCH);
+            for (double end : new double[] {low, high}) {
+                List<Mode> scaled = new ArrayList<>(frame.modes());
+                Mode m = frame.modes().get(index);
+                scaled.set(index, new Mode(m.naturalFrequency() * end, m.dampingRatio(), m.modalMass(), m.shape()));
+                double at = set.forceAmplitude() * DenseSweep.maximum(w -> ModalDirectSolve.solve(scaled,
+                        set.absorbers(), "corner", "corner", w)[0].abs(), band.low(), band.high(), 20_000);
+                boolean found = end == low ? range.low().isPresent() : range.high().isPresent();
+                if (found) {
+                    assertEquals(limit, at, 1e-6 * limit, "absorber " + j + "'s mode at factor " + end);
+                } else {
+                    assertTrue(at < limit, "absorber " + j + "'s mode at factor " + end + ": " + at);
+                }
             }
         }
     }
