@@ -265,6 +265,18 @@ public enum ReportKey {
     SEVERAL_SEQUENTIAL_PEAK("several_absorbers.sequential_peak_displacement_m"),
     SEVERAL_JOINT_GAIN("several_absorbers.joint_gain"),
     SEVERAL_STATUS("several_absorbers.status"),
+    // Each absorber of a set as it works within the set on the whole structure (core.design.AbsorbersToBuild):
+    // what its parts are sized from, one element of "in_set" per absorber in the absorbers[] order.
+    SEVERAL_IN_SET("several_absorbers.in_set[]"),
+    ITEM_STROKE_IN_BAND("stroke_in_band_m"),
+    ITEM_STROKE_FROM_REST("stroke_from_rest_m"),
+    ITEM_CLEARANCE("clearance_m"),
+    ITEM_SPRING_FORCE("spring_force_N"),
+    ITEM_DAMPER_FORCE("damper_force_N"),
+    ITEM_ABSORBER_FORCE("absorber_force_N"),
+    ITEM_DAMPER_VELOCITY("damper_velocity_m_per_s"),
+    ITEM_OWN_FREQUENCY_TOLERANCE("tolerated_own_frequency_factor_low", "tolerated_own_frequency_factor_high",
+            "tolerated_own_frequency_basis"),
 
     // Rows not in the design JSON.
     REVISION,

@@ -3,7 +3,10 @@ package org.counterpoise.io.text;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import java.util.Optional;
+import org.counterpoise.core.design.AbsorbersToBuild;
 import org.counterpoise.core.design.DesignResult;
+import org.counterpoise.core.design.RunUpStroke;
 import org.counterpoise.core.design.SeveralAbsorbers;
 import org.counterpoise.core.optim.AbsorberSetTuning;
 import org.counterpoise.core.system.Mode;
@@ -77,7 +80,20 @@ public final class SeveralAbsorbersContent {
      * @return the report with the section after the response (or at the end) and the cautions
      */
     public static ReportContent with(ReportContent content, SeveralAbsorbers d) {
-        ReportSection section = new ReportSection(SectionId.SEVERAL_ABSORBERS, "Several absorbers and modes", rows(d));
+        return with(content, d, Optional.empty());
+    }
+
+    /**
+     * @param content a design's report
+     * @param d the several absorbers designed for the same project
+     * @param built each absorber of the set as it works within the set (its strokes, forces, clearance,
+     *     damper velocity and tolerance on its own frequency: what its parts are sized from), a row each
+     *     after the peaks; empty for none (the sheet gives them on each absorber's pages)
+     * @return the report with the section after the response (or at the end) and the cautions
+     */
+    public static ReportContent with(ReportContent content, SeveralAbsorbers d, Optional<AbsorbersToBuild> built) {
+        ReportSection section = new ReportSection(SectionId.SEVERAL_ABSORBERS, "Several absorbers and modes",
+                rows(d, built));
         List<ReportSection> sections = new ArrayList<>();
         boolean placed = false;
         for (ReportSection s : content.sections()) {
@@ -115,7 +131,7 @@ public final class SeveralAbsorbersContent {
                 content.units());
     }
 
-    private static List<ReportRow> rows(SeveralAbsorbers d) {
+    private static List<ReportRow> rows(SeveralAbsorbers d, Optional<AbsorbersToBuild> built) {
         String source = "exact response of the structure's modes with the absorbers (docs/several-modes.md)";
         List<ReportRow> rows = new ArrayList<>();
         int n = d.absorbers().size();
@@ -150,6 +166,7 @@ public final class SeveralAbsorbersContent {
             rows.add(row(ReportKey.SEVERAL_ABSORBER, "absorber " + (j + 1), new Fields("", fields), joint
                     ? "designed jointly, the whole structure seen (docs/several-modes.md)" : source));
         }
+        built.ifPresent(b -> rows.addAll(inSetRows(b)));
         rows.add(row(ReportKey.SEVERAL_PEAKS, joint ? "peak displacement over the band (jointly designed)"
                 : "peak displacement over the band", new Pair(
                 DesignContent.quantity(d.peakBefore(), Dimension.LENGTH),
@@ -192,6 +209,42 @@ public final class SeveralAbsorbersContent {
                 d.certified() ? "yes" : "NO"), n == 1 ? "the design above" : "docs/several-modes.md, the certificate"));
         if (joint) {
             rows.add(JointAbsorbersContent.status(d));
+        }
+        return rows;
+    }
+
+    /**
+     * Each absorber as it works within the set on the whole structure, from rest to the top of the band
+     * and in the band: the figures its parts are sized from (docs/several-modes.md, "absorbers to build").
+     */
+    private static List<ReportRow> inSetRows(AbsorbersToBuild b) {
+        List<ReportRow> rows = new ArrayList<>();
+        for (int j = 0; j < b.absorbers().size(); j++) {
+            AbsorbersToBuild.Built built = b.absorbers().get(j);
+            DesignResult own = built.design();
+            List<Field> fields = List.of(
+                    new Field(ReportKey.ITEM_STROKE_IN_BAND, "stroke in band", DesignContent.quantity(
+                            own.strokeInBand().value(), Dimension.LENGTH)),
+                    new Field(ReportKey.ITEM_STROKE_FROM_REST, "from rest", DesignContent.quantity(
+                            own.strokeRunUp().value(), Dimension.LENGTH)),
+                    new Field(ReportKey.ITEM_CLEARANCE, "clearance", DesignContent.quantity(own.clearance(),
+                            Dimension.LENGTH)),
+                    new Field(ReportKey.ITEM_SPRING_FORCE, "spring force", DesignContent.quantity(
+                            own.springForce().value(), Dimension.FORCE)),
+                    new Field(ReportKey.ITEM_DAMPER_FORCE, "damper force", DesignContent.quantity(
+                            own.damperForce().value(), Dimension.FORCE)),
+                    new Field(ReportKey.ITEM_ABSORBER_FORCE, "total force", DesignContent.quantity(
+                            own.absorberForce().value(), Dimension.FORCE)),
+                    new Field(ReportKey.ITEM_DAMPER_VELOCITY, "damper velocity", DesignContent.quantity(
+                            built.damperVelocity(), Dimension.VELOCITY)),
+                    new Field(ReportKey.ITEM_OWN_FREQUENCY_TOLERANCE, "own frequency may be off by",
+                            new Tolerance(built.toleranceInSet(), 1)));
+            rows.add(row(ReportKey.SEVERAL_IN_SET, "absorber " + (j + 1) + " within the set", new Fields("", fields),
+                    "peaks with every absorber on the whole structure; the clearance is the stroke margin times the"
+                            + " larger stroke" + (own.runUpStroke().basis() == RunUpStroke.Basis.TRANSIENT
+                                    ? " or the absorber's transient run-up stroke" : "")
+                            + "; its own frequency off with the others as built, the set's peak up by "
+                            + ValueText.percent(DesignResult.TOLERANCE_ALLOWANCE, 2)));
         }
         return rows;
     }

@@ -5,6 +5,7 @@ import java.util.Optional;
 import java.util.concurrent.Callable;
 import org.counterpoise.core.criteria.AmplitudeConvention;
 import org.counterpoise.core.design.DesignDossier;
+import org.counterpoise.core.design.AbsorbersToBuild;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.MethodComparison;
 import org.counterpoise.core.design.SeveralAbsorbers;
@@ -64,7 +65,9 @@ public final class DesignCommand implements Callable<Integer> {
         // several modes or absorbers (format 6): their own section; a project of one of each has none
         Optional<SeveralAbsorbers> several = SeveralModes.layout(loaded.project())
                 .map(layout -> SeveralAbsorbersDesigner.design(result, layout));
-        ReportContent content = several.map(d -> SeveralAbsorbersContent.with(withHardware, d)).orElse(withHardware)
+        // each absorber of a set as it works within the set: the figures its parts are sized from
+        ReportContent content = several.map(d -> SeveralAbsorbersContent.with(withHardware, d, d.absorbers().size() > 1
+                ? Optional.of(AbsorbersToBuild.of(result, d)) : Optional.empty())).orElse(withHardware)
                 .shownIn(DisplayConvention.of(convention, loaded.project()));
         // the report's other sections are for one absorber of the total mass: said first, not only in the cautions
         String first = several.isPresent() && !json ? "Note: this project has several modes or absorbers. The"

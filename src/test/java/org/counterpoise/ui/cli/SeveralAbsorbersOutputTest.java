@@ -9,9 +9,13 @@ import com.google.gson.JsonObject;
 import com.google.gson.JsonParser;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.function.DoubleUnaryOperator;
 import org.apache.pdfbox.Loader;
 import org.apache.pdfbox.pdmodel.PDDocument;
 import org.apache.pdfbox.text.PDFTextStripper;
+import org.counterpoise.core.design.AbsorberLayout;
 import org.counterpoise.core.design.Designer;
 import org.counterpoise.core.design.SeveralAbsorbers;
 import org.counterpoise.core.design.SeveralAbsorbersDesigner;
@@ -20,6 +24,8 @@ import org.counterpoise.io.project.Project;
 import org.counterpoise.io.project.ProjectReader;
 import org.counterpoise.io.project.SeveralModes;
 import org.counterpoise.io.text.SeveralAbsorbersContent;
+import org.counterpoise.testing.DenseSweep;
+import org.counterpoise.testing.ModalDirectSolve;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -79,6 +85,55 @@ class SeveralAbsorbersOutputTest {
         assertTrue(text.out().contains("Several absorbers and modes"), text.out());
         assertTrue(text.out().contains("near mode twisting"), text.out());
         assertTrue(text.out().contains("gain of the split"), text.out());
+    }
+
+    /**
+     * Each absorber's figures within the set ({@code in_set}) against an independent route: the
+     * equations of motion of the whole structure with the absorbers the JSON gives, solved as a dense
+     * complex system by Commons Math's LU ({@link ModalDirectSolve}), swept densely and refined by golden
+     * section ({@link DenseSweep}), to 1e-7: the stroke's peak over the band and from rest, the spring
+     * force k |stroke|, the damper force c omega |stroke|, the damper velocity omega |stroke|, and the
+     * clearance, the stroke margin (1.5 in the preset) times the larger stroke.
+     */
+    @Test
+    void theJsonGivesEachAbsorbersFiguresWithinTheSet() {
+        Project p = ProjectReader.read(Path.of(GALLERY)).project();
+        AbsorberLayout layout = SeveralModes.layout(p).orElseThrow();
+        SeveralAbsorbers core = SeveralAbsorbersDesigner.design(Designer.design(p.toStudy()), layout);
+        CliTest.Run json = CliTest.run("design", "--json", GALLERY);
+        assertEquals(0, json.code(), json.err());
+        JsonObject s = JsonParser.parseString(json.out()).getAsJsonObject().getAsJsonObject("several_absorbers");
+        JsonArray absorbers = s.getAsJsonArray("absorbers");
+        JsonArray inSet = s.getAsJsonArray("in_set");
+        assertEquals(absorbers.size(), inSet.size());
+        List<PointAbsorber> given = new ArrayList<>();
+        for (int j = 0; j < absorbers.size(); j++) {
+            JsonObject o = absorbers.get(j).getAsJsonObject();
+            given.add(new PointAbsorber(layout.absorberPoint(), o.get("mass_kg").getAsDouble(),
+                    o.get("stiffness_N_per_m").getAsDouble(), o.get("damping_Ns_per_m").getAsDouble()));
+        }
+        double low = core.band().low();
+        double high = core.band().high();
+        for (int j = 0; j < given.size(); j++) {
+            int index = j;
+            PointAbsorber a = given.get(j);
+            JsonObject o = inSet.get(j).getAsJsonObject();
+            DoubleUnaryOperator stroke = w -> core.forceAmplitude() * ModalDirectSolve.solve(layout.structure().modes(),
+                    given, layout.excitationPoint(), layout.responsePoint(), w)[1 + index].abs();
+            double inBand = DenseSweep.maximum(stroke, low, high, 20_000);
+            double fromRest = DenseSweep.maximum(stroke, 0.0, high, 20_000);
+            assertEquals(inBand, o.get("stroke_in_band_m").getAsDouble(), 1e-7 * inBand, "absorber " + j);
+            assertEquals(fromRest, o.get("stroke_from_rest_m").getAsDouble(), 1e-7 * fromRest, "absorber " + j);
+            assertEquals(1.5 * Math.max(inBand, fromRest), o.get("clearance_m").getAsDouble(), 1e-7 * fromRest);
+            double spring = DenseSweep.maximum(w -> a.stiffness() * stroke.applyAsDouble(w), low, high, 20_000);
+            assertEquals(spring, o.get("spring_force_N").getAsDouble(), 1e-7 * spring, "absorber " + j);
+            double damper = DenseSweep.maximum(w -> a.damping() * w * stroke.applyAsDouble(w), low, high, 20_000);
+            assertEquals(damper, o.get("damper_force_N").getAsDouble(), 1e-7 * damper, "absorber " + j);
+            double velocity = DenseSweep.maximum(w -> w * stroke.applyAsDouble(w), 0.0, high, 20_000);
+            assertEquals(velocity, o.get("damper_velocity_m_per_s").getAsDouble(), 1e-7 * velocity, "absorber " + j);
+            double lowFactor = o.get("tolerated_own_frequency_factor_low").getAsDouble();
+            assertTrue(lowFactor > 0.8 && lowFactor < 1.0, "a tolerance below its own frequency: " + lowFactor);
+        }
     }
 
     @Test
