@@ -3,6 +3,8 @@ package org.counterpoise.core.commission;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
+import java.util.Optional;
+import java.util.OptionalInt;
 import org.counterpoise.core.design.AbsorberLayout;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.SeveralAbsorbers;
@@ -11,6 +13,7 @@ import org.counterpoise.core.error.Checks;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.identify.MeasuredFrf;
 import org.counterpoise.core.model.FrequencyBand;
+import org.counterpoise.core.realisation.TrimPlan;
 import org.counterpoise.core.system.ModalPeak;
 import org.counterpoise.core.system.ModalStructure;
 import org.counterpoise.core.system.ModalSystem;
@@ -64,9 +67,25 @@ public record SetCommissioning(AsBuiltSet built, List<Correction> corrections, L
      *     0 when no trim is advised
      * @param designDampingRatio its design's damping ratio
      * @param dampingOff zeta_built / zeta_design - 1 (0 for an undamped design)
+     * @param platesToAdd with its trim plates known and a trim advised: the whole plates to add (negative:
+     *     to take off), the nearest to the mass to add within the plates supplied and fitted; else empty
+     * @param plateMass one of its trim plates, kg (0 when its plates are not known)
+     * @param beyondTrimRange whether even every plate supplied (or none) leaves it further from its target
+     *     than its part tolerance on frequency
      */
     public record Correction(double designFrequency, double targetFrequency, double frequencyOff, double massToAdd,
-            double designDampingRatio, double dampingOff) {
+            double designDampingRatio, double dampingOff, OptionalInt platesToAdd, double plateMass,
+            boolean beyondTrimRange) {
+    }
+
+    /**
+     * An absorber's trim plates as supplied ({@link TrimPlan}) and the part tolerance on its own frequency
+     * ({@link org.counterpoise.core.realisation.PartTolerances#absorberFrequency}), from its hardware.
+     *
+     * @param plan its trim plates
+     * @param frequencyTolerance the fraction its own frequency may be off
+     */
+    public record Plates(TrimPlan plan, double frequencyTolerance) {
     }
 
     /** Weighed masses further than this factor from the design's are refused: another absorber needs a design. */
@@ -81,6 +100,28 @@ public record SetCommissioning(AsBuiltSet built, List<Correction> corrections, L
      */
     public static SetCommissioning of(SeveralAbsorbers design, MeasuredFrf measured, boolean freeStructure,
             List<Double> weighed) {
+        return of(design, measured, freeStructure, weighed, List.of());
+    }
+
+    /**
+     * The check with each absorber's trim plates: a trim is a whole number of plates within those supplied
+     * and fitted (the mass after the trim, and the peak after it, are those of the plates), as the single
+     * absorber's {@link TrimCorrection}; {@link CommissioningWarning#BEYOND_TRIM_RANGE} when an absorber's
+     * plates cannot bring it within its part tolerance of its target.
+     *
+     * @param design the several absorbers as designed
+     * @param measured the driving-point FRF at their point with all of them fitted
+     * @param freeStructure whether to fit the target mode's natural frequency too
+     * @param weighed each absorber's mass as weighed (kg, in the design's order), or an empty list for the design's
+     * @param plates each absorber's plates in the design's order (empty for one whose hardware is not sized),
+     *     or an empty list for none known (the trims are then masses)
+     * @return the check
+     */
+    public static SetCommissioning of(SeveralAbsorbers design, MeasuredFrf measured, boolean freeStructure,
+            List<Double> weighed, List<Optional<Plates>> plates) {
+        if (!plates.isEmpty() && plates.size() != design.absorbers().size()) {
+            throw new IllegalArgumentException("bug: one trim plan per absorber");
+        }
         List<PointAbsorber> designed = design.absorbers();
         List<PointAbsorber> held = held(designed, weighed);
         AbsorberLayout layout = design.layout();
@@ -99,13 +140,20 @@ public record SetCommissioning(AsBuiltSet built, List<Correction> corrections, L
         List<PointAbsorber> asBuilt = new ArrayList<>();
         List<PointAbsorber> trimmed = new ArrayList<>();
         double[] massToAdd = new double[designed.size()];
+        List<PlateTrim> plateTrims = new ArrayList<>();
         for (int j = 0; j < designed.size(); j++) {
             AsBuiltSet.Built b = built.absorbers().get(j);
-            double ratio = b.frequency() / targets.get(j).frequency();
+            double targetFrequency = targets.get(j).frequency();
+            double ratio = b.frequency() / targetFrequency;
             massToAdd[j] = b.mass() * (ratio * ratio - 1.0);
             PointAbsorber now = PointAbsorber.tuned(designed.get(j).point(), b.mass(), b.frequency(), b.dampingRatio());
             asBuilt.add(now);
-            trimmed.add(new PointAbsorber(now.point(), b.mass() + massToAdd[j], now.stiffness(), now.damping()));
+            double toAdd = massToAdd[j];
+            Optional<PlateTrim> plateTrim = plates.isEmpty() ? Optional.empty()
+                    : plates.get(j).map(p -> PlateTrim.of(p, b.mass(), b.frequency(), targetFrequency, toAdd));
+            plateTrims.add(plateTrim.orElse(null));
+            double added = plateTrim.map(PlateTrim::mass).orElse(massToAdd[j]);
+            trimmed.add(new PointAbsorber(now.point(), b.mass() + added, now.stiffness(), now.damping()));
         }
         FrequencyBand band = design.band();
         double force = design.forceAmplitude();
@@ -116,18 +164,45 @@ public record SetCommissioning(AsBuiltSet built, List<Correction> corrections, L
             warnings.add(CommissioningWarning.TRIM_DOES_NOT_HELP);
             advised = false;
         }
+        if (!warnings.contains(CommissioningWarning.POOR_FIT)
+                && plateTrims.stream().anyMatch(t -> t != null && t.beyondRange())) {
+            warnings.add(CommissioningWarning.BEYOND_TRIM_RANGE);
+        }
         List<Correction> corrections = new ArrayList<>();
         for (int j = 0; j < designed.size(); j++) {
             PointAbsorber d = designed.get(j);
             AsBuiltSet.Built b = built.absorbers().get(j);
             double designZeta = d.damping() / (2 * d.mass() * d.frequency());
             double targetFrequency = targets.get(j).frequency();
+            PlateTrim t = plateTrims.get(j);
+            boolean fitGood = !warnings.contains(CommissioningWarning.POOR_FIT);
             corrections.add(new Correction(d.frequency(), targetFrequency, b.frequency() / targetFrequency - 1.0,
                     advised ? massToAdd[j] : 0.0, designZeta,
-                    designZeta > 0 ? b.dampingRatio() / designZeta - 1.0 : 0.0));
+                    designZeta > 0 ? b.dampingRatio() / designZeta - 1.0 : 0.0,
+                    advised && t != null ? OptionalInt.of(t.plates()) : OptionalInt.empty(),
+                    plates.isEmpty() ? 0.0 : plates.get(j).map(p -> p.plan().plateMass()).orElse(0.0),
+                    fitGood && t != null && t.beyondRange()));
         }
         return new SetCommissioning(built, corrections, warnings, advised, design.peakAfter(), asBuiltPeak,
                 advised ? afterTrim : asBuiltPeak, asBuiltPeak > design.peakAfter() * (1 + DesignResult.TOLERANCE_ALLOWANCE));
+    }
+
+    /**
+     * A trim in whole plates: the nearest whole number to the mass to add, within the plates spare (to
+     * add) and fitted (to take off); beyond the range when the plates were short and even the last of
+     * them leaves the frequency further from the target than the part tolerance (as {@link TrimCorrection}).
+     */
+    private record PlateTrim(int plates, double mass, boolean beyondRange) {
+        static PlateTrim of(Plates p, double mass, double frequency, double target, double massToAdd) {
+            TrimPlan plan = p.plan();
+            int wanted = (int) Math.round(massToAdd / plan.plateMass());
+            int spare = plan.platesTotal() - plan.platesFitted();
+            int n = Math.max(-plan.platesFitted(), Math.min(spare, wanted));
+            double added = n * plan.plateMass();
+            // omega = sqrt(k / m) at the spring rate as built: the frequency with n plates more
+            double after = frequency * Math.sqrt(mass / (mass + added)) / target - 1.0;
+            return new PlateTrim(n, added, n != wanted && Math.abs(after) > p.frequencyTolerance());
+        }
     }
 
     /** The masses the fit holds: the design's, or each as weighed (within a factor of 2 of its design's). */

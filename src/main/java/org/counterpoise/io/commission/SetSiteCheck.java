@@ -2,6 +2,7 @@ package org.counterpoise.io.commission;
 
 import java.nio.file.Path;
 import java.util.List;
+import java.util.Optional;
 import java.util.function.UnaryOperator;
 import org.counterpoise.core.commission.SetCommissioning;
 import org.counterpoise.core.design.SeveralAbsorbers;
@@ -36,15 +37,17 @@ public record SetSiteCheck(String project, SeveralAbsorbers design, String file,
      * @param lines which of its lines to use (the identity for all)
      * @param freeStructure whether to fit the target mode's frequency too
      * @param weighed each absorber's mass as weighed, kg, or empty for the design's
+     * @param plates each absorber's trim plates (empty where its hardware is not sized)
      * @param units the display unit system
      * @return the check
      */
     public static SetSiteCheck run(String project, SeveralAbsorbers design, Path file, FrfUnit unit,
-            UnaryOperator<MeasuredFrf> lines, boolean freeStructure, List<Double> weighed, UnitSystem units) {
+            UnaryOperator<MeasuredFrf> lines, boolean freeStructure, List<Double> weighed,
+            List<Optional<SetCommissioning.Plates>> plates, UnitSystem units) {
         MeasuredFrf measured = lines.apply(FrfCsv.read(file, unit));
         try {
             return new SetSiteCheck(project, design, file.toString(), unit,
-                    SetCommissioning.of(design, measured, freeStructure, weighed), !weighed.isEmpty(), units);
+                    SetCommissioning.of(design, measured, freeStructure, weighed, plates), !weighed.isEmpty(), units);
         } catch (InvalidInputException e) {
             throw e.renamed(file + " (" + e.field() + ")");
         }

@@ -9,6 +9,7 @@ import static org.counterpoise.io.commission.SiteCheckKey.ADVISED;
 import static org.counterpoise.io.commission.SiteCheckKey.AFTER_TRIM;
 import static org.counterpoise.io.commission.SiteCheckKey.AS_BUILT;
 import static org.counterpoise.io.commission.SiteCheckKey.BAND_PEAK;
+import static org.counterpoise.io.commission.SiteCheckKey.BEYOND_TRIM_RANGE;
 import static org.counterpoise.io.commission.SiteCheckKey.DAMPING;
 import static org.counterpoise.io.commission.SiteCheckKey.DAMPING_OFF;
 import static org.counterpoise.io.commission.SiteCheckKey.DAMPING_SD;
@@ -21,6 +22,7 @@ import static org.counterpoise.io.commission.SiteCheckKey.FREQUENCY_OFF;
 import static org.counterpoise.io.commission.SiteCheckKey.FRF_KIND;
 import static org.counterpoise.io.commission.SiteCheckKey.LINES;
 import static org.counterpoise.io.commission.SiteCheckKey.MASS_TO_ADD;
+import static org.counterpoise.io.commission.SiteCheckKey.PLATES_TO_ADD;
 import static org.counterpoise.io.commission.SiteCheckKey.NORMALISED_RESIDUAL;
 import static org.counterpoise.io.commission.SiteCheckKey.OPERATING;
 import static org.counterpoise.io.commission.SiteCheckKey.PROJECT;
@@ -94,6 +96,12 @@ public final class SetSiteCheckJson {
             } else {
                 one.add(MASS_TO_ADD.key(), JsonNull.INSTANCE);
             }
+            if (k.platesToAdd().isPresent()) {
+                one.addProperty(PLATES_TO_ADD.key(), k.platesToAdd().getAsInt());
+            } else {
+                one.add(PLATES_TO_ADD.key(), JsonNull.INSTANCE);
+            }
+            one.addProperty(BEYOND_TRIM_RANGE.key(), k.beyondTrimRange());
             absorbers.add(one);
         }
         set.add(ABSORBERS.key(), absorbers);

@@ -32,6 +32,24 @@ public final class SetSiteCheckReport {
     private SetSiteCheckReport() {
     }
 
+    /** The trim of one absorber: whole plates when its plates are known, else the mass to add or take off. */
+    private static String trim(SetCommissioning.Correction k, double absorberMass, UnitSystem units) {
+        double m = k.massToAdd();
+        String mass = DisplayUnits.format(Math.abs(m), Dimension.MASS, units);
+        String beyond = k.beyondTrimRange() ? "; the plates supplied are not enough: see the warning" : "";
+        if (k.platesToAdd().isPresent()) {
+            int plates = k.platesToAdd().getAsInt();
+            int n = Math.abs(plates);
+            return plates == 0 ? "none: no whole plate brings it nearer (" + (m >= 0 ? "add " : "take off ") + mass
+                    + " would)" + beyond : (plates > 0 ? "add " : "take off ") + n + " trim plate" + (n == 1 ? "" : "s")
+                    + " of " + DisplayUnits.format(k.plateMass(), Dimension.MASS, units) + " (" + (m >= 0 ? "add "
+                    : "take off ") + mass + " would bring it exactly to its frequency; spring and damper kept" + beyond
+                    + ")";
+        }
+        return Math.abs(m) < 5e-7 * absorberMass ? "none"
+                : (m > 0 ? "add " : "take off ") + mass + " of trim mass (spring and damper kept)";
+    }
+
     /**
      * @param check the site check
      * @return the report
@@ -68,10 +86,7 @@ public final class SetSiteCheckReport {
                     + QuantityFormat.number(100 * a.dampingRatioSd(), 2) + " % (design " + percent(k.designDampingRatio())
                     + (k.designDampingRatio() > 0 ? "; relative change " + signedPercent(k.dampingOff()) : "") + ")");
             if (advised) {
-                double m = k.massToAdd();
-                line(b, name + ": trim", Math.abs(m) < 5e-7 * a.mass() ? "none"
-                        : (m > 0 ? "add " : "take off ") + DisplayUnits.format(Math.abs(m), Dimension.MASS, units)
-                                + " of trim mass (spring and damper kept)");
+                line(b, name + ": trim", trim(k, a.mass(), units));
             }
         }
         Dimension length = Dimension.LENGTH;

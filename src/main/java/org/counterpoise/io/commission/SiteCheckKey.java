@@ -40,6 +40,7 @@ enum SiteCheckKey {
     FREQUENCY_TOLERANCE("frequency_tolerance"),
     IN_TOLERANCE("frequency_in_tolerance"),
     PLATES_TO_ADD("plates_to_add"),
+    BEYOND_TRIM_RANGE("beyond_trim_range"),
     PLATE_MASS("plate_mass_kg"),
     FREQUENCY_OFF_AFTER("frequency_off_after_trim"),
     DAMPING_OFF("damping_off"),

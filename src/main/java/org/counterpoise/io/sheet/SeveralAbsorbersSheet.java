@@ -8,11 +8,9 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
 import org.counterpoise.core.design.AbsorbersToBuild;
-import org.counterpoise.core.error.CoreException;
 import org.counterpoise.core.realisation.HardwareChoice;
 import org.counterpoise.core.realisation.Realisation;
-import org.counterpoise.core.realisation.Realiser;
-import org.counterpoise.core.realisation.SpringKind;
+import org.counterpoise.core.realisation.SetAbsorberHardware;
 import org.counterpoise.io.text.AbsorbersToBuildContent;
 import org.counterpoise.io.text.ReportContent;
 import org.counterpoise.io.text.ReportSection;
@@ -103,16 +101,14 @@ record SeveralAbsorbersSheet(List<SheetBlock> blocks, List<String> warnings) {
      * replace the tuning the set needs.
      */
     private static Sized realisation(AbsorbersToBuild.Built built, HardwareChoice hardware) {
-        if (hardware.springKind() == SpringKind.ELASTOMER) {
-            return new Sized(Optional.empty(), "An elastomer element is not sized for an absorber of a set: its"
-                    + " own optimum tuning, that of the absorber alone, would replace the tuning the set needs."
-                    + " Choose helical springs and a damper for a set.");
-        }
-        try {
-            return new Sized(Optional.of(Realiser.realise(built.design(), hardware, built.damperVelocity())), "");
-        } catch (CoreException unrealisable) {
-            return new Sized(Optional.empty(), "Its hardware could not be sized with the project's hardware"
-                    + " choices: " + unrealisable.getMessage());
-        }
+        SetAbsorberHardware h = SetAbsorberHardware.of(built, hardware);
+        return new Sized(h.realisation(), switch (h.notSized()) {
+            case NONE -> "";
+            case ELASTOMER_IN_SET -> "An elastomer element is not sized for an absorber of a set: its own optimum"
+                    + " tuning, that of the absorber alone, would replace the tuning the set needs. Choose helical"
+                    + " springs and a damper for a set.";
+            case UNREALISABLE -> "Its hardware could not be sized with the project's hardware choices: "
+                    + h.failure().orElseThrow().getMessage();
+        });
     }
 }

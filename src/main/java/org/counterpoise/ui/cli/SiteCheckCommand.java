@@ -2,6 +2,7 @@ package org.counterpoise.ui.cli;
 
 import java.io.PrintWriter;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 import java.util.OptionalDouble;
@@ -20,6 +21,9 @@ import org.counterpoise.core.realisation.Realiser;
 import org.counterpoise.core.units.Unit;
 import org.counterpoise.io.PlainText;
 import org.counterpoise.io.chart.SiteCheckCharts;
+import org.counterpoise.core.design.AbsorbersToBuild;
+import org.counterpoise.core.commission.SetCommissioning;
+import org.counterpoise.core.realisation.SetAbsorberHardware;
 import org.counterpoise.io.commission.SetSiteCheck;
 import org.counterpoise.io.commission.SetSiteCheckJson;
 import org.counterpoise.io.commission.SetSiteCheckReport;
@@ -148,7 +152,7 @@ public final class SiteCheckCommand implements Callable<Integer> {
                     + " mode for site-check: one absorber per mode is not yet checked against a measurement");
         }
         if (layout.isPresent()) {
-            return several(loaded, SeveralAbsorbersDesigner.design(design, layout.get()));
+            return several(loaded, design, SeveralAbsorbersDesigner.design(design, layout.get()));
         }
         Realisation realisation = Realiser.realisation(dossier, loaded.project().hardware());
         Optional<SiteCheckRun.OperatingInput> op = Optional.empty();
@@ -187,7 +191,7 @@ public final class SiteCheckCommand implements Callable<Integer> {
     }
 
     /** Several modes or absorbers (format 6): the response with them fitted, each absorber as built. */
-    private Integer several(LoadedProject loaded, SeveralAbsorbers design) {
+    private Integer several(LoadedProject loaded, DesignResult single, SeveralAbsorbers design) {
         if (operating != null) {
             throw new InvalidInputException("--operating", PlainText.escape(operating.toString()),
                     "for a project of one absorber on one mode: the operating check of several absorbers is not made"
@@ -199,9 +203,15 @@ public final class SiteCheckCommand implements Callable<Integer> {
         }
         FrfKind k = FrfOptions.kind("--kind", kind);
         FrfUnit unit = frfUnits == null ? FrfUnit.si(k) : FrfUnit.parse(frfUnits, k, "--frf-units");
+        // each absorber's trim plates as the sheet supplies them: its trims are whole plates
+        List<Optional<SetCommissioning.Plates>> plates = new ArrayList<>();
+        for (AbsorbersToBuild.Built built : AbsorbersToBuild.of(single, design).absorbers()) {
+            plates.add(SetAbsorberHardware.of(built, loaded.project().hardware()).realisation().map(r ->
+                    new SetCommissioning.Plates(r.trim(), r.tolerances().absorberFrequency())));
+        }
         SetSiteCheck check = SetSiteCheck.run(loaded.project().name(), design, fittedFrf, unit,
                 all -> band == null ? all : FrfOptions.band("--band", band, all), freeStructure,
-                weighed(design.absorbers().size()), loaded.project().displayUnits());
+                weighed(design.absorbers().size()), plates, loaded.project().displayUnits());
         PrintWriter out = spec.commandLine().getOut();
         out.print(PlainText.forTerminal(json ? SetSiteCheckJson.toJson(check) : SetSiteCheckReport.render(check)));
         out.flush();

@@ -7,6 +7,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 import java.util.OptionalInt;
 import java.util.Random;
 import org.apache.commons.math3.complex.Complex;
@@ -27,6 +28,7 @@ import org.counterpoise.core.model.Structure;
 import org.counterpoise.core.optim.AbsorberSetTuning;
 import org.counterpoise.core.response.ResponseKind;
 import org.counterpoise.core.system.ModalStructure;
+import org.counterpoise.core.realisation.TrimPlan;
 import org.counterpoise.core.system.Mode;
 import org.counterpoise.core.system.PointAbsorber;
 import org.counterpoise.testing.DenseSweep;
@@ -134,6 +136,58 @@ class SetCommissioningTest {
         assertEquals(afterSweep, check.afterTrimPeak(), 1e-6 * afterSweep);
         assertTrue(check.afterTrimPeak() < check.asBuiltPeak(), "trimming the masses brings the peak down");
         assertEquals(design.peakAfter(), check.designPeak(), 0.0);
+    }
+
+    /** Invented trim plates: each 1 % of the absorber's mass, 10 fitted as built of 20 supplied; frequency tolerance 1.5 %. */
+    private static List<Optional<SetCommissioning.Plates>> plates() {
+        List<Optional<SetCommissioning.Plates>> out = new ArrayList<>();
+        for (PointAbsorber d : design.absorbers()) {
+            double plate = 0.01 * d.mass();
+            double k = d.stiffness();
+            double m = d.mass();
+            out.add(Optional.of(new SetCommissioning.Plates(new TrimPlan(Math.sqrt(k / (m + 10 * plate)),
+                    Math.sqrt(k / (m - 10 * plate)), plate, 10, 20, 0.5, 2.0), 0.015)));
+        }
+        return out;
+    }
+
+    /**
+     * With its trim plates known each absorber's trim is whole plates: the nearest whole number to the
+     * mass to add (omega = sqrt(k / m) at the spring rate as built, Den Hartog 1956, ch. 1), within the
+     * plates spare and fitted; the peak after the trim is the dense solve's with those plates fitted.
+     * An absorber built 15 % high needs about 32 % more mass, beyond its 10 spare plates of 1 %, and
+     * the check says so (BEYOND_TRIM_RANGE) for it alone.
+     */
+    @Test
+    void trimsAreWholePlatesWithinThoseSuppliedAndAShortfallIsSaid() {
+        List<PointAbsorber> asBuilt = built(new double[] {1.03, 0.975}, new double[] {1, 1});
+        SetCommissioning check = SetCommissioning.of(design, measured(FLOOR, asBuilt, 0, 2), false, List.of(),
+                plates());
+        assertTrue(check.advised(), check.warnings().toString());
+        List<PointAbsorber> trimmed = new ArrayList<>();
+        for (int j = 0; j < 2; j++) {
+            PointAbsorber b = asBuilt.get(j);
+            SetCommissioning.Correction k = check.corrections().get(j);
+            double plate = 0.01 * design.absorbers().get(j).mass();
+            long expected = Math.round(k.massToAdd() / plate);
+            assertEquals(expected, k.platesToAdd().getAsInt(), "absorber " + j + ", mass to add " + k.massToAdd());
+            assertTrue(Math.abs(expected) <= 10 && expected != 0, "a trim within the plates: " + expected);
+            assertFalse(k.beyondTrimRange());
+            trimmed.add(new PointAbsorber(b.point(), b.mass() + expected * plate, b.stiffness(), b.damping()));
+        }
+        double afterSweep = 400 * DenseSweep.maximum(w -> ModalDirectSolve.solve(FLOOR.modes(), trimmed, "display",
+                "midspan", w)[0].abs(), BAND.low(), BAND.high(), 20_000);
+        assertEquals(afterSweep, check.afterTrimPeak(), 1e-6 * afterSweep);
+        assertFalse(check.warnings().contains(CommissioningWarning.BEYOND_TRIM_RANGE));
+
+        List<PointAbsorber> far = built(new double[] {1.15, 1.0}, new double[] {1, 1});
+        SetCommissioning short_ = SetCommissioning.of(design, measured(FLOOR, far, 0, 3), false, List.of(), plates());
+        assertTrue(short_.warnings().contains(CommissioningWarning.BEYOND_TRIM_RANGE), short_.warnings().toString());
+        assertTrue(short_.corrections().get(0).beyondTrimRange());
+        assertFalse(short_.corrections().get(1).beyondTrimRange());
+        if (short_.advised()) {
+            assertEquals(10, short_.corrections().get(0).platesToAdd().getAsInt(), "every spare plate");
+        }
     }
 
     @Test

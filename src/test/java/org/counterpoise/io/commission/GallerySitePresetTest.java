@@ -93,7 +93,7 @@ class GallerySitePresetTest {
     void theSiteCheckFindsWhatWasPutIn() {
         SeveralAbsorbers design = design();
         SetSiteCheck check = SetSiteCheck.run("gallery", design, FITTED, FrfUnit.si(FrfKind.ACCELERANCE), all -> all,
-                false, List.of(), UnitSystem.SI);
+                false, List.of(), List.of(), UnitSystem.SI);
         AsBuiltSet built = check.check().built();
         for (int j = 0; j < 2; j++) {
             double expected = Math.sqrt(SPRING[j]) * design.absorbers().get(j).frequency();
