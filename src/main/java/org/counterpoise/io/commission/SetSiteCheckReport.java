@@ -9,6 +9,7 @@ import org.counterpoise.core.commission.AsBuiltSet;
 import org.counterpoise.core.commission.CommissioningWarning;
 import org.counterpoise.core.commission.SetCommissioning;
 import org.counterpoise.core.design.DesignResult;
+import org.counterpoise.core.design.SeveralAbsorbers;
 import org.counterpoise.core.units.Dimension;
 import org.counterpoise.core.units.Unit;
 import org.counterpoise.io.PlainText;
@@ -69,6 +70,12 @@ public final class SetSiteCheckReport {
                 QuantityFormat.format(built.targetModeFrequency(), Unit.HERTZ)
                         + built.targetModeFrequencySd().stream().mapToObj(sd -> " +/- "
                         + QuantityFormat.number(Unit.HERTZ.fromSi(sd), 2) + " Hz").findFirst().orElse(""));
+        if (built.targetModeFrequencySd().isPresent()) {
+            SeveralAbsorbers set = check.design();
+            line(b, "targets", SiteCheckReport.targetBasis(built.targetModeFrequency(), set.layout().structure()
+                    .modes().get(built.targetMode()).naturalFrequency(), set.structureTolerance(),
+                    "the set designed again for the mode as measured", "each absorber's design frequency"));
+        }
         line(b, "normalised residual", QuantityFormat.number(built.normalisedResidual(), 3));
         boolean advised = c.advised();
         boolean poor = c.warnings().contains(CommissioningWarning.POOR_FIT);

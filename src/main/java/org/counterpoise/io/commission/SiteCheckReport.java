@@ -11,6 +11,7 @@ import org.counterpoise.core.commission.TrimCorrection;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.model.FrequencyBand;
 import org.counterpoise.core.realisation.TrimPlan;
+import org.counterpoise.core.robust.MistuningRange;
 import org.counterpoise.core.units.Dimension;
 import org.counterpoise.core.units.Unit;
 import org.counterpoise.io.PlainText;
@@ -121,6 +122,12 @@ public final class SiteCheckReport {
                 QuantityFormat.format(a.structureFrequency(), Unit.HERTZ) + (a.structureFrequencySd().isPresent()
                         ? " +/- " + QuantityFormat.number(Unit.HERTZ.fromSi(a.structureFrequencySd().getAsDouble()), 2)
                         + " Hz" : ""));
+        if (a.structureFrequencySd().isPresent()) {
+            line(b, "target", targetBasis(a.structureFrequency(), design.study().structure().naturalFrequency(),
+                    design.structureTolerance(), "re-optimised for the structure as measured",
+                    "the absorber frequency of the design, "
+                            + QuantityFormat.format(design.absorber().naturalFrequency(), Unit.HERTZ)));
+        }
         line(b, "normalised residual", QuantityFormat.number(a.normalisedResidual(), 3));
         line(b, "part tolerances", "frequency +/- " + percent(t.frequencyTolerance()) + ", damping +/- "
                 + percent(t.dampingTolerance()));
@@ -214,6 +221,32 @@ public final class SiteCheckReport {
 
     private static String amplitude(double peak, SiteCheck.Operating o) {
         return QuantityFormat.format(o.convention().ofHarmonic(peak), o.unit()) + " " + o.convention().label();
+    }
+
+    /**
+     * Where the target of a check with the structure's frequency fitted comes from, against the sheet's
+     * procedure: re-optimised for the structure as measured; inside the range the design holds the
+     * procedure keeps the design's frequency, which also leaves the peak within the allowance.
+     *
+     * @param measured the structure (or target mode) frequency fitted, rad/s
+     * @param design its design value, rad/s
+     * @param range the factors on it the design holds
+     * @param why where the target comes from, words
+     * @param kept what the procedure keeps inside the range, words
+     * @return the sentence
+     */
+    static String targetBasis(double measured, double design, MistuningRange range, String why, String kept) {
+        double factor = measured / design;
+        boolean inside = range.defined() && factor >= range.low().orElse(1 - range.searchLimit())
+                && factor <= range.high().orElse(1 + range.searchLimit());
+        String held = range.defined() ? " (" + QuantityFormat.format(design * range.low().orElse(1 - range.searchLimit()),
+                Unit.HERTZ) + " to " + QuantityFormat.format(design * range.high().orElse(1 + range.searchLimit()),
+                Unit.HERTZ) + ")" : "";
+        return inside ? why + "; the measured frequency lies inside the range the design holds" + held + ", where the"
+                + " sheet's procedure keeps " + kept + ", which also leaves the peak within "
+                + percent(range.allowance()) + " of the design's"
+                : why + "; the measured frequency lies outside the range the design holds" + held
+                        + ", where the sheet's procedure says to design again";
     }
 
     static void line(StringBuilder b, String label, String value) {

@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
+import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.realisation.ProcedureStep;
 import org.counterpoise.core.realisation.ProcedureStepKind;
 import org.counterpoise.core.realisation.StepFigure;
@@ -80,9 +81,11 @@ public final class ProcedureText {
                     + clause(units, step, " (", StepQuantity.STRUCTURE_RANGE_LOW, " to")
                     + clause(units, step, " ", StepQuantity.STRUCTURE_RANGE_HIGH, ")") + ": inside it, keep the"
                     + " absorber frequency of the design" + clause(units, step, ", ", StepQuantity.ABSORBER_TARGET_FREQUENCY)
-                    + ", whatever the structure measured (the forcing sets it: do not scale it with the structure);"
-                    + " outside it, do not tune: design again with the measured frequency (or run site-check with"
-                    + " --free-structure).";
+                    + ", whatever the structure measured (the forcing sets it: do not scale it with the structure;"
+                    + " the peak then stays within " + ValueText.percent(DesignResult.TOLERANCE_ALLOWANCE, 2)
+                    + " of the design's, and site-check with --free-structure gives the frequency re-optimised for the"
+                    + " structure as measured); outside it, do not tune: design again with the measured frequency (or"
+                    + " run site-check with --free-structure).";
             case TUNE_ABSORBER -> "Tune the absorber alone, clamped to a rigid base, by tap test or shaker to that"
                     + " frequency" + clause(units, step, " (", StepQuantity.ABSORBER_TARGET_FREQUENCY, ")")
                     + clause(units, step, " within +/-",

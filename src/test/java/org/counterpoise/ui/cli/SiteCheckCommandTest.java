@@ -89,6 +89,11 @@ class SiteCheckCommandTest {
         // the file holds 7 significant figures: 1e-3 Hz (4e-5 relative) is what is asked
         assertEquals(1.06 * s.naturalFrequency() / (2 * Math.PI), g.get("structure_frequency_Hz").getAsDouble(), 1e-3);
         assertTrue(g.getAsJsonObject("trim").get("advised").getAsBoolean());
+        // 3 % above the design's frequency lies inside the range the design holds: the report says that the
+        // sheet's procedure keeps the design frequency there, beside the re-optimised target
+        Run freedText = CliTest.run("site-check", PUMP, "--fitted-frf", file.toString(), "--free-structure");
+        assertTrue(freedText.out().contains("re-optimised for the structure as measured; the measured frequency lies"
+                + " inside the range the design holds"), freedText.out());
         // a unit that makes the values 9.8 times too large matches no model at all: a plain refusal
         Run units = CliTest.run("site-check", PUMP, "--fitted-frf", FITTED, "--frf-units", "g/N");
         assertEquals(Cli.BAD_INPUT, units.code());
