@@ -20,12 +20,13 @@ import org.counterpoise.io.text.UnitSystem;
  * @param design the absorbers as designed
  * @param file the FRF file
  * @param unit its kind and unit
+ * @param lines the lines fitted (the file's, within the band asked)
  * @param check the absorbers as built and what to do
  * @param weighed whether the masses were given as weighed (else the design's)
  * @param units the display unit system
  */
-public record SetSiteCheck(String project, SeveralAbsorbers design, String file, FrfUnit unit, SetCommissioning check,
-        boolean weighed, UnitSystem units) {
+public record SetSiteCheck(String project, SeveralAbsorbers design, String file, FrfUnit unit, MeasuredFrf lines,
+        SetCommissioning check, boolean weighed, UnitSystem units) {
 
     /**
      * Reads the file and runs the check; a refusal names the file.
@@ -46,7 +47,7 @@ public record SetSiteCheck(String project, SeveralAbsorbers design, String file,
             List<Optional<SetCommissioning.Plates>> plates, UnitSystem units) {
         MeasuredFrf measured = lines.apply(FrfCsv.read(file, unit));
         try {
-            return new SetSiteCheck(project, design, file.toString(), unit,
+            return new SetSiteCheck(project, design, file.toString(), unit, measured,
                     SetCommissioning.of(design, measured, freeStructure, weighed, plates), !weighed.isEmpty(), units);
         } catch (InvalidInputException e) {
             throw e.renamed(file + " (" + e.field() + ")");

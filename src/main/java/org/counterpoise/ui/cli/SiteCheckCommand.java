@@ -197,10 +197,6 @@ public final class SiteCheckCommand implements Callable<Integer> {
                     "for a project of one absorber on one mode: the operating check of several absorbers is not made"
                             + " yet; check them with the response measured with all of them fitted (--fitted-frf)");
         }
-        if (plot != null) {
-            throw new InvalidInputException("--plot", PlainText.escape(plot.toString()),
-                    "for a project of one absorber on one mode: the chart of several absorbers is not drawn yet");
-        }
         FrfKind k = FrfOptions.kind("--kind", kind);
         FrfUnit unit = frfUnits == null ? FrfUnit.si(k) : FrfUnit.parse(frfUnits, k, "--frf-units");
         // each absorber's trim plates as the sheet supplies them: its trims are whole plates
@@ -212,9 +208,16 @@ public final class SiteCheckCommand implements Callable<Integer> {
         SetSiteCheck check = SetSiteCheck.run(loaded.project().name(), design, fittedFrf, unit,
                 all -> band == null ? all : FrfOptions.band("--band", band, all), freeStructure,
                 weighed(design.absorbers().size()), plates, loaded.project().displayUnits());
+        List<String> wrote = plot == null ? List.of() : PlotFiles.write("--plot", List.of(plot),
+                List.of(SiteCheckCharts.setMagnitude(check.lines(), design, check.check().built(), unit, CHART_WIDTH,
+                        CHART_HEIGHT)), force, List.of(fittedFrf, file));
         PrintWriter out = spec.commandLine().getOut();
         out.print(PlainText.forTerminal(json ? SetSiteCheckJson.toJson(check) : SetSiteCheckReport.render(check)));
+        // with --json the standard output is the JSON alone; what was written goes to standard error
+        PrintWriter notes = json ? spec.commandLine().getErr() : out;
+        wrote.forEach(notes::println);
         out.flush();
+        notes.flush();
         return 0;
     }
 }
