@@ -168,7 +168,7 @@ class SiteCheckCommandTest {
     }
 
     @Test
-    void severalAbsorbersAreEachFoundAsBuiltWithTheirTrims() {
+    void severalAbsorbersAreEachFoundAsBuiltWithTheirTrims(@TempDir Path dir) throws IOException {
         // the gallery floor's invented file (GallerySitePresetTest): absorber 1 on a spring 4 % stiff, absorber 2 3 % soft
         String gallery = "presets/gallery-floor-two-modes.json";
         Run r = CliTest.run("site-check", gallery, "--fitted-frf", "presets/gallery-floor-fitted-frf.csv", "--json");
@@ -192,8 +192,14 @@ class SiteCheckCommandTest {
         assertEquals(Cli.BAD_INPUT, wrongCount.code());
         assertTrue(wrongCount.err().contains("--absorber-mass") && wrongCount.err().contains("2 masses"),
                 wrongCount.err());
+        // the chart of several absorbers is drawn; a second run to the same file without --force is refused
+        Path png = dir.resolve("gallery check.png");
+        Run drawn = CliTest.run("site-check", gallery, "--fitted-frf", "presets/gallery-floor-fitted-frf.csv",
+                "--plot", png.toString());
+        assertEquals(0, drawn.code(), drawn.err());
+        assertTrue(Files.size(png) > 10_000, "a chart was written");
         Run plot = CliTest.run("site-check", gallery, "--fitted-frf", "presets/gallery-floor-fitted-frf.csv",
-                "--plot", "target/never.png");
+                "--plot", png.toString());
         assertEquals(Cli.BAD_INPUT, plot.code());
         assertTrue(plot.err().contains("--plot"), plot.err());
         for (Run run : new Run[] {r, text, wrongCount, plot}) {
