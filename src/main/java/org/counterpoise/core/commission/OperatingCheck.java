@@ -44,26 +44,9 @@ public final class OperatingCheck {
      */
     public static OperatingComparison of(DesignResult design, OperatingSpectrum spectrum, OptionalDouble running,
             boolean withAbsorber) {
-        FrequencyBand band = design.study().excitation().band();
-        double halfLines = WINDOW_LINES * spectrum.lineSpacing();
-        int line;
-        double centre;
-        if (running.isPresent()) {
-            centre = running.getAsDouble();
-            double half = Math.max(WINDOW * centre, halfLines);
-            line = spectrum.largestBetween(centre - half, centre + half);
-        } else {
-            line = spectrum.largestBetween(Math.min(band.low() * (1 - WINDOW), band.low() - halfLines),
-                    Math.max(band.high() * (1 + WINDOW), band.high() + halfLines));
-            centre = line < 0 ? band.centre() : spectrum.omega()[line];
-        }
-        if (line < 0) {
-            throw new InvalidInputException("spectrum", "no line near the running speed",
-                    "a spectrum with lines at and about the running frequency (" + (running.isPresent()
-                            ? "the one given" : "the project's band") + ")");
-        }
-        // the model at the running frequency: stated, the project's one speed, or else the line's
-        double omega = running.isPresent() ? centre : band.low() == band.high() ? band.low() : spectrum.omega()[line];
+        Line found = Line.of(design.study().excitation().band(), spectrum, running);
+        int line = found.index();
+        double omega = found.modelFrequency();
         Excitation e = design.study().excitation();
         SystemResponse model = new SystemResponse(design.study().structure(), withAbsorber ? design.tuning() : null,
                 e.kind(), e.amplitude());
@@ -74,14 +57,8 @@ public final class OperatingCheck {
                     + " at the line compared", "a line with a response at running speed, off an undamped resonance");
         }
         double ratio = measured / predicted;
-        List<CommissioningWarning> warnings = new ArrayList<>();
-        if (ratio > CommissioningWarning.DISAGREEMENT_FACTOR || ratio < 1 / CommissioningWarning.DISAGREEMENT_FACTOR) {
-            warnings.add(CommissioningWarning.OPERATING_DISAGREES);
-        }
+        List<CommissioningWarning> warnings = warnings(spectrum, line, ratio);
         int largest = spectrum.largestBetween(0.0, Double.MAX_VALUE);
-        if (largest != line && spectrum.amplitude()[largest] > CommissioningWarning.OTHER_LINE_FACTOR * measured) {
-            warnings.add(CommissioningWarning.OTHER_LINE_DOMINATES);
-        }
         double strokeDesign = largestStroke(design);
         double strokeImplied = strokeDesign * ratio;
         if (strokeImplied > design.clearance()) {
@@ -91,6 +68,55 @@ public final class OperatingCheck {
                 e.amplitude() * ratio,
                 strokeDesign, strokeImplied, design.clearance(), withAbsorber, warnings,
                 spectrum.omega()[largest], spectrum.amplitude()[largest]);
+    }
+
+    /**
+     * The line compared and the frequency the model is evaluated at.
+     *
+     * @param index the line's index in the spectrum
+     * @param modelFrequency the running frequency: stated, the project's one speed, or else the line's, rad/s
+     */
+    record Line(int index, double modelFrequency) {
+        /**
+         * @param band the project's forcing band
+         * @param spectrum the operating spectrum
+         * @param running the running frequency stated, rad/s, or empty
+         * @return the largest line within the window about the running frequency (or over the widened band)
+         */
+        static Line of(FrequencyBand band, OperatingSpectrum spectrum, OptionalDouble running) {
+            double halfLines = WINDOW_LINES * spectrum.lineSpacing();
+            int line;
+            if (running.isPresent()) {
+                double centre = running.getAsDouble();
+                double half = Math.max(WINDOW * centre, halfLines);
+                line = spectrum.largestBetween(centre - half, centre + half);
+            } else {
+                line = spectrum.largestBetween(Math.min(band.low() * (1 - WINDOW), band.low() - halfLines),
+                        Math.max(band.high() * (1 + WINDOW), band.high() + halfLines));
+            }
+            if (line < 0) {
+                throw new InvalidInputException("spectrum", "no line near the running speed",
+                        "a spectrum with lines at and about the running frequency (" + (running.isPresent()
+                                ? "the one given" : "the project's band") + ")");
+            }
+            // the model at the running frequency: stated, the project's one speed, or else the line's
+            return new Line(line, running.isPresent() ? running.getAsDouble() : band.low() == band.high() ? band.low()
+                    : spectrum.omega()[line]);
+        }
+    }
+
+    /** The warnings on the ratio measured / predicted and on a larger line elsewhere in the spectrum. */
+    static List<CommissioningWarning> warnings(OperatingSpectrum spectrum, int line, double ratio) {
+        List<CommissioningWarning> warnings = new ArrayList<>();
+        if (ratio > CommissioningWarning.DISAGREEMENT_FACTOR || ratio < 1 / CommissioningWarning.DISAGREEMENT_FACTOR) {
+            warnings.add(CommissioningWarning.OPERATING_DISAGREES);
+        }
+        int largest = spectrum.largestBetween(0.0, Double.MAX_VALUE);
+        if (largest != line && spectrum.amplitude()[largest] > CommissioningWarning.OTHER_LINE_FACTOR
+                * spectrum.amplitude()[line]) {
+            warnings.add(CommissioningWarning.OTHER_LINE_DOMINATES);
+        }
+        return warnings;
     }
 
     /** The larger of the stroke in band and over the run-up (the band's when the run-up's is unbounded). */

@@ -11,6 +11,9 @@ import static org.counterpoise.io.commission.SiteCheckKey.AS_BUILT;
 import static org.counterpoise.io.commission.SiteCheckKey.BAND_PEAK;
 import static org.counterpoise.io.commission.SiteCheckKey.BEYOND_TRIM_RANGE;
 import static org.counterpoise.io.commission.SiteCheckKey.DAMPING;
+import static org.counterpoise.io.commission.SiteCheckKey.CLEARANCE;
+import static org.counterpoise.io.commission.SiteCheckKey.IMPLIED_STROKE;
+import static org.counterpoise.io.commission.SiteCheckKey.DESIGN_STROKE;
 import static org.counterpoise.io.commission.SiteCheckKey.DAMPING_OFF;
 import static org.counterpoise.io.commission.SiteCheckKey.DAMPING_SD;
 import static org.counterpoise.io.commission.SiteCheckKey.DESIGN;
@@ -38,6 +41,8 @@ import static org.counterpoise.io.commission.SiteCheckKey.WARNINGS;
 import com.google.gson.JsonArray;
 import com.google.gson.JsonNull;
 import com.google.gson.JsonObject;
+import java.util.Optional;
+import org.counterpoise.core.commission.SetOperatingCheck;
 import org.counterpoise.core.commission.AsBuiltSet;
 import org.counterpoise.core.commission.CommissioningWarning;
 import org.counterpoise.core.commission.SetCommissioning;
@@ -57,12 +62,47 @@ public final class SetSiteCheckJson {
      * @return pretty-printed JSON with a final line break
      */
     public static String toJson(SetSiteCheck check) {
+        return toJson(check.project(), Optional.empty(), Optional.of(check));
+    }
+
+    /**
+     * @param project the project's name
+     * @param operating the operating check, if a spectrum was given
+     * @param fitted the check with the absorbers fitted, if a response was given
+     * @return pretty-printed JSON with a final line break: {@code operating} as for one absorber (its
+     *     stroke figures those of the absorber nearest its clearance) with {@code absorbers}, each
+     *     absorber's design stroke, stroke under the site's force and clearance; {@code fitted_absorber}
+     *     null; {@code fitted_absorbers} the check with them fitted, or null
+     */
+    public static String toJson(String project, Optional<SetOperatingSite> operating, Optional<SetSiteCheck> fitted) {
+        JsonObject o = new JsonObject();
+        o.addProperty(PROJECT.key(), project);
+        if (operating.isPresent()) {
+            SetOperatingSite op = operating.get();
+            SetOperatingCheck check = op.check();
+            JsonObject common = SiteCheckJson.operating(new SiteCheck.Operating(op.file(), op.unit(), op.convention(),
+                    op.runningGiven(), check.comparison()));
+            JsonArray strokes = new JsonArray();
+            for (int j = 0; j < check.designStrokes().size(); j++) {
+                JsonObject one = new JsonObject();
+                JsonNumbers.put(one, DESIGN_STROKE.key(), check.designStrokes().get(j));
+                JsonNumbers.put(one, IMPLIED_STROKE.key(), check.designStrokes().get(j) * check.comparison().ratio());
+                JsonNumbers.put(one, CLEARANCE.key(), check.clearances().get(j));
+                strokes.add(one);
+            }
+            common.add(ABSORBERS.key(), strokes);
+            o.add(OPERATING.key(), common);
+        } else {
+            o.add(OPERATING.key(), JsonNull.INSTANCE);
+        }
+        o.add(FITTED.key(), JsonNull.INSTANCE);
+        o.add(FITTED_SET.key(), fitted.isPresent() ? fitted(fitted.get()) : JsonNull.INSTANCE);
+        return JsonNumbers.write(o);
+    }
+
+    private static JsonObject fitted(SetSiteCheck check) {
         SetCommissioning c = check.check();
         AsBuiltSet built = c.built();
-        JsonObject o = new JsonObject();
-        o.addProperty(PROJECT.key(), check.project());
-        o.add(OPERATING.key(), JsonNull.INSTANCE);
-        o.add(FITTED.key(), JsonNull.INSTANCE);
         JsonObject set = new JsonObject();
         set.addProperty(SOURCE.key(), check.file());
         set.addProperty(FRF_KIND.key(), check.unit().kind().id());
@@ -117,7 +157,6 @@ public final class SetSiteCheckJson {
             peak.add(TRIM_REQUIRED.key(), JsonNull.INSTANCE);
         }
         set.add(BAND_PEAK.key(), peak);
-        o.add(FITTED_SET.key(), set);
-        return JsonNumbers.write(o);
+        return set;
     }
 }

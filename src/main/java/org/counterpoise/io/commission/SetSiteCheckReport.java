@@ -4,7 +4,12 @@ import static org.counterpoise.io.commission.SiteCheckReport.line;
 import static org.counterpoise.io.commission.SiteCheckReport.percent;
 import static org.counterpoise.io.commission.SiteCheckReport.signedPercent;
 
+import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
+import org.counterpoise.core.commission.OperatingComparison;
+import org.counterpoise.core.commission.SetOperatingCheck;
+import org.counterpoise.core.model.FrequencyBand;
 import org.counterpoise.core.commission.AsBuiltSet;
 import org.counterpoise.core.commission.CommissioningWarning;
 import org.counterpoise.core.commission.SetCommissioning;
@@ -29,6 +34,15 @@ public final class SetSiteCheckReport {
     static final String STOPPED = "Tune, fit and tap-test each absorber with the machine stopped and isolated, every"
             + " absorber mass secured against falling; the uncertainties shown are the data's scatter about the model"
             + " (one standard deviation), not errors of the model.";
+
+    /** What the operating check of several absorbers covers. */
+    static final String OPERATING_SCOPE = "The operating comparison holds at the project's response point, on the"
+            + " project's modes with the absorbers as designed; a spectrum measured elsewhere is not compared by it."
+            + " Every absorber's stroke scales with the force the site shows.";
+
+    /** Said when the site shows more force than the project. */
+    static final String LARGER = "A force larger than the project's scales every absorber's stroke and forces with it:"
+            + " design again with the site's force before running the machine with the absorbers.";
 
     private SetSiteCheckReport() {
     }
@@ -56,10 +70,79 @@ public final class SetSiteCheckReport {
      * @return the report
      */
     public static String render(SetSiteCheck check) {
+        return render(check.project(), check.design(), Optional.empty(), Optional.of(check), check.units());
+    }
+
+    /**
+     * @param project the project's name
+     * @param design the absorbers as designed
+     * @param operating the operating check, if a spectrum was given
+     * @param fitted the check with the absorbers fitted, if a response was given
+     * @param units the display unit system
+     * @return the report: the operating check, then the absorbers as built, then the cautions
+     */
+    public static String render(String project, SeveralAbsorbers design, Optional<SetOperatingSite> operating,
+            Optional<SetSiteCheck> fitted, UnitSystem units) {
+        StringBuilder b = new StringBuilder("Site check of ").append(PlainText.escape(project)).append('\n');
+        operating.ifPresent(o -> operating(b, o, design, units));
+        fitted.ifPresent(f -> fitted(b, f));
+        b.append("Cautions\n");
+        List<String> cautions = new ArrayList<>();
+        operating.ifPresent(o -> {
+            cautions.add(OPERATING_SCOPE);
+            cautions.add(SiteCheckReport.RUNNING);
+            if (o.check().comparison().ratio() > 1) {
+                cautions.add(LARGER);
+            }
+        });
+        fitted.ifPresent(f -> {
+            cautions.add(SCOPE);
+            cautions.add(STOPPED);
+        });
+        cautions.add(SiteCheckReport.PRACTICE);
+        cautions.forEach(c -> b.append("  - ").append(c).append('\n'));
+        return b.toString();
+    }
+
+    private static void operating(StringBuilder b, SetOperatingSite o, SeveralAbsorbers design, UnitSystem units) {
+        OperatingComparison c = o.check().comparison();
+        b.append("Operating response (").append(PlainText.escape(o.file())).append(", ").append(c.kind().label())
+                .append(" at ").append(PlainText.escape(design.layout().responsePoint())).append(", ")
+                .append(o.convention().label()).append(c.withAbsorber() ? ", absorbers fitted" : ", no absorbers")
+                .append(")\n");
+        FrequencyBand band = design.band();
+        line(b, "running frequency", QuantityFormat.format(c.runningFrequency(), Unit.HERTZ) + (o.runningGiven()
+                ? " (as given)" : band.low() == band.high() ? " (the project's speed)" : " (the line found in the band)"));
+        line(b, "line compared", QuantityFormat.format(c.lineFrequency(), Unit.HERTZ));
+        line(b, "measured", amplitude(c.measured(), o));
+        line(b, c.withAbsorber() ? "predicted (with the absorbers)" : "predicted (bare structure)",
+                amplitude(c.predicted(), o));
+        line(b, "measured / predicted", QuantityFormat.number(c.ratio(), 3));
+        line(b, "force the site shows", DisplayUnits.format(c.impliedDriveAmplitude(), Dimension.FORCE, units)
+                + " (project: " + DisplayUnits.format(design.forceAmplitude(), Dimension.FORCE, units) + ")");
+        SetOperatingCheck check = o.check();
+        for (int j = 0; j < check.designStrokes().size(); j++) {
+            double stroke = check.designStrokes().get(j);
+            line(b, "absorber " + (j + 1) + ": stroke", DisplayUnits.format(stroke * c.ratio(), Dimension.LENGTH, units)
+                    + " (design " + DisplayUnits.format(stroke, Dimension.LENGTH, units) + ", clearance "
+                    + DisplayUnits.format(check.clearances().get(j), Dimension.LENGTH, units) + ")"
+                    + (stroke * c.ratio() > check.clearances().get(j) ? ": BEYOND its clearance" : ""));
+        }
+        if (c.warnings().contains(CommissioningWarning.OTHER_LINE_DOMINATES)) {
+            line(b, "largest line", QuantityFormat.format(c.largestLineFrequency(), Unit.HERTZ) + ", "
+                    + amplitude(c.largestLine(), o));
+        }
+        c.warnings().forEach(w -> b.append("Warning: ").append(SiteCheckReport.words(w)).append('\n'));
+    }
+
+    private static String amplitude(double peak, SetOperatingSite o) {
+        return QuantityFormat.format(o.convention().ofHarmonic(peak), o.unit()) + " " + o.convention().label();
+    }
+
+    private static void fitted(StringBuilder b, SetSiteCheck check) {
         SetCommissioning c = check.check();
         AsBuiltSet built = c.built();
         UnitSystem units = check.units();
-        StringBuilder b = new StringBuilder("Site check of ").append(PlainText.escape(check.project())).append('\n');
         String mode = check.design().layout().modeNames().get(built.targetMode());
         b.append("Absorbers as built (").append(PlainText.escape(check.file())).append(", ")
                 .append(check.unit().kind().id()).append(" in ").append(check.unit().symbol()).append(", ")
@@ -112,10 +195,5 @@ public final class SetSiteCheckReport {
                                 + " of the design's");
         boolean freed = built.targetModeFrequencySd().isPresent();
         c.warnings().forEach(w -> b.append("Warning: ").append(SiteCheckReport.words(w, freed)).append('\n'));
-        b.append("Cautions\n");
-        for (String caution : List.of(SCOPE, STOPPED, SiteCheckReport.PRACTICE)) {
-            b.append("  - ").append(caution).append('\n');
-        }
-        return b.toString();
     }
 }

@@ -42,7 +42,7 @@ public final class SiteCheckJson {
         return JsonNumbers.write(o);
     }
 
-    private static JsonObject operating(SiteCheck.Operating operating) {
+    static JsonObject operating(SiteCheck.Operating operating) {
         OperatingComparison c = operating.comparison();
         JsonObject o = new JsonObject();
         o.addProperty(SOURCE.key(), operating.file());

@@ -24,6 +24,7 @@ import org.counterpoise.io.chart.SiteCheckCharts;
 import org.counterpoise.core.design.AbsorbersToBuild;
 import org.counterpoise.core.commission.SetCommissioning;
 import org.counterpoise.core.realisation.SetAbsorberHardware;
+import org.counterpoise.io.commission.SetOperatingSite;
 import org.counterpoise.io.commission.SetSiteCheck;
 import org.counterpoise.io.commission.SetSiteCheckJson;
 import org.counterpoise.io.commission.SetSiteCheckReport;
@@ -155,16 +156,7 @@ public final class SiteCheckCommand implements Callable<Integer> {
             return several(loaded, design, SeveralAbsorbersDesigner.design(design, layout.get()));
         }
         Realisation realisation = Realiser.realisation(dossier, loaded.project().hardware());
-        Optional<SiteCheckRun.OperatingInput> op = Optional.empty();
-        if (operating != null) {
-            OptionalDouble at = OptionalDouble.empty();
-            if (running != null) {
-                Checks.positive("--running-frequency", running);
-                at = OptionalDouble.of(Unit.HERTZ.toSi(running));
-            }
-            op = Optional.of(new SiteCheckRun.OperatingInput(operating, SpectrumCsv.unit(spectrumUnits,
-                    "--spectrum-units"), convention, at, withAbsorber));
-        }
+        Optional<SiteCheckRun.OperatingInput> op = operatingInput();
         Optional<SiteCheckRun.FittedInput> fit = Optional.empty();
         if (fittedFrf != null) {
             FrfKind k = FrfOptions.kind("--kind", kind);
@@ -190,29 +182,50 @@ public final class SiteCheckCommand implements Callable<Integer> {
         return 0;
     }
 
-    /** Several modes or absorbers (format 6): the response with them fitted, each absorber as built. */
+    /** The operating spectrum's options, when a spectrum was given. */
+    private Optional<SiteCheckRun.OperatingInput> operatingInput() {
+        if (operating == null) {
+            return Optional.empty();
+        }
+        OptionalDouble at = OptionalDouble.empty();
+        if (running != null) {
+            Checks.positive("--running-frequency", running);
+            at = OptionalDouble.of(Unit.HERTZ.toSi(running));
+        }
+        return Optional.of(new SiteCheckRun.OperatingInput(operating, SpectrumCsv.unit(spectrumUnits,
+                "--spectrum-units"), convention, at, withAbsorber));
+    }
+
+    /**
+     * Several modes or absorbers (format 6): the operating spectrum at the response point against the
+     * whole structure's model, and the response with them fitted, each absorber as built.
+     */
     private Integer several(LoadedProject loaded, DesignResult single, SeveralAbsorbers design) {
-        if (operating != null) {
-            throw new InvalidInputException("--operating", PlainText.escape(operating.toString()),
-                    "for a project of one absorber on one mode: the operating check of several absorbers is not made"
-                            + " yet; check them with the response measured with all of them fitted (--fitted-frf)");
+        AbsorbersToBuild build = AbsorbersToBuild.of(single, design);
+        Optional<SetOperatingSite> op = operatingInput().map(in -> SetOperatingSite.run(build, in));
+        Optional<SetSiteCheck> check = Optional.empty();
+        List<String> wrote = List.of();
+        if (fittedFrf != null) {
+            FrfKind k = FrfOptions.kind("--kind", kind);
+            FrfUnit unit = frfUnits == null ? FrfUnit.si(k) : FrfUnit.parse(frfUnits, k, "--frf-units");
+            // each absorber's trim plates as the sheet supplies them: its trims are whole plates
+            List<Optional<SetCommissioning.Plates>> plates = new ArrayList<>();
+            for (AbsorbersToBuild.Built built : build.absorbers()) {
+                plates.add(SetAbsorberHardware.of(built, loaded.project().hardware()).realisation().map(r ->
+                        new SetCommissioning.Plates(r.trim(), r.tolerances().absorberFrequency())));
+            }
+            SetSiteCheck fitted = SetSiteCheck.run(loaded.project().name(), design, fittedFrf, unit,
+                    all -> band == null ? all : FrfOptions.band("--band", band, all), freeStructure,
+                    weighed(design.absorbers().size()), plates, loaded.project().displayUnits());
+            check = Optional.of(fitted);
+            wrote = plot == null ? List.of() : PlotFiles.write("--plot", List.of(plot),
+                    List.of(SiteCheckCharts.setMagnitude(fitted.lines(), design, fitted.check().built(), unit,
+                            CHART_WIDTH, CHART_HEIGHT)), force, List.of(fittedFrf, file));
         }
-        FrfKind k = FrfOptions.kind("--kind", kind);
-        FrfUnit unit = frfUnits == null ? FrfUnit.si(k) : FrfUnit.parse(frfUnits, k, "--frf-units");
-        // each absorber's trim plates as the sheet supplies them: its trims are whole plates
-        List<Optional<SetCommissioning.Plates>> plates = new ArrayList<>();
-        for (AbsorbersToBuild.Built built : AbsorbersToBuild.of(single, design).absorbers()) {
-            plates.add(SetAbsorberHardware.of(built, loaded.project().hardware()).realisation().map(r ->
-                    new SetCommissioning.Plates(r.trim(), r.tolerances().absorberFrequency())));
-        }
-        SetSiteCheck check = SetSiteCheck.run(loaded.project().name(), design, fittedFrf, unit,
-                all -> band == null ? all : FrfOptions.band("--band", band, all), freeStructure,
-                weighed(design.absorbers().size()), plates, loaded.project().displayUnits());
-        List<String> wrote = plot == null ? List.of() : PlotFiles.write("--plot", List.of(plot),
-                List.of(SiteCheckCharts.setMagnitude(check.lines(), design, check.check().built(), unit, CHART_WIDTH,
-                        CHART_HEIGHT)), force, List.of(fittedFrf, file));
         PrintWriter out = spec.commandLine().getOut();
-        out.print(PlainText.forTerminal(json ? SetSiteCheckJson.toJson(check) : SetSiteCheckReport.render(check)));
+        String name = loaded.project().name();
+        out.print(PlainText.forTerminal(json ? SetSiteCheckJson.toJson(name, op, check)
+                : SetSiteCheckReport.render(name, design, op, check, loaded.project().displayUnits())));
         // with --json the standard output is the JSON alone; what was written goes to standard error
         PrintWriter notes = json ? spec.commandLine().getErr() : out;
         wrote.forEach(notes::println);

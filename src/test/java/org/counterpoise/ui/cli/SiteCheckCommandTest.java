@@ -158,10 +158,10 @@ class SiteCheckCommandTest {
         Run cell = CliTest.run("site-check", PUMP, "--operating", broken.toString());
         assertEquals(Cli.BAD_INPUT, cell.code());
         assertTrue(cell.err().contains("line 3"), cell.err());
-        // several absorbers: the operating check is not made for them, and says so instead of checking one absorber
-        Run split = CliTest.run("site-check", "presets/split-mass-test-rig.json", "--operating", SPECTRUM);
+        // several absorbers: a spectrum with no line near their band is refused the same way, naming the file
+        Run split = CliTest.run("site-check", "presets/split-mass-test-rig.json", "--operating", far.toString());
         assertEquals(Cli.BAD_INPUT, split.code());
-        assertTrue(split.err().contains("--operating") && split.err().contains("several absorbers"), split.err());
+        assertTrue(split.err().contains("far.csv") && split.err().contains("running"), split.err());
         for (Run run : new Run[] {none, unit, away, cell, split}) {
             assertFalse(run.err().contains("Exception") || run.err().contains("\tat "), run.err());
         }
@@ -192,6 +192,24 @@ class SiteCheckCommandTest {
         assertEquals(Cli.BAD_INPUT, wrongCount.code());
         assertTrue(wrongCount.err().contains("--absorber-mass") && wrongCount.err().contains("2 masses"),
                 wrongCount.err());
+        // an operating spectrum alone (before the absorbers are built): the operating object with each
+        // absorber's strokes, no fitted check; the values are checked in SetOperatingCheckTest
+        StringBuilder spectrum = new StringBuilder("frequency_Hz,amplitude\n");
+        for (int i = 1; i < 400; i++) {
+            spectrum.append(String.format(Locale.ROOT, "%.2f,%s%n", 0.05 * i, i == 160 ? "2.0" : "0.02"));
+        }
+        Path op = Files.writeString(dir.resolve("gallery operating.csv"), spectrum.toString());
+        Run operating = CliTest.run("site-check", gallery, "--operating", op.toString(), "--spectrum-units", "mm/s",
+                "--with-absorber", "--json");
+        assertEquals(0, operating.code(), operating.err());
+        JsonObject opRoot = JsonParser.parseString(operating.out()).getAsJsonObject();
+        assertTrue(opRoot.get("fitted_absorbers").isJsonNull(), operating.out());
+        JsonObject opJson = opRoot.getAsJsonObject("operating");
+        assertEquals(2, opJson.getAsJsonArray("absorbers").size(), operating.out());
+        assertEquals(8.0, opJson.get("line_frequency_Hz").getAsDouble(), 1e-9);
+        Run operatingText = CliTest.run("site-check", gallery, "--operating", op.toString(), "--spectrum-units", "mm/s",
+                "--with-absorber");
+        assertTrue(operatingText.out().contains("absorber 2: stroke"), operatingText.out());
         // the chart of several absorbers is drawn; a second run to the same file without --force is refused
         Path png = dir.resolve("gallery check.png");
         Run drawn = CliTest.run("site-check", gallery, "--fitted-frf", "presets/gallery-floor-fitted-frf.csv",
