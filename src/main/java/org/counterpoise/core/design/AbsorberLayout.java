@@ -6,6 +6,8 @@ import java.util.OptionalInt;
 import org.counterpoise.core.error.Checks;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.model.FrequencyBand;
+import org.counterpoise.core.system.Mode;
+import org.counterpoise.core.model.Structure;
 import org.counterpoise.core.optim.AbsorberSetOptimiser;
 import org.counterpoise.core.optim.AbsorberSetProblem;
 import org.counterpoise.core.optim.AbsorberSetTuning;
@@ -93,12 +95,23 @@ public record AbsorberLayout(ModalStructure structure, List<String> modeNames, S
      * @return the target mode's modal mass as seen at the absorbers' point, m_r / phi_r(a)^2, kg
      */
     public double effectiveMass(FrequencyBand band) {
-        int r = target(band);
-        double phi = structure.modes().get(r).shapeAt(absorberPoint);
-        if (phi == 0.0) {
-            throw new InvalidInputException("target mode", modeNames.get(r),
-                    "a mode that moves the absorbers' point " + absorberPoint + " (its mode-shape value there is 0)");
+        return seenAt(target(band), absorberPoint).effectiveMass();
+    }
+
+    /**
+     * @param mode a mode's index
+     * @param point a point it moves
+     * @return that mode as seen at that point, the single-mode structure an absorber there sees: mass
+     *     {@link Mode#massSeenAt}, the mode's natural frequency and damping ratio, shape value 1
+     */
+    public Structure seenAt(int mode, String point) {
+        Mode m = structure.modes().get(mode);
+        if (m.shapeAt(point) == 0.0) {
+            throw new InvalidInputException("target mode", modeNames.get(mode),
+                    "a mode that moves the absorbers' point " + point + " (its mode-shape value there is 0)");
         }
-        return structure.modes().get(r).modalMass() / (phi * phi);
+        double mass = m.massSeenAt(point);
+        double w = m.naturalFrequency();
+        return new Structure(mass, mass * w * w, m.dampingRatio(), 1.0);
     }
 }

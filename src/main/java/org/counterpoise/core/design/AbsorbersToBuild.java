@@ -12,15 +12,15 @@ import org.counterpoise.core.response.ResponsePeak;
 import org.counterpoise.core.system.AbsorberPeak;
 import org.counterpoise.core.system.ModalPeak;
 import org.counterpoise.core.system.ModalSystem;
-import org.counterpoise.core.system.Mode;
 import org.counterpoise.core.system.PointAbsorber;
 
 /**
  * Each absorber of a set as a workshop builds it (the sheet's "absorbers to build"):
  * <ul>
- *   <li>its own single design: the absorber of its own mass, tuning and damping on the target mode at
- *       the absorbers' point (with one absorber per mode, on its own mode at its own point: {@link #ownMode}) ({@link Designer#ofTuning}), whose parts are sized with the same
- *       realisation code as any design, with the strokes, forces and clearance it has WITHIN THE SET
+ *   <li>its own single design ({@link Designer#ofTuning}): the absorber of its own mass, tuning and
+ *       damping on the target mode at the absorbers' point, or with one absorber per mode on its own
+ *       mode at its own point ({@link #ownMode}); its parts are sized with the same realisation code
+ *       as any design, with the strokes, forces and clearance it has WITHIN THE SET
  *       on the whole structure ({@link AbsorberPeak}: its stroke in the band and from rest to the
  *       top of the band, its spring's, damper's and total force in the band). Its figures alone on
  *       the mode would misstate them: in a set each absorber works at its own part of the band and
@@ -108,13 +108,7 @@ public record AbsorbersToBuild(SeveralAbsorbers set, List<Built> absorbers) {
      *     every absorber sits on the target mode
      */
     static Optional<Structure> ownMode(AbsorberLayout layout, int j) {
-        return layout.joint().map(joint -> {
-            Mode mode = layout.structure().modes().get(joint.modes().get(j));
-            double shape = mode.shapeAt(joint.points().get(j));
-            double mass = mode.modalMass() / (shape * shape);
-            double w = mode.naturalFrequency();
-            return new Structure(mass, mass * w * w, mode.dampingRatio(), 1.0);
-        });
+        return layout.joint().map(joint -> layout.seenAt(joint.modes().get(j), joint.points().get(j)));
     }
 
     /**

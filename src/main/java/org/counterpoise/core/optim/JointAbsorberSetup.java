@@ -88,8 +88,7 @@ public record JointAbsorberSetup(ModalStructure structure, List<Integer> modes, 
      * @return designed mode j's modal mass as seen at its absorber's point, m_j / phi_j(a_j)^2
      */
     public double seenMass(int j) {
-        double phi = shape(j, absorberPoints.get(j));
-        return mode(j).modalMass() / (phi * phi);
+        return mode(j).massSeenAt(absorberPoints.get(j));
     }
 
     /**

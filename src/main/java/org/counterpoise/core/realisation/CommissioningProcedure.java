@@ -75,6 +75,8 @@ public final class CommissioningProcedure {
                     Dimension.FREQUENCY));
             figures.add(new StepFigure(StepQuantity.STRUCTURE_RANGE_HIGH, omega1 * range.high().orElse(1 + limit),
                     Dimension.FREQUENCY));
+            figures.add(new StepFigure(range.ofBareResponse() ? StepQuantity.STRUCTURE_RANGE_ALLOWANCE_OF_BARE
+                    : StepQuantity.STRUCTURE_RANGE_ALLOWANCE, range.allowance(), Dimension.RATIO));
         }
         figures.add(new StepFigure(StepQuantity.ABSORBER_TARGET_FREQUENCY, target, Dimension.FREQUENCY));
         return List.copyOf(figures);

@@ -19,6 +19,13 @@ public record StepFigure(StepQuantity quantity, double value, Dimension dimensio
         STRUCTURE_RANGE_LOW,
         /** The highest structure frequency the design holds. */
         STRUCTURE_RANGE_HIGH,
+        /** Within the structure range, how far the design's peak in band may rise, fraction of it. */
+        STRUCTURE_RANGE_ALLOWANCE,
+        /**
+         * Within the structure range, the response's bound as a fraction of the bare structure's (a design
+         * that cancels the response at one speed: its own peak is about nil).
+         */
+        STRUCTURE_RANGE_ALLOWANCE_OF_BARE,
         /** The absorber frequency to tune to. */
         ABSORBER_TARGET_FREQUENCY,
         /** How far the absorber frequency may be from its target, fraction. */

@@ -40,6 +40,19 @@ public record Mode(double naturalFrequency, double dampingRatio, double modalMas
     }
 
     /**
+     * The single-mode reduction: the mode's modal mass as seen at a point, m_r / phi_r(p)^2 (Den Hartog
+     * 1956, Mechanical Vibrations, 4th ed., 3.3; Warburton 1982, section 2); infinite where the mode does
+     * not move the point.
+     *
+     * @param point a point name
+     * @return the mass seen there, kg
+     */
+    public double massSeenAt(String point) {
+        double phi = shapeAt(point);
+        return modalMass / (phi * phi);
+    }
+
+    /**
      * @param point a point name
      * @return the mode-shape value there
      */

@@ -26,6 +26,7 @@ import static org.counterpoise.io.commission.SiteCheckKey.FRF_KIND;
 import static org.counterpoise.io.commission.SiteCheckKey.LINES;
 import static org.counterpoise.io.commission.SiteCheckKey.MASS_TO_ADD;
 import static org.counterpoise.io.commission.SiteCheckKey.PLATES_TO_ADD;
+import static org.counterpoise.io.commission.SiteCheckKey.PLATE_MASS;
 import static org.counterpoise.io.commission.SiteCheckKey.NORMALISED_RESIDUAL;
 import static org.counterpoise.io.commission.SiteCheckKey.OPERATING;
 import static org.counterpoise.io.commission.SiteCheckKey.PROJECT;
@@ -140,6 +141,11 @@ public final class SetSiteCheckJson {
                 one.addProperty(PLATES_TO_ADD.key(), k.platesToAdd().getAsInt());
             } else {
                 one.add(PLATES_TO_ADD.key(), JsonNull.INSTANCE);
+            }
+            if (k.plateMass() > 0) {
+                JsonNumbers.put(one, PLATE_MASS.key(), k.plateMass());
+            } else {
+                one.add(PLATE_MASS.key(), JsonNull.INSTANCE);
             }
             one.addProperty(BEYOND_TRIM_RANGE.key(), k.beyondTrimRange());
             absorbers.add(one);

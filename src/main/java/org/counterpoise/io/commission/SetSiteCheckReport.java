@@ -55,8 +55,10 @@ public final class SetSiteCheckReport {
         if (k.platesToAdd().isPresent()) {
             int plates = k.platesToAdd().getAsInt();
             int n = Math.abs(plates);
-            return plates == 0 ? "none: no whole plate brings it nearer (" + (m >= 0 ? "add " : "take off ") + mass
-                    + " would)" + beyond : (plates > 0 ? "add " : "take off ") + n + " trim plate" + (n == 1 ? "" : "s")
+            String none = k.beyondTrimRange() ? "none possible: " + (m >= 0 ? "no plate is spare" : "no plate is fitted")
+                    + " (" + (m >= 0 ? "add " : "take off ") + mass + " would bring it to its frequency)" + beyond
+                    : "none: no whole plate brings it nearer (" + (m >= 0 ? "add " : "take off ") + mass + " would)";
+            return plates == 0 ? none : (plates > 0 ? "add " : "take off ") + n + " trim plate" + (n == 1 ? "" : "s")
                     + " of " + DisplayUnits.format(k.plateMass(), Dimension.MASS, units) + " (" + (m >= 0 ? "add "
                     : "take off ") + mass + " would bring it exactly to its frequency; spring and damper kept" + beyond
                     + ")";
@@ -153,7 +155,7 @@ public final class SetSiteCheckReport {
                 QuantityFormat.format(built.targetModeFrequency(), Unit.HERTZ)
                         + built.targetModeFrequencySd().stream().mapToObj(sd -> " +/- "
                         + QuantityFormat.number(Unit.HERTZ.fromSi(sd), 2) + " Hz").findFirst().orElse(""));
-        if (built.targetModeFrequencySd().isPresent()) {
+        if (built.targetModeFrequencySd().isPresent() && !c.warnings().contains(CommissioningWarning.POOR_FIT)) {
             SeveralAbsorbers set = check.design();
             line(b, "targets", SiteCheckReport.targetBasis(built.targetModeFrequency(), set.layout().structure()
                     .modes().get(built.targetMode()).naturalFrequency(), set.structureTolerance(),
@@ -194,6 +196,14 @@ public final class SetSiteCheckReport {
                         : "optional: the response is within " + percent(DesignResult.TOLERANCE_ALLOWANCE)
                                 + " of the design's");
         boolean freed = built.targetModeFrequencySd().isPresent();
-        c.warnings().forEach(w -> b.append("Warning: ").append(SiteCheckReport.words(w, freed)).append('\n'));
+        List<String> shortOfPlates = new ArrayList<>();
+        for (int j = 0; j < c.corrections().size(); j++) {
+            if (c.corrections().get(j).beyondTrimRange()) {
+                shortOfPlates.add(Integer.toString(j + 1));
+            }
+        }
+        c.warnings().forEach(w -> b.append("Warning: ").append(SiteCheckReport.words(w, freed))
+                .append(w == CommissioningWarning.BEYOND_TRIM_RANGE ? " (absorber " + String.join(", ", shortOfPlates) + ")"
+                        : "").append('\n'));
     }
 }

@@ -20,10 +20,12 @@ import org.counterpoise.io.text.UnitSystem;
  * @param operating the operating comparison, if a spectrum was given
  * @param fitted the commissioning check, if a response with the absorber fitted was given
  * @param plan the trim plan supplied with the absorber
+ * @param keptAbsorberFrequency the absorber frequency the sheet's procedure keeps while the structure lies in
+ *     the range the design holds (an elastomer element's own optimum, else the design's), rad/s
  * @param units the display unit system
  */
 public record SiteCheck(String project, DesignResult design, Optional<Operating> operating,
-        Optional<Fitted> fitted, TrimPlan plan, UnitSystem units) {
+        Optional<Fitted> fitted, TrimPlan plan, double keptAbsorberFrequency, UnitSystem units) {
 
     /**
      * @param file the spectrum file as the user named it

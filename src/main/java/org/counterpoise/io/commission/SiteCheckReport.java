@@ -48,7 +48,8 @@ public final class SiteCheckReport {
     public static String render(SiteCheck check) {
         StringBuilder b = new StringBuilder("Site check of ").append(PlainText.escape(check.project())).append('\n');
         check.operating().ifPresent(o -> operating(b, o, check.design(), check.units()));
-        check.fitted().ifPresent(f -> fitted(b, f, check.design(), check.plan(), check.units()));
+        check.fitted().ifPresent(f -> fitted(b, f, check.design(), check.plan(), check.keptAbsorberFrequency(),
+                check.units()));
         b.append("Cautions\n");
         for (String c : cautions(check)) {
             b.append("  - ").append(c).append('\n');
@@ -100,7 +101,7 @@ public final class SiteCheckReport {
     }
 
     private static void fitted(StringBuilder b, SiteCheck.Fitted f, DesignResult design, TrimPlan plan,
-            UnitSystem units) {
+            double kept, UnitSystem units) {
         double plateMass = plan.plateMass();
         CommissioningCheck c = f.check();
         AsBuiltAbsorber a = c.built();
@@ -122,11 +123,10 @@ public final class SiteCheckReport {
                 QuantityFormat.format(a.structureFrequency(), Unit.HERTZ) + (a.structureFrequencySd().isPresent()
                         ? " +/- " + QuantityFormat.number(Unit.HERTZ.fromSi(a.structureFrequencySd().getAsDouble()), 2)
                         + " Hz" : ""));
-        if (a.structureFrequencySd().isPresent()) {
+        if (a.structureFrequencySd().isPresent() && !a.warnings().contains(CommissioningWarning.POOR_FIT)) {
             line(b, "target", targetBasis(a.structureFrequency(), design.study().structure().naturalFrequency(),
                     design.structureTolerance(), "re-optimised for the structure as measured",
-                    "the absorber frequency of the design, "
-                            + QuantityFormat.format(design.absorber().naturalFrequency(), Unit.HERTZ)));
+                    "the absorber frequency of the design, " + QuantityFormat.format(kept, Unit.HERTZ)));
         }
         line(b, "normalised residual", QuantityFormat.number(a.normalisedResidual(), 3));
         line(b, "part tolerances", "frequency +/- " + percent(t.frequencyTolerance()) + ", damping +/- "
@@ -236,15 +236,18 @@ public final class SiteCheckReport {
      * @return the sentence
      */
     static String targetBasis(double measured, double design, MistuningRange range, String why, String kept) {
+        if (!range.defined()) {
+            return why + "; the design holds no range of structure frequency (its own response is unbounded)";
+        }
         double factor = measured / design;
-        boolean inside = range.defined() && factor >= range.low().orElse(1 - range.searchLimit())
+        boolean inside = factor >= range.low().orElse(1 - range.searchLimit())
                 && factor <= range.high().orElse(1 + range.searchLimit());
-        String held = range.defined() ? " (" + QuantityFormat.format(design * range.low().orElse(1 - range.searchLimit()),
-                Unit.HERTZ) + " to " + QuantityFormat.format(design * range.high().orElse(1 + range.searchLimit()),
-                Unit.HERTZ) + ")" : "";
+        String bound = range.ofBareResponse() ? "keeps the response below " + percent(range.allowance())
+                + " of the bare structure's" : "leaves the peak within " + percent(range.allowance()) + " of the design's";
+        String held = " (" + QuantityFormat.format(design * range.low().orElse(1 - range.searchLimit()), Unit.HERTZ)
+                + " to " + QuantityFormat.format(design * range.high().orElse(1 + range.searchLimit()), Unit.HERTZ) + ")";
         return inside ? why + "; the measured frequency lies inside the range the design holds" + held + ", where the"
-                + " sheet's procedure keeps " + kept + ", which also leaves the peak within "
-                + percent(range.allowance()) + " of the design's"
+                + " sheet's procedure keeps " + kept + ", which also " + bound
                 : why + "; the measured frequency lies outside the range the design holds" + held
                         + ", where the sheet's procedure says to design again";
     }

@@ -11,7 +11,10 @@ import org.counterpoise.core.criteria.AmplitudeConvention;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.identify.MeasuredFrf;
+import org.counterpoise.core.realisation.ProcedureStepKind;
 import org.counterpoise.core.realisation.Realisation;
+import org.counterpoise.core.realisation.StepFigure;
+import org.counterpoise.core.realisation.StepFigure.StepQuantity;
 import org.counterpoise.io.measurement.FrfCsv;
 import org.counterpoise.io.measurement.FrfUnit;
 import org.counterpoise.io.measurement.SpectrumCsv;
@@ -66,7 +69,15 @@ public final class SiteCheckRun {
         }
         Optional<SiteCheck.Operating> op = operating.map(in -> operating(design, in));
         Optional<SiteCheck.Fitted> fit = fitted.map(in -> fitted(design, realisation, in));
-        return new SiteCheck(project, design, op, fit, realisation.trim(), units);
+        return new SiteCheck(project, design, op, fit, realisation.trim(), keptAbsorberFrequency(design, realisation),
+                units);
+    }
+
+    /** The absorber frequency the procedure's step COMPUTE_ABSORBER_TARGET keeps, rad/s (the one place it is computed). */
+    private static double keptAbsorberFrequency(DesignResult design, Realisation realisation) {
+        return realisation.procedure().stream().filter(s -> s.kind() == ProcedureStepKind.COMPUTE_ABSORBER_TARGET)
+                .flatMap(s -> s.figures().stream()).filter(f -> f.quantity() == StepQuantity.ABSORBER_TARGET_FREQUENCY)
+                .mapToDouble(StepFigure::value).findFirst().orElse(design.absorber().naturalFrequency());
     }
 
     private static SiteCheck.Operating operating(DesignResult design, OperatingInput in) {

@@ -118,10 +118,7 @@ public final class SeveralModes {
     static Structure targetStructure(Project p) {
         AbsorberLayout layout = layout(p).orElseThrow();
         FrequencyBand band = band(p);
-        Mode mode = layout.structure().modes().get(layout.target(band));
-        double mass = layout.effectiveMass(band);
-        double w = mode.naturalFrequency();
-        return new Structure(mass, mass * w * w, mode.dampingRatio(), 1.0);
+        return layout.seenAt(layout.target(band), layout.absorberPoint());
     }
 
     /**

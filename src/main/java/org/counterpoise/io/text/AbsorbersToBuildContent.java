@@ -141,11 +141,12 @@ public final class AbsorbersToBuildContent {
                         ? " Its run-up stroke is taken as if it worked alone on its mode (the set's run-up is"
                                 + " not computed), and the clearance holds it." : ""));
         AbsorberLayout layout = b.set().layout();
-        layout.joint().ifPresent(joint -> sentences.add("Absorber " + (j + 1) + " is tuned to mode "
-                + layout.modeNames().get(joint.modes().get(j)) + " at " + joint.points().get(j) + ": in its tuning"
-                + " below, \"the structure\" is that mode, "
+        layout.joint().filter(joint -> realisation.isPresent()).ifPresent(joint -> sentences.add("Absorber " + (j + 1)
+                + " is tuned to mode " + layout.modeNames().get(joint.modes().get(j)) + " at " + joint.points().get(j)
+                + ": in its tuning below, \"the structure\" is that mode, "
                 + ValueText.inline(DesignContent.quantity(built.design().study().structure().naturalFrequency(),
-                        Dimension.FREQUENCY), units) + " as designed; measure that mode's natural frequency."));
+                        Dimension.FREQUENCY), units) + " as designed; measure that mode's natural frequency."
+                + " site-check does not yet take one absorber per mode: outside the range, design again."));
         List<ReportSection> sections = new ArrayList<>();
         if (realisation.isEmpty()) {
             sentences.add(whyNot.isBlank() ? "Its hardware could not be sized with the project's hardware choices."

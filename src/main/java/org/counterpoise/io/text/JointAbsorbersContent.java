@@ -111,7 +111,7 @@ final class JointAbsorbersContent {
                         : "not found")), "docs/several-modes.md, the certificate");
     }
 
-    private static String modeName(SeveralAbsorbers d, int a) {
+    static String modeName(SeveralAbsorbers d, int a) {
         return d.layout().modeNames().get(d.layout().joint().orElseThrow().modes().get(a));
     }
 }

@@ -4,7 +4,6 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
-import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.realisation.ProcedureStep;
 import org.counterpoise.core.realisation.ProcedureStepKind;
 import org.counterpoise.core.realisation.StepFigure;
@@ -81,11 +80,14 @@ public final class ProcedureText {
                     + clause(units, step, " (", StepQuantity.STRUCTURE_RANGE_LOW, " to")
                     + clause(units, step, " ", StepQuantity.STRUCTURE_RANGE_HIGH, ")") + ": inside it, keep the"
                     + " absorber frequency of the design" + clause(units, step, ", ", StepQuantity.ABSORBER_TARGET_FREQUENCY)
-                    + ", whatever the structure measured (the forcing sets it: do not scale it with the structure;"
-                    + " the peak then stays within " + ValueText.percent(DesignResult.TOLERANCE_ALLOWANCE, 2)
-                    + " of the design's, and site-check with --free-structure gives the frequency re-optimised for the"
-                    + " structure as measured); outside it, do not tune: design again with the measured frequency (or"
-                    + " run site-check with --free-structure).";
+                    + ", whatever the structure measured (the forcing sets it: do not scale it with the structure"
+                    + clause(units, step, "; the peak in the band then stays within ",
+                            StepQuantity.STRUCTURE_RANGE_ALLOWANCE, " of the design's")
+                    + clause(units, step, "; the response in the band then stays below ",
+                            StepQuantity.STRUCTURE_RANGE_ALLOWANCE_OF_BARE, " of the bare structure's")
+                    + "; after fitting, site-check with --free-structure on the response measured with the absorber"
+                    + " fitted gives the frequency re-optimised for the structure as measured); outside it, do not"
+                    + " tune: design again with the measured frequency.";
             case TUNE_ABSORBER -> "Tune the absorber alone, clamped to a rigid base, by tap test or shaker to that"
                     + " frequency" + clause(units, step, " (", StepQuantity.ABSORBER_TARGET_FREQUENCY, ")")
                     + clause(units, step, " within +/-",
@@ -118,6 +120,8 @@ public final class ProcedureText {
             case EXPECTED_STRUCTURE_FREQUENCY -> "expected structure frequency";
             case STRUCTURE_RANGE_LOW -> "lowest structure frequency the design holds";
             case STRUCTURE_RANGE_HIGH -> "highest structure frequency the design holds";
+            case STRUCTURE_RANGE_ALLOWANCE -> "rise of the design's peak allowed over that range";
+            case STRUCTURE_RANGE_ALLOWANCE_OF_BARE -> "response over that range, at most, of the bare structure's";
             case ABSORBER_TARGET_FREQUENCY -> "absorber target frequency";
             case ABSORBER_FREQUENCY_TOLERANCE -> "absorber frequency tolerance, +/-";
             case CLEARANCE -> "clearance";
@@ -138,6 +142,8 @@ public final class ProcedureText {
             case EXPECTED_STRUCTURE_FREQUENCY -> ReportKey.FIGURE_EXPECTED_STRUCTURE_FREQUENCY;
             case STRUCTURE_RANGE_LOW -> ReportKey.FIGURE_STRUCTURE_RANGE_LOW;
             case STRUCTURE_RANGE_HIGH -> ReportKey.FIGURE_STRUCTURE_RANGE_HIGH;
+            case STRUCTURE_RANGE_ALLOWANCE -> ReportKey.FIGURE_STRUCTURE_RANGE_ALLOWANCE;
+            case STRUCTURE_RANGE_ALLOWANCE_OF_BARE -> ReportKey.FIGURE_STRUCTURE_RANGE_ALLOWANCE_OF_BARE;
             case ABSORBER_TARGET_FREQUENCY -> ReportKey.FIGURE_ABSORBER_TARGET_FREQUENCY;
             case ABSORBER_FREQUENCY_TOLERANCE -> ReportKey.FIGURE_ABSORBER_FREQUENCY_TOLERANCE;
             case CLEARANCE -> ReportKey.FIGURE_CLEARANCE;
@@ -151,7 +157,8 @@ public final class ProcedureText {
 
     /** A figure's value: a tolerance as a percentage, everything else a quantity of its dimension. */
     private static ReportValue value(StepFigure f) {
-        if (f.quantity() == StepQuantity.ABSORBER_FREQUENCY_TOLERANCE) {
+        if (f.quantity() == StepQuantity.ABSORBER_FREQUENCY_TOLERANCE || f.quantity() == StepQuantity.STRUCTURE_RANGE_ALLOWANCE
+                || f.quantity() == StepQuantity.STRUCTURE_RANGE_ALLOWANCE_OF_BARE) {
             return new Percent(f.value(), 2);
         }
         return f.dimension() == Dimension.RATIO ? new Quantity(f.value(), Dimension.RATIO, 4)

@@ -199,6 +199,8 @@ public enum ReportKey {
     FIGURE_EXPECTED_STRUCTURE_FREQUENCY("expected_structure_frequency_Hz"),
     FIGURE_STRUCTURE_RANGE_LOW("structure_frequency_low_Hz"),
     FIGURE_STRUCTURE_RANGE_HIGH("structure_frequency_high_Hz"),
+    FIGURE_STRUCTURE_RANGE_ALLOWANCE("structure_range_peak_rise"),
+    FIGURE_STRUCTURE_RANGE_ALLOWANCE_OF_BARE("structure_range_response_of_bare"),
     FIGURE_ABSORBER_TARGET_FREQUENCY("absorber_target_frequency_Hz"),
     FIGURE_ABSORBER_FREQUENCY_TOLERANCE("absorber_frequency_tolerance"),
     FIGURE_CLEARANCE("clearance_m"),

@@ -222,7 +222,17 @@ public final class SeveralAbsorbersContent {
         for (int j = 0; j < b.absorbers().size(); j++) {
             AbsorbersToBuild.Built built = b.absorbers().get(j);
             DesignResult own = built.design();
-            List<Field> fields = List.of(
+            List<Field> fields = new ArrayList<>();
+            if (b.set().joint().isPresent()) {
+                // its own mode, as its procedure measures it, and the range of that mode's frequency it holds
+                fields.add(new Field(ReportKey.ITEM_MODE, "mode", new Words(JointAbsorbersContent.modeName(b.set(), j),
+                        List.of())));
+                fields.add(new Field(ReportKey.ITEM_NATURAL_FREQUENCY, "at", DesignContent.quantity(
+                        own.study().structure().naturalFrequency(), Dimension.FREQUENCY)));
+                fields.add(new Field(ReportKey.ITEM_STRUCTURE_TOLERANCE, "its frequency may be off by",
+                        new Tolerance(own.structureTolerance(), 1)));
+            }
+            fields.addAll(List.of(
                     new Field(ReportKey.ITEM_STROKE_IN_BAND, "stroke in band", DesignContent.quantity(
                             own.strokeInBand().value(), Dimension.LENGTH)),
                     new Field(ReportKey.ITEM_STROKE_FROM_REST, "from rest", DesignContent.quantity(
@@ -238,7 +248,7 @@ public final class SeveralAbsorbersContent {
                     new Field(ReportKey.ITEM_DAMPER_VELOCITY, "damper velocity", DesignContent.quantity(
                             built.damperVelocity(), Dimension.VELOCITY)),
                     new Field(ReportKey.ITEM_OWN_FREQUENCY_TOLERANCE, "own frequency may be off by",
-                            new Tolerance(built.toleranceInSet(), 1)));
+                            new Tolerance(built.toleranceInSet(), 1))));
             rows.add(row(ReportKey.SEVERAL_IN_SET, "absorber " + (j + 1) + " within the set", new Fields("", fields),
                     "peaks with every absorber on the whole structure; the clearance is the stroke margin times the"
                             + " larger stroke" + (own.runUpStroke().basis() == RunUpStroke.Basis.TRANSIENT
