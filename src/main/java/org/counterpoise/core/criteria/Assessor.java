@@ -9,6 +9,7 @@ import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.model.Excitation;
 import org.counterpoise.core.model.ExcitationOrder;
 import org.counterpoise.core.model.FrequencyBand;
+import org.counterpoise.core.system.ModalSystem;
 import org.counterpoise.core.model.Structure;
 import org.counterpoise.core.model.Tuning;
 import org.counterpoise.core.rational.MeanSquare;
@@ -116,6 +117,42 @@ public final class Assessor {
      */
     public Acceptance acceptance(Structure structure, Tuning tuning) {
         return new Acceptance(criterion, read(structure, Optional.empty()), read(structure, Optional.of(tuning)));
+    }
+
+    /**
+     * The verdict on a structure of several modes, bare (before) and with its absorbers (after), at a
+     * response point under a force at another: the same exact searches on the whole structure's
+     * transfer function ({@link OrderResponses#ofModes}).
+     *
+     * @param withAbsorbers the modes with the absorbers
+     * @param forcePoint where the force acts
+     * @param responsePoint where the criterion judges the response
+     * @return the verdict before and after
+     * @throws IllegalArgumentException for a white-noise disturbance (a project of several modes takes
+     *     one force order)
+     */
+    public Acceptance acceptance(ModalSystem withAbsorbers, String forcePoint, String responsePoint) {
+        if (excitation.spectrum().isWhiteNoise()) {
+            throw new IllegalArgumentException("bug: a structure of several modes under white noise");
+        }
+        return new Acceptance(criterion, read(withAbsorbers.bare(), forcePoint, responsePoint),
+                read(withAbsorbers, forcePoint, responsePoint));
+    }
+
+    private Reading read(ModalSystem system, String forcePoint, String responsePoint) {
+        OrderResponses r = OrderResponses.ofModes(orders, criterion.quantity(), weighting, system, forcePoint,
+                responsePoint);
+        FrequencyBand band = excitation.band();
+        double omega1 = system.referenceFrequency();
+        double gLow = band.low() / omega1;
+        double gHigh = band.high() / omega1;
+        Worst worst = criterion.combination() == OrderCombination.TOGETHER ? together(r, gLow, gHigh)
+                : eachOrder(r, gLow, gHigh);
+        List<String> zones = criterion.zones().stream().filter(z -> z.contains(worst.value())).map(Zone::id)
+                .toList();
+        OptionalInt governing = worst.order() >= 0 ? OptionalInt.of(worst.order()) : OptionalInt.empty();
+        return new Reading(worst.value(), worst.limit(), worst.ratio() * omega1, governing, zones,
+                worst.outsideRange());
     }
 
     /**

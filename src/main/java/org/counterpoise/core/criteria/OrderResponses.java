@@ -1,6 +1,7 @@
 package org.counterpoise.core.criteria;
 
 import java.util.List;
+import org.counterpoise.core.model.ExcitationKind;
 import org.counterpoise.core.model.ExcitationOrder;
 import org.counterpoise.core.model.Structure;
 import org.counterpoise.core.model.Tuning;
@@ -11,6 +12,7 @@ import org.counterpoise.core.rational.TransferFunction;
 import org.counterpoise.core.response.ResponseKind;
 import org.counterpoise.core.response.ResponseScale;
 import org.counterpoise.core.response.TransferFunctions;
+import org.counterpoise.core.system.ModalSystem;
 
 /**
  * The judged response of every excitation order of one system (bare or with the absorber), each
@@ -73,6 +75,57 @@ final class OrderResponses {
                         RealPolynomials.multiply(den, scaled(weighting[1], f * omega1)));
             }
             scale[j] = Math.abs(ResponseScale.of(structure, order.kind(), order.amplitude(), quantity));
+            factor[j] = f;
+        }
+        return new OrderResponses(weighted, unweighted, scale, factor, omega1);
+    }
+
+    /**
+     * The same for a structure of several modes with absorbers, driven by a force at one point and
+     * judged at another ({@link ModalSystem}): its displacement transfer function in g = omega /
+     * omega_ref, times s^p for velocity (p = 1) or acceleration (p = 2), and the SI scale times
+     * omega_ref^p (harmonic motion: v = omega x, a = omega^2 x). Every order must be a force at the
+     * same point (a project of several modes takes one force order).
+     *
+     * @param orders the orders, design order first, each a force
+     * @param quantity displacement, velocity or acceleration of the response point
+     * @param weighting the weighting's numerator and denominator, or null for none
+     * @param system the modes and absorbers
+     * @param forcePoint where the force acts
+     * @param responsePoint where the response is judged
+     * @return the responses
+     */
+    static OrderResponses ofModes(List<ExcitationOrder> orders, ResponseKind quantity, double[][] weighting,
+            ModalSystem system, String forcePoint, String responsePoint) {
+        int power = switch (quantity) {
+            case DISPLACEMENT -> 0;
+            case VELOCITY -> 1;
+            case ACCELERATION -> 2;
+            default -> throw new IllegalArgumentException("bug: a structure of several modes judged on " + quantity);
+        };
+        TransferFunction x = system.transferFunction(forcePoint, responsePoint);
+        double[] sp = new double[power + 1];
+        sp[power] = 1.0;
+        TransferFunction h = TransferFunction.of(RealPolynomials.multiply(x.numerator(), sp), x.denominator());
+        double omega1 = system.referenceFrequency();
+        int n = orders.size();
+        TransferFunction[] weighted = new TransferFunction[n];
+        TransferFunction[] unweighted = new TransferFunction[n];
+        double[] scale = new double[n];
+        double[] factor = new double[n];
+        for (int j = 0; j < n; j++) {
+            ExcitationOrder order = orders.get(j);
+            if (order.kind() != ExcitationKind.FORCE) {
+                throw new IllegalArgumentException("bug: a structure of several modes driven by " + order.kind());
+            }
+            double f = order.frequencyFactor();
+            double[] num = f == 1.0 ? h.numerator() : scaled(h.numerator(), f);
+            double[] den = f == 1.0 ? h.denominator() : scaled(h.denominator(), f);
+            unweighted[j] = f == 1.0 ? h : TransferFunction.of(num, den);
+            weighted[j] = weighting == null ? unweighted[j]
+                    : TransferFunction.of(RealPolynomials.multiply(num, scaled(weighting[0], f * omega1)),
+                            RealPolynomials.multiply(den, scaled(weighting[1], f * omega1)));
+            scale[j] = system.responseScale(forcePoint, order.amplitude(), responsePoint) * Math.pow(omega1, power);
             factor[j] = f;
         }
         return new OrderResponses(weighted, unweighted, scale, factor, omega1);

@@ -183,6 +183,19 @@ public record DesignResult(DesignStudy study, String methodSource, String method
                 : Optional.empty();
     }
 
+    /**
+     * @param judged another verdict of the study's criterion (the whole structure's, for several modes
+     *     and absorbers)
+     * @return this result with that verdict, and no worst-case verdict (it was this design's alone)
+     */
+    public DesignResult withAcceptance(Optional<Acceptance> judged) {
+        return new DesignResult(study, methodSource, methodNote, tuning, absorber, staticDeflection, responseBefore,
+                responseAfter, motionBefore, motionAfter, strokeInBand, strokeRunUp, clearance, springForce,
+                damperForce, absorberForce, coupledNaturalFrequencies, stiffnessDetuning, massDetuning,
+                structureTolerance, absorberTolerance, warnings, activeConstraint, runUpStroke, judged,
+                Optional.empty());
+    }
+
     /** @return before over after for the response that matters; +infinity when before is unbounded */
     public double reductionFactor() {
         return responseBefore.value() / responseAfter.value();

@@ -5,6 +5,8 @@ import java.util.Optional;
 import java.util.function.DoubleFunction;
 import java.util.function.DoubleUnaryOperator;
 import org.apache.commons.math3.complex.Complex;
+import org.counterpoise.core.criteria.Acceptance;
+import org.counterpoise.core.criteria.Assessor;
 import org.counterpoise.core.model.FrequencyBand;
 import org.counterpoise.core.robust.MistuningRange;
 import org.counterpoise.core.system.AbsorberSensitivity;
@@ -205,5 +207,15 @@ public record SeveralAbsorbers(AbsorberLayout layout, int targetMode, double eff
     /** @return the single absorber's peak over this design's peak (above 1: the split pays), when compared */
     public Optional<Double> gain() {
         return single.map(s -> s.peak() / peakAfter);
+    }
+
+    /**
+     * @param study the study the set was designed for (its criterion and force)
+     * @return its criterion judged on the whole structure, bare and with these absorbers, at the
+     *     response point ({@link Assessor#acceptance(ModalSystem, String, String)}); empty without a criterion
+     */
+    public Optional<Acceptance> acceptance(DesignStudy study) {
+        return study.criterion().map(c -> Assessor.of(c, study.excitation()).acceptance(ModalSystem.of(
+                layout.structure(), absorbers), layout.excitationPoint(), layout.responsePoint()));
     }
 }

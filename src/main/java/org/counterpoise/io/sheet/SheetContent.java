@@ -240,8 +240,10 @@ public record SheetContent(String projectName, String notes, String date, String
             MonteCarloOutcome monteCarlo, ProjectIdentity identity, MethodComparison comparison,
             AmplitudeConvention convention, Optional<Realisation> realisation, UnitSystem units,
             MeasuredSource measured, SeveralAbsorbers several, HardwareChoice hardware) {
-        ReportContent report = SeveralAbsorbersContent.with(report(r, monteCarlo, identity, comparison, realisation,
-                units, measured), several);
+        // the criterion is judged on the whole structure with every absorber, not on the target mode alone
+        DesignResult judged = r.withAcceptance(several.acceptance(r.study()));
+        ReportContent report = SeveralAbsorbersContent.with(report(judged, monteCarlo, identity, comparison,
+                realisation, units, measured), several);
         SketchFigures sketch = SketchFigures.of(r, realisation, units);
         if (several.absorbers().size() == 1) {
             return of(report.shownIn(convention), notes, date, revision, identity, sketch);

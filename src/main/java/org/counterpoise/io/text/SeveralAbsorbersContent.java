@@ -67,6 +67,10 @@ public final class SeveralAbsorbersContent {
             + " spring batch), on the target mode alone; each absorber's own scatter and the damping range are not in"
             + " that worst case (the sheet gives each absorber's tolerance on its own frequency within the set): check"
             + " their tuning on site with care.";
+    /** Where the criterion is judged for several modes or absorbers. */
+    static final String ACCEPTANCE_WHOLE = "Acceptance: the criterion is judged on the whole structure, every mode with"
+            + " every absorber (and every mode without them), at the response point under the project's force; the"
+            + " other single-mode sections are not.";
     /** An optimum of the split that failed its certificate. */
     static final String NOT_CERTIFIED = "The optimum of the split absorbers' tunings could not be certified"
             + " (docs/several-modes.md): treat their tunings as a good design, not the best.";
@@ -107,6 +111,9 @@ public final class SeveralAbsorbersContent {
             sections.add(section);
         }
         List<String> cautions = new ArrayList<>(content.cautions());
+        if (content.sections().stream().anyMatch(s -> s.id() == SectionId.ACCEPTANCE)) {
+            cautions.add(ACCEPTANCE_WHOLE);
+        }
         if (d.joint().isPresent()) {
             cautions.add(JointAbsorbersContent.sectionsCaution(d));
             cautions.addAll(JointAbsorbersContent.edgeCautions(d));

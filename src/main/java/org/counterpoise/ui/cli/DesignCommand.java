@@ -55,16 +55,19 @@ public final class DesignCommand implements Callable<Integer> {
         DesignDossier dossier = DesignDossier.of(loaded.project().toStudy());
         // the comparison first: it makes the design on this thread while the other methods' run
         MethodComparison comparison = dossier.comparison(ProgressListener.NONE);
-        DesignResult result = dossier.design();
+        DesignResult designed0 = dossier.design();
+        // several modes or absorbers (format 6): their own section; a project of one of each has none
+        Optional<SeveralAbsorbers> several = SeveralModes.layout(loaded.project())
+                .map(layout -> SeveralAbsorbersDesigner.design(designed0, layout));
+        // the criterion is judged on the whole structure with every absorber, not on the target mode alone
+        DesignResult result = several.map(d -> designed0.withAcceptance(d.acceptance(designed0.study())))
+                .orElse(designed0);
         // the JSON is SI whatever the display: its keys name SI units, its words follow them
         UnitSystem shown = json ? UnitSystem.SI : DisplayUnitSystem.of(units, loaded.project());
         ReportContent designed = DesignContent.of(result, json ? ProjectIdentity.EMPTY : loaded.project().identity(),
                 Optional.empty(), shown).with(ComparisonContent.of(comparison, result.study()));
         ReportContent withHardware = HardwareContent.with(MeasuredSourceContent.with(designed,
                 loaded.project().structure().measured()), dossier, loaded.project().hardware());
-        // several modes or absorbers (format 6): their own section; a project of one of each has none
-        Optional<SeveralAbsorbers> several = SeveralModes.layout(loaded.project())
-                .map(layout -> SeveralAbsorbersDesigner.design(result, layout));
         // each absorber of a set as it works within the set: the figures its parts are sized from
         ReportContent content = several.map(d -> SeveralAbsorbersContent.with(withHardware, d, d.absorbers().size() > 1
                 ? Optional.of(AbsorbersToBuild.of(result, d)) : Optional.empty())).orElse(withHardware)
