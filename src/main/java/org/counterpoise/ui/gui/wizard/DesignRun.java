@@ -241,8 +241,14 @@ final class DesignRun {
         UnitSystem units = p.displayUnits();
         ChartTheme theme = ChartHost.currentTheme();
         view.computing();
-        tasks.current("Several absorbers", progress -> SeveralAbsorbersView.Shown.of(dossier.design(), layout.get(),
-                units, theme), view::show, e -> {
+        DesignResult design = dossier.design();
+        tasks.current("Several absorbers", progress -> SeveralAbsorbersView.Shown.of(design, layout.get(),
+                units, theme), shown -> {
+                    view.show(shown);
+                    // the verdict above the result is the whole structure's, as design and sheet give it
+                    shown.acceptance().ifPresent(a -> steps.result().verdict().show(a,
+                            VerdictPanel.orderNames(design, p)));
+                }, e -> {
                     if (e instanceof CoreException plain) {
                         view.failed(plain.getMessage());
                     } else {

@@ -6,6 +6,7 @@ import java.util.Collections;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import java.util.TreeSet;
 import javax.swing.BorderFactory;
 import javax.swing.DefaultComboBoxModel;
@@ -17,6 +18,7 @@ import javax.swing.JSplitPane;
 import javax.swing.JTable;
 import javax.swing.table.DefaultTableModel;
 import org.counterpoise.core.design.AbsorberLayout;
+import org.counterpoise.core.criteria.Acceptance;
 import org.counterpoise.core.design.AbsorbersToBuild;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.design.SeveralAbsorbers;
@@ -70,7 +72,7 @@ final class SeveralAbsorbersView {
      *     first, then the structure's other named points in alphabetical order
      */
     record Shown(AbsorbersToBuild build, ReportTable.Grid table, String summary,
-            Map<String, XYChart> charts) {
+            Map<String, XYChart> charts, Optional<Acceptance> acceptance) {
         /** Copies the charts, keeping their order. */
         Shown {
             charts = Collections.unmodifiableMap(new LinkedHashMap<>(charts));
@@ -108,7 +110,8 @@ final class SeveralAbsorbersView {
             for (String other : new TreeSet<>(layout.structure().points())) {
                 charts.putIfAbsent(other, SeveralAbsorbersCharts.response(set, other, units, theme, 640, 380));
             }
-            return new Shown(build, grid, words, charts);
+            // the criterion judged on the whole structure (as design and sheet judge it)
+            return new Shown(build, grid, words, charts, set.acceptance(design.study()));
         }
     }
 
