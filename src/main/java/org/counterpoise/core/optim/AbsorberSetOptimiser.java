@@ -21,7 +21,8 @@ import org.counterpoise.core.response.ResponseKind;
  * HInfinityOptimiser}; Den Hartog's equal-peak design when the structure is undamped and the band
  * open) split into n equal absorbers, unspread and spread by sqrt(mu) / 2 and sqrt(mu) with less damping, and the
  * two best points of the coarse scan; for individual tuning, the uniform optimum and the two best
- * scan points (a scan point whose peak is 20 % above a result already found is not pursued). The
+ * scan points (a scan point whose peak is 20 % above a result already found is not pursued; the
+ * uniform optimum that seeds the individual search is not certified itself). The
  * lowest result is certified ({@link AbsorberSetCertificate}): the active maxima
  * are equal to 1e-9, the first-order conditions hold, no point of the coarse global scan is lower
  * and no small random move lowers the peak. A scan point that is lower restarts the search from it
@@ -38,14 +39,24 @@ public final class AbsorberSetOptimiser {
     public static AbsorberSetOptimum optimise(AbsorberSetProblem problem) {
         EvaluationCounter counter = new EvaluationCounter();
         AbsorberSetVariables v = new AbsorberSetVariables(problem);
+        MinimaxSearch.Result result = search(v, counter, true);
+        return new AbsorberSetOptimum(problem, v.design(result.point()), result.peak(), result.certificate(),
+                counter.count());
+    }
+
+    /**
+     * @param v the variables
+     * @param counter counts transfer functions built
+     * @param certify false for the uniform optimum that only seeds the individual search
+     * @return the lowest point found (with its certificate when asked)
+     */
+    private static MinimaxSearch.Result search(AbsorberSetVariables v, EvaluationCounter counter, boolean certify) {
         List<double[]> scan = AbsorberSetScan.scan(v, counter);
         List<double[]> seeds = seeds(v, scan, counter);
         // the closed-form seeds are always pursued; the scan's two best (uniform only) only when promising
-        int structured = problem.tuning() == AbsorberSetTuning.UNIFORM ? seeds.size() - Math.min(2, scan.size())
+        int structured = v.problem().tuning() == AbsorberSetTuning.UNIFORM ? seeds.size() - Math.min(2, scan.size())
                 : seeds.size();
-        MinimaxSearch.Result result = MinimaxSearch.run(v, seeds, structured, scan, counter);
-        return new AbsorberSetOptimum(problem, v.design(result.point()), result.peak(), result.certificate(),
-                counter.count());
+        return MinimaxSearch.run(v, seeds, structured, scan, counter, certify);
     }
 
     private static List<double[]> seeds(AbsorberSetVariables v, List<double[]> scan, EvaluationCounter counter) {
@@ -68,9 +79,9 @@ public final class AbsorberSetOptimiser {
                 seeds.add(v.point(t.tuningRatio(), Math.min(AbsorberSetProblem.MAX_SPREAD, root), zeta / 3));
             }
         } else {
-            AbsorberSetOptimum uniform = AbsorberSetOptimiser.optimise(problem.with(AbsorberSetTuning.UNIFORM));
-            counter.add(uniform.evaluations());
-            seeds.add(v.individualPoint(uniform.design()));
+            // the uniform optimum as found, without its certificate (a seed needs none)
+            AbsorberSetVariables uniform = new AbsorberSetVariables(problem.with(AbsorberSetTuning.UNIFORM));
+            seeds.add(v.individualPoint(uniform.design(search(uniform, counter, false).point())));
             return seeds; // the scan's random points are far coarser; one that beats the result restarts it
         }
         for (int i = 0; i < Math.min(2, scan.size()); i++) {

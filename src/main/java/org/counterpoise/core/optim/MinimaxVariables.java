@@ -126,6 +126,17 @@ interface MinimaxVariables {
     }
 
     /**
+     * A lower bound on the peak over the band, cheap next to {@link #polynomialPeak} (which the coarse
+     * scan computes only for points this bound does not rule out, {@link AbsorberSetScan#evaluate}).
+     *
+     * @param p the point
+     * @return the largest factored |H| at the frequencies {@link AbsorberSetScan#sampledMaximum} tries
+     */
+    default double sampledPeak(double[] p) {
+        return Math.exp(0.5 * AbsorberSetScan.sampledMaximum(logMagnitudeSquared(p), bandLow(), bandHigh()));
+    }
+
+    /**
      * The exact peak over the band: the largest of {@link #maxima}.
      *
      * @param p the point

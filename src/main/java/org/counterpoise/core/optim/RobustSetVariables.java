@@ -110,6 +110,16 @@ final class RobustSetVariables implements MinimaxVariables {
         return max;
     }
 
+    /** @return the largest of the builds' lower bounds (for the coarse scan) */
+    @Override
+    public double sampledPeak(double[] p) {
+        double max = 0;
+        for (AbsorberSetVariables b : builds) {
+            max = Math.max(max, b.sampledPeak(p));
+        }
+        return max;
+    }
+
     /** @return every build's pieces, each with its build's index as a fourth column */
     @Override
     public List<double[]> pieces(double[] p, boolean shoulders) {
