@@ -128,17 +128,6 @@ class OnePerModeDesignTest {
     private static double sweep(ModalStructure s, List<PointAbsorber> absorbers, double low, double high) {
         DoubleUnaryOperator magnitude = w -> ModalDirectSolve.solve(s.modes(), absorbers, "corner", "corner", w)[0].abs();
         int samples = 20_000;
-        double[] value = new double[samples + 1];
-        for (int i = 0; i <= samples; i++) {
-            value[i] = magnitude.applyAsDouble(low + (high - low) * i / samples);
-        }
-        double best = Math.max(value[0], value[samples]);
-        for (int i = 1; i < samples; i++) {
-            if (value[i] >= value[i - 1] && value[i] >= value[i + 1]) {
-                best = Math.max(best, DenseSweep.maximum(magnitude, low + (high - low) * (i - 1) / samples,
-                        low + (high - low) * (i + 1) / samples, 8));
-            }
-        }
-        return best;
+        return DenseSweep.everyMaximum(magnitude, low, high, samples);
     }
 }
