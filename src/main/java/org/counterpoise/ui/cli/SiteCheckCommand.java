@@ -2,7 +2,6 @@ package org.counterpoise.ui.cli;
 
 import java.io.PrintWriter;
 import java.nio.file.Path;
-import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 import java.util.OptionalDouble;
@@ -21,13 +20,7 @@ import org.counterpoise.core.realisation.Realiser;
 import org.counterpoise.core.units.Unit;
 import org.counterpoise.io.PlainText;
 import org.counterpoise.io.chart.SiteCheckCharts;
-import org.counterpoise.core.design.AbsorbersToBuild;
-import org.counterpoise.core.commission.SetCommissioning;
-import org.counterpoise.core.realisation.SetAbsorberHardware;
-import org.counterpoise.io.commission.SetOperatingSite;
-import org.counterpoise.io.commission.SetSiteCheck;
-import org.counterpoise.io.commission.SetSiteCheckJson;
-import org.counterpoise.io.commission.SetSiteCheckReport;
+import org.counterpoise.io.commission.SetSiteRun;
 import org.counterpoise.io.commission.SiteCheck;
 import org.counterpoise.io.commission.SiteCheckJson;
 import org.counterpoise.io.commission.SiteCheckReport;
@@ -201,31 +194,22 @@ public final class SiteCheckCommand implements Callable<Integer> {
      * whole structure's model, and the response with them fitted, each absorber as built.
      */
     private Integer several(LoadedProject loaded, DesignResult single, SeveralAbsorbers design) {
-        AbsorbersToBuild build = AbsorbersToBuild.of(single, design);
-        Optional<SetOperatingSite> op = operatingInput().map(in -> SetOperatingSite.run(build, in));
-        Optional<SetSiteCheck> check = Optional.empty();
-        List<String> wrote = List.of();
+        Optional<SetSiteRun.FittedInput> fitted = Optional.empty();
         if (fittedFrf != null) {
             FrfKind k = FrfOptions.kind("--kind", kind);
             FrfUnit unit = frfUnits == null ? FrfUnit.si(k) : FrfUnit.parse(frfUnits, k, "--frf-units");
-            // each absorber's trim plates as the sheet supplies them: its trims are whole plates
-            List<Optional<SetCommissioning.Plates>> plates = new ArrayList<>();
-            for (AbsorbersToBuild.Built built : build.absorbers()) {
-                plates.add(SetAbsorberHardware.of(built, loaded.project().hardware()).realisation().map(r ->
-                        new SetCommissioning.Plates(r.trim(), r.tolerances().absorberFrequency())));
-            }
-            SetSiteCheck fitted = SetSiteCheck.run(loaded.project().name(), design, fittedFrf, unit,
+            fitted = Optional.of(new SetSiteRun.FittedInput(fittedFrf, unit,
                     all -> band == null ? all : FrfOptions.band("--band", band, all), freeStructure,
-                    weighed(design.absorbers().size()), plates, loaded.project().displayUnits());
-            check = Optional.of(fitted);
-            wrote = plot == null ? List.of() : PlotFiles.write("--plot", List.of(plot),
-                    List.of(SiteCheckCharts.setMagnitude(fitted.lines(), design, fitted.check().built(), unit,
-                            CHART_WIDTH, CHART_HEIGHT)), force, List.of(fittedFrf, file));
+                    weighed(design.absorbers().size())));
         }
+        SetSiteRun run = SetSiteRun.run(loaded.project().name(), single, design, loaded.project().hardware(),
+                loaded.project().displayUnits(), operatingInput(), fitted);
+        List<String> wrote = plot == null || run.fitted().isEmpty() ? List.of() : PlotFiles.write("--plot",
+                List.of(plot), List.of(SiteCheckCharts.setMagnitude(run.fitted().get().lines(), design,
+                        run.fitted().get().check().built(), run.fitted().get().unit(), CHART_WIDTH, CHART_HEIGHT)),
+                force, List.of(fittedFrf, file));
         PrintWriter out = spec.commandLine().getOut();
-        String name = loaded.project().name();
-        out.print(PlainText.forTerminal(json ? SetSiteCheckJson.toJson(name, op, check)
-                : SetSiteCheckReport.render(name, design, op, check, loaded.project().displayUnits())));
+        out.print(PlainText.forTerminal(json ? run.json() : run.report()));
         // with --json the standard output is the JSON alone; what was written goes to standard error
         PrintWriter notes = json ? spec.commandLine().getErr() : out;
         wrote.forEach(notes::println);
