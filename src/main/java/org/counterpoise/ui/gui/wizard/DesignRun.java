@@ -194,7 +194,7 @@ final class DesignRun {
             steps.result().designedFrom(p);
             steps.result().show(d.design(), d.curves());
             steps.result().hardware().design(d, p.hardware(), p.displayUnits(),
-                    FormatMigration.isOneModeOneAbsorber(p));
+                    FormatMigration.isOneModeOneAbsorber(p) ? Optional.empty() : SeveralModes.layout(p));
             steps.sheet().show(d, p);
             if (steps.sheet().component().isShowing()) {
                 steps.sheet().shown();

@@ -25,6 +25,7 @@ import javax.swing.JTextArea;
 import javax.swing.SwingUtilities;
 import javax.swing.table.DefaultTableCellRenderer;
 import javax.swing.table.DefaultTableModel;
+import org.counterpoise.core.design.AbsorberLayout;
 import org.counterpoise.core.design.DesignDossier;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.error.CoreException;
@@ -65,6 +66,9 @@ final class RealisationView {
     private final JButton siteCheck = new JButton("Check on site\u2026");
     private final SiteCheckDialog siteDialog;
     private boolean siteCheckable = true;
+    /** The project's modes and absorbers (empty for one of each) and hardware choices, for the site check. */
+    private Optional<AbsorberLayout> layout = Optional.empty();
+    private HardwareChoice choice = HardwareChoice.DEFAULT;
     private static final String SITE_CHECK_TIP = "Compare an operating spectrum and the response measured with the"
             + " absorber fitted with this design: the absorber as built and the trim plates";
 
@@ -111,21 +115,24 @@ final class RealisationView {
      * @param units the project's display unit system (the tables, warnings and procedure are shown in it)
      */
     void design(DesignDossier dossier, HardwareChoice choice, UnitSystem units) {
-        design(dossier, choice, units, true);
+        design(dossier, choice, units, Optional.empty());
     }
 
     /**
-     * As {@link #design(DesignDossier, HardwareChoice, UnitSystem)}, saying whether the project is one
-     * absorber on one mode: the site check fits one absorber's response, so it is offered only then.
+     * As {@link #design(DesignDossier, HardwareChoice, UnitSystem)}, with the project's modes and
+     * absorbers: the site check takes one absorber, or several absorbers at one point (checked against
+     * the whole structure); one absorber per mode is not checked yet, so it is not offered then.
      * @param dossier the design's dossier, or null while no design is valid
      * @param choice the project's hardware choices
      * @param units the project's display unit system
-     * @param oneAbsorber whether the project is one absorber on one mode
+     * @param layout the modes and absorbers, empty for one absorber on one mode
      */
-    void design(DesignDossier dossier, HardwareChoice choice, UnitSystem units, boolean oneAbsorber) {
-        siteCheckable = oneAbsorber;
-        siteCheck.setToolTipText(oneAbsorber ? SITE_CHECK_TIP : "The site check fits one absorber on one mode;"
-                + " this project has several modes or absorbers");
+    void design(DesignDossier dossier, HardwareChoice choice, UnitSystem units, Optional<AbsorberLayout> layout) {
+        siteCheckable = layout.isEmpty() || layout.get().joint().isEmpty();
+        this.layout = layout;
+        this.choice = choice;
+        siteCheck.setToolTipText(siteCheckable ? SITE_CHECK_TIP : "The site check does not take one absorber per"
+                + " mode yet");
         if (dossier == null) {
             message("Fix the inputs to see the hardware.");
             return;
@@ -185,7 +192,8 @@ final class RealisationView {
         shown = sized.sections();
         shownChoice = r.choice();
         siteCheck.setEnabled(siteCheckable);
-        siteDialog.basis(!siteCheckable ? null : new SiteCheckDialog.Basis(sized.design().study().name(), sized.design(), r, sized.units()));
+        siteDialog.basis(!siteCheckable ? null : new SiteCheckDialog.Basis(sized.design().study().name(),
+                sized.design(), r, sized.units(), layout, choice));
         sections.revalidate();
         sections.repaint();
         // a new realisation is read from its top (the part list), whatever was scrolled to before

@@ -6,11 +6,8 @@ import java.awt.Dimension;
 import java.awt.FlowLayout;
 import java.awt.Font;
 import java.awt.GridLayout;
-import java.nio.file.Path;
 import java.util.List;
 import java.util.Optional;
-import java.util.OptionalDouble;
-import java.util.function.UnaryOperator;
 import javax.swing.BorderFactory;
 import javax.swing.DefaultListCellRenderer;
 import javax.swing.JButton;
@@ -30,18 +27,18 @@ import javax.swing.event.DocumentEvent;
 import javax.swing.event.DocumentListener;
 import javax.swing.filechooser.FileNameExtensionFilter;
 import org.counterpoise.core.criteria.AmplitudeConvention;
+import org.counterpoise.core.design.AbsorberLayout;
 import org.counterpoise.core.design.DesignResult;
 import org.counterpoise.core.error.CoreException;
-import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.identify.FrfKind;
+import org.counterpoise.core.realisation.HardwareChoice;
 import org.counterpoise.core.realisation.Realisation;
-import org.counterpoise.core.units.Unit;
 import org.counterpoise.io.chart.SiteCheckCharts;
+import org.counterpoise.io.commission.SetSiteCheck;
+import org.counterpoise.io.commission.SetSiteRun;
 import org.counterpoise.io.commission.SiteCheck;
 import org.counterpoise.io.commission.SiteCheckReport;
-import org.counterpoise.io.commission.SiteCheckRun;
 import org.counterpoise.io.measurement.FrfUnit;
-import org.counterpoise.io.measurement.SpectrumCsv;
 import org.counterpoise.io.text.UnitSystem;
 import org.counterpoise.ui.gui.plot.ChartHost;
 import org.counterpoise.ui.gui.task.TaskRunner;
@@ -56,9 +53,10 @@ import org.counterpoise.ui.gui.task.TaskRunner;
 final class SiteCheckDialog {
     private static final String[] KINDS = {"receptance (displacement per force)", "mobility (velocity per force)",
         "accelerance (acceleration per force)"};
-    private static final String CAUTION = "Both measurements are taken at the absorber's point. Secure the absorber"
-            + " mass before any work on it and measure with the machine stopped and isolated; a disturbance larger than"
-            + " the project's scales the stroke and the forces with it. Follow local codes and licensed practice.";
+    private static final String CAUTION = "Both measurements are taken at the absorber's point (several absorbers:"
+            + " the response at their point, the spectrum at the project's response point). Secure every absorber mass"
+            + " before any work on it and measure with the machine stopped and isolated; a disturbance larger than"
+            + " the project's scales the strokes and the forces with it. Follow local codes and licensed practice.";
 
     /**
      * The design the check is made against.
@@ -66,8 +64,23 @@ final class SiteCheckDialog {
      * @param design the design
      * @param realisation its hardware (trim plan, part tolerances)
      * @param units the display unit system
+     * @param layout the project's modes and absorbers at one point, or empty for one absorber on one mode
+     * @param hardware the project's hardware choices (each absorber's trim plates, for several)
      */
-    record Basis(String project, DesignResult design, Realisation realisation, UnitSystem units) {
+    record Basis(String project, DesignResult design, Realisation realisation, UnitSystem units,
+            Optional<AbsorberLayout> layout, HardwareChoice hardware) {
+    }
+
+    /** What a check found: one absorber's ({@link SiteCheck}) or several absorbers' ({@link SetSiteRun}). */
+    sealed interface Checked permits One, Several {
+    }
+
+    /** @param check one absorber's check */
+    record One(SiteCheck check) implements Checked {
+    }
+
+    /** @param run several absorbers' check */
+    record Several(SetSiteRun run) implements Checked {
     }
 
     private final Component owner;
@@ -104,7 +117,7 @@ final class SiteCheckDialog {
     private Basis basis;
     /** The number of the newest check; one that ends with another number is stale. Event thread only. */
     private long number;
-    private SiteCheck shown;
+    private Checked shown;
 
     /**
      * @param owner the window it belongs to
@@ -132,9 +145,14 @@ final class SiteCheckDialog {
         inputsChanged(current == null ? "No valid design: fix the inputs first." : "The design changed: press Check.");
     }
 
-    /** @return the check on screen, or null, for tests */
+    /** @return one absorber's check on screen, or null, for tests */
     SiteCheck shown() {
-        return shown;
+        return shown instanceof One one ? one.check() : null;
+    }
+
+    /** @return several absorbers' check on screen, or null, for tests */
+    SetSiteRun shownSet() {
+        return shown instanceof Several several ? several.run() : null;
     }
 
     private JDialog build() {
@@ -191,7 +209,7 @@ final class SiteCheckDialog {
         kindRow.add(kind);
         kindRow.add(frfUnit);
         inputs.add(kindRow);
-        inputs.add(new JLabel("Absorber mass as weighed with its plates, kg (empty: the design's)"));
+        inputs.add(new JLabel("Absorber mass as weighed, kg (several: 450; 452; empty: the design's)"));
         inputs.add(weighed);
         inputs.add(freeStructure);
         JPanel checkRow = new JPanel(new FlowLayout(FlowLayout.LEFT, 4, 0));
@@ -273,7 +291,7 @@ final class SiteCheckDialog {
                 freeStructure.isSelected(), weighed.getText().strip());
         status.setText("Checking\u2026");
         check.setEnabled(false);
-        tasks.current(null, progress -> checked(in, against), result -> {
+        tasks.current(null, progress -> SiteCheckInputs.checked(in, against), result -> {
             check.setEnabled(basis != null);
             if (started == number) {
                 show(result);
@@ -289,39 +307,7 @@ final class SiteCheckDialog {
         });
     }
 
-    /** Reads the files and checks; every problem is an InvalidInputException in plain words. */
-    static SiteCheck checked(Inputs in, Basis basis) {
-        Optional<SiteCheckRun.OperatingInput> op = Optional.empty();
-        if (!in.spectrumFile().isEmpty()) {
-            OptionalDouble at = in.running().isEmpty() ? OptionalDouble.empty() : OptionalDouble.of(Unit.HERTZ.toSi(
-                    positive(in.running(), "running frequency", "a frequency in Hz above 0, or empty")));
-            op = Optional.of(new SiteCheckRun.OperatingInput(Path.of(in.spectrumFile()),
-                    SpectrumCsv.unit(in.spectrumUnit(), "unit of the amplitudes"), in.convention(), at,
-                    in.withAbsorber()));
-        }
-        Optional<SiteCheckRun.FittedInput> fitted = Optional.empty();
-        if (!in.frfFile().isEmpty()) {
-            fitted = Optional.of(new SiteCheckRun.FittedInput(Path.of(in.frfFile()),
-                    FrfUnit.parse(in.frfUnit(), in.kind(), "unit of the values"), UnaryOperator.identity(),
-                    in.freeStructure(), in.weighed().isEmpty() ? OptionalDouble.empty()
-                            : OptionalDouble.of(positive(in.weighed(), "absorber mass as weighed", "a mass in kg above 0, or empty"))));
-        }
-        return SiteCheckRun.run(basis.project(), basis.design(), basis.realisation(), basis.units(), op, fitted);
-    }
-
-    private static double positive(String text, String field, String allowed) {
-        try {
-            double v = Double.parseDouble(text.replace(',', '.'));
-            if (v > 0 && Double.isFinite(v)) {
-                return v;
-            }
-        } catch (NumberFormatException e) {
-            // falls through to the plain message
-        }
-        throw new InvalidInputException(field, text, allowed);
-    }
-
-    private void show(SiteCheck result) {
+    private void show(Checked result) {
         shown = result;
         if (dialog == null) {
             return;
@@ -331,15 +317,28 @@ final class SiteCheckDialog {
             chart.message("No check for the inputs shown.");
             return;
         }
-        report.setText(SiteCheckReport.render(result));
-        report.setCaretPosition(0);
-        if (result.fitted().isPresent()) {
-            SiteCheck.Fitted f = result.fitted().get();
-            chart.show(SiteCheckCharts.magnitude(f.lines(), result.design().study().structure(),
-                    result.design().tuning(), f.check().built(), f.unit(), 640, 280));
-        } else {
-            chart.message("Give the response with the absorber fitted to see it against the design.");
+        if (result instanceof One one) {
+            SiteCheck check = one.check();
+            report.setText(SiteCheckReport.render(check));
+            if (check.fitted().isPresent()) {
+                SiteCheck.Fitted f = check.fitted().get();
+                chart.show(SiteCheckCharts.magnitude(f.lines(), check.design().study().structure(),
+                        check.design().tuning(), f.check().built(), f.unit(), 640, 280));
+            } else {
+                chart.message("Give the response with the absorber fitted to see it against the design.");
+            }
+        } else if (result instanceof Several several) {
+            SetSiteRun run = several.run();
+            report.setText(run.report());
+            if (run.fitted().isPresent()) {
+                SetSiteCheck f = run.fitted().get();
+                chart.show(SiteCheckCharts.setMagnitude(f.lines(), run.design(), f.check().built(), f.unit(), 640,
+                        280));
+            } else {
+                chart.message("Give the response with the absorbers fitted to see it against the design.");
+            }
         }
+        report.setCaretPosition(0);
         // the split pane holding the chart lays itself out again only when told (seen under Xvfb)
         dialog.getContentPane().validate();
         dialog.repaint();

@@ -6,9 +6,13 @@ import static org.junit.jupiter.api.Assertions.assertNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.awt.Component;
+import java.awt.Rectangle;
+import java.awt.Robot;
 import java.awt.Window;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
+import javax.imageio.ImageIO;
 import javax.swing.AbstractButton;
 import javax.swing.JDialog;
 import javax.swing.JLabel;
@@ -16,6 +20,8 @@ import javax.swing.JTextArea;
 import javax.swing.JTextField;
 import javax.swing.RootPaneContainer;
 import javax.swing.SwingUtilities;
+import org.counterpoise.core.commission.SetCommissioning;
+import org.counterpoise.io.commission.SetSiteRun;
 import org.counterpoise.io.commission.SiteCheck;
 import org.counterpoise.io.project.ProjectReader;
 import org.counterpoise.ui.gui.Edt;
@@ -88,15 +94,50 @@ class SiteCheckGuiTest {
         assertNull(onEdt(() -> frame.hardwareView().siteDialog().shown()));
     }
 
+    /**
+     * Several absorbers at one point (the invented gallery floor and its invented measurement with both
+     * absorbers fitted, GallerySitePresetTest): the wizard checks them on the whole structure as
+     * {@code site-check} does, each absorber's trim in whole plates, and draws the chart; a screenshot is
+     * kept in target/gui.
+     */
+    @Test
+    void severalAbsorbersAreCheckedOnTheWholeStructure() throws Exception {
+        JDialog dialog = openDialog(Path.of("presets", "gallery-floor-two-modes.json"));
+        onEdt(() -> {
+            ((JTextField) find(dialog, "siteCheck.frfFile")).setText("presets/gallery-floor-fitted-frf.csv");
+            ((AbstractButton) find(dialog, "siteCheck.check")).doClick();
+            return null;
+        });
+        Edt.waitFor(() -> Edt.callQuietly(() -> frame.hardwareView().siteDialog().shownSet() != null),
+                "the check of the two absorbers");
+        SetSiteRun shown = onEdt(() -> frame.hardwareView().siteDialog().shownSet());
+        SetCommissioning check = shown.fitted().orElseThrow().check();
+        // the same figures as the command (SiteCheckCommandTest): absorber 1 on a spring 4 % stiff, 2 on one 3 % soft
+        assertEquals(4, check.corrections().get(0).platesToAdd().getAsInt());
+        assertEquals(-3, check.corrections().get(1).platesToAdd().getAsInt());
+        String report = onEdt(() -> ((JTextArea) find(dialog, "siteCheck.report")).getText());
+        assertTrue(report.contains("absorber 2: trim") && report.contains("take off 3 trim plates"), report);
+        assertTrue(report.contains("licensed engineering practice"), report);
+        Thread.sleep(600); // let the window paint (not a timing assertion)
+        Rectangle bounds = onEdt(dialog::getBounds);
+        Files.createDirectories(Path.of("target", "gui"));
+        ImageIO.write(new Robot().createScreenCapture(bounds), "png",
+                Path.of("target", "gui", "site-check-several.png").toFile());
+    }
+
     private JDialog openDialog() throws Exception {
+        return openDialog(PUMP);
+    }
+
+    private JDialog openDialog(Path project) throws Exception {
         frame = onEdt(() -> {
             WizardFrame f = new WizardFrame();
-            f.load(ProjectReader.read(PUMP), PUMP);
+            f.load(ProjectReader.read(project), project);
             f.setVisible(true);
             return f;
         });
         Edt.waitFor(() -> Edt.callQuietly(() -> frame.settled() && frame.shownResult() != null
-                && frame.hardwareView().shownChoice() != null), "the pump skid's design and hardware");
+                && frame.hardwareView().shownChoice() != null), "the design and hardware");
         onEdt(() -> {
             ((AbstractButton) Edt.find(frame.hardwareView().component(), "hardware.siteCheck")).doClick();
             return null;
