@@ -215,6 +215,19 @@ public record SeveralAbsorbers(AbsorberLayout layout, int targetMode, double eff
      *     response point ({@link Assessor#acceptance(ModalSystem, String, String)}); empty without a criterion
      */
     public Optional<Acceptance> acceptance(DesignStudy study) {
+        return acceptanceOf(study);
+    }
+
+    /**
+     * @param single the study's design on the target mode
+     * @return that design with its verdict replaced by the whole structure's (what every output shows for a
+     *     project of several modes or absorbers)
+     */
+    public DesignResult judged(DesignResult single) {
+        return single.withAcceptance(acceptanceOf(single.study()));
+    }
+
+    private Optional<Acceptance> acceptanceOf(DesignStudy study) {
         return study.criterion().map(c -> Assessor.of(c, study.excitation()).acceptance(ModalSystem.of(
                 layout.structure(), absorbers), layout.excitationPoint(), layout.responsePoint()));
     }

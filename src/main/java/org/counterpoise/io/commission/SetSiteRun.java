@@ -59,6 +59,10 @@ public record SetSiteRun(String project, SeveralAbsorbers design, Optional<SetOp
     public static SetSiteRun run(String project, DesignResult single, SeveralAbsorbers design,
             HardwareChoice hardware, UnitSystem units, Optional<SiteCheckRun.OperatingInput> operating,
             Optional<FittedInput> fitted) {
+        if (design.layout().joint().isPresent()) {
+            throw new InvalidInputException("absorbers.arrangement", "\"one-per-mode\"", "absorbers all on one mode"
+                    + " for the site check: one absorber per mode is not yet checked against a measurement");
+        }
         if (operating.isEmpty() && fitted.isEmpty()) {
             throw InvalidInputException.missing("site measurement",
                     "an operating spectrum, a response with the absorbers fitted, or both");

@@ -164,9 +164,13 @@ public final class SeveralModes {
                     "1 with one forcing frequency (disturbance.frequency): several absorbers share a band of"
                             + " frequencies (disturbance.band)");
         }
-        if (a.count() > 1 && (p.absorber().meetAcceptance() || p.absorber().target() != null)) {
-            throw new InvalidInputException("absorber.meet_acceptance", "true " + what,
-                    "the total mass of the absorbers: absorber.mass or absorber.mass_ratio");
+        // the criterion is judged on the whole structure, the sizing to meet it on the target mode alone: refused
+        // for every project of several modes or absorbers, whatever the count
+        if (p.absorber().meetAcceptance() || p.absorber().target() != null) {
+            throw new InvalidInputException(p.absorber().meetAcceptance() ? "absorber.meet_acceptance"
+                    : "absorber.target", (p.absorber().meetAcceptance() ? "true " : "a target ") + what,
+                    "the total mass of the absorbers: absorber.mass or absorber.mass_ratio (a structure of several"
+                            + " modes is judged on every mode, and sized to a criterion on none yet)");
         }
     }
 

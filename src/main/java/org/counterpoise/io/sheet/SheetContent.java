@@ -241,7 +241,7 @@ public record SheetContent(String projectName, String notes, String date, String
             AmplitudeConvention convention, Optional<Realisation> realisation, UnitSystem units,
             MeasuredSource measured, SeveralAbsorbers several, HardwareChoice hardware) {
         // the criterion is judged on the whole structure with every absorber, not on the target mode alone
-        DesignResult judged = r.withAcceptance(several.acceptance(r.study()));
+        DesignResult judged = several.judged(r);
         ReportContent report = SeveralAbsorbersContent.with(report(judged, monteCarlo, identity, comparison,
                 realisation, units, measured), several);
         SketchFigures sketch = SketchFigures.of(r, realisation, units);

@@ -399,8 +399,17 @@ public final class SheetFiles {
             add(dir.resolve("curves.csv"), "curves.csv", option,
                     out -> out.write(CurveCsv.of(dossier.curves()).getBytes(StandardCharsets.UTF_8)));
             return add(dir.resolve("result.json"), "result.json", option,
-                    out -> out.write(ResultJson.toJson(DesignContent.of(dossier.design()).shownIn(convention))
+                    out -> out.write(ResultJson.toJson(DesignContent.of(judged()).shownIn(convention))
                             .getBytes(StandardCharsets.UTF_8)));
+        }
+
+        /** The design, its criterion judged on the whole structure for several modes or absorbers (as the sheet). */
+        private DesignResult judged() {
+            DesignResult single = dossier.design();
+            if (layout.isEmpty() || single.study().criterion().isEmpty()) {
+                return single;
+            }
+            return SeveralAbsorbersDesigner.design(single, layout.get()).judged(single);
         }
 
         /**

@@ -60,8 +60,7 @@ public final class DesignCommand implements Callable<Integer> {
         Optional<SeveralAbsorbers> several = SeveralModes.layout(loaded.project())
                 .map(layout -> SeveralAbsorbersDesigner.design(designed0, layout));
         // the criterion is judged on the whole structure with every absorber, not on the target mode alone
-        DesignResult result = several.map(d -> designed0.withAcceptance(d.acceptance(designed0.study())))
-                .orElse(designed0);
+        DesignResult result = several.map(d -> d.judged(designed0)).orElse(designed0);
         // the JSON is SI whatever the display: its keys name SI units, its words follow them
         UnitSystem shown = json ? UnitSystem.SI : DisplayUnitSystem.of(units, loaded.project());
         ReportContent designed = DesignContent.of(result, json ? ProjectIdentity.EMPTY : loaded.project().identity(),

@@ -87,4 +87,21 @@ class SeveralModesAcceptanceTest {
             assertEquals(rms, a.get("value_" + side).getAsDouble(), 1e-6 * rms, side);
         }
     }
+
+    /**
+     * Sizing to meet the criterion is made on the target mode alone, the verdict on the whole structure:
+     * with several modes it is refused even for one absorber, naming the field (a plain message).
+     */
+    @Test
+    void sizingToMeetTheCriterionIsRefusedForSeveralModesEvenWithOneAbsorber(@TempDir Path dir) throws IOException {
+        Path file = withCriterion(dir, "{\"criterion\": \"building\", \"direction\": \"vertical\","
+                + " \"room_use\": \"general-office\"}");
+        String edited = Files.readString(file).replace("\"count\": 2", "\"count\": 1")
+                .replace("\"mass\": {\"value\": 900, \"unit\": \"kg\"},", "\"meet_acceptance\": true,");
+        Files.writeString(file, edited);
+        CliTest.Run run = CliTest.run("design", file.toString());
+        assertEquals(Cli.BAD_INPUT, run.code(), run.out());
+        assertTrue(run.err().contains("absorber.meet_acceptance") && run.err().contains("several"), run.err());
+        assertTrue(!run.err().contains("Exception"), run.err());
+    }
 }

@@ -41,6 +41,7 @@ import org.counterpoise.core.units.Unit;
 import org.counterpoise.io.AtomicFiles;
 import org.counterpoise.io.chart.ChartFactory;
 import org.counterpoise.io.chart.ChartFiles;
+import org.counterpoise.io.project.FormatMigration;
 import org.counterpoise.io.project.Project;
 import org.counterpoise.io.project.ProjectIdentity;
 import org.counterpoise.io.text.DesignContent;
@@ -201,7 +202,10 @@ final class ResultStep extends Step {
         result = r;
         runUp.design(r, r == null ? null : project);
         rows.clear();
-        if (r == null || r.acceptance().isEmpty()) {
+        // several modes or absorbers: the verdict is the whole structure's, shown when the several-absorbers
+        // tab has computed it (DesignRun); the target mode's alone is never shown
+        boolean wholeStructure = project != null && !FormatMigration.isOneModeOneAbsorber(project);
+        if (r == null || r.acceptance().isEmpty() || wholeStructure) {
             verdict.none();
         } else {
             verdict.show(r.acceptance().get(), VerdictPanel.orderNames(r, project));
@@ -221,6 +225,10 @@ final class ResultStep extends Step {
                 project == null ? UnitSystem.SI : project.displayUnits()),
                 project == null ? null : project.structure().measured());
         List<ReportTable.Section> sections = new ArrayList<>(ReportTable.of(content, Set.of()));
+        if (project != null && !FormatMigration.isOneModeOneAbsorber(project)) {
+            // the table's acceptance would be the target mode's alone: the panel above gives the whole structure's
+            sections.removeIf(sec -> sec.id() == SectionId.ACCEPTANCE);
+        }
         if (r.rms().isPresent()) {
             // Under white noise the design is judged by rms values: they stand in for the harmonic peaks.
             sections.removeIf(sec -> sec.id() == SectionId.RESPONSE);

@@ -58,13 +58,14 @@ final class SiteCheckInputs {
                 fitted));
     }
 
-    /** The masses as weighed, one per absorber separated by commas or semicolons, or none for the design's. */
+    /** The masses as weighed, one per absorber separated by semicolons, or none for the design's. */
     private static List<Double> masses(String text, int absorbers) {
         if (text.isEmpty()) {
             return List.of();
         }
         List<Double> out = new ArrayList<>();
-        for (String one : text.split("[;,]")) {
+        // a comma may be the decimal separator (450,5): the masses are separated by semicolons only
+        for (String one : text.split(";")) {
             out.add(positive(one.strip(), "absorber masses as weighed", absorbers + " masses in kg above 0, one per"
                     + " absorber in the design's order separated by semicolons, or empty for the design's"));
         }
