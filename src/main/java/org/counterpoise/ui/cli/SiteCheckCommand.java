@@ -152,8 +152,7 @@ public final class SiteCheckCommand implements Callable<Integer> {
         Optional<SiteCheckRun.OperatingInput> op = operatingInput();
         Optional<SiteCheckRun.FittedInput> fit = Optional.empty();
         if (fittedFrf != null) {
-            FrfKind k = FrfOptions.kind("--kind", kind);
-            FrfUnit unit = frfUnits == null ? FrfUnit.si(k) : FrfUnit.parse(frfUnits, k, "--frf-units");
+            FrfUnit unit = frfUnit();
             fit = Optional.of(new SiteCheckRun.FittedInput(fittedFrf, unit,
                     all -> band == null ? all : FrfOptions.band("--band", band, all), freeStructure,
                     weighed(1).stream().mapToDouble(Double::doubleValue).findFirst()));
@@ -173,6 +172,12 @@ public final class SiteCheckCommand implements Callable<Integer> {
         out.flush();
         notes.flush();
         return 0;
+    }
+
+    /** The kind and unit of the fitted response's values, from --kind and --frf-units. */
+    private FrfUnit frfUnit() {
+        FrfKind k = FrfOptions.kind("--kind", kind);
+        return frfUnits == null ? FrfUnit.si(k) : FrfUnit.parse(frfUnits, k, "--frf-units");
     }
 
     /** The operating spectrum's options, when a spectrum was given. */
@@ -196,8 +201,7 @@ public final class SiteCheckCommand implements Callable<Integer> {
     private Integer several(LoadedProject loaded, DesignResult single, SeveralAbsorbers design) {
         Optional<SetSiteRun.FittedInput> fitted = Optional.empty();
         if (fittedFrf != null) {
-            FrfKind k = FrfOptions.kind("--kind", kind);
-            FrfUnit unit = frfUnits == null ? FrfUnit.si(k) : FrfUnit.parse(frfUnits, k, "--frf-units");
+            FrfUnit unit = frfUnit();
             fitted = Optional.of(new SetSiteRun.FittedInput(fittedFrf, unit,
                     all -> band == null ? all : FrfOptions.band("--band", band, all), freeStructure,
                     weighed(design.absorbers().size())));
