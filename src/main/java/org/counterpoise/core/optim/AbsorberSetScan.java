@@ -108,10 +108,10 @@ final class AbsorberSetScan {
      * at most 0.08 % on the benchmark problems' scans), so the two lowest rows, their order (ties in the
      * points' order, as a stable sort of every point's search would give) and so the seeds, restarts and
      * certificate are those of searching every point; a point ruled out is above the lowest by a quarter
-     * at least on the factored route itself. The one exception: a point whose polynomial search misses
-     * its real peak altogether (seen with four light absorbers: 1.35 for a factored peak of 3365) was
-     * ranked lowest by searching every point, and is ruled out here, so the scan's lowest is then a
-     * truer one (docs/performance.md, "Faster, same optima").
+     * at least on the factored route itself. Until 5 Dec 2026 the polynomial search could miss a
+     * point's real peak altogether (four light absorbers: 1.35 for a factored peak of 3365, where its
+     * R = P'Q - PQ' was below round-off); it now detects that and searches |H|^2 itself
+     * (docs/several-modes.md, "When the expanded derivative is lost").
      *
      * @param v the variables
      * @param points the scan's points

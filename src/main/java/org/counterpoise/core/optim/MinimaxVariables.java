@@ -3,11 +3,11 @@ package org.counterpoise.core.optim;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.function.DoubleUnaryOperator;
+import org.counterpoise.core.rational.FactoredPeaks;
 import org.counterpoise.core.rational.PeakFinder;
 import org.counterpoise.core.rational.RealPolynomials;
 import org.counterpoise.core.rational.RealRoots;
 import org.counterpoise.core.rational.TransferFunction;
-import org.counterpoise.core.system.FactoredPeaks;
 
 /**
  * The design variables of a set of absorbers as the minimax solvers ({@link MinimaxTrustRegion},

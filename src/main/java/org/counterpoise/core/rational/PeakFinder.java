@@ -15,6 +15,15 @@ import java.util.Arrays;
  * so extra candidates can never over-state the peak. The peak value is evaluated from P/Q by
  * Horner's rule, so its relative accuracy is a few ulps times the condition of P/Q; a location
  * error dx costs only O(dx^2) in the value.
+ *
+ * <p>Where R's computed values are below their own round-off somewhere in the band
+ * ({@link DerivativeRoundOff}: several light absorbers on one mode), its roots can miss the highest
+ * maximum altogether (a peak of 1.35 reported where |H| reaches 3365), so the maxima are then also
+ * bracketed and refined on |H|^2 itself by {@link FactoredPeaks} (sweep, poles, Brent's method) and
+ * the largest candidate of both routes is the peak: a real frequency in the band each, so never above
+ * the true peak beyond the evaluation's round-off, and at most about 1e-9 below it in the seeded
+ * random cases of PeakFinderRoundOffTest (the value itself then carries the expanded P/Q's error, up
+ * to about 1e-5 relative there; callers with a factored form evaluate that instead).
  */
 public final class PeakFinder {
 
@@ -55,10 +64,13 @@ public final class PeakFinder {
                 return resonance;
             }
         }
-        Best best = new Best();
-        best.offer(h, xLow);
+        // where R's sign is lost the expanded P and Q may have lost theirs too (Q below zero by
+        // round-off would read as a pole), so every candidate is then valued from N(i g) and D(i g)
+        boolean swamped = xHigh > xLow && DerivativeRoundOff.swamped(h, gLow, gHigh);
+        Best best = new Best(h, swamped);
+        best.offer(xLow);
         if (Double.isFinite(xHigh)) {
-            best.offer(h, xHigh);
+            best.offer(xHigh);
         } else {
             double limit = h.limitAtInfinity();
             if (limit * limit > best.value) {
@@ -70,7 +82,13 @@ public final class PeakFinder {
             double[] r = RealPolynomials.quotientDerivativeNumerator(p, q);
             for (double root : RealRoots.rootsAndCriticalPoints(r, xLow, xHigh)) {
                 if (root > xLow && root < xHigh) {
-                    best.offer(h, root);
+                    best.offer(root);
+                }
+            }
+            if (swamped) {
+                // R's sign is lost somewhere in the band: bracket the maxima on |H|^2 itself
+                for (double[] maximum : FactoredPeaks.maxima(h, x -> Math.log(direct(h, x)), xLow, xHigh)) {
+                    best.offer(maximum[0]);
                 }
             }
         }
@@ -121,12 +139,28 @@ public final class PeakFinder {
         return sum;
     }
 
+    /**
+     * |H|^2 as |N(i g)|^2 / |D(i g)|^2 from the complex values of N and D: never negative, and free of
+     * the cancellation in the expanded P and Q (which can leave Q below zero near clustered light modes).
+     */
+    private static double direct(TransferFunction h, double x) {
+        double[] v = h.value(Math.sqrt(x));
+        return v[0] * v[0] + v[1] * v[1];
+    }
+
     private static final class Best {
+        private final TransferFunction h;
+        private final boolean direct;
         private double x;
         private double value = -1.0;
 
-        void offer(TransferFunction h, double candidate) {
-            double v = h.magnitudeSquared(candidate);
+        Best(TransferFunction h, boolean direct) {
+            this.h = h;
+            this.direct = direct;
+        }
+
+        void offer(double candidate) {
+            double v = direct ? direct(h, candidate) : h.magnitudeSquared(candidate);
             if (v > value) {
                 value = v;
                 x = candidate;

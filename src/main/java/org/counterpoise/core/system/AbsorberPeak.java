@@ -2,6 +2,7 @@ package org.counterpoise.core.system;
 
 import java.util.function.DoubleUnaryOperator;
 import org.apache.commons.math3.complex.Complex;
+import org.counterpoise.core.rational.FactoredPeaks;
 import org.counterpoise.core.rational.Peak;
 import org.counterpoise.core.rational.PeakFinder;
 import org.counterpoise.core.rational.RealPolynomials;

@@ -11,7 +11,7 @@
  * built from products of low-degree polynomials, and
  * {@link org.counterpoise.core.system.AbsorberSensitivity} their exact derivatives in each absorber's tuning;
  * {@link org.counterpoise.core.system.ModalPeak} the exact peak over a band (on the factored form,
- * {@link org.counterpoise.core.system.FactoredPeaks}, which holds for many light absorbers) and
+ * {@link org.counterpoise.core.rational.FactoredPeaks}, which holds for many light absorbers) and
  * {@link org.counterpoise.core.system.Spillover} each mode's peak before and after. Sits above {@code core.rational} and {@code core.model}
  * and below {@code core.response}: it imports neither the response package nor anything above it.
  */

@@ -1,4 +1,4 @@
-package org.counterpoise.core.system;
+package org.counterpoise.core.rational;
 
 import java.util.ArrayList;
 import java.util.Comparator;
@@ -14,13 +14,10 @@ import org.apache.commons.math3.optim.nonlinear.scalar.GoalType;
 import org.apache.commons.math3.optim.univariate.BrentOptimizer;
 import org.apache.commons.math3.optim.univariate.SearchInterval;
 import org.apache.commons.math3.optim.univariate.UnivariateObjectiveFunction;
-import org.counterpoise.core.rational.RealPolynomials;
-import org.counterpoise.core.rational.RealRoots;
-import org.counterpoise.core.rational.TransferFunction;
 
 /**
  * The interior maxima of |H|^2 over a band for several absorbers (on one mode, or on a structure of
- * several modes: {@link ModalPeak}), located robustly.
+ * several modes: ModalPeak in core.system), located robustly.
  *
  * <p>Why not the roots of R = P'Q - PQ' alone ({@code PeakFinder})? With three lightly damped
  * absorbers on a light structure the expanded |H|^2 = P(x)/Q(x) loses every digit of R between
