@@ -142,4 +142,44 @@ public record JointAbsorberSetup(ModalStructure structure, List<Integer> modes, 
     public double peak(AbsorberSetDesign design) {
         return ModalPeak.over(system(design), excitationPoint, responsePoint, bandLow, bandHigh);
     }
+
+    /**
+     * A build off nominal: each designed mode's natural frequency times its own factor (its stiffness
+     * by the square; modal mass, damping ratio and shape kept; the structure's other modes as they
+     * are) and both absorbers' natural frequencies times one common factor (one spring batch: spring
+     * rates by the square, masses and dampers kept, so each damping ratio becomes zeta_j / alpha). The
+     * transfer functions stay on the nominal structure's scales, so a stiffer build's smaller
+     * deflection counts.
+     *
+     * @param design the two absorbers as drawn
+     * @param build {lower designed mode's factor, upper designed mode's factor, absorbers' factor}
+     * @return the structure so varied with the absorbers so built
+     */
+    public ModalSystem system(AbsorberSetDesign design, double[] build) {
+        // the modes changed by their nominal indices at once (the structure sorts them again)
+        List<Mode> changed = new ArrayList<>(structure.modes());
+        for (int j = 0; j < JointAbsorberProblem.MODES; j++) {
+            Mode m = mode(j);
+            changed.set(modes.get(j), new Mode(m.naturalFrequency() * build[j], m.dampingRatio(), m.modalMass(),
+                    m.shape()));
+        }
+        ModalStructure varied = new ModalStructure(changed);
+        double alpha = build[JointAbsorberProblem.MODES];
+        List<PointAbsorber> absorbers = new ArrayList<>();
+        for (int j = 0; j < design.count(); j++) {
+            absorbers.add(PointAbsorber.tuned(absorberPoints.get(j), design.massRatios().get(j),
+                    design.tuningRatios().get(j) * alpha, design.dampingRatios().get(j) / alpha));
+        }
+        ModalSystem nominal = ModalSystem.of(structure, absorbers);
+        return new ModalSystem(varied, absorbers, nominal.referenceFrequency(), nominal.referenceStiffness());
+    }
+
+    /**
+     * @param design the two absorbers as drawn
+     * @param build the build's three factors, as {@link #system(AbsorberSetDesign, double[])}
+     * @return the exact peak over the band of that build, the whole structure seen ({@link ModalPeak})
+     */
+    public double peak(AbsorberSetDesign design, double[] build) {
+        return ModalPeak.over(system(design, build), excitationPoint, responsePoint, bandLow, bandHigh);
+    }
 }

@@ -23,10 +23,35 @@ final class JointAbsorberVariables implements MinimaxVariables {
     private final JointAbsorberSetup problem;
     /** The transfer functions' frequency scale: the structure's lowest natural frequency (ModalSystem.of). */
     private final double reference;
+    /** The build judged ({@link JointAbsorberSetup#system(AbsorberSetDesign, double[])}), or null for the nominal one. */
+    private final double[] build;
 
     JointAbsorberVariables(JointAbsorberSetup problem) {
+        this(problem, null);
+    }
+
+    /**
+     * The same variables judged on a build off nominal (a scenario of {@link RobustSetVariables}): the
+     * variables stay those of the design as drawn.
+     *
+     * @param problem the setup
+     * @param build {lower designed mode's factor, upper designed mode's factor, absorbers' common
+     *     factor}, or null for the nominal build
+     */
+    JointAbsorberVariables(JointAbsorberSetup problem, double[] build) {
         this.problem = problem;
         this.reference = problem.structure().modes().get(0).naturalFrequency();
+        this.build = build == null ? null : build.clone();
+    }
+
+    /** @return the structure and the absorbers of point p as this build has them */
+    private ModalSystem system(AbsorberSetDesign d) {
+        return build == null ? problem.system(d) : problem.system(d, build);
+    }
+
+    /** @return the damping ratio of absorber j as built (the absorbers' factor divides it) */
+    private double builtDamping(AbsorberSetDesign d, int j) {
+        return build == null ? d.dampingRatios().get(j) : d.dampingRatios().get(j) / build[N];
     }
 
     @Override
@@ -101,12 +126,12 @@ final class JointAbsorberVariables implements MinimaxVariables {
 
     @Override
     public TransferFunction transferFunction(double[] p) {
-        return problem.system(design(p)).transferFunction(problem.excitationPoint(), problem.responsePoint());
+        return system(design(p)).transferFunction(problem.excitationPoint(), problem.responsePoint());
     }
 
     @Override
     public DoubleUnaryOperator logMagnitudeSquared(double[] p) {
-        ModalSystem system = problem.system(design(p));
+        ModalSystem system = system(design(p));
         String force = problem.excitationPoint();
         String at = problem.responsePoint();
         return x -> 2 * Math.log(AbsorberSensitivity.value(system, force, at, Math.sqrt(x)).abs());
@@ -115,12 +140,14 @@ final class JointAbsorberVariables implements MinimaxVariables {
     @Override
     public double[] gradient(double[] p, double x) {
         AbsorberSetDesign d = design(p);
-        double[][] g = AbsorberSensitivity.gradient(problem.system(d), problem.excitationPoint(), problem.responsePoint(),
+        double[][] g = AbsorberSensitivity.gradient(system(d), problem.excitationPoint(), problem.responsePoint(),
                 Math.sqrt(x));
         double[] out = new double[2 * N];
         for (int j = 0; j < N; j++) {
+            // d ln f and d ln zeta as built equal those as drawn (a build scales them by constants),
+            // so the chain rule only takes each damping ratio as built: d / d ln zeta = zeta d / d zeta
             out[j] = g[j][0];
-            out[N + j] = g[j][1] * d.dampingRatios().get(j); // d / d ln zeta = zeta d / d zeta
+            out[N + j] = g[j][1] * builtDamping(d, j);
         }
         return out;
     }

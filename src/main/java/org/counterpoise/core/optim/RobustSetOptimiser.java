@@ -9,9 +9,9 @@ import org.counterpoise.core.robust.WorstCase;
  * ({@link RobustSetProblem}): the structure's natural frequency anywhere in its range, the absorbers'
  * off together by a common factor, every damping ratio at or above the floor.
  *
- * <p>Method: exchange (outer approximation, the usual method for semi-infinite minimax problems,
- * Hettich and Kortanek 1993, SIAM Review 35, section 7; the single absorber's robust design does the
- * same, {@code RobustOptimiser}). Over any finite set of builds the largest peak is at most the
+ * <p>Method: exchange ({@link RobustExchange}; outer approximation, the usual method for semi-infinite
+ * minimax problems, Hettich and Kortanek 1993, SIAM Review 35, section 7; the single absorber's robust
+ * design does the same, {@code RobustOptimiser}). Over any finite set of builds the largest peak is at most the
  * worst case, for every design. So: (1) start with the nominal build and the corners of the ranges;
  * (2) minimise the largest peak over the set: every build's exact maxima are further smooth pieces
  * of one minimax ({@link RobustSetVariables}), solved by the machinery of the nominal problem
@@ -30,10 +30,7 @@ import org.counterpoise.core.robust.WorstCase;
  */
 public final class RobustSetOptimiser {
     /** The exchange stops when the worst case is within this (relative) of the set's largest peak. */
-    public static final double GAP = 1e-6;
-    private static final int MAX_EXCHANGES = 30;
-    /** Builds closer than this fraction of the ranges are one build moved (see {@link #exchange}). */
-    private static final double NEAR = 0.05;
+    public static final double GAP = RobustExchange.GAP;
 
     private RobustSetOptimiser() {
     }
@@ -48,48 +45,35 @@ public final class RobustSetOptimiser {
         AbsorberSetOptimum leastPeak = AbsorberSetOptimiser.optimise(set);
         counter.add(leastPeak.evaluations());
         AbsorberSetVariables layout = new AbsorberSetVariables(set);
-        List<double[]> scenarios = initialBuilds(problem);
-        int fixed = scenarios.size();
-        RobustSetVariables v = new RobustSetVariables(set, scenarios, problem.dampingFloor());
-        double[] p = null;
-        double best = Double.POSITIVE_INFINITY;
-        for (double[] seed : seeds(problem, layout, leastPeak, counter)) {
-            double[] q = MinimaxSearch.localOptimum(v, clamp(v, seed), counter);
-            double peak = v.peak(q);
-            if (peak < best) {
-                p = q;
-                best = peak;
+        RobustExchange.Builds builds = new RobustExchange.Builds() {
+            @Override
+            public RobustSetVariables over(List<double[]> scenarios) {
+                return new RobustSetVariables(set, scenarios, problem.dampingFloor());
             }
-        }
-        WorstCase.Point worst = null;
-        AbsorberSetCertificate certificate = null;
-        boolean converged = false;
-        for (int exchange = 0; exchange < MAX_EXCHANGES && !converged; exchange++) {
-            worst = worstCase(problem, layout, p);
-            if (worst.peak() <= v.peak(p) * (1 + GAP)) {
-                // the gap is closed: certify the minimax over this set (a lower scan point restarts it)
-                MinimaxSearch.Result r = MinimaxSearch.run(v, List.of(p), 1, AbsorberSetScan.scan(layout, v, counter),
-                        counter);
-                p = r.point();
-                certificate = r.certificate();
-                worst = worstCase(problem, layout, p);
-                converged = worst.peak() <= r.peak() * (1 + GAP);
-                if (converged) {
-                    break;
-                }
+
+            @Override
+            public double[] worst(double[] p) {
+                WorstCase.Point w = worstCase(problem, layout, p);
+                return new double[] {w.structureFactor(), w.absorberFactor(), w.peak()};
             }
-            exchange(problem, scenarios, fixed, new double[] {worst.structureFactor(), worst.absorberFactor()});
-            v = new RobustSetVariables(set, scenarios, problem.dampingFloor());
-            p = MinimaxSearch.localOptimum(v, p, counter);
-            certificate = null;
-        }
-        if (certificate == null) {
-            certificate = AbsorberSetCheck.certify(v, p, v.peak(p), AbsorberSetScan.scan(layout, v, counter), counter);
-            worst = worstCase(problem, layout, p);
-        }
-        return new RobustSetOptimum(problem, layout.design(p), worst.peak(), worst.structureFactor(),
-                worst.absorberFactor(), layout.peak(p), scenarios.size(), converged, certificate, leastPeak,
-                counter.count());
+
+            @Override
+            public List<double[]> scan(RobustSetVariables v, EvaluationCounter c) {
+                return AbsorberSetScan.scan(layout, v, c);
+            }
+
+            @Override
+            public double[] ranges() {
+                return new double[] {problem.structureRange(), problem.absorberRange()};
+            }
+        };
+        List<double[]> seeds = seeds(problem, layout, leastPeak, counter);
+        RobustExchange.Result r = RobustExchange.run(builds, RobustExchange.nominalAndCorners(builds.ranges()), seeds,
+                counter);
+        double[] p = r.point();
+        double[] worst = r.worst();
+        return new RobustSetOptimum(problem, layout.design(p), worst[2], worst[0], worst[1], layout.peak(p),
+                r.builds(), r.converged(), r.certificate(), leastPeak, counter.count());
     }
 
     /**
@@ -113,42 +97,6 @@ public final class RobustSetOptimiser {
         AbsorberSetProblem set = layout.problem();
         return WorstCase.over((s, a) -> new AbsorberSetVariables(set, s, a).peak(p), problem.structureRange(),
                 problem.absorberRange());
-    }
-
-    /**
-     * Adds the worst build found, or moves an earlier worst build (not the nominal one or a corner)
-     * that lies within {@value #NEAR} of the ranges of it: an interior worst case moves a little as the
-     * design moves, and two builds a hair apart make the same peak twice, which leaves the
-     * first-order conditions of the minimax singular (Newton then stops short of equal peaks).
-     * The exchange of Remez's algorithm does the same with its reference points.
-     */
-    private static void exchange(RobustSetProblem problem, List<double[]> scenarios, int fixed, double[] worst) {
-        for (int k = fixed; k < scenarios.size(); k++) {
-            double[] b = scenarios.get(k);
-            double ds = problem.structureRange() > 0 ? Math.abs(b[0] - worst[0]) / problem.structureRange() : 0.0;
-            double da = problem.absorberRange() > 0 ? Math.abs(b[1] - worst[1]) / problem.absorberRange() : 0.0;
-            if (Math.max(ds, da) <= NEAR) {
-                scenarios.set(k, worst);
-                return;
-            }
-        }
-        scenarios.add(worst);
-    }
-
-    /** The nominal build first, then the corners of the ranges. */
-    private static List<double[]> initialBuilds(RobustSetProblem problem) {
-        List<double[]> builds = new ArrayList<>();
-        builds.add(new double[] {1.0, 1.0});
-        double s = problem.structureRange();
-        double a = problem.absorberRange();
-        for (double sf : s > 0 ? new double[] {1 - s, 1 + s} : new double[] {1.0}) {
-            for (double af : a > 0 ? new double[] {1 - a, 1 + a} : new double[] {1.0}) {
-                if (sf != 1.0 || af != 1.0) {
-                    builds.add(new double[] {sf, af});
-                }
-            }
-        }
-        return builds;
     }
 
     private static List<double[]> seeds(RobustSetProblem problem, AbsorberSetVariables layout,
@@ -181,15 +129,5 @@ public final class RobustSetOptimiser {
         double high = d.tuningRatios().get(n - 1);
         double centre = (low + high) / 2;
         return layout.point(centre, n == 1 ? 0.0 : (high - low) / centre, d.dampingRatios().get(0));
-    }
-
-    private static double[] clamp(MinimaxVariables v, double[] p) {
-        double[] lo = v.lower();
-        double[] hi = v.upper();
-        double[] q = p.clone();
-        for (int k = 0; k < q.length; k++) {
-            q[k] = Math.min(hi[k], Math.max(lo[k], q[k]));
-        }
-        return q;
     }
 }

@@ -6,17 +6,18 @@ import java.util.function.DoubleUnaryOperator;
 import org.counterpoise.core.rational.TransferFunction;
 
 /**
- * The variables of several absorbers on one mode judged over a finite set of builds (scenarios:
- * a structure frequency factor and a common absorber frequency factor each): the peak is the
- * largest over the builds, so its smooth pieces are every build's pieces, each marked with its
- * build in a fourth column ({@link MinimaxVariables#scenario}) so that the minimax solvers take its
- * gradient and value from that build. Each build is an {@link AbsorberSetVariables} on the same
- * point, with its own exact transfer function and exact gradient. The box is the nominal one with
- * every damping ratio at or above the floor.
+ * The variables of a set of absorbers judged over a finite set of builds (scenarios: structure
+ * frequency factors and a common absorber frequency factor each): the peak is the largest over the
+ * builds, so its smooth pieces are every build's pieces, each marked with its build in a fourth
+ * column ({@link MinimaxVariables#scenario}) so that the minimax solvers take its gradient and value
+ * from that build. Each build is variables on the same point ({@link AbsorberSetVariables} for
+ * several absorbers on one mode, {@link JointAbsorberVariables} for one absorber per mode), with its
+ * own exact transfer function and exact gradient. The box is the nominal one with every damping
+ * ratio at or above the floor.
  */
 final class RobustSetVariables implements MinimaxVariables {
-    private final AbsorberSetVariables layout;
-    private final List<AbsorberSetVariables> builds = new ArrayList<>();
+    private final MinimaxVariables layout;
+    private final List<MinimaxVariables> builds;
     private final double[] lower;
 
     /**
@@ -25,16 +26,38 @@ final class RobustSetVariables implements MinimaxVariables {
      * @param dampingFloor least damping ratio (0 for none)
      */
     RobustSetVariables(AbsorberSetProblem problem, List<double[]> scenarios, double dampingFloor) {
-        this.layout = new AbsorberSetVariables(problem);
+        this(new AbsorberSetVariables(problem), builds(problem, scenarios),
+                floored(new AbsorberSetVariables(problem), dampingFloor));
+    }
+
+    /**
+     * @param layout the variables as drawn (their box, band and dimension)
+     * @param builds the same variables judged on each build, the nominal one first
+     * @param lower the box's lower corner
+     */
+    RobustSetVariables(MinimaxVariables layout, List<? extends MinimaxVariables> builds, double[] lower) {
+        this.layout = layout;
+        this.builds = List.copyOf(builds);
+        this.lower = lower.clone();
+    }
+
+    private static List<MinimaxVariables> builds(AbsorberSetProblem problem, List<double[]> scenarios) {
+        List<MinimaxVariables> out = new ArrayList<>();
         for (double[] s : scenarios) {
-            builds.add(new AbsorberSetVariables(problem, s[0], s[1]));
+            out.add(new AbsorberSetVariables(problem, s[0], s[1]));
         }
-        this.lower = layout.lower();
+        return out;
+    }
+
+    /** @return the box's lower corner with every damping ratio at or above the floor */
+    private static double[] floored(AbsorberSetVariables layout, double dampingFloor) {
+        double[] lower = layout.lower();
         for (int k = 0; k < lower.length; k++) {
             if (layout.isDamping(k) && dampingFloor > 0) {
                 lower[k] = Math.max(lower[k], Math.log(dampingFloor));
             }
         }
+        return lower;
     }
 
     /** @return the number of builds */
@@ -104,7 +127,7 @@ final class RobustSetVariables implements MinimaxVariables {
     @Override
     public double polynomialPeak(double[] p) {
         double max = 0;
-        for (AbsorberSetVariables b : builds) {
+        for (MinimaxVariables b : builds) {
             max = Math.max(max, b.polynomialPeak(p));
         }
         return max;
@@ -114,7 +137,7 @@ final class RobustSetVariables implements MinimaxVariables {
     @Override
     public double sampledPeak(double[] p) {
         double max = 0;
-        for (AbsorberSetVariables b : builds) {
+        for (MinimaxVariables b : builds) {
             max = Math.max(max, b.sampledPeak(p));
         }
         return max;
