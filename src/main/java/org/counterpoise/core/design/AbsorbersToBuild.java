@@ -47,8 +47,10 @@ public record AbsorbersToBuild(SeveralAbsorbers set, List<Built> absorbers) {
      * @return "the least peak over the band", or for a robust set the least worst peak over its ranges
      */
     public static String goal(SeveralAbsorbers set) {
-        return set.robust().map(r -> String.format(Locale.ROOT, "the least worst peak over the band with the"
-                + " structure's frequency within +/-%.3g %%%s", 100 * r.structureRange(), r.absorberRange() > 0
+        String structure = set.joint().isPresent() ? "each absorber's mode's frequency within +/-%.3g %% on its own"
+                : "the structure's frequency within +/-%.3g %%";
+        return set.robust().map(r -> String.format(Locale.ROOT, "the least worst peak over the band with "
+                + structure + "%s", 100 * r.structureRange(), r.absorberRange() > 0
                         ? String.format(Locale.ROOT, " and every absorber's within +/-%.3g %% together",
                                 100 * r.absorberRange()) : "")).orElse("the least peak over the band");
     }

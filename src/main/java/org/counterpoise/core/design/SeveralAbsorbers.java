@@ -94,8 +94,15 @@ public record SeveralAbsorbers(AbsorberLayout layout, int targetMode, double eff
         }
     }
 
-    /** @return the sequential design's peak over the joint one's (at least 1), with one absorber per mode */
+    /**
+     * @return with one absorber per mode, the sequential design's peak over the joint one's (at least 1);
+     *     for the robust joint design the same of the worst peaks over the ranges (its nominal peak is
+     *     above the least by design)
+     */
     public Optional<Double> jointGain() {
+        if (joint.isPresent() && robust.isPresent()) {
+            return robust.map(r -> r.alternative().worstPeak() / r.set().worstPeak());
+        }
         return joint.map(s -> s.peak() / peakAfter);
     }
 
@@ -124,17 +131,21 @@ public record SeveralAbsorbers(AbsorberLayout layout, int targetMode, double eff
      * The set designed for the least worst-case peak (method {@code robust-worst-case}) and what it
      * is compared with, each on the whole structure over the same ranges.
      *
-     * @param structureRange the target mode's natural frequency may be off by +/- this fraction
+     * @param structureRange the target mode's natural frequency may be off by +/- this fraction (with
+     *     one absorber per mode: each designed mode's, each on its own)
      * @param absorberRange every absorber's natural frequency may be off by +/- this fraction, all
      *     by the same factor (one spring batch)
      * @param dampingFloor no absorber's damping ratio is below this
      * @param set this set (the absorbers above)
-     * @param leastPeakSet the same absorbers tuned for the least nominal peak
-     * @param single one absorber of the same total mass, designed for the least worst case too (the
-     *     {@link SeveralAbsorbers#single} absorber)
+     * @param leastPeakSet the same absorbers tuned for the least nominal peak (with one absorber per
+     *     mode: jointly)
+     * @param alternative what the usual practice would build instead: for absorbers on one mode, one
+     *     absorber of the same total mass designed for the least worst case too (the
+     *     {@link SeveralAbsorbers#single} absorber); with one absorber per mode, the sequential design
+     *     (each absorber the least peak on its own mode alone, {@link SeveralAbsorbers#joint})
      */
     public record RobustSet(double structureRange, double absorberRange, double dampingFloor, Figures set,
-            Figures leastPeakSet, Figures single) {
+            Figures leastPeakSet, Figures alternative) {
     }
 
     /**

@@ -2,6 +2,7 @@ package org.counterpoise.core.optim;
 
 import java.util.ArrayList;
 import java.util.Arrays;
+import java.util.Comparator;
 import java.util.List;
 
 /**
@@ -70,17 +71,29 @@ final class RobustExchange {
      * @param problem the builds' variables, worst case and scan
      * @param initial the first builds (the nominal one first, then the corners): kept throughout
      * @param seeds start points of the first minimax, each clamped into the box
+     * @param pursued how many of them are pursued: all in their order, or the given number with the
+     *     least largest peak over the first builds
      * @param counter counts transfer functions built
      * @return the design with the least worst case found, and the evidence
      */
-    static Result run(Builds problem, List<double[]> initial, List<double[]> seeds, EvaluationCounter counter) {
+    static Result run(Builds problem, List<double[]> initial, List<double[]> seeds, int pursued,
+            EvaluationCounter counter) {
         List<double[]> builds = new ArrayList<>(initial);
         int fixed = builds.size();
         RobustSetVariables v = problem.over(builds);
+        List<double[]> starts = new ArrayList<>();
+        for (double[] seed : seeds) {
+            starts.add(clamp(v, seed));
+        }
+        if (pursued < starts.size()) {
+            RobustSetVariables first = v;
+            starts.sort(Comparator.comparingDouble(first::peak));
+            starts = starts.subList(0, pursued);
+        }
         double[] p = null;
         double best = Double.POSITIVE_INFINITY;
-        for (double[] seed : seeds) {
-            double[] q = MinimaxSearch.localOptimum(v, clamp(v, seed), counter);
+        for (double[] start : starts) {
+            double[] q = MinimaxSearch.localOptimum(v, start, counter);
             double peak = v.peak(q);
             if (peak < best) {
                 p = q;

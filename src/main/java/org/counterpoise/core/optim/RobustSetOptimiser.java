@@ -69,7 +69,7 @@ public final class RobustSetOptimiser {
         };
         List<double[]> seeds = seeds(problem, layout, leastPeak, counter);
         RobustExchange.Result r = RobustExchange.run(builds, RobustExchange.nominalAndCorners(builds.ranges()), seeds,
-                counter);
+                seeds.size(), counter);
         double[] p = r.point();
         double[] worst = r.worst();
         return new RobustSetOptimum(problem, layout.design(p), worst[2], worst[0], worst[1], layout.peak(p),

@@ -9,6 +9,9 @@ import org.counterpoise.core.units.Dimension;
 import org.counterpoise.io.text.ReportValue.Field;
 import org.counterpoise.io.text.ReportValue.Fields;
 import org.counterpoise.io.text.ReportValue.Flag;
+import org.counterpoise.io.text.ReportValue.Pair;
+import org.counterpoise.io.text.ReportValue.PairKind;
+import org.counterpoise.io.text.ReportValue.Percent;
 import org.counterpoise.io.text.ReportValue.Words;
 
 /**
@@ -18,17 +21,59 @@ import org.counterpoise.io.text.ReportValue.Words;
  * certificate's status; {@link SeveralAbsorbersContent} places them.
  */
 final class JointAbsorbersContent {
-    /** The tuning row's value. */
-    static final Words TUNING = new Words("one absorber per mode, designed jointly: each its own tuning and damping,"
-            + " chosen together for the least peak of the whole structure", List.of("one-per-mode"));
+    /**
+     * @param d one absorber per mode
+     * @return the tuning row's value
+     */
+    static Words tuning(SeveralAbsorbers d) {
+        return new Words("one absorber per mode, designed jointly: each its own tuning and damping, chosen together"
+                + " for the least " + (d.robust().isPresent() ? "worst peak over the ranges" : "peak")
+                + " of the whole structure", List.of("one-per-mode"));
+    }
     /** A joint optimum that failed its certificate. */
     static final String NOT_FOUND = "One absorber per mode: the joint optimum was not found (its certificate failed,"
             + " docs/several-modes.md); the absorbers shown are the best design seen, never worse than the"
             + " sequential design: treat them as a good design, not the best.";
+    /** One absorber per mode designed for the least worst case (method robust-worst-case). */
+    static final String ROBUST = "One absorber per mode: the absorbers are designed jointly for the least worst peak"
+            + " over the band with each absorber's mode's frequency anywhere in its range on its own and both"
+            + " absorbers' frequencies off together (one spring batch), the whole structure seen; each absorber's own"
+            + " scatter, the other modes' frequencies and the damping range are not in that worst case (the sheet"
+            + " gives each absorber's tolerance on its own frequency within the set): check their tuning on site"
+            + " with care.";
     private static final String SOURCE = "each absorber the certified least peak on its own mode alone, as seen at"
             + " its point (the usual practice; docs/several-modes.md)";
 
     private JointAbsorbersContent() {
+    }
+
+    /**
+     * The rows of the robust design (method robust-worst-case): what it was designed for, its ranges
+     * and damping floor, and this design, the joint least-peak design and the sequential one over them.
+     *
+     * @param rows where they go
+     * @param d one absorber per mode
+     * @param r the robust figures
+     */
+    static void robustRows(List<ReportRow> rows, SeveralAbsorbers d, SeveralAbsorbers.RobustSet r) {
+        String source = "exact response of the structure's modes with the absorbers (docs/several-modes.md)";
+        rows.add(SeveralAbsorbersContent.row(ReportKey.SEVERAL_DESIGNED_FOR, "designed for", new Words("the least worst"
+                + " peak over the band (robust-worst-case), jointly, the whole structure seen",
+                List.of("robust-worst-case")), "docs/several-modes.md, robust design of one absorber per mode"));
+        rows.add(SeveralAbsorbersContent.row(ReportKey.SEVERAL_ROBUST_RANGES, "each absorber's mode's frequency (each on"
+                + " its own), both absorbers' frequencies together: within +/-", new Pair(new Percent(r.structureRange(),
+                2), new Percent(r.absorberRange(), 2), PairKind.SIDE_BY_SIDE), "robustness ranges of the project; the"
+                + " absorbers by one common factor (one spring batch)"));
+        rows.add(SeveralAbsorbersContent.row(ReportKey.SEVERAL_ROBUST_DAMPING_FLOOR, "least damping ratio of every"
+                + " absorber", DesignContent.quantity(r.dampingFloor(), Dimension.RATIO), "the practical damping floor"
+                + " (docs/robustness.md)"));
+        String target = d.layout().modeNames().get(d.targetMode());
+        rows.add(SeveralAbsorbersContent.compared(r.set(), "this design", "robust_set", source + "; the tolerance: mode "
+                + target + " alone"));
+        rows.add(SeveralAbsorbersContent.compared(r.leastPeakSet(), "the same absorbers designed jointly for the least"
+                + " nominal peak", "least_peak_set", source));
+        rows.add(SeveralAbsorbersContent.compared(r.alternative(), "the sequential design (each on its own mode alone,"
+                + " least nominal peak)", "sequential", source));
     }
 
     /**
@@ -96,8 +141,10 @@ final class JointAbsorbersContent {
         }
         rows.add(SeveralAbsorbersContent.row(ReportKey.SEVERAL_SEQUENTIAL_PEAK, "peak over the band, sequential design",
                 DesignContent.quantity(s.peak(), Dimension.LENGTH), SOURCE));
-        rows.add(SeveralAbsorbersContent.row(ReportKey.SEVERAL_JOINT_GAIN, "gain of the joint design (sequential peak"
-                + " / joint peak)", DesignContent.quantity(d.jointGain().orElseThrow(), Dimension.RATIO), ""));
+        rows.add(SeveralAbsorbersContent.row(ReportKey.SEVERAL_JOINT_GAIN, d.robust().isPresent()
+                ? "gain of the joint design over the ranges (sequential worst peak / joint worst peak)"
+                : "gain of the joint design (sequential peak / joint peak)",
+                DesignContent.quantity(d.jointGain().orElseThrow(), Dimension.RATIO), ""));
         return rows;
     }
 

@@ -117,7 +117,7 @@ public final class SeveralAbsorbersContent {
         if (d.joint().isPresent()) {
             cautions.add(JointAbsorbersContent.sectionsCaution(d));
             cautions.addAll(JointAbsorbersContent.edgeCautions(d));
-            cautions.add(NOMINAL_SPLIT);
+            cautions.add(d.robust().isPresent() ? JointAbsorbersContent.ROBUST : NOMINAL_SPLIT);
             if (!d.certified()) {
                 cautions.add(JointAbsorbersContent.NOT_FOUND);
             }
@@ -147,7 +147,7 @@ public final class SeveralAbsorbersContent {
         boolean joint = d.joint().isPresent();
         rows.add(row(ReportKey.SEVERAL_COUNT, joint ? "absorbers, one per mode" : "absorbers, equal masses",
                 new Count(n), ""));
-        rows.add(row(ReportKey.SEVERAL_TUNING, "tuning", joint ? JointAbsorbersContent.TUNING
+        rows.add(row(ReportKey.SEVERAL_TUNING, "tuning", joint ? JointAbsorbersContent.tuning(d)
                 : new Words(n == 1 ? "one absorber, the design above"
                 : tuning == AbsorberSetTuning.UNIFORM ? "uniform spread, one damping ratio (Xu and Igusa 1992)"
                 : "each absorber its own tuning and damping (Zuo and Nayfeh 2005)", List.of(tuningId)), ""));
@@ -211,7 +211,13 @@ public final class SeveralAbsorbersContent {
                 new Tolerance(d.structureTolerance(), 1), tolerance));
         d.single().ifPresent(s -> rows.add(row(ReportKey.SEVERAL_SINGLE_STRUCTURE_TOLERANCE,
                 "the same, one absorber of the same total mass", new Tolerance(s.structureTolerance(), 1), tolerance)));
-        d.robust().ifPresent(r -> robustRows(rows, r, targetName));
+        d.robust().ifPresent(r -> {
+            if (joint) {
+                JointAbsorbersContent.robustRows(rows, d, r);
+            } else {
+                robustRows(rows, r, targetName);
+            }
+        });
         rows.add(row(ReportKey.SEVERAL_CERTIFIED, "optimum certified", new Flag(d.certified(),
                 d.certified() ? "yes" : "NO"), n == 1 ? "the design above" : "docs/several-modes.md, the certificate"));
         if (joint) {
@@ -296,10 +302,10 @@ public final class SeveralAbsorbersContent {
         rows.add(compared(r.set(), "this set", "robust_set", source));
         rows.add(compared(r.leastPeakSet(), "the same absorbers tuned for the least nominal peak", "least_peak_set",
                 source));
-        rows.add(compared(r.single(), "one absorber of the same total mass, least worst peak", "one_absorber", source));
+        rows.add(compared(r.alternative(), "one absorber of the same total mass, least worst peak", "one_absorber", source));
     }
 
-    private static ReportRow compared(SeveralAbsorbers.Figures f, String label, String id, String source) {
+    static ReportRow compared(SeveralAbsorbers.Figures f, String label, String id, String source) {
         List<Field> fields = List.of(
                 new Field(ReportKey.ITEM_DESIGN, "", new Words(label, List.of(id))),
                 new Field(ReportKey.ITEM_NOMINAL_PEAK, "nominal peak", DesignContent.quantity(f.nominalPeak(),
