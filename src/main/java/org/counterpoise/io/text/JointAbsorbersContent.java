@@ -60,20 +60,19 @@ final class JointAbsorbersContent {
         rows.add(SeveralAbsorbersContent.row(ReportKey.SEVERAL_DESIGNED_FOR, "designed for", new Words("the least worst"
                 + " peak over the band (robust-worst-case), jointly, the whole structure seen",
                 List.of("robust-worst-case")), "docs/several-modes.md, robust design of one absorber per mode"));
-        rows.add(SeveralAbsorbersContent.row(ReportKey.SEVERAL_ROBUST_RANGES, "each absorber's mode's frequency (each on"
-                + " its own), both absorbers' frequencies together: within +/-", new Pair(new Percent(r.structureRange(),
-                2), new Percent(r.absorberRange(), 2), PairKind.SIDE_BY_SIDE), "robustness ranges of the project; the"
-                + " absorbers by one common factor (one spring batch)"));
+        rows.add(SeveralAbsorbersContent.row(ReportKey.SEVERAL_ROBUST_RANGES, "+/- each mode alone, absorbers together",
+                new Pair(new Percent(r.structureRange(), 2), new Percent(r.absorberRange(), 2), PairKind.SIDE_BY_SIDE),
+                "robustness ranges of the project: each absorber's mode's natural frequency on its own, both"
+                        + " absorbers' by one common factor (one spring batch)"));
         rows.add(SeveralAbsorbersContent.row(ReportKey.SEVERAL_ROBUST_DAMPING_FLOOR, "least damping ratio of every"
                 + " absorber", DesignContent.quantity(r.dampingFloor(), Dimension.RATIO), "the practical damping floor"
                 + " (docs/robustness.md)"));
         String target = d.layout().modeNames().get(d.targetMode());
-        rows.add(SeveralAbsorbersContent.compared(r.set(), "this design", "robust_set", source + "; the tolerance: mode "
+        rows.add(SeveralAbsorbersContent.compared(r.set(), "this design", "robust_set", source + "; the ranges: +/- each"
+                + " absorber's mode's frequency on its own, both absorbers' frequencies together; the tolerance: mode "
                 + target + " alone"));
-        rows.add(SeveralAbsorbersContent.compared(r.leastPeakSet(), "the same absorbers designed jointly for the least"
-                + " nominal peak", "least_peak_set", source));
-        rows.add(SeveralAbsorbersContent.compared(r.alternative(), "the sequential design (each on its own mode alone,"
-                + " least nominal peak)", "sequential", source));
+        rows.add(SeveralAbsorbersContent.compared(r.leastPeakSet(), "joint design, least nominal peak", "least_peak_set", source));
+        rows.add(SeveralAbsorbersContent.compared(r.alternative(), "sequential design, least nominal peak", "sequential", source));
     }
 
     /**

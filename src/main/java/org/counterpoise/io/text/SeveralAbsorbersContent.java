@@ -151,7 +151,7 @@ public final class SeveralAbsorbersContent {
                 : new Words(n == 1 ? "one absorber, the design above"
                 : tuning == AbsorberSetTuning.UNIFORM ? "uniform spread, one damping ratio (Xu and Igusa 1992)"
                 : "each absorber its own tuning and damping (Zuo and Nayfeh 2005)", List.of(tuningId)), ""));
-        rows.add(row(ReportKey.SEVERAL_POINTS, joint ? "force at, response at, the target mode's absorber at"
+        rows.add(row(ReportKey.SEVERAL_POINTS, joint ? "force, response, target absorber at"
                 : "force at, response at, absorbers at", new Words(
                 d.layout().excitationPoint() + ", " + d.layout().responsePoint() + ", " + d.layout().absorberPoint(),
                 List.of(d.layout().excitationPoint(), d.layout().responsePoint(), d.layout().absorberPoint())), ""));
@@ -174,7 +174,7 @@ public final class SeveralAbsorbersContent {
                     ? "designed jointly, the whole structure seen (docs/several-modes.md)" : source));
         }
         built.ifPresent(b -> rows.addAll(inSetRows(b)));
-        rows.add(row(ReportKey.SEVERAL_PEAKS, joint ? "peak displacement over the band (jointly designed)"
+        rows.add(row(ReportKey.SEVERAL_PEAKS, joint ? "peak over the band (joint design)"
                 : "peak displacement over the band", new Pair(
                 DesignContent.quantity(d.peakBefore(), Dimension.LENGTH),
                 DesignContent.quantity(d.peakAfter(), Dimension.LENGTH), PairKind.BEFORE_AFTER), source));
@@ -292,17 +292,17 @@ public final class SeveralAbsorbersContent {
         rows.add(row(ReportKey.SEVERAL_DESIGNED_FOR, "split designed for", new Words("the least worst peak over the"
                 + " band (robust-worst-case), on mode " + targetName + " alone", List.of("robust-worst-case")),
                 "docs/several-modes.md, robust design of the set"));
-        rows.add(row(ReportKey.SEVERAL_ROBUST_RANGES, "mode " + targetName + " frequency, all absorbers' frequencies"
-                + " together: within +/-", new Pair(new Percent(r.structureRange(), 2), new Percent(r.absorberRange(), 2),
-                PairKind.SIDE_BY_SIDE), "robustness ranges of the project; the absorbers by one common factor"
-                + " (one spring batch)"));
+        rows.add(row(ReportKey.SEVERAL_ROBUST_RANGES, "+/- mode " + targetName + ", absorbers together", new Pair(
+                new Percent(r.structureRange(), 2), new Percent(r.absorberRange(), 2), PairKind.SIDE_BY_SIDE),
+                "robustness ranges of the project: mode " + targetName + "'s natural frequency, all absorbers' by one"
+                        + " common factor (one spring batch)"));
         rows.add(row(ReportKey.SEVERAL_ROBUST_DAMPING_FLOOR, "least damping ratio of every absorber",
                 DesignContent.quantity(r.dampingFloor(), Dimension.RATIO), "the practical damping floor"
                 + " (docs/robustness.md)"));
         rows.add(compared(r.set(), "this set", "robust_set", source));
-        rows.add(compared(r.leastPeakSet(), "the same absorbers tuned for the least nominal peak", "least_peak_set",
+        rows.add(compared(r.leastPeakSet(), "same absorbers, least nominal peak", "least_peak_set",
                 source));
-        rows.add(compared(r.alternative(), "one absorber of the same total mass, least worst peak", "one_absorber", source));
+        rows.add(compared(r.alternative(), "one absorber of the total mass, least worst", "one_absorber", source));
     }
 
     static ReportRow compared(SeveralAbsorbers.Figures f, String label, String id, String source) {
