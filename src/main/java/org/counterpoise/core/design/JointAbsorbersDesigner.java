@@ -81,8 +81,7 @@ final class JointAbsorbersDesigner {
         Optional<SeveralAbsorbers.RobustSet> robustFigures = robust.map(rr -> {
             RobustJointProblem problem = rr.problem();
             return new SeveralAbsorbers.RobustSet(problem.structureRange(), problem.absorberRange(),
-                    problem.dampingFloor(), new SeveralAbsorbers.Figures(peakAfter, force * worstPeak(setup, chosen,
-                            problem), tolerance),
+                    problem.dampingFloor(), new SeveralAbsorbers.Figures(peakAfter, force * rr.worstPeak(), tolerance),
                     figures(setup, layout, r, rr.leastPeak().design(), band, force, bare, problem),
                     figures(setup, layout, r, rr.leastPeak().sequentialDesign(), band, force, bare, problem));
         });

@@ -97,7 +97,7 @@ public record SeveralAbsorbers(AbsorberLayout layout, int targetMode, double eff
     /**
      * @return with one absorber per mode, the sequential design's peak over the joint one's (at least 1);
      *     for the robust joint design the same of the worst peaks over the ranges (its nominal peak is
-     *     above the least by design)
+     *     above the least by design; below 1 only when the robust optimum was not found)
      */
     public Optional<Double> jointGain() {
         if (joint.isPresent() && robust.isPresent()) {

@@ -3,7 +3,9 @@ package org.counterpoise.core.optim;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.Comparator;
+import java.util.IdentityHashMap;
 import java.util.List;
+import java.util.Map;
 
 /**
  * The exchange method (outer approximation, the usual method for semi-infinite minimax problems,
@@ -86,8 +88,12 @@ final class RobustExchange {
             starts.add(clamp(v, seed));
         }
         if (pursued < starts.size()) {
-            RobustSetVariables first = v;
-            starts.sort(Comparator.comparingDouble(first::peak));
+            // each start's largest peak over the first builds, computed once
+            Map<double[], Double> largest = new IdentityHashMap<>();
+            for (double[] start : starts) {
+                largest.put(start, v.peak(start));
+            }
+            starts.sort(Comparator.comparingDouble(largest::get));
             starts = starts.subList(0, pursued);
         }
         double[] p = null;

@@ -18,10 +18,12 @@ final class DerivativeRoundOff {
     /** Frequencies tried. */
     static final int SAMPLES = 400;
     /**
-     * The least degree of D(s) checked: one absorber on one mode (degree 4, R of degree 7 in x at most)
-     * keeps the route its fuzz and golden results were certified on (docs/optimiser.md: its peaks
-     * against dense sweeps to 1e-9), and the check would cost five times that peak search (8 against
-     * 1.5 us); the cases found swamped have several absorbers or modes (degree 6 and up).
+     * The least degree of D(s) checked. Systems of two degrees of freedom (degree 4: one absorber on one
+     * mode, or two modes without absorbers) keep the route their checks certified before the test
+     * existed (one absorber: its peaks against dense sweeps to 1e-9, docs/optimiser.md; two bare modes:
+     * SpilloverTest), and there the check cost six times the search itself (PeakSearchCpuTime: 7.0
+     * against 1.2 us per search, docs/performance.md); the swamped cases found have three degrees of
+     * freedom or more (degree 6 and up).
      */
     static final int SMALLEST_CHECKED_DEGREE = 5;
     /** Unit round-offs of the absolute sum below which R is taken as lost (common practice, no source). */

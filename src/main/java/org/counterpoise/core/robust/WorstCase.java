@@ -259,9 +259,9 @@ public final class WorstCase {
         // each local maximum refined on its own; the highest wins, the first in grid order among equals
         List<double[]> refined = maxima.parallelStream().map(index -> refine(peak, nominal, varied, axes, index,
                 values[cell(index, points)])).toList();
-        double[] best = null;
+        double[] best = withPeak(nominal, Double.NEGATIVE_INFINITY);
         for (double[] r : refined) {
-            if (best == null || r[r.length - 1] > best[best.length - 1]) {
+            if (r[r.length - 1] > best[best.length - 1]) {
                 best = r;
             }
         }

@@ -157,7 +157,7 @@ public final class SeveralModes {
         if (a.onePerMode() && !d.isBand()) {
             throw new InvalidInputException("disturbance.frequency", "one forcing frequency with absorbers.arrangement \""
                     + Ids.of(a.arrangement()) + "\"", "a band of forcing frequencies (disturbance.band): one absorber"
-                            + " per mode is designed for the least peak over a band");
+                            + " per mode is designed for the least peak (or least worst peak) over a band");
         }
         if (a.count() > 1 && !d.isBand()) {
             throw new InvalidInputException(ModesJson.ABSORBERS + "." + ModesJson.COUNT, Integer.toString(a.count()),

@@ -41,6 +41,11 @@ final class JointAbsorbersContent {
             + " scatter, the other modes' frequencies and the damping range are not in that worst case (the sheet"
             + " gives each absorber's tolerance on its own frequency within the set): check their tuning on site"
             + " with care.";
+    /** A robust joint optimum that failed its certificate. */
+    static final String ROBUST_NOT_FOUND = "One absorber per mode: the robust joint optimum was not found (its"
+            + " certificate failed, docs/several-modes.md); the absorbers shown are the best design seen: compare"
+            + " the worst peaks of the three designs in the section \"Several absorbers and modes\" before building"
+            + " them.";
     private static final String SOURCE = "each absorber the certified least peak on its own mode alone, as seen at"
             + " its point (the usual practice; docs/several-modes.md)";
 
@@ -60,10 +65,10 @@ final class JointAbsorbersContent {
         rows.add(SeveralAbsorbersContent.row(ReportKey.SEVERAL_DESIGNED_FOR, "designed for", new Words("the least worst"
                 + " peak over the band (robust-worst-case), jointly, the whole structure seen",
                 List.of("robust-worst-case")), "docs/several-modes.md, robust design of one absorber per mode"));
-        rows.add(SeveralAbsorbersContent.row(ReportKey.SEVERAL_ROBUST_RANGES, "+/- each mode alone, absorbers together",
+        rows.add(SeveralAbsorbersContent.row(ReportKey.SEVERAL_ROBUST_RANGES, "+/- modes independently, absorbers together",
                 new Pair(new Percent(r.structureRange(), 2), new Percent(r.absorberRange(), 2), PairKind.SIDE_BY_SIDE),
-                "robustness ranges of the project: each absorber's mode's natural frequency on its own, both"
-                        + " absorbers' by one common factor (one spring batch)"));
+                "robustness ranges of the project: each absorber's mode's natural frequency on its own (every"
+                        + " combination of the two), both absorbers' by one common factor (one spring batch)"));
         rows.add(SeveralAbsorbersContent.row(ReportKey.SEVERAL_ROBUST_DAMPING_FLOOR, "least damping ratio of every"
                 + " absorber", DesignContent.quantity(r.dampingFloor(), Dimension.RATIO), "the practical damping floor"
                 + " (docs/robustness.md)"));

@@ -119,7 +119,8 @@ public final class SeveralAbsorbersContent {
             cautions.addAll(JointAbsorbersContent.edgeCautions(d));
             cautions.add(d.robust().isPresent() ? JointAbsorbersContent.ROBUST : NOMINAL_SPLIT);
             if (!d.certified()) {
-                cautions.add(JointAbsorbersContent.NOT_FOUND);
+                cautions.add(d.robust().isPresent() ? JointAbsorbersContent.ROBUST_NOT_FOUND
+                        : JointAbsorbersContent.NOT_FOUND);
             }
             return new ReportContent(content.name(), sections, content.warnings(), cautions, content.comparison(),
                     content.units());

@@ -101,10 +101,15 @@ final class SeveralAbsorbersView {
                     + where + "; peak displacement over the band at "
                     + layout.responsePoint() + ": " + DisplayUnits.format(set.peakBefore(), Dimension.LENGTH, units)
                     + " without, " + DisplayUnits.format(set.peakAfter(), Dimension.LENGTH, units) + " with them"
-                    + set.gain().map(g -> " (one absorber of the same total mass: "
+                    + set.robust().map(r -> "; designed for the least worst peak over the ranges: "
+                            + DisplayUnits.format(r.set().worstPeak(), Dimension.LENGTH, units) + " at worst ("
+                            + (set.joint().isPresent() ? "each absorber designed on its own mode alone: "
+                            : "one absorber of the same total mass: ")
+                            + DisplayUnits.format(r.alternative().worstPeak(), Dimension.LENGTH, units) + ")")
+                    .orElseGet(() -> set.gain().map(g -> " (one absorber of the same total mass: "
                             + DisplayUnits.format(set.single().orElseThrow().peak(), Dimension.LENGTH, units) + ")")
                             .orElse("") + set.joint().map(q -> " (each absorber designed on its own mode alone: "
-                            + DisplayUnits.format(q.peak(), Dimension.LENGTH, units) + ")").orElse("") + ".";
+                            + DisplayUnits.format(q.peak(), Dimension.LENGTH, units) + ")").orElse("")) + ".";
             Map<String, XYChart> charts = new LinkedHashMap<>();
             charts.put(layout.responsePoint(), SeveralAbsorbersCharts.response(set, units, theme, 640, 380));
             for (String other : new TreeSet<>(layout.structure().points())) {
