@@ -47,6 +47,14 @@ class WorstCaseBoxTest {
         assertEquals(0.99, w[2], 1e-6);
     }
 
+    /** One varied factor (the 25-point grid): an interior top found to the Brent tolerance, the others at 1. */
+    @Test
+    void oneVariedFactorFindsItsInteriorTop() {
+        double[] top = {1.0, 1.037, 1.0};
+        double[] w = WorstCase.overBox(x -> bump(x, top, 0.01, 3.0), new double[] {0.0, 0.05, 0.0});
+        assertArrayEquals(new double[] {1.0, 1.037, 1.0, 3.0}, w, 1e-6);
+    }
+
     private static double bump(double[] x, double[] top, double width, double height) {
         double r2 = 0;
         for (int k = 0; k < x.length; k++) {
