@@ -43,7 +43,6 @@ import org.counterpoise.ui.gui.task.TaskRunner;
  * {@link DesignRun} computes results, and the actions do files, undo and redo.
  */
 public final class WizardFrame extends JFrame {
-
     private final DesignDocument document = new DesignDocument(FileActions.untitled());
     private final TaskBar taskBar = new TaskBar();
     private final JLabel status = new JLabel(" ");
@@ -90,12 +89,17 @@ public final class WizardFrame extends JFrame {
         run = new DesignRun(document, steps, this::say, this::updateNavigation);
         holder[0] = run;
         run.use(tasks);
+        Project first = document.project();
         pages = new StepPages(steps.all(), s -> {
             s.attach(document, () -> {
                 run.changed();
                 updateTitle();
             });
-            s.sync(document.project(), DocumentChange.Kind.LOADED);
+            // the first project, then today's: a field left alone (inactive) holds what it held made with the window
+            s.sync(first, DocumentChange.Kind.LOADED);
+            if (document.project() != first) {
+                s.sync(document.project(), DocumentChange.Kind.LOADED);
+            }
         });
         if (everyStep) {
             pages.makeAll();
@@ -127,10 +131,7 @@ public final class WizardFrame extends JFrame {
         return new WizardFrame(false);
     }
 
-    /**
-     * Makes the steps not made yet, one per event so the window answers between them, and then
-     * designs the project (a design asked for meanwhile waited for them).
-     */
+    /** Makes the steps not made yet, one per event (the window answers between them), then designs the project. */
     public void makeRestLater() {
         pages.makeRestLater(run::ready);
     }
