@@ -6,7 +6,7 @@ import java.awt.Container;
 import java.util.List;
 import java.util.function.Consumer;
 import javax.swing.JPanel;
-import javax.swing.SwingUtilities;
+import javax.swing.Timer;
 import org.counterpoise.io.text.UnitSystem;
 import org.counterpoise.ui.gui.field.QuantityField;
 import org.counterpoise.ui.gui.field.ScrollingPage;
@@ -20,6 +20,8 @@ import org.counterpoise.ui.gui.field.ScrollingPage;
  * takes its place among the cards in step order. Event thread only.
  */
 final class StepPages {
+    /** Pause before each step made after the window shows (ms). */
+    private static final int PAUSE_MS = 20;
     private final List<Page<? extends Step>> pages;
     private final CardLayout cards = new CardLayout();
     private final JPanel center = new JPanel(cards);
@@ -84,11 +86,13 @@ final class StepPages {
     }
 
     /**
-     * Makes the steps not made yet one per event, in order, and then runs an action.
+     * Makes the steps not made yet one per event, in order, each after a short pause (the queue
+     * runs between them), and then runs an action.
      * @param then run on the event thread once every step is made
      */
     void makeRestLater(Runnable then) {
-        SwingUtilities.invokeLater(() -> {
+        // a short pause before each: the window's first paint and what the user does come first
+        Timer next = new Timer(PAUSE_MS, e -> {
             for (Page<? extends Step> p : pages) {
                 if (!p.made()) {
                     p.get();
@@ -98,6 +102,8 @@ final class StepPages {
             }
             then.run();
         });
+        next.setRepeats(false);
+        next.start();
     }
 
     /**
