@@ -56,6 +56,8 @@ class FirstWindowGuiTest {
         assertNull(Edt.call(() -> Edt.find(staged.getContentPane(), "disturbance.harmonic_order")));
         assertFalse(Edt.call(staged::settled));
         assertNotNull(Edt.call(staged::currentProject), "a step not made yet holds no text that is not a number");
+        // the first step's derived values are there at once (1800 kg: the default scenario's mass, presets/)
+        assertEquals("1800 kg", Edt.call(() -> ((JLabel) Edt.find(staged.getContentPane(), "derived.mass")).getText()));
         Edt.call(() -> {
             staged.makeRestLater();
             return null;

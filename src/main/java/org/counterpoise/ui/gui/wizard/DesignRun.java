@@ -138,6 +138,13 @@ final class DesignRun {
         long gen = ++generation;
         if (!ready) {
             waiting = true; // designed once every step is made (the steps read and show it)
+            Structure first = null;
+            try {
+                first = fieldsValid() ? document.project().toStructure() : null;
+            } catch (InvalidInputException e) {
+                // shown under its field once every step is made
+            }
+            steps.structure().get().showDerived(first); // the first step's derived values, as a whole window has them
             return;
         }
         steps.all().forEach(s -> s.get().clearProblems());
