@@ -31,11 +31,14 @@ public final class GuiMain {
         });
         SwingUtilities.invokeLater(() -> {
             Themes.apply(false);
-            WizardFrame frame = new WizardFrame();
+            // the first step only before the window shows; the others (and then the first design)
+            // one per event after it, so the window is up sooner and answers meanwhile
+            WizardFrame frame = WizardFrame.firstStepOnly();
             frame.setVisible(true);
             if (project != null) {
                 frame.openFile(project);
             }
+            frame.makeRestLater();
         });
     }
 }

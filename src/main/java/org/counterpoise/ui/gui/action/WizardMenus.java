@@ -8,6 +8,8 @@ import javax.swing.JMenu;
 import javax.swing.JMenuBar;
 import javax.swing.JMenuItem;
 import javax.swing.JOptionPane;
+import javax.swing.event.MenuEvent;
+import javax.swing.event.MenuListener;
 import org.counterpoise.io.preset.Presets;
 import org.counterpoise.ui.gui.Themes;
 
@@ -38,12 +40,30 @@ public final class WizardMenus {
         JMenu presets = new JMenu("Example scenarios (invented)");
         presets.setName("menu.presets");
         presets.setMnemonic('e');
-        for (String name : Presets.names()) {
-            JMenuItem it = new JMenuItem(Presets.load(name).project().name());
-            it.setName("preset." + name);
-            it.addActionListener(e -> preset.accept(name));
-            presets.add(it);
-        }
+        presets.addMenuListener(new MenuListener() {
+            @Override
+            public void menuSelected(MenuEvent e) {
+                // filled when first opened: reading every preset for its name is not needed for the first window
+                if (presets.getMenuComponentCount() == 0) {
+                    for (String name : Presets.names()) {
+                        JMenuItem it = new JMenuItem(Presets.load(name).project().name());
+                        it.setName("preset." + name);
+                        it.addActionListener(a -> preset.accept(name));
+                        presets.add(it);
+                    }
+                }
+            }
+
+            @Override
+            public void menuDeselected(MenuEvent e) {
+                // nothing to do
+            }
+
+            @Override
+            public void menuCanceled(MenuEvent e) {
+                // nothing to do
+            }
+        });
         fileMenu.add(presets);
         fileMenu.addSeparator();
         fileMenu.add(new JMenuItem(Actions.of("Quit", KeyEvent.VK_Q, Shortcuts.menuKey(KeyEvent.VK_Q, false),

@@ -50,9 +50,12 @@ final class DesignRun {
     private long generation;
     private long shownGeneration = -1;
     private DesignResult shown;
+    /** False until every step is made; a recompute asked for before then waits for {@link #ready()}. */
+    private boolean ready;
+    private boolean waiting;
 
     /**
-     * The steps this run reads and fills.
+     * The steps this run reads and fills, each made when first needed ({@link Page}).
      *
      * @param structure step 1
      * @param disturbance step 2
@@ -62,9 +65,10 @@ final class DesignRun {
      * @param robustness step 6
      * @param sheet step 7
      */
-    record Steps(StructureStep structure, DisturbanceStep disturbance, GoalStep goal, HardwareStep hardware,
-            ResultStep result, RobustnessStep robustness, SheetStep sheet) {
-        List<Step> all() {
+    record Steps(Page<StructureStep> structure, Page<DisturbanceStep> disturbance, Page<GoalStep> goal,
+            Page<HardwareStep> hardware, Page<ResultStep> result, Page<RobustnessStep> robustness,
+            Page<SheetStep> sheet) {
+        List<Page<? extends Step>> all() {
             return List.of(structure, disturbance, goal, hardware, result, robustness, sheet);
         }
     }
@@ -90,12 +94,23 @@ final class DesignRun {
     /** Inputs changed (an edit, or text that is not a number yet): recompute after a pause. */
     void changed() {
         generation++;
-        steps.result().hardware().stale(); // the parts on screen are for the old inputs: gone at once
-        steps.result().several().stale();
+        steps.result().ifMade().ifPresent(r -> { // the parts on screen are for the old inputs: gone at once
+            r.hardware().stale();
+            r.several().stale();
+        });
         if (tasks != null) {
             tasks.cancelStale(); // work for the old inputs stops now, not after the pause
         }
         pause.restart();
+    }
+
+    /** Every step is made: the design asked for meanwhile, if any, starts now. */
+    void ready() {
+        ready = true;
+        if (waiting) {
+            waiting = false;
+            recompute();
+        }
     }
 
     /** @return the result on screen, or null */
@@ -111,7 +126,7 @@ final class DesignRun {
     /** @return true when every field on every step holds a value */
     boolean fieldsValid() {
         boolean ok = true;
-        for (Step s : steps.all()) {
+        for (Page<? extends Step> s : steps.all()) {
             ok &= s.fieldsValid();
         }
         return ok;
@@ -121,17 +136,28 @@ final class DesignRun {
     void recompute() {
         pause.stop();
         long gen = ++generation;
-        steps.all().forEach(Step::clearProblems);
-        steps.goal().methodProblem(null);
-        steps.goal().criterionProblem(null);
+        if (!ready) {
+            waiting = true; // designed once every step is made (the steps read and show it)
+            Structure first = null;
+            try {
+                first = fieldsValid() ? document.project().toStructure() : null;
+            } catch (InvalidInputException e) {
+                // shown under its field once every step is made
+            }
+            steps.structure().get().showDerived(first); // the first step's derived values, as a whole window has them
+            return;
+        }
+        steps.all().forEach(s -> s.get().clearProblems());
+        steps.goal().get().methodProblem(null);
+        steps.goal().get().criterionProblem(null);
         Project p = document.project();
         DesignStudy study = null;
         Structure built = null;
         if (fieldsValid()) {
             try {
                 built = p.toStructure();
-                steps.structure().showDerived(built);
-                steps.disturbance().showDerived(p.toExcitation(), built);
+                steps.structure().get().showDerived(built);
+                steps.disturbance().get().showDerived(p.toExcitation(), built);
                 p.runUpRate();
                 p.toRobustness();
                 study = p.toStudy();
@@ -140,7 +166,7 @@ final class DesignRun {
             }
         }
         if (built == null) {
-            steps.structure().showDerived(null);
+            steps.structure().get().showDerived(null);
         }
         if (study == null) {
             clearResults(gen);
@@ -154,29 +180,29 @@ final class DesignRun {
     private void clearResults(long gen) {
         shown = null;
         shownGeneration = gen;
-        steps.result().show(null, null);
-        steps.result().several().failed("Fix the inputs to see the absorbers.");
-        steps.robustness().show(null, null);
-        steps.sheet().show(null, document.project());
-        steps.goal().massChart().message("Fix the inputs to see the curve.");
+        steps.result().get().show(null, null);
+        steps.result().get().several().failed("Fix the inputs to see the absorbers.");
+        steps.robustness().get().show(null, null);
+        steps.sheet().get().show(null, document.project());
+        steps.goal().get().massChart().message("Fix the inputs to see the curve.");
     }
 
     /** @param e a problem: shown under its field, or on the status line when no field owns it */
     void route(InvalidInputException e) {
         if (e.field().equals("absorber.method")) {
-            steps.goal().methodProblem(e.problem());
-            steps.goal().markProblem(e.problem());
+            steps.goal().get().methodProblem(e.problem());
+            steps.goal().get().markProblem(e.problem());
             return;
         }
         if ((e.field().startsWith("acceptance") && !e.field().startsWith("acceptance.limit"))
                 || e.field().startsWith("absorber.meet_acceptance")) {
             // the criterion's lists are not number fields: the problem is said under the criterion
-            steps.goal().criterionProblem(e.problem());
-            steps.goal().markProblem(e.problem());
+            steps.goal().get().criterionProblem(e.problem());
+            steps.goal().get().markProblem(e.problem());
             return;
         }
-        for (Step s : steps.all()) {
-            if (s.showProblem(e)) {
+        for (Page<? extends Step> s : steps.all()) {
+            if (s.get().showProblem(e)) {
                 return;
             }
         }
@@ -191,13 +217,13 @@ final class DesignRun {
         }, (DesignDossier d) -> {
             shown = d.design();
             shownGeneration = gen;
-            steps.result().designedFrom(p);
-            steps.result().show(d.design(), d.curves());
-            steps.result().hardware().design(d, p.hardware(), p.displayUnits(),
+            steps.result().get().designedFrom(p);
+            steps.result().get().show(d.design(), d.curves());
+            steps.result().get().hardware().design(d, p.hardware(), p.displayUnits(),
                     FormatMigration.isOneModeOneAbsorber(p) ? Optional.empty() : SeveralModes.layout(p));
-            steps.sheet().show(d, p);
-            if (steps.sheet().component().isShowing()) {
-                steps.sheet().shown();
+            steps.sheet().get().show(d, p);
+            if (steps.sheet().get().component().isShowing()) {
+                steps.sheet().get().shown();
             }
             navigation.run();
             startSeveral(d, p);
@@ -226,7 +252,7 @@ final class DesignRun {
      * dropped if the state changed.
      */
     private void startSeveral(DesignDossier dossier, Project p) {
-        SeveralAbsorbersView view = steps.result().several();
+        SeveralAbsorbersView view = steps.result().get().several();
         Optional<AbsorberLayout> layout;
         try {
             layout = SeveralModes.layout(p);
@@ -246,7 +272,7 @@ final class DesignRun {
                 units, theme), shown -> {
                     view.show(shown);
                     // the verdict above the result is the whole structure's, as design and sheet give it
-                    shown.acceptance().ifPresent(a -> steps.result().verdict().show(a,
+                    shown.acceptance().ifPresent(a -> steps.result().get().verdict().show(a,
                             VerdictPanel.orderNames(design, p)));
                 }, e -> {
                     if (e instanceof CoreException plain) {
@@ -265,26 +291,26 @@ final class DesignRun {
      */
     private void startComparison(DesignDossier dossier) {
         DesignStudy study = dossier.study();
-        steps.result().comparison().message("Comparing the design methods\u2026");
+        steps.result().get().comparison().message("Comparing the design methods\u2026");
         tasks.current(null, progress -> ComparisonContent.of(dossier.comparison(progress), study),
-                (ReportComparison c) -> steps.result().comparison().show(c), e -> {
+                (ReportComparison c) -> steps.result().get().comparison().show(c), e -> {
                     Logger.getLogger("counterpoise").log(Level.WARNING, "comparison failed", e);
-                    steps.result().comparison().message("The comparison of methods could not be computed for these"
+                    steps.result().get().comparison().message("The comparison of methods could not be computed for these"
                             + " inputs.");
                 });
     }
 
     private void startRobustness(DesignDossier dossier) {
         DesignResult r = dossier.design();
-        steps.robustness().show(r, null);
+        steps.robustness().get().show(r, null);
         tasks.current("Robustness study and Monte Carlo", progress -> {
             progress.phase(r.study().robustness().tolerances().anyGiven()
                     ? r.study().robustness().samples() + " sampled builds" : "worst case and robust design");
             RobustnessResult result = dossier.robustness(progress);
             progress.checkCancelled();
             return result;
-        }, (RobustnessResult result) -> steps.robustness().show(r, result), e -> {
-            steps.robustness().show(null, null);
+        }, (RobustnessResult result) -> steps.robustness().get().show(r, result), e -> {
+            steps.robustness().get().show(null, null);
             if (e instanceof InvalidInputException bad) {
                 route(bad);
                 navigation.run();
@@ -293,7 +319,7 @@ final class DesignRun {
                 status.accept("The robustness study could not be computed for these inputs.");
             }
         }, () -> {
-            steps.robustness().cancelled();
+            steps.robustness().get().cancelled();
             status.accept("The robustness study was cancelled; it runs again after the next edit.");
         });
     }
@@ -301,13 +327,13 @@ final class DesignRun {
     private void startMassChart(DesignStudy study, DesignResult r) {
         if (study.excitation().spectrum().isWhiteNoise()) {
             // The curve is of harmonic peaks (exact-peak designs); white noise is judged by rms values.
-            steps.goal().massChart().message("This curve is for a harmonic disturbance; under white noise the"
+            steps.goal().get().massChart().message("This curve is for a harmonic disturbance; under white noise the"
                     + " design is judged by its rms response (see the Result step).");
             return;
         }
         double[] mus = AchievablePeak.massRatios(0.005, 0.3, 16);
         tasks.current(null, progress -> AchievablePeak.overMassRatio(study, mus),
-                (double[] peaks) -> steps.goal().massChart().show(MassRatioChart.of(study, r, mus, peaks)),
-                e -> steps.goal().massChart().message("No optimum peak for this case: " + e.getMessage()));
+                (double[] peaks) -> steps.goal().get().massChart().show(MassRatioChart.of(study, r, mus, peaks)),
+                e -> steps.goal().get().massChart().message("No optimum peak for this case: " + e.getMessage()));
     }
 }

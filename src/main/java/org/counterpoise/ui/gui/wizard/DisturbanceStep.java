@@ -40,6 +40,8 @@ import org.counterpoise.ui.gui.field.QuantityField;
  * are forms of their own ({@link OrdersForm}, {@link BalanceGradeForm}).
  */
 final class DisturbanceStep extends Step {
+    /** The step's title in the step list. */
+    static final String TITLE = "Disturbance";
     private static final List<Unit> FREQUENCY = UnitChoices.of(Dimension.FREQUENCY);
     private static final List<Unit> RATIO = UnitChoices.of(Dimension.RATIO);
 
@@ -312,7 +314,7 @@ final class DisturbanceStep extends Step {
 
     @Override
     String title() {
-        return "Disturbance";
+        return TITLE;
     }
 
     @Override

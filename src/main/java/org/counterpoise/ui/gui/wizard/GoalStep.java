@@ -36,6 +36,8 @@ import org.counterpoise.ui.gui.plot.ChartHost;
 
 /** Step 3: how big the absorber may be, how to design it, and what response matters. */
 final class GoalStep extends Step {
+    /** The step's title in the step list. */
+    static final String TITLE = "Absorber goal";
     /** The forms the absorber's size is given in, as the list offers them. */
     enum SizingForm {
         /** A mass ratio mu. */
@@ -314,7 +316,7 @@ final class GoalStep extends Step {
 
     @Override
     String title() {
-        return "Absorber goal";
+        return TITLE;
     }
 
     @Override

@@ -39,6 +39,8 @@ import org.counterpoise.ui.gui.field.QuantityField;
  * helical springs need a dashpot or an eddy-current damper, so the invalid pair cannot be picked.
  */
 final class HardwareStep extends Step {
+    /** The step's title in the step list. */
+    static final String TITLE = "Hardware";
     private final JComboBox<SpringKind> spring = new JComboBox<>(SpringKind.values());
     private final JComboBox<SpringMaterial> material = new JComboBox<>(SpringMaterial.values());
     private final JComboBox<Integer> count = new JComboBox<>(
@@ -282,7 +284,7 @@ final class HardwareStep extends Step {
 
     @Override
     String title() {
-        return "Hardware";
+        return TITLE;
     }
 
     @Override

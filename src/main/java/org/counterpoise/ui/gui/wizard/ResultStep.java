@@ -59,6 +59,8 @@ import org.knowm.xchart.XYChart;
 
 /** Step 4: the absorber to build, and the response before and after. */
 final class ResultStep extends Step {
+    /** The step's title in the step list. */
+    static final String TITLE = "Result";
     /** What to build and what it achieves first; the inputs echoed last. */
     private static final List<SectionId> ORDER = List.of(SectionId.ABSORBER, SectionId.ACCEPTANCE, SectionId.RESPONSE,
             SectionId.RMS, SectionId.STROKE_AND_FORCES, SectionId.DESIGN, SectionId.TOLERANCE, SectionId.ALTERNATIVE,
@@ -176,7 +178,7 @@ final class ResultStep extends Step {
 
     @Override
     String title() {
-        return "Result";
+        return TITLE;
     }
 
     @Override

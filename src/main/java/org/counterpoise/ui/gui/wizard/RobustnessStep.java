@@ -46,6 +46,8 @@ import org.counterpoise.ui.gui.plot.ChartHost;
 
 /** Step 5: how the design fares when mistuned, the robust alternative and the tolerance Monte Carlo. */
 final class RobustnessStep extends Step {
+    /** The step's title in the step list. */
+    static final String TITLE = "Robustness";
     /** Units offered for each tolerance, in the order of {@link ToleranceKey}. */
     private static final List<List<Unit>> TOLERANCE_UNITS = List.of(
             List.of(Unit.PERCENT, Unit.KILOGRAM, Unit.TONNE),
@@ -150,7 +152,7 @@ final class RobustnessStep extends Step {
 
     @Override
     String title() {
-        return "Robustness";
+        return TITLE;
     }
 
     @Override

@@ -41,6 +41,8 @@ import org.counterpoise.ui.gui.task.TaskRunner;
  * the task bar and can be cancelled.
  */
 final class SheetStep extends Step {
+    /** The step's title in the step list. */
+    static final String TITLE = "Parameter sheet";
     private final JLabel preview = new JLabel("The sheet preview appears here.", SwingConstants.CENTER);
     private final JComponent page;
     private final TaskRunner tasks;
@@ -78,7 +80,7 @@ final class SheetStep extends Step {
 
     @Override
     String title() {
-        return "Parameter sheet";
+        return TITLE;
     }
 
     @Override

@@ -1,9 +1,9 @@
 package org.counterpoise.ui.gui.wizard;
 
 import java.awt.Component;
-import java.util.List;
 import java.util.function.IntConsumer;
 import java.util.function.IntSupplier;
+import java.util.stream.IntStream;
 import javax.swing.BorderFactory;
 import javax.swing.DefaultListCellRenderer;
 import javax.swing.JLabel;
@@ -15,16 +15,16 @@ import org.counterpoise.ui.gui.Themes;
  * The wizard's list of steps at the left of its window: each step numbered with its title, a mark
  * and the problem colour on a step with a problem; picking one asks the wizard to go there.
  */
-final class StepList extends JList<Step> {
+final class StepList extends JList<Integer> {
     private static final long serialVersionUID = 1L;
 
     /**
-     * @param steps the wizard's steps, in order
+     * @param pages the wizard's steps, in order (their titles and problems are read, the steps not made)
      * @param go goes to the step of an index
      * @param current the index of the step shown
      */
-    StepList(List<Step> steps, IntConsumer go, IntSupplier current) {
-        super(steps.toArray(new Step[0]));
+    StepList(StepPages pages, IntConsumer go, IntSupplier current) {
+        super(IntStream.range(0, pages.size()).boxed().toArray(Integer[]::new));
         setName("steps");
         setSelectionMode(ListSelectionModel.SINGLE_SELECTION);
         setFixedCellWidth(190);
@@ -35,7 +35,7 @@ final class StepList extends JList<Step> {
             @Override
             public Component getListCellRendererComponent(JList<?> l, Object value, int index, boolean selected,
                     boolean focus) {
-                Step s = (Step) value;
+                Page<? extends Step> s = pages.page((Integer) value);
                 String mark = s.problem() != null ? "  \u25cf" : "";
                 JLabel label = (JLabel) super.getListCellRendererComponent(l, (index + 1) + "   " + s.title() + mark,
                         index, selected, focus);

@@ -35,6 +35,8 @@ import org.counterpoise.ui.gui.field.QuantityField;
 
 /** Step 1: the structure as the engineer knows it, with the derived values shown at once. */
 final class StructureStep extends Step {
+    /** The step's title in the step list. */
+    static final String TITLE = "Structure";
     private static final List<Unit> MASS = UnitChoices.of(Dimension.MASS);
     private static final List<Unit> WEIGHT = UnitChoices.of(Dimension.FORCE);
     private static final List<Unit> STIFFNESS = UnitChoices.of(Dimension.STIFFNESS);
@@ -278,7 +280,7 @@ final class StructureStep extends Step {
 
     @Override
     String title() {
-        return "Structure";
+        return TITLE;
     }
 
     @Override

@@ -1,9 +1,6 @@
 package org.counterpoise.ui.gui.wizard;
 
 import java.awt.BorderLayout;
-import java.awt.CardLayout;
-import java.awt.Component;
-import java.awt.Container;
 import java.awt.Dimension;
 import java.awt.FlowLayout;
 import java.awt.Font;
@@ -13,7 +10,6 @@ import java.awt.event.WindowEvent;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.function.Consumer;
 import javax.swing.Action;
 import javax.swing.BorderFactory;
 import javax.swing.JButton;
@@ -29,7 +25,6 @@ import org.counterpoise.io.project.FormatMigration;
 import org.counterpoise.io.project.LoadedProject;
 import org.counterpoise.io.project.Project;
 import org.counterpoise.io.text.SeveralAbsorbersContent;
-import org.counterpoise.io.text.UnitSystem;
 import org.counterpoise.ui.gui.Themes;
 import org.counterpoise.ui.gui.action.Actions;
 import org.counterpoise.ui.gui.action.EditActions;
@@ -37,8 +32,6 @@ import org.counterpoise.ui.gui.action.FileActions;
 import org.counterpoise.ui.gui.action.WizardMenus;
 import org.counterpoise.ui.gui.document.DesignDocument;
 import org.counterpoise.ui.gui.document.DocumentChange;
-import org.counterpoise.ui.gui.field.QuantityField;
-import org.counterpoise.ui.gui.field.ScrollingPage;
 import org.counterpoise.ui.gui.session.WindowPlacement;
 import org.counterpoise.ui.gui.task.TaskBar;
 import org.counterpoise.ui.gui.task.TaskRunner;
@@ -50,7 +43,6 @@ import org.counterpoise.ui.gui.task.TaskRunner;
  * {@link DesignRun} computes results, and the actions do files, undo and redo.
  */
 public final class WizardFrame extends JFrame {
-
     private final DesignDocument document = new DesignDocument(FileActions.untitled());
     private final TaskBar taskBar = new TaskBar();
     private final JLabel status = new JLabel(" ");
@@ -59,25 +51,24 @@ public final class WizardFrame extends JFrame {
     private final JLabel projectName = new JLabel(" ");
     private final DesignRun run;
     private final TaskRunner tasks;
-    private final List<Step> steps;
-    private final SheetStep sheet;
-    private final ResultStep result;
-    private final RobustnessStep robustness;
-    private final CardLayout cards = new CardLayout();
-    private final JPanel center = new JPanel(cards);
+    private final DesignRun.Steps steps;
+    private final StepPages pages;
     private final StepList stepList;
     private final Action back = Actions.of("Back", KeyEvent.VK_B, null, e -> go(this.current - 1));
     private final Action next = Actions.of("Next", KeyEvent.VK_N, null, e -> go(this.current + 1));
     private final FileActions files;
     private final EditActions edits = new EditActions(document);
-    private final ProjectDetails details = new ProjectDetails(document);
     private final ProjectDetailsDialog detailsDialog;
     private final UnitSystemControl units = new UnitSystemControl(document);
     private int current;
-    private UnitSystem shownSystem = UnitSystem.SI;
 
-    /** Builds the window with a new, untitled project. */
+    /** Builds the window with a new, untitled project, every step made. */
     public WizardFrame() {
+        this(true);
+    }
+
+    /** @param everyStep true to make every step now; false for the first one (the others by {@link #makeRestLater()}) */
+    private WizardFrame(boolean everyStep) {
         super("Counterpoise");
         setName("wizard");
         setDefaultCloseOperation(DO_NOTHING_ON_CLOSE);
@@ -89,34 +80,64 @@ public final class WizardFrame extends JFrame {
         });
         DesignRun[] holder = new DesignRun[1];
         tasks = new TaskRunner(() -> holder[0].generation(), taskBar);
-        result = new ResultStep(tasks, this::say);
-        robustness = new RobustnessStep();
-        sheet = new SheetStep(tasks, this::say);
-        StructureStep structure = new StructureStep();
-        DisturbanceStep disturbance = new DisturbanceStep();
-        GoalStep goal = new GoalStep();
-        HardwareStep hardware = new HardwareStep();
-        DesignRun.Steps all = new DesignRun.Steps(structure, disturbance, goal, hardware, result, robustness, sheet);
-        run = new DesignRun(document, all, this::say, this::updateNavigation);
+        steps = new DesignRun.Steps(new Page<>(StructureStep.TITLE, StructureStep::new),
+                new Page<>(DisturbanceStep.TITLE, DisturbanceStep::new), new Page<>(GoalStep.TITLE, this::goalStep),
+                new Page<>(HardwareStep.TITLE, HardwareStep::new),
+                new Page<>(ResultStep.TITLE, () -> new ResultStep(tasks, this::say)),
+                new Page<>(RobustnessStep.TITLE, RobustnessStep::new),
+                new Page<>(SheetStep.TITLE, () -> new SheetStep(tasks, this::say)));
+        run = new DesignRun(document, steps, this::say, this::updateNavigation);
         holder[0] = run;
         run.use(tasks);
-        steps = all.all();
-        for (Step s : steps) {
+        Project first = document.project();
+        pages = new StepPages(steps.all(), s -> {
             s.attach(document, () -> {
                 run.changed();
                 updateTitle();
             });
-            center.add(ScrollingPage.of(s.component()), s.title());
+            // the first project, then today's: a field left alone (inactive) holds what it held made with the window
+            s.sync(first, DocumentChange.Kind.LOADED);
+            if (document.project() != first) {
+                s.sync(document.project(), DocumentChange.Kind.LOADED);
+            }
+        });
+        if (everyStep) {
+            pages.makeAll();
+            run.ready();
+        } else {
+            pages.page(0).get();
         }
         files = new FileActions(this, document, tasks, run::fieldsValid, this::say);
-        stepList = new StepList(steps, this::go, () -> current);
-        detailsDialog = new ProjectDetailsDialog(this, details, files, edits);
+        stepList = new StepList(pages, this::go, () -> current);
+        detailsDialog = new ProjectDetailsDialog(this, document, files, edits);
         setContentPane(layoutRoot());
         setJMenuBar(WizardMenus.build(this, files, edits, this::showDetails,
                 name -> files.whenDiscarded(() -> load(Presets.load(name), null)), this::closeRequested,
                 units.menuItems()));
         files.bind(getRootPane());
         edits.bind(getRootPane());
+        document.addListener(this::documentChanged);
+        documentChanged(new DocumentChange(DocumentChange.Kind.LOADED, document.project(), null));
+        go(0);
+        WindowPlacement.restore(this, new Dimension(1280, 800));
+    }
+
+    /**
+     * The window with its first step only, up sooner (docs/performance.md, "The wizard's first window"): shown,
+     * then the other steps made by {@link #makeRestLater()}, or each when first needed before that.
+     * @return the window, not yet shown
+     */
+    public static WizardFrame firstStepOnly() {
+        return new WizardFrame(false);
+    }
+
+    /** Makes the steps not made yet, one per event (the window answers between them), then designs the project. */
+    public void makeRestLater() {
+        pages.makeRestLater(run::ready);
+    }
+
+    private GoalStep goalStep() {
+        GoalStep goal = new GoalStep();
         goal.sizingContext(new GoalStep.SizingContext() {
             @Override
             public Structure structure() {
@@ -132,10 +153,7 @@ public final class WizardFrame extends JFrame {
                 return run.shown();
             }
         });
-        document.addListener(this::documentChanged);
-        documentChanged(new DocumentChange(DocumentChange.Kind.LOADED, document.project(), null));
-        go(0);
-        WindowPlacement.restore(this, new Dimension(1280, 800));
+        return goal;
     }
 
     private JPanel layoutRoot() {
@@ -171,7 +189,7 @@ public final class WizardFrame extends JFrame {
         west.add(stepList, BorderLayout.CENTER);
         JPanel root = new JPanel(new BorderLayout());
         root.add(west, BorderLayout.WEST);
-        root.add(center, BorderLayout.CENTER);
+        root.add(pages.center(), BorderLayout.CENTER);
         root.add(south, BorderLayout.SOUTH);
         getRootPane().setDefaultButton(nextButton);
         return root;
@@ -183,15 +201,15 @@ public final class WizardFrame extends JFrame {
 
     private void documentChanged(DocumentChange change) {
         boolean reload = change.kind() != DocumentChange.Kind.EDITED && change.kind() != DocumentChange.Kind.SAVED;
-        for (Step s : steps) {
-            s.sync(change.project(), change.kind());
+        for (Page<? extends Step> s : steps.all()) {
+            s.ifMade().ifPresent(made -> made.sync(change.project(), change.kind()));
         }
         units.show(change.project());
-        showUnitSystem(change.project().displayUnits());
+        pages.showUnitSystem(change.project().displayUnits());
         if (reload) {
-            details.load(change.project());
+            detailsDialog.load(change.project());
         } else {
-            details.sync(change.project());
+            detailsDialog.sync(change.project());
         }
         if (change.note() != null) {
             say(change.note());
@@ -205,25 +223,6 @@ public final class WizardFrame extends JFrame {
                 run.recompute();
             } else {
                 run.changed();
-            }
-        }
-    }
-
-    /** Every quantity field of every step offers the system's units first (a number keeps its unit). */
-    private void showUnitSystem(UnitSystem system) {
-        if (system == shownSystem) {
-            return;
-        }
-        shownSystem = system;
-        forEachField(center, f -> f.unitSystem(system));
-    }
-
-    private static void forEachField(Container root, Consumer<QuantityField> action) {
-        for (Component c : root.getComponents()) {
-            if (c instanceof QuantityField f) {
-                action.accept(f);
-            } else if (c instanceof Container sub) {
-                forEachField(sub, action);
             }
         }
     }
@@ -250,15 +249,15 @@ public final class WizardFrame extends JFrame {
     }
 
     private void go(int index) {
-        if (index < 0 || index >= steps.size()) {
+        if (index < 0 || index >= pages.size()) {
             return;
         }
         current = index;
-        cards.show(center, steps.get(index).title());
+        Step shown = pages.show(index);
         if (stepList.getSelectedIndex() != index) {
             stepList.setSelectedIndex(index);
         }
-        steps.get(index).shown();
+        shown.shown();
         updateNavigation();
     }
 
@@ -267,9 +266,9 @@ public final class WizardFrame extends JFrame {
         back.setEnabled(current > 0);
         String reason = null;
         for (int i = 0; i <= current; i++) {
-            String problem = steps.get(i).problem();
+            String problem = pages.page(i).problem();
             if (problem != null) {
-                reason = "Next is not possible: " + steps.get(i).title() + ": "
+                reason = "Next is not possible: " + pages.page(i).title() + ": "
                         + problem;
                 break;
             }
@@ -277,7 +276,7 @@ public final class WizardFrame extends JFrame {
         if (reason == null && current >= 2 && run.shown() == null) {
             reason = "Next is not possible until a design is computed.";
         }
-        next.setEnabled(reason == null && current < steps.size() - 1);
+        next.setEnabled(reason == null && current < pages.size() - 1);
         next.putValue(Action.SHORT_DESCRIPTION, reason);
         if (reason != null) {
             status.setText(reason);
@@ -364,7 +363,7 @@ public final class WizardFrame extends JFrame {
     /** @return the result table's rows as label, value, unit */
     public List<String[]> resultRows() {
         List<String[]> out = new ArrayList<>();
-        var t = result.table();
+        var t = steps.result().get().table();
         for (int i = 0; i < t.getRowCount(); i++) {
             out.add(new String[] {String.valueOf(t.getValueAt(i, 0)), String.valueOf(t.getValueAt(i, 1)),
                 String.valueOf(t.getValueAt(i, 2))});
@@ -374,7 +373,7 @@ public final class WizardFrame extends JFrame {
 
     /** @return the result step's hardware tab (package tests) */
     RealisationView hardwareView() {
-        return result.hardware();
+        return steps.result().get().hardware();
     }
 
     /** @return true when there are unsaved changes */
@@ -384,17 +383,17 @@ public final class WizardFrame extends JFrame {
 
     /** @return the sheet step has drawn its preview */
     public boolean sheetPreviewShown() {
-        return sheet.previewShown();
+        return steps.sheet().get().previewShown();
     }
 
     /** @return the robustness summary line */
     public String robustnessSummary() {
-        return robustness.summary();
+        return steps.robustness().get().summary();
     }
 
     /** @param hz a frequency under the pointer @return the readout line */
     public String readoutAt(double hz) {
-        result.read(hz);
-        return result.readout();
+        steps.result().get().read(hz);
+        return steps.result().get().readout();
     }
 }

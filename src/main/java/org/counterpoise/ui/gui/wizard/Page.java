@@ -1,0 +1,69 @@
+package org.counterpoise.ui.gui.wizard;
+
+import java.util.Optional;
+import java.util.function.Consumer;
+import java.util.function.Supplier;
+
+/**
+ * One step of the wizard, made when first needed (docs/performance.md, "The wizard's first
+ * window"): {@link #get} makes it, and the wizard then attaches it to the document, shows it the
+ * project and adds its page. A step not made yet has no text typed in it, so its fields are valid
+ * and it shows no problem; what it would show is the document's project, which it is shown when
+ * made. Event thread only.
+ *
+ * @param <S> the step
+ */
+final class Page<S extends Step> {
+    private final String title;
+    private final Supplier<S> maker;
+    private Consumer<Step> whenMade = s -> { };
+    private S step;
+
+    /**
+     * @param title the step's title (as its {@link Step#title()} gives it)
+     * @param maker makes the step
+     */
+    Page(String title, Supplier<S> maker) {
+        this.title = title;
+        this.maker = maker;
+    }
+
+    /** @param action told of the step once it is made (before anyone else uses it) */
+    void whenMade(Consumer<Step> action) {
+        this.whenMade = action;
+    }
+
+    /** @return the step's title, without making it */
+    String title() {
+        return title;
+    }
+
+    /** @return the step, made now if it was not yet */
+    S get() {
+        if (step == null) {
+            step = maker.get();
+            whenMade.accept(step);
+        }
+        return step;
+    }
+
+    /** @return the step if it was made, without making it */
+    Optional<S> ifMade() {
+        return Optional.ofNullable(step);
+    }
+
+    /** @return true once the step was made */
+    boolean made() {
+        return step != null;
+    }
+
+    /** @return the problem the step shows, or null (a step not made shows none) */
+    String problem() {
+        return step == null ? null : step.problem();
+    }
+
+    /** @return true when every field of the step holds a value (a step not made holds no text) */
+    boolean fieldsValid() {
+        return step == null || step.fieldsValid();
+    }
+}
