@@ -28,7 +28,12 @@ public final class FirstWindowTime {
      */
     public static void main(String[] args) throws InterruptedException, InvocationTargetException {
         GuiMain.launch();
+        long giveUp = System.nanoTime() + 60_000_000_000L;
         while (!showing()) {
+            if (System.nanoTime() > giveUp) {
+                System.err.println("first-window: no wizard window within 60 s (a launch error dialog?)");
+                System.exit(1);
+            }
             Thread.sleep(1);
         }
         SwingUtilities.invokeAndWait(() -> { });

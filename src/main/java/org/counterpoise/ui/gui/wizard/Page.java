@@ -42,7 +42,13 @@ final class Page<S extends Step> {
     S get() {
         if (step == null) {
             step = maker.get();
-            whenMade.accept(step);
+            try {
+                whenMade.accept(step);
+            } catch (RuntimeException | Error failed) {
+                // not half made: the step counts as made only once it is attached and shown its project
+                step = null;
+                throw failed;
+            }
         }
         return step;
     }

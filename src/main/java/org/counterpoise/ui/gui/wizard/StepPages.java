@@ -3,7 +3,9 @@ package org.counterpoise.ui.gui.wizard;
 import java.awt.CardLayout;
 import java.awt.Component;
 import java.awt.Container;
+import java.util.HashSet;
 import java.util.List;
+import java.util.Set;
 import java.util.function.Consumer;
 import javax.swing.JPanel;
 import javax.swing.Timer;
@@ -91,12 +93,30 @@ final class StepPages {
      * @param then run on the event thread once every step is made
      */
     void makeRestLater(Runnable then) {
+        makeRestLater(then, new HashSet<>());
+    }
+
+    /**
+     * @param then run once every step is made (or failed)
+     * @param failed the pages whose making failed (not tried again: the failure was reported once, by
+     *     the event thread's handler)
+     */
+    private void makeRestLater(Runnable then, Set<Page<? extends Step>> failed) {
         // a short pause before each: the window's first paint and what the user does come first
         Timer next = new Timer(PAUSE_MS, e -> {
+            if (!center.isDisplayable()) {
+                return; // the window was closed meanwhile: nothing more to make, nothing to design
+            }
             for (Page<? extends Step> p : pages) {
-                if (!p.made()) {
-                    p.get();
-                    makeRestLater(then);
+                if (!p.made() && !failed.contains(p)) {
+                    try {
+                        p.get();
+                    } catch (RuntimeException | Error bug) {
+                        failed.add(p);
+                        throw bug;
+                    } finally {
+                        makeRestLater(then, failed);
+                    }
                     return;
                 }
             }
