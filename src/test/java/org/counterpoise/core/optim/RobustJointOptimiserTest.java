@@ -148,16 +148,8 @@ class RobustJointOptimiserTest {
     private static double lnSquared(double[] p, double[] build, double g) {
         AbsorberSetDesign d = PROBLEM.design(new double[] {Math.exp(p[0]), Math.exp(p[1])},
                 new double[] {Math.exp(p[2]), Math.exp(p[3])});
-        List<Mode> modes = new ArrayList<>();
-        for (int r = 0; r < 2; r++) {
-            Mode m = PROBLEM.structure().modes().get(r);
-            modes.add(new Mode(m.naturalFrequency() * build[r], m.dampingRatio(), m.modalMass(), m.shape()));
-        }
-        List<PointAbsorber> absorbers = new ArrayList<>();
-        for (int j = 0; j < 2; j++) {
-            absorbers.add(PointAbsorber.tuned(PROBLEM.absorberPoint(j), d.massRatios().get(j),
-                    d.tuningRatios().get(j) * build[2], d.dampingRatios().get(j) / build[2]));
-        }
+        List<Mode> modes = builtModes(build);
+        List<PointAbsorber> absorbers = builtAbsorbers(d, build);
         double magnitude = ModalDirectSolve.solve(modes, absorbers, JointAbsorberProblem.POINT,
                 JointAbsorberProblem.POINT, g)[0].abs();
         return 2 * Math.log(magnitude);
@@ -174,18 +166,30 @@ class RobustJointOptimiserTest {
      * same dampers), a sweep over the band with every sampled local maximum refined by golden section.
      */
     private static double densePeak(AbsorberSetDesign d, double[] build, int samples) {
+        List<Mode> modes = builtModes(build);
+        List<PointAbsorber> absorbers = builtAbsorbers(d, build);
+        DoubleUnaryOperator magnitude = g -> ModalDirectSolve.solve(modes, absorbers, JointAbsorberProblem.POINT,
+                JointAbsorberProblem.POINT, g)[0].abs();
+        return DenseSweep.everyMaximum(magnitude, PROBLEM.bandLow(), PROBLEM.bandHigh(), samples);
+    }
+
+    /** The modes of a build: each natural frequency times its factor, the rest kept. */
+    private static List<Mode> builtModes(double[] build) {
         List<Mode> modes = new ArrayList<>();
         for (int r = 0; r < 2; r++) {
             Mode m = PROBLEM.structure().modes().get(r);
             modes.add(new Mode(m.naturalFrequency() * build[r], m.dampingRatio(), m.modalMass(), m.shape()));
         }
+        return modes;
+    }
+
+    /** The absorbers of a build: tunings times the absorbers' factor, damping ratios over it (the same dampers). */
+    private static List<PointAbsorber> builtAbsorbers(AbsorberSetDesign d, double[] build) {
         List<PointAbsorber> absorbers = new ArrayList<>();
         for (int j = 0; j < 2; j++) {
             absorbers.add(PointAbsorber.tuned(PROBLEM.absorberPoint(j), d.massRatios().get(j),
                     d.tuningRatios().get(j) * build[2], d.dampingRatios().get(j) / build[2]));
         }
-        DoubleUnaryOperator magnitude = g -> ModalDirectSolve.solve(modes, absorbers, JointAbsorberProblem.POINT,
-                JointAbsorberProblem.POINT, g)[0].abs();
-        return DenseSweep.everyMaximum(magnitude, PROBLEM.bandLow(), PROBLEM.bandHigh(), samples);
+        return absorbers;
     }
 }
