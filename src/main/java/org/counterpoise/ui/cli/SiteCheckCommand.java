@@ -94,9 +94,10 @@ public final class SiteCheckCommand implements Callable<Integer> {
             description = "fit the structure's natural frequency too (when it was not measured with the absorber locked)")
     private boolean freeStructure;
 
-    @Option(names = "--absorber-mass", paramLabel = "KG", split = ",",
+    @Option(names = "--absorber-mass", paramLabel = "KG", split = "[,;]",
             description = "the absorber's mass as weighed with its fitted plates, kg (default: the design's); for"
-                    + " several absorbers one mass per absorber, in the design's order, separated by commas")
+                    + " several absorbers one mass per absorber, in the design's order, separated by commas or"
+                    + " semicolons (as the wizard takes them)")
     private List<Double> absorberMass;
 
     @Option(names = "--json", description = "print the result as one JSON object with SI units in the key names")
@@ -117,7 +118,7 @@ public final class SiteCheckCommand implements Callable<Integer> {
             throw new InvalidInputException("--absorber-mass", absorberMass.size() + (absorberMass.size() == 1
                     ? " mass" : " masses"),
                     absorbers == 1 ? "one mass, kg" : absorbers + " masses, kg, one per absorber in the design's order,"
-                            + " separated by commas");
+                            + " separated by commas or semicolons");
         }
         absorberMass.forEach(m -> Checks.positive("--absorber-mass", m));
         return List.copyOf(absorberMass);

@@ -226,6 +226,14 @@ class SiteCheckCommandTest {
         assertEquals(Cli.BAD_INPUT, wrongCount.code());
         assertTrue(wrongCount.err().contains("--absorber-mass") && wrongCount.err().contains("2 masses"),
                 wrongCount.err());
+        // the weighed masses separated by commas or by semicolons (as the wizard takes them): the same check
+        Run commas = CliTest.run("site-check", gallery, "--fitted-frf", "presets/gallery-floor-fitted-frf.csv",
+                "--absorber-mass", "452.5,447", "--json");
+        Run semicolons = CliTest.run("site-check", gallery, "--fitted-frf", "presets/gallery-floor-fitted-frf.csv",
+                "--absorber-mass", "452.5;447", "--json");
+        assertEquals(0, commas.code(), commas.err());
+        assertEquals(commas.out(), semicolons.out());
+        assertTrue(commas.out().contains("452.5"), commas.out());
         // an operating spectrum alone (before the absorbers are built): the operating object with each
         // absorber's strokes, no fitted check; the values are checked in SetOperatingCheckTest
         StringBuilder spectrum = new StringBuilder("frequency_Hz,amplitude\n");
