@@ -52,9 +52,18 @@ public final class AbsorberSetOptimiser {
      */
     private static MinimaxSearch.Result search(AbsorberSetVariables v, EvaluationCounter counter, boolean certify) {
         List<double[]> scan = AbsorberSetScan.scan(v, counter);
-        List<double[]> seeds = seeds(v, scan, counter);
+        List<double[]> seeds = new ArrayList<>();
+        AbsorberSetProblem problem = v.problem();
+        if (problem.surroundings().isPresent()) {
+            // the whole structure: the optimum on the target mode alone first (the design as the mode
+            // alone sees it, always pursued, so the result is never above it on the whole structure)
+            AbsorberSetOptimum alone = optimise(problem.modeAlone());
+            counter.add(alone.evaluations());
+            seeds.add(v.pointOf(alone.design()));
+        }
+        seeds.addAll(seeds(v, scan, counter));
         // the closed-form seeds are always pursued; the scan's two best (uniform only) only when promising
-        int structured = v.problem().tuning() == AbsorberSetTuning.UNIFORM ? seeds.size() - Math.min(2, scan.size())
+        int structured = problem.tuning() == AbsorberSetTuning.UNIFORM ? seeds.size() - Math.min(2, scan.size())
                 : seeds.size();
         return MinimaxSearch.run(v, seeds, structured, scan, counter, certify);
     }

@@ -2,6 +2,7 @@ package org.counterpoise.core.optim;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 import org.counterpoise.core.error.Checks;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.rational.PeakFinder;
@@ -21,9 +22,12 @@ import org.counterpoise.core.system.PointAbsorber;
  * @param bandLow lowest g (&gt;= 0)
  * @param bandHigh highest g (+infinity for all frequencies)
  * @param tuning uniform spread or individual tuning
+ * @param surroundings the whole structure the absorbers act on, in the mode's units, when it has
+ *     other modes (the peak is then the whole structure's, {@link SetSurroundings}); empty for the
+ *     mode alone
  */
 public record AbsorberSetProblem(int count, double massRatio, double structureDamping, double bandLow, double bandHigh,
-        AbsorberSetTuning tuning) {
+        AbsorberSetTuning tuning, Optional<SetSurroundings> surroundings) {
     /** Most absorbers on one mode: beyond eight the gain over the uniform spread is negligible and the degree high. */
     public static final int MAX_COUNT = 8;
     /** The tuning ratios searched, as for one absorber (docs/optimiser.md): [0.05, 5]. */
@@ -44,6 +48,50 @@ public record AbsorberSetProblem(int count, double massRatio, double structureDa
         Checks.inRange("structure damping", structureDamping, 0.0, 0.99);
         PeakProblem.checkBand(bandLow, bandHigh);
         Checks.present("tuning", tuning, "uniform or individual");
+        Checks.present("surroundings", surroundings, "the whole structure, or none");
+        if (surroundings.isPresent() && surroundings.get().targetDamping() != structureDamping) {
+            throw new InvalidInputException("structure damping", Checks.show(structureDamping),
+                    "the target mode's own damping ratio, " + Checks.show(surroundings.get().targetDamping()));
+        }
+    }
+
+    /**
+     * The problem on the mode alone.
+     *
+     * @param count n
+     * @param massRatio total mu
+     * @param structureDamping zeta1
+     * @param bandLow lowest g
+     * @param bandHigh highest g
+     * @param tuning uniform or individual
+     */
+    public AbsorberSetProblem(int count, double massRatio, double structureDamping, double bandLow, double bandHigh,
+            AbsorberSetTuning tuning) {
+        this(count, massRatio, structureDamping, bandLow, bandHigh, tuning, Optional.empty());
+    }
+
+    /**
+     * @param whole the whole structure in the mode's units
+     * @return the same problem on the whole structure (its structure damping must be the target mode's)
+     */
+    public AbsorberSetProblem on(SetSurroundings whole) {
+        return new AbsorberSetProblem(count, massRatio, structureDamping, bandLow, bandHigh, tuning, Optional.of(whole));
+    }
+
+    /** @return the same problem on the mode alone (the design the program made before the whole structure was seen) */
+    public AbsorberSetProblem modeAlone() {
+        return new AbsorberSetProblem(count, massRatio, structureDamping, bandLow, bandHigh, tuning);
+    }
+
+    /**
+     * @param otherCount another number of absorbers
+     * @param otherMassRatio their total mass ratio
+     * @param otherTuning their tuning rule
+     * @return the same structure and band with those absorbers
+     */
+    public AbsorberSetProblem withAbsorbers(int otherCount, double otherMassRatio, AbsorberSetTuning otherTuning) {
+        return new AbsorberSetProblem(otherCount, otherMassRatio, structureDamping, bandLow, bandHigh, otherTuning,
+                surroundings);
     }
 
     /**
@@ -63,7 +111,7 @@ public record AbsorberSetProblem(int count, double massRatio, double structureDa
      * @return the same problem with it
      */
     public AbsorberSetProblem with(AbsorberSetTuning other) {
-        return new AbsorberSetProblem(count, massRatio, structureDamping, bandLow, bandHigh, other);
+        return withAbsorbers(count, massRatio, other);
     }
 
     /**
@@ -98,14 +146,26 @@ public record AbsorberSetProblem(int count, double massRatio, double structureDa
      * @return the structure so varied with them, on the nominal scales omega_ref = 1, k_ref = 1
      */
     ModalSystem system(AbsorberSetDesign design, double structureFactor) {
+        String at = surroundings.map(SetSurroundings::absorberPoint).orElse(POINT);
         List<PointAbsorber> absorbers = new ArrayList<>();
         for (int j = 0; j < design.count(); j++) {
-            absorbers.add(PointAbsorber.tuned(POINT, design.massRatios().get(j), design.tuningRatios().get(j),
+            absorbers.add(PointAbsorber.tuned(at, design.massRatios().get(j), design.tuningRatios().get(j),
                     design.dampingRatios().get(j)));
         }
         // the nominal scales whatever the factor (ModalSystem.of would scale by the varied mode)
-        return new ModalSystem(ModalStructure.singleMode(POINT, structureFactor, structureDamping, 1.0), absorbers,
-                1.0, 1.0);
+        ModalStructure structure = surroundings.map(w -> w.varied(structureFactor))
+                .orElseGet(() -> ModalStructure.singleMode(POINT, structureFactor, structureDamping, 1.0));
+        return new ModalSystem(structure, absorbers, 1.0, 1.0);
+    }
+
+    /** @return where the force acts: the structure's one point, or the whole structure's excitation point */
+    String forcePoint() {
+        return surroundings.map(SetSurroundings::excitationPoint).orElse(POINT);
+    }
+
+    /** @return where the displacement is taken */
+    String responsePoint() {
+        return surroundings.map(SetSurroundings::responsePoint).orElse(POINT);
     }
 
     /**
@@ -113,7 +173,7 @@ public record AbsorberSetProblem(int count, double massRatio, double structureDa
      * @return X k1 / F as an exact rational function of s = i g
      */
     public TransferFunction transferFunction(AbsorberSetDesign design) {
-        return system(design).transferFunction(POINT, POINT);
+        return system(design).transferFunction(forcePoint(), responsePoint());
     }
 
     /**

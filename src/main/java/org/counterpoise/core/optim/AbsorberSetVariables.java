@@ -3,6 +3,7 @@ package org.counterpoise.core.optim;
 import java.util.function.DoubleUnaryOperator;
 import org.counterpoise.core.rational.TransferFunction;
 import org.counterpoise.core.system.AbsorberSensitivity;
+import org.counterpoise.core.system.ModalSystem;
 
 /**
  * The design variables of several absorbers on one mode, as the minimax solvers see them: a point p
@@ -124,6 +125,20 @@ final class AbsorberSetVariables implements MinimaxVariables {
         return p;
     }
 
+    /**
+     * @param design a design of these variables' rule (uniform: equally spaced tunings, one damping)
+     * @return its point: centre, spread and damping read back (uniform), or each tuning and damping
+     */
+    double[] pointOf(AbsorberSetDesign design) {
+        if (!uniform) {
+            return individualPoint(design);
+        }
+        double low = design.tuningRatios().get(0);
+        double high = design.tuningRatios().get(n - 1);
+        double centre = (low + high) / 2;
+        return point(centre, n == 1 ? 0.0 : (high - low) / centre, design.dampingRatios().get(0));
+    }
+
     /** @return the individual point of a design */
     double[] individualPoint(AbsorberSetDesign design) {
         double[] p = new double[2 * n];
@@ -153,8 +168,8 @@ final class AbsorberSetVariables implements MinimaxVariables {
 
     @Override
     public TransferFunction transferFunction(double[] p) {
-        return problem.system(built(design(p)), structureFactor).transferFunction(AbsorberSetProblem.POINT,
-                AbsorberSetProblem.POINT);
+        return problem.system(built(design(p)), structureFactor).transferFunction(problem.forcePoint(),
+                problem.responsePoint());
     }
 
     /**
@@ -167,8 +182,8 @@ final class AbsorberSetVariables implements MinimaxVariables {
         // built: d ln f_j (as built) = d ln f_j (as drawn), and d ln zeta_j likewise, so the chain
         // rule only takes each damping ratio as built
         AbsorberSetDesign d = built(design(p));
-        double[][] g = AbsorberSensitivity.gradient(problem.system(d, structureFactor), AbsorberSetProblem.POINT,
-                AbsorberSetProblem.POINT, Math.sqrt(x));
+        double[][] g = AbsorberSensitivity.gradient(problem.system(d, structureFactor), problem.forcePoint(),
+                problem.responsePoint(), Math.sqrt(x));
         double[] out = new double[dimension()];
         for (int j = 0; j < n; j++) {
             double zeta = d.dampingRatios().get(j);
@@ -189,6 +204,13 @@ final class AbsorberSetVariables implements MinimaxVariables {
     @Override
     public DoubleUnaryOperator logMagnitudeSquared(double[] p) {
         AbsorberSetDesign d = built(design(p));
+        if (problem.surroundings().isPresent()) {
+            // the whole structure: the factored form of every modal and absorber term (as one absorber per mode)
+            ModalSystem system = problem.system(d, structureFactor);
+            String force = problem.forcePoint();
+            String at = problem.responsePoint();
+            return x -> 2 * Math.log(AbsorberSensitivity.value(system, force, at, Math.sqrt(x)).abs());
+        }
         double[] f = tunings(d);
         double[] z = dampings(d);
         double zeta1 = problem.structureDamping();

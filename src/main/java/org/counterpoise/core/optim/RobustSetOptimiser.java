@@ -86,9 +86,8 @@ public final class RobustSetOptimiser {
      */
     public static WorstCase.Point worstCase(RobustSetProblem problem, AbsorberSetDesign design) {
         AbsorberSetProblem s = problem.set();
-        AbsorberSetProblem individual = new AbsorberSetProblem(design.count(),
-                design.massRatios().stream().mapToDouble(Double::doubleValue).sum(), s.structureDamping(), s.bandLow(),
-                s.bandHigh(), AbsorberSetTuning.INDIVIDUAL);
+        AbsorberSetProblem individual = s.withAbsorbers(design.count(),
+                design.massRatios().stream().mapToDouble(Double::doubleValue).sum(), AbsorberSetTuning.INDIVIDUAL);
         AbsorberSetVariables layout = new AbsorberSetVariables(individual);
         return worstCase(problem, layout, layout.individualPoint(design));
     }
@@ -104,7 +103,7 @@ public final class RobustSetOptimiser {
         AbsorberSetProblem set = problem.set();
         List<double[]> seeds = new ArrayList<>();
         if (set.tuning() == AbsorberSetTuning.UNIFORM) {
-            double[] p = uniformPoint(layout, leastPeak.design());
+            double[] p = layout.pointOf(leastPeak.design());
             seeds.add(p);
             double[] wider = p.clone();
             wider[wider.length - 1] += Math.log(2);
@@ -120,14 +119,5 @@ public final class RobustSetOptimiser {
             seeds.add(layout.individualPoint(leastPeak.design()));
         }
         return seeds;
-    }
-
-    /** The uniform point of a uniform design: centre, spread and damping read back. */
-    private static double[] uniformPoint(AbsorberSetVariables layout, AbsorberSetDesign d) {
-        int n = d.count();
-        double low = d.tuningRatios().get(0);
-        double high = d.tuningRatios().get(n - 1);
-        double centre = (low + high) / 2;
-        return layout.point(centre, n == 1 ? 0.0 : (high - low) / centre, d.dampingRatios().get(0));
     }
 }

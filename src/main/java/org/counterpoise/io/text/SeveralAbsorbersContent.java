@@ -64,9 +64,9 @@ public final class SeveralAbsorbersContent {
     /** A split designed for the least worst case (method robust-worst-case). */
     static final String ROBUST_SPLIT = "The split absorbers are designed for the least worst peak over the band with"
             + " the target mode's frequency anywhere in its range and all absorbers' frequencies off together (one"
-            + " spring batch), on the target mode alone; each absorber's own scatter and the damping range are not in"
-            + " that worst case (the sheet gives each absorber's tolerance on its own frequency within the set): check"
-            + " their tuning on site with care.";
+            + " spring batch), the whole structure seen; each absorber's own scatter, the other modes' frequencies and"
+            + " the damping range are not in that worst case (the sheet gives each absorber's tolerance on its own"
+            + " frequency within the set): check their tuning on site with care.";
     /** Where the criterion is judged for several modes or absorbers. */
     static final String ACCEPTANCE_WHOLE = "Acceptance: the criterion is judged on the whole structure, every mode with"
             + " every absorber (and every mode without them), at the response point under the project's force; the"
@@ -291,7 +291,7 @@ public final class SeveralAbsorbersContent {
     private static void robustRows(List<ReportRow> rows, SeveralAbsorbers.RobustSet r, String targetName) {
         String source = "exact response of the structure's modes with the absorbers (docs/several-modes.md)";
         rows.add(row(ReportKey.SEVERAL_DESIGNED_FOR, "split designed for", new Words("the least worst peak over the"
-                + " band (robust-worst-case), on mode " + targetName + " alone", List.of("robust-worst-case")),
+                + " band (robust-worst-case), the whole structure seen", List.of("robust-worst-case")),
                 "docs/several-modes.md, robust design of the set"));
         rows.add(row(ReportKey.SEVERAL_ROBUST_RANGES, "+/- mode " + targetName + ", absorbers together", new Pair(
                 new Percent(r.structureRange(), 2), new Percent(r.absorberRange(), 2), PairKind.SIDE_BY_SIDE),

@@ -40,7 +40,7 @@ class SeveralAbsorbersDesignerTest {
     private static final ModalStructure FLOOR = InventedFloor.MODES;
     private static final FrequencyBand BAND = InventedFloor.BAND;
 
-    private static SeveralAbsorbers design(ModalStructure structure, String force, String response, String at,
+    static SeveralAbsorbers design(ModalStructure structure, String force, String response, String at,
             int count, AbsorberSetTuning tuning, double totalMass, FrequencyBand band, double amplitude) {
         AbsorberLayout layout = new AbsorberLayout(structure, structure.modes().stream().map(m -> "mode at "
                 + m.naturalFrequency()).toList(), force, response, at, OptionalInt.empty(), count, tuning);
@@ -53,7 +53,7 @@ class SeveralAbsorbersDesignerTest {
         return SeveralAbsorbersDesigner.design(Designer.design(study), layout);
     }
 
-    private static double sweep(ModalStructure s, List<PointAbsorber> absorbers, String force, String response,
+    static double sweep(ModalStructure s, List<PointAbsorber> absorbers, String force, String response,
             double low, double high) {
         return DenseSweep.maximum(w -> ModalDirectSolve.solve(s.modes(), absorbers, force, response, w)[0].abs(),
                 low, high, 20_000);
