@@ -2,6 +2,7 @@ package org.counterpoise.core.design;
 
 import java.util.List;
 import java.util.Optional;
+import java.util.OptionalDouble;
 import java.util.OptionalInt;
 import org.counterpoise.core.error.Checks;
 import org.counterpoise.core.error.InvalidInputException;
@@ -31,10 +32,13 @@ import org.counterpoise.core.system.ModalStructure;
  * @param joint one absorber per mode on two modes, designed jointly (then {@code count} is 2, the
  *     target mode is one of the two and {@code absorberPoint} its absorber's point: what the
  *     single-mode sections take); empty when every absorber is on the target mode
+ * @param spilloverLimit the largest peak allowed near each mode other than the target, as a multiple
+ *     of its peak without absorbers ({@link SeveralAbsorbersDesigner}), or empty for none (the spillover is then
+ *     reported, not limited)
  */
 public record AbsorberLayout(ModalStructure structure, List<String> modeNames, String excitationPoint,
         String responsePoint, String absorberPoint, OptionalInt targetMode, int count, AbsorberSetTuning tuning,
-        Optional<JointArrangement> joint) {
+        Optional<JointArrangement> joint, OptionalDouble spilloverLimit) {
 
     /** Validates the layout; a message names the field. */
     public AbsorberLayout {
@@ -55,6 +59,11 @@ public record AbsorberLayout(ModalStructure structure, List<String> modeNames, S
             throw new IllegalArgumentException("bug: no mode " + targetMode.getAsInt());
         }
         Checks.present("joint", joint, "an arrangement of one absorber per mode, or none");
+        Checks.present("spillover limit", spilloverLimit, "a limit, or none");
+        if (spilloverLimit.isPresent() && !(spilloverLimit.getAsDouble() > 0)) {
+            throw new InvalidInputException("spillover limit", Checks.show(spilloverLimit.getAsDouble()),
+                    "a multiple above 0 of each mode's peak without absorbers");
+        }
         joint.ifPresent(j -> {
             j.points().forEach(structure::requirePoint);
             if (j.modes().get(j.modes().size() - 1) >= structure.size() || count != j.modes().size()
@@ -80,6 +89,26 @@ public record AbsorberLayout(ModalStructure structure, List<String> modeNames, S
             String responsePoint, String absorberPoint, OptionalInt targetMode, int count, AbsorberSetTuning tuning) {
         this(structure, modeNames, excitationPoint, responsePoint, absorberPoint, targetMode, count, tuning,
                 Optional.empty());
+    }
+
+    /**
+     * With no spillover limit (formats 6 and 7).
+     *
+     * @param structure the modes
+     * @param modeNames their names
+     * @param excitationPoint where the force acts
+     * @param responsePoint where the displacement is judged
+     * @param absorberPoint the target's absorber's point
+     * @param targetMode the target mode, or empty
+     * @param count how many absorbers
+     * @param tuning uniform spread or individual tuning
+     * @param joint one absorber per mode, or empty
+     */
+    public AbsorberLayout(ModalStructure structure, List<String> modeNames, String excitationPoint,
+            String responsePoint, String absorberPoint, OptionalInt targetMode, int count, AbsorberSetTuning tuning,
+            Optional<JointArrangement> joint) {
+        this(structure, modeNames, excitationPoint, responsePoint, absorberPoint, targetMode, count, tuning, joint,
+                OptionalDouble.empty());
     }
 
     /**

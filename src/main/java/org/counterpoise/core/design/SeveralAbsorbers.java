@@ -43,11 +43,13 @@ import org.counterpoise.core.system.PointAbsorber;
  *     figures of this set, the least-peak set and one absorber over them; empty otherwise
  * @param joint with one absorber per mode ({@link AbsorberLayout#joint}): the sequential design beside
  *     the joint one; else empty
+ * @param spillover with a spillover limit ({@link AbsorberLayout#spilloverLimit}): the design's
+ *     standing against it; else empty
  */
 public record SeveralAbsorbers(AbsorberLayout layout, int targetMode, double effectiveMass, FrequencyBand band,
         double forceAmplitude, List<PointAbsorber> absorbers, double peakBefore, double peakAfter,
         List<ModePeak> modes, Optional<SingleAbsorber> single, boolean certified, MistuningRange structureTolerance,
-        Optional<RobustSet> robust, Optional<Sequential> joint) {
+        Optional<RobustSet> robust, Optional<Sequential> joint, Optional<SpilloverLimit> spillover) {
 
     /** Copies the lists. */
     public SeveralAbsorbers {
@@ -77,7 +79,59 @@ public record SeveralAbsorbers(AbsorberLayout layout, int targetMode, double eff
             List<ModePeak> modes, Optional<SingleAbsorber> single, boolean certified, MistuningRange structureTolerance,
             Optional<RobustSet> robust) {
         this(layout, targetMode, effectiveMass, band, forceAmplitude, absorbers, peakBefore, peakAfter, modes, single,
-                certified, structureTolerance, robust, Optional.empty());
+                certified, structureTolerance, robust, Optional.empty(), Optional.empty());
+    }
+
+    /**
+     * With no spillover limit.
+     *
+     * @param layout the structure and absorbers
+     * @param targetMode the target mode's index
+     * @param effectiveMass its modal mass at the absorbers' point, kg
+     * @param band the forcing band, rad/s
+     * @param forceAmplitude the force, N
+     * @param absorbers each absorber
+     * @param peakBefore the peak over the band without absorbers, m
+     * @param peakAfter the peak with them, m
+     * @param modes each mode's peak
+     * @param single one absorber of the same total mass, or empty
+     * @param certified true when certified
+     * @param structureTolerance the tolerance to the target mode's frequency
+     * @param robust the robust set's figures, or empty
+     * @param joint the sequential design, or empty
+     */
+    public SeveralAbsorbers(AbsorberLayout layout, int targetMode, double effectiveMass, FrequencyBand band,
+            double forceAmplitude, List<PointAbsorber> absorbers, double peakBefore, double peakAfter,
+            List<ModePeak> modes, Optional<SingleAbsorber> single, boolean certified, MistuningRange structureTolerance,
+            Optional<RobustSet> robust, Optional<Sequential> joint) {
+        this(layout, targetMode, effectiveMass, band, forceAmplitude, absorbers, peakBefore, peakAfter, modes, single,
+                certified, structureTolerance, robust, joint, Optional.empty());
+    }
+
+    /**
+     * A set designed with the peak near each other mode limited (docs/several-modes.md, "Spillover
+     * limited").
+     *
+     * @param ratio the largest peak allowed near each mode other than the target, as a multiple of
+     *     its peak without absorbers
+     * @param unlimitedPeak the least peak over the band with no limit, m (what the limit costs)
+     * @param limited true when the unlimited design broke the limit, so the design differs from it
+     * @param met true when every mode's peak is within its limit; false when no design within the
+     *     optimiser's box keeps them (the design shown comes nearest)
+     */
+    public record SpilloverLimit(double ratio, double unlimitedPeak, boolean limited, boolean met) {
+    }
+
+    /**
+     * @param p a mode's peaks
+     * @return the largest peak allowed near that mode, m: the limit's ratio times its peak without
+     *     absorbers; empty for the target mode, with no limit, or where the mode is unbounded without absorbers
+     */
+    public Optional<Double> spilloverLimitOf(ModePeak p) {
+        if (spillover.isEmpty() || p.mode() == targetMode || Double.isInfinite(p.before())) {
+            return Optional.empty();
+        }
+        return Optional.of(spillover.get().ratio() * p.before());
     }
 
     /**

@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
+import org.counterpoise.core.error.Checks;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.model.Absorber;
 import org.counterpoise.core.model.Excitation;
@@ -18,6 +19,7 @@ import org.counterpoise.core.optim.RobustSetOptimiser;
 import org.counterpoise.core.optim.RobustSetOptimum;
 import org.counterpoise.core.optim.RobustSetProblem;
 import org.counterpoise.core.optim.SetSurroundings;
+import org.counterpoise.core.optim.SpilloverLimitedOptimiser;
 import org.counterpoise.core.response.ResponseKind;
 import org.counterpoise.core.robust.MistuningRange;
 import org.counterpoise.core.robust.ToleranceRanges;
@@ -88,6 +90,10 @@ public final class SeveralAbsorbersDesigner {
         Optional<PointAbsorber> single = Optional.empty();
         List<PointAbsorber> leastPeakSet = List.of();
         boolean certified = true;
+        Optional<SeveralAbsorbers.SpilloverLimit> limit = Optional.empty();
+        if (layout.spilloverLimit().isPresent()) {
+            refuseSpilloverLimit(layout, study);
+        }
         if (layout.count() == 1) {
             absorbers = List.of(new PointAbsorber(layout.absorberPoint(), total.mass(), total.stiffness(), total.damping()));
         } else {
@@ -107,6 +113,17 @@ public final class SeveralAbsorbersDesigner {
                 certified = set.certified();
                 RobustSetOptimum one = RobustSetOptimiser.optimise(robust(oneProblem, ranges));
                 single = Optional.of(inSi(one.design(), effectiveMass, wr, layout.absorberPoint()).get(0));
+            } else if (layout.spilloverLimit().isPresent()) {
+                double ratio = layout.spilloverLimit().getAsDouble();
+                List<SpilloverLimitedOptimiser.Window> windows = spilloverWindows(layout, r, ratio);
+                SpilloverLimitedOptimiser.Result set = SpilloverLimitedOptimiser.optimise(problem, windows);
+                absorbers = inSi(set.design(), effectiveMass, wr, layout.absorberPoint());
+                certified = set.met() && set.certificate() != null && set.certificate().certified();
+                SpilloverLimitedOptimiser.Result one = SpilloverLimitedOptimiser.optimise(oneProblem, windows);
+                single = Optional.of(inSi(one.design(), effectiveMass, wr, layout.absorberPoint()).get(0));
+                double stiffness = effectiveMass * wr * wr;
+                limit = Optional.of(new SeveralAbsorbers.SpilloverLimit(ratio,
+                        excitation.amplitude() * set.unlimited().peak() / stiffness, set.limited(), set.met()));
             } else {
                 AbsorberSetOptimum set = AbsorberSetOptimiser.optimise(problem);
                 absorbers = inSi(set.design(), effectiveMass, wr, layout.absorberPoint());
@@ -139,7 +156,48 @@ public final class SeveralAbsorbersDesigner {
                             ranges), one.structureTolerance())));
         }
         return new SeveralAbsorbers(layout, r, effectiveMass, band, force, absorbers, bare, peakAfter, modes, compared,
-                certified, tolerance, robust);
+                certified, tolerance, robust, Optional.empty(), limit);
+    }
+
+    /** A spillover limit is taken by the least-peak design of 2 to 8 absorbers on a structure of several modes. */
+    private static void refuseSpilloverLimit(AbsorberLayout layout, DesignStudy study) {
+        String field = "absorbers.spillover_limit";
+        String given = Checks.show(layout.spilloverLimit().getAsDouble());
+        if (layout.structure().size() == 1) {
+            throw new InvalidInputException(field, given, "a structure of several modes (a limit keeps the peak near"
+                    + " the other modes), or leave it out");
+        }
+        if (layout.count() == 1) {
+            throw new InvalidInputException(field, given + " with one absorber", "2 to " + AbsorberSetProblem.MAX_COUNT
+                    + " absorbers (absorbers.count), or leave it out: one absorber is the project's own design");
+        }
+        if (study.method() == DesignMethod.ROBUST_WORST_CASE) {
+            throw new InvalidInputException(field, given + " with the method robust-worst-case", "another method (the"
+                    + " set is then the least peak with the limit kept), or leave it out: the robust design of a set does"
+                    + " not take a spillover limit yet");
+        }
+    }
+
+    /**
+     * Where the peak is limited, in the set problem's units (frequency over omega_r, receptance times
+     * k_r = (m_r / phi_r(a)^2) omega_r^2): the neighbourhood of every mode but the target, as
+     * {@link Spillover} takes it, at the ratio times that mode's peak there without absorbers (a mode
+     * unbounded without absorbers, undamped, is given no limit).
+     */
+    private static List<SpilloverLimitedOptimiser.Window> spilloverWindows(AbsorberLayout layout, int target,
+            double ratio) {
+        Mode mode = layout.structure().modes().get(target);
+        double wr = mode.naturalFrequency();
+        double stiffness = mode.massSeenAt(layout.absorberPoint()) * wr * wr;
+        ModalSystem bare = ModalSystem.of(layout.structure(), List.of());
+        List<SpilloverLimitedOptimiser.Window> windows = new ArrayList<>();
+        for (Spillover.ModePeak p : Spillover.of(bare, layout.excitationPoint(), layout.responsePoint()).modes()) {
+            if (p.mode() != target && Double.isFinite(p.before())) {
+                windows.add(new SpilloverLimitedOptimiser.Window(p.low() / wr, p.high() / wr,
+                        ratio * p.before() * stiffness));
+            }
+        }
+        return windows;
     }
 
     /** The robust problem of the set on the target mode: the project's two frequency ranges, the practical damping floor. */

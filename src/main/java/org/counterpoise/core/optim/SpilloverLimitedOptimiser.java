@@ -15,9 +15,8 @@ import org.counterpoise.core.error.InvalidInputException;
  *
  * <p>Problem: minimise P(p), the exact peak of |H| over the band, subject to P_k(p) &lt;= L_k, the
  * exact peak of |H| over window k (the neighbourhood of another mode, as {@code Spillover} takes it),
- * for every window. Method (the parametric form of a constrained minimax; e.g. Polak 1997,
- * Optimization: Algorithms and Consistent Approximations, section 2.5, as used for weighted
- * H-infinity objectives): for a level t let phi(t) = min_p max(P(p), max_k (t / L_k) P_k(p)), the
+ * for every window. Method (the parametric, level-set form of a constrained minimax, a standard
+ * device stated from memory; its correctness is the argument that follows): for a level t let phi(t) = min_p max(P(p), max_k (t / L_k) P_k(p)), the
  * minimax of the band and the windows weighted by t / L_k, solved by the machinery of the unlimited
  * problem ({@link MinimaxSearch}: every window's maxima are further smooth pieces of one minimax, as a
  * robust problem's builds are). A design with max(...) &lt;= t has P &lt;= t and every P_k &lt;= L_k, and

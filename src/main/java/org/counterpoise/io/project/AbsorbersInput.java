@@ -18,9 +18,12 @@ import org.counterpoise.core.optim.AbsorberSetTuning;
  * @param modes with one absorber per mode: the names of the two modes, one absorber each; else empty
  * @param points with one absorber per mode: each absorber's point, in the order of {@code modes}, or
  *     empty for the default; else empty
+ * @param spilloverLimit with absorbers all on one mode of a structure of several modes: the largest
+ *     peak allowed near each other mode, as a multiple of its peak without absorbers (1 = no rise;
+ *     since format 8), or null for none
  */
 public record AbsorbersInput(int count, AbsorberSetTuning tuning, String point, String targetMode,
-        AbsorberArrangement arrangement, List<String> modes, List<String> points) {
+        AbsorberArrangement arrangement, List<String> modes, List<String> points, Double spilloverLimit) {
 
     /** Copies the lists. */
     public AbsorbersInput {
@@ -37,7 +40,23 @@ public record AbsorbersInput(int count, AbsorberSetTuning tuning, String point, 
      * @param targetMode their mode, or null
      */
     public AbsorbersInput(int count, AbsorberSetTuning tuning, String point, String targetMode) {
-        this(count, tuning, point, targetMode, AbsorberArrangement.ONE_MODE, List.of(), List.of());
+        this(count, tuning, point, targetMode, AbsorberArrangement.ONE_MODE, List.of(), List.of(), null);
+    }
+
+    /**
+     * Absorbers with no spillover limit (formats 6 and 7).
+     *
+     * @param count the number of absorbers
+     * @param tuning uniform spread or individual tuning
+     * @param point their point, or null
+     * @param targetMode their mode, or null
+     * @param arrangement all on one mode, or one per mode
+     * @param modes with one absorber per mode, the two modes' names
+     * @param points with one absorber per mode, each one's point, or empty
+     */
+    public AbsorbersInput(int count, AbsorberSetTuning tuning, String point, String targetMode,
+            AbsorberArrangement arrangement, List<String> modes, List<String> points) {
+        this(count, tuning, point, targetMode, arrangement, modes, points, null);
     }
 
     /** @return true for one absorber per mode, designed jointly */

@@ -17,7 +17,9 @@ import org.counterpoise.core.design.DesignMethod;
  *     ({@link Project#modes()} and {@link Project#absorbers()} null), which the reader gives for absent
  *     keys, so such a file designs exactly as before ({@link #isOneModeOneAbsorber});</li>
  * <li>formats 1 to 6: every absorber on one mode: no {@code absorbers.arrangement}, {@code modes} or
- *     {@code points}, which the reader gives for absent keys ({@link AbsorberArrangement#ONE_MODE}): nothing to add.</li>
+ *     {@code points}, which the reader gives for absent keys ({@link AbsorberArrangement#ONE_MODE}): nothing to add;</li>
+ * <li>formats 1 to 7: no {@code absorbers.spillover_limit} (null: the spillover is reported, not
+ *     limited), which the reader gives for an absent key: nothing to add.</li>
  * </ul>
  */
 public final class FormatMigration {

@@ -38,6 +38,10 @@ final class ModesJson {
     static final String ARRANGED_MODES = "modes";
     /** Since format 7, with one absorber per mode: each absorber's point. */
     static final String POINTS = "points";
+    /** Since format 8, with absorbers all on one mode: the spillover limit near every other mode. */
+    static final String SPILLOVER_LIMIT = "spillover_limit";
+    /** The largest spillover limit taken: beyond it a limit says nothing a designer would ask for. */
+    static final double MAX_SPILLOVER_LIMIT = 100;
 
     /** The keys of the single mode, which a structure of several modes gives per mode instead. */
     private static final List<String> SINGLE_MODE_KEYS = List.of("mass", "weight", "stiffness", NATURAL_FREQUENCY,
@@ -150,8 +154,18 @@ final class ModesJson {
                         "one of " + Ids.list(AbsorberSetTuning.values())));
         String point = a.has(POINT) ? a.text(POINT) : null;
         String target = a.has(TARGET_MODE) ? a.text(TARGET_MODE) : null;
+        Double limit = null;
+        if (a.has(SPILLOVER_LIMIT)) {
+            limit = a.number(SPILLOVER_LIMIT);
+            if (!(limit > 0) || limit > MAX_SPILLOVER_LIMIT) {
+                throw new InvalidInputException(a.pathOf(SPILLOVER_LIMIT), a.shown(SPILLOVER_LIMIT),
+                        "a number above 0 and at most " + (int) MAX_SPILLOVER_LIMIT + ": the largest peak allowed near"
+                                + " each other mode as a multiple of its peak without absorbers (1 = no rise)");
+            }
+        }
         a.finish();
-        return new AbsorbersInput((int) count, tuning, point, target);
+        return new AbsorbersInput((int) count, tuning, point, target, AbsorberArrangement.ONE_MODE, List.of(),
+                List.of(), limit);
     }
 
     /** One absorber on each of two named modes: two absorbers, each its own tuning (since format 7). */
@@ -164,6 +178,10 @@ final class ModesJson {
         if (a.has(TUNING)) {
             throw new InvalidInputException(a.pathOf(TUNING), a.shown(TUNING), "leave it out with one absorber per mode:"
                     + " each absorber gets its own frequency and damping, chosen together");
+        }
+        if (a.has(SPILLOVER_LIMIT)) {
+            throw new InvalidInputException(a.pathOf(SPILLOVER_LIMIT), a.shown(SPILLOVER_LIMIT), "leave it out with one"
+                    + " absorber per mode (a spillover limit is taken with the absorbers all on one mode)");
         }
         List<String> modes = a.textList(ARRANGED_MODES);
         if (modes.size() != n || modes.get(0).equals(modes.get(1))) {
@@ -222,6 +240,9 @@ final class ModesJson {
         } else {
             o.addProperty(COUNT, a.count());
             o.addProperty(TUNING, Ids.of(a.tuning()));
+            if (a.spilloverLimit() != null) {
+                o.addProperty(SPILLOVER_LIMIT, a.spilloverLimit());
+            }
         }
         if (a.point() != null) {
             o.addProperty(POINT, a.point());

@@ -141,10 +141,11 @@ public record Project(String name, String notes, StructureInput structure, Distu
      * (issue 16) added {@code structure.modes} with named points and {@code absorbers} (several
      * absorbers sharing the mass; an older file has one mode and one absorber); version 7 (issue 16)
      * added {@code absorbers.arrangement} with one absorber per mode, designed jointly, and its
-     * {@code modes} and {@code points} (an older file has every absorber on one mode). How older files
-     * are read: {@link FormatMigration}.
+     * {@code modes} and {@code points} (an older file has every absorber on one mode); version 8 (issue 16)
+     * added {@code absorbers.spillover_limit} (an older file has none: the spillover is reported, not
+     * limited). How older files are read: {@link FormatMigration}.
      */
-    public static final int FORMAT_VERSION = 7;
+    public static final int FORMAT_VERSION = 8;
 
     /** The oldest project-file format version this build reads (and migrates on load). */
     public static final int OLDEST_FORMAT_VERSION = 1;

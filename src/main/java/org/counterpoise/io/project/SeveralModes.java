@@ -5,8 +5,10 @@ import java.util.Comparator;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.OptionalDouble;
 import java.util.OptionalInt;
 import org.counterpoise.core.design.AbsorberLayout;
+import org.counterpoise.core.error.Checks;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.model.ExcitationKind;
 import org.counterpoise.core.model.FrequencyBand;
@@ -53,6 +55,11 @@ public final class SeveralModes {
                     + " (structure.modes)");
         }
         if (p.modes() == null) {
+            if (a.spilloverLimit() != null) {
+                throw new InvalidInputException(ModesJson.ABSORBERS + "." + ModesJson.SPILLOVER_LIMIT,
+                        Checks.show(a.spilloverLimit()), "leave it out for a structure of one mode (a spillover limit"
+                                + " keeps the peak near the structure's other modes: give them in structure.modes)");
+            }
             if (a.point() != null || a.targetMode() != null) {
                 String key = a.point() != null ? ModesJson.POINT : ModesJson.TARGET_MODE;
                 String given = a.point() != null ? a.point() : a.targetMode();
@@ -107,7 +114,8 @@ public final class SeveralModes {
             target = OptionalInt.of(index);
         }
         return Optional.of(new AbsorberLayout(structure, names, modes.excitationPoint(), modes.responsePoint(),
-                a.point(), target, a.count(), a.tuning()));
+                a.point(), target, a.count(), a.tuning(), Optional.empty(), a.spilloverLimit() == null
+                        ? OptionalDouble.empty() : OptionalDouble.of(a.spilloverLimit())));
     }
 
     /**

@@ -237,6 +237,8 @@ public enum ReportKey {
     ITEM_NAME("name"),
     ITEM_NATURAL_FREQUENCY("natural_frequency_Hz"),
     ITEM_PEAKS("peak_displacement_before_m", "peak_displacement_after_m"),
+    /** with a spillover limit (format 8): the largest peak allowed near that mode (not for the target mode) */
+    ITEM_PEAK_LIMIT("peak_limit_m"),
     SEVERAL_SINGLE_PEAK("several_absorbers.single_absorber_peak_displacement_m"),
     SEVERAL_GAIN("several_absorbers.gain"),
     SEVERAL_STRUCTURE_TOLERANCE("several_absorbers.tolerated_structure_frequency_factor_low",
@@ -257,6 +259,10 @@ public enum ReportKey {
     ITEM_WORST_PEAK("worst_peak_displacement_m"),
     ITEM_STRUCTURE_TOLERANCE("tolerated_structure_frequency_factor_low", "tolerated_structure_frequency_factor_high",
             "tolerated_structure_frequency_basis"),
+    // a set designed with the peak near each other mode limited (format 8, absorbers.spillover_limit)
+    SEVERAL_SPILLOVER_LIMIT("several_absorbers.spillover_limit_ratio"),
+    SEVERAL_SPILLOVER_MET("several_absorbers.spillover_limit_met"),
+    SEVERAL_UNLIMITED_PEAK("several_absorbers.unlimited_peak_displacement_m"),
     SEVERAL_CERTIFIED("several_absorbers.certified"),
     // One absorber per mode, designed jointly (format 7): the absorbers[] elements add their mode and
     // point; the sequential design (each absorber on its own mode alone) beside the joint one.

@@ -67,6 +67,10 @@ public final class SeveralAbsorbersContent {
             + " spring batch), the whole structure seen; each absorber's own scatter, the other modes' frequencies and"
             + " the damping range are not in that worst case (the sheet gives each absorber's tolerance on its own"
             + " frequency within the set): check their tuning on site with care.";
+    /** A spillover limit no design of the absorbers keeps. */
+    static final String SPILLOVER_NOT_KEPT = "Spillover limit NOT kept: no tuning of these absorbers keeps the peak"
+            + " near every other mode within absorbers.spillover_limit; the design shown comes nearest. Raise the"
+            + " limit, move the absorbers to a point the other modes move less, or treat those modes on their own.";
     /** Where the criterion is judged for several modes or absorbers. */
     static final String ACCEPTANCE_WHOLE = "Acceptance: the criterion is judged on the whole structure, every mode with"
             + " every absorber (and every mode without them), at the response point under the project's force; the"
@@ -128,6 +132,9 @@ public final class SeveralAbsorbersContent {
         if (d.absorbers().size() > 1) {
             cautions.add(ONE_ABSORBER_SECTIONS);
             cautions.add(d.robust().isPresent() ? ROBUST_SPLIT : NOMINAL_SPLIT);
+            if (d.spillover().isPresent() && !d.spillover().get().met()) {
+                cautions.add(SPILLOVER_NOT_KEPT);
+            }
         }
         if (d.layout().structure().size() > 1) {
             cautions.add(TARGET_MODE_SECTIONS);
@@ -185,13 +192,15 @@ public final class SeveralAbsorbersContent {
         for (SeveralAbsorbers.ModePeak p : d.modes()) {
             String name = d.layout().modeNames().get(p.mode());
             Mode m = d.layout().structure().modes().get(p.mode());
-            List<Field> fields = List.of(
+            List<Field> fields = new ArrayList<>(List.of(
                     new Field(ReportKey.ITEM_NAME, "", new Words(name, List.of())),
                     new Field(ReportKey.ITEM_NATURAL_FREQUENCY, "at", DesignContent.quantity(m.naturalFrequency(),
                             Dimension.FREQUENCY)),
                     new Field(ReportKey.ITEM_PEAKS, "peak before, after", new Pair(
                             DesignContent.quantity(p.before(), Dimension.LENGTH),
-                            DesignContent.quantity(p.after(), Dimension.LENGTH), PairKind.BEFORE_AFTER)));
+                            DesignContent.quantity(p.after(), Dimension.LENGTH), PairKind.BEFORE_AFTER))));
+            d.spilloverLimitOf(p).ifPresent(limit -> fields.add(new Field(ReportKey.ITEM_PEAK_LIMIT, "limit",
+                    DesignContent.quantity(limit, Dimension.LENGTH))));
             rows.add(row(ReportKey.SEVERAL_MODE, "near mode " + name + ", any speed", new Fields("", fields),
                     "the largest response at any frequency of each mode's neighbourhood (between the geometric means"
                             + " of its natural frequency and its neighbours'), in the band or not: a run-up passes"
@@ -218,6 +227,17 @@ public final class SeveralAbsorbersContent {
             } else {
                 robustRows(rows, r, targetName);
             }
+        });
+        d.spillover().ifPresent(s -> {
+            rows.add(row(ReportKey.SEVERAL_SPILLOVER_LIMIT, "spillover limit (near each other mode, times its peak"
+                    + " without absorbers)", DesignContent.quantity(s.ratio(), Dimension.RATIO),
+                    "absorbers.spillover_limit: the set is the least peak over the band with every other mode's peak"
+                            + " within it (docs/several-modes.md, spillover limited)"));
+            rows.add(row(ReportKey.SEVERAL_SPILLOVER_MET, "spillover limit kept", new Flag(s.met(), s.met() ? "yes"
+                    : "NO"), s.met() ? "" : "no design of these absorbers keeps it: the one shown comes nearest"));
+            rows.add(row(ReportKey.SEVERAL_UNLIMITED_PEAK, "least peak over the band with no limit",
+                    DesignContent.quantity(s.unlimitedPeak(), Dimension.LENGTH), s.limited()
+                            ? "what the limit costs: the set above is higher in the band" : "the limit does not bind"));
         });
         rows.add(row(ReportKey.SEVERAL_CERTIFIED, "optimum certified", new Flag(d.certified(),
                 d.certified() ? "yes" : "NO"), n == 1 ? "the design above" : "docs/several-modes.md, the certificate"));

@@ -152,7 +152,7 @@ class AcceptanceFileTest {
         "\"display_convention\": \"rms\"|\"display_convention\": \"mean\"|display_convention: \"mean\" is not allowed; one of peak, rms, peak-to-peak",
         "\"mass_ratio\": 0.05|\"mass_ratio\": 0.05, \"meet_acceptance\": true|absorber: 2 sizes given is not allowed; give one of absorber.mass_ratio, absorber.mass and absorber.meet_acceptance",
         "\"mass_ratio\": 0.05|\"meet_acceptance\": \"yes\"|absorber.meet_acceptance: \"yes\" is not allowed; must be true or false",
-        "\"format_version\": 3|\"format_version\": 8|format_version: 8 is not allowed; this file was written by a newer Counterpoise; this version of Counterpoise reads format_version 1 to 7",
+        "\"format_version\": 3|\"format_version\": 9|format_version: 9 is not allowed; this file was written by a newer Counterpoise; this version of Counterpoise reads format_version 1 to 8",
     })
     void badValuesAreRefusedNamingTheFieldWhatIsWrongAndWhatIsAllowed(String from, String to, String message) {
         String text = BASE.replaceFirst(Pattern.quote(from), Matcher.quoteReplacement(to));

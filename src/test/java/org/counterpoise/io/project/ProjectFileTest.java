@@ -70,7 +70,7 @@ class ProjectFileTest {
         "\"value\": 1000|\"value\": \"heavy\"|structure.mass.value: \"heavy\" is not allowed; must be a number",
         "\"force\"|\"wind\"|disturbance.kind: \"wind\" is not allowed; one of force, unbalance, base-displacement, base-acceleration",
         "\"equal-peak\"|\"guess\"|absorber.method: \"guess\" is not allowed; one of equal-peak, minimum-variance, undamped-single-speed, exact-peak, exact-variance, robust-worst-case, robust-p95",
-        "\"format_version\": 1|\"format_version\": 8|format_version: 8 is not allowed; this file was written by a newer Counterpoise; this version of Counterpoise reads format_version 1 to 7",
+        "\"format_version\": 1|\"format_version\": 9|format_version: 9 is not allowed; this file was written by a newer Counterpoise; this version of Counterpoise reads format_version 1 to 8",
         "\"mass_ratio\": 0.05|\"mass_ratio\": 3|absorber.mass_ratio: 3 is not allowed; must lie strictly between 0 and 2",
         "\"ratio\": 0.02|\"ratio\": 1.5|structure.damping.ratio: 1.5 is not allowed; must lie between 0 and 0.99",
         "\"displacement\"|\"stroke\"|absorber.response: \"stroke\" is not allowed; one of displacement, velocity, acceleration, relative-displacement, transmitted-force",

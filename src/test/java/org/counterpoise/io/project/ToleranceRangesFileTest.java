@@ -152,7 +152,7 @@ class ToleranceRangesFileTest {
         ProjectWriter.save(old, saved);
         JsonObject written = JsonParser.parseString(Files.readString(saved)).getAsJsonObject();
         assertEquals(Project.FORMAT_VERSION, written.get("format_version").getAsInt());
-        assertEquals(7, Project.FORMAT_VERSION);
+        assertEquals(8, Project.FORMAT_VERSION);
         assertEquals("equal-peak", written.getAsJsonObject("absorber").get("method").getAsString(),
                 "a file this version writes always names its method");
         assertEquals(old, ProjectReader.read(saved).project());
@@ -170,12 +170,12 @@ class ToleranceRangesFileTest {
 
     @Test
     void aNewerFormatIsRefusedWithAPlainMessage() {
-        String newer = V2.replace("\"format_version\": 2", "\"format_version\": 8").replace("ROBUSTNESS", "");
+        String newer = V2.replace("\"format_version\": 2", "\"format_version\": 9").replace("ROBUSTNESS", "");
         InvalidInputException e = assertThrows(InvalidInputException.class,
                 () -> ProjectReader.read(new StringReader(newer)));
         assertEquals("format_version", e.field());
-        assertEquals("format_version: 8 is not allowed; this file was written by a newer Counterpoise; this version"
-                + " of Counterpoise reads format_version 1 to 7", e.getMessage());
+        assertEquals("format_version: 9 is not allowed; this file was written by a newer Counterpoise; this version"
+                + " of Counterpoise reads format_version 1 to 8", e.getMessage());
     }
 
     @Test
