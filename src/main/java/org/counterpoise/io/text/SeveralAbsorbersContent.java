@@ -229,8 +229,7 @@ public final class SeveralAbsorbersContent {
             }
         });
         d.spillover().ifPresent(s -> {
-            rows.add(row(ReportKey.SEVERAL_SPILLOVER_LIMIT, "spillover limit (near each other mode, times its peak"
-                    + " without absorbers)", DesignContent.quantity(s.ratio(), Dimension.RATIO),
+            rows.add(row(ReportKey.SEVERAL_SPILLOVER_LIMIT, "spillover limit (x each mode's bare peak)", DesignContent.quantity(s.ratio(), Dimension.RATIO),
                     "absorbers.spillover_limit: the set is the least peak over the band with every other mode's peak"
                             + " within it (docs/several-modes.md, spillover limited)"));
             rows.add(row(ReportKey.SEVERAL_SPILLOVER_MET, "spillover limit kept", new Flag(s.met(), s.met() ? "yes"
