@@ -3,7 +3,7 @@ package org.counterpoise.core.optim;
 import java.util.function.DoubleUnaryOperator;
 import org.counterpoise.core.rational.TransferFunction;
 import org.counterpoise.core.system.AbsorberSensitivity;
-import org.counterpoise.core.system.ModalSystem;
+import org.counterpoise.core.system.FactoredReceptance;
 
 /**
  * The design variables of several absorbers on one mode, as the minimax solvers see them: a point p
@@ -206,10 +206,9 @@ final class AbsorberSetVariables implements MinimaxVariables {
         AbsorberSetDesign d = built(design(p));
         if (problem.surroundings().isPresent()) {
             // the whole structure: the factored form of every modal and absorber term (as one absorber per mode)
-            ModalSystem system = problem.system(d, structureFactor);
-            String force = problem.forcePoint();
-            String at = problem.responsePoint();
-            return x -> 2 * Math.log(AbsorberSensitivity.value(system, force, at, Math.sqrt(x)).abs());
+            FactoredReceptance h = FactoredReceptance.of(problem.system(d, structureFactor), problem.forcePoint(),
+                    problem.responsePoint());
+            return x -> Math.log(h.magnitudeSquared(Math.sqrt(x)));
         }
         double[] f = tunings(d);
         double[] z = dampings(d);
