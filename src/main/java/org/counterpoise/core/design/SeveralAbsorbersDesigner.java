@@ -115,7 +115,7 @@ public final class SeveralAbsorbersDesigner {
                 single = Optional.of(inSi(one.design(), effectiveMass, wr, layout.absorberPoint()).get(0));
             } else if (layout.spilloverLimit().isPresent()) {
                 double ratio = layout.spilloverLimit().getAsDouble();
-                List<SpilloverLimitedOptimiser.Window> windows = spilloverWindows(layout, r, ratio);
+                List<SpilloverLimitedOptimiser.Window> windows = spilloverWindows(layout, layout.structure(), r, ratio);
                 SpilloverLimitedOptimiser.Result set = SpilloverLimitedOptimiser.optimise(problem, windows);
                 absorbers = inSi(set.design(), effectiveMass, wr, layout.absorberPoint());
                 certified = set.met() && set.certificate() != null && set.certificate().certified();
@@ -184,12 +184,12 @@ public final class SeveralAbsorbersDesigner {
      * {@link Spillover} takes it, at the ratio times that mode's peak there without absorbers (a mode
      * unbounded without absorbers, undamped, is given no limit).
      */
-    private static List<SpilloverLimitedOptimiser.Window> spilloverWindows(AbsorberLayout layout, int target,
-            double ratio) {
-        Mode mode = layout.structure().modes().get(target);
+    private static List<SpilloverLimitedOptimiser.Window> spilloverWindows(AbsorberLayout layout,
+            ModalStructure structure, int target, double ratio) {
+        Mode mode = structure.modes().get(target);
         double wr = mode.naturalFrequency();
         double stiffness = mode.massSeenAt(layout.absorberPoint()) * wr * wr;
-        ModalSystem bare = ModalSystem.of(layout.structure(), List.of());
+        ModalSystem bare = ModalSystem.of(structure, List.of());
         List<SpilloverLimitedOptimiser.Window> windows = new ArrayList<>();
         for (Spillover.ModePeak p : Spillover.of(bare, layout.excitationPoint(), layout.responsePoint()).modes()) {
             if (p.mode() != target && Double.isFinite(p.before())) {
@@ -274,12 +274,22 @@ public final class SeveralAbsorbersDesigner {
         }
         Mode mode = set.layout().structure().modes().get(set.targetMode());
         FrequencyBand band = set.band();
+        ModalStructure measured = set.layout().structure().withFrequency(set.targetMode(), targetModeFrequency);
+        // the structure keeps its modes in ascending frequency: the target may have passed a neighbour
+        int target = measured.modes().indexOf(new Mode(targetModeFrequency, mode.dampingRatio(), mode.modalMass(),
+                mode.shape()));
+        if (target < 0) {
+            throw new IllegalStateException("bug: the measured target mode is not in its structure");
+        }
         AbsorberSetProblem problem = onStructure(new AbsorberSetProblem(designed.size(),
                 set.totalMass() / set.effectiveMass(), mode.dampingRatio(), band.low() / targetModeFrequency,
-                band.high() / targetModeFrequency, set.layout().tuning()), set.layout(),
-                set.layout().structure().withFrequency(set.targetMode(), targetModeFrequency), set.targetMode());
-        return inSi(AbsorberSetOptimiser.optimise(problem).design(), set.effectiveMass(), targetModeFrequency,
-                set.layout().absorberPoint());
+                band.high() / targetModeFrequency, set.layout().tuning()), set.layout(), measured, target);
+        // a project that limits the spillover keeps its limit, judged on the structure as measured
+        AbsorberSetDesign design = set.layout().spilloverLimit().isPresent()
+                ? SpilloverLimitedOptimiser.optimise(problem, spilloverWindows(set.layout(), measured, target,
+                        set.layout().spilloverLimit().getAsDouble())).design()
+                : AbsorberSetOptimiser.optimise(problem).design();
+        return inSi(design, set.effectiveMass(), targetModeFrequency, set.layout().absorberPoint());
     }
 
     /**
