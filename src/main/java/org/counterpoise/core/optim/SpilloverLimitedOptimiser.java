@@ -1,11 +1,7 @@
 package org.counterpoise.core.optim;
 
 import java.util.ArrayList;
-import java.util.HashMap;
 import java.util.List;
-import java.util.Map;
-import org.apache.commons.math3.analysis.solvers.AllowedSolution;
-import org.apache.commons.math3.analysis.solvers.BracketingNthOrderBrentSolver;
 import org.counterpoise.core.error.Checks;
 import org.counterpoise.core.error.InvalidInputException;
 
@@ -22,11 +18,15 @@ import org.counterpoise.core.error.InvalidInputException;
  * robust problem's builds are). A design with max(...) &lt;= t has P &lt;= t and every P_k &lt;= L_k, and
  * conversely; so the least feasible peak is the least t with phi(t) &lt;= t. phi(t) - t is positive at
  * the unlimited optimum's peak (when a limit is broken there) and negative once t is large enough for
- * a feasible design; the root is bracketed by growing t by half at a time and found by Commons Math's
- * bracketing Brent solver on the feasible side (relative accuracy {@value #ACCURACY}); the design at
- * the root is then certified as a minimax point of its weighted problem (equal active peaks,
- * first-order conditions, the coarse scan, random moves: {@link AbsorberSetCheck}), which are the
- * first-order conditions of the limited problem with the weights as multipliers.
+ * a feasible design; the level is grown by half at a time until a design within the limits is found,
+ * then bisected between the highest level where none was found and the least band peak of a design
+ * within them found so far (relative accuracy {@value #ACCURACY}). phi comes from local searches, so it
+ * may depend on where they start: every level's result counts and the bracket only narrows, so the
+ * final design is always one within the limits. It is then certified as a minimax point of its
+ * weighted problem (equal active peaks, first-order conditions, the coarse scan, random moves:
+ * {@link AbsorberSetCheck}); those are the first-order conditions of the limited problem with the
+ * weights as multipliers only when its weighted peak equals the level, which is checked (otherwise the
+ * lower design is kept, within the limits, and not certified).
  */
 public final class SpilloverLimitedOptimiser {
     /** Relative accuracy of the level t of the least feasible peak. */
@@ -34,7 +34,7 @@ public final class SpilloverLimitedOptimiser {
     /** Growth of the level while bracketing, and how many times it may grow. */
     private static final double GROWTH = 1.5;
     private static final int MAX_GROWTHS = 16;
-    private static final int MAX_EVALUATIONS = 80;
+    private static final int MAX_BISECTIONS = 60;
 
     private SpilloverLimitedOptimiser() {
     }
@@ -98,28 +98,46 @@ public final class SpilloverLimitedOptimiser {
                     counter.count());
         }
         Levels levels = new Levels(layout, windows, start, counter);
+        // grow the level from the unlimited optimum's peak until a design within the limits is found
         double low = free.peak();
-        double high = low;
-        boolean feasible = false;
-        for (int i = 0; i < MAX_GROWTHS && !feasible; i++) {
-            low = high;
-            high = low * GROWTH;
-            feasible = levels.gap(high) <= 0;
+        double level = low;
+        for (int i = 0; i < MAX_GROWTHS && levels.best == null; i++) {
+            level *= GROWTH;
+            levels.search(level);
+            if (levels.best == null) {
+                low = level;
+            }
         }
-        if (!feasible) {
-            // no design in the box keeps the limits: the one that comes nearest, said so (met = false)
-            double[] p = levels.point(high);
+        if (levels.best == null) {
+            // no design found keeps the limits (local searches from the level's designs, up to GROWTH^16 times the
+            // unlimited peak): the one that came nearest, said so (met = false)
+            double[] p = levels.last;
             return new Result(layout.design(p), layout.peak(p), windowPeaks(layout, windows, p), true, false, null, free,
                     counter.count());
         }
-        double level = new BracketingNthOrderBrentSolver(ACCURACY, ACCURACY * low * 1e-3, 0.0, 5)
-                .solve(MAX_EVALUATIONS, levels::gap, low, high, AllowedSolution.BELOW_SIDE);
+        // bisection between the highest level where no design within the limits was found and the least band peak
+        // of a design within them found so far (every level's result counts, so the bracket only narrows)
+        for (int i = 0; i < MAX_BISECTIONS && levels.bestPeak - low > ACCURACY * levels.bestPeak; i++) {
+            double t = 0.5 * (low + levels.bestPeak);
+            if (!levels.search(t)) {
+                low = t;
+            }
+        }
+        // certify the weighted minimax at the least feasible level found; its first-order conditions are the limited
+        // problem's only when the weighted peak equals the level (a lower point of the final search is kept, within
+        // the limits, but not certified)
+        level = levels.bestPeak;
         MinimaxVariables weighted = levels.variables(level);
         List<double[]> scan = AbsorberSetScan.scan(layout, weighted, counter);
-        MinimaxSearch.Result r = MinimaxSearch.run(weighted, List.of(levels.point(level)), 1, scan, counter, true);
-        double[] p = r.point();
+        MinimaxSearch.Result r = MinimaxSearch.run(weighted, List.of(levels.best), 1, scan, counter, true);
+        double[] p = r.peak() <= level ? r.point() : levels.best;
+        boolean atLevel = r.peak() >= level * (1 - 10 * ACCURACY);
+        AbsorberSetCertificate certificate = atLevel ? r.certificate() : new AbsorberSetCertificate(
+                r.certificate().activePeaks(), r.certificate().activeSpread(), r.certificate().stationarity(),
+                r.certificate().scanPoints(), r.certificate().scanBest(), r.certificate().perturbations(),
+                r.certificate().perturbationLeast(), false);
         List<Double> peaks = windowPeaks(layout, windows, p);
-        return new Result(layout.design(p), layout.peak(p), peaks, true, within(peaks, windows), r.certificate(), free,
+        return new Result(layout.design(p), layout.peak(p), peaks, true, within(peaks, windows), certificate, free,
                 counter.count());
     }
 
@@ -140,14 +158,20 @@ public final class SpilloverLimitedOptimiser {
         return true;
     }
 
-    /** phi(t) - t for the root finder, each level's design kept (warm starts from the nearest one solved). */
+    /**
+     * The searches at each level: the local optimum of the band and the windows weighted t / L_k,
+     * from the last level's design, the best design within the limits so far and the unlimited
+     * optimum; every result within the limits is kept when its band peak is the least so far.
+     */
     private static final class Levels {
         private final AbsorberSetVariables layout;
         private final List<Window> windows;
         private final double[] unlimited;
         private final EvaluationCounter counter;
-        private final Map<Double, double[]> points = new HashMap<>();
         private double[] last;
+        /** The design within the limits of least band peak found so far, or null. */
+        private double[] best;
+        private double bestPeak = Double.POSITIVE_INFINITY;
 
         Levels(AbsorberSetVariables layout, List<Window> windows, double[] unlimited, EvaluationCounter counter) {
             this.layout = layout;
@@ -167,30 +191,32 @@ public final class SpilloverLimitedOptimiser {
             return new RobustSetVariables(layout, pieces, layout.lower());
         }
 
-        /** @return phi(t) - t: the least weighted peak at level t, from the last design and the unlimited one */
-        double gap(double t) {
+        /**
+         * @param t the level
+         * @return true when a design within the limits with band peak at most t was found at this level
+         */
+        boolean search(double t) {
             MinimaxVariables v = variables(t);
-            double[] best = null;
-            double bestPeak = Double.POSITIVE_INFINITY;
-            for (double[] seed : new double[][] {last, unlimited}) {
+            double[] found = null;
+            double foundPeak = Double.POSITIVE_INFINITY;
+            for (double[] seed : best == null ? new double[][] {last, unlimited} : new double[][] {last, best, unlimited}) {
                 double[] p = MinimaxSearch.localOptimum(v, seed, counter);
                 double peak = v.peak(p);
-                if (peak < bestPeak) {
-                    best = p;
-                    bestPeak = peak;
+                if (peak < foundPeak) {
+                    found = p;
+                    foundPeak = peak;
                 }
             }
-            points.put(t, best);
-            last = best;
-            return bestPeak - t;
-        }
-
-        /** @return the design found at level t (solved again if the solver did not keep it) */
-        double[] point(double t) {
-            if (!points.containsKey(t)) {
-                gap(t);
+            last = found;
+            boolean feasible = foundPeak <= t;
+            if (feasible) {
+                double band = layout.peak(found);
+                if (band < bestPeak && within(windowPeaks(layout, windows, found), windows)) {
+                    best = found;
+                    bestPeak = band;
+                }
             }
-            return points.get(t);
+            return feasible;
         }
     }
 }
