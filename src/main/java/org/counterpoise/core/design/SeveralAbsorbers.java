@@ -116,10 +116,12 @@ public record SeveralAbsorbers(AbsorberLayout layout, int targetMode, double eff
      *     its peak without absorbers
      * @param unlimitedPeak the least peak over the band with no limit, m (what the limit costs)
      * @param limited true when the unlimited design broke the limit, so the design differs from it
-     * @param met true when every mode's peak is within its limit; false when no design within the
-     *     optimiser's box keeps them (the design shown comes nearest)
+     * @param met true when every mode's peak is within its limit; false when no design found keeps
+     *     them (the design shown came nearest)
+     * @param singleMet the same for the one absorber of the same total mass compared (designed under
+     *     the same limit)
      */
-    public record SpilloverLimit(double ratio, double unlimitedPeak, boolean limited, boolean met) {
+    public record SpilloverLimit(double ratio, double unlimitedPeak, boolean limited, boolean met, boolean singleMet) {
     }
 
     /**

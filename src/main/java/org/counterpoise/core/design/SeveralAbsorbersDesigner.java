@@ -123,7 +123,7 @@ public final class SeveralAbsorbersDesigner {
                 single = Optional.of(inSi(one.design(), effectiveMass, wr, layout.absorberPoint()).get(0));
                 double stiffness = effectiveMass * wr * wr;
                 limit = Optional.of(new SeveralAbsorbers.SpilloverLimit(ratio,
-                        excitation.amplitude() * set.unlimited().peak() / stiffness, set.limited(), set.met()));
+                        excitation.amplitude() * set.unlimited().peak() / stiffness, set.limited(), set.met(), one.met()));
             } else {
                 AbsorberSetOptimum set = AbsorberSetOptimiser.optimise(problem);
                 absorbers = inSi(set.design(), effectiveMass, wr, layout.absorberPoint());

@@ -68,7 +68,7 @@ public final class SpilloverLimitedOptimiser {
      * @param limited true when a limit was broken by the unlimited optimum, so the design differs from it
      * @param met true when every window's peak is within its limit (to {@value #ACCURACY} relative)
      * @param certificate the weighted minimax's evidence at the level found (the unlimited optimum's when
-     *     no limit was broken; null when the limits cannot be met within the box)
+     *     no limit was broken; null when no design found keeps the limits)
      * @param unlimited the least peak with no limit
      * @param evaluations transfer functions built
      */

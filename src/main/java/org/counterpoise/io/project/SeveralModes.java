@@ -8,15 +8,17 @@ import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.OptionalInt;
 import org.counterpoise.core.design.AbsorberLayout;
+import org.counterpoise.core.design.DesignMethod;
 import org.counterpoise.core.error.Checks;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.model.ExcitationKind;
 import org.counterpoise.core.model.FrequencyBand;
 import org.counterpoise.core.model.Structure;
+import org.counterpoise.core.optim.AbsorberSetProblem;
 import org.counterpoise.core.optim.AbsorberSetTuning;
 import org.counterpoise.core.response.ResponseKind;
-import org.counterpoise.core.system.Mode;
 import org.counterpoise.core.system.ModalStructure;
+import org.counterpoise.core.system.Mode;
 import org.counterpoise.io.PlainText;
 
 /**
@@ -53,6 +55,17 @@ public final class SeveralModes {
                     + Ids.of(a.arrangement()) + "\" without structure.modes", "\"" + Ids.of(AbsorberArrangement.ONE_MODE)
                     + "\" for a structure of one mode; one absorber per mode needs the structure as its modes"
                     + " (structure.modes)");
+        }
+        if (a.spilloverLimit() != null && a.count() == 1) {
+            throw new InvalidInputException(ModesJson.ABSORBERS + "." + ModesJson.SPILLOVER_LIMIT,
+                    Checks.show(a.spilloverLimit()) + " with one absorber", "2 to " + AbsorberSetProblem.MAX_COUNT
+                            + " absorbers (absorbers.count), or leave it out: one absorber is the project's own design");
+        }
+        if (a.spilloverLimit() != null && p.absorber().method() == DesignMethod.ROBUST_WORST_CASE) {
+            throw new InvalidInputException(ModesJson.ABSORBERS + "." + ModesJson.SPILLOVER_LIMIT,
+                    Checks.show(a.spilloverLimit()) + " with the method robust-worst-case (absorber.method, the default)",
+                    "another absorber.method (the set is then the least peak with the limit kept), or leave it out: the"
+                            + " robust design of a set does not take a spillover limit yet");
         }
         if (p.modes() == null) {
             if (a.spilloverLimit() != null) {
