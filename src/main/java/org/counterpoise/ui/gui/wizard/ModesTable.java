@@ -1,107 +1,217 @@
 package org.counterpoise.ui.gui.wizard;
 
-import static org.counterpoise.core.units.Dimension.FREQUENCY;
-import static org.counterpoise.core.units.Dimension.MASS;
-
 import java.awt.BorderLayout;
+import java.awt.Color;
 import java.awt.Dimension;
+import java.awt.FlowLayout;
 import java.awt.Font;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Optional;
-import java.util.TreeSet;
+import java.util.Locale;
+import java.util.function.Consumer;
+import java.util.function.Supplier;
+import java.util.function.UnaryOperator;
+import javax.swing.BoxLayout;
+import javax.swing.JButton;
+import javax.swing.JComboBox;
+import javax.swing.JComponent;
 import javax.swing.JLabel;
 import javax.swing.JPanel;
 import javax.swing.JScrollPane;
+import javax.swing.JSpinner;
 import javax.swing.JTable;
-import javax.swing.table.DefaultTableModel;
+import javax.swing.JTextField;
+import javax.swing.SpinnerNumberModel;
+import javax.swing.table.AbstractTableModel;
 import javax.swing.table.TableModel;
-import org.counterpoise.core.design.AbsorberLayout;
 import org.counterpoise.core.error.InvalidInputException;
-import org.counterpoise.core.system.Mode;
+import org.counterpoise.core.optim.AbsorberSetProblem;
+import org.counterpoise.core.optim.AbsorberSetTuning;
+import org.counterpoise.io.PlainText;
+import org.counterpoise.io.project.AbsorbersInput;
 import org.counterpoise.io.project.Project;
-import org.counterpoise.io.project.SeveralModes;
-import org.counterpoise.io.text.DisplayUnits;
-import org.counterpoise.io.text.QuantityFormat;
-import org.counterpoise.io.text.UnitSystem;
+import org.counterpoise.ui.gui.document.Edit;
+import org.counterpoise.ui.gui.document.ModesEdits;
+import org.counterpoise.ui.gui.document.ProjectEdits;
+import org.counterpoise.ui.gui.field.ItemWords;
 
 /**
- * The structure step's read-only table of a project's modes (structure.modes in the file): each
- * mode's name, natural frequency, damping ratio, modal mass and mode-shape value at each named point,
- * and where the force acts, the response is taken and the absorbers sit. Not edited here: the file
- * gives them.
+ * The structure step's table of a project's modes (structure.modes in the file), edited in place:
+ * each mode's name, natural frequency, damping ratio, modal mass and mode-shape value at each named
+ * point in the display unit system; a mode added or removed, a named point added; where the force
+ * acts, the response is taken and the absorbers sit, how many there are, their tuning and the mode
+ * they are fitted to. Every change is one undoable edit of the document ({@link ModesEdits}); a
+ * value refused is said under the table and the table keeps the value it had.
  */
 final class ModesTable {
-    private final DefaultTableModel model = new DefaultTableModel() {
-        @Override
-        public boolean isCellEditable(int row, int column) {
-            return false;
-        }
-    };
+    /** The target-mode list's first entry: no mode named, the one nearest the forcing band. */
+    static final String NEAREST = "the mode nearest the band";
+    private final Cells model = new Cells();
     private final JTable table = new JTable(model);
-    private final JLabel points = new JLabel(" ");
+    private final JButton addMode = new JButton("Add a mode");
+    private final JButton removeMode = new JButton("Remove the selected mode");
+    private final JTextField newPoint = new JTextField(9);
+    private final JButton addPoint = new JButton("Add the point");
+    private final JComboBox<String> excitation = new JComboBox<>();
+    private final JComboBox<String> response = new JComboBox<>();
+    private final JComboBox<String> absorberPoint = new JComboBox<>();
+    private final JSpinner count = new JSpinner(new SpinnerNumberModel(1, 1, AbsorberSetProblem.MAX_COUNT, 1));
+    private final JComboBox<AbsorberSetTuning> tuning = new JComboBox<>(AbsorberSetTuning.values());
+    private final JComboBox<String> target = new JComboBox<>();
+    private final JLabel arrangement = new JLabel(" ");
+    private final JLabel problem = new JLabel(" ");
     private final JPanel panel = new JPanel(new BorderLayout(0, 4));
+    private final List<JComponent> absorberControls = List.of(absorberPoint, count, tuning, target);
+    private final Consumer<Supplier<Edit>> commit;
+    /** The project the table shows (every change is made from it). */
+    private Project shown;
+    /** True while the controls are filled from a project: their listeners write nothing. */
+    private boolean filling;
 
-    ModesTable() {
+    /** @param commit writes an edit to the document as one undo step (the step's route for a pick) */
+    ModesTable(Consumer<Supplier<Edit>> commit) {
+        this.commit = commit;
         table.setName("structure.modes");
-        points.setName("structure.modes.points");
+        table.putClientProperty("terminateEditOnFocusLost", Boolean.TRUE);
+        table.getTableHeader().setReorderingAllowed(false);
+        name(addMode, "structure.modes.add");
+        name(removeMode, "structure.modes.remove");
+        name(newPoint, "structure.modes.newPoint");
+        name(addPoint, "structure.modes.addPoint");
+        name(excitation, "structure.modes.excitation");
+        name(response, "structure.modes.response");
+        name(absorberPoint, "structure.modes.absorberPoint");
+        name(count, "structure.modes.count");
+        name(tuning, "structure.modes.tuning");
+        name(target, "structure.modes.target");
+        name(arrangement, "structure.modes.points");
+        name(problem, "structure.modes.problem");
+        problem.setForeground(new Color(0xB0, 0x20, 0x20));
+        ItemWords.show(tuning, AbsorberSetTuning.class, t -> t == AbsorberSetTuning.UNIFORM
+                ? "uniform spread" : "each its own");
         JScrollPane scroll = new JScrollPane(table);
-        scroll.setPreferredSize(new Dimension(520, 110));
-        JLabel heading = new JLabel("The structure's modes (from the project file, not edited here)");
+        scroll.setPreferredSize(new Dimension(560, 96));
+        JLabel heading = new JLabel("The structure's modes (double-click a cell to type; units as the step shows)");
         heading.setFont(heading.getFont().deriveFont(Font.BOLD));
         panel.add(heading, BorderLayout.NORTH);
         panel.add(scroll, BorderLayout.CENTER);
-        panel.add(points, BorderLayout.SOUTH);
+        panel.add(controls(), BorderLayout.SOUTH);
         panel.setVisible(false);
+        listen();
+    }
+
+    private JPanel controls() {
+        JPanel out = new JPanel();
+        out.setLayout(new BoxLayout(out, BoxLayout.Y_AXIS));
+        out.add(line(addMode, removeMode, labelled("New point", newPoint), addPoint));
+        out.add(line(labelled("Force at", excitation), labelled("Response at", response)));
+        out.add(line(labelled("Absorbers", count), labelled("at", absorberPoint), labelled("tuned", tuning)));
+        out.add(line(labelled("Fitted to", target)));
+        out.add(line(arrangement));
+        out.add(line(problem));
+        return out;
+    }
+
+    private void listen() {
+        model.typed = (row, column, text) -> change("structure.modes.cell",
+                p -> ModesEdits.withCell(p, row, column, text, Locale.getDefault(Locale.Category.FORMAT)));
+        addMode.addActionListener(e -> change("structure.modes.add", ModesEdits::withModeAdded));
+        removeMode.addActionListener(e -> {
+            int row = table.getSelectedRow() >= 0 ? table.getSelectedRow() : model.getRowCount() - 1;
+            change("structure.modes.remove", p -> ModesEdits.withModeRemoved(p, row));
+        });
+        Runnable pointAdded = () -> change("structure.modes.addPoint",
+                p -> ModesEdits.withPointAdded(p, newPoint.getText()));
+        addPoint.addActionListener(e -> pointAdded.run());
+        newPoint.addActionListener(e -> pointAdded.run());
+        excitation.addActionListener(e -> change("structure.modes.excitation",
+                p -> ModesEdits.withPoints(p, picked(excitation), p.modes().responsePoint())));
+        response.addActionListener(e -> change("structure.modes.response",
+                p -> ModesEdits.withPoints(p, p.modes().excitationPoint(), picked(response))));
+        absorberPoint.addActionListener(e -> absorbersChanged("structure.modes.absorberPoint"));
+        tuning.addActionListener(e -> absorbersChanged("structure.modes.tuning"));
+        target.addActionListener(e -> absorbersChanged("structure.modes.target"));
+        count.addChangeListener(e -> absorbersChanged("structure.modes.count"));
+    }
+
+    private void absorbersChanged(String key) {
+        change(key, p -> ModesEdits.withAbsorbers(p, (Integer) count.getValue(), (AbsorberSetTuning) tuning
+                .getSelectedItem(), picked(absorberPoint), target.getSelectedIndex() <= 0 ? null : picked(target)));
+    }
+
+    /** Makes the change from the project shown; a refusal is said under the table, which keeps what it had. */
+    private void change(String key, UnaryOperator<Project> edit) {
+        if (filling || shown == null) {
+            return;
+        }
+        Project next;
+        try {
+            next = edit.apply(shown);
+        } catch (InvalidInputException e) {
+            Project keep = shown;
+            shown = null;
+            show(keep);
+            problem.setText(wrapped(e.getMessage()));
+            return;
+        }
+        problem.setText(" ");
+        if (key.equals("structure.modes.addPoint")) {
+            newPoint.setText("");
+        }
+        commit.accept(() -> ProjectEdits.modes(key, next));
     }
 
     JPanel component() {
         return panel;
     }
 
-    /** @param p the project: its modes shown, or the table hidden when it gives one mode */
+    /** @param p the project: its modes shown, or the table hidden when it gives its structure as one mode */
     void show(Project p) {
-        model.setRowCount(0);
-        Optional<AbsorberLayout> layout;
+        if (!p.equals(shown)) {
+            problem.setText(" ");
+        }
+        shown = p;
+        panel.setVisible(p.modes() != null);
+        if (p.modes() == null) {
+            return;
+        }
+        if (table.isEditing() && !model.storing) {
+            table.getCellEditor().cancelCellEditing();
+        }
+        filling = true;
         try {
-            layout = p.modes() == null ? Optional.empty() : SeveralModes.layout(p);
-        } catch (InvalidInputException bad) {
-            panel.setVisible(true);
-            model.setColumnCount(0);
-            points.setText("The modes cannot be read: " + bad.getMessage());
-            return;
+            model.update(ModesEdits.headings(p.modes(), p.displayUnits()),
+                    ModesEdits.rows(p.modes(), p.displayUnits(), Locale.getDefault(Locale.Category.FORMAT)));
+            List<String> points = ModesEdits.points(p.modes());
+            fill(excitation, points, p.modes().excitationPoint());
+            fill(response, points, p.modes().responsePoint());
+            AbsorbersInput a = p.absorbers() == null ? new AbsorbersInput(1, AbsorberSetTuning.UNIFORM, null, null)
+                    : p.absorbers();
+            fill(absorberPoint, points, a.point());
+            count.setValue(a.count());
+            tuning.setSelectedItem(a.tuning());
+            List<String> targets = new ArrayList<>(List.of(NEAREST));
+            p.modes().modes().forEach(m -> targets.add(m.name()));
+            fill(target, targets, a.targetMode() == null ? NEAREST : a.targetMode());
+            absorberControls.forEach(c -> c.setEnabled(!a.onePerMode()));
+            arrangement.setText(a.onePerMode() ? "One absorber per mode, as the file gives them: "
+                    + PlainText.quote(String.join(" and ", a.modes())) + (a.points().isEmpty() ? ""
+                            : " at " + PlainText.quote(String.join(" and ", a.points())))
+                    + " (their count, tuning and points are not edited here)" : " ");
+            removeMode.setEnabled(p.modes().modes().size() > 1);
+        } finally {
+            filling = false;
         }
-        panel.setVisible(layout.isPresent());
-        if (layout.isEmpty()) {
-            return;
-        }
-        AbsorberLayout l = layout.get();
-        UnitSystem units = p.displayUnits();
-        List<Mode> modes = l.structure().modes();
-        TreeSet<String> named = new TreeSet<>();
-        modes.forEach(m -> named.addAll(m.shape().keySet()));
-        List<String> heads = new ArrayList<>(List.of("Mode", "Natural frequency", "Damping ratio", "Modal mass"));
-        named.forEach(point -> heads.add("\u03c6 at " + point));
-        model.setColumnIdentifiers(heads.toArray());
-        for (int r = 0; r < modes.size(); r++) {
-            Mode m = modes.get(r);
-            List<String> row = new ArrayList<>(List.of(l.modeNames().get(r),
-                    DisplayUnits.format(m.naturalFrequency(), FREQUENCY, units),
-                    QuantityFormat.number(m.dampingRatio(), QuantityFormat.FIGURES),
-                    DisplayUnits.format(m.modalMass(), MASS, units)));
-            named.forEach(point -> row.add(m.shape().containsKey(point)
-                    ? QuantityFormat.number(m.shapeAt(point), QuantityFormat.FIGURES) : "\u2013"));
-            model.addRow(row.toArray());
-        }
-        points.setText("Force at " + l.excitationPoint() + ", response at " + l.responsePoint() + ", " + l.joint()
-                .map(j -> "one absorber per mode: " + l.modeNames().get(j.modes().get(0)) + " at " + j.points().get(0)
-                        + ", " + l.modeNames().get(j.modes().get(1)) + " at " + j.points().get(1))
-                .orElse("absorbers at " + l.absorberPoint()) + ".");
     }
 
     /** @return the rows as shown (tests) */
     List<List<String>> rows() {
         return shownRows(model);
+    }
+
+    /** @return the message under the table, or blank (tests) */
+    String problem() {
+        return problem.getText();
     }
 
     /**
@@ -118,5 +228,121 @@ final class ModesTable {
             out.add(row);
         }
         return out;
+    }
+
+    private static void fill(JComboBox<String> combo, List<String> items, String selected) {
+        boolean same = combo.getItemCount() == items.size();
+        for (int i = 0; same && i < items.size(); i++) {
+            same = items.get(i).equals(combo.getItemAt(i));
+        }
+        if (!same) {
+            combo.removeAllItems();
+            items.forEach(combo::addItem);
+        }
+        combo.setSelectedItem(selected);
+        if (selected == null) {
+            combo.setSelectedIndex(-1);
+        }
+    }
+
+    private static String picked(JComboBox<String> combo) {
+        return (String) combo.getSelectedItem();
+    }
+
+    private static String wrapped(String message) {
+        return "<html><div style='width:420pt'>" + PlainText.escape(message).replace("&", "&amp;")
+                .replace("<", "&lt;") + "</div></html>";
+    }
+
+    private static void name(JComponent c, String name) {
+        c.setName(name);
+    }
+
+    private static JPanel labelled(String words, JComponent field) {
+        JPanel p = new JPanel(new FlowLayout(FlowLayout.LEFT, 4, 0));
+        JLabel l = new JLabel(words);
+        l.setLabelFor(field);
+        p.add(l);
+        p.add(field);
+        return p;
+    }
+
+    private static JPanel line(JComponent... parts) {
+        JPanel p = new JPanel(new FlowLayout(FlowLayout.LEFT, 6, 2));
+        for (JComponent c : parts) {
+            p.add(c);
+        }
+        p.setAlignmentX(0f);
+        return p;
+    }
+
+    /** The cells as text; a typed cell goes to {@link #typed}, never straight into the cells. */
+    private static final class Cells extends AbstractTableModel {
+        private List<String> headings = List.of();
+        private List<List<String>> rows = List.of();
+        private CellTyped typed = (r, c, t) -> { };
+        /** True while a typed value is handed on (the editor is being closed by the table itself). */
+        private boolean storing;
+
+        void update(List<String> newHeadings, List<List<String>> newRows) {
+            boolean sameColumns = newHeadings.equals(headings);
+            headings = List.copyOf(newHeadings);
+            rows = List.copyOf(newRows);
+            if (sameColumns) {
+                fireTableDataChanged();
+            } else {
+                fireTableStructureChanged();
+            }
+        }
+
+        @Override
+        public int getRowCount() {
+            return rows.size();
+        }
+
+        @Override
+        public int getColumnCount() {
+            return headings.size();
+        }
+
+        @Override
+        public String getColumnName(int column) {
+            return headings.get(column);
+        }
+
+        @Override
+        public Class<?> getColumnClass(int column) {
+            return String.class;
+        }
+
+        @Override
+        public Object getValueAt(int row, int column) {
+            return rows.get(row).get(column);
+        }
+
+        @Override
+        public boolean isCellEditable(int row, int column) {
+            return true;
+        }
+
+        @Override
+        public void setValueAt(Object value, int row, int column) {
+            String text = String.valueOf(value);
+            if (text.equals(rows.get(row).get(column))) {
+                return;
+            }
+            storing = true;
+            try {
+                typed.typed(row, column, text);
+            } finally {
+                storing = false;
+            }
+        }
+    }
+
+    /** What is told when a cell is typed. */
+    @FunctionalInterface
+    private interface CellTyped {
+        void typed(int row, int column, String text);
     }
 }

@@ -67,10 +67,10 @@ final class StructureStep extends Step {
     private final JButton fromMeasurement = new JButton("From a measured response\u2026");
     private final JComponent page;
     private MeasurementDialog measurement;
-    /** True when the project gives its structure as several modes, which this step does not edit yet. */
+    /** True when the project gives its structure as modes: they are edited in their table, not in the fields. */
     private boolean severalModes;
-    /** The modes, read-only, when the project gives several. */
-    private final ModesTable modes = new ModesTable();
+    /** The modes, edited in place, when the project gives its structure as modes. */
+    private final ModesTable modes = new ModesTable(this::commitChoice);
 
     StructureStep() {
         massForm.setName("structure.massForm");
@@ -223,10 +223,10 @@ final class StructureStep extends Step {
             c.setEnabled(!severalModes);
         }
         if (severalModes) {
-            // the modes are kept as the file gives them; the greyed fields show the target mode at the
+            // the modes are edited in their table; the greyed fields show the target mode at the
             // absorbers' point, the single mode the design uses (never the fields of a project shown before)
             showTargetMode(p);
-            measuredNote.setText("several modes in the file, not edited here; shown: the target mode the design uses");
+            measuredNote.setText("the structure's modes, edited in the table below; shown: the target mode the design uses");
             measuredNote.setToolTipText(null);
             return;
         }
@@ -264,6 +264,11 @@ final class StructureStep extends Step {
     /** @return the modes table's rows as shown (tests) */
     List<List<String>> modeRows() {
         return modes.rows();
+    }
+
+    /** @return the message under the modes table, or blank (tests) */
+    String modesProblem() {
+        return modes.problem();
     }
 
     @Override
