@@ -91,7 +91,7 @@ final class ModesTable {
                 ? "uniform spread" : "each its own");
         JScrollPane scroll = new JScrollPane(table);
         scroll.setPreferredSize(new Dimension(560, 96));
-        JLabel heading = new JLabel("The structure's modes (double-click a cell to type; units as the step shows)");
+        JLabel heading = new JLabel("The structure's modes (double-click a cell to change it)");
         heading.setFont(heading.getFont().deriveFont(Font.BOLD));
         panel.add(heading, BorderLayout.NORTH);
         panel.add(scroll, BorderLayout.CENTER);

@@ -1,6 +1,8 @@
 package org.counterpoise.ui.gui.wizard;
 
 import java.awt.BorderLayout;
+import java.math.BigDecimal;
+import java.math.MathContext;
 import java.time.LocalDate;
 import java.util.List;
 import javax.swing.JButton;
@@ -253,7 +255,10 @@ final class StructureStep extends Step {
             return;
         }
         select(massForm, 0);
-        showValue(mass, target.modalMass(), Unit.KILOGRAM);
+        Unit massUnit = DisplayUnits.of(Dimension.MASS, p.displayUnits()); // the unit the modes table shows
+        // six figures, as the table: a pound value's conversion tail is not shown
+        showValue(mass, new BigDecimal(massUnit.fromSi(target.modalMass())).round(new MathContext(6)).doubleValue(),
+                massUnit);
         select(stiffnessForm, 1);
         showValue(stiffness, Unit.HERTZ.fromSi(target.naturalFrequency()), Unit.HERTZ);
         select(dampingForm, DampingInput.Measure.RATIO.ordinal());
