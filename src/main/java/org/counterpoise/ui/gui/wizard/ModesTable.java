@@ -46,8 +46,11 @@ import org.counterpoise.ui.gui.field.ItemWords;
 final class ModesTable {
     /** The target-mode list's first entry: no mode named, the one nearest the forcing band. */
     static final String NEAREST = "the mode nearest the band";
+    /** The most modes shown at once before the table scrolls. */
+    private static final int ROWS_IN_VIEW = 8;
     private final Cells model = new Cells();
     private final JTable table = new JTable(model);
+    private final JScrollPane scroll = new JScrollPane(table);
     private final JButton addMode = new JButton("Add a mode");
     private final JButton removeMode = new JButton("Remove the selected mode");
     private final JTextField newPoint = new JTextField(9);
@@ -89,7 +92,6 @@ final class ModesTable {
         problem.setForeground(new Color(0xB0, 0x20, 0x20));
         ItemWords.show(tuning, AbsorberSetTuning.class, t -> t == AbsorberSetTuning.UNIFORM
                 ? "uniform spread" : "each its own");
-        JScrollPane scroll = new JScrollPane(table);
         scroll.setPreferredSize(new Dimension(560, 96));
         JLabel heading = new JLabel("The structure's modes (double-click a cell to change it)");
         heading.setFont(heading.getFont().deriveFont(Font.BOLD));
@@ -105,8 +107,8 @@ final class ModesTable {
         out.setLayout(new BoxLayout(out, BoxLayout.Y_AXIS));
         out.add(line(addMode, removeMode, labelled("New point", newPoint), addPoint));
         out.add(line(labelled("Force at", excitation), labelled("Response at", response)));
-        out.add(line(labelled("Absorbers", count), labelled("at", absorberPoint), labelled("tuned", tuning)));
-        out.add(line(labelled("Fitted to", target)));
+        out.add(line(labelled("Absorbers", count), labelled("at", absorberPoint), labelled("tuned", tuning),
+                labelled("fitted to", target)));
         out.add(line(arrangement));
         out.add(line(problem));
         return out;
@@ -117,8 +119,14 @@ final class ModesTable {
                 p -> ModesEdits.withCell(p, row, column, text, Locale.getDefault(Locale.Category.FORMAT)));
         addMode.addActionListener(e -> change("structure.modes.add", ModesEdits::withModeAdded));
         removeMode.addActionListener(e -> {
-            int row = table.getSelectedRow() >= 0 ? table.getSelectedRow() : model.getRowCount() - 1;
-            change("structure.modes.remove", p -> ModesEdits.withModeRemoved(p, row));
+            int row = table.getSelectedRow();
+            change("structure.modes.remove", p -> {
+                if (row < 0) {
+                    throw InvalidInputException.unusable("Remove a mode", "no mode is selected",
+                            "click the mode's row first");
+                }
+                return ModesEdits.withModeRemoved(p, row);
+            });
         });
         Runnable pointAdded = () -> change("structure.modes.addPoint",
                 p -> ModesEdits.withPointAdded(p, newPoint.getText()));
@@ -182,6 +190,7 @@ final class ModesTable {
         try {
             model.update(ModesEdits.headings(p.modes(), p.displayUnits()),
                     ModesEdits.rows(p.modes(), p.displayUnits(), Locale.getDefault(Locale.Category.FORMAT)));
+            fitRows(model.getRowCount());
             List<String> points = ModesEdits.points(p.modes());
             fill(excitation, points, p.modes().excitationPoint());
             fill(response, points, p.modes().responsePoint());
@@ -201,6 +210,16 @@ final class ModesTable {
             removeMode.setEnabled(p.modes().modes().size() > 1);
         } finally {
             filling = false;
+        }
+    }
+
+    /** Every mode in view without scrolling, up to {@link #ROWS_IN_VIEW}; the page scrolls past that. */
+    private void fitRows(int rows) {
+        int height = table.getTableHeader().getPreferredSize().height + table.getRowHeight()
+                * Math.max(2, Math.min(rows, ROWS_IN_VIEW)) + 6;
+        if (scroll.getPreferredSize().height != height) {
+            scroll.setPreferredSize(new Dimension(560, height));
+            panel.revalidate();
         }
     }
 
@@ -250,7 +269,7 @@ final class ModesTable {
     }
 
     private static String wrapped(String message) {
-        return "<html><div style='width:420pt'>" + PlainText.escape(message).replace("&", "&amp;")
+        return "<html><div style='width:700px'>" + PlainText.escape(message).replace("&", "&amp;")
                 .replace("<", "&lt;") + "</div></html>";
     }
 

@@ -102,6 +102,16 @@ class ModesEditingGuiTest {
         assertEquals("mode 3", row(2).get(0));
         assertEquals(3, onEdt(() -> frame.document().project().modes().modes().size()));
         screenshot("modes-editor-three-modes");
+        click("structure.modes.remove"); // no row selected: said, nothing removed
+        assertTrue(problem().contains("click the mode's row first"), problem());
+        onEdt(() -> {
+            table.setRowSelectionInterval(2, 2);
+            return null;
+        });
+        click("structure.modes.remove");
+        assertEquals(2, onEdt(table::getRowCount));
+        assertTrue(onEdt(() -> frame.document().undo()));
+        assertEquals(3, onEdt(table::getRowCount));
         assertTrue(onEdt(() -> frame.document().undo()));
         assertEquals(2, onEdt(table::getRowCount));
         assertEquals("8.35", row(0).get(ModesEdits.FREQUENCY));
