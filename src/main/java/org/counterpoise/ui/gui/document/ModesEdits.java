@@ -8,6 +8,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import org.counterpoise.core.error.InvalidInputException;
+import org.counterpoise.core.model.Structure;
 import org.counterpoise.core.optim.AbsorberSetProblem;
 import org.counterpoise.core.optim.AbsorberSetTuning;
 import org.counterpoise.core.units.Dimension;
@@ -19,6 +20,8 @@ import org.counterpoise.io.project.ModeInput;
 import org.counterpoise.io.project.ModesInput;
 import org.counterpoise.io.project.Project;
 import org.counterpoise.io.project.QuantityInput;
+import org.counterpoise.io.project.SeveralModes;
+import org.counterpoise.io.project.StructureInput;
 import org.counterpoise.io.text.DisplayUnits;
 import org.counterpoise.io.text.TypedNumbers;
 import org.counterpoise.io.text.UnitSystem;
@@ -145,6 +148,44 @@ public final class ModesEdits {
         modes.set(row, next);
         return usable(p, p.withSeveral(new ModesInput(modes, m.excitationPoint(), m.responsePoint()), p.absorbers()),
                 where + " " + text.trim());
+    }
+
+    /**
+     * A structure given as one mode described by its modes instead: one mode named "structure" at one
+     * point named "absorber point", where the force acts, the response is taken and the absorbers sit,
+     * with the single mode's natural frequency, its damping as given, the effective modal mass
+     * m / phi^2 and shape value 1 there: the structure the single-mode design sees (the layout of a
+     * single mode in {@link SeveralModes#layout} is the same). The absorbers keep their count and
+     * tuning; where the values came from (a measurement) is not kept.
+     * @param p a project whose structure is given as one mode
+     * @return the project with its structure as modes
+     * @throws InvalidInputException when the single mode is not usable yet, or the project could not
+     *     be designed as modes (a disturbance other than a force, a response other than displacement...)
+     */
+    public static Project asModes(Project p) {
+        String what = "Describe the structure by its modes";
+        Structure s;
+        try {
+            s = p.structure().toStructure();
+        } catch (InvalidInputException e) {
+            throw InvalidInputException.unusable(what, "the structure's fields are not usable yet", e.getMessage());
+        }
+        Unit hz = unit(Dimension.FREQUENCY, p.displayUnits());
+        Unit mass = unit(Dimension.MASS, p.displayUnits());
+        ModeInput mode = new ModeInput(SeveralModes.SINGLE_MODE, new QuantityInput(exact(hz.fromSi(
+                s.naturalFrequency())), hz), p.structure().damping(), new QuantityInput(exact(mass.fromSi(
+                        s.effectiveMass())), mass), Map.of(SeveralModes.SINGLE_POINT, 1.0));
+        AbsorbersInput a = p.absorbers();
+        AbsorbersInput absorbers = new AbsorbersInput(a == null ? 1 : a.count(), a == null ? AbsorberSetTuning.UNIFORM
+                : a.tuning(), SeveralModes.SINGLE_POINT, null);
+        Project out = p.withStructure(StructureInput.GIVEN_AS_MODES).withSeveral(new ModesInput(List.of(mode),
+                SeveralModes.SINGLE_POINT, SeveralModes.SINGLE_POINT), absorbers);
+        try {
+            out.toStructure();
+        } catch (InvalidInputException e) {
+            throw InvalidInputException.unusable(what, "not possible for this project", e.getMessage());
+        }
+        return out;
     }
 
     /**
@@ -313,6 +354,11 @@ public final class ModesEdits {
 
     private static Unit unit(Dimension d, UnitSystem units) {
         return DisplayUnits.of(d, units);
+    }
+
+    /** Twelve figures: a unit conversion's last-bit tail (23.500000000000004 Hz) is not written to the file. */
+    private static double exact(double v) {
+        return new BigDecimal(v).round(new MathContext(12)).doubleValue();
     }
 
     private static String shown(double v, Locale locale) {

@@ -55,6 +55,8 @@ final class ModesTable {
     private final JButton removeMode = new JButton("Remove the selected mode");
     private final JTextField newPoint = new JTextField(9);
     private final JButton addPoint = new JButton("Add the point");
+    private final JButton asModes = new JButton("Describe the structure by its modes");
+    private final JLabel heading = new JLabel(" ");
     private final JComboBox<String> excitation = new JComboBox<>();
     private final JComboBox<String> response = new JComboBox<>();
     private final JComboBox<String> absorberPoint = new JComboBox<>();
@@ -65,6 +67,9 @@ final class ModesTable {
     private final JLabel problem = new JLabel(" ");
     private final JPanel panel = new JPanel(new BorderLayout(0, 4));
     private final List<JComponent> absorberControls = List.of(absorberPoint, count, tuning, target);
+    /** What only a structure given as modes shows: the table and the lines under it. */
+    private final List<JComponent> modesParts = new ArrayList<>();
+    private JPanel asModesLine;
     private final Consumer<Supplier<Edit>> commit;
     /** The project the table shows (every change is made from it). */
     private Project shown;
@@ -81,6 +86,9 @@ final class ModesTable {
         name(removeMode, "structure.modes.remove");
         name(newPoint, "structure.modes.newPoint");
         name(addPoint, "structure.modes.addPoint");
+        name(asModes, "structure.modes.asModes");
+        asModes.setToolTipText("One mode at one point (\"absorber point\"), the effective modal mass m/\u03c6\u00b2 there:"
+                + " then add modes and points");
         name(excitation, "structure.modes.excitation");
         name(response, "structure.modes.response");
         name(absorberPoint, "structure.modes.absorberPoint");
@@ -93,7 +101,6 @@ final class ModesTable {
         ItemWords.show(tuning, AbsorberSetTuning.class, t -> t == AbsorberSetTuning.UNIFORM
                 ? "uniform spread" : "each its own");
         scroll.setPreferredSize(new Dimension(560, 96));
-        JLabel heading = new JLabel("The structure's modes (double-click a cell to change it)");
         heading.setFont(heading.getFont().deriveFont(Font.BOLD));
         panel.add(heading, BorderLayout.NORTH);
         panel.add(scroll, BorderLayout.CENTER);
@@ -105,11 +112,15 @@ final class ModesTable {
     private JPanel controls() {
         JPanel out = new JPanel();
         out.setLayout(new BoxLayout(out, BoxLayout.Y_AXIS));
-        out.add(line(addMode, removeMode, labelled("New point", newPoint), addPoint));
-        out.add(line(labelled("Force at", excitation), labelled("Response at", response)));
-        out.add(line(labelled("Absorbers", count), labelled("at", absorberPoint), labelled("tuned", tuning),
+        modesParts.add(scroll);
+        modesParts.add(line(addMode, removeMode, labelled("New point", newPoint), addPoint));
+        modesParts.add(line(labelled("Force at", excitation), labelled("Response at", response)));
+        modesParts.add(line(labelled("Absorbers", count), labelled("at", absorberPoint), labelled("tuned", tuning),
                 labelled("fitted to", target)));
-        out.add(line(arrangement));
+        modesParts.add(line(arrangement));
+        modesParts.subList(1, modesParts.size()).forEach(out::add);
+        asModesLine = line(asModes);
+        out.add(asModesLine);
         out.add(line(problem));
         return out;
     }
@@ -118,6 +129,7 @@ final class ModesTable {
         model.typed = (row, column, text) -> change("structure.modes.cell",
                 p -> ModesEdits.withCell(p, row, column, text, Locale.getDefault(Locale.Category.FORMAT)));
         addMode.addActionListener(e -> change("structure.modes.add", ModesEdits::withModeAdded));
+        asModes.addActionListener(e -> change("structure.modes.asModes", ModesEdits::asModes));
         removeMode.addActionListener(e -> {
             int row = table.getSelectedRow();
             change("structure.modes.remove", p -> {
@@ -173,14 +185,22 @@ final class ModesTable {
         return panel;
     }
 
-    /** @param p the project: its modes shown, or the table hidden when it gives its structure as one mode */
+    /**
+     * @param p the project: its modes shown, or, when it gives its structure as one mode, only the
+     *     button that describes it by its modes
+     */
     void show(Project p) {
         if (!p.equals(shown)) {
             problem.setText(" ");
         }
         shown = p;
-        panel.setVisible(p.modes() != null);
-        if (p.modes() == null) {
+        boolean given = p.modes() != null;
+        panel.setVisible(true);
+        modesParts.forEach(c -> c.setVisible(given));
+        asModesLine.setVisible(!given);
+        heading.setText(given ? "The structure's modes (double-click a cell to change it)"
+                : "Several modes, named points or several absorbers?");
+        if (!given) {
             return;
         }
         if (table.isEditing() && !model.storing) {

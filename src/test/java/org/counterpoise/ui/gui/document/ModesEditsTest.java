@@ -10,7 +10,10 @@ import java.io.StringReader;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import org.counterpoise.core.design.DesignResult;
+import org.counterpoise.core.design.Designer;
 import org.counterpoise.core.error.InvalidInputException;
+import org.counterpoise.core.model.Structure;
 import org.counterpoise.core.optim.AbsorberSetTuning;
 import org.counterpoise.core.units.Unit;
 import org.counterpoise.io.preset.Presets;
@@ -21,6 +24,7 @@ import org.counterpoise.io.project.Project;
 import org.counterpoise.io.project.ProjectReader;
 import org.counterpoise.io.project.ProjectWriter;
 import org.counterpoise.io.project.QuantityInput;
+import org.counterpoise.io.project.SeveralModes;
 import org.counterpoise.io.text.UnitSystem;
 import org.junit.jupiter.api.Test;
 
@@ -157,6 +161,47 @@ class ModesEditsTest {
         assertEquals(p.absorbers(), back.absorbers());
         assertNull(GALLERY.modes().modes().get(0).modeShape().get("stair"));
         assertFalse(ProjectWriter.toJson(p).contains("mode_shape_at_absorber"), "a file of modes keeps its format");
+    }
+
+    @Test
+    void aSingleModeIsDescribedByItsModesAsTheDesignSeesIt() {
+        // the invented pump skid: 34 kN weight, 23.5 Hz, loss factor 0.04, mode shape 0.85 at the absorber
+        Project skid = Presets.load("pump-skid-mezzanine.json").project();
+        Project modal = ModesEdits.asModes(skid);
+        assertEquals(1, modal.modes().modes().size());
+        ModeInput mode = modal.modes().modes().get(0);
+        assertEquals(SeveralModes.SINGLE_MODE, mode.name());
+        assertEquals(new QuantityInput(23.5, Unit.HERTZ), mode.naturalFrequency());
+        assertEquals(skid.structure().damping(), mode.damping());
+        // effective modal mass m / phi^2 (the modal mass and the shape go together; Ewins 2000, Modal Testing,
+        // 2nd ed., section 2.3): the
+        // weight over standard gravity 9.80665 m/s^2 (3rd CGPM, 1901), 3467.035 kg, over 0.85^2: 4798.665 kg
+        assertEquals(4798.66453166084, mode.modalMass().si(), 1e-6);
+        assertEquals(Map.of(SeveralModes.SINGLE_POINT, 1.0), mode.modeShape());
+        assertEquals(SeveralModes.SINGLE_POINT, modal.modes().excitationPoint());
+        assertEquals(new AbsorbersInput(1, AbsorberSetTuning.UNIFORM, SeveralModes.SINGLE_POINT, null),
+                modal.absorbers());
+        // the design sees the same single mode
+        Structure before = skid.toStructure();
+        Structure after = modal.toStructure();
+        assertEquals(before.effectiveMass(), after.effectiveMass(), 1e-9 * before.effectiveMass());
+        assertEquals(before.naturalFrequency(), after.naturalFrequency(), 1e-9 * before.naturalFrequency());
+        assertEquals(before.dampingRatio(), after.dampingRatio(), 1e-12);
+        // and designs as it did: the single-mode design's absorber and peak (the 2-DOF algebra) to 1e-9
+        DesignResult single = Designer.design(skid.toStudy());
+        DesignResult asModes = Designer.design(modal.toStudy());
+        assertEquals(single.absorber().stiffness(), asModes.absorber().stiffness(), 1e-9 * single.absorber().stiffness());
+        assertEquals(single.responseAfter().value(), asModes.responseAfter().value(),
+                1e-9 * single.responseAfter().value());
+        Project back = ProjectReader.read(new StringReader(ProjectWriter.toJson(modal))).project();
+        assertEquals(modal, back, "written and read back equal");
+
+        // several absorbers on one mode keep their count and tuning (the invented test rig: 3, uniform)
+        Project rig = ModesEdits.asModes(Presets.load("split-mass-test-rig.json").project());
+        assertEquals(new AbsorbersInput(3, AbsorberSetTuning.UNIFORM, SeveralModes.SINGLE_POINT, null), rig.absorbers());
+        // the rooftop fan is driven by an unbalance: modes are designed for a force, so it is refused
+        assertRefused(() -> ModesEdits.asModes(Presets.load("rooftop-fan-platform.json").project()),
+                "Describe the structure by its modes", "disturbance.kind");
     }
 
     private static void assertRefused(Runnable edit, String... said) {

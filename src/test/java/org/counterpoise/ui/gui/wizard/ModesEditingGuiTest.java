@@ -194,6 +194,46 @@ class ModesEditingGuiTest {
         screenshot("modes-editor-us");
     }
 
+    /** A structure of one mode described by its modes, one undoable edit; refused where modes cannot be designed. */
+    @Test
+    void aSingleModeIsDescribedByItsModesAndUndone() throws Exception {
+        Locale.setDefault(Locale.Category.FORMAT, Locale.US);
+        frame = onEdt(() -> {
+            WizardFrame f = new WizardFrame();
+            f.setBounds(0, 0, 1400, 880);
+            f.setVisible(true);
+            return f;
+        });
+        settled("first design");
+        load(Presets.load("rooftop-fan-platform.json"));
+        onEdt(() -> {
+            frame.showStep(0);
+            return null;
+        });
+        table = onEdt(() -> (JTable) Edt.find(frame.getContentPane(), "structure.modes"));
+        assertFalse(onEdt(table::isShowing), "no table for one mode");
+        click("structure.modes.asModes");
+        assertTrue(problem().contains("disturbance.kind"), problem()); // an unbalance: modes take a force
+        assertEquals(null, onEdt(() -> frame.document().project().modes()));
+
+        LoadedProject skid = Presets.load("pump-skid-mezzanine.json");
+        load(skid);
+        screenshot("modes-editor-one-mode");
+        click("structure.modes.asModes");
+        assertTrue(onEdt(table::isShowing), "the table of its one mode");
+        List<String> mode = row(0);
+        assertEquals(List.of("structure", "23.5"), mode.subList(0, 2));
+        // the effective modal mass m / phi^2 = (34 kN / 9.80665 m/s^2) / 0.85^2 = 4798.66 kg, six figures
+        assertEquals("4798.66", mode.get(ModesEdits.MASS));
+        assertEquals("1", mode.get(ModesEdits.FIRST_POINT));
+        assertTrue(onEdt(frame::dirty));
+        settled("designed as modes");
+        screenshot("modes-editor-as-modes");
+        assertTrue(onEdt(() -> frame.document().undo()));
+        assertEquals(skid.project(), onEdt(() -> frame.document().project()));
+        assertFalse(onEdt(table::isShowing), "one mode again");
+    }
+
     /** Types into a cell's editor and presses Enter's equivalent (the editor is stopped). */
     private void type(int row, int column, String text) throws Exception {
         onEdt(() -> {
