@@ -5,6 +5,7 @@ import java.awt.Color;
 import java.awt.Dimension;
 import java.awt.FlowLayout;
 import java.awt.Font;
+import java.awt.event.MouseEvent;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
@@ -23,6 +24,7 @@ import javax.swing.JTable;
 import javax.swing.JTextField;
 import javax.swing.SpinnerNumberModel;
 import javax.swing.table.AbstractTableModel;
+import javax.swing.table.JTableHeader;
 import javax.swing.table.TableModel;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.optim.AbsorberSetProblem;
@@ -49,7 +51,18 @@ final class ModesTable {
     /** The most modes shown at once before the table scrolls. */
     private static final int ROWS_IN_VIEW = 8;
     private final Cells model = new Cells();
-    private final JTable table = new JTable(model);
+    private final JTable table = new JTable(model) {
+        @Override
+        protected JTableHeader createDefaultTableHeader() {
+            return new JTableHeader(columnModel) {
+                @Override
+                public String getToolTipText(MouseEvent e) {
+                    int column = columnAtPoint(e.getPoint());
+                    return column < 0 ? null : getColumnName(column); // a narrow column's heading, whole
+                }
+            };
+        }
+    };
     private final JScrollPane scroll = new JScrollPane(table);
     private final JButton addMode = new JButton("Add a mode");
     private final JButton removeMode = new JButton("Remove the selected mode");
@@ -82,21 +95,21 @@ final class ModesTable {
         table.setName("structure.modes");
         table.putClientProperty("terminateEditOnFocusLost", Boolean.TRUE);
         table.getTableHeader().setReorderingAllowed(false);
-        name(addMode, "structure.modes.add");
-        name(removeMode, "structure.modes.remove");
-        name(newPoint, "structure.modes.newPoint");
-        name(addPoint, "structure.modes.addPoint");
-        name(asModes, "structure.modes.asModes");
+        addMode.setName("structure.modes.add");
+        removeMode.setName("structure.modes.remove");
+        newPoint.setName("structure.modes.newPoint");
+        addPoint.setName("structure.modes.addPoint");
+        asModes.setName("structure.modes.asModes");
         asModes.setToolTipText("One mode at one point (\"absorber point\"), the effective modal mass m/\u03c6\u00b2 there:"
                 + " then add modes and points");
-        name(excitation, "structure.modes.excitation");
-        name(response, "structure.modes.response");
-        name(absorberPoint, "structure.modes.absorberPoint");
-        name(count, "structure.modes.count");
-        name(tuning, "structure.modes.tuning");
-        name(target, "structure.modes.target");
-        name(arrangement, "structure.modes.points");
-        name(problem, "structure.modes.problem");
+        excitation.setName("structure.modes.excitation");
+        response.setName("structure.modes.response");
+        absorberPoint.setName("structure.modes.absorberPoint");
+        count.setName("structure.modes.count");
+        tuning.setName("structure.modes.tuning");
+        target.setName("structure.modes.target");
+        arrangement.setName("structure.modes.points");
+        problem.setName("structure.modes.problem");
         problem.setForeground(new Color(0xB0, 0x20, 0x20));
         ItemWords.show(tuning, AbsorberSetTuning.class, t -> t == AbsorberSetTuning.UNIFORM
                 ? "uniform spread" : "each its own");
@@ -115,8 +128,8 @@ final class ModesTable {
         modesParts.add(scroll);
         modesParts.add(line(addMode, removeMode, labelled("New point", newPoint), addPoint));
         modesParts.add(line(labelled("Force at", excitation), labelled("Response at", response)));
-        modesParts.add(line(labelled("Absorbers", count), labelled("at", absorberPoint), labelled("tuned", tuning),
-                labelled("fitted to", target)));
+        modesParts.add(line(labelled("Absorbers", count), labelled("at", absorberPoint), labelled("tuned", tuning)));
+        modesParts.add(line(labelled("Fitted to", target)));
         modesParts.add(line(arrangement));
         modesParts.subList(1, modesParts.size()).forEach(out::add);
         asModesLine = line(asModes);
@@ -291,10 +304,6 @@ final class ModesTable {
     private static String wrapped(String message) {
         return "<html><div style='width:700px'>" + PlainText.escape(message).replace("&", "&amp;")
                 .replace("<", "&lt;") + "</div></html>";
-    }
-
-    private static void name(JComponent c, String name) {
-        c.setName(name);
     }
 
     private static JPanel labelled(String words, JComponent field) {

@@ -228,7 +228,7 @@ final class StructureStep extends Step {
             // the modes are edited in their table; the greyed fields show the target mode at the
             // absorbers' point, the single mode the design uses (never the fields of a project shown before)
             showTargetMode(p);
-            measuredNote.setText("the structure's modes, edited in the table below; shown: the target mode the design uses");
+            measuredNote.setText("the modes in the table below; shown: the mode the design targets");
             measuredNote.setToolTipText(null);
             return;
         }

@@ -4,6 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.awt.Component;
 import java.awt.Rectangle;
 import java.awt.Robot;
 import java.awt.image.BufferedImage;
@@ -192,6 +193,27 @@ class ModesEditingGuiTest {
                 .get(1).modalMass()));
         settled("US customary");
         screenshot("modes-editor-us");
+
+        // on a small screen (960 x 540) every control of the table is within the page's width, none cut
+        onEdt(() -> {
+            frame.setBounds(0, 0, 960, 540);
+            frame.validate();
+            return null;
+        });
+        for (String name : List.of("structure.modes.add", "structure.modes.remove", "structure.modes.newPoint",
+                "structure.modes.addPoint", "structure.modes.excitation", "structure.modes.response",
+                "structure.modes.count", "structure.modes.absorberPoint", "structure.modes.tuning",
+                "structure.modes.target")) {
+            assertTrue(onEdt(() -> {
+                Component c = Edt.find(frame.getContentPane(), name);
+                JScrollPane page = (JScrollPane) SwingUtilities.getAncestorOfClass(JScrollPane.class, c);
+                Rectangle r = SwingUtilities.convertRectangle(c.getParent(), c.getBounds(), page.getViewport().getView());
+                return r.x + r.width <= page.getViewport().getExtentSize().width;
+            }), name + " within the page's width at 960 x 540");
+        }
+        assertFalse(onEdt(() -> ((JScrollPane) SwingUtilities.getAncestorOfClass(JScrollPane.class, table.getParent()
+                .getParent())).getHorizontalScrollBar().isVisible()), "the page needs no scrolling sideways at 960 x 540");
+        screenshot("modes-editor-960x540");
     }
 
     /** A structure of one mode described by its modes, one undoable edit; refused where modes cannot be designed. */
