@@ -9,6 +9,7 @@ import java.awt.event.MouseEvent;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import java.util.function.BooleanSupplier;
 import java.util.function.Consumer;
 import java.util.function.Supplier;
 import java.util.function.UnaryOperator;
@@ -23,7 +24,6 @@ import javax.swing.JSpinner;
 import javax.swing.JTable;
 import javax.swing.JTextField;
 import javax.swing.SpinnerNumberModel;
-import javax.swing.table.AbstractTableModel;
 import javax.swing.table.JTableHeader;
 import javax.swing.table.TableModel;
 import org.counterpoise.core.error.InvalidInputException;
@@ -50,7 +50,7 @@ final class ModesTable {
     static final String NEAREST = "the mode nearest the band";
     /** The most modes shown at once before the table scrolls. */
     private static final int ROWS_IN_VIEW = 8;
-    private final Cells model = new Cells();
+    private final ModeCells model = new ModeCells();
     private final JTable table = new JTable(model) {
         @Override
         protected JTableHeader createDefaultTableHeader() {
@@ -84,14 +84,20 @@ final class ModesTable {
     private final List<JComponent> modesParts = new ArrayList<>();
     private JPanel asModesLine;
     private final Consumer<Supplier<Edit>> commit;
+    private final BooleanSupplier singleModeTyped;
     /** The project the table shows (every change is made from it). */
     private Project shown;
     /** True while the controls are filled from a project: their listeners write nothing. */
     private boolean filling;
 
-    /** @param commit writes an edit to the document as one undo step (the step's route for a pick) */
-    ModesTable(Consumer<Supplier<Edit>> commit) {
+    /**
+     * @param commit writes an edit to the document as one undo step (the step's route for a pick)
+     * @param singleModeTyped true when the single mode's fields all hold numbers (what is described by
+     *     modes is the project's single mode: text not yet a number would be lost)
+     */
+    ModesTable(Consumer<Supplier<Edit>> commit, BooleanSupplier singleModeTyped) {
         this.commit = commit;
+        this.singleModeTyped = singleModeTyped;
         table.setName("structure.modes");
         table.putClientProperty("terminateEditOnFocusLost", Boolean.TRUE);
         table.getTableHeader().setReorderingAllowed(false);
@@ -139,10 +145,16 @@ final class ModesTable {
     }
 
     private void listen() {
-        model.typed = (row, column, text) -> change("structure.modes.cell",
-                p -> ModesEdits.withCell(p, row, column, text, Locale.getDefault(Locale.Category.FORMAT)));
+        model.onTyped((row, column, text) -> change("structure.modes.cell",
+                p -> ModesEdits.withCell(p, row, column, text, Locale.getDefault(Locale.Category.FORMAT))));
         addMode.addActionListener(e -> change("structure.modes.add", ModesEdits::withModeAdded));
-        asModes.addActionListener(e -> change("structure.modes.asModes", ModesEdits::asModes));
+        asModes.addActionListener(e -> change("structure.modes.asModes", p -> {
+            if (!singleModeTyped.getAsBoolean()) {
+                throw InvalidInputException.unusable("Describe the structure by its modes", "a field above is not a"
+                        + " number yet", "correct it first");
+            }
+            return ModesEdits.asModes(p);
+        }));
         removeMode.addActionListener(e -> {
             int row = table.getSelectedRow();
             change("structure.modes.remove", p -> {
@@ -216,7 +228,7 @@ final class ModesTable {
         if (!given) {
             return;
         }
-        if (table.isEditing() && !model.storing) {
+        if (table.isEditing() && !model.storing()) {
             table.getCellEditor().cancelCellEditing();
         }
         filling = true;
@@ -234,12 +246,12 @@ final class ModesTable {
             tuning.setSelectedItem(a.tuning());
             List<String> targets = new ArrayList<>(List.of(NEAREST));
             p.modes().modes().forEach(m -> targets.add(m.name()));
-            fill(target, targets, a.targetMode() == null ? NEAREST : a.targetMode());
+            // with one absorber per mode the single-mode sections take the first of its modes by default
+            fill(target, targets, a.targetMode() != null ? a.targetMode() : a.onePerMode() ? a.modes().get(0) : NEAREST);
             absorberControls.forEach(c -> c.setEnabled(!a.onePerMode()));
-            arrangement.setText(a.onePerMode() ? "One absorber per mode, as the file gives them: "
-                    + PlainText.quote(String.join(" and ", a.modes())) + (a.points().isEmpty() ? ""
-                            : " at " + PlainText.quote(String.join(" and ", a.points())))
-                    + " (their count, tuning and points are not edited here)" : " ");
+            arrangement.setText(a.onePerMode() ? wrapped("One absorber per mode, as the file gives them: "
+                    + String.join(" and ", a.modes()) + (a.points().isEmpty() ? "" : " at " + String.join(" and ",
+                            a.points())) + " (their count, tuning and points are not edited here)") : " ");
             removeMode.setEnabled(p.modes().modes().size() > 1);
         } finally {
             filling = false;
@@ -302,7 +314,7 @@ final class ModesTable {
     }
 
     private static String wrapped(String message) {
-        return "<html><div style='width:700px'>" + PlainText.escape(message).replace("&", "&amp;")
+        return "<html><div style='width:560px'>" + PlainText.escape(message).replace("&", "&amp;")
                 .replace("<", "&lt;") + "</div></html>";
     }
 
@@ -322,75 +334,5 @@ final class ModesTable {
         }
         p.setAlignmentX(0f);
         return p;
-    }
-
-    /** The cells as text; a typed cell goes to {@link #typed}, never straight into the cells. */
-    private static final class Cells extends AbstractTableModel {
-        private List<String> headings = List.of();
-        private List<List<String>> rows = List.of();
-        private CellTyped typed = (r, c, t) -> { };
-        /** True while a typed value is handed on (the editor is being closed by the table itself). */
-        private boolean storing;
-
-        void update(List<String> newHeadings, List<List<String>> newRows) {
-            boolean sameColumns = newHeadings.equals(headings);
-            headings = List.copyOf(newHeadings);
-            rows = List.copyOf(newRows);
-            if (sameColumns) {
-                fireTableDataChanged();
-            } else {
-                fireTableStructureChanged();
-            }
-        }
-
-        @Override
-        public int getRowCount() {
-            return rows.size();
-        }
-
-        @Override
-        public int getColumnCount() {
-            return headings.size();
-        }
-
-        @Override
-        public String getColumnName(int column) {
-            return headings.get(column);
-        }
-
-        @Override
-        public Class<?> getColumnClass(int column) {
-            return String.class;
-        }
-
-        @Override
-        public Object getValueAt(int row, int column) {
-            return rows.get(row).get(column);
-        }
-
-        @Override
-        public boolean isCellEditable(int row, int column) {
-            return true;
-        }
-
-        @Override
-        public void setValueAt(Object value, int row, int column) {
-            String text = String.valueOf(value);
-            if (text.equals(rows.get(row).get(column))) {
-                return;
-            }
-            storing = true;
-            try {
-                typed.typed(row, column, text);
-            } finally {
-                storing = false;
-            }
-        }
-    }
-
-    /** What is told when a cell is typed. */
-    @FunctionalInterface
-    private interface CellTyped {
-        void typed(int row, int column, String text);
     }
 }

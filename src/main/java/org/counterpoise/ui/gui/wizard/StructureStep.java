@@ -72,7 +72,7 @@ final class StructureStep extends Step {
     /** True when the project gives its structure as modes: they are edited in their table, not in the fields. */
     private boolean severalModes;
     /** The modes, edited in place, when the project gives its structure as modes. */
-    private final ModesTable modes = new ModesTable(this::commitChoice);
+    private final ModesTable modes = new ModesTable(this::commitChoice, this::fieldsValid);
 
     StructureStep() {
         massForm.setName("structure.massForm");

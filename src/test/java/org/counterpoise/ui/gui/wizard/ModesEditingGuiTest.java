@@ -241,6 +241,19 @@ class ModesEditingGuiTest {
         LoadedProject skid = Presets.load("pump-skid-mezzanine.json");
         load(skid);
         screenshot("modes-editor-one-mode");
+        // text that is not a number yet in the single mode's fields: said, nothing described
+        JTextField weight = onEdt(() -> (JTextField) Edt.find(frame.getContentPane(), "structure.mass"));
+        onEdt(() -> {
+            weight.setText("34 kN");
+            return null;
+        });
+        click("structure.modes.asModes");
+        assertTrue(problem().contains("not a number yet"), problem());
+        assertEquals(null, onEdt(() -> frame.document().project().modes()));
+        onEdt(() -> {
+            weight.setText("34");
+            return null;
+        });
         click("structure.modes.asModes");
         assertTrue(onEdt(table::isShowing), "the table of its one mode");
         List<String> mode = row(0);
@@ -254,6 +267,22 @@ class ModesEditingGuiTest {
         assertTrue(onEdt(() -> frame.document().undo()));
         assertEquals(skid.project(), onEdt(() -> frame.document().project()));
         assertFalse(onEdt(table::isShowing), "one mode again");
+
+        // one absorber per mode (format 7): the modes are edited, the arrangement is the file's
+        load(Presets.load("frame-bending-and-twisting.json"));
+        assertFalse(onEdt(() -> Edt.find(frame.getContentPane(), "structure.modes.count").isEnabled()));
+        assertFalse(onEdt(() -> Edt.find(frame.getContentPane(), "structure.modes.target").isEnabled()));
+        String arrangement = onEdt(() -> ((JLabel) Edt.find(frame.getContentPane(), "structure.modes.points"))
+                .getText());
+        assertTrue(arrangement.contains("One absorber per mode, as the file gives them: bending and twisting at"
+                + " midspan and corner"), arrangement);
+        assertEquals("bending", onEdt(() -> ((JComboBox<?>) Edt.find(frame.getContentPane(), "structure.modes.target"))
+                .getSelectedItem()), "the mode the single-mode sections take");
+        type(0, ModesEdits.DAMPING, "0.02");
+        assertEquals(" ", problem());
+        assertEquals("0.02", row(0).get(ModesEdits.DAMPING));
+        settled("one absorber per mode, edited");
+        screenshot("modes-editor-one-per-mode");
     }
 
     /** Types into a cell's editor and presses Enter's equivalent (the editor is stopped). */
