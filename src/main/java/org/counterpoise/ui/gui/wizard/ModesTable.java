@@ -7,6 +7,7 @@ import java.awt.FlowLayout;
 import java.awt.Font;
 import java.awt.event.MouseEvent;
 import java.util.ArrayList;
+import java.util.EventObject;
 import java.util.List;
 import java.util.Locale;
 import java.util.function.BooleanSupplier;
@@ -25,6 +26,7 @@ import javax.swing.JTable;
 import javax.swing.JTextField;
 import javax.swing.SpinnerNumberModel;
 import javax.swing.table.JTableHeader;
+import javax.swing.text.JTextComponent;
 import javax.swing.table.TableModel;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.optim.AbsorberSetProblem;
@@ -52,6 +54,15 @@ final class ModesTable {
     private static final int ROWS_IN_VIEW = 8;
     private final ModeCells model = new ModeCells();
     private final JTable table = new JTable(model) {
+        @Override
+        public boolean editCellAt(int row, int column, EventObject e) {
+            boolean started = super.editCellAt(row, column, e);
+            if (started && !(e instanceof MouseEvent) && getEditorComponent() instanceof JTextComponent text) {
+                text.selectAll(); // typing into a cell replaces its value, as in a spreadsheet
+            }
+            return started;
+        }
+
         @Override
         protected JTableHeader createDefaultTableHeader() {
             return new JTableHeader(columnModel) {

@@ -7,6 +7,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.awt.Component;
 import java.awt.Rectangle;
 import java.awt.Robot;
+import java.awt.event.KeyEvent;
 import java.awt.image.BufferedImage;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -282,6 +283,22 @@ class ModesEditingGuiTest {
         assertEquals(" ", problem());
         assertEquals("0.02", row(0).get(ModesEdits.DAMPING));
         settled("one absorber per mode, edited");
+        // typed with the keyboard into a selected cell: the typing replaces the value, Enter applies it
+        onEdt(() -> {
+            table.changeSelection(1, ModesEdits.FREQUENCY, false, false);
+            table.requestFocusInWindow();
+            return null;
+        });
+        Edt.waitFor(() -> Edt.callQuietly(table::isFocusOwner), "the table has the keyboard");
+        Robot keys = new Robot();
+        for (int key : new int[] {KeyEvent.VK_1, KeyEvent.VK_4, KeyEvent.VK_PERIOD, KeyEvent.VK_2, KeyEvent.VK_ENTER}) {
+            keys.keyPress(key);
+            keys.keyRelease(key);
+        }
+        Edt.waitFor(() -> Edt.callQuietly(() -> new QuantityInput(14.2, Unit.HERTZ).equals(frame.document().project()
+                .modes().modes().get(1).naturalFrequency())), "twisting at 14.2 Hz as typed");
+        assertEquals("14.2", row(1).get(ModesEdits.FREQUENCY));
+        settled("typed with the keyboard");
         screenshot("modes-editor-one-per-mode");
     }
 
