@@ -317,20 +317,32 @@ public final class ModesEdits {
     }
 
     /**
-     * The edited project when its structure and absorbers can still be designed: the target mode
-     * seen at the absorbers' point ({@link Project#toStructure}, which checks every mode, point and
-     * absorber field). A problem of another section (a disturbance that several modes do not take,
-     * found first) is left for the design to report under its own field.
+     * The edited project unless it turns modes that could be designed into modes that cannot: the
+     * target mode seen at the absorbers' point ({@link Project#toStructure}, which checks every mode,
+     * point and absorber field). Modes that were already unusable (a file opened so) take any edit, so
+     * their problems can be mended one at a time; the design says what is still wrong. A problem of
+     * another section (a disturbance that several modes do not take, found first) is left for the
+     * design to report under its own field.
      */
     private static Project usable(Project before, Project after, String what) {
-        try {
-            after.toStructure();
-        } catch (InvalidInputException e) {
-            if (e.field().startsWith("structure") || e.field().startsWith("absorbers") || e.field().equals("target mode")) {
-                throw InvalidInputException.unusable(what, "not taken", e.getMessage());
-            }
+        if (modesProblem(before) != null) {
+            return after;
+        }
+        InvalidInputException problem = modesProblem(after);
+        if (problem != null) {
+            throw InvalidInputException.unusable(what, "not taken", problem.getMessage());
         }
         return after;
+    }
+
+    /** @return the problem of the project's modes, points or absorbers, or null when it has none */
+    private static InvalidInputException modesProblem(Project p) {
+        try {
+            p.toStructure();
+            return null;
+        } catch (InvalidInputException e) {
+            return SeveralModes.ofStructureOrAbsorbers(e) ? e : null;
+        }
     }
 
     private static int named(ModesInput m, String name) {

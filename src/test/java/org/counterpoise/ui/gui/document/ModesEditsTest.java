@@ -7,6 +7,7 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.StringReader;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
@@ -20,6 +21,7 @@ import org.counterpoise.io.preset.Presets;
 import org.counterpoise.io.project.AbsorbersInput;
 import org.counterpoise.io.project.DampingInput;
 import org.counterpoise.io.project.ModeInput;
+import org.counterpoise.io.project.ModesInput;
 import org.counterpoise.io.project.Project;
 import org.counterpoise.io.project.ProjectReader;
 import org.counterpoise.io.project.ProjectWriter;
@@ -106,6 +108,24 @@ class ModesEditsTest {
         // the absorbers sit at mid-span and are fitted to bending: a bending shape of 0 there leaves them nothing
         assertRefused(() -> ModesEdits.withCell(GALLERY, 0, ModesEdits.FIRST_POINT + 1, "0", EN),
                 "bending, mode shape at midspan 0", "midspan");
+    }
+
+    @Test
+    void modesOpenedUnusableTakeEditsOneAtATime() {
+        // a file whose target mode does not move the absorbers' point (bending 0 at mid-span): refused by
+        // the design, yet each edit is taken so the user can mend it
+        ModeInput bending = GALLERY.modes().modes().get(0);
+        Map<String, Double> shape = new LinkedHashMap<>(bending.modeShape()); // display, midspan: as written
+        shape.put("midspan", 0.0);
+        ModeInput still = new ModeInput(bending.name(), bending.naturalFrequency(), bending.damping(),
+                bending.modalMass(), shape);
+        Project broken = GALLERY.withSeveral(new ModesInput(List.of(still,
+                GALLERY.modes().modes().get(1)), "display", "midspan"), GALLERY.absorbers());
+        assertThrows(InvalidInputException.class, broken::toStructure);
+        Project other = ModesEdits.withCell(broken, 1, ModesEdits.FREQUENCY, "9.3", EN);
+        assertEquals(new QuantityInput(9.3, Unit.HERTZ), other.modes().modes().get(1).naturalFrequency());
+        Project mended = ModesEdits.withCell(other, 0, ModesEdits.FIRST_POINT + 1, "1", EN);
+        assertEquals(Unit.HERTZ.toSi(8.2), mended.toStructure().naturalFrequency(), 1e-9, "designable again");
     }
 
     @Test
