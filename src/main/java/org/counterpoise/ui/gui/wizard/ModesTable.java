@@ -14,6 +14,7 @@ import java.util.function.BooleanSupplier;
 import java.util.function.Consumer;
 import java.util.function.Supplier;
 import java.util.function.UnaryOperator;
+import javax.swing.BorderFactory;
 import javax.swing.BoxLayout;
 import javax.swing.JButton;
 import javax.swing.JComboBox;
@@ -77,7 +78,7 @@ final class ModesTable {
     private final JScrollPane scroll = new JScrollPane(table);
     private final JButton addMode = new JButton("Add a mode");
     private final JButton removeMode = new JButton("Remove the selected mode");
-    private final JTextField newPoint = new JTextField(9);
+    private final JTextField newPoint = new JTextField(7);
     private final JButton addPoint = new JButton("Add the point");
     private final JButton asModes = new JButton("Describe the structure by its modes");
     private final JLabel heading = new JLabel(" ");
@@ -132,6 +133,7 @@ final class ModesTable {
                 ? "uniform spread" : "each its own");
         scroll.setPreferredSize(new Dimension(560, 96));
         heading.setFont(heading.getFont().deriveFont(Font.BOLD));
+        panel.setBorder(BorderFactory.createEmptyBorder(0, 12, 0, 0)); // in line with the form's headings
         panel.add(heading, BorderLayout.NORTH);
         panel.add(scroll, BorderLayout.CENTER);
         panel.add(controls(), BorderLayout.SOUTH);
