@@ -39,6 +39,8 @@ import org.counterpoise.core.system.ModalStructure;
 public record AbsorberLayout(ModalStructure structure, List<String> modeNames, String excitationPoint,
         String responsePoint, String absorberPoint, OptionalInt targetMode, int count, AbsorberSetTuning tuning,
         Optional<JointArrangement> joint, OptionalDouble spilloverLimit) {
+    /** The field a problem of the absorbers' target mode names (a mode that does not move their point). */
+    public static final String TARGET_MODE_FIELD = "target mode";
 
     /** Validates the layout; a message names the field. */
     public AbsorberLayout {
@@ -136,7 +138,7 @@ public record AbsorberLayout(ModalStructure structure, List<String> modeNames, S
     public Structure seenAt(int mode, String point) {
         Mode m = structure.modes().get(mode);
         if (m.shapeAt(point) == 0.0) {
-            throw new InvalidInputException("target mode", modeNames.get(mode),
+            throw new InvalidInputException(TARGET_MODE_FIELD, modeNames.get(mode),
                     "a mode that moves the absorbers' point " + point + " (its mode-shape value there is 0)");
         }
         double mass = m.massSeenAt(point);

@@ -82,7 +82,7 @@ public final class ProjectReader {
         JsonFields structureFields = top.object("structure");
         ModesInput modes = ModesJson.read(structureFields);
         StructureInput structure = modes == null ? structure(structureFields)
-                : new StructureInput(null, null, null, null, null, null, 1.0);
+                : StructureInput.GIVEN_AS_MODES;
         DisturbanceInput disturbance = disturbance(top.object("disturbance"));
         AbsorberInput absorber = absorber(top.object("absorber"), version);
         JsonFields robust = top.optionalObject("robustness");

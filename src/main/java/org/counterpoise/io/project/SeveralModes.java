@@ -132,6 +132,16 @@ public final class SeveralModes {
     }
 
     /**
+     * @param e a problem found in a project
+     * @return true when it is a problem of the structure (its modes and points) or of the absorbers,
+     *     not of another section (the disturbance, the absorber goal...)
+     */
+    public static boolean ofStructureOrAbsorbers(InvalidInputException e) {
+        return e.field().startsWith("structure") || e.field().startsWith(ModesJson.ABSORBERS)
+                || e.field().equals(AbsorberLayout.TARGET_MODE_FIELD);
+    }
+
+    /**
      * @param p a project whose structure is given as several modes
      * @return the target mode as seen at the absorbers' point: a single mode of the effective modal
      *     mass m_r / phi_r(a)^2, the mode's natural frequency and damping ratio, and shape value 1

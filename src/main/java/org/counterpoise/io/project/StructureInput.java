@@ -23,6 +23,9 @@ public record StructureInput(QuantityInput mass, QuantityInput weight, QuantityI
         QuantityInput naturalFrequency, QuantityInput staticDeflection, DampingInput damping,
         double modeShapeAtAbsorber, MeasuredSource measured) {
 
+    /** The single-mode section of a project whose structure is given as modes ({@code structure.modes}): empty. */
+    public static final StructureInput GIVEN_AS_MODES = new StructureInput(null, null, null, null, null, null, 1.0);
+
     /**
      * A structure as typed, not from a measurement.
      * @param mass modal mass

@@ -7,8 +7,10 @@ import org.counterpoise.core.realisation.HardwareChoice;
 import org.counterpoise.core.response.ResponseKind;
 import org.counterpoise.io.measurement.StructureFromMeasurement;
 import org.counterpoise.io.project.AbsorberInput;
+import org.counterpoise.io.project.AbsorbersInput;
 import org.counterpoise.io.project.AcceptanceInput;
 import org.counterpoise.io.project.DisturbanceInput;
+import org.counterpoise.io.project.ModesInput;
 import org.counterpoise.io.project.Project;
 import org.counterpoise.io.project.ProjectIdentity;
 import org.counterpoise.io.project.QuantityInput;
@@ -44,6 +46,19 @@ public final class ProjectEdits {
     public static Edit measuredStructure(StructureInput s, IdentifiedMode mode) {
         return new Edit("structure.measured", "structure from a measurement",
                 p -> StructureFromMeasurement.withUncertainties(p.withStructure(s), mode));
+    }
+
+    /**
+     * An edit of the structure's modes on the structure step's table ({@link ModesEdits}): the modes,
+     * their named points and the absorbers' count, tuning, point and target, all else kept.
+     * @param key the control used
+     * @param edited the project as the table made it (only its modes and absorbers are taken)
+     * @return the edit
+     */
+    public static Edit modes(String key, Project edited) {
+        ModesInput modes = edited.modes();
+        AbsorbersInput absorbers = edited.absorbers();
+        return new Edit(key, "the structure's modes", p -> p.withSeveral(modes, absorbers));
     }
 
     /**

@@ -1,6 +1,8 @@
 package org.counterpoise.ui.gui.wizard;
 
 import java.awt.BorderLayout;
+import java.math.BigDecimal;
+import java.math.MathContext;
 import java.time.LocalDate;
 import java.util.List;
 import javax.swing.JButton;
@@ -67,10 +69,10 @@ final class StructureStep extends Step {
     private final JButton fromMeasurement = new JButton("From a measured response\u2026");
     private final JComponent page;
     private MeasurementDialog measurement;
-    /** True when the project gives its structure as several modes, which this step does not edit yet. */
+    /** True when the project gives its structure as modes: they are edited in their table, not in the fields. */
     private boolean severalModes;
-    /** The modes, read-only, when the project gives several. */
-    private final ModesTable modes = new ModesTable();
+    /** The modes, edited in place, when the project gives its structure as modes. */
+    private final ModesTable modes = new ModesTable(this::commitChoice, this::fieldsValid);
 
     StructureStep() {
         massForm.setName("structure.massForm");
@@ -223,10 +225,10 @@ final class StructureStep extends Step {
             c.setEnabled(!severalModes);
         }
         if (severalModes) {
-            // the modes are kept as the file gives them; the greyed fields show the target mode at the
+            // the modes are edited in their table; the greyed fields show the target mode at the
             // absorbers' point, the single mode the design uses (never the fields of a project shown before)
             showTargetMode(p);
-            measuredNote.setText("several modes in the file, not edited here; shown: the target mode the design uses");
+            measuredNote.setText("the modes in the table below; shown: the mode the design targets");
             measuredNote.setToolTipText(null);
             return;
         }
@@ -253,7 +255,10 @@ final class StructureStep extends Step {
             return;
         }
         select(massForm, 0);
-        showValue(mass, target.modalMass(), Unit.KILOGRAM);
+        Unit massUnit = DisplayUnits.of(Dimension.MASS, p.displayUnits()); // the unit the modes table shows
+        // six figures, as the table: a pound value's conversion tail is not shown
+        showValue(mass, new BigDecimal(massUnit.fromSi(target.modalMass())).round(new MathContext(6)).doubleValue(),
+                massUnit);
         select(stiffnessForm, 1);
         showValue(stiffness, Unit.HERTZ.fromSi(target.naturalFrequency()), Unit.HERTZ);
         select(dampingForm, DampingInput.Measure.RATIO.ordinal());
@@ -264,6 +269,11 @@ final class StructureStep extends Step {
     /** @return the modes table's rows as shown (tests) */
     List<List<String>> modeRows() {
         return modes.rows();
+    }
+
+    /** @return the message under the modes table, or blank (tests) */
+    String modesProblem() {
+        return modes.problem();
     }
 
     @Override
