@@ -40,6 +40,23 @@ class ModesEditsTest {
     private static final Project GALLERY = Presets.load("gallery-floor-two-modes.json").project();
     private static final Locale EN = Locale.US;
 
+    /** A file's spillover limit (format 8) stays through the absorbers' edits and a mode's renaming. */
+    @Test
+    void theSpilloverLimitIsKeptByTheAbsorbersEdits() {
+        AbsorbersInput a = GALLERY.absorbers();
+        Project limited = GALLERY.withSeveral(GALLERY.modes(), new AbsorbersInput(a.count(), a.tuning(), a.point(),
+                a.targetMode(), a.arrangement(), a.modes(), a.points(), 0.8));
+        Project three = ModesEdits.withAbsorbers(limited, 3, a.tuning(), a.point(), a.targetMode());
+        assertEquals(0.8, three.absorbers().spilloverLimit());
+        assertEquals(3, three.absorbers().count());
+        Project renamed = ModesEdits.withCell(limited, 0, ModesEdits.NAME, "flexure", EN);
+        assertEquals(0.8, renamed.absorbers().spilloverLimit());
+        assertEquals("flexure", renamed.absorbers().targetMode());
+        // one absorber takes no limit: it goes with the count (the reader would refuse the pair)
+        assertEquals(null, ModesEdits.withAbsorbers(limited, 1, a.tuning(), a.point(), a.targetMode()).absorbers()
+                .spilloverLimit());
+    }
+
     @Test
     void theCellsAreTheFilesValuesInTheDisplayUnits() {
         assertEquals(List.of("Mode", "Natural frequency (Hz)", "Damping ratio", "Modal mass (kg)", "\u03c6 at display",
