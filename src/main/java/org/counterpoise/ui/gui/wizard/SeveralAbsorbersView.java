@@ -109,7 +109,12 @@ final class SeveralAbsorbersView {
                     .orElseGet(() -> set.gain().map(g -> " (one absorber of the same total mass: "
                             + DisplayUnits.format(set.single().orElseThrow().peak(), Dimension.LENGTH, units) + ")")
                             .orElse("") + set.joint().map(q -> " (each absorber designed on its own mode alone: "
-                            + DisplayUnits.format(q.peak(), Dimension.LENGTH, units) + ")").orElse("")) + ".";
+                            + DisplayUnits.format(q.peak(), Dimension.LENGTH, units) + ")").orElse(""))
+                    + set.spillover().map(l -> l.met() ? "; the peak near each other mode within "
+                            + DisplayUnits.format(l.ratio(), Dimension.RATIO, units) + " times its peak without absorbers (absorbers.spillover_limit), as"
+                            + " asked" : "; spillover limit NOT kept: no design found keeps the peak near each other mode"
+                            + " within " + DisplayUnits.format(l.ratio(), Dimension.RATIO, units) + " times its peak without absorbers").orElse("")
+                    + (set.certified() ? "" : "; the optimum is NOT certified (the best design seen is shown)") + ".";
             Map<String, XYChart> charts = new LinkedHashMap<>();
             charts.put(layout.responsePoint(), SeveralAbsorbersCharts.response(set, units, theme, 640, 380));
             for (String other : new TreeSet<>(layout.structure().points())) {
