@@ -113,6 +113,25 @@ final class DesignRun {
         }
     }
 
+    /** @return what the goal step's change of sizing reads: the structure as entered, and the design on screen */
+    GoalStep.SizingContext sizingContext() {
+        return new GoalStep.SizingContext() {
+            @Override
+            public Structure structure() {
+                try {
+                    return document.project().toStructure();
+                } catch (InvalidInputException e) {
+                    return null;
+                }
+            }
+
+            @Override
+            public DesignResult design() {
+                return shown;
+            }
+        };
+    }
+
     /** @return the result on screen, or null */
     DesignResult shown() {
         return shown;

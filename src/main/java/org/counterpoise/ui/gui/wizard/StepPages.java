@@ -88,8 +88,9 @@ final class StepPages {
     }
 
     /**
-     * Makes the steps not made yet one per event, in order, each after a short pause (the queue
-     * runs between them), and then runs an action.
+     * Makes the steps not made yet in order, each in two events (its components, then attaching it
+     * and showing it the project), each after a short pause (the queue runs between them), and then
+     * runs an action.
      * @param then run on the event thread once every step is made
      */
     void makeRestLater(Runnable then) {
@@ -110,7 +111,11 @@ final class StepPages {
             for (Page<? extends Step> p : pages) {
                 if (!p.made() && !failed.contains(p)) {
                     try {
-                        p.get();
+                        if (p.built()) {
+                            p.get(); // attached and shown the project: made
+                        } else {
+                            p.build(); // its components only; attached in the next event
+                        }
                     } catch (RuntimeException | Error bug) {
                         failed.add(p);
                         throw bug;

@@ -18,8 +18,6 @@ import javax.swing.JLabel;
 import javax.swing.JPanel;
 import javax.swing.UIManager;
 import org.counterpoise.core.design.DesignResult;
-import org.counterpoise.core.error.InvalidInputException;
-import org.counterpoise.core.model.Structure;
 import org.counterpoise.io.preset.Presets;
 import org.counterpoise.io.project.FormatMigration;
 import org.counterpoise.io.project.LoadedProject;
@@ -114,6 +112,9 @@ public final class WizardFrame extends JFrame {
         setJMenuBar(WizardMenus.build(this, files, edits, this::showDetails,
                 name -> files.whenDiscarded(() -> load(Presets.load(name), null)), this::closeRequested,
                 units.menuItems()));
+        if (everyStep) {
+            scenariosSoon();
+        }
         files.bind(getRootPane());
         edits.bind(getRootPane());
         document.addListener(this::documentChanged);
@@ -133,26 +134,20 @@ public final class WizardFrame extends JFrame {
 
     /** Makes the steps not made yet, one per event (the window answers between them), then designs the project. */
     public void makeRestLater() {
-        pages.makeRestLater(run::ready);
+        pages.makeRestLater(() -> {
+            run.ready();
+            scenariosSoon();
+        });
+    }
+
+    /** The example scenarios' names, read in the background once every step is made (their menu's first opening waits for none). */
+    private void scenariosSoon() {
+        WizardMenus.readScenariosSoon(getJMenuBar());
     }
 
     private GoalStep goalStep() {
         GoalStep goal = new GoalStep();
-        goal.sizingContext(new GoalStep.SizingContext() {
-            @Override
-            public Structure structure() {
-                try {
-                    return document.project().toStructure();
-                } catch (InvalidInputException e) {
-                    return null;
-                }
-            }
-
-            @Override
-            public DesignResult design() {
-                return run.shown();
-            }
-        });
+        goal.sizingContext(run.sizingContext());
         return goal;
     }
 
