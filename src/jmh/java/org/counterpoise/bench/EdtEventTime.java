@@ -31,7 +31,8 @@ import org.counterpoise.ui.gui.wizard.WizardFrame;
  * it waits for the task bar to empty and a second more. Prints every long event (duration, start
  * since the log was installed, phase, event, where its time went), then one line
  * {@code long-events N max M ms} and exits. With {@code -Dedt.shots=FOLDER} it also photographs
- * the screen after each click. Run by {@code src/jmh/sh/edt_events.sh} under Xvfb.
+ * the screen after each click; with {@code -Dedt.second=true} it then closes the window and opens a
+ * second one in the same JVM (what remains once classes are loaded and the code compiled). Run by {@code src/jmh/sh/edt_events.sh} under Xvfb.
  */
 public final class EdtEventTime {
     private static final String[] TABS = {"Steady state", "Run-up", "Comparison of methods", "Hardware",
@@ -95,6 +96,20 @@ public final class EdtEventTime {
         robot.keyRelease(KeyEvent.VK_ESCAPE);
         Thread.sleep(800);
         on(() -> true);
+        if (Boolean.getBoolean("edt.second")) {
+            // a second window in the same JVM: what remains once classes are loaded and code is compiled
+            log.phase("second window");
+            on(() -> {
+                frame.dispose();
+                return null;
+            });
+            GuiMain.launch();
+            Thread.sleep(2000);
+            WizardFrame second = waitForWizard();
+            log.phase("second window's design");
+            waitUntil(() -> second.settled() && second.shownResult() != null, 120);
+            waitForTasks(second);
+        }
         System.out.printf("events dispatched %d; longer than %d ms:%n", log.dispatched(), Long.getLong("edt.bound", 50));
         long max = 0;
         for (SlowEventLog.Slow s : log.slow()) {

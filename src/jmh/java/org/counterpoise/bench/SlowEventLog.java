@@ -5,6 +5,8 @@ import java.awt.Component;
 import java.awt.EventQueue;
 import java.awt.Toolkit;
 import java.awt.event.InvocationEvent;
+import java.lang.management.ManagementFactory;
+import java.lang.management.ThreadMXBean;
 import java.util.ArrayList;
 import java.util.Collections;
 import java.util.HashMap;
@@ -19,19 +21,21 @@ import java.util.stream.Collectors;
  * as the top of the system event queue: it times each {@code dispatchEvent}, and a sampler thread
  * takes the event thread's stack every 5 ms while an event runs longer than 20 ms, so a long event
  * says which of the project's methods it spent its time in (the innermost project frame that is not
- * this class, most frequent first) as well as its type and source. Not production code.
+ * this class, most frequent first) as well as its type and source, and the event thread's CPU time
+ * for it (what a loaded machine does not stretch). Not production code.
  */
 public final class SlowEventLog extends EventQueue {
     /** One event longer than the bound. */
-    public record Slow(long startMs, long durationMs, String phase, String event, String where) {
+    public record Slow(long startMs, long durationMs, long cpuMs, String phase, String event, String where) {
         @Override
         public String toString() {
-            return String.format(Locale.ROOT, "%6d ms  at %6d ms  [%s]  %s%n            in %s", durationMs, startMs,
-                    phase, event, where);
+            return String.format(Locale.ROOT, "%6d ms (CPU %4d ms)  at %6d ms  [%s]  %s%n            in %s", durationMs,
+                    cpuMs, startMs, phase, event, where);
         }
     }
 
     private final long boundNanos;
+    private final ThreadMXBean threads = ManagementFactory.getThreadMXBean();
     private final long origin = System.nanoTime();
     private final List<Slow> slow = Collections.synchronizedList(new ArrayList<>());
     private volatile String phase = "start";
@@ -83,6 +87,7 @@ public final class SlowEventLog extends EventQueue {
     @Override
     protected void dispatchEvent(AWTEvent event) {
         long start = System.nanoTime();
+        long cpuStart = threads.getCurrentThreadCpuTime();
         synchronized (lock) {
             dispatcher = Thread.currentThread();
             eventSerial++;
@@ -94,6 +99,7 @@ public final class SlowEventLog extends EventQueue {
             super.dispatchEvent(event);
         } finally {
             long took = System.nanoTime() - start;
+            long cpu = threads.getCurrentThreadCpuTime() - cpuStart;
             String where;
             synchronized (lock) {
                 eventStart = 0;
@@ -102,7 +108,7 @@ public final class SlowEventLog extends EventQueue {
                 samples.clear();
             }
             if (took > boundNanos) {
-                slow.add(new Slow((start - origin) / 1_000_000L, took / 1_000_000L, phaseAtStart, describe(event),
+                slow.add(new Slow((start - origin) / 1_000_000L, took / 1_000_000L, cpu / 1_000_000L, phaseAtStart, describe(event),
                         where.isEmpty() ? "(not sampled)" : where));
             }
         }

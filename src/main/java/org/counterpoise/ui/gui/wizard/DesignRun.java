@@ -3,6 +3,7 @@ package org.counterpoise.ui.gui.wizard;
 import java.util.List;
 import java.util.Optional;
 import java.util.function.Consumer;
+import java.util.function.Supplier;
 import java.util.logging.Level;
 import java.util.logging.Logger;
 import javax.swing.Timer;
@@ -70,6 +71,27 @@ final class DesignRun {
             Page<SheetStep> sheet) {
         List<Page<? extends Step>> all() {
             return List.of(structure, disturbance, goal, hardware, result, robustness, sheet);
+        }
+
+        /**
+         * @param tasks the wizard's task runner
+         * @param messages the wizard's status line
+         * @param sizing what the goal step's change of sizing reads (asked when it is made)
+         * @return the wizard's steps, none made yet; the large ones in parts made ahead of them ({@link Part})
+         */
+        static Steps of(TaskRunner tasks, SheetStep.Messages messages, Supplier<GoalStep.SizingContext> sizing) {
+            Part<CriterionForm> criterion = new Part<>(CriterionForm::new);
+            Part<ToleranceRangesForm> ranges = new Part<>(ToleranceRangesForm::new);
+            ResultStep.Tabs tabs = ResultStep.Tabs.of(tasks);
+            return new Steps(new Page<>(StructureStep.TITLE, StructureStep::new),
+                    new Page<>(DisturbanceStep.TITLE, DisturbanceStep::new), new Page<>(GoalStep.TITLE, () -> {
+                        GoalStep goal = new GoalStep(criterion.get(), ranges.get());
+                        goal.sizingContext(sizing.get());
+                        return goal;
+                    }, criterion, ranges), new Page<>(HardwareStep.TITLE, HardwareStep::new),
+                    new Page<>(ResultStep.TITLE, () -> new ResultStep(tasks, messages, tabs), tabs.all()),
+                    new Page<>(RobustnessStep.TITLE, RobustnessStep::new),
+                    new Page<>(SheetStep.TITLE, () -> new SheetStep(tasks, messages)));
         }
     }
 

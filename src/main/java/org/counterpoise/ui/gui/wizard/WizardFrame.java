@@ -78,12 +78,7 @@ public final class WizardFrame extends JFrame {
         });
         DesignRun[] holder = new DesignRun[1];
         tasks = new TaskRunner(() -> holder[0].generation(), taskBar);
-        steps = new DesignRun.Steps(new Page<>(StructureStep.TITLE, StructureStep::new),
-                new Page<>(DisturbanceStep.TITLE, DisturbanceStep::new), new Page<>(GoalStep.TITLE, this::goalStep),
-                new Page<>(HardwareStep.TITLE, HardwareStep::new),
-                new Page<>(ResultStep.TITLE, () -> new ResultStep(tasks, this::say)),
-                new Page<>(RobustnessStep.TITLE, RobustnessStep::new),
-                new Page<>(SheetStep.TITLE, () -> new SheetStep(tasks, this::say)));
+        steps = DesignRun.Steps.of(tasks, this::say, () -> holder[0].sizingContext());
         run = new DesignRun(document, steps, this::say, this::updateNavigation);
         holder[0] = run;
         run.use(tasks);
@@ -143,12 +138,6 @@ public final class WizardFrame extends JFrame {
     /** The example scenarios' names, read in the background once every step is made (their menu's first opening waits for none). */
     private void scenariosSoon() {
         WizardMenus.readScenariosSoon(getJMenuBar());
-    }
-
-    private GoalStep goalStep() {
-        GoalStep goal = new GoalStep();
-        goal.sizingContext(run.sizingContext());
-        return goal;
     }
 
     private JPanel layoutRoot() {
