@@ -68,6 +68,9 @@ public final class EdtEventTime {
             log.phase("step " + (i + 1));
             click(on(() -> onScreen(steps, steps.getCellBounds(index, index))));
             waitForTasks(frame);
+            if (i == 6) {
+                waitUntil(frame::sheetPreviewShown, 60); // drawn in the background, not on the task bar
+            }
             photograph("step" + (i + 1));
             if (i == 4) {
                 JTabbedPane tabs = (JTabbedPane) on(() -> find(frame.getContentPane(), "result.views"));

@@ -30,14 +30,16 @@ import org.junit.jupiter.api.Test;
  * example scenarios (issue 17; the product rule "nothing slower than about 50 ms on the event
  * thread"). A guard against regressions such as a whole step, or every step, made in one event,
  * not a measurement of the 50 ms figure (that is src/jmh/sh/edt_events.sh, docs/performance.md,
- * "Long events on the wizard's event thread"): what is bounded is the event thread's CPU time per
- * event, which a loaded build machine does not stretch as it stretches wall time, and the bound is
- * generous (500 ms; the longest seen on the 2-core build machine after the change was about 0.25 s
- * of wall time, the result step made in one event before it up to 0.45 s and every step at once 1.7 s).
+ * "Long events on the wizard's event thread"). What is bounded is the event thread's CPU time per
+ * event, which a loaded build machine does not stretch as it stretches wall time (2 to 10 times
+ * there at load 4 to 10). The bound, 300 ms, is about three times the longest this test saw after
+ * the change (99 to 108 ms, run alone on the 2-core build machine), and below what it saw with every
+ * step made in one event (450 ms, a throwaway change): a step made whole in one event (up to 170 ms
+ * before the change) is not caught; the harness shows that.
  */
 class LongEventGuiTest {
     /** Bound on the event thread's CPU time for one event (ms): generous, see the class comment. */
-    private static final long BOUND_MS = 500;
+    private static final long BOUND_MS = 300;
     private WizardFrame frame;
     private EventTimes times;
 
@@ -111,7 +113,8 @@ class LongEventGuiTest {
         times.record(false);
         assertTrue(times.events() > 200, "the timing queue saw the walk's events (" + times.events() + ")");
         List<String> slow = times.longerThan(BOUND_MS);
-        System.out.println("LongEventGuiTest: " + times.events() + " events; the longest " + times.longest());
+        System.out.println("LongEventGuiTest: " + times.events() + " events; the longest " + times.longest()
+                + "; over 50 ms: " + times.longerThan(50));
         assertTrue(slow.isEmpty(), "events of the event thread over " + BOUND_MS + " ms CPU: " + slow);
     }
 

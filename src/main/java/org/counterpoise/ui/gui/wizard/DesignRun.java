@@ -80,11 +80,13 @@ final class DesignRun {
          * @return the wizard's steps, none made yet; the large ones in parts made ahead of them ({@link Part})
          */
         static Steps of(TaskRunner tasks, SheetStep.Messages messages, Supplier<GoalStep.SizingContext> sizing) {
+            Part<BalanceGradeForm> balance = new Part<>(BalanceGradeForm::new);
             Part<CriterionForm> criterion = new Part<>(CriterionForm::new);
             Part<ToleranceRangesForm> ranges = new Part<>(ToleranceRangesForm::new);
             ResultStep.Tabs tabs = ResultStep.Tabs.of(tasks);
             return new Steps(new Page<>(StructureStep.TITLE, StructureStep::new),
-                    new Page<>(DisturbanceStep.TITLE, DisturbanceStep::new), new Page<>(GoalStep.TITLE, () -> {
+                    new Page<>(DisturbanceStep.TITLE, () -> new DisturbanceStep(balance.get()), balance),
+                    new Page<>(GoalStep.TITLE, () -> {
                         GoalStep goal = new GoalStep(criterion.get(), ranges.get());
                         goal.sizingContext(sizing.get());
                         return goal;
