@@ -28,7 +28,7 @@ import org.junit.jupiter.api.Test;
  * No event of the wizard's event thread runs long while the window makes its steps after the first
  * one, designs, and a user walks every step, every tab of the result step and the File menu's
  * example scenarios (issue 17; the product rule "nothing slower than about 50 ms on the event
- * thread"). A guard against regressions such as a whole step, or every step, made in one event,
+ * thread"). A guard against regressions such as every step made in one event (as before issue 17),
  * not a measurement of the 50 ms figure (that is src/jmh/sh/edt_events.sh, docs/performance.md,
  * "Long events on the wizard's event thread"). What is bounded is the event thread's CPU time per
  * event, which a loaded build machine does not stretch as it stretches wall time (2 to 10 times

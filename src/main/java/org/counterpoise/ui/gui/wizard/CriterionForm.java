@@ -105,7 +105,8 @@ final class CriterionForm {
     /** True while a project's criterion is shown (not a user's pick). */
     private boolean showing;
 
-    private record Row(Family family, JLabel label, JComponent field) { }
+    private record Row(Family family, JLabel label, JComponent field) {
+    }
 
     CriterionForm() {
         family.setName("acceptance.criterion");
@@ -166,7 +167,6 @@ final class CriterionForm {
             }
             edited("acceptance.limit");
         });
-        describe(); // the wizard's first HTML text loads Swing's HTML support (70 ms, measured): in this Part's event
     }
 
     /**
