@@ -69,7 +69,8 @@ public final class EdtEventTime {
             click(on(() -> onScreen(steps, steps.getCellBounds(index, index))));
             waitForTasks(frame);
             if (i == 6) {
-                waitUntil(frame::sheetPreviewShown, 60); // drawn in the background, not on the task bar
+                waitUntil(frame::sheetPreviewShown, 60); // drawn in the background
+                Thread.sleep(1000); // and painted
             }
             photograph("step" + (i + 1));
             if (i == 4) {

@@ -33,7 +33,7 @@ import org.junit.jupiter.api.Test;
  * "Long events on the wizard's event thread"). What is bounded is the event thread's CPU time per
  * event, which a loaded build machine does not stretch as it stretches wall time (2 to 10 times
  * there at load 4 to 10). The bound, 300 ms, is about three times the longest this test saw after
- * the change (99 to 108 ms, run alone on the 2-core build machine), and below what it saw with every
+ * the change (72 to 110 ms, run alone on the 2-core build machine), and below what it saw with every
  * step made in one event (450 ms, a throwaway change): a step made whole in one event (up to 170 ms
  * before the change) is not caught; the harness shows that.
  */
