@@ -32,7 +32,8 @@ import org.counterpoise.ui.gui.wizard.WizardFrame;
  * since the log was installed, phase, event, where its time went), then one line
  * {@code long-events N max M ms} and exits. With {@code -Dedt.shots=FOLDER} it also photographs
  * the screen after each click; with {@code -Dedt.second=true} it then closes the window and opens a
- * second one in the same JVM (what remains once classes are loaded and the code compiled). Run by {@code src/jmh/sh/edt_events.sh} under Xvfb.
+ * second one in the same JVM (what remains once classes are loaded and the code compiled). Run by
+ * {@code src/jmh/sh/edt_events.sh} under Xvfb.
  */
 public final class EdtEventTime {
     private static final String[] TABS = {"Steady state", "Run-up", "Comparison of methods", "Hardware",
@@ -114,7 +115,8 @@ public final class EdtEventTime {
             waitUntil(() -> second.settled() && second.shownResult() != null, 120);
             waitForTasks(second);
         }
-        System.out.printf("events dispatched %d; longer than %d ms:%n", log.dispatched(), Long.getLong("edt.bound", 50));
+        System.out.printf("events dispatched %d; longer than %d ms:%n", log.dispatched(),
+                Long.getLong("edt.bound", 50));
         long max = 0;
         for (SlowEventLog.Slow s : log.slow()) {
             System.out.println(s);

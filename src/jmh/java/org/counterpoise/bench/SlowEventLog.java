@@ -108,8 +108,8 @@ public final class SlowEventLog extends EventQueue {
                 samples.clear();
             }
             if (took > boundNanos) {
-                slow.add(new Slow((start - origin) / 1_000_000L, took / 1_000_000L, cpu / 1_000_000L, phaseAtStart, describe(event),
-                        where.isEmpty() ? "(not sampled)" : where));
+                slow.add(new Slow((start - origin) / 1_000_000L, took / 1_000_000L, cpu / 1_000_000L, phaseAtStart,
+                        describe(event), where.isEmpty() ? "(not sampled)" : where));
             }
         }
     }

@@ -40,8 +40,9 @@ import org.knowm.xchart.internal.chartpart.Chart;
  *
  * <p>A chart given as a recipe ({@link #show(Function)}) is rebuilt in the colours of the look
  * when the look changes between light and dark. Given while the host is not showing (a step or tab
- * not on screen), it is built when the host is first shown or its chart is asked for. Pointer listeners hear the x value under the
- * pointer, and NaN whenever the data shown changes, so a readout never describes an old chart.
+ * not on screen), it is built when the host is first shown or its chart is asked for. Pointer
+ * listeners hear the x value under the pointer, and NaN whenever the data shown changes, so a
+ * readout never describes an old chart.
  */
 public final class ChartHost extends JPanel {
     private Function<ChartTheme, ? extends Chart<?, ?>> recipe;

@@ -83,7 +83,7 @@ final class GoalStep extends Step {
     private final JComponent page;
     private SizingContext sizingContext = new SizingContext() { };
 
-    /** @param criterion the criterion's form @param ranges the tolerance ranges' form (each made ahead: {@link Part}) */
+    /** @param criterion the criterion's form @param ranges the tolerance ranges' (each made ahead: {@link Part}) */
     GoalStep(CriterionForm criterion, ToleranceRangesForm ranges) {
         this.criterion = criterion;
         this.ranges = ranges;

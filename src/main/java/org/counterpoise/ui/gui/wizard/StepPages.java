@@ -88,9 +88,9 @@ final class StepPages {
     }
 
     /**
-     * Makes the steps not made yet in order, each in several events (its large parts, its components,
-     * then attaching it and showing it the project), each after a short pause (the queue runs between them), and then
-     * runs an action.
+     * Makes the steps not made yet in order, each in several events (its large parts, its
+     * components, then attaching it and showing it the project), each after a short pause (the queue
+     * runs between them), and then runs an action.
      * @param then run on the event thread once every step is made
      */
     void makeRestLater(Runnable then) {

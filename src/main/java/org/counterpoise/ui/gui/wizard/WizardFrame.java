@@ -127,7 +127,7 @@ public final class WizardFrame extends JFrame {
         return new WizardFrame(false);
     }
 
-    /** Makes the steps not made yet, one per event (the window answers between them), then designs the project. */
+    /** Makes the steps not made yet, a piece per event (the window answers between them), then designs the project. */
     public void makeRestLater() {
         pages.makeRestLater(() -> {
             run.ready();
@@ -135,7 +135,7 @@ public final class WizardFrame extends JFrame {
         });
     }
 
-    /** The example scenarios' names, read in the background once every step is made (their menu's first opening waits for none). */
+    /** Reads the example scenarios' names in the background (their menu's first opening then waits for none). */
     private void scenariosSoon() {
         WizardMenus.readScenariosSoon(getJMenuBar());
     }
