@@ -13,7 +13,11 @@ import java.util.List;
 import javax.swing.AbstractButton;
 import javax.swing.JComboBox;
 import javax.swing.JLabel;
+import javax.swing.JMenu;
+import javax.swing.JMenuBar;
 import javax.swing.JTable;
+import javax.swing.MenuElement;
+import javax.swing.MenuSelectionManager;
 import javax.swing.text.JTextComponent;
 import org.counterpoise.io.preset.Presets;
 import org.counterpoise.ui.gui.wizard.WizardFrame;
@@ -109,6 +113,41 @@ class FirstWindowGuiTest {
         });
         assertFalse(Edt.call(staged::dirty));
         assertSameOnEveryStep();
+    }
+
+    @Test
+    void theExampleScenariosOpenedBeforeTheirNamesAreReadFillWhenRead() throws Exception {
+        // the names are read in the background once every step is made; opened before, the menu says it is reading
+        staged = Edt.call(() -> {
+            WizardFrame f = WizardFrame.firstStepOnly();
+            f.setVisible(true);
+            return f;
+        });
+        JMenu scenarios = Edt.call(() -> {
+            JMenuBar bar = staged.getJMenuBar();
+            JMenu file = bar.getMenu(0);
+            JMenu presets = (JMenu) Edt.find(file.getPopupMenu(), "menu.presets");
+            MenuSelectionManager.defaultManager().setSelectedPath(
+                    new MenuElement[] {bar, file, file.getPopupMenu(), presets, presets.getPopupMenu()});
+            // in the same event as the opening: the reading has only started (its result comes in a later event)
+            assertEquals(1, presets.getItemCount());
+            assertEquals("Reading the example scenarios\u2026", presets.getItem(0).getText());
+            assertFalse(presets.getItem(0).isEnabled());
+            return presets;
+        });
+        List<String> names = Presets.names();
+        Edt.waitFor(() -> Edt.callQuietly(() -> scenarios.getItemCount() == names.size()), "the scenarios' names");
+        for (int i = 0; i < names.size(); i++) {
+            int k = i;
+            // each item: the preset's project name (presets/, invented scenarios), enabled, named after its file
+            assertEquals(Presets.load(names.get(k)).project().name(), Edt.call(() -> scenarios.getItem(k).getText()));
+            assertTrue(Edt.call(() -> scenarios.getItem(k).isEnabled()));
+            assertEquals("preset." + names.get(k), Edt.call(() -> scenarios.getItem(k).getName()));
+        }
+        Edt.call(() -> {
+            MenuSelectionManager.defaultManager().clearSelectedPath();
+            return null;
+        });
     }
 
     /** Waits for both windows' designs, then compares every step of the two. */

@@ -2,15 +2,13 @@ package org.counterpoise.ui.gui.action;
 
 import java.awt.event.KeyEvent;
 import java.util.List;
+import java.util.Objects;
 import java.util.function.Consumer;
 import javax.swing.JFrame;
 import javax.swing.JMenu;
 import javax.swing.JMenuBar;
 import javax.swing.JMenuItem;
 import javax.swing.JOptionPane;
-import javax.swing.event.MenuEvent;
-import javax.swing.event.MenuListener;
-import org.counterpoise.io.preset.Presets;
 import org.counterpoise.ui.gui.Themes;
 
 /** The wizard's menu bar: File, Edit, View, Help, built from the actions. */
@@ -37,33 +35,7 @@ public final class WizardMenus {
         fileMenu.add(new JMenuItem(Actions.of("Project details\u2026", KeyEvent.VK_D,
                 Shortcuts.menuKey(KeyEvent.VK_D, true), e -> details.run())));
         fileMenu.addSeparator();
-        JMenu presets = new JMenu("Example scenarios (invented)");
-        presets.setName("menu.presets");
-        presets.setMnemonic('e');
-        presets.addMenuListener(new MenuListener() {
-            @Override
-            public void menuSelected(MenuEvent e) {
-                // filled when first opened: reading every preset for its name is not needed for the first window
-                if (presets.getMenuComponentCount() == 0) {
-                    for (String name : Presets.names()) {
-                        JMenuItem it = new JMenuItem(Presets.load(name).project().name());
-                        it.setName("preset." + name);
-                        it.addActionListener(a -> preset.accept(name));
-                        presets.add(it);
-                    }
-                }
-            }
-
-            @Override
-            public void menuDeselected(MenuEvent e) {
-                // nothing to do
-            }
-
-            @Override
-            public void menuCanceled(MenuEvent e) {
-                // nothing to do
-            }
-        });
+        ScenarioMenu presets = new ScenarioMenu(preset);
         fileMenu.add(presets);
         fileMenu.addSeparator();
         fileMenu.add(new JMenuItem(Actions.of("Quit", KeyEvent.VK_Q, Shortcuts.menuKey(KeyEvent.VK_Q, false),
@@ -90,5 +62,24 @@ public final class WizardMenus {
         bar.add(view);
         bar.add(help);
         return bar;
+    }
+
+    /**
+     * Reads the example scenarios' names in the background (the menu's first opening then shows
+     * them at once); the wizard asks once its steps are made.
+     * @param bar a menu bar from {@link #build}
+     */
+    public static void readScenariosSoon(JMenuBar bar) {
+        Objects.requireNonNull(findScenarios(bar), "bug: the bar has no example scenarios").readSoon();
+    }
+
+    private static ScenarioMenu findScenarios(JMenuBar bar) {
+        JMenu file = bar.getMenu(0);
+        for (int i = 0; i < file.getItemCount(); i++) {
+            if (file.getItem(i) instanceof ScenarioMenu s) {
+                return s;
+            }
+        }
+        return null;
     }
 }

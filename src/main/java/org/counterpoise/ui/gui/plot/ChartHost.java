@@ -8,6 +8,7 @@ import java.awt.Graphics2D;
 import java.awt.Toolkit;
 import java.awt.datatransfer.StringSelection;
 import java.awt.event.ActionEvent;
+import java.awt.event.HierarchyEvent;
 import java.awt.event.MouseAdapter;
 import java.awt.event.MouseEvent;
 import java.util.ArrayList;
@@ -38,12 +39,19 @@ import org.knowm.xchart.internal.chartpart.Chart;
  * it. Here the only menu is the application's own ({@link #actions()}), and no key is bound.
  *
  * <p>A chart given as a recipe ({@link #show(Function)}) is rebuilt in the colours of the look
- * when the look changes between light and dark. Pointer listeners hear the x value under the
- * pointer, and NaN whenever the data shown changes, so a readout never describes an old chart.
+ * when the look changes between light and dark. Given while the host is not showing (a step or tab
+ * not on screen), it is built when the host is first shown or its chart is asked for. Pointer
+ * listeners hear the x value under the pointer, and NaN whenever the data shown changes, so a
+ * readout never describes an old chart.
  */
 public final class ChartHost extends JPanel {
     private Function<ChartTheme, ? extends Chart<?, ?>> recipe;
     private Chart<?, ?> shown;
+    /**
+     * True while a chart given as a recipe waits to be built: it was given while this host was not
+     * showing (docs/performance.md, "Long events on the wizard's event thread").
+     */
+    private boolean pending;
     private final List<DoubleConsumer> pointer = new ArrayList<>();
     private final Action copyValues = new AbstractAction("Copy values") {
         @Override
@@ -62,6 +70,11 @@ public final class ChartHost extends JPanel {
         setPreferredSize(new Dimension(560, 300));
         copyValues.putValue(Action.SHORT_DESCRIPTION, "Copy the plotted values as tab-separated text");
         message("computing\u2026");
+        addHierarchyListener(e -> {
+            if ((e.getChangeFlags() & HierarchyEvent.SHOWING_CHANGED) != 0 && isShowing()) {
+                buildPending(); // before it is first painted
+            }
+        });
     }
 
     /** @return the chart colours that match the installed look (dark or light) */
@@ -75,13 +88,29 @@ public final class ChartHost extends JPanel {
      */
     public void show(Function<ChartTheme, ? extends Chart<?, ?>> chartRecipe) {
         recipe = chartRecipe;
-        display(chartRecipe.apply(currentTheme()));
+        if (isShowing()) {
+            pending = false;
+            display(chartRecipe.apply(currentTheme()));
+        } else {
+            // built when first shown or asked for: a hidden step's or tab's chart costs its event nothing
+            pending = true;
+            firePointer(Double.NaN);
+        }
     }
 
     /** @param c the chart to show as it is (its colours do not follow the look) */
     public void show(XYChart c) {
         recipe = null;
+        pending = false;
         display(c);
+    }
+
+    /** Builds a chart given while hidden, now. */
+    private void buildPending() {
+        if (pending) {
+            pending = false;
+            display(recipe.apply(currentTheme()));
+        }
     }
 
     private void display(Chart<?, ?> c) {
@@ -99,6 +128,7 @@ public final class ChartHost extends JPanel {
     /** @param text what to say instead of a chart */
     public void message(String text) {
         recipe = null;
+        pending = false;
         shown = null;
         removeAll();
         JLabel l = new JLabel(text, SwingConstants.CENTER);
@@ -112,11 +142,13 @@ public final class ChartHost extends JPanel {
 
     /** @return the XY chart shown, or null (nothing shown, or another kind of chart) */
     public XYChart chart() {
+        buildPending();
         return shown instanceof XYChart xy ? xy : null;
     }
 
     /** @return the chart shown, of any kind, or null */
     public Chart<?, ?> shownChart() {
+        buildPending();
         return shown;
     }
 
@@ -137,7 +169,7 @@ public final class ChartHost extends JPanel {
     public void updateUI() {
         super.updateUI();
         // Called by the superclass constructor too, before this class' fields exist.
-        if (recipe != null) {
+        if (recipe != null && !pending) {
             display(recipe.apply(currentTheme()));
         }
     }

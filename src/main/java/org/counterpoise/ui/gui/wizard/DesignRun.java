@@ -3,8 +3,10 @@ package org.counterpoise.ui.gui.wizard;
 import java.util.List;
 import java.util.Optional;
 import java.util.function.Consumer;
+import java.util.function.Supplier;
 import java.util.logging.Level;
 import java.util.logging.Logger;
+import javax.swing.JLabel;
 import javax.swing.Timer;
 import org.counterpoise.core.design.AbsorberLayout;
 import org.counterpoise.core.design.AchievablePeak;
@@ -71,6 +73,32 @@ final class DesignRun {
         List<Page<? extends Step>> all() {
             return List.of(structure, disturbance, goal, hardware, result, robustness, sheet);
         }
+
+        /**
+         * @param tasks the wizard's task runner
+         * @param messages the wizard's status line
+         * @param sizing what the goal step's change of sizing reads (asked when it is made)
+         * @return the wizard's steps, none made yet; the large ones in parts made ahead of them ({@link Part})
+         */
+        static Steps of(TaskRunner tasks, SheetStep.Messages messages, Supplier<GoalStep.SizingContext> sizing) {
+            Part<BalanceGradeForm> balance = new Part<>(BalanceGradeForm::new);
+            // the goal step's criterion summary is the wizard's first HTML text, whose making loads Swing's HTML
+            // parser and style sheet (70 ms on an idle build machine, measured): in an event of its own, before it
+            Part<JLabel> firstHtml = new Part<>(() -> new JLabel("<html>Swing's HTML support, loaded</html>"));
+            Part<CriterionForm> criterion = new Part<>(CriterionForm::new);
+            Part<ToleranceRangesForm> ranges = new Part<>(ToleranceRangesForm::new);
+            ResultStep.Tabs tabs = ResultStep.Tabs.of(tasks);
+            return new Steps(new Page<>(StructureStep.TITLE, StructureStep::new),
+                    new Page<>(DisturbanceStep.TITLE, () -> new DisturbanceStep(balance.get()), balance),
+                    new Page<>(GoalStep.TITLE, () -> {
+                        GoalStep goal = new GoalStep(criterion.get(), ranges.get());
+                        goal.sizingContext(sizing.get());
+                        return goal;
+                    }, firstHtml, criterion, ranges), new Page<>(HardwareStep.TITLE, HardwareStep::new),
+                    new Page<>(ResultStep.TITLE, () -> new ResultStep(tasks, messages, tabs), tabs.all()),
+                    new Page<>(RobustnessStep.TITLE, RobustnessStep::new),
+                    new Page<>(SheetStep.TITLE, () -> new SheetStep(tasks, messages)));
+        }
     }
 
     DesignRun(DesignDocument document, Steps steps, Consumer<String> status, Runnable navigation) {
@@ -111,6 +139,25 @@ final class DesignRun {
             waiting = false;
             recompute();
         }
+    }
+
+    /** @return what the goal step's change of sizing reads: the structure as entered, and the design on screen */
+    GoalStep.SizingContext sizingContext() {
+        return new GoalStep.SizingContext() {
+            @Override
+            public Structure structure() {
+                try {
+                    return document.project().toStructure();
+                } catch (InvalidInputException e) {
+                    return null;
+                }
+            }
+
+            @Override
+            public DesignResult design() {
+                return shown;
+            }
+        };
     }
 
     /** @return the result on screen, or null */

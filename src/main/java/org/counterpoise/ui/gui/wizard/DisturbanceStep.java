@@ -70,14 +70,16 @@ final class DisturbanceStep extends Step {
     private final QuantityField runUp = new QuantityField("disturbance.run_up_rate",
             "How fast the shaft speed changes at start and stop; leave empty when not known",
             UnitChoices.of(Dimension.ANGULAR_ACCELERATION));
-    private final BalanceGradeForm balanceGrade = new BalanceGradeForm();
+    private final BalanceGradeForm balanceGrade;
     private final OrdersForm orders = new OrdersForm(() -> order.siOrNaN());
     private JLabel amplitudeLabel;
     private final JLabel derivedBand = StructureStep.derived("derived.forcing");
     private final JLabel derivedRatio = StructureStep.derived("derived.ratio");
     private final JComponent page;
 
-    DisturbanceStep() {
+    /** @param balanceGrade the balance-grade form (made ahead: {@link Part}) */
+    DisturbanceStep(BalanceGradeForm balanceGrade) {
+        this.balanceGrade = balanceGrade;
         kind.setName("disturbance.kind");
         ItemWords.show(kind, ExcitationKind.class, DisturbanceStep::words);
         oneSpeed.setName("disturbance.oneSpeed");

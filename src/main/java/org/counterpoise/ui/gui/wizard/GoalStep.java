@@ -67,7 +67,7 @@ final class GoalStep extends Step {
     /** Says why the stated limit was emptied, until a new one is typed. */
     private String targetNote;
     /** The criterion the result is judged against, and the lightest absorber may be sized to meet. */
-    private final CriterionForm criterion = new CriterionForm();
+    private final CriterionForm criterion;
     private final JComboBox<AmplitudeConvention> displayConvention = new JComboBox<>(AmplitudeConvention.values());
     private final QuantityField strokeLimit = new QuantityField("absorber.stroke_limit",
             "Largest allowed peak stroke in the band (exact-peak only); leave empty for none",
@@ -78,12 +78,15 @@ final class GoalStep extends Step {
         methodNote.setForeground(Themes.problemColour());
     }
     /** The ranges the design must hold over (issue 12: stated with the goal, not only later). */
-    private final ToleranceRangesForm ranges = new ToleranceRangesForm();
+    private final ToleranceRangesForm ranges;
     private final ChartHost massChart = new ChartHost("chart.massRatio");
     private final JComponent page;
     private SizingContext sizingContext = new SizingContext() { };
 
-    GoalStep() {
+    /** @param criterion the criterion's form @param ranges the tolerance ranges' (each made ahead: {@link Part}) */
+    GoalStep(CriterionForm criterion, ToleranceRangesForm ranges) {
+        this.criterion = criterion;
+        this.ranges = ranges;
         sizing.setName("absorber.sizing");
         ItemWords.show(sizing, SizingForm.class, f -> switch (f) {
             case MASS_RATIO -> "mass ratio \u03bc";

@@ -5,6 +5,8 @@ import java.awt.Color;
 import java.awt.Component;
 import java.awt.FlowLayout;
 import java.awt.Font;
+import java.awt.event.ComponentAdapter;
+import java.awt.event.ComponentEvent;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
@@ -304,6 +306,20 @@ final class RealisationView {
         area.setOpaque(false);
         area.setFont(new JLabel().getFont());
         area.setCaretPosition(0); // the caret at the end would scroll the page to the text's end
+        // a wrapped text's height follows its width, known only once laid out: the page is laid out again
+        // when the width changes, or it keeps the unwrapped height (one line a paragraph) and cuts off
+        // what is below (seen when the tab was first laid out with no other change after it)
+        area.addComponentListener(new ComponentAdapter() {
+            private int laidOutWidth = -1;
+
+            @Override
+            public void componentResized(ComponentEvent e) {
+                if (area.getWidth() != laidOutWidth) {
+                    laidOutWidth = area.getWidth();
+                    area.revalidate();
+                }
+            }
+        });
         return area;
     }
 

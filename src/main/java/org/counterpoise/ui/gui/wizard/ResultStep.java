@@ -75,20 +75,43 @@ final class ResultStep extends Step {
     private final JComponent page;
     private final TaskRunner tasks;
     private final SheetStep.Messages messages;
-    private final ComparisonPanel comparison = new ComparisonPanel();
+    private final ComparisonPanel comparison;
     private final VerdictPanel verdict = new VerdictPanel();
     private final RunUpView runUp;
     private final RealisationView hardware;
-    private final SeveralAbsorbersView several = new SeveralAbsorbersView();
+    private final SeveralAbsorbersView several;
     private DesignResult result;
     private DesignCurves curves;
     private Project project;
 
-    ResultStep(TaskRunner tasks, SheetStep.Messages messages) {
+    /**
+     * The result step's tabs other than the first, each a {@link Part} made in an event of its own.
+     * @param runUp the run-up tab
+     * @param hardware the hardware tab
+     * @param comparison the comparison of methods
+     * @param several the several-absorbers tab
+     */
+    record Tabs(Part<RunUpView> runUp, Part<RealisationView> hardware, Part<ComparisonPanel> comparison,
+            Part<SeveralAbsorbersView> several) {
+        /** @param tasks the wizard's task runner @return the tabs, none made yet */
+        static Tabs of(TaskRunner tasks) {
+            return new Tabs(new Part<>(() -> new RunUpView(tasks)), new Part<>(() -> new RealisationView(tasks)),
+                    new Part<>(ComparisonPanel::new), new Part<>(SeveralAbsorbersView::new));
+        }
+
+        /** @return the parts, in the order they are made ahead of the step */
+        Part<?>[] all() {
+            return new Part<?>[] {runUp, hardware, comparison, several};
+        }
+    }
+
+    ResultStep(TaskRunner tasks, SheetStep.Messages messages, Tabs tabs) {
         this.tasks = tasks;
         this.messages = messages;
-        this.runUp = new RunUpView(tasks);
-        this.hardware = new RealisationView(tasks);
+        this.runUp = tabs.runUp().get();
+        this.hardware = tabs.hardware().get();
+        this.comparison = tabs.comparison().get();
+        this.several = tabs.several().get();
         JTable t = rows.table();
         notes.setName("result.notes");
         notes.setEditable(false);

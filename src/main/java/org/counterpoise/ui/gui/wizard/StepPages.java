@@ -16,7 +16,7 @@ import org.counterpoise.ui.gui.field.ScrollingPage;
 /**
  * The wizard's steps and the cards that show them. The window opens with the first step made; the
  * others are made when first needed (shown, or read by the design) or, after the window is showing,
- * one per event in order ({@link #makeRestLater}), so the first window waits for the first step
+ * in order, a piece per event ({@link #makeRestLater}), so the first window waits for the first step
  * only and the event queue runs between the others (docs/performance.md, "The wizard's first
  * window"). Each step, once made, is attached and shown the project by the wizard, and its page
  * takes its place among the cards in step order. Event thread only.
@@ -88,7 +88,8 @@ final class StepPages {
     }
 
     /**
-     * Makes the steps not made yet one per event, in order, each after a short pause (the queue
+     * Makes the steps not made yet in order, each in several events (its large parts, its
+     * components, then attaching it and showing it the project), each after a short pause (the queue
      * runs between them), and then runs an action.
      * @param then run on the event thread once every step is made
      */
@@ -110,7 +111,11 @@ final class StepPages {
             for (Page<? extends Step> p : pages) {
                 if (!p.made() && !failed.contains(p)) {
                     try {
-                        p.get();
+                        if (p.built()) {
+                            p.get(); // attached and shown the project: made
+                        } else {
+                            p.build(); // a part, or its components: attached once built
+                        }
                     } catch (RuntimeException | Error bug) {
                         failed.add(p);
                         throw bug;

@@ -18,8 +18,6 @@ import javax.swing.JLabel;
 import javax.swing.JPanel;
 import javax.swing.UIManager;
 import org.counterpoise.core.design.DesignResult;
-import org.counterpoise.core.error.InvalidInputException;
-import org.counterpoise.core.model.Structure;
 import org.counterpoise.io.preset.Presets;
 import org.counterpoise.io.project.FormatMigration;
 import org.counterpoise.io.project.LoadedProject;
@@ -80,12 +78,7 @@ public final class WizardFrame extends JFrame {
         });
         DesignRun[] holder = new DesignRun[1];
         tasks = new TaskRunner(() -> holder[0].generation(), taskBar);
-        steps = new DesignRun.Steps(new Page<>(StructureStep.TITLE, StructureStep::new),
-                new Page<>(DisturbanceStep.TITLE, DisturbanceStep::new), new Page<>(GoalStep.TITLE, this::goalStep),
-                new Page<>(HardwareStep.TITLE, HardwareStep::new),
-                new Page<>(ResultStep.TITLE, () -> new ResultStep(tasks, this::say)),
-                new Page<>(RobustnessStep.TITLE, RobustnessStep::new),
-                new Page<>(SheetStep.TITLE, () -> new SheetStep(tasks, this::say)));
+        steps = DesignRun.Steps.of(tasks, this::say, () -> holder[0].sizingContext());
         run = new DesignRun(document, steps, this::say, this::updateNavigation);
         holder[0] = run;
         run.use(tasks);
@@ -114,6 +107,9 @@ public final class WizardFrame extends JFrame {
         setJMenuBar(WizardMenus.build(this, files, edits, this::showDetails,
                 name -> files.whenDiscarded(() -> load(Presets.load(name), null)), this::closeRequested,
                 units.menuItems()));
+        if (everyStep) {
+            scenariosSoon();
+        }
         files.bind(getRootPane());
         edits.bind(getRootPane());
         document.addListener(this::documentChanged);
@@ -131,29 +127,17 @@ public final class WizardFrame extends JFrame {
         return new WizardFrame(false);
     }
 
-    /** Makes the steps not made yet, one per event (the window answers between them), then designs the project. */
+    /** Makes the steps not made yet, a piece per event (the window answers between them), then designs the project. */
     public void makeRestLater() {
-        pages.makeRestLater(run::ready);
+        pages.makeRestLater(() -> {
+            run.ready();
+            scenariosSoon();
+        });
     }
 
-    private GoalStep goalStep() {
-        GoalStep goal = new GoalStep();
-        goal.sizingContext(new GoalStep.SizingContext() {
-            @Override
-            public Structure structure() {
-                try {
-                    return document.project().toStructure();
-                } catch (InvalidInputException e) {
-                    return null;
-                }
-            }
-
-            @Override
-            public DesignResult design() {
-                return run.shown();
-            }
-        });
-        return goal;
+    /** Reads the example scenarios' names in the background (their menu's first opening then waits for none). */
+    private void scenariosSoon() {
+        WizardMenus.readScenariosSoon(getJMenuBar());
     }
 
     private JPanel layoutRoot() {
