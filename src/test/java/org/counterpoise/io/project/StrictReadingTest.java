@@ -45,7 +45,7 @@ class StrictReadingTest {
         assertTrue(message(dir, "[".repeat(1_000_000)).startsWith("FILE: nests objects or lists more than 32 levels"),
                 "no stack overflow on a megabyte of brackets");
         assertEquals("format_version: 1.5 is not allowed; a whole number; this version of Counterpoise reads"
-                + " format_version 1 to 7", message(dir, pump.replaceFirst("\"format_version\": \\d", "\"format_version\": 1.5")));
+                + " format_version 1 to " + Project.FORMAT_VERSION, message(dir, pump.replaceFirst("\"format_version\": \\d", "\"format_version\": 1.5")));
         assertTrue(message(dir, pump.replaceFirst("\"format_version\": \\d,", "")).startsWith("format_version: missing"));
         assertEquals("FILE: is empty; a project file is one JSON object { ... } as docs/project-file.md shows",
                 message(dir, "\n"));
