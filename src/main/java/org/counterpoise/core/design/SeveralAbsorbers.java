@@ -29,9 +29,11 @@ import org.counterpoise.core.system.PointAbsorber;
  * @param peakAfter the peak over the band with the absorbers
  * @param modes each mode's peak near its own frequency, before and after (spillover), in the
  *     structure's order
- * @param single one absorber of the same total mass, least peak over the band on the target mode
- *     (least worst case over the ranges when the set is, {@code robust}), and its peak on the whole
- *     structure; empty for one absorber
+ * @param single one absorber of the same total mass designed on the whole structure, least peak over
+ *     the band (least worst case over the ranges when the set is, {@code robust}; under the same
+ *     spillover limit when there is one), and its peak; for the project's one absorber on a structure of
+ *     several modes over a band, the same for comparison with that design (made on the target mode
+ *     alone); else empty
  * @param structureTolerance the factors on the target mode's natural frequency (its stiffness by the
  *     square, its mass, damping and shape kept) within which the peak over the band stays within
  *     {@link DesignResult#TOLERANCE_ALLOWANCE} of {@code peakAfter} (searched to
@@ -273,7 +275,7 @@ public record SeveralAbsorbers(AbsorberLayout layout, int targetMode, double eff
 
     /** @return the single absorber's peak over this design's peak (above 1: the split pays), when compared */
     public Optional<Double> gain() {
-        return single.map(s -> s.peak() / peakAfter);
+        return absorbers.size() > 1 ? single.map(s -> s.peak() / peakAfter) : Optional.empty();
     }
 
     /**

@@ -96,6 +96,15 @@ public final class SeveralAbsorbersDesigner {
         }
         if (layout.count() == 1) {
             absorbers = List.of(new PointAbsorber(layout.absorberPoint(), total.mass(), total.stiffness(), total.damping()));
+            if (layout.structure().size() > 1 && !band.isSingle()) {
+                // the project's absorber is designed on the target mode alone (by its method); for comparison,
+                // one absorber of the same mass designed for the least peak over the band on the whole structure
+                AbsorberSetProblem whole = onStructure(new AbsorberSetProblem(1, total.mass() / effectiveMass,
+                        mode.dampingRatio(), band.low() / wr, band.high() / wr, AbsorberSetTuning.UNIFORM), layout,
+                        layout.structure(), r);
+                single = Optional.of(inSi(AbsorberSetOptimiser.optimise(whole).design(), effectiveMass, wr,
+                        layout.absorberPoint()).get(0));
+            }
         } else {
             if (band.isSingle()) {
                 throw new InvalidInputException("absorbers.count", Integer.toString(layout.count()),

@@ -67,6 +67,13 @@ public final class SeveralAbsorbersContent {
             + " spring batch), the whole structure seen; each absorber's own scatter, the other modes' frequencies and"
             + " the damping range are not in that worst case (the sheet gives each absorber's tolerance on its own"
             + " frequency within the set): check their tuning on site with care.";
+    /** One absorber designed on the target mode alone that the whole structure's own optimum beats by 5 % or more. */
+    static final double WHOLE_STRUCTURE_BETTER = 0.95;
+    static final String ONE_ABSORBER_ON_THE_MODE_ALONE = "One absorber: it is designed on the target mode alone (the"
+            + " project's method); on this structure one absorber of the same mass designed on the whole structure"
+            + " has a peak over the band %.0f %% lower (own frequency %.4g Hz, damping ratio %.3g; \"the same mass"
+            + " designed on the whole structure\"). Two or more absorbers (absorbers.count) are designed on the whole"
+            + " structure.";
     /** A spillover limit no design of the absorbers keeps. */
     static final String SPILLOVER_NOT_KEPT = "Spillover limit NOT kept: no tuning of these absorbers found keeps the"
             + " peak near every other mode within absorbers.spillover_limit; the design shown came nearest. Raise the"
@@ -129,6 +136,10 @@ public final class SeveralAbsorbersContent {
             return new ReportContent(content.name(), sections, content.warnings(), cautions, content.comparison(),
                     content.units());
         }
+        d.single().filter(s -> d.absorbers().size() == 1 && s.peak() < WHOLE_STRUCTURE_BETTER * d.peakAfter())
+                .ifPresent(s -> cautions.add(String.format(Locale.ROOT, ONE_ABSORBER_ON_THE_MODE_ALONE,
+                        100 * (1 - s.peak() / d.peakAfter()), s.absorber().frequency() / (2 * Math.PI),
+                        s.absorber().damping() / (2 * s.absorber().mass() * s.absorber().frequency()))));
         if (d.absorbers().size() > 1) {
             cautions.add(ONE_ABSORBER_SECTIONS);
             cautions.add(d.robust().isPresent() ? ROBUST_SPLIT : NOMINAL_SPLIT);
@@ -206,7 +217,13 @@ public final class SeveralAbsorbersContent {
                             + " of its natural frequency and its neighbours'), in the band or not: a run-up passes"
                             + " through it (spillover)"));
         }
-        d.single().ifPresent(s -> {
+        d.single().filter(s -> n == 1).ifPresent(s -> rows.add(row(ReportKey.SEVERAL_SINGLE_PEAK,
+                "the same mass designed on the whole structure: peak", DesignContent.quantity(s.peak(), Dimension.LENGTH),
+                "for comparison: one absorber for the least peak over the band, every mode seen (the design above sees"
+                        + " the target mode alone), own frequency " + ValueText.frequency(s.absorber().frequency())
+                        + ", damping ratio " + String.format(Locale.ROOT, "%.4g", s.absorber().damping()
+                                / (2 * s.absorber().mass() * s.absorber().frequency())))));
+        d.single().filter(s -> n > 1).ifPresent(s -> {
             rows.add(row(ReportKey.SEVERAL_SINGLE_PEAK, "one absorber of the same total mass: peak",
                     DesignContent.quantity(s.peak(), Dimension.LENGTH), d.robust().isPresent()
                             ? "least worst peak over the ranges, the whole structure seen (as the split)"
