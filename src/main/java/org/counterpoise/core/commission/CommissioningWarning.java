@@ -22,7 +22,9 @@ public enum CommissioningWarning {
     /** A fitted natural frequency of the structure lies more than {@link #STRUCTURE_FAR} from the design's. */
     STRUCTURE_FREQUENCY_FAR,
     /** Trimming the absorbers to their targets would not lower the peak over the band: no trim is advised. */
-    TRIM_DOES_NOT_HELP;
+    TRIM_DOES_NOT_HELP,
+    /** The set designed again for the structure as measured does not keep the project's spillover limit there. */
+    SPILLOVER_LIMIT_NOT_KEPT;
 
     /** A fitted structure frequency further than this fraction from the design's is doubted. */
     public static final double STRUCTURE_FAR = 0.15;

@@ -18,6 +18,7 @@ import org.counterpoise.core.system.ModalPeak;
 import org.counterpoise.core.system.ModalStructure;
 import org.counterpoise.core.system.ModalSystem;
 import org.counterpoise.core.system.PointAbsorber;
+import org.counterpoise.core.system.Spillover;
 
 /**
  * The commissioning of several absorbers at one point: each absorber as built against what the
@@ -160,7 +161,19 @@ public record SetCommissioning(AsBuiltSet built, List<Correction> corrections, L
         double asBuiltPeak = force * peak(asMeasured, asBuilt, layout, band);
         double afterTrim = force * peak(asMeasured, trimmed, layout, band);
         boolean advised = !warnings.contains(CommissioningWarning.POOR_FIT);
-        if (advised && afterTrim > asBuiltPeak) {
+        // with a spillover limit the targets keep it on the structure as measured (or say they cannot), and a
+        // trim that brings a set breaking the limit nearer to it helps even where it raises the band's peak
+        boolean nearerTheLimit = false;
+        if (layout.spilloverLimit().isPresent()) {
+            double ratio = layout.spilloverLimit().getAsDouble();
+            double measuredTarget = built.targetModeFrequency();
+            if (worstSpillover(asMeasured, targets, layout, measuredTarget, ratio) > 1 + 1e-6) {
+                warnings.add(CommissioningWarning.SPILLOVER_LIMIT_NOT_KEPT);
+            }
+            double now = worstSpillover(asMeasured, asBuilt, layout, measuredTarget, ratio);
+            nearerTheLimit = now > 1 && worstSpillover(asMeasured, trimmed, layout, measuredTarget, ratio) < now;
+        }
+        if (advised && afterTrim > asBuiltPeak && !nearerTheLimit) {
             warnings.add(CommissioningWarning.TRIM_DOES_NOT_HELP);
             advised = false;
         }
@@ -259,5 +272,23 @@ public record SetCommissioning(AsBuiltSet built, List<Correction> corrections, L
             FrequencyBand band) {
         return ModalPeak.over(ModalSystem.of(structure, absorbers), layout.excitationPoint(), layout.responsePoint(),
                 band.low(), band.high());
+    }
+
+    /**
+     * @return the largest, over every mode but the target, of the peak near it with these absorbers
+     *     over the limit there (the ratio times its peak without them): above 1 where the limit is broken
+     */
+    private static double worstSpillover(ModalStructure structure, List<PointAbsorber> absorbers, AbsorberLayout layout,
+            double targetFrequency, double ratio) {
+        double worst = 0;
+        Spillover spillover = Spillover.of(ModalSystem.of(structure, absorbers), layout.excitationPoint(),
+                layout.responsePoint());
+        for (Spillover.ModePeak p : spillover.modes()) {
+            boolean target = structure.modes().get(p.mode()).naturalFrequency() == targetFrequency;
+            if (!target && Double.isFinite(p.before())) {
+                worst = Math.max(worst, p.after() / (ratio * p.before()));
+            }
+        }
+        return worst;
     }
 }

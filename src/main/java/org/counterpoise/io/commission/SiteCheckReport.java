@@ -216,6 +216,9 @@ public final class SiteCheckReport {
                     + " response was measured at the absorbers' point, the FRF kind and units, and the project's modes";
             case TRIM_DOES_NOT_HELP -> "trimming the absorbers to the frequencies the structure needs would not lower"
                     + " the peak over the band: no trim is advised; the structure as measured may need a new design";
+            case SPILLOVER_LIMIT_NOT_KEPT -> "on the structure as measured, no tuning of these absorbers found keeps the"
+                    + " peak near every other mode within absorbers.spillover_limit: the targets shown come nearest;"
+                    + " the structure may need a new design";
         };
     }
 

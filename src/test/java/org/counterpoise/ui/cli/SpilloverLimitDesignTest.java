@@ -98,6 +98,40 @@ class SpilloverLimitDesignTest {
         assertEquals(p, ProjectReader.read(again).project());
     }
 
+    /**
+     * The site check of the limited gallery floor with its invented demo file, the bending mode's frequency
+     * fitted: the targets it gives, put on the floor as measured in the dense solve, keep the twisting
+     * neighbourhood within 0.75 times that floor's bare peak there; a limit no design keeps is said.
+     */
+    @Test
+    void theSiteCheckKeepsTheLimitOnTheStructureAsMeasured(@TempDir Path dir) throws IOException {
+        Path file = withLimit(dir, "limited.json", "0.75", "exact-peak");
+        CliTest.Run run = CliTest.run("site-check", file.toString(), "--fitted-frf",
+                "presets/gallery-floor-fitted-frf.csv", "--free-structure", "--json");
+        assertEquals(0, run.code(), run.err());
+        JsonObject s = JsonParser.parseString(run.out()).getAsJsonObject().getAsJsonObject("fitted_absorbers");
+        assertFalse(s.getAsJsonArray("warnings").toString().contains("SPILLOVER"), s.toString());
+        double bending = s.get("target_mode_frequency_Hz").getAsDouble() * HZ;
+        ModalStructure floor = SeveralModes.layout(ProjectReader.read(file).project()).orElseThrow().structure()
+                .withFrequency(0, bending);
+        List<PointAbsorber> targets = new ArrayList<>();
+        for (var e : s.getAsJsonArray("absorbers")) {
+            JsonObject a = e.getAsJsonObject();
+            targets.add(PointAbsorber.tuned("midspan", 450, a.get("target_absorber_frequency_Hz").getAsDouble() * HZ,
+                    a.get("design_damping_ratio").getAsDouble()));
+        }
+        double from = Math.sqrt(bending * 9.1 * HZ);
+        double bare = sweep(floor, List.of(), from, 40 * HZ);
+        double kept = sweep(floor, targets, from, 40 * HZ);
+        assertTrue(kept <= 0.75 * bare * (1 + 1e-4), kept + " above " + 0.75 * bare);
+
+        Path tight = withLimit(dir, "tight.json", "0.05", "exact-peak");
+        CliTest.Run none = CliTest.run("site-check", tight.toString(), "--fitted-frf",
+                "presets/gallery-floor-fitted-frf.csv", "--free-structure", "--json");
+        assertEquals(0, none.code(), none.err());
+        assertTrue(none.out().contains("SPILLOVER_LIMIT_NOT_KEPT"), none.out());
+    }
+
     @Test
     void badLimitsAndConfigurationsThatTakeNoneAreRefusedPlainly(@TempDir Path dir) throws IOException {
         for (String bad : new String[] {"0", "-1", "101", "\"x\""}) {
