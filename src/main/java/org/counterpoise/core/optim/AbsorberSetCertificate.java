@@ -7,7 +7,7 @@ package org.counterpoise.core.optim;
  * @param activeSpread 1 - smallest / largest of the active maxima (equal peaks: at most 1e-9)
  * @param stationarity relative violation of the first-order minimax conditions (the least-norm
  *     convex combination of the active maxima's exact gradients, each variable scaled by its
- *     largest component; at most 1e-4)
+ *     largest component, or 1e-2 of the largest over all variables when that is more; at most 1e-4)
  * @param scanPoints designs of the coarse global scan of the variables
  * @param scanBest the lowest peak among them (not below the optimum by more than 1e-9 relative)
  * @param perturbations small random moves of the variables tried (10^-6 to 10^-2, in the solver's

@@ -3,6 +3,7 @@ package org.counterpoise.core.optim;
 import java.util.function.DoubleUnaryOperator;
 import org.counterpoise.core.rational.TransferFunction;
 import org.counterpoise.core.system.AbsorberSensitivity;
+import org.counterpoise.core.system.FactoredReceptance;
 import org.counterpoise.core.system.ModalSystem;
 import org.counterpoise.core.system.Mode;
 
@@ -131,10 +132,9 @@ final class JointAbsorberVariables implements MinimaxVariables {
 
     @Override
     public DoubleUnaryOperator logMagnitudeSquared(double[] p) {
-        ModalSystem system = system(design(p));
-        String force = problem.excitationPoint();
-        String at = problem.responsePoint();
-        return x -> 2 * Math.log(AbsorberSensitivity.value(system, force, at, Math.sqrt(x)).abs());
+        FactoredReceptance h = FactoredReceptance.of(system(design(p)), problem.excitationPoint(),
+                problem.responsePoint());
+        return x -> Math.log(h.magnitudeSquared(Math.sqrt(x)));
     }
 
     @Override
