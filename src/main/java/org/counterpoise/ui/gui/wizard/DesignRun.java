@@ -191,7 +191,7 @@ final class DesignRun {
             } catch (InvalidInputException e) {
                 // shown under its field once every step is made
             }
-            steps.structure().get().showDerived(first); // the first step's derived values, as a whole window has them
+            steps.structure().get().showDerived(first, document.project().displayUnits()); // the first step's derived values, as a whole window has them
             return;
         }
         steps.all().forEach(s -> s.get().clearProblems());
@@ -203,7 +203,7 @@ final class DesignRun {
         if (fieldsValid()) {
             try {
                 built = p.toStructure();
-                steps.structure().get().showDerived(built);
+                steps.structure().get().showDerived(built, p.displayUnits());
                 steps.disturbance().get().showDerived(p.toExcitation(), built);
                 p.runUpRate();
                 p.toRobustness();
@@ -213,7 +213,7 @@ final class DesignRun {
             }
         }
         if (built == null) {
-            steps.structure().get().showDerived(null);
+            steps.structure().get().showDerived(null, p.displayUnits());
         }
         if (study == null) {
             clearResults(gen);

@@ -27,6 +27,7 @@ import org.counterpoise.io.project.Project;
 import org.counterpoise.io.project.QuantityInput;
 import org.counterpoise.io.project.StructureInput;
 import org.counterpoise.io.text.DisplayUnits;
+import org.counterpoise.io.text.UnitSystem;
 import org.counterpoise.io.text.MeasuredSourceContent;
 import org.counterpoise.io.text.QuantityFormat;
 import org.counterpoise.io.text.UnitChoices;
@@ -335,16 +336,19 @@ final class StructureStep extends Step {
         showValue(modeShape, s.modeShapeAtAbsorber(), Unit.RATIO);
     }
 
-    /** @param s the structure, or null when the input is not valid */
-    void showDerived(Structure s) {
+    /**
+     * @param s the structure, or null when the input is not valid
+     * @param units the project's display units (mass and stiffness shown in them)
+     */
+    void showDerived(Structure s, UnitSystem units) {
         if (s == null) {
             for (JLabel l : List.of(derivedMass, derivedStiffness, derivedFrequency, derivedDamping)) {
                 l.setText("\u2014");
             }
             return;
         }
-        derivedMass.setText(DisplayUnits.format(s.effectiveMass(), Dimension.MASS));
-        derivedStiffness.setText(DisplayUnits.format(s.effectiveStiffness(), Dimension.STIFFNESS));
+        derivedMass.setText(DisplayUnits.format(s.effectiveMass(), Dimension.MASS, units));
+        derivedStiffness.setText(DisplayUnits.format(s.effectiveStiffness(), Dimension.STIFFNESS, units));
         derivedFrequency.setText(QuantityFormat.number(Unit.HERTZ.fromSi(s.naturalFrequency()), 4) + " Hz  ("
                 + QuantityFormat.format(s.naturalFrequency(), Unit.REV_PER_MINUTE) + ")");
         derivedDamping.setText(QuantityFormat.number(s.dampingRatio(), 3));

@@ -9,6 +9,7 @@ import java.awt.Component;
 import java.util.List;
 import java.util.concurrent.Callable;
 import javax.swing.JComboBox;
+import javax.swing.JLabel;
 import javax.swing.JTextField;
 import javax.swing.SwingUtilities;
 import org.counterpoise.core.units.Unit;
@@ -68,6 +69,11 @@ class UnitSystemGuiTest {
             assertFalse(usUnits.contains(si), "SI unit " + si + " in the US result table: " + usUnits);
         }
         assertTrue(usUnits.contains("lbf/in"), "the stiffness in lbf/in: " + usUnits);
+        // the structure step's derived values too (they stayed in kg and N/m before, 5 Dec 2026)
+        String derivedMass = onEdt(() -> ((JLabel) find("derived.mass")).getText());
+        String derivedStiffness = onEdt(() -> ((JLabel) find("derived.stiffness")).getText());
+        assertTrue(derivedMass.endsWith(" lb") && !derivedMass.contains("kg"), derivedMass);
+        assertTrue(derivedStiffness.contains("lbf/in") && !derivedStiffness.contains("N/m"), derivedStiffness);
         String inTitle = onEdt(() -> stroke().chart().getYAxisTitle());
         assertTrue(inTitle.contains("(in)"), inTitle);
         String readout = onEdt(() -> frame.readoutAt(14.0));
@@ -87,6 +93,7 @@ class UnitSystemGuiTest {
         assertEquals(Unit.MILLIMETRE, onEdt(() -> ((JComboBox<?>) find("absorber.stroke_limit.unit")).getSelectedItem()));
         assertTrue(onEdt(() -> ((JComboBox<?>) find("display.units")).getSelectedItem() == UnitSystem.SI));
         Edt.waitFor(() -> Edt.callQuietly(() -> units(frame.resultRows()).contains("kg")), "the result table in kg again");
+        assertTrue(onEdt(() -> ((JLabel) find("derived.mass")).getText()).endsWith(" kg"), "the derived mass in kg again");
     }
 
     /** @return the unit column of the result table's rows */
