@@ -339,16 +339,11 @@ public final class QuantityField extends JPanel {
             }
             return;
         }
-        if (room == wrappedAt && message.getText().contains(escape(plain))) {
+        if (room == wrappedAt && message.getText().contains(Html.escape(plain))) {
             return;
         }
         wrappedAt = room;
-        // Swing's HTML takes a CSS px as 1.3 screen pixels and a pt as one, so the width goes in pt.
-        message.setText("<html><body style='width: " + Math.max(120, room) + "pt'>" + escape(plain) + "</body></html>");
-    }
-
-    private static String escape(String s) {
-        return s.replace("&", "&amp;").replace("<", "&lt;").replace(">", "&gt;");
+        message.setText(Html.wrapped(plain, Math.max(120, room)));
     }
 
     /** @return the text component (for focus and tests) */

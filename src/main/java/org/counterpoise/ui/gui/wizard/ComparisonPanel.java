@@ -19,6 +19,7 @@ import org.counterpoise.io.text.ReportComparison;
 import org.counterpoise.io.text.ReportKey;
 import org.counterpoise.io.text.ReportTable;
 import org.counterpoise.io.text.ValueText;
+import org.counterpoise.ui.gui.field.Html;
 
 /**
  * The result step's comparison of design methods, a tab of its own: the {@link ReportTable.Grid} of
@@ -124,7 +125,7 @@ final class ComparisonPanel {
     void show(ReportComparison comparison) {
         ReportTable.Grid grid = ReportTable.comparison(comparison);
         // the title wraps (an HTML label) rather than being cut off
-        title.setText("<html>" + grid.title().replace("&", "&amp;").replace("<", "&lt;") + "</html>");
+        title.setText(Html.label(grid.title()));
         int method = methodColumn(comparison);
         List<ReportComparison.Line> lines = comparison.lines();
         List<String> headings = new ArrayList<>();

@@ -41,6 +41,7 @@ import org.counterpoise.io.text.DisplayUnits;
 import org.counterpoise.io.text.QuantityFormat;
 import org.counterpoise.io.text.UnitChoices;
 import org.counterpoise.ui.gui.Themes;
+import org.counterpoise.ui.gui.field.Html;
 import org.counterpoise.ui.gui.field.Form;
 import org.counterpoise.ui.gui.field.ItemWords;
 import org.counterpoise.ui.gui.field.QuantityField;
@@ -388,8 +389,7 @@ final class CriterionForm {
     }
 
     private static String html(String text) {
-        return "<html><body style='width: 220pt'>" + text.replace("&", "&amp;").replace("<", "&lt;")
-                + "</body></html>";
+        return Html.wrapped(text, 220);
     }
 
     /** @param text a problem of the criterion (not of its number field), or null to clear it */

@@ -27,6 +27,7 @@ import org.counterpoise.io.project.QuantityInput;
 import org.counterpoise.io.text.UnitChoices;
 import org.counterpoise.ui.gui.Themes;
 import org.counterpoise.ui.gui.document.ProjectEdits;
+import org.counterpoise.ui.gui.field.Html;
 import org.counterpoise.ui.gui.field.Form;
 import org.counterpoise.ui.gui.field.FormSwitch;
 import org.counterpoise.ui.gui.field.ItemWords;
@@ -383,8 +384,7 @@ final class GoalStep extends Step {
     }
 
     void note(String text) {
-        methodNote.setText(text == null ? " " : "<html><body style='width: 440pt'>" + text
-                .replace("&", "&amp;").replace("<", "&lt;") + "</body></html>");
+        methodNote.setText(text == null ? " " : Html.wrapped(text, 440));
     }
 
     /** Shows a problem on the method list (not a number field). */

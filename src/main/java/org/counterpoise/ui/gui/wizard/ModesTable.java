@@ -38,6 +38,7 @@ import org.counterpoise.io.project.Project;
 import org.counterpoise.ui.gui.document.Edit;
 import org.counterpoise.ui.gui.document.ModesEdits;
 import org.counterpoise.ui.gui.document.ProjectEdits;
+import org.counterpoise.ui.gui.field.Html;
 import org.counterpoise.ui.gui.field.ItemWords;
 
 /**
@@ -327,8 +328,7 @@ final class ModesTable {
     }
 
     private static String wrapped(String message) {
-        return "<html><div style='width:560px'>" + PlainText.escape(message).replace("&", "&amp;")
-                .replace("<", "&lt;") + "</div></html>";
+        return "<html><div style='width:560px'>" + Html.escape(PlainText.escape(message)) + "</div></html>";
     }
 
     private static JPanel labelled(String words, JComponent field) {

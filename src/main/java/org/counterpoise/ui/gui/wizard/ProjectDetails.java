@@ -24,6 +24,7 @@ import org.counterpoise.io.project.SignOff;
 import org.counterpoise.ui.gui.Themes;
 import org.counterpoise.ui.gui.document.DesignDocument;
 import org.counterpoise.ui.gui.document.ProjectEdits;
+import org.counterpoise.ui.gui.field.Html;
 
 /**
  * Who and what the project is: name, revision, date of issue, engineer, client or site, notes. A
@@ -153,7 +154,7 @@ final class ProjectDetails extends JPanel {
         } catch (InvalidInputException e) {
             // Wrapped to the form's width, so a long message neither runs off nor squeezes the fields.
             dateProblem.setForeground(Themes.problemColour());
-            dateProblem.setText("<html><div style='width:240pt'>" + escapeHtml(e.problem()) + "</div></html>");
+            dateProblem.setText("<html><div style='width:240pt'>" + Html.escape(e.problem()) + "</div></html>");
             date.putClientProperty("JComponent.outline", "error");
             dateOk = false;
         }
@@ -229,9 +230,5 @@ final class ProjectDetails extends JPanel {
         if (!shown.equals(text) && !shown.strip().equals(text)) {
             c.setText(text);
         }
-    }
-
-    private static String escapeHtml(String text) {
-        return text.replace("&", "&amp;").replace("<", "&lt;").replace(">", "&gt;");
     }
 }

@@ -33,6 +33,7 @@ import org.counterpoise.io.project.Project;
 import org.counterpoise.io.text.QuantityFormat;
 import org.counterpoise.io.text.RunUpReport;
 import org.counterpoise.io.text.ValueText;
+import org.counterpoise.ui.gui.field.Html;
 import org.counterpoise.ui.gui.plot.ChartHost;
 import org.counterpoise.ui.gui.task.TaskRunner;
 
@@ -236,18 +237,14 @@ final class RunUpView {
                     boolean focus, int row, int column) {
                 String text = value == null ? "" : value.toString();
                 int at = text.indexOf(" at ");
-                String shown = at < 0 ? text : "<html>" + escape(text.substring(0, at)) + "<br>"
-                        + escape(text.substring(at + 1)) + "</html>";
+                String shown = at < 0 ? text : "<html>" + Html.escape(text.substring(0, at)) + "<br>"
+                        + Html.escape(text.substring(at + 1)) + "</html>";
                 JLabel l = (JLabel) super.getTableCellRendererComponent(table, shown, selected, focus, row, column);
                 l.setVerticalAlignment(JLabel.TOP);
                 l.setToolTipText(text.isEmpty() ? null : text);
                 return l;
             }
         };
-    }
-
-    private static String escape(String s) {
-        return s.replace("&", "&amp;").replace("<", "&lt;").replace(">", "&gt;");
     }
 
     private void clear(String message) {

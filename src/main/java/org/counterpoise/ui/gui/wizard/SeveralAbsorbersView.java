@@ -32,6 +32,7 @@ import org.counterpoise.io.text.DisplayUnits;
 import org.counterpoise.io.text.ReportTable;
 import org.counterpoise.io.text.UnitSystem;
 import org.counterpoise.io.text.ValueText;
+import org.counterpoise.ui.gui.field.Html;
 import org.counterpoise.ui.gui.plot.ChartHost;
 import org.knowm.xchart.XYChart;
 
@@ -195,7 +196,7 @@ final class SeveralAbsorbersView {
             model.addRow(row.stream().map(ValueText::pretty).toArray());
         }
         // wrapped to the tab's width: the sentence is longer than the table is wide
-        summary.setText("<html>" + s.summary().replace("&", "&amp;").replace("<", "&lt;") + "</html>");
+        summary.setText(Html.label(s.summary()));
         charts = s.charts();
         point.setModel(new DefaultComboBoxModel<>(charts.keySet().toArray(new String[0])));
         point.setEnabled(true);

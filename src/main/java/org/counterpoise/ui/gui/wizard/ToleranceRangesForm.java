@@ -19,6 +19,7 @@ import org.counterpoise.io.text.ReportRow;
 import org.counterpoise.io.text.ToleranceRangeRows;
 import org.counterpoise.io.text.TypedNumbers;
 import org.counterpoise.io.text.ValueText;
+import org.counterpoise.ui.gui.field.Html;
 import org.counterpoise.ui.gui.field.Form;
 import org.counterpoise.ui.gui.field.ItemWords;
 import org.counterpoise.ui.gui.field.QuantityField;
@@ -141,7 +142,6 @@ final class ToleranceRangesForm {
     }
 
     private static String phrase(ReportRow row) {
-        return ValueText.capitalised(row.label()).replace("&", "&amp;").replace("<", "&lt;") + ": "
-                + ValueText.inline(row.value()).replace("&", "&amp;").replace("<", "&lt;");
+        return Html.escape(ValueText.capitalised(row.label())) + ": " + Html.escape(ValueText.inline(row.value()));
     }
 }

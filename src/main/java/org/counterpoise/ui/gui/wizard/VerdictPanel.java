@@ -25,6 +25,7 @@ import org.counterpoise.io.text.DisplayUnits;
 import org.counterpoise.io.text.QuantityFormat;
 import org.counterpoise.io.text.ValueText;
 import org.counterpoise.ui.gui.Themes;
+import org.counterpoise.ui.gui.field.Html;
 import org.counterpoise.ui.gui.field.QuantityField;
 
 /**
@@ -197,7 +198,6 @@ final class VerdictPanel {
     }
 
     private static String html(String text, int widthPt) {
-        return "<html><body style='width: " + widthPt + "pt'>" + text.replace("&", "&amp;").replace("<", "&lt;")
-                .replace("\n", "<br>") + "</body></html>";
+        return Html.wrapped(text, widthPt).replace("\n", "<br>");
     }
 }
