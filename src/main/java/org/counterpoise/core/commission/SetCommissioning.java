@@ -280,13 +280,19 @@ public record SetCommissioning(AsBuiltSet built, List<Correction> corrections, L
      */
     private static double worstSpillover(ModalStructure structure, List<PointAbsorber> absorbers, AbsorberLayout layout,
             double targetFrequency, double ratio) {
+        int target = -1;
+        for (int i = 0; i < structure.size(); i++) {
+            if (structure.modes().get(i).naturalFrequency() == targetFrequency) {
+                target = i;
+            }
+        }
         double worst = 0;
         Spillover spillover = Spillover.of(ModalSystem.of(structure, absorbers), layout.excitationPoint(),
                 layout.responsePoint());
         for (Spillover.ModePeak p : spillover.modes()) {
-            boolean target = structure.modes().get(p.mode()).naturalFrequency() == targetFrequency;
-            if (!target && Double.isFinite(p.before())) {
-                worst = Math.max(worst, p.after() / (ratio * p.before()));
+            Optional<Double> limit = SeveralAbsorbers.SpilloverLimit.near(p.mode(), p.before(), target, ratio);
+            if (limit.isPresent()) {
+                worst = Math.max(worst, p.after() / limit.get());
             }
         }
         return worst;

@@ -124,6 +124,24 @@ public record SeveralAbsorbers(AbsorberLayout layout, int targetMode, double eff
      *     the same limit)
      */
     public record SpilloverLimit(double ratio, double unlimitedPeak, boolean limited, boolean met, boolean singleMet) {
+        /**
+         * The limit's rule, in one place (the designer's windows, the report and the site check take it
+         * from here): near every mode but the target, the ratio times that mode's peak without absorbers.
+         *
+         * @param mode index of a mode
+         * @param peakBefore the peak near it without absorbers (its neighbourhood as
+         *     {@code core.system.Spillover} takes it), in any units
+         * @param targetMode index of the mode the absorbers are fitted to
+         * @param ratio the limit's ratio
+         * @return the largest peak allowed near that mode, in the peak's units; empty for the target mode
+         *     and where the mode is unbounded without absorbers (undamped: no finite multiple of it)
+         */
+        public static Optional<Double> near(int mode, double peakBefore, int targetMode, double ratio) {
+            if (mode == targetMode || !Double.isFinite(peakBefore)) {
+                return Optional.empty();
+            }
+            return Optional.of(ratio * peakBefore);
+        }
     }
 
     /**
@@ -132,10 +150,7 @@ public record SeveralAbsorbers(AbsorberLayout layout, int targetMode, double eff
      *     absorbers; empty for the target mode, with no limit, or where the mode is unbounded without absorbers
      */
     public Optional<Double> spilloverLimitOf(ModePeak p) {
-        if (spillover.isEmpty() || p.mode() == targetMode || Double.isInfinite(p.before())) {
-            return Optional.empty();
-        }
-        return Optional.of(spillover.get().ratio() * p.before());
+        return spillover.flatMap(s -> SpilloverLimit.near(p.mode(), p.before(), targetMode, s.ratio()));
     }
 
     /**

@@ -201,10 +201,8 @@ public final class SeveralAbsorbersDesigner {
         ModalSystem bare = ModalSystem.of(structure, List.of());
         List<SpilloverLimitedOptimiser.Window> windows = new ArrayList<>();
         for (Spillover.ModePeak p : Spillover.of(bare, layout.excitationPoint(), layout.responsePoint()).modes()) {
-            if (p.mode() != target && Double.isFinite(p.before())) {
-                windows.add(new SpilloverLimitedOptimiser.Window(p.low() / wr, p.high() / wr,
-                        ratio * p.before() * stiffness));
-            }
+            SeveralAbsorbers.SpilloverLimit.near(p.mode(), p.before(), target, ratio).ifPresent(limit -> windows.add(
+                    new SpilloverLimitedOptimiser.Window(p.low() / wr, p.high() / wr, limit * stiffness)));
         }
         return windows;
     }
