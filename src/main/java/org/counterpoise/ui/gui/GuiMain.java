@@ -5,6 +5,7 @@ import java.util.logging.Level;
 import java.util.logging.Logger;
 import javax.swing.JOptionPane;
 import javax.swing.SwingUtilities;
+import org.counterpoise.io.chart.ChartWarmUp;
 import org.counterpoise.ui.gui.wizard.WizardFrame;
 
 /** Starts the wizard: look and feel first, then the window on the event thread. */
@@ -39,6 +40,25 @@ public final class GuiMain {
                 frame.openFile(project);
             }
             frame.makeRestLater();
+            warmUpCharts();
         });
+    }
+
+    /**
+     * A chart painted once into an image on a background thread of low priority, so that the first
+     * chart painted on screen does not load and compile the painting code on the event thread
+     * ({@link ChartWarmUp}). A failure there only loses the head start.
+     */
+    private static void warmUpCharts() {
+        Thread warmUp = new Thread(() -> {
+            try {
+                ChartWarmUp.paintOnce();
+            } catch (RuntimeException e) {
+                Logger.getLogger("counterpoise").log(Level.FINE, "chart warm-up failed", e);
+            }
+        }, "chart warm-up");
+        warmUp.setDaemon(true);
+        warmUp.setPriority(Thread.MIN_PRIORITY);
+        warmUp.start();
     }
 }
