@@ -85,7 +85,9 @@ public final class DamperSizing {
         double coefficient = coefficient(design, choice, built.springRate());
         double inBand = design.strokeInBand().value();
         ResponsePeak steadyRunUp = design.strokeRunUp();
-        double runUp = steadyRunUp.unbounded() ? inBand : steadyRunUp.value();
+        // unbounded (no damping anywhere: the run-up passes a resonance) stays unbounded; it was given as
+        // the in-band stroke until 5 Dec 2026, which contradicted the design's own run-up stroke
+        double runUp = steadyRunUp.unbounded() ? Double.POSITIVE_INFINITY : steadyRunUp.value();
         List<DesignCheck> checks = new ArrayList<>();
         DesignCheck stroke = strokeCheck(design);
         checks.add(stroke);

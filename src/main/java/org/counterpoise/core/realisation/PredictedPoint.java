@@ -6,8 +6,8 @@ package org.counterpoise.core.realisation;
  *
  * @param frequency forcing frequency, rad/s
  * @param before the bare structure's response
- * @param after the response with the absorber
- * @param stroke the absorber's stroke (relative displacement amplitude), m
+ * @param after the response with the absorber (+infinity at an undamped coupled natural frequency)
+ * @param stroke the absorber's stroke (relative displacement amplitude), m (+infinity there too)
  */
 public record PredictedPoint(double frequency, double before, double after, double stroke) {
 }

@@ -16,8 +16,10 @@ import org.counterpoise.core.response.SystemResponse;
  * from below the band (and below the lower coupled natural frequency) to above it (and above the
  * upper one), always holding the band's ends, the running frequency, the two coupled natural
  * frequencies (undamped) and the exact peaks of the response with the absorber (damped); at each the study's response without and with the absorber and the absorber's stroke,
- * from the same transfer functions the design uses. A frequency that falls exactly on an undamped
- * resonance is moved off it by one part in 1e9, as the design's curves do, so every value is finite.
+ * from the same transfer functions the design uses. With no damping anywhere the response with the
+ * absorber and its stroke are unbounded (+infinity) at the two coupled natural frequencies; any other
+ * frequency that falls exactly on an undamped resonance is moved off it by one part in 1e9, as the
+ * design's curves do.
  */
 public final class PredictedTable {
     /** Rows in the table (at least; the marked frequencies and evenly spaced ones). */
@@ -46,7 +48,17 @@ public final class PredictedTable {
         SystemResponse bare = new SystemResponse(design.study().structure(), null, e.kind(), e.amplitude());
         ResponseKind kind = design.study().response();
         List<PredictedPoint> rows = new ArrayList<>();
-        for (double w : frequencies(design, fitted.hysteretic().isEmpty())) {
+        // with no damping anywhere the response with the absorber is unbounded at its two coupled natural
+        // frequencies: said so, not valued a part in 1e9 off them (hundreds of metres of round-off)
+        boolean undamped = fitted.hysteretic().isEmpty()
+                && DamperSizing.fitted(design).transferFunction(kind).undamped();
+        double[] coupled = design.coupledNaturalFrequencies();
+        for (double w : frequencies(design, fitted.hysteretic().isEmpty() && !undamped)) {
+            if (undamped && (w == coupled[0] || w == coupled[1])) {
+                rows.add(new PredictedPoint(w, bare.amplitudeAt(kind, w), Double.POSITIVE_INFINITY,
+                        Double.POSITIVE_INFINITY));
+                continue;
+            }
             double omega = w;
             if (Double.isInfinite(bare.amplitudeAt(kind, omega)) || Double.isInfinite(fitted.amplitudeAt(kind, omega))
                     || Double.isInfinite(fitted.amplitudeAt(ResponseKind.STROKE, omega))) {

@@ -95,7 +95,9 @@ public sealed interface AcceptanceInput {
                         "a response of the structure: one of " + AcceptanceJson.quantityIds());
             }
             if ((value == null) == curve.isEmpty()) {
-                throw new InvalidInputException(AcceptanceJson.LIMIT_PATH, value == null ? "neither" : "both",
+                throw new InvalidInputException(AcceptanceJson.LIMIT_PATH, value == null
+                        ? "neither " + AcceptanceJson.LIMIT + " nor " + AcceptanceJson.LIMIT_CURVE + " given"
+                        : "both " + AcceptanceJson.LIMIT + " and " + AcceptanceJson.LIMIT_CURVE + " given",
                         "give either acceptance." + AcceptanceJson.LIMIT + " (one value) or acceptance."
                                 + AcceptanceJson.LIMIT_CURVE + " (points over frequency)");
             }

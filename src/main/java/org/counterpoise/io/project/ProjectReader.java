@@ -224,7 +224,8 @@ public final class ProjectReader {
         QuantityInput frequency = d.optionalQuantity("frequency", Dimension.FREQUENCY);
         JsonFields band = d.optionalObject("band");
         if ((frequency == null) == (band == null)) {
-            throw new InvalidInputException(d.pathOf("frequency"), frequency == null ? "neither" : "both",
+            throw new InvalidInputException(d.pathOf("frequency"),
+                    frequency == null ? "neither frequency nor band given" : "both frequency and band given",
                     "give either disturbance.frequency or disturbance.band");
         }
         SpectrumInput spectrum = spectrum(d.optionalObject("spectrum"), kind);

@@ -4,15 +4,22 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.List;
 import org.apache.commons.math3.complex.Complex;
+import org.counterpoise.core.design.AbsorberSizing;
+import org.counterpoise.core.design.DesignMethod;
 import org.counterpoise.core.design.DesignResult;
+import org.counterpoise.core.design.DesignStudy;
+import org.counterpoise.core.design.Designer;
 import org.counterpoise.core.model.Absorber;
 import org.counterpoise.core.model.Excitation;
+import org.counterpoise.core.model.ExcitationKind;
 import org.counterpoise.core.model.FrequencyBand;
 import org.counterpoise.core.model.Structure;
 import org.counterpoise.core.response.ResponseKind;
 import org.counterpoise.testing.DirectSolve;
+import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.MethodSource;
 
@@ -54,6 +61,47 @@ class PredictedTableTest {
             assertEquals(motion(kind, with[0], base, w), r.after(), 1e-9 * r.after(), preset + " after");
             assertEquals(with[1].subtract(with[0]).abs(), r.stroke(), 1e-9 * r.stroke(), preset + " stroke");
         }
+    }
+
+    /**
+     * With no damping anywhere (an undamped structure and the undamped absorber for one speed) the
+     * response with the absorber and its stroke are unbounded at the two coupled natural frequencies,
+     * omega^2 / omega1^2 = 1 + mu/2 -/+ sqrt(mu + mu^2/4) for an absorber tuned to the structure (the
+     * roots of the undamped pair's characteristic equation Omega^4 - (1 + (1+mu) f^2) Omega^2 + f^2 = 0
+     * at f = 1, as in Den Hartog 1956, Mechanical Vibrations, 4th ed., ch. 3; section from memory): the
+     * table says so instead of valuing them a part in 1e9 away
+     * (212 500 mm and 300 500 mm in two rows at 17.89 Hz before 5 Dec 2026). The damper's run-up
+     * stroke is unbounded too (it read as the in-band stroke).
+     */
+    @Test
+    void anUndampedDesignIsUnboundedAtItsCoupledFrequenciesAndNowhereElse() {
+        double w1 = 2 * Math.PI * 20;
+        Structure s = Structure.of(400, 400 * w1 * w1, 0.0);
+        Excitation e = new Excitation(ExcitationKind.FORCE, 100, new FrequencyBand(w1, w1));
+        double mu = 0.05;
+        DesignResult d = Designer.design(new DesignStudy("invented undamped", s, e, ResponseKind.DISPLACEMENT,
+                AbsorberSizing.ofMassRatio(mu), DesignMethod.UNDAMPED_SINGLE_SPEED, false, 1.5));
+        double lower = w1 * Math.sqrt(1 + mu / 2 - Math.sqrt(mu + mu * mu / 4));
+        double upper = w1 * Math.sqrt(1 + mu / 2 + Math.sqrt(mu + mu * mu / 4));
+        List<PredictedPoint> rows = PredictedTable.of(d);
+        int unbounded = 0;
+        for (PredictedPoint r : rows) {
+            boolean atCoupled = Math.abs(r.frequency() - lower) <= 1e-9 * lower
+                    || Math.abs(r.frequency() - upper) <= 1e-9 * upper;
+            if (atCoupled) {
+                unbounded++;
+                assertTrue(Double.isInfinite(r.after()) && Double.isInfinite(r.stroke()), "at " + r.frequency());
+                assertTrue(Double.isFinite(r.before()), "the bare structure is finite there");
+            } else {
+                // everywhere else finite and, away from the structure's own resonance, below a metre
+                assertTrue(Double.isFinite(r.after()) && r.after() < 1.0, r.frequency() + ": " + r.after());
+                assertTrue(Double.isFinite(r.stroke()) && r.stroke() < 1.0, r.frequency() + ": " + r.stroke());
+            }
+        }
+        assertEquals(2, unbounded, "one row at each coupled natural frequency");
+        DamperDesign damper = DamperSizing.size(d, HardwareChoice.DEFAULT, new ArrayList<>());
+        assertTrue(Double.isInfinite(damper.runUpStroke()), "run-up stroke " + damper.runUpStroke());
+        assertEquals(d.strokeInBand().value(), damper.strokeAmplitude(), 1e-15);
     }
 
     private static double motion(ResponseKind kind, Complex x1, Complex base, double w) {
