@@ -37,6 +37,12 @@ public enum MachineClass {
     /** Source of the tables, in one line for the family. */
     public static final String SOURCE = "ISO 10816-3:2009 Tables A.1, A.2 (superseded by ISO 20816-3:2022)";
 
+    /**
+     * A support is rigid when its lowest natural frequency is at least this multiple of the main
+     * excitation frequency (ISO 10816-3:2009, 4.3: 25 % above), flexible otherwise.
+     */
+    public static final double RIGID_FREQUENCY_RATIO = 1.25;
+
     /** The sources, one line each. */
     private static final class Sources {
         static final String ISO_10816_3_A1 = "ISO 10816-3:2009 Table A.1 (superseded by ISO 20816-3:2022)";
@@ -53,6 +59,11 @@ public enum MachineClass {
         this.source = source;
         this.velocity = velocity;
         this.displacement = displacement;
+    }
+
+    /** @return true for the classes of a rigid support */
+    public boolean rigidSupport() {
+        return this == GROUP_1_RIGID || this == GROUP_2_RIGID;
     }
 
     /** @return the id in project files */

@@ -4,6 +4,8 @@ import java.util.List;
 import java.util.Optional;
 import org.counterpoise.core.error.Checks;
 import org.counterpoise.core.error.InvalidInputException;
+import org.counterpoise.core.error.Warning;
+import org.counterpoise.core.error.WarningKind;
 import org.counterpoise.core.response.ResponseKind;
 
 /**
@@ -64,5 +66,24 @@ public record MachineSeverity(MachineClass machine, SeverityZone acceptable) imp
     @Override
     public String source() {
         return machine.source();
+    }
+
+    /**
+     * The check of a rigid support's class against the structure (ISO 10816-3:2009, 4.3: rigid when the
+     * lowest natural frequency is at least {@value MachineClass#RIGID_FREQUENCY_RATIO} times the main
+     * excitation frequency).
+     *
+     * @param criterion the study's criterion, if any
+     * @param naturalFrequency the structure's natural frequency, rad/s
+     * @param forcing the highest forcing frequency, rad/s
+     * @return {@link WarningKind#SUPPORT_NOT_RIGID} when the criterion is a rigid support's machine class
+     *     and the structure's natural frequency is below that multiple of the forcing; empty otherwise
+     */
+    public static Optional<Warning> supportWarning(Optional<Criterion> criterion, double naturalFrequency,
+            double forcing) {
+        boolean rigid = criterion.orElse(null) instanceof MachineSeverity m && m.machine().rigidSupport();
+        return rigid && naturalFrequency < MachineClass.RIGID_FREQUENCY_RATIO * forcing
+                ? Optional.of(Warning.of(WarningKind.SUPPORT_NOT_RIGID, naturalFrequency, forcing))
+                : Optional.empty();
     }
 }

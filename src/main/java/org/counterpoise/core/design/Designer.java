@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.OptionalDouble;
 import org.counterpoise.core.criteria.Assessor;
+import org.counterpoise.core.criteria.MachineSeverity;
 import org.counterpoise.core.error.InvalidInputException;
 import org.counterpoise.core.error.NotFoundException;
 import org.counterpoise.core.error.Warning;
@@ -343,6 +344,8 @@ public final class Designer {
         if (coupled[0] < band.low()) {
             warnings.add(Warning.of(WarningKind.START_UP_RESONANCE, coupled[0], coupled[1]));
         }
+        MachineSeverity.supportWarning(study.criterion(), study.structure().naturalFrequency(), band.high())
+                .ifPresent(warnings::add);
         if (strokeRunUp.unbounded()) {
             warnings.add(Warning.of(WarningKind.UNBOUNDED_TRANSIT_STROKE));
         }

@@ -42,6 +42,12 @@ public enum WarningKind {
     UNDAMPED_IN_BAND,
     /** The lower coupled natural frequency lies below the band. */
     START_UP_RESONANCE(WarningParameter.LOWER_NATURAL_FREQUENCY, WarningParameter.UPPER_NATURAL_FREQUENCY),
+    /**
+     * The machine criterion's class says a rigid support, but the structure's natural frequency is not
+     * 25 % above the forcing (ISO 10816-3:2009, 4.3): by the standard's own definition the support is
+     * flexible, whose zone limits are higher.
+     */
+    SUPPORT_NOT_RIGID(WarningParameter.STRUCTURE_NATURAL_FREQUENCY, WarningParameter.FORCING_FREQUENCY),
     /** The run-up stroke is unbounded (no absorber damping). */
     UNBOUNDED_TRANSIT_STROKE,
     /** The absorber has no damping and the band is not one frequency. */

@@ -16,6 +16,10 @@ public enum WarningParameter {
     UTILISATION(false),
     /** The structure's damping ratio zeta1 (non-dimensional). */
     STRUCTURE_DAMPING_RATIO(false),
+    /** The structure's own natural frequency (without the absorber), rad/s. */
+    STRUCTURE_NATURAL_FREQUENCY(false),
+    /** The highest forcing frequency of the design order's band, rad/s. */
+    FORCING_FREQUENCY(false),
     /** The lower undamped natural frequency of the structure with the absorber, rad/s. */
     LOWER_NATURAL_FREQUENCY(false),
     /** The upper undamped natural frequency of the structure with the absorber, rad/s. */

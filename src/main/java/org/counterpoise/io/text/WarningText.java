@@ -78,6 +78,11 @@ public final class WarningText {
                     + " the lower one each time it starts and stops. Pass through it quickly.",
                     hertz(w.number(WarningParameter.LOWER_NATURAL_FREQUENCY)),
                     hertz(w.number(WarningParameter.UPPER_NATURAL_FREQUENCY)));
+            case SUPPORT_NOT_RIGID -> String.format(Locale.ROOT, "The machine criterion's class is for a rigid support,"
+                    + " but the structure's natural frequency (%.4g Hz) is not 25 %% above the forcing (%.4g Hz):"
+                    + " by ISO 10816-3:2009, 4.3 the support is flexible. Check which class applies; the flexible"
+                    + " class has higher zone limits.", hertz(w.number(WarningParameter.STRUCTURE_NATURAL_FREQUENCY)),
+                    hertz(w.number(WarningParameter.FORCING_FREQUENCY)));
             case UNBOUNDED_TRANSIT_STROKE -> "With no absorber damping the stroke grows without bound at a resonance"
                     + " passed during run-up; stroke stops are essential and the clearance given covers running in"
                     + " the band only.";

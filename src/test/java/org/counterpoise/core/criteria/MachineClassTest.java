@@ -7,7 +7,11 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.Arrays;
 import java.util.List;
+import java.util.Optional;
 import org.counterpoise.core.error.InvalidInputException;
+import org.counterpoise.core.error.Warning;
+import org.counterpoise.core.error.WarningKind;
+import org.counterpoise.core.error.WarningParameter;
 import org.counterpoise.core.response.ResponseKind;
 import org.junit.jupiter.api.Test;
 
@@ -95,5 +99,27 @@ class MachineClassTest {
         InvalidInputException d = assertThrows(InvalidInputException.class,
                 () -> new MachineSeverity(MachineClass.GROUP_1_RIGID, SeverityZone.D));
         assertEquals("acceptance.zone", d.field());
+    }
+
+    /**
+     * ISO 10816-3:2009, 4.3 (as the transcriptions above state it; not read in the standard itself): a
+     * support is rigid when its lowest natural frequency is at least 25 % above the main excitation
+     * frequency. A rigid class on a structure whose mode sits near the forcing (the absorber's usual
+     * case) is warned; at or past 1.25 times the forcing, or with a flexible class, nothing is said.
+     */
+    @Test
+    void aRigidClassOnAStructureNearItsForcingIsWarned() {
+        double forcing = 2 * Math.PI * 24.67;
+        Optional<Criterion> rigid = Optional.of(new MachineSeverity(MachineClass.GROUP_2_RIGID, SeverityZone.B));
+        Optional<Criterion> flexible = Optional.of(new MachineSeverity(MachineClass.GROUP_2_FLEXIBLE, SeverityZone.B));
+        Warning w = MachineSeverity.supportWarning(rigid, 2 * Math.PI * 25.0, forcing).orElseThrow();
+        assertEquals(WarningKind.SUPPORT_NOT_RIGID, w.kind());
+        assertEquals(2 * Math.PI * 25.0, w.number(WarningParameter.STRUCTURE_NATURAL_FREQUENCY), 1e-12);
+        assertEquals(forcing, w.number(WarningParameter.FORCING_FREQUENCY), 1e-12);
+        assertTrue(MachineSeverity.supportWarning(rigid, 1.2499 * forcing, forcing).isPresent());
+        assertFalse(MachineSeverity.supportWarning(rigid, 1.25 * forcing, forcing).isPresent());
+        assertFalse(MachineSeverity.supportWarning(flexible, 2 * Math.PI * 25.0, forcing).isPresent());
+        assertFalse(MachineSeverity.supportWarning(Optional.empty(), 2 * Math.PI * 25.0, forcing).isPresent());
+        assertTrue(MachineClass.GROUP_1_RIGID.rigidSupport() && !MachineClass.GROUP_1_FLEXIBLE.rigidSupport());
     }
 }
