@@ -81,10 +81,7 @@ public final class HInfinityOptimiser {
         double cz = PeakScan.fixedOr(problem.fixedDamping(), classical.dampingRatio());
         best.offer(cf, cz, PeakScan.peakOf(problem, cf, cz, counter), "seed", false);
         if (Double.isInfinite(best.peak)) {
-            throw new InvalidInputException("band", problem.bandLow() + ":" + problem.bandHigh(),
-                    "the response " + problem.response().label() + " under " + problem.excitation().label()
-                            + " has no finite peak in this band for any absorber; choose a band that excludes"
-                            + (problem.bandLow() == 0 ? " zero frequency" : " infinite frequency"));
+            throw noFinitePeak(problem);
         }
         // Best starting points first; a seed already well above a verified optimum is not pursued.
         seeds.sort((a, b) -> Double.compare(a[2], b[2]));
@@ -324,5 +321,39 @@ public final class HInfinityOptimiser {
                 this.converged = converged;
             }
         }
+    }
+
+    /**
+     * Why no absorber gives a finite peak, in words and on the input that causes it (never a value the
+     * user did not type, such as an infinite band end): no damping anywhere (every tuning leaves an
+     * undamped resonance in reach), a response that grows without bound at high or at zero frequency.
+     */
+    private static InvalidInputException noFinitePeak(PeakProblem problem) {
+        String what = "the response " + problem.response().label() + " under " + problem.excitation().label();
+        if (problem.structureDamping() == 0 && problem.fixedDamping() == 0) {
+            return new InvalidInputException("fixed absorber damping ratio", "0", "a damping ratio above 0: with no"
+                    + " damping in the structure or the absorber, " + what + " is unbounded at a natural frequency"
+                    + " of the pair " + (problem.allFrequencies() ? "" : "in this band ") + "for every tuning");
+        }
+        Tuning classical = DenHartogEqualPeak.tuning(problem.massRatio());
+        TransferFunction h = problem.transferFunction(classical.tuningRatio(),
+                PeakScan.fixedOr(problem.fixedDamping(), classical.dampingRatio()));
+        boolean atHigh = Double.isInfinite(problem.bandHigh()) && h.unboundedAtInfinity();
+        boolean atZero = problem.bandLow() == 0 && h.unboundedAtZero();
+        String band = problem.bandLow() == 0 && Double.isInfinite(problem.bandHigh()) ? "all frequencies (no band given)"
+                : problem.bandLow() + " to " + (Double.isInfinite(problem.bandHigh()) ? "any frequency" : problem.bandHigh());
+        if (atHigh || atZero) {
+            return new InvalidInputException("band", band, what + " grows without bound toward "
+                    + (atHigh ? "high frequency" : "zero frequency") + " for every absorber: give a band of frequency"
+                    + " ratios LOW:HIGH that " + (atHigh ? "ends short of it" : "starts above zero"));
+        }
+        if (Double.isNaN(problem.fixedDamping())) {
+            return new InvalidInputException("band", band, "a band where some absorber gives " + what
+                    + " a finite peak");
+        }
+        // the damping is above zero but so small that the resonant peak is beyond what the exact search can value
+        return new InvalidInputException("fixed absorber damping ratio", Double.toString(problem.fixedDamping()),
+                "a larger damping ratio: with so little damping the peak of " + what + " is too sharp to be valued"
+                        + " in double precision");
     }
 }

@@ -39,6 +39,8 @@ public record JointAbsorberProblem(double massRatio, double structureDamping, do
         double secondModeMass, double secondModeShape, double bandLow, double bandHigh, Optional<OtherPoint> otherPoint) {
     /** Highest ratio of the two natural frequencies taken (as for the spillover of {@code optimum}). */
     public static final double MAX_MODE_RATIO = 100.0;
+    /** The largest second-mode shape value taken, in size (the first mode's being 1). */
+    public static final double MAX_SHAPE = 1000;
     /** The number of modes, and of absorbers: one per mode. */
     public static final int MODES = 2;
     /** The structure's first point: where the force acts, the displacement is taken and the absorbers sit by default. */
@@ -88,9 +90,10 @@ public record JointAbsorberProblem(double massRatio, double structureDamping, do
                     "a ratio of the second natural frequency to the first, above 1 and at most " + (int) MAX_MODE_RATIO);
         }
         Checks.inOpenRange("second mode mass", secondModeMass, 0.0, 1e6);
-        if (!(Double.isFinite(secondModeShape) && secondModeShape != 0.0)) {
+        if (!(Math.abs(secondModeShape) <= MAX_SHAPE && secondModeShape != 0.0)) {
             throw new InvalidInputException("second mode shape", Checks.show(secondModeShape),
-                    "a finite number other than 0 (an absorber for mode 2 where mode 2 does not move does nothing)");
+                    "a number from -" + (int) MAX_SHAPE + " to " + (int) MAX_SHAPE + " other than 0 (an absorber for"
+                            + " mode 2 where mode 2 does not move does nothing; far beyond, the mass split overflows)");
         }
         PeakProblem.checkBand(bandLow, bandHigh);
         Checks.present("second point", otherPoint, "a second point or none");

@@ -83,8 +83,8 @@ public final class AbsorberSetTable {
         {
             AbsorberSetOptimum o = row.optimum();
             AbsorberSetCertificate c = o.certificate();
-            out.append(String.format(Locale.ROOT, "%d absorbers, %s tuning: mass ratio %.6g in total, structure damping"
-                    + " ratio %.6g, %s%n", o.problem().count(), tuningWord(o.problem().tuning()), o.problem().massRatio(),
+            out.append(String.format(Locale.ROOT, "%s, %s tuning: mass ratio %.6g in total, structure damping"
+                    + " ratio %.6g, %s%n", absorbers(o.problem().count()), tuningWord(o.problem().tuning()), o.problem().massRatio(),
                     o.problem().structureDamping(), band(o)));
             out.append(String.format(Locale.ROOT, "peak %.12g (one absorber of the same total mass: %.12g)%n", o.peak(),
                     row.singlePeak()));
@@ -199,5 +199,10 @@ public final class AbsorberSetTable {
         object.add(CERTIFICATE, cert);
         object.addProperty(CONVERGED, c.certified());
         object.addProperty(STATUS, c.certified() ? "certified" : "not found");
+    }
+
+    /** @return "1 absorber" or "n absorbers" */
+    static String absorbers(int n) {
+        return n == 1 ? "1 absorber" : n + " absorbers";
     }
 }

@@ -57,8 +57,8 @@ public final class RobustSetTable {
         for (Row row : rows) {
             RobustSetOptimum o = row.optimum();
             RobustSetProblem p = o.problem();
-            out.append(String.format(Locale.ROOT, "%d absorbers, %s tuning: mass ratio %.6g in total, structure damping"
-                    + " ratio %.6g, %s%n", p.set().count(), AbsorberSetTable.tuningWord(p.set().tuning()),
+            out.append(String.format(Locale.ROOT, "%s, %s tuning: mass ratio %.6g in total, structure damping"
+                    + " ratio %.6g, %s%n", AbsorberSetTable.absorbers(p.set().count()), AbsorberSetTable.tuningWord(p.set().tuning()),
                     p.set().massRatio(), p.set().structureDamping(), AbsorberSetTable.band(p.set().bandLow(),
                             p.set().bandHigh())));
             out.append(String.format(Locale.ROOT, "least worst peak over the structure's frequency within +/-%.4g %%"

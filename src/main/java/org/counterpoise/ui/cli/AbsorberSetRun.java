@@ -13,6 +13,7 @@ import org.counterpoise.core.optim.AbsorberSetOptimum;
 import org.counterpoise.core.optim.AbsorberSetProblem;
 import org.counterpoise.core.optim.AbsorberSetTuning;
 import org.counterpoise.core.optim.HInfinityOptimiser;
+import org.counterpoise.core.optim.JointAbsorberProblem;
 import org.counterpoise.core.optim.PeakProblem;
 import org.counterpoise.core.response.ResponseKind;
 import org.counterpoise.core.system.Mode;
@@ -63,13 +64,16 @@ final class AbsorberSetRun {
         double[][] grid = grid(o);
         double[] mus = grid[0];
         double[] zetas = grid[1];
-        double[] g = OptimumCommand.parseBand(o.band());
+        double[] g = BandOption.parse(o.band());
         if (o.secondMode() != null && !(o.secondMode() > 1 && o.secondMode() <= 100)) {
             throw new InvalidInputException("--second-mode", PlainText.quote(String.valueOf(o.secondMode())),
                     "a ratio of the second natural frequency to the first, above 1 and at most 100");
         }
-        if (!Double.isFinite(o.secondModeShape())) {
-            throw new InvalidInputException("--second-mode-shape", String.valueOf(o.secondModeShape()), "a finite number");
+        if (!(Math.abs(o.secondModeShape()) <= JointAbsorberProblem.MAX_SHAPE)) {
+            // far beyond that the spillover's receptances overflow double precision (NaN in the table)
+            throw new InvalidInputException("--second-mode-shape", String.valueOf(o.secondModeShape()),
+                    "a number from -" + (int) JointAbsorberProblem.MAX_SHAPE + " to " + (int) JointAbsorberProblem.MAX_SHAPE
+                            + " (the second mode's shape at the absorbers' point, the first's being 1)");
         }
         List<AbsorberSetTable.Row> rows = new ArrayList<>();
         List<SpilloverTable.Row> spill = new ArrayList<>();

@@ -43,7 +43,7 @@ final class JointAbsorberRun {
                     + " frequency over the first's, above 1, such as 2.5");
         }
         double[][] grid = AbsorberSetRun.grid(o);
-        double[] g = OptimumCommand.parseBand(o.band());
+        double[] g = BandOption.parse(o.band());
         double mass = o.secondModeMass() == null ? 1.0 : o.secondModeMass();
         Optional<JointAbsorberProblem.OtherPoint> other = o.secondPoint() == null ? Optional.empty()
                 : Optional.of(otherPoint(o.secondPoint()));

@@ -130,7 +130,7 @@ public final class OptimumCommand implements Callable<Integer> {
 
     @Option(names = "--structure-range", paramLabel = "S",
             description = "with --absorbers: design the set for the least worst peak with the structure's natural"
-                    + " frequency anywhere within +/-S (a fraction, 0 to 0.5) of nominal; every damping ratio at least 1 %")
+                    + " frequency anywhere within +/-S (a fraction, 0 to 0.5) of nominal; every damping ratio at least 1 %%")
     private Double structureRange;
 
     @Option(names = "--absorber-range", paramLabel = "A",
@@ -234,7 +234,7 @@ public final class OptimumCommand implements Callable<Integer> {
         }
         ExcitationKind e = parseExcitation(excitation, "--excitation");
         ResponseKind r = parseResponse(response, "--response");
-        double[] g = parseBand(band);
+        double[] g = BandOption.parse(band);
         double[] mus = range("--mass-ratio", massRatio);
         double[] zetas = range("--structure-damping", structureDamping);
         long count = (long) mus.length * zetas.length;
@@ -304,7 +304,7 @@ public final class OptimumCommand implements Callable<Integer> {
             ResponseKind r = header.contains("response")
                     ? parseResponse(cells[header.indexOf("response")].strip(), where + " response")
                     : parseResponse(response, "--response");
-            double[] g = parseBand(band);
+            double[] g = BandOption.parse(band);
             if (header.contains("band_low")) {
                 g = new double[] {column(header, cells, "band_low", where, 0.0),
                     column(header, cells, "band_high", where, Double.POSITIVE_INFINITY)};
@@ -335,25 +335,6 @@ public final class OptimumCommand implements Callable<Integer> {
     private static ResponseKind parseResponse(String text, String field) {
         return Ids.parse(ResponseKind.class, text).filter(RESPONSES::contains).orElseThrow(() ->
                 new InvalidInputException(field, PlainText.quote(text), "one of " + Ids.list(RESPONSES.toArray(new ResponseKind[0]))));
-    }
-
-    static double[] parseBand(String text) {
-        if (text == null) {
-            return new double[] {0.0, Double.POSITIVE_INFINITY};
-        }
-        String[] parts = text.split(":", -1);
-        if (parts.length != 2) {
-            throw new InvalidInputException("--band", PlainText.quote(text),
-                    "LO:HI, two frequency ratios such as 0.9:1.1 (HI may be inf)");
-        }
-        double lo = number("--band", parts[0]);
-        double hi = parts[1].strip().equalsIgnoreCase("inf") ? Double.POSITIVE_INFINITY
-                : number("--band", parts[1]);
-        if (!(lo >= 0) || !(hi > lo)) {
-            throw new InvalidInputException("--band", PlainText.quote(text),
-                    "needs 0 <= LO < HI (an empty band has no peak)");
-        }
-        return new double[] {lo, hi};
     }
 
     static double[] range(String option, String text) {

@@ -40,7 +40,7 @@ final class RobustSetRun {
         int n = o.absorbers() == null ? 1 : o.absorbers();
         AbsorberSetTuning tuning = AbsorberSetRun.parseTuning(o.tuning());
         double[][] grid = AbsorberSetRun.grid(o);
-        double[] g = OptimumCommand.parseBand(o.band());
+        double[] g = BandOption.parse(o.band());
         List<RobustSetTable.Row> rows = new ArrayList<>();
         for (double mu : grid[0]) {
             PhysicalRange.MASS_RATIO.check("--mass-ratio", mu, null);

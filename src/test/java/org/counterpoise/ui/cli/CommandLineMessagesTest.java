@@ -136,4 +136,41 @@ class CommandLineMessagesTest {
         assertEquals(Cli.BAD_INPUT, r.code());
         assertFalse(r.err().contains("Exception"), r.err());
     }
+
+    /**
+     * Found by an independent check (5 Dec 2026): refusals of the optimum named an internal field
+     * (absorber.tuning_ratio) with a value nobody typed, blamed --band with "0.0:Infinity" when no band
+     * was given or the cause was an undamped pair, and an extreme mode shape printed NaN.
+     */
+    @Test
+    void optimumRefusalsNameTheCauseAndNeverAValueNobodyTyped() {
+        String[][] cases = {
+            {"--band", "optimum", "--mass-ratio", "0.05", "--band", "1000:2000"},
+            {"--band", "optimum", "--mass-ratio", "0.05", "--band", "0.9:1e300"},
+            {"--band", "optimum", "--mass-ratio", "0.05", "--excitation", "unbalance", "--response", "acceleration"},
+            {"--fixed-damping", "optimum", "--mass-ratio", "0.05", "--fixed-damping", "0"},
+            {"--fixed-damping", "optimum", "--mass-ratio", "0.05", "--fixed-damping", "0", "--band", "0.9:1.2"},
+            {"--second-mode-shape", "optimum", "--mass-ratio", "0.05", "--absorbers", "2", "--second-mode", "3",
+                "--second-mode-shape", "1e300"},
+            {"--second-mode-shape", "optimum", "--mass-ratio", "0.05", "--one-per-mode", "--second-mode", "1.5",
+                "--second-mode-shape", "1e300"},
+        };
+        for (String[] c : cases) {
+            String[] args = java.util.Arrays.copyOfRange(c, 1, c.length);
+            CliTest.Run r = run(args);
+            assertEquals(Cli.BAD_INPUT, r.code(), String.join(" ", args));
+            assertTrue(r.err().startsWith("error: " + c[0] + ": "), r.err());
+            for (String bad : new String[] {"NaN", "Infinity", "Exception", "tuning_ratio", "not a number"}) {
+                assertFalse(r.err().contains(bad), bad + " in: " + r.err());
+            }
+        }
+        // the unbounded response is said to grow toward high frequency, and a finite band then works
+        assertTrue(run(java.util.Arrays.copyOfRange(cases[2], 1, cases[2].length)).err().contains("toward high frequency"));
+        assertEquals(Cli.DONE, run("optimum", "--mass-ratio", "0.05", "--excitation", "unbalance", "--response",
+                "acceleration", "--band", "0.5:2").code());
+        // the help formats every description (a bare % made picocli warn on standard error)
+        CliTest.Run help = run("optimum", "--help");
+        assertFalse(help.err().contains("WARN"), help.err());
+        assertTrue(run("optimum", "--mass-ratio", "0.05", "--tuning", "individual").out().startsWith("1 absorber,"));
+    }
 }
