@@ -6,6 +6,7 @@ import java.util.List;
 import org.counterpoise.core.model.ExcitationKind;
 import org.counterpoise.core.model.Tuning;
 import org.counterpoise.core.response.ResponseKind;
+import org.counterpoise.core.system.ModalPeak;
 
 /**
  * The exact H-infinity optimum of several absorbers of equal mass on one mode: the tunings and
@@ -40,8 +41,20 @@ public final class AbsorberSetOptimiser {
         EvaluationCounter counter = new EvaluationCounter();
         AbsorberSetVariables v = new AbsorberSetVariables(problem);
         MinimaxSearch.Result result = search(v, counter, true);
-        return new AbsorberSetOptimum(problem, v.design(result.point()), result.peak(), result.certificate(),
-                counter.count());
+        AbsorberSetDesign design = v.design(result.point());
+        // The printed peak is the design's own, valued on the factored route (ModalPeak), which keeps its
+        // accuracy where light absorbers swamp the search's pieces: at mu = 1e-4 a design the search left
+        // at 101.9 reaches 150.8 (found by an independent check). Higher by more than 1e-9: that is
+        // printed, uncertified.
+        double own = ModalPeak.over(problem.system(design), problem.forcePoint(), problem.responsePoint(),
+                problem.bandLow(), problem.bandHigh());
+        AbsorberSetCertificate c = result.certificate();
+        if (own > result.peak() * (1 + AbsorberSetCertificate.NOT_BEATEN)) {
+            return new AbsorberSetOptimum(problem, design, own, new AbsorberSetCertificate(c.activePeaks(),
+                    c.activeSpread(), c.stationarity(), c.scanPoints(), c.scanBest(), c.perturbations(),
+                    c.perturbationLeast(), false), counter.count());
+        }
+        return new AbsorberSetOptimum(problem, design, result.peak(), c, counter.count());
     }
 
     /**
