@@ -43,9 +43,10 @@ public final class AbsorberSetOptimiser {
         MinimaxSearch.Result result = search(v, counter, true);
         AbsorberSetDesign design = v.design(result.point());
         // The printed peak is the design's own, valued on the factored route (ModalPeak), which keeps its
-        // accuracy where light absorbers swamp the search's pieces: at mu = 1e-4 a design the search left
-        // at 101.9 reaches 150.8 (found by an independent check). Higher by more than 1e-9: that is
-        // printed, uncertified.
+        // accuracy where light absorbers swamp the search's pieces (found by an independent check: two
+        // absorbers at mu = 5e-4 printed 55.857 where the design reaches 55.979). Higher by more than 1e-9:
+        // that is printed, uncertified. Not yet enough at mu = 1e-4, where the factored route misses a
+        // very sharp maximum too (101.9 printed, 150.8 reached; docs/several-modes.md).
         double own = ModalPeak.over(problem.system(design), problem.forcePoint(), problem.responsePoint(),
                 problem.bandLow(), problem.bandHigh());
         AbsorberSetCertificate c = result.certificate();
